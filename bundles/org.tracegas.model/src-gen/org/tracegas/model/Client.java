@@ -1,0 +1,99 @@
+/**
+ */
+package org.tracegas.model;
+
+import org.eclipse.emf.common.util.EList;
+
+/**
+ * <!-- begin-user-doc -->
+ * A representation of the model object '<em><b>Client</b></em>'.
+ * <!-- end-user-doc -->
+ *
+ * <!-- begin-model-doc -->
+ * A customer of the laboratory: owns sites and campaigns.
+ * <!-- end-model-doc -->
+ *
+ * <p>
+ * The following features are supported:
+ * </p>
+ * <ul>
+ *   <li>{@link org.tracegas.model.Client#getName <em>Name</em>}</li>
+ *   <li>{@link org.tracegas.model.Client#getContact <em>Contact</em>}</li>
+ *   <li>{@link org.tracegas.model.Client#getSites <em>Sites</em>}</li>
+ *   <li>{@link org.tracegas.model.Client#getProjects <em>Projects</em>}</li>
+ * </ul>
+ *
+ * @see org.tracegas.model.WorkspacePackage#getClient()
+ * @model
+ * @generated
+ */
+public interface Client extends StoredObject {
+	/**
+	 * Returns the value of the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>Name</em>' attribute.
+	 * @see #setName(String)
+	 * @see org.tracegas.model.WorkspacePackage#getClient_Name()
+	 * @model
+	 * @generated
+	 */
+	String getName();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.Client#getName <em>Name</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Name</em>' attribute.
+	 * @see #getName()
+	 * @generated
+	 */
+	void setName(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Contact</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>Contact</em>' attribute.
+	 * @see #setContact(String)
+	 * @see org.tracegas.model.WorkspacePackage#getClient_Contact()
+	 * @model
+	 * @generated
+	 */
+	String getContact();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.Client#getContact <em>Contact</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Contact</em>' attribute.
+	 * @see #getContact()
+	 * @generated
+	 */
+	void setContact(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Sites</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.Site}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>Sites</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getClient_Sites()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<Site> getSites();
+
+	/**
+	 * Returns the value of the '<em><b>Projects</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.Project}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>Projects</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getClient_Projects()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<Project> getProjects();
+
+} // Client

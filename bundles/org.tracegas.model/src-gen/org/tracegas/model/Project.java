@@ -1,0 +1,192 @@
+/**
+ */
+package org.tracegas.model;
+
+import java.time.Instant;
+
+import org.eclipse.emf.common.util.EList;
+
+/**
+ * <!-- begin-user-doc -->
+ * A representation of the model object '<em><b>Project</b></em>'.
+ * <!-- end-user-doc -->
+ *
+ * <!-- begin-model-doc -->
+ * A measurement campaign for one client.
+ * <!-- end-model-doc -->
+ *
+ * <p>
+ * The following features are supported:
+ * </p>
+ * <ul>
+ *   <li>{@link org.tracegas.model.Project#getCode <em>Code</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getName <em>Name</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getStart <em>Start</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getEnd <em>End</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getSources <em>Sources</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getGrants <em>Grants</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getMeasurements <em>Measurements</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getRuns <em>Runs</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getReports <em>Reports</em>}</li>
+ * </ul>
+ *
+ * @see org.tracegas.model.WorkspacePackage#getProject()
+ * @model
+ * @generated
+ */
+public interface Project extends StoredObject {
+	/**
+	 * Returns the value of the '<em><b>Code</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Short campaign code, unique per client.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Code</em>' attribute.
+	 * @see #setCode(String)
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Code()
+	 * @model
+	 * @generated
+	 */
+	String getCode();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.Project#getCode <em>Code</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Code</em>' attribute.
+	 * @see #getCode()
+	 * @generated
+	 */
+	void setCode(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>Name</em>' attribute.
+	 * @see #setName(String)
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Name()
+	 * @model
+	 * @generated
+	 */
+	String getName();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.Project#getName <em>Name</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Name</em>' attribute.
+	 * @see #getName()
+	 * @generated
+	 */
+	void setName(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Start</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>Start</em>' attribute.
+	 * @see #setStart(Instant)
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Start()
+	 * @model dataType="org.tracegas.model.Instant"
+	 * @generated
+	 */
+	Instant getStart();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.Project#getStart <em>Start</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Start</em>' attribute.
+	 * @see #getStart()
+	 * @generated
+	 */
+	void setStart(Instant value);
+
+	/**
+	 * Returns the value of the '<em><b>End</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>End</em>' attribute.
+	 * @see #setEnd(Instant)
+	 * @see org.tracegas.model.WorkspacePackage#getProject_End()
+	 * @model dataType="org.tracegas.model.Instant"
+	 * @generated
+	 */
+	Instant getEnd();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.Project#getEnd <em>End</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>End</em>' attribute.
+	 * @see #getEnd()
+	 * @generated
+	 */
+	void setEnd(Instant value);
+
+	/**
+	 * Returns the value of the '<em><b>Sources</b></em>' reference list.
+	 * The list contents are of type {@link org.tracegas.model.EmissionSource}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Emission sources sampled in this campaign.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Sources</em>' reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Sources()
+	 * @model
+	 * @generated
+	 */
+	EList<EmissionSource> getSources();
+
+	/**
+	 * Returns the value of the '<em><b>Grants</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.ProjectGrant}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>Grants</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Grants()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<ProjectGrant> getGrants();
+
+	/**
+	 * Returns the value of the '<em><b>Measurements</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.Measurement}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>Measurements</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Measurements()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<Measurement> getMeasurements();
+
+	/**
+	 * Returns the value of the '<em><b>Runs</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.AnalysisRun}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>Runs</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Runs()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<AnalysisRun> getRuns();
+
+	/**
+	 * Returns the value of the '<em><b>Reports</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.Report}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the value of the '<em>Reports</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Reports()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<Report> getReports();
+
+} // Project

@@ -1,0 +1,586 @@
+/**
+ */
+package org.tracegas.model.impl;
+
+import java.time.Instant;
+
+import org.eclipse.emf.ecore.EClass;
+import org.eclipse.emf.ecore.EDataType;
+import org.eclipse.emf.ecore.EObject;
+import org.eclipse.emf.ecore.EPackage;
+
+import org.eclipse.emf.ecore.impl.EFactoryImpl;
+
+import org.eclipse.emf.ecore.plugin.EcorePlugin;
+
+import org.tracegas.model.*;
+
+/**
+ * <!-- begin-user-doc -->
+ * An implementation of the model <b>Factory</b>.
+ * <!-- end-user-doc -->
+ * @generated
+ */
+public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFactory {
+	/**
+	 * Creates the default factory implementation.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public static WorkspaceFactory init() {
+		try {
+			WorkspaceFactory theWorkspaceFactory = (WorkspaceFactory)EPackage.Registry.INSTANCE.getEFactory(WorkspacePackage.eNS_URI);
+			if (theWorkspaceFactory != null) {
+				return theWorkspaceFactory;
+			}
+		}
+		catch (Exception exception) {
+			EcorePlugin.INSTANCE.log(exception);
+		}
+		return new WorkspaceFactoryImpl();
+	}
+
+	/**
+	 * Creates an instance of the factory.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public WorkspaceFactoryImpl() {
+		super();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EObject create(EClass eClass) {
+		switch (eClass.getClassifierID()) {
+			case WorkspacePackage.WORKSPACE: return createWorkspace();
+			case WorkspacePackage.CLIENT: return createClient();
+			case WorkspacePackage.SITE: return createSite();
+			case WorkspacePackage.EMISSION_SOURCE: return createEmissionSource();
+			case WorkspacePackage.PROJECT: return createProject();
+			case WorkspacePackage.PROJECT_GRANT: return createProjectGrant();
+			case WorkspacePackage.INSTRUMENT: return createInstrument();
+			case WorkspacePackage.MEASUREMENT: return createMeasurement();
+			case WorkspacePackage.SPECTRAL_DATA_REF: return createSpectralDataRef();
+			case WorkspacePackage.REFERENCE_LIBRARY: return createReferenceLibrary();
+			case WorkspacePackage.LIBRARY_VERSION: return createLibraryVersion();
+			case WorkspacePackage.REFERENCE_SPECTRUM: return createReferenceSpectrum();
+			case WorkspacePackage.ANALYSIS_METHOD: return createAnalysisMethod();
+			case WorkspacePackage.METHOD_VERSION: return createMethodVersion();
+			case WorkspacePackage.ANALYSIS_REGION: return createAnalysisRegion();
+			case WorkspacePackage.ANALYSIS_RUN: return createAnalysisRun();
+			case WorkspacePackage.RESULT: return createResult();
+			case WorkspacePackage.QA_CHECK: return createQaCheck();
+			case WorkspacePackage.REPORT: return createReport();
+			case WorkspacePackage.USER: return createUser();
+			default:
+				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier");
+		}
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Object createFromString(EDataType eDataType, String initialValue) {
+		switch (eDataType.getClassifierID()) {
+			case WorkspacePackage.ACCESS_LEVEL:
+				return createAccessLevelFromString(eDataType, initialValue);
+			case WorkspacePackage.DETECTOR_TYPE:
+				return createDetectorTypeFromString(eDataType, initialValue);
+			case WorkspacePackage.MEASUREMENT_KIND:
+				return createMeasurementKindFromString(eDataType, initialValue);
+			case WorkspacePackage.SPECTRAL_CONTENT:
+				return createSpectralContentFromString(eDataType, initialValue);
+			case WorkspacePackage.RUN_STATUS:
+				return createRunStatusFromString(eDataType, initialValue);
+			case WorkspacePackage.RESULT_FLAG:
+				return createResultFlagFromString(eDataType, initialValue);
+			case WorkspacePackage.REPORT_STATUS:
+				return createReportStatusFromString(eDataType, initialValue);
+			case WorkspacePackage.ROLE:
+				return createRoleFromString(eDataType, initialValue);
+			case WorkspacePackage.INSTANT:
+				return createInstantFromString(eDataType, initialValue);
+			default:
+				throw new IllegalArgumentException("The datatype '" + eDataType.getName() + "' is not a valid classifier");
+		}
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String convertToString(EDataType eDataType, Object instanceValue) {
+		switch (eDataType.getClassifierID()) {
+			case WorkspacePackage.ACCESS_LEVEL:
+				return convertAccessLevelToString(eDataType, instanceValue);
+			case WorkspacePackage.DETECTOR_TYPE:
+				return convertDetectorTypeToString(eDataType, instanceValue);
+			case WorkspacePackage.MEASUREMENT_KIND:
+				return convertMeasurementKindToString(eDataType, instanceValue);
+			case WorkspacePackage.SPECTRAL_CONTENT:
+				return convertSpectralContentToString(eDataType, instanceValue);
+			case WorkspacePackage.RUN_STATUS:
+				return convertRunStatusToString(eDataType, instanceValue);
+			case WorkspacePackage.RESULT_FLAG:
+				return convertResultFlagToString(eDataType, instanceValue);
+			case WorkspacePackage.REPORT_STATUS:
+				return convertReportStatusToString(eDataType, instanceValue);
+			case WorkspacePackage.ROLE:
+				return convertRoleToString(eDataType, instanceValue);
+			case WorkspacePackage.INSTANT:
+				return convertInstantToString(eDataType, instanceValue);
+			default:
+				throw new IllegalArgumentException("The datatype '" + eDataType.getName() + "' is not a valid classifier");
+		}
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Workspace createWorkspace() {
+		WorkspaceImpl workspace = new WorkspaceImpl();
+		return workspace;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Client createClient() {
+		ClientImpl client = new ClientImpl();
+		return client;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Site createSite() {
+		SiteImpl site = new SiteImpl();
+		return site;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EmissionSource createEmissionSource() {
+		EmissionSourceImpl emissionSource = new EmissionSourceImpl();
+		return emissionSource;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Project createProject() {
+		ProjectImpl project = new ProjectImpl();
+		return project;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ProjectGrant createProjectGrant() {
+		ProjectGrantImpl projectGrant = new ProjectGrantImpl();
+		return projectGrant;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Instrument createInstrument() {
+		InstrumentImpl instrument = new InstrumentImpl();
+		return instrument;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Measurement createMeasurement() {
+		MeasurementImpl measurement = new MeasurementImpl();
+		return measurement;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public SpectralDataRef createSpectralDataRef() {
+		SpectralDataRefImpl spectralDataRef = new SpectralDataRefImpl();
+		return spectralDataRef;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ReferenceLibrary createReferenceLibrary() {
+		ReferenceLibraryImpl referenceLibrary = new ReferenceLibraryImpl();
+		return referenceLibrary;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public LibraryVersion createLibraryVersion() {
+		LibraryVersionImpl libraryVersion = new LibraryVersionImpl();
+		return libraryVersion;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ReferenceSpectrum createReferenceSpectrum() {
+		ReferenceSpectrumImpl referenceSpectrum = new ReferenceSpectrumImpl();
+		return referenceSpectrum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public AnalysisMethod createAnalysisMethod() {
+		AnalysisMethodImpl analysisMethod = new AnalysisMethodImpl();
+		return analysisMethod;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public MethodVersion createMethodVersion() {
+		MethodVersionImpl methodVersion = new MethodVersionImpl();
+		return methodVersion;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public AnalysisRegion createAnalysisRegion() {
+		AnalysisRegionImpl analysisRegion = new AnalysisRegionImpl();
+		return analysisRegion;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public AnalysisRun createAnalysisRun() {
+		AnalysisRunImpl analysisRun = new AnalysisRunImpl();
+		return analysisRun;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Result createResult() {
+		ResultImpl result = new ResultImpl();
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public QaCheck createQaCheck() {
+		QaCheckImpl qaCheck = new QaCheckImpl();
+		return qaCheck;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Report createReport() {
+		ReportImpl report = new ReportImpl();
+		return report;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public User createUser() {
+		UserImpl user = new UserImpl();
+		return user;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public AccessLevel createAccessLevelFromString(EDataType eDataType, String initialValue) {
+		AccessLevel result = AccessLevel.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertAccessLevelToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public DetectorType createDetectorTypeFromString(EDataType eDataType, String initialValue) {
+		DetectorType result = DetectorType.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertDetectorTypeToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public MeasurementKind createMeasurementKindFromString(EDataType eDataType, String initialValue) {
+		MeasurementKind result = MeasurementKind.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertMeasurementKindToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public SpectralContent createSpectralContentFromString(EDataType eDataType, String initialValue) {
+		SpectralContent result = SpectralContent.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertSpectralContentToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public RunStatus createRunStatusFromString(EDataType eDataType, String initialValue) {
+		RunStatus result = RunStatus.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertRunStatusToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public ResultFlag createResultFlagFromString(EDataType eDataType, String initialValue) {
+		ResultFlag result = ResultFlag.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertResultFlagToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public ReportStatus createReportStatusFromString(EDataType eDataType, String initialValue) {
+		ReportStatus result = ReportStatus.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertReportStatusToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public Role createRoleFromString(EDataType eDataType, String initialValue) {
+		Role result = Role.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertRoleToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public Instant createInstant(final String it) {
+		return it == null ? null : java.time.Instant.parse(it);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public Instant createInstantFromString(EDataType eDataType, String initialValue) {
+		return createInstant(initialValue);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertInstant(final Instant it) {
+		return it == null ? null : it.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertInstantToString(EDataType eDataType, Object instanceValue) {
+		return convertInstant((Instant)instanceValue);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public WorkspacePackage getWorkspacePackage() {
+		return (WorkspacePackage)getEPackage();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @deprecated
+	 * @generated
+	 */
+	@Deprecated
+	public static WorkspacePackage getPackage() {
+		return WorkspacePackage.eINSTANCE;
+	}
+
+} //WorkspaceFactoryImpl

@@ -1,0 +1,22 @@
+package org.tracegas.qa.checks;
+
+import org.tracegas.qa.internal.Require;
+
+/**
+ * Band absorbance of a calibration transfer standard (CTS) gas with its concentration and the cell
+ * conditions at which it was recorded.
+ *
+ * @param absorbance        integrated or peak band absorbance (same measure for reference and measurement)
+ * @param concentrationPpm  CTS gas concentration in ppm
+ * @param temperatureK      cell temperature in K
+ * @param pressureKPa       cell pressure in kPa
+ */
+public record CtsBand(double absorbance, double concentrationPpm, double temperatureK, double pressureKPa) {
+
+    public CtsBand {
+        Require.positive("absorbance", absorbance);
+        Require.positive("concentrationPpm", concentrationPpm);
+        Require.positive("temperatureK", temperatureK);
+        Require.positive("pressureKPa", pressureKPa);
+    }
+}

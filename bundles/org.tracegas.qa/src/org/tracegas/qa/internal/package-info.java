@@ -1,0 +1,2 @@
+/** Small numerical helpers shared by the QA packages; not API. */
+package org.tracegas.qa.internal;

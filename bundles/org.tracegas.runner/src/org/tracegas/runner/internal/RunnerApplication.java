@@ -1,0 +1,26 @@
+package org.tracegas.runner.internal;
+
+import java.util.List;
+
+import org.eclipse.equinox.app.IApplication;
+import org.eclipse.equinox.app.IApplicationContext;
+import org.osgi.framework.FrameworkUtil;
+import org.tracegas.runner.CommandTable;
+import org.tracegas.runner.RunnerContext;
+
+/** The headless Equinox application: hands the command line to the runner's command table. */
+public final class RunnerApplication implements IApplication {
+
+    @Override
+    public Object start(IApplicationContext context) {
+        String[] argv = (String[]) context.getArguments().get(IApplicationContext.APPLICATION_ARGS);
+        String version = FrameworkUtil.getBundle(getClass()).getVersion().toString();
+        CommandTable table = new CommandTable(version, List.of());
+        return table.dispatch(argv == null ? new String[0] : argv, new RunnerContext(System.out, System.err));
+    }
+
+    @Override
+    public void stop() {
+        // commands check for cancellation themselves; nothing to release here
+    }
+}

@@ -1,0 +1,18 @@
+#!/usr/bin/env bash
+# Runs every test: the reactor's unit, integration and UI tests (UI tests under Xvfb when there is no
+# display), the lab-server tests against a throw-away PostgreSQL server, and the model's regeneration check.
+set -euo pipefail
+top=$(cd "$(dirname "$0")/.." && pwd)
+"$top/releng/fetch-swtchart.sh"
+
+pgdir=$(mktemp -d /tmp/tracegas-pg.XXXXXX)
+port=${TRACEGAS_TEST_PG_PORT:-55433}
+trap '"$top/releng/postgres-throwaway.sh" stop "$pgdir"' EXIT
+url=$("$top/releng/postgres-throwaway.sh" start "$pgdir" "$port")
+
+run=("$top/releng/mvnw" -B -f "$top/pom.xml" verify "-Dtracegas.test.pg.url=$url" "$@")
+if [ -z "${DISPLAY:-}" ]; then
+  xvfb-run -a -s "-screen 0 1280x1024x24" "${run[@]}"
+else
+  "${run[@]}"
+fi
