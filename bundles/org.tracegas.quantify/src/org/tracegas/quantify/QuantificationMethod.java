@@ -1,0 +1,293 @@
+package org.tracegas.quantify;
+
+import java.nio.charset.StandardCharsets;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashSet;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+
+import org.tracegas.quantify.internal.Sha256;
+import org.tracegas.spectrum.Spectrum;
+
+/**
+ * Immutable definition of a quantification: analytes with their interferents and regions, reference spectra,
+ * fit options and limits. Build one with {@link #builder(String)}. {@link #canonicalText()} is a deterministic
+ * text form for hashing and versioning.
+ */
+public final class QuantificationMethod {
+
+    /** Default highest absorbance trusted in a fit window: 1.0 (common practice, no source). */
+    public static final double DEFAULT_MAX_ABSORBANCE = 1.0;
+    /** Default relative change of the concentrations at which the non-linear iteration stops. */
+    public static final double DEFAULT_TOLERANCE = 1e-9;
+    /** Default cap on iterations of the non-linear fit. */
+    public static final int DEFAULT_MAX_ITERATIONS = 50;
+
+    private final String name;
+    private final double pathLengthMetres;
+    private final List<Analyte> analytes;
+    private final List<ReferenceSpectrum> references;
+    private final boolean nonlinearity;
+    private final ShiftTerm shiftTerm;
+    private final ReportingUnit reportingUnit;
+    private final double maxAbsorbance;
+    private final double tolerance;
+    private final int maxIterations;
+    private final Spectrum weights;
+    private final String canonicalText;
+    private final String contentHash;
+
+    private QuantificationMethod(Builder b) {
+        this.name = b.name;
+        this.pathLengthMetres = b.pathLengthMetres;
+        this.analytes = List.copyOf(b.analytes);
+        List<ReferenceSpectrum> sorted = new ArrayList<>(b.references);
+        // Canonical order, so that the same references added in another order give the same method.
+        sorted.sort(Comparator.comparing(ReferenceSpectrum::compound).thenComparingDouble(ReferenceSpectrum::ppmMetres));
+        this.references = List.copyOf(sorted);
+        this.nonlinearity = b.nonlinearity;
+        this.shiftTerm = b.shiftTerm;
+        this.reportingUnit = b.reportingUnit;
+        this.maxAbsorbance = b.maxAbsorbance;
+        this.tolerance = b.tolerance;
+        this.maxIterations = b.maxIterations;
+        this.weights = b.weights;
+        this.canonicalText = CanonicalMethodText.write(this);
+        this.contentHash = Sha256.hex(canonicalText.getBytes(StandardCharsets.UTF_8));
+    }
+
+    public static Builder builder(String name) {
+        return new Builder(name);
+    }
+
+    public String name() {
+        return name;
+    }
+
+    /** Optical path of the sample cell in m; concentrations are reported in ppm at this path. */
+    public double pathLengthMetres() {
+        return pathLengthMetres;
+    }
+
+    /** Analytes in reporting order. */
+    public List<Analyte> analytes() {
+        return analytes;
+    }
+
+    /** All references, sorted by compound name and then by ppm·m. */
+    public List<ReferenceSpectrum> references() {
+        return references;
+    }
+
+    /** References of one compound, ascending in ppm·m. */
+    public List<ReferenceSpectrum> references(String compound) {
+        return references.stream().filter(r -> r.compound().equals(compound)).toList();
+    }
+
+    /** Whether references of several amounts are interpolated at the current estimate (non-linear response). */
+    public boolean nonlinearity() {
+        return nonlinearity;
+    }
+
+    public ShiftTerm shiftTerm() {
+        return shiftTerm;
+    }
+
+    public ReportingUnit reportingUnit() {
+        return reportingUnit;
+    }
+
+    /** Highest sample absorbance inside the fit windows that the fit trusts. */
+    public double maxAbsorbance() {
+        return maxAbsorbance;
+    }
+
+    /** Relative change of all concentrations below which the non-linear iteration has converged. */
+    public double tolerance() {
+        return tolerance;
+    }
+
+    public int maxIterations() {
+        return maxIterations;
+    }
+
+    /** Optional weight per wavenumber (for example the inverse noise variance); empty for equal weights. */
+    public Optional<Spectrum> weights() {
+        return Optional.ofNullable(weights);
+    }
+
+    /** All compounds that take part in some fit, in order of first appearance. */
+    public Set<String> fittedCompounds() {
+        Set<String> all = new LinkedHashSet<>();
+        analytes.forEach(a -> all.addAll(a.fittedCompounds()));
+        return all;
+    }
+
+    /** Deterministic text form: equal for equal methods, different when anything that changes a result differs. */
+    public String canonicalText() {
+        return canonicalText;
+    }
+
+    /** SHA-256 of the UTF-8 canonical text, as 64 lower-case hex digits. */
+    public String contentHash() {
+        return contentHash;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof QuantificationMethod m && canonicalText.equals(m.canonicalText);
+    }
+
+    @Override
+    public int hashCode() {
+        return canonicalText.hashCode();
+    }
+
+    @Override
+    public String toString() {
+        return "QuantificationMethod[" + name + ", " + analytes.size() + " analytes, " + contentHash + "]";
+    }
+
+    /** Collects the parts of a method; {@link #build()} validates them together. */
+    public static final class Builder {
+        private final String name;
+        private double pathLengthMetres = Double.NaN;
+        private final List<Analyte> analytes = new ArrayList<>();
+        private final List<ReferenceSpectrum> references = new ArrayList<>();
+        private boolean nonlinearity;
+        private ShiftTerm shiftTerm = ShiftTerm.NONE;
+        private ReportingUnit reportingUnit = ReportingUnit.PPM;
+        private double maxAbsorbance = DEFAULT_MAX_ABSORBANCE;
+        private double tolerance = DEFAULT_TOLERANCE;
+        private int maxIterations = DEFAULT_MAX_ITERATIONS;
+        private Spectrum weights;
+
+        private Builder(String name) {
+            this.name = name;
+        }
+
+        public Builder pathLengthMetres(double metres) {
+            this.pathLengthMetres = metres;
+            return this;
+        }
+
+        public Builder analyte(Analyte analyte) {
+            analytes.add(analyte);
+            return this;
+        }
+
+        public Builder reference(ReferenceSpectrum reference) {
+            references.add(reference);
+            return this;
+        }
+
+        public Builder nonlinearity(boolean on) {
+            this.nonlinearity = on;
+            return this;
+        }
+
+        public Builder shiftTerm(ShiftTerm term) {
+            this.shiftTerm = term;
+            return this;
+        }
+
+        public Builder reportingUnit(ReportingUnit unit) {
+            this.reportingUnit = unit;
+            return this;
+        }
+
+        public Builder maxAbsorbance(double absorbance) {
+            this.maxAbsorbance = absorbance;
+            return this;
+        }
+
+        public Builder tolerance(double relative) {
+            this.tolerance = relative;
+            return this;
+        }
+
+        public Builder maxIterations(int iterations) {
+            this.maxIterations = iterations;
+            return this;
+        }
+
+        /** Weight per wavenumber, positive; interpolated onto the sample axis like the references. */
+        public Builder weights(Spectrum perWavenumber) {
+            this.weights = perWavenumber;
+            return this;
+        }
+
+        /** @throws IllegalArgumentException whose message names the field that is wrong and why */
+        public QuantificationMethod build() {
+            if (name == null || name.isBlank()) {
+                throw new IllegalArgumentException("name must not be blank");
+            }
+            if (name.chars().anyMatch(Character::isISOControl)) {
+                throw new IllegalArgumentException("name must not contain control characters");
+            }
+            if (!(pathLengthMetres > 0 && Double.isFinite(pathLengthMetres))) {
+                throw new IllegalArgumentException("pathLengthMetres must be positive and finite, was "
+                        + pathLengthMetres);
+            }
+            if (analytes.isEmpty()) {
+                throw new IllegalArgumentException("analytes must hold at least one analyte");
+            }
+            Set<String> analyteNames = new HashSet<>();
+            for (Analyte a : analytes) {
+                if (a == null) {
+                    throw new IllegalArgumentException("analytes must not contain null");
+                }
+                if (!analyteNames.add(a.compound())) {
+                    throw new IllegalArgumentException("analytes lists " + a.compound() + " twice");
+                }
+            }
+            Set<String> referenced = new HashSet<>();
+            Set<String> amounts = new HashSet<>();
+            for (ReferenceSpectrum r : references) {
+                if (r == null) {
+                    throw new IllegalArgumentException("references must not contain null");
+                }
+                referenced.add(r.compound());
+                if (!amounts.add(r.compound() + " " + r.ppmMetres())) {
+                    throw new IllegalArgumentException("references holds two spectra of " + r.compound() + " at "
+                            + r.ppmMetres() + " ppm·m");
+                }
+            }
+            for (Analyte a : analytes) {
+                for (String c : a.fittedCompounds()) {
+                    if (!referenced.contains(c)) {
+                        throw new IllegalArgumentException("references has no spectrum of " + c + ", fitted for "
+                                + a.compound());
+                    }
+                }
+            }
+            if (shiftTerm == null) {
+                throw new IllegalArgumentException("shiftTerm must not be null");
+            }
+            if (reportingUnit == null) {
+                throw new IllegalArgumentException("reportingUnit must not be null");
+            }
+            if (!(maxAbsorbance > 0 && Double.isFinite(maxAbsorbance))) {
+                throw new IllegalArgumentException("maxAbsorbance must be positive and finite, was " + maxAbsorbance);
+            }
+            if (!(tolerance > 0 && tolerance < 1)) {
+                throw new IllegalArgumentException("tolerance must be in (0, 1), was " + tolerance);
+            }
+            if (maxIterations < 1) {
+                throw new IllegalArgumentException("maxIterations must be at least 1, was " + maxIterations);
+            }
+            if (weights != null) {
+                for (int i = 0; i < weights.size(); i++) {
+                    if (!(weights.get(i) > 0 && Double.isFinite(weights.get(i)))) {
+                        throw new IllegalArgumentException("weights must be positive and finite, index " + i
+                                + " was " + weights.get(i));
+                    }
+                }
+            }
+            return new QuantificationMethod(this);
+        }
+    }
+}
