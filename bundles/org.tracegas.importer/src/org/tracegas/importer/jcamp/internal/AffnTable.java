@@ -1,0 +1,78 @@
+package org.tracegas.importer.jcamp.internal;
+
+import java.util.Arrays;
+import java.util.Locale;
+
+import org.tracegas.importer.ImportException;
+
+/** Decodes an (XY..XY) table (##XYPOINTS, ##PEAK TABLE): AFFN pairs separated by blanks, commas or semicolons. */
+public final class AffnTable {
+
+    /** The pairs in file order and the line of each pair. */
+    public record Pairs(double[] x, double[] y, int[] lines) {
+    }
+
+    private AffnTable() {
+    }
+
+    public static Pairs decode(Ldr table, String source, long maxPoints) throws ImportException {
+        String field = "##" + table.rawLabel();
+        double[] values = new double[64];
+        int[] lines = new int[64];
+        int n = 0;
+        for (int i = 0; i < table.more().size(); i++) {
+            int lineNo = table.line() + 1 + i;
+            for (String token : table.more().get(i).trim().split("[\\s,;]+")) {
+                if (token.isEmpty()) {
+                    continue;
+                }
+                double v = parse(token, source, lineNo, field);
+                if (n / 2 >= maxPoints) {
+                    throw new ImportException(source, lineNo, field, "more than " + maxPoints + " points");
+                }
+                if (n == values.length) {
+                    values = Arrays.copyOf(values, 2 * n);
+                    lines = Arrays.copyOf(lines, 2 * n);
+                }
+                values[n] = v;
+                lines[n] = lineNo;
+                n++;
+            }
+        }
+        if (n == 0) {
+            throw new ImportException(source, table.line(), field, "the table holds no points");
+        }
+        if (n % 2 != 0) {
+            throw new ImportException(source, lines[n - 1], field, "the last pair lacks its Y value");
+        }
+        double[] x = new double[n / 2];
+        double[] y = new double[n / 2];
+        int[] pairLines = new int[n / 2];
+        for (int k = 0; k < n / 2; k++) {
+            x[k] = values[2 * k];
+            y[k] = values[2 * k + 1];
+            pairLines[k] = lines[2 * k];
+        }
+        return new Pairs(x, y, pairLines);
+    }
+
+    private static double parse(String token, String source, int lineNo, String field) throws ImportException {
+        String lower = token.toLowerCase(Locale.ROOT);
+        if (lower.contains("nan") || lower.contains("inf")) {
+            throw new ImportException(source, lineNo, field, "not a finite number: '" + token + "'");
+        }
+        try {
+            // parseDouble accepts "1d", "0x1p3" and the like; AFFN is plain decimal
+            if (!token.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?")) {
+                throw new NumberFormatException();
+            }
+            double v = Double.parseDouble(token);
+            if (!Double.isFinite(v)) {
+                throw new ImportException(source, lineNo, field, "number out of range: '" + token + "'");
+            }
+            return v;
+        } catch (NumberFormatException e) {
+            throw new ImportException(source, lineNo, field, "malformed number '" + token + "'");
+        }
+    }
+}
