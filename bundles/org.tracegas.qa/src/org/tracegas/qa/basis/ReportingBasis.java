@@ -1,5 +1,6 @@
 package org.tracegas.qa.basis;
 
+import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -33,7 +34,9 @@ public final class ReportingBasis {
     public String describe() {
         String base = String.format(Locale.ROOT, "mg/m³ dry, %.2f K, %.3f kPa", conditions.temperatureK(),
                 conditions.pressureKPa());
-        return oxygen == null ? base : base + String.format(Locale.ROOT, ", %.3g %% O2", oxygen.referencePercent());
+        return oxygen == null ? base
+                : base + ", " + BigDecimal.valueOf(oxygen.referencePercent()).stripTrailingZeros().toPlainString()
+                        + " % O2";
     }
 
     /** One reading on this basis, or empty if its O2 lies at or above the guard of the oxygen correction. */

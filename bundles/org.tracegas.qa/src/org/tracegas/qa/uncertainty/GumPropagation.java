@@ -7,7 +7,9 @@ import org.tracegas.qa.internal.Require;
 
 /**
  * Builds a budget from a measurement model, taking the sensitivity coefficients as central differences
- * ∂f/∂x_i ≈ (f(x + h e_i) − f(x − h e_i)) / 2h at the estimates.
+ * c_i = (f(x + u_i e_i) − f(x − u_i e_i)) / 2u_i over plus and minus one standard uncertainty, the numerical
+ * evaluation of JCGM 100:2008 5.1.3 (note; recalled from memory). For a model linear in x_i this is the derivative; otherwise it
+ * averages the slope over x_i ± u_i.
  */
 public final class GumPropagation {
 
@@ -30,9 +32,9 @@ public final class GumPropagation {
         return UncertaintyBudget.of(quantity, model.value(estimates.clone()), unit, components);
     }
 
-    /** Central difference with a step small against the input's own uncertainty and magnitude. */
+    /** Central difference with step u; an exact input (u = 0) gets a small relative step instead. */
     static double sensitivity(MeasurementModel model, double[] x, int i, double u) {
-        double h = u > 0 ? u * 1e-3 : Math.max(Math.abs(x[i]), 1.0) * 1e-6;
+        double h = u > 0 ? u : Math.max(Math.abs(x[i]), 1.0) * 1e-6;
         double[] plus = x.clone();
         double[] minus = x.clone();
         plus[i] += h;
