@@ -1,0 +1,24 @@
+package org.tracegas.library.synthesis;
+
+import org.apache.commons.math3.complex.Complex;
+
+/** The Faddeeva function w(z) = exp(-z^2) erfc(-iz) in the closed upper half plane, z = x + iy, y &gt;= 0. */
+public interface FaddeevaFunction {
+
+    /**
+     * w(x + iy).
+     *
+     * @throws IllegalArgumentException if y is negative or an argument is not finite
+     */
+    Complex value(double x, double y);
+
+    /** Re w(x + iy), the Voigt function K(x, y); implementations may compute it faster than the whole value. */
+    default double real(double x, double y) {
+        return value(x, y).getReal();
+    }
+
+    /** Accurate w(z) for line-by-line synthesis: Weideman (N = 32) near the origin, continued fraction beyond. */
+    static FaddeevaFunction standard() {
+        return new ContinuedFractionFaddeeva(new WeidemanFaddeeva(32));
+    }
+}
