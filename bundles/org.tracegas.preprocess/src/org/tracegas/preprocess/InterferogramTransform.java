@@ -1,0 +1,152 @@
+package org.tracegas.preprocess;
+
+import java.util.Arrays;
+
+import org.tracegas.preprocess.internal.MertzPhase;
+import org.tracegas.preprocess.internal.TransformWindow;
+import org.tracegas.preprocess.internal.ZpdLocator;
+import org.tracegas.spectrum.AxisUnit;
+import org.tracegas.spectrum.Interferogram;
+import org.tracegas.spectrum.Ordinate;
+import org.tracegas.spectrum.SpectralAxis;
+import org.tracegas.spectrum.Spectrum;
+
+/**
+ * Interferogram to single-beam spectrum: DC removal, ZPD search, apodization (with the Mertz ramp for single-sided
+ * recordings), zero filling, real FFT and phase correction. The wavenumber axis has the step
+ * 1 / (transform length x sample spacing), the sample spacing being sampling interval / laser wavenumber.
+ * <p>
+ * An instance keeps its transform plan, apodization window and work buffers between calls, so a batch of
+ * interferograms of one instrument setting is transformed without rebuilding them. Instances are not thread safe:
+ * use one per thread. The returned spectra are immutable.
+ */
+public final class InterferogramTransform {
+
+    /** Fewest samples on the short side of ZPD for a usable Mertz phase (common practice, no source). */
+    static final int MIN_PHASE_SIDE = 8;
+
+    private final TransformSettings settings;
+    private final FftEngine engine;
+    private final MertzPhase phase;
+    private double[] samples = new double[0];
+    private RealFft fft;
+    private double[] buffer;
+    private double[] re;
+    private double[] im;
+    private TransformWindow window;
+    private double[] out = new double[0];
+    private SpectralAxis axis;
+
+    public InterferogramTransform(TransformSettings settings) {
+        this(settings, FftEngine.defaultEngine());
+    }
+
+    /** @throws IllegalArgumentException if an argument is null */
+    public InterferogramTransform(TransformSettings settings, FftEngine engine) {
+        if (settings == null || engine == null) {
+            throw new IllegalArgumentException("settings and engine must not be null");
+        }
+        this.settings = settings;
+        this.engine = engine;
+        this.phase = new MertzPhase(engine);
+    }
+
+    public TransformSettings settings() {
+        return settings;
+    }
+
+    /**
+     * The single-beam spectrum of an interferogram, on a wavenumber axis limited to the settings' range.
+     *
+     * @throws IllegalArgumentException if the interferogram is null, too short on the short side of ZPD for the
+     *                                  chosen recording mode or phase correction, or the range holds no point
+     */
+    public Spectrum singleBeam(Interferogram interferogram) {
+        if (interferogram == null) {
+            throw new IllegalArgumentException("interferogram must not be null");
+        }
+        int n = interferogram.size();
+        double[] x = removeDc(interferogram);
+        int zpd = ZpdLocator.locate(x, n, settings.zpdSearch(), settings.phasePoints() / 2);
+        int before = zpd;
+        int after = n - 1 - zpd;
+        int direction = after >= before ? 1 : -1;
+        int shortSide = Math.min(before, after);
+        int longSide = settings.sidedness() == Sidedness.DOUBLE_SIDED ? shortSide : Math.max(before, after);
+        checkSides(zpd, n, shortSide, longSide);
+        double spacing = interferogram.sampleSpacingCm();
+        int size = settings.zeroFillFactor() * (Integer.highestOneBit(shortSide + longSide) << 1);
+        prepare(size, shortSide, longSide, spacing);
+        Arrays.fill(buffer, 0.0);
+        window.weigh(x, zpd, direction, buffer);
+        fft.forward(buffer, re, im);
+
+        double step = 1.0 / (size * spacing);
+        int kLow = (int) Math.ceil(settings.lowWavenumber() / step);
+        int kHigh = (int) Math.min(size / 2, Math.floor(settings.highWavenumber() / step));
+        if (kHigh < kLow) {
+            throw new IllegalArgumentException("wavenumber range " + settings.lowWavenumber() + " .. "
+                    + settings.highWavenumber() + " cm-1 holds no point below the Nyquist wavenumber "
+                    + interferogram.nyquistWavenumber() + " cm-1");
+        }
+        int count = kHigh - kLow + 1;
+        if (out.length != count) {
+            out = new double[count];
+        }
+        if (settings.phaseCorrection() == PhaseCorrection.MERTZ) {
+            phase.measure(x, zpd, direction, Math.min(shortSide, settings.phasePoints() / 2));
+            phase.correct(re, im, size, kLow, out);
+        } else {
+            for (int i = 0; i < count; i++) {
+                int k = kLow + i;
+                out[i] = Math.sqrt(re[k] * re[k] + im[k] * im[k]);
+            }
+        }
+        if (axis == null || axis.size() != count || axis.first() != kLow * step || axis.step() != step) {
+            axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, kLow * step, step, count);
+        }
+        return new Spectrum(axis, out, Ordinate.SINGLE_BEAM);
+    }
+
+    private double[] removeDc(Interferogram interferogram) {
+        int n = interferogram.size();
+        if (samples.length < n) {
+            samples = new double[n];
+        }
+        double sum = 0.0;
+        for (int i = 0; i < n; i++) {
+            double v = interferogram.get(i);
+            samples[i] = v;
+            sum += v;
+        }
+        double mean = sum / n;
+        for (int i = 0; i < n; i++) {
+            samples[i] -= mean;
+        }
+        return samples;
+    }
+
+    private void checkSides(int zpd, int n, int shortSide, int longSide) {
+        if (settings.phaseCorrection() == PhaseCorrection.MERTZ && shortSide < MIN_PHASE_SIDE) {
+            throw new IllegalArgumentException("interferogram ZPD at sample " + zpd + " of " + n + " leaves "
+                    + shortSide + " samples on its short side; Mertz phase correction needs at least "
+                    + MIN_PHASE_SIDE + " (use the magnitude spectrum)");
+        }
+        if (longSide < 1) {
+            throw new IllegalArgumentException("interferogram ZPD at sample " + zpd + " of " + n
+                    + " leaves no samples for a " + settings.sidedness() + " transform");
+        }
+    }
+
+    private void prepare(int size, int shortSide, int longSide, double spacing) {
+        if (fft == null || fft.size() != size) {
+            fft = engine.create(size);
+            buffer = new double[size];
+            re = new double[size / 2 + 1];
+            im = new double[size / 2 + 1];
+        }
+        if (window == null || !window.fits(shortSide, longSide, spacing)) {
+            window = new TransformWindow(settings.apodization(), settings.sidedness(), shortSide, longSide, spacing);
+        }
+    }
+}

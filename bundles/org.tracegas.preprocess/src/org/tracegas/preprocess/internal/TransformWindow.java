@@ -1,0 +1,59 @@
+package org.tracegas.preprocess.internal;
+
+import org.tracegas.preprocess.Apodization;
+import org.tracegas.preprocess.Sidedness;
+
+/**
+ * Weights applied to the interferogram samples at offsets -shortSide .. longSide from ZPD: apodization over the
+ * long side, the Mertz ramp over the double-sided part of a single-sided recording (so that each path difference
+ * counts once; doubled so both recording modes give the same spectrum scale), and the sample spacing, so that
+ * the transform approximates the continuous Fourier integral.
+ */
+public final class TransformWindow {
+
+    private final int shortSide;
+    private final int longSide;
+    private final double spacing;
+    private final double[] weights;
+
+    public TransformWindow(Apodization apodization, Sidedness sidedness, int shortSide, int longSide,
+            double spacing) {
+        this.shortSide = shortSide;
+        this.longSide = longSide;
+        this.spacing = spacing;
+        this.weights = new double[shortSide + longSide + 1];
+        boolean ramp = sidedness == Sidedness.SINGLE_SIDED && longSide > shortSide;
+        for (int j = -shortSide; j <= longSide; j++) {
+            double w = apodization.weight((double) j / longSide) * spacing;
+            if (ramp) {
+                w *= j > shortSide ? 2.0 : shortSide == 0 ? 1.0 : (double) (j + shortSide) / shortSide;
+            }
+            weights[j + shortSide] = w;
+        }
+    }
+
+    public boolean fits(int shortSideWanted, int longSideWanted, double spacingWanted) {
+        return shortSide == shortSideWanted && longSide == longSideWanted && spacing == spacingWanted;
+    }
+
+    /** Weight at offset j from ZPD. */
+    public double at(int j) {
+        return weights[j + shortSide];
+    }
+
+    /**
+     * Writes the weighted samples into a zeroed transform buffer with ZPD at index 0 and the offsets before ZPD
+     * wrapped to the end.
+     *
+     * @param direction +1 if the long side follows ZPD, -1 if it precedes it
+     */
+    public void weigh(double[] x, int zpd, int direction, double[] buffer) {
+        int size = buffer.length;
+        for (int j = 0; j <= longSide; j++) {
+            buffer[j] = x[zpd + direction * j] * weights[j + shortSide];
+        }
+        for (int j = 1; j <= shortSide; j++) {
+            buffer[size - j] = x[zpd - direction * j] * weights[shortSide - j];
+        }
+    }
+}
