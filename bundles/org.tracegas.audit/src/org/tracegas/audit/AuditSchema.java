@@ -1,0 +1,47 @@
+package org.tracegas.audit;
+
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.sql.Statement;
+
+import org.tracegas.audit.internal.Dialect;
+import org.tracegas.audit.internal.H2TriggerClasses;
+import org.tracegas.audit.internal.SqlScript;
+
+/**
+ * Creates the audit tables (audit_record, audit_chain_head) in the connection's current schema, with
+ * database triggers that refuse UPDATE, DELETE and TRUNCATE of audit records (PostgreSQL: PL/pgSQL
+ * trigger functions; H2: Java triggers). Idempotent: call it at every start-up, before the first
+ * {@link AuditTrail#append}; on H2 it also makes the trigger classes loadable by H2.
+ */
+public final class AuditSchema {
+
+    private AuditSchema() {
+    }
+
+    /**
+     * Installs or confirms the schema in one transaction, committed here; the connection's auto-commit
+     * setting is restored afterwards.
+     *
+     * @throws SQLException when the database is neither H2 nor PostgreSQL 14+, or refuses the DDL
+     */
+    public static void install(Connection c) throws SQLException {
+        Dialect dialect = Dialect.of(c);
+        if (dialect == Dialect.H2) {
+            H2TriggerClasses.register();
+        }
+        boolean autoCommit = c.getAutoCommit();
+        c.setAutoCommit(false);
+        try (Statement s = c.createStatement()) {
+            for (String sql : SqlScript.statements(dialect.schemaScript())) {
+                s.execute(sql);
+            }
+            c.commit();
+        } catch (SQLException | RuntimeException e) {
+            c.rollback();
+            throw e;
+        } finally {
+            c.setAutoCommit(autoCommit);
+        }
+    }
+}

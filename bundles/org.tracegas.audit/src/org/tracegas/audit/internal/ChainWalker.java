@@ -1,0 +1,185 @@
+package org.tracegas.audit.internal;
+
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.tracegas.audit.AuditRecord;
+import org.tracegas.audit.ChainFinding;
+import org.tracegas.audit.ChainFinding.Kind;
+import org.tracegas.audit.VerificationReport;
+
+/**
+ * Walks audit_record in sequence order with a window of three records and classifies every break.
+ * For each record: its own hash is recomputed (ALTERED when it differs); its back link (stored
+ * previous hash equals the stored hash of the record before it) and forward link (the next record's back
+ * link, or the chain head for the last record) are checked. A record with both links broken is out of
+ * place (REORDERED when its predecessor exists elsewhere, INSERTED when the chain skips it or it links to
+ * nothing); a record followed by one claiming the same predecessor was INSERTED; a back link to a hash
+ * stored nowhere shows REMOVED records, or, where no sequence number is missing, a predecessor that was
+ * ALTERED and re-hashed. Findings already explained by a neighbour's finding are not repeated.
+ */
+public final class ChainWalker {
+
+    private static final int FETCH_SIZE = 1000;
+
+    private final Connection c;
+    private final int maxFindings;
+    private final List<ChainFinding> findings = new ArrayList<>();
+    private boolean truncated;
+    private PreparedStatement byHash;
+    private long headSeq;
+    private String headHash;
+    private String headRecordId;
+
+    public ChainWalker(Connection c, int maxFindings) {
+        this.c = c;
+        this.maxFindings = maxFindings;
+    }
+
+    public VerificationReport walk() throws SQLException {
+        readHead();
+        long count = 0;
+        try (PreparedStatement q = c.prepareStatement("SELECT " + RecordRows.COLUMNS + " FROM audit_record ORDER BY seq")) {
+            q.setFetchSize(FETCH_SIZE);
+            byHash = c.prepareStatement("SELECT seq FROM audit_record WHERE hash = ?");
+            try (ResultSet rs = q.executeQuery()) {
+                AuditRecord prev = null;
+                AuditRecord cur = null;
+                boolean prevFlagged = false;
+                while (rs.next()) {
+                    AuditRecord next = RecordRows.read(rs);
+                    count++;
+                    if (cur != null) {
+                        prevFlagged = check(prev, prevFlagged, cur, next);
+                    }
+                    prev = cur;
+                    cur = next;
+                }
+                if (cur != null) {
+                    check(prev, prevFlagged, cur, null);
+                } else if (headSeq > 0) {
+                    add(Kind.REMOVED, 1, headRecordId, "no audit records stored, but the chain head names record " + headSeq);
+                }
+            } finally {
+                byHash.close();
+            }
+        }
+        return new VerificationReport(count, headSeq, headHash, findings, truncated);
+    }
+
+    private void readHead() throws SQLException {
+        try (PreparedStatement q = c.prepareStatement(
+                "SELECT last_seq, last_hash, last_record_id FROM audit_chain_head WHERE id = 1");
+                ResultSet rs = q.executeQuery()) {
+            if (!rs.next()) {
+                throw new SQLException("audit_chain_head: row missing; the chain head was deleted or never installed");
+            }
+            headSeq = rs.getLong(1);
+            headHash = rs.getString(2);
+            headRecordId = rs.getString(3);
+        }
+    }
+
+    /**
+     * Classifies {@code cur} ({@code next} null for the last record); returns whether it was flagged, which
+     * explains its successor's broken back link.
+     */
+    private boolean check(AuditRecord prev, boolean prevFlagged, AuditRecord cur, AuditRecord next)
+            throws SQLException {
+        String expectedPrev = prev == null ? ChainHash.GENESIS : prev.hash();
+        long expectedSeq = prev == null ? 1 : prev.sequence() + 1;
+        if (cur.sequence() > expectedSeq) {
+            add(Kind.REMOVED, expectedSeq, cur.recordId(), "sequence numbers " + expectedSeq
+                    + (cur.sequence() - 1 > expectedSeq ? " to " + (cur.sequence() - 1) : "") + " are missing before "
+                    + cur.sequence());
+        }
+        if (cur.sequence() > headSeq) {
+            add(Kind.INSERTED, cur.sequence(), cur.recordId(), "beyond the chain head (last sequence " + headSeq + ")");
+            return true;
+        }
+        if (!ChainHash.of(cur).equals(cur.hash())) {
+            add(Kind.ALTERED, cur.sequence(), cur.recordId(), "stored fields do not give the stored hash");
+            return true;
+        }
+        boolean backOk = cur.previousHash().equals(expectedPrev);
+        boolean fwdOk = next == null ? cur.sequence() == headSeq && cur.hash().equals(headHash)
+                : next.previousHash().equals(cur.hash());
+        if (next == null) {
+            checkTail(cur);
+        }
+        if (backOk && fwdOk) {
+            return false;
+        }
+        if (!backOk && !fwdOk) {
+            return outOfPlace(prev, cur, next, expectedPrev);
+        }
+        if (!backOk) {
+            // a gap was reported above; a moved predecessor is reported where it stands
+            if (!prevFlagged && cur.sequence() == expectedSeq && seqOfHash(cur.previousHash()) < 0) {
+                add(Kind.REMOVED, expectedSeq, cur.recordId(), "its predecessor's hash is stored nowhere");
+            }
+            return false;
+        }
+        // back link fine, forward link broken
+        if (next != null && next.previousHash().equals(cur.previousHash())) {
+            add(Kind.INSERTED, cur.sequence(), cur.recordId(), "the next record " + next.sequence()
+                    + " links to the same predecessor");
+            return true;
+        }
+        if (next != null && next.sequence() == cur.sequence() + 1 && seqOfHash(next.previousHash()) < 0) {
+            add(Kind.ALTERED, cur.sequence(), cur.recordId(), "the next record " + next.sequence()
+                    + " links to a hash stored nowhere: this record was changed and re-hashed, or the record"
+                    + " after it removed and the rest renumbered");
+            return true;
+        }
+        return false;
+    }
+
+    private boolean outOfPlace(AuditRecord prev, AuditRecord cur, AuditRecord next, String expectedPrev)
+            throws SQLException {
+        if (prev != null && prev.previousHash().equals(cur.hash())
+                || next != null && cur.previousHash().equals(next.hash())) {
+            add(Kind.REORDERED, cur.sequence(), cur.recordId(), "swapped with its neighbour");
+            return true;
+        }
+        if (next != null && next.previousHash().equals(expectedPrev)) {
+            add(Kind.INSERTED, cur.sequence(), cur.recordId(), "the chain skips this record");
+            return true;
+        }
+        long linked = seqOfHash(cur.previousHash());
+        if (linked >= 0) {
+            add(Kind.REORDERED, cur.sequence(), cur.recordId(), "its predecessor is stored at sequence " + linked);
+        } else {
+            add(Kind.INSERTED, cur.sequence(), cur.recordId(), "links to a hash stored nowhere");
+        }
+        return true;
+    }
+
+    private void checkTail(AuditRecord last) {
+        if (last.sequence() < headSeq) {
+            add(Kind.REMOVED, last.sequence() + 1, headSeq == last.sequence() + 1 ? headRecordId : null,
+                    "the chain head names record " + headSeq + " but the chain ends at " + last.sequence());
+        } else if (last.sequence() == headSeq && !last.hash().equals(headHash)) {
+            add(Kind.ALTERED, last.sequence(), last.recordId(), "hash differs from the chain head");
+        }
+    }
+
+    private long seqOfHash(String hash) throws SQLException {
+        byHash.setString(1, hash);
+        try (ResultSet rs = byHash.executeQuery()) {
+            return rs.next() ? rs.getLong(1) : -1;
+        }
+    }
+
+    private void add(Kind kind, long seq, String recordId, String detail) {
+        if (findings.size() < maxFindings) {
+            findings.add(new ChainFinding(kind, seq, recordId, detail));
+        } else {
+            truncated = true;
+        }
+    }
+}

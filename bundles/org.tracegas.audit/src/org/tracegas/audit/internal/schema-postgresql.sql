@@ -1,0 +1,75 @@
+-- Audit trail tables for PostgreSQL 14 or later. Statements are separated by lines holding only "/".
+-- Re-running the script changes nothing (IF NOT EXISTS, OR REPLACE).
+CREATE TABLE IF NOT EXISTS audit_record (
+  seq            BIGINT PRIMARY KEY,
+  record_id      VARCHAR(36) NOT NULL UNIQUE,
+  recorded_at    TIMESTAMP(6) WITH TIME ZONE NOT NULL,
+  user_id        VARCHAR(200) NOT NULL,
+  action         VARCHAR(32) NOT NULL,
+  object_type    VARCHAR(200) NOT NULL,
+  object_id      VARCHAR(400) NOT NULL,
+  object_version BIGINT NOT NULL,
+  old_value      TEXT,
+  new_value      TEXT,
+  reason         TEXT,
+  signer_name    VARCHAR(400),
+  meaning        VARCHAR(32),
+  content_sha256 CHAR(64),
+  prev_hash      CHAR(64) NOT NULL,
+  hash           CHAR(64) NOT NULL UNIQUE
+)
+/
+CREATE INDEX IF NOT EXISTS audit_record_object ON audit_record (object_type, object_id)
+/
+CREATE INDEX IF NOT EXISTS audit_record_time ON audit_record (recorded_at)
+/
+CREATE TABLE IF NOT EXISTS audit_chain_head (
+  id             INT PRIMARY KEY CHECK (id = 1),
+  last_seq       BIGINT NOT NULL,
+  last_hash      CHAR(64) NOT NULL,
+  last_record_id VARCHAR(36)
+)
+/
+INSERT INTO audit_chain_head (id, last_seq, last_hash)
+SELECT 1, 0, '0000000000000000000000000000000000000000000000000000000000000000'
+WHERE NOT EXISTS (SELECT 1 FROM audit_chain_head)
+/
+CREATE OR REPLACE FUNCTION audit_refuse_change() RETURNS trigger LANGUAGE plpgsql AS $$
+BEGIN
+  RAISE EXCEPTION 'audit records are append-only: % on %.% refused', TG_OP, TG_TABLE_SCHEMA, TG_TABLE_NAME
+    USING ERRCODE = 'insufficient_privilege';
+END
+$$
+/
+CREATE OR REPLACE FUNCTION audit_guard_head() RETURNS trigger LANGUAGE plpgsql AS $$
+DECLARE
+  found_record BOOLEAN;
+BEGIN
+  IF TG_OP <> 'UPDATE' THEN
+    RAISE EXCEPTION 'audit chain head: % refused', TG_OP USING ERRCODE = 'insufficient_privilege';
+  END IF;
+  IF NEW.id <> OLD.id OR NEW.last_seq <= OLD.last_seq THEN
+    RAISE EXCEPTION 'audit chain head: may only advance (from % to %)', OLD.last_seq, NEW.last_seq
+      USING ERRCODE = 'insufficient_privilege';
+  END IF;
+  EXECUTE format('SELECT EXISTS (SELECT 1 FROM %I.audit_record WHERE seq = $1 AND hash = $2)', TG_TABLE_SCHEMA)
+    INTO found_record USING NEW.last_seq, NEW.last_hash;
+  IF NOT found_record THEN
+    RAISE EXCEPTION 'audit chain head: no stored record % with the given hash', NEW.last_seq
+      USING ERRCODE = 'insufficient_privilege';
+  END IF;
+  RETURN NEW;
+END
+$$
+/
+CREATE OR REPLACE TRIGGER audit_record_append_only BEFORE UPDATE OR DELETE ON audit_record
+  FOR EACH ROW EXECUTE FUNCTION audit_refuse_change()
+/
+CREATE OR REPLACE TRIGGER audit_record_no_truncate BEFORE TRUNCATE ON audit_record
+  FOR EACH STATEMENT EXECUTE FUNCTION audit_refuse_change()
+/
+CREATE OR REPLACE TRIGGER audit_chain_head_guard BEFORE UPDATE OR DELETE ON audit_chain_head
+  FOR EACH ROW EXECUTE FUNCTION audit_guard_head()
+/
+CREATE OR REPLACE TRIGGER audit_chain_head_no_truncate BEFORE TRUNCATE ON audit_chain_head
+  FOR EACH STATEMENT EXECUTE FUNCTION audit_refuse_change()
