@@ -1,0 +1,243 @@
+package org.tracegas.report;
+
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+import java.util.ArrayList;
+import java.util.Calendar;
+import java.util.GregorianCalendar;
+import java.util.List;
+import java.util.Locale;
+import java.util.Set;
+import java.util.TimeZone;
+
+import org.apache.pdfbox.cos.COSArray;
+import org.apache.pdfbox.cos.COSName;
+import org.apache.pdfbox.cos.COSString;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.pdmodel.PDDocumentInformation;
+import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.tracegas.report.internal.Check;
+import org.tracegas.report.internal.Numbers;
+import org.tracegas.report.internal.PageWriter;
+import org.tracegas.report.internal.PlotRenderer;
+import org.tracegas.report.internal.TableRenderer;
+import org.tracegas.report.internal.TableRenderer.Column;
+
+/**
+ * Writes a campaign report as PDF. The file depends on the content alone: document dates come from the
+ * campaign's issue time and the file identifier from the content hash, so the same content gives the same
+ * bytes.
+ */
+public final class PdfReportWriter {
+
+    /** Cautions every report carries. */
+    public static final List<String> STANDARD_CAUTIONS = List.of(
+            "Toxic gases: flue gas and the calibration, spike and tracer gases (for example CO, HCl, NH3, SO2, "
+                    + "HF) are toxic or asphyxiant. Sampling, calibration and spiking follow the site's safety rules, "
+                    + "with gas detection and venting of the instrument exhaust to a safe place.",
+            "The results in this report must be reviewed by qualified staff before they are used.",
+            "Compliance decisions rest with accredited practice and the local regulations that apply to the plant; "
+                    + "this report on its own does not decide compliance.");
+
+    private static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT)
+            .withZone(ZoneOffset.UTC);
+    private static final Set<String> ALARMS = Set.of("FAIL", "EXCEEDED");
+
+    /** The report as PDF bytes. */
+    public byte[] write(ReportContent content) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try {
+            write(content, out);
+        } catch (IOException e) {
+            throw new IllegalStateException("writing a report to memory failed", e);
+        }
+        return out.toByteArray();
+    }
+
+    public void write(ReportContent content, OutputStream out) throws IOException {
+        Check.notNull("content", content);
+        Check.notNull("out", out);
+        try (PDDocument doc = new PDDocument()) {
+            describe(doc, content);
+            try (PageWriter pw = new PageWriter(doc)) {
+                titleBlock(pw, content);
+                campaign(pw, content);
+                cautions(pw, content);
+                methods(pw, content);
+                qa(pw, content);
+                results(pw, content);
+                timeSeries(pw, content);
+                spectra(pw, content);
+                signatures(pw, content);
+                pw.close();
+                pw.footers("Report " + content.campaign().reportId() + "  |  " + content.campaign().plant()
+                        + "  |  content hash " + content.contentHash().substring(0, 16));
+            }
+            doc.save(out);
+        }
+    }
+
+    private static void describe(PDDocument doc, ReportContent content) {
+        Campaign c = content.campaign();
+        PDDocumentInformation info = doc.getDocumentInformation();
+        info.setTitle("Emission measurement report " + c.reportId());
+        info.setSubject(c.client() + ", " + c.plant() + ", " + c.source());
+        info.setCreator("Tracegas Workbench");
+        info.setProducer("Tracegas Workbench");
+        Calendar issued = new GregorianCalendar(TimeZone.getTimeZone("UTC"), Locale.ROOT);
+        issued.setTimeInMillis(c.issued().toEpochMilli());
+        info.setCreationDate(issued);
+        info.setModificationDate(issued);
+        // a fixed file identifier; otherwise the writer derives one from the current time
+        byte[] id = content.contentHash().substring(0, 32).getBytes(StandardCharsets.US_ASCII);
+        COSArray ids = new COSArray();
+        ids.add(new COSString(id));
+        ids.add(new COSString(id));
+        doc.getDocument().getTrailer().setItem(COSName.ID, ids);
+    }
+
+    private static void titleBlock(PageWriter pw, ReportContent content) {
+        Campaign c = content.campaign();
+        pw.ensure(80);
+        pw.down(20);
+        pw.text(pw.bold(), 18, pw.left(), pw.y(), "Emission measurement report");
+        pw.down(18);
+        pw.text(pw.regular(), 11, pw.left(), pw.y(), "Extractive FTIR measurements at " + c.plant() + ", " + c.source());
+        pw.down(6);
+        pw.line(pw.left(), pw.y(), pw.left() + pw.width(), pw.y(), 1.2f, 0f);
+        pw.down(4);
+    }
+
+    private static void campaign(PageWriter pw, ReportContent content) {
+        Campaign c = content.campaign();
+        pw.heading("1  Campaign");
+        List<String[]> rows = new ArrayList<>();
+        rows.add(new String[] {"Report", c.reportId()});
+        rows.add(new String[] {"Client", c.client()});
+        rows.add(new String[] {"Plant", c.plant()});
+        rows.add(new String[] {"Emission source", c.source()});
+        rows.add(new String[] {"Measurement dates", c.firstDay() + " to " + c.lastDay()});
+        rows.add(new String[] {"Reporting basis", c.reportingBasis()});
+        rows.add(new String[] {"Issued", TIME.format(c.issued())});
+        rows.add(new String[] {"Content hash (SHA-256)", content.contentHash()});
+        pw.keyValues(rows, 130);
+    }
+
+    private static void cautions(PageWriter pw, ReportContent content) {
+        pw.heading("2  Cautions");
+        List<String> all = new ArrayList<>(STANDARD_CAUTIONS);
+        all.addAll(content.cautions());
+        for (String caution : all) {
+            pw.paragraph("-  " + caution, 9.5f);
+        }
+    }
+
+    private static void methods(PageWriter pw, ReportContent content) {
+        pw.heading("3  Methods and software");
+        List<String[]> methodRows = new ArrayList<>();
+        for (MethodVersion m : content.methods()) {
+            methodRows.add(new String[] {m.name(), m.version(), m.hash()});
+        }
+        new TableRenderer(List.of(new Column("Analysis method", 150, false), new Column("Version", 60, false),
+                new Column("Method hash (SHA-256)", 285, false)), 8, ALARMS).draw(pw, methodRows);
+        List<String[]> libRows = new ArrayList<>();
+        for (LibraryVersion l : content.libraries()) {
+            libRows.add(new String[] {l.name(), l.version()});
+        }
+        new TableRenderer(List.of(new Column("Library or reference data", 300, false), new Column("Version", 195, false)),
+                8, ALARMS).draw(pw, libRows);
+    }
+
+    private static void qa(PageWriter pw, ReportContent content) {
+        pw.heading("4  Quality assurance summary");
+        long failed = content.qa().stream().filter(q -> !q.passed()).count();
+        pw.paragraph(content.qa().size() + " checks, " + (content.qa().size() - failed) + " passed, " + failed
+                + " failed.", 9.5f);
+        List<String[]> rows = new ArrayList<>();
+        for (QaLine q : content.qa()) {
+            rows.add(new String[] {q.check(), q.passed() ? "pass" : "FAIL", q.measured(), q.limits(),
+                    q.rule() + " [Source: " + q.source() + "]"});
+        }
+        new TableRenderer(List.of(new Column("Check", 85, false), new Column("Result", 34, false),
+                new Column("Measured", 55, true), new Column("Limits", 66, true), new Column("Rule and source", 255,
+                        false)), 7.5f, ALARMS).draw(pw, rows);
+    }
+
+    private static void results(PageWriter pw, ReportContent content) {
+        pw.heading("5  Results");
+        pw.paragraph("Concentrations on the reporting basis (" + content.campaign().reportingBasis() + "). U is the "
+                + "expanded uncertainty with coverage factor k = 2 (JCGM 100:2008); values are rounded to the "
+                + "decimal place of U given with two significant digits.", 9f);
+        List<String[]> rows = new ArrayList<>();
+        for (ResultRow r : content.results()) {
+            String[] vu = Numbers.withUncertainty(r.value(), r.expandedUncertainty());
+            String limit = r.limit().isPresent() ? Numbers.significant(r.limit().getAsDouble()) : "-";
+            String status = r.limit().isEmpty() ? "no limit" : r.exceeded() ? "EXCEEDED" : "within";
+            rows.add(new String[] {r.compound(), r.period(), TIME.format(r.periodStart()), vu[0], vu[1], r.unit(),
+                    String.join("; ", r.flags()), limit, status});
+        }
+        new TableRenderer(List.of(new Column("Compound", 52, false), new Column("Period", 38, false),
+                new Column("Period start", 78, false), new Column("Value", 48, true), new Column("U (k=2)", 42, true),
+                new Column("Unit", 36, false), new Column("Flags", 100, false), new Column("Limit", 40, true),
+                new Column("Limit status", 61, false)), 7.5f, ALARMS).draw(pw, rows);
+    }
+
+    private static void timeSeries(PageWriter pw, ReportContent content) throws IOException {
+        pw.heading("6  Time series");
+        if (content.timeSeries().isEmpty()) {
+            pw.paragraph("No time series in this report.", 9.5f);
+        }
+        for (Plot p : content.timeSeries()) {
+            plot(pw, p, 230);
+        }
+    }
+
+    private static void spectra(PageWriter pw, ReportContent content) throws IOException {
+        pw.heading("7  Spectra: fit and residual");
+        if (content.spectra().isEmpty()) {
+            pw.paragraph("No spectra in this report.", 9.5f);
+        }
+        for (SpectrumFit s : content.spectra()) {
+            pw.ensure(230 + 130);
+            plot(pw, s.fitPlot(), 230);
+            plot(pw, s.residualPlot(), 130);
+        }
+    }
+
+    private static void plot(PageWriter pw, Plot p, float height) throws IOException {
+        pw.ensure(height + 8);
+        pw.down(height);
+        PDPageContentStream cs = pw.stream();
+        new PlotRenderer(pw.regular(), pw.bold()).draw(cs, p, pw.left(), pw.y(), pw.width(), height);
+        pw.down(10);
+    }
+
+    private static void signatures(PageWriter pw, ReportContent content) {
+        pw.heading("8  Review and approval");
+        pw.paragraph("Each signature names the signer, the time, its meaning and the SHA-256 hash of the content "
+                + "signed; a signature applies to this report only if that hash equals the content hash in section 1.",
+                9f);
+        for (SignatureMeaning m : SignatureMeaning.values()) {
+            pw.subheading(m.noun());
+            content.signature(m).ifPresentOrElse(s -> {
+                boolean matches = s.signedContentHash().equals(content.contentHash());
+                List<String[]> rows = new ArrayList<>();
+                rows.add(new String[] {m.pastTense() + " by", s.printedName()});
+                rows.add(new String[] {"Time", TIME.format(s.signedAt())});
+                rows.add(new String[] {"Meaning", m == SignatureMeaning.REVIEW
+                        ? "Review: the content was checked by qualified staff"
+                        : "Approval: the report is released"});
+                rows.add(new String[] {"Signed content hash", s.signedContentHash()});
+                rows.add(new String[] {"Applies to this content", matches ? "yes"
+                        : "NO: the signed content differs from this report"});
+                pw.keyValues(rows, 130);
+            }, () -> pw.paragraph("Not yet " + m.pastTense().toLowerCase(Locale.ROOT) + ". This report has no "
+                    + m.noun().toLowerCase(Locale.ROOT) + " signature; do not use its results before it is "
+                    + m.pastTense().toLowerCase(Locale.ROOT) + ".", 9.5f, pw.left(), pw.width(), pw.bold()));
+        }
+    }
+}

@@ -1,0 +1,213 @@
+package org.tracegas.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+
+import org.tracegas.report.internal.Check;
+import org.tracegas.report.internal.ContentDigest;
+
+/**
+ * Everything a campaign report shows, as an immutable value built from plain data. Signatures are not part
+ * of the {@link #contentHash() content hash}: they sign it.
+ */
+public final class ReportContent {
+
+    private final Campaign campaign;
+    private final List<MethodVersion> methods;
+    private final List<LibraryVersion> libraries;
+    private final List<QaLine> qa;
+    private final List<ResultRow> results;
+    private final List<Plot> timeSeries;
+    private final List<SpectrumFit> spectra;
+    private final List<String> cautions;
+    private final List<Signature> signatures;
+    private final String contentHash;
+
+    private ReportContent(Builder b) {
+        campaign = Check.notNull("campaign", b.campaign);
+        methods = Check.list("methods", b.methods);
+        libraries = Check.list("libraries", b.libraries);
+        qa = Check.list("qa", b.qa);
+        results = Check.list("results", b.results);
+        timeSeries = Check.list("timeSeries", b.timeSeries);
+        spectra = Check.list("spectra", b.spectra);
+        cautions = Check.list("cautions", b.cautions);
+        signatures = Check.list("signatures", b.signatures);
+        for (SignatureMeaning m : SignatureMeaning.values()) {
+            if (signatures.stream().filter(s -> s.meaning() == m).count() > 1) {
+                throw new IllegalArgumentException("signatures hold more than one " + m.noun().toLowerCase());
+            }
+        }
+        contentHash = digest();
+    }
+
+    public static Builder builder(Campaign campaign) {
+        return new Builder(campaign);
+    }
+
+    public Campaign campaign() {
+        return campaign;
+    }
+
+    public List<MethodVersion> methods() {
+        return methods;
+    }
+
+    public List<LibraryVersion> libraries() {
+        return libraries;
+    }
+
+    public List<QaLine> qa() {
+        return qa;
+    }
+
+    public List<ResultRow> results() {
+        return results;
+    }
+
+    public List<Plot> timeSeries() {
+        return timeSeries;
+    }
+
+    public List<SpectrumFit> spectra() {
+        return spectra;
+    }
+
+    /** Cautions beyond the standard ones every report carries. */
+    public List<String> cautions() {
+        return cautions;
+    }
+
+    public List<Signature> signatures() {
+        return signatures;
+    }
+
+    public Optional<Signature> signature(SignatureMeaning meaning) {
+        return signatures.stream().filter(s -> s.meaning() == meaning).findFirst();
+    }
+
+    /** SHA-256 (hex) of all content except the signatures. */
+    public String contentHash() {
+        return contentHash;
+    }
+
+    /** The same content with one more signature. */
+    public ReportContent withSignature(Signature signature) {
+        Builder b = toBuilder();
+        b.signatures.add(Check.notNull("signature", signature));
+        return b.build();
+    }
+
+    private Builder toBuilder() {
+        Builder b = new Builder(campaign);
+        b.methods.addAll(methods);
+        b.libraries.addAll(libraries);
+        b.qa.addAll(qa);
+        b.results.addAll(results);
+        b.timeSeries.addAll(timeSeries);
+        b.spectra.addAll(spectra);
+        b.cautions.addAll(cautions);
+        b.signatures.addAll(signatures);
+        return b;
+    }
+
+    // fields one by one rather than record toString(), whose format the platform does not fix
+    private String digest() {
+        Campaign c = campaign;
+        ContentDigest d = new ContentDigest().add(c.reportId()).add(c.client()).add(c.plant()).add(c.source())
+                .add(c.firstDay()).add(c.lastDay()).add(c.issued()).add(c.reportingBasis());
+        d.add(methods.size());
+        methods.forEach(m -> d.add(m.name()).add(m.version()).add(m.hash()));
+        d.add(libraries.size());
+        libraries.forEach(l -> d.add(l.name()).add(l.version()));
+        d.add(qa.size());
+        qa.forEach(q -> d.add(q.check()).add(q.passed()).add(q.measured()).add(q.limits()).add(q.rule()).add(q.source()));
+        d.add(results.size());
+        for (ResultRow r : results) {
+            d.add(r.compound()).add(r.period()).add(r.periodStart()).add(r.value()).add(r.expandedUncertainty())
+                    .add(r.unit()).add(r.flags().size());
+            r.flags().forEach(d::add);
+            d.add(r.limit().isPresent() ? Double.toString(r.limit().getAsDouble()) : "none").add(r.exceeded());
+        }
+        d.add(timeSeries.size());
+        for (Plot p : timeSeries) {
+            digestPlot(d, p);
+        }
+        d.add(spectra.size());
+        for (SpectrumFit s : spectra) {
+            d.add(s.title()).add(s.wavenumbers()).add(s.measured()).add(s.fitted());
+        }
+        d.add(cautions.size());
+        cautions.forEach(d::add);
+        return d.hex();
+    }
+
+    private static void digestPlot(ContentDigest d, Plot p) {
+        d.add(p.title()).add(p.xLabel()).add(p.yLabel()).add(p.reversedX()).add(p.series().size());
+        for (Series s : p.series()) {
+            d.add(s.name()).add(s.x()).add(s.y());
+        }
+    }
+
+    /** Collects the parts of a report; lists keep the order they are added in. */
+    public static final class Builder {
+        private final Campaign campaign;
+        private final List<MethodVersion> methods = new ArrayList<>();
+        private final List<LibraryVersion> libraries = new ArrayList<>();
+        private final List<QaLine> qa = new ArrayList<>();
+        private final List<ResultRow> results = new ArrayList<>();
+        private final List<Plot> timeSeries = new ArrayList<>();
+        private final List<SpectrumFit> spectra = new ArrayList<>();
+        private final List<String> cautions = new ArrayList<>();
+        private final List<Signature> signatures = new ArrayList<>();
+
+        private Builder(Campaign campaign) {
+            this.campaign = campaign;
+        }
+
+        public Builder method(MethodVersion m) {
+            methods.add(m);
+            return this;
+        }
+
+        public Builder library(LibraryVersion l) {
+            libraries.add(l);
+            return this;
+        }
+
+        public Builder qa(QaLine line) {
+            qa.add(line);
+            return this;
+        }
+
+        public Builder result(ResultRow row) {
+            results.add(row);
+            return this;
+        }
+
+        public Builder timeSeries(Plot plot) {
+            timeSeries.add(plot);
+            return this;
+        }
+
+        public Builder spectrum(SpectrumFit fit) {
+            spectra.add(fit);
+            return this;
+        }
+
+        public Builder caution(String text) {
+            cautions.add(Check.text("caution", text));
+            return this;
+        }
+
+        public Builder signature(Signature s) {
+            signatures.add(s);
+            return this;
+        }
+
+        public ReportContent build() {
+            return new ReportContent(this);
+        }
+    }
+}

@@ -1,0 +1,44 @@
+package org.tracegas.report;
+
+import java.time.Instant;
+import java.util.List;
+import java.util.OptionalDouble;
+
+import org.tracegas.report.internal.Check;
+
+/**
+ * One averaged result on the reporting basis.
+ *
+ * @param compound            compound
+ * @param period              averaging period label, for example "30 min"
+ * @param periodStart         start of the averaging period
+ * @param value               concentration on the reporting basis
+ * @param expandedUncertainty expanded uncertainty U (k = 2) in the same unit
+ * @param unit                unit, for example "mg/m³"
+ * @param flags               data flags, for example "invalid: 70 % data", "O2 guard"
+ * @param limit               the client's limit for this compound and period, if any
+ * @param exceeded            whether the limit comparison found an exceedance
+ */
+public record ResultRow(String compound, String period, Instant periodStart, double value, double expandedUncertainty,
+        String unit, List<String> flags, OptionalDouble limit, boolean exceeded) {
+
+    public ResultRow {
+        Check.text("compound", compound);
+        Check.text("period", period);
+        Check.notNull("periodStart", periodStart);
+        if (!Double.isFinite(value)) {
+            throw new IllegalArgumentException("value of " + compound + " at " + periodStart + " is not finite");
+        }
+        if (!(expandedUncertainty >= 0 && Double.isFinite(expandedUncertainty))) {
+            throw new IllegalArgumentException("expandedUncertainty of " + compound + " at " + periodStart
+                    + " must be non-negative and finite, was " + expandedUncertainty);
+        }
+        Check.notNull("unit", unit);
+        flags = Check.list("flags", flags);
+        Check.notNull("limit", limit);
+        if (exceeded && limit.isEmpty()) {
+            throw new IllegalArgumentException("result of " + compound + " at " + periodStart
+                    + " is marked exceeded but has no limit");
+        }
+    }
+}
