@@ -3,7 +3,7 @@
 # the GTK 3 libraries SWT needs, a PostgreSQL server for the lab-server tests and pdftoppm for report pages.
 set -euo pipefail
 need=()
-for p in xvfb xauth libgtk-3-0 dbus-x11 postgresql poppler-utils unzip; do
+for p in xvfb xauth libgtk-3-0 dbus-x11 postgresql poppler-utils unzip x11-apps netpbm; do
   dpkg -s "$p" >/dev/null 2>&1 || need+=("$p")
 done
 if [ ${#need[@]} -gt 0 ]; then

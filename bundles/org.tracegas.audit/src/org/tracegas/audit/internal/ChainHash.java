@@ -32,9 +32,9 @@ public final class ChainHash {
         sha.update(HEX.parseHex(r.previousHash()));
         Canonical out = new Canonical(sha);
         out.field(1, r.recordId());
-        out.field(2, Long.toString(micros(r.recordedAt())));
+        out.field(2, r.recordedAt() == null ? null : Long.toString(micros(r.recordedAt())));
         out.field(3, r.userId());
-        out.field(4, r.action().name());
+        out.field(4, r.action() == null ? null : r.action().name());
         out.field(5, r.objectType());
         out.field(6, r.objectId());
         out.field(7, Long.toString(r.objectVersion()));

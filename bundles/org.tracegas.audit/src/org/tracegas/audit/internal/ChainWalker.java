@@ -51,7 +51,7 @@ public final class ChainWalker {
                 AuditRecord cur = null;
                 boolean prevFlagged = false;
                 while (rs.next()) {
-                    AuditRecord next = RecordRows.read(rs);
+                    AuditRecord next = RecordRows.readLenient(rs);
                     count++;
                     if (cur != null) {
                         prevFlagged = check(prev, prevFlagged, cur, next);
@@ -101,16 +101,26 @@ public final class ChainWalker {
             add(Kind.INSERTED, cur.sequence(), cur.recordId(), "beyond the chain head (last sequence " + headSeq + ")");
             return true;
         }
+        if (cur.action() == null || !ChainHash.isSha256Hex(cur.previousHash()) || !ChainHash.isSha256Hex(cur.hash())) {
+            add(Kind.ALTERED, cur.sequence(), cur.recordId(), "action, meaning or a hash is not a valid value");
+            return true;
+        }
         if (!ChainHash.of(cur).equals(cur.hash())) {
             add(Kind.ALTERED, cur.sequence(), cur.recordId(), "stored fields do not give the stored hash");
             return true;
         }
+        boolean flagged = links(prev, prevFlagged, cur, next, expectedPrev, expectedSeq);
+        if (next == null) {
+            checkTail(cur, flagged);
+        }
+        return flagged;
+    }
+
+    private boolean links(AuditRecord prev, boolean prevFlagged, AuditRecord cur, AuditRecord next,
+            String expectedPrev, long expectedSeq) throws SQLException {
         boolean backOk = cur.previousHash().equals(expectedPrev);
         boolean fwdOk = next == null ? cur.sequence() == headSeq && cur.hash().equals(headHash)
                 : next.previousHash().equals(cur.hash());
-        if (next == null) {
-            checkTail(cur);
-        }
         if (backOk && fwdOk) {
             return false;
         }
@@ -159,16 +169,20 @@ public final class ChainWalker {
         return true;
     }
 
-    private void checkTail(AuditRecord last) {
+    private void checkTail(AuditRecord last, boolean flagged) {
         if (last.sequence() < headSeq) {
             add(Kind.REMOVED, last.sequence() + 1, headSeq == last.sequence() + 1 ? headRecordId : null,
                     "the chain head names record " + headSeq + " but the chain ends at " + last.sequence());
-        } else if (last.sequence() == headSeq && !last.hash().equals(headHash)) {
+        } else if (!flagged && last.sequence() == headSeq && !last.hash().equals(headHash)) {
             add(Kind.ALTERED, last.sequence(), last.recordId(), "hash differs from the chain head");
         }
     }
 
+    /** Sequence number of the record with this hash, 0 for the genesis value, -1 when stored nowhere. */
     private long seqOfHash(String hash) throws SQLException {
+        if (hash.equals(ChainHash.GENESIS)) {
+            return 0;
+        }
         byHash.setString(1, hash);
         try (ResultSet rs = byHash.executeQuery()) {
             return rs.next() ? rs.getLong(1) : -1;

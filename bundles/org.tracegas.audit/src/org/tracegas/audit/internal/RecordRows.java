@@ -30,17 +30,36 @@ public final class RecordRows {
      * ours is reported as an {@link SQLException} naming the sequence number.
      */
     public static AuditRecord read(ResultSet rs) throws SQLException {
-        long seq = rs.getLong(1);
+        AuditRecord r = readLenient(rs);
+        if (r.action() == null) {
+            throw new SQLException("audit record " + r.sequence() + ": action '" + rs.getString(5) + "' or meaning '"
+                    + rs.getString(13) + "' is not a known value");
+        }
+        return r;
+    }
+
+    /**
+     * Reads the current row; an unknown action or meaning gives a record whose action is null, so that the
+     * verifier can report it instead of failing.
+     */
+    public static AuditRecord readLenient(ResultSet rs) throws SQLException {
         OffsetDateTime at = rs.getObject(3, OffsetDateTime.class);
-        String meaning = rs.getString(13);
+        AuditAction action = parse(AuditAction.class, rs.getString(5));
+        String meaningName = rs.getString(13);
+        SignatureMeaning meaning = meaningName == null ? null : parse(SignatureMeaning.class, meaningName);
+        if (meaningName != null && meaning == null) {
+            action = null;
+        }
+        return new AuditRecord(rs.getLong(1), rs.getString(2), at == null ? null : at.toInstant(), rs.getString(4),
+                action, rs.getString(6), rs.getString(7), rs.getLong(8), rs.getString(9), rs.getString(10),
+                rs.getString(11), rs.getString(12), meaning, rs.getString(14), rs.getString(15), rs.getString(16));
+    }
+
+    private static <E extends Enum<E>> E parse(Class<E> type, String name) {
         try {
-            return new AuditRecord(seq, rs.getString(2), at == null ? null : at.toInstant(), rs.getString(4),
-                    AuditAction.valueOf(rs.getString(5)), rs.getString(6), rs.getString(7), rs.getLong(8),
-                    rs.getString(9), rs.getString(10), rs.getString(11), rs.getString(12),
-                    meaning == null ? null : SignatureMeaning.valueOf(meaning), rs.getString(14), rs.getString(15),
-                    rs.getString(16));
-        } catch (IllegalArgumentException | NullPointerException e) {
-            throw new SQLException("audit record " + seq + ": unknown action or meaning (" + e.getMessage() + ")", e);
+            return name == null ? null : Enum.valueOf(type, name);
+        } catch (IllegalArgumentException e) {
+            return null;
         }
     }
 

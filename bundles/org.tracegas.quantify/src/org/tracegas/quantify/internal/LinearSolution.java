@@ -33,8 +33,9 @@ public final class LinearSolution {
         return residual.clone();
     }
 
-    double residualAt(int i) {
-        return residual[i];
+    /** The residual array itself, for a caller that takes it over; no copy. */
+    double[] residualUnsafe() {
+        return residual;
     }
 
     /** Weighted residual sum of squares. */

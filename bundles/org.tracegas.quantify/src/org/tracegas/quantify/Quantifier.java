@@ -1,0 +1,169 @@
+package org.tracegas.quantify;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Optional;
+
+import org.tracegas.quantify.internal.FitSystem;
+import org.tracegas.quantify.internal.Sha256;
+import org.tracegas.quantify.internal.SystemFit;
+import org.tracegas.spectrum.Ordinate;
+import org.tracegas.spectrum.Spectrum;
+
+/**
+ * Quantifies sample spectra with a prepared method. Stateless apart from its settings, so one instance serves
+ * any number of threads; each spectrum is fitted on its own, which makes the numbers independent of how work is
+ * spread over threads.
+ */
+public final class Quantifier {
+
+    private final PreparedMethod prepared;
+    private final String libraryHash;
+    private final String softwareVersion;
+    private final boolean keepSpectra;
+
+    /**
+     * @param prepared        the prepared method
+     * @param libraryHash     identity of the reference library version, recorded with each result
+     * @param softwareVersion software version, recorded with each result
+     * @param keepSpectra     whether results carry the fitted spectra and residuals for plots
+     */
+    public Quantifier(PreparedMethod prepared, String libraryHash, String softwareVersion, boolean keepSpectra) {
+        if (prepared == null) {
+            throw new IllegalArgumentException("prepared must not be null");
+        }
+        if (libraryHash == null || libraryHash.isBlank()) {
+            throw new IllegalArgumentException("libraryHash must not be blank");
+        }
+        if (softwareVersion == null || softwareVersion.isBlank()) {
+            throw new IllegalArgumentException("softwareVersion must not be blank");
+        }
+        this.prepared = prepared;
+        this.libraryHash = libraryHash;
+        this.softwareVersion = softwareVersion;
+        this.keepSpectra = keepSpectra;
+    }
+
+    public PreparedMethod prepared() {
+        return prepared;
+    }
+
+    /**
+     * Fits a sample and records what the result was computed from.
+     *
+     * @throws IllegalArgumentException if the spectrum is not absorbance, not on the prepared axis, or not finite
+     *                                  at a fit point (the message names the index)
+     */
+    public SpectrumResult quantify(Sample sample) {
+        ReprocessingRecord record = new ReprocessingRecord(prepared.method().contentHash(), libraryHash,
+                softwareVersion, Sha256.ofSpectrum(sample.absorbance()));
+        return new SpectrumResult(fit(sample), record);
+    }
+
+    /**
+     * Fits a sample: one result per analyte in the method's order, without the reprocessing record.
+     *
+     * @throws IllegalArgumentException as {@link #quantify(Sample)}
+     */
+    public List<CompoundResult> fit(Sample sample) {
+        Spectrum spectrum = sample.absorbance();
+        if (spectrum.ordinate() != Ordinate.ABSORBANCE) {
+            throw new IllegalArgumentException("sample ordinate must be ABSORBANCE, was " + spectrum.ordinate());
+        }
+        if (!spectrum.axis().equals(prepared.axis())) {
+            throw new IllegalArgumentException("sample axis " + spectrum.axis() + " differs from the prepared axis "
+                    + prepared.axis());
+        }
+        double[] y = spectrum.toArray();
+        QuantificationMethod method = prepared.method();
+        SystemFit[] fits = new SystemFit[prepared.systemCount()];
+        List<CompoundResult> results = new ArrayList<>(method.analytes().size());
+        for (int a = 0; a < method.analytes().size(); a++) {
+            int s = prepared.systemOfAnalyte(a);
+            FitSystem system = prepared.system(s);
+            if (fits[s] == null) {
+                requireFinite(y, system);
+                fits[s] = system.fit(y);
+            }
+            results.add(result(method, method.analytes().get(a), system, fits[s], prepared.columnOfAnalyte(a), y,
+                    spectrum, sample.background()));
+        }
+        return results;
+    }
+
+    private static void requireFinite(double[] y, FitSystem system) {
+        for (int i : system.rows()) {
+            if (!Double.isFinite(y[i])) {
+                throw new IllegalArgumentException("sample absorbance at index " + i + " is not finite: " + y[i]);
+            }
+        }
+    }
+
+    private CompoundResult result(QuantificationMethod method, Analyte analyte, FitSystem system, SystemFit fit,
+            int column, double[] y, Spectrum spectrum, BackgroundAge background) {
+        double path = method.pathLengthMetres();
+        double amount = fit.amounts()[column];
+        double concentration = amount / path;
+        double uncertainty = fit.amountSd()[column] / path;
+        double detectionLimit = 3 * uncertainty;
+        EnumSet<QualityFlag> flags = EnumSet.noneOf(QualityFlag.class);
+        if (amount > system.compounds().get(column).highestAmount()) {
+            flags.add(QualityFlag.OUTSIDE_CALIBRATED_RANGE);
+        }
+        if (concentration < -detectionLimit) {
+            flags.add(QualityFlag.NEGATIVE_BEYOND_DETECTION_LIMIT);
+        }
+        if (!fit.converged()) {
+            flags.add(QualityFlag.NOT_CONVERGED);
+        }
+        if (background != null && background.tooOld()) {
+            flags.add(QualityFlag.BACKGROUND_TOO_OLD);
+        }
+        int[] rows = system.rows();
+        double[] residual = fit.residual();
+        List<RegionResidual> residuals = new ArrayList<>(system.regions());
+        double highest = Double.NEGATIVE_INFINITY;
+        for (int r = 0; r < system.regions(); r++) {
+            double sum = 0;
+            int from = system.regionStart(r);
+            int to = system.regionStart(r + 1);
+            for (int j = from; j < to; j++) {
+                sum += residual[j] * residual[j];
+                highest = Math.max(highest, y[rows[j]]);
+            }
+            RegionResidual rr = new RegionResidual(analyte.regions().get(r), Math.sqrt(sum / (to - from)));
+            if (rr.aboveLimit()) {
+                flags.add(QualityFlag.RESIDUAL_ABOVE_LIMIT);
+            }
+            residuals.add(rr);
+        }
+        if (highest > method.maxAbsorbance()) {
+            flags.add(QualityFlag.ABSORBANCE_TOO_HIGH);
+        }
+        Optional<FitSpectra> spectra = keepSpectra ? Optional.of(spectra(spectrum, rows, fit, column, y))
+                : Optional.empty();
+        return new CompoundResult(analyte.compound(), concentration, uncertainty, detectionLimit,
+                method.reportingUnit(), residuals, flags, fit.iterations(), fit.shift(), fit.width(), spectra);
+    }
+
+    private static FitSpectra spectra(Spectrum spectrum, int[] rows, SystemFit fit, int column, double[] y) {
+        int n = y.length;
+        double[] contribution = new double[n];
+        double[] model = new double[n];
+        double[] residual = new double[n];
+        Arrays.fill(contribution, Double.NaN);
+        Arrays.fill(model, Double.NaN);
+        Arrays.fill(residual, Double.NaN);
+        double[] own = fit.contribution(column);
+        double[] r = fit.residual();
+        for (int j = 0; j < rows.length; j++) {
+            contribution[rows[j]] = own[j];
+            residual[rows[j]] = r[j];
+            model[rows[j]] = y[rows[j]] - r[j];
+        }
+        return new FitSpectra(spectrum.withValues(contribution, Ordinate.ABSORBANCE),
+                spectrum.withValues(model, Ordinate.ABSORBANCE), spectrum.withValues(residual, Ordinate.ABSORBANCE));
+    }
+}

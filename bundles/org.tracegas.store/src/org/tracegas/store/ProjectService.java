@@ -1,0 +1,45 @@
+package org.tracegas.store;
+
+import java.time.Instant;
+
+import org.tracegas.model.AccessLevel;
+import org.tracegas.model.MeasurementKind;
+
+/**
+ * Clients, projects (campaigns), access grants and measurements. Project data is visible only to users
+ * with a grant on the project; the creator of a project gets a write grant.
+ */
+public interface ProjectService {
+
+    /** @return the new client's id */
+    String createClient(Session actor, String name);
+
+    ProjectInfo createProject(Session actor, String clientId, String code, String name);
+
+    /**
+     * Grants (or changes) a user's access to a project.
+     *
+     * @throws AccessDeniedException unless the actor has write access to the project or is an administrator
+     */
+    void grant(Session actor, String projectId, String userId, AccessLevel access);
+
+    /** @throws AccessDeniedException without at least read access */
+    ProjectInfo project(Session actor, String projectId);
+
+    /**
+     * @param expectedVersion the project's row version the change was made on
+     * @throws ConcurrentChangeException if the project was changed since
+     * @throws AccessDeniedException     without write access
+     */
+    ProjectInfo rename(Session actor, String projectId, long expectedVersion, String newName);
+
+    /**
+     * Records a measurement made by the actor.
+     *
+     * @param cellTemperature in K
+     * @param cellPressure    in hPa
+     * @return the measurement's id
+     */
+    String recordMeasurement(Session actor, String projectId, MeasurementKind kind, Instant time,
+            double cellTemperature, double cellPressure);
+}

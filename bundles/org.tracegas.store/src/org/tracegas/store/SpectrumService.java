@@ -1,0 +1,30 @@
+package org.tracegas.store;
+
+import java.util.List;
+import java.util.stream.Stream;
+
+/**
+ * Spectral arrays of a project, stored as little-endian binary numbers with the axis as first, step and
+ * size (or as an explicit binary axis).
+ */
+public interface SpectrumService {
+
+    /** @return the stored array's id */
+    String store(Session actor, String projectId, SpectrumInput spectrum);
+
+    /**
+     * Stores many spectra in one transaction: all of them or, on any failure, none.
+     *
+     * @return the ids, in input order
+     */
+    List<String> storeAll(Session actor, String projectId, List<SpectrumInput> spectra);
+
+    /** @throws NoSuchObjectException if there is no such array */
+    StoredSpectrum load(Session actor, String dataId);
+
+    /**
+     * All spectra of a project in storage order, read row by row from a database cursor: only a few rows
+     * are held at a time. The stream holds a database connection: close it (try-with-resources).
+     */
+    Stream<StoredSpectrum> stream(Session actor, String projectId);
+}

@@ -1,0 +1,49 @@
+package org.tracegas.store;
+
+import java.util.Set;
+
+import org.tracegas.model.Role;
+
+/**
+ * Users, roles and log-in. Passwords are kept as salted PBKDF2-HMAC-SHA256 hashes; an account is
+ * locked after a number of consecutive failed log-ins.
+ */
+public interface UserService {
+
+    /**
+     * Creates the first user, an administrator, in an empty workspace.
+     *
+     * @throws AccessDeniedException if any user exists already
+     */
+    Session createFirstAdministrator(String login, String displayName, char[] password);
+
+    /**
+     * @throws AccessDeniedException    unless the actor is an administrator
+     * @throws IllegalArgumentException naming a blank login or display name, no role, or a short password
+     */
+    UserInfo createUser(Session actor, String login, String displayName, Set<Role> roles, char[] password);
+
+    /**
+     * Checks the password. A failure counts towards the lock-out; a success resets the count.
+     *
+     * @throws LoginFailedException for an unknown login, a wrong password or a locked account
+     */
+    Session logIn(String login, char[] password);
+
+    /**
+     * @param expectedVersion the user's row version the change was made on
+     * @throws ConcurrentChangeException if the user was changed since
+     * @throws AccessDeniedException     unless the actor is an administrator
+     */
+    UserInfo changeRoles(Session actor, String userId, long expectedVersion, Set<Role> roles);
+
+    /**
+     * Unlocks an account and resets its failure count.
+     *
+     * @throws AccessDeniedException unless the actor is an administrator
+     */
+    UserInfo unlock(Session actor, String userId);
+
+    /** @throws NoSuchObjectException if there is no such user */
+    UserInfo user(String userId);
+}

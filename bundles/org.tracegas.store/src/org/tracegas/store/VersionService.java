@@ -1,0 +1,32 @@
+package org.tracegas.store;
+
+/**
+ * Versions of analysis methods and reference libraries. The content of a version is a canonical
+ * serialization supplied by the caller ({@code key=value} lines); its SHA-256 is stored with it. A
+ * version used by a result is frozen: changing it means making a new version that records its parent,
+ * its author and the reason.
+ */
+public interface VersionService {
+
+    /** Creates a method or library with its first version. */
+    VersionInfo create(Session actor, VersionKind kind, String name, String content, String reason);
+
+    /** Makes a new version derived from {@code parentVersionId}, frozen or not. */
+    VersionInfo revise(Session actor, String parentVersionId, String content, String reason);
+
+    /**
+     * Changes a version that no result uses yet, in place.
+     *
+     * @throws FrozenVersionException    if a result uses it
+     * @throws ConcurrentChangeException if it was changed since {@code expectedVersion}
+     */
+    VersionInfo updateDraft(Session actor, String versionId, long expectedVersion, String content,
+            String reason);
+
+    VersionInfo version(String versionId);
+
+    String content(String versionId);
+
+    /** Field-by-field comparison of two versions' contents. */
+    VersionDiff diff(String olderVersionId, String newerVersionId);
+}

@@ -1,0 +1,23 @@
+package org.tracegas.store;
+
+/**
+ * An open workspace store: the services through which all stored data is read and changed. Each
+ * service call is one transaction; every change writes its audit record in that same transaction.
+ * Obtain one from {@link Workspaces} or as an OSGi service.
+ */
+public interface WorkspaceStore extends AutoCloseable {
+
+    UserService users();
+
+    ProjectService projects();
+
+    SpectrumService spectra();
+
+    VersionService versions();
+
+    ResultService results();
+
+    /** Releases the database (an embedded H2 database is shut down and its files unlocked). */
+    @Override
+    void close();
+}

@@ -1,0 +1,160 @@
+package org.tracegas.store.internal;
+
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.Instant;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.UUID;
+
+import org.tracegas.audit.AuditAction;
+import org.tracegas.audit.AuditEntry;
+import org.tracegas.audit.AuditValues;
+import org.tracegas.model.AccessLevel;
+import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Role;
+import org.tracegas.store.NoSuchObjectException;
+import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.ProjectService;
+import org.tracegas.store.Session;
+
+final class JdbcProjectService implements ProjectService {
+
+    private final Transactions transactions;
+
+    JdbcProjectService(Transactions transactions) {
+        this.transactions = transactions;
+    }
+
+    @Override
+    public String createClient(Session actor, String name) {
+        JdbcUserService.requireText("name", name);
+        return transactions.run("creating client " + name, tx -> {
+            Guard.roles(tx, actor);
+            String id = UUID.randomUUID().toString();
+            tx.update("INSERT INTO client (id, name, row_version) VALUES (?, ?, 0)", id, name);
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "client", id)
+                    .newValue(AuditValues.canonical(Map.of("name", name))).build());
+            return id;
+        });
+    }
+
+    @Override
+    public ProjectInfo createProject(Session actor, String clientId, String code, String name) {
+        JdbcUserService.requireText("code", code);
+        JdbcUserService.requireText("name", name);
+        return transactions.run("creating project " + code, tx -> {
+            Guard.roles(tx, actor);
+            if (tx.queryOne("SELECT 1 FROM client WHERE id = ?", rs -> 1, clientId).isEmpty()) {
+                throw new NoSuchObjectException("client", clientId);
+            }
+            ProjectInfo project = new ProjectInfo(UUID.randomUUID().toString(), clientId, code, name, 0);
+            tx.update("INSERT INTO project (id, client_id, code, name, row_version) VALUES (?, ?, ?, ?, 0)",
+                    project.id(), clientId, code, name);
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "project", project.id())
+                    .newValue(values(project)).build());
+            insertGrant(tx, actor, project.id(), actor.userId(), AccessLevel.WRITE);
+            return project;
+        });
+    }
+
+    @Override
+    public void grant(Session actor, String projectId, String userId, AccessLevel access) {
+        if (access == null) {
+            throw new IllegalArgumentException("access must not be null");
+        }
+        transactions.run("granting " + access + " on project " + projectId, tx -> {
+            if (!Guard.roles(tx, actor).contains(Role.ADMINISTRATOR)) {
+                Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
+            }
+            if (tx.queryOne("SELECT 1 FROM app_user WHERE id = ?", rs -> 1, userId).isEmpty()) {
+                throw new NoSuchObjectException("user", userId);
+            }
+            String before = tx.queryOne("SELECT access FROM project_grant WHERE project_id = ? AND user_id = ?",
+                    rs -> rs.getString(1), projectId, userId).orElse(null);
+            if (before == null) {
+                insertGrant(tx, actor, projectId, userId, access);
+            } else {
+                tx.update("UPDATE project_grant SET access = ? WHERE project_id = ? AND user_id = ?", access,
+                        projectId, userId);
+                tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "project-grant",
+                        projectId + "/" + userId).oldValue(AuditValues.canonical(Map.of("access", before)))
+                        .newValue(AuditValues.canonical(Map.of("access", access.getName()))).build());
+            }
+            return null;
+        });
+    }
+
+    private static void insertGrant(Tx tx, Session actor, String projectId, String userId, AccessLevel access)
+            throws SQLException {
+        tx.update("INSERT INTO project_grant (project_id, user_id, access) VALUES (?, ?, ?)", projectId, userId,
+                access);
+        tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "project-grant", projectId + "/" + userId)
+                .newValue(AuditValues.canonical(Map.of("access", access.getName()))).build());
+    }
+
+    @Override
+    public ProjectInfo project(Session actor, String projectId) {
+        return transactions.run("reading project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+            return load(tx, projectId);
+        });
+    }
+
+    @Override
+    public ProjectInfo rename(Session actor, String projectId, long expectedVersion, String newName) {
+        JdbcUserService.requireText("newName", newName);
+        return transactions.run("renaming project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
+            ProjectInfo before = load(tx, projectId);
+            long version = RowVersions.update(tx, "project", "project", projectId, expectedVersion, "name = ?",
+                    newName);
+            ProjectInfo after = new ProjectInfo(projectId, before.clientId(), before.code(), newName, version);
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "project", projectId).version(version)
+                    .oldValue(values(before)).newValue(values(after)).build());
+            return after;
+        });
+    }
+
+    @Override
+    public String recordMeasurement(Session actor, String projectId, MeasurementKind kind, Instant time,
+            double cellTemperature, double cellPressure) {
+        if (kind == null || time == null) {
+            throw new IllegalArgumentException("kind and time of a measurement must not be null");
+        }
+        if (!(cellTemperature > 0) || !(cellPressure > 0)) {
+            throw new IllegalArgumentException("cell temperature (K) and pressure (hPa) must be positive, were "
+                    + cellTemperature + " and " + cellPressure);
+        }
+        return transactions.run("recording a measurement in project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
+            String id = UUID.randomUUID().toString();
+            tx.update("INSERT INTO measurement (id, project_id, kind, measured_at, cell_temperature, cell_pressure,"
+                    + " operator_id, row_version) VALUES (?, ?, ?, ?, ?, ?, ?, 0)", id, projectId, kind, time,
+                    cellTemperature, cellPressure, actor.userId());
+            Map<String, Object> fields = new LinkedHashMap<>();
+            fields.put("project", projectId);
+            fields.put("kind", kind.getName());
+            fields.put("time", time);
+            fields.put("cellTemperature", cellTemperature);
+            fields.put("cellPressure", cellPressure);
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement", id)
+                    .newValue(AuditValues.canonical(fields)).build());
+            return id;
+        });
+    }
+
+    private static ProjectInfo load(Tx tx, String projectId) throws SQLException {
+        return tx.queryOne("SELECT id, client_id, code, name, row_version FROM project WHERE id = ?",
+                JdbcProjectService::map, projectId).orElseThrow(() -> new NoSuchObjectException("project", projectId));
+    }
+
+    private static ProjectInfo map(ResultSet rs) throws SQLException {
+        return new ProjectInfo(rs.getString("id"), rs.getString("client_id"), rs.getString("code"),
+                rs.getString("name"), rs.getLong("row_version"));
+    }
+
+    private static String values(ProjectInfo p) {
+        return AuditValues.canonical(Map.of("client", p.clientId(), "code", p.code(), "name", p.name()));
+    }
+}

@@ -1,0 +1,120 @@
+package org.tracegas.store.internal;
+
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.Instant;
+import java.util.EnumSet;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.UUID;
+import java.util.stream.Collectors;
+
+import org.tracegas.audit.AuditAction;
+import org.tracegas.audit.AuditEntry;
+import org.tracegas.audit.AuditValues;
+import org.tracegas.model.AccessLevel;
+import org.tracegas.model.ResultFlag;
+import org.tracegas.store.NewResult;
+import org.tracegas.store.ResultInfo;
+import org.tracegas.store.ResultService;
+import org.tracegas.store.Session;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.VersionKind;
+
+final class JdbcResultService implements ResultService {
+
+    private final Transactions transactions;
+
+    JdbcResultService(Transactions transactions) {
+        this.transactions = transactions;
+    }
+
+    @Override
+    public ResultInfo record(Session actor, String projectId, NewResult result) {
+        if (result == null) {
+            throw new IllegalArgumentException("result must not be null");
+        }
+        return transactions.run("recording a " + result.compound() + " result in project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
+            requireKind(JdbcVersionService.load(tx, result.methodVersionId()), VersionKind.METHOD,
+                    "methodVersionId");
+            requireKind(JdbcVersionService.load(tx, result.libraryVersionId()), VersionKind.LIBRARY,
+                    "libraryVersionId");
+            if (result.measurementId() != null && tx.queryOne("SELECT 1 FROM measurement WHERE id = ? AND project_id = ?",
+                    rs -> 1, result.measurementId(), projectId).isEmpty()) {
+                throw new IllegalArgumentException("measurementId " + result.measurementId()
+                        + " is not a measurement of project " + projectId);
+            }
+            JdbcVersionService.freeze(tx, result.methodVersionId());
+            JdbcVersionService.freeze(tx, result.libraryVersionId());
+            ResultInfo stored = new ResultInfo(UUID.randomUUID().toString(), projectId, result, actor.userId(),
+                    Instant.now().truncatedTo(java.time.temporal.ChronoUnit.MICROS));
+            tx.update("INSERT INTO analysis_result (id, project_id, measurement_id, compound, concentration,"
+                    + " uncertainty, detection_limit, unit, flags, method_version_id, library_version_id,"
+                    + " software_version, input_hash, recorded_by, recorded_at, row_version)"
+                    + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 0)", stored.id(), projectId,
+                    result.measurementId(), result.compound(), result.concentration(), result.uncertainty(),
+                    result.detectionLimit(), result.unit(), formatFlags(result), result.methodVersionId(),
+                    result.libraryVersionId(), result.softwareVersion(), result.inputHash(), actor.userId(),
+                    stored.recorded());
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "result", stored.id())
+                    .newValue(values(stored)).build());
+            return stored;
+        });
+    }
+
+    @Override
+    public List<ResultInfo> results(Session actor, String projectId) {
+        return transactions.run("reading the results of project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+            return tx.queryList("SELECT * FROM analysis_result WHERE project_id = ? ORDER BY recorded_at, id",
+                    JdbcResultService::map, projectId);
+        });
+    }
+
+    private static void requireKind(VersionInfo version, VersionKind expected, String field) {
+        if (version.kind() != expected) {
+            throw new IllegalArgumentException(field + " " + version.id() + " is a " + version.kind()
+                    + " version, not a " + expected + " version");
+        }
+    }
+
+    private static String formatFlags(NewResult r) {
+        return r.flags().isEmpty() ? ""
+                : EnumSet.copyOf(r.flags()).stream().map(ResultFlag::getName).collect(Collectors.joining(","));
+    }
+
+    private static ResultInfo map(ResultSet rs) throws SQLException {
+        EnumSet<ResultFlag> flags = EnumSet.noneOf(ResultFlag.class);
+        for (String name : rs.getString("flags").split(",")) {
+            if (!name.isEmpty()) {
+                flags.add(ResultFlag.valueOf(name));
+            }
+        }
+        NewResult values = new NewResult(rs.getString("measurement_id"), rs.getString("compound"),
+                rs.getDouble("concentration"), rs.getDouble("uncertainty"), rs.getDouble("detection_limit"),
+                rs.getString("unit"), flags, rs.getString("method_version_id"), rs.getString("library_version_id"),
+                rs.getString("software_version"), rs.getString("input_hash"));
+        return new ResultInfo(rs.getString("id"), rs.getString("project_id"), values, rs.getString("recorded_by"),
+                Tx.instant(rs, "recorded_at"));
+    }
+
+    private static String values(ResultInfo r) {
+        NewResult v = r.values();
+        Map<String, Object> fields = new LinkedHashMap<>();
+        fields.put("project", r.projectId());
+        fields.put("measurement", v.measurementId());
+        fields.put("compound", v.compound());
+        fields.put("concentration", v.concentration());
+        fields.put("uncertainty", v.uncertainty());
+        fields.put("detectionLimit", v.detectionLimit());
+        fields.put("unit", v.unit());
+        fields.put("flags", formatFlags(v));
+        fields.put("methodVersion", v.methodVersionId());
+        fields.put("libraryVersion", v.libraryVersionId());
+        fields.put("softwareVersion", v.softwareVersion());
+        fields.put("inputHash", v.inputHash());
+        return AuditValues.canonical(fields);
+    }
+}

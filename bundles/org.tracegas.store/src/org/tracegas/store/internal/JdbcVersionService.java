@@ -1,0 +1,159 @@
+package org.tracegas.store.internal;
+
+import java.nio.charset.StandardCharsets;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.LinkedHashMap;
+import java.util.Map;
+import java.util.UUID;
+
+import org.tracegas.audit.AuditAction;
+import org.tracegas.audit.AuditEntry;
+import org.tracegas.audit.AuditValues;
+import org.tracegas.model.Role;
+import org.tracegas.store.FrozenVersionException;
+import org.tracegas.store.NoSuchObjectException;
+import org.tracegas.store.Session;
+import org.tracegas.store.VersionDiff;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.VersionKind;
+import org.tracegas.store.VersionService;
+
+final class JdbcVersionService implements VersionService {
+
+    private static final String SELECT = "SELECT v.id, i.kind, v.item_id, i.name, v.number, v.parent_id, v.author_id,"
+            + " v.reason, v.created_at, v.content_hash, v.frozen, v.row_version"
+            + " FROM content_version v JOIN versioned_item i ON i.id = v.item_id WHERE v.id = ?";
+
+    private static final Role[] EDITORS = {Role.ANALYST, Role.QUALITY_MANAGER};
+
+    private final Transactions transactions;
+
+    JdbcVersionService(Transactions transactions) {
+        this.transactions = transactions;
+    }
+
+    @Override
+    public VersionInfo create(Session actor, VersionKind kind, String name, String content, String reason) {
+        if (kind == null) {
+            throw new IllegalArgumentException("kind must not be null");
+        }
+        JdbcUserService.requireText("name", name);
+        requireContent(content, reason);
+        return transactions.run("creating " + kind + " " + name, tx -> {
+            Guard.requireRole(tx, actor, "create a " + kind.name().toLowerCase(), EDITORS);
+            String itemId = UUID.randomUUID().toString();
+            tx.update("INSERT INTO versioned_item (id, kind, name) VALUES (?, ?, ?)", itemId, kind, name);
+            return insertVersion(tx, actor, itemId, 1, null, content, reason);
+        });
+    }
+
+    @Override
+    public VersionInfo revise(Session actor, String parentVersionId, String content, String reason) {
+        requireContent(content, reason);
+        return transactions.run("revising version " + parentVersionId, tx -> {
+            VersionInfo parent = load(tx, parentVersionId);
+            Guard.requireRole(tx, actor, "revise a " + parent.kind().name().toLowerCase(), EDITORS);
+            int number = tx.queryOne("SELECT MAX(number) FROM content_version WHERE item_id = ?", rs -> rs.getInt(1),
+                    parent.itemId()).orElseThrow() + 1;
+            return insertVersion(tx, actor, parent.itemId(), number, parent.id(), content, reason);
+        });
+    }
+
+    @Override
+    public VersionInfo updateDraft(Session actor, String versionId, long expectedVersion, String content,
+            String reason) {
+        requireContent(content, reason);
+        return transactions.run("changing draft version " + versionId, tx -> {
+            VersionInfo before = load(tx, versionId);
+            Guard.requireRole(tx, actor, "change a " + before.kind().name().toLowerCase(), EDITORS);
+            if (before.frozen()) {
+                throw new FrozenVersionException(versionId, before.number());
+            }
+            String oldContent = contentOf(tx, versionId);
+            RowVersions.update(tx, "content_version", objectType(before.kind()), versionId, expectedVersion,
+                    "content = ?, content_hash = ?, reason = ?, author_id = ?", content, hash(content), reason,
+                    actor.userId());
+            VersionInfo after = load(tx, versionId);
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, objectType(after.kind()), versionId)
+                    .version(after.rowVersion()).oldValue(oldContent).newValue(content).reason(reason).build());
+            return after;
+        });
+    }
+
+    @Override
+    public VersionInfo version(String versionId) {
+        return transactions.run("reading version " + versionId, tx -> load(tx, versionId));
+    }
+
+    @Override
+    public String content(String versionId) {
+        return transactions.run("reading version " + versionId, tx -> contentOf(tx, versionId));
+    }
+
+    @Override
+    public VersionDiff diff(String olderVersionId, String newerVersionId) {
+        return transactions.run("comparing versions", tx -> VersionDiff.of(olderVersionId,
+                contentOf(tx, olderVersionId), newerVersionId, contentOf(tx, newerVersionId)));
+    }
+
+    /** Marks a version as used by a result; from then on it cannot change. */
+    static void freeze(Tx tx, String versionId) throws SQLException {
+        // bumping row_version makes a concurrent draft edit fail instead of changing a used version
+        tx.update("UPDATE content_version SET frozen = TRUE, row_version = row_version + 1"
+                + " WHERE id = ? AND frozen = FALSE", versionId);
+    }
+
+    static VersionInfo load(Tx tx, String versionId) throws SQLException {
+        return tx.queryOne(SELECT, JdbcVersionService::map, versionId)
+                .orElseThrow(() -> new NoSuchObjectException("method or library version", versionId));
+    }
+
+    private static VersionInfo insertVersion(Tx tx, Session actor, String itemId, int number, String parentId,
+            String content, String reason) throws SQLException {
+        String id = UUID.randomUUID().toString();
+        tx.update("INSERT INTO content_version (id, item_id, number, parent_id, author_id, reason, created_at,"
+                + " content, content_hash, frozen, row_version) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, FALSE, 0)", id,
+                itemId, number, parentId, actor.userId(), reason, Instant.now().truncatedTo(ChronoUnit.MICROS), content, hash(content));
+        VersionInfo created = load(tx, id);
+        Map<String, Object> fields = new LinkedHashMap<>();
+        fields.put("item", itemId);
+        fields.put("number", number);
+        fields.put("parent", parentId);
+        fields.put("contentHash", created.contentHash());
+        tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, objectType(created.kind()), id)
+                .newValue(AuditValues.canonical(fields) + content).reason(reason).build());
+        return created;
+    }
+
+    private static String contentOf(Tx tx, String versionId) throws SQLException {
+        return tx.queryOne("SELECT content FROM content_version WHERE id = ?", rs -> rs.getString(1), versionId)
+                .orElseThrow(() -> new NoSuchObjectException("method or library version", versionId));
+    }
+
+    private static VersionInfo map(ResultSet rs) throws SQLException {
+        String parent = rs.getString("parent_id");
+        return new VersionInfo(rs.getString("id"), VersionKind.valueOf(rs.getString("kind")), rs.getString("item_id"),
+                rs.getString("name"), rs.getInt("number"), parent, rs.getString("author_id"), rs.getString("reason"),
+                Tx.instant(rs, "created_at"), rs.getString("content_hash"), rs.getBoolean("frozen"),
+                rs.getLong("row_version"));
+    }
+
+    static String objectType(VersionKind kind) {
+        return kind == VersionKind.METHOD ? "method-version" : "library-version";
+    }
+
+    /** SHA-256 of the canonical content as UTF-8. */
+    static String hash(String content) {
+        return SpectrumCodec.sha256Hex(content.getBytes(StandardCharsets.UTF_8));
+    }
+
+    private static void requireContent(String content, String reason) {
+        if (content == null) {
+            throw new IllegalArgumentException("content must not be null");
+        }
+        JdbcUserService.requireText("reason", reason);
+    }
+}

@@ -1,0 +1,125 @@
+package org.tracegas.store.internal;
+
+import java.nio.file.Path;
+import java.sql.Connection;
+import java.sql.SQLException;
+import java.sql.Statement;
+
+import javax.sql.DataSource;
+
+import org.h2.jdbcx.JdbcDataSource;
+import org.postgresql.ds.PGSimpleDataSource;
+import org.tracegas.audit.AuditSchema;
+import org.tracegas.store.ProjectService;
+import org.tracegas.store.ResultService;
+import org.tracegas.store.SpectrumService;
+import org.tracegas.store.StoreException;
+import org.tracegas.store.UserService;
+import org.tracegas.store.VersionService;
+import org.tracegas.store.WorkspaceStore;
+
+/**
+ * The workspace store on one database. Opening migrates the schema and installs the audit tables.
+ * Data sources are created directly: inside OSGi, DriverManager does not see the drivers' bundles.
+ */
+public final class JdbcWorkspaceStore implements WorkspaceStore {
+
+    /** Consecutive failed log-ins that lock an account. */
+    public static final int DEFAULT_MAX_FAILED_LOGINS = 5;
+
+    private final DataSource dataSource;
+    private final boolean embedded;
+    private final UserService users;
+    private final ProjectService projects;
+    private final SpectrumService spectra;
+    private final VersionService versions;
+    private final ResultService results;
+
+    private JdbcWorkspaceStore(DataSource dataSource, boolean embedded, int maxFailedLogins) {
+        this.dataSource = dataSource;
+        this.embedded = embedded;
+        Transactions transactions = new Transactions(dataSource);
+        users = new JdbcUserService(transactions, maxFailedLogins);
+        projects = new JdbcProjectService(transactions);
+        spectra = new JdbcSpectrumService(transactions);
+        versions = new JdbcVersionService(transactions);
+        results = new JdbcResultService(transactions);
+    }
+
+    /** An embedded H2 database in {@code folder} (created when missing), file {@code workspace.mv.db}. */
+    public static JdbcWorkspaceStore openH2(Path folder, int maxFailedLogins) {
+        if (folder == null) {
+            throw new IllegalArgumentException("folder must not be null");
+        }
+        JdbcDataSource ds = new JdbcDataSource();
+        // DB_CLOSE_DELAY=-1 keeps the database open between the per-operation connections until close();
+        // LAZY_QUERY_EXECUTION lets a streamed query read rows on demand instead of building the result first;
+        // LOCK_TIMEOUT covers the longest audited transaction waiting for the audit chain head.
+        ds.setURL("jdbc:h2:file:" + folder.toAbsolutePath().resolve("workspace")
+                + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000");
+        return open(ds, true, maxFailedLogins);
+    }
+
+    /** A PostgreSQL database; the URL may name the schema with {@code currentSchema=}. */
+    public static JdbcWorkspaceStore openPostgres(String url, String user, String password, int maxFailedLogins) {
+        if (url == null || !url.startsWith("jdbc:postgresql:")) {
+            throw new IllegalArgumentException("url must be a jdbc:postgresql: URL, was " + url);
+        }
+        PGSimpleDataSource ds = new PGSimpleDataSource();
+        ds.setURL(url);
+        ds.setUser(user);
+        ds.setPassword(password);
+        return open(ds, false, maxFailedLogins);
+    }
+
+    private static JdbcWorkspaceStore open(DataSource ds, boolean embedded, int maxFailedLogins) {
+        JdbcWorkspaceStore store = new JdbcWorkspaceStore(ds, embedded, maxFailedLogins);
+        try {
+            Migrations.migrate(ds);
+            try (Connection c = ds.getConnection()) {
+                AuditSchema.install(c);
+            }
+        } catch (SQLException | RuntimeException e) {
+            store.close();
+            throw new StoreException("opening the workspace store failed: " + e.getMessage(), e);
+        }
+        return store;
+    }
+
+    @Override
+    public UserService users() {
+        return users;
+    }
+
+    @Override
+    public ProjectService projects() {
+        return projects;
+    }
+
+    @Override
+    public SpectrumService spectra() {
+        return spectra;
+    }
+
+    @Override
+    public VersionService versions() {
+        return versions;
+    }
+
+    @Override
+    public ResultService results() {
+        return results;
+    }
+
+    @Override
+    public void close() {
+        if (!embedded) {
+            return; // connections are per operation; nothing stays open
+        }
+        try (Connection c = dataSource.getConnection(); Statement s = c.createStatement()) {
+            s.execute("SHUTDOWN");
+        } catch (SQLException e) {
+            throw new StoreException("closing the workspace database failed: " + e.getMessage(), e);
+        }
+    }
+}

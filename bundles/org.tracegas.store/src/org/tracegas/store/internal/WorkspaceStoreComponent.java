@@ -1,0 +1,79 @@
+package org.tracegas.store.internal;
+
+import java.nio.file.Path;
+import java.util.Map;
+
+import org.tracegas.store.ProjectService;
+import org.tracegas.store.ResultService;
+import org.tracegas.store.SpectrumService;
+import org.tracegas.store.UserService;
+import org.tracegas.store.VersionService;
+import org.tracegas.store.WorkspaceStore;
+
+/**
+ * Declarative Services component (OSGI-INF/org.tracegas.store.workspace.xml) that provides the
+ * {@link WorkspaceStore}. Configuration (PID org.tracegas.store.workspace): {@code url}, {@code user},
+ * {@code password} for a PostgreSQL server; otherwise {@code folder} for the embedded H2 database
+ * (default: {@code tracegas-workspace} in the user's home); {@code maxFailedLogins} (default 5).
+ */
+public final class WorkspaceStoreComponent implements WorkspaceStore {
+
+    private JdbcWorkspaceStore store;
+
+    void activate(Map<String, ?> properties) {
+        int maxFailed = properties.get("maxFailedLogins") == null ? JdbcWorkspaceStore.DEFAULT_MAX_FAILED_LOGINS
+                : Integer.parseInt(String.valueOf(properties.get("maxFailedLogins")));
+        Object url = properties.get("url");
+        if (url != null) {
+            store = JdbcWorkspaceStore.openPostgres(url.toString(), text(properties, "user"),
+                    text(properties, "password"), maxFailed);
+        } else {
+            Object folder = properties.get("folder");
+            store = JdbcWorkspaceStore.openH2(folder != null ? Path.of(folder.toString())
+                    : Path.of(System.getProperty("user.home"), "tracegas-workspace"), maxFailed);
+        }
+    }
+
+    void deactivate() {
+        if (store != null) {
+            store.close();
+            store = null;
+        }
+    }
+
+    private static String text(Map<String, ?> properties, String key) {
+        Object value = properties.get(key);
+        return value == null ? null : value.toString();
+    }
+
+    @Override
+    public UserService users() {
+        return store.users();
+    }
+
+    @Override
+    public ProjectService projects() {
+        return store.projects();
+    }
+
+    @Override
+    public SpectrumService spectra() {
+        return store.spectra();
+    }
+
+    @Override
+    public VersionService versions() {
+        return store.versions();
+    }
+
+    @Override
+    public ResultService results() {
+        return store.results();
+    }
+
+    /** The framework closes the store through {@link #deactivate()}; clients must not. */
+    @Override
+    public void close() {
+        throw new UnsupportedOperationException("the workspace store service is closed by the framework");
+    }
+}
