@@ -26,7 +26,7 @@ class HitranLineListReaderTest {
      */
     @Test
     void readsEveryFieldFromItsColumns() throws IOException {
-        String record = " 51 2143.271100 4.123E-19 1.250E+01.0712 .081  11.5350 .72-.002500";
+        String record = " 51 2143.271100 4.123E-19 1.250E+01.0712 .081   11.5350 .72-.002500";
         record += " ".repeat(160 - record.length());
         Path file = write("one.par", record);
         SpectralLine l = new HitranLineListReader().read(file).get(0);
