@@ -35,9 +35,19 @@ public final class Absorptivity {
                 k[j] = absorbance[i][j] / amounts[i];
             }
             value[i] = new Resampler(axes[i], k);
-            slope[i] = new Resampler(axes[i], Resampler.derivative(axes[i], k, 1));
-            curvature[i] = new Resampler(axes[i], Resampler.derivative(axes[i], k, 2));
+            slope[i] = new Resampler(axes[i], derivative(axes[i], k, 1));
+            curvature[i] = new Resampler(axes[i], derivative(axes[i], k, 2));
         }
+    }
+
+    private static double[] derivative(double[] axis, double[] k, int order) {
+        double step = axis[1] - axis[0];
+        for (int i = 2; i < axis.length; i++) {
+            if (Math.abs(axis[i] - axis[i - 1] - step) > 1e-9 * Math.abs(step)) {
+                return Resampler.derivative(axis, k, order);
+            }
+        }
+        return BandLimitedDerivative.of(k, step, order);
     }
 
     public String compound() {
