@@ -45,6 +45,10 @@ public final class PdfReportWriter {
 
     private static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'", Locale.ROOT)
             .withZone(ZoneOffset.UTC);
+    private static final DateTimeFormatter TABLE_TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm", Locale.ROOT)
+            .withZone(ZoneOffset.UTC);
+    private static final float PLOT_HEIGHT = 230;
+    private static final float RESIDUAL_HEIGHT = 130;
     private static final Set<String> ALARMS = Set.of("FAIL", "EXCEEDED");
 
     /** The report as PDF bytes. */
@@ -114,7 +118,7 @@ public final class PdfReportWriter {
 
     private static void campaign(PageWriter pw, ReportContent content) {
         Campaign c = content.campaign();
-        pw.heading("1  Campaign");
+        pw.heading("1  Campaign", 120);
         List<String[]> rows = new ArrayList<>();
         rows.add(new String[] {"Report", c.reportId()});
         rows.add(new String[] {"Client", c.client()});
@@ -128,7 +132,7 @@ public final class PdfReportWriter {
     }
 
     private static void cautions(PageWriter pw, ReportContent content) {
-        pw.heading("2  Cautions");
+        pw.heading("2  Cautions", 60);
         List<String> all = new ArrayList<>(STANDARD_CAUTIONS);
         all.addAll(content.cautions());
         for (String caution : all) {
@@ -137,13 +141,13 @@ public final class PdfReportWriter {
     }
 
     private static void methods(PageWriter pw, ReportContent content) {
-        pw.heading("3  Methods and software");
+        pw.heading("3  Methods and software", 60);
         List<String[]> methodRows = new ArrayList<>();
         for (MethodVersion m : content.methods()) {
             methodRows.add(new String[] {m.name(), m.version(), m.hash()});
         }
-        new TableRenderer(List.of(new Column("Analysis method", 150, false), new Column("Version", 60, false),
-                new Column("Method hash (SHA-256)", 285, false)), 8, ALARMS).draw(pw, methodRows);
+        new TableRenderer(List.of(new Column("Analysis method", 150, false), new Column("Version", 42, false),
+                new Column("Method hash (SHA-256)", 303, false)), 8, ALARMS).draw(pw, methodRows);
         List<String[]> libRows = new ArrayList<>();
         for (LibraryVersion l : content.libraries()) {
             libRows.add(new String[] {l.name(), l.version()});
@@ -153,7 +157,7 @@ public final class PdfReportWriter {
     }
 
     private static void qa(PageWriter pw, ReportContent content) {
-        pw.heading("4  Quality assurance summary");
+        pw.heading("4  Quality assurance summary", 90);
         long failed = content.qa().stream().filter(q -> !q.passed()).count();
         pw.paragraph(content.qa().size() + " checks, " + (content.qa().size() - failed) + " passed, " + failed
                 + " failed.", 9.5f);
@@ -168,7 +172,7 @@ public final class PdfReportWriter {
     }
 
     private static void results(PageWriter pw, ReportContent content) {
-        pw.heading("5  Results");
+        pw.heading("5  Results", 110);
         pw.paragraph("Concentrations on the reporting basis (" + content.campaign().reportingBasis() + "). U is the "
                 + "expanded uncertainty with coverage factor k = 2 (JCGM 100:2008); values are rounded to the "
                 + "decimal place of U given with two significant digits.", 9f);
@@ -177,34 +181,35 @@ public final class PdfReportWriter {
             String[] vu = Numbers.withUncertainty(r.value(), r.expandedUncertainty());
             String limit = r.limit().isPresent() ? Numbers.significant(r.limit().getAsDouble()) : "-";
             String status = r.limit().isEmpty() ? "no limit" : r.exceeded() ? "EXCEEDED" : "within";
-            rows.add(new String[] {r.compound(), r.period(), TIME.format(r.periodStart()), vu[0], vu[1], r.unit(),
+            rows.add(new String[] {r.compound(), r.period(), TABLE_TIME.format(r.periodStart()), vu[0], vu[1], r.unit(),
                     String.join("; ", r.flags()), limit, status});
         }
         new TableRenderer(List.of(new Column("Compound", 52, false), new Column("Period", 38, false),
-                new Column("Period start", 78, false), new Column("Value", 48, true), new Column("U (k=2)", 42, true),
+                new Column("Period start (UTC)", 78, false), new Column("Value", 48, true), new Column("U (k=2)", 42, true),
                 new Column("Unit", 36, false), new Column("Flags", 100, false), new Column("Limit", 40, true),
                 new Column("Limit status", 61, false)), 7.5f, ALARMS).draw(pw, rows);
     }
 
     private static void timeSeries(PageWriter pw, ReportContent content) throws IOException {
-        pw.heading("6  Time series");
+        pw.heading("6  Time series", content.timeSeries().isEmpty() ? 20 : PLOT_HEIGHT);
         if (content.timeSeries().isEmpty()) {
             pw.paragraph("No time series in this report.", 9.5f);
         }
         for (Plot p : content.timeSeries()) {
-            plot(pw, p, 230);
+            plot(pw, p, PLOT_HEIGHT);
         }
     }
 
     private static void spectra(PageWriter pw, ReportContent content) throws IOException {
-        pw.heading("7  Spectra: fit and residual");
+        pw.heading("7  Spectra: fit and residual", content.spectra().isEmpty() ? 20
+                : PLOT_HEIGHT + RESIDUAL_HEIGHT + 20);
         if (content.spectra().isEmpty()) {
             pw.paragraph("No spectra in this report.", 9.5f);
         }
         for (SpectrumFit s : content.spectra()) {
-            pw.ensure(230 + 130);
-            plot(pw, s.fitPlot(), 230);
-            plot(pw, s.residualPlot(), 130);
+            pw.ensure(PLOT_HEIGHT + RESIDUAL_HEIGHT + 20);
+            plot(pw, s.fitPlot(), PLOT_HEIGHT);
+            plot(pw, s.residualPlot(), RESIDUAL_HEIGHT);
         }
     }
 
@@ -217,7 +222,7 @@ public final class PdfReportWriter {
     }
 
     private static void signatures(PageWriter pw, ReportContent content) {
-        pw.heading("8  Review and approval");
+        pw.heading("8  Review and approval", 140);
         pw.paragraph("Each signature names the signer, the time, its meaning and the SHA-256 hash of the content "
                 + "signed; a signature applies to this report only if that hash equals the content hash in section 1.",
                 9f);

@@ -1,10 +1,8 @@
 package org.tracegas.report;
 
-import java.math.BigDecimal;
-import java.util.Locale;
-
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.report.internal.Check;
+import org.tracegas.report.internal.Numbers;
 
 /**
  * One QA check as the report shows it.
@@ -29,8 +27,7 @@ public record QaLine(String check, boolean passed, String measured, String limit
     public static QaLine of(CheckOutcome outcome) {
         Check.notNull("outcome", outcome);
         String unit = outcome.unit().isEmpty() ? "" : " " + outcome.unit();
-        String measured = new BigDecimal(String.format(Locale.ROOT, "%.4g", outcome.measured())).stripTrailingZeros()
-                .toPlainString() + unit;
+        String measured = Numbers.significant(outcome.measured()) + unit;
         return new QaLine(outcome.check(), outcome.passed(), measured, outcome.limits().describe() + unit,
                 outcome.rule().statement(), outcome.rule().source());
     }

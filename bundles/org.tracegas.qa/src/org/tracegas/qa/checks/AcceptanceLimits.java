@@ -1,7 +1,6 @@
 package org.tracegas.qa.checks;
 
-import java.math.BigDecimal;
-import java.util.Locale;
+import org.tracegas.qa.internal.Format;
 
 /** Closed acceptance interval [lower, upper]; an infinite bound means no limit on that side. */
 public record AcceptanceLimits(double lower, double upper) {
@@ -42,7 +41,6 @@ public record AcceptanceLimits(double lower, double upper) {
     }
 
     private static String format(double v) {
-        // four significant digits without trailing zeros: 70, 9.5, 0.0025
-        return new BigDecimal(String.format(Locale.ROOT, "%.4g", v)).stripTrailingZeros().toPlainString();
+        return Format.number(v);
     }
 }

@@ -1,7 +1,6 @@
 package org.tracegas.qa.checks;
 
-import java.util.Locale;
-
+import org.tracegas.qa.internal.Format;
 import org.tracegas.qa.internal.Require;
 
 /**
@@ -34,7 +33,7 @@ public record CheckOutcome(String check, boolean passed, double measured, String
 
     /** One line for a report, for example "CTS drift: 1.2 % (limits <= 5) pass". */
     public String summary() {
-        return String.format(Locale.ROOT, "%s: %.4g %s (limits %s) %s", check, measured, unit, limits.describe(),
-                passed ? "pass" : "FAIL");
+        return check + ": " + Format.number(measured) + " " + unit + " (limits " + limits.describe() + ") "
+                + (passed ? "pass" : "FAIL");
     }
 }

@@ -1,7 +1,6 @@
 package org.tracegas.qa.checks;
 
-import java.util.Locale;
-
+import org.tracegas.qa.internal.Format;
 import org.tracegas.qa.internal.Require;
 
 /** Agreement of the CTS checks before and after a test: each must lie within a tolerance of their mean. */
@@ -31,8 +30,8 @@ public final class CtsDriftCheck {
      */
     public CheckOutcome evaluate(double pre, double post) {
         double deviation = deviationFromMeanPercent(pre, post);
-        Rule rule = new Rule(String.format(Locale.ROOT,
-                "Pre- and post-test CTS results each within %.3g %% of their mean", tolerancePercent),
+        Rule rule = new Rule("Pre- and post-test CTS results each within " + Format.number(tolerancePercent)
+                + " % of their mean",
                 "EPA Method 320 section 8.11.3 (not confirmed against the official text)");
         return CheckOutcome.judge("CTS drift", deviation, "%", AcceptanceLimits.atMost(tolerancePercent), rule);
     }

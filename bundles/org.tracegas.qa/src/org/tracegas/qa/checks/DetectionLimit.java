@@ -1,7 +1,6 @@
 package org.tracegas.qa.checks;
 
-import java.util.Locale;
-
+import org.tracegas.qa.internal.Format;
 import org.tracegas.qa.internal.Require;
 import org.tracegas.qa.internal.Stats;
 
@@ -43,7 +42,7 @@ public record DetectionLimit(String analyte, double ppm, String basis) {
     /** Judges the limit against the detection limit the test plan requires. */
     public CheckOutcome check(double requiredPpm) {
         Require.positive("requiredPpm", requiredPpm);
-        Rule rule = new Rule(String.format(Locale.ROOT, "Detection limit (%s) at most %.4g ppm", basis, requiredPpm),
+        Rule rule = new Rule("Detection limit (" + basis + ") at most " + Format.number(requiredPpm) + " ppm",
                 "3-sigma convention: common practice, no source; required value: test plan "
                         + "(ASTM D6348 introduction: the tester sets detection limits)");
         return CheckOutcome.judge("Detection limit " + analyte, ppm, "ppm", AcceptanceLimits.atMost(requiredPpm),

@@ -1,7 +1,6 @@
 package org.tracegas.qa.checks;
 
-import java.util.Locale;
-
+import org.tracegas.qa.internal.Format;
 import org.tracegas.qa.internal.Require;
 
 /**
@@ -43,10 +42,9 @@ public final class PathLengthCheck {
 
     public CheckOutcome evaluate(CtsBand measured, CtsBand reference, double referencePathM) {
         double path = effectivePath(measured, reference, referencePathM);
-        Rule rule = new Rule(String.format(Locale.ROOT,
-                "Effective path from the CTS band, L_s = L_r(A_s/A_r)(C_r/C_s)(T_s/T_r)(p_r/p_s), within "
-                        + "%.3g %% of the nominal %.4g m",
-                tolerancePercent, nominalPathM),
+        Rule rule = new Rule("Effective path from the CTS band, L_s = L_r(A_s/A_r)(C_r/C_s)(T_s/T_r)(p_r/p_s), "
+                + "within " + Format.number(tolerancePercent) + " % of the nominal " + Format.number(nominalPathM)
+                + " m",
                 "formula: EPA Method 320 section 10.2 (not confirmed against the official text); tolerance: "
                         + "common practice, no source");
         return CheckOutcome.judge("CTS path length", path, "m",

@@ -1,7 +1,6 @@
 package org.tracegas.qa.checks;
 
-import java.util.Locale;
-
+import org.tracegas.qa.internal.Format;
 import org.tracegas.qa.internal.Require;
 
 /**
@@ -25,7 +24,7 @@ public final class ZeroSpanCheck {
     public CheckOutcome zero(String analyte, double readingPpm) {
         Require.text("analyte", analyte);
         Require.finite("readingPpm", readingPpm);
-        Rule rule = new Rule(String.format(Locale.ROOT, "Zero reading within ±%.4g ppm of 0", zeroLimitPpm), SOURCE);
+        Rule rule = new Rule("Zero reading within ±" + Format.number(zeroLimitPpm) + " ppm of 0", SOURCE);
         return CheckOutcome.judge("Zero " + analyte, readingPpm, "ppm",
                 new AcceptanceLimits(-zeroLimitPpm, zeroLimitPpm), rule);
     }
@@ -36,9 +35,8 @@ public final class ZeroSpanCheck {
         Require.finite("readingPpm", readingPpm);
         Require.positive("referencePpm", referencePpm);
         double drift = (readingPpm - referencePpm) / referencePpm * 100.0;
-        Rule rule = new Rule(String.format(Locale.ROOT,
-                "Span reading within ±%.3g %% of the span gas value %.4g ppm", spanLimitPercent, referencePpm),
-                SOURCE);
+        Rule rule = new Rule("Span reading within ±" + Format.number(spanLimitPercent) + " % of the span gas value "
+                + Format.number(referencePpm) + " ppm", SOURCE);
         return CheckOutcome.judge("Span " + analyte, drift, "%",
                 new AcceptanceLimits(-spanLimitPercent, spanLimitPercent), rule);
     }

@@ -4,7 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 
 /**
- * Axis range and ticks at 1, 2 or 5 times a power of ten, widened to whole ticks around the data.
+ * Axis range and ticks at 1, 2 or 5 times a power of ten. A covering scale widens the range to whole
+ * ticks around the data; a tight scale keeps the data range and puts the ticks inside it.
  */
 public final class AxisScale {
 
@@ -34,6 +35,12 @@ public final class AxisScale {
         return new AxisScale(lo, hi, step);
     }
 
+    /** A scale over exactly [min, max] with ticks at the multiples of a nice step inside it. */
+    public static AxisScale tight(double min, double max, int targetTicks) {
+        AxisScale covering = covering(min, max, targetTicks);
+        return min == max ? covering : new AxisScale(min, max, covering.step);
+    }
+
     static double niceStep(double raw) {
         double exp = Math.floor(Math.log10(raw));
         double base = Math.pow(10, exp);
@@ -54,13 +61,13 @@ public final class AxisScale {
         return step;
     }
 
-    /** Tick values from low to high. */
+    /** Multiples of the step from low to high. */
     public List<Double> ticks() {
         List<Double> t = new ArrayList<>();
-        long n = Math.round((high - low) / step);
-        for (long i = 0; i <= n; i++) {
-            double v = low + i * step;
-            t.add(Math.abs(v) < step * 1e-9 ? 0.0 : v);
+        long first = (long) Math.ceil(low / step - 1e-9);
+        long last = (long) Math.floor(high / step + 1e-9);
+        for (long i = first; i <= last; i++) {
+            t.add(i == 0 ? 0.0 : i * step);
         }
         return t;
     }

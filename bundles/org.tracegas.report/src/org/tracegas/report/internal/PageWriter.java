@@ -93,8 +93,11 @@ public final class PageWriter implements Closeable {
         y -= distance;
     }
 
-    public void heading(String text) {
-        ensure(60);
+    /**
+     * A section heading, kept on one page with the given height of what follows it.
+     */
+    public void heading(String text, float keepWithNext) {
+        ensure(40 + keepWithNext);
         if (!atPageTop()) {
             down(10);
         }

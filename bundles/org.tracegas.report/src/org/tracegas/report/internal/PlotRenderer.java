@@ -40,7 +40,7 @@ public final class PlotRenderer {
         float pw = w - LEFT - RIGHT;
         float ph = h - BOTTOM - TOP;
         double[] range = range(plot);
-        AxisScale xs = AxisScale.covering(range[0], range[1], Math.max(3, (int) (pw / 70)));
+        AxisScale xs = AxisScale.tight(range[0], range[1], Math.max(3, (int) (pw / 70)));
         AxisScale ys = AxisScale.covering(range[2], range[3], Math.max(3, (int) (ph / 35)));
 
         text(cs, bold, 9, x, y + h - 10, plot.title());
