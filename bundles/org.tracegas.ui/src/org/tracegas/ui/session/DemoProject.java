@@ -1,0 +1,208 @@
+package org.tracegas.ui.session;
+
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Random;
+import java.util.Set;
+
+import org.tracegas.library.Compound;
+import org.tracegas.library.Origin;
+import org.tracegas.library.OriginKind;
+import org.tracegas.library.ReferenceConditions;
+import org.tracegas.library.ReferenceMetadata;
+import org.tracegas.model.AccessLevel;
+import org.tracegas.model.AnalysisMethod;
+import org.tracegas.model.Client;
+import org.tracegas.model.Measurement;
+import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.MethodVersion;
+import org.tracegas.model.Project;
+import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.Role;
+import org.tracegas.model.Workspace;
+import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.quantify.Analyte;
+import org.tracegas.quantify.AnalysisRegion;
+import org.tracegas.quantify.QuantificationMethod;
+import org.tracegas.quantify.ReferenceSpectrum;
+import org.tracegas.spectrum.AxisUnit;
+import org.tracegas.spectrum.Ordinate;
+import org.tracegas.spectrum.SpectralAxis;
+import org.tracegas.spectrum.Spectrum;
+import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.VersionKind;
+import org.tracegas.store.WorkspaceStore;
+
+/**
+ * The demo project a fresh workspace is seeded with: a client, a kiln stack campaign with three sample
+ * measurements, an analyst and a quality manager, a library of invented (synthetic) band shapes and a CO /
+ * N2O method. The band shapes are sums of Lorentz lines around invented band centres; they are for trying
+ * the desk out and are marked synthetic everywhere.
+ */
+public final class DemoProject {
+
+    public static final String ANALYST = "avogel";
+    public static final String MANAGER = "qmorel";
+    /** Demo password of all demo users (the demo is not for production data). */
+    public static final String PASSWORD = "demo-desk-2026";
+    public static final String PROJECT_CODE = "HLW-26-03";
+
+    static final SpectralAxis AXIS = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1950, 0.5, 701);
+    static final double PATH_METRES = 5.0;
+
+    /** Ids of what was seeded, the model tree for the navigator and the method for runs. */
+    public record Seeded(Workspace model, String projectId, List<String> measurementIds, String methodVersionId,
+            String libraryVersionId, QuantificationMethod method, List<org.tracegas.library.ReferenceSpectrum> library,
+            List<Spectrum> samples) {
+    }
+
+    private DemoProject() {
+    }
+
+    /** Seeds an empty workspace store. */
+    public static Seeded seed(WorkspaceStore store) {
+        Session admin = store.users().createFirstAdministrator("admin", "Workspace administrator",
+                PASSWORD.toCharArray());
+        String analystId = store.users().createUser(admin, ANALYST, "Anna Vogel", Set.of(Role.ANALYST),
+                PASSWORD.toCharArray()).id();
+        String managerId = store.users().createUser(admin, MANAGER, "Quentin Morel",
+                EnumSet.of(Role.QUALITY_MANAGER, Role.REVIEWER), PASSWORD.toCharArray()).id();
+        String clientId = store.projects().createClient(admin, "Harbour Lime Works");
+        ProjectInfo project = store.projects().createProject(admin, clientId, PROJECT_CODE,
+                "Kiln stack, March campaign");
+        store.projects().grant(admin, project.id(), analystId, AccessLevel.WRITE);
+        store.projects().grant(admin, project.id(), managerId, AccessLevel.READ);
+        Session analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
+        Instant start = Instant.parse("2026-03-10T08:00:00Z");
+        List<String> measurements = new ArrayList<>();
+        for (int i = 0; i < 3; i++) {
+            measurements.add(store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE,
+                    start.plusSeconds(60L * i), 453.15, 1013.0));
+        }
+        List<ReferenceSpectrum> refs = references();
+        QuantificationMethod method = method(refs);
+        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Demo band shapes",
+                "origin=synthetic\ncompounds=CO,N2O,H2O\n", "demo library");
+        VersionInfo methodVersion = store.versions().create(analyst, VersionKind.METHOD, method.name(),
+                method.canonicalText(), "demo method");
+        List<Spectrum> samples = new ArrayList<>();
+        for (int i = 0; i < measurements.size(); i++) {
+            samples.add(sample(refs, 40 + 15 * i, 8 + 2 * i, 9000, 11 + i));
+        }
+        Workspace model = model(project, measurements, start, method, methodVersion, library);
+        return new Seeded(model, project.id(), List.copyOf(measurements), methodVersion.id(), library.id(), method,
+                libraryEntries(refs), List.copyOf(samples));
+    }
+
+    /** Invented band shapes at 100 ppm·m each. */
+    static List<ReferenceSpectrum> references() {
+        return List.of(new ReferenceSpectrum("CO", band(2143, 3.8, 12, 0.004), 100),
+                new ReferenceSpectrum("N2O", band(2224, 0.85, 10, 0.006), 100),
+                new ReferenceSpectrum("H2O", band(2060, 6.5, 5, 0.00002), 100));
+    }
+
+    /** P and R branch lines of a rotational band around {@code centre}, line spacing {@code spacing}. */
+    private static Spectrum band(double centre, double spacing, int lines, double peak) {
+        double[] v = new double[AXIS.size()];
+        double halfWidth = 0.35;
+        for (int j = 1; j <= lines; j++) {
+            double envelope = j * Math.exp(-j * j / (0.3 * lines * lines));
+            for (double pos : new double[] {centre - j * spacing, centre + j * spacing}) {
+                for (int i = 0; i < v.length; i++) {
+                    double d = (AXIS.get(i) - pos) / halfWidth;
+                    v[i] += peak * envelope / (1 + d * d);
+                }
+            }
+        }
+        return new Spectrum(AXIS, v, Ordinate.ABSORBANCE);
+    }
+
+    static QuantificationMethod method(List<ReferenceSpectrum> refs) {
+        QuantificationMethod.Builder b = QuantificationMethod.builder("Kiln stack CO and N2O")
+                .pathLengthMetres(PATH_METRES)
+                .analyte(new Analyte("CO", List.of("H2O"), List.of(AnalysisRegion.of(2085, 2190, 1))))
+                .analyte(new Analyte("N2O", List.of("CO"), List.of(AnalysisRegion.of(2195, 2270, 1))));
+        refs.forEach(b::reference);
+        return b.build();
+    }
+
+    /** A sample: the references scaled to the given ppm at the method's path, a small offset and noise. */
+    static Spectrum sample(List<ReferenceSpectrum> refs, double coPpm, double n2oPpm, double h2oPpm, long seed) {
+        double[] ppm = {coPpm, n2oPpm, h2oPpm};
+        double[] v = new double[AXIS.size()];
+        Random noise = new Random(seed);
+        for (int i = 0; i < v.length; i++) {
+            v[i] = 0.002 + 2e-4 * noise.nextGaussian();
+            for (int k = 0; k < refs.size(); k++) {
+                v[i] += refs.get(k).absorbance().get(i) * ppm[k] * PATH_METRES / refs.get(k).ppmMetres();
+            }
+        }
+        return new Spectrum(AXIS, v, Ordinate.ABSORBANCE);
+    }
+
+    private static List<org.tracegas.library.ReferenceSpectrum> libraryEntries(List<ReferenceSpectrum> refs) {
+        String[][] ids = {{"630-08-0", "CO", "28.010"}, {"10024-97-2", "N2O", "44.013"}, {"7732-18-5", "H2O", "18.015"}};
+        List<org.tracegas.library.ReferenceSpectrum> out = new ArrayList<>();
+        for (int k = 0; k < refs.size(); k++) {
+            ReferenceMetadata meta = new ReferenceMetadata(
+                    new Compound(refs.get(k).compound(), ids[k][0], ids[k][1], Double.parseDouble(ids[k][2])),
+                    new ReferenceConditions(refs.get(k).ppmMetres(), 296, 101.3, 0.5, "triangular"),
+                    new Origin(OriginKind.SYNTHETIC, "invented band shape for the demo"), 0.05);
+            out.add(new org.tracegas.library.ReferenceSpectrum(refs.get(k).absorbance(), meta));
+        }
+        return List.copyOf(out);
+    }
+
+    private static Workspace model(ProjectInfo info, List<String> measurementIds, Instant start,
+            QuantificationMethod method, VersionInfo methodVersion, VersionInfo library) {
+        WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
+        Workspace w = f.createWorkspace();
+        w.setName("Demo workspace");
+        Client client = f.createClient();
+        client.setId(info.clientId());
+        client.setName("Harbour Lime Works");
+        Project p = f.createProject();
+        p.setId(info.id());
+        p.setCode(info.code());
+        p.setName(info.name());
+        for (int i = 0; i < measurementIds.size(); i++) {
+            Measurement m = f.createMeasurement();
+            m.setId(measurementIds.get(i));
+            m.setKind(MeasurementKind.SAMPLE);
+            m.setTime(start.plusSeconds(60L * i));
+            m.setCellTemperature(453.15);
+            m.setCellPressure(1013.0);
+            p.getMeasurements().add(m);
+        }
+        client.getProjects().add(p);
+        w.getClients().add(client);
+        ReferenceLibrary lib = f.createReferenceLibrary();
+        lib.setId(library.itemId());
+        lib.setName(library.name());
+        lib.setDescription("synthetic band shapes");
+        w.getLibraries().add(lib);
+        AnalysisMethod am = f.createAnalysisMethod();
+        am.setId(methodVersion.itemId());
+        am.setName(method.name());
+        MethodVersion mv = f.createMethodVersion();
+        mv.setId(methodVersion.id());
+        mv.setNumber(methodVersion.number());
+        for (Analyte a : method.analytes()) {
+            for (AnalysisRegion r : a.regions()) {
+                org.tracegas.model.AnalysisRegion region = f.createAnalysisRegion();
+                region.setCompound(a.compound());
+                region.setLowerWavenumber(r.low());
+                region.setUpperWavenumber(r.high());
+                region.getInterferents().addAll(a.interferents());
+                mv.getRegions().add(region);
+            }
+        }
+        am.getVersions().add(mv);
+        w.getMethods().add(am);
+        return w;
+    }
+}
