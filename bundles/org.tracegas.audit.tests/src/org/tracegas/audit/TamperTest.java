@@ -68,6 +68,8 @@ class TamperTest {
                 String context = t + " " + expected + " -> " + report.findings();
                 assertFalse(report.intact(), context);
                 assertTrue(report.names(expected.kind, expected.sequence), context);
+                // no false alarms elsewhere: one finding per tampered record (a swap moves two)
+                assertEquals(t == Tampering.SWAP ? 2 : 1, report.findings().size(), context);
                 if (expected.recordId != null) {
                     assertTrue(report.findings().stream().anyMatch(f -> f.kind() == expected.kind
                             && f.sequence() == expected.sequence && expected.recordId.equals(f.recordId())), context);

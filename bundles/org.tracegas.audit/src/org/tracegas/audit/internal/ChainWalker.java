@@ -13,7 +13,7 @@ import org.tracegas.audit.ChainFinding.Kind;
 import org.tracegas.audit.VerificationReport;
 
 /**
- * Walks audit_record in sequence order with a window of three records and classifies every break.
+ * Walks audit_record in sequence order with a window of four records and classifies every break.
  * For each record: its own hash is recomputed (ALTERED when it differs); its back link (stored
  * previous hash equals the stored hash of the record before it) and forward link (the next record's back
  * link, or the chain head for the last record) are checked. A record with both links broken is out of
@@ -47,20 +47,23 @@ public final class ChainWalker {
             q.setFetchSize(FETCH_SIZE);
             byHash = c.prepareStatement("SELECT seq FROM audit_record WHERE hash = ?");
             try (ResultSet rs = q.executeQuery()) {
-                AuditRecord prev = null;
-                AuditRecord cur = null;
+                // window: prev, cur, next, after; cur is classified once after is known
+                AuditRecord[] w = new AuditRecord[4];
                 boolean prevFlagged = false;
                 while (rs.next()) {
-                    AuditRecord next = RecordRows.readLenient(rs);
+                    w[3] = RecordRows.readLenient(rs);
                     count++;
-                    if (cur != null) {
-                        prevFlagged = check(prev, prevFlagged, cur, next);
+                    if (w[1] != null) {
+                        prevFlagged = check(w[0], prevFlagged, w[1], w[2], w[3]);
                     }
-                    prev = cur;
-                    cur = next;
+                    System.arraycopy(w, 1, w, 0, 3);
+                    w[3] = null;
                 }
-                if (cur != null) {
-                    check(prev, prevFlagged, cur, null);
+                if (w[1] != null) {
+                    prevFlagged = check(w[0], prevFlagged, w[1], w[2], null);
+                }
+                if (w[2] != null) {
+                    check(w[1], prevFlagged, w[2], null, null);
                 } else if (headSeq > 0) {
                     add(Kind.REMOVED, 1, headRecordId, "no audit records stored, but the chain head names record " + headSeq);
                 }
@@ -88,8 +91,8 @@ public final class ChainWalker {
      * Classifies {@code cur} ({@code next} null for the last record); returns whether it was flagged, which
      * explains its successor's broken back link.
      */
-    private boolean check(AuditRecord prev, boolean prevFlagged, AuditRecord cur, AuditRecord next)
-            throws SQLException {
+    private boolean check(AuditRecord prev, boolean prevFlagged, AuditRecord cur, AuditRecord next,
+            AuditRecord after) throws SQLException {
         String expectedPrev = prev == null ? ChainHash.GENESIS : prev.hash();
         long expectedSeq = prev == null ? 1 : prev.sequence() + 1;
         if (cur.sequence() > expectedSeq) {
@@ -101,15 +104,11 @@ public final class ChainWalker {
             add(Kind.INSERTED, cur.sequence(), cur.recordId(), "beyond the chain head (last sequence " + headSeq + ")");
             return true;
         }
-        if (cur.action() == null || !ChainHash.isSha256Hex(cur.previousHash()) || !ChainHash.isSha256Hex(cur.hash())) {
-            add(Kind.ALTERED, cur.sequence(), cur.recordId(), "action, meaning or a hash is not a valid value");
-            return true;
-        }
-        if (!ChainHash.of(cur).equals(cur.hash())) {
+        if (!selfConsistent(cur)) {
             add(Kind.ALTERED, cur.sequence(), cur.recordId(), "stored fields do not give the stored hash");
             return true;
         }
-        boolean flagged = links(prev, prevFlagged, cur, next, expectedPrev, expectedSeq);
+        boolean flagged = links(prev, prevFlagged, cur, next, after, expectedPrev, expectedSeq);
         if (next == null) {
             checkTail(cur, flagged);
         }
@@ -117,10 +116,9 @@ public final class ChainWalker {
     }
 
     private boolean links(AuditRecord prev, boolean prevFlagged, AuditRecord cur, AuditRecord next,
-            String expectedPrev, long expectedSeq) throws SQLException {
+            AuditRecord after, String expectedPrev, long expectedSeq) throws SQLException {
         boolean backOk = cur.previousHash().equals(expectedPrev);
-        boolean fwdOk = next == null ? cur.sequence() == headSeq && cur.hash().equals(headHash)
-                : next.previousHash().equals(cur.hash());
+        boolean fwdOk = forwardOk(cur, next);
         if (backOk && fwdOk) {
             return false;
         }
@@ -140,7 +138,8 @@ public final class ChainWalker {
                     + " links to the same predecessor");
             return true;
         }
-        if (next != null && next.sequence() == cur.sequence() + 1 && seqOfHash(next.previousHash()) < 0) {
+        if (next != null && next.sequence() == cur.sequence() + 1 && forwardOk(next, after) && selfConsistent(next)
+                && seqOfHash(next.previousHash()) < 0) {
             add(Kind.ALTERED, cur.sequence(), cur.recordId(), "the next record " + next.sequence()
                     + " links to a hash stored nowhere: this record was changed and re-hashed, or the record"
                     + " after it removed and the rest renumbered");
@@ -149,11 +148,26 @@ public final class ChainWalker {
         return false;
     }
 
+    /** Whether the record's fields are valid values and give its stored hash. */
+    private static boolean selfConsistent(AuditRecord r) {
+        return r.action() != null && ChainHash.isSha256Hex(r.previousHash()) && ChainHash.isSha256Hex(r.hash())
+                && ChainHash.of(r).equals(r.hash());
+    }
+
+    /** Whether {@code next} (or, at the end, the chain head) links to {@code r}. */
+    private boolean forwardOk(AuditRecord r, AuditRecord next) {
+        return next == null ? r.sequence() == headSeq && r.hash().equals(headHash) : next.previousHash().equals(r.hash());
+    }
+
     private boolean outOfPlace(AuditRecord prev, AuditRecord cur, AuditRecord next, String expectedPrev)
             throws SQLException {
-        if (prev != null && prev.previousHash().equals(cur.hash())
-                || next != null && cur.previousHash().equals(next.hash())) {
-            add(Kind.REORDERED, cur.sequence(), cur.recordId(), "swapped with its neighbour");
+        boolean successorBefore = prev != null && prev.previousHash().equals(cur.hash());
+        boolean predecessorAfter = next != null && cur.previousHash().equals(next.hash());
+        if (successorBefore && predecessorAfter) {
+            return false; // its two neighbours changed places around it; they are reported
+        }
+        if (successorBefore || predecessorAfter) {
+            add(Kind.REORDERED, cur.sequence(), cur.recordId(), "changed places with a neighbour");
             return true;
         }
         if (next != null && next.previousHash().equals(expectedPrev)) {
