@@ -1,0 +1,120 @@
+package org.tracegas.quantify;
+
+import java.util.ArrayDeque;
+import java.util.Iterator;
+import java.util.Spliterator;
+import java.util.Spliterators;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.function.Consumer;
+
+/**
+ * Quantifies a stream of samples on a fixed pool of threads and delivers the results in input order on the
+ * calling thread. Each spectrum is fitted on its own by the same code, so the numbers are bit-identical whatever
+ * the thread count. At most a few samples per thread are read ahead, so streams of any length fit in memory.
+ */
+public final class BatchQuantifier {
+
+    private static final int READ_AHEAD_PER_THREAD = 4;
+
+    private final Quantifier quantifier;
+    private final int threads;
+
+    /**
+     * @param quantifier the quantifier
+     * @param threads    worker threads, at least 1
+     */
+    public BatchQuantifier(Quantifier quantifier, int threads) {
+        if (quantifier == null) {
+            throw new IllegalArgumentException("quantifier must not be null");
+        }
+        if (threads < 1) {
+            throw new IllegalArgumentException("threads must be at least 1, was " + threads);
+        }
+        this.quantifier = quantifier;
+        this.threads = threads;
+    }
+
+    /** A batch quantifier on all available processors. */
+    public static BatchQuantifier onAllCores(Quantifier quantifier) {
+        return new BatchQuantifier(quantifier, Runtime.getRuntime().availableProcessors());
+    }
+
+    /** As {@link #run(Iterator, long, Consumer, ProgressListener, CancellationFlag)}, total from the spliterator. */
+    public BatchOutcome run(Spliterator<Sample> samples, Consumer<? super SpectrumResult> consumer,
+            ProgressListener progress, CancellationFlag cancellation) {
+        return run(Spliterators.iterator(samples), samples.getExactSizeIfKnown(), consumer, progress, cancellation);
+    }
+
+    /**
+     * Quantifies the samples. The consumer and the progress listener are called on the calling thread, in input
+     * order. Once the flag is set no further result is delivered; those delivered are the first ones in order.
+     *
+     * @param samples      the samples
+     * @param total        number of samples for the progress listener, or -1 if not known
+     * @param consumer     receives each result
+     * @param progress     told after each delivered result
+     * @param cancellation checked before each spectrum is fitted and before each result is delivered
+     * @return how many results were delivered and whether the batch was cancelled
+     * @throws IllegalArgumentException if a sample cannot be quantified; the message names its index (from 0) and
+     *                                  the results before it have been delivered
+     */
+    public BatchOutcome run(Iterator<Sample> samples, long total, Consumer<? super SpectrumResult> consumer,
+            ProgressListener progress, CancellationFlag cancellation) {
+        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
+            Thread t = new Thread(r, "quantification worker");
+            t.setDaemon(true);
+            return t;
+        });
+        ArrayDeque<Future<SpectrumResult>> pending = new ArrayDeque<>();
+        long submitted = 0;
+        long delivered = 0;
+        try {
+            while (true) {
+                while (pending.size() < threads * READ_AHEAD_PER_THREAD && !cancellation.isCancelled()
+                        && samples.hasNext()) {
+                    Sample sample = samples.next();
+                    long index = submitted++;
+                    pending.add(pool.submit(() -> cancellation.isCancelled() ? null : fit(sample, index)));
+                }
+                if (pending.isEmpty() || cancellation.isCancelled()) {
+                    return new BatchOutcome(delivered, cancellation.isCancelled());
+                }
+                SpectrumResult result = await(pending.poll());
+                if (result == null || cancellation.isCancelled()) {
+                    return new BatchOutcome(delivered, true);
+                }
+                consumer.accept(result);
+                delivered++;
+                progress.progress(delivered, total);
+            }
+        } finally {
+            pending.forEach(f -> f.cancel(true));
+            pool.shutdownNow();
+        }
+    }
+
+    private SpectrumResult fit(Sample sample, long index) {
+        try {
+            return quantifier.quantify(sample);
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("sample " + index + ": " + e.getMessage(), e);
+        }
+    }
+
+    private static SpectrumResult await(Future<SpectrumResult> future) {
+        try {
+            return future.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted while waiting for a quantification result", e);
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            throw new IllegalStateException(e.getCause());
+        }
+    }
+}
