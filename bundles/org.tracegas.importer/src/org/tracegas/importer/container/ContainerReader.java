@@ -148,16 +148,17 @@ public final class ContainerReader implements Iterator<ContainerRecord>, Closeab
 
     private double[] readSamples(int points, CRC32 crc, long n) throws ImportException {
         double[] samples = new double[points];
-        byte[] chunk = new byte[4 * Math.min(points, 1 << 16)];
+        int chunkPoints = Math.min(points, 1 << 16);
+        byte[] chunk = new byte[4 * chunkPoints];
+        float[] floats = new float[chunkPoints];
         int done = 0;
         while (done < points) {
-            int count = Math.min(points - done, chunk.length / 4);
-            byte[] bytes = count * 4 == chunk.length ? chunk : new byte[count * 4];
-            fill(bytes, "data", n);
-            crc.update(bytes);
-            ByteBuffer b = ByteBuffer.wrap(bytes).order(ByteOrder.LITTLE_ENDIAN);
+            int count = Math.min(points - done, chunkPoints);
+            fill(chunk, 4 * count, "data", n);
+            crc.update(chunk, 0, 4 * count);
+            ByteBuffer.wrap(chunk, 0, 4 * count).order(ByteOrder.LITTLE_ENDIAN).asFloatBuffer().get(floats, 0, count);
             for (int i = 0; i < count; i++) {
-                float v = b.getFloat();
+                float v = floats[i];
                 if (!Float.isFinite(v)) {
                     throw new ImportException(source, n, "data", "sample " + (done + i) + " is not finite: " + v);
                 }
@@ -273,9 +274,13 @@ public final class ContainerReader implements Iterator<ContainerRecord>, Closeab
     }
 
     private void fill(byte[] b, String field, long n) throws ImportException {
+        fill(b, b.length, field, n);
+    }
+
+    private void fill(byte[] b, int length, String field, long n) throws ImportException {
         try {
-            int got = in.readNBytes(b, 0, b.length);
-            if (got < b.length) {
+            int got = in.readNBytes(b, 0, length);
+            if (got < length) {
                 throw new EOFException();
             }
         } catch (EOFException e) {
