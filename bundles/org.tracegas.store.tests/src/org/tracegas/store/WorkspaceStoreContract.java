@@ -1,0 +1,390 @@
+package org.tracegas.store;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.lang.management.ManagementFactory;
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Set;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.tracegas.model.AccessLevel;
+import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.ResultFlag;
+import org.tracegas.model.Role;
+import org.tracegas.model.SpectralContent;
+import org.tracegas.spectrum.AxisUnit;
+import org.tracegas.spectrum.Ordinate;
+import org.tracegas.spectrum.SpectralAxis;
+import org.tracegas.spectrum.Spectrum;
+
+/**
+ * The behaviour every backend must show, run against a real database by each subclass. Each test gets
+ * an empty database, an administrator, an analyst and one project of the analyst.
+ */
+abstract class WorkspaceStoreContract {
+
+    private static final char[] ADMIN_PASSWORD = "admin-password-1".toCharArray();
+    private static final char[] ANALYST_PASSWORD = "analyst-password-1".toCharArray();
+    /** SHA-256 of "abc": FIPS 180-2, Appendix B.1. */
+    private static final String SHA256_OF_ABC = "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad";
+
+    private TestBackend backend;
+    private WorkspaceStore store;
+    private Session admin;
+    private Session analyst;
+    private ProjectInfo project;
+
+    /** A backend on a fresh, empty database. */
+    abstract TestBackend newBackend() throws Exception;
+
+    @BeforeEach
+    void setUp() throws Exception {
+        backend = newBackend();
+        store = backend.open();
+        admin = store.users().createFirstAdministrator("admin", "Workspace Administrator", ADMIN_PASSWORD);
+        store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), ANALYST_PASSWORD);
+        analyst = store.users().logIn("ana", ANALYST_PASSWORD);
+        String client = store.projects().createClient(analyst, "Cement works");
+        project = store.projects().createProject(analyst, client, "CW-2026-01", "Kiln stack spring campaign");
+    }
+
+    @AfterEach
+    void tearDown() throws Exception {
+        try (TestBackend b = backend) {
+            if (store != null) {
+                store.close();
+            }
+        }
+    }
+
+    @Test
+    void migrationFromEmptyAppliesTheSchemaOnceAndReopeningKeepsIt() throws Exception {
+        assertEquals(List.of("1"), column("SELECT version FROM \"schema_history\" WHERE success = TRUE"
+                + " AND version IS NOT NULL ORDER BY installed_rank"));
+        store.close();
+        store = backend.open();
+        assertEquals(List.of("1"), column("SELECT version FROM \"schema_history\" WHERE version IS NOT NULL"));
+        assertEquals("Kiln stack spring campaign", store.projects().project(analyst, project.id()).name());
+    }
+
+    @Test
+    void spectrumRoundTripIsBitExactAndStoredAsLittleEndianBinary() throws Exception {
+        // edge values of IEEE 754 binary64: negative zero, smallest subnormal, largest finite, a NaN payload
+        double[] values = {0.125, -0.0, Double.MIN_VALUE, Double.MAX_VALUE, Math.PI, Math.ulp(1.0),
+            Double.longBitsToDouble(0x7ff8_0000_0000_0123L), -1.0e-300};
+        Spectrum uniform = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 4000.0, -0.482117, values.length),
+                values, Ordinate.ABSORBANCE);
+        Spectrum explicit = new Spectrum(SpectralAxis.of(AxisUnit.WAVENUMBER, 600.1, 600.35, 601.0, 602.5, 610.0,
+                611.0, 650.0, 700.0), values, Ordinate.SINGLE_BEAM);
+
+        for (Spectrum original : List.of(uniform, explicit)) {
+            String id = store.spectra().store(analyst, project.id(), SpectrumInput.of(SpectralContent.ABSORBANCE,
+                    original));
+            StoredSpectrum back = store.spectra().load(analyst, id);
+            assertEquals(original.axis(), back.spectrum().axis());
+            assertEquals(original.ordinate(), back.spectrum().ordinate());
+            assertArrayEquals(rawBits(original.toArray()), rawBits(back.spectrum().toArray()));
+            assertArrayEquals(rawBits(original.axis().toArray()), rawBits(back.spectrum().axis().toArray()));
+
+            byte[] blob = bytes("SELECT value_data FROM spectral_data WHERE id = ?", id);
+            assertEquals(8 * values.length, blob.length);
+            ByteBuffer le = ByteBuffer.wrap(blob).order(ByteOrder.LITTLE_ENDIAN);
+            // 0.125 = 0x3FC0000000000000 (IEEE 754-2019, binary64): little-endian puts 0xC0, 0x3F last
+            assertEquals(0x3FC0_0000_0000_0000L, le.getLong(0));
+            assertEquals((byte) 0x3F, blob[7]);
+        }
+        assertEquals(List.of("1"), column("SELECT COUNT(*) FROM spectral_data WHERE axis_values IS NULL"));
+    }
+
+    @Test
+    void float32EncodingRoundsEachValueToTheNearestFloat() {
+        double[] values = {0.1, 1.0 / 3.0, 12345.678, -2.5e-7};
+        Spectrum s = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 500, 1, values.length), values,
+                Ordinate.ABSORBANCE);
+        String id = store.spectra().store(analyst, project.id(), new SpectrumInput(null, SpectralContent.ABSORBANCE,
+                s, SampleEncoding.FLOAT32_LE));
+        double[] back = store.spectra().load(analyst, id).spectrum().toArray();
+        for (int i = 0; i < values.length; i++) {
+            assertEquals((double) (float) values[i], back[i], 0.0, "value " + i);
+        }
+    }
+
+    @Test
+    void tenThousandSpectraAreStreamedWithoutHoldingThem() throws Exception {
+        int count = 10_000;
+        int points = 2048; // 16 KiB per spectrum, 160 MiB in all
+        SpectralAxis axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 600.0, 0.5, points);
+        for (int batch = 0; batch < count / 1000; batch++) {
+            List<SpectrumInput> inputs = new ArrayList<>();
+            for (int i = 0; i < 1000; i++) {
+                double[] v = new double[points];
+                v[0] = batch * 1000 + i; // sequence number, to check the order
+                v[points - 1] = -v[0];
+                inputs.add(SpectrumInput.of(SpectralContent.ABSORBANCE, new Spectrum(axis, v, Ordinate.ABSORBANCE)));
+            }
+            store.spectra().storeAll(analyst, project.id(), inputs);
+        }
+
+        long before = usedHeapAfterGc();
+        long peak = 0;
+        int seen = 0;
+        try (Stream<StoredSpectrum> stream = store.spectra().stream(analyst, project.id())) {
+            Iterator<StoredSpectrum> it = stream.iterator();
+            while (it.hasNext()) {
+                Spectrum s = it.next().spectrum();
+                assertEquals(seen, s.get(0), 0.0);
+                assertEquals(-seen, s.get(points - 1), 0.0);
+                seen++;
+                if (seen % 2500 == 0) {
+                    peak = Math.max(peak, usedHeapAfterGc() - before);
+                }
+            }
+        }
+        assertEquals(count, seen);
+        // all rows at once would take 160 MiB; the cursor holds one fetch window of a few MiB
+        assertTrue(peak < 40L << 20, "heap grew by " + (peak >> 20) + " MiB while streaming");
+    }
+
+    @Test
+    void versionIsFrozenByUseAndAnEditMakesANewVersionWithParentAuthorReasonAndHash() {
+        VersionService versions = store.versions();
+        VersionInfo library = versions.create(analyst, VersionKind.LIBRARY, "Kiln gases", "abc", "first issue");
+        assertEquals(SHA256_OF_ABC, library.contentHash());
+        VersionInfo v1 = versions.create(analyst, VersionKind.METHOD, "CO in flue gas",
+                "compound=CO\nregion=2000-2200\nresidualLimit=0.01\n", "first issue");
+        assertEquals(1, v1.number());
+        assertNull(v1.parentId());
+        assertFalse(v1.frozen());
+
+        VersionInfo draft = versions.updateDraft(analyst, v1.id(), v1.rowVersion(),
+                "compound=CO\nregion=2050-2200\nresidualLimit=0.01\n", "narrower region before first use");
+        assertEquals(v1.rowVersion() + 1, draft.rowVersion());
+
+        ResultInfo result = store.results().record(analyst, project.id(), result(v1.id(), library.id()));
+        assertTrue(versions.version(v1.id()).frozen());
+        assertTrue(versions.version(library.id()).frozen());
+        long frozenRow = versions.version(v1.id()).rowVersion();
+        assertThrows(FrozenVersionException.class, () -> versions.updateDraft(analyst, v1.id(), frozenRow,
+                "compound=CO\n", "too late"));
+
+        VersionInfo v2 = versions.revise(analyst, v1.id(),
+                "compound=CO\nregion=2050-2220\ninterferent=H2O\n", "wider region, water as interferent");
+        assertEquals(2, v2.number());
+        assertEquals(v1.id(), v2.parentId());
+        assertEquals(v1.itemId(), v2.itemId());
+        assertEquals(analyst.userId(), v2.authorId());
+        assertEquals("wider region, water as interferent", v2.reason());
+        assertNotEquals(versions.version(v1.id()).contentHash(), v2.contentHash());
+        assertFalse(v2.frozen());
+
+        VersionDiff diff = versions.diff(v1.id(), v2.id());
+        assertEquals(new VersionDiff.Change("2050-2200", "2050-2220"), diff.changed().get("region"));
+        assertEquals("H2O", diff.added().get("interferent"));
+        assertEquals("0.01", diff.removed().get("residualLimit"));
+        assertEquals(Set.of("region"), diff.changed().keySet());
+
+        ResultInfo stored = store.results().results(analyst, project.id()).get(0);
+        assertEquals(result.id(), stored.id());
+        assertEquals(v1.id(), stored.values().methodVersionId());
+        assertEquals(library.id(), stored.values().libraryVersionId());
+        assertEquals(Set.of(ResultFlag.HIGH_RESIDUAL), stored.values().flags());
+    }
+
+    @Test
+    void wrongPasswordsLockTheAccountAfterFiveFailures() throws Exception {
+        char[] wrong = "not-the-password".toCharArray();
+        for (int attempt = 1; attempt <= 4; attempt++) {
+            LoginFailedException e = assertThrows(LoginFailedException.class, () -> store.users().logIn("ana", wrong));
+            assertFalse(e.locked(), "attempt " + attempt);
+        }
+        // a success resets the count, so four more failures still do not lock
+        store.users().logIn("ana", ANALYST_PASSWORD);
+        for (int attempt = 1; attempt <= 4; attempt++) {
+            assertFalse(assertThrows(LoginFailedException.class, () -> store.users().logIn("ana", wrong)).locked());
+        }
+        assertTrue(assertThrows(LoginFailedException.class, () -> store.users().logIn("ana", wrong)).locked());
+        // locked: even the right password is refused
+        assertTrue(assertThrows(LoginFailedException.class,
+                () -> store.users().logIn("ana", ANALYST_PASSWORD)).locked());
+        assertTrue(store.users().user(analyst.userId()).locked());
+        assertThrows(AccessDeniedException.class, () -> store.projects().project(analyst, project.id()));
+        assertEquals(List.of("10"), column("SELECT COUNT(*) FROM audit_record WHERE action = 'REFUSED'"
+                + " AND object_id = '" + analyst.userId() + "'"));
+
+        store.users().unlock(admin, analyst.userId());
+        assertEquals(analyst.userId(), store.users().logIn("ana", ANALYST_PASSWORD).userId());
+        assertFalse(assertThrows(LoginFailedException.class, () -> store.users().logIn("nobody", wrong)).locked());
+    }
+
+    @Test
+    void storedPasswordIsASaltedPbkdf2HashNotThePassword() throws Exception {
+        List<String> rows = column("SELECT password_iterations FROM app_user ORDER BY login");
+        assertEquals(2, rows.size());
+        for (String iterations : rows) {
+            assertTrue(Integer.parseInt(iterations) >= 210_000, iterations);
+        }
+        byte[] saltAdmin = bytes("SELECT password_salt FROM app_user WHERE login = ?", "admin");
+        byte[] saltAna = bytes("SELECT password_salt FROM app_user WHERE login = ?", "ana");
+        assertEquals(16, saltAdmin.length);
+        assertFalse(java.util.Arrays.equals(saltAdmin, saltAna));
+        assertEquals(32, bytes("SELECT password_hash FROM app_user WHERE login = ?", "ana").length);
+    }
+
+    @Test
+    void usersWithoutAGrantAreRefusedAndReadGrantsDoNotAllowWriting() {
+        store.users().createUser(admin, "rita", "Rita Viewer", Set.of(Role.REVIEWER), "reviewer-pass".toCharArray());
+        Session reviewer = store.users().logIn("rita", "reviewer-pass".toCharArray());
+        Spectrum s = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1000, 1, 3), new double[] {1, 2, 3},
+                Ordinate.ABSORBANCE);
+        String id = store.spectra().store(analyst, project.id(), SpectrumInput.of(SpectralContent.ABSORBANCE, s));
+
+        AccessDeniedException denied = assertThrows(AccessDeniedException.class,
+                () -> store.projects().project(reviewer, project.id()));
+        assertTrue(denied.getMessage().contains("rita") && denied.getMessage().contains("CW-2026-01"),
+                denied.getMessage());
+        assertThrows(AccessDeniedException.class, () -> store.spectra().load(reviewer, id));
+        assertThrows(AccessDeniedException.class, () -> store.spectra().stream(reviewer, project.id()));
+        assertThrows(AccessDeniedException.class,
+                () -> store.projects().grant(reviewer, project.id(), reviewer.userId(), AccessLevel.WRITE));
+
+        store.projects().grant(analyst, project.id(), reviewer.userId(), AccessLevel.READ);
+        assertEquals(project.id(), store.projects().project(reviewer, project.id()).id());
+        assertEquals(s, store.spectra().load(reviewer, id).spectrum());
+        assertThrows(AccessDeniedException.class,
+                () -> store.projects().rename(reviewer, project.id(), project.rowVersion(), "Renamed"));
+        assertThrows(AccessDeniedException.class,
+                () -> store.spectra().store(reviewer, project.id(), SpectrumInput.of(SpectralContent.ABSORBANCE, s)));
+        assertThrows(AccessDeniedException.class, () -> store.users().createUser(analyst, "eve", "Eve",
+                Set.of(Role.ADMINISTRATOR), "eve-password".toCharArray()));
+    }
+
+    @Test
+    void staleWriterGetsConcurrentChangeAndNothingIsOverwritten() {
+        ProjectInfo seenByFirst = store.projects().project(analyst, project.id());
+        ProjectInfo seenBySecond = store.projects().project(analyst, project.id());
+        ProjectInfo renamed = store.projects().rename(analyst, project.id(), seenByFirst.rowVersion(), "First name");
+        assertEquals(seenByFirst.rowVersion() + 1, renamed.rowVersion());
+
+        ConcurrentChangeException e = assertThrows(ConcurrentChangeException.class,
+                () -> store.projects().rename(analyst, project.id(), seenBySecond.rowVersion(), "Second name"));
+        assertEquals("project", e.objectType());
+        assertEquals(project.id(), e.objectId());
+        assertEquals(seenBySecond.rowVersion(), e.expectedVersion());
+        assertEquals(renamed.rowVersion(), e.currentVersion());
+        assertTrue(e.getMessage().contains(project.id()) && e.getMessage().contains("version 0")
+                && e.getMessage().contains("version is 1"), e.getMessage());
+        assertEquals("First name", store.projects().project(analyst, project.id()).name());
+
+        UserInfo user = store.users().user(analyst.userId());
+        store.users().changeRoles(admin, user.id(), user.rowVersion(), Set.of(Role.ANALYST, Role.REVIEWER));
+        assertThrows(ConcurrentChangeException.class,
+                () -> store.users().changeRoles(admin, user.id(), user.rowVersion(), Set.of(Role.QUALITY_MANAGER)));
+        assertEquals(Set.of(Role.ANALYST, Role.REVIEWER), store.users().user(analyst.userId()).roles());
+    }
+
+    @Test
+    void failedBatchRollsBackSpectraAndTheirAuditRecords() throws Exception {
+        String measurement = store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE,
+                Instant.parse("2026-04-01T08:00:00Z"), 453.15, 1013.0);
+        Spectrum s = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1000, 1, 2), new double[] {1, 2},
+                Ordinate.ABSORBANCE);
+        SpectrumInput good = new SpectrumInput(measurement, SpectralContent.ABSORBANCE, s, SampleEncoding.FLOAT64_LE);
+        // the third names a measurement that does not exist: the database refuses it after two rows and two
+        // audit records were written in the same transaction
+        SpectrumInput bad = new SpectrumInput("no-such-measurement", SpectralContent.ABSORBANCE, s,
+                SampleEncoding.FLOAT64_LE);
+
+        assertThrows(StoreException.class, () -> store.spectra().storeAll(analyst, project.id(),
+                List.of(good, good, bad)));
+        assertEquals(List.of("0"), column("SELECT COUNT(*) FROM spectral_data"));
+        assertEquals(List.of("0"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'spectral-data'"));
+
+        List<String> ids = store.spectra().storeAll(analyst, project.id(), List.of(good, good));
+        assertEquals(List.of("2"), column("SELECT COUNT(*) FROM spectral_data"));
+        assertEquals(ids.stream().sorted().toList(), column("SELECT object_id FROM audit_record"
+                + " WHERE object_type = 'spectral-data' ORDER BY object_id"));
+    }
+
+    @Test
+    void everyChangeWritesItsAuditRecordWithOldAndNewValues() throws Exception {
+        ProjectInfo renamed = store.projects().rename(analyst, project.id(), project.rowVersion(), "Kiln stack");
+        try (Connection c = backend.raw(); PreparedStatement ps = c.prepareStatement(
+                "SELECT user_id, action, object_version, old_value, new_value FROM audit_record"
+                        + " WHERE object_type = 'project' AND object_id = ? ORDER BY seq")) {
+            ps.setString(1, project.id());
+            try (ResultSet rs = ps.executeQuery()) {
+                assertTrue(rs.next());
+                assertEquals("CREATE", rs.getString("action"));
+                assertTrue(rs.next());
+                assertEquals(analyst.userId(), rs.getString("user_id"));
+                assertEquals("CHANGE", rs.getString("action"));
+                assertEquals(renamed.rowVersion(), rs.getLong("object_version"));
+                assertTrue(rs.getString("old_value").contains("name=Kiln stack spring campaign\n"));
+                assertTrue(rs.getString("new_value").contains("name=Kiln stack\n"));
+                assertFalse(rs.next());
+            }
+        }
+        // a refused change leaves no record
+        assertThrows(ConcurrentChangeException.class,
+                () -> store.projects().rename(analyst, project.id(), project.rowVersion(), "Stale"));
+        assertEquals(List.of("3"), column("SELECT COUNT(*) FROM audit_record WHERE object_id = '" + project.id()
+                + "' OR object_id LIKE '" + project.id() + "/%'"));
+    }
+
+    private static NewResult result(String methodVersionId, String libraryVersionId) {
+        return new NewResult(null, "CO", 12.5, 0.8, 0.3, "ppm", Set.of(ResultFlag.HIGH_RESIDUAL), methodVersionId,
+                libraryVersionId, "0.1.0", "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855");
+    }
+
+    private static long[] rawBits(double[] values) {
+        long[] bits = new long[values.length];
+        for (int i = 0; i < values.length; i++) {
+            bits[i] = Double.doubleToRawLongBits(values[i]);
+        }
+        return bits;
+    }
+
+    private static long usedHeapAfterGc() {
+        System.gc();
+        return ManagementFactory.getMemoryMXBean().getHeapMemoryUsage().getUsed();
+    }
+
+    private List<String> column(String sql) throws SQLException {
+        try (Connection c = backend.raw(); PreparedStatement ps = c.prepareStatement(sql);
+                ResultSet rs = ps.executeQuery()) {
+            List<String> values = new ArrayList<>();
+            while (rs.next()) {
+                values.add(rs.getString(1));
+            }
+            return values;
+        }
+    }
+
+    private byte[] bytes(String sql, String param) throws SQLException {
+        try (Connection c = backend.raw(); PreparedStatement ps = c.prepareStatement(sql)) {
+            ps.setString(1, param);
+            try (ResultSet rs = ps.executeQuery()) {
+                assertTrue(rs.next(), sql);
+                return rs.getBytes(1);
+            }
+        }
+    }
+}
