@@ -1,0 +1,152 @@
+package org.tracegas.ui.dialogs;
+
+import java.sql.SQLException;
+import java.util.Locale;
+
+import org.eclipse.jface.dialogs.Dialog;
+import org.eclipse.jface.dialogs.IDialogConstants;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Combo;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Shell;
+import org.eclipse.swt.widgets.Text;
+import org.tracegas.audit.Signature;
+import org.tracegas.audit.SignatureMeaning;
+import org.tracegas.audit.SignatureRefusedException;
+import org.tracegas.store.ResultInfo;
+import org.tracegas.store.Session;
+import org.tracegas.ui.session.ResultApproval;
+
+/**
+ * Signs one result: shows what is signed and the signer's printed name, asks for the meaning, the user name
+ * and the password again. A refusal is explained in the dialog (it is also in the audit trail).
+ */
+public final class SignatureDialog extends Dialog {
+
+    private final ResultApproval approval;
+    private final Session session;
+    private final ResultInfo result;
+    private Combo meaning;
+    private Text login;
+    private Text password;
+    private Text comment;
+    private Label message;
+    private Signature signature;
+
+    public SignatureDialog(Shell parent, ResultApproval approval, Session session, ResultInfo result) {
+        super(parent);
+        this.approval = approval;
+        this.session = session;
+        this.result = result;
+    }
+
+    @Override
+    protected void configureShell(Shell shell) {
+        super.configureShell(shell);
+        shell.setText("Sign result");
+    }
+
+    @Override
+    protected Control createDialogArea(Composite parent) {
+        Composite area = (Composite) super.createDialogArea(parent);
+        area.setLayout(new GridLayout(2, false));
+        row(area, "Result", String.format(Locale.ROOT, "%s %.4g %s (± %.2g), recorded by %s",
+                result.values().compound(), result.values().concentration(), result.values().unit(),
+                result.values().uncertainty(), result.recordedBy()));
+        row(area, "Printed name", approval.printedName(session));
+        new Label(area, SWT.NONE).setText("Meaning");
+        meaning = new Combo(area, SWT.READ_ONLY);
+        meaning.setItems(SignatureMeaning.REVIEWED.name(), SignatureMeaning.APPROVED.name());
+        meaning.select(1);
+        new Label(area, SWT.NONE).setText("User name");
+        login = new Text(area, SWT.BORDER);
+        login.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        new Label(area, SWT.NONE).setText("Password");
+        password = new Text(area, SWT.BORDER | SWT.PASSWORD);
+        password.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        new Label(area, SWT.NONE).setText("Comment");
+        comment = new Text(area, SWT.BORDER);
+        comment.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        Label statement = new Label(area, SWT.WRAP);
+        statement.setText("Your electronic signature binds you as a handwritten one would. It is stored with "
+                + "the date, time, meaning and the exact values signed.");
+        GridData sd = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+        sd.widthHint = 460;
+        statement.setLayoutData(sd);
+        message = new Label(area, SWT.WRAP);
+        message.setForeground(area.getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
+        GridData md = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+        md.widthHint = 460;
+        message.setLayoutData(md);
+        return area;
+    }
+
+    private static void row(Composite area, String label, String value) {
+        new Label(area, SWT.NONE).setText(label);
+        Label v = new Label(area, SWT.NONE);
+        v.setText(value);
+    }
+
+    @Override
+    protected void createButtonsForButtonBar(Composite parent) {
+        createButton(parent, IDialogConstants.OK_ID, "Sign", true);
+        createButton(parent, IDialogConstants.CANCEL_ID, IDialogConstants.CANCEL_LABEL, false);
+    }
+
+    @Override
+    protected void okPressed() {
+        try {
+            signature = approval.sign(session, result, login.getText().trim(), password.getText().toCharArray(),
+                    SignatureMeaning.valueOf(meaning.getText()), comment.getText());
+        } catch (SignatureRefusedException e) {
+            message.setText(refusal(e.reason()));
+            password.setText("");
+            return;
+        } catch (SQLException e) {
+            message.setText("The signature could not be stored: " + e.getMessage());
+            return;
+        }
+        super.okPressed();
+    }
+
+    /** The text shown for a refusal. */
+    public static String refusal(SignatureRefusedException.Reason reason) {
+        return switch (reason) {
+            case OWN_WORK -> "Signature refused: you recorded this result yourself. Review and approval must come "
+                    + "from someone else. The attempt is recorded in the audit trail.";
+            case WRONG_CREDENTIALS -> "Signature refused: user name or password is wrong. The attempt is recorded "
+                    + "in the audit trail.";
+            case NOT_SESSION_USER -> "Signature refused: only the user logged in at this desk can sign here. "
+                    + "The attempt is recorded in the audit trail.";
+        };
+    }
+
+    /** The stored signature after signing, else null. */
+    public Signature signature() {
+        return signature;
+    }
+
+    public Combo meaningField() {
+        return meaning;
+    }
+
+    public Text loginField() {
+        return login;
+    }
+
+    public Text passwordField() {
+        return password;
+    }
+
+    public Text commentField() {
+        return comment;
+    }
+
+    public Label message() {
+        return message;
+    }
+}

@@ -1,0 +1,235 @@
+package org.tracegas.ui.parts;
+
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+
+import org.eclipse.emf.common.command.CommandStackListener;
+import org.eclipse.emf.ecore.EStructuralFeature;
+import org.eclipse.jface.fieldassist.ControlDecoration;
+import org.eclipse.jface.fieldassist.FieldDecorationRegistry;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Combo;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Text;
+import org.tracegas.model.AnalysisMethod;
+import org.tracegas.model.AnalysisRegion;
+import org.tracegas.model.MethodVersion;
+import org.tracegas.model.WorkspacePackage.Literals;
+import org.tracegas.model.edit.ModelEditor;
+
+/**
+ * Edits a draft method version in the model through the editing domain: every accepted change is one
+ * command, so Undo and Redo walk back and forth through them. Fields are checked as they are typed; a
+ * wrong field is marked and named below the form and the model keeps its last good value. The comparison
+ * below shows the version as opened (A) beside the draft (B).
+ */
+public final class MethodEditorPanel extends Composite {
+
+    private final ModelEditor editor;
+    private final Text name;
+    private final Combo region;
+    private final Text compound;
+    private final Text lower;
+    private final Text upper;
+    private final Label problems;
+    private final Button undo;
+    private final Button redo;
+    private final VersionComparisonPanel comparison;
+    private final Map<Text, ControlDecoration> decorations = new LinkedHashMap<>();
+    private final CommandStackListener stackListener = e -> getDisplay().asyncExec(this::afterCommand);
+    private AnalysisMethod method;
+    private MethodVersion version;
+    private String opened;
+    private boolean filling;
+
+    public MethodEditorPanel(Composite parent, int style, ModelEditor editor) {
+        super(parent, style);
+        this.editor = editor;
+        setLayout(new GridLayout(1, false));
+        SashForm sash = new SashForm(this, SWT.VERTICAL);
+        sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        Composite form = new Composite(sash, SWT.NONE);
+        form.setLayout(new GridLayout(4, false));
+        name = field(form, "Method name");
+        new Label(form, SWT.NONE).setText("Analysis region");
+        region = new Combo(form, SWT.READ_ONLY);
+        region.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1));
+        region.addListener(SWT.Selection, e -> fill());
+        compound = field(form, "Compound");
+        lower = field(form, "Lower wavenumber (cm⁻¹)");
+        upper = field(form, "Upper wavenumber (cm⁻¹)");
+        problems = new Label(form, SWT.WRAP);
+        problems.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
+        problems.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1));
+        Composite buttons = new Composite(form, SWT.NONE);
+        buttons.setLayout(new GridLayout(2, true));
+        buttons.setLayoutData(new GridData(SWT.BEGINNING, SWT.TOP, false, false, 4, 1));
+        undo = new Button(buttons, SWT.PUSH);
+        undo.setText("Undo");
+        undo.addListener(SWT.Selection, e -> {
+            editor.undo();
+            fill();
+        });
+        redo = new Button(buttons, SWT.PUSH);
+        redo.setText("Redo");
+        redo.addListener(SWT.Selection, e -> {
+            editor.redo();
+            fill();
+        });
+        comparison = new VersionComparisonPanel(sash, SWT.NONE);
+        sash.setWeights(1, 1);
+        editor.domain().getCommandStack().addCommandStackListener(stackListener);
+        addDisposeListener(e -> editor.domain().getCommandStack().removeCommandStackListener(stackListener));
+        name.addListener(SWT.Modify, e -> apply(name, method, Literals.ANALYSIS_METHOD__NAME,
+                FieldCheck.text("Method name", name.getText()), name.getText()));
+        compound.addListener(SWT.Modify, e -> apply(compound, selectedRegion(), Literals.ANALYSIS_REGION__COMPOUND,
+                FieldCheck.text("Compound", compound.getText()), compound.getText().trim()));
+        lower.addListener(SWT.Modify, e -> applyBound(lower, Literals.ANALYSIS_REGION__LOWER_WAVENUMBER,
+                "Lower wavenumber"));
+        upper.addListener(SWT.Modify, e -> applyBound(upper, Literals.ANALYSIS_REGION__UPPER_WAVENUMBER,
+                "Upper wavenumber"));
+        updateButtons();
+    }
+
+    private Text field(Composite form, String label) {
+        new Label(form, SWT.NONE).setText(label);
+        Text t = new Text(form, SWT.BORDER);
+        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
+        gd.horizontalIndent = 8;
+        t.setLayoutData(gd);
+        ControlDecoration d = new ControlDecoration(t, SWT.LEFT | SWT.CENTER);
+        d.setImage(FieldDecorationRegistry.getDefault().getFieldDecoration(FieldDecorationRegistry.DEC_ERROR)
+                .getImage());
+        d.hide();
+        decorations.put(t, d);
+        return t;
+    }
+
+    /** Opens a method version (it must sit in a resource of the editor's resource set). */
+    public void open(AnalysisMethod method, MethodVersion version) {
+        this.method = method;
+        this.version = version;
+        this.opened = MethodText.of(method, version);
+        region.removeAll();
+        for (AnalysisRegion r : version.getRegions()) {
+            region.add(r.getCompound() + "  " + Math.round(r.getLowerWavenumber()) + "–"
+                    + Math.round(r.getUpperWavenumber()) + " cm⁻¹");
+        }
+        region.select(0);
+        fill();
+    }
+
+    private AnalysisRegion selectedRegion() {
+        int i = region.getSelectionIndex();
+        return version == null || i < 0 ? null : version.getRegions().get(i);
+    }
+
+    private void fill() {
+        filling = true;
+        try {
+            name.setText(method.getName());
+            AnalysisRegion r = selectedRegion();
+            compound.setText(r == null ? "" : r.getCompound());
+            lower.setText(r == null ? "" : number(r.getLowerWavenumber()));
+            upper.setText(r == null ? "" : number(r.getUpperWavenumber()));
+        } finally {
+            filling = false;
+        }
+        decorations.values().forEach(ControlDecoration::hide);
+        problems.setText("");
+        refreshComparison();
+        updateButtons();
+    }
+
+    private void applyBound(Text field, EStructuralFeature feature, String label) {
+        String problem = FieldCheck.wavenumber(label, field.getText());
+        if (problem == null) {
+            problem = FieldCheck.order(lower.getText(), upper.getText());
+        }
+        apply(field, selectedRegion(), feature, problem, problem == null ? Double.valueOf(field.getText().trim()) : null);
+    }
+
+    private void apply(Text field, org.eclipse.emf.ecore.EObject owner, EStructuralFeature feature, String problem,
+            Object value) {
+        if (filling || owner == null) {
+            return;
+        }
+        ControlDecoration d = decorations.get(field);
+        if (problem != null) {
+            d.setDescriptionText(problem);
+            d.show();
+            problems.setText(problem);
+            return;
+        }
+        d.hide();
+        problems.setText("");
+        if (!value.equals(owner.eGet(feature))) {
+            editor.set(owner, feature, value);
+            afterCommand();
+        }
+    }
+
+    /** After any command: the fields being typed in stay as they are, buttons and comparison follow. */
+    private void afterCommand() {
+        if (!isDisposed() && method != null) {
+            updateButtons();
+            refreshComparison();
+        }
+    }
+
+    private void refreshComparison() {
+        comparison.compare("Version " + version.getNumber() + " as opened", opened, "Draft", MethodText.of(method,
+                version));
+    }
+
+    private void updateButtons() {
+        undo.setEnabled(editor.canUndo());
+        redo.setEnabled(editor.canRedo());
+    }
+
+    private static String number(double v) {
+        return String.format(Locale.ROOT, "%.2f", v);
+    }
+
+    public Text nameField() {
+        return name;
+    }
+
+    public Text lowerField() {
+        return lower;
+    }
+
+    public Text upperField() {
+        return upper;
+    }
+
+    public Text compoundField() {
+        return compound;
+    }
+
+    public Label problems() {
+        return problems;
+    }
+
+    public Button undoButton() {
+        return undo;
+    }
+
+    public Button redoButton() {
+        return redo;
+    }
+
+    public VersionComparisonPanel comparison() {
+        return comparison;
+    }
+
+    public boolean decorated(Text field) {
+        return decorations.get(field).isVisible();
+    }
+}

@@ -1,0 +1,60 @@
+package org.tracegas.ui.parts;
+
+import java.util.List;
+
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableColumn;
+import org.eclipse.swt.widgets.TableItem;
+import org.tracegas.qa.checks.CheckOutcome;
+
+/** QA check outcomes: pass or fail, the value judged, the limits and the rule with its source. */
+public final class QaOverviewPanel extends Composite {
+
+    private final Label summary;
+    private final Table table;
+
+    public QaOverviewPanel(Composite parent, int style) {
+        super(parent, style);
+        setLayout(new GridLayout(1, false));
+        Caution.banner(this, 1);
+        summary = new Label(this, SWT.NONE);
+        summary.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        table = new Table(this, SWT.BORDER | SWT.FULL_SELECTION);
+        table.setHeaderVisible(true);
+        table.setLinesVisible(true);
+        table.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        for (String c : new String[] {"Outcome", "Check", "Measured", "Limits", "Rule", "Source"}) {
+            new TableColumn(table, SWT.NONE).setText(c);
+        }
+    }
+
+    public void show(List<CheckOutcome> outcomes) {
+        table.removeAll();
+        long failed = outcomes.stream().filter(o -> !o.passed()).count();
+        for (CheckOutcome o : outcomes) {
+            TableItem item = new TableItem(table, SWT.NONE);
+            item.setText(new String[] {o.passed() ? "pass" : "FAIL", o.check(),
+                    String.format(java.util.Locale.ROOT, "%.4g %s", o.measured(), o.unit()), o.limits().describe(),
+                    o.rule().statement(), o.rule().source()});
+            item.setBackground(o.passed() ? Palette.PASS : Palette.FAIL);
+        }
+        for (TableColumn col : table.getColumns()) {
+            col.pack();
+        }
+        summary.setText(outcomes.size() + " checks: " + (outcomes.size() - failed) + " passed, " + failed + " failed");
+        layout(true);
+    }
+
+    public Table table() {
+        return table;
+    }
+
+    public Label summary() {
+        return summary;
+    }
+}

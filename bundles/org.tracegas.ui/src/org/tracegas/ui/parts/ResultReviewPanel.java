@@ -1,0 +1,119 @@
+package org.tracegas.ui.parts;
+
+import java.sql.SQLException;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+import java.util.List;
+import java.util.Locale;
+
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Button;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableColumn;
+import org.eclipse.swt.widgets.TableItem;
+import org.tracegas.store.ResultInfo;
+import org.tracegas.store.Session;
+import org.tracegas.ui.dialogs.SignatureDialog;
+import org.tracegas.ui.session.ResultApproval;
+import org.tracegas.ui.session.WorkspaceAccess;
+
+/** A project's results with the signatures given on each; the selected result can be reviewed and signed. */
+public final class ResultReviewPanel extends Composite {
+
+    private static final DateTimeFormatter SHOWN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss")
+            .withZone(ZoneOffset.UTC);
+
+    private final Label heading;
+    private final Table table;
+    private final Button sign;
+    private WorkspaceAccess access;
+    private ResultApproval approval;
+    private Session session;
+    private String projectId;
+    private List<ResultInfo> results = List.of();
+
+    public ResultReviewPanel(Composite parent, int style) {
+        super(parent, style);
+        setLayout(new GridLayout(2, false));
+        heading = new Label(this, SWT.NONE);
+        heading.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        heading.setText("No project open.");
+        sign = new Button(this, SWT.PUSH);
+        sign.setText("Review and sign…");
+        sign.addListener(SWT.Selection, e -> {
+            ResultInfo r = selected();
+            if (r != null && signatureDialog(r).open() == SignatureDialog.OK) {
+                reload();
+            }
+        });
+        table = new Table(this, SWT.BORDER | SWT.FULL_SELECTION);
+        table.setHeaderVisible(true);
+        table.setLinesVisible(true);
+        table.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1));
+        for (String c : new String[] {"Compound", "Concentration", "± u", "Recorded (UTC)", "Recorded by",
+                "Signatures"}) {
+            new TableColumn(table, SWT.NONE).setText(c);
+        }
+    }
+
+    public void open(WorkspaceAccess access, Session session, String projectId, String projectLabel) {
+        this.access = access;
+        this.approval = new ResultApproval(access);
+        this.session = session;
+        this.projectId = projectId;
+        heading.setText("Results of " + projectLabel + " — signed in as " + session.login());
+        reload();
+    }
+
+    /** Reads the results and their signatures again. */
+    public void reload() {
+        results = access.store().results().results(session, projectId);
+        table.removeAll();
+        for (ResultInfo r : results) {
+            TableItem item = new TableItem(table, SWT.NONE);
+            String signatures;
+            try {
+                signatures = approval.signatureSummary(r.id());
+            } catch (SQLException e) {
+                signatures = "signatures unreadable: " + e.getMessage();
+            }
+            item.setText(new String[] {r.values().compound(),
+                    String.format(Locale.ROOT, "%.4g %s", r.values().concentration(), r.values().unit()),
+                    String.format(Locale.ROOT, "%.2g", r.values().uncertainty()), SHOWN.format(r.recorded()),
+                    access.store().users().user(r.recordedBy()).login(), signatures});
+            if (!"not signed".equals(signatures)) {
+                item.setBackground(Palette.PASS);
+            }
+        }
+        for (TableColumn c : table.getColumns()) {
+            c.pack();
+        }
+        if (!results.isEmpty() && table.getSelectionIndex() < 0) {
+            table.select(0);
+        }
+        layout(true);
+    }
+
+    /** The selected result, or null. */
+    public ResultInfo selected() {
+        int i = table.getSelectionIndex();
+        return i < 0 ? null : results.get(i);
+    }
+
+    /** A signature dialog for a result, in this panel's session. */
+    public SignatureDialog signatureDialog(ResultInfo r) {
+        return new SignatureDialog(getShell(), approval, session, r);
+    }
+
+    public Table table() {
+        return table;
+    }
+
+    public List<ResultInfo> results() {
+        return results;
+    }
+}
