@@ -184,7 +184,8 @@ final class CampaignFixture {
         double[] y = values.stream().mapToDouble(TimedValue::value).toArray();
         double[] ax = averages.stream().mapToDouble(a -> hours(a.start()) + 0.25).toArray();
         double[] ay = averages.stream().mapToDouble(PeriodAverage::mean).toArray();
-        List<Series> s = new ArrayList<>(List.of(new Series("1-minute", x, y), new Series("30-minute average", ax, ay)));
+        List<Series> s = new ArrayList<>(List.of(new Series("1-minute", x, y),
+                new Series("30-minute average", ax, ay)));
         if (limit > 0) {
             s.add(new Series("limit (30 min)", new double[] {0, 48}, new double[] {limit, limit}));
         }

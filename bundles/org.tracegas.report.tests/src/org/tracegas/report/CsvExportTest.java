@@ -24,8 +24,8 @@ class CsvExportTest {
         String[] lines = csv.split("\r\n", -1);
         assertEquals(4, lines.length); // header, two records, empty after the last CRLF
         assertEquals(CsvExport.HEADER, lines[0]);
-        assertEquals("CO,30 min,2026-03-02T21:00:00Z,181.25,17.0,mg/m³,\"upset, plant log; say \"\"hi\"\"\",150.0,exceeded",
-                lines[1]);
+        assertEquals("CO,30 min,2026-03-02T21:00:00Z,181.25,17.0,mg/m³,"
+                + "\"upset, plant log; say \"\"hi\"\"\",150.0,exceeded", lines[1]);
         assertEquals("HCl,30 min,2026-03-02T21:00:00Z,7.5,1.0,mg/m³,,,no limit", lines[2]);
         assertEquals("", lines[3]);
         assertTrue(csv.indexOf('\n') == csv.indexOf("\r\n") + 1, "no bare LF");

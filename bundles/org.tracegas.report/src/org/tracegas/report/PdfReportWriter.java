@@ -110,7 +110,8 @@ public final class PdfReportWriter {
         pw.down(20);
         pw.text(pw.bold(), 18, pw.left(), pw.y(), "Emission measurement report");
         pw.down(18);
-        pw.text(pw.regular(), 11, pw.left(), pw.y(), "Extractive FTIR measurements at " + c.plant() + ", " + c.source());
+        pw.text(pw.regular(), 11, pw.left(), pw.y(),
+                "Extractive FTIR measurements at " + c.plant() + ", " + c.source());
         pw.down(6);
         pw.line(pw.left(), pw.y(), pw.left() + pw.width(), pw.y(), 1.2f, 0f);
         pw.down(4);
@@ -152,8 +153,8 @@ public final class PdfReportWriter {
         for (LibraryVersion l : content.libraries()) {
             libRows.add(new String[] {l.name(), l.version()});
         }
-        new TableRenderer(List.of(new Column("Library or reference data", 300, false), new Column("Version", 195, false)),
-                8, ALARMS).draw(pw, libRows);
+        new TableRenderer(List.of(new Column("Library or reference data", 300, false),
+                new Column("Version", 195, false)), 8, ALARMS).draw(pw, libRows);
     }
 
     private static void qa(PageWriter pw, ReportContent content) {
@@ -185,7 +186,8 @@ public final class PdfReportWriter {
                     String.join("; ", r.flags()), limit, status});
         }
         new TableRenderer(List.of(new Column("Compound", 52, false), new Column("Period", 38, false),
-                new Column("Period start (UTC)", 78, false), new Column("Value", 48, true), new Column("U (k=2)", 42, true),
+                new Column("Period start (UTC)", 78, false), new Column("Value", 48, true),
+                new Column("U (k=2)", 42, true),
                 new Column("Unit", 36, false), new Column("Flags", 100, false), new Column("Limit", 40, true),
                 new Column("Limit status", 61, false)), 7.5f, ALARMS).draw(pw, rows);
     }

@@ -122,7 +122,8 @@ public final class ReportContent {
         d.add(libraries.size());
         libraries.forEach(l -> d.add(l.name()).add(l.version()));
         d.add(qa.size());
-        qa.forEach(q -> d.add(q.check()).add(q.passed()).add(q.measured()).add(q.limits()).add(q.rule()).add(q.source()));
+        qa.forEach(q -> d.add(q.check()).add(q.passed()).add(q.measured()).add(q.limits()).add(q.rule())
+                .add(q.source()));
         d.add(results.size());
         for (ResultRow r : results) {
             d.add(r.compound()).add(r.period()).add(r.periodStart()).add(r.value()).add(r.expandedUncertainty())

@@ -51,7 +51,8 @@ public final class SpectrumFit {
     /** The fit plot: measured and fitted absorbance. */
     public Plot fitPlot() {
         return new Plot(title, "Wavenumber (cm-1)", "Absorbance",
-                List.of(new Series("measured", wavenumbers, measured), new Series("fitted", wavenumbers, fitted)), true);
+                List.of(new Series("measured", wavenumbers, measured), new Series("fitted", wavenumbers, fitted)),
+                true);
     }
 
     /** The residual plot. */

@@ -32,7 +32,8 @@ class LimitComparisonTest {
     void confidenceIntervalIsSubtractedFirst() {
         // EU IED Annex VI Part 8 section 1.2: averages after subtracting the confidence interval; SO2 interval
         // 20 % of the daily ELV (Part 6 section 1.3). 55 -> 45 (no exceedance), 62 -> 52 (exceedance), hand-computed
-        List<Exceedance> e = new LimitComparison(20).exceedances(SO2_DAILY, List.of(day(0, 55, true), day(1, 62, true)));
+        List<Exceedance> e = new LimitComparison(20).exceedances(SO2_DAILY,
+                List.of(day(0, 55, true), day(1, 62, true)));
         assertEquals(1, e.size());
         assertEquals(52.0, e.get(0).validatedValue(), 1e-12);
     }

@@ -44,7 +44,8 @@ public final class Averaging {
             throw new IllegalArgumentException("length " + length + " is not a whole number of sample intervals "
                     + sampleInterval);
         }
-        if (Duration.ofDays(1).toMillis() % length.toMillis() != 0 && length.toMillis() % Duration.ofDays(1).toMillis() != 0) {
+        long day = Duration.ofDays(1).toMillis();
+        if (day % length.toMillis() != 0 && length.toMillis() % day != 0) {
             throw new IllegalArgumentException("length " + length
                     + " must divide a day or be whole days, so that periods align with midnight");
         }
@@ -67,8 +68,9 @@ public final class Averaging {
 
     /** The minimum-data rule in words, with its source. */
     public Rule validityRule() {
-        return new Rule(String.format(Locale.ROOT, "A %s average is valid with at least %.0f %% of its %d expected values",
-                describe(length), minimumFraction * 100, expectedCount()),
+        return new Rule(String.format(Locale.ROOT,
+                "A %s average is valid with at least %.0f %% of its %d expected values", describe(length),
+                minimumFraction * 100, expectedCount()),
                 minimumFraction == COMMON_PRACTICE_MINIMUM_FRACTION ? "common practice, no source"
                         : "test plan (EU IED 2010/75/EU Annex VI Part 8 section 1.2: a day is valid if no more than "
                                 + "5 half-hourly averages were discarded)");

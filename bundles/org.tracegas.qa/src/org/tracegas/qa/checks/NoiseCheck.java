@@ -53,7 +53,8 @@ public final class NoiseCheck {
     public CheckOutcome evaluate(double[] wavenumbers, double[] absorbance) {
         double rms = rmsNoise(wavenumbers, absorbance);
         Rule rule = new Rule("RMS absorbance noise sqrt(sum((A_i - mean)^2)/n) in "
-                + Format.number(region.fromCm()) + " .. " + Format.number(region.toCm()) + " cm-1 at most " + Format.number(maximumRms),
+                + Format.number(region.fromCm()) + " .. " + Format.number(region.toCm()) + " cm-1 at most "
+                + Format.number(maximumRms),
                 "noise definition: EPA FTIR Protocol appendix A (not confirmed against the official text); "
                         + "limit: test plan (ASTM D6348 introduction: the tester sets detection limits and DQOs)");
         return CheckOutcome.judge("Noise level", rms, "absorbance", AcceptanceLimits.atMost(maximumRms), rule);

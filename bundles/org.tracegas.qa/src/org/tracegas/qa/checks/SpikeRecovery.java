@@ -19,7 +19,8 @@ public record SpikeRecovery(double dilutionFactor, double expectedPpm, double me
         double df = sample.tracerPpm() / gas.tracerPpm();
         if (!(df > 0 && df < 1)) {
             throw new IllegalArgumentException("dilution factor must lie between 0 and 1, was " + df
-                    + " (tracer " + sample.tracerPpm() + " ppm in the sample, " + gas.tracerPpm() + " ppm in the spike)");
+                    + " (tracer " + sample.tracerPpm() + " ppm in the sample, " + gas.tracerPpm()
+                    + " ppm in the spike)");
         }
         double expected = df * gas.analytePpm() + (1 - df) * sample.nativeAnalytePpm();
         Require.positive("expected spiked concentration", expected);

@@ -10,6 +10,7 @@ import org.tracegas.qa.internal.Stats;
  * Shewhart chart for individual values with centre line μ, warning limits μ ± 2σ and action limits
  * μ ± 3σ. Evaluates Western Electric rule 1 (one point beyond 3σ), rule 2 (two of three successive
  * points beyond 2σ on the same side) and rule 4 (eight successive points on one side of the centre line).
+ * EN 14181:2014 names Shewhart charts among the QAL3 methods, with σ taken from the QAL1 data.
  */
 public final class ShewhartChart {
 

@@ -7,9 +7,9 @@ import org.tracegas.qa.internal.Require;
 
 /**
  * Builds a budget from a measurement model, taking the sensitivity coefficients as central differences
- * c_i = (f(x + u_i e_i) − f(x − u_i e_i)) / 2u_i over plus and minus one standard uncertainty, the numerical
- * evaluation of JCGM 100:2008 5.1.3 (note; recalled from memory). For a model linear in x_i this is the derivative; otherwise it
- * averages the slope over x_i ± u_i.
+ * c_i = (f(x + u_i e_i) − f(x − u_i e_i)) / 2u_i over plus and minus one standard uncertainty, the
+ * numerical evaluation of JCGM 100:2008 5.1.3 (a note there; recalled from memory). For a model linear in
+ * x_i this is the derivative; otherwise it averages the slope over x_i ± u_i.
  */
 public final class GumPropagation {
 

@@ -129,7 +129,7 @@ public final class PlotRenderer {
         if (x.length <= 3 * columns) {
             float[][] p = new float[x.length][];
             for (int i = 0; i < x.length; i++) {
-                p[i] = new float[] {px + (float) (xFraction(plot, xs, x[i]) * pw), py + (float) (ys.fraction(y[i]) * ph)};
+                p[i] = toPage(plot, xs, ys, x[i], y[i], px, py, pw, ph);
             }
             return p;
         }
@@ -146,11 +146,16 @@ public final class PlotRenderer {
                 j++;
             }
             for (int k : lo <= hi ? new int[] {lo, hi} : new int[] {hi, lo}) {
-                out.add(new float[] {px + (float) (xFraction(plot, xs, x[k]) * pw), py + (float) (ys.fraction(y[k]) * ph)});
+                out.add(toPage(plot, xs, ys, x[k], y[k], px, py, pw, ph));
             }
             i = j;
         }
         return out.toArray(new float[0][]);
+    }
+
+    private static float[] toPage(Plot plot, AxisScale xs, AxisScale ys, double x, double y, float px, float py,
+            float pw, float ph) {
+        return new float[] {px + (float) (xFraction(plot, xs, x) * pw), py + (float) (ys.fraction(y) * ph)};
     }
 
     private void legend(PDPageContentStream cs, Plot plot, float px, float py, float pw, float ph) throws IOException {

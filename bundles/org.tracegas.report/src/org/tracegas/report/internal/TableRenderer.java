@@ -48,9 +48,6 @@ public final class TableRenderer {
             float h = height(lines);
             if (first || pw.y() - h < pw.bottom()) {
                 pw.ensure(headerHeight + h);
-                if (!first && !pw.atPageTop()) {
-                    pw.newPage();
-                }
                 drawRow(pw, headerLines, headerHeight, true);
                 first = false;
             }
