@@ -33,6 +33,6 @@ class ReportingBasisTest {
     @Test
     void describesTheBasis() {
         String d = new ReportingBasis(StandardConditions.EU_EMISSIONS, new OxygenCorrection(10, 20)).describe();
-        assertTrue(d.contains("dry") && d.contains("101.300 kPa") && d.contains("10 % O2"), d);
+        assertTrue(d.contains("dry") && d.contains("273.15 K, 101.3 kPa") && d.contains("10 % O2"), d);
     }
 }

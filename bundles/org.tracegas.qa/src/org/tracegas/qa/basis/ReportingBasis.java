@@ -3,7 +3,6 @@ package org.tracegas.qa.basis;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 
 import org.tracegas.qa.internal.Require;
@@ -30,13 +29,16 @@ public final class ReportingBasis {
         return Optional.ofNullable(oxygen);
     }
 
-    /** For example "mg/m³ dry, 273.15 K, 101.325 kPa, 10 % O2". */
+    /** For example "mg/m³ dry, 273.15 K, 101.3 kPa, 10 % O2". */
     public String describe() {
-        String base = String.format(Locale.ROOT, "mg/m³ dry, %.2f K, %.3f kPa", conditions.temperatureK(),
-                conditions.pressureKPa());
-        return oxygen == null ? base
-                : base + ", " + BigDecimal.valueOf(oxygen.referencePercent()).stripTrailingZeros().toPlainString()
-                        + " % O2";
+        String base = "mg/m³ dry, " + plain(conditions.temperatureK()) + " K, " + plain(conditions.pressureKPa())
+                + " kPa";
+        return oxygen == null ? base : base + ", " + plain(oxygen.referencePercent()) + " % O2";
+    }
+
+    // configured values as written (273.15, 101.3), not rounded
+    private static String plain(double v) {
+        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 
     /** One reading on this basis, or empty if its O2 lies at or above the guard of the oxygen correction. */
