@@ -23,6 +23,7 @@ public final class Quantifier {
     private final String libraryHash;
     private final String softwareVersion;
     private final boolean keepSpectra;
+    private final Sha256.SpectrumHasher hasher;
 
     /**
      * @param prepared        the prepared method
@@ -44,6 +45,7 @@ public final class Quantifier {
         this.libraryHash = libraryHash;
         this.softwareVersion = softwareVersion;
         this.keepSpectra = keepSpectra;
+        this.hasher = new Sha256.SpectrumHasher(prepared.axis());
     }
 
     public PreparedMethod prepared() {
@@ -58,7 +60,7 @@ public final class Quantifier {
      */
     public SpectrumResult quantify(Sample sample) {
         ReprocessingRecord record = new ReprocessingRecord(prepared.method().contentHash(), libraryHash,
-                softwareVersion, Sha256.ofSpectrum(sample.absorbance()));
+                softwareVersion, hasher.hash(sample.absorbance()));
         return new SpectrumResult(fit(sample), record);
     }
 
@@ -79,6 +81,7 @@ public final class Quantifier {
         double[] y = spectrum.toArray();
         QuantificationMethod method = prepared.method();
         SystemFit[] fits = new SystemFit[prepared.systemCount()];
+        RegionStatistics[] statistics = new RegionStatistics[fits.length];
         List<CompoundResult> results = new ArrayList<>(method.analytes().size());
         for (int a = 0; a < method.analytes().size(); a++) {
             int s = prepared.systemOfAnalyte(a);
@@ -86,9 +89,10 @@ public final class Quantifier {
             if (fits[s] == null) {
                 requireFinite(y, system);
                 fits[s] = system.fit(y);
+                statistics[s] = new RegionStatistics(system, fits[s], y);
             }
-            results.add(result(method, method.analytes().get(a), system, fits[s], prepared.columnOfAnalyte(a), y,
-                    spectrum, sample.background()));
+            results.add(result(method, method.analytes().get(a), system, fits[s], statistics[s],
+                    prepared.columnOfAnalyte(a), y, spectrum, sample.background()));
         }
         return results;
     }
@@ -101,8 +105,33 @@ public final class Quantifier {
         }
     }
 
+    /** Residual RMS per region and highest sample absorbance of one system's fit, shared by its analytes. */
+    private static final class RegionStatistics {
+        final double[] rms;
+        final double highest;
+        final int[] rows;
+
+        RegionStatistics(FitSystem system, SystemFit fit, double[] y) {
+            this.rows = system.rows();
+            double[] residual = fit.residual();
+            this.rms = new double[system.regions()];
+            double max = Double.NEGATIVE_INFINITY;
+            for (int r = 0; r < rms.length; r++) {
+                double sum = 0;
+                int from = system.regionStart(r);
+                int to = system.regionStart(r + 1);
+                for (int j = from; j < to; j++) {
+                    sum += residual[j] * residual[j];
+                    max = Math.max(max, y[rows[j]]);
+                }
+                rms[r] = Math.sqrt(sum / (to - from));
+            }
+            this.highest = max;
+        }
+    }
+
     private CompoundResult result(QuantificationMethod method, Analyte analyte, FitSystem system, SystemFit fit,
-            int column, double[] y, Spectrum spectrum, BackgroundAge background) {
+            RegionStatistics statistics, int column, double[] y, Spectrum spectrum, BackgroundAge background) {
         double path = method.pathLengthMetres();
         double amount = fit.amounts()[column];
         double concentration = amount / path;
@@ -121,28 +150,18 @@ public final class Quantifier {
         if (background != null && background.tooOld()) {
             flags.add(QualityFlag.BACKGROUND_TOO_OLD);
         }
-        int[] rows = system.rows();
-        double[] residual = fit.residual();
         List<RegionResidual> residuals = new ArrayList<>(system.regions());
-        double highest = Double.NEGATIVE_INFINITY;
         for (int r = 0; r < system.regions(); r++) {
-            double sum = 0;
-            int from = system.regionStart(r);
-            int to = system.regionStart(r + 1);
-            for (int j = from; j < to; j++) {
-                sum += residual[j] * residual[j];
-                highest = Math.max(highest, y[rows[j]]);
-            }
-            RegionResidual rr = new RegionResidual(analyte.regions().get(r), Math.sqrt(sum / (to - from)));
+            RegionResidual rr = new RegionResidual(analyte.regions().get(r), statistics.rms[r]);
             if (rr.aboveLimit()) {
                 flags.add(QualityFlag.RESIDUAL_ABOVE_LIMIT);
             }
             residuals.add(rr);
         }
-        if (highest > method.maxAbsorbance()) {
+        if (statistics.highest > method.maxAbsorbance()) {
             flags.add(QualityFlag.ABSORBANCE_TOO_HIGH);
         }
-        Optional<FitSpectra> spectra = keepSpectra ? Optional.of(spectra(spectrum, rows, fit, column, y))
+        Optional<FitSpectra> spectra = keepSpectra ? Optional.of(spectra(spectrum, statistics.rows, fit, column, y))
                 : Optional.empty();
         return new CompoundResult(analyte.compound(), concentration, uncertainty, detectionLimit,
                 method.reportingUnit(), residuals, flags, fit.iterations(), fit.shift(), fit.width(), spectra);

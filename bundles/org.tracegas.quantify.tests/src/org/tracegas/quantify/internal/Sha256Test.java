@@ -29,5 +29,11 @@ class Sha256Test {
         assertEquals(Sha256.hex(b.array()), Sha256.ofSpectrum(s));
         Spectrum positiveZero = s.withValues(new double[] {0.0, 0.25}, Ordinate.ABSORBANCE);
         org.junit.jupiter.api.Assertions.assertNotEquals(Sha256.ofSpectrum(s), Sha256.ofSpectrum(positiveZero));
+        Sha256.SpectrumHasher hasher = new Sha256.SpectrumHasher(s.axis());
+        assertEquals(Sha256.ofSpectrum(s), hasher.hash(s));
+        assertEquals(Sha256.ofSpectrum(positiveZero), hasher.hash(positiveZero));
+        Spectrum otherAxis = new Spectrum(SpectralAxis.of(AxisUnit.WAVENUMBER, 1000.0, 1001.0), new double[] {0, 1},
+                Ordinate.ABSORBANCE);
+        assertEquals(Sha256.ofSpectrum(otherAxis), hasher.hash(otherAxis));
     }
 }
