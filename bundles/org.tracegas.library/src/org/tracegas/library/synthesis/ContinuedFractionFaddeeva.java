@@ -1,7 +1,5 @@
 package org.tracegas.library.synthesis;
 
-import org.apache.commons.math3.complex.Complex;
-
 /**
  * w(z) by the Laplace continued fraction w(z) = (i / sqrt(pi)) / (z - (1/2) / (z - 1 / (z - (3/2) / (z - ...))))
  * for |z| &gt;= 8, where a few levels suffice, and by another function inside that circle. The continued fraction
@@ -28,7 +26,7 @@ public final class ContinuedFractionFaddeeva implements FaddeevaFunction {
     }
 
     @Override
-    public Complex value(double x, double y) {
+    public ComplexValue value(double x, double y) {
         double r2 = x * x + y * y;
         if (!(r2 >= INNER_RADIUS_SQUARED)) {
             return inner.value(x, y);
@@ -37,7 +35,7 @@ public final class ContinuedFractionFaddeeva implements FaddeevaFunction {
         double[] d = denominator(x, y, r2);
         double m = d[0] * d[0] + d[1] * d[1];
         // (i / sqrt(pi)) / (dr + i di)
-        return new Complex(INV_SQRT_PI * d[1] / m, INV_SQRT_PI * d[0] / m);
+        return new ComplexValue(INV_SQRT_PI * d[1] / m, INV_SQRT_PI * d[0] / m);
     }
 
     @Override

@@ -1,7 +1,5 @@
 package org.tracegas.library.synthesis;
 
-import org.apache.commons.math3.complex.Complex;
-
 /** The Faddeeva function w(z) = exp(-z^2) erfc(-iz) in the closed upper half plane, z = x + iy, y &gt;= 0. */
 public interface FaddeevaFunction {
 
@@ -10,11 +8,11 @@ public interface FaddeevaFunction {
      *
      * @throws IllegalArgumentException if y is negative or an argument is not finite
      */
-    Complex value(double x, double y);
+    ComplexValue value(double x, double y);
 
     /** Re w(x + iy), the Voigt function K(x, y); implementations may compute it faster than the whole value. */
     default double real(double x, double y) {
-        return value(x, y).getReal();
+        return value(x, y).re();
     }
 
     /**

@@ -1,7 +1,5 @@
 package org.tracegas.library.synthesis;
 
-import org.apache.commons.math3.complex.Complex;
-
 /**
  * w(z) by the rational expansion of J.A.C. Weideman, "Computation of the complex error function", SIAM J.
  * Numer. Anal. 31 (1994) 1497-1518: w(z) = 2 p(Z) / (L - iz)^2 + 1 / (sqrt(pi) (L - iz)), Z = (L + iz) / (L - iz),
@@ -60,7 +58,7 @@ public final class WeidemanFaddeeva implements FaddeevaFunction {
     }
 
     @Override
-    public Complex value(double x, double y) {
+    public ComplexValue value(double x, double y) {
         if (!(y >= 0) || !Double.isFinite(x) || !Double.isFinite(y)) {
             throw new IllegalArgumentException("w(z) needs finite x and y >= 0, was x = " + x + ", y = " + y);
         }
@@ -82,7 +80,7 @@ public final class WeidemanFaddeeva implements FaddeevaFunction {
         }
         double i2r = ir * ir - ii * ii;
         double i2i = 2.0 * ir * ii;
-        return new Complex(2.0 * (pr * i2r - pi * i2i) + INV_SQRT_PI * ir,
+        return new ComplexValue(2.0 * (pr * i2r - pi * i2i) + INV_SQRT_PI * ir,
                 2.0 * (pr * i2i + pi * i2r) + INV_SQRT_PI * ii);
     }
 }
