@@ -1,0 +1,47 @@
+package org.tracegas.benchmarks;
+
+import java.util.Random;
+import java.util.concurrent.TimeUnit;
+
+import org.openjdk.jmh.annotations.Benchmark;
+import org.openjdk.jmh.annotations.BenchmarkMode;
+import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
+import org.openjdk.jmh.annotations.Scope;
+import org.openjdk.jmh.annotations.Setup;
+import org.openjdk.jmh.annotations.State;
+import org.tracegas.preprocess.FftEngine;
+import org.tracegas.preprocess.RealFft;
+
+/** The two real FFT engines on the same data in one run; the faster one is the default engine. */
+@State(Scope.Thread)
+@BenchmarkMode(Mode.AverageTime)
+@OutputTimeUnit(TimeUnit.MICROSECONDS)
+public class PreprocessFftBenchmark {
+
+    @Param({"JTRANSFORMS", "COMMONS_MATH"})
+    public FftEngine engine;
+
+    @Param({"32768"})
+    public int size;
+
+    private RealFft fft;
+    private double[] input;
+    private double[] re;
+    private double[] im;
+
+    @Setup
+    public void setUp() {
+        fft = engine.create(size);
+        input = new Random(42).doubles(size).toArray();
+        re = new double[size / 2 + 1];
+        im = new double[size / 2 + 1];
+    }
+
+    @Benchmark
+    public double[] forward() {
+        fft.forward(input, re, im);
+        return re;
+    }
+}
