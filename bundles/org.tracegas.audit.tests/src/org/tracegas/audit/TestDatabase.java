@@ -90,7 +90,7 @@ abstract class TestDatabase implements AutoCloseable {
 
         @Override
         String url() {
-            return "jdbc:h2:file:" + dir.resolve("audit") + ";LOCK_TIMEOUT=30000";
+            return "jdbc:h2:file:" + dir.resolve("audit") + ";LOCK_TIMEOUT=30000;WRITE_DELAY=0";
         }
 
         @Override
