@@ -16,6 +16,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.library.Compound;
 import org.tracegas.library.OriginKind;
+import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.ReferenceSpectrum;
 import org.tracegas.preprocess.Apodization;
 import org.tracegas.spectrum.AxisUnit;
@@ -72,6 +73,24 @@ class ReferenceSynthesizerTest {
         assertEquals(0.5, r.metadata().conditions().resolution(), 0);
         assertEquals(0.03, r.metadata().relativeUncertainty(), 0);
         assertTrue(r.toString().contains("synthetic (line by line from one line (1 lines)"), r.toString());
+    }
+
+    /** Synthesis is deterministic: a library of the same synthetic references has the same content hash. */
+    @Test
+    void severalConcentrationsMakeAReproducibleSyntheticLibrary() {
+        ReferenceSynthesizer synthesizer = new ReferenceSynthesizer(
+                LineByLineModelTest.singleLine(1e-20, 0.07, LineCutoff.standard()), CO);
+        SpectralAxis axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2080.0, 0.25, 161);
+        List<ReferenceSpectrum> first = new ArrayList<>();
+        List<ReferenceSpectrum> second = new ArrayList<>();
+        for (double ppm : new double[] {10, 100, 1000}) {
+            first.add(synthesizer.synthesize(request(ppm, 1.0, axis)));
+            second.add(0, synthesizer.synthesize(request(ppm, 1.0, axis)));
+        }
+        ReferenceLibrary a = new ReferenceLibrary("synthetic CO", first);
+        assertEquals(a.contentHash(), new ReferenceLibrary("synthetic CO", second).contentHash());
+        assertEquals(3, a.referencesFor("630-08-0").size());
+        assertTrue(a.references().stream().allMatch(ReferenceSpectrum::isSynthetic));
     }
 
     /**
