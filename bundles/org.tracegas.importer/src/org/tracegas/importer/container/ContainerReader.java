@@ -23,6 +23,7 @@ import java.util.zip.CRC32;
 
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.UncheckedImportException;
+import org.tracegas.importer.internal.Numbers;
 import org.tracegas.spectrum.Interferogram;
 
 /**
@@ -233,15 +234,11 @@ public final class ContainerReader implements Iterator<ContainerRecord>, Closeab
 
     private double real(Map<String, String> fields, String key, long n) throws ImportException {
         String v = required(fields, key, n);
-        try {
-            double d = Double.parseDouble(v);
-            if (Double.isFinite(d) && v.matches("[+-]?[0-9.eE+-]+")) {
-                return d;
-            }
-        } catch (NumberFormatException e) {
-            // reported below
+        Double d = Numbers.parseDecimal(v);
+        if (d == null || !Double.isFinite(d)) {
+            throw new ImportException(source, n, key, "not a finite number: '" + Numbers.shown(v) + "'");
         }
-        throw new ImportException(source, n, key, "not a finite number: '" + v + "'");
+        return d;
     }
 
     private long integer(Map<String, String> fields, String key, long n) throws ImportException {

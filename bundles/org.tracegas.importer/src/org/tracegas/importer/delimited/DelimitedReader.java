@@ -16,6 +16,7 @@ import org.tracegas.importer.ImportedSpectrum;
 import org.tracegas.importer.Recognition;
 import org.tracegas.importer.delimited.internal.ColumnUnits;
 import org.tracegas.importer.delimited.internal.Dialect;
+import org.tracegas.importer.internal.Numbers;
 import org.tracegas.importer.internal.WholeFile;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.SpectralAxis;
@@ -198,7 +199,7 @@ public final class DelimitedReader implements ImportReader {
             String lower = field.toLowerCase(Locale.ROOT);
             String why = lower.contains("nan") || lower.contains("inf") ? "not a finite number"
                     : field.isEmpty() ? "empty field" : "not a number";
-            throw new ImportException(source, line, header, why + ": '" + field + "'");
+            throw new ImportException(source, line, header, why + ": '" + Numbers.shown(field) + "'");
         }
         return v;
     }

@@ -16,6 +16,7 @@ import java.util.regex.Pattern;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ImportOptions;
 import org.tracegas.importer.delimited.internal.Dialect;
+import org.tracegas.importer.internal.Numbers;
 import org.tracegas.importer.internal.WholeFile;
 
 /**
@@ -98,7 +99,7 @@ public final class SideChannelReader {
             }
             Instant t = parseTime(f[0]);
             if (t == null) {
-                throw new ImportException(source, lineNo, header[0], "not a time: '" + f[0] + "'"
+                throw new ImportException(source, lineNo, header[0], "not a time: '" + Numbers.shown(f[0]) + "'"
                         + (looksLocal(f[0]) ? " (no offset and no local zone given)" : ""));
             }
             times[r] = t.toEpochMilli();
@@ -112,7 +113,7 @@ public final class SideChannelReader {
                 if (v == null || !Double.isFinite(v)) {
                     String lower = f[c].toLowerCase(Locale.ROOT);
                     throw new ImportException(source, lineNo, header[c], (lower.contains("nan") ? "not a finite number"
-                            : f[c].isEmpty() ? "empty field" : "not a number") + ": '" + f[c] + "'");
+                            : f[c].isEmpty() ? "empty field" : "not a number") + ": '" + Numbers.shown(f[c]) + "'");
                 }
                 values[c - 1][r] = v;
             }

@@ -3,6 +3,8 @@ package org.tracegas.importer.delimited.internal;
 import java.util.List;
 import java.util.regex.Pattern;
 
+import org.tracegas.importer.internal.Numbers;
+
 /**
  * Field separator and decimal mark of delimited text, found from the first lines: the separator that splits
  * most lines into the same number (at least two) of fields; tab before semicolon before comma. A decimal comma is
@@ -13,7 +15,7 @@ import java.util.regex.Pattern;
  */
 public record Dialect(char separator, boolean decimalComma) {
 
-    private static final Pattern DECIMAL_COMMA = Pattern.compile("[+-]?\\d+,\\d+([eE][+-]?\\d+)?");
+    private static final Pattern DECIMAL_COMMA = Pattern.compile("[+-]?\\d++,\\d++(?:[eE][+-]?\\d++)?");
     private static final char[] CANDIDATES = {'\t', ';', ','};
 
     /**
@@ -63,11 +65,7 @@ public record Dialect(char separator, boolean decimalComma) {
 
     /** The number in a field, or null when the field is not a plain decimal number. */
     public Double number(String field) {
-        String s = decimalComma ? field.replace(',', '.') : field;
-        if (!s.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?")) {
-            return null;
-        }
-        return Double.parseDouble(s);
+        return Numbers.parseDecimal(decimalComma ? field.replace(',', '.') : field);
     }
 
     public String describe() {

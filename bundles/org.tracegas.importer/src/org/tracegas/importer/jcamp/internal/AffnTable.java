@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.Locale;
 
 import org.tracegas.importer.ImportException;
+import org.tracegas.importer.internal.Numbers;
 
 /** Decodes an (XY..XY) table (##XYPOINTS, ##PEAK TABLE): AFFN pairs separated by blanks, commas or semicolons. */
 public final class AffnTable {
@@ -59,20 +60,15 @@ public final class AffnTable {
     private static double parse(String token, String source, int lineNo, String field) throws ImportException {
         String lower = token.toLowerCase(Locale.ROOT);
         if (lower.contains("nan") || lower.contains("inf")) {
-            throw new ImportException(source, lineNo, field, "not a finite number: '" + token + "'");
+            throw new ImportException(source, lineNo, field, "not a finite number: '" + Numbers.shown(token) + "'");
         }
-        try {
-            // parseDouble accepts "1d", "0x1p3" and the like; AFFN is plain decimal
-            if (!token.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?")) {
-                throw new NumberFormatException();
-            }
-            double v = Double.parseDouble(token);
-            if (!Double.isFinite(v)) {
-                throw new ImportException(source, lineNo, field, "number out of range: '" + token + "'");
-            }
-            return v;
-        } catch (NumberFormatException e) {
-            throw new ImportException(source, lineNo, field, "malformed number '" + token + "'");
+        Double v = Numbers.parseDecimal(token);
+        if (v == null) {
+            throw new ImportException(source, lineNo, field, "malformed number '" + Numbers.shown(token) + "'");
         }
+        if (!Double.isFinite(v)) {
+            throw new ImportException(source, lineNo, field, "number out of range: '" + Numbers.shown(token) + "'");
+        }
+        return v;
     }
 }

@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.Locale;
 
 import org.tracegas.importer.ImportException;
+import org.tracegas.importer.internal.Numbers;
 
 /**
  * Decodes one line of an ##XYDATA=(X++(Y..Y)) table written in the ASCII squeezed difference form (ASDF) or
@@ -132,10 +133,10 @@ public final class AsdfDecoder {
         try {
             v = Double.parseDouble(text);
         } catch (NumberFormatException e) {
-            throw error("malformed number '" + text + "'");
+            throw error("malformed number '" + Numbers.shown(text) + "'");
         }
         if (!Double.isFinite(v)) {
-            throw error("number '" + text + "' is not finite");
+            throw error("number '" + Numbers.shown(text) + "' is not finite");
         }
         if (kind == Kind.DIF) {
             if (count == 0) {
@@ -162,7 +163,7 @@ public final class AsdfDecoder {
             throw error("repeat count (DUP) follows another repeat count");
         }
         if (text.length() > 9) {
-            throw error("repeat count " + text + " is too large");
+            throw error("repeat count " + Numbers.shown(text) + " is too large");
         }
         int times = Integer.parseInt(text);
         if (times < 1) {

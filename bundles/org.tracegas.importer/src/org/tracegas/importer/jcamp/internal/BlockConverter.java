@@ -10,6 +10,7 @@ import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ImportedInterferogram;
 import org.tracegas.importer.ImportedRecord;
 import org.tracegas.importer.ImportedSpectrum;
+import org.tracegas.importer.internal.Numbers;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Interferogram;
 import org.tracegas.spectrum.Ordinate;
@@ -49,7 +50,7 @@ public final class BlockConverter {
     public void convert(Block block, List<ImportedRecord> out) throws ImportException {
         requireVersion(block);
         if (!block.isLinkBlock()) {
-            out.add(convertData(block, Map.of()));
+            out.add(checkedData(block, Map.of()));
             return;
         }
         Ldr blocks = block.find("BLOCKS");
@@ -67,7 +68,7 @@ public final class BlockConverter {
                 throw new ImportException(source, child.startLine(), "##BLOCK_ID",
                         "a block inside a linked block needs ##BLOCK_ID=");
             }
-            out.add(convertData(child, linkMetadata));
+            out.add(checkedData(child, linkMetadata));
         }
     }
 
@@ -80,6 +81,16 @@ public final class BlockConverter {
         if (!(v.startsWith("4.") || v.startsWith("5."))) {
             throw new ImportException(source, version.line(), "##" + version.rawLabel(),
                     "unsupported version '" + v + "' (4.24 and 5.01 are read)");
+        }
+    }
+
+    /** Values that pass the label checks can still be out of range for the value objects (overflowing axes). */
+    private ImportedRecord checkedData(Block block, Map<String, String> inherited) throws ImportException {
+        try {
+            return convertData(block, inherited);
+        } catch (IllegalArgumentException e) {
+            throw new ImportException(source, block.startLine(), "block", "values out of range: "
+                    + e.getMessage(), e);
         }
     }
 
@@ -268,6 +279,11 @@ public final class BlockConverter {
             return deltaLdr == null ? 1.0 : real(deltaLdr);
         }
         double computed = (lastX - firstX) / (n - 1);
+        if (!Double.isFinite(computed)) {
+            Ldr last = block.find("LASTX");
+            throw new ImportException(source, last.line(), "##" + last.rawLabel(),
+                    "the span from ##FIRSTX to ##LASTX exceeds the range of numbers");
+        }
         if (computed == 0) {
             Ldr last = block.find("LASTX");
             throw new ImportException(source, last.line(), "##" + last.rawLabel(),
@@ -316,18 +332,12 @@ public final class BlockConverter {
 
     private double real(Ldr r) throws ImportException {
         String text = r.fullValue().trim();
-        try {
-            if (!text.matches("[+-]?(\\d+\\.?\\d*|\\.\\d+)([eE][+-]?\\d+)?")) {
-                throw new NumberFormatException();
-            }
-            double v = Double.parseDouble(text);
-            if (Double.isFinite(v)) {
-                return v;
-            }
-        } catch (NumberFormatException e) {
-            // reported below
+        Double v = Numbers.parseDecimal(text);
+        if (v == null || !Double.isFinite(v)) {
+            throw new ImportException(source, r.line(), "##" + r.rawLabel(), "not a finite number: '"
+                    + Numbers.shown(text) + "'");
         }
-        throw new ImportException(source, r.line(), "##" + r.rawLabel(), "not a finite number: '" + text + "'");
+        return v;
     }
 
     private long integer(Ldr r, long min, long max) throws ImportException {
@@ -336,7 +346,7 @@ public final class BlockConverter {
         try {
             v = Long.parseLong(text);
         } catch (NumberFormatException e) {
-            throw new ImportException(source, r.line(), "##" + r.rawLabel(), "not an integer: '" + text + "'");
+            throw new ImportException(source, r.line(), "##" + r.rawLabel(), "not an integer: '" + Numbers.shown(text) + "'");
         }
         if (v < min || v > max) {
             throw new ImportException(source, r.line(), "##" + r.rawLabel(), v + " lies outside " + min + ".." + max);
