@@ -27,7 +27,8 @@ class TwoColumnTextSourceTest {
 
     @Test
     void readsEvenlySpacedColumnsAsAUniformAxis() throws IOException {
-        Spectrum s = new TwoColumnTextSource().read(write("a.txt", "# CO\n2000.0, 0.01\n2000.25;0.02\n\n2000.5 0.03\n"));
+        Spectrum s = new TwoColumnTextSource()
+                .read(write("a.txt", "# CO\n2000.0, 0.01\n2000.25;0.02\n\n2000.5 0.03\n"));
         assertTrue(s.axis().isUniform());
         assertEquals(0.25, s.axis().step(), 1e-12);
         assertEquals(3, s.size());

@@ -24,7 +24,8 @@ class LineListTest {
 
     @Test
     void rejectsAnEmptyListByName() {
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new LineList("co.par", List.of()));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> new LineList("co.par", List.of()));
         assertTrue(e.getMessage().contains("co.par"), e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> at(-1));
     }

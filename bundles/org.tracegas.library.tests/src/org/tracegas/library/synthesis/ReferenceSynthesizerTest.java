@@ -108,7 +108,8 @@ class ReferenceSynthesizerTest {
         double thick = integral(synthesizer.synthesize(request(1000.0, 1.0, axis)));
         double thick4 = integral(synthesizer.synthesize(request(4000.0, 1.0, axis)));
         assertEquals(4.0, thin4 / thin, 0.01);
-        assertTrue(thick / 10000 < 0.8 * thin, "per-ppm area must fall once saturated: " + thick / 10000 + " vs " + thin);
+        assertTrue(thick / 10000 < 0.8 * thin,
+                "per-ppm area must fall once saturated: " + thick / 10000 + " vs " + thin);
         assertTrue(thick4 / thick < 3.0, "four times the amount gave " + thick4 / thick + " times the area");
     }
 
@@ -127,7 +128,8 @@ class ReferenceSynthesizerTest {
     @Test
     void synthesizesFromSeveralThousandLinesInSeconds() throws IOException {
         List<String> records = new ArrayList<>();
-        SyntheticLineListGenerator.coLikeBand(5000, 42).forEach(l -> records.add(SyntheticLineListGenerator.record(l)));
+        SyntheticLineListGenerator.coLikeBand(5000, 42)
+                .forEach(l -> records.add(SyntheticLineListGenerator.record(l)));
         Path file = dir.resolve("co-like.par");
         Files.write(file, records);
         LineList lines = new HitranLineListReader().read(file);

@@ -28,8 +28,9 @@ final class SyntheticLineListGenerator {
         for (int i = 0; i < weakLines; i++) {
             double v = 1900.0 + 500.0 * random.nextDouble();
             double s = Math.pow(10.0, -26.0 + 4.0 * random.nextDouble());
-            lines.add(new SpectralLine(5, 3, round(v, 6), roundSignificant(s), 1.0, round(0.05 + 0.04 * random.nextDouble(), 4),
-                    round(0.06 + 0.03 * random.nextDouble(), 3), round(2000.0 * random.nextDouble(), 4),
+            lines.add(new SpectralLine(5, 3, round(v, 6), roundSignificant(s), 1.0,
+                    round(0.05 + 0.04 * random.nextDouble(), 4), round(0.06 + 0.03 * random.nextDouble(), 3),
+                    round(2000.0 * random.nextDouble(), 4),
                     round(0.6 + 0.2 * random.nextDouble(), 2), round(-0.004 * random.nextDouble(), 6)));
         }
         return lines;

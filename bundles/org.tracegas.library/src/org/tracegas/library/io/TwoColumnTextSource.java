@@ -38,8 +38,8 @@ public final class TwoColumnTextSource implements ReferenceSpectrumSource {
                 }
                 String[] parts = t.split("\\s*[,;\\s]\\s*");
                 if (parts.length != 2) {
-                    throw new FileFormatException(file, lineNumber, "", "expected 2 columns (wavenumber, absorbance), found "
-                            + parts.length);
+                    throw new FileFormatException(file, lineNumber, "",
+                            "expected 2 columns (wavenumber, absorbance), found " + parts.length);
                 }
                 if (n == x.length) {
                     x = Arrays.copyOf(x, 2 * n);

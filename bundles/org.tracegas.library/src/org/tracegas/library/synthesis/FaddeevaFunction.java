@@ -17,7 +17,7 @@ public interface FaddeevaFunction {
 
     /**
      * Accurate w(z) for line-by-line synthesis: Weideman with N = 40 for |z| &lt; 8, the Laplace continued fraction
-     * beyond; within a relative 1e-9 of SciPy's wofz and 1.4e-9 of its voigt_profile on their reference grids.
+     * beyond; within a relative 4e-10 of SciPy's wofz and 1.4e-9 of its voigt_profile on their reference grids.
      */
     static FaddeevaFunction standard() {
         return new ContinuedFractionFaddeeva(new WeidemanFaddeeva(40));

@@ -6,11 +6,12 @@ package org.tracegas.library.synthesis;
  * p a polynomial of degree N - 1 whose coefficients are computed once from a discrete cosine sum, L =
  * sqrt(N / sqrt 2).
  * <p>
- * Accuracy against SciPy's {@code wofz}, relative, in each of the real and imaginary parts: with N = 32 about
- * 3e-7 on SciPy's reference grid, worst near the real axis where Re w is a small part of |w|; on the Voigt
- * reference grid the real part at x = 21, y = 7e-7 is 1.5e-6 off, so N = 32 alone misses a relative 1e-6. With
- * N = 40 the error is below 1e-9 on both grids. Beyond |z| = 8 {@link ContinuedFractionFaddeeva} is both more
- * accurate and cheaper. Humlicek's W4 (1982) was not used because it reaches only about 1e-4.
+ * Accuracy against SciPy's {@code wofz} and {@code voigt_profile}, relative, in each of the real and imaginary
+ * parts, on the SciPy reference grids: with N = 32 about 2.6e-7 on the wofz grid, worst near the real axis where
+ * Re w is a small part of |w|, and 1.5e-6 on the Voigt grid (real part at x = 21, y = 7e-7), so N = 32 alone
+ * misses a relative 1e-6. With N = 40: 3.8e-10 on the wofz grid, 1.4e-9 on the Voigt grid. Beyond |z| = 8
+ * {@link ContinuedFractionFaddeeva} is both more accurate and cheaper. Humlicek's W4 (1982) was not used
+ * because it reaches only about 1e-4.
  */
 public final class WeidemanFaddeeva implements FaddeevaFunction {
 
