@@ -87,6 +87,25 @@ class InterferogramTransformTest {
     }
 
     @Test
+    void recordingReversedInPathDifferenceGivesTheSameSingleBeam() {
+        // a reversed interferogram has the complex conjugate spectrum; the Mertz phase removes either phase
+        double dx = SyntheticInterferogram.INTERVAL / SyntheticInterferogram.LASER;
+        Interferogram forward = SyntheticInterferogram.of(4096, 200, 0.2 * dx, 1, LINES);
+        double[] x = forward.toArray();
+        double[] reversed = new double[x.length];
+        for (int i = 0; i < x.length; i++) {
+            reversed[i] = x[x.length - 1 - i];
+        }
+        InterferogramTransform t = new InterferogramTransform(TransformSettings.defaults());
+        Spectrum a = t.singleBeam(forward);
+        Spectrum b = t.singleBeam(new Interferogram(reversed, forward.laserWavenumber(), forward.samplingInterval()));
+        int peak = a.axis().nearestIndex(LINES[0]);
+        for (int i = 0; i < a.size(); i++) {
+            assertEquals(a.get(i), b.get(i), 1e-9 * a.get(peak), "point " + i);
+        }
+    }
+
+    @Test
     void burstCentreFindsTheSameZpdForASymmetricBurst() {
         Interferogram ifg = SyntheticInterferogram.of(4096, 200, 0, 1, LINES);
         Spectrum largest = new InterferogramTransform(TransformSettings.defaults()).singleBeam(ifg);

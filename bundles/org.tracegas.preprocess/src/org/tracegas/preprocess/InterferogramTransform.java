@@ -1,7 +1,5 @@
 package org.tracegas.preprocess;
 
-import java.util.Arrays;
-
 import org.tracegas.preprocess.internal.MertzPhase;
 import org.tracegas.preprocess.internal.TransformWindow;
 import org.tracegas.preprocess.internal.ZpdLocator;
@@ -66,8 +64,9 @@ public final class InterferogramTransform {
             throw new IllegalArgumentException("interferogram must not be null");
         }
         int n = interferogram.size();
-        double[] x = removeDc(interferogram);
-        int zpd = ZpdLocator.locate(x, n, settings.zpdSearch(), settings.phasePoints() / 2);
+        double[] x = copySamples(interferogram);
+        double dc = mean(x, n);
+        int zpd = ZpdLocator.locate(x, n, dc, settings.zpdSearch(), settings.phasePoints() / 2);
         int before = zpd;
         int after = n - 1 - zpd;
         int direction = after >= before ? 1 : -1;
@@ -77,8 +76,7 @@ public final class InterferogramTransform {
         double spacing = interferogram.sampleSpacingCm();
         int size = settings.zeroFillFactor() * (Integer.highestOneBit(shortSide + longSide) << 1);
         prepare(size, shortSide, longSide, spacing);
-        Arrays.fill(buffer, 0.0);
-        window.weigh(x, zpd, direction, buffer);
+        window.weigh(x, dc, zpd, direction, buffer);
         fft.forward(buffer, re, im);
 
         double step = 1.0 / (size * spacing);
@@ -94,7 +92,7 @@ public final class InterferogramTransform {
             out = new double[count];
         }
         if (settings.phaseCorrection() == PhaseCorrection.MERTZ) {
-            phase.measure(x, zpd, direction, Math.min(shortSide, settings.phasePoints() / 2));
+            phase.measure(x, dc, zpd, direction, Math.min(shortSide, settings.phasePoints() / 2));
             phase.correct(re, im, size, kLow, out);
         } else {
             for (int i = 0; i < count; i++) {
@@ -108,22 +106,24 @@ public final class InterferogramTransform {
         return new Spectrum(axis, out, Ordinate.SINGLE_BEAM);
     }
 
-    private double[] removeDc(Interferogram interferogram) {
+    private double[] copySamples(Interferogram interferogram) {
         int n = interferogram.size();
         if (samples.length < n) {
             samples = new double[n];
         }
-        double sum = 0.0;
         for (int i = 0; i < n; i++) {
-            double v = interferogram.get(i);
-            samples[i] = v;
-            sum += v;
-        }
-        double mean = sum / n;
-        for (int i = 0; i < n; i++) {
-            samples[i] -= mean;
+            samples[i] = interferogram.get(i);
         }
         return samples;
+    }
+
+    /** The DC level, taken off in the later passes rather than in a pass of its own. */
+    private static double mean(double[] x, int n) {
+        double sum = 0.0;
+        for (int i = 0; i < n; i++) {
+            sum += x[i];
+        }
+        return sum / n;
     }
 
     private void checkSides(int zpd, int n, int shortSide, int longSide) {

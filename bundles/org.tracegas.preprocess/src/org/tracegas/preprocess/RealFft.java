@@ -13,7 +13,7 @@ public interface RealFft {
     /**
      * Forward transform.
      *
-     * @param input n real values, not modified
+     * @param input n real values; overwritten (used as work space, which saves a copy)
      * @param re    receives Re X[k], k = 0 .. n/2 (length at least n/2 + 1)
      * @param im    receives Im X[k], k = 0 .. n/2 (length at least n/2 + 1)
      */

@@ -66,7 +66,7 @@ final class NumpyRfftReference {
         double[] x = signal();
         double[] re2 = new double[n / 2 + 1];
         double[] im2 = new double[n / 2 + 1];
-        fft.forward(x, re2, im2);
+        fft.forward(x.clone(), re2, im2); // forward may overwrite its input
         double largest = 0;
         for (int k = 0; k < re.length; k++) {
             largest = Math.max(largest, Math.hypot(re[k], im[k]));

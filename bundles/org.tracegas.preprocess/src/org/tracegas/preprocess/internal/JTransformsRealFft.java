@@ -8,13 +8,11 @@ public final class JTransformsRealFft implements RealFft {
 
     private final int n;
     private final DoubleFFT_1D plan;
-    private final double[] work;
 
     public JTransformsRealFft(int size) {
         RealFftChecks.requireEvenSize(size);
         this.n = size;
         this.plan = new DoubleFFT_1D(size);
-        this.work = new double[size];
     }
 
     @Override
@@ -25,17 +23,16 @@ public final class JTransformsRealFft implements RealFft {
     @Override
     public void forward(double[] input, double[] re, double[] im) {
         RealFftChecks.requireArrays(n, input, re, im);
-        System.arraycopy(input, 0, work, 0, n);
-        plan.realForward(work);
-        // packed layout: work[0] = Re X0, work[1] = Re X(n/2), then (Re, Im) pairs
+        plan.realForward(input);
+        // packed layout in place: input[0] = Re X0, input[1] = Re X(n/2), then (Re, Im) pairs
         int half = n / 2;
-        re[0] = work[0];
+        re[0] = input[0];
         im[0] = 0.0;
-        re[half] = work[1];
+        re[half] = input[1];
         im[half] = 0.0;
         for (int k = 1; k < half; k++) {
-            re[k] = work[2 * k];
-            im[k] = work[2 * k + 1];
+            re[k] = input[2 * k];
+            im[k] = input[2 * k + 1];
         }
     }
 

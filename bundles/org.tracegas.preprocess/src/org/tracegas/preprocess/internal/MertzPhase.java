@@ -24,12 +24,13 @@ public final class MertzPhase {
     /**
      * Measures the phase.
      *
-     * @param x         interferogram without DC level
+     * @param x         interferogram
+     * @param dc        its DC level, taken off
      * @param zpd       ZPD sample
      * @param direction +1 if the long side follows ZPD, -1 if it precedes it
      * @param half      points taken on each side of ZPD (at least 1, and available on both sides)
      */
-    public void measure(double[] x, int zpd, int direction, int half) {
+    public void measure(double[] x, double dc, int zpd, int direction, int half) {
         int size = Integer.highestOneBit(2 * half - 1) << 1;
         if (fft == null || fft.size() != size) {
             fft = engine.create(size);
@@ -40,7 +41,7 @@ public final class MertzPhase {
         java.util.Arrays.fill(work, 0.0);
         for (int j = 1 - half; j < half; j++) {
             double w = Apodization.TRIANGULAR.weight((double) j / half);
-            work[j < 0 ? size + j : j] = w * x[zpd + direction * j];
+            work[j < 0 ? size + j : j] = w * (x[zpd + direction * j] - dc);
         }
         fft.forward(work, cos, sin);
         for (int k = 0; k < cos.length; k++) {

@@ -42,18 +42,25 @@ public final class TransformWindow {
     }
 
     /**
-     * Writes the weighted samples into a zeroed transform buffer with ZPD at index 0 and the offsets before ZPD
-     * wrapped to the end.
+     * Fills a transform buffer: the weighted samples less their DC level with ZPD at index 0, the offsets before
+     * ZPD wrapped to the end, and zeros between (zero filling).
      *
      * @param direction +1 if the long side follows ZPD, -1 if it precedes it
      */
-    public void weigh(double[] x, int zpd, int direction, double[] buffer) {
+    public void weigh(double[] x, double dc, int zpd, int direction, double[] buffer) {
         int size = buffer.length;
-        for (int j = 0; j <= longSide; j++) {
-            buffer[j] = x[zpd + direction * j] * weights[j + shortSide];
+        if (direction > 0) {
+            for (int j = 0; j <= longSide; j++) {
+                buffer[j] = (x[zpd + j] - dc) * weights[j + shortSide];
+            }
+        } else {
+            for (int j = 0; j <= longSide; j++) {
+                buffer[j] = (x[zpd - j] - dc) * weights[j + shortSide];
+            }
         }
+        java.util.Arrays.fill(buffer, longSide + 1, size - shortSide, 0.0);
         for (int j = 1; j <= shortSide; j++) {
-            buffer[size - j] = x[zpd - direction * j] * weights[shortSide - j];
+            buffer[size - j] = (x[zpd - direction * j] - dc) * weights[shortSide - j];
         }
     }
 }

@@ -2,24 +2,25 @@ package org.tracegas.preprocess.internal;
 
 import org.tracegas.preprocess.ZpdSearch;
 
-/** Finds the zero path difference sample of an interferogram whose DC level has been removed. */
+/** Finds the zero path difference sample of an interferogram. */
 public final class ZpdLocator {
 
     private ZpdLocator() {
     }
 
     /**
-     * @param x          samples without DC level
+     * @param x          samples
      * @param n          number of samples used from x
+     * @param dc         DC level of the samples (their mean), taken off before comparing
      * @param search     method
      * @param halfWindow half width in samples of the region searched for the burst centre
      * @return the ZPD sample index
      */
-    public static int locate(double[] x, int n, ZpdSearch search, int halfWindow) {
+    public static int locate(double[] x, int n, double dc, ZpdSearch search, int halfWindow) {
         int largest = 0;
         double largestMagnitude = -1.0;
         for (int i = 0; i < n; i++) {
-            double a = Math.abs(x[i]);
+            double a = Math.abs(x[i] - dc);
             if (a > largestMagnitude) {
                 largestMagnitude = a;
                 largest = i;
@@ -33,7 +34,7 @@ public final class ZpdLocator {
         double weight = 0.0;
         double moment = 0.0;
         for (int i = from; i <= to; i++) {
-            double e = x[i] * x[i];
+            double e = (x[i] - dc) * (x[i] - dc);
             weight += e;
             moment += e * i;
         }
