@@ -11,6 +11,8 @@ import java.time.Instant;
 import java.util.List;
 import java.util.Map;
 
+import org.eclipse.core.runtime.IExtensionRegistry;
+import org.eclipse.core.runtime.RegistryFactory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.importer.container.AcquisitionHeader;
@@ -21,6 +23,13 @@ import org.tracegas.importer.jcamp.JcampReader;
 import org.tracegas.spectrum.Interferogram;
 
 class ReaderRegistryTest {
+
+    /** The running platform's registry in an OSGi test runtime, otherwise one read from the source tree. */
+    static IExtensionRegistry extensions() throws Exception {
+        IExtensionRegistry running = RegistryFactory.getRegistry();
+        return running != null ? running
+                : StandaloneExtensions.fromSourceTree(ReaderRegistryTest.class.getClassLoader(), "org.tracegas.importer");
+    }
 
     @TempDir
     Path dir;
@@ -35,7 +44,7 @@ class ReaderRegistryTest {
 
     @Test
     void builtInReadersComeFromPluginXml() throws Exception {
-        ReaderRegistry registry = ReaderRegistry.fromExtensionRegistry(PluginXml.registry("org.tracegas.importer"));
+        ReaderRegistry registry = ReaderRegistry.fromExtensionRegistry(extensions());
         List<String> ids = registry.contributions().stream().map(ReaderContribution::id).toList();
         assertTrue(ids.containsAll(List.of("org.tracegas.importer.jcamp", "org.tracegas.importer.delimited",
                 "org.tracegas.importer.container")), ids.toString());
@@ -44,7 +53,7 @@ class ReaderRegistryTest {
 
     @Test
     void choosesByContentNotByName() throws Exception {
-        ReaderRegistry registry = ReaderRegistry.fromExtensionRegistry(PluginXml.registry("org.tracegas.importer"));
+        ReaderRegistry registry = ReaderRegistry.fromExtensionRegistry(extensions());
         // a JCAMP-DX file with a misleading name
         Path jcamp = copy("jcamp/dif.jdx", "looks-like.csv");
         assertEquals("org.tracegas.importer.jcamp", registry.choose(jcamp).contribution().id());
@@ -70,6 +79,13 @@ class ReaderRegistryTest {
         Path empty = Files.createFile(dir.resolve("empty.jdx"));
         assertEquals("file", assertThrows(ImportException.class, () -> registry.read(empty,
                 ImportOptions.defaults())).field());
+    }
+
+    @Test
+    void missingPluginXmlIsNamed() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> StandaloneExtensions.fromSourceTree(getClass().getClassLoader(), "org.tracegas.nonexistent"));
+        assertTrue(e.getMessage().contains("org.tracegas.nonexistent"), e.getMessage());
     }
 
     @Test

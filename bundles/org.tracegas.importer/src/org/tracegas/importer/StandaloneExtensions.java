@@ -4,6 +4,8 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.Paths;
+import java.util.LinkedHashMap;
 import java.util.Map;
 
 import org.eclipse.core.runtime.ContributorFactorySimple;
@@ -43,6 +45,34 @@ public final class StandaloneExtensions {
             }
         }
         return registry;
+    }
+
+    /**
+     * A registry from the plugin.xml files of bundles in a source tree: each bundle is looked up as
+     * {@code <id>/plugin.xml} or {@code bundles/<id>/plugin.xml} in the working directory and its parents.
+     *
+     * @throws IllegalArgumentException naming the bundle whose plugin.xml is not found
+     */
+    public static IExtensionRegistry fromSourceTree(ClassLoader loader, String... bundleIds) throws IOException {
+        Map<String, Path> files = new LinkedHashMap<>();
+        for (String id : bundleIds) {
+            files.put(id, find(id));
+        }
+        return create(loader, files);
+    }
+
+    private static Path find(String bundleId) {
+        Path start = Paths.get("").toAbsolutePath();
+        for (Path dir = start; dir != null; dir = dir.getParent()) {
+            for (Path candidate : new Path[] {dir.resolve(bundleId).resolve("plugin.xml"),
+                    dir.resolve("bundles").resolve(bundleId).resolve("plugin.xml")}) {
+                if (Files.isRegularFile(candidate)) {
+                    return candidate;
+                }
+            }
+        }
+        throw new IllegalArgumentException("plugin.xml of bundle " + bundleId + " not found in " + start
+                + " or its parents");
     }
 
     /** Creates contributed classes through one class loader instead of the registry's own. */
