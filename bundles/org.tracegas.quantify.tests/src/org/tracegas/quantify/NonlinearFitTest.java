@@ -75,11 +75,16 @@ class NonlinearFitTest {
     private static final double WIDE = 1.0;
 
     private static QuantificationMethod shiftMethod(ShiftTerm term) {
+        return shiftMethod(term, QuantificationMethod.DEFAULT_MAX_ITERATIONS);
+    }
+
+    private static QuantificationMethod shiftMethod(ShiftTerm term, int maxIterations) {
         double[] k = SyntheticGas.named("NO").absorptivity(SyntheticGas.AXIS, 0, WIDE);
         for (int i = 0; i < k.length; i++) {
             k[i] *= 100;
         }
         return QuantificationMethod.builder("NO with shift").pathLengthMetres(1.0).shiftTerm(term)
+                .maxIterations(maxIterations)
                 .analyte(new Analyte("NO", List.of(), List.of(AnalysisRegion.of(1800, 1950, 1))))
                 .reference(new ReferenceSpectrum("NO", new Spectrum(SyntheticGas.AXIS, k, Ordinate.ABSORBANCE), 100))
                 .build();
@@ -139,5 +144,16 @@ class NonlinearFitTest {
         assertEquals(80, both.concentration(), 0.8);
         assertTrue(both.residuals().get(0).rms() < 0.2 * shiftOnly.residuals().get(0).rms(),
                 both.residuals().get(0).rms() + " vs " + shiftOnly.residuals().get(0).rms());
+    }
+
+    /** A shift fit that cannot finish within its iteration cap reports the plain fit, flagged. */
+    @Test
+    void shiftFitBeyondItsIterationCapFallsBackFlagged() {
+        Spectrum sample = shiftedNo(80, 0.1, 0);
+        CompoundResult capped = fit(shiftMethod(ShiftTerm.SHIFT, 1), sample);
+        CompoundResult plain = fit(shiftMethod(ShiftTerm.NONE), sample);
+        assertTrue(capped.flagged(QualityFlag.NOT_CONVERGED), capped.flags().toString());
+        assertTrue(Double.isNaN(capped.shift()));
+        assertEquals(plain.concentration(), capped.concentration());
     }
 }

@@ -23,7 +23,7 @@ public final class QuantificationMethod {
     public static final double DEFAULT_MAX_ABSORBANCE = 1.0;
     /** Default relative change of the concentrations at which the non-linear iteration stops. */
     public static final double DEFAULT_TOLERANCE = 1e-9;
-    /** Default cap on iterations of the non-linear fit. */
+    /** Default cap on iterations of each non-linear part of the fit. */
     public static final int DEFAULT_MAX_ITERATIONS = 50;
 
     private final String name;
@@ -110,6 +110,7 @@ public final class QuantificationMethod {
         return tolerance;
     }
 
+    /** Cap on iterations, both of the reference interpolation and of the Levenberg-Marquardt shift fit. */
     public int maxIterations() {
         return maxIterations;
     }

@@ -2,6 +2,8 @@ package org.tracegas.quantify.internal;
 
 import java.util.List;
 
+import org.apache.commons.math3.exception.MaxCountExceededException;
+
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.ShiftTerm;
 
@@ -214,14 +216,27 @@ public final class FitSystem {
             }
         }
         if (shiftTerm == ShiftTerm.NONE) {
-            double[] sd = new double[nc];
-            for (int c = 0; c < nc; c++) {
-                sd[c] = solution.standardDeviation(c);
-            }
-            return new SystemFit(solution.coefficients(), sd, solution.residualUnsafe(), columns, iterations, converged,
-                    Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+            return linearFit(solution, columns, iterations, converged);
         }
-        return fitShift(y, solution, mixes, iterations, converged);
+        try {
+            return fitShift(y, solution, mixes, iterations, converged);
+        } catch (MaxCountExceededException e) {
+            // no optimum within the cap: report the fit without line position terms, marked as not converged
+            return linearFit(solution, columns, iterations, false);
+        }
+    }
+
+    /**
+     * The standard deviations come from the final design; after the non-linear iteration that design holds the
+     * effective absorptivities, so they do not include the slope of the absorptivity with the amount.
+     */
+    private SystemFit linearFit(LinearSolution solution, double[][] columns, int iterations, boolean converged) {
+        double[] sd = new double[compounds.size()];
+        for (int c = 0; c < sd.length; c++) {
+            sd[c] = solution.standardDeviation(c);
+        }
+        return new SystemFit(solution.coefficients(), sd, solution.residualUnsafe(), columns, iterations, converged,
+                Double.NaN, Double.NaN, Double.NaN, Double.NaN);
     }
 
     private SystemFit fitShift(double[] y, LinearSolution linear, double[][] mixes, int iterations,
@@ -268,7 +283,7 @@ public final class FitSystem {
                 values[j] = v;
             }
         };
-        NonlinearFit fit = new LevenbergMarquardt(Math.max(100, maxIterations), tolerance).fit(model, y, weights,
+        NonlinearFit fit = new LevenbergMarquardt(maxIterations, tolerance).fit(model, y, weights,
                 start);
         double[] q = fit.parameters();
         double shift = q[nc + nb];
