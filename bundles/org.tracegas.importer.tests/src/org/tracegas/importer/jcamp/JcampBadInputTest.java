@@ -120,4 +120,11 @@ class JcampBadInputTest {
         String text = resource("difdup.jdx").replace("2000E%UK", "2000E%s999999999");
         assertNames(assertImportError(() -> reader.read(text, "dup.jdx")), "dup.jdx", 13, "##XYDATA");
     }
+
+    @Test
+    void anErrorInTheSecondBlockImportsNothing() throws Exception {
+        // the first block of the linked file is valid; the whole import must still fail
+        String text = resource("linked.jdx").replace("2.7 0.80", "2.7 0.80 2.9");
+        assertNames(assertImportError(() -> reader.read(text, "l.jdx")), "l.jdx", 26, "##PEAK TABLE");
+    }
 }
