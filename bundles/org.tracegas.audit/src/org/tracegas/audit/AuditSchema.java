@@ -6,7 +6,6 @@ import java.sql.Statement;
 
 import org.tracegas.audit.internal.Dialect;
 import org.tracegas.audit.internal.H2TriggerClasses;
-import org.tracegas.audit.internal.SqlScript;
 
 /**
  * Creates the audit tables (audit_record, audit_chain_head) in the connection's current schema, with
@@ -33,7 +32,7 @@ public final class AuditSchema {
         boolean autoCommit = c.getAutoCommit();
         c.setAutoCommit(false);
         try (Statement s = c.createStatement()) {
-            for (String sql : SqlScript.statements(dialect.schemaScript())) {
+            for (String sql : dialect.ddl()) {
                 s.execute(sql);
             }
             c.commit();

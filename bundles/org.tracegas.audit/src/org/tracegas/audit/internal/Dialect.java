@@ -2,20 +2,21 @@ package org.tracegas.audit.internal;
 
 import java.sql.Connection;
 import java.sql.SQLException;
+import java.util.List;
 import java.util.Locale;
 
 /** The database products the audit trail runs on, and what differs between them. */
 public enum Dialect {
     /** H2 2.x; time is the database's CURRENT_TIMESTAMP (start of the transaction). */
-    H2("schema-h2.sql", "SELECT CURRENT_TIMESTAMP"),
+    H2(SchemaDdl.H2, "SELECT CURRENT_TIMESTAMP"),
     /** PostgreSQL 14 or later; time is the server's clock_timestamp() when the chain head is locked. */
-    POSTGRESQL("schema-postgresql.sql", "SELECT clock_timestamp()");
+    POSTGRESQL(SchemaDdl.POSTGRESQL, "SELECT clock_timestamp()");
 
-    private final String schemaScript;
+    private final List<String> ddl;
     private final String clockQuery;
 
-    Dialect(String schemaScript, String clockQuery) {
-        this.schemaScript = schemaScript;
+    Dialect(List<String> ddl, String clockQuery) {
+        this.ddl = ddl;
         this.clockQuery = clockQuery;
     }
 
@@ -32,8 +33,9 @@ public enum Dialect {
         throw new SQLException("database product '" + product + "' is not supported; use H2 or PostgreSQL");
     }
 
-    public String schemaScript() {
-        return schemaScript;
+    /** Statements creating the audit tables and triggers; each can be re-run without effect. */
+    public List<String> ddl() {
+        return ddl;
     }
 
     /** Query returning the database clock as TIMESTAMP WITH TIME ZONE. */
