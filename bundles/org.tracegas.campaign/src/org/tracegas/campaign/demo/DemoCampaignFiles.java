@@ -1,0 +1,164 @@
+package org.tracegas.campaign.demo;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Random;
+import java.util.concurrent.atomic.AtomicLong;
+import java.util.stream.IntStream;
+
+import org.tracegas.importer.container.AcquisitionHeader;
+import org.tracegas.importer.container.ContainerWriter;
+import org.tracegas.importer.container.SampleKind;
+import org.tracegas.quantify.CancellationFlag;
+import org.tracegas.quantify.ProgressListener;
+import org.tracegas.spectrum.Interferogram;
+
+/**
+ * Writes the raw files of the demo day as the invented instrument and its neighbours would leave them: one
+ * interferogram container per hour of stack gas, one container of the QA measurements (backgrounds,
+ * calibration transfer standard before and after, zero gas, spiked and unspiked pairs), and the O2 analyzer's
+ * time-stamped CSV.
+ */
+public final class DemoCampaignFiles {
+
+    /** Extra header key that says what a QA measurement is. */
+    public static final String ROLE = "role";
+    public static final String ROLE_CTS = "cts";
+    public static final String ROLE_ZERO = "zero";
+    public static final String ROLE_SPIKE = "spike";
+    public static final String ROLE_UNSPIKED = "unspiked";
+    /** Certified CO content of the calibration transfer standard cylinder, ppm (invented). */
+    public static final double CTS_CO_PPM = 100.0;
+    /** Analyte and tracer content of the spike cylinder, ppm (invented). */
+    public static final double SPIKE_HCL_PPM = 60.0;
+    public static final double SPIKE_SF6_PPM = 2.0;
+    /** Fraction of spike gas in the spiked sample (invented; below 10 %: the spike flow rule). */
+    static final double SPIKE_FRACTION = 0.09;
+    /** Detector noise relative to the centre burst. */
+    static final double NOISE = 4e-6;
+    static final String QA_FILE = "qa-measurements.tgc";
+    public static final String SIDE_CHANNEL_FILE = "o2-analyzer.csv";
+
+    private DemoCampaignFiles() {
+    }
+
+    /** The container files of the stack gas, in time order. */
+    public static List<Path> stackFiles(Path folder) {
+        List<Path> files = new ArrayList<>();
+        for (int hour = 0; hour < 24; hour++) {
+            files.add(folder.resolve(String.format(Locale.ROOT, "stack-%02d.tgc", hour)));
+        }
+        return files;
+    }
+
+    public static Path qaFile(Path folder) {
+        return folder.resolve(QA_FILE);
+    }
+
+    /** Whether every file of the demo day is there (an earlier run wrote them). */
+    public static boolean complete(Path folder) {
+        return stackFiles(folder).stream().allMatch(Files::isRegularFile) && Files.isRegularFile(qaFile(folder))
+                && Files.isRegularFile(folder.resolve(SIDE_CHANNEL_FILE));
+    }
+
+    /** Writes all files of the demo day into a folder; each file appears whole or not at all. */
+    public static void write(Path folder, DemoPhysics physics, ProgressListener progress, CancellationFlag cancel)
+            throws IOException {
+        Files.createDirectories(folder);
+        InterferogramSynthesizer synthesizer = physics.interferograms();
+        long total = DemoScenario.SAMPLES + 11L;
+        AtomicLong done = new AtomicLong();
+        writeQa(qaFile(folder), synthesizer);
+        progress.progress(done.addAndGet(11), total);
+        List<Path> files = stackFiles(folder);
+        for (int hour = 0; hour < 24 && !cancel.isCancelled(); hour++) {
+            int first = hour * 60;
+            Interferogram[] igms = new Interferogram[60];
+            IntStream.range(0, 60).parallel().forEach(i -> {
+                int minute = first + i;
+                igms[i] = synthesizer.synthesize(DayOfStackGas.at(minute), DayOfStackGas.gain(minute), NOISE,
+                        new Random(minute));
+                progress.progress(done.incrementAndGet(), total);
+            });
+            try (ContainerWriter out = ContainerWriter.create(files.get(hour))) {
+                for (int i = 0; i < 60; i++) {
+                    out.append(header(SampleKind.SAMPLE, minuteTime(first + i), Map.of()), igms[i]);
+                }
+                out.commit();
+            }
+        }
+        writeSideChannel(folder.resolve(SIDE_CHANNEL_FILE));
+    }
+
+    static Instant minuteTime(int minute) {
+        return DemoScenario.DAY_START.plus(minute, ChronoUnit.MINUTES).plusSeconds(30);
+    }
+
+    private static AcquisitionHeader header(SampleKind kind, Instant time, Map<String, String> extra) {
+        return new AcquisitionHeader(DemoScenario.interferogramPoints() / 2, kind, time, DemoScenario.CELL_TEMPERATURE,
+                DemoScenario.CELL_PRESSURE * 10.0, DemoScenario.PATH_LENGTH, extra);
+    }
+
+    private static void writeQa(Path file, InterferogramSynthesizer synthesizer) throws IOException {
+        Instant day = DemoScenario.DAY_START;
+        Map<String, Double> nitrogen = Map.of();
+        Map<String, Double> cts = Map.of("CO", CTS_CO_PPM);
+        try (ContainerWriter out = ContainerWriter.create(file)) {
+            Random random = new Random(-1);
+            out.append(header(SampleKind.BACKGROUND, day.minusSeconds(1200), Map.of()),
+                    synthesizer.synthesize(nitrogen, 1.0, NOISE, random));
+            out.append(header(SampleKind.SAMPLE, day.minusSeconds(900), Map.of(ROLE, ROLE_CTS)),
+                    synthesizer.synthesize(cts, 1.0, NOISE, random));
+            out.append(header(SampleKind.SAMPLE, day.minusSeconds(600), Map.of(ROLE, ROLE_ZERO)),
+                    synthesizer.synthesize(nitrogen, 1.0, NOISE, random));
+            for (int i = 0; i < 3; i++) {
+                int minute = 600 + 2 * i;
+                Map<String, Double> stack = DayOfStackGas.at(minute);
+                out.append(header(SampleKind.SAMPLE, minuteTime(minute).minusSeconds(15), Map.of(ROLE, ROLE_UNSPIKED)),
+                        synthesizer.synthesize(stack, DayOfStackGas.gain(minute), NOISE, random));
+                out.append(header(SampleKind.SAMPLE, minuteTime(minute + 1).minusSeconds(15), Map.of(ROLE, ROLE_SPIKE)),
+                        synthesizer.synthesize(spiked(DayOfStackGas.at(minute + 1)), DayOfStackGas.gain(minute + 1),
+                                NOISE, random));
+            }
+            out.append(header(SampleKind.BACKGROUND, day.plus(12, ChronoUnit.HOURS), Map.of()),
+                    synthesizer.synthesize(nitrogen, 1.0, NOISE, random));
+            out.append(header(SampleKind.SAMPLE, day.plus(1, ChronoUnit.DAYS).plusSeconds(300), Map.of(ROLE, ROLE_CTS)),
+                    synthesizer.synthesize(cts, 0.995, NOISE, random));
+            out.commit();
+        }
+    }
+
+    /** Stack gas with the spike gas mixed in at the spike fraction. */
+    static Map<String, Double> spiked(Map<String, Double> stack) {
+        Map<String, Double> mix = new LinkedHashMap<>();
+        stack.forEach((gas, ppm) -> mix.put(gas, (1 - SPIKE_FRACTION) * ppm));
+        mix.merge("HCl", SPIKE_FRACTION * SPIKE_HCL_PPM, Double::sum);
+        mix.put("SF6", SPIKE_FRACTION * SPIKE_SF6_PPM);
+        return mix;
+    }
+
+    private static void writeSideChannel(Path file) throws IOException {
+        Path partial = file.resolveSibling(file.getFileName() + ".part");
+        try (Writer out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8)) {
+            out.write("time,O2,T_stack,p_stack\n");
+            out.write("UTC,%vol,degC,kPa\n");
+            for (int minute = 0; minute < DemoScenario.SAMPLES; minute++) {
+                out.write(String.format(Locale.ROOT, "%s,%.3f,%.1f,%.2f%n", minuteTime(minute),
+                        DayOfStackGas.oxygenPercent(minute), 142.0 + 6.0 * Math.sin(minute / 200.0),
+                        99.8 + 0.2 * Math.sin(minute / 300.0)));
+            }
+        }
+        Files.move(partial, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+    }
+}

@@ -1,0 +1,104 @@
+package org.tracegas.campaign.demo;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
+import org.tracegas.library.Compound;
+import org.tracegas.library.ReferenceSpectrum;
+import org.tracegas.library.synthesis.AbsorptionPath;
+import org.tracegas.library.synthesis.HitranLineListReader;
+import org.tracegas.library.synthesis.LineByLineModel;
+import org.tracegas.library.synthesis.PowerLawPartitionFunction;
+import org.tracegas.library.synthesis.ReferenceSynthesizer;
+import org.tracegas.library.synthesis.SynthesisRequest;
+import org.tracegas.preprocess.Apodization;
+import org.tracegas.spectrum.AxisUnit;
+import org.tracegas.spectrum.SpectralAxis;
+
+/**
+ * The line-by-line models of the demo gases, read from their invented line lists: the optical depths that
+ * make the demo's interferograms and the synthetic references of its library come from the same physics.
+ */
+public final class DemoPhysics {
+
+    /** Length of the fine cosine transform: a grid step of about 0.015 cm-1 resolves the line shapes. */
+    static final int TRANSFORM_LENGTH = 1 << 19;
+    private static final double FINE_LOW = 600.0;
+    private static final double FINE_HIGH = 3949.0;
+
+    private final Map<String, LineByLineModel> models = new LinkedHashMap<>();
+
+    private DemoPhysics() {
+    }
+
+    /** Writes the invented line lists into a folder and reads them back into line-by-line models. */
+    public static DemoPhysics fromInventedLineLists(Path folder) throws IOException {
+        DemoPhysics physics = new DemoPhysics();
+        HitranLineListReader reader = new HitranLineListReader();
+        for (Gas gas : DemoScenario.GASES) {
+            Path file = InventedLineLists.write(gas, folder);
+            physics.models.put(gas.name(), new LineByLineModel(reader.read(file), gas.molarMass(),
+                    gas.linear() ? PowerLawPartitionFunction.linearMolecule()
+                            : PowerLawPartitionFunction.nonLinearMolecule()));
+        }
+        return physics;
+    }
+
+    static double fineStep() {
+        return DemoScenario.LASER_WAVENUMBER / DemoScenario.SAMPLING_INTERVAL / TRANSFORM_LENGTH;
+    }
+
+    static int fineFirstIndex() {
+        return (int) Math.ceil(FINE_LOW / fineStep());
+    }
+
+    /** Builds the synthesizer of the demo instrument's interferograms. */
+    InterferogramSynthesizer interferograms() {
+        double step = fineStep();
+        int first = fineFirstIndex();
+        int count = (int) Math.floor(FINE_HIGH / step) - first + 1;
+        SpectralAxis fine = SpectralAxis.uniform(AxisUnit.WAVENUMBER, first * step, step, count);
+        double[] envelope = new double[count];
+        for (int i = 0; i < count; i++) {
+            envelope[i] = sourceAndDetector(fine.get(i));
+        }
+        Map<String, double[]> depthPerPpm = new LinkedHashMap<>();
+        for (Gas gas : DemoScenario.GASES) {
+            double level = gas.nominalPpm() > 0 ? gas.nominalPpm() : 1.0;
+            AbsorptionPath path = new AbsorptionPath(DemoScenario.CELL_TEMPERATURE, DemoScenario.CELL_PRESSURE, level,
+                    DemoScenario.PATH_LENGTH);
+            double[] depth = models.get(gas.name()).opticalDepth(fine, path).toArray();
+            for (int i = 0; i < depth.length; i++) {
+                depth[i] /= level;
+            }
+            depthPerPpm.put(gas.name(), depth);
+        }
+        return new InterferogramSynthesizer(TRANSFORM_LENGTH, first, envelope, depthPerPpm,
+                DemoScenario.interferogramPoints() / 2);
+    }
+
+    /**
+     * A synthetic absorbance reference of a gas at the cell's conditions and the instrument's resolution and
+     * apodization, on the axis of the processed spectra.
+     */
+    ReferenceSpectrum reference(Gas gas, double ppm, SpectralAxis axis, Apodization apodization) {
+        AbsorptionPath path = new AbsorptionPath(DemoScenario.CELL_TEMPERATURE, DemoScenario.CELL_PRESSURE, ppm,
+                DemoScenario.PATH_LENGTH);
+        Compound compound = new Compound(gas.name(), gas.casNumber(), gas.formula(), gas.molarMass());
+        return new ReferenceSynthesizer(models.get(gas.name()), compound)
+                .synthesize(new SynthesisRequest(path, axis, apodization, DemoScenario.RESOLUTION, 0.02));
+    }
+
+    /**
+     * Single beam of the empty cell: a grey-body source seen by a detector that cuts on near 680 cm-1 and a
+     * filter that cuts off below the folding wavenumber, so nothing folds back into the spectrum.
+     */
+    static double sourceAndDetector(double wavenumber) {
+        double planck = wavenumber * wavenumber * wavenumber / Math.expm1(1.438776877 * wavenumber / 1250.0);
+        double cutOn = 1.0 / (1.0 + Math.exp(-(wavenumber - 680.0) / 15.0));
+        double cutOff = 1.0 / (1.0 + Math.exp((wavenumber - 3920.0) / 8.0));
+        return 1e-8 * planck * cutOn * cutOff;
+    }
+}
