@@ -11,6 +11,7 @@ import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Collections;
 import java.util.List;
 import java.util.function.Consumer;
 
@@ -60,7 +61,7 @@ public final class AuditReview {
         where(sql, args, "recorded_at >= ?", q.from() == null ? null : OffsetDateTime.ofInstant(q.from(), ZoneOffset.UTC));
         where(sql, args, "recorded_at < ?", q.to() == null ? null : OffsetDateTime.ofInstant(q.to(), ZoneOffset.UTC));
         if (!q.actions().isEmpty()) {
-            sql.append(" AND action IN (").append(String.join(", ", java.util.Collections.nCopies(q.actions().size(), "?")))
+            sql.append(" AND action IN (").append(String.join(", ", Collections.nCopies(q.actions().size(), "?")))
                     .append(')');
             q.actions().stream().map(Enum::name).sorted().forEach(args::add);
         }

@@ -5,9 +5,13 @@ import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
 
 import org.tracegas.audit.AuditRecord;
+import org.tracegas.audit.ChainAnchor;
 import org.tracegas.audit.ChainFinding;
 import org.tracegas.audit.ChainFinding.Kind;
 import org.tracegas.audit.VerificationReport;
@@ -35,9 +39,14 @@ public final class ChainWalker {
     private String headHash;
     private String headRecordId;
 
-    public ChainWalker(Connection c, int maxFindings) {
+    private final Map<Long, String> anchors = new HashMap<>();
+
+    public ChainWalker(Connection c, int maxFindings, List<ChainAnchor> anchors) {
         this.c = c;
         this.maxFindings = maxFindings;
+        for (ChainAnchor a : anchors) {
+            this.anchors.put(a.sequence(), a.hash());
+        }
     }
 
     public VerificationReport walk() throws SQLException {
@@ -53,6 +62,7 @@ public final class ChainWalker {
                 while (rs.next()) {
                     w[3] = RecordRows.readLenient(rs);
                     count++;
+                    checkAnchor(w[3]);
                     if (w[1] != null) {
                         prevFlagged = check(w[0], prevFlagged, w[1], w[2], w[3]);
                     }
@@ -71,7 +81,17 @@ public final class ChainWalker {
                 byHash.close();
             }
         }
+        for (Map.Entry<Long, String> missing : new TreeMap<>(anchors).entrySet()) {
+            add(Kind.REMOVED, missing.getKey(), null, "the anchored record is not stored");
+        }
         return new VerificationReport(count, headSeq, headHash, findings, truncated);
+    }
+
+    private void checkAnchor(AuditRecord r) {
+        String anchored = anchors.remove(r.sequence());
+        if (anchored != null && !anchored.equals(r.hash())) {
+            add(Kind.ALTERED, r.sequence(), r.recordId(), "hash differs from the anchor kept outside the database");
+        }
     }
 
     private void readHead() throws SQLException {
