@@ -3,7 +3,6 @@ package org.tracegas.preprocess;
 import java.time.Duration;
 import java.time.Instant;
 
-import org.tracegas.preprocess.internal.Log10;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.Spectrum;
 
@@ -67,7 +66,7 @@ public final class BackgroundRatio {
         for (int i = 0; i < n; i++) {
             double b = reference.get(i);
             double t = b == 0.0 ? Double.NaN : sample.get(i) / b;
-            values[i] = absorbance ? -Log10.of(t) : t; // NaN where t <= 0
+            values[i] = absorbance ? (t > 0 ? -Math.log10(t) : Double.NaN) : t;
         }
         Duration age = Duration.between(background.measured(), sampleTime);
         boolean tooOld = age.abs().compareTo(ageLimit) > 0;

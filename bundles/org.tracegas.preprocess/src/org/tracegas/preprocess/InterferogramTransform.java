@@ -26,7 +26,7 @@ public final class InterferogramTransform {
     private final TransformSettings settings;
     private final FftEngine engine;
     private final MertzPhase phase;
-    private double[] samples = new double[0];
+    private final ZpdLocator zpdLocator = new ZpdLocator();
     private RealFft fft;
     private double[] buffer;
     private double[] re;
@@ -64,9 +64,9 @@ public final class InterferogramTransform {
             throw new IllegalArgumentException("interferogram must not be null");
         }
         int n = interferogram.size();
-        double[] x = copySamples(interferogram);
-        double dc = mean(x, n);
-        int zpd = ZpdLocator.locate(x, n, dc, settings.zpdSearch(), settings.phasePoints() / 2);
+        zpdLocator.locate(interferogram, settings.zpdSearch(), settings.phasePoints() / 2);
+        double dc = zpdLocator.dc();
+        int zpd = zpdLocator.zpd();
         int before = zpd;
         int after = n - 1 - zpd;
         int direction = after >= before ? 1 : -1;
@@ -76,7 +76,7 @@ public final class InterferogramTransform {
         double spacing = interferogram.sampleSpacingCm();
         int size = settings.zeroFillFactor() * (Integer.highestOneBit(shortSide + longSide) << 1);
         prepare(size, shortSide, longSide, spacing);
-        window.weigh(x, dc, zpd, direction, buffer);
+        window.weigh(interferogram, dc, zpd, direction, buffer);
         fft.forward(buffer, re, im);
 
         double step = 1.0 / (size * spacing);
@@ -92,7 +92,7 @@ public final class InterferogramTransform {
             out = new double[count];
         }
         if (settings.phaseCorrection() == PhaseCorrection.MERTZ) {
-            phase.measure(x, dc, zpd, direction, Math.min(shortSide, settings.phasePoints() / 2));
+            phase.measure(interferogram, dc, zpd, direction, Math.min(shortSide, settings.phasePoints() / 2));
             phase.correct(re, im, size, kLow, out);
         } else {
             for (int i = 0; i < count; i++) {
@@ -104,26 +104,6 @@ public final class InterferogramTransform {
             axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, kLow * step, step, count);
         }
         return new Spectrum(axis, out, Ordinate.SINGLE_BEAM);
-    }
-
-    private double[] copySamples(Interferogram interferogram) {
-        int n = interferogram.size();
-        if (samples.length < n) {
-            samples = new double[n];
-        }
-        for (int i = 0; i < n; i++) {
-            samples[i] = interferogram.get(i);
-        }
-        return samples;
-    }
-
-    /** The DC level, taken off in the later passes rather than in a pass of its own. */
-    private static double mean(double[] x, int n) {
-        double sum = 0.0;
-        for (int i = 0; i < n; i++) {
-            sum += x[i];
-        }
-        return sum / n;
     }
 
     private void checkSides(int zpd, int n, int shortSide, int longSide) {

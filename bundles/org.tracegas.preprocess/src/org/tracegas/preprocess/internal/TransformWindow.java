@@ -2,6 +2,7 @@ package org.tracegas.preprocess.internal;
 
 import org.tracegas.preprocess.Apodization;
 import org.tracegas.preprocess.Sidedness;
+import org.tracegas.spectrum.Interferogram;
 
 /**
  * Weights applied to the interferogram samples at offsets -shortSide .. longSide from ZPD: apodization over the
@@ -47,20 +48,20 @@ public final class TransformWindow {
      *
      * @param direction +1 if the long side follows ZPD, -1 if it precedes it
      */
-    public void weigh(double[] x, double dc, int zpd, int direction, double[] buffer) {
+    public void weigh(Interferogram x, double dc, int zpd, int direction, double[] buffer) {
         int size = buffer.length;
         if (direction > 0) {
             for (int j = 0; j <= longSide; j++) {
-                buffer[j] = (x[zpd + j] - dc) * weights[j + shortSide];
+                buffer[j] = (x.get(zpd + j) - dc) * weights[j + shortSide];
             }
         } else {
             for (int j = 0; j <= longSide; j++) {
-                buffer[j] = (x[zpd - j] - dc) * weights[j + shortSide];
+                buffer[j] = (x.get(zpd - j) - dc) * weights[j + shortSide];
             }
         }
         java.util.Arrays.fill(buffer, longSide + 1, size - shortSide, 0.0);
         for (int j = 1; j <= shortSide; j++) {
-            buffer[size - j] = (x[zpd - direction * j] - dc) * weights[shortSide - j];
+            buffer[size - j] = (x.get(zpd - direction * j) - dc) * weights[shortSide - j];
         }
     }
 }
