@@ -156,4 +156,19 @@ class NonlinearFitTest {
         assertTrue(Double.isNaN(capped.shift()));
         assertEquals(plain.concentration(), capped.concentration());
     }
+
+    /** A blank sample (no compound above its detection limit) has no lines to place: no shift, the plain fit. */
+    @Test
+    void blankSampleLeavesShiftUndefined() {
+        double[] blank = new double[SyntheticGas.AXIS.size()];
+        java.util.Random random = new java.util.Random(17);
+        for (int i = 0; i < blank.length; i++) {
+            blank[i] = 0.002 + 5e-4 * random.nextGaussian();
+        }
+        CompoundResult r = fit(shiftMethod(ShiftTerm.SHIFT_AND_WIDTH),
+                new Spectrum(SyntheticGas.AXIS, blank, Ordinate.ABSORBANCE));
+        assertTrue(Double.isNaN(r.shift()) && Double.isNaN(r.width()), r.shift() + " " + r.width());
+        assertEquals(0, r.concentration(), r.detectionLimit());
+        assertFalse(r.flagged(QualityFlag.NOT_CONVERGED));
+    }
 }

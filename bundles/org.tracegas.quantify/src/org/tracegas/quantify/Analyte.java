@@ -1,5 +1,6 @@
 package org.tracegas.quantify;
 
+import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
@@ -44,7 +45,7 @@ public record Analyte(String compound, List<String> interferents, List<AnalysisR
 
     /** The analyte followed by its interferents: the compound columns of its fit. */
     public List<String> fittedCompounds() {
-        java.util.ArrayList<String> all = new java.util.ArrayList<>(interferents.size() + 1);
+        ArrayList<String> all = new ArrayList<>(interferents.size() + 1);
         all.add(compound);
         all.addAll(interferents);
         return List.copyOf(all);

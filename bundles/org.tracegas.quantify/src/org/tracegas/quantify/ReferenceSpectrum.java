@@ -1,5 +1,6 @@
 package org.tracegas.quantify;
 
+import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.Spectrum;
 
@@ -22,7 +23,7 @@ public record ReferenceSpectrum(String compound, Spectrum absorbance, double ppm
             throw new IllegalArgumentException("absorbance of reference " + compound
                     + " must have ordinate ABSORBANCE, was " + absorbance.ordinate());
         }
-        if (absorbance.axis().unit() != org.tracegas.spectrum.AxisUnit.WAVENUMBER) {
+        if (absorbance.axis().unit() != AxisUnit.WAVENUMBER) {
             throw new IllegalArgumentException("absorbance of reference " + compound
                     + " must be on a WAVENUMBER axis, was " + absorbance.axis().unit());
         }

@@ -1,5 +1,6 @@
 package org.tracegas.quantify.internal;
 
+import java.util.Arrays;
 import java.util.List;
 
 import org.apache.commons.math3.exception.MaxCountExceededException;
@@ -72,7 +73,7 @@ public final class FitSystem {
             terms += region.baselineOrder() + 1;
         }
         regionStart[nr] = count;
-        this.rows = java.util.Arrays.copyOf(buffer, count);
+        this.rows = Arrays.copyOf(buffer, count);
         this.weights = axisWeights == null ? null : gather(axisWeights);
         if (weights != null) {
             for (int j = 0; j < count; j++) {
@@ -215,7 +216,8 @@ public final class FitSystem {
                 solution = next;
             }
         }
-        if (shiftTerm == ShiftTerm.NONE) {
+        if (shiftTerm == ShiftTerm.NONE || !anyDetected(solution)) {
+            // without a compound above its detection limit there are no lines to place: no shift is defined
             return linearFit(solution, columns, iterations, converged);
         }
         try {
@@ -224,6 +226,16 @@ public final class FitSystem {
             // no optimum within the cap: report the fit without line position terms, marked as not converged
             return linearFit(solution, columns, iterations, false);
         }
+    }
+
+    /** Whether some compound exceeds three standard deviations (its detection limit) in a linear solution. */
+    private boolean anyDetected(LinearSolution solution) {
+        for (int c = 0; c < compounds.size(); c++) {
+            if (Math.abs(solution.coefficient(c)) > 3 * solution.standardDeviation(c)) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /**
@@ -294,8 +306,8 @@ public final class FitSystem {
                 columns[c][j] = kc[c][j] - shift * k1c[c][j] + (shift * shift + w) / 2 * k2c[c][j];
             }
         }
-        double[] amounts = java.util.Arrays.copyOf(q, nc);
-        double[] sd = java.util.Arrays.copyOf(fit.standardDeviations(), nc);
+        double[] amounts = Arrays.copyOf(q, nc);
+        double[] sd = Arrays.copyOf(fit.standardDeviations(), nc);
         return new SystemFit(amounts, sd, fit.residual(), columns,
                 iterations + fit.iterations(), converged, shift, fit.standardDeviations()[nc + nb],
                 width ? w : Double.NaN, width ? fit.standardDeviations()[nc + nb + 1] : Double.NaN);
