@@ -5,22 +5,26 @@ import java.util.List;
 import org.eclipse.equinox.app.IApplication;
 import org.eclipse.equinox.app.IApplicationContext;
 import org.osgi.framework.FrameworkUtil;
+import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.CommandTable;
+import org.tracegas.runner.commands.DemoCommand;
 import org.tracegas.runner.RunnerContext;
 
 /** The headless Equinox application: hands the command line to the runner's command table. */
 public final class RunnerApplication implements IApplication {
 
+    private final CancellationFlag cancel = new CancellationFlag();
+
     @Override
     public Object start(IApplicationContext context) {
         String[] argv = (String[]) context.getArguments().get(IApplicationContext.APPLICATION_ARGS);
         String version = FrameworkUtil.getBundle(getClass()).getVersion().toString();
-        CommandTable table = new CommandTable(version, List.of());
+        CommandTable table = new CommandTable(version, List.of(new DemoCommand(cancel)));
         return table.dispatch(argv == null ? new String[0] : argv, new RunnerContext(System.out, System.err));
     }
 
     @Override
     public void stop() {
-        // commands check for cancellation themselves; nothing to release here
+        cancel.cancel();
     }
 }

@@ -1,0 +1,100 @@
+package org.tracegas.campaign;
+
+import java.time.Duration;
+import java.time.Instant;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+import org.tracegas.preprocess.Background;
+import org.tracegas.qa.checks.AbsorbanceRegion;
+import org.tracegas.qa.checks.BackgroundAgeCheck;
+import org.tracegas.qa.checks.CheckOutcome;
+import org.tracegas.qa.checks.CtsBand;
+import org.tracegas.qa.checks.CtsDriftCheck;
+import org.tracegas.qa.checks.NoiseCheck;
+import org.tracegas.qa.checks.PathLengthCheck;
+import org.tracegas.qa.checks.SpikeGas;
+import org.tracegas.qa.checks.SpikeRecoveryCheck;
+import org.tracegas.qa.checks.SpikedSample;
+import org.tracegas.qa.checks.ZeroSpanCheck;
+import org.tracegas.spectrum.Spectrum;
+
+/**
+ * The QA checks of a campaign from its QA measurements: path length from the calibration transfer standard
+ * before and after, its drift, spike recovery with a tracer, zero, noise and background age.
+ */
+public final class CampaignQaChecks {
+
+    /** What the campaign's QA measurements were made with. */
+    public record Plan(String ctsCompound, double ctsPpm, double ctsLow, double ctsHigh, Spectrum ctsReference,
+            double ctsReferencePpmMetres, double referenceTemperatureK, double referencePressureKPa,
+            double nominalPathM, String spikeAnalyte, String tracer, SpikeGas spikeGas, List<String> analytes,
+            AbsorbanceRegion noiseRegion, double maximumNoise, Duration backgroundAgeLimit) {
+    }
+
+    private CampaignQaChecks() {
+    }
+
+    public static List<CheckOutcome> evaluate(Plan plan, QaMeasurements qa, List<Background> backgrounds,
+            Instant firstSample, Instant lastSample) {
+        List<CheckOutcome> outcomes = new ArrayList<>();
+        List<QaMeasurements.Fitted> cts = qa.withRole("cts");
+        PathLengthCheck pathCheck = new PathLengthCheck(plan.nominalPathM(),
+                PathLengthCheck.COMMON_PRACTICE_TOLERANCE_PERCENT);
+        CtsBand reference = new CtsBand(BandArea.of(plan.ctsReference(), plan.ctsLow(), plan.ctsHigh()),
+                plan.ctsReferencePpmMetres() / plan.nominalPathM(), plan.referenceTemperatureK(),
+                plan.referencePressureKPa());
+        List<Double> paths = new ArrayList<>();
+        for (QaMeasurements.Fitted f : cts) {
+            CtsBand measured = new CtsBand(BandArea.of(f.measured().ratio().spectrum(), plan.ctsLow(), plan.ctsHigh()),
+                    plan.ctsPpm(), f.measured().cellTemperatureK(), f.measured().cellPressureKPa());
+            outcomes.add(pathCheck.evaluate(measured, reference, plan.nominalPathM()));
+            paths.add(PathLengthCheck.effectivePath(measured, reference, plan.nominalPathM()));
+        }
+        if (paths.size() >= 2) {
+            outcomes.add(new CtsDriftCheck(CtsDriftCheck.METHOD_320_TOLERANCE_PERCENT).evaluate(paths.get(0),
+                    paths.get(paths.size() - 1)));
+        }
+        List<SpikedSample> spiked = new ArrayList<>();
+        for (Map.Entry<QaMeasurements.Fitted, QaMeasurements.Fitted> pair : qa.spikePairs("spike", "unspiked")) {
+            spiked.add(new SpikedSample(pair.getKey().ppm(plan.tracer()), pair.getKey().ppm(plan.spikeAnalyte()),
+                    pair.getValue().ppm(plan.spikeAnalyte())));
+        }
+        if (!spiked.isEmpty()) {
+            outcomes.add(new SpikeRecoveryCheck(SpikeRecoveryCheck.METHOD_320_LIMITS).evaluate(plan.spikeAnalyte(),
+                    plan.spikeGas(), spiked));
+        }
+        for (QaMeasurements.Fitted zero : qa.withRole("zero")) {
+            for (String analyte : plan.analytes()) {
+                double dl = zero.result().compound(analyte).orElseThrow().detectionLimit();
+                outcomes.add(new ZeroSpanCheck(Math.max(dl, 1e-9), 5.0).zero(analyte, zero.ppm(analyte)));
+            }
+            Spectrum a = zero.measured().ratio().spectrum();
+            outcomes.add(new NoiseCheck(plan.noiseRegion(), plan.maximumNoise()).evaluate(a.axis().toArray(),
+                    a.toArray()));
+        }
+        outcomes.add(worstBackgroundAge(plan.backgroundAgeLimit(), backgrounds, firstSample, lastSample));
+        return outcomes;
+    }
+
+    /** The oldest background any sample of the run was ratioed against: at the last sample before a new one. */
+    private static CheckOutcome worstBackgroundAge(Duration limit, List<Background> backgrounds, Instant first,
+            Instant last) {
+        BackgroundTimeline timeline = new BackgroundTimeline(backgrounds);
+        Instant worstSample = last;
+        Background worst = timeline.latestBefore(last);
+        for (Background b : timeline.all()) {
+            if (b.measured().isAfter(first) && b.measured().isBefore(last)) {
+                Instant justBefore = b.measured().minusNanos(1);
+                Background previous = timeline.latestBefore(justBefore);
+                if (Duration.between(previous.measured(), justBefore)
+                        .compareTo(Duration.between(worst.measured(), worstSample)) > 0) {
+                    worst = previous;
+                    worstSample = justBefore;
+                }
+            }
+        }
+        return new BackgroundAgeCheck(limit).evaluate(worst.measured(), worstSample);
+    }
+}

@@ -1,0 +1,18 @@
+package org.tracegas.campaign;
+
+import java.time.Instant;
+import java.util.Map;
+
+import org.tracegas.preprocess.RatioResult;
+
+/**
+ * One interferogram turned into absorbance: when it was taken, what it was (its role), the cell conditions and
+ * the ratio against its background.
+ */
+public record MeasuredSpectrum(Instant time, String role, double cellTemperatureK, double cellPressureKPa,
+        RatioResult ratio, Map<String, String> metadata) {
+
+    public MeasuredSpectrum {
+        metadata = Map.copyOf(metadata);
+    }
+}

@@ -1,0 +1,45 @@
+package org.tracegas.runner.commands;
+
+import java.nio.file.Path;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.tracegas.runner.UsageException;
+
+/** The "--name value" options of a command line, checked against the names a command accepts. */
+final class Options {
+
+    private final Map<String, String> values;
+
+    private Options(Map<String, String> values) {
+        this.values = values;
+    }
+
+    static Options parse(List<String> arguments, List<String> accepted) throws UsageException {
+        Map<String, String> values = new HashMap<>();
+        for (int i = 0; i < arguments.size(); i++) {
+            String name = arguments.get(i);
+            if (!accepted.contains(name)) {
+                throw new UsageException("unknown argument '" + name + "'; accepted: " + String.join(", ", accepted));
+            }
+            if (i + 1 >= arguments.size()) {
+                throw new UsageException("option " + name + " needs a value");
+            }
+            values.put(name, arguments.get(++i));
+        }
+        return new Options(values);
+    }
+
+    String text(String name) throws UsageException {
+        String v = values.get(name);
+        if (v == null || v.isBlank()) {
+            throw new UsageException("option " + name + " is required");
+        }
+        return v;
+    }
+
+    Path path(String name) throws UsageException {
+        return Path.of(text(name)).toAbsolutePath();
+    }
+}
