@@ -16,3 +16,9 @@ if [ -z "${DISPLAY:-}" ]; then
 else
   "${run[@]}"
 fi
+
+echo "== the generated model code matches what its genmodel generates"
+"$top/releng/emfgen/check.sh"
+
+echo "== coverage-guided fuzzing of the JCAMP-DX reader (bounded time)"
+"$top/releng/fuzz/run.sh"

@@ -9,4 +9,4 @@
 set -euo pipefail
 cd "$(dirname "$0")"
 export JAZZER_FUZZ="${FUZZ:-1}"
-exec mvn -B -q test -Dtest=JcampReaderFuzzTest -Dsurefire.failIfNoSpecifiedTests=false
+exec ../mvnw -B -q -f pom.xml test -Dtest=JcampReaderFuzzTest -Dsurefire.failIfNoSpecifiedTests=false
