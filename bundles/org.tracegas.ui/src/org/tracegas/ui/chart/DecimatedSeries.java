@@ -3,6 +3,7 @@ package org.tracegas.ui.chart;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
+import org.eclipse.swt.SWT;
 import org.eclipse.swtchart.Chart;
 import org.eclipse.swtchart.IAxis;
 import org.eclipse.swtchart.ISeries;
@@ -25,6 +26,8 @@ public final class DecimatedSeries {
         this.chart = chart;
         // SWTChart's own compression drops points that fall on the same pixel; it works on top of ours
         chart.enableCompress(true);
+        // the number of pixel columns changes with the plot area's size
+        chart.getPlotArea().getControl().addListener(SWT.Resize, e -> refresh());
     }
 
     /** Gives a series (created beforehand on the chart) its full data. */

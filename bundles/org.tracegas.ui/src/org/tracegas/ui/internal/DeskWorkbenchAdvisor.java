@@ -1,13 +1,21 @@
 package org.tracegas.ui.internal;
 
 import org.eclipse.swt.graphics.Point;
+import org.eclipse.ui.application.ActionBarAdvisor;
+import org.eclipse.ui.application.IActionBarConfigurer;
 import org.eclipse.ui.application.IWorkbenchWindowConfigurer;
 import org.eclipse.ui.application.WorkbenchAdvisor;
 import org.eclipse.ui.application.WorkbenchWindowAdvisor;
 import org.tracegas.ui.AnalysisDeskLayout;
 
-/** Opens the analysis desk first; the window carries the product's name. */
+/** Opens the analysis desk first; the window carries the product's name and the signed-in user. */
 final class DeskWorkbenchAdvisor extends WorkbenchAdvisor {
+
+    private final String user;
+
+    DeskWorkbenchAdvisor(String user) {
+        this.user = user;
+    }
 
     @Override
     public String getInitialWindowPerspectiveId() {
@@ -18,13 +26,19 @@ final class DeskWorkbenchAdvisor extends WorkbenchAdvisor {
     public WorkbenchWindowAdvisor createWorkbenchWindowAdvisor(IWorkbenchWindowConfigurer configurer) {
         return new WorkbenchWindowAdvisor(configurer) {
             @Override
+            public ActionBarAdvisor createActionBarAdvisor(IActionBarConfigurer bars) {
+                return new DeskMenus(bars);
+            }
+
+            @Override
             public void preWindowOpen() {
                 IWorkbenchWindowConfigurer c = getWindowConfigurer();
                 c.setInitialSize(new Point(1280, 860));
                 c.setShowCoolBar(false);
                 c.setShowStatusLine(true);
                 c.setShowPerspectiveBar(true);
-                c.setTitle("Tracegas Workbench");
+                c.setShowProgressIndicator(true);
+                c.setTitle("Tracegas Workbench — " + user);
             }
         };
     }

@@ -9,8 +9,6 @@ import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swtchart.Chart;
-import org.eclipse.swtchart.ILineSeries;
-import org.eclipse.swtchart.LineStyle;
 import org.eclipse.swtchart.Range;
 import org.tracegas.ui.chart.ChartNavigation;
 import org.tracegas.ui.chart.CursorReadout;
@@ -66,17 +64,14 @@ public final class SpectrumPanel extends Composite {
         // wavenumbers fall to the right, as spectroscopists read them
         spectrum.getAxisSet().getXAxis(0).setReversed(true);
         residual.getAxisSet().getXAxis(0).setReversed(true);
-        addListener(SWT.Resize, e -> getDisplay().asyncExec(() -> {
-            if (!isDisposed()) {
-                rethin();
-            }
-        }));
     }
 
     /** Shows a fit, replacing what was shown, at full wavenumber range. */
     public void show(FitDisplay fit) {
         shown = fit;
         heading.setText(fit.title());
+        spectrum.suspendUpdate(true);
+        residual.suspendUpdate(true);
         ChartStyle.removeAllSeries(spectrum);
         ChartStyle.removeAllSeries(residual);
         spectrumData.clear();
@@ -84,11 +79,10 @@ public final class SpectrumPanel extends Composite {
         spectrumData.put(ChartStyle.line(spectrum, SAMPLE, Palette.SAMPLE, 1), fit.wavenumber(), fit.sample());
         int i = 0;
         for (Map.Entry<String, double[]> e : fit.shares().entrySet()) {
-            ILineSeries<?> s = ChartStyle.line(spectrum, SHARE_PREFIX + e.getKey(), Palette.compound(i++), 1);
-            s.setLineStyle(LineStyle.DASH);
-            spectrumData.put(s, fit.wavenumber(), e.getValue());
+            spectrumData.put(ChartStyle.line(spectrum, SHARE_PREFIX + e.getKey(), Palette.compound(i++), 1),
+                    fit.wavenumber(), e.getValue());
         }
-        spectrumData.put(ChartStyle.line(spectrum, FIT, Palette.FIT, 2), fit.wavenumber(), fit.model());
+        spectrumData.put(ChartStyle.line(spectrum, FIT, Palette.FIT, 1), fit.wavenumber(), fit.model());
         residualData.put(ChartStyle.line(residual, RESIDUAL, Palette.RESIDUAL, 1), fit.wavenumber(), fit.residual());
         spectrumShading.setBands(fit.windows());
         residualShading.setBands(fit.windows());
@@ -98,6 +92,8 @@ public final class SpectrumPanel extends Composite {
         rethin();
         spectrum.getAxisSet().getYAxis(0).adjustRange();
         residual.getAxisSet().getYAxis(0).adjustRange();
+        spectrum.suspendUpdate(false);
+        residual.suspendUpdate(false);
         layout(true, true);
         redrawCharts();
     }

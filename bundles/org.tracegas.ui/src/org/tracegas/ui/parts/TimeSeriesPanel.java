@@ -10,14 +10,13 @@ import org.eclipse.swt.widgets.Label;
 import org.eclipse.swtchart.Chart;
 import org.eclipse.swtchart.ILineSeries;
 import org.eclipse.swtchart.ILineSeries.PlotSymbolType;
-import org.eclipse.swtchart.LineStyle;
 import org.eclipse.swtchart.Range;
 import org.tracegas.ui.chart.ChartNavigation;
 import org.tracegas.ui.chart.CursorReadout;
 import org.tracegas.ui.chart.DecimatedSeries;
 
 /**
- * Concentrations over time, one line per compound, flagged values marked with a cross and limits as dashed
+ * Concentrations over time, one line per compound, flagged values marked with a cross and limits as red
  * horizontal lines. Long records (a day of one-second values) are thinned per pixel column for drawing.
  */
 public final class TimeSeriesPanel extends Composite {
@@ -48,16 +47,12 @@ public final class TimeSeriesPanel extends Composite {
         data = new DecimatedSeries(chart);
         new ChartNavigation(this::rethin, chart);
         new CursorReadout(chart, readout, "%.4f h", "concentration");
-        addListener(SWT.Resize, e -> getDisplay().asyncExec(() -> {
-            if (!isDisposed()) {
-                rethin();
-            }
-        }));
     }
 
     /** Shows traces and limit lines over the whole period. */
     public void show(String title, List<ConcentrationTrace> traces, List<Limit> limits) {
         heading.setText(title);
+        chart.suspendUpdate(true);
         ChartStyle.removeAllSeries(chart);
         data.clear();
         String unit = traces.isEmpty() ? "" : traces.get(0).unit();
@@ -74,8 +69,7 @@ public final class TimeSeriesPanel extends Composite {
         }
         Range full = data.fullXRange();
         for (Limit l : limits) {
-            ILineSeries<?> s = ChartStyle.line(chart, "Limit " + l.name(), Palette.LIMIT, 2);
-            s.setLineStyle(LineStyle.DASH);
+            ILineSeries<?> s = ChartStyle.line(chart, "Limit " + l.name(), Palette.LIMIT, 1);
             if (full != null) {
                 data.put(s, new double[] {full.lower, full.upper}, new double[] {l.value(), l.value()});
             }
@@ -85,6 +79,7 @@ public final class TimeSeriesPanel extends Composite {
         }
         rethin();
         chart.getAxisSet().getYAxis(0).adjustRange();
+        chart.suspendUpdate(false);
         chart.redraw();
     }
 

@@ -1,5 +1,6 @@
 package org.tracegas.ui.session;
 
+import java.time.Duration;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.EnumSet;
@@ -23,6 +24,10 @@ import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.Role;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.qa.checks.AbsorbanceRegion;
+import org.tracegas.qa.checks.BackgroundAgeCheck;
+import org.tracegas.qa.checks.CheckOutcome;
+import org.tracegas.qa.checks.NoiseCheck;
 import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.QuantificationMethod;
@@ -53,11 +58,15 @@ public final class DemoProject {
 
     static final SpectralAxis AXIS = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1950, 0.5, 701);
     static final double PATH_METRES = 5.0;
+    /** Sample times; the last comes long after the background, so its background-age check fails. */
+    static final List<Instant> TIMES = List.of(Instant.parse("2026-03-10T08:00:00Z"),
+            Instant.parse("2026-03-10T08:01:00Z"), Instant.parse("2026-03-10T09:10:00Z"));
+    static final Instant BACKGROUND = Instant.parse("2026-03-10T07:20:00Z");
 
     /** Ids of what was seeded, the model tree for the navigator and the method for runs. */
     public record Seeded(Workspace model, String projectId, List<String> measurementIds, String methodVersionId,
             String libraryVersionId, QuantificationMethod method, List<org.tracegas.library.ReferenceSpectrum> library,
-            List<Spectrum> samples) {
+            List<Spectrum> samples, List<Instant> measurementTimes, Instant backgroundTime) {
     }
 
     private DemoProject() {
@@ -77,11 +86,10 @@ public final class DemoProject {
         store.projects().grant(admin, project.id(), analystId, AccessLevel.WRITE);
         store.projects().grant(admin, project.id(), managerId, AccessLevel.READ);
         Session analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
-        Instant start = Instant.parse("2026-03-10T08:00:00Z");
         List<String> measurements = new ArrayList<>();
-        for (int i = 0; i < 3; i++) {
-            measurements.add(store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE,
-                    start.plusSeconds(60L * i), 453.15, 1013.0));
+        for (Instant t : TIMES) {
+            measurements.add(store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE, t,
+                    453.15, 1013.0));
         }
         List<ReferenceSpectrum> refs = references();
         QuantificationMethod method = method(refs);
@@ -93,9 +101,9 @@ public final class DemoProject {
         for (int i = 0; i < measurements.size(); i++) {
             samples.add(sample(refs, 40 + 15 * i, 8 + 2 * i, 9000, 11 + i));
         }
-        Workspace model = model(project, measurements, start, method, methodVersion, library);
+        Workspace model = model(project, measurements, method, methodVersion, library);
         return new Seeded(model, project.id(), List.copyOf(measurements), methodVersion.id(), library.id(), method,
-                libraryEntries(refs), List.copyOf(samples));
+                libraryEntries(refs), List.copyOf(samples), TIMES, BACKGROUND);
     }
 
     /** Invented band shapes at 100 ppm·m each. */
@@ -144,6 +152,22 @@ public final class DemoProject {
         return new Spectrum(AXIS, v, Ordinate.ABSORBANCE);
     }
 
+    /**
+     * QA checks of the demo measurements: background age against {@code backgroundLimit} and baseline noise
+     * in a band-free stretch (2280 to 2340 cm-1) against 1e-3 absorbance RMS.
+     */
+    public static List<CheckOutcome> checks(Seeded demo, Duration backgroundLimit) {
+        BackgroundAgeCheck age = new BackgroundAgeCheck(backgroundLimit);
+        NoiseCheck noise = new NoiseCheck(new AbsorbanceRegion(2280, 2340), 1e-3);
+        List<CheckOutcome> out = new ArrayList<>();
+        for (int i = 0; i < demo.samples().size(); i++) {
+            out.add(age.evaluate(demo.backgroundTime(), demo.measurementTimes().get(i)));
+            Spectrum s = demo.samples().get(i);
+            out.add(noise.evaluate(s.axis().toArray(), s.toArray()));
+        }
+        return List.copyOf(out);
+    }
+
     private static List<org.tracegas.library.ReferenceSpectrum> libraryEntries(List<ReferenceSpectrum> refs) {
         String[][] ids = {{"630-08-0", "CO", "28.010"}, {"10024-97-2", "N2O", "44.013"}, {"7732-18-5", "H2O", "18.015"}};
         List<org.tracegas.library.ReferenceSpectrum> out = new ArrayList<>();
@@ -157,7 +181,7 @@ public final class DemoProject {
         return List.copyOf(out);
     }
 
-    private static Workspace model(ProjectInfo info, List<String> measurementIds, Instant start,
+    private static Workspace model(ProjectInfo info, List<String> measurementIds,
             QuantificationMethod method, VersionInfo methodVersion, VersionInfo library) {
         WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
         Workspace w = f.createWorkspace();
@@ -173,7 +197,7 @@ public final class DemoProject {
             Measurement m = f.createMeasurement();
             m.setId(measurementIds.get(i));
             m.setKind(MeasurementKind.SAMPLE);
-            m.setTime(start.plusSeconds(60L * i));
+            m.setTime(TIMES.get(i));
             m.setCellTemperature(453.15);
             m.setCellPressure(1013.0);
             p.getMeasurements().add(m);

@@ -1,36 +1,45 @@
 package org.tracegas.ui.views;
 
-import org.eclipse.swt.SWT;
-import org.eclipse.swt.layout.GridData;
-import org.eclipse.swt.layout.GridLayout;
-import org.eclipse.swt.widgets.Composite;
-import org.eclipse.swt.widgets.Label;
-import org.eclipse.swtchart.Chart;
-import org.eclipse.ui.part.ViewPart;
+import java.util.List;
+import java.util.function.Consumer;
 
-/** A spectrum and its fit, drawn with SWTChart. */
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.ui.part.ViewPart;
+import org.tracegas.ui.jobs.AnalysisRuns;
+import org.tracegas.ui.jobs.BatchQuantificationJob;
+import org.tracegas.ui.parts.SpectrumPanel;
+import org.tracegas.ui.session.Desk;
+
+/** The fit of the last measurement run, drawn by {@link SpectrumPanel}. */
 public final class SpectrumView extends ViewPart {
 
     public static final String ID = "org.tracegas.ui.views.spectrum";
 
-    private Chart chart;
+    private SpectrumPanel panel;
+    private final Consumer<List<BatchQuantificationJob.Outcome>> listener = this::show;
 
     @Override
     public void createPartControl(Composite parent) {
-        parent.setLayout(new GridLayout(1, false));
-        Label caution = new Label(parent, SWT.WRAP);
-        caution.setText("Results concern toxic gases and may feed compliance decisions: they need review by "
-                + "qualified staff, under local regulations and accredited practice.");
-        caution.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
-        chart = new Chart(parent, SWT.NONE);
-        chart.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        chart.getTitle().setText("Absorbance");
-        chart.getAxisSet().getXAxis(0).getTitle().setText("Wavenumber (cm⁻¹)");
-        chart.getAxisSet().getYAxis(0).getTitle().setText("Absorbance");
+        panel = new SpectrumPanel(parent, SWT.NONE);
+        show(Desk.get().lastRun());
+        Desk.get().addRunListener(listener);
+    }
+
+    private void show(List<BatchQuantificationJob.Outcome> outcomes) {
+        if (!outcomes.isEmpty() && !panel.isDisposed()) {
+            panel.show(AnalysisRuns.fit(outcomes.get(outcomes.size() - 1)));
+        }
+    }
+
+    @Override
+    public void dispose() {
+        Desk.get().removeRunListener(listener);
+        super.dispose();
     }
 
     @Override
     public void setFocus() {
-        chart.setFocus();
+        panel.setFocus();
     }
 }

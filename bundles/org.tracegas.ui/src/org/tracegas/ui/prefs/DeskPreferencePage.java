@@ -1,0 +1,57 @@
+package org.tracegas.ui.prefs;
+
+import org.eclipse.jface.preference.DirectoryFieldEditor;
+import org.eclipse.jface.preference.FieldEditorPreferencePage;
+import org.eclipse.jface.preference.IntegerFieldEditor;
+import org.eclipse.jface.preference.StringFieldEditor;
+import org.eclipse.ui.IWorkbench;
+import org.eclipse.ui.IWorkbenchPreferencePage;
+import org.eclipse.ui.preferences.ScopedPreferenceStore;
+import org.eclipse.core.runtime.preferences.InstanceScope;
+
+/** Background age limit, workspace folder and lab server. */
+public final class DeskPreferencePage extends FieldEditorPreferencePage implements IWorkbenchPreferencePage {
+
+    /** Accepted background age limits in minutes (a day at most). */
+    static final int MAX_BACKGROUND_MINUTES = 24 * 60;
+
+    public DeskPreferencePage() {
+        super(GRID);
+        setDescription("Settings of the analysis and review desks. A changed workspace or server is used at the "
+                + "next start.");
+    }
+
+    @Override
+    public void init(IWorkbench workbench) {
+        setPreferenceStore(new ScopedPreferenceStore(InstanceScope.INSTANCE, "org.tracegas.ui"));
+        DeskPreferences.setDefaults(getPreferenceStore());
+    }
+
+    @Override
+    protected void createFieldEditors() {
+        IntegerFieldEditor age = new IntegerFieldEditor(DeskPreferences.BACKGROUND_AGE_MINUTES,
+                "Background age limit (minutes)", getFieldEditorParent());
+        age.setValidRange(1, MAX_BACKGROUND_MINUTES);
+        age.setErrorMessage("Background age limit: a whole number of minutes from 1 to " + MAX_BACKGROUND_MINUTES);
+        addField(age);
+        addField(new DirectoryFieldEditor(DeskPreferences.WORKSPACE_FOLDER, "Workspace folder",
+                getFieldEditorParent()));
+        addField(new ServerUrlEditor(DeskPreferences.SERVER_URL, "Lab server URL (empty: local workspace)",
+                getFieldEditorParent()));
+    }
+
+    /** Accepts an empty text or a jdbc:postgresql: URL. */
+    static final class ServerUrlEditor extends StringFieldEditor {
+        ServerUrlEditor(String name, String label, org.eclipse.swt.widgets.Composite parent) {
+            super(name, label, parent);
+            setEmptyStringAllowed(true);
+            setErrorMessage("Lab server URL: must start with jdbc:postgresql:// or be empty");
+        }
+
+        @Override
+        protected boolean doCheckState() {
+            String v = getStringValue().trim();
+            return v.isEmpty() || v.startsWith("jdbc:postgresql://");
+        }
+    }
+}

@@ -1,0 +1,36 @@
+package org.tracegas.ui.prefs;
+
+import java.nio.file.Path;
+import java.time.Duration;
+
+import org.eclipse.jface.preference.IPreferenceStore;
+
+/** Preference keys of the desk and their defaults. */
+public final class DeskPreferences {
+
+    /** Longest accepted age of a background spectrum, in minutes. */
+    public static final String BACKGROUND_AGE_MINUTES = "backgroundAgeMinutes";
+    /** Folder of the embedded workspace. */
+    public static final String WORKSPACE_FOLDER = "workspaceFolder";
+    /** A lab server's jdbc:postgresql: URL; empty for the embedded workspace. */
+    public static final String SERVER_URL = "serverUrl";
+
+    public static final int DEFAULT_BACKGROUND_AGE_MINUTES = 60;
+
+    private DeskPreferences() {
+    }
+
+    public static void setDefaults(IPreferenceStore store) {
+        store.setDefault(BACKGROUND_AGE_MINUTES, DEFAULT_BACKGROUND_AGE_MINUTES);
+        store.setDefault(WORKSPACE_FOLDER, Path.of(System.getProperty("user.home"), "tracegas-workspace").toString());
+        store.setDefault(SERVER_URL, "");
+    }
+
+    public static Duration backgroundAgeLimit(IPreferenceStore store) {
+        return Duration.ofMinutes(store.getInt(BACKGROUND_AGE_MINUTES));
+    }
+
+    public static Path workspaceFolder(IPreferenceStore store) {
+        return Path.of(store.getString(WORKSPACE_FOLDER));
+    }
+}

@@ -1,0 +1,44 @@
+package org.tracegas.ui.views;
+
+import org.eclipse.jface.viewers.IStructuredSelection;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.ui.part.ViewPart;
+import org.tracegas.model.Project;
+import org.tracegas.model.Workspace;
+import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.ui.jobs.AnalysisRuns;
+import org.tracegas.ui.parts.WorkspaceNavigator;
+import org.tracegas.ui.session.Desk;
+
+/** The workspace tree; double-clicking a project runs its method over its measurements in the background. */
+public final class NavigatorView extends ViewPart {
+
+    public static final String ID = "org.tracegas.ui.views.navigator";
+
+    private WorkspaceNavigator navigator;
+
+    @Override
+    public void createPartControl(Composite parent) {
+        navigator = new WorkspaceNavigator(parent, SWT.NONE);
+        Desk desk = Desk.get();
+        Workspace model = desk.project() == null ? WorkspaceFactory.eINSTANCE.createWorkspace()
+                : desk.project().model();
+        navigator.setWorkspace(model);
+        navigator.viewer().addDoubleClickListener(e -> {
+            Object o = ((IStructuredSelection) e.getSelection()).getFirstElement();
+            if (o instanceof Project p && desk.project() != null && p.getId().equals(desk.project().projectId())) {
+                Display display = navigator.getDisplay();
+                AnalysisRuns.job(desk.access(), desk.session(), desk.project(),
+                        outcomes -> display.asyncExec(() -> desk.runFinished(outcomes))).schedule();
+            }
+        });
+        getSite().setSelectionProvider(navigator.viewer());
+    }
+
+    @Override
+    public void setFocus() {
+        navigator.setFocus();
+    }
+}
