@@ -59,9 +59,10 @@ public final class Quantifier {
      *                                  at a fit point (the message names the index)
      */
     public SpectrumResult quantify(Sample sample) {
+        List<CompoundResult> results = fit(sample);
         ReprocessingRecord record = new ReprocessingRecord(prepared.method().contentHash(), libraryHash,
                 softwareVersion, hasher.hash(sample.absorbance()));
-        return new SpectrumResult(fit(sample), record);
+        return new SpectrumResult(results, record);
     }
 
     /**
@@ -70,6 +71,9 @@ public final class Quantifier {
      * @throws IllegalArgumentException as {@link #quantify(Sample)}
      */
     public List<CompoundResult> fit(Sample sample) {
+        if (sample == null) {
+            throw new IllegalArgumentException("sample must not be null");
+        }
         Spectrum spectrum = sample.absorbance();
         if (spectrum.ordinate() != Ordinate.ABSORBANCE) {
             throw new IllegalArgumentException("sample ordinate must be ABSORBANCE, was " + spectrum.ordinate());
