@@ -25,7 +25,7 @@ final class H2Backend implements TestBackend {
         JdbcDataSource ds = new JdbcDataSource();
         // same file and settings as the store, so the open in-process database is shared
         ds.setURL("jdbc:h2:file:" + folder.toAbsolutePath().resolve("workspace")
-                + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000");
+                + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000;CACHE_SIZE=16384");
         return ds.getConnection();
     }
 

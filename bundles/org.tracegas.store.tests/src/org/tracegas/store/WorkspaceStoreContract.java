@@ -77,11 +77,11 @@ abstract class WorkspaceStoreContract {
 
     @Test
     void migrationFromEmptyAppliesTheSchemaOnceAndReopeningKeepsIt() throws Exception {
-        assertEquals(List.of("1"), column("SELECT version FROM \"schema_history\" WHERE success = TRUE"
-                + " AND version IS NOT NULL ORDER BY installed_rank"));
+        assertEquals(List.of("1"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"success\" = TRUE"
+                + " AND \"version\" IS NOT NULL ORDER BY \"installed_rank\""));
         store.close();
         store = backend.open();
-        assertEquals(List.of("1"), column("SELECT version FROM \"schema_history\" WHERE version IS NOT NULL"));
+        assertEquals(List.of("1"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"version\" IS NOT NULL"));
         assertEquals("Kiln stack spring campaign", store.projects().project(analyst, project.id()).name());
     }
 

@@ -24,9 +24,11 @@ import org.tracegas.store.StoredSpectrum;
 final class JdbcSpectrumService implements SpectrumService {
 
     private final Transactions transactions;
+    private final Backend backend;
 
-    JdbcSpectrumService(Transactions transactions) {
+    JdbcSpectrumService(Transactions transactions, Backend backend) {
         this.transactions = transactions;
+        this.backend = backend;
     }
 
     @Override
@@ -75,8 +77,7 @@ final class JdbcSpectrumService implements SpectrumService {
         try {
             c = transactions.openReadConnection();
             Guard.requireProject(new Tx(c), actor, projectId, AccessLevel.READ);
-            ps = c.prepareStatement("SELECT " + SpectrumRows.COLUMNS
-                    + " FROM spectral_data WHERE project_id = ? ORDER BY seq", ResultSet.TYPE_FORWARD_ONLY,
+            ps = c.prepareStatement(backend.spectraOfProject(), ResultSet.TYPE_FORWARD_ONLY,
                     ResultSet.CONCUR_READ_ONLY);
             ps.setString(1, projectId);
             return SpectrumCursor.stream(c, ps);

@@ -77,16 +77,21 @@ final class JdbcUserService implements UserService {
     private record Attempt(Session session, boolean locked) {
     }
 
+    /** The credential columns of one user. */
+    private record Credentials(String id, String roles, byte[] salt, byte[] hash, int iterations, int failures,
+            boolean locked) {
+    }
+
     @Override
     public Session logIn(String login, char[] password) {
         Attempt attempt = transactions.run("log-in of " + login, tx -> {
             // FOR UPDATE: concurrent wrong attempts must all count
-            var row = tx.queryOne("SELECT id, roles, password_salt, password_hash, password_iterations,"
-                    + " failed_logins, locked FROM app_user WHERE login = ? FOR UPDATE", rs -> new Object[] {
-                        rs.getString("id"), rs.getString("roles"), rs.getBytes("password_salt"),
-                        rs.getBytes("password_hash"), rs.getInt("password_iterations"),
-                        rs.getInt("failed_logins"), rs.getBoolean("locked")}, login);
-            if (row.isEmpty()) {
+            Credentials stored = tx.queryOne("SELECT id, roles, password_salt, password_hash, password_iterations,"
+                    + " failed_logins, locked FROM app_user WHERE login = ? FOR UPDATE",
+                    rs -> new Credentials(rs.getString("id"), rs.getString("roles"), rs.getBytes("password_salt"),
+                            rs.getBytes("password_hash"), rs.getInt("password_iterations"),
+                            rs.getInt("failed_logins"), rs.getBoolean("locked")), login).orElse(null);
+            if (stored == null) {
                 // still hash once, so that an unknown login takes as long as a wrong password
                 PasswordHasher.hash(password == null ? new char[0] : password, PasswordHasher.newSalt(),
                         PasswordHasher.ITERATIONS, PasswordHasher.HASH_BYTES);
@@ -94,29 +99,26 @@ final class JdbcUserService implements UserService {
                         .reason("log-in with an unknown login").build());
                 return new Attempt(null, false);
             }
-            Object[] r = row.get();
-            String id = (String) r[0];
-            if ((Boolean) r[6]) {
-                tx.audit(AuditEntry.builder(id, AuditAction.REFUSED, "user", id)
+            if (stored.locked()) {
+                tx.audit(AuditEntry.builder(stored.id(), AuditAction.REFUSED, "user", stored.id())
                         .reason("log-in to a locked account").build());
                 return new Attempt(null, true);
             }
-            int iterations = (Integer) r[4];
-            if (iterations < PasswordHasher.MIN_ITERATIONS) {
-                throw new IllegalStateException("stored password hash of user " + id + " has only " + iterations
-                        + " iterations, fewer than " + PasswordHasher.MIN_ITERATIONS);
+            if (stored.iterations() < PasswordHasher.MIN_ITERATIONS) {
+                throw new IllegalStateException("stored password hash of user " + stored.id() + " has only "
+                        + stored.iterations() + " iterations, fewer than " + PasswordHasher.MIN_ITERATIONS);
             }
             boolean ok = password != null
-                    && PasswordHasher.verify(password, (byte[]) r[2], iterations, (byte[]) r[3]);
+                    && PasswordHasher.verify(password, stored.salt(), stored.iterations(), stored.hash());
             if (ok) {
-                tx.update("UPDATE app_user SET failed_logins = 0 WHERE id = ?", id);
-                tx.audit(AuditEntry.builder(id, AuditAction.LOGIN, "user", id).build());
-                return new Attempt(new Session(id, login, RoleSets.parse((String) r[1])), false);
+                tx.update("UPDATE app_user SET failed_logins = 0 WHERE id = ?", stored.id());
+                tx.audit(AuditEntry.builder(stored.id(), AuditAction.LOGIN, "user", stored.id()).build());
+                return new Attempt(new Session(stored.id(), login, RoleSets.parse(stored.roles())), false);
             }
-            int failures = (Integer) r[5] + 1;
+            int failures = stored.failures() + 1;
             boolean lock = failures >= maxFailedLogins;
-            tx.update("UPDATE app_user SET failed_logins = ?, locked = ? WHERE id = ?", failures, lock, id);
-            tx.audit(AuditEntry.builder(id, AuditAction.REFUSED, "user", id)
+            tx.update("UPDATE app_user SET failed_logins = ?, locked = ? WHERE id = ?", failures, lock, stored.id());
+            tx.audit(AuditEntry.builder(stored.id(), AuditAction.REFUSED, "user", stored.id())
                     .reason("wrong password, failure " + failures + " of " + maxFailedLogins
                             + (lock ? "; account locked" : ""))
                     .build());

@@ -28,20 +28,20 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     public static final int DEFAULT_MAX_FAILED_LOGINS = 5;
 
     private final DataSource dataSource;
-    private final boolean embedded;
+    private final Backend backend;
     private final UserService users;
     private final ProjectService projects;
     private final SpectrumService spectra;
     private final VersionService versions;
     private final ResultService results;
 
-    private JdbcWorkspaceStore(DataSource dataSource, boolean embedded, int maxFailedLogins) {
+    private JdbcWorkspaceStore(DataSource dataSource, Backend backend, int maxFailedLogins) {
         this.dataSource = dataSource;
-        this.embedded = embedded;
+        this.backend = backend;
         Transactions transactions = new Transactions(dataSource);
         users = new JdbcUserService(transactions, maxFailedLogins);
         projects = new JdbcProjectService(transactions);
-        spectra = new JdbcSpectrumService(transactions);
+        spectra = new JdbcSpectrumService(transactions, backend);
         versions = new JdbcVersionService(transactions);
         results = new JdbcResultService(transactions);
     }
@@ -56,8 +56,8 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         // LAZY_QUERY_EXECUTION lets a streamed query read rows on demand instead of building the result first;
         // LOCK_TIMEOUT covers the longest audited transaction waiting for the audit chain head.
         ds.setURL("jdbc:h2:file:" + folder.toAbsolutePath().resolve("workspace")
-                + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000");
-        return open(ds, true, maxFailedLogins);
+                + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000;CACHE_SIZE=16384");
+        return open(ds, Backend.H2, maxFailedLogins);
     }
 
     /** A PostgreSQL database; the URL may name the schema with {@code currentSchema=}. */
@@ -69,11 +69,11 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         ds.setURL(url);
         ds.setUser(user);
         ds.setPassword(password);
-        return open(ds, false, maxFailedLogins);
+        return open(ds, Backend.POSTGRESQL, maxFailedLogins);
     }
 
-    private static JdbcWorkspaceStore open(DataSource ds, boolean embedded, int maxFailedLogins) {
-        JdbcWorkspaceStore store = new JdbcWorkspaceStore(ds, embedded, maxFailedLogins);
+    private static JdbcWorkspaceStore open(DataSource ds, Backend backend, int maxFailedLogins) {
+        JdbcWorkspaceStore store = new JdbcWorkspaceStore(ds, backend, maxFailedLogins);
         try {
             Migrations.migrate(ds);
             try (Connection c = ds.getConnection()) {
@@ -113,7 +113,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
 
     @Override
     public void close() {
-        if (!embedded) {
+        if (backend != Backend.H2) {
             return; // connections are per operation; nothing stays open
         }
         try (Connection c = dataSource.getConnection(); Statement s = c.createStatement()) {
