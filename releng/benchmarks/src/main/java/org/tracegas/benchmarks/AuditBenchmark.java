@@ -60,7 +60,8 @@ public class AuditBenchmark {
 
     @Setup
     public void setUp() throws Exception {
-        c = open(db);
+        dir = Files.createTempDirectory("audit-bench");
+        c = open(db, dir);
         if (db.equals("postgresql")) {
             schema = "audit_bench_" + UUID.randomUUID().toString().replace("-", "").substring(0, 12);
             try (Statement s = c.createStatement()) {
@@ -87,7 +88,8 @@ public class AuditBenchmark {
                 + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
     }
 
-    static Connection open(String db) throws SQLException, IOException {
+    /** A connection to PostgreSQL, or to a new H2 file database in {@code dir}. */
+    static Connection open(String db, Path dir) throws SQLException {
         Properties p = new Properties();
         if (db.equals("postgresql")) {
             p.setProperty("user", System.getProperty("tracegas.test.pg.user", "tracegas"));
@@ -98,26 +100,25 @@ public class AuditBenchmark {
         p.setProperty("user", "sa");
         p.setProperty("password", "");
         Driver h2 = new org.h2.Driver();
-        return h2.connect("jdbc:h2:file:" + Files.createTempDirectory("audit-bench").resolve("audit") + ";WRITE_DELAY=0", p);
+        return h2.connect("jdbc:h2:file:" + dir.resolve("audit") + ";WRITE_DELAY=0", p);
     }
 
     @TearDown
     public void tearDown() throws Exception {
+        close(c, schema, dir);
+    }
+
+    /** Drops the PostgreSQL schema, or shuts H2 down; then deletes {@code dir}. */
+    static void close(Connection c, String schema, Path dir) throws SQLException, IOException {
         try (Statement s = c.createStatement()) {
+            s.execute(schema == null ? "SHUTDOWN" : "DROP SCHEMA " + schema + " CASCADE");
             if (schema != null) {
-                s.execute("DROP SCHEMA " + schema + " CASCADE");
                 c.commit();
-            } else {
-                String url = c.getMetaData().getURL();
-                s.execute("SHUTDOWN");
-                dir = Path.of(url.substring("jdbc:h2:file:".length(), url.indexOf(';'))).getParent();
             }
         }
         c.close();
-        if (dir != null) {
-            try (Stream<Path> files = Files.walk(dir)) {
-                files.sorted(Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
-            }
+        try (Stream<Path> files = Files.walk(dir)) {
+            files.sorted(Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
         }
     }
 

@@ -1,5 +1,7 @@
 package org.tracegas.benchmarks;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.sql.Statement;
@@ -53,10 +55,12 @@ public class AuditChainBenchmark {
 
         Connection c;
         private String schema;
+        private Path dir;
 
         @Setup(Level.Iteration)
         public void setUp() throws Exception {
-            c = AuditBenchmark.open(db);
+            dir = Files.createTempDirectory("audit-chain");
+            c = AuditBenchmark.open(db, dir);
             if (db.equals("postgresql")) {
                 schema = "audit_chain_" + System.nanoTime();
                 try (Statement s = c.createStatement()) {
@@ -69,14 +73,8 @@ public class AuditChainBenchmark {
         }
 
         @TearDown(Level.Iteration)
-        public void tearDown() throws SQLException {
-            try (Statement s = c.createStatement()) {
-                s.execute(schema == null ? "SHUTDOWN" : "DROP SCHEMA " + schema + " CASCADE");
-                if (schema != null) {
-                    c.commit();
-                }
-            }
-            c.close();
+        public void tearDown() throws Exception {
+            AuditBenchmark.close(c, schema, dir);
         }
     }
 
