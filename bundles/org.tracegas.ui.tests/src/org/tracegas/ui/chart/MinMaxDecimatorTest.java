@@ -69,11 +69,12 @@ class MinMaxDecimatorTest {
 
     @Test
     void descendingAxisAndNaNGapsAreHandled() {
-        double[] x = {10, 9, 8, 7, 6};
-        double[] y = {1, Double.NaN, 3, 2, 5};
-        MinMaxDecimator.Decimated d = MinMaxDecimator.decimate(x, y, 6, 10, 100);
-        assertArrayEquals(new double[] {10, 8, 7, 6}, d.x());
-        assertArrayEquals(new double[] {1, 3, 2, 5}, d.y());
+        double[] x = {10, 9, 8, 7, 6, 5};
+        double[] y = {1, Double.NaN, 3, 2, Double.NaN, Double.NaN};
+        MinMaxDecimator.Decimated d = MinMaxDecimator.decimate(x, y, 5, 10, 100);
+        // the NaN at 9 becomes one gap point; the trailing NaN run one more
+        assertArrayEquals(new double[] {10, 10, 8, 7, 7}, d.x());
+        assertArrayEquals(new double[] {1, Double.NaN, 3, 2, Double.NaN}, d.y());
     }
 
     @Test

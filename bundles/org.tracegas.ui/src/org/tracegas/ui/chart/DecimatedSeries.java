@@ -4,78 +4,271 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.events.PaintEvent;
+import org.eclipse.swt.graphics.Color;
+import org.eclipse.swt.graphics.Image;
+import org.eclipse.swt.graphics.ImageData;
+import org.eclipse.swt.graphics.PaletteData;
+import org.eclipse.swt.graphics.Point;
 import org.eclipse.swtchart.Chart;
-import org.eclipse.swtchart.IAxis;
-import org.eclipse.swtchart.ISeries;
+import org.eclipse.swtchart.ICustomPaintListener;
+import org.eclipse.swtchart.ILineSeries;
+import org.eclipse.swtchart.LineStyle;
 import org.eclipse.swtchart.Range;
 
 /**
- * Keeps the full data of a chart's line series and hands the chart only a min/max thinned copy for the
- * visible x range, so that redraws cost the same for 1,000 or 100,000 points. Call {@link #refresh()} after
- * the x range or the chart size changed.
+ * Draws a chart's line series fast, whatever their length. SWTChart strokes every segment on its own, which
+ * costs tens of microseconds per segment in software rendering; here the full data are thinned per pixel
+ * column ({@link MinMaxDecimator}), rasterized in Java into one transparent image, and that image is painted
+ * over the plot area. The image is kept until the data, the axis ranges or the plot size change, so a plain
+ * repaint costs one image copy. The SWTChart series stay in place, without data, for the legend.
  */
-public final class DecimatedSeries {
+public final class DecimatedSeries implements ICustomPaintListener {
 
-    private record Full(double[] x, double[] y) {
+    private record Full(double[] x, double[] y, int rgb, boolean markers) {
     }
 
     private final Chart chart;
     private final Map<String, Full> data = new LinkedHashMap<>();
+    private final Map<String, Integer> drawn = new LinkedHashMap<>();
+    private Image cache;
+    private String cacheKey = "";
+    private int version;
 
     public DecimatedSeries(Chart chart) {
         this.chart = chart;
-        // SWTChart's own compression drops points that fall on the same pixel; it works on top of ours
         chart.enableCompress(true);
-        // the number of pixel columns changes with the plot area's size
-        chart.getPlotArea().getControl().addListener(SWT.Resize, e -> refresh());
+        chart.getPlotArea().addCustomPaintListener(this);
+        chart.addListener(SWT.Dispose, e -> clearCache());
     }
 
-    /** Gives a series (created beforehand on the chart) its full data. */
-    public void put(ISeries<?> series, double[] x, double[] y) {
+    /**
+     * Gives a series (created beforehand on the chart) its full data. A series without line style is drawn as
+     * crosses at its points (flag markers).
+     */
+    public void put(ILineSeries<?> series, double[] x, double[] y) {
         if (x.length != y.length) {
             throw new IllegalArgumentException("series " + series.getId() + ": y has " + y.length
                     + " points, x has " + x.length);
         }
-        data.put(series.getId(), new Full(x.clone(), y.clone()));
+        boolean markers = series.getLineStyle() == LineStyle.NONE;
+        Color c = markers ? series.getSymbolColor() : series.getLineColor();
+        data.put(series.getId(), new Full(x.clone(), y.clone(), (c.getRed() << 16) | (c.getGreen() << 8) | c.getBlue(),
+                markers));
+        series.setXSeries(new double[0]);
+        series.setYSeries(new double[0]);
+        version++;
     }
 
     public void clear() {
         data.clear();
+        drawn.clear();
+        version++;
     }
 
     /** The x range that shows all data, or null without data. */
     public Range fullXRange() {
+        return range(true);
+    }
+
+    /** The y range of all data with 5 % head room above and below, or null without data. */
+    public Range fullYRange() {
+        Range r = range(false);
+        if (r == null) {
+            return null;
+        }
+        double pad = 0.05 * (r.upper - r.lower);
+        return new Range(r.lower - pad, r.upper + pad);
+    }
+
+    private Range range(boolean x) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (Full f : data.values()) {
-            for (double v : f.x) {
-                lo = Math.min(lo, v);
-                hi = Math.max(hi, v);
+            for (double v : x ? f.x : f.y) {
+                if (!Double.isNaN(v)) {
+                    lo = Math.min(lo, v);
+                    hi = Math.max(hi, v);
+                }
             }
         }
-        return lo < hi ? new Range(lo, hi) : null;
+        if (!(lo <= hi)) {
+            return null;
+        }
+        return lo < hi ? new Range(lo, hi) : new Range(lo - 1, hi + 1);
     }
 
-    /** Re-thins every series for the current x range and plot width. */
+    /** Marks the picture out of date and repaints (after a zoom, pan or new data). */
     public void refresh() {
-        IAxis xAxis = chart.getAxisSet().getXAxis(0);
-        Range r = xAxis.getRange();
-        int columns = Math.max(1, chart.getPlotArea().getSize().x);
-        for (Map.Entry<String, Full> e : data.entrySet()) {
-            ISeries<?> s = chart.getSeriesSet().getSeries(e.getKey());
-            if (s == null) {
-                continue;
-            }
-            MinMaxDecimator.Decimated d = MinMaxDecimator.decimate(e.getValue().x, e.getValue().y, r.lower, r.upper,
-                    columns);
-            s.setXSeries(d.x());
-            s.setYSeries(d.y());
+        version++;
+        chart.redraw();
+    }
+
+    /** Points drawn for a series at the last paint (after thinning). */
+    public int shownPoints(String seriesId) {
+        ensurePicture();
+        return drawn.getOrDefault(seriesId, 0);
+    }
+
+    @Override
+    public boolean drawBehindSeries() {
+        return false;
+    }
+
+    @Override
+    public void paintControl(PaintEvent e) {
+        Image img = ensurePicture();
+        if (img != null) {
+            e.gc.drawImage(img, 0, 0);
         }
     }
 
-    /** Points the chart holds for a series now (after thinning). */
-    public int shownPoints(String seriesId) {
-        ISeries<?> s = chart.getSeriesSet().getSeries(seriesId);
-        return s == null ? 0 : s.getXSeries().length;
+    private Image ensurePicture() {
+        Point size = chart.getPlotArea().getSize();
+        if (size.x < 2 || size.y < 2 || data.isEmpty()) {
+            return null;
+        }
+        Range xr = chart.getAxisSet().getXAxis(0).getRange();
+        Range yr = chart.getAxisSet().getYAxis(0).getRange();
+        boolean reversed = chart.getAxisSet().getXAxis(0).isReversed();
+        String key = size + " " + xr + " " + yr + " " + reversed + " " + version;
+        if (!key.equals(cacheKey) || cache == null) {
+            clearCache();
+            cache = new Image(chart.getDisplay(), render(size.x, size.y, xr, yr, reversed));
+            cacheKey = key;
+        }
+        return cache;
+    }
+
+    private ImageData render(int w, int h, Range xr, Range yr, boolean reversed) {
+        Raster raster = new Raster(w, h);
+        drawn.clear();
+        for (Map.Entry<String, Full> e : data.entrySet()) {
+            Full f = e.getValue();
+            MinMaxDecimator.Decimated d = MinMaxDecimator.decimate(f.x, f.y, xr.lower, xr.upper, w);
+            drawn.put(e.getKey(), d.size());
+            double sx = (w - 1) / (xr.upper - xr.lower);
+            double sy = (h - 1) / (yr.upper - yr.lower);
+            double px = Double.NaN;
+            double py = Double.NaN;
+            for (int i = 0; i < d.size(); i++) {
+                double y = d.y()[i];
+                if (Double.isNaN(y)) {
+                    px = Double.NaN;
+                    continue;
+                }
+                double cx = (d.x()[i] - xr.lower) * sx;
+                if (reversed) {
+                    cx = (w - 1) - cx;
+                }
+                double cy = (yr.upper - y) * sy;
+                if (f.markers) {
+                    raster.cross((int) Math.round(cx), (int) Math.round(cy), 3, f.rgb);
+                } else if (!Double.isNaN(px)) {
+                    raster.line(px, py, cx, cy, f.rgb);
+                }
+                px = cx;
+                py = cy;
+            }
+        }
+        return raster.toImageData();
+    }
+
+    private void clearCache() {
+        if (cache != null) {
+            cache.dispose();
+            cache = null;
+        }
+    }
+
+    /** An RGB picture with a coverage mask, drawn into with one-pixel lines. */
+    static final class Raster {
+        private final int w;
+        private final int h;
+        private final int[] rgb;
+        private final byte[] alpha;
+
+        Raster(int w, int h) {
+            this.w = w;
+            this.h = h;
+            rgb = new int[w * h];
+            alpha = new byte[w * h];
+        }
+
+        void set(int x, int y, int colour) {
+            if (x >= 0 && x < w && y >= 0 && y < h) {
+                rgb[y * w + x] = colour;
+                alpha[y * w + x] = (byte) 255;
+            }
+        }
+
+        /** A line clipped to the picture (Liang-Barsky), then stepped pixel by pixel (Bresenham). */
+        void line(double x0, double y0, double x1, double y1, int colour) {
+            double[] t = {0, 1};
+            double dx = x1 - x0;
+            double dy = y1 - y0;
+            if (!clip(-dx, x0, t) || !clip(dx, w - 1 - x0, t) || !clip(-dy, y0, t) || !clip(dy, h - 1 - y0, t)) {
+                return;
+            }
+            int ax = (int) Math.round(x0 + t[0] * dx);
+            int ay = (int) Math.round(y0 + t[0] * dy);
+            int bx = (int) Math.round(x0 + t[1] * dx);
+            int by = (int) Math.round(y0 + t[1] * dy);
+            int sx = ax < bx ? 1 : -1;
+            int sy = ay < by ? 1 : -1;
+            int ex = Math.abs(bx - ax);
+            int ey = -Math.abs(by - ay);
+            int err = ex + ey;
+            while (true) {
+                set(ax, ay, colour);
+                if (ax == bx && ay == by) {
+                    return;
+                }
+                int e2 = 2 * err;
+                if (e2 >= ey) {
+                    err += ey;
+                    ax += sx;
+                }
+                if (e2 <= ex) {
+                    err += ex;
+                    ay += sy;
+                }
+            }
+        }
+
+        private static boolean clip(double p, double q, double[] t) {
+            if (p == 0) {
+                return q >= 0;
+            }
+            double r = q / p;
+            if (p < 0) {
+                if (r > t[1]) {
+                    return false;
+                }
+                t[0] = Math.max(t[0], r);
+            } else {
+                if (r < t[0]) {
+                    return false;
+                }
+                t[1] = Math.min(t[1], r);
+            }
+            return true;
+        }
+
+        void cross(int x, int y, int half, int colour) {
+            for (int k = -half; k <= half; k++) {
+                set(x + k, y + k, colour);
+                set(x + k, y - k, colour);
+            }
+        }
+
+        ImageData toImageData() {
+            ImageData d = new ImageData(w, h, 24, new PaletteData(0xFF0000, 0xFF00, 0xFF));
+            for (int y = 0; y < h; y++) {
+                d.setPixels(0, y, w, rgb, y * w);
+            }
+            d.alphaData = alpha;
+            return d;
+        }
     }
 }

@@ -6,7 +6,8 @@ import java.util.Arrays;
  * Thins a monotonic series for drawing: within each pixel column only the lowest and the highest point are
  * kept, in their original order, so peaks, spikes and the outline look exactly as with all points while the
  * number of points drawn is at most about two per column. The nearest point outside each end of the visible
- * range is kept too, so lines run on to the plot edges.
+ * range is kept too, so lines run on to the plot edges. A NaN value between kept points becomes a NaN in the
+ * output, so gaps (e.g. outside the fitted windows) stay gaps.
  */
 public final class MinMaxDecimator {
 
@@ -22,7 +23,7 @@ public final class MinMaxDecimator {
 
     /**
      * @param x       abscissae, ascending or descending
-     * @param y       ordinates, same length; NaN points are left out
+     * @param y       ordinates, same length; a run of NaN values becomes one NaN point (a gap)
      * @param from    one end of the visible range
      * @param to      the other end, different from {@code from}
      * @param columns pixel columns across the visible range, at least 1
@@ -41,9 +42,7 @@ public final class MinMaxDecimator {
         double lo = Math.min(from, to);
         double hi = Math.max(from, to);
         double scale = columns / (hi - lo);
-        double[] ox = new double[2 * columns + 4];
-        double[] oy = new double[ox.length];
-        int n = 0;
+        Out out = new Out(2 * columns + 4);
         int lastOutsideBefore = -1;
         boolean seenInside = false;
         int column = -1;
@@ -51,6 +50,12 @@ public final class MinMaxDecimator {
         int maxIndex = -1;
         for (int i = 0; i < x.length; i++) {
             if (Double.isNaN(y[i])) {
+                if (seenInside && x[i] >= lo && x[i] <= hi) {
+                    flush(x, y, minIndex, maxIndex, out);
+                    minIndex = -1;
+                    column = -1;
+                    out.gap();
+                }
                 continue;
             }
             if (x[i] < lo || x[i] > hi) {
@@ -58,10 +63,9 @@ public final class MinMaxDecimator {
                     lastOutsideBefore = i;
                 } else {
                     // first point past the far end: flush and stop, the series is monotonic
-                    n = flush(x, y, minIndex, maxIndex, ox, oy, n);
+                    flush(x, y, minIndex, maxIndex, out);
                     minIndex = -1;
-                    ox[n] = x[i];
-                    oy[n++] = y[i];
+                    out.add(x[i], y[i]);
                     break;
                 }
                 continue;
@@ -69,13 +73,12 @@ public final class MinMaxDecimator {
             if (!seenInside) {
                 seenInside = true;
                 if (lastOutsideBefore >= 0) {
-                    ox[n] = x[lastOutsideBefore];
-                    oy[n++] = y[lastOutsideBefore];
+                    out.add(x[lastOutsideBefore], y[lastOutsideBefore]);
                 }
             }
             int c = Math.min(columns - 1, (int) ((x[i] - lo) * scale));
             if (c != column) {
-                n = flush(x, y, minIndex, maxIndex, ox, oy, n);
+                flush(x, y, minIndex, maxIndex, out);
                 column = c;
                 minIndex = i;
                 maxIndex = i;
@@ -85,22 +88,51 @@ public final class MinMaxDecimator {
                 maxIndex = i;
             }
         }
-        n = flush(x, y, minIndex, maxIndex, ox, oy, n);
-        return new Decimated(Arrays.copyOf(ox, n), Arrays.copyOf(oy, n));
+        flush(x, y, minIndex, maxIndex, out);
+        return out.result();
     }
 
-    private static int flush(double[] x, double[] y, int minIndex, int maxIndex, double[] ox, double[] oy, int n) {
+    private static void flush(double[] x, double[] y, int minIndex, int maxIndex, Out out) {
         if (minIndex < 0) {
-            return n;
+            return;
         }
         int first = Math.min(minIndex, maxIndex);
         int second = Math.max(minIndex, maxIndex);
-        ox[n] = x[first];
-        oy[n++] = y[first];
+        out.add(x[first], y[first]);
         if (second != first) {
-            ox[n] = x[second];
-            oy[n++] = y[second];
+            out.add(x[second], y[second]);
         }
-        return n;
+    }
+
+    /** Growing output arrays. */
+    private static final class Out {
+        private double[] x;
+        private double[] y;
+        private int n;
+
+        Out(int capacity) {
+            x = new double[capacity];
+            y = new double[capacity];
+        }
+
+        void add(double xv, double yv) {
+            if (n == x.length) {
+                x = Arrays.copyOf(x, 2 * n);
+                y = Arrays.copyOf(y, 2 * n);
+            }
+            x[n] = xv;
+            y[n++] = yv;
+        }
+
+        /** One NaN between kept points; none at the start or twice in a row. */
+        void gap() {
+            if (n > 0 && !Double.isNaN(y[n - 1])) {
+                add(x[n - 1], Double.NaN);
+            }
+        }
+
+        Decimated result() {
+            return new Decimated(Arrays.copyOf(x, n), Arrays.copyOf(y, n));
+        }
     }
 }

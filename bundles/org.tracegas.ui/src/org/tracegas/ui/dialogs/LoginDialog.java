@@ -99,4 +99,9 @@ public final class LoginDialog extends Dialog {
     public Label message() {
         return message;
     }
+
+    /** The button that logs in or signs. */
+    public org.eclipse.swt.widgets.Button okButton() {
+        return getButton(IDialogConstants.OK_ID);
+    }
 }

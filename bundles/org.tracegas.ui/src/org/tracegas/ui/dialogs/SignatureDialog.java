@@ -149,4 +149,9 @@ public final class SignatureDialog extends Dialog {
     public Label message() {
         return message;
     }
+
+    /** The button that logs in or signs. */
+    public org.eclipse.swt.widgets.Button okButton() {
+        return getButton(IDialogConstants.OK_ID);
+    }
 }

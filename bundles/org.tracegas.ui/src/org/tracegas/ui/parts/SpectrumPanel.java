@@ -90,8 +90,8 @@ public final class SpectrumPanel extends Composite {
         spectrum.getAxisSet().getXAxis(0).setRange(full);
         residual.getAxisSet().getXAxis(0).setRange(full);
         rethin();
-        spectrum.getAxisSet().getYAxis(0).adjustRange();
-        residual.getAxisSet().getYAxis(0).adjustRange();
+        spectrum.getAxisSet().getYAxis(0).setRange(spectrumData.fullYRange());
+        residual.getAxisSet().getYAxis(0).setRange(residualData.fullYRange());
         spectrum.suspendUpdate(false);
         residual.suspendUpdate(false);
         layout(true, true);

@@ -78,7 +78,10 @@ public final class TimeSeriesPanel extends Composite {
             chart.getAxisSet().getXAxis(0).setRange(full);
         }
         rethin();
-        chart.getAxisSet().getYAxis(0).adjustRange();
+        Range y = data.fullYRange();
+        if (y != null) {
+            chart.getAxisSet().getYAxis(0).setRange(y);
+        }
         chart.suspendUpdate(false);
         chart.redraw();
     }
