@@ -67,7 +67,7 @@ public final class StackProcessor {
 
     private void store(MeasuredSpectrum measured, SpectrumResult result) {
         String measurementId = store.projects().recordMeasurement(actor, projectId, MeasurementKind.SAMPLE,
-                measured.time(), measured.cellTemperatureK(), measured.cellPressureKPa());
+                measured.time(), measured.cellTemperatureK(), measured.cellPressureKPa() * 10.0);
         store.spectra().store(actor, projectId, new SpectrumInput(measurementId, SpectralContent.ABSORBANCE,
                 measured.ratio().spectrum(), SampleEncoding.FLOAT32_LE));
         List<NewResult> rows = new ArrayList<>();

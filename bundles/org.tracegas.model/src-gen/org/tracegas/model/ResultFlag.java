@@ -79,7 +79,23 @@ public enum ResultFlag implements Enumerator {
 	 * @generated
 	 * @ordered
 	 */
-	QA_FAILED(5, "QA_FAILED", "QA_FAILED");
+	QA_FAILED(5, "QA_FAILED", "QA_FAILED"), /**
+	 * The '<em><b>NEGATIVE BEYOND DETECTION LIMIT</b></em>' literal object.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #NEGATIVE_BEYOND_DETECTION_LIMIT_VALUE
+	 * @generated
+	 * @ordered
+	 */
+	NEGATIVE_BEYOND_DETECTION_LIMIT(6, "NEGATIVE_BEYOND_DETECTION_LIMIT", "NEGATIVE_BEYOND_DETECTION_LIMIT"), /**
+	 * The '<em><b>BACKGROUND TOO OLD</b></em>' literal object.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #BACKGROUND_TOO_OLD_VALUE
+	 * @generated
+	 * @ordered
+	 */
+	BACKGROUND_TOO_OLD(7, "BACKGROUND_TOO_OLD", "BACKGROUND_TOO_OLD");
 
 	/**
 	 * The '<em><b>BELOW DETECTION LIMIT</b></em>' literal value.
@@ -148,6 +164,28 @@ public enum ResultFlag implements Enumerator {
 	public static final int QA_FAILED_VALUE = 5;
 
 	/**
+	 * The '<em><b>NEGATIVE BEYOND DETECTION LIMIT</b></em>' literal value.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #NEGATIVE_BEYOND_DETECTION_LIMIT
+	 * @model
+	 * @generated
+	 * @ordered
+	 */
+	public static final int NEGATIVE_BEYOND_DETECTION_LIMIT_VALUE = 6;
+
+	/**
+	 * The '<em><b>BACKGROUND TOO OLD</b></em>' literal value.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #BACKGROUND_TOO_OLD
+	 * @model
+	 * @generated
+	 * @ordered
+	 */
+	public static final int BACKGROUND_TOO_OLD_VALUE = 7;
+
+	/**
 	 * An array of all the '<em><b>Result Flag</b></em>' enumerators.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -161,6 +199,8 @@ public enum ResultFlag implements Enumerator {
 			INTERFERENCE,
 			SATURATED,
 			QA_FAILED,
+			NEGATIVE_BEYOND_DETECTION_LIMIT,
+			BACKGROUND_TOO_OLD,
 		};
 
 	/**
@@ -223,6 +263,8 @@ public enum ResultFlag implements Enumerator {
 			case INTERFERENCE_VALUE: return INTERFERENCE;
 			case SATURATED_VALUE: return SATURATED;
 			case QA_FAILED_VALUE: return QA_FAILED;
+			case NEGATIVE_BEYOND_DETECTION_LIMIT_VALUE: return NEGATIVE_BEYOND_DETECTION_LIMIT;
+			case BACKGROUND_TOO_OLD_VALUE: return BACKGROUND_TOO_OLD;
 		}
 		return null;
 	}

@@ -1,6 +1,8 @@
 package org.tracegas.store;
 
 import java.time.Instant;
+import java.util.List;
+import java.util.Optional;
 
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
@@ -42,4 +44,15 @@ public interface ProjectService {
      */
     String recordMeasurement(Session actor, String projectId, MeasurementKind kind, Instant time,
             double cellTemperature, double cellPressure);
+
+    /**
+     * The project with a code, empty when there is none. Codes are unique per client; when clients share a
+     * code, the oldest-created id in sort order wins.
+     *
+     * @throws AccessDeniedException without read access to the project found
+     */
+    Optional<ProjectInfo> findByCode(Session actor, String code);
+
+    /** The measurements of a project in time order. */
+    List<MeasurementInfo> measurements(Session actor, String projectId);
 }

@@ -16,4 +16,10 @@ public interface ResultService {
 
     /** @throws AccessDeniedException without read access to the project */
     List<ResultInfo> results(Session actor, String projectId);
+
+    /**
+     * Records several results in one transaction, each with its audit record: all of them or none. The batch
+     * path stores a spectrum's results together this way.
+     */
+    List<ResultInfo> recordAll(Session actor, String projectId, List<NewResult> results);
 }

@@ -46,4 +46,7 @@ public interface UserService {
 
     /** @throws NoSuchObjectException if there is no such user */
     UserInfo user(String userId);
+
+    /** Whether the workspace has any user yet (before the first administrator, it has none). */
+    boolean hasUsers();
 }

@@ -1,5 +1,6 @@
 package org.tracegas.store;
 
+import java.util.Collections;
 import java.util.Map;
 import java.util.SortedMap;
 import java.util.TreeMap;
@@ -19,9 +20,9 @@ public record VersionDiff(String olderId, String newerId, SortedMap<String, Stri
     }
 
     public VersionDiff {
-        added = java.util.Collections.unmodifiableSortedMap(new TreeMap<>(added));
-        removed = java.util.Collections.unmodifiableSortedMap(new TreeMap<>(removed));
-        changed = java.util.Collections.unmodifiableSortedMap(new TreeMap<>(changed));
+        added = Collections.unmodifiableSortedMap(new TreeMap<>(added));
+        removed = Collections.unmodifiableSortedMap(new TreeMap<>(removed));
+        changed = Collections.unmodifiableSortedMap(new TreeMap<>(changed));
     }
 
     /** True when both versions hold the same fields with the same values. */

@@ -1,5 +1,7 @@
 package org.tracegas.store;
 
+import java.util.Optional;
+
 /**
  * Versions of analysis methods and reference libraries. The content of a version is a canonical
  * serialization supplied by the caller ({@code key=value} lines); its SHA-256 is stored with it. A
@@ -29,4 +31,7 @@ public interface VersionService {
 
     /** Field-by-field comparison of two versions' contents. */
     VersionDiff diff(String olderVersionId, String newerVersionId);
+
+    /** The newest version of the item of a kind and name, if there is one. */
+    Optional<VersionInfo> latest(VersionKind kind, String name);
 }

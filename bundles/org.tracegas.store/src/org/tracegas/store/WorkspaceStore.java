@@ -1,5 +1,7 @@
 package org.tracegas.store;
 
+import org.tracegas.audit.VerificationReport;
+
 /**
  * An open workspace store: the services through which all stored data is read and changed. Each
  * service call is one transaction; every change writes its audit record in that same transaction.
@@ -20,4 +22,7 @@ public interface WorkspaceStore extends AutoCloseable {
     /** Releases the database (an embedded H2 database is shut down and its files unlocked). */
     @Override
     void close();
+
+    /** Walks the whole audit chain and reports every record that was altered, removed, inserted or reordered. */
+    VerificationReport verifyAuditTrail();
 }

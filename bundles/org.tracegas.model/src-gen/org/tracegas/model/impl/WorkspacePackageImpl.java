@@ -2225,6 +2225,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		addEEnumLiteral(resultFlagEEnum, ResultFlag.INTERFERENCE);
 		addEEnumLiteral(resultFlagEEnum, ResultFlag.SATURATED);
 		addEEnumLiteral(resultFlagEEnum, ResultFlag.QA_FAILED);
+		addEEnumLiteral(resultFlagEEnum, ResultFlag.NEGATIVE_BEYOND_DETECTION_LIMIT);
+		addEEnumLiteral(resultFlagEEnum, ResultFlag.BACKGROUND_TOO_OLD);
 
 		initEEnum(reportStatusEEnum, ReportStatus.class, "ReportStatus");
 		addEEnumLiteral(reportStatusEEnum, ReportStatus.DRAFT);

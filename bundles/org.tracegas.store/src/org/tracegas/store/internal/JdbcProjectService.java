@@ -4,7 +4,9 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.time.Instant;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.UUID;
 
 import org.tracegas.audit.AuditAction;
@@ -13,6 +15,7 @@ import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Role;
+import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.ProjectService;
@@ -156,5 +159,33 @@ final class JdbcProjectService implements ProjectService {
 
     private static String values(ProjectInfo p) {
         return AuditValues.canonical(Map.of("client", p.clientId(), "code", p.code(), "name", p.name()));
+    }
+
+    @Override
+    public Optional<ProjectInfo> findByCode(Session actor, String code) {
+        JdbcUserService.requireText("code", code);
+        return transactions.run("finding project " + code, tx -> {
+            Optional<ProjectInfo> found = tx.queryOne(
+                    "SELECT id, client_id, code, name, row_version FROM project WHERE code = ? ORDER BY id",
+                    JdbcProjectService::map, code);
+            if (found.isPresent()) {
+                Guard.requireProject(tx, actor, found.get().id(), AccessLevel.READ);
+            }
+            return found;
+        });
+    }
+
+    @Override
+    public List<MeasurementInfo> measurements(Session actor, String projectId) {
+        return transactions.run("reading the measurements of project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+            return tx.queryList("SELECT id, project_id, kind, measured_at, cell_temperature, cell_pressure, operator_id"
+                    + " FROM measurement WHERE project_id = ? ORDER BY measured_at, id",
+                    rs -> new MeasurementInfo(rs.getString("id"), rs.getString("project_id"),
+                            MeasurementKind.valueOf(rs.getString("kind")), Tx.instant(rs, "measured_at"),
+                            rs.getDouble("cell_temperature"), rs.getDouble("cell_pressure"),
+                            rs.getString("operator_id")),
+                    projectId);
+        });
     }
 }

@@ -3,10 +3,15 @@ package org.tracegas.store.internal;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.Collections;
 import java.util.EnumSet;
+import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.UUID;
 import java.util.stream.Collectors;
 
@@ -32,36 +37,56 @@ final class JdbcResultService implements ResultService {
 
     @Override
     public ResultInfo record(Session actor, String projectId, NewResult result) {
-        if (result == null) {
-            throw new IllegalArgumentException("result must not be null");
+        return recordAll(actor, projectId, Collections.singletonList(result)).get(0);
+    }
+
+    @Override
+    public List<ResultInfo> recordAll(Session actor, String projectId, List<NewResult> results) {
+        if (results == null || results.isEmpty() || results.contains(null)) {
+            throw new IllegalArgumentException("results must hold at least one result and no null");
         }
-        return transactions.run("recording a " + result.compound() + " result in project " + projectId, tx -> {
+        return transactions.run("recording " + results.size() + " result(s) in project " + projectId, tx -> {
             Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
-            requireKind(JdbcVersionService.load(tx, result.methodVersionId()), VersionKind.METHOD,
-                    "methodVersionId");
-            requireKind(JdbcVersionService.load(tx, result.libraryVersionId()), VersionKind.LIBRARY,
-                    "libraryVersionId");
-            if (result.measurementId() != null && tx.queryOne("SELECT 1 FROM measurement WHERE id = ? AND project_id = ?",
-                    rs -> 1, result.measurementId(), projectId).isEmpty()) {
-                throw new IllegalArgumentException("measurementId " + result.measurementId()
-                        + " is not a measurement of project " + projectId);
+            Set<String> checked = new HashSet<>();
+            List<ResultInfo> stored = new ArrayList<>(results.size());
+            for (NewResult result : results) {
+                stored.add(insert(tx, actor, projectId, result, checked));
             }
-            JdbcVersionService.freeze(tx, result.methodVersionId());
-            JdbcVersionService.freeze(tx, result.libraryVersionId());
-            ResultInfo stored = new ResultInfo(UUID.randomUUID().toString(), projectId, result, actor.userId(),
-                    Instant.now().truncatedTo(java.time.temporal.ChronoUnit.MICROS));
-            tx.update("INSERT INTO analysis_result (id, project_id, measurement_id, compound, concentration,"
-                    + " uncertainty, detection_limit, unit, flags, method_version_id, library_version_id,"
-                    + " software_version, input_hash, recorded_by, recorded_at, row_version)"
-                    + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 0)", stored.id(), projectId,
-                    result.measurementId(), result.compound(), result.concentration(), result.uncertainty(),
-                    result.detectionLimit(), result.unit(), formatFlags(result), result.methodVersionId(),
-                    result.libraryVersionId(), result.softwareVersion(), result.inputHash(), actor.userId(),
-                    stored.recorded());
-            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "result", stored.id())
-                    .newValue(values(stored)).build());
             return stored;
         });
+    }
+
+    /** @param checked versions and measurements already checked and frozen in this transaction */
+    private static ResultInfo insert(Tx tx, Session actor, String projectId, NewResult result,
+            Set<String> checked) throws SQLException {
+        if (checked.add("method:" + result.methodVersionId())) {
+            requireKind(JdbcVersionService.load(tx, result.methodVersionId()), VersionKind.METHOD, "methodVersionId");
+            JdbcVersionService.freeze(tx, result.methodVersionId());
+        }
+        if (checked.add("library:" + result.libraryVersionId())) {
+            requireKind(JdbcVersionService.load(tx, result.libraryVersionId()), VersionKind.LIBRARY,
+                    "libraryVersionId");
+            JdbcVersionService.freeze(tx, result.libraryVersionId());
+        }
+        if (result.measurementId() != null && checked.add("measurement:" + result.measurementId())
+                && tx.queryOne("SELECT 1 FROM measurement WHERE id = ? AND project_id = ?", rs -> 1,
+                        result.measurementId(), projectId).isEmpty()) {
+            throw new IllegalArgumentException("measurementId " + result.measurementId()
+                    + " is not a measurement of project " + projectId);
+        }
+        ResultInfo stored = new ResultInfo(UUID.randomUUID().toString(), projectId, result, actor.userId(),
+                Instant.now().truncatedTo(ChronoUnit.MICROS));
+        tx.update("INSERT INTO analysis_result (id, project_id, measurement_id, compound, concentration,"
+                + " uncertainty, detection_limit, unit, flags, method_version_id, library_version_id,"
+                + " software_version, input_hash, recorded_by, recorded_at, row_version)"
+                + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 0)", stored.id(), projectId,
+                result.measurementId(), result.compound(), result.concentration(), result.uncertainty(),
+                result.detectionLimit(), result.unit(), formatFlags(result), result.methodVersionId(),
+                result.libraryVersionId(), result.softwareVersion(), result.inputHash(), actor.userId(),
+                stored.recorded());
+        tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "result", stored.id())
+                .newValue(values(stored)).build());
+        return stored;
     }
 
     @Override

@@ -196,4 +196,10 @@ final class JdbcUserService implements UserService {
             throw new IllegalArgumentException(field + " must not be blank");
         }
     }
+
+    @Override
+    public boolean hasUsers() {
+        return transactions.run("counting users",
+                tx -> tx.queryOne("SELECT COUNT(*) FROM app_user", rs -> rs.getLong(1)).orElseThrow() > 0);
+    }
 }

@@ -7,6 +7,7 @@ import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.Optional;
 import java.util.UUID;
 
 import org.tracegas.audit.AuditAction;
@@ -23,9 +24,9 @@ import org.tracegas.store.VersionService;
 
 final class JdbcVersionService implements VersionService {
 
-    private static final String SELECT = "SELECT v.id, i.kind, v.item_id, i.name, v.number, v.parent_id, v.author_id,"
-            + " v.reason, v.created_at, v.content_hash, v.frozen, v.row_version"
-            + " FROM content_version v JOIN versioned_item i ON i.id = v.item_id WHERE v.id = ?";
+    private static final String SELECT_VERSIONS = "SELECT v.id, i.kind, v.item_id, i.name, v.number, v.parent_id,"
+            + " v.author_id, v.reason, v.created_at, v.content_hash, v.frozen, v.row_version"
+            + " FROM content_version v JOIN versioned_item i ON i.id = v.item_id";
 
     private static final Role[] EDITORS = {Role.ANALYST, Role.QUALITY_MANAGER};
 
@@ -107,7 +108,7 @@ final class JdbcVersionService implements VersionService {
     }
 
     static VersionInfo load(Tx tx, String versionId) throws SQLException {
-        return tx.queryOne(SELECT, JdbcVersionService::map, versionId)
+        return tx.queryOne(SELECT_VERSIONS + " WHERE v.id = ?", JdbcVersionService::map, versionId)
                 .orElseThrow(() -> new NoSuchObjectException("method or library version", versionId));
     }
 
@@ -155,5 +156,14 @@ final class JdbcVersionService implements VersionService {
             throw new IllegalArgumentException("content must not be null");
         }
         JdbcUserService.requireText("reason", reason);
+    }
+
+    @Override
+    public Optional<VersionInfo> latest(VersionKind kind, String name) {
+        if (kind == null) {
+            throw new IllegalArgumentException("kind must not be null");
+        }
+        return transactions.run("finding the newest version of " + name, tx -> tx.queryOne(SELECT_VERSIONS
+                + " WHERE i.kind = ? AND i.name = ? ORDER BY v.number DESC", JdbcVersionService::map, kind, name));
     }
 }

@@ -4,12 +4,13 @@ import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.sql.Statement;
-
 import javax.sql.DataSource;
 
 import org.h2.jdbcx.JdbcDataSource;
 import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.audit.AuditSchema;
+import org.tracegas.audit.AuditVerifier;
+import org.tracegas.audit.VerificationReport;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.SpectrumService;
@@ -120,6 +121,15 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
             s.execute("SHUTDOWN");
         } catch (SQLException e) {
             throw new StoreException("closing the workspace database failed: " + e.getMessage(), e);
+        }
+    }
+
+    @Override
+    public VerificationReport verifyAuditTrail() {
+        try (Connection c = dataSource.getConnection()) {
+            return AuditVerifier.verify(c);
+        } catch (SQLException e) {
+            throw new StoreException("verifying the audit trail failed: " + e.getMessage(), e);
         }
     }
 }

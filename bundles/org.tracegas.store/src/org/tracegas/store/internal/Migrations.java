@@ -8,7 +8,6 @@ import java.nio.charset.StandardCharsets;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.List;
-
 import javax.sql.DataSource;
 
 import org.flywaydb.core.Flyway;

@@ -2,7 +2,6 @@ package org.tracegas.store.internal;
 
 import java.sql.Connection;
 import java.sql.SQLException;
-
 import javax.sql.DataSource;
 
 import org.tracegas.store.StoreException;

@@ -3,6 +3,7 @@ package org.tracegas.store.internal;
 import java.nio.file.Path;
 import java.util.Map;
 
+import org.tracegas.audit.VerificationReport;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.SpectrumService;
@@ -69,6 +70,11 @@ public final class WorkspaceStoreComponent implements WorkspaceStore {
     @Override
     public ResultService results() {
         return store.results();
+    }
+
+    @Override
+    public VerificationReport verifyAuditTrail() {
+        return store.verifyAuditTrail();
     }
 
     /** The framework closes the store through {@link #deactivate()}; clients must not. */
