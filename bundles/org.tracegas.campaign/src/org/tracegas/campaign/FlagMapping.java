@@ -21,6 +21,7 @@ final class FlagMapping {
                 case NEGATIVE_BEYOND_DETECTION_LIMIT -> ResultFlag.NEGATIVE_BEYOND_DETECTION_LIMIT;
                 case ABSORBANCE_TOO_HIGH -> ResultFlag.SATURATED;
                 case BACKGROUND_TOO_OLD -> ResultFlag.BACKGROUND_TOO_OLD;
+                case NOT_CONVERGED -> ResultFlag.NOT_CONVERGED;
             });
         }
         return stored;

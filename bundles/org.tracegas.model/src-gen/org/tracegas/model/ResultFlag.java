@@ -95,7 +95,15 @@ public enum ResultFlag implements Enumerator {
 	 * @generated
 	 * @ordered
 	 */
-	BACKGROUND_TOO_OLD(7, "BACKGROUND_TOO_OLD", "BACKGROUND_TOO_OLD");
+	BACKGROUND_TOO_OLD(7, "BACKGROUND_TOO_OLD", "BACKGROUND_TOO_OLD"), /**
+	 * The '<em><b>NOT CONVERGED</b></em>' literal object.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #NOT_CONVERGED_VALUE
+	 * @generated
+	 * @ordered
+	 */
+	NOT_CONVERGED(8, "NOT_CONVERGED", "NOT_CONVERGED");
 
 	/**
 	 * The '<em><b>BELOW DETECTION LIMIT</b></em>' literal value.
@@ -186,6 +194,17 @@ public enum ResultFlag implements Enumerator {
 	public static final int BACKGROUND_TOO_OLD_VALUE = 7;
 
 	/**
+	 * The '<em><b>NOT CONVERGED</b></em>' literal value.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #NOT_CONVERGED
+	 * @model
+	 * @generated
+	 * @ordered
+	 */
+	public static final int NOT_CONVERGED_VALUE = 8;
+
+	/**
 	 * An array of all the '<em><b>Result Flag</b></em>' enumerators.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -201,6 +220,7 @@ public enum ResultFlag implements Enumerator {
 			QA_FAILED,
 			NEGATIVE_BEYOND_DETECTION_LIMIT,
 			BACKGROUND_TOO_OLD,
+			NOT_CONVERGED,
 		};
 
 	/**
@@ -265,6 +285,7 @@ public enum ResultFlag implements Enumerator {
 			case QA_FAILED_VALUE: return QA_FAILED;
 			case NEGATIVE_BEYOND_DETECTION_LIMIT_VALUE: return NEGATIVE_BEYOND_DETECTION_LIMIT;
 			case BACKGROUND_TOO_OLD_VALUE: return BACKGROUND_TOO_OLD;
+			case NOT_CONVERGED_VALUE: return NOT_CONVERGED;
 		}
 		return null;
 	}

@@ -2227,6 +2227,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		addEEnumLiteral(resultFlagEEnum, ResultFlag.QA_FAILED);
 		addEEnumLiteral(resultFlagEEnum, ResultFlag.NEGATIVE_BEYOND_DETECTION_LIMIT);
 		addEEnumLiteral(resultFlagEEnum, ResultFlag.BACKGROUND_TOO_OLD);
+		addEEnumLiteral(resultFlagEEnum, ResultFlag.NOT_CONVERGED);
 
 		initEEnum(reportStatusEEnum, ReportStatus.class, "ReportStatus");
 		addEEnumLiteral(reportStatusEEnum, ReportStatus.DRAFT);
