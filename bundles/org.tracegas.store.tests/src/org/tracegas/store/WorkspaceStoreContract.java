@@ -25,6 +25,7 @@ import java.util.stream.Stream;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.tracegas.audit.VerificationReport;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.ResultFlag;
@@ -347,6 +348,57 @@ abstract class WorkspaceStoreContract {
                 () -> store.projects().rename(analyst, project.id(), project.rowVersion(), "Stale"));
         assertEquals(List.of("3"), column("SELECT COUNT(*) FROM audit_record WHERE object_id = '" + project.id()
                 + "' OR object_id LIKE '" + project.id() + "/%'"));
+    }
+
+    @Test
+    void lookUpsFindProjectsMeasurementsAndNewestVersions() {
+        assertTrue(store.users().hasUsers());
+        assertEquals(project, store.projects().findByCode(analyst, "CW-2026-01").orElseThrow());
+        assertTrue(store.projects().findByCode(analyst, "NO-SUCH-CODE").isEmpty());
+
+        Instant later = Instant.parse("2026-04-01T09:00:00Z");
+        Instant earlier = Instant.parse("2026-04-01T08:00:00Z");
+        String second = store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE, later,
+                453.15, 1013.0);
+        String first = store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.BACKGROUND,
+                earlier, 453.0, 1012.5);
+        List<MeasurementInfo> measurements = store.projects().measurements(analyst, project.id());
+        assertEquals(List.of(first, second), measurements.stream().map(MeasurementInfo::id).toList());
+        assertEquals(new MeasurementInfo(first, project.id(), MeasurementKind.BACKGROUND, earlier, 453.0, 1012.5,
+                analyst.userId()), measurements.get(0));
+
+        VersionInfo v1 = store.versions().create(analyst, VersionKind.METHOD, "SO2", "compound=SO2\n", "first");
+        VersionInfo v2 = store.versions().revise(analyst, v1.id(), "compound=SO2\nregion=1100-1200\n", "region");
+        assertEquals(v2.id(), store.versions().latest(VersionKind.METHOD, "SO2").orElseThrow().id());
+        assertTrue(store.versions().latest(VersionKind.LIBRARY, "SO2").isEmpty());
+    }
+
+    @Test
+    void batchOfResultsIsRecordedWhollyOrNotAtAll() throws Exception {
+        VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
+        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
+        NewResult good = result(method.id(), library.id());
+        NewResult wrongKind = result(library.id(), library.id()); // a library version given as method version
+
+        assertThrows(IllegalArgumentException.class,
+                () -> store.results().recordAll(analyst, project.id(), List.of(good, wrongKind)));
+        assertTrue(store.results().results(analyst, project.id()).isEmpty());
+        assertFalse(store.versions().version(method.id()).frozen(), "the rolled-back batch froze nothing");
+        assertEquals(List.of("0"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result'"));
+
+        List<ResultInfo> stored = store.results().recordAll(analyst, project.id(), List.of(good, good));
+        assertEquals(2, stored.size());
+        assertEquals(List.of("2"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result'"));
+        assertTrue(store.versions().version(method.id()).frozen());
+    }
+
+    @Test
+    void auditTrailOfTheStoreVerifiesIntact() {
+        store.projects().rename(analyst, project.id(), project.rowVersion(), "Kiln stack");
+        VerificationReport report = store.verifyAuditTrail();
+        assertTrue(report.intact(), report.toString());
+        // first administrator, analyst, log-in, client, project, grant, rename
+        assertEquals(7, report.recordsChecked());
     }
 
     private static NewResult result(String methodVersionId, String libraryVersionId) {

@@ -42,8 +42,13 @@ final class JdbcResultService implements ResultService {
 
     @Override
     public List<ResultInfo> recordAll(Session actor, String projectId, List<NewResult> results) {
-        if (results == null || results.isEmpty() || results.contains(null)) {
-            throw new IllegalArgumentException("results must hold at least one result and no null");
+        if (results == null || results.isEmpty()) {
+            throw new IllegalArgumentException("results must hold at least one result");
+        }
+        for (int i = 0; i < results.size(); i++) {
+            if (results.get(i) == null) {
+                throw new IllegalArgumentException("results[" + i + "] is null");
+            }
         }
         return transactions.run("recording " + results.size() + " result(s) in project " + projectId, tx -> {
             Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
