@@ -79,7 +79,9 @@ public enum ResultFlag implements Enumerator {
 	 * @generated
 	 * @ordered
 	 */
-	QA_FAILED(5, "QA_FAILED", "QA_FAILED"), /**
+	QA_FAILED(5, "QA_FAILED", "QA_FAILED"),
+
+	/**
 	 * The '<em><b>NEGATIVE BEYOND DETECTION LIMIT</b></em>' literal object.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -87,7 +89,9 @@ public enum ResultFlag implements Enumerator {
 	 * @generated
 	 * @ordered
 	 */
-	NEGATIVE_BEYOND_DETECTION_LIMIT(6, "NEGATIVE_BEYOND_DETECTION_LIMIT", "NEGATIVE_BEYOND_DETECTION_LIMIT"), /**
+	NEGATIVE_BEYOND_DETECTION_LIMIT(6, "NEGATIVE_BEYOND_DETECTION_LIMIT", "NEGATIVE_BEYOND_DETECTION_LIMIT"),
+
+	/**
 	 * The '<em><b>BACKGROUND TOO OLD</b></em>' literal object.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -95,7 +99,9 @@ public enum ResultFlag implements Enumerator {
 	 * @generated
 	 * @ordered
 	 */
-	BACKGROUND_TOO_OLD(7, "BACKGROUND_TOO_OLD", "BACKGROUND_TOO_OLD"), /**
+	BACKGROUND_TOO_OLD(7, "BACKGROUND_TOO_OLD", "BACKGROUND_TOO_OLD"),
+
+	/**
 	 * The '<em><b>NOT CONVERGED</b></em>' literal object.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
