@@ -32,14 +32,16 @@ public final class ChainWalker {
 
     private final Connection c;
     private final int maxFindings;
-    private final List<ChainFinding> findings = new ArrayList<>();
-    private boolean truncated;
-    private PreparedStatement byHash;
+    private final Map<Long, String> anchors = new HashMap<>();
     private long headSeq;
     private String headHash;
     private String headRecordId;
 
-    private final Map<Long, String> anchors = new HashMap<>();
+    // state of one walk
+    private final List<ChainFinding> findings = new ArrayList<>();
+    private boolean truncated;
+    private Map<Long, String> pendingAnchors;
+    private Map<String, Long> located;
 
     public ChainWalker(Connection c, int maxFindings, List<ChainAnchor> anchors) {
         this.c = c;
@@ -49,12 +51,37 @@ public final class ChainWalker {
         }
     }
 
+    /**
+     * One streaming pass for an intact chain. At the first broken link the records that broken links point
+     * to are located in two more passes (no index on the hash column: it would make every append rewrite
+     * random index pages) and the walk is repeated with them.
+     */
     public VerificationReport walk() throws SQLException {
         readHead();
+        try {
+            return walkOnce(null);
+        } catch (LocationsNeeded e) {
+            return walkOnce(locateBrokenLinkTargets());
+        }
+    }
+
+    /** Thrown when a walk without locations meets a broken link. */
+    private static final class LocationsNeeded extends RuntimeException {
+        private static final long serialVersionUID = 1L;
+
+        LocationsNeeded() {
+            super(null, null, false, false);
+        }
+    }
+
+    private VerificationReport walkOnce(Map<String, Long> locations) throws SQLException {
+        findings.clear();
+        truncated = false;
+        pendingAnchors = new HashMap<>(anchors);
+        located = locations;
         long count = 0;
         try (PreparedStatement q = c.prepareStatement("SELECT " + RecordRows.COLUMNS + " FROM audit_record ORDER BY seq")) {
             q.setFetchSize(FETCH_SIZE);
-            byHash = c.prepareStatement("SELECT seq FROM audit_record WHERE hash = ?");
             try (ResultSet rs = q.executeQuery()) {
                 // window: prev, cur, next, after; cur is classified once after is known
                 AuditRecord[] w = new AuditRecord[4];
@@ -77,18 +104,50 @@ public final class ChainWalker {
                 } else if (headSeq > 0) {
                     add(Kind.REMOVED, 1, headRecordId, "no audit records stored, but the chain head names record " + headSeq);
                 }
-            } finally {
-                byHash.close();
             }
         }
-        for (Map.Entry<Long, String> missing : new TreeMap<>(anchors).entrySet()) {
+        for (Map.Entry<Long, String> missing : new TreeMap<>(pendingAnchors).entrySet()) {
             add(Kind.REMOVED, missing.getKey(), null, "the anchored record is not stored");
         }
         return new VerificationReport(count, headSeq, headHash, findings, truncated);
     }
 
+    /**
+     * Pass one collects the previous-hash values of records whose back link is broken (bounded, so that a
+     * wholly rewritten table cannot exhaust memory); pass two finds where records with those hashes stand.
+     */
+    private Map<String, Long> locateBrokenLinkTargets() throws SQLException {
+        Map<String, Long> wanted = new HashMap<>();
+        try (PreparedStatement q = c.prepareStatement("SELECT prev_hash, hash FROM audit_record ORDER BY seq")) {
+            q.setFetchSize(FETCH_SIZE);
+            try (ResultSet rs = q.executeQuery()) {
+                String expected = ChainHash.GENESIS;
+                while (rs.next() && wanted.size() < 4 * maxFindings) {
+                    String prev = rs.getString(1);
+                    if (prev != null && !prev.equals(expected)) {
+                        wanted.put(prev, -1L);
+                    }
+                    expected = rs.getString(2);
+                }
+            }
+        }
+        try (PreparedStatement q = c.prepareStatement("SELECT seq, hash FROM audit_record")) {
+            q.setFetchSize(FETCH_SIZE);
+            try (ResultSet rs = q.executeQuery()) {
+                while (rs.next()) {
+                    String hash = rs.getString(2);
+                    Long seq = wanted.get(hash);
+                    if (seq != null && seq < 0) {
+                        wanted.put(hash, rs.getLong(1));
+                    }
+                }
+            }
+        }
+        return wanted;
+    }
+
     private void checkAnchor(AuditRecord r) {
-        String anchored = anchors.remove(r.sequence());
+        String anchored = pendingAnchors.remove(r.sequence());
         if (anchored != null && !anchored.equals(r.hash())) {
             add(Kind.ALTERED, r.sequence(), r.recordId(), "hash differs from the anchor kept outside the database");
         }
@@ -212,15 +271,18 @@ public final class ChainWalker {
         }
     }
 
-    /** Sequence number of the record with this hash, 0 for the genesis value, -1 when stored nowhere. */
-    private long seqOfHash(String hash) throws SQLException {
+    /**
+     * Sequence number of the record with this hash, 0 for the genesis value, -1 when stored nowhere (or
+     * beyond the bound of located hashes).
+     */
+    private long seqOfHash(String hash) {
         if (hash.equals(ChainHash.GENESIS)) {
             return 0;
         }
-        byHash.setString(1, hash);
-        try (ResultSet rs = byHash.executeQuery()) {
-            return rs.next() ? rs.getLong(1) : -1;
+        if (located == null) {
+            throw new LocationsNeeded();
         }
+        return located.getOrDefault(hash, -1L);
     }
 
     private void add(Kind kind, long seq, String recordId, String detail) {
