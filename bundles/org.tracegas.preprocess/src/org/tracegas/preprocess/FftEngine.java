@@ -28,9 +28,10 @@ public enum FftEngine {
     public abstract RealFft create(int size);
 
     /**
-     * The engine used unless one is chosen. JTransforms: in the JMH comparison (PreprocessFftBenchmark, 2^15
-     * points) its real transform ran several times faster than the Commons Math radix-2 path, and it accepts
-     * any length, while the other engine needs powers of two.
+     * The engine used unless one is chosen: JTransforms. In the JMH comparison of both engines in one run
+     * (PreprocessFftBenchmark, 2^15 points, one thread) its real transform took 2.4 to 9 times less time than the
+     * Commons Math path (a plain radix-2 complex transform without split-radix or cache-friendly ordering), and it
+     * accepts any length, while the other engine needs powers of two.
      */
     public static FftEngine defaultEngine() {
         return JTRANSFORMS;

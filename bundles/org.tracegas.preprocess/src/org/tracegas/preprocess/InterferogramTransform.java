@@ -1,5 +1,8 @@
 package org.tracegas.preprocess;
 
+import java.util.LinkedHashMap;
+import java.util.Map;
+
 import org.tracegas.preprocess.internal.MertzPhase;
 import org.tracegas.preprocess.internal.TransformWindow;
 import org.tracegas.preprocess.internal.ZpdLocator;
@@ -22,6 +25,10 @@ public final class InterferogramTransform {
 
     /** Fewest samples on the short side of ZPD for a usable Mertz phase (common practice, no source). */
     static final int MIN_PHASE_SIDE = 8;
+    private static final int WINDOW_CACHE_SIZE = 8;
+
+    private record WindowKey(int shortSide, int longSide, double spacing) {
+    }
 
     private final TransformSettings settings;
     private final FftEngine engine;
@@ -31,6 +38,13 @@ public final class InterferogramTransform {
     private double[] buffer;
     private double[] re;
     private double[] im;
+    /** Windows by short side, long side and spacing: the ZPD of an instrument wanders by a sample or two. */
+    private final Map<WindowKey, TransformWindow> windows = new LinkedHashMap<>(16, 0.75f, true) {
+        @Override
+        protected boolean removeEldestEntry(Map.Entry<WindowKey, TransformWindow> eldest) {
+            return size() > WINDOW_CACHE_SIZE;
+        }
+    };
     private TransformWindow window;
     private double[] out = new double[0];
     private SpectralAxis axis;
@@ -126,7 +140,9 @@ public final class InterferogramTransform {
             im = new double[size / 2 + 1];
         }
         if (window == null || !window.fits(shortSide, longSide, spacing)) {
-            window = new TransformWindow(settings.apodization(), settings.sidedness(), shortSide, longSide, spacing);
+            window = windows.computeIfAbsent(new WindowKey(shortSide, longSide, spacing),
+                    k -> new TransformWindow(settings.apodization(), settings.sidedness(), k.shortSide(), k.longSide(),
+                            k.spacing()));
         }
     }
 }

@@ -37,11 +37,6 @@ public final class TransformWindow {
         return shortSide == shortSideWanted && longSide == longSideWanted && spacing == spacingWanted;
     }
 
-    /** Weight at offset j from ZPD. */
-    public double at(int j) {
-        return weights[j + shortSide];
-    }
-
     /**
      * Fills a transform buffer: the weighted samples less their DC level with ZPD at index 0, the offsets before
      * ZPD wrapped to the end, and zeros between (zero filling).

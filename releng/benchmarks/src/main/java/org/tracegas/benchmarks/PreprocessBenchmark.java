@@ -18,6 +18,7 @@ import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.spectrum.Interferogram;
 import org.tracegas.spectrum.Spectrum;
+import pl.edu.icm.jlargearrays.ConcurrencyUtils;
 
 /**
  * A 2^15-point single-sided interferogram to absorbance (DC removal, apodization, zero filling, FFT, Mertz phase,
@@ -51,6 +52,8 @@ public class PreprocessBenchmark {
 
     @Setup
     public void setUp() {
+        // one thread per transform, as in the batch path, which runs one transform per worker thread
+        ConcurrencyUtils.setNumberOfThreads(1);
         TransformSettings settings = TransformSettings.defaults().withZeroFillFactor(zeroFill);
         if (!"full".equals(range)) {
             String[] bounds = range.split("-");

@@ -13,6 +13,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.tracegas.preprocess.FftEngine;
 import org.tracegas.preprocess.RealFft;
+import pl.edu.icm.jlargearrays.ConcurrencyUtils;
 
 /** The two real FFT engines on the same data in one run; the faster one is the default engine. */
 @State(Scope.Thread)
@@ -34,6 +35,8 @@ public class PreprocessFftBenchmark {
 
     @Setup
     public void setUp() {
+        // one thread per transform, as in the batch path, which runs one transform per worker thread
+        ConcurrencyUtils.setNumberOfThreads(1);
         fft = engine.create(size);
         data = new Random(42).doubles(size).toArray();
         input = new double[size];
