@@ -7,8 +7,8 @@ import org.tracegas.spectrum.Interferogram;
 
 /**
  * Mertz phase correction: the phase of a short, triangularly apodized double-sided part around ZPD, computed at
- * low resolution and interpolated (as unit complex numbers, so that no phase unwrapping is needed) onto the
- * full-resolution grid. Holds work buffers: one instance per thread.
+ * low resolution and interpolated onto the full-resolution grid by the turn between neighbouring low-resolution
+ * points (which lies within +-pi, so no phase unwrapping is needed). Holds work buffers: one instance per thread.
  */
 public final class MertzPhase {
 
