@@ -5,12 +5,15 @@ import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.SingularValueDecomposition;
 
 /**
- * A linear least-squares design, decomposed once so that each right-hand side costs two matrix-vector products.
+ * A linear least-squares design, decomposed once so that each right-hand side costs two passes over one matrix.
  * <p>
- * The columns are scaled to unit norm and the scaled, weighted matrix is split by a singular value decomposition
- * (Commons Math); the pseudo-inverse rows and the unscaled covariance (X^T W X)^-1 are kept. Scaling first keeps
- * badly scaled columns (a polynomial in wavenumber next to a band of absorbance 1e-3) from costing digits; the
- * singular values guard against a design whose columns cannot be told apart.
+ * The columns are scaled to unit norm and the scaled, weighted matrix X' = U S V^T is split by a singular value
+ * decomposition (Commons Math). Kept are the orthonormal basis U, the small map V S^-1 D^-1 from U^T y to the
+ * coefficients (together the pseudo-inverse, in factored form) and the unscaled covariance (X^T W X)^-1. A sample
+ * then costs z = U^T y, c = V S^-1 D^-1 z and the residual y - U z: an orthogonal projection, accurate even where
+ * the fit is close, and one matrix in cache instead of two. Scaling first keeps badly scaled columns (a polynomial
+ * in wavenumber next to a band of absorbance 1e-3) from costing digits; the singular values guard against a design
+ * whose columns cannot be told apart.
  */
 public final class LinearDesign {
 
@@ -23,11 +26,10 @@ public final class LinearDesign {
 
     private final int rows;
     private final int cols;
-    private final double[][] columns;     // [col][row], unweighted
-    private final int[] support;          // per column: first and one past the last non-zero row (2 per column)
-    private final double[][] pseudoInverse; // [col][row], weights folded in: c = P y
+    private final double[][] basis;       // [k][row]: orthonormal basis U of the weighted design's column space
+    private final double[][] toCoefficients; // [col][k]: c = V S^-1 D^-1 (U^T W^1/2 y)
     private final double[][] covariance;  // (X^T W X)^-1
-    private final double[] weights;       // null: all 1
+    private final double[] sqrtWeights;   // null: all 1
     private final double reciprocalCondition;
 
     private LinearDesign(double[][] columns, double[] weights, String what) {
@@ -40,29 +42,12 @@ public final class LinearDesign {
             throw new IllegalArgumentException(what + " has " + rows + " points for " + cols
                     + " coefficients; it needs more points than coefficients");
         }
-        this.columns = new double[cols][];
         for (int j = 0; j < cols; j++) {
             if (columns[j].length != rows) {
                 throw new IllegalArgumentException(what + ": column " + j + " has " + columns[j].length
                         + " points, column 0 has " + rows);
             }
-            this.columns[j] = columns[j].clone();
         }
-        this.support = new int[2 * cols];
-        for (int j = 0; j < cols; j++) {
-            // baseline columns live on their own region only; skipping their zeros saves work per sample
-            int from = 0;
-            int to = rows;
-            while (from < to && this.columns[j][from] == 0) {
-                from++;
-            }
-            while (to > from && this.columns[j][to - 1] == 0) {
-                to--;
-            }
-            support[2 * j] = from;
-            support[2 * j + 1] = to;
-        }
-        this.weights = weights == null ? null : weights.clone();
         if (weights != null && weights.length != rows) {
             throw new IllegalArgumentException(what + ": " + weights.length + " weights for " + rows + " points");
         }
@@ -95,24 +80,21 @@ public final class LinearDesign {
         }
         double[][] u = svd.getU().getData();      // rows x cols
         double[][] v = svd.getV().getData();      // cols x cols
-        this.pseudoInverse = new double[cols][rows];
         double[][] vs = new double[cols][cols];
+        this.toCoefficients = new double[cols][cols];
         for (int j = 0; j < cols; j++) {
             for (int k = 0; k < cols; k++) {
                 vs[j][k] = v[j][k] / s[k];
+                toCoefficients[j][k] = vs[j][k] / norm[j];
             }
         }
-        for (int j = 0; j < cols; j++) {
-            double[] p = pseudoInverse[j];
-            for (int i = 0; i < rows; i++) {
-                double sum = 0;
-                double[] ui = u[i];
-                for (int k = 0; k < cols; k++) {
-                    sum += vs[j][k] * ui[k];
-                }
-                p[i] = sum * sqrtW[i] / norm[j];
+        this.basis = new double[cols][rows];
+        for (int i = 0; i < rows; i++) {
+            for (int k = 0; k < cols; k++) {
+                basis[k][i] = u[i][k];
             }
         }
+        this.sqrtWeights = weights == null ? null : sqrtW;
         this.covariance = new double[cols][cols];
         for (int j = 0; j < cols; j++) {
             for (int l = 0; l < cols; l++) {
@@ -153,50 +135,70 @@ public final class LinearDesign {
         if (y.length != rows) {
             throw new IllegalArgumentException("right-hand side has " + y.length + " values, design has " + rows);
         }
-        double[] c = new double[cols];
-        int j = 0;
-        // four rows at a time: four independent sums keep the processor busy, each summed in plain row order
-        for (; j + 4 <= cols; j += 4) {
-            double[] p0 = pseudoInverse[j];
-            double[] p1 = pseudoInverse[j + 1];
-            double[] p2 = pseudoInverse[j + 2];
-            double[] p3 = pseudoInverse[j + 3];
+        double[] yw = y;
+        if (sqrtWeights != null) {
+            yw = new double[rows];
+            for (int i = 0; i < rows; i++) {
+                yw[i] = y[i] * sqrtWeights[i];
+            }
+        }
+        // projection onto the orthonormal basis: z = U^T y_w, then residual_w = y_w - U z
+        double[] z = new double[cols];
+        int k = 0;
+        // four basis vectors at a time: four independent sums keep the processor busy, each in plain row order
+        for (; k + 4 <= cols; k += 4) {
+            double[] u0 = basis[k];
+            double[] u1 = basis[k + 1];
+            double[] u2 = basis[k + 2];
+            double[] u3 = basis[k + 3];
             double s0 = 0;
             double s1 = 0;
             double s2 = 0;
             double s3 = 0;
             for (int i = 0; i < rows; i++) {
-                double yi = y[i];
-                s0 += p0[i] * yi;
-                s1 += p1[i] * yi;
-                s2 += p2[i] * yi;
-                s3 += p3[i] * yi;
+                double yi = yw[i];
+                s0 += u0[i] * yi;
+                s1 += u1[i] * yi;
+                s2 += u2[i] * yi;
+                s3 += u3[i] * yi;
             }
-            c[j] = s0;
-            c[j + 1] = s1;
-            c[j + 2] = s2;
-            c[j + 3] = s3;
+            z[k] = s0;
+            z[k + 1] = s1;
+            z[k + 2] = s2;
+            z[k + 3] = s3;
         }
-        for (; j < cols; j++) {
-            double[] p = pseudoInverse[j];
+        for (; k < cols; k++) {
+            double[] uk = basis[k];
             double sum = 0;
             for (int i = 0; i < rows; i++) {
-                sum += p[i] * y[i];
+                sum += uk[i] * yw[i];
+            }
+            z[k] = sum;
+        }
+        double[] c = new double[cols];
+        for (int j = 0; j < cols; j++) {
+            double sum = 0;
+            for (k = 0; k < cols; k++) {
+                sum += toCoefficients[j][k] * z[k];
             }
             c[j] = sum;
         }
-        double[] residual = y.clone();
-        for (j = 0; j < cols; j++) {
-            double[] x = columns[j];
-            double cj = c[j];
-            for (int i = support[2 * j], to = support[2 * j + 1]; i < to; i++) {
-                residual[i] -= cj * x[i];
+        double[] residual = yw.clone();
+        for (k = 0; k < cols; k++) {
+            double[] uk = basis[k];
+            double zk = z[k];
+            for (int i = 0; i < rows; i++) {
+                residual[i] -= zk * uk[i];
             }
         }
         double rss = 0;
         for (int i = 0; i < rows; i++) {
-            double r = residual[i];
-            rss += weights == null ? r * r : weights[i] * r * r;
+            rss += residual[i] * residual[i];
+        }
+        if (sqrtWeights != null) {
+            for (int i = 0; i < rows; i++) {
+                residual[i] /= sqrtWeights[i];
+            }
         }
         return new LinearSolution(c, residual, rss, rows - cols, covariance);
     }
