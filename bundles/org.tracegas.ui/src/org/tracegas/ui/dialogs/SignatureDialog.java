@@ -56,7 +56,7 @@ public final class SignatureDialog extends Dialog {
         area.setLayout(new GridLayout(2, false));
         row(area, "Result", String.format(Locale.ROOT, "%s %.4g %s (± %.2g), recorded by %s",
                 result.values().compound(), result.values().concentration(), result.values().unit(),
-                result.values().uncertainty(), result.recordedBy()));
+                result.values().uncertainty(), approval.loginOf(result.recordedBy())));
         row(area, "Printed name", approval.printedName(session));
         new Label(area, SWT.NONE).setText("Meaning");
         meaning = new Combo(area, SWT.READ_ONLY);
@@ -103,14 +103,21 @@ public final class SignatureDialog extends Dialog {
             signature = approval.sign(session, result, login.getText().trim(), password.getText().toCharArray(),
                     SignatureMeaning.valueOf(meaning.getText()), comment.getText());
         } catch (SignatureRefusedException e) {
-            message.setText(refusal(e.reason()));
+            showMessage(refusal(e.reason()));
             password.setText("");
             return;
         } catch (SQLException e) {
-            message.setText("The signature could not be stored: " + e.getMessage());
+            showMessage("The signature could not be stored: " + e.getMessage());
             return;
         }
         super.okPressed();
+    }
+
+    private void showMessage(String text) {
+        message.setText(text);
+        // the wrapped text may need more lines than the empty label had
+        getShell().setSize(getShell().computeSize(getShell().getSize().x, SWT.DEFAULT));
+        getShell().layout(true, true);
     }
 
     /** The text shown for a refusal. */

@@ -25,6 +25,9 @@ public final class AnalysisRuns {
     /** Software version recorded with results made at the desk. */
     public static final String SOFTWARE = "Tracegas Workbench 0.1.0";
 
+    private static final java.time.format.DateTimeFormatter SHOWN = java.time.format.DateTimeFormatter
+            .ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'").withZone(java.time.ZoneOffset.UTC);
+
     private AnalysisRuns() {
     }
 
@@ -37,7 +40,8 @@ public final class AnalysisRuns {
         List<BatchQuantificationJob.Item> items = new ArrayList<>();
         for (int i = 0; i < project.measurementIds().size(); i++) {
             items.add(new BatchQuantificationJob.Item(project.measurementIds().get(i),
-                    "measurement " + (i + 1) + " at " + project.measurementTimes().get(i), project.samples().get(i)));
+                    method.name() + " — measurement " + (i + 1) + ", "
+                            + SHOWN.format(project.measurementTimes().get(i)), project.samples().get(i)));
         }
         return new BatchQuantificationJob("Running " + method.name(), quantifier, items,
                 new BatchQuantificationJob.Target(access.store(), session, project.projectId(),

@@ -63,6 +63,7 @@ public final class AuditTrailPanel extends Composite {
     private WorkspaceAccess access;
     private AuditReview.Result shown;
     private Consumer<Job> scheduler = Job::schedule;
+    private final java.util.Map<String, String> logins = new java.util.HashMap<>();
 
     public AuditTrailPanel(Composite parent, int style) {
         super(parent, style);
@@ -215,7 +216,7 @@ public final class AuditTrailPanel extends Composite {
         table.removeAll();
         for (AuditRecord r : result.records()) {
             TableItem item = new TableItem(table, SWT.NONE);
-            item.setText(new String[] {Long.toString(r.sequence()), SHOWN.format(r.recordedAt()), r.userId(),
+            item.setText(new String[] {Long.toString(r.sequence()), SHOWN.format(r.recordedAt()), userName(r.userId()),
                     r.action().name(), r.objectType() + " " + abbreviate(r.objectId()),
                     Long.toString(r.objectVersion()), details(r)});
             if (r.action() == AuditAction.REFUSED) {
@@ -235,7 +236,19 @@ public final class AuditTrailPanel extends Composite {
             return r.meaning() + " by " + r.signerName() + (r.reason() == null ? "" : " — " + r.reason());
         }
         String v = r.newValue() == null ? (r.reason() == null ? "" : r.reason()) : r.newValue();
-        return v.length() > 90 ? v.substring(0, 90) + "…" : v;
+        v = v.replace('\n', ';').replace(";", "; ").strip();
+        return v.length() > 110 ? v.substring(0, 110) + "…" : v;
+    }
+
+    /** The login of a user id; records of refused log-ins carry the typed name, shown as it is. */
+    private String userName(String userId) {
+        return logins.computeIfAbsent(userId, id -> {
+            try {
+                return access.store().users().user(id).login();
+            } catch (org.tracegas.store.NoSuchObjectException e) {
+                return id;
+            }
+        });
     }
 
     private static String abbreviate(String id) {

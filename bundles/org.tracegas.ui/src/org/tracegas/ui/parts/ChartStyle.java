@@ -23,6 +23,8 @@ final class ChartStyle {
         c.getAxisSet().getXAxis(0).getTitle().setText(xTitle);
         c.getAxisSet().getYAxis(0).getTitle().setText(yTitle);
         c.getLegend().setPosition(SWT.RIGHT);
+        // one fixed tick format keeps the plot areas of stacked charts aligned
+        c.getAxisSet().getYAxis(0).getTick().setFormat(new java.text.DecimalFormat("0.0000"));
         return c;
     }
 

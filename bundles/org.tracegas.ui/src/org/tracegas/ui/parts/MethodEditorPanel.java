@@ -7,8 +7,10 @@ import java.util.Map;
 import org.eclipse.emf.common.command.CommandStackListener;
 import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.jface.fieldassist.ControlDecoration;
-import org.eclipse.jface.fieldassist.FieldDecorationRegistry;
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.graphics.GC;
+import org.eclipse.swt.graphics.Image;
+import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.custom.SashForm;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
@@ -42,6 +44,7 @@ public final class MethodEditorPanel extends Composite {
     private final Button redo;
     private final VersionComparisonPanel comparison;
     private final Map<Text, ControlDecoration> decorations = new LinkedHashMap<>();
+    private final Image errorMark;
     private final CommandStackListener stackListener = e -> getDisplay().asyncExec(this::afterCommand);
     private AnalysisMethod method;
     private MethodVersion version;
@@ -51,6 +54,8 @@ public final class MethodEditorPanel extends Composite {
     public MethodEditorPanel(Composite parent, int style, ModelEditor editor) {
         super(parent, style);
         this.editor = editor;
+        errorMark = errorMark(getDisplay());
+        addDisposeListener(e -> errorMark.dispose());
         setLayout(new GridLayout(1, false));
         SashForm sash = new SashForm(this, SWT.VERTICAL);
         sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
@@ -104,11 +109,24 @@ public final class MethodEditorPanel extends Composite {
         gd.horizontalIndent = 8;
         t.setLayoutData(gd);
         ControlDecoration d = new ControlDecoration(t, SWT.LEFT | SWT.CENTER);
-        d.setImage(FieldDecorationRegistry.getDefault().getFieldDecoration(FieldDecorationRegistry.DEC_ERROR)
-                .getImage());
+        d.setImage(errorMark);
         d.hide();
         decorations.put(t, d);
         return t;
+    }
+
+    /** A small red disc with a white bar, drawn here so it needs no image files. */
+    private static Image errorMark(Display display) {
+        Image img = new Image(display, 9, 9);
+        GC gc = new GC(img);
+        gc.setBackground(display.getSystemColor(SWT.COLOR_WIDGET_BACKGROUND));
+        gc.fillRectangle(0, 0, 9, 9);
+        gc.setBackground(Palette.BROKEN);
+        gc.fillOval(0, 0, 9, 9);
+        gc.setBackground(display.getSystemColor(SWT.COLOR_WHITE));
+        gc.fillRectangle(2, 4, 5, 1);
+        gc.dispose();
+        return img;
     }
 
     /** Opens a method version (it must sit in a resource of the editor's resource set). */
@@ -141,7 +159,10 @@ public final class MethodEditorPanel extends Composite {
         } finally {
             filling = false;
         }
-        decorations.values().forEach(ControlDecoration::hide);
+        decorations.forEach((t, d) -> {
+            d.hide();
+            t.setBackground(null);
+        });
         problems.setText("");
         refreshComparison();
         updateButtons();
@@ -164,10 +185,12 @@ public final class MethodEditorPanel extends Composite {
         if (problem != null) {
             d.setDescriptionText(problem);
             d.show();
+            field.setBackground(Palette.FAIL);
             problems.setText(problem);
             return;
         }
         d.hide();
+        field.setBackground(null);
         problems.setText("");
         if (!value.equals(owner.eGet(feature))) {
             editor.set(owner, feature, value);

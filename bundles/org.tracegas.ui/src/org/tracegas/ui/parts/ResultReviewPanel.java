@@ -84,7 +84,7 @@ public final class ResultReviewPanel extends Composite {
             item.setText(new String[] {r.values().compound(),
                     String.format(Locale.ROOT, "%.4g %s", r.values().concentration(), r.values().unit()),
                     String.format(Locale.ROOT, "%.2g", r.values().uncertainty()), SHOWN.format(r.recorded()),
-                    access.store().users().user(r.recordedBy()).login(), signatures});
+                    approval.loginOf(r.recordedBy()), signatures});
             if (!"not signed".equals(signatures)) {
                 item.setBackground(Palette.PASS);
             }

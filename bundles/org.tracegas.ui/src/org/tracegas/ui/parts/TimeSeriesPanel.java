@@ -44,6 +44,7 @@ public final class TimeSeriesPanel extends Composite {
         readout.setLayoutData(rd);
         chart = ChartStyle.chart(this, "", "Time (h)", "Concentration");
         chart.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1));
+        chart.getAxisSet().getYAxis(0).getTick().setFormat(new java.text.DecimalFormat("0.###"));
         data = new DecimatedSeries(chart);
         new ChartNavigation(this::rethin, chart);
         new CursorReadout(chart, readout, "%.4f h", "concentration");

@@ -1,6 +1,5 @@
 package org.tracegas.ui.prefs;
 
-import org.eclipse.jface.preference.DirectoryFieldEditor;
 import org.eclipse.jface.preference.FieldEditorPreferencePage;
 import org.eclipse.jface.preference.IntegerFieldEditor;
 import org.eclipse.jface.preference.StringFieldEditor;
@@ -34,8 +33,12 @@ public final class DeskPreferencePage extends FieldEditorPreferencePage implemen
         age.setValidRange(1, MAX_BACKGROUND_MINUTES);
         age.setErrorMessage("Background age limit: a whole number of minutes from 1 to " + MAX_BACKGROUND_MINUTES);
         addField(age);
-        addField(new DirectoryFieldEditor(DeskPreferences.WORKSPACE_FOLDER, "Workspace folder",
-                getFieldEditorParent()));
+        // a plain text field: the folder may not exist yet, it is created at the next start
+        StringFieldEditor folder = new StringFieldEditor(DeskPreferences.WORKSPACE_FOLDER,
+                "Workspace folder (created when missing)", getFieldEditorParent());
+        folder.setEmptyStringAllowed(false);
+        folder.setErrorMessage("Workspace folder: must not be empty");
+        addField(folder);
         addField(new ServerUrlEditor(DeskPreferences.SERVER_URL, "Lab server URL (empty: local workspace)",
                 getFieldEditorParent()));
     }

@@ -29,6 +29,9 @@ public final class ResultApproval {
     /** Object type of results in the audit trail. */
     public static final String OBJECT_TYPE = "result";
 
+    private static final java.time.format.DateTimeFormatter SHOWN = java.time.format.DateTimeFormatter
+            .ofPattern("yyyy-MM-dd HH:mm 'UTC'").withZone(java.time.ZoneOffset.UTC);
+
     private final WorkspaceAccess access;
     private final SignatureService signatures;
 
@@ -84,10 +87,20 @@ public final class ResultApproval {
         }
     }
 
-    /** "APPROVED by ... ; REVIEWED by ..." or "not signed". */
+    /** "APPROVED by Jane Roe 2026-03-10 14:03 UTC; ..." or "not signed". */
     public String signatureSummary(String resultId) throws SQLException {
         List<Signature> s = signaturesOf(resultId);
-        return s.isEmpty() ? "not signed" : s.stream().map(Signature::manifestation).collect(Collectors.joining("; "));
+        return s.isEmpty() ? "not signed" : s.stream().map(g -> g.meaning() + " by " + g.printedName() + " "
+                + SHOWN.format(g.signedAt())).collect(Collectors.joining("; "));
+    }
+
+    /** The login of a user id, or the id itself when there is no such user. */
+    public String loginOf(String userId) {
+        try {
+            return access.store().users().user(userId).login();
+        } catch (NoSuchObjectException e) {
+            return userId;
+        }
     }
 
     /** The exact text a signature covers: the result's values and what made them. */
