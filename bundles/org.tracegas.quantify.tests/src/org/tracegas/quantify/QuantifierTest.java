@@ -135,9 +135,9 @@ class QuantifierTest {
         CompoundResult no = quantifier(false).quantify(Sample.of(Mixture.noisy(Mixture.clean(negative),
                 new Random(5)))).compound("NO").orElseThrow();
         assertTrue(no.flagged(QualityFlag.NEGATIVE_BEYOND_DETECTION_LIMIT), no.flags().toString());
-        CompoundResult n2o = quantifier(false).quantify(Sample.of(Mixture.noisy(clean, new Random(5))))
+        CompoundResult positive = quantifier(false).quantify(Sample.of(Mixture.noisy(clean, new Random(5))))
                 .compound("NO").orElseThrow();
-        assertFalse(n2o.flagged(QualityFlag.NEGATIVE_BEYOND_DETECTION_LIMIT));
+        assertFalse(positive.flagged(QualityFlag.NEGATIVE_BEYOND_DETECTION_LIMIT));
     }
 
     @Test

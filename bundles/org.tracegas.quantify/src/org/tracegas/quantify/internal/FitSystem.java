@@ -248,7 +248,7 @@ public final class FitSystem {
             sd[c] = solution.standardDeviation(c);
         }
         return new SystemFit(solution.coefficients(), sd, solution.residualUnsafe(), columns, iterations, converged,
-                Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+                Double.NaN, Double.NaN);
     }
 
     private SystemFit fitShift(double[] y, LinearSolution linear, double[][] mixes, int iterations,
@@ -308,8 +308,7 @@ public final class FitSystem {
         }
         double[] amounts = Arrays.copyOf(q, nc);
         double[] sd = Arrays.copyOf(fit.standardDeviations(), nc);
-        return new SystemFit(amounts, sd, fit.residual(), columns,
-                iterations + fit.iterations(), converged, shift, fit.standardDeviations()[nc + nb],
-                width ? w : Double.NaN, width ? fit.standardDeviations()[nc + nb + 1] : Double.NaN);
+        return new SystemFit(amounts, sd, fit.residual(), columns, iterations + fit.iterations(), converged, shift,
+                width ? w : Double.NaN);
     }
 }

@@ -11,12 +11,10 @@ package org.tracegas.quantify.internal;
  * @param iterations iterations of the non-linear part (0 for a purely linear fit)
  * @param converged  whether the non-linear iteration met its tolerance
  * @param shift      fitted wavenumber shift in cm-1, NaN if not fitted
- * @param shiftSd    its standard deviation
  * @param width      fitted width change in cm-2, NaN if not fitted
- * @param widthSd    its standard deviation
  */
 public record SystemFit(double[] amounts, double[] amountSd, double[] residual, double[][] columns,
-        int iterations, boolean converged, double shift, double shiftSd, double width, double widthSd) {
+        int iterations, boolean converged, double shift, double width) {
 
     /** Fitted absorbance of compound c per fit point. */
     public double[] contribution(int c) {
