@@ -13,5 +13,5 @@ interface TestBackend extends AutoCloseable {
 
     /** Drops what the test created. */
     @Override
-    void close() throws Exception;
+    void close() throws SQLException;
 }

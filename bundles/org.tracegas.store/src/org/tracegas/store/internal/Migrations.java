@@ -27,6 +27,10 @@ import org.flywaydb.core.api.resource.LoadableResource;
  * switch Flyway's scanner off. Flyway is given its own class loader because it finds its database
  * support (PostgreSQL, H2) through {@link java.util.ServiceLoader} files inside its own bundle. The same
  * code runs unchanged outside OSGi.
+ * <p>
+ * Flyway 9.22 loads all of its plugins at once, and two of them (JSON report readers) are Gson classes:
+ * Gson (com.google.gson 2.10.1) must be present at run time or Flyway fails to start, and since the
+ * flyway-core manifest does not import com.google.gson, OSGi needs a fragment of org.flywaydb.core that does.
  */
 final class Migrations {
 
