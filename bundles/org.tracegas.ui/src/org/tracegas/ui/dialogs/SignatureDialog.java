@@ -79,8 +79,10 @@ public final class SignatureDialog extends Dialog {
         statement.setLayoutData(sd);
         message = new Label(area, SWT.WRAP);
         message.setForeground(area.getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
-        GridData md = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+        GridData md = new GridData(SWT.FILL, SWT.TOP, true, false, 2, 1);
         md.widthHint = 460;
+        // room for the longest refusal, so the dialog need not grow when one is shown
+        md.heightHint = 3 * message.computeSize(SWT.DEFAULT, SWT.DEFAULT).y + 4;
         message.setLayoutData(md);
         return area;
     }
@@ -103,21 +105,14 @@ public final class SignatureDialog extends Dialog {
             signature = approval.sign(session, result, login.getText().trim(), password.getText().toCharArray(),
                     SignatureMeaning.valueOf(meaning.getText()), comment.getText());
         } catch (SignatureRefusedException e) {
-            showMessage(refusal(e.reason()));
+            message.setText(refusal(e.reason()));
             password.setText("");
             return;
         } catch (SQLException e) {
-            showMessage("The signature could not be stored: " + e.getMessage());
+            message.setText("The signature could not be stored: " + e.getMessage());
             return;
         }
         super.okPressed();
-    }
-
-    private void showMessage(String text) {
-        message.setText(text);
-        // the wrapped text may need more lines than the empty label had
-        getShell().setSize(getShell().computeSize(getShell().getSize().x, SWT.DEFAULT));
-        getShell().layout(true, true);
     }
 
     /** The text shown for a refusal. */

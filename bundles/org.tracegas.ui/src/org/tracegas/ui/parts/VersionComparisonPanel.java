@@ -67,6 +67,10 @@ public final class VersionComparisonPanel extends Composite {
                 item.setBackground(Palette.CHANGED);
             }
         }
+        for (TableColumn c : table.getColumns()) {
+            c.pack();
+            c.setWidth(Math.max(c.getWidth(), 120));
+        }
         int differing = diff.added().size() + diff.removed().size() + diff.changed().size();
         summary.setText(differing == 0 ? "The versions hold the same values."
                 : differing + (differing == 1 ? " field differs" : " fields differ") + " (highlighted).");
