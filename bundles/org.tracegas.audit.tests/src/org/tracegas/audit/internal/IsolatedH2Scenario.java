@@ -1,12 +1,15 @@
 package org.tracegas.audit.internal;
 
 import java.nio.file.Files;
+import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.SQLException;
 import java.sql.Statement;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Properties;
+import java.util.stream.Stream;
 
 import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
@@ -27,7 +30,8 @@ public final class IsolatedH2Scenario {
         Properties p = new Properties();
         p.setProperty("user", "sa");
         p.setProperty("password", "");
-        String url = "jdbc:h2:file:" + Files.createTempDirectory("audit-isolated").resolve("a");
+        Path dir = Files.createTempDirectory("audit-isolated");
+        String url = "jdbc:h2:file:" + dir.resolve("a");
         try (Connection c = new org.h2.Driver().connect(url, p); Statement s = c.createStatement()) {
             s.execute("CREATE TABLE t (x INT)");
             try {
@@ -48,6 +52,9 @@ public final class IsolatedH2Scenario {
                 steps.add(e.getMessage().contains("append-only") ? "delete refused by the trigger" : e.getMessage());
             }
             s.execute("SHUTDOWN");
+        }
+        try (Stream<Path> files = Files.walk(dir)) {
+            files.sorted(Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
         }
         return steps;
     }
