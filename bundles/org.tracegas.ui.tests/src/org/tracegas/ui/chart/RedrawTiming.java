@@ -18,6 +18,11 @@ public final class RedrawTiming {
 
     /** Median of {@code runs} repaints in milliseconds, after two warm-up repaints. */
     public static double medianMillis(Chart chart, int runs) {
+        return medianMillis(chart, runs, () -> { });
+    }
+
+    /** As {@link #medianMillis(Chart, int)}, running {@code change} (e.g. a zoom step) before each repaint. */
+    public static double medianMillis(Chart chart, int runs, Runnable change) {
         Control plot = chart.getPlotArea().getControl();
         Display display = chart.getDisplay();
         int[] paints = {0};
@@ -26,6 +31,7 @@ public final class RedrawTiming {
         for (int i = 0; i < t.length; i++) {
             int before = paints[0];
             long start = System.nanoTime();
+            change.run();
             chart.redraw();
             chart.update();
             long give = System.currentTimeMillis() + 5000;

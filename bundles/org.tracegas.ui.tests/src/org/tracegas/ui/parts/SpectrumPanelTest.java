@@ -76,8 +76,13 @@ class SpectrumPanelTest {
         assertTrue(shown > width && shown <= 2 * width + 2, "points drawn " + shown + " for " + width + " columns");
         double ms = RedrawTiming.medianMillis(panel.spectrumChart(), 15);
         double msResidual = RedrawTiming.medianMillis(panel.residualChart(), 15);
-        System.out.printf("spectrum 32768 points: %d drawn, redraw+update median %.2f ms (spectrum chart),"
-                + " %.2f ms (residual chart)%n", shown, ms, msResidual);
+        int[] step = {0};
+        double zoomMs = RedrawTiming.medianMillis(panel.spectrumChart(), 15, () -> panel.navigation()
+                .zoom(panel.spectrumChart(), width / 2, step[0]++ % 2 == 0 ? 0.8 : 1.25));
+        System.out.printf("spectrum 32768 points: %d drawn; repaint median %.2f ms (spectrum chart), %.2f ms"
+                + " (residual chart); zoom step (re-thinning, both charts) + repaint median %.2f ms%n", shown, ms,
+                msResidual, zoomMs);
+        assertTrue(zoomMs < 2000, "sanity bound only: " + zoomMs + " ms");
         assertTrue(ms < 2000, "sanity bound only: " + ms + " ms");
         Screens.save(shell, "spectrum-32k");
     }

@@ -79,8 +79,12 @@ class TimeSeriesPanelTest {
         assertNotNull(panel.chart().getSeriesSet().getSeries("Limit daily"));
         assertEquals(2, panel.shownPoints("Limit daily"));
         double ms = RedrawTiming.medianMillis(panel.chart(), 15);
-        System.out.printf("time series 86400 x 20: show (thinning all series) %.1f ms, redraw+update median %.2f ms,"
-                + " %d columns%n", showMs, ms, width);
+        int[] step = {0};
+        double zoomMs = RedrawTiming.medianMillis(panel.chart(), 15,
+                () -> panel.navigation().zoom(panel.chart(), width / 2, step[0]++ % 2 == 0 ? 0.8 : 1.25));
+        System.out.printf("time series 86400 x 20: show %.1f ms; repaint median %.2f ms; zoom step (re-thinning"
+                + " and rasterizing all 41 series) + repaint median %.2f ms; %d columns%n", showMs, ms, zoomMs, width);
+        assertTrue(zoomMs < 2000, "sanity bound only: " + zoomMs + " ms");
         assertTrue(ms < 2000, "sanity bound only: " + ms + " ms");
         Screens.save(shell, "time-series-day");
     }

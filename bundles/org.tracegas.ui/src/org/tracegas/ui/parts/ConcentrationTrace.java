@@ -22,13 +22,13 @@ public record ConcentrationTrace(String compound, String unit, double[] hours, d
         flagged = (BitSet) flagged.clone();
     }
 
-    /** The values at flagged times and NaN elsewhere (NaN points are not drawn). */
+    /** Times of the flagged values only. */
+    public double[] flaggedHours() {
+        return flagged.stream().filter(i -> i < hours.length).mapToDouble(i -> hours[i]).toArray();
+    }
+
+    /** The flagged values only, in time order. */
     public double[] flaggedValues() {
-        double[] f = new double[values.length];
-        java.util.Arrays.fill(f, Double.NaN);
-        for (int i = flagged.nextSetBit(0); i >= 0 && i < f.length; i = flagged.nextSetBit(i + 1)) {
-            f[i] = values[i];
-        }
-        return f;
+        return flagged.stream().filter(i -> i < values.length).mapToDouble(i -> values[i]).toArray();
     }
 }

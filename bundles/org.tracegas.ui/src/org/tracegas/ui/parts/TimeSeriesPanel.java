@@ -30,6 +30,7 @@ public final class TimeSeriesPanel extends Composite {
     private final Chart chart;
     private final DecimatedSeries data;
     private final Label heading;
+    private final ChartNavigation navigation;
 
     public TimeSeriesPanel(Composite parent, int style) {
         super(parent, style);
@@ -46,7 +47,7 @@ public final class TimeSeriesPanel extends Composite {
         chart.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1));
         chart.getAxisSet().getYAxis(0).getTick().setFormat(new java.text.DecimalFormat("0.###"));
         data = new DecimatedSeries(chart);
-        new ChartNavigation(this::rethin, chart);
+        navigation = new ChartNavigation(this::rethin, chart);
         new CursorReadout(chart, readout, "%.4f h", "concentration");
     }
 
@@ -66,7 +67,7 @@ public final class TimeSeriesPanel extends Composite {
             ILineSeries<?> m = ChartStyle.markers(chart, t.compound() + FLAGS_SUFFIX, Palette.LIMIT,
                     PlotSymbolType.CROSS);
             m.setVisibleInLegend(false);
-            data.put(m, t.hours(), t.flaggedValues());
+            data.put(m, t.flaggedHours(), t.flaggedValues());
         }
         Range full = data.fullXRange();
         for (Limit l : limits) {
@@ -90,6 +91,10 @@ public final class TimeSeriesPanel extends Composite {
     private void rethin() {
         data.refresh();
         chart.redraw();
+    }
+
+    public ChartNavigation navigation() {
+        return navigation;
     }
 
     public Chart chart() {
