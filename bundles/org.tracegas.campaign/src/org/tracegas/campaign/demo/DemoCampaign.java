@@ -235,7 +235,11 @@ public final class DemoCampaign {
     }
 
     private static CampaignQaChecks.Plan qaPlan(ReferenceLibrary library) {
-        ReferenceSpectrum co = library.references().stream().filter(r -> r.compound().name().equals("CO")).findFirst()
+        // the CO reference nearest in amount to the CTS gas, so that saturation does not bias the band ratio
+        double ctsPpmMetres = DemoCampaignFiles.CTS_CO_PPM * DemoScenario.PATH_LENGTH;
+        ReferenceSpectrum co = library.references().stream().filter(r -> r.compound().name().equals("CO"))
+                .min(java.util.Comparator.comparingDouble(
+                        r -> Math.abs(r.metadata().conditions().concentrationPathLength() - ctsPpmMetres)))
                 .orElseThrow();
         return new CampaignQaChecks.Plan("CO", DemoCampaignFiles.CTS_CO_PPM, 2040, 2240, co.spectrum(),
                 co.metadata().conditions().concentrationPathLength(), co.metadata().conditions().temperature(),
@@ -257,13 +261,20 @@ public final class DemoCampaign {
             FitSpectra fit = new Quantifier(prepared, library.contentHash(), SOFTWARE, true)
                     .quantify(Sample.of(a)).compound("CO").orElseThrow().spectra().orElseThrow();
             Spectrum model = fit.model();
-            double[] x = model.axis().toArray();
-            double[] measured = new double[x.length];
-            for (int i = 0; i < x.length; i++) {
-                measured[i] = a.get(a.axis().nearestIndex(x[i]));
+            // the model is defined inside the analyte's regions only
+            List<double[]> points = new ArrayList<>();
+            for (int i = 0; i < model.size(); i++) {
+                double x = model.axis().get(i);
+                double y = a.get(a.axis().nearestIndex(x));
+                if (Double.isFinite(model.get(i)) && Double.isFinite(y)) {
+                    points.add(new double[] { x, y, model.get(i) });
+                }
             }
+            double[] x = points.stream().mapToDouble(p -> p[0]).toArray();
+            double[] measured = points.stream().mapToDouble(p -> p[1]).toArray();
+            double[] fitted = points.stream().mapToDouble(p -> p[2]).toArray();
             return new SpectrumFit("CO region at " + record.header().time() + " (morning upset)", x, measured,
-                    model.toArray());
+                    fitted);
         }
     }
 

@@ -55,9 +55,10 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         JdbcDataSource ds = new JdbcDataSource();
         // DB_CLOSE_DELAY=-1 keeps the database open between the per-operation connections until close();
         // LAZY_QUERY_EXECUTION lets a streamed query read rows on demand instead of building the result first;
-        // LOCK_TIMEOUT covers the longest audited transaction waiting for the audit chain head.
+        // LOCK_TIMEOUT covers the longest audited transaction waiting for the audit chain head;
+        // WRITE_DELAY=0 writes each commit at once, so a killed process loses no commit it reported.
         ds.setURL("jdbc:h2:file:" + folder.toAbsolutePath().resolve("workspace")
-                + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000;CACHE_SIZE=16384");
+                + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000;CACHE_SIZE=16384;WRITE_DELAY=0");
         return open(ds, Backend.H2, maxFailedLogins);
     }
 
