@@ -108,6 +108,35 @@ class SpectrumPanelTest {
     }
 
     @Test
+    void theMouseWheelZoomsAndALeftDragPans() {
+        panel.show(large());
+        Screens.flush(display);
+        var plot = panel.spectrumChart().getPlotArea().getControl();
+        Range before = panel.spectrumChart().getAxisSet().getXAxis(0).getRange();
+        org.eclipse.swt.widgets.Event wheel = new org.eclipse.swt.widgets.Event();
+        wheel.x = 300;
+        wheel.count = 3;
+        plot.notifyListeners(SWT.MouseVerticalWheel, wheel);
+        Range zoomed = panel.spectrumChart().getAxisSet().getXAxis(0).getRange();
+        assertEquals(0.8 * (before.upper - before.lower), zoomed.upper - zoomed.lower, 1e-6);
+        org.eclipse.swt.widgets.Event down = new org.eclipse.swt.widgets.Event();
+        down.button = 1;
+        down.x = 100;
+        plot.notifyListeners(SWT.MouseDown, down);
+        org.eclipse.swt.widgets.Event move = new org.eclipse.swt.widgets.Event();
+        move.x = 160;
+        move.stateMask = SWT.BUTTON1;
+        plot.notifyListeners(SWT.MouseMove, move);
+        Range dragged = panel.spectrumChart().getAxisSet().getXAxis(0).getRange();
+        var axis = panel.spectrumChart().getAxisSet().getXAxis(0);
+        assertEquals(zoomed.upper - zoomed.lower, dragged.upper - dragged.lower, 1e-6);
+        // the wavenumber that was under x = 100 is now under x = 160 (within a pixel)
+        double perPixel = (dragged.upper - dragged.lower) / panel.spectrumChart().getPlotArea().getSize().x;
+        assertEquals(Math.abs(60 * perPixel), Math.abs(dragged.lower - zoomed.lower), 2 * perPixel);
+        assertTrue(axis.isReversed());
+    }
+
+    @Test
     void readoutGivesWavenumberAndAbsorbanceUnderTheMouse() {
         panel.show(large());
         Screens.flush(display);
