@@ -10,7 +10,7 @@ port=${TRACEGAS_TEST_PG_PORT:-55433}
 trap '"$top/releng/postgres-throwaway.sh" stop "$pgdir"' EXIT
 url=$("$top/releng/postgres-throwaway.sh" start "$pgdir" "$port")
 
-run=("$top/releng/mvnw" -B -f "$top/pom.xml" verify "-Dtracegas.test.pg.url=$url" "$@")
+run=("$top/releng/mvnw" -B -f "$top/pom.xml" clean verify "-Dtracegas.test.pg.url=$url" "$@")
 if [ -z "${DISPLAY:-}" ]; then
   xvfb-run -a -s "-screen 0 1280x1024x24" "${run[@]}"
 else

@@ -26,7 +26,22 @@ class StepRegistryTest {
 
     /** A real (non-OSGi) extension registry holding the bundle's own plugin.xml and optional extra contributions. */
     private static IExtensionRegistry registryWith(String... extraPluginXml) throws IOException {
-        IExtensionRegistry registry = RegistryFactory.createRegistry(new RegistryStrategy(null, null), MASTER, null);
+        // classes are loaded through this test's loader: inside OSGi the registry bundle cannot see them
+        RegistryStrategy strategy = new RegistryStrategy(null, null) {
+            @Override
+            public Object createExecutableExtension(org.eclipse.core.runtime.spi.RegistryContributor contributor,
+                    String className, String overriddenContributorName) throws org.eclipse.core.runtime.CoreException {
+                try {
+                    return Class.forName(className, true, StepRegistryTest.class.getClassLoader())
+                            .getDeclaredConstructor().newInstance();
+                } catch (ReflectiveOperationException | LinkageError e) {
+                    throw new org.eclipse.core.runtime.CoreException(new org.eclipse.core.runtime.Status(
+                            org.eclipse.core.runtime.IStatus.ERROR, "org.tracegas.preprocess.tests",
+                            "cannot create " + className, e));
+                }
+            }
+        };
+        IExtensionRegistry registry = RegistryFactory.createRegistry(strategy, MASTER, null);
         try (InputStream in = pluginXml()) {
             assertTrue(registry.addContribution(in, ContributorFactorySimple.createContributor("org.tracegas.preprocess"),
                     false, "plugin.xml", null, MASTER));
