@@ -68,6 +68,14 @@ public final class Desk {
     /** Called in the UI thread when a run finished. */
     public void runFinished(List<BatchQuantificationJob.Outcome> outcomes) {
         lastRun = List.copyOf(outcomes);
+        if (project != null && !outcomes.isEmpty()) {
+            // recording results froze the method version in the store; the tree shows it
+            project.model().getMethods().forEach(m -> m.getVersions().forEach(v -> {
+                if (project.methodVersionId().equals(v.getId())) {
+                    v.setFrozen(true);
+                }
+            }));
+        }
         runListeners.forEach(l -> l.accept(lastRun));
     }
 

@@ -1,5 +1,8 @@
 package org.tracegas.ui.views;
 
+import java.util.List;
+import java.util.function.Consumer;
+
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
@@ -9,6 +12,7 @@ import org.tracegas.model.Project;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.ui.jobs.AnalysisRuns;
+import org.tracegas.ui.jobs.BatchQuantificationJob;
 import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.Desk;
 
@@ -18,6 +22,11 @@ public final class NavigatorView extends ViewPart {
     public static final String ID = "org.tracegas.ui.views.navigator";
 
     private WorkspaceNavigator navigator;
+    private final Consumer<List<BatchQuantificationJob.Outcome>> refresh = outcomes -> {
+        if (!navigator.isDisposed()) {
+            navigator.viewer().refresh();
+        }
+    };
 
     @Override
     public void createPartControl(Composite parent) {
@@ -35,6 +44,13 @@ public final class NavigatorView extends ViewPart {
             }
         });
         getSite().setSelectionProvider(navigator.viewer());
+        desk.addRunListener(refresh);
+    }
+
+    @Override
+    public void dispose() {
+        Desk.get().removeRunListener(refresh);
+        super.dispose();
     }
 
     @Override
