@@ -54,6 +54,8 @@ public final class SpectrumPanel extends Composite {
         spectrum = ChartStyle.chart(sash, "", "Wavenumber (cm⁻¹)", "Absorbance");
         residual = ChartStyle.chart(sash, "", "Wavenumber (cm⁻¹)", "Residual");
         sash.setWeights(3, 1);
+        // the residual chart is low: denser tick marks keep its scale labelled
+        residual.getAxisSet().getYAxis(0).getTick().setTickMarkStepHint(16);
         spectrumData = new DecimatedSeries(spectrum);
         residualData = new DecimatedSeries(residual);
         spectrumShading = new RegionShading(spectrum, Palette.REGION);
