@@ -3,7 +3,6 @@ package org.tracegas.campaign.demo;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
 import java.util.Map;
@@ -11,7 +10,6 @@ import java.util.Random;
 
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
@@ -31,8 +29,6 @@ import org.tracegas.spectrum.Spectrum;
  */
 class DemoPhysicsTest {
 
-    @TempDir
-    static Path folder;
     private static DemoPhysics physics;
     private static InterferogramSynthesizer synthesizer;
     private static InterferogramTransform transform;
@@ -40,8 +36,8 @@ class DemoPhysicsTest {
 
     @BeforeAll
     static void buildInstrument() throws Exception {
-        physics = DemoPhysics.fromInventedLineLists(folder);
-        synthesizer = physics.interferograms();
+        physics = DemoPhysicsFixture.get().physics();
+        synthesizer = DemoPhysicsFixture.get().synthesizer();
         transform = new InterferogramTransform(DemoMethod.transform());
         background = new Background("bg", Instant.EPOCH,
                 transform.singleBeam(synthesizer.synthesize(Map.of(), 1.0, DemoCampaignFiles.NOISE, new Random(1))));
