@@ -176,8 +176,8 @@ public final class DemoCampaign {
                     new ReportingBasis(StandardConditions.EU_EMISSIONS, new OxygenCorrection(11.0, 20.0)),
                     new FtirResultBudget(0.02, DemoScenario.PATH_LENGTH, 0.05, 2.0, 0.5),
                     DemoScenario.CELL_TEMPERATURE, DemoScenario.CELL_PRESSURE)
-                    .build(campaign(), new MethodVersion(method.name(), methodVersion.id(), methodVersion.contentHash()),
-                            new LibraryVersion(library.name(), libraryVersion.id()), checks, series, reported(),
+                    .build(campaign(), new MethodVersion(method.name(), "v" + methodVersion.number(), methodVersion.contentHash()),
+                            new LibraryVersion(library.name(), "v" + libraryVersion.number() + ", content " + library.contentHash().substring(0, 16)), checks, series, reported(),
                             "H2O", t -> oxygen(o2, t), List.of(Duration.ofMinutes(30), Duration.ofDays(1)),
                             exampleFit(prepared, library, chain, raw));
             Files.createDirectories(reportFolder);

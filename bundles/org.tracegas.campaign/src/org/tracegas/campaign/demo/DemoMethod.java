@@ -58,7 +58,9 @@ public final class DemoMethod {
     /** The quantification method over a library made by {@link #library}. */
     public static QuantificationMethod method(ReferenceLibrary library) {
         QuantificationMethod.Builder b = QuantificationMethod.builder(METHOD_NAME)
-                .pathLengthMetres(DemoScenario.PATH_LENGTH).nonlinearity(true).reportingUnit(ReportingUnit.PPM);
+                .pathLengthMetres(DemoScenario.PATH_LENGTH).nonlinearity(true).reportingUnit(ReportingUnit.PPM)
+                // a part in a million of the amount is far below the noise; a tighter tolerance only costs iterations
+                .tolerance(1e-6);
         b.analyte(new Analyte("CO", List.of("CO2", "N2O"), List.of(AnalysisRegion.of(2040, 2140, 1))));
         b.analyte(new Analyte("CO2", List.of("H2O"), List.of(AnalysisRegion.of(3560, 3660, 1))));
         b.analyte(new Analyte("NO", List.of("H2O"), List.of(AnalysisRegion.of(1840, 1940, 1))));
