@@ -31,6 +31,10 @@ final class Options {
         return new Options(values);
     }
 
+    boolean has(String name) {
+        return values.containsKey(name);
+    }
+
     String text(String name) throws UsageException {
         String v = values.get(name);
         if (v == null || v.isBlank()) {

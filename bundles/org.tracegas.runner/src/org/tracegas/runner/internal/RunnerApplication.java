@@ -7,6 +7,7 @@ import org.eclipse.equinox.app.IApplicationContext;
 import org.osgi.framework.FrameworkUtil;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.CommandTable;
+import org.tracegas.runner.commands.AuditVerifyCommand;
 import org.tracegas.runner.commands.DemoCommand;
 import org.tracegas.runner.RunnerContext;
 
@@ -19,7 +20,7 @@ public final class RunnerApplication implements IApplication {
     public Object start(IApplicationContext context) {
         String[] argv = (String[]) context.getArguments().get(IApplicationContext.APPLICATION_ARGS);
         String version = FrameworkUtil.getBundle(getClass()).getVersion().toString();
-        CommandTable table = new CommandTable(version, List.of(new DemoCommand(cancel)));
+        CommandTable table = new CommandTable(version, List.of(new DemoCommand(cancel), new AuditVerifyCommand()));
         return table.dispatch(argv == null ? new String[0] : argv, new RunnerContext(System.out, System.err));
     }
 
