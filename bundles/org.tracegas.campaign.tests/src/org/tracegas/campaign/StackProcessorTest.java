@@ -80,8 +80,7 @@ class StackProcessorTest {
             Quantifier quantifier = new Quantifier(PreparedMethod.prepare(method, background.singleBeam().axis()),
                     library.contentHash(), "test", false);
             BatchOutcome outcome = new StackProcessor(store, analyst, project.id(), chain,
-                    new BatchQuantifier(quantifier, 2), new AnalysisVersions(met.id(), met.contentHash(), lib.id(),
-                            library.contentHash()))
+                    new BatchQuantifier(quantifier, 2), new AnalysisVersions(met.id(), lib.id()))
                     .run(List.of(file), truth.size(), ProgressListener.NONE, new CancellationFlag());
 
             assertEquals(truth.size(), outcome.delivered());

@@ -39,7 +39,7 @@ public final class CampaignQaChecks {
     public static List<CheckOutcome> evaluate(Plan plan, QaMeasurements qa, List<Background> backgrounds,
             Instant firstSample, Instant lastSample) {
         List<CheckOutcome> outcomes = new ArrayList<>();
-        List<QaMeasurements.Fitted> cts = qa.withRole("cts");
+        List<QaMeasurements.Fitted> cts = qa.withRole(MeasurementRole.CTS);
         PathLengthCheck pathCheck = new PathLengthCheck(plan.nominalPathM(),
                 PathLengthCheck.COMMON_PRACTICE_TOLERANCE_PERCENT);
         CtsBand reference = new CtsBand(BandArea.of(plan.ctsReference(), plan.ctsLow(), plan.ctsHigh()),
@@ -57,7 +57,7 @@ public final class CampaignQaChecks {
                     paths.get(paths.size() - 1)));
         }
         List<SpikedSample> spiked = new ArrayList<>();
-        for (Map.Entry<QaMeasurements.Fitted, QaMeasurements.Fitted> pair : qa.spikePairs("spike", "unspiked")) {
+        for (Map.Entry<QaMeasurements.Fitted, QaMeasurements.Fitted> pair : qa.spikePairs(MeasurementRole.SPIKE, MeasurementRole.UNSPIKED)) {
             spiked.add(new SpikedSample(pair.getKey().ppm(plan.tracer()), pair.getKey().ppm(plan.spikeAnalyte()),
                     pair.getValue().ppm(plan.spikeAnalyte())));
         }
@@ -65,7 +65,7 @@ public final class CampaignQaChecks {
             outcomes.add(new SpikeRecoveryCheck(SpikeRecoveryCheck.METHOD_320_LIMITS).evaluate(plan.spikeAnalyte(),
                     plan.spikeGas(), spiked));
         }
-        for (QaMeasurements.Fitted zero : qa.withRole("zero")) {
+        for (QaMeasurements.Fitted zero : qa.withRole(MeasurementRole.ZERO)) {
             for (String analyte : plan.analytes()) {
                 // a zero reading within twice the 3-sigma detection limit passes (common practice, no source)
                 double dl = zero.result().compound(analyte).orElseThrow().detectionLimit();

@@ -1,7 +1,6 @@
 package org.tracegas.campaign;
 
 import java.time.Instant;
-import java.util.Map;
 
 import org.tracegas.preprocess.RatioResult;
 
@@ -10,9 +9,5 @@ import org.tracegas.preprocess.RatioResult;
  * the ratio against its background.
  */
 public record MeasuredSpectrum(Instant time, String role, double cellTemperatureK, double cellPressureKPa,
-        RatioResult ratio, Map<String, String> metadata) {
-
-    public MeasuredSpectrum {
-        metadata = Map.copyOf(metadata);
-    }
+        RatioResult ratio) {
 }

@@ -41,10 +41,6 @@ public final class QaMeasurements {
                 .sorted((a, b) -> a.measured().time().compareTo(b.measured().time())).toList();
     }
 
-    public List<Fitted> all() {
-        return all;
-    }
-
     /** Pairs each spiked measurement with the unspiked one taken just before it. */
     public List<Map.Entry<Fitted, Fitted>> spikePairs(String spikeRole, String unspikedRole) {
         List<Fitted> spikes = withRole(spikeRole);

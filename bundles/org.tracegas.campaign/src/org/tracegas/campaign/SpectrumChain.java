@@ -1,7 +1,5 @@
 package org.tracegas.campaign;
 
-import java.util.Map;
-
 import org.tracegas.importer.container.AcquisitionHeader;
 import org.tracegas.importer.container.ContainerRecord;
 import org.tracegas.preprocess.BackgroundRatio;
@@ -14,10 +12,6 @@ import org.tracegas.spectrum.Spectrum;
  * the last background before it. One chain per thread: the transform keeps work buffers.
  */
 public final class SpectrumChain {
-
-    /** Header key of a measurement's role (sample, cts, zero, spike ...). */
-    public static final String ROLE = "role";
-    public static final String ROLE_SAMPLE = "sample";
 
     private final InterferogramTransform transform;
     private final BackgroundRatio ratio;
@@ -37,8 +31,7 @@ public final class SpectrumChain {
         AcquisitionHeader h = record.header();
         Spectrum singleBeam = transform.singleBeam(record.interferogram());
         RatioResult absorbance = ratio.absorbance(singleBeam, h.time(), backgrounds.latestBefore(h.time()));
-        Map<String, String> extra = h.extra();
-        return new MeasuredSpectrum(h.time(), extra.getOrDefault(ROLE, ROLE_SAMPLE), h.cellTemperatureK(),
-                h.cellPressureHpa() / 10.0, absorbance, extra);
+        return new MeasuredSpectrum(h.time(), h.extra().getOrDefault(MeasurementRole.KEY, MeasurementRole.SAMPLE),
+                h.cellTemperatureK(), h.cellPressureHpa() / 10.0, absorbance);
     }
 }

@@ -144,8 +144,7 @@ public final class DemoCampaign {
                     "library=" + library.name() + "\ncontent-sha256=" + library.contentHash() + "\n");
             VersionInfo methodVersion = ensureVersion(store, analyst, VersionKind.METHOD, method.name(),
                     method.canonicalText());
-            AnalysisVersions versions = new AnalysisVersions(methodVersion.id(), methodVersion.contentHash(),
-                    libraryVersion.id(), library.contentHash());
+            AnalysisVersions versions = new AnalysisVersions(methodVersion.id(), libraryVersion.id());
             Quantifier quantifier = new Quantifier(prepared, library.contentHash(), SOFTWARE, false);
 
             MinuteSeries series = MinuteSeries.of(store.projects().measurements(analyst, project.id()),

@@ -17,6 +17,7 @@ import java.util.Random;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.stream.IntStream;
 
+import org.tracegas.campaign.MeasurementRole;
 import org.tracegas.importer.container.AcquisitionHeader;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
@@ -32,12 +33,6 @@ import org.tracegas.spectrum.Interferogram;
  */
 public final class DemoCampaignFiles {
 
-    /** Extra header key that says what a QA measurement is. */
-    public static final String ROLE = "role";
-    public static final String ROLE_CTS = "cts";
-    public static final String ROLE_ZERO = "zero";
-    public static final String ROLE_SPIKE = "spike";
-    public static final String ROLE_UNSPIKED = "unspiked";
     /** Certified CO content of the calibration transfer standard cylinder, ppm (invented). */
     public static final double CTS_CO_PPM = 100.0;
     /** Analyte and tracer content of the spike cylinder, ppm (invented). */
@@ -118,22 +113,22 @@ public final class DemoCampaignFiles {
             Random random = new Random(-1);
             out.append(header(SampleKind.BACKGROUND, day.minusSeconds(1200), Map.of()),
                     synthesizer.synthesize(nitrogen, 1.0, NOISE, random));
-            out.append(header(SampleKind.SAMPLE, day.minusSeconds(900), Map.of(ROLE, ROLE_CTS)),
+            out.append(header(SampleKind.SAMPLE, day.minusSeconds(900), Map.of(MeasurementRole.KEY, MeasurementRole.CTS)),
                     synthesizer.synthesize(cts, 1.0, NOISE, random));
-            out.append(header(SampleKind.SAMPLE, day.minusSeconds(600), Map.of(ROLE, ROLE_ZERO)),
+            out.append(header(SampleKind.SAMPLE, day.minusSeconds(600), Map.of(MeasurementRole.KEY, MeasurementRole.ZERO)),
                     synthesizer.synthesize(nitrogen, 1.0, NOISE, random));
             for (int i = 0; i < 3; i++) {
                 int minute = 600 + 2 * i;
                 Map<String, Double> stack = DayOfStackGas.at(minute);
-                out.append(header(SampleKind.SAMPLE, minuteTime(minute).minusSeconds(15), Map.of(ROLE, ROLE_UNSPIKED)),
+                out.append(header(SampleKind.SAMPLE, minuteTime(minute).minusSeconds(15), Map.of(MeasurementRole.KEY, MeasurementRole.UNSPIKED)),
                         synthesizer.synthesize(stack, DayOfStackGas.gain(minute), NOISE, random));
-                out.append(header(SampleKind.SAMPLE, minuteTime(minute + 1).minusSeconds(15), Map.of(ROLE, ROLE_SPIKE)),
+                out.append(header(SampleKind.SAMPLE, minuteTime(minute + 1).minusSeconds(15), Map.of(MeasurementRole.KEY, MeasurementRole.SPIKE)),
                         synthesizer.synthesize(spiked(DayOfStackGas.at(minute + 1)), DayOfStackGas.gain(minute + 1),
                                 NOISE, random));
             }
             out.append(header(SampleKind.BACKGROUND, day.plus(12, ChronoUnit.HOURS), Map.of()),
                     synthesizer.synthesize(nitrogen, 1.0, NOISE, random));
-            out.append(header(SampleKind.SAMPLE, day.plus(1, ChronoUnit.DAYS).plusSeconds(300), Map.of(ROLE, ROLE_CTS)),
+            out.append(header(SampleKind.SAMPLE, day.plus(1, ChronoUnit.DAYS).plusSeconds(300), Map.of(MeasurementRole.KEY, MeasurementRole.CTS)),
                     synthesizer.synthesize(cts, 0.995, NOISE, random));
             out.commit();
         }
