@@ -9,6 +9,11 @@ import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.commands.AuditVerifyCommand;
 import org.tracegas.runner.commands.DemoCommand;
+import org.tracegas.runner.commands.ImportCommand;
+import org.tracegas.runner.commands.ProjectAddCommand;
+import org.tracegas.runner.commands.UserAddCommand;
+import org.tracegas.runner.commands.WorkspaceInitCommand;
+import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.runner.RunnerContext;
 
 /** The headless Equinox application: hands the command line to the runner's command table. */
@@ -20,7 +25,9 @@ public final class RunnerApplication implements IApplication {
     public Object start(IApplicationContext context) {
         String[] argv = (String[]) context.getArguments().get(IApplicationContext.APPLICATION_ARGS);
         String version = FrameworkUtil.getBundle(getClass()).getVersion().toString();
-        CommandTable table = new CommandTable(version, List.of(new DemoCommand(cancel), new AuditVerifyCommand()));
+        CommandTable table = new CommandTable(version, List.of(new DemoCommand(cancel), new AuditVerifyCommand(),
+                new WorkspaceInitCommand(), new UserAddCommand(), new ProjectAddCommand(),
+                new ImportCommand(ReaderRegistry.fromPlatform())));
         return table.dispatch(argv == null ? new String[0] : argv, new RunnerContext(System.out, System.err));
     }
 

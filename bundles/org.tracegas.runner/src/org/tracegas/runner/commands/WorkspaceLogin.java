@@ -1,0 +1,36 @@
+package org.tracegas.runner.commands;
+
+import org.tracegas.runner.RunnerContext;
+import org.tracegas.runner.UsageException;
+import org.tracegas.store.Session;
+import org.tracegas.store.WorkspaceStore;
+
+/**
+ * How a command opens a workspace and logs in: {@code --workspace <folder>} (embedded H2) or
+ * {@code --server <jdbc url> --user <db user> --password <db password>} (PostgreSQL lab server), and
+ * {@code --as <login>} with the password in the environment variable {@value #PASSWORD_VARIABLE}, so that it
+ * appears neither on the command line nor in the shell history.
+ */
+final class WorkspaceLogin {
+
+    static final String PASSWORD_VARIABLE = "TRACEGAS_PASSWORD";
+    static final String USAGE = """
+              --workspace <folder>        the workspace on the embedded database, or
+              --server <jdbc url> --user <db user> --password <db password>   the lab server
+              --as <login>                who acts; the password is read from $TRACEGAS_PASSWORD""";
+
+    private WorkspaceLogin() {
+    }
+
+    static Session logIn(WorkspaceStore store, Options options, RunnerContext context) throws UsageException {
+        return store.users().logIn(options.text("--as"), password(context, PASSWORD_VARIABLE));
+    }
+
+    static char[] password(RunnerContext context, String variable) throws UsageException {
+        String value = context.environment(variable);
+        if (value == null || value.isEmpty()) {
+            throw new UsageException("set the password in the environment variable " + variable);
+        }
+        return value.toCharArray();
+    }
+}
