@@ -374,6 +374,35 @@ abstract class WorkspaceStoreContract {
     }
 
     @Test
+    void projectAndClientListingsShowOnlyWhatTheActorMayReadOrderedByCodeAndName() {
+        String glass = store.projects().createClient(admin, "Float glass plant");
+        ProjectInfo furnace = store.projects().createProject(admin, glass, "AB-2026-07", "Furnace flue");
+        ProjectInfo hidden = store.projects().createProject(admin, glass, "ZZ-2026-01", "Not granted to ana");
+        ProjectInfo secondCement = store.projects().createProject(analyst, project.clientId(), "CW-2025-11",
+                "Kiln stack autumn campaign");
+
+        // ana created the two CW projects and holds no grant on the glass plant's projects yet
+        assertEquals(List.of(secondCement, project), store.projects().projects(analyst));
+        assertEquals(List.of(new ClientInfo(project.clientId(), "Cement works")),
+                store.projects().clients(analyst));
+
+        store.projects().grant(admin, furnace.id(), analyst.userId(), AccessLevel.READ);
+        assertEquals(List.of("AB-2026-07", "CW-2025-11", "CW-2026-01"),
+                store.projects().projects(analyst).stream().map(ProjectInfo::code).toList());
+        assertEquals(List.of("Cement works", "Float glass plant"),
+                store.projects().clients(analyst).stream().map(ClientInfo::name).toList());
+        assertEquals(List.of(furnace, hidden), store.projects().projects(admin));
+
+        store.users().createUser(admin, "nell", "Nell Newcomer", Set.of(Role.REVIEWER), "newcomer-pass".toCharArray());
+        Session newcomer = store.users().logIn("nell", "newcomer-pass".toCharArray());
+        assertTrue(store.projects().projects(newcomer).isEmpty());
+        assertTrue(store.projects().clients(newcomer).isEmpty());
+        assertThrows(IllegalArgumentException.class, () -> store.projects().projects(null));
+        Session stranger = new Session("no-such-user", "ghost", Set.of(Role.ADMINISTRATOR));
+        assertThrows(AccessDeniedException.class, () -> store.projects().clients(stranger));
+    }
+
+    @Test
     void batchOfResultsIsRecordedWhollyOrNotAtAll() throws Exception {
         VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
         VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");

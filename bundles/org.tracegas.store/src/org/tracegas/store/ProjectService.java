@@ -53,6 +53,12 @@ public interface ProjectService {
      */
     Optional<ProjectInfo> findByCode(Session actor, String code);
 
+    /** The projects the actor has a read or write grant on, ordered by code (then id). */
+    List<ProjectInfo> projects(Session actor);
+
+    /** The clients owning at least one project the actor may read, ordered by name. */
+    List<ClientInfo> clients(Session actor);
+
     /** The measurements of a project in time order. */
     List<MeasurementInfo> measurements(Session actor, String projectId);
 }

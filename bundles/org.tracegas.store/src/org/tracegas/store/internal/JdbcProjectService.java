@@ -15,6 +15,7 @@ import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Role;
+import org.tracegas.store.ClientInfo;
 import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.ProjectInfo;
@@ -173,6 +174,32 @@ final class JdbcProjectService implements ProjectService {
             }
             return found;
         });
+    }
+
+    @Override
+    public List<ProjectInfo> projects(Session actor) {
+        return transactions.run("listing the projects of " + login(actor), tx -> {
+            Guard.roles(tx, actor);
+            return tx.queryList("SELECT p.id, p.client_id, p.code, p.name, p.row_version FROM project p"
+                    + " JOIN project_grant g ON g.project_id = p.id WHERE g.user_id = ? ORDER BY p.code, p.id",
+                    JdbcProjectService::map, actor.userId());
+        });
+    }
+
+    @Override
+    public List<ClientInfo> clients(Session actor) {
+        return transactions.run("listing the clients of " + login(actor), tx -> {
+            Guard.roles(tx, actor);
+            // a client is visible through the projects the actor may read, as project data is
+            return tx.queryList("SELECT c.id, c.name FROM client c WHERE EXISTS (SELECT 1 FROM project p"
+                    + " JOIN project_grant g ON g.project_id = p.id WHERE p.client_id = c.id AND g.user_id = ?)"
+                    + " ORDER BY c.name, c.id", rs -> new ClientInfo(rs.getString("id"), rs.getString("name")),
+                    actor.userId());
+        });
+    }
+
+    private static String login(Session actor) {
+        return actor == null ? "nobody" : actor.login();
     }
 
     @Override
