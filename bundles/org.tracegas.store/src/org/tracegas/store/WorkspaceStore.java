@@ -19,6 +19,8 @@ public interface WorkspaceStore extends AutoCloseable {
 
     ResultService results();
 
+    QaService qa();
+
     /** Releases the database (an embedded H2 database is shut down and its files unlocked). */
     @Override
     void close();

@@ -12,6 +12,7 @@ import org.tracegas.audit.AuditSchema;
 import org.tracegas.audit.AuditVerifier;
 import org.tracegas.audit.VerificationReport;
 import org.tracegas.store.ProjectService;
+import org.tracegas.store.QaService;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.SpectrumService;
 import org.tracegas.store.StoreException;
@@ -35,6 +36,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     private final SpectrumService spectra;
     private final VersionService versions;
     private final ResultService results;
+    private final QaService qa;
 
     private JdbcWorkspaceStore(DataSource dataSource, Backend backend, int maxFailedLogins) {
         this.dataSource = dataSource;
@@ -45,6 +47,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         spectra = new JdbcSpectrumService(transactions, backend);
         versions = new JdbcVersionService(transactions);
         results = new JdbcResultService(transactions);
+        qa = new JdbcQaService(transactions);
     }
 
     /** An embedded H2 database in {@code folder} (created when missing), file {@code workspace.mv.db}. */
@@ -106,6 +109,11 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     @Override
     public VersionService versions() {
         return versions;
+    }
+
+    @Override
+    public QaService qa() {
+        return qa;
     }
 
     @Override

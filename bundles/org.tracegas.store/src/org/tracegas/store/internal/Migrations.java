@@ -35,7 +35,7 @@ import org.flywaydb.core.api.resource.LoadableResource;
 final class Migrations {
 
     /** The migrations, oldest first; add new files here. */
-    static final List<String> SCRIPTS = List.of("V1__workspace_schema.sql");
+    static final List<String> SCRIPTS = List.of("V1__workspace_schema.sql", "V2__qa_checks.sql");
 
     private Migrations() {
     }

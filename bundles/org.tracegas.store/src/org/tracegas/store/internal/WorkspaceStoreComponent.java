@@ -5,6 +5,7 @@ import java.util.Map;
 
 import org.tracegas.audit.VerificationReport;
 import org.tracegas.store.ProjectService;
+import org.tracegas.store.QaService;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.SpectrumService;
 import org.tracegas.store.UserService;
@@ -65,6 +66,11 @@ public final class WorkspaceStoreComponent implements WorkspaceStore {
     @Override
     public VersionService versions() {
         return store.versions();
+    }
+
+    @Override
+    public QaService qa() {
+        return store.qa();
     }
 
     @Override

@@ -1,0 +1,74 @@
+package org.tracegas.store;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.sql.Connection;
+import java.sql.ResultSet;
+import java.sql.Statement;
+import java.util.List;
+import java.util.Set;
+
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.tracegas.model.Role;
+
+/** Storing a campaign's QA checks, on each backend. */
+abstract class QaServiceContract {
+
+    private TestBackend backend;
+    private WorkspaceStore store;
+    private Session analyst;
+    private ProjectInfo project;
+    private VersionInfo method;
+
+    abstract TestBackend newBackend() throws Exception;
+
+    @BeforeEach
+    void setUp() throws Exception {
+        backend = newBackend();
+        store = backend.open();
+        Session admin = store.users().createFirstAdministrator("admin", "Administrator", "admin-pw-12".toCharArray());
+        store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
+        analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
+        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "QA-1",
+                "QA project");
+        method = store.versions().create(analyst, VersionKind.METHOD, "m", "analyte=CO\n", "first");
+    }
+
+    @AfterEach
+    void tearDown() throws Exception {
+        try (TestBackend b = backend) {
+            store.close();
+        }
+    }
+
+    @Test
+    void checksComeBackAsStoredWithTheirAuditRecordsAndFreezeTheMethod() throws Exception {
+        List<NewQaCheck> checks = List.of(
+                new NewQaCheck("Spike recovery HCl", true, 102.3, "%", 70, 130, "70 .. 130 %", "EPA Method 320"),
+                new NewQaCheck("Noise level", false, 0.004, "absorbance", Double.NEGATIVE_INFINITY, 0.002,
+                        "RMS <= 0.002", "common practice, no source"));
+        store.qa().recordAll(analyst, project.id(), method.id(), checks);
+
+        List<QaCheckInfo> stored = store.qa().checks(analyst, project.id());
+        assertEquals(checks, stored.stream().map(QaCheckInfo::outcome).toList());
+        assertTrue(stored.stream().allMatch(c -> c.methodVersionId().equals(method.id())));
+        assertTrue(store.versions().version(method.id()).frozen());
+        try (Connection c = backend.raw(); Statement s = c.createStatement();
+                ResultSet rs = s.executeQuery("SELECT COUNT(*) FROM audit_record WHERE object_type = 'qa-check'")) {
+            rs.next();
+            assertEquals(2, rs.getLong(1));
+        }
+        assertTrue(store.verifyAuditTrail().intact());
+    }
+
+    @Test
+    void aBlankRuleIsRefusedByName() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> new NewQaCheck("Zero CO", true, 0.01, "ppm", -0.1, 0.1, " ", "x"));
+        assertTrue(e.getMessage().startsWith("rule"), e.getMessage());
+    }
+}
