@@ -10,7 +10,7 @@ package org.tracegas.store;
 public record NewQaCheck(String check, boolean passed, double measured, String unit, double lower, double upper,
         String rule, String source) {
 
-    /** @throws IllegalArgumentException naming the field that is blank or not a number */
+    /** @throws IllegalArgumentException naming the field that is blank, or limits that are not numbers */
     public NewQaCheck {
         for (String[] field : new String[][] { { "check", check }, { "unit", unit }, { "rule", rule },
                 { "source", source } }) {
@@ -18,9 +18,9 @@ public record NewQaCheck(String check, boolean passed, double measured, String u
                 throw new IllegalArgumentException(field[0] + " of a QA check must not be blank");
             }
         }
-        if (Double.isNaN(measured) || Double.isNaN(lower) || Double.isNaN(upper)) {
-            throw new IllegalArgumentException("measured value and limits of QA check " + check
-                    + " must be numbers");
+        // the measured value may be NaN: a check without a usable value is stored as failed
+        if (Double.isNaN(lower) || Double.isNaN(upper)) {
+            throw new IllegalArgumentException("limits of QA check " + check + " must be numbers");
         }
     }
 }

@@ -26,6 +26,7 @@ import org.tracegas.campaign.MinuteSeries;
 import org.tracegas.campaign.QaMeasurements;
 import org.tracegas.campaign.SpectrumChain;
 import org.tracegas.campaign.StackProcessor;
+import org.tracegas.campaign.StoredQaChecks;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ImportOptions;
 import org.tracegas.importer.container.ContainerReader;
@@ -166,9 +167,14 @@ public final class DemoCampaign {
                 log.println("The workspace already holds this method version's results: making the report again "
                         + "from the stored data.");
             }
-            QaMeasurements qa = QaMeasurements.fit(qaSpectra, quantifier);
-            List<CheckOutcome> checks = CampaignQaChecks.evaluate(qaPlan(library), qa, backgrounds,
-                    DemoScenario.DAY_START, DemoScenario.DAY_START.plus(Duration.ofDays(1)));
+            List<CheckOutcome> checks = StoredQaChecks.load(store, analyst, project.id(), methodVersion.id());
+            if (checks.isEmpty()) {
+                QaMeasurements qa = QaMeasurements.fit(qaSpectra, quantifier);
+                StoredQaChecks.store(store, analyst, project.id(), methodVersion.id(),
+                        CampaignQaChecks.evaluate(qaPlan(library), qa, backgrounds, DemoScenario.DAY_START,
+                                DemoScenario.DAY_START.plus(Duration.ofDays(1))));
+                checks = StoredQaChecks.load(store, analyst, project.id(), methodVersion.id());
+            }
             SideChannelJoin o2 = new SideChannelJoin(new SideChannelReader(ZoneOffset.UTC)
                     .read(raw.resolve(DemoCampaignFiles.SIDE_CHANNEL_FILE), ImportOptions.defaults()));
             ReportContent content = new CampaignReportBuilder(
