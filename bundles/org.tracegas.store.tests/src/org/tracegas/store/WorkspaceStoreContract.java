@@ -78,11 +78,12 @@ abstract class WorkspaceStoreContract {
 
     @Test
     void migrationFromEmptyAppliesTheSchemaOnceAndReopeningKeepsIt() throws Exception {
-        assertEquals(List.of("1"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"success\" = TRUE"
+        assertEquals(List.of("1", "2"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"success\" = TRUE"
                 + " AND \"version\" IS NOT NULL ORDER BY \"installed_rank\""));
         store.close();
         store = backend.open();
-        assertEquals(List.of("1"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"version\" IS NOT NULL"));
+        assertEquals(List.of("1", "2"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"version\" IS NOT NULL"
+                + " ORDER BY \"installed_rank\""));
         assertEquals("Kiln stack spring campaign", store.projects().project(analyst, project.id()).name());
     }
 
@@ -371,6 +372,14 @@ abstract class WorkspaceStoreContract {
         VersionInfo v2 = store.versions().revise(analyst, v1.id(), "compound=SO2\nregion=1100-1200\n", "region");
         assertEquals(v2.id(), store.versions().latest(VersionKind.METHOD, "SO2").orElseThrow().id());
         assertTrue(store.versions().latest(VersionKind.LIBRARY, "SO2").isEmpty());
+
+        VersionInfo co = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
+        VersionInfo kiln = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
+        // names in order, each with its newest version only: SO2 has versions 1 and 2
+        assertEquals(List.of(co.id(), v2.id()),
+                store.versions().latest(VersionKind.METHOD).stream().map(VersionInfo::id).toList());
+        assertEquals(List.of(kiln), store.versions().latest(VersionKind.LIBRARY));
+        assertThrows(IllegalArgumentException.class, () -> store.versions().latest(null));
     }
 
     @Test

@@ -1,5 +1,6 @@
 package org.tracegas.store;
 
+import java.util.List;
 import java.util.Optional;
 
 /**
@@ -34,4 +35,7 @@ public interface VersionService {
 
     /** The newest version of the item of a kind and name, if there is one. */
     Optional<VersionInfo> latest(VersionKind kind, String name);
+
+    /** The newest version of every method or every library, ordered by name. */
+    List<VersionInfo> latest(VersionKind kind);
 }

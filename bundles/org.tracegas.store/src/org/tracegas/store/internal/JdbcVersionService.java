@@ -6,6 +6,7 @@ import java.sql.SQLException;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.UUID;
@@ -165,5 +166,15 @@ final class JdbcVersionService implements VersionService {
         }
         return transactions.run("finding the newest version of " + name, tx -> tx.queryOne(SELECT_VERSIONS
                 + " WHERE i.kind = ? AND i.name = ? ORDER BY v.number DESC", JdbcVersionService::map, kind, name));
+    }
+
+    @Override
+    public List<VersionInfo> latest(VersionKind kind) {
+        if (kind == null) {
+            throw new IllegalArgumentException("kind must not be null");
+        }
+        return transactions.run("listing the newest versions of each " + kind, tx -> tx.queryList(SELECT_VERSIONS
+                + " WHERE i.kind = ? AND v.number = (SELECT MAX(w.number) FROM content_version w"
+                + " WHERE w.item_id = v.item_id) ORDER BY i.name, i.id", JdbcVersionService::map, kind));
     }
 }
