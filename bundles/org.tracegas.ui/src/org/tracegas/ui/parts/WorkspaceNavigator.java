@@ -30,6 +30,13 @@ public final class WorkspaceNavigator extends Composite {
     public record Group(String label, List<?> members) {
     }
 
+    /** Stands for the measurements of a project beyond the first {@link #SHOWN_MEASUREMENTS}. */
+    public record More(Project project, int hidden) {
+    }
+
+    /** Measurements listed under a project; a day of one-minute measurements would swamp the tree. */
+    public static final int SHOWN_MEASUREMENTS = 200;
+
     private static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'")
             .withZone(ZoneOffset.UTC);
 
@@ -81,6 +88,8 @@ public final class WorkspaceNavigator extends Composite {
         } else if (e instanceof Measurement m) {
             return m.getKind().getLiteral().toLowerCase().replace('_', ' ') + "  "
                     + (m.getTime() == null ? "time unknown" : TIME.format(m.getTime()));
+        } else if (e instanceof More m) {
+            return "… " + m.hidden() + " more measurements";
         } else if (e instanceof Group g) {
             return g.label();
         } else if (e instanceof ReferenceLibrary l) {
@@ -108,7 +117,7 @@ public final class WorkspaceNavigator extends Composite {
             if (e instanceof Client c) {
                 return c.getProjects().toArray();
             } else if (e instanceof Project p) {
-                return p.getMeasurements().toArray();
+                return measurements(p);
             } else if (e instanceof Group g) {
                 return g.members().toArray();
             } else if (e instanceof AnalysisMethod m) {
@@ -117,8 +126,21 @@ public final class WorkspaceNavigator extends Composite {
             return new Object[0];
         }
 
+        private static Object[] measurements(Project p) {
+            List<?> all = p.getMeasurements();
+            if (all.size() <= SHOWN_MEASUREMENTS) {
+                return all.toArray();
+            }
+            List<Object> shown = new ArrayList<>(all.subList(0, SHOWN_MEASUREMENTS));
+            shown.add(new More(p, all.size() - SHOWN_MEASUREMENTS));
+            return shown.toArray();
+        }
+
         @Override
         public Object getParent(Object e) {
+            if (e instanceof More m) {
+                return m.project();
+            }
             return e instanceof org.eclipse.emf.ecore.EObject o ? o.eContainer() : null;
         }
 

@@ -10,11 +10,11 @@ import org.eclipse.swt.widgets.Display;
 import org.eclipse.ui.part.ViewPart;
 import org.tracegas.model.Project;
 import org.tracegas.model.Workspace;
-import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.ui.jobs.AnalysisRuns;
 import org.tracegas.ui.jobs.BatchQuantificationJob;
 import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.Desk;
+import org.tracegas.ui.session.StoredWorkspace;
 
 /** The workspace tree; double-clicking a project runs its method over its measurements in the background. */
 public final class NavigatorView extends ViewPart {
@@ -32,7 +32,9 @@ public final class NavigatorView extends ViewPart {
     public void createPartControl(Composite parent) {
         navigator = new WorkspaceNavigator(parent, SWT.NONE);
         Desk desk = Desk.get();
-        Workspace model = desk.project() == null ? WorkspaceFactory.eINSTANCE.createWorkspace()
+        // a workspace that was not fresh has no demo model: read what the signed-in user may see
+        Workspace model = desk.project() == null
+                ? StoredWorkspace.load(desk.access().store(), desk.session(), desk.access().folder().toString())
                 : desk.project().model();
         navigator.setWorkspace(model);
         navigator.viewer().addDoubleClickListener(e -> {

@@ -1,0 +1,80 @@
+package org.tracegas.ui.session;
+
+import java.util.HashMap;
+import java.util.Map;
+
+import org.tracegas.model.AnalysisMethod;
+import org.tracegas.model.Client;
+import org.tracegas.model.Measurement;
+import org.tracegas.model.MethodVersion;
+import org.tracegas.model.Project;
+import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.Workspace;
+import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.store.ClientInfo;
+import org.tracegas.store.MeasurementInfo;
+import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.VersionKind;
+import org.tracegas.store.WorkspaceStore;
+
+/**
+ * The navigator's model of a workspace that already held data when it was opened: the clients, projects and
+ * measurements the signed-in user may read, and the newest version of each reference library and analysis
+ * method, as the store lists them.
+ */
+public final class StoredWorkspace {
+
+    private StoredWorkspace() {
+    }
+
+    /** Reads the clients, projects and measurements visible to {@code actor}, and the libraries and methods. */
+    public static Workspace load(WorkspaceStore store, Session actor, String name) {
+        WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
+        Workspace w = f.createWorkspace();
+        w.setName(name);
+        Map<String, Client> clients = new HashMap<>();
+        for (ClientInfo info : store.projects().clients(actor)) {
+            Client c = f.createClient();
+            c.setId(info.id());
+            c.setName(info.name());
+            clients.put(info.id(), c);
+            w.getClients().add(c);
+        }
+        for (ProjectInfo info : store.projects().projects(actor)) {
+            Project p = f.createProject();
+            p.setId(info.id());
+            p.setCode(info.code());
+            p.setName(info.name());
+            for (MeasurementInfo mi : store.projects().measurements(actor, info.id())) {
+                Measurement m = f.createMeasurement();
+                m.setId(mi.id());
+                m.setKind(mi.kind());
+                m.setTime(mi.time());
+                m.setCellTemperature(mi.cellTemperature());
+                m.setCellPressure(mi.cellPressure());
+                p.getMeasurements().add(m);
+            }
+            clients.get(info.clientId()).getProjects().add(p);
+        }
+        for (VersionInfo v : store.versions().latest(VersionKind.LIBRARY)) {
+            ReferenceLibrary l = f.createReferenceLibrary();
+            l.setId(v.itemId());
+            l.setName(v.name());
+            w.getLibraries().add(l);
+        }
+        for (VersionInfo v : store.versions().latest(VersionKind.METHOD)) {
+            AnalysisMethod m = f.createAnalysisMethod();
+            m.setId(v.itemId());
+            m.setName(v.name());
+            MethodVersion mv = f.createMethodVersion();
+            mv.setId(v.id());
+            mv.setNumber(v.number());
+            mv.setFrozen(v.frozen());
+            m.getVersions().add(mv);
+            w.getMethods().add(m);
+        }
+        return w;
+    }
+}
