@@ -36,6 +36,7 @@ import org.tracegas.importer.sidechannel.SideChannelJoin;
 import org.tracegas.importer.sidechannel.SideChannelReader;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.ReferenceSpectrum;
+import org.tracegas.model.AccessLevel;
 import org.tracegas.model.Role;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
@@ -138,9 +139,7 @@ public final class DemoCampaign {
         try (WorkspaceStore store = Workspaces.openH2(workspace.resolve("db"))) {
             Session analyst = DemoStaff.ensure(store);
             ProjectInfo project = store.projects().findByCode(analyst, DemoScenario.PROJECT_CODE)
-                    .orElseGet(() -> store.projects().createProject(analyst,
-                            store.projects().createClient(analyst, DemoScenario.CLIENT), DemoScenario.PROJECT_CODE,
-                            DemoScenario.PROJECT_NAME));
+                    .orElseGet(() -> DemoStaff.createProject(store, analyst));
             VersionInfo libraryVersion = ensureVersion(store, analyst, VersionKind.LIBRARY, library.name(),
                     "library=" + library.name() + "\ncontent-sha256=" + library.contentHash() + "\n");
             VersionInfo methodVersion = ensureVersion(store, analyst, VersionKind.METHOD, method.name(),
@@ -312,6 +311,16 @@ public final class DemoCampaign {
                         Set.of(Role.REVIEWER, Role.QUALITY_MANAGER), DEMO_PASSWORD);
             }
             return store.users().logIn(ANALYST, DEMO_PASSWORD);
+        }
+
+        /** The demo project, readable by the reviewer too, who reviews and approves its results. */
+        static ProjectInfo createProject(WorkspaceStore store, Session analyst) {
+            ProjectInfo project = store.projects().createProject(analyst,
+                    store.projects().createClient(analyst, DemoScenario.CLIENT), DemoScenario.PROJECT_CODE,
+                    DemoScenario.PROJECT_NAME);
+            Session reviewer = store.users().logIn(REVIEWER, DEMO_PASSWORD);
+            store.projects().grant(analyst, project.id(), reviewer.userId(), AccessLevel.READ);
+            return project;
         }
     }
 }
