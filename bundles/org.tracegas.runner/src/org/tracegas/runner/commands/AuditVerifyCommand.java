@@ -9,7 +9,6 @@ import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.WorkspaceStore;
-import org.tracegas.store.Workspaces;
 
 /** Verifies a workspace's audit chain and names every record that was altered, removed, inserted or reordered. */
 public final class AuditVerifyCommand implements Command {
@@ -38,7 +37,7 @@ public final class AuditVerifyCommand implements Command {
     @Override
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
         Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password"));
-        try (WorkspaceStore store = open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             VerificationReport report = store.verifyAuditTrail();
             context.out().printf("Audit trail: %d records checked, head sequence %d%n", report.recordsChecked(),
                     report.headSequence());
@@ -49,14 +48,5 @@ public final class AuditVerifyCommand implements Command {
                     + " finding(s).");
             return report.intact() ? ExitCode.OK : ExitCode.CHECK_FAILED;
         }
-    }
-
-    static WorkspaceStore open(Options options) throws UsageException {
-        if (options.has("--workspace") == options.has("--server")) {
-            throw new UsageException("give either --workspace <folder> or --server <jdbc url>");
-        }
-        return options.has("--workspace") ? Workspaces.openH2(options.path("--workspace").resolve("db"))
-                : Workspaces.openPostgres(options.text("--server"), options.text("--user"),
-                        options.text("--password"));
     }
 }

@@ -74,7 +74,7 @@ public final class ImportCommand implements Command {
         }
         Options options = Options.parse(rest, List.of("--workspace", "--server", "--user", "--password", "--as",
                 "--project"));
-        try (WorkspaceStore store = AuditVerifyCommand.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             String code = options.text("--project");
             ProjectInfo project = store.projects().findByCode(actor, code)

@@ -34,7 +34,7 @@ public final class ProjectAddCommand implements Command {
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
         Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
                 "--client", "--code", "--name"));
-        try (WorkspaceStore store = AuditVerifyCommand.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             String clientId = store.projects().createClient(actor, options.text("--client"));
             ProjectInfo project = store.projects().createProject(actor, clientId, options.text("--code"),

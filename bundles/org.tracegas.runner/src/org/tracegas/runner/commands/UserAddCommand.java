@@ -42,7 +42,7 @@ public final class UserAddCommand implements Command {
         Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
                 "--login", "--name", "--roles"));
         Set<Role> roles = roles(options.text("--roles"));
-        try (WorkspaceStore store = AuditVerifyCommand.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             UserInfo user = store.users().createUser(WorkspaceLogin.logIn(store, options, context), options.text("--login"),
                     options.text("--name"), roles, WorkspaceLogin.password(context, NEW_PASSWORD_VARIABLE));
             context.out().println("Added " + user.login() + " with roles " + user.roles());

@@ -34,7 +34,7 @@ public final class WorkspaceInitCommand implements Command {
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
         Options options = Options.parse(arguments,
                 List.of("--workspace", "--server", "--user", "--password", "--admin", "--name"));
-        try (WorkspaceStore store = AuditVerifyCommand.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session admin = store.users().createFirstAdministrator(options.text("--admin"), options.text("--name"),
                     WorkspaceLogin.password(context, WorkspaceLogin.PASSWORD_VARIABLE));
             context.out().println("Workspace ready; administrator " + admin.login() + " (" + admin.userId() + ")");

@@ -4,6 +4,7 @@ import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
+import org.tracegas.store.Workspaces;
 
 /**
  * How a command opens a workspace and logs in: {@code --workspace <folder>} (embedded H2) or
@@ -20,6 +21,16 @@ final class WorkspaceLogin {
               --as <login>                who acts; the password is read from $TRACEGAS_PASSWORD""";
 
     private WorkspaceLogin() {
+    }
+
+    /** The workspace the options name: an embedded folder or the lab server. */
+    static WorkspaceStore open(Options options) throws UsageException {
+        if (options.has("--workspace") == options.has("--server")) {
+            throw new UsageException("give either --workspace <folder> or --server <jdbc url>");
+        }
+        return options.has("--workspace") ? Workspaces.openH2(options.path("--workspace").resolve("db"))
+                : Workspaces.openPostgres(options.text("--server"), options.text("--user"),
+                        options.text("--password"));
     }
 
     static Session logIn(WorkspaceStore store, Options options, RunnerContext context) throws UsageException {
