@@ -22,8 +22,15 @@ public final class DeskPreferences {
 
     public static void setDefaults(IPreferenceStore store) {
         store.setDefault(BACKGROUND_AGE_MINUTES, DEFAULT_BACKGROUND_AGE_MINUTES);
-        store.setDefault(WORKSPACE_FOLDER, Path.of(System.getProperty("user.home"), "tracegas-workspace").toString());
+        store.setDefault(WORKSPACE_FOLDER, defaultWorkspaceFolder().toString());
         store.setDefault(SERVER_URL, "");
+    }
+
+    /** $TRACEGAS_WORKSPACE when set (the start script passes it on), else tracegas-workspace in the home folder. */
+    static Path defaultWorkspaceFolder() {
+        String fromEnvironment = System.getenv("TRACEGAS_WORKSPACE");
+        return fromEnvironment != null && !fromEnvironment.isBlank() ? Path.of(fromEnvironment).toAbsolutePath()
+                : Path.of(System.getProperty("user.home"), "tracegas-workspace");
     }
 
     public static Duration backgroundAgeLimit(IPreferenceStore store) {

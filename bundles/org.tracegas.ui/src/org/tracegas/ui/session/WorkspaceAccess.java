@@ -26,15 +26,17 @@ public final class WorkspaceAccess implements AutoCloseable {
     }
 
     /**
-     * Opens (or creates) the embedded workspace in {@code folder}.
+     * Opens (or creates) the embedded workspace in {@code folder}; its database lives in {@code folder/db}, as
+     * for the headless runner, so both open the same workspace folder.
      *
      * @throws org.tracegas.store.StoreException if the database cannot be opened
      */
     public static WorkspaceAccess openH2(Path folder) {
-        WorkspaceStore store = Workspaces.openH2(folder);
+        Path database = folder.resolve("db");
+        WorkspaceStore store = Workspaces.openH2(database);
         JdbcDataSource ds = new JdbcDataSource();
         // same URL and settings as the store uses, so this joins the database the store keeps open in this JVM
-        ds.setURL("jdbc:h2:file:" + folder.toAbsolutePath().resolve("workspace")
+        ds.setURL("jdbc:h2:file:" + database.toAbsolutePath().resolve("workspace")
                 + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000");
         return new WorkspaceAccess(folder, store, ds);
     }
