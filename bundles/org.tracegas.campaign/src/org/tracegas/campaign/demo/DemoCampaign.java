@@ -1,7 +1,6 @@
 package org.tracegas.campaign.demo;
 
 import java.io.IOException;
-import java.io.OutputStream;
 import java.io.PrintStream;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
@@ -187,8 +186,8 @@ public final class DemoCampaign {
             Files.createDirectories(reportFolder);
             Path pdf = reportFolder.resolve("tarnbeck-line2-report.pdf");
             Path csv = reportFolder.resolve("tarnbeck-line2-results.csv");
-            writeAtomically(pdf, out -> new PdfReportWriter().write(content, out));
-            writeAtomically(csv, out -> {
+            WholeFile.write(pdf, out -> new PdfReportWriter().write(content, out));
+            WholeFile.write(csv, out -> {
                 Writer w = new java.io.OutputStreamWriter(out, StandardCharsets.UTF_8);
                 CsvExport.write(content.results(), w);
                 w.flush();
@@ -280,20 +279,6 @@ public final class DemoCampaign {
             return new SpectrumFit("CO region at " + record.header().time() + " (morning upset)", x, measured,
                     fitted);
         }
-    }
-
-    private interface Body {
-        void write(OutputStream out) throws IOException;
-    }
-
-    /** Writes a file whole or not at all: to a temporary sibling first, then moved into place. */
-    private static void writeAtomically(Path target, Body body) throws IOException {
-        Path partial = target.resolveSibling(target.getFileName() + ".part");
-        try (OutputStream out = Files.newOutputStream(partial)) {
-            body.write(out);
-        }
-        Files.move(partial, target, java.nio.file.StandardCopyOption.REPLACE_EXISTING,
-                java.nio.file.StandardCopyOption.ATOMIC_MOVE);
     }
 
     /** The demo's users: created on the first run, logged in on later runs. */

@@ -1,11 +1,11 @@
 package org.tracegas.campaign.demo;
 
 import java.io.IOException;
+import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
@@ -144,8 +144,8 @@ public final class DemoCampaignFiles {
     }
 
     private static void writeSideChannel(Path file) throws IOException {
-        Path partial = file.resolveSibling(file.getFileName() + ".part");
-        try (Writer out = Files.newBufferedWriter(partial, StandardCharsets.UTF_8)) {
+        WholeFile.write(file, stream -> {
+            Writer out = new OutputStreamWriter(stream, StandardCharsets.UTF_8);
             out.write("time,O2,T_stack,p_stack\n");
             out.write("UTC,%vol,degC,kPa\n");
             for (int minute = 0; minute < DemoScenario.SAMPLES; minute++) {
@@ -153,7 +153,7 @@ public final class DemoCampaignFiles {
                         DayOfStackGas.oxygenPercent(minute), 142.0 + 6.0 * Math.sin(minute / 200.0),
                         99.8 + 0.2 * Math.sin(minute / 300.0)));
             }
-        }
-        Files.move(partial, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+            out.flush();
+        });
     }
 }

@@ -1,6 +1,7 @@
 package org.tracegas.campaign.demo;
 
 import java.io.IOException;
+import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -29,8 +30,8 @@ final class InventedLineLists {
     static Path write(Gas gas, Path folder) throws IOException {
         Files.createDirectories(folder);
         Path file = folder.resolve(gas.name().toLowerCase(Locale.ROOT) + "-invented.par");
-        Path partial = folder.resolve(file.getFileName() + ".part");
-        try (Writer out = Files.newBufferedWriter(partial, StandardCharsets.US_ASCII)) {
+        WholeFile.write(file, stream -> {
+            Writer out = new OutputStreamWriter(stream, StandardCharsets.US_ASCII);
             for (Gas.Band band : gas.bands()) {
                 if (band.rotational() > 0) {
                     writeBranches(out, gas, band);
@@ -38,9 +39,8 @@ final class InventedLineLists {
                     writeScatter(out, gas, band);
                 }
             }
-        }
-        Files.move(partial, file, java.nio.file.StandardCopyOption.REPLACE_EXISTING,
-                java.nio.file.StandardCopyOption.ATOMIC_MOVE);
+            out.flush();
+        });
         return file;
     }
 
