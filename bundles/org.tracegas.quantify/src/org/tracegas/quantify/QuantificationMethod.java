@@ -59,6 +59,16 @@ public final class QuantificationMethod {
         this.contentHash = Sha256.hex(canonicalText.getBytes(StandardCharsets.UTF_8));
     }
 
+    /**
+     * The method a {@link #canonicalText()} describes, exactly: its canonical text and hash are those of the
+     * method that wrote the text.
+     *
+     * @throws IllegalArgumentException whose message names the line and the field at fault
+     */
+    public static QuantificationMethod parse(String canonicalText) {
+        return CanonicalMethodText.read(canonicalText);
+    }
+
     public static Builder builder(String name) {
         return new Builder(name);
     }
