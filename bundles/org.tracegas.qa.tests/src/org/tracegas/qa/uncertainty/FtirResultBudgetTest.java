@@ -32,4 +32,51 @@ class FtirResultBudgetTest {
                 5e-4 * numeric.combinedStandardUncertainty());
         assertEquals(2 * analytic.combinedStandardUncertainty(), analytic.expandedUncertainty(), 0);
     }
+
+    @Test
+    void basisBudgetWorkedByHand() {
+        // worked by hand: C = 50 ppm wet, h = 0.15 ± 0.005, O2 = 8.0 ± 0.2 % dry, reference 11 %.
+        // F = 1/0.85 · 10/13 = 0.9049774, E = 45.248869 ppm;
+        // c_h = E/(1 − h) = 53.233963 ppm per mol/mol, c_h·u = 0.2661698 ppm;
+        // c_O2 = E/(21 − 8) = 3.4806822 ppm per % vol, c_O2·u = 0.6961364 ppm
+        UncertaintyBudget b = new FtirResultBudget(0.02, 5.0, 0.05, 1.5, 0.3).budgetOnBasis("CO", 50, 1.0, 453.15,
+                101.3, new BasisConversion(0.15, 0.005, 8.0, 0.2, false, 11));
+        assertEquals(45.248869, b.value(), 1e-6);
+        assertEquals(7, b.components().size());
+        UncertaintyComponent h2o = b.components().get(5);
+        UncertaintyComponent o2 = b.components().get(6);
+        assertEquals(FtirResultBudget.H2O_ROW, h2o.name());
+        assertEquals(53.233963, h2o.sensitivity(), 1e-6);
+        assertEquals(0.2661698, h2o.contribution(), 1e-7);
+        assertEquals(FtirResultBudget.O2_ROW, o2.name());
+        assertEquals(3.4806822, o2.sensitivity(), 1e-7);
+        assertEquals(0.6961364, o2.contribution(), 1e-7);
+        // fit row: c = F, so c·u = 0.9049774 ppm
+        assertEquals(0.9049774, b.components().get(0).contribution(), 1e-7);
+    }
+
+    @Test
+    void basisBudgetSensitivitiesMatchNumericDerivativesOfTheWholeModel() {
+        double lNom = 5.0;
+        double tNom = 453.15;
+        double pNom = 101.325;
+        // E = C_fit · s_ref · (L_nom/L) · (T/T_nom) · (p_nom/p) · (21 − 11) / (21 (1 − h) − O2_wet)
+        MeasurementModel model = x -> x[0] * x[1] * (lNom / x[2]) * (x[3] / tNom) * (pNom / x[4]) * 10.0
+                / (21 * (1 - x[5]) - x[6]);
+        double[] est = {25.0, 1.0, 5.12, 458.0, 99.8, 0.16, 7.4};
+        double[] u = {0.4, 0.02, 0.05, 1.5, 0.3, 0.004, 0.15};
+        UncertaintyBudget numeric = GumPropagation.budget("HCl", "ppm", model, new String[] {"fit", "ref", "L", "T",
+                "p", "h", "O2"}, est, u, new String[] {"ppm", "1", "m", "K", "kPa", "mol/mol", "% vol"});
+        double c = model.value(new double[] {25.0, 1.0, 5.12, 458.0, 99.8, 0, 10.0}) * 11.0 / 10.0;
+        // c: the concentration at actual conditions before the conversion (the factor at h = 0, O2 = 10 is 10/11)
+        UncertaintyBudget analytic = new FtirResultBudget(0.02, 5.12, 0.05, 1.5, 0.3).budgetOnBasis("HCl", c,
+                0.4 * c / 25.0, 458.0, 99.8, new BasisConversion(0.16, 0.004, 7.4, 0.15, true, 11));
+        assertEquals(numeric.value(), analytic.value(), 1e-9 * numeric.value());
+        for (int i = 0; i < 7; i++) {
+            double expected = numeric.components().get(i).contribution();
+            // difference quotient over ± u departs from the derivative by about (u/x)²
+            assertEquals(expected, analytic.components().get(i).contribution(), 5e-4 * Math.abs(expected),
+                    "component " + i);
+        }
+    }
 }

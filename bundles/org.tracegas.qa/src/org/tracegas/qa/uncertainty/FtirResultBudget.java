@@ -1,5 +1,6 @@
 package org.tracegas.qa.uncertainty;
 
+import java.util.ArrayList;
 import java.util.List;
 
 import org.tracegas.qa.internal.Require;
@@ -7,9 +8,15 @@ import org.tracegas.qa.internal.Require;
 /**
  * Budget of one FTIR concentration C = C_fit · s_ref · (L_nom/L) · (T/T_nom) · (p_nom/p): the fitted value
  * at nominal path, temperature and pressure, corrected for the actual ones; s_ref = 1 is the scale of the
- * reference spectrum. Inputs: fit, reference spectrum, path length, temperature, pressure.
+ * reference spectrum. Inputs: fit, reference spectrum, path length, temperature, pressure; on the reporting
+ * basis also the H2O and O2 of the conversion.
  */
 public final class FtirResultBudget {
+
+    /** Name of the budget row of the water vapour used for the wet-to-dry conversion. */
+    public static final String H2O_ROW = "H2O for wet-to-dry";
+    /** Name of the budget row of the side-channel O2 used for the reference-oxygen correction. */
+    public static final String O2_ROW = "O2 for reference-O2 correction";
 
     private final double relativeReferenceUncertainty;
     private final double pathM;
@@ -56,5 +63,33 @@ public final class FtirResultBudget {
                         "K"),
                 new UncertaintyComponent("cell pressure", pressureKPa, pressureUncertaintyKPa, -c / pressureKPa,
                         "kPa")));
+    }
+
+    /**
+     * Budget of the value on the reporting basis E = C · F (dry gas, reference O2; still a volume fraction in
+     * ppm, since the conversion to mg/m³ at standard conditions is an exact factor): the five inputs of
+     * {@link #budget} with their sensitivities times F, then the H2O of the wet-to-dry conversion and, with an
+     * oxygen correction, the O2 of the side channel, each with the sensitivity c_i = ∂E/∂x_i (JCGM 100:2008
+     * 5.1.3) of {@link BasisConversion}.
+     */
+    public UncertaintyBudget budgetOnBasis(String compound, double concentration, double fitUncertainty,
+            double temperatureK, double pressureKPa, BasisConversion conversion) {
+        Require.notNull("conversion", conversion);
+        double f = conversion.factor();
+        double e = concentration * f;
+        List<UncertaintyComponent> components = new ArrayList<>();
+        for (UncertaintyComponent c : budget(compound, concentration, fitUncertainty, temperatureK, pressureKPa)
+                .components()) {
+            components.add(new UncertaintyComponent(c.name(), c.estimate(), c.standardUncertainty(),
+                    c.sensitivity() * f, c.unit()));
+        }
+        components.add(new UncertaintyComponent(H2O_ROW, conversion.h2oFraction(), conversion.h2oUncertainty(),
+                e * conversion.relativeH2oSensitivity(), "mol/mol"));
+        if (conversion.hasOxygenCorrection()) {
+            components.add(new UncertaintyComponent(conversion.o2OnWetGas() ? O2_ROW + " (wet gas)" : O2_ROW,
+                    conversion.o2Percent(), conversion.o2Uncertainty(), e * conversion.relativeO2Sensitivity(),
+                    "% vol"));
+        }
+        return UncertaintyBudget.of(compound, e, "ppm (basis)", components);
     }
 }
