@@ -21,6 +21,9 @@ public interface WorkspaceStore extends AutoCloseable {
 
     QaService qa();
 
+    /** Review and approval signatures of reports, by content hash. */
+    ReviewService reviews();
+
     /** Releases the database (an embedded H2 database is shut down and its files unlocked). */
     @Override
     void close();

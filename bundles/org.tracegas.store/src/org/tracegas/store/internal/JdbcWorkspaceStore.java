@@ -117,6 +117,9 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     }
 
     @Override
+    public org.tracegas.store.ReviewService reviews() { return new JdbcReviewService(new Transactions(dataSource), users); }
+
+    @Override
     public ResultService results() {
         return results;
     }

@@ -74,6 +74,9 @@ public final class WorkspaceStoreComponent implements WorkspaceStore {
     }
 
     @Override
+    public org.tracegas.store.ReviewService reviews() { return store.reviews(); }
+
+    @Override
     public ResultService results() {
         return store.results();
     }
