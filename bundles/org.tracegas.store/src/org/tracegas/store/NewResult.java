@@ -32,6 +32,12 @@ public record NewResult(String measurementId, String compound, double concentrat
         flags = Set.copyOf(flags);
     }
 
+    /** This result for another measurement. */
+    public NewResult withMeasurement(String id) {
+        return new NewResult(id, compound, concentration, uncertainty, detectionLimit, unit, flags, methodVersionId,
+                libraryVersionId, softwareVersion, inputHash);
+    }
+
     private static void requireText(String field, String value) {
         if (value == null || value.isBlank()) {
             throw new IllegalArgumentException(field + " must not be blank");

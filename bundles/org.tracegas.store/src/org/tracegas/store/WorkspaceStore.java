@@ -24,6 +24,12 @@ public interface WorkspaceStore extends AutoCloseable {
     /** Review and approval signatures of reports, by content hash. */
     ReviewService reviews();
 
+    /** Blocks of processed spectra, each block in one transaction. */
+    BlockService blocks();
+
+    /** Batches shared by several runner processes, unit by unit. */
+    WorkUnitService workUnits();
+
     /** Releases the database (an embedded H2 database is shut down and its files unlocked). */
     @Override
     void close();

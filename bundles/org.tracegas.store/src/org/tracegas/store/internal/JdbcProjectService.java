@@ -133,19 +133,27 @@ final class JdbcProjectService implements ProjectService {
         return transactions.run("recording a measurement in project " + projectId, tx -> {
             Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
             String id = UUID.randomUUID().toString();
-            tx.update("INSERT INTO measurement (id, project_id, kind, measured_at, cell_temperature, cell_pressure,"
-                    + " operator_id, row_version) VALUES (?, ?, ?, ?, ?, ?, ?, 0)", id, projectId, kind, time,
-                    cellTemperature, cellPressure, actor.userId());
-            Map<String, Object> fields = new LinkedHashMap<>();
-            fields.put("project", projectId);
-            fields.put("kind", kind.getName());
-            fields.put("time", time);
-            fields.put("cellTemperature", cellTemperature);
-            fields.put("cellPressure", cellPressure);
+            tx.update(INSERT_MEASUREMENT, id, projectId, kind, time, cellTemperature, cellPressure, actor.userId());
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement", id)
-                    .newValue(AuditValues.canonical(fields)).build());
+                    .newValue(AuditValues.canonical(measurementValues(projectId, kind, time, cellTemperature,
+                            cellPressure))).build());
             return id;
         });
+    }
+
+    static final String INSERT_MEASUREMENT = "INSERT INTO measurement (id, project_id, kind, measured_at,"
+            + " cell_temperature, cell_pressure, operator_id, row_version) VALUES (?, ?, ?, ?, ?, ?, ?, 0)";
+
+    /** The fields of a new measurement's audit record. */
+    static Map<String, Object> measurementValues(String projectId, MeasurementKind kind, Instant time,
+            double cellTemperature, double cellPressure) {
+        Map<String, Object> fields = new LinkedHashMap<>();
+        fields.put("project", projectId);
+        fields.put("kind", kind.getName());
+        fields.put("time", time);
+        fields.put("cellTemperature", cellTemperature);
+        fields.put("cellPressure", cellPressure);
+        return fields;
     }
 
     private static ProjectInfo load(Tx tx, String projectId) throws SQLException {

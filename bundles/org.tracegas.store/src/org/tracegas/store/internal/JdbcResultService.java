@@ -1,5 +1,6 @@
 package org.tracegas.store.internal;
 
+import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.time.Instant;
@@ -61,37 +62,62 @@ final class JdbcResultService implements ResultService {
         });
     }
 
+    /** Columns of table analysis_result, in the order {@link #bindInsert} binds them. */
+    static final String INSERT = "INSERT INTO analysis_result (id, project_id, measurement_id, compound, concentration,"
+            + " uncertainty, detection_limit, unit, flags, method_version_id, library_version_id,"
+            + " software_version, input_hash, recorded_by, recorded_at, row_version)"
+            + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 0)";
+
     /** @param checked versions and measurements already checked and frozen in this transaction */
     private static ResultInfo insert(Tx tx, Session actor, String projectId, NewResult result,
             Set<String> checked) throws SQLException {
-        if (checked.add("method:" + result.methodVersionId())) {
-            requireKind(JdbcVersionService.load(tx, result.methodVersionId()), VersionKind.METHOD, "methodVersionId");
-            JdbcVersionService.freeze(tx, result.methodVersionId());
-        }
-        if (checked.add("library:" + result.libraryVersionId())) {
-            requireKind(JdbcVersionService.load(tx, result.libraryVersionId()), VersionKind.LIBRARY,
-                    "libraryVersionId");
-            JdbcVersionService.freeze(tx, result.libraryVersionId());
-        }
+        requireVersions(tx, result, checked, "");
         if (result.measurementId() != null && checked.add("measurement:" + result.measurementId())
                 && tx.queryOne("SELECT 1 FROM measurement WHERE id = ? AND project_id = ?", rs -> 1,
                         result.measurementId(), projectId).isEmpty()) {
             throw new IllegalArgumentException("measurementId " + result.measurementId()
                     + " is not a measurement of project " + projectId);
         }
-        ResultInfo stored = new ResultInfo(UUID.randomUUID().toString(), projectId, result, actor.userId(),
-                Instant.now().truncatedTo(ChronoUnit.MICROS));
-        tx.update("INSERT INTO analysis_result (id, project_id, measurement_id, compound, concentration,"
-                + " uncertainty, detection_limit, unit, flags, method_version_id, library_version_id,"
-                + " software_version, input_hash, recorded_by, recorded_at, row_version)"
-                + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 0)", stored.id(), projectId,
-                result.measurementId(), result.compound(), result.concentration(), result.uncertainty(),
-                result.detectionLimit(), result.unit(), formatFlags(result), result.methodVersionId(),
-                result.libraryVersionId(), result.softwareVersion(), result.inputHash(), actor.userId(),
-                stored.recorded());
+        ResultInfo stored = newInfo(actor, projectId, result, Instant.now().truncatedTo(ChronoUnit.MICROS));
+        try (PreparedStatement ps = tx.connection().prepareStatement(INSERT)) {
+            bindInsert(ps, stored);
+            ps.executeUpdate();
+        }
         tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "result", stored.id())
                 .newValue(values(stored)).build());
         return stored;
+    }
+
+    static ResultInfo newInfo(Session actor, String projectId, NewResult result, Instant recorded) {
+        return new ResultInfo(UUID.randomUUID().toString(), projectId, result, actor.userId(), recorded);
+    }
+
+    static void bindInsert(PreparedStatement ps, ResultInfo stored) throws SQLException {
+        NewResult result = stored.values();
+        Tx.bind(ps, stored.id(), stored.projectId(), result.measurementId(), result.compound(),
+                result.concentration(), result.uncertainty(), result.detectionLimit(), result.unit(),
+                formatFlags(result), result.methodVersionId(), result.libraryVersionId(), result.softwareVersion(),
+                result.inputHash(), stored.recordedBy(), stored.recorded());
+    }
+
+    /**
+     * Checks that the result's method and library versions are of their kinds and freezes them, once per
+     * transaction.
+     *
+     * @param checked versions already checked and frozen in this transaction
+     * @param where   prefix of the field names in error messages, e.g. {@code "block[3].results[0]."}
+     */
+    static void requireVersions(Tx tx, NewResult result, Set<String> checked, String where) throws SQLException {
+        if (checked.add("method:" + result.methodVersionId())) {
+            requireKind(JdbcVersionService.load(tx, result.methodVersionId()), VersionKind.METHOD,
+                    where + "methodVersionId");
+            JdbcVersionService.freeze(tx, result.methodVersionId());
+        }
+        if (checked.add("library:" + result.libraryVersionId())) {
+            requireKind(JdbcVersionService.load(tx, result.libraryVersionId()), VersionKind.LIBRARY,
+                    where + "libraryVersionId");
+            JdbcVersionService.freeze(tx, result.libraryVersionId());
+        }
     }
 
     @Override
@@ -110,7 +136,7 @@ final class JdbcResultService implements ResultService {
         }
     }
 
-    private static String formatFlags(NewResult r) {
+    static String formatFlags(NewResult r) {
         return r.flags().isEmpty() ? ""
                 : EnumSet.copyOf(r.flags()).stream().map(ResultFlag::getName).collect(Collectors.joining(","));
     }
@@ -130,7 +156,13 @@ final class JdbcResultService implements ResultService {
                 Tx.instant(rs, "recorded_at"));
     }
 
-    private static String values(ResultInfo r) {
+    /** The canonical values of a result's audit record. */
+    static String values(ResultInfo r) {
+        return AuditValues.canonical(fields(r));
+    }
+
+    /** The fields of a result's audit record, without its id. */
+    static Map<String, Object> fields(ResultInfo r) {
         NewResult v = r.values();
         Map<String, Object> fields = new LinkedHashMap<>();
         fields.put("project", r.projectId());
@@ -145,6 +177,6 @@ final class JdbcResultService implements ResultService {
         fields.put("libraryVersion", v.libraryVersionId());
         fields.put("softwareVersion", v.softwareVersion());
         fields.put("inputHash", v.inputHash());
-        return AuditValues.canonical(fields);
+        return fields;
     }
 }

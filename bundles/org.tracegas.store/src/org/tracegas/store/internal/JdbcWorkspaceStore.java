@@ -11,6 +11,7 @@ import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.audit.AuditSchema;
 import org.tracegas.audit.AuditVerifier;
 import org.tracegas.audit.VerificationReport;
+import org.tracegas.store.BlockService;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.QaService;
 import org.tracegas.store.ResultService;
@@ -18,6 +19,7 @@ import org.tracegas.store.SpectrumService;
 import org.tracegas.store.StoreException;
 import org.tracegas.store.UserService;
 import org.tracegas.store.VersionService;
+import org.tracegas.store.WorkUnitService;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -37,6 +39,8 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     private final VersionService versions;
     private final ResultService results;
     private final QaService qa;
+    private final BlockService blocks;
+    private final WorkUnitService workUnits;
 
     private JdbcWorkspaceStore(DataSource dataSource, Backend backend, int maxFailedLogins) {
         this.dataSource = dataSource;
@@ -48,6 +52,8 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         versions = new JdbcVersionService(transactions);
         results = new JdbcResultService(transactions);
         qa = new JdbcQaService(transactions);
+        blocks = new JdbcBlockService(transactions);
+        workUnits = new JdbcWorkUnitService(transactions, backend);
     }
 
     /** An embedded H2 database in {@code folder} (created when missing), file {@code workspace.mv.db}. */
@@ -114,6 +120,16 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     @Override
     public QaService qa() {
         return qa;
+    }
+
+    @Override
+    public BlockService blocks() {
+        return blocks;
+    }
+
+    @Override
+    public WorkUnitService workUnits() {
+        return workUnits;
     }
 
     @Override

@@ -35,7 +35,8 @@ import org.flywaydb.core.api.resource.LoadableResource;
 final class Migrations {
 
     /** The migrations, oldest first; add new files here. */
-    static final List<String> SCRIPTS = List.of("V1__workspace_schema.sql", "V2__qa_checks.sql");
+    static final List<String> SCRIPTS = List.of("V1__workspace_schema.sql", "V2__qa_checks.sql",
+            "V3__work_units.sql");
 
     private Migrations() {
     }

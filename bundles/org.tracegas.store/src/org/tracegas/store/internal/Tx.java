@@ -41,6 +41,11 @@ final class Tx {
         AuditTrail.append(connection, entry);
     }
 
+    /** As {@link #audit}, for several records in order, with one lock of the chain head and one batched insert. */
+    void auditAll(List<AuditEntry> entries) throws SQLException {
+        AuditTrail.appendAll(connection, entries);
+    }
+
     int update(String sql, Object... params) throws SQLException {
         try (PreparedStatement ps = prepare(sql, params)) {
             return ps.executeUpdate();

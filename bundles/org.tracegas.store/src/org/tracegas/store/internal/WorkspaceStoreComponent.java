@@ -4,12 +4,14 @@ import java.nio.file.Path;
 import java.util.Map;
 
 import org.tracegas.audit.VerificationReport;
+import org.tracegas.store.BlockService;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.QaService;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.SpectrumService;
 import org.tracegas.store.UserService;
 import org.tracegas.store.VersionService;
+import org.tracegas.store.WorkUnitService;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -79,6 +81,16 @@ public final class WorkspaceStoreComponent implements WorkspaceStore {
     @Override
     public ResultService results() {
         return store.results();
+    }
+
+    @Override
+    public BlockService blocks() {
+        return store.blocks();
+    }
+
+    @Override
+    public WorkUnitService workUnits() {
+        return store.workUnits();
     }
 
     @Override

@@ -1,0 +1,172 @@
+package org.tracegas.store;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.util.ArrayList;
+import java.util.HexFormat;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.stream.Collectors;
+
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.tracegas.audit.AuditValues;
+import org.tracegas.model.ResultFlag;
+
+/** Blocks of processed spectra, each in one transaction, on each backend. */
+abstract class BlockServiceContract {
+
+    private static final String COUNT_ROWS = "SELECT (SELECT COUNT(*) FROM measurement) + (SELECT COUNT(*) FROM"
+            + " spectral_data) + (SELECT COUNT(*) FROM analysis_result) + (SELECT COUNT(*) FROM audit_record)";
+
+    private AnalysisFixture f;
+
+    abstract TestBackend newBackend() throws Exception;
+
+    @BeforeEach
+    void setUp() throws Exception {
+        f = new AnalysisFixture(newBackend());
+    }
+
+    @AfterEach
+    void tearDown() throws Exception {
+        f.close();
+    }
+
+    @Test
+    void blockStoresEachMeasurementWithItsSpectrumAndResultsUnderOneAuditRecord() throws Exception {
+        List<ProcessedSpectrum> block = new ArrayList<>(SampleBlocks.block(0, 3, 4, f.method.id(), f.library.id()));
+        block.add(SampleBlocks.processed(3, 0, f.method.id(), f.library.id())); // nothing fitted: no results
+        long auditBefore = f.count("SELECT COUNT(*) FROM audit_record");
+
+        List<StoredMeasurement> stored = f.store.blocks().store(f.analyst, f.project.id(), block);
+
+        assertEquals(4, stored.size());
+        assertEquals(List.of(4, 4, 4, 0), stored.stream().map(s -> s.resultIds().size()).toList());
+        assertEquals(4, f.count("SELECT COUNT(*) FROM audit_record") - auditBefore, "one audit record per measurement");
+        List<MeasurementInfo> measurements = f.store.projects().measurements(f.analyst, f.project.id());
+        assertEquals(stored.stream().map(StoredMeasurement::measurementId).toList(),
+                measurements.stream().map(MeasurementInfo::id).toList());
+        List<ResultInfo> results = f.store.results().results(f.analyst, f.project.id());
+        assertEquals(12, results.size());
+        for (int i = 0; i < block.size(); i++) {
+            ProcessedSpectrum in = block.get(i);
+            StoredMeasurement out = stored.get(i);
+            assertEquals(in.time(), measurements.get(i).time());
+            assertEquals(f.analyst.userId(), measurements.get(i).operatorId());
+            StoredSpectrum spectrum = f.store.spectra().load(f.analyst, out.spectrumId());
+            assertEquals(out.measurementId(), spectrum.measurementId());
+            assertArrayEquals(in.absorbance().toArray(), spectrum.spectrum().toArray(), 0.0);
+            List<ResultInfo> own = results.stream().filter(r -> r.values().measurementId().equals(out.measurementId()))
+                    .sorted((a, b) -> out.resultIds().indexOf(a.id()) - out.resultIds().indexOf(b.id())).toList();
+            assertEquals(out.resultIds(), own.stream().map(ResultInfo::id).toList());
+            assertEquals(in.results().stream().map(r -> r.withMeasurement(out.measurementId())).toList(),
+                    own.stream().map(ResultInfo::values).toList());
+
+            Map<String, String> audit = auditValues(out.measurementId());
+            assertEquals(spectrum.sha256(), audit.get("spectrumSha256"));
+            assertEquals(out.spectrumId(), audit.get("spectrum"));
+            assertEquals(String.join(",", out.resultIds()), audit.get("resultIds"));
+            assertEquals(Integer.toString(own.size()), audit.get("results"));
+            assertEquals(resultsSha256(own), audit.get("resultsSha256"), "recomputed from the stored results");
+        }
+        assertTrue(f.store.versions().version(f.method.id()).frozen());
+        assertTrue(f.store.versions().version(f.library.id()).frozen());
+        assertTrue(f.store.verifyAuditTrail().intact());
+    }
+
+    @Test
+    void wrongVersionKindDeepInTheBlockNamesItsIndexAndWritesNothing() throws Exception {
+        List<ProcessedSpectrum> block = new ArrayList<>(SampleBlocks.block(0, 2, 2, f.method.id(), f.library.id()));
+        // the library version given as the method version of the third spectrum's first result
+        block.add(SampleBlocks.processed(2, 2, f.library.id(), f.library.id()));
+        long before = f.count(COUNT_ROWS);
+
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> f.store.blocks().store(f.analyst, f.project.id(), block));
+
+        assertTrue(e.getMessage().startsWith("block[2].results[0].methodVersionId"), e.getMessage());
+        assertEquals(before, f.count(COUNT_ROWS), "nothing half written");
+    }
+
+    @Test
+    void badEntriesAreNamedByIndexAndField() {
+        List<ProcessedSpectrum> withNull = new ArrayList<>(SampleBlocks.block(0, 1, 1, f.method.id(), f.library.id()));
+        withNull.add(null);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> f.store.blocks().store(f.analyst, f.project.id(), withNull));
+        assertEquals("block[1] is null", e.getMessage());
+
+        ProcessedSpectrum good = SampleBlocks.processed(0, 2, f.method.id(), f.library.id());
+        List<NewResult> namedMeasurement = List.of(good.results().get(0), good.results().get(1).withMeasurement("m-1"));
+        e = assertThrows(IllegalArgumentException.class, () -> new ProcessedSpectrum(good.kind(), good.time(),
+                good.cellTemperature(), good.cellPressure(), good.absorbance(), good.encoding(), namedMeasurement));
+        assertTrue(e.getMessage().startsWith("results[1].measurementId must be null"), e.getMessage());
+
+        e = assertThrows(IllegalArgumentException.class, () -> new ProcessedSpectrum(good.kind(), good.time(), 0.0,
+                good.cellPressure(), good.absorbance(), good.encoding(), good.results()));
+        assertTrue(e.getMessage().startsWith("cellTemperature"), e.getMessage());
+        assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(f.analyst, f.project.id(), List.of()));
+    }
+
+    @Test
+    void readerMayNotStoreABlock() throws Exception {
+        long before = f.count(COUNT_ROWS);
+        assertThrows(AccessDeniedException.class, () -> f.store.blocks().store(f.reader, f.project.id(),
+                SampleBlocks.block(0, 2, 1, f.method.id(), f.library.id())));
+        assertEquals(before, f.count(COUNT_ROWS));
+    }
+
+    /** The formula documented on BlockService, written out independently of the store's code. */
+    private static String resultsSha256(List<ResultInfo> results) throws Exception {
+        StringBuilder text = new StringBuilder();
+        for (ResultInfo r : results) {
+            NewResult v = r.values();
+            Map<String, Object> fields = new LinkedHashMap<>();
+            fields.put("id", r.id());
+            fields.put("project", r.projectId());
+            fields.put("measurement", v.measurementId());
+            fields.put("compound", v.compound());
+            fields.put("concentration", v.concentration());
+            fields.put("uncertainty", v.uncertainty());
+            fields.put("detectionLimit", v.detectionLimit());
+            fields.put("unit", v.unit());
+            fields.put("flags", v.flags().stream().sorted().map(ResultFlag::getName).collect(Collectors.joining(",")));
+            fields.put("methodVersion", v.methodVersionId());
+            fields.put("libraryVersion", v.libraryVersionId());
+            fields.put("softwareVersion", v.softwareVersion());
+            fields.put("inputHash", v.inputHash());
+            text.append(AuditValues.canonical(fields));
+        }
+        return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256")
+                .digest(text.toString().getBytes(StandardCharsets.UTF_8)));
+    }
+
+    /** The key=value lines of the audit record that created a measurement. */
+    private Map<String, String> auditValues(String measurementId) throws Exception {
+        try (Connection c = f.backend.raw(); PreparedStatement ps = c.prepareStatement("SELECT new_value FROM"
+                + " audit_record WHERE object_type = 'measurement' AND object_id = ?")) {
+            ps.setString(1, measurementId);
+            try (ResultSet rs = ps.executeQuery()) {
+                assertTrue(rs.next(), "audit record of measurement " + measurementId);
+                Map<String, String> values = new LinkedHashMap<>();
+                for (String line : rs.getString(1).split("\n")) {
+                    int eq = line.indexOf('=');
+                    values.put(line.substring(0, eq), line.substring(eq + 1));
+                }
+                assertTrue(!rs.next(), "a single audit record per measurement");
+                return values;
+            }
+        }
+    }
+}

@@ -1,0 +1,180 @@
+package org.tracegas.store;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Optional;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.stream.IntStream;
+
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+
+/** Work units claimed, renewed, released and completed by several runners, on each backend. */
+abstract class WorkUnitServiceContract {
+
+    private static final Duration LONG = Duration.ofMinutes(10);
+    private static final Duration SHORT = Duration.ofMillis(300);
+
+    private AnalysisFixture f;
+    private WorkUnitService units;
+
+    abstract TestBackend newBackend() throws Exception;
+
+    @BeforeEach
+    void setUp() throws Exception {
+        f = new AnalysisFixture(newBackend());
+        units = f.store.workUnits();
+    }
+
+    @AfterEach
+    void tearDown() throws Exception {
+        f.close();
+    }
+
+    private WorkBatchInfo batch(int count) {
+        return units.createBatch(f.analyst, f.project.id(), "hour files of 17 March",
+                IntStream.range(0, count).mapToObj(i -> "/data/stack/hour-" + i + ".tgc").toList());
+    }
+
+    private List<ProcessedSpectrum> blockOf(int unit) {
+        return SampleBlocks.block(10 * unit, 3, 2, f.method.id(), f.library.id());
+    }
+
+    @Test
+    void unitsAreClaimedInOrderAndCompletedWithTheirBlock() throws Exception {
+        WorkBatchInfo batch = batch(3);
+        assertEquals(new BatchProgress(3, 0, 0), units.progress(f.analyst, batch.id()));
+
+        WorkUnitLease a = units.claim(f.analyst, batch.id(), "runner-a", LONG).orElseThrow();
+        WorkUnitLease b = units.claim(f.analyst, batch.id(), "runner-b", LONG).orElseThrow();
+        WorkUnitLease c = units.claim(f.analyst, batch.id(), "runner-a", LONG).orElseThrow();
+        assertEquals(List.of(0, 1, 2), List.of(a.seq(), b.seq(), c.seq()));
+        assertEquals("/data/stack/hour-1.tgc", b.payload());
+        assertEquals(1, b.attempt());
+        assertEquals(Optional.empty(), units.claim(f.analyst, batch.id(), "runner-c", LONG), "all units held");
+        assertEquals(new BatchProgress(0, 3, 0), units.progress(f.analyst, batch.id()));
+
+        List<StoredMeasurement> stored = units.complete(f.analyst, b, blockOf(1));
+
+        assertEquals(new BatchProgress(0, 2, 1), units.progress(f.reader, batch.id()));
+        assertEquals(stored.stream().map(StoredMeasurement::measurementId).toList(),
+                units.measurementsOf(f.analyst, batch.id(), 1));
+        assertEquals(6, f.store.results().results(f.analyst, f.project.id()).size());
+        units.complete(f.analyst, a, List.of()); // a unit may produce nothing
+        units.complete(f.analyst, c, blockOf(2));
+        assertTrue(units.progress(f.analyst, batch.id()).finished());
+        assertEquals(Optional.empty(), units.claim(f.analyst, batch.id(), "runner-c", LONG));
+        assertEquals(0, f.count("SELECT COUNT(*) FROM work_unit WHERE done_at IS NULL"));
+        assertTrue(f.store.verifyAuditTrail().intact());
+    }
+
+    @Test
+    void expiredLeaseIsClaimedAgainAndTheStaleCompletionIsRefused() throws Exception {
+        WorkBatchInfo batch = batch(2);
+        WorkUnitLease stale = units.claim(f.analyst, batch.id(), "runner-a", SHORT).orElseThrow();
+        Thread.sleep(3 * SHORT.toMillis());
+
+        WorkUnitLease taken = units.claim(f.analyst, batch.id(), "runner-b", LONG).orElseThrow();
+        assertEquals(stale.seq(), taken.seq(), "the expired unit comes first again");
+        assertEquals(2, taken.attempt());
+        long rows = f.count("SELECT COUNT(*) FROM measurement");
+
+        LeaseLostException lost = assertThrows(LeaseLostException.class,
+                () -> units.complete(f.analyst, stale, blockOf(0)));
+        assertTrue(lost.getMessage().contains("runner-b") && lost.getMessage().contains(stale.unitName()),
+                lost.getMessage());
+        assertThrows(LeaseLostException.class, () -> units.renew(f.analyst, stale, LONG));
+        assertThrows(LeaseLostException.class, () -> units.release(f.analyst, stale));
+        assertEquals(rows, f.count("SELECT COUNT(*) FROM measurement"), "the refused completion wrote nothing");
+
+        units.complete(f.analyst, taken, blockOf(0));
+        assertEquals(3, units.measurementsOf(f.analyst, batch.id(), taken.seq()).size());
+        assertThrows(LeaseLostException.class, () -> units.complete(f.analyst, taken, blockOf(0)),
+                "a done unit is not completed twice");
+        assertEquals(3, f.count("SELECT COUNT(*) FROM measurement"));
+        assertTrue(f.store.verifyAuditTrail().intact());
+    }
+
+    @Test
+    void expiredLeaseNobodyTookStillCompletes() throws Exception {
+        WorkBatchInfo batch = batch(1);
+        WorkUnitLease late = units.claim(f.analyst, batch.id(), "runner-a", SHORT).orElseThrow();
+        Thread.sleep(3 * SHORT.toMillis());
+        units.complete(f.analyst, late, blockOf(0));
+        assertEquals(new BatchProgress(0, 0, 1), units.progress(f.analyst, batch.id()));
+    }
+
+    @Test
+    void renewedLeaseKeepsTheUnitAndReleasedUnitIsClaimableAtOnce() throws Exception {
+        WorkBatchInfo batch = batch(2);
+        WorkUnitLease a = units.claim(f.analyst, batch.id(), "runner-a", SHORT).orElseThrow();
+        WorkUnitLease renewed = units.renew(f.analyst, a, LONG);
+        assertTrue(renewed.leaseUntil().isAfter(a.leaseUntil()));
+        Thread.sleep(3 * SHORT.toMillis());
+        assertEquals(1, units.claim(f.analyst, batch.id(), "runner-b", LONG).orElseThrow().seq(),
+                "the renewed unit 0 is not taken");
+
+        units.release(f.analyst, renewed);
+        WorkUnitLease again = units.claim(f.analyst, batch.id(), "runner-b", LONG).orElseThrow();
+        assertEquals(0, again.seq());
+        assertEquals(2, again.attempt());
+        assertThrows(LeaseLostException.class, () -> units.complete(f.analyst, renewed, blockOf(0)));
+    }
+
+    @Test
+    void concurrentRunnersNeverClaimTheSameUnit() throws Exception {
+        int count = 60;
+        WorkBatchInfo batch = batch(count);
+        List<Integer> claimed = Collections.synchronizedList(new ArrayList<>());
+        ExecutorService pool = Executors.newFixedThreadPool(6);
+        try {
+            List<Future<?>> runners = new ArrayList<>();
+            for (int r = 0; r < 6; r++) {
+                String runner = "runner-" + r;
+                runners.add(pool.submit(() -> {
+                    Optional<WorkUnitLease> lease;
+                    while ((lease = units.claim(f.analyst, batch.id(), runner, LONG)).isPresent()) {
+                        claimed.add(lease.get().seq());
+                        units.complete(f.analyst, lease.get(), List.of());
+                    }
+                    return null;
+                }));
+            }
+            for (Future<?> r : runners) {
+                r.get();
+            }
+        } finally {
+            pool.shutdownNow();
+        }
+        assertEquals(IntStream.range(0, count).boxed().toList(), claimed.stream().sorted().toList());
+        assertEquals(new BatchProgress(0, 0, count), units.progress(f.analyst, batch.id()));
+        assertEquals(count, f.count("SELECT COUNT(*) FROM work_unit WHERE attempt = 1"));
+        assertTrue(f.store.verifyAuditTrail().intact());
+    }
+
+    @Test
+    void wrongArgumentsAndMissingRightsAreRefused() {
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> units.createBatch(f.analyst, f.project.id(), "x", List.of("/a", " ", "/c")));
+        assertTrue(e.getMessage().startsWith("payloads[1]"), e.getMessage());
+        WorkBatchInfo batch = batch(1);
+        assertThrows(AccessDeniedException.class, () -> units.claim(f.reader, batch.id(), "runner-r", LONG));
+        assertThrows(AccessDeniedException.class,
+                () -> units.createBatch(f.reader, f.project.id(), "x", List.of("/a")));
+        e = assertThrows(IllegalArgumentException.class,
+                () -> units.claim(f.analyst, batch.id(), "runner-a", Duration.ZERO));
+        assertTrue(e.getMessage().startsWith("lease"), e.getMessage());
+        assertThrows(NoSuchObjectException.class, () -> units.progress(f.analyst, "no-such-batch"));
+        assertFalse(units.progress(f.reader, batch.id()).finished());
+    }
+}

@@ -1,0 +1,60 @@
+package org.tracegas.store;
+
+import java.time.Instant;
+import java.util.List;
+
+import org.tracegas.model.MeasurementKind;
+import org.tracegas.spectrum.Spectrum;
+
+/**
+ * One processed spectrum of a block: the measurement it came from, its absorbance spectrum and the
+ * results fitted from it. The store assigns the measurement's id, so the results carry none.
+ *
+ * @param kind            what was measured
+ * @param time            when it was measured
+ * @param cellTemperature K, positive
+ * @param cellPressure    hPa, positive
+ * @param absorbance      the absorbance spectrum, stored as {@link org.tracegas.model.SpectralContent#ABSORBANCE}
+ * @param encoding        how its values are stored
+ * @param results         its results, each with a null {@link NewResult#measurementId()}; may be empty
+ */
+public record ProcessedSpectrum(MeasurementKind kind, Instant time, double cellTemperature, double cellPressure,
+        Spectrum absorbance, SampleEncoding encoding, List<NewResult> results) {
+
+    /** @throws IllegalArgumentException naming the field (and result index) that is missing or wrong */
+    public ProcessedSpectrum {
+        if (kind == null) {
+            throw new IllegalArgumentException("kind must not be null");
+        }
+        if (time == null) {
+            throw new IllegalArgumentException("time must not be null");
+        }
+        if (!(cellTemperature > 0)) {
+            throw new IllegalArgumentException("cellTemperature must be a positive number of K, was "
+                    + cellTemperature);
+        }
+        if (!(cellPressure > 0)) {
+            throw new IllegalArgumentException("cellPressure must be a positive number of hPa, was " + cellPressure);
+        }
+        if (absorbance == null) {
+            throw new IllegalArgumentException("absorbance must not be null");
+        }
+        if (encoding == null) {
+            throw new IllegalArgumentException("encoding must not be null");
+        }
+        if (results == null) {
+            throw new IllegalArgumentException("results must not be null (an empty list when nothing was fitted)");
+        }
+        for (int i = 0; i < results.size(); i++) {
+            NewResult r = results.get(i);
+            if (r == null) {
+                throw new IllegalArgumentException("results[" + i + "] is null");
+            }
+            if (r.measurementId() != null) {
+                throw new IllegalArgumentException("results[" + i + "].measurementId must be null: the store assigns"
+                        + " the measurement of a processed spectrum, was " + r.measurementId());
+            }
+        }
+        results = List.copyOf(results);
+    }
+}

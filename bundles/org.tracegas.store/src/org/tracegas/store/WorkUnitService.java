@@ -1,0 +1,78 @@
+package org.tracegas.store;
+
+import java.time.Duration;
+import java.util.List;
+import java.util.Optional;
+
+/**
+ * Batches of work shared by several runner processes on one database. A batch is split into units (e.g. one
+ * container file each); a runner claims the next unit under a lease, renews the lease while it works and
+ * completes the unit together with the block of results it produced, in one transaction. So a unit is either
+ * done with all its results or not done with none of them, and a runner that lost its lease (it stalled
+ * past the lease and another runner claimed the unit) cannot complete it: no unit is stored twice and none
+ * is lost. A unit whose lease expired can be claimed again. Lease times are database time, so the runners'
+ * clocks do not matter.
+ * <p>
+ * Claiming takes the first claimable unit in unit order without waiting for units other runners are
+ * claiming at the same moment (PostgreSQL: {@code SELECT ... FOR UPDATE SKIP LOCKED}; H2: the same clause on
+ * one candidate row at a time, because H2 applies a row limit before skipping locked rows). In both the
+ * update that claims checks the attempt it read, so two runners can never hold the same claim.
+ * <p>
+ * Every change (batch creation, claim, renewal, release, completion) writes an audit record in its own
+ * transaction. All operations need write access to the batch's project, {@link #progress} read access.
+ */
+public interface WorkUnitService {
+
+    /** Longest description and payload, in characters. */
+    int MAX_TEXT_LENGTH = 4000;
+
+    /**
+     * Creates a batch with one unit per payload, numbered from 0 in the given order.
+     *
+     * @param payloads what each unit processes (e.g. file paths), at least one, none blank
+     * @throws IllegalArgumentException naming the blank or too long {@code payloads[i]} or description
+     */
+    WorkBatchInfo createBatch(Session actor, String projectId, String description, List<String> payloads);
+
+    /**
+     * Claims the next open unit of the batch, or one whose lease has expired, for {@code lease} from now.
+     *
+     * @param runnerId names the runner process (e.g. host and process id), not blank
+     * @return the claim, or empty when no unit is claimable now (all done or held under a valid lease)
+     */
+    Optional<WorkUnitLease> claim(Session actor, String batchId, String runnerId, Duration lease);
+
+    /**
+     * Extends a claim to {@code lease} from now.
+     *
+     * @return the renewed lease
+     * @throws LeaseLostException if the claim is no longer the runner's
+     */
+    WorkUnitLease renew(Session actor, WorkUnitLease lease, Duration extension);
+
+    /**
+     * Gives a claimed unit back unprocessed (e.g. the runner was told to stop), so that another runner may
+     * claim it at once instead of after the lease.
+     *
+     * @throws LeaseLostException if the claim is no longer the runner's
+     */
+    void release(Session actor, WorkUnitLease lease);
+
+    /**
+     * Stores the unit's block of processed spectra as {@link BlockService#store} does and marks the unit
+     * done, in one transaction. A lease that expired is still accepted as long as no other runner has
+     * claimed the unit since.
+     *
+     * @param block the unit's processed spectra, may be empty
+     * @return what was stored, as {@link BlockService#store}
+     * @throws LeaseLostException       if the unit was claimed again by another runner, released or is done
+     * @throws IllegalArgumentException naming the index of a wrong block entry
+     */
+    List<StoredMeasurement> complete(Session actor, WorkUnitLease lease, List<ProcessedSpectrum> block);
+
+    /** Counts of the batch's units by state. */
+    BatchProgress progress(Session actor, String batchId);
+
+    /** The measurements stored by completing a unit, in storage order. */
+    List<String> measurementsOf(Session actor, String batchId, int seq);
+}

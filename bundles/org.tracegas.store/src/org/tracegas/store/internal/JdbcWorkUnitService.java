@@ -1,0 +1,316 @@
+package org.tracegas.store.internal;
+
+import java.nio.charset.StandardCharsets;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.Duration;
+import java.time.Instant;
+import java.time.OffsetDateTime;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.UUID;
+
+import org.tracegas.audit.AuditAction;
+import org.tracegas.audit.AuditEntry;
+import org.tracegas.audit.AuditValues;
+import org.tracegas.model.AccessLevel;
+import org.tracegas.store.BatchProgress;
+import org.tracegas.store.LeaseLostException;
+import org.tracegas.store.NoSuchObjectException;
+import org.tracegas.store.ProcessedSpectrum;
+import org.tracegas.store.Session;
+import org.tracegas.store.StoredMeasurement;
+import org.tracegas.store.WorkBatchInfo;
+import org.tracegas.store.WorkUnitLease;
+import org.tracegas.store.WorkUnitService;
+
+final class JdbcWorkUnitService implements WorkUnitService {
+
+    private static final String UNIT_COLUMNS = "seq, payload, state, claimed_by, lease_until, attempt";
+    private static final String CLAIMABLE = "batch_id = ? AND (state = 'OPEN' OR (state = 'CLAIMED' AND lease_until < ?))";
+
+    /** A unit row as read under its lock. */
+    private record Unit(int seq, String payload, String state, String claimedBy, Instant leaseUntil, int attempt) {
+
+        static Unit read(ResultSet rs) throws SQLException {
+            return new Unit(rs.getInt("seq"), rs.getString("payload"), rs.getString("state"),
+                    rs.getString("claimed_by"), Tx.instant(rs, "lease_until"), rs.getInt("attempt"));
+        }
+
+        Map<String, Object> fields() {
+            Map<String, Object> fields = new LinkedHashMap<>();
+            fields.put("state", state);
+            fields.put("claimedBy", claimedBy);
+            fields.put("leaseUntil", leaseUntil);
+            fields.put("attempt", attempt);
+            return fields;
+        }
+    }
+
+    private final Transactions transactions;
+    private final Backend backend;
+
+    JdbcWorkUnitService(Transactions transactions, Backend backend) {
+        this.transactions = transactions;
+        this.backend = backend;
+    }
+
+    @Override
+    public WorkBatchInfo createBatch(Session actor, String projectId, String description, List<String> payloads) {
+        if (description == null || description.length() > MAX_TEXT_LENGTH) {
+            throw new IllegalArgumentException("description must be given and at most " + MAX_TEXT_LENGTH
+                    + " characters long");
+        }
+        if (payloads == null || payloads.isEmpty()) {
+            throw new IllegalArgumentException("payloads must hold at least one unit's payload");
+        }
+        for (int i = 0; i < payloads.size(); i++) {
+            String p = payloads.get(i);
+            if (p == null || p.isBlank() || p.length() > MAX_TEXT_LENGTH) {
+                throw new IllegalArgumentException("payloads[" + i + "] must be non-blank text of at most "
+                        + MAX_TEXT_LENGTH + " characters");
+            }
+        }
+        return transactions.run("creating a batch of " + payloads.size() + " work units in project " + projectId,
+                tx -> {
+                    Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
+                    WorkBatchInfo batch = new WorkBatchInfo(UUID.randomUUID().toString(), projectId, description,
+                            payloads.size(), actor.userId(), Instant.now().truncatedTo(ChronoUnit.MICROS));
+                    tx.update("INSERT INTO work_batch (id, project_id, description, unit_count, created_by,"
+                            + " created_at) VALUES (?, ?, ?, ?, ?, ?)", batch.id(), projectId, description,
+                            batch.unitCount(), actor.userId(), batch.createdAt());
+                    try (PreparedStatement ps = tx.connection().prepareStatement("INSERT INTO work_unit (batch_id,"
+                            + " seq, payload, state, attempt) VALUES (?, ?, ?, 'OPEN', 0)")) {
+                        for (int i = 0; i < payloads.size(); i++) {
+                            Tx.bind(ps, batch.id(), i, payloads.get(i));
+                            ps.addBatch();
+                        }
+                        ps.executeBatch();
+                    }
+                    Map<String, Object> fields = new LinkedHashMap<>();
+                    fields.put("project", projectId);
+                    fields.put("description", description);
+                    fields.put("units", payloads.size());
+                    // SHA-256 of the payloads in unit order, each followed by a line feed
+                    fields.put("payloadsSha256", SpectrumCodec.sha256Hex((String.join("\n", payloads) + "\n")
+                            .getBytes(StandardCharsets.UTF_8)));
+                    tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "work-batch", batch.id())
+                            .newValue(AuditValues.canonical(fields)).build());
+                    return batch;
+                });
+    }
+
+    @Override
+    public Optional<WorkUnitLease> claim(Session actor, String batchId, String runnerId, Duration lease) {
+        requireRunner(runnerId);
+        requireLease("lease", lease);
+        return transactions.run("claiming a unit of work batch " + batchId, tx -> {
+            requireBatchAccess(tx, actor, batchId, AccessLevel.WRITE);
+            Instant now = databaseTime(tx);
+            Optional<Unit> found = lockClaimable(tx, batchId, now);
+            if (found.isEmpty()) {
+                return Optional.<WorkUnitLease>empty();
+            }
+            Unit before = found.get();
+            WorkUnitLease claimed = new WorkUnitLease(batchId, before.seq(), before.payload(), runnerId,
+                    before.attempt() + 1, now.plus(lease));
+            tx.update("UPDATE work_unit SET state = 'CLAIMED', claimed_by = ?, lease_until = ?, attempt = ?"
+                    + " WHERE batch_id = ? AND seq = ?", runnerId, claimed.leaseUntil(), claimed.attempt(),
+                    batchId, before.seq());
+            Map<String, Object> after = new LinkedHashMap<>();
+            after.put("state", "CLAIMED");
+            after.put("claimedBy", runnerId);
+            after.put("leaseUntil", claimed.leaseUntil());
+            after.put("attempt", claimed.attempt());
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "work-unit", claimed.unitName())
+                    .version(claimed.attempt()).oldValue(AuditValues.canonical(before.fields()))
+                    .newValue(AuditValues.canonical(after)).build());
+            return Optional.of(claimed);
+        });
+    }
+
+    /** The first claimable unit in unit order that no other transaction holds, locked until commit. */
+    private Optional<Unit> lockClaimable(Tx tx, String batchId, Instant now) throws SQLException {
+        if (backend.skipLockedWithLimit()) {
+            return tx.queryOne("SELECT " + UNIT_COLUMNS + " FROM work_unit WHERE " + CLAIMABLE
+                    + " ORDER BY seq LIMIT 1 FOR UPDATE SKIP LOCKED", Unit::read, batchId, now);
+        }
+        List<Integer> candidates = tx.queryList("SELECT seq FROM work_unit WHERE " + CLAIMABLE + " ORDER BY seq",
+                rs -> rs.getInt(1), batchId, now);
+        for (int seq : candidates) {
+            // the condition is evaluated again on the locked row: another claim may have committed meanwhile
+            Optional<Unit> locked = tx.queryOne("SELECT " + UNIT_COLUMNS + " FROM work_unit WHERE " + CLAIMABLE
+                    + " AND seq = ? FOR UPDATE SKIP LOCKED", Unit::read, batchId, now, seq);
+            if (locked.isPresent()) {
+                return locked;
+            }
+        }
+        return Optional.empty();
+    }
+
+    @Override
+    public WorkUnitLease renew(Session actor, WorkUnitLease lease, Duration extension) {
+        requireLease("extension", extension);
+        return transactions.run("renewing the lease of work unit " + name(lease), tx -> {
+            requireBatchAccess(tx, actor, lease.batchId(), AccessLevel.WRITE);
+            Unit before = lockOwn(tx, lease, "renew");
+            WorkUnitLease renewed = new WorkUnitLease(lease.batchId(), lease.seq(), lease.payload(),
+                    lease.runnerId(), lease.attempt(), databaseTime(tx).plus(extension));
+            tx.update("UPDATE work_unit SET lease_until = ? WHERE batch_id = ? AND seq = ?", renewed.leaseUntil(),
+                    lease.batchId(), lease.seq());
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "work-unit", lease.unitName())
+                    .version(lease.attempt())
+                    .oldValue(AuditValues.canonical(Map.of("leaseUntil", before.leaseUntil())))
+                    .newValue(AuditValues.canonical(Map.of("leaseUntil", renewed.leaseUntil()))).build());
+            return renewed;
+        });
+    }
+
+    @Override
+    public void release(Session actor, WorkUnitLease lease) {
+        transactions.run("releasing work unit " + name(lease), tx -> {
+            requireBatchAccess(tx, actor, lease.batchId(), AccessLevel.WRITE);
+            Unit before = lockOwn(tx, lease, "release");
+            tx.update("UPDATE work_unit SET state = 'OPEN', claimed_by = NULL, lease_until = NULL"
+                    + " WHERE batch_id = ? AND seq = ?", lease.batchId(), lease.seq());
+            Map<String, Object> after = new LinkedHashMap<>();
+            after.put("state", "OPEN");
+            after.put("claimedBy", null);
+            after.put("leaseUntil", null);
+            after.put("attempt", before.attempt());
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "work-unit", lease.unitName())
+                    .version(lease.attempt()).oldValue(AuditValues.canonical(before.fields()))
+                    .newValue(AuditValues.canonical(after)).build());
+            return null;
+        });
+    }
+
+    @Override
+    public List<StoredMeasurement> complete(Session actor, WorkUnitLease lease, List<ProcessedSpectrum> block) {
+        JdbcBlockService.requireEntries(block);
+        return transactions.run("completing work unit " + name(lease) + " with " + block.size()
+                + " processed spectra", tx -> {
+                    String projectId = requireBatchAccess(tx, actor, lease.batchId(), AccessLevel.WRITE);
+                    Unit before = lockOwn(tx, lease, "complete");
+                    JdbcBlockService.Written written = block.isEmpty()
+                            ? new JdbcBlockService.Written(List.of(), List.of(), 0)
+                            : JdbcBlockService.insert(tx, actor, projectId, block);
+                    List<String> measurementIds = written.stored().stream().map(StoredMeasurement::measurementId)
+                            .toList();
+                    try (PreparedStatement ps = tx.connection().prepareStatement("INSERT INTO work_unit_measurement"
+                            + " (measurement_id, batch_id, seq) VALUES (?, ?, ?)")) {
+                        for (String id : measurementIds) {
+                            Tx.bind(ps, id, lease.batchId(), lease.seq());
+                            ps.addBatch();
+                        }
+                        if (!measurementIds.isEmpty()) {
+                            ps.executeBatch();
+                        }
+                    }
+                    Instant done = databaseTime(tx);
+                    tx.update("UPDATE work_unit SET state = 'DONE', lease_until = NULL, done_at = ?"
+                            + " WHERE batch_id = ? AND seq = ?", done, lease.batchId(), lease.seq());
+                    Map<String, Object> after = new LinkedHashMap<>();
+                    after.put("state", "DONE");
+                    after.put("claimedBy", lease.runnerId());
+                    after.put("attempt", lease.attempt());
+                    after.put("doneAt", done);
+                    after.put("measurements", measurementIds.size());
+                    after.put("measurementIds", String.join(",", measurementIds));
+                    after.put("results", written.resultCount());
+                    List<AuditEntry> audit = new ArrayList<>(written.audit());
+                    audit.add(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "work-unit", lease.unitName())
+                            .version(lease.attempt()).oldValue(AuditValues.canonical(before.fields()))
+                            .newValue(AuditValues.canonical(after)).build());
+                    tx.auditAll(audit);
+                    return written.stored();
+                });
+    }
+
+    /**
+     * Locks the unit and checks that the lease's claim is still the current one.
+     *
+     * @throws LeaseLostException naming who holds the unit now
+     */
+    private static Unit lockOwn(Tx tx, WorkUnitLease lease, String action) throws SQLException {
+        Unit unit = tx.queryOne("SELECT " + UNIT_COLUMNS + " FROM work_unit WHERE batch_id = ? AND seq = ?"
+                + " FOR UPDATE", Unit::read, lease.batchId(), lease.seq())
+                .orElseThrow(() -> new NoSuchObjectException("work unit", lease.unitName()));
+        if (!"CLAIMED".equals(unit.state()) || unit.attempt() != lease.attempt()
+                || !lease.runnerId().equals(unit.claimedBy())) {
+            throw new LeaseLostException("runner " + lease.runnerId() + " may not " + action + " work unit "
+                    + lease.unitName() + ": its claim (attempt " + lease.attempt() + ") is no longer current; the"
+                    + " unit is " + unit.state() + (unit.claimedBy() == null ? "" : " by " + unit.claimedBy())
+                    + " at attempt " + unit.attempt() + "; nothing was written");
+        }
+        return unit;
+    }
+
+    @Override
+    public BatchProgress progress(Session actor, String batchId) {
+        return transactions.run("reading the progress of work batch " + batchId, tx -> {
+            requireBatchAccess(tx, actor, batchId, AccessLevel.READ);
+            int[] counts = new int[3];
+            for (Object[] row : tx.queryList("SELECT state, COUNT(*) FROM work_unit WHERE batch_id = ?"
+                    + " GROUP BY state", rs -> new Object[] {rs.getString(1), rs.getInt(2)}, batchId)) {
+                int index = switch ((String) row[0]) {
+                    case "OPEN" -> 0;
+                    case "CLAIMED" -> 1;
+                    default -> 2;
+                };
+                counts[index] = (Integer) row[1];
+            }
+            return new BatchProgress(counts[0], counts[1], counts[2]);
+        });
+    }
+
+    @Override
+    public List<String> measurementsOf(Session actor, String batchId, int seq) {
+        return transactions.run("reading the measurements of work unit " + batchId + "/" + seq, tx -> {
+            requireBatchAccess(tx, actor, batchId, AccessLevel.READ);
+            return tx.queryList("SELECT m.id FROM work_unit_measurement w JOIN measurement m ON m.id ="
+                    + " w.measurement_id WHERE w.batch_id = ? AND w.seq = ? ORDER BY m.measured_at, m.id",
+                    rs -> rs.getString(1), batchId, seq);
+        });
+    }
+
+    /** @return the batch's project */
+    private static String requireBatchAccess(Tx tx, Session actor, String batchId, AccessLevel needed)
+            throws SQLException {
+        String projectId = tx.queryOne("SELECT project_id FROM work_batch WHERE id = ?", rs -> rs.getString(1),
+                batchId).orElseThrow(() -> new NoSuchObjectException("work batch", batchId));
+        Guard.requireProject(tx, actor, projectId, needed);
+        return projectId;
+    }
+
+    /** The database's time, so that the runners' clocks do not matter. */
+    private static Instant databaseTime(Tx tx) throws SQLException {
+        return tx.queryOne("SELECT CURRENT_TIMESTAMP", rs -> rs.getObject(1, OffsetDateTime.class).toInstant())
+                .orElseThrow().truncatedTo(ChronoUnit.MICROS);
+    }
+
+    private static String name(WorkUnitLease lease) {
+        if (lease == null) {
+            throw new IllegalArgumentException("lease must not be null");
+        }
+        return lease.unitName();
+    }
+
+    private static void requireRunner(String runnerId) {
+        if (runnerId == null || runnerId.isBlank() || runnerId.length() > 200) {
+            throw new IllegalArgumentException("runnerId must be non-blank text of at most 200 characters, was "
+                    + runnerId);
+        }
+    }
+
+    private static void requireLease(String field, Duration lease) {
+        if (lease == null || lease.isNegative() || lease.isZero()) {
+            throw new IllegalArgumentException(field + " must be a positive duration, was " + lease);
+        }
+    }
+}
