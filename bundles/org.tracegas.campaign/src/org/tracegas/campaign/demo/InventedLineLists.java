@@ -1,5 +1,6 @@
 package org.tracegas.campaign.demo;
 
+import org.tracegas.campaign.WholeFile;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
 import java.io.Writer;

@@ -1,4 +1,4 @@
-package org.tracegas.campaign.demo;
+package org.tracegas.campaign;
 
 import java.io.IOException;
 import java.io.OutputStream;
@@ -7,17 +7,17 @@ import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
 
 /** Writes a file whole or not at all: to a temporary sibling first, then moved into place. */
-final class WholeFile {
+public final class WholeFile {
 
     /** What goes into the file. */
-    interface Body {
+    public interface Body {
         void write(OutputStream out) throws IOException;
     }
 
     private WholeFile() {
     }
 
-    static void write(Path target, Body body) throws IOException {
+    public static void write(Path target, Body body) throws IOException {
         Path partial = target.resolveSibling(target.getFileName() + ".part");
         try (OutputStream out = Files.newOutputStream(partial)) {
             body.write(out);

@@ -1,0 +1,140 @@
+package org.tracegas.campaign;
+
+import java.io.IOException;
+import java.io.OutputStreamWriter;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.stream.Stream;
+
+import org.tracegas.importer.ImportException;
+import org.tracegas.importer.ImportOptions;
+import org.tracegas.importer.sidechannel.SideChannelJoin;
+import org.tracegas.importer.sidechannel.SideChannelReader;
+import org.tracegas.library.io.FileFormatException;
+import org.tracegas.model.SpectralContent;
+import org.tracegas.qa.checks.CheckOutcome;
+import org.tracegas.quantify.FitSpectra;
+import org.tracegas.quantify.Sample;
+import org.tracegas.report.CsvExport;
+import org.tracegas.report.LibraryVersion;
+import org.tracegas.report.MethodVersion;
+import org.tracegas.report.PdfReportWriter;
+import org.tracegas.report.ReportContent;
+import org.tracegas.report.SpectrumFit;
+import org.tracegas.spectrum.Spectrum;
+import org.tracegas.store.MeasurementInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.StoredSpectrum;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.WorkspaceStore;
+
+/**
+ * The report of a campaign made from stored data only: the results and QA checks a method version made, the
+ * O2 side channel, and for the spectrum plot a stored absorbance spectrum fitted again with the stored method.
+ */
+public final class CampaignReport {
+
+    private final WorkspaceStore store;
+    private final Session actor;
+    private final String projectId;
+    private final String software;
+
+    public CampaignReport(WorkspaceStore store, Session actor, String projectId, String software) {
+        this.store = store;
+        this.actor = actor;
+        this.projectId = projectId;
+        this.software = software;
+    }
+
+    /**
+     * @throws IllegalStateException if the method version has no stored results or QA checks in the project
+     * @throws FileFormatException   if the plan's example fit names no stored sample
+     * @throws ImportException       if the O2 file cannot be read
+     */
+    public ReportContent content(VersionInfo methodVersion, StoredMethod method, ReportPlan plan)
+            throws IOException, ImportException {
+        List<MeasurementInfo> measurements = store.projects().measurements(actor, projectId);
+        MinuteSeries series = MinuteSeries.of(measurements, store.results().results(actor, projectId),
+                methodVersion.id());
+        if (series.isEmpty()) {
+            throw new IllegalStateException("the project holds no results of method version " + methodVersion.id()
+                    + "; quantify first");
+        }
+        List<CheckOutcome> checks = StoredQaChecks.load(store, actor, projectId, methodVersion.id());
+        if (checks.isEmpty()) {
+            throw new IllegalStateException("the project holds no QA checks of method version "
+                    + methodVersion.id() + "; run the QA checks first");
+        }
+        SideChannelJoin o2 = new SideChannelJoin(new SideChannelReader(ZoneOffset.UTC).read(plan.o2File(),
+                ImportOptions.defaults()));
+        VersionInfo library = store.versions().version(method.libraryVersionId());
+        return new CampaignReportBuilder(plan.basis(), plan.budget(method.method().pathLengthMetres()),
+                plan.cellTemperatureK(), plan.cellPressureKPa())
+                .build(plan.campaign(), new MethodVersion(method.method().name(), "v" + methodVersion.number(),
+                        methodVersion.contentHash()),
+                        new LibraryVersion(library.name(), "v" + library.number() + ", content "
+                                + method.libraryContentHash().substring(0, 16)),
+                        checks, series, plan.reported(), plan.water(), t -> oxygen(o2, plan.o2Channel(), t),
+                        plan.periods(), exampleFit(measurements, method, plan));
+    }
+
+    /** Writes the PDF and the CSV of results, each whole or not at all. */
+    public static void write(ReportContent content, Path pdf, Path csv) throws IOException {
+        WholeFile.write(pdf, out -> new PdfReportWriter().write(content, out));
+        WholeFile.write(csv, out -> {
+            Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
+            CsvExport.write(content.results(), w);
+            w.flush();
+        });
+    }
+
+    private static double oxygen(SideChannelJoin o2, String channel, Instant t) {
+        try {
+            return o2.nearest(t, Duration.ofMinutes(2)).get(channel);
+        } catch (ImportException e) {
+            throw new IllegalStateException(e.getMessage(), e);
+        }
+    }
+
+    /** The plan's example sample fitted again from its stored absorbance; null when the plan names none. */
+    private SpectrumFit exampleFit(List<MeasurementInfo> measurements, StoredMethod method, ReportPlan plan)
+            throws FileFormatException {
+        if (plan.exampleTime() == null) {
+            return null;
+        }
+        String measurement = measurements.stream().filter(m -> m.time().equals(plan.exampleTime()))
+                .map(MeasurementInfo::id).findFirst().orElseThrow(() -> new FileFormatException(plan.file(), 0,
+                        "example-fit", "no stored sample at " + plan.exampleTime()));
+        Optional<StoredSpectrum> stored;
+        try (Stream<StoredSpectrum> all = store.spectra().stream(actor, projectId)) {
+            stored = all.filter(s -> measurement.equals(s.measurementId())
+                    && s.content() == SpectralContent.ABSORBANCE).findFirst();
+        }
+        Spectrum a = stored.orElseThrow(() -> new FileFormatException(plan.file(), 0, "example-fit",
+                "no stored absorbance at " + plan.exampleTime())).spectrum();
+        FitSpectra fit = method.quantifier(a.axis(), software, true).quantify(Sample.of(a))
+                .compound(plan.exampleCompound()).orElseThrow(() -> new FileFormatException(plan.file(), 0,
+                        "example-fit", "the method does not report " + plan.exampleCompound()))
+                .spectra().orElseThrow();
+        Spectrum model = fit.model();
+        // the model is defined inside the analyte's regions only
+        List<double[]> points = new ArrayList<>();
+        for (int i = 0; i < model.size(); i++) {
+            double x = model.axis().get(i);
+            double y = a.get(a.axis().nearestIndex(x));
+            if (Double.isFinite(model.get(i)) && Double.isFinite(y)) {
+                points.add(new double[] { x, y, model.get(i) });
+            }
+        }
+        return new SpectrumFit(plan.exampleCompound() + " region at " + plan.exampleTime(),
+                points.stream().mapToDouble(p -> p[0]).toArray(), points.stream().mapToDouble(p -> p[1]).toArray(),
+                points.stream().mapToDouble(p -> p[2]).toArray());
+    }
+}

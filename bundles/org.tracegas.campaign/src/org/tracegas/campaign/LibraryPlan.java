@@ -1,0 +1,115 @@
+package org.tracegas.campaign;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+
+import org.tracegas.library.Compound;
+import org.tracegas.library.io.FileFormatException;
+import org.tracegas.preprocess.Apodization;
+import org.tracegas.spectrum.AxisUnit;
+import org.tracegas.spectrum.SpectralAxis;
+
+/**
+ * What synthetic references to make, read from a library plan file:
+ *
+ * <pre>
+ * library = Stack gas references 191 degC       name of the library
+ * temperature = 464.15                           cell temperature, K
+ * pressure = 101.3                               cell pressure, kPa
+ * path-length = 4.85                             cell path, m (concentration = ppm-m / path-length)
+ * resolution = 0.5                               nominal resolution, cm-1
+ * apodization = norton-beer-medium
+ * first-wavenumber = 700.02                      output axis: first point, cm-1,
+ * step = 0.2410888671875                         step, cm-1 (at most half the resolution),
+ * points = 13275                                 and number of points (use the axis of the processed spectra)
+ * uncertainty = 0.02                             relative standard uncertainty stated for each reference
+ *
+ * [compound]                                     one block per gas
+ * name = CO
+ * cas = 630-08-0
+ * formula = CO
+ * molar-mass = 28.010
+ * line-list = co.par                             HITRAN-format line list, relative to the plan
+ * partition = linear                             Q(T) ~ T (linear) or T^1.5 (non-linear)
+ * ppm-m = 29.1, 87.3, 465.6                      amounts to synthesize, ppm·m
+ * </pre>
+ */
+public record LibraryPlan(Path file, String name, double temperatureK, double pressureKPa, double pathLengthM,
+        double resolution, Apodization apodization, SpectralAxis axis, double relativeUncertainty,
+        List<Gas> gases) {
+
+    /** One gas of the plan and the amounts to synthesize of it. */
+    public record Gas(Compound compound, Path lineList, boolean linear, List<Double> ppmMetres, int line) {
+    }
+
+    private static final Set<String> HEAD = Set.of("library", "temperature", "pressure", "path-length", "resolution",
+            "apodization", "first-wavenumber", "step", "points", "uncertainty");
+    private static final Set<String> GAS = Set.of("name", "cas", "formula", "molar-mass", "line-list", "partition",
+            "ppm-m");
+
+    public LibraryPlan {
+        gases = List.copyOf(gases);
+    }
+
+    /** @throws FileFormatException naming the file, line and key of the first error */
+    public static LibraryPlan read(Path file) throws IOException {
+        KeyValueFile f = KeyValueFile.read(file);
+        f.allowBlocks(Set.of("compound"));
+        KeyValueFile.Section h = f.head().allow(HEAD);
+        SpectralAxis axis;
+        try {
+            axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, h.number("first-wavenumber"), h.number("step"),
+                    h.value("points").integer());
+        } catch (IllegalArgumentException e) {
+            throw h.error("points", e.getMessage());
+        }
+        if (!(axis.step() > 0)) {
+            throw h.error("step", "must be positive, was " + axis.step());
+        }
+        List<Gas> gases = new ArrayList<>();
+        for (KeyValueFile.Section b : f.blocks("compound")) {
+            b.allow(GAS);
+            Compound compound;
+            try {
+                compound = new Compound(b.text("name"), b.text("cas"), b.text("formula"), b.number("molar-mass"));
+            } catch (IllegalArgumentException e) {
+                String m = e.getMessage();
+                throw b.error(m.startsWith("cas") ? "cas" : m.startsWith("molarMass") ? "molar-mass"
+                        : m.startsWith("formula") ? "formula" : "name", m);
+            }
+            String partition = b.text("partition");
+            if (!partition.equals("linear") && !partition.equals("non-linear")) {
+                throw b.error("partition", "'" + partition + "' is neither linear nor non-linear");
+            }
+            List<Double> amounts = b.value("ppm-m").numbers();
+            for (double a : amounts) {
+                if (!(a > 0)) {
+                    throw b.error("ppm-m", "amounts must be positive, found " + a);
+                }
+            }
+            gases.add(new Gas(compound, f.resolve(b.text("line-list")), partition.equals("linear"), amounts,
+                    b.line()));
+        }
+        if (gases.isEmpty()) {
+            throw new FileFormatException(file, 0, "[compound]", "the plan names no compound");
+        }
+        double uncertainty = h.number("uncertainty");
+        if (!(uncertainty >= 0 && uncertainty < 1)) {
+            throw h.error("uncertainty", "must lie in [0, 1), was " + uncertainty);
+        }
+        for (String key : List.of("temperature", "pressure", "path-length", "resolution")) {
+            if (!(h.number(key) > 0)) {
+                throw h.error(key, "must be positive, was " + h.number(key));
+            }
+        }
+        if (axis.step() > 0.5 * h.number("resolution")) {
+            throw h.error("step", "must be at most half the resolution " + h.number("resolution") + " cm-1");
+        }
+        return new LibraryPlan(file, h.text("library"), h.number("temperature"), h.number("pressure"),
+                h.number("path-length"), h.number("resolution"), h.constant("apodization", Apodization.class), axis,
+                uncertainty, gases);
+    }
+}

@@ -1,0 +1,142 @@
+package org.tracegas.campaign;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+
+import org.tracegas.library.ReferenceLibrary;
+import org.tracegas.library.io.FileFormatException;
+import org.tracegas.preprocess.TransformSettings;
+import org.tracegas.quantify.AnalysisRegion;
+import org.tracegas.quantify.Analyte;
+import org.tracegas.quantify.QuantificationMethod;
+import org.tracegas.quantify.ReferenceSpectrum;
+import org.tracegas.quantify.ReportingUnit;
+import org.tracegas.quantify.ShiftTerm;
+import org.tracegas.quantify.WavenumberWindow;
+
+/**
+ * A quantification method as a lab writes it, read from a method file; with the references of its library it
+ * becomes a {@link QuantificationMethod}.
+ *
+ * <pre>
+ * method = Stack gas, 8 analytes
+ * library = references/library.manifest     the library folder's manifest, relative to this file
+ * path-length = 4.85                         m
+ * nonlinearity = yes                         interpolate between references of several amounts
+ * tolerance = 1e-6                           (optional) relative change at which the iteration stops
+ * max-iterations = 50                        (optional)
+ * max-absorbance = 1.0                       (optional)
+ * shift = none                               (optional) none, shift, shift-and-width
+ * reporting-unit = ppm                       (optional) ppm, ppb, percent
+ *
+ * [transform]                                see {@link TransformText}
+ * apodization = norton-beer-medium
+ *
+ * [analyte]                                  one block per analyte, in reporting order
+ * compound = CO                              as the library names the compound
+ * interferents = CO2, N2O                    (optional)
+ * region = 2040..2140 baseline 1             windows low..high (several share one baseline), the
+ * region = 2150..2160, 2170..2180 baseline 0 residual-limit 0.004     baseline order and an optional
+ *                                                                     residual RMS limit; one line per region
+ * </pre>
+ */
+public record MethodDefinition(Path file, String name, Path libraryManifest, double pathLengthM, boolean nonlinearity,
+        double tolerance, int maxIterations, double maxAbsorbance, ShiftTerm shift, ReportingUnit unit,
+        TransformSettings transform, List<Analyte> analytes) {
+
+    private static final Set<String> HEAD = Set.of("method", "library", "path-length", "nonlinearity", "tolerance",
+            "max-iterations", "max-absorbance", "shift", "reporting-unit");
+    private static final Set<String> ANALYTE = Set.of("compound", "interferents", "region");
+
+    public MethodDefinition {
+        analytes = List.copyOf(analytes);
+    }
+
+    /** @throws FileFormatException naming the file, line and key of the first error */
+    public static MethodDefinition read(Path file) throws IOException {
+        KeyValueFile f = KeyValueFile.read(file);
+        f.allowBlocks(Set.of("transform", "analyte"));
+        KeyValueFile.Section h = f.head().allow(HEAD);
+        List<KeyValueFile.Section> transforms = f.blocks("transform");
+        if (transforms.size() != 1) {
+            throw new FileFormatException(file, transforms.isEmpty() ? 0 : transforms.get(1).line(), "[transform]",
+                    "a method file needs exactly one [transform] block, found " + transforms.size());
+        }
+        TransformSettings transform = TransformText.read(transforms.get(0));
+        List<Analyte> analytes = new ArrayList<>();
+        for (KeyValueFile.Section b : f.blocks("analyte")) {
+            b.allow(ANALYTE);
+            List<String> interferents = b.has("interferents") ? b.value("interferents").words() : List.of();
+            List<AnalysisRegion> regions = new ArrayList<>();
+            for (KeyValueFile.Value v : b.all("region")) {
+                regions.add(region(v));
+            }
+            try {
+                analytes.add(new Analyte(b.text("compound"), interferents, regions));
+            } catch (IllegalArgumentException e) {
+                String m = e.getMessage();
+                throw b.error(m.startsWith("compound") ? "compound" : m.contains("interferent") ? "interferents"
+                        : "region", m);
+            }
+        }
+        if (analytes.isEmpty()) {
+            throw new FileFormatException(file, 0, "[analyte]", "the method names no analyte");
+        }
+        return new MethodDefinition(file, h.text("method"), f.resolve(h.text("library")), h.number("path-length"),
+                h.flag("nonlinearity", false), h.number("tolerance", QuantificationMethod.DEFAULT_TOLERANCE),
+                h.integer("max-iterations", QuantificationMethod.DEFAULT_MAX_ITERATIONS),
+                h.number("max-absorbance", QuantificationMethod.DEFAULT_MAX_ABSORBANCE),
+                h.constant("shift", ShiftTerm.class, ShiftTerm.NONE),
+                h.constant("reporting-unit", ReportingUnit.class, ReportingUnit.PPM), transform, analytes);
+    }
+
+    /** "low..high[, low..high] baseline n [residual-limit x]". */
+    private static AnalysisRegion region(KeyValueFile.Value v) throws FileFormatException {
+        String[] words = v.text().replace(",", " ").strip().split("\\s+");
+        List<WavenumberWindow> windows = new ArrayList<>();
+        Integer baseline = null;
+        double limit = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < words.length; i++) {
+            if (words[i].equals("baseline") && i + 1 < words.length) {
+                baseline = new KeyValueFile.Value(v.section(), v.key(), words[++i], v.line()).integer();
+            } else if (words[i].equals("residual-limit") && i + 1 < words.length) {
+                limit = new KeyValueFile.Value(v.section(), v.key(), words[++i], v.line()).number();
+            } else {
+                double[] r = v.range(words[i]);
+                windows.add(new WavenumberWindow(r[0], r[1]));
+            }
+        }
+        if (baseline == null) {
+            throw v.error("states no 'baseline <order>'");
+        }
+        try {
+            return new AnalysisRegion(windows, baseline, limit);
+        } catch (IllegalArgumentException e) {
+            throw v.error(e.getMessage());
+        }
+    }
+
+    /**
+     * The method over a library's references (by compound name).
+     *
+     * @throws FileFormatException naming the method file when the library lacks a compound the method fits
+     */
+    public QuantificationMethod build(ReferenceLibrary library) throws FileFormatException {
+        QuantificationMethod.Builder b = QuantificationMethod.builder(name).pathLengthMetres(pathLengthM)
+                .nonlinearity(nonlinearity).tolerance(tolerance).maxIterations(maxIterations)
+                .maxAbsorbance(maxAbsorbance).shiftTerm(shift).reportingUnit(unit);
+        analytes.forEach(b::analyte);
+        for (org.tracegas.library.ReferenceSpectrum r : library.references()) {
+            b.reference(new ReferenceSpectrum(r.compound().name(), r.spectrum(),
+                    r.metadata().conditions().concentrationPathLength()));
+        }
+        try {
+            return b.build();
+        } catch (IllegalArgumentException e) {
+            throw new FileFormatException(file, 0, "", e.getMessage() + " (library " + libraryManifest + ")");
+        }
+    }
+}
