@@ -10,6 +10,7 @@ import java.nio.file.Path;
 import java.util.BitSet;
 import java.util.List;
 
+import org.eclipse.core.runtime.NullProgressMonitor;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.store.AccessDeniedException;
@@ -30,7 +31,7 @@ class StoredResultsTest {
             Session analyst = store.users().logIn(ExistingWorkspace.ANALYST,
                     ExistingWorkspace.PASSWORD.toCharArray());
 
-            StoredResults.Traces t = StoredResults.traces(store, analyst, ws.project.id());
+            StoredResults.Traces t = StoredResults.traces(store, analyst, ws.project.id(), new NullProgressMonitor());
 
             assertEquals(ExistingWorkspace.FIRST_SAMPLE, t.start());
             List<ConcentrationTrace> traces = t.traces();
@@ -55,13 +56,14 @@ class StoredResultsTest {
             ExistingWorkspace ws = new ExistingWorkspace(store);
             Session reviewer = store.users().logIn(ExistingWorkspace.REVIEWER,
                     ExistingWorkspace.PASSWORD.toCharArray());
-            assertThrows(AccessDeniedException.class, () -> StoredResults.traces(store, reviewer, ws.project.id()));
+            assertThrows(AccessDeniedException.class,
+                    () -> StoredResults.traces(store, reviewer, ws.project.id(), new NullProgressMonitor()));
 
             Session analyst = store.users().logIn(ExistingWorkspace.ANALYST,
                     ExistingWorkspace.PASSWORD.toCharArray());
             String client = store.projects().createClient(analyst, "Empty client");
             String empty = store.projects().createProject(analyst, client, "EMPTY-1", "Nothing measured").id();
-            StoredResults.Traces none = StoredResults.traces(store, analyst, empty);
+            StoredResults.Traces none = StoredResults.traces(store, analyst, empty, new NullProgressMonitor());
             assertTrue(none.traces().isEmpty());
             assertNull(none.start());
         }

@@ -12,6 +12,7 @@ import org.eclipse.swt.graphics.PaletteData;
 import org.eclipse.swt.graphics.Point;
 import org.eclipse.swtchart.Chart;
 import org.eclipse.swtchart.ICustomPaintListener;
+import org.eclipse.swtchart.IAxis;
 import org.eclipse.swtchart.ILineSeries;
 import org.eclipse.swtchart.LineStyle;
 import org.eclipse.swtchart.Range;
@@ -25,7 +26,7 @@ import org.eclipse.swtchart.Range;
  */
 public final class DecimatedSeries implements ICustomPaintListener {
 
-    private record Full(double[] x, double[] y, int rgb, boolean markers) {
+    private record Full(double[] x, double[] y, int rgb, boolean markers, int yAxis) {
     }
 
     private final Chart chart;
@@ -43,8 +44,8 @@ public final class DecimatedSeries implements ICustomPaintListener {
     }
 
     /**
-     * Gives a series (created beforehand on the chart) its full data. A series without line style is drawn as
-     * crosses at its points (flag markers).
+     * Gives a series (created beforehand on the chart, and set on its y axis) its full data. A series without
+     * line style is drawn as crosses at its points (flag markers).
      */
     public void put(ILineSeries<?> series, double[] x, double[] y) {
         if (x.length != y.length) {
@@ -54,7 +55,7 @@ public final class DecimatedSeries implements ICustomPaintListener {
         boolean markers = series.getLineStyle() == LineStyle.NONE;
         Color c = markers ? series.getSymbolColor() : series.getLineColor();
         data.put(series.getId(), new Full(x.clone(), y.clone(), (c.getRed() << 16) | (c.getGreen() << 8) | c.getBlue(),
-                markers));
+                markers, series.getYAxisId()));
         series.setXSeries(new double[0]);
         series.setYSeries(new double[0]);
         version++;
@@ -68,12 +69,17 @@ public final class DecimatedSeries implements ICustomPaintListener {
 
     /** The x range that shows all data, or null without data. */
     public Range fullXRange() {
-        return range(true);
+        return range(true, -1);
     }
 
     /** The y range of all data with 5 % head room above and below, or null without data. */
     public Range fullYRange() {
-        Range r = range(false);
+        return fullYRange(0);
+    }
+
+    /** The y range of the data on y axis {@code axisId} with 5 % head room, or null without data there. */
+    public Range fullYRange(int axisId) {
+        Range r = range(false, axisId);
         if (r == null) {
             return null;
         }
@@ -81,10 +87,14 @@ public final class DecimatedSeries implements ICustomPaintListener {
         return new Range(r.lower - pad, r.upper + pad);
     }
 
-    private Range range(boolean x) {
+    /** Range of the x values of all data, or of the y values on one axis. */
+    private Range range(boolean x, int axisId) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (Full f : data.values()) {
+            if (!x && f.yAxis != axisId) {
+                continue;
+            }
             for (double v : x ? f.x : f.y) {
                 if (!Double.isNaN(v)) {
                     lo = Math.min(lo, v);
@@ -129,22 +139,30 @@ public final class DecimatedSeries implements ICustomPaintListener {
             return null;
         }
         Range xr = chart.getAxisSet().getXAxis(0).getRange();
-        Range yr = chart.getAxisSet().getYAxis(0).getRange();
+        StringBuilder yRanges = new StringBuilder();
+        for (IAxis y : chart.getAxisSet().getYAxes()) {
+            yRanges.append(y.getId()).append(':').append(y.getRange()).append(' ');
+        }
         boolean reversed = chart.getAxisSet().getXAxis(0).isReversed();
-        String key = size + " " + xr + " " + yr + " " + reversed + " " + version;
+        String key = size + " " + xr + " " + yRanges + reversed + " " + version;
         if (!key.equals(cacheKey) || cache == null) {
             clearCache();
-            cache = new Image(chart.getDisplay(), render(size.x, size.y, xr, yr, reversed));
+            cache = new Image(chart.getDisplay(), render(size.x, size.y, xr, reversed));
             cacheKey = key;
         }
         return cache;
     }
 
-    private ImageData render(int w, int h, Range xr, Range yr, boolean reversed) {
+    private ImageData render(int w, int h, Range xr, boolean reversed) {
         Raster raster = new Raster(w, h);
         drawn.clear();
         for (Map.Entry<String, Full> e : data.entrySet()) {
             Full f = e.getValue();
+            IAxis yAxis = chart.getAxisSet().getYAxis(f.yAxis);
+            if (yAxis == null) {
+                continue;
+            }
+            Range yr = yAxis.getRange();
             MinMaxDecimator.Decimated d = MinMaxDecimator.decimate(f.x, f.y, xr.lower, xr.upper, w);
             drawn.put(e.getKey(), d.size());
             double sx = (w - 1) / (xr.upper - xr.lower);

@@ -25,7 +25,7 @@ public final class LoginDialog extends Dialog {
     private Label message;
     private Session session;
 
-    /** @param workspace where the workspace lies, shown to the user */
+    /** @param workspace which workspace the log-in is for, e.g. "local workspace in /data/ws", shown to the user */
     public LoginDialog(Shell parent, UserService users, String workspace) {
         super(parent);
         this.users = users;
@@ -43,7 +43,7 @@ public final class LoginDialog extends Dialog {
         Composite area = (Composite) super.createDialogArea(parent);
         area.setLayout(new GridLayout(2, false));
         Label where = new Label(area, SWT.NONE);
-        where.setText("Workspace: " + workspace);
+        where.setText("Connecting to " + workspace);
         where.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
         new Label(area, SWT.NONE).setText("User name");
         login = new Text(area, SWT.BORDER);

@@ -3,6 +3,7 @@ package org.tracegas.ui.internal;
 import org.eclipse.core.runtime.preferences.InstanceScope;
 import org.eclipse.equinox.app.IApplication;
 import org.eclipse.equinox.app.IApplicationContext;
+import org.eclipse.jface.dialogs.MessageDialog;
 import org.eclipse.jface.preference.IPreferenceStore;
 import org.eclipse.jface.window.Window;
 import org.eclipse.swt.widgets.Display;
@@ -11,15 +12,17 @@ import org.eclipse.ui.IWorkbench;
 import org.eclipse.ui.PlatformUI;
 import org.eclipse.ui.preferences.ScopedPreferenceStore;
 import org.tracegas.store.AccessDeniedException;
+import org.tracegas.store.StoreException;
 import org.tracegas.ui.dialogs.LoginDialog;
 import org.tracegas.ui.prefs.DeskPreferences;
 import org.tracegas.ui.session.DemoProject;
 import org.tracegas.ui.session.Desk;
 import org.tracegas.ui.session.WorkspaceAccess;
+import org.tracegas.ui.session.WorkspaceLocation;
 
 /**
- * Opens the workspace named in the preferences (a fresh one gets the demo project), asks for the log-in and
- * starts the workbench window.
+ * Opens the workspace named in the preferences, on the lab server or in the local folder (a fresh local one
+ * gets the demo project), asks for the log-in and starts the workbench window.
  */
 public final class WorkbenchApplication implements IApplication {
 
@@ -28,15 +31,27 @@ public final class WorkbenchApplication implements IApplication {
         Display display = PlatformUI.createDisplay();
         IPreferenceStore prefs = new ScopedPreferenceStore(InstanceScope.INSTANCE, "org.tracegas.ui");
         DeskPreferences.setDefaults(prefs);
-        try (WorkspaceAccess access = WorkspaceAccess.openH2(DeskPreferences.workspaceFolder(prefs))) {
+        WorkspaceLocation location = DeskPreferences.location(prefs, System.getenv());
+        WorkspaceAccess opened;
+        try {
+            opened = WorkspaceAccess.open(location);
+        } catch (StoreException e) {
+            MessageDialog.openError(null, "Tracegas Workbench", "The " + location.description()
+                    + " could not be opened: " + e.getMessage());
+            display.dispose();
+            return IApplication.EXIT_OK;
+        }
+        try (WorkspaceAccess access = opened) {
             DemoProject.Seeded demo = null;
-            try {
-                demo = DemoProject.seed(access.store());
-            } catch (AccessDeniedException alreadyInUse) {
-                // users exist: the workspace is not fresh, nothing to seed
+            // only a local workspace is seeded: a lab server gets its first administrator from the runner
+            if (location instanceof WorkspaceLocation.Folder) {
+                try {
+                    demo = DemoProject.seed(access.store());
+                } catch (AccessDeniedException alreadyInUse) {
+                    // users exist: the workspace is not fresh, nothing to seed
+                }
             }
-            LoginDialog login = new LoginDialog(new Shell(display), access.store().users(),
-                    access.folder().toString());
+            LoginDialog login = new LoginDialog(new Shell(display), access.store().users(), location.description());
             if (login.open() != Window.OK) {
                 return IApplication.EXIT_OK;
             }

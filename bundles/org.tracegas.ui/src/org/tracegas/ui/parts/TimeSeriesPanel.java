@@ -1,13 +1,25 @@
 package org.tracegas.ui.parts;
 
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.HashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
+import java.util.Set;
 
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.graphics.GC;
+import org.eclipse.swt.graphics.Image;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Table;
+import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swtchart.Chart;
+import org.eclipse.swtchart.IAxis;
 import org.eclipse.swtchart.ILineSeries;
 import org.eclipse.swtchart.ILineSeries.PlotSymbolType;
 import org.eclipse.swtchart.Range;
@@ -17,11 +29,14 @@ import org.tracegas.ui.chart.DecimatedSeries;
 
 /**
  * Concentrations over time, one line per compound, flagged values marked with a cross and limits as red
- * horizontal lines. Long records (a day of one-second values) are thinned per pixel column for drawing.
+ * horizontal lines. A checkable list chooses the compounds drawn; at first the trace gases are. Major
+ * components (percent level, {@link ConcentrationLevel}) shown together with trace gases get a second axis on
+ * the right, so that they do not flatten the trace gases' lines. Long records (a day of one-second values) are
+ * thinned per pixel column for drawing.
  */
 public final class TimeSeriesPanel extends Composite {
 
-    /** A limit line, e.g. a daily emission limit value. */
+    /** A limit line, e.g. a daily emission limit value; drawn on the trace gases' axis. */
     public record Limit(String name, double value) {
     }
 
@@ -30,7 +45,14 @@ public final class TimeSeriesPanel extends Composite {
     private final Chart chart;
     private final DecimatedSeries data;
     private final Label heading;
+    private final Table compounds;
     private final ChartNavigation navigation;
+    private final Map<Integer, Image> swatches = new HashMap<>();
+    private List<ConcentrationTrace> traces = List.of();
+    private List<Limit> limits = List.of();
+    private Set<String> majors = Set.of();
+    /** Id of the major components' axis while it is shown, else -1. */
+    private int majorAxis = -1;
 
     public TimeSeriesPanel(Composite parent, int style) {
         super(parent, style);
@@ -43,49 +65,264 @@ public final class TimeSeriesPanel extends Composite {
         GridData rd = new GridData(SWT.END, SWT.CENTER, false, false);
         rd.widthHint = 300;
         readout.setLayoutData(rd);
-        chart = ChartStyle.chart(this, "", "Time (h)", "Concentration");
-        chart.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1));
+
+        Composite body = new Composite(this, SWT.NONE);
+        body.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1));
+        GridLayout bl = new GridLayout(2, false);
+        bl.marginWidth = 0;
+        bl.marginHeight = 0;
+        body.setLayout(bl);
+        Composite side = new Composite(body, SWT.NONE);
+        side.setLayoutData(new GridData(SWT.FILL, SWT.FILL, false, true));
+        GridLayout sl = new GridLayout(2, true);
+        sl.marginWidth = 0;
+        sl.marginHeight = 0;
+        side.setLayout(sl);
+        Label listTitle = new Label(side, SWT.NONE);
+        listTitle.setText("Compounds drawn");
+        listTitle.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
+        compounds = new Table(side, SWT.CHECK | SWT.BORDER | SWT.V_SCROLL | SWT.SINGLE);
+        GridData cd = new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1);
+        cd.widthHint = 150;
+        compounds.setLayoutData(cd);
+        compounds.addListener(SWT.Selection, e -> {
+            if (e.detail == SWT.CHECK) {
+                draw(false);
+            }
+        });
+        Button trace = new Button(side, SWT.PUSH);
+        trace.setText("Trace gases");
+        trace.setToolTipText("Draw the trace gases only");
+        trace.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        trace.addListener(SWT.Selection, e -> select(traceGases()));
+        Button all = new Button(side, SWT.PUSH);
+        all.setText("All");
+        all.setToolTipText("Draw every compound");
+        all.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        all.addListener(SWT.Selection, e -> select(compounds()));
+
+        chart = ChartStyle.chart(body, "", "Time (h)", "Concentration");
+        chart.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         chart.getAxisSet().getYAxis(0).getTick().setFormat(new java.text.DecimalFormat("0.###"));
         data = new DecimatedSeries(chart);
         navigation = new ChartNavigation(this::rethin, chart);
         new CursorReadout(chart, readout, "%.4f h", "concentration");
+        addListener(SWT.Dispose, e -> swatches.values().forEach(Image::dispose));
     }
 
-    /** Shows traces and limit lines over the whole period. */
+    /**
+     * Shows traces and limit lines over the whole period. The compounds drawn are the trace gases, or those
+     * the user chose when the same compounds were shown before.
+     */
     public void show(String title, List<ConcentrationTrace> traces, List<Limit> limits) {
         heading.setText(title);
+        List<String> before = compounds();
+        Set<String> chosen = selectedCompounds();
+        this.traces = List.copyOf(traces);
+        this.limits = List.copyOf(limits);
+        Set<String> m = new LinkedHashSet<>();
+        for (ConcentrationTrace t : traces) {
+            if (ConcentrationLevel.major(t)) {
+                m.add(t.compound());
+            }
+        }
+        majors = m;
+        boolean sameCompounds = before.equals(compounds());
+        fillList(sameCompounds ? chosen : defaultSelection());
+        draw(true);
+    }
+
+    /** Clears the chart and the list and says why, e.g. while results are read. */
+    public void showNote(String text) {
+        heading.setText(text);
+        traces = List.of();
+        limits = List.of();
+        majors = Set.of();
+        fillList(Set.of());
+        draw(true);
+    }
+
+    /** All compounds of the traces shown, in their order. */
+    public List<String> compounds() {
+        return traces.stream().map(ConcentrationTrace::compound).toList();
+    }
+
+    /** The compounds checked in the list. */
+    public Set<String> selectedCompounds() {
+        Set<String> out = new LinkedHashSet<>();
+        for (TableItem item : compounds.getItems()) {
+            if (item.getChecked()) {
+                out.add((String) item.getData());
+            }
+        }
+        return out;
+    }
+
+    /** Draws exactly the given compounds, keeping the time range shown. */
+    public void select(Collection<String> chosen) {
+        for (TableItem item : compounds.getItems()) {
+            item.setChecked(chosen.contains(item.getData()));
+        }
+        draw(false);
+    }
+
+    /** The trace gases among the compounds shown (all but the major components). */
+    public List<String> traceGases() {
+        return compounds().stream().filter(c -> !majors.contains(c)).toList();
+    }
+
+    /** True when the compound is drawn against the major components' axis on the right. */
+    public boolean onMajorAxis(String compound) {
+        ILineSeries<?> s = (ILineSeries<?>) chart.getSeriesSet().getSeries(compound);
+        return s != null && majorAxis >= 0 && s.getYAxisId() == majorAxis;
+    }
+
+    /** The major components' axis on the right, or null while it is not shown. */
+    public IAxis majorAxis() {
+        return majorAxis < 0 ? null : chart.getAxisSet().getYAxis(majorAxis);
+    }
+
+    public Table compoundList() {
+        return compounds;
+    }
+
+    public Label heading() {
+        return heading;
+    }
+
+    private Set<String> defaultSelection() {
+        List<String> trace = traceGases();
+        return new LinkedHashSet<>(trace.isEmpty() ? compounds() : trace);
+    }
+
+    private void fillList(Set<String> checked) {
+        compounds.removeAll();
+        for (int i = 0; i < traces.size(); i++) {
+            String c = traces.get(i).compound();
+            TableItem item = new TableItem(compounds, SWT.NONE);
+            item.setData(c);
+            item.setText(majors.contains(c) ? c + "  (major)" : c);
+            item.setImage(swatch(i));
+            item.setChecked(checked.contains(c));
+        }
+    }
+
+    /** A small square in the compound's line colour, so the list doubles as a key. */
+    private Image swatch(int i) {
+        return swatches.computeIfAbsent(Math.floorMod(i, 8), k -> {
+            Image img = new Image(getDisplay(), 12, 12);
+            GC gc = new GC(img);
+            try {
+                gc.setBackground(Palette.compound(k));
+                gc.fillRectangle(0, 0, 12, 12);
+            } finally {
+                gc.dispose();
+            }
+            return img;
+        });
+    }
+
+    /** Puts the checked compounds, their flags and the limits on the chart; the full time range when asked. */
+    private void draw(boolean fullTimeRange) {
         chart.suspendUpdate(true);
         ChartStyle.removeAllSeries(chart);
         data.clear();
-        String unit = traces.isEmpty() ? "" : traces.get(0).unit();
-        chart.getAxisSet().getYAxis(0).getTitle().setText("Concentration (" + unit + ")");
-        int i = 0;
-        for (ConcentrationTrace t : traces) {
-            data.put(ChartStyle.line(chart, t.compound(), Palette.compound(i++), 1), t.hours(), t.values());
+        Set<String> chosen = selectedCompounds();
+        List<ConcentrationTrace> drawn = new ArrayList<>();
+        List<Integer> colours = new ArrayList<>();
+        for (int i = 0; i < traces.size(); i++) {
+            if (chosen.contains(traces.get(i).compound())) {
+                drawn.add(traces.get(i));
+                colours.add(i);
+            }
         }
-        for (ConcentrationTrace t : traces) {
+        boolean anyTrace = drawn.stream().anyMatch(t -> !majors.contains(t.compound()));
+        boolean anyMajor = drawn.stream().anyMatch(t -> majors.contains(t.compound()));
+        // a second axis only when both kinds are drawn; alone, either kind fits the one axis
+        setMajorAxis(anyTrace && anyMajor);
+        IAxis left = chart.getAxisSet().getYAxis(0);
+        String leftUnit = unitOf(drawn, false, anyMajor && !anyTrace);
+        left.getTitle().setText((majorAxis >= 0 ? "Trace gases" : "Concentration") + leftUnit);
+        if (majorAxis >= 0) {
+            majorAxis().getTitle().setText("Major components" + unitOf(drawn, true, true));
+        }
+        for (int k = 0; k < drawn.size(); k++) {
+            ILineSeries<?> s = ChartStyle.line(chart, drawn.get(k).compound(), Palette.compound(colours.get(k)), 1);
+            s.setYAxisId(axisOf(drawn.get(k)));
+            data.put(s, drawn.get(k).hours(), drawn.get(k).values());
+        }
+        for (ConcentrationTrace t : drawn) {
             ILineSeries<?> m = ChartStyle.markers(chart, t.compound() + FLAGS_SUFFIX, Palette.LIMIT,
                     PlotSymbolType.CROSS);
             m.setVisibleInLegend(false);
+            m.setYAxisId(axisOf(t));
             data.put(m, t.flaggedHours(), t.flaggedValues());
         }
-        Range full = data.fullXRange();
+        Range full = fullTimeRange();
         for (Limit l : limits) {
             ILineSeries<?> s = ChartStyle.line(chart, "Limit " + l.name(), Palette.LIMIT, 1);
             if (full != null) {
                 data.put(s, new double[] {full.lower, full.upper}, new double[] {l.value(), l.value()});
             }
         }
-        if (full != null) {
+        if (full != null && fullTimeRange) {
             chart.getAxisSet().getXAxis(0).setRange(full);
         }
-        rethin();
-        Range y = data.fullYRange();
-        if (y != null) {
-            chart.getAxisSet().getYAxis(0).setRange(y);
+        setYRange(0);
+        if (majorAxis >= 0) {
+            setYRange(majorAxis);
         }
         chart.suspendUpdate(false);
-        chart.redraw();
+        rethin();
+    }
+
+    /** The time range of all traces (not only those drawn), so that choosing compounds keeps the period. */
+    private Range fullTimeRange() {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (ConcentrationTrace t : traces) {
+            if (t.hours().length > 0) {
+                lo = Math.min(lo, t.hours()[0]);
+                hi = Math.max(hi, t.hours()[t.hours().length - 1]);
+            }
+        }
+        if (!(lo <= hi)) {
+            return null;
+        }
+        return lo < hi ? new Range(lo, hi) : new Range(lo - 1, hi + 1);
+    }
+
+    private int axisOf(ConcentrationTrace t) {
+        return majorAxis >= 0 && majors.contains(t.compound()) ? majorAxis : 0;
+    }
+
+    /** " (ppm)": the unit of the first drawn trace of one kind, or of any kind. */
+    private String unitOf(List<ConcentrationTrace> drawn, boolean major, boolean kindMatters) {
+        for (ConcentrationTrace t : drawn) {
+            if (!kindMatters || majors.contains(t.compound()) == major) {
+                return " (" + t.unit() + ")";
+            }
+        }
+        return drawn.isEmpty() ? "" : " (" + drawn.get(0).unit() + ")";
+    }
+
+    private void setMajorAxis(boolean wanted) {
+        if (wanted && majorAxis < 0) {
+            majorAxis = chart.getAxisSet().createYAxis();
+            IAxis axis = chart.getAxisSet().getYAxis(majorAxis);
+            axis.setPosition(IAxis.Position.Secondary);
+            axis.getTick().setFormat(new java.text.DecimalFormat("0.###"));
+        } else if (!wanted && majorAxis >= 0) {
+            chart.getAxisSet().deleteYAxis(majorAxis);
+            majorAxis = -1;
+        }
+    }
+
+    private void setYRange(int axisId) {
+        Range y = data.fullYRange(axisId);
+        if (y != null) {
+            chart.getAxisSet().getYAxis(axisId).setRange(y);
+        }
     }
 
     private void rethin() {

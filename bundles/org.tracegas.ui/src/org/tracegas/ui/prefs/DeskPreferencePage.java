@@ -17,7 +17,8 @@ public final class DeskPreferencePage extends FieldEditorPreferencePage implemen
     public DeskPreferencePage() {
         super(GRID);
         setDescription("Settings of the analysis and review desks. A changed workspace or server is used at the "
-                + "next start.");
+                + "next start. The lab server's database password is taken from the environment variable "
+                + DeskPreferences.SERVER_PASSWORD_VARIABLE + ".");
     }
 
     @Override
@@ -40,6 +41,8 @@ public final class DeskPreferencePage extends FieldEditorPreferencePage implemen
         folder.setErrorMessage("Workspace folder: must not be empty");
         addField(folder);
         addField(new ServerUrlEditor(DeskPreferences.SERVER_URL, "Lab server URL (empty: local workspace)",
+                getFieldEditorParent()));
+        addField(new StringFieldEditor(DeskPreferences.SERVER_USER, "Lab server database user",
                 getFieldEditorParent()));
     }
 

@@ -12,6 +12,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
+import org.eclipse.core.runtime.IProgressMonitor;
+import org.eclipse.core.runtime.SubMonitor;
+
 import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
@@ -42,16 +45,23 @@ public final class StoredResults {
     /**
      * One trace per compound, in the order compounds first appear, hours counted from the earliest measurement
      * with a result. Results without a measurement have no time and are left out; results carrying a flag are
-     * marked.
+     * marked. Meant for a background job: it stops between its steps when the monitor is cancelled.
+     *
+     * @throws org.eclipse.core.runtime.OperationCanceledException when the monitor was cancelled
      */
-    public static Traces traces(WorkspaceStore store, Session actor, String projectId) {
+    public static Traces traces(WorkspaceStore store, Session actor, String projectId, IProgressMonitor monitor) {
+        SubMonitor progress = SubMonitor.convert(monitor, "Reading stored results", 3);
+        progress.split(1);
         Map<String, Instant> times = new HashMap<>();
         for (MeasurementInfo m : store.projects().measurements(actor, projectId)) {
             times.put(m.id(), m.time());
         }
+        progress.split(1);
+        List<ResultInfo> results = store.results().results(actor, projectId);
+        progress.split(1);
         Map<String, List<Point>> byCompound = new LinkedHashMap<>();
         Instant start = null;
-        for (ResultInfo r : store.results().results(actor, projectId)) {
+        for (ResultInfo r : results) {
             Instant t = r.values().measurementId() == null ? null : times.get(r.values().measurementId());
             if (t != null) {
                 byCompound.computeIfAbsent(r.values().compound(), k -> new ArrayList<>()).add(new Point(t, r));

@@ -1,7 +1,12 @@
 package org.tracegas.ui.session;
 
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
+
+import org.eclipse.core.runtime.IProgressMonitor;
+import org.eclipse.core.runtime.OperationCanceledException;
+import org.eclipse.core.runtime.SubMonitor;
 
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.Client;
@@ -29,25 +34,40 @@ public final class StoredWorkspace {
     private StoredWorkspace() {
     }
 
-    /** Reads the clients, projects and measurements visible to {@code actor}, and the libraries and methods. */
-    public static Workspace load(WorkspaceStore store, Session actor, String name) {
+    /**
+     * Reads the clients, projects and measurements visible to {@code actor}, and the libraries and methods.
+     * Meant for a background job: it reports one step per project and stops between steps when cancelled.
+     *
+     * @throws org.eclipse.core.runtime.OperationCanceledException when the monitor was cancelled
+     */
+    public static Workspace load(WorkspaceStore store, Session actor, String name, IProgressMonitor monitor) {
+        SubMonitor progress = SubMonitor.convert(monitor, "Reading the workspace " + name, 100);
         WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
         Workspace w = f.createWorkspace();
         w.setName(name);
         Map<String, Client> clients = new HashMap<>();
-        for (ClientInfo info : store.projects().clients(actor)) {
+        List<ClientInfo> clientInfos = store.projects().clients(actor);
+        List<ProjectInfo> projectInfos = store.projects().projects(actor);
+        progress.worked(5);
+        for (ClientInfo info : clientInfos) {
             Client c = f.createClient();
             c.setId(info.id());
             c.setName(info.name());
             clients.put(info.id(), c);
             w.getClients().add(c);
         }
-        for (ProjectInfo info : store.projects().projects(actor)) {
+        SubMonitor perProject = progress.split(90).setWorkRemaining(Math.max(1, projectInfos.size()));
+        for (ProjectInfo info : projectInfos) {
+            perProject.subTask(info.code());
+            SubMonitor step = perProject.split(1);
             Project p = f.createProject();
             p.setId(info.id());
             p.setCode(info.code());
             p.setName(info.name());
             for (MeasurementInfo mi : store.projects().measurements(actor, info.id())) {
+                if (p.getMeasurements().size() % 500 == 0 && step.isCanceled()) {
+                    throw new OperationCanceledException();
+                }
                 Measurement m = f.createMeasurement();
                 m.setId(mi.id());
                 m.setKind(mi.kind());
@@ -57,7 +77,9 @@ public final class StoredWorkspace {
                 p.getMeasurements().add(m);
             }
             clients.get(info.clientId()).getProjects().add(p);
+            step.done();
         }
+        progress.split(5);
         for (VersionInfo v : store.versions().latest(VersionKind.LIBRARY)) {
             ReferenceLibrary l = f.createReferenceLibrary();
             l.setId(v.itemId());

@@ -4,7 +4,10 @@ import java.nio.file.Path;
 import java.sql.Connection;
 import java.sql.SQLException;
 
+import javax.sql.DataSource;
+
 import org.h2.jdbcx.JdbcDataSource;
+import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -15,38 +18,52 @@ import org.tracegas.store.Workspaces;
  */
 public final class WorkspaceAccess implements AutoCloseable {
 
-    private final Path folder;
+    private final WorkspaceLocation location;
     private final WorkspaceStore store;
-    private final JdbcDataSource auditSource;
+    private final DataSource auditSource;
 
-    private WorkspaceAccess(Path folder, WorkspaceStore store, JdbcDataSource auditSource) {
-        this.folder = folder;
+    private WorkspaceAccess(WorkspaceLocation location, WorkspaceStore store, DataSource auditSource) {
+        this.location = location;
         this.store = store;
         this.auditSource = auditSource;
     }
 
     /**
-     * Opens (or creates) the embedded workspace in {@code folder}; its database lives in {@code folder/db}, as
-     * for the headless runner, so both open the same workspace folder.
+     * Opens (or creates) the workspace at {@code location}: the embedded database of a folder, or the lab
+     * server, whose schema is created or migrated on opening.
      *
-     * @throws org.tracegas.store.StoreException if the database cannot be opened
+     * @throws org.tracegas.store.StoreException if the database cannot be opened or reached
      */
-    public static WorkspaceAccess openH2(Path folder) {
-        Path database = folder.resolve("db");
+    public static WorkspaceAccess open(WorkspaceLocation location) {
+        if (location instanceof WorkspaceLocation.LabServer server) {
+            WorkspaceStore store = Workspaces.openPostgres(server.url(), server.user(), server.password());
+            PGSimpleDataSource ds = new PGSimpleDataSource();
+            ds.setURL(server.url());
+            ds.setUser(server.user());
+            ds.setPassword(server.password());
+            return new WorkspaceAccess(location, store, ds);
+        }
+        Path database = ((WorkspaceLocation.Folder) location).folder().resolve("db");
         WorkspaceStore store = Workspaces.openH2(database);
         JdbcDataSource ds = new JdbcDataSource();
-        // same URL and settings as the store uses, so this joins the database the store keeps open in this JVM
+        // the store offers no connection of its own: join the database it keeps open in this JVM with the
+        // same URL and settings
         ds.setURL("jdbc:h2:file:" + database.toAbsolutePath().resolve("workspace")
-                + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000");
-        return new WorkspaceAccess(folder, store, ds);
+                + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000;CACHE_SIZE=16384;WRITE_DELAY=0");
+        return new WorkspaceAccess(location, store, ds);
+    }
+
+    /** Opens (or creates) the embedded workspace in {@code folder} (database in {@code folder/db}). */
+    public static WorkspaceAccess openH2(Path folder) {
+        return open(new WorkspaceLocation.Folder(folder));
     }
 
     public WorkspaceStore store() {
         return store;
     }
 
-    public Path folder() {
-        return folder;
+    public WorkspaceLocation location() {
+        return location;
     }
 
     /** A new connection to the workspace database, in auto-commit mode; close it after use. */

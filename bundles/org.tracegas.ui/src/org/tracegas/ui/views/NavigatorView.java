@@ -12,6 +12,7 @@ import org.tracegas.model.Project;
 import org.tracegas.model.Workspace;
 import org.tracegas.ui.jobs.AnalysisRuns;
 import org.tracegas.ui.jobs.BatchQuantificationJob;
+import org.tracegas.ui.jobs.LatestLoad;
 import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.Desk;
 import org.tracegas.ui.session.StoredWorkspace;
@@ -22,6 +23,7 @@ public final class NavigatorView extends ViewPart {
     public static final String ID = "org.tracegas.ui.views.navigator";
 
     private WorkspaceNavigator navigator;
+    private LatestLoad<Workspace> loads;
     private final Consumer<List<BatchQuantificationJob.Outcome>> refresh = outcomes -> {
         if (!navigator.isDisposed()) {
             navigator.viewer().refresh();
@@ -30,13 +32,27 @@ public final class NavigatorView extends ViewPart {
 
     @Override
     public void createPartControl(Composite parent) {
+        createContent(parent);
+        getSite().setSelectionProvider(navigator.viewer());
+    }
+
+    /** The tree and its loading, without the workbench site (so that it can be shown in any shell). */
+    WorkspaceNavigator createContent(Composite parent) {
         navigator = new WorkspaceNavigator(parent, SWT.NONE);
+        loads = new LatestLoad<>(navigator);
         Desk desk = Desk.get();
-        // a workspace that was not fresh has no demo model: read what the signed-in user may see
-        Workspace model = desk.project() == null
-                ? StoredWorkspace.load(desk.access().store(), desk.session(), desk.access().folder().toString())
-                : desk.project().model();
-        navigator.setWorkspace(model);
+        if (desk.project() != null) {
+            navigator.setWorkspace(desk.project().model());
+        } else {
+            // a workspace that was not fresh has no demo model: read what the signed-in user may see, in the
+            // background, so that the window stays responsive on a large workspace
+            String name = desk.access().location().description();
+            navigator.showNote("Reading the " + name + " …");
+            loads.start("Reading the workspace tree",
+                    monitor -> StoredWorkspace.load(desk.access().store(), desk.session(), name, monitor),
+                    navigator::setWorkspace, message -> navigator.showNote("The workspace could not be read: "
+                            + message));
+        }
         navigator.viewer().addDoubleClickListener(e -> {
             Object o = ((IStructuredSelection) e.getSelection()).getFirstElement();
             if (o instanceof Project p && desk.project() != null && p.getId().equals(desk.project().projectId())) {
@@ -45,13 +61,16 @@ public final class NavigatorView extends ViewPart {
                         outcomes -> display.asyncExec(() -> desk.runFinished(outcomes))).schedule();
             }
         });
-        getSite().setSelectionProvider(navigator.viewer());
         desk.addRunListener(refresh);
+        return navigator;
     }
 
     @Override
     public void dispose() {
         Desk.get().removeRunListener(refresh);
+        if (loads != null) {
+            loads.cancel();
+        }
         super.dispose();
     }
 

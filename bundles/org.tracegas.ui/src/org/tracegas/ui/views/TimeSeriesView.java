@@ -13,6 +13,7 @@ import org.eclipse.ui.part.ViewPart;
 import org.tracegas.model.Project;
 import org.tracegas.ui.jobs.AnalysisRuns;
 import org.tracegas.ui.jobs.BatchQuantificationJob;
+import org.tracegas.ui.jobs.LatestLoad;
 import org.tracegas.ui.parts.TimeSeriesPanel;
 import org.tracegas.ui.session.DemoProject;
 import org.tracegas.ui.session.Desk;
@@ -27,15 +28,23 @@ public final class TimeSeriesView extends ViewPart {
     public static final String ID = "org.tracegas.ui.views.timeSeries";
 
     private TimeSeriesPanel panel;
+    private LatestLoad<StoredResults.Traces> loads;
     private final Consumer<List<BatchQuantificationJob.Outcome>> listener = this::show;
     private final ISelectionListener projectListener = this::selected;
 
     @Override
     public void createPartControl(Composite parent) {
+        createContent(parent);
+        getSite().getPage().addSelectionListener(NavigatorView.ID, projectListener);
+    }
+
+    /** The panel and its feeds, without the workbench site (so that it can be shown in any shell). */
+    TimeSeriesPanel createContent(Composite parent) {
         panel = new TimeSeriesPanel(parent, SWT.NONE);
+        loads = new LatestLoad<>(panel);
         show(Desk.get().lastRun());
         Desk.get().addRunListener(listener);
-        getSite().getPage().addSelectionListener(NavigatorView.ID, projectListener);
+        return panel;
     }
 
     private void show(List<BatchQuantificationJob.Outcome> outcomes) {
@@ -43,25 +52,39 @@ public final class TimeSeriesView extends ViewPart {
         if (outcomes.isEmpty() || p == null || panel.isDisposed()) {
             return;
         }
+        loads.cancel(); // a run that finishes now is newer than any stored results still being read
         panel.show("Concentrations of " + DemoProject.PROJECT_CODE + ", hours from the first measurement",
                 AnalysisRuns.traces(outcomes, p.measurementTimes(), p.measurementTimes().get(0)), List.of());
     }
 
-    private void selected(IWorkbenchPart part, ISelection selection) {
+    /** Reads the selected project's stored results in the background; a later selection wins. */
+    void selected(IWorkbenchPart part, ISelection selection) {
         if (panel.isDisposed() || !(selection instanceof IStructuredSelection s)
                 || !(s.getFirstElement() instanceof Project project)) {
             return;
         }
         Desk desk = Desk.get();
-        StoredResults.Traces stored = StoredResults.traces(desk.access().store(), desk.session(), project.getId());
-        if (!stored.traces().isEmpty()) {
-            panel.show(StoredResults.title(project.getCode(), stored), stored.traces(), List.of());
+        String id = project.getId();
+        String code = project.getCode();
+        panel.showNote("Reading the stored results of " + code + " …");
+        loads.start("Reading the stored results of " + code,
+                monitor -> StoredResults.traces(desk.access().store(), desk.session(), id, monitor),
+                stored -> showStored(stored, code),
+                message -> panel.showNote("The stored results of " + code + " could not be read: " + message));
+    }
+
+    private void showStored(StoredResults.Traces stored, String code) {
+        if (stored.traces().isEmpty()) {
+            panel.showNote("No stored results for " + code + " yet.");
+        } else {
+            panel.show(StoredResults.title(code, stored), stored.traces(), List.of());
         }
     }
 
     @Override
     public void dispose() {
         getSite().getPage().removeSelectionListener(NavigatorView.ID, projectListener);
+        loads.cancel();
         Desk.get().removeRunListener(listener);
         super.dispose();
     }
