@@ -35,6 +35,10 @@ import org.tracegas.qa.checks.SpikeGas;
 import org.tracegas.qa.checks.SpikeRecoveryCheck;
 import org.tracegas.qa.checks.SpikedSample;
 import org.tracegas.qa.checks.ZeroSpanCheck;
+import org.tracegas.qa.control.ChartEvaluation;
+import org.tracegas.qa.control.ControlChartCheck;
+import org.tracegas.qa.control.ShewhartChart;
+import org.tracegas.qa.uncertainty.BasisConversion;
 import org.tracegas.qa.uncertainty.FtirResultBudget;
 import org.tracegas.qa.uncertainty.UncertaintyBudget;
 
@@ -126,6 +130,9 @@ final class CampaignFixture {
                 CO_HALF_HOUR_LIMIT));
         b.timeSeries(timePlot("HCl, 1-minute values and 30-minute averages", hclBasis, hclHalfHours, 0));
         b.spectrum(hclSpectrum(new Random(7L)));
+        b.controlChart(zeroChart(b));
+        b.budget(UncertaintyTable.of("CO at 70 ppm wet, 11 % H2O, 8.5 % O2 dry", BUDGET.budgetOnBasis("CO", 70,
+                2.8, 453.15, 101.3, new BasisConversion(0.11, 0.004, 8.5, 0.2, false, 10))));
         b.caution("Kiln 2 ran with a firing upset on 2026-03-02 from 21:00 to 21:40 UTC (plant log).");
         return b;
     }
@@ -161,6 +168,28 @@ final class CampaignFixture {
         b.qa(QaLine.of(zs.zero("CO", 0.4)));
         b.qa(QaLine.of(zs.span("CO", 80.9, 80.2)));
         b.qa(QaLine.of(zs.span("NH3", 48.1, 49.7)));
+    }
+
+    /**
+     * The zero readings of the CO channel over this campaign's 12 checks against the latest 10 of earlier
+     * campaigns (invented readings), as a chart with its check line.
+     */
+    private static Plot zeroChart(ReportContent.Builder b) {
+        double[] earlier = {0.12, -0.05, 0.08, 0.02, -0.10, 0.04, 0.15, -0.02, 0.06, -0.07};
+        double[] readings = {0.03, 0.10, -0.04, 0.07, 0.12, 0.18, 0.22, 0.19, 0.26, 0.31, 0.28, 0.35};
+        ChartEvaluation e = new ControlChartCheck("Zero CO", "ppm", 10).evaluate(earlier, readings).orElseThrow();
+        b.qa(QaLine.of(e.outcome()));
+        double[] x = new double[readings.length];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = i + 1;
+        }
+        double[] sx = e.signals().stream().mapToDouble(s -> s.index() + 1).distinct().toArray();
+        double[] sy = java.util.Arrays.stream(sx).map(v -> readings[(int) v - 1]).toArray();
+        ShewhartChart c = e.chart();
+        return new Plot("Zero CO, readings of this campaign", "Reading", "ppm", List.of(new Series("reading", x,
+                readings), Series.points("signal", sx, sy)), false, List.of(new Level("centre", c.centre()),
+                new Level("+3 sigma", c.upperActionLimit()), new Level("-3 sigma", c.lowerActionLimit()),
+                new Level("+2 sigma", c.upperWarningLimit()), new Level("-2 sigma", c.lowerWarningLimit())));
     }
 
     private static void addRows(ReportContent.Builder b, String compound, String period, List<PeriodAverage> averages,

@@ -68,9 +68,10 @@ class PdfReportWriterTest {
             // the NH3 span reads 48.1 on 49.7 ppm: -3.2 %, outside ±2 %
             assertTrue(t.contains("FAIL"));
             assertTrue(t.contains("-3.219 %"), "measured NH3 span drift");
+            // and the zero chart: the CO zero drifts upwards through the campaign and signals
             long failed = content.qa().stream().filter(q -> !q.passed()).count();
-            assertEquals(1, failed);
-            assertTrue(t.contains("9 checks, 8 passed, 1 failed."));
+            assertEquals(2, failed);
+            assertTrue(t.contains("10 checks, 8 passed, 2 failed."));
         }
     }
 
@@ -104,8 +105,25 @@ class PdfReportWriterTest {
                 CampaignFixture.START, SignatureMeaning.APPROVAL, CampaignFixture.sha256("an earlier draft")));
         try (PDDocument doc = Loader.loadPDF(new PdfReportWriter().write(c))) {
             String t = text(doc, doc.getNumberOfPages() - 1, doc.getNumberOfPages());
-            assertTrue(t.contains("NO: the signed content differs from this report"));
+            assertTrue(t.contains("NO: signed an earlier version"), t);
+            assertTrue(t.contains("Not yet approved"));
             assertTrue(t.contains("Not yet reviewed"));
+        }
+    }
+
+    @Test
+    void showsControlChartBudgetRowsAndTheAuditAnchor() throws IOException {
+        String hash = CampaignFixture.sha256("audit record 4711");
+        ReportContent anchored = content.withAuditAnchor(new AuditAnchor(4711, hash));
+        assertEquals(content.contentHash(), anchored.contentHash(), "the anchor is not content");
+        try (PDDocument doc = Loader.loadPDF(new PdfReportWriter().write(anchored))) {
+            String t = text(doc, 1, doc.getNumberOfPages());
+            assertTrue(t.contains("Control charts of repeated QA readings"));
+            assertTrue(t.contains("Control chart: Zero CO"));
+            assertTrue(t.contains("Uncertainty budget: CO"));
+            assertTrue(t.contains("H2O for wet-to-dry"));
+            assertTrue(t.contains("O2 for reference-O2 correction"));
+            assertTrue(t.contains("Last audit record 4711") && t.contains(hash), "anchor printed");
         }
     }
 

@@ -18,16 +18,28 @@ class ReportContentTest {
         assertEquals(unsigned.contentHash(), reviewed.contentHash());
         assertEquals(64, unsigned.contentHash().length());
         assertNotEquals(unsigned.contentHash(), CampaignFixture.unsigned().caution("extra").build().contentHash());
-        assertTrue(reviewed.signature(SignatureMeaning.REVIEW).isPresent());
-        assertTrue(reviewed.signature(SignatureMeaning.APPROVAL).isEmpty());
+        assertEquals(1, reviewed.signatures(SignatureMeaning.REVIEW).size());
+        assertTrue(reviewed.signatures(SignatureMeaning.APPROVAL).isEmpty());
     }
 
     @Test
-    void secondReviewIsRejected() {
+    void signaturesOnEarlierContentAreKeptBesideTheCurrentOne() {
         ReportContent reviewed = CampaignFixture.reviewed();
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> reviewed.withSignature(
-                new Signature("B. Second", Instant.EPOCH, SignatureMeaning.REVIEW, reviewed.contentHash())));
-        assertTrue(e.getMessage().contains("more than one review"), e.getMessage());
+        ReportContent twice = reviewed.withSignature(new Signature("B. Second", Instant.EPOCH,
+                SignatureMeaning.REVIEW, CampaignFixture.sha256("an earlier issue")));
+        assertEquals(2, twice.signatures(SignatureMeaning.REVIEW).size());
+        assertEquals(reviewed.contentHash(), twice.contentHash());
+    }
+
+    @Test
+    void theContentHashIsTheSha256OfTheCanonicalContent() throws Exception {
+        ReportContent c = CampaignFixture.unsigned().build();
+        // SHA-256 of the bytes a signer signs (FIPS 180-4 via the platform's MessageDigest)
+        String sha = java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256")
+                .digest(c.canonicalContent()));
+        assertEquals(sha, c.contentHash());
+        assertTrue(java.util.Arrays.equals(c.canonicalContent(), CampaignFixture.unsigned().build()
+                .canonicalContent()), "the same content gives the same bytes");
     }
 
     @Test

@@ -20,6 +20,7 @@ import org.apache.pdfbox.cos.COSString;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.tracegas.qa.uncertainty.BudgetRow;
 import org.tracegas.report.internal.Check;
 import org.tracegas.report.internal.Numbers;
 import org.tracegas.report.internal.PageWriter;
@@ -49,6 +50,7 @@ public final class PdfReportWriter {
             .withZone(ZoneOffset.UTC);
     private static final float PLOT_HEIGHT = 230;
     private static final float RESIDUAL_HEIGHT = 130;
+    private static final float CHART_HEIGHT = 170;
     private static final Set<String> ALARMS = Set.of("FAIL", "EXCEEDED");
 
     /** The report as PDF bytes. */
@@ -157,7 +159,7 @@ public final class PdfReportWriter {
                 new Column("Version", 195, false)), 8, ALARMS).draw(pw, libRows);
     }
 
-    private static void qa(PageWriter pw, ReportContent content) {
+    private static void qa(PageWriter pw, ReportContent content) throws IOException {
         pw.heading("4  Quality assurance summary", 90);
         long failed = content.qa().stream().filter(q -> !q.passed()).count();
         pw.paragraph(content.qa().size() + " checks, " + (content.qa().size() - failed) + " passed, " + failed
@@ -170,6 +172,14 @@ public final class PdfReportWriter {
         new TableRenderer(List.of(new Column("Check", 85, false), new Column("Result", 34, false),
                 new Column("Measured", 55, true), new Column("Limits", 66, true), new Column("Rule and source", 255,
                         false)), 7.5f, ALARMS).draw(pw, rows);
+        if (!content.controlCharts().isEmpty()) {
+            pw.subheading("Control charts of repeated QA readings");
+            pw.paragraph("Readings in order, centre line and warning (2 sigma) and action (3 sigma) limits; marked "
+                    + "readings signal under the rule of the chart's check above.", 9f);
+            for (Plot p : content.controlCharts()) {
+                plot(pw, p, CHART_HEIGHT);
+            }
+        }
     }
 
     private static void results(PageWriter pw, ReportContent content) {
@@ -190,6 +200,28 @@ public final class PdfReportWriter {
                 new Column("U (k=2)", 42, true),
                 new Column("Unit", 36, false), new Column("Flags", 100, false), new Column("Limit", 40, true),
                 new Column("Limit status", 61, false)), 7.5f, ALARMS).draw(pw, rows);
+        for (UncertaintyTable t : content.budgets()) {
+            budget(pw, t);
+        }
+    }
+
+    /** One GUM budget: inputs with c_i and contributions, then u_c and U. */
+    private static void budget(PageWriter pw, UncertaintyTable t) {
+        pw.ensure(60 + 12 * t.rows().size());
+        pw.subheading("Uncertainty budget: " + t.title());
+        List<String[]> rows = new ArrayList<>();
+        for (BudgetRow r : t.rows()) {
+            rows.add(new String[] {r.name(), Numbers.significant(r.estimate()), Numbers.significant(
+                    r.standardUncertainty()), r.unit(), Numbers.significant(r.sensitivity()),
+                    Numbers.significant(r.contribution()), String.format(Locale.ROOT, "%.1f", r.sharePercent())});
+        }
+        rows.add(new String[] {"combined u_c", "", "", "", "", Numbers.significant(t.combined()), "100.0"});
+        rows.add(new String[] {"expanded U (k = " + Numbers.significant(t.coverage()) + ")", "", "", "", "",
+                Numbers.significant(t.expanded()), ""});
+        new TableRenderer(List.of(new Column("Input x_i", 140, false), new Column("Estimate", 55, true),
+                new Column("u(x_i)", 50, true), new Column("Unit", 45, false), new Column("c_i", 60, true),
+                new Column("|c_i u(x_i)| " + t.unit(), 95, true), new Column("Share %", 50, true)), 7.5f, ALARMS)
+                .draw(pw, rows);
     }
 
     private static void timeSeries(PageWriter pw, ReportContent content) throws IOException {
@@ -230,7 +262,8 @@ public final class PdfReportWriter {
                 9f);
         for (SignatureMeaning m : SignatureMeaning.values()) {
             pw.subheading(m.noun());
-            content.signature(m).ifPresentOrElse(s -> {
+            List<Signature> given = content.signatures(m);
+            for (Signature s : given) {
                 boolean matches = s.signedContentHash().equals(content.contentHash());
                 List<String[]> rows = new ArrayList<>();
                 rows.add(new String[] {m.pastTense() + " by", s.printedName()});
@@ -240,11 +273,23 @@ public final class PdfReportWriter {
                         : "Approval: the report is released"});
                 rows.add(new String[] {"Signed content hash", s.signedContentHash()});
                 rows.add(new String[] {"Applies to this content", matches ? "yes"
-                        : "NO: the signed content differs from this report"});
+                        : "NO: signed an earlier version; the content changed since, so this signature does not "
+                                + "apply to this report"});
                 pw.keyValues(rows, 130);
-            }, () -> pw.paragraph("Not yet " + m.pastTense().toLowerCase(Locale.ROOT) + ". This report has no "
-                    + m.noun().toLowerCase(Locale.ROOT) + " signature; do not use its results before it is "
-                    + m.pastTense().toLowerCase(Locale.ROOT) + ".", 9.5f, pw.left(), pw.width(), pw.bold()));
+            }
+            if (given.stream().noneMatch(s -> s.signedContentHash().equals(content.contentHash()))) {
+                pw.paragraph("Not yet " + m.pastTense().toLowerCase(Locale.ROOT) + ". This report has no "
+                        + m.noun().toLowerCase(Locale.ROOT) + " signature on its content; do not use its results "
+                        + "before it is " + m.pastTense().toLowerCase(Locale.ROOT) + ".", 9.5f, pw.left(), pw.width(),
+                        pw.bold());
+            }
         }
+        content.auditAnchor().ifPresent(a -> {
+            pw.subheading("Audit trail at report time");
+            pw.keyValues(List.of(new String[] {"Last audit record", Long.toString(a.sequence())},
+                    new String[] {"Its chain hash", a.hash()}), 130);
+            pw.paragraph("Verifying the workspace's audit trail against this record and hash reveals any later "
+                    + "rewrite of the trail up to it.", 9f);
+        });
     }
 }

@@ -12,8 +12,10 @@ import org.tracegas.report.internal.Check;
  * @param yLabel    y axis label with unit
  * @param series    curves, at least one
  * @param reversedX whether x decreases to the right (wavenumber axes of infrared spectra)
+ * @param levels    labelled horizontal lines (limits, centre line), drawn dashed
  */
-public record Plot(String title, String xLabel, String yLabel, List<Series> series, boolean reversedX) {
+public record Plot(String title, String xLabel, String yLabel, List<Series> series, boolean reversedX,
+        List<Level> levels) {
 
     public Plot {
         Check.text("plot title", title);
@@ -23,5 +25,11 @@ public record Plot(String title, String xLabel, String yLabel, List<Series> seri
         if (series.isEmpty()) {
             throw new IllegalArgumentException("plot " + title + " needs at least one series");
         }
+        levels = Check.list("levels", levels);
+    }
+
+    /** A plot without horizontal lines. */
+    public Plot(String title, String xLabel, String yLabel, List<Series> series, boolean reversedX) {
+        this(title, xLabel, yLabel, series, reversedX, List.of());
     }
 }

@@ -8,8 +8,9 @@ import org.tracegas.report.internal.Check;
 import org.tracegas.report.internal.ContentDigest;
 
 /**
- * Everything a campaign report shows, as an immutable value built from plain data. Signatures are not part
- * of the {@link #contentHash() content hash}: they sign it.
+ * Everything a campaign report shows, as an immutable value built from plain data. Signatures and the audit
+ * anchor are not part of the {@link #contentHash() content hash}: signatures sign it, and the anchor moves with
+ * every new audit record.
  */
 public final class ReportContent {
 
@@ -17,11 +18,15 @@ public final class ReportContent {
     private final List<MethodVersion> methods;
     private final List<LibraryVersion> libraries;
     private final List<QaLine> qa;
+    private final List<Plot> controlCharts;
+    private final List<UncertaintyTable> budgets;
     private final List<ResultRow> results;
     private final List<Plot> timeSeries;
     private final List<SpectrumFit> spectra;
     private final List<String> cautions;
     private final List<Signature> signatures;
+    private final AuditAnchor auditAnchor;
+    private final byte[] canonical;
     private final String contentHash;
 
     private ReportContent(Builder b) {
@@ -29,17 +34,17 @@ public final class ReportContent {
         methods = Check.list("methods", b.methods);
         libraries = Check.list("libraries", b.libraries);
         qa = Check.list("qa", b.qa);
+        controlCharts = Check.list("controlCharts", b.controlCharts);
+        budgets = Check.list("budgets", b.budgets);
         results = Check.list("results", b.results);
         timeSeries = Check.list("timeSeries", b.timeSeries);
         spectra = Check.list("spectra", b.spectra);
         cautions = Check.list("cautions", b.cautions);
         signatures = Check.list("signatures", b.signatures);
-        for (SignatureMeaning m : SignatureMeaning.values()) {
-            if (signatures.stream().filter(s -> s.meaning() == m).count() > 1) {
-                throw new IllegalArgumentException("signatures hold more than one " + m.noun().toLowerCase());
-            }
-        }
-        contentHash = digest();
+        auditAnchor = b.auditAnchor;
+        ContentDigest d = digest();
+        canonical = d.bytes();
+        contentHash = d.hex();
     }
 
     public static Builder builder(Campaign campaign) {
@@ -60,6 +65,16 @@ public final class ReportContent {
 
     public List<QaLine> qa() {
         return qa;
+    }
+
+    /** Control charts of repeated QA readings. */
+    public List<Plot> controlCharts() {
+        return controlCharts;
+    }
+
+    /** Uncertainty budgets behind the expanded uncertainties of the results. */
+    public List<UncertaintyTable> budgets() {
+        return budgets;
     }
 
     public List<ResultRow> results() {
@@ -83,13 +98,34 @@ public final class ReportContent {
         return signatures;
     }
 
-    public Optional<Signature> signature(SignatureMeaning meaning) {
-        return signatures.stream().filter(s -> s.meaning() == meaning).findFirst();
+    /** The signatures of one meaning, in the order added; those on other content included. */
+    public List<Signature> signatures(SignatureMeaning meaning) {
+        return signatures.stream().filter(s -> s.meaning() == meaning).toList();
     }
 
-    /** SHA-256 (hex) of all content except the signatures. */
+    /** The audit chain's last record when the report was made, if known. */
+    public Optional<AuditAnchor> auditAnchor() {
+        return Optional.ofNullable(auditAnchor);
+    }
+
+    /** SHA-256 (hex) of the {@link #canonicalContent() canonical content}. */
     public String contentHash() {
         return contentHash;
+    }
+
+    /**
+     * All content except the signatures and the audit anchor as canonical bytes: every field in a fixed order,
+     * each preceded by its length. This is what a signature signs.
+     */
+    public byte[] canonicalContent() {
+        return canonical.clone();
+    }
+
+    /** The same content with the audit anchor taken when the report was made. */
+    public ReportContent withAuditAnchor(AuditAnchor anchor) {
+        Builder b = toBuilder();
+        b.auditAnchor = Check.notNull("anchor", anchor);
+        return b.build();
     }
 
     /** The same content with one more signature. */
@@ -104,16 +140,19 @@ public final class ReportContent {
         b.methods.addAll(methods);
         b.libraries.addAll(libraries);
         b.qa.addAll(qa);
+        b.controlCharts.addAll(controlCharts);
+        b.budgets.addAll(budgets);
         b.results.addAll(results);
         b.timeSeries.addAll(timeSeries);
         b.spectra.addAll(spectra);
         b.cautions.addAll(cautions);
         b.signatures.addAll(signatures);
+        b.auditAnchor = auditAnchor;
         return b;
     }
 
     // fields one by one rather than record toString(), whose format the platform does not fix
-    private String digest() {
+    private ContentDigest digest() {
         Campaign c = campaign;
         ContentDigest d = new ContentDigest().add(c.reportId()).add(c.client()).add(c.plant()).add(c.source())
                 .add(c.firstDay()).add(c.lastDay()).add(c.issued()).add(c.reportingBasis());
@@ -124,6 +163,15 @@ public final class ReportContent {
         d.add(qa.size());
         qa.forEach(q -> d.add(q.check()).add(q.passed()).add(q.measured()).add(q.limits()).add(q.rule())
                 .add(q.source()));
+        d.add(controlCharts.size());
+        controlCharts.forEach(p -> digestPlot(d, p));
+        d.add(budgets.size());
+        for (UncertaintyTable t : budgets) {
+            d.add(t.title()).add(t.value()).add(t.unit()).add(t.combined()).add(t.coverage()).add(t.expanded())
+                    .add(t.rows().size());
+            t.rows().forEach(r -> d.add(r.name()).add(r.estimate()).add(r.standardUncertainty()).add(r.unit())
+                    .add(r.sensitivity()).add(r.contribution()).add(r.sharePercent()));
+        }
         d.add(results.size());
         for (ResultRow r : results) {
             d.add(r.compound()).add(r.period()).add(r.periodStart()).add(r.value()).add(r.expandedUncertainty())
@@ -141,14 +189,16 @@ public final class ReportContent {
         }
         d.add(cautions.size());
         cautions.forEach(d::add);
-        return d.hex();
+        return d;
     }
 
     private static void digestPlot(ContentDigest d, Plot p) {
         d.add(p.title()).add(p.xLabel()).add(p.yLabel()).add(p.reversedX()).add(p.series().size());
         for (Series s : p.series()) {
-            d.add(s.name()).add(s.x()).add(s.y());
+            d.add(s.name()).add(s.pointsOnly()).add(s.x()).add(s.y());
         }
+        d.add(p.levels().size());
+        p.levels().forEach(l -> d.add(l.name()).add(l.value()));
     }
 
     /** Collects the parts of a report; lists keep the order they are added in. */
@@ -157,11 +207,14 @@ public final class ReportContent {
         private final List<MethodVersion> methods = new ArrayList<>();
         private final List<LibraryVersion> libraries = new ArrayList<>();
         private final List<QaLine> qa = new ArrayList<>();
+        private final List<Plot> controlCharts = new ArrayList<>();
+        private final List<UncertaintyTable> budgets = new ArrayList<>();
         private final List<ResultRow> results = new ArrayList<>();
         private final List<Plot> timeSeries = new ArrayList<>();
         private final List<SpectrumFit> spectra = new ArrayList<>();
         private final List<String> cautions = new ArrayList<>();
         private final List<Signature> signatures = new ArrayList<>();
+        private AuditAnchor auditAnchor;
 
         private Builder(Campaign campaign) {
             this.campaign = campaign;
@@ -179,6 +232,16 @@ public final class ReportContent {
 
         public Builder qa(QaLine line) {
             qa.add(line);
+            return this;
+        }
+
+        public Builder controlChart(Plot chart) {
+            controlCharts.add(chart);
+            return this;
+        }
+
+        public Builder budget(UncertaintyTable table) {
+            budgets.add(table);
             return this;
         }
 

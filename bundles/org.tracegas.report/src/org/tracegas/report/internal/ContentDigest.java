@@ -1,30 +1,23 @@
 package org.tracegas.report.internal;
 
+import java.io.ByteArrayOutputStream;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.security.NoSuchAlgorithmException;
 import java.util.HexFormat;
 
 /**
- * SHA-256 over a sequence of fields. Each field is fed with its length first, so that no two different
- * field sequences give the same byte stream.
+ * The canonical bytes of a sequence of fields and their SHA-256. Each field is written with its length first,
+ * so that no two different field sequences give the same byte stream.
  */
 public final class ContentDigest {
 
-    private final MessageDigest sha;
-
-    public ContentDigest() {
-        try {
-            sha = MessageDigest.getInstance("SHA-256");
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
-        }
-    }
+    private final ByteArrayOutputStream bytes = new ByteArrayOutputStream();
 
     public ContentDigest add(String field) {
         byte[] b = String.valueOf(field).getBytes(StandardCharsets.UTF_8);
-        sha.update((b.length + ":").getBytes(StandardCharsets.US_ASCII));
-        sha.update(b);
+        bytes.writeBytes((b.length + ":").getBytes(StandardCharsets.US_ASCII));
+        bytes.writeBytes(b);
         return this;
     }
 
@@ -44,8 +37,17 @@ public final class ContentDigest {
         return add(String.valueOf(value));
     }
 
-    /** Lower-case hex of the digest; the digest cannot be used afterwards. */
+    /** The canonical bytes written so far. */
+    public byte[] bytes() {
+        return bytes.toByteArray();
+    }
+
+    /** Lower-case hex of the SHA-256 of the canonical bytes. */
     public String hex() {
-        return HexFormat.of().formatHex(sha.digest());
+        try {
+            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes.toByteArray()));
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is required of every Java platform", e);
+        }
     }
 }

@@ -7,6 +7,7 @@ import java.util.List;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.font.PDFont;
 import org.apache.pdfbox.util.Matrix;
+import org.tracegas.report.Level;
 import org.tracegas.report.Plot;
 import org.tracegas.report.Series;
 
@@ -46,6 +47,7 @@ public final class PlotRenderer {
         text(cs, bold, 9, x, y + h - 10, plot.title());
         grid(cs, plot, xs, ys, px, py, pw, ph);
         curves(cs, plot, xs, ys, px, py, pw, ph);
+        levels(cs, plot, ys, px, py, pw, ph);
         cs.setStrokingColor(0f);
         cs.setLineWidth(0.7f);
         cs.addRect(px, py, pw, ph);
@@ -72,6 +74,10 @@ public final class PlotRenderer {
                 r[2] = Math.min(r[2], v);
                 r[3] = Math.max(r[3], v);
             }
+        }
+        for (Level l : plot.levels()) {
+            r[2] = Math.min(r[2], l.value());
+            r[3] = Math.max(r[3], l.value());
         }
         return r;
     }
@@ -111,11 +117,37 @@ public final class PlotRenderer {
             float[] c = COLOURS[s % COLOURS.length];
             cs.setStrokingColor(c[0], c[1], c[2]);
             float[][] pts = points(plot, series.get(s), xs, ys, px, py, pw, ph);
+            if (series.get(s).pointsOnly()) {
+                cs.setNonStrokingColor(c[0], c[1], c[2]);
+                for (float[] p : pts) {
+                    cs.addRect(p[0] - 2.2f, p[1] - 2.2f, 4.4f, 4.4f);
+                }
+                cs.fill();
+                cs.setNonStrokingColor(0f);
+                continue;
+            }
             cs.moveTo(pts[0][0], pts[0][1]);
             for (int i = 1; i < pts.length; i++) {
                 cs.lineTo(pts[i][0], pts[i][1]);
             }
             cs.stroke();
+        }
+        cs.restoreGraphicsState();
+    }
+
+    /** Dashed horizontal lines with their names at the left end (the legend sits at the right), above the line. */
+    private void levels(PDPageContentStream cs, Plot plot, AxisScale ys, float px, float py, float pw, float ph)
+            throws IOException {
+        cs.saveGraphicsState();
+        cs.setLineWidth(0.6f);
+        cs.setStrokingColor(0.35f);
+        cs.setLineDashPattern(new float[] {3f, 2f}, 0);
+        for (Level l : plot.levels()) {
+            float gy = py + (float) (ys.fraction(l.value()) * ph);
+            cs.moveTo(px, gy);
+            cs.lineTo(px + pw, gy);
+            cs.stroke();
+            text(cs, regular, 6.5f, px + 3, gy + 1.5f, l.name());
         }
         cs.restoreGraphicsState();
     }
@@ -179,11 +211,18 @@ public final class PlotRenderer {
         for (int s = 0; s < plot.series().size(); s++) {
             float ly = by + boxH - 8 - s * 10;
             float[] c = COLOURS[s % COLOURS.length];
-            cs.setStrokingColor(c[0], c[1], c[2]);
-            cs.setLineWidth(1.2f);
-            cs.moveTo(bx + 4, ly + 2.5f);
-            cs.lineTo(bx + 18, ly + 2.5f);
-            cs.stroke();
+            if (plot.series().get(s).pointsOnly()) {
+                cs.setNonStrokingColor(c[0], c[1], c[2]);
+                cs.addRect(bx + 8.8f, ly + 0.3f, 4.4f, 4.4f);
+                cs.fill();
+                cs.setNonStrokingColor(0f);
+            } else {
+                cs.setStrokingColor(c[0], c[1], c[2]);
+                cs.setLineWidth(1.2f);
+                cs.moveTo(bx + 4, ly + 2.5f);
+                cs.lineTo(bx + 18, ly + 2.5f);
+                cs.stroke();
+            }
             text(cs, regular, size, bx + 22, ly, plot.series().get(s).name());
         }
         cs.setStrokingColor(0f);
