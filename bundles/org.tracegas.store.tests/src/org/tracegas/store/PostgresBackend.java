@@ -40,6 +40,19 @@ final class PostgresBackend implements TestBackend {
         return connect(schemaUrl());
     }
 
+    /** The JDBC URL of this test's schema, for a child process. */
+    String url() {
+        return schemaUrl();
+    }
+
+    String user() {
+        return USER;
+    }
+
+    String password() {
+        return PASSWORD;
+    }
+
     private static Connection connect(String url) throws SQLException {
         PGSimpleDataSource ds = new PGSimpleDataSource();
         ds.setURL(url);
