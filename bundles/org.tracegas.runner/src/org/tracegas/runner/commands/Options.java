@@ -31,6 +31,26 @@ final class Options {
         return new Options(values);
     }
 
+    /**
+     * Takes every value of an option that may repeat out of a command line.
+     *
+     * @param rest receives the other arguments, in order
+     */
+    static List<Path> repeated(List<String> arguments, String name, List<String> rest) throws UsageException {
+        List<Path> values = new java.util.ArrayList<>();
+        for (int i = 0; i < arguments.size(); i++) {
+            if (arguments.get(i).equals(name)) {
+                if (i + 1 >= arguments.size()) {
+                    throw new UsageException("option " + name + " needs a value");
+                }
+                values.add(Path.of(arguments.get(++i)).toAbsolutePath());
+            } else {
+                rest.add(arguments.get(i));
+            }
+        }
+        return values;
+    }
+
     boolean has(String name) {
         return values.containsKey(name);
     }

@@ -10,7 +10,13 @@ import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.commands.AuditVerifyCommand;
 import org.tracegas.runner.commands.DemoCommand;
 import org.tracegas.runner.commands.ImportCommand;
+import org.tracegas.runner.commands.LibraryAddCommand;
+import org.tracegas.runner.commands.LibraryBuildCommand;
+import org.tracegas.runner.commands.MethodDefineCommand;
 import org.tracegas.runner.commands.ProjectAddCommand;
+import org.tracegas.runner.commands.QaCommand;
+import org.tracegas.runner.commands.QuantifyCommand;
+import org.tracegas.runner.commands.ReportCommand;
 import org.tracegas.runner.commands.UserAddCommand;
 import org.tracegas.runner.commands.WorkspaceInitCommand;
 import org.tracegas.importer.ReaderRegistry;
@@ -27,7 +33,9 @@ public final class RunnerApplication implements IApplication {
         String version = FrameworkUtil.getBundle(getClass()).getVersion().toString();
         CommandTable table = new CommandTable(version, List.of(new DemoCommand(cancel), new AuditVerifyCommand(),
                 new WorkspaceInitCommand(), new UserAddCommand(), new ProjectAddCommand(),
-                new ImportCommand(ReaderRegistry.fromPlatform())));
+                new ImportCommand(ReaderRegistry.fromPlatform()), new LibraryBuildCommand(cancel),
+                new LibraryAddCommand(), new MethodDefineCommand(), new QuantifyCommand(cancel), new QaCommand(),
+                new ReportCommand()));
         return table.dispatch(argv == null ? new String[0] : argv, new RunnerContext(System.out, System.err));
     }
 

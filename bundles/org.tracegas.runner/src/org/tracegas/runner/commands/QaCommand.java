@@ -1,0 +1,73 @@
+package org.tracegas.runner.commands;
+
+import java.util.List;
+
+import org.tracegas.campaign.ContainerContents;
+import org.tracegas.campaign.QaEvaluation;
+import org.tracegas.campaign.QaPlan;
+import org.tracegas.importer.ImportException;
+import org.tracegas.library.io.FileFormatException;
+import org.tracegas.preprocess.InterferogramTransform;
+import org.tracegas.qa.checks.CheckOutcome;
+import org.tracegas.runner.Command;
+import org.tracegas.runner.ExitCode;
+import org.tracegas.runner.RunnerContext;
+import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.WorkspaceStore;
+
+/** Evaluates a campaign's QA checks from its QA measurement file and stores them with the project. */
+public final class QaCommand implements Command {
+
+    @Override
+    public String name() {
+        return "qa";
+    }
+
+    @Override
+    public String summary() {
+        return "evaluate and store the QA checks of a project from its QA measurements (exit code 1 on a failure)";
+    }
+
+    @Override
+    public String usage() {
+        return "usage: tracegas qa <workspace and --as options> --project <code> --method <method name>\n"
+                + "                   --plan <QA plan> --qa-file <container>\n" + WorkspaceLogin.USAGE + "\n" + """
+                  The QA file holds backgrounds and the QA measurements, each with its role in the header (cts,
+                  zero, spike, unspiked). The plan (key = value lines) names the method's library folder, the CTS
+                  gas, band and content, the spike gas, the zero-gas analytes, the noise region and limit, and
+                  the background age limit. Checks are evaluated once per method version and stored; later runs
+                  print the stored ones.
+                exit codes: 0 every check passed, 1 a check failed, 2 wrong arguments, 3 bad plan or QA file
+                  (file, line and field named; nothing stored), 5 failure""";
+    }
+
+    @Override
+    public int run(List<String> arguments, RunnerContext context) throws Exception {
+        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
+                "--project", "--method", "--plan", "--qa-file"));
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+            Session actor = WorkspaceLogin.logIn(store, options, context);
+            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            QaEvaluation.Outcome outcome;
+            try {
+                StoredMethods.Found found = StoredMethods.newest(store, options.text("--method"));
+                QaPlan plan = QaPlan.read(options.path("--plan"));
+                ContainerContents qa = ContainerContents.read(List.of(options.path("--qa-file")),
+                        new InterferogramTransform(found.method().transform()));
+                outcome = new QaEvaluation(store, actor, project.id(), StoredMethods.SOFTWARE)
+                        .run(found.version().id(), found.method(), plan, qa);
+            } catch (FileFormatException | ImportException e) {
+                context.err().println("tracegas qa: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
+            long failed = outcome.checks().stream().filter(c -> !c.passed()).count();
+            context.out().printf("QA checks: %d, failed: %d%s%n", outcome.checks().size(), failed,
+                    outcome.reused() ? " (stored earlier)" : "");
+            for (CheckOutcome c : outcome.checks()) {
+                context.out().println("  " + (c.passed() ? "pass " : "FAIL ") + c.summary());
+            }
+            return failed == 0 ? ExitCode.OK : ExitCode.CHECK_FAILED;
+        }
+    }
+}

@@ -1,0 +1,103 @@
+package org.tracegas.runner.commands;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.tracegas.campaign.ContainerContents;
+import org.tracegas.campaign.ProjectQuantification;
+import org.tracegas.importer.ImportException;
+import org.tracegas.library.io.FileFormatException;
+import org.tracegas.preprocess.InterferogramTransform;
+import org.tracegas.quantify.BatchOutcome;
+import org.tracegas.quantify.CancellationFlag;
+import org.tracegas.runner.Command;
+import org.tracegas.runner.ExitCode;
+import org.tracegas.runner.RunnerContext;
+import org.tracegas.runner.UsageException;
+import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.WorkspaceStore;
+
+/** Processes a project's interferogram files with a stored method version on all cores into the workspace. */
+public final class QuantifyCommand implements Command {
+
+    private final CancellationFlag cancel;
+
+    public QuantifyCommand(CancellationFlag cancel) {
+        this.cancel = cancel;
+    }
+
+    @Override
+    public String name() {
+        return "quantify";
+    }
+
+    @Override
+    public String summary() {
+        return "transform, ratio and fit a project's interferogram files with a stored method, on all cores";
+    }
+
+    @Override
+    public String usage() {
+        return "usage: tracegas quantify <workspace and --as options> --project <code> --method <method name>\n"
+                + "                         --backgrounds <container> [--backgrounds ...] --file <container> "
+                + "[--file ...]\n" + WorkspaceLogin.USAGE + "\n" + """
+                  The newest version of the method is rebuilt from the workspace. Backgrounds are the background
+                  records of the --backgrounds files; each sample is ratioed against the last one before it.
+                  Every file is read once before anything is stored; each sample is stored with its absorbance
+                  and its results, which point at the method and library versions.
+                exit codes: 0 done, 2 wrong arguments, 3 bad input file (file, record and field named; nothing
+                  stored) or the project holds this version's results already, 4 cancelled (samples stored so
+                  far stay), 5 failure""";
+    }
+
+    @Override
+    public int run(List<String> arguments, RunnerContext context) throws Exception {
+        List<String> rest = new ArrayList<>();
+        List<Path> files = Options.repeated(arguments, "--file", rest);
+        List<String> rest2 = new ArrayList<>();
+        List<Path> backgroundFiles = Options.repeated(rest, "--backgrounds", rest2);
+        if (files.isEmpty() || backgroundFiles.isEmpty()) {
+            throw new UsageException("give at least one --file and one --backgrounds file");
+        }
+        Options options = Options.parse(rest2, List.of("--workspace", "--server", "--user", "--password", "--as",
+                "--project", "--method"));
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+            Session actor = WorkspaceLogin.logIn(store, options, context);
+            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            ProjectQuantification job = new ProjectQuantification(store, actor, project.id(), StoredMethods.SOFTWARE);
+            StoredMethods.Found found;
+            ContainerContents backgrounds;
+            long samples;
+            try {
+                found = StoredMethods.newest(store, options.text("--method"));
+                if (job.hasResults(found.version().id())) {
+                    context.err().println("tracegas quantify: project " + project.code() + " holds results of "
+                            + "method version " + found.version().number() + " already; nothing done");
+                    return ExitCode.BAD_INPUT;
+                }
+                backgrounds = ContainerContents.read(backgroundFiles,
+                        new InterferogramTransform(found.method().transform()));
+                if (backgrounds.backgrounds().isEmpty()) {
+                    context.err().println("tracegas quantify: the --backgrounds files hold no background record");
+                    return ExitCode.BAD_INPUT;
+                }
+                samples = ProjectQuantification.countSamples(files);
+            } catch (FileFormatException | ImportException e) {
+                context.err().println("tracegas quantify: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
+            context.progress().begin("quantify");
+            BatchOutcome outcome = job.run(found.version(), found.method(), files, samples, backgrounds.backgrounds(),
+                    context.progress()::update, cancel);
+            if (outcome.cancelled()) {
+                context.err().println("tracegas quantify: cancelled after " + outcome.delivered() + " spectra");
+                return ExitCode.CANCELLED;
+            }
+            context.out().printf("Processed %d spectra of project %s with method '%s' version %d%n",
+                    outcome.delivered(), project.code(), found.method().method().name(), found.version().number());
+            return ExitCode.OK;
+        }
+    }
+}

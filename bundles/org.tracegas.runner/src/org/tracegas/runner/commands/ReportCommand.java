@@ -1,0 +1,69 @@
+package org.tracegas.runner.commands;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import org.tracegas.campaign.CampaignReport;
+import org.tracegas.campaign.ReportPlan;
+import org.tracegas.importer.ImportException;
+import org.tracegas.library.io.FileFormatException;
+import org.tracegas.report.ReportContent;
+import org.tracegas.runner.Command;
+import org.tracegas.runner.ExitCode;
+import org.tracegas.runner.RunnerContext;
+import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.WorkspaceStore;
+
+/** Makes a project's PDF report and CSV of results from stored results and stored QA checks only. */
+public final class ReportCommand implements Command {
+
+    @Override
+    public String name() {
+        return "report";
+    }
+
+    @Override
+    public String summary() {
+        return "make the PDF report and the CSV of results from stored results and stored QA checks";
+    }
+
+    @Override
+    public String usage() {
+        return "usage: tracegas report <workspace and --as options> --project <code> --method <method name>\n"
+                + "                       --plan <report plan> --out <folder>\n" + WorkspaceLogin.USAGE + "\n" + """
+                  The plan (key = value lines) gives the campaign (report-id, client, plant, source, days,
+                  issued), the reporting basis (standard conditions, reference-o2), the O2 side-channel file and
+                  column, the water compound, the uncertainty budget, the averaging periods, an optional
+                  example fit, and one [compound] block per reported compound (name, molar-mass, limit lines
+                  such as '100 per 30 min'). Writes report.pdf and results.csv into --out, each whole.
+                exit codes: 0 written, 2 wrong arguments, 3 bad plan or O2 file (file, line and field named;
+                  nothing written), 5 failure (for example: no stored results or QA checks yet)""";
+    }
+
+    @Override
+    public int run(List<String> arguments, RunnerContext context) throws Exception {
+        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
+                "--project", "--method", "--plan", "--out"));
+        Path out = options.path("--out");
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+            Session actor = WorkspaceLogin.logIn(store, options, context);
+            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            ReportContent content;
+            try {
+                StoredMethods.Found found = StoredMethods.newest(store, options.text("--method"));
+                content = new CampaignReport(store, actor, project.id(), StoredMethods.SOFTWARE)
+                        .content(found.version(), found.method(), ReportPlan.read(options.path("--plan")));
+            } catch (FileFormatException | ImportException e) {
+                context.err().println("tracegas report: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
+            Files.createDirectories(out);
+            CampaignReport.write(content, out.resolve("report.pdf"), out.resolve("results.csv"));
+            context.out().println("Report: " + out.resolve("report.pdf"));
+            context.out().println("Results: " + out.resolve("results.csv"));
+            return ExitCode.OK;
+        }
+    }
+}
