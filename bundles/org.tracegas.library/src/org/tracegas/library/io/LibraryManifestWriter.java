@@ -112,6 +112,11 @@ public final class LibraryManifestWriter {
         return text.strip();
     }
 
+    /** Removes a library folder this writer made, with its files. */
+    public static void delete(Path folder) throws IOException {
+        deleteTree(folder);
+    }
+
     private static void deleteTree(Path root) throws IOException {
         if (!Files.exists(root)) {
             return;

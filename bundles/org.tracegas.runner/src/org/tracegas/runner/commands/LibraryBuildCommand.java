@@ -75,8 +75,15 @@ public final class LibraryBuildCommand implements Command {
                 return ExitCode.CANCELLED;
             }
             Path manifest = new LibraryManifestWriter().write(library, out);
-            VersionInfo v = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
-                    LibraryVersionText.of(manifest), "synthesized from " + plan.file().getFileName());
+            VersionInfo v;
+            try {
+                v = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
+                        LibraryVersionText.of(manifest), "synthesized from " + plan.file().getFileName());
+            } catch (RuntimeException e) {
+                // a folder without its version would look recorded; take it away again
+                LibraryManifestWriter.delete(out);
+                throw e;
+            }
             context.out().printf("Library '%s': %d references in %s, version %d (%s)%n", library.name(),
                     library.references().size(), out, v.number(), v.id());
             return ExitCode.OK;
