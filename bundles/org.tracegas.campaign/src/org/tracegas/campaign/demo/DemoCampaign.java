@@ -13,7 +13,6 @@ import java.time.LocalDate;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Optional;
 import java.util.Set;
 
 import org.tracegas.audit.VerificationReport;
@@ -26,7 +25,9 @@ import org.tracegas.campaign.MinuteSeries;
 import org.tracegas.campaign.QaMeasurements;
 import org.tracegas.campaign.SpectrumChain;
 import org.tracegas.campaign.StackProcessor;
+import org.tracegas.campaign.StoredMethod;
 import org.tracegas.campaign.StoredQaChecks;
+import org.tracegas.campaign.VersionRecorder;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ImportOptions;
 import org.tracegas.importer.container.ContainerReader;
@@ -140,10 +141,12 @@ public final class DemoCampaign {
             Session analyst = DemoStaff.ensure(store);
             ProjectInfo project = store.projects().findByCode(analyst, DemoScenario.PROJECT_CODE)
                     .orElseGet(() -> DemoStaff.createProject(store, analyst));
-            VersionInfo libraryVersion = ensureVersion(store, analyst, VersionKind.LIBRARY, library.name(),
-                    "library=" + library.name() + "\ncontent-sha256=" + library.contentHash() + "\n");
-            VersionInfo methodVersion = ensureVersion(store, analyst, VersionKind.METHOD, method.name(),
-                    method.canonicalText());
+            VersionInfo libraryVersion = VersionRecorder.ensure(store, analyst, VersionKind.LIBRARY, library.name(),
+                    "library=" + library.name() + "\ncontent-sha256=" + library.contentHash() + "\n",
+                    "demo data regenerated");
+            VersionInfo methodVersion = VersionRecorder.ensure(store, analyst, VersionKind.METHOD, method.name(),
+                    new StoredMethod(method, DemoMethod.transform(), libraryVersion.id(), library.contentHash())
+                            .content(), "demo data regenerated");
             AnalysisVersions versions = new AnalysisVersions(methodVersion.id(), libraryVersion.id());
             Quantifier quantifier = new Quantifier(prepared, library.contentHash(), SOFTWARE, false);
 
@@ -203,16 +206,6 @@ public final class DemoCampaign {
         } catch (ImportException e) {
             throw new IllegalStateException(e.getMessage(), e);
         }
-    }
-
-    private static VersionInfo ensureVersion(WorkspaceStore store, Session actor, VersionKind kind, String name,
-            String content) {
-        Optional<VersionInfo> latest = store.versions().latest(kind, name);
-        if (latest.isPresent() && store.versions().content(latest.get().id()).equals(content)) {
-            return latest.get();
-        }
-        return latest.map(v -> store.versions().revise(actor, v.id(), content, "demo data regenerated"))
-                .orElseGet(() -> store.versions().create(actor, kind, name, content, "first version for the demo"));
     }
 
     private static Campaign campaign() {
