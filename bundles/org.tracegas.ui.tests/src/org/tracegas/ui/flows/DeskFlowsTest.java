@@ -78,7 +78,7 @@ class DeskFlowsTest {
 
     @Test
     void logInIsRefusedWithAWrongPasswordAndAcceptedWithTheRightOne() throws Exception {
-        LoginDialog dialog = new LoginDialog(shell, access.store().users(), folder.toString());
+        LoginDialog dialog = new LoginDialog(shell, access.store().users(), access.location().description());
         dialog.setBlockOnOpen(false);
         dialog.open();
         dialog.loginField().setText(DemoProject.ANALYST);

@@ -26,7 +26,7 @@ import org.eclipse.swtchart.Range;
  */
 public final class DecimatedSeries implements ICustomPaintListener {
 
-    private record Full(double[] x, double[] y, int rgb, boolean markers, int yAxis) {
+    private record Full(double[] x, double[] y, int rgb, boolean markers, boolean dashed, int yAxis) {
     }
 
     private final Chart chart;
@@ -45,7 +45,7 @@ public final class DecimatedSeries implements ICustomPaintListener {
 
     /**
      * Gives a series (created beforehand on the chart, and set on its y axis) its full data. A series without
-     * line style is drawn as crosses at its points (flag markers).
+     * line style is drawn as crosses at its points (flag markers), one with a dashed style as a dashed line.
      */
     public void put(ILineSeries<?> series, double[] x, double[] y) {
         if (x.length != y.length) {
@@ -55,7 +55,7 @@ public final class DecimatedSeries implements ICustomPaintListener {
         boolean markers = series.getLineStyle() == LineStyle.NONE;
         Color c = markers ? series.getSymbolColor() : series.getLineColor();
         data.put(series.getId(), new Full(x.clone(), y.clone(), (c.getRed() << 16) | (c.getGreen() << 8) | c.getBlue(),
-                markers, series.getYAxisId()));
+                markers, series.getLineStyle() == LineStyle.DASH, series.getYAxisId()));
         series.setXSeries(new double[0]);
         series.setYSeries(new double[0]);
         version++;
@@ -183,7 +183,7 @@ public final class DecimatedSeries implements ICustomPaintListener {
                 if (f.markers) {
                     raster.cross((int) Math.round(cx), (int) Math.round(cy), 3, f.rgb);
                 } else if (!Double.isNaN(px)) {
-                    raster.line(px, py, cx, cy, f.rgb);
+                    raster.line(px, py, cx, cy, f.rgb, f.dashed);
                 }
                 px = cx;
                 py = cy;
@@ -205,6 +205,9 @@ public final class DecimatedSeries implements ICustomPaintListener {
         private final int h;
         private final int[] rgb;
         private final byte[] alpha;
+        /** Pixels per dash and per gap of a dashed line. */
+        private static final int DASH = 6;
+        private int dashStep;
 
         Raster(int w, int h) {
             this.w = w;
@@ -221,7 +224,7 @@ public final class DecimatedSeries implements ICustomPaintListener {
         }
 
         /** A line clipped to the picture (Liang-Barsky), then stepped pixel by pixel (Bresenham). */
-        void line(double x0, double y0, double x1, double y1, int colour) {
+        void line(double x0, double y0, double x1, double y1, int colour, boolean dashed) {
             double[] t = {0, 1};
             double dx = x1 - x0;
             double dy = y1 - y0;
@@ -238,7 +241,10 @@ public final class DecimatedSeries implements ICustomPaintListener {
             int ey = -Math.abs(by - ay);
             int err = ex + ey;
             while (true) {
-                set(ax, ay, colour);
+                // the dash pattern runs on across segments: thinned lines are made of very short ones
+                if (!dashed || (dashStep++ / DASH) % 2 == 0) {
+                    set(ax, ay, colour);
+                }
                 if (ax == bx && ay == by) {
                     return;
                 }

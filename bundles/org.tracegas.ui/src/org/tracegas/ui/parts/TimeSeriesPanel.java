@@ -22,6 +22,7 @@ import org.eclipse.swtchart.Chart;
 import org.eclipse.swtchart.IAxis;
 import org.eclipse.swtchart.ILineSeries;
 import org.eclipse.swtchart.ILineSeries.PlotSymbolType;
+import org.eclipse.swtchart.LineStyle;
 import org.eclipse.swtchart.Range;
 import org.tracegas.ui.chart.ChartNavigation;
 import org.tracegas.ui.chart.CursorReadout;
@@ -31,7 +32,7 @@ import org.tracegas.ui.chart.DecimatedSeries;
  * Concentrations over time, one line per compound, flagged values marked with a cross and limits as red
  * horizontal lines. A checkable list chooses the compounds drawn; at first the trace gases are. Major
  * components (percent level, {@link ConcentrationLevel}) shown together with trace gases get a second axis on
- * the right, so that they do not flatten the trace gases' lines. Long records (a day of one-second values) are
+ * the right and dashed lines, so that they do not flatten the trace gases' lines. Long records (a day of one-second values) are
  * thinned per pixel column for drawing.
  */
 public final class TimeSeriesPanel extends Composite {
@@ -60,7 +61,7 @@ public final class TimeSeriesPanel extends Composite {
         Caution.banner(this, 2);
         heading = new Label(this, SWT.NONE);
         heading.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
-        heading.setText("No results loaded.");
+        heading.setText("Select a project in the workspace tree to see its stored results.");
         Label readout = new Label(this, SWT.RIGHT);
         GridData rd = new GridData(SWT.END, SWT.CENTER, false, false);
         rd.widthHint = 300;
@@ -244,11 +245,15 @@ public final class TimeSeriesPanel extends Composite {
         String leftUnit = unitOf(drawn, false, anyMajor && !anyTrace);
         left.getTitle().setText((majorAxis >= 0 ? "Trace gases" : "Concentration") + leftUnit);
         if (majorAxis >= 0) {
-            majorAxis().getTitle().setText("Major components" + unitOf(drawn, true, true));
+            majorAxis().getTitle().setText("Major components, dashed" + unitOf(drawn, true, true));
         }
         for (int k = 0; k < drawn.size(); k++) {
             ILineSeries<?> s = ChartStyle.line(chart, drawn.get(k).compound(), Palette.compound(colours.get(k)), 1);
             s.setYAxisId(axisOf(drawn.get(k)));
+            if (s.getYAxisId() != 0) {
+                // dashed, so that a line tells by itself which axis it is read against
+                s.setLineStyle(LineStyle.DASH);
+            }
             data.put(s, drawn.get(k).hours(), drawn.get(k).values());
         }
         for (ConcentrationTrace t : drawn) {
