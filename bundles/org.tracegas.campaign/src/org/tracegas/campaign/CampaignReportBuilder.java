@@ -17,7 +17,10 @@ import org.tracegas.qa.basis.PeriodAverage;
 import org.tracegas.qa.basis.ReportingBasis;
 import org.tracegas.qa.basis.TimedValue;
 import org.tracegas.qa.checks.CheckOutcome;
+import org.tracegas.qa.control.ChartEvaluation;
+import org.tracegas.qa.uncertainty.BasisConversion;
 import org.tracegas.qa.uncertainty.FtirResultBudget;
+import org.tracegas.qa.uncertainty.UncertaintyBudget;
 import org.tracegas.report.Campaign;
 import org.tracegas.report.LibraryVersion;
 import org.tracegas.report.MethodVersion;
@@ -27,12 +30,14 @@ import org.tracegas.report.ReportContent;
 import org.tracegas.report.ResultRow;
 import org.tracegas.report.Series;
 import org.tracegas.report.SpectrumFit;
+import org.tracegas.report.UncertaintyTable;
 
 /**
  * Assembles the report of a campaign from stored results: each compound converted to the reporting basis
  * (dry gas, reference O2, mg/m³ at standard conditions) minute by minute, averaged over the reporting periods
  * with the minimum-data rule, compared with the client's limits, with an expanded uncertainty (k = 2) from
- * the result's GUM budget.
+ * the result's GUM budget on the reporting basis (fit, reference, path, cell conditions, and the H2O and O2 of
+ * the conversion), whose table the report shows for the minute of largest relative uncertainty.
  */
 public final class CampaignReportBuilder {
 
@@ -44,13 +49,33 @@ public final class CampaignReportBuilder {
     private final FtirResultBudget budget;
     private final double cellTemperatureK;
     private final double cellPressureKPa;
+    private final double o2UncertaintyPercent;
 
+    /**
+     * @param o2UncertaintyPercent standard uncertainty of the side channel's O2 reading, % vol
+     */
     public CampaignReportBuilder(ReportingBasis basis, FtirResultBudget budget, double cellTemperatureK,
-            double cellPressureKPa) {
+            double cellPressureKPa, double o2UncertaintyPercent) {
         this.basis = basis;
         this.budget = budget;
         this.cellTemperatureK = cellTemperatureK;
         this.cellPressureKPa = cellPressureKPa;
+        if (!(o2UncertaintyPercent >= 0 && Double.isFinite(o2UncertaintyPercent))) {
+            throw new IllegalArgumentException("o2UncertaintyPercent must be non-negative and finite, was "
+                    + o2UncertaintyPercent);
+        }
+        this.o2UncertaintyPercent = o2UncertaintyPercent;
+    }
+
+    /**
+     * A builder whose budgets take the side channel's O2 as exact: their O2 row shows a zero contribution.
+     *
+     * @deprecated give the O2 analyser's uncertainty with the five-argument constructor
+     */
+    @Deprecated(forRemoval = true)
+    public CampaignReportBuilder(ReportingBasis basis, FtirResultBudget budget, double cellTemperatureK,
+            double cellPressureKPa) {
+        this(basis, budget, cellTemperatureK, cellPressureKPa, 0);
     }
 
     /**
@@ -60,11 +85,23 @@ public final class CampaignReportBuilder {
     public ReportContent build(Campaign campaign, MethodVersion method, LibraryVersion library,
             List<CheckOutcome> qa, MinuteSeries series, List<Reported> reported, String waterCompound,
             Function<Instant, Double> o2PercentWet, List<Duration> periods, SpectrumFit exampleFit) {
+        return build(campaign, method, library, qa, List.of(), series, reported, waterCompound, o2PercentWet, periods,
+                exampleFit);
+    }
+
+    /**
+     * As above, with the control charts of repeated QA readings; their check outcomes are among {@code qa}.
+     */
+    public ReportContent build(Campaign campaign, MethodVersion method, LibraryVersion library,
+            List<CheckOutcome> qa, List<ChartEvaluation> charts, MinuteSeries series, List<Reported> reported,
+            String waterCompound, Function<Instant, Double> o2PercentWet, List<Duration> periods,
+            SpectrumFit exampleFit) {
         ReportContent.Builder b = ReportContent.builder(campaign).method(method).library(library);
         qa.forEach(o -> b.qa(QaLine.of(o)));
-        Map<Instant, Double> water = new java.util.HashMap<>();
+        charts.forEach(c -> b.controlChart(QaControlCharts.plot(c)));
+        Map<Instant, MinuteSeries.Point> water = new java.util.HashMap<>();
         for (MinuteSeries.Point p : series.compound(waterCompound)) {
-            water.put(p.time(), p.ppm() / 1e6);
+            water.put(p.time(), p);
         }
         Instant origin = series.compound(waterCompound).isEmpty() ? campaign.issued()
                 : series.compound(waterCompound).get(0).time();
@@ -72,18 +109,33 @@ public final class CampaignReportBuilder {
             List<MinuteSeries.Point> points = series.compound(r.compound());
             List<GasReading> readings = new ArrayList<>();
             double relativeU = 0;
+            UncertaintyBudget worst = null;
+            Instant worstTime = null;
             for (MinuteSeries.Point p : points) {
-                Double h2o = water.get(p.time());
-                if (h2o == null) {
+                MinuteSeries.Point w = water.get(p.time());
+                if (w == null) {
                     continue;
                 }
-                double o2Dry = o2PercentWet.apply(p.time()) / (1 - h2o);
-                readings.add(new GasReading(p.time(), p.ppm(), h2o, o2Dry));
-                if (p.ppm() != 0) {
-                    double u = budget.budget(r.compound(), p.ppm(), p.uncertainty(), cellTemperatureK, cellPressureKPa)
-                            .relativeExpandedPercent();
-                    relativeU = Math.max(relativeU, u);
+                double h2o = w.ppm() / 1e6;
+                double o2Wet = o2PercentWet.apply(p.time());
+                readings.add(new GasReading(p.time(), p.ppm(), h2o, o2Wet / (1 - h2o)));
+                if (p.ppm() != 0 && (basis.oxygen().isEmpty() || basis.oxygen().get().canCorrect(o2Wet / (1 - h2o)))) {
+                    BasisConversion conversion = basis.oxygen().map(o -> new BasisConversion(h2o,
+                            w.uncertainty() / 1e6, o2Wet, o2UncertaintyPercent, true, o.referencePercent()))
+                            .orElseGet(() -> BasisConversion.dryOnly(h2o, w.uncertainty() / 1e6));
+                    UncertaintyBudget u = budget.budgetOnBasis(r.compound(), p.ppm(), p.uncertainty(),
+                            cellTemperatureK, cellPressureKPa, conversion);
+                    if (u.relativeExpandedPercent() > relativeU) {
+                        relativeU = u.relativeExpandedPercent();
+                        worst = u;
+                        worstTime = p.time();
+                    }
                 }
+            }
+            if (worst != null) {
+                // the minute with the largest relative U sets the U of every average, so its budget is shown
+                b.budget(UncertaintyTable.of(r.compound() + " at " + worstTime + ", the minute of largest relative U",
+                        worst));
             }
             List<TimedValue> converted = basis.convertAll(readings, r.molarMass());
             for (Duration period : periods) {

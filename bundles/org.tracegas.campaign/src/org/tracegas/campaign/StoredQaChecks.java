@@ -24,13 +24,35 @@ public final class StoredQaChecks {
                 .toList());
     }
 
+    /**
+     * The outcomes stored by earlier campaigns for a control chart's history: those of the other projects the
+     * actor may read, made with a version of the same method (by name), recorded before this project's first
+     * check (so that a report made again later sees the same history), oldest first.
+     */
+    public static List<CheckOutcome> history(WorkspaceStore store, Session actor, String projectId,
+            String methodName) {
+        java.time.Instant before = store.qa().checks(actor, projectId).stream().map(QaCheckInfo::recorded)
+                .min(java.util.Comparator.naturalOrder()).orElse(java.time.Instant.MAX);
+        java.util.Map<String, Boolean> sameMethod = new java.util.HashMap<>();
+        return store.projects().projects(actor).stream().filter(p -> !p.id().equals(projectId))
+                .flatMap(p -> store.qa().checks(actor, p.id()).stream())
+                .filter(c -> c.recorded().isBefore(before))
+                .filter(c -> sameMethod.computeIfAbsent(c.methodVersionId(),
+                        id -> store.versions().version(id).name().equals(methodName)))
+                .sorted(java.util.Comparator.comparing(QaCheckInfo::recorded))
+                .map(StoredQaChecks::outcome).toList();
+    }
+
     /** The outcomes stored for a method version, in the order they were recorded; empty when there are none. */
     public static List<CheckOutcome> load(WorkspaceStore store, Session actor, String projectId,
             String methodVersionId) {
         return store.qa().checks(actor, projectId).stream().filter(c -> c.methodVersionId().equals(methodVersionId))
-                .map(QaCheckInfo::outcome)
-                .map(c -> new CheckOutcome(c.check(), c.passed(), c.measured(), c.unit(),
-                        new AcceptanceLimits(c.lower(), c.upper()), new Rule(c.rule(), c.source())))
-                .toList();
+                .map(StoredQaChecks::outcome).toList();
+    }
+
+    private static CheckOutcome outcome(QaCheckInfo info) {
+        NewQaCheck c = info.outcome();
+        return new CheckOutcome(c.check(), c.passed(), c.measured(), c.unit(), new AcceptanceLimits(c.lower(),
+                c.upper()), new Rule(c.rule(), c.source()));
     }
 }
