@@ -9,32 +9,34 @@ import java.util.List;
 import java.util.NoSuchElementException;
 import java.util.Queue;
 import java.util.concurrent.ConcurrentLinkedQueue;
+import java.util.function.Consumer;
 
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.container.ContainerReader;
 import org.tracegas.importer.container.ContainerRecord;
-import org.tracegas.model.MeasurementKind;
-import org.tracegas.model.SpectralContent;
 import org.tracegas.quantify.BackgroundAge;
 import org.tracegas.quantify.BatchOutcome;
 import org.tracegas.quantify.BatchQuantifier;
 import org.tracegas.quantify.CancellationFlag;
-import org.tracegas.quantify.CompoundResult;
 import org.tracegas.quantify.ProgressListener;
 import org.tracegas.quantify.Sample;
-import org.tracegas.quantify.SpectrumResult;
-import org.tracegas.store.NewResult;
-import org.tracegas.store.SampleEncoding;
+import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.Session;
-import org.tracegas.store.SpectrumInput;
 import org.tracegas.store.WorkspaceStore;
 
 /**
  * The batch path of a campaign: streams the interferograms of container files one record at a time,
- * transforms and ratios them, fits them on all cores, and stores each measurement with its absorbance and
- * its results. Nothing holds more than the records in flight, so a year of data runs in constant memory.
+ * transforms and ratios them, fits them on all cores, and stores the measurements with their absorbance and
+ * their results in blocks, each block in one transaction. Nothing holds more than the records in flight and
+ * one block, so a year of data runs in constant memory.
  */
 public final class StackProcessor {
+
+    /**
+     * Spectra stored per transaction by default: large enough that a transaction's fixed cost (connection,
+     * access check, audit chain lock) is spread thin, small enough that a block is a few MiB.
+     */
+    public static final int DEFAULT_BLOCK_SIZE = 64;
 
     private final WorkspaceStore store;
     private final Session actor;
@@ -42,41 +44,80 @@ public final class StackProcessor {
     private final SpectrumChain chain;
     private final BatchQuantifier quantifier;
     private final AnalysisVersions versions;
+    private final int blockSize;
 
+    /** A processor storing blocks of {@link #DEFAULT_BLOCK_SIZE} spectra. */
     public StackProcessor(WorkspaceStore store, Session actor, String projectId, SpectrumChain chain,
             BatchQuantifier quantifier, AnalysisVersions versions) {
+        this(store, actor, projectId, chain, quantifier, versions, DEFAULT_BLOCK_SIZE);
+    }
+
+    /**
+     * @param blockSize spectra stored per transaction, at least 1
+     * @throws IllegalArgumentException if the block size is below 1
+     */
+    public StackProcessor(WorkspaceStore store, Session actor, String projectId, SpectrumChain chain,
+            BatchQuantifier quantifier, AnalysisVersions versions, int blockSize) {
+        if (blockSize < 1) {
+            throw new IllegalArgumentException("blockSize must be at least 1, was " + blockSize);
+        }
         this.store = store;
         this.actor = actor;
         this.projectId = projectId;
         this.chain = chain;
         this.quantifier = quantifier;
         this.versions = versions;
+        this.blockSize = blockSize;
     }
 
     /**
-     * Processes the files in order.
+     * Processes the files in order and stores the spectra block by block. The spectra fitted so far are
+     * stored also when the run is cancelled or a record cannot be processed (before that error is thrown), so
+     * everything fitted in order before the stop is in the workspace.
      *
      * @param expected number of interferograms, for progress
+     * @param progress told after each stored block, with the number of spectra stored so far
      * @return how many spectra were processed and stored, and whether the run was cancelled
      */
     public BatchOutcome run(List<Path> files, long expected, ProgressListener progress, CancellationFlag cancel) {
-        Queue<MeasuredSpectrum> inFlight = new ConcurrentLinkedQueue<>();
-        Iterator<Sample> samples = new SampleIterator(files, inFlight);
-        return quantifier.run(samples, expected, result -> store(inFlight.remove(), result), progress, cancel);
+        BlockBuffer buffer = new BlockBuffer(blockSize, block -> store.blocks().store(actor, projectId, block),
+                progress, expected);
+        BatchOutcome fitted;
+        try {
+            fitted = fit(files, expected, buffer::add, cancel);
+        } catch (RuntimeException e) {
+            if (!buffer.failed()) {
+                try {
+                    buffer.flush();
+                } catch (RuntimeException storing) {
+                    e.addSuppressed(storing);
+                }
+            }
+            throw e;
+        }
+        buffer.flush();
+        return new BatchOutcome(buffer.stored(), fitted.cancelled());
     }
 
-    private void store(MeasuredSpectrum measured, SpectrumResult result) {
-        String measurementId = store.projects().recordMeasurement(actor, projectId, MeasurementKind.SAMPLE,
-                measured.time(), measured.cellTemperatureK(), measured.cellPressureKPa() * 10.0);
-        store.spectra().store(actor, projectId, new SpectrumInput(measurementId, SpectralContent.ABSORBANCE,
-                measured.ratio().spectrum(), SampleEncoding.FLOAT32_LE));
-        List<NewResult> rows = new ArrayList<>();
-        for (CompoundResult c : result.compounds()) {
-            rows.add(new NewResult(measurementId, c.compound(), c.concentration(), c.standardUncertainty(),
-                    c.detectionLimit(), "ppm", FlagMapping.toStored(c.flags()), versions.methodVersionId(),
-                    versions.libraryVersionId(), result.record().softwareVersion(), result.record().inputHash()));
-        }
-        store.results().recordAll(actor, projectId, rows);
+    /**
+     * Processes the files in order without storing anything: the spectra as {@link #run} would store them.
+     * This is the processing of one work unit, whose block is stored together with the unit's completion.
+     *
+     * @return the processed spectra in input order; when cancelled, only the first ones
+     */
+    public List<ProcessedSpectrum> process(List<Path> files, CancellationFlag cancel) {
+        List<ProcessedSpectrum> processed = new ArrayList<>();
+        fit(files, -1, processed::add, cancel);
+        return processed;
+    }
+
+    private BatchOutcome fit(List<Path> files, long expected, Consumer<ProcessedSpectrum> consumer,
+            CancellationFlag cancel) {
+        Queue<MeasuredSpectrum> inFlight = new ConcurrentLinkedQueue<>();
+        Iterator<Sample> samples = new SampleIterator(files, inFlight);
+        return quantifier.run(samples, expected,
+                result -> consumer.accept(ProcessedSpectra.of(inFlight.remove(), result, versions)),
+                ProgressListener.NONE, cancel);
     }
 
     /** Reads the files lazily, one record at a time, and turns each record into a sample to fit. */

@@ -1,0 +1,11 @@
+package org.tracegas.campaign.shared;
+
+/**
+ * How a worker's run ended.
+ *
+ * @param completed units this worker completed with their results
+ * @param lost      units whose lease this worker lost to another runner; their work was dropped
+ * @param cancelled whether the run stopped on its cancellation flag before the batch was done
+ */
+public record WorkerOutcome(int completed, int lost, boolean cancelled) {
+}
