@@ -59,8 +59,11 @@ public final class TimeSeriesPanel extends Composite {
         super(parent, style);
         setLayout(new GridLayout(2, false));
         Caution.banner(this, 2);
-        heading = new Label(this, SWT.NONE);
-        heading.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        heading = new Label(this, SWT.WRAP);
+        GridData hd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        // wraps rather than clipping the time the hours count from when the view is narrow
+        hd.widthHint = 200;
+        heading.setLayoutData(hd);
         heading.setText("Select a project in the workspace tree to see its stored results.");
         Label readout = new Label(this, SWT.RIGHT);
         GridData rd = new GridData(SWT.END, SWT.CENTER, false, false);
@@ -84,7 +87,7 @@ public final class TimeSeriesPanel extends Composite {
         listTitle.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
         compounds = new Table(side, SWT.CHECK | SWT.BORDER | SWT.V_SCROLL | SWT.SINGLE);
         GridData cd = new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1);
-        cd.widthHint = 150;
+        cd.widthHint = 120;
         compounds.setLayoutData(cd);
         compounds.addListener(SWT.Selection, e -> {
             if (e.detail == SWT.CHECK) {
