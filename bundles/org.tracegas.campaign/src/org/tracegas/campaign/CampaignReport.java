@@ -76,7 +76,7 @@ public final class CampaignReport {
                 ImportOptions.defaults()));
         VersionInfo library = store.versions().version(method.libraryVersionId());
         return new CampaignReportBuilder(plan.basis(), plan.budget(method.method().pathLengthMetres()),
-                plan.cellTemperatureK(), plan.cellPressureKPa())
+                plan.cellTemperatureK(), plan.cellPressureKPa(), plan.o2UncertaintyPercent())
                 .build(plan.campaign(), new MethodVersion(method.method().name(), "v" + methodVersion.number(),
                         methodVersion.contentHash()),
                         new LibraryVersion(library.name(), "v" + library.number() + ", content "
@@ -133,7 +133,8 @@ public final class CampaignReport {
                 points.add(new double[] { x, y, model.get(i) });
             }
         }
-        return new SpectrumFit(plan.exampleCompound() + " region at " + plan.exampleTime(),
+        return new SpectrumFit(plan.exampleCompound() + " region at " + plan.exampleTime()
+                + (plan.exampleCaption() == null ? "" : " (" + plan.exampleCaption() + ")"),
                 points.stream().mapToDouble(p -> p[0]).toArray(), points.stream().mapToDouble(p -> p[1]).toArray(),
                 points.stream().mapToDouble(p -> p[2]).toArray());
     }

@@ -56,7 +56,21 @@ public record LibraryPlan(Path file, String name, double temperatureK, double pr
 
     /** @throws FileFormatException naming the file, line and key of the first error */
     public static LibraryPlan read(Path file) throws IOException {
-        KeyValueFile f = KeyValueFile.read(file);
+        return parse(KeyValueFile.read(file));
+    }
+
+    /**
+     * A plan written as text, its line lists named relative to where the file would be.
+     *
+     * @param file names the text in errors and resolves the line lists
+     * @throws FileFormatException naming the file, line and key of the first error
+     */
+    public static LibraryPlan parse(String text, Path file) throws FileFormatException {
+        return parse(KeyValueFile.parse(text, file));
+    }
+
+    private static LibraryPlan parse(KeyValueFile f) throws FileFormatException {
+        Path file = f.file();
         f.allowBlocks(Set.of("compound"));
         KeyValueFile.Section h = f.head().allow(HEAD);
         SpectralAxis axis;

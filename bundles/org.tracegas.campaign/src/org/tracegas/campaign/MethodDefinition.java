@@ -8,6 +8,8 @@ import java.util.Set;
 
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.library.io.LibraryManifestReader;
+import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
@@ -16,6 +18,10 @@ import org.tracegas.quantify.ReferenceSpectrum;
 import org.tracegas.quantify.ReportingUnit;
 import org.tracegas.quantify.ShiftTerm;
 import org.tracegas.quantify.WavenumberWindow;
+import org.tracegas.store.Session;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.VersionKind;
+import org.tracegas.store.WorkspaceStore;
 
 /**
  * A quantification method as a lab writes it, read from a method file; with the references of its library it
@@ -47,6 +53,10 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         double tolerance, int maxIterations, double maxAbsorbance, ShiftTerm shift, ReportingUnit unit,
         TransformSettings transform, List<Analyte> analytes) {
 
+    /** The versions a method file gave: its library's, its own, and the method as its version holds it. */
+    public record Recorded(VersionInfo libraryVersion, VersionInfo methodVersion, StoredMethod method) {
+    }
+
     private static final Set<String> HEAD = Set.of("method", "library", "path-length", "nonlinearity", "tolerance",
             "max-iterations", "max-absorbance", "shift", "reporting-unit");
     private static final Set<String> ANALYTE = Set.of("compound", "interferents", "region");
@@ -57,7 +67,21 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
 
     /** @throws FileFormatException naming the file, line and key of the first error */
     public static MethodDefinition read(Path file) throws IOException {
-        KeyValueFile f = KeyValueFile.read(file);
+        return parse(KeyValueFile.read(file));
+    }
+
+    /**
+     * A method written as text, its library named relative to where the file would be.
+     *
+     * @param file names the text in errors and resolves the library
+     * @throws FileFormatException naming the file, line and key of the first error
+     */
+    public static MethodDefinition parse(String text, Path file) throws FileFormatException {
+        return parse(KeyValueFile.parse(text, file));
+    }
+
+    private static MethodDefinition parse(KeyValueFile f) throws FileFormatException {
+        Path file = f.file();
         f.allowBlocks(Set.of("transform", "analyte"));
         KeyValueFile.Section h = f.head().allow(HEAD);
         List<KeyValueFile.Section> transforms = f.blocks("transform");
@@ -138,5 +162,24 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         } catch (IllegalArgumentException e) {
             throw new FileFormatException(file, 0, "", e.getMessage() + " (library " + libraryManifest + ")");
         }
+    }
+
+    /**
+     * Reads the library folder, builds the method over it, and records the library (unless the newest version of
+     * its name holds the same folder) and the method with its transform; the same files again give no new
+     * versions. Everything is read and built before anything is recorded.
+     *
+     * @throws FileFormatException naming the manifest, spectrum or method file at fault; nothing recorded
+     */
+    public Recorded record(WorkspaceStore store, Session actor) throws IOException {
+        ReferenceLibrary library = LibraryManifestReader.forTwoColumnText().read(libraryManifest);
+        String libraryContent = LibraryVersionText.of(libraryManifest);
+        QuantificationMethod method = build(library);
+        VersionInfo libraryVersion = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
+                libraryContent, "library of method " + method.name());
+        StoredMethod stored = new StoredMethod(method, transform, libraryVersion.id(), library.contentHash());
+        VersionInfo methodVersion = VersionRecorder.ensure(store, actor, VersionKind.METHOD, method.name(),
+                stored.content(), "defined from " + file.getFileName());
+        return new Recorded(libraryVersion, methodVersion, stored);
     }
 }

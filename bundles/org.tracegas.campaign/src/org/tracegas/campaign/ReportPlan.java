@@ -35,6 +35,7 @@ import org.tracegas.report.Campaign;
  * o2-guard = 20                        %vol dry at or above which no corrected value is given
  * o2-file = o2-analyzer.csv            time-stamped side channel, relative to this file
  * o2-channel = O2                      its column, %vol wet
+ * o2-uncertainty = 0.2                 standard uncertainty of the O2 reading, %vol
  * water = H2O                          compound of the moisture result
  * cell-temperature = 464.15            K, for the uncertainty budget
  * cell-pressure = 101.3                kPa
@@ -43,7 +44,8 @@ import org.tracegas.report.Campaign;
  * temperature-uncertainty = 2
  * pressure-uncertainty = 0.5
  * periods = 30 min, 1 d                averaging periods
- * example-fit = 2026-03-17T07:10:30Z CO    (optional) the stored sample and analyte to plot
+ * example-fit = 2026-03-17T07:10:30Z CO morning upset   (optional) the stored sample and analyte to plot,
+ *                                      and a caption
  *
  * [compound]                           one block per reported compound
  * name = CO
@@ -52,15 +54,15 @@ import org.tracegas.report.Campaign;
  * </pre>
  */
 public record ReportPlan(Path file, Campaign campaign, ReportingBasis basis, Path o2File, String o2Channel,
-        String water, double cellTemperatureK, double cellPressureKPa, double referenceUncertainty,
+        double o2UncertaintyPercent, String water, double cellTemperatureK, double cellPressureKPa, double referenceUncertainty,
         double pathUncertaintyM, double temperatureUncertaintyK, double pressureUncertaintyKPa,
-        List<Duration> periods, Instant exampleTime, String exampleCompound,
+        List<Duration> periods, Instant exampleTime, String exampleCompound, String exampleCaption,
         List<CampaignReportBuilder.Reported> reported) {
 
     private static final Set<String> HEAD = Set.of("report-id", "client", "plant", "source", "first-day", "last-day",
             "issued", "standard-temperature", "standard-pressure", "reference-o2", "o2-guard", "o2-file",
-            "o2-channel", "water", "cell-temperature", "cell-pressure", "reference-uncertainty", "path-uncertainty",
-            "temperature-uncertainty", "pressure-uncertainty", "periods", "example-fit");
+            "o2-channel", "o2-uncertainty", "water", "cell-temperature", "cell-pressure", "reference-uncertainty",
+            "path-uncertainty", "temperature-uncertainty", "pressure-uncertainty", "periods", "example-fit");
 
     public ReportPlan {
         periods = List.copyOf(periods);
@@ -101,14 +103,16 @@ public record ReportPlan(Path file, Campaign campaign, ReportingBasis basis, Pat
         }
         Instant exampleTime = null;
         String exampleCompound = null;
+        String exampleCaption = null;
         if (h.has("example-fit")) {
             KeyValueFile.Value v = h.value("example-fit");
             List<String> words = v.words();
-            if (words.size() != 2) {
-                throw v.error("expected '<time> <compound>'");
+            if (words.size() < 2) {
+                throw v.error("expected '<time> <compound> [caption]'");
             }
             exampleTime = instant(new KeyValueFile.Value(h, v.key(), words.get(0), v.line()));
             exampleCompound = words.get(1);
+            exampleCaption = words.size() > 2 ? String.join(" ", words.subList(2, words.size())) : null;
         }
         List<CampaignReportBuilder.Reported> reported = new ArrayList<>();
         for (KeyValueFile.Section b : f.blocks("compound")) {
@@ -134,10 +138,13 @@ public record ReportPlan(Path file, Campaign campaign, ReportingBasis basis, Pat
         if (reported.isEmpty()) {
             throw new FileFormatException(file, 0, "[compound]", "the plan reports no compound");
         }
+        if (!(h.number("o2-uncertainty") >= 0)) {
+            throw h.error("o2-uncertainty", "must not be negative, was " + h.number("o2-uncertainty"));
+        }
         return new ReportPlan(file, campaign, basis, f.resolve(h.text("o2-file")), h.text("o2-channel"),
-                h.text("water"), h.number("cell-temperature"), h.number("cell-pressure"),
+                h.number("o2-uncertainty"), h.text("water"), h.number("cell-temperature"), h.number("cell-pressure"),
                 h.number("reference-uncertainty"), h.number("path-uncertainty"), h.number("temperature-uncertainty"),
-                h.number("pressure-uncertainty"), periods, exampleTime, exampleCompound, reported);
+                h.number("pressure-uncertainty"), periods, exampleTime, exampleCompound, exampleCaption, reported);
     }
 
     private static LocalDate day(KeyValueFile.Section h, String key) throws FileFormatException {

@@ -3,19 +3,12 @@ package org.tracegas.runner.commands;
 import java.util.List;
 
 import org.tracegas.campaign.MethodDefinition;
-import org.tracegas.campaign.StoredMethod;
-import org.tracegas.campaign.VersionRecorder;
-import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
-import org.tracegas.library.io.LibraryManifestReader;
-import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /** Builds a quantification method from a method file and its library, and records it as a method version. */
@@ -51,28 +44,18 @@ public final class MethodDefineCommand implements Command {
                 "--method"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            MethodDefinition definition;
-            ReferenceLibrary library;
-            QuantificationMethod method;
-            String libraryContent;
+            MethodDefinition.Recorded recorded;
             try {
-                definition = MethodDefinition.read(options.path("--method"));
-                library = LibraryManifestReader.forTwoColumnText().read(definition.libraryManifest());
-                libraryContent = LibraryVersionText.of(definition.libraryManifest());
-                method = definition.build(library);
+                recorded = MethodDefinition.read(options.path("--method")).record(store, actor);
             } catch (FileFormatException e) {
                 context.err().println("tracegas method-define: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
-            VersionInfo libraryVersion = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
-                    libraryContent, "library of method " + method.name());
-            StoredMethod stored = new StoredMethod(method, definition.transform(), libraryVersion.id(),
-                    library.contentHash());
-            VersionInfo v = VersionRecorder.ensure(store, actor, VersionKind.METHOD, method.name(), stored.content(),
-                    "defined from " + definition.file().getFileName());
+            QuantificationMethod method = recorded.method().method();
             context.out().printf("Method '%s': %d analytes, %d references, version %d (%s), library version %d%n",
-                    method.name(), method.analytes().size(), method.references().size(), v.number(), v.id(),
-                    libraryVersion.number());
+                    method.name(), method.analytes().size(), method.references().size(),
+                    recorded.methodVersion().number(), recorded.methodVersion().id(),
+                    recorded.libraryVersion().number());
             return ExitCode.OK;
         }
     }

@@ -63,6 +63,20 @@ final class Options {
         return v;
     }
 
+    /** @throws UsageException naming the option if its value is not a whole number of at least 1 */
+    int positiveInteger(String name) throws UsageException {
+        String v = text(name);
+        try {
+            int n = Integer.parseInt(v.strip());
+            if (n >= 1) {
+                return n;
+            }
+        } catch (NumberFormatException e) {
+            // named below
+        }
+        throw new UsageException("option " + name + " needs a whole number of at least 1, was '" + v + "'");
+    }
+
     Path path(String name) throws UsageException {
         return Path.of(text(name)).toAbsolutePath();
     }

@@ -31,8 +31,9 @@ public final class QaCommand implements Command {
 
     @Override
     public String usage() {
-        return "usage: tracegas qa <workspace and --as options> --project <code> --method <method name>\n"
-                + "                   --plan <QA plan> --qa-file <container>\n" + WorkspaceLogin.USAGE + "\n" + """
+        return "usage: tracegas qa <workspace and --as options> --project <code> --method <name>\n"
+                + "                   --plan <QA plan> --qa-file <container>\n" + WorkspaceLogin.USAGE + "\n"
+                + StoredMethods.USAGE + "\n" + """
                   The QA file holds backgrounds and the QA measurements, each with its role in the header (cts,
                   zero, spike, unspiked). The plan (key = value lines) names the method's library folder, the CTS
                   gas, band and content, the spike gas, the zero-gas analytes, the noise region and limit, and
@@ -45,13 +46,13 @@ public final class QaCommand implements Command {
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
         Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--project", "--method", "--plan", "--qa-file"));
+                "--project", "--method", "--method-version", "--plan", "--qa-file"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             QaEvaluation.Outcome outcome;
             try {
-                StoredMethods.Found found = StoredMethods.newest(store, options.text("--method"));
+                StoredMethods.Found found = StoredMethods.find(store, options);
                 QaPlan plan = QaPlan.read(options.path("--plan"));
                 ContainerContents qa = ContainerContents.read(List.of(options.path("--qa-file")),
                         new InterferogramTransform(found.method().transform()));

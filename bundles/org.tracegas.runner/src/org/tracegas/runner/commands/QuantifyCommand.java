@@ -40,10 +40,11 @@ public final class QuantifyCommand implements Command {
 
     @Override
     public String usage() {
-        return "usage: tracegas quantify <workspace and --as options> --project <code> --method <method name>\n"
+        return "usage: tracegas quantify <workspace and --as options> --project <code> --method <name>\n"
                 + "                         --backgrounds <container> [--backgrounds ...] --file <container> "
-                + "[--file ...]\n" + WorkspaceLogin.USAGE + "\n" + """
-                  The newest version of the method is rebuilt from the workspace. Backgrounds are the background
+                + "[--file ...]\n" + WorkspaceLogin.USAGE + "\n"
+                + StoredMethods.USAGE + "\n" + """
+                  The chosen version of the method is rebuilt from the workspace. Backgrounds are the background
                   records of the --backgrounds files; each sample is ratioed against the last one before it.
                   Every file is read once before anything is stored; each sample is stored with its absorbance
                   and its results, which point at the method and library versions.
@@ -62,7 +63,7 @@ public final class QuantifyCommand implements Command {
             throw new UsageException("give at least one --file and one --backgrounds file");
         }
         Options options = Options.parse(rest2, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--project", "--method"));
+                "--project", "--method", "--method-version"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
@@ -71,7 +72,7 @@ public final class QuantifyCommand implements Command {
             ContainerContents backgrounds;
             long samples;
             try {
-                found = StoredMethods.newest(store, options.text("--method"));
+                found = StoredMethods.find(store, options);
                 if (job.hasResults(found.version().id())) {
                     context.err().println("tracegas quantify: project " + project.code() + " holds results of "
                             + "method version " + found.version().number() + " already; nothing done");

@@ -31,8 +31,9 @@ public final class ReportCommand implements Command {
 
     @Override
     public String usage() {
-        return "usage: tracegas report <workspace and --as options> --project <code> --method <method name>\n"
-                + "                       --plan <report plan> --out <folder>\n" + WorkspaceLogin.USAGE + "\n" + """
+        return "usage: tracegas report <workspace and --as options> --project <code> --method <name>\n"
+                + "                       --plan <report plan> --out <folder>\n" + WorkspaceLogin.USAGE + "\n"
+                + StoredMethods.USAGE + "\n" + """
                   The plan (key = value lines) gives the campaign (report-id, client, plant, source, days,
                   issued), the reporting basis (standard conditions, reference-o2), the O2 side-channel file and
                   column, the water compound, the uncertainty budget, the averaging periods, an optional
@@ -45,14 +46,14 @@ public final class ReportCommand implements Command {
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
         Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--project", "--method", "--plan", "--out"));
+                "--project", "--method", "--method-version", "--plan", "--out"));
         Path out = options.path("--out");
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             ReportContent content;
             try {
-                StoredMethods.Found found = StoredMethods.newest(store, options.text("--method"));
+                StoredMethods.Found found = StoredMethods.find(store, options);
                 content = new CampaignReport(store, actor, project.id(), StoredMethods.SOFTWARE)
                         .content(found.version(), found.method(), ReportPlan.read(options.path("--plan")));
             } catch (FileFormatException | ImportException e) {

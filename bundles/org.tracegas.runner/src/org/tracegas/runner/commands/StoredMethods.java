@@ -9,21 +9,39 @@ import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
-/** How the commands that work with results find a project and the newest stored version of a method. */
+/** How the commands that work with results find a project and a stored version of a method. */
 final class StoredMethods {
 
     static final String SOFTWARE = "tracegas-runner";
+    static final String USAGE = """
+              --method <name> [--method-version <n>]   the stored method, its version n (default: the newest)""";
 
-    /** The newest version of a method and the method rebuilt from it. */
+    /** A version of a method and the method rebuilt from it. */
     record Found(VersionInfo version, StoredMethod method) {
     }
 
     private StoredMethods() {
     }
 
-    static Found newest(WorkspaceStore store, String name) throws UsageException, FileFormatException {
+    /**
+     * The version --method-version names, or the newest one; versions of a method form one line from its first
+     * version, each revised from the one before, so the wanted one lies on the newest one's line of parents.
+     */
+    static Found find(WorkspaceStore store, Options options) throws UsageException, FileFormatException {
+        String name = options.text("--method");
         VersionInfo version = store.versions().latest(VersionKind.METHOD, name)
                 .orElseThrow(() -> new UsageException("no method named '" + name + "'; define it with method-define"));
+        if (options.has("--method-version")) {
+            int wanted = options.positiveInteger("--method-version");
+            int newest = version.number();
+            while (version.number() != wanted && version.parentId() != null) {
+                version = store.versions().version(version.parentId());
+            }
+            if (version.number() != wanted) {
+                throw new UsageException("method '" + name + "' has no version " + wanted + " among the versions up to its newest, "
+                        + newest);
+            }
+        }
         return new Found(version, StoredMethod.parse(store.versions().content(version.id()),
                 "method version " + version.id()));
     }
