@@ -21,7 +21,7 @@ public interface WorkspaceStore extends AutoCloseable {
 
     QaService qa();
 
-    /** Review and approval signatures of reports, by content hash. */
+    /** Review and approval signatures of reports, by content hash, and of stored results. */
     ReviewService reviews();
 
     /** Blocks of processed spectra, each block in one transaction. */
@@ -34,6 +34,12 @@ public interface WorkspaceStore extends AutoCloseable {
     @Override
     void close();
 
-    /** Walks the whole audit chain and reports every record that was altered, removed, inserted or reordered. */
+    /** Reading the audit trail for review and copying, and verifying its chain. */
+    AuditService audit();
+
+    /**
+     * Walks the whole audit chain and reports every record that was altered, removed, inserted or reordered;
+     * the same as {@code audit().verify()}.
+     */
     VerificationReport verifyAuditTrail();
 }

@@ -141,7 +141,7 @@ final class JdbcResultService implements ResultService {
                 : EnumSet.copyOf(r.flags()).stream().map(ResultFlag::getName).collect(Collectors.joining(","));
     }
 
-    private static ResultInfo map(ResultSet rs) throws SQLException {
+    static ResultInfo map(ResultSet rs) throws SQLException {
         EnumSet<ResultFlag> flags = EnumSet.noneOf(ResultFlag.class);
         for (String name : rs.getString("flags").split(",")) {
             if (!name.isEmpty()) {

@@ -1,9 +1,12 @@
 package org.tracegas.store.internal;
 
+import java.sql.SQLException;
+import java.util.Arrays;
 import java.util.List;
 
 import org.tracegas.audit.CredentialCheck;
 import org.tracegas.audit.Signature;
+import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.audit.SignatureRefusedException;
 import org.tracegas.audit.SignatureRequest;
 import org.tracegas.audit.SignatureService;
@@ -11,6 +14,8 @@ import org.tracegas.model.AccessLevel;
 import org.tracegas.store.LoginFailedException;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.ReportSignatureRequest;
+import org.tracegas.store.ResultInfo;
+import org.tracegas.store.ResultSignatureRequest;
 import org.tracegas.store.ReviewService;
 import org.tracegas.store.Session;
 import org.tracegas.store.UserService;
@@ -35,40 +40,98 @@ final class JdbcReviewService implements ReviewService {
         this.signatures = new SignatureService(check);
     }
 
+    /** What a signature is given on: the object, its project, the signed bytes and their author. */
+    private record Subject(String projectId, String objectType, String objectId, byte[] content, String authorId) {
+    }
+
+    /** Finds the subject inside the signing or reading transaction, so the checks and the signature agree. */
+    @FunctionalInterface
+    private interface Lookup {
+        Subject find(Tx tx) throws SQLException;
+    }
+
     /** The signature or the refusal of one attempt; the refusal is committed by the signature service. */
     private record Attempt(Signature signature, SignatureRefusedException refused) {
     }
 
     @Override
     public Signature sign(Session signer, ReportSignatureRequest r) throws SignatureRefusedException {
-        if (signer == null || r == null) {
-            throw new IllegalArgumentException("signer and request must not be null");
+        requireArguments(signer, r);
+        return sign(signer, "signing report " + r.reportId() + " of project " + r.projectId(), report(r.projectId(),
+                r.reportId(), r.content(), r.authorId()), r.typedLogin(), r.password(), r.meaning(), r.comment());
+    }
+
+    @Override
+    public List<Signature> signatures(Session reader, String projectId, String reportId) {
+        return signatures(reader, "reading the signatures of report " + reportId,
+                report(projectId, reportId, null, null));
+    }
+
+    @Override
+    public Signature signResult(Session signer, ResultSignatureRequest r) throws SignatureRefusedException {
+        requireArguments(signer, r);
+        return sign(signer, "signing result " + r.resultId(), result(r.resultId()), r.typedLogin(), r.password(),
+                r.meaning(), r.comment());
+    }
+
+    @Override
+    public List<Signature> resultSignatures(Session reader, String resultId) {
+        return signatures(reader, "reading the signatures of result " + resultId, result(resultId));
+    }
+
+    private static Lookup report(String projectId, String reportId, byte[] content, String authorId) {
+        Subject s = new Subject(projectId, OBJECT_TYPE, objectId(projectId, reportId), content, authorId);
+        return tx -> s;
+    }
+
+    private static Lookup result(String resultId) {
+        return tx -> {
+            ResultInfo r = tx.queryOne("SELECT * FROM analysis_result WHERE id = ?", JdbcResultService::map, resultId)
+                    .orElseThrow(() -> new NoSuchObjectException(RESULT_TYPE, resultId));
+            return new Subject(r.projectId(), RESULT_TYPE, r.id(), ResultContent.of(r), r.recordedBy());
+        };
+    }
+
+    private Signature sign(Session signer, String operation, Lookup lookup, String typedLogin, char[] password,
+            SignatureMeaning meaning, String comment) throws SignatureRefusedException {
+        Attempt attempt;
+        try {
+            String printedName = users.user(signer.userId()).displayName();
+            String signerId = signer.login().equals(typedLogin) ? signer.userId() : typedLogin;
+            attempt = transactions.run(operation, tx -> {
+                Subject s = lookup.find(tx);
+                Guard.requireProject(tx, signer, s.projectId(), AccessLevel.READ);
+                SignatureRequest request = new SignatureRequest(signer.userId(), signerId, password, printedName,
+                        meaning, s.objectType(), s.objectId(), 0, s.content(), s.authorId(),
+                        comment == null || comment.isBlank() ? null : comment);
+                try {
+                    return new Attempt(signatures.sign(tx.connection(), request), null);
+                } catch (SignatureRefusedException e) {
+                    return new Attempt(null, e);
+                }
+            });
+        } finally {
+            // also when the attempt ends before the signature service clears it (no access, no such object)
+            Arrays.fill(password, '\0');
         }
-        String printedName = users.user(signer.userId()).displayName();
-        String signerId = signer.login().equals(r.typedLogin()) ? signer.userId() : r.typedLogin();
-        Attempt attempt = transactions.run("signing report " + r.reportId() + " of project " + r.projectId(), tx -> {
-            Guard.requireProject(tx, signer, r.projectId(), AccessLevel.READ);
-            SignatureRequest request = new SignatureRequest(signer.userId(), signerId, r.password(), printedName,
-                    r.meaning(), OBJECT_TYPE, objectId(r.projectId(), r.reportId()), 0, r.content(), r.authorId(),
-                    r.comment() == null || r.comment().isBlank() ? null : r.comment());
-            try {
-                return new Attempt(signatures.sign(tx.connection(), request), null);
-            } catch (SignatureRefusedException e) {
-                return new Attempt(null, e);
-            }
-        });
         if (attempt.refused() != null) {
             throw attempt.refused();
         }
         return attempt.signature();
     }
 
-    @Override
-    public List<Signature> signatures(Session reader, String projectId, String reportId) {
-        return transactions.run("reading the signatures of report " + reportId, tx -> {
-            Guard.requireProject(tx, reader, projectId, AccessLevel.READ);
-            return SignatureService.signaturesOf(tx.connection(), OBJECT_TYPE, objectId(projectId, reportId));
+    private List<Signature> signatures(Session reader, String operation, Lookup lookup) {
+        return transactions.run(operation, tx -> {
+            Subject s = lookup.find(tx);
+            Guard.requireProject(tx, reader, s.projectId(), AccessLevel.READ);
+            return SignatureService.signaturesOf(tx.connection(), s.objectType(), s.objectId());
         });
+    }
+
+    private static void requireArguments(Session signer, Object request) {
+        if (signer == null || request == null) {
+            throw new IllegalArgumentException("signer and request must not be null");
+        }
     }
 
     // report identifiers are the lab's; the project keeps two projects' reports of the same id apart

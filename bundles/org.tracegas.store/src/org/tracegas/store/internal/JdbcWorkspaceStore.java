@@ -9,8 +9,8 @@ import javax.sql.DataSource;
 import org.h2.jdbcx.JdbcDataSource;
 import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.audit.AuditSchema;
-import org.tracegas.audit.AuditVerifier;
 import org.tracegas.audit.VerificationReport;
+import org.tracegas.store.AuditService;
 import org.tracegas.store.BlockService;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.QaService;
@@ -41,6 +41,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     private final QaService qa;
     private final BlockService blocks;
     private final WorkUnitService workUnits;
+    private final AuditService audit;
 
     private JdbcWorkspaceStore(DataSource dataSource, Backend backend, int maxFailedLogins) {
         this.dataSource = dataSource;
@@ -54,6 +55,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         qa = new JdbcQaService(transactions);
         blocks = new JdbcBlockService(transactions);
         workUnits = new JdbcWorkUnitService(transactions, backend);
+        audit = new JdbcAuditService(transactions);
     }
 
     /** An embedded H2 database in {@code folder} (created when missing), file {@code workspace.mv.db}. */
@@ -153,11 +155,12 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     }
 
     @Override
+    public AuditService audit() {
+        return audit;
+    }
+
+    @Override
     public VerificationReport verifyAuditTrail() {
-        try (Connection c = dataSource.getConnection()) {
-            return AuditVerifier.verify(c);
-        } catch (SQLException e) {
-            throw new StoreException("verifying the audit trail failed: " + e.getMessage(), e);
-        }
+        return audit.verify();
     }
 }

@@ -94,6 +94,11 @@ public final class WorkspaceStoreComponent implements WorkspaceStore {
     }
 
     @Override
+    public org.tracegas.store.AuditService audit() {
+        return store.audit();
+    }
+
+    @Override
     public VerificationReport verifyAuditTrail() {
         return store.verifyAuditTrail();
     }

@@ -1,0 +1,168 @@
+package org.tracegas.store;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.io.StringWriter;
+import java.io.Writer;
+import java.sql.Connection;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.tracegas.audit.AuditAction;
+import org.tracegas.audit.AuditQuery;
+import org.tracegas.audit.AuditRecord;
+import org.tracegas.audit.AuditReview;
+import org.tracegas.model.Role;
+import org.tracegas.store.internal.JdbcWorkspaceStore;
+
+/** Reading and exporting the audit trail through the store, on each backend. */
+abstract class AuditServiceContract {
+
+    private TestBackend backend;
+    private WorkspaceStore store;
+    private Session admin;
+    private Session analyst;
+    private Session reviewer;
+    private Session qualityManager;
+    private ProjectInfo project;
+
+    abstract TestBackend newBackend() throws Exception;
+
+    @BeforeEach
+    void setUp() throws Exception {
+        backend = newBackend();
+        store = backend.open();
+        admin = store.users().createFirstAdministrator("admin", "Administrator", "admin-pw-12".toCharArray());
+        store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
+        store.users().createUser(admin, "rev", "Rhea Viewer", Set.of(Role.REVIEWER), "rev-pw-1234".toCharArray());
+        store.users().createUser(admin, "qm", "Quinn Manager", Set.of(Role.QUALITY_MANAGER),
+                "qm-pw-12345".toCharArray());
+        analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
+        reviewer = store.users().logIn("rev", "rev-pw-1234".toCharArray());
+        qualityManager = store.users().logIn("qm", "qm-pw-12345".toCharArray());
+        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "A-1",
+                "Audit project");
+    }
+
+    @AfterEach
+    void tearDown() throws Exception {
+        try (TestBackend b = backend) {
+            store.close();
+        }
+    }
+
+    @Test
+    void reviewersQualityManagersAndAdministratorsReadTheTrailWithTheChainOfTheSameMoment() throws Exception {
+        long stored = count("SELECT COUNT(*) FROM audit_record", List.of());
+        long head = count("SELECT MAX(seq) FROM audit_record", List.of());
+        for (Session reader : List.of(reviewer, qualityManager, admin)) {
+            AuditReview.Result all = store.audit().review(reader, AuditQuery.all().build());
+            // each read adds nothing to the trail: the count stays that of the setup's changes
+            assertEquals(stored, all.records().size(), reader.login());
+            assertTrue(all.chain().intact(), all.chain().findings().toString());
+            assertEquals(stored, all.chain().recordsChecked(), "records verified in the same snapshot");
+            assertEquals(head, all.chain().headSequence());
+            assertEquals(head, all.records().get(all.records().size() - 1).sequence(), "sequence order");
+        }
+        assertEquals(store.audit().verify(), store.verifyAuditTrail());
+    }
+
+    @Test
+    void theFilterNarrowsToTheAnalystsRecordsOfOneAction() throws Exception {
+        AuditReview.Result mine = store.audit().review(reviewer,
+                AuditQuery.all().user(analyst.userId()).actions(AuditAction.CREATE).build());
+        long expected = count("SELECT COUNT(*) FROM audit_record WHERE user_id = ? AND action = 'CREATE'",
+                List.of(analyst.userId()));
+        assertTrue(expected >= 2, "the client and the project were created by the analyst");
+        assertEquals(expected, mine.records().size());
+        for (AuditRecord r : mine.records()) {
+            assertEquals(analyst.userId(), r.userId());
+            assertEquals(AuditAction.CREATE, r.action());
+        }
+    }
+
+    @Test
+    void anAnalystMayNeitherReadNorExportTheTrail() {
+        AccessDeniedException read = assertThrows(AccessDeniedException.class,
+                () -> store.audit().review(analyst, AuditQuery.all().build()));
+        assertTrue(read.getMessage().contains("'ana'") && read.getMessage().contains("read the audit trail"),
+                read.getMessage());
+        StringWriter out = new StringWriter();
+        assertThrows(AccessDeniedException.class, () -> store.audit().exportCsv(analyst, AuditQuery.all().build(), out));
+        assertEquals("", out.toString(), "nothing is written before the role is checked");
+        assertThrows(IllegalArgumentException.class, () -> store.audit().review(null, AuditQuery.all().build()));
+        assertThrows(IllegalArgumentException.class, () -> store.audit().review(reviewer, null));
+    }
+
+    @Test
+    void aLockedReviewerIsRefused() {
+        for (int i = 0; i < JdbcWorkspaceStore.DEFAULT_MAX_FAILED_LOGINS; i++) {
+            assertThrows(LoginFailedException.class, () -> store.users().logIn("rev", "wrong-pw-000".toCharArray()));
+        }
+        assertThrows(AccessDeniedException.class, () -> store.audit().review(reviewer, AuditQuery.all().build()));
+    }
+
+    @Test
+    void theExportWritesTheFilteredRecordsAsCsvInSequenceOrder() throws Exception {
+        AuditQuery query = AuditQuery.all().object("project", project.id()).build();
+        StringWriter out = new StringWriter();
+        long written = store.audit().exportCsv(qualityManager, query, out);
+        long expected = count("SELECT COUNT(*) FROM audit_record WHERE object_type = 'project' AND object_id = ?",
+                List.of(project.id()));
+        assertTrue(expected >= 1, "creating the project is recorded");
+        assertEquals(expected, written);
+        // RFC 4180 section 2: records end in CRLF, the first line is the header
+        String[] lines = out.toString().split("\r\n");
+        assertEquals(written + 1, lines.length);
+        assertEquals(String.join(",", AuditReview.CSV_HEADER), lines[0]);
+        List<Long> sequences = new ArrayList<>();
+        for (int i = 1; i < lines.length; i++) {
+            sequences.add(Long.parseLong(lines[i].substring(0, lines[i].indexOf(','))));
+        }
+        assertEquals(sequences.stream().sorted().toList(), sequences, "sequence order");
+        assertEquals(store.audit().review(qualityManager, query).records().stream().map(AuditRecord::sequence)
+                .toList(), sequences, "the export holds the records the review shows");
+    }
+
+    @Test
+    void aFailingWriterIsReportedAsTheWritersFailure() {
+        Writer broken = new Writer() {
+            @Override
+            public void write(char[] buf, int off, int len) throws IOException {
+                throw new IOException("disk full");
+            }
+
+            @Override
+            public void flush() {
+            }
+
+            @Override
+            public void close() {
+            }
+        };
+        IOException e = assertThrows(IOException.class,
+                () -> store.audit().exportCsv(admin, AuditQuery.all().build(), broken));
+        assertEquals("disk full", e.getMessage());
+    }
+
+    private long count(String sql, List<Object> args) throws Exception {
+        try (Connection c = backend.raw(); PreparedStatement ps = c.prepareStatement(sql)) {
+            for (int i = 0; i < args.size(); i++) {
+                ps.setObject(i + 1, args.get(i));
+            }
+            try (ResultSet rs = ps.executeQuery()) {
+                rs.next();
+                return rs.getLong(1);
+            }
+        }
+    }
+}

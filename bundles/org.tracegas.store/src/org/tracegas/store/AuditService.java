@@ -1,0 +1,40 @@
+package org.tracegas.store;
+
+import java.io.IOException;
+import java.io.Writer;
+
+import org.tracegas.audit.AuditQuery;
+import org.tracegas.audit.AuditReview;
+import org.tracegas.audit.VerificationReport;
+
+/**
+ * The audit trail for review and copying (21 CFR 11.10(e); EU GMP Annex 11 section 9: the trail is regularly
+ * reviewed). Reviewers, quality managers and administrators read its records; analysts, whose work it
+ * records, do not. Each call reads in one snapshot of the workspace.
+ */
+public interface AuditService {
+
+    /**
+     * The records matching the query in sequence order, together with the verification of the whole chain,
+     * read in one snapshot.
+     *
+     * @throws AccessDeniedException unless the reader is a reviewer, quality manager or administrator
+     */
+    AuditReview.Result review(Session reader, AuditQuery query);
+
+    /**
+     * Writes the records matching the query as CSV ({@link AuditReview#CSV_HEADER}, RFC 4180, times in ISO-8601
+     * UTC), streamed from the database.
+     *
+     * @return the number of records written
+     * @throws AccessDeniedException unless the reader is a reviewer, quality manager or administrator
+     * @throws IOException           if writing to {@code out} fails
+     */
+    long exportCsv(Session reader, AuditQuery query, Writer out) throws IOException;
+
+    /**
+     * Walks the whole chain and reports every record that was altered, removed, inserted or reordered. Needs no
+     * session: the report holds the chain's state and the positions of findings, not the records' content.
+     */
+    VerificationReport verify();
+}

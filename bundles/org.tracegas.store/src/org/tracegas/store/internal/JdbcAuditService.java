@@ -1,0 +1,78 @@
+package org.tracegas.store.internal;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.sql.Connection;
+
+import org.tracegas.audit.AuditQuery;
+import org.tracegas.audit.AuditReview;
+import org.tracegas.audit.AuditVerifier;
+import org.tracegas.audit.VerificationReport;
+import org.tracegas.model.Role;
+import org.tracegas.store.AuditService;
+import org.tracegas.store.Session;
+
+final class JdbcAuditService implements AuditService {
+
+    /** Who reviews the trail: those who check others' work, and whoever keeps the workspace. */
+    private static final Role[] READERS = {Role.REVIEWER, Role.QUALITY_MANAGER, Role.ADMINISTRATOR};
+
+    private final Transactions transactions;
+
+    JdbcAuditService(Transactions transactions) {
+        this.transactions = transactions;
+    }
+
+    @Override
+    public AuditReview.Result review(Session reader, AuditQuery query) {
+        requireQuery(query);
+        return snapshot("reading the audit trail", tx -> {
+            Guard.requireRole(tx, reader, "read the audit trail", READERS);
+            return AuditReview.review(tx.connection(), query);
+        });
+    }
+
+    @Override
+    public long exportCsv(Session reader, AuditQuery query, Writer out) throws IOException {
+        requireQuery(query);
+        if (out == null) {
+            throw new IllegalArgumentException("out must not be null");
+        }
+        try {
+            return snapshot("exporting the audit trail", tx -> {
+                Guard.requireRole(tx, reader, "export the audit trail", READERS);
+                try {
+                    return AuditReview.exportCsv(tx.connection(), query, out);
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            });
+        } catch (UncheckedIOException e) {
+            throw e.getCause();
+        }
+    }
+
+    @Override
+    public VerificationReport verify() {
+        return snapshot("verifying the audit trail", tx -> AuditVerifier.verify(tx.connection()));
+    }
+
+    /**
+     * Runs the work in one repeatable-read transaction: the records read and the chain verified are of the same
+     * moment, and a PostgreSQL cursor streams (it fetches by fetch size only outside auto-commit).
+     */
+    private <T> T snapshot(String operation, Transactions.Work<T> work) {
+        return transactions.run(operation, tx -> {
+            // before the transaction's first statement, as PostgreSQL requires
+            tx.connection().setTransactionIsolation(Connection.TRANSACTION_REPEATABLE_READ);
+            return work.run(tx);
+        });
+    }
+
+    private static void requireQuery(AuditQuery query) {
+        if (query == null) {
+            throw new IllegalArgumentException("query must not be null: AuditQuery.all().build() reads every record");
+        }
+    }
+}
