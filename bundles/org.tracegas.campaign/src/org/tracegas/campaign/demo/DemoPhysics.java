@@ -5,15 +5,10 @@ import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.Map;
 
-import org.tracegas.library.Compound;
-import org.tracegas.library.ReferenceSpectrum;
 import org.tracegas.library.synthesis.AbsorptionPath;
 import org.tracegas.library.synthesis.HitranLineListReader;
 import org.tracegas.library.synthesis.LineByLineModel;
 import org.tracegas.library.synthesis.PowerLawPartitionFunction;
-import org.tracegas.library.synthesis.ReferenceSynthesizer;
-import org.tracegas.library.synthesis.SynthesisRequest;
-import org.tracegas.preprocess.Apodization;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.SpectralAxis;
 
@@ -29,13 +24,20 @@ public final class DemoPhysics {
     private static final double FINE_HIGH = 3949.0;
 
     private final Map<String, LineByLineModel> models = new LinkedHashMap<>();
+    private final Path lineListFolder;
 
-    private DemoPhysics() {
+    private DemoPhysics(Path lineListFolder) {
+        this.lineListFolder = lineListFolder;
+    }
+
+    /** The folder of the line lists the models were read from. */
+    Path lineListFolder() {
+        return lineListFolder;
     }
 
     /** Writes the invented line lists into a folder and reads them back into line-by-line models. */
     public static DemoPhysics fromInventedLineLists(Path folder) throws IOException {
-        DemoPhysics physics = new DemoPhysics();
+        DemoPhysics physics = new DemoPhysics(folder);
         HitranLineListReader reader = new HitranLineListReader();
         for (Gas gas : DemoScenario.GASES) {
             Path file = InventedLineLists.write(gas, folder);
@@ -77,18 +79,6 @@ public final class DemoPhysics {
         }
         return new InterferogramSynthesizer(TRANSFORM_LENGTH, first, envelope, depthPerPpm,
                 DemoScenario.interferogramPoints() / 2);
-    }
-
-    /**
-     * A synthetic absorbance reference of a gas at the cell's conditions and the instrument's resolution and
-     * apodization, on the axis of the processed spectra.
-     */
-    ReferenceSpectrum reference(Gas gas, double ppm, SpectralAxis axis, Apodization apodization) {
-        AbsorptionPath path = new AbsorptionPath(DemoScenario.CELL_TEMPERATURE, DemoScenario.CELL_PRESSURE, ppm,
-                DemoScenario.PATH_LENGTH);
-        Compound compound = new Compound(gas.name(), gas.casNumber(), gas.formula(), gas.molarMass());
-        return new ReferenceSynthesizer(models.get(gas.name()), compound)
-                .synthesize(new SynthesisRequest(path, axis, apodization, DemoScenario.RESOLUTION, 0.02));
     }
 
     /**

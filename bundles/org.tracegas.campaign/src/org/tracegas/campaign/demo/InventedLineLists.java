@@ -27,10 +27,15 @@ final class InventedLineLists {
     private InventedLineLists() {
     }
 
+    /** Name of the line list file of a gas. */
+    static String fileName(Gas gas) {
+        return gas.name().toLowerCase(Locale.ROOT) + "-invented.par";
+    }
+
     /** Writes the line list of a gas into a folder and returns its file. */
     static Path write(Gas gas, Path folder) throws IOException {
         Files.createDirectories(folder);
-        Path file = folder.resolve(gas.name().toLowerCase(Locale.ROOT) + "-invented.par");
+        Path file = folder.resolve(fileName(gas));
         WholeFile.write(file, stream -> {
             Writer out = new OutputStreamWriter(stream, StandardCharsets.US_ASCII);
             for (Gas.Band band : gas.bands()) {

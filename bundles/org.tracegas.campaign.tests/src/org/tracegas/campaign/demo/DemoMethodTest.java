@@ -1,0 +1,66 @@
+package org.tracegas.campaign.demo;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Duration;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.campaign.LibraryPlan;
+import org.tracegas.campaign.MethodDefinition;
+import org.tracegas.campaign.QaPlan;
+import org.tracegas.campaign.ReportPlan;
+import org.tracegas.preprocess.Apodization;
+import org.tracegas.spectrum.AxisUnit;
+import org.tracegas.spectrum.SpectralAxis;
+
+/** The demo's plans are files the runner's commands read, with the demo's own numbers. */
+class DemoMethodTest {
+
+    @TempDir
+    Path folder;
+
+    private Path write(String name, String text) throws Exception {
+        return Files.writeString(folder.resolve(name), text, StandardCharsets.UTF_8);
+    }
+
+    @Test
+    void plansReadBackWithTheDemoNumbers() throws Exception {
+        MethodDefinition method = MethodDefinition.read(write("demo.method", DemoMethod.methodText()));
+        assertEquals(DemoMethod.METHOD_NAME, method.name());
+        assertEquals(9, method.analytes().size(), "8 analytes and the tracer");
+        assertEquals(folder.resolve("library/library.manifest"), method.libraryManifest());
+        assertEquals(DemoScenario.PATH_LENGTH, method.pathLengthM());
+        assertEquals(Apodization.NORTON_BEER_MEDIUM, method.transform().apodization());
+
+        // an axis step that has no short decimal form must come back exactly
+        SpectralAxis axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 700.0 + 1.0 / 3, 15798.0 / 65536, 13275);
+        LibraryPlan plan = LibraryPlan.read(write("library.plan", DemoMethod.libraryPlanText(axis, "line-lists")));
+        assertEquals(axis.first(), plan.axis().first());
+        assertEquals(axis.step(), plan.axis().step());
+        assertEquals(DemoScenario.GASES.size(), plan.gases().size());
+        LibraryPlan.Gas co = plan.gases().stream().filter(g -> g.compound().name().equals("CO")).findFirst()
+                .orElseThrow();
+        // CO at 0.5, 1.5 and 8 times its nominal 12 ppm over 4.85 m
+        assertEquals(List.of(29.1, 87.3, 465.6), co.ppmMetres().stream().map(v -> Math.round(v * 1e6) / 1e6)
+                .toList());
+        assertEquals(folder.resolve("line-lists/co-invented.par"), co.lineList());
+
+        QaPlan qa = QaPlan.read(write("qa.plan", DemoMethod.qaPlanText()));
+        assertEquals(DemoCampaignFiles.CTS_CO_PPM, qa.ctsPpm());
+        assertEquals("SF6", qa.tracer());
+        assertEquals(Duration.ofHours(24), qa.backgroundAgeLimit());
+
+        ReportPlan report = ReportPlan.read(write("report.plan", DemoMethod.reportPlanText("raw/o2.csv")));
+        assertEquals(List.of(Duration.ofMinutes(30), Duration.ofDays(1)), report.periods());
+        assertEquals(6, report.reported().size());
+        assertEquals("morning upset", report.exampleCaption());
+        assertEquals(DemoScenario.CLIENT, report.campaign().client());
+        assertTrue(report.campaign().reportingBasis().contains("11 % O2"), report.campaign().reportingBasis());
+    }
+}
