@@ -215,7 +215,8 @@ class DeskFlowsTest {
             j.schedule();
         });
         shell.open();
-        panel.setWorkspace(access);
+        Session manager = access.store().users().logIn(DemoProject.MANAGER, DemoProject.PASSWORD.toCharArray());
+        panel.setWorkspace(access, manager);
         Screens.waitFor(display, () -> panel.shown() != null, 30_000);
         assertTrue(panel.shown().chain().intact());
         assertTrue(panel.chainState().getText().startsWith("✔ Audit chain intact — "), panel.chainState().getText());
@@ -243,5 +244,31 @@ class DeskFlowsTest {
         press(panel.refreshButton());
         assertTrue(panel.problem().getText().startsWith("From: '10 March' is not a date"), panel.problem().getText());
         assertEquals(2, jobs.size(), "a filter that cannot be read starts no job");
+    }
+
+    @Test
+    void theAuditTrailIsRefusedToTheAnalystAndNoFileIsExported() throws Exception {
+        runAsAnalyst();
+        Session analyst = access.store().users().logIn(DemoProject.ANALYST, DemoProject.PASSWORD.toCharArray());
+        AuditTrailPanel panel = new AuditTrailPanel(shell, SWT.NONE);
+        List<Job> jobs = new ArrayList<>();
+        panel.setScheduler(j -> {
+            jobs.add(j);
+            j.schedule();
+        });
+        shell.open();
+        panel.setWorkspace(access, analyst);
+        Screens.waitFor(display, () -> !panel.problem().getText().isEmpty(), 30_000);
+        assertTrue(panel.problem().getText().contains("may not read the audit trail"), panel.problem().getText());
+        assertNull(panel.shown());
+        assertEquals(0, panel.table().getItemCount());
+        assertTrue(panel.refreshButton().isEnabled(), "the filter can be tried again");
+        Path csv = folder.resolve("refused.csv");
+        assertEquals(-1, panel.exportTo(csv));
+        assertTrue(panel.problem().getText().contains("may not export the audit trail"), panel.problem().getText());
+        try (var left = Files.list(folder)) {
+            assertEquals(List.of(), left.filter(f -> f.getFileName().toString().contains("csv")
+                    || f.getFileName().toString().endsWith(".part")).toList(), "no file, whole or in part");
+        }
     }
 }

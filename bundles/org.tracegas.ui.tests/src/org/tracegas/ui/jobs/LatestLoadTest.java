@@ -42,7 +42,9 @@ class LatestLoadTest {
         LatestLoad<String> load = new LatestLoad<>(owner);
         List<String> shown = new ArrayList<>();
         CountDownLatch release = new CountDownLatch(1);
+        CountDownLatch reading = new CountDownLatch(1);
         Job first = load.start("first", m -> {
+            reading.countDown();
             try {
                 release.await(10, TimeUnit.SECONDS);
             } catch (InterruptedException e) {
@@ -50,6 +52,8 @@ class LatestLoadTest {
             }
             return "first";
         }, shown::add, shown::add);
+        // the later request comes while the earlier one is reading (a job cancelled before it runs has no result)
+        assertTrue(reading.await(10, TimeUnit.SECONDS));
         Job second = load.start("second", m -> "second", shown::add, shown::add);
         second.join(10_000, null);
         release.countDown();

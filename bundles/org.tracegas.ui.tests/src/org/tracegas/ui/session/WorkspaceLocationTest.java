@@ -17,6 +17,9 @@ import org.eclipse.jface.preference.PreferenceStore;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.postgresql.ds.PGSimpleDataSource;
+import org.tracegas.audit.AuditQuery;
+import org.tracegas.audit.AuditReview;
+import org.tracegas.store.Session;
 import org.tracegas.store.StoreException;
 import org.tracegas.ui.prefs.DeskPreferences;
 
@@ -77,7 +80,7 @@ class WorkspaceLocationTest {
     }
 
     @Test
-    void theLabServerIsOpenedWhenThePreferencesSaySoAndAuditConnectionsReachTheSameDatabase() throws Exception {
+    void theLabServerIsOpenedWhenThePreferencesSaySoAndTheAuditTrailIsReadFromTheSameDatabase() throws Exception {
         String schema = "desk_" + UUID.randomUUID().toString().replace("-", "");
         PGSimpleDataSource admin = new PGSimpleDataSource();
         admin.setURL(PG_URL);
@@ -90,13 +93,18 @@ class WorkspaceLocationTest {
             WorkspaceLocation location = DeskPreferences.location(prefs(PG_URL + "?currentSchema=" + schema, PG_USER),
                     Map.of(DeskPreferences.SERVER_PASSWORD_VARIABLE, PG_PASSWORD));
             try (WorkspaceAccess access = WorkspaceAccess.open(location)) {
-                access.store().users().createFirstAdministrator("admin", "Administrator", "lab-admin-pw".toCharArray());
+                Session first = access.store().users().createFirstAdministrator("admin", "Administrator",
+                        "lab-admin-pw".toCharArray());
                 assertTrue(access.store().users().hasUsers());
-                // the signing and audit-trail connection works in the same database and schema
-                try (Connection c = access.connection(); Statement s = c.createStatement();
-                        ResultSet r = s.executeQuery("SELECT current_schema()")) {
+                // the audit trail the desk reads through the store is the one in the lab server's schema
+                AuditReview.Result trail = access.store().audit().review(first,
+                        AuditQuery.all().user(first.userId()).build());
+                assertTrue(trail.chain().intact());
+                try (Connection c = admin.getConnection(); Statement s = c.createStatement();
+                        ResultSet r = s.executeQuery("SELECT COUNT(*) FROM " + schema + ".audit_record")) {
                     assertTrue(r.next());
-                    assertEquals(schema, r.getString(1));
+                    assertEquals(r.getLong(1), trail.chain().recordsChecked());
+                    assertFalse(trail.records().isEmpty(), "creating the administrator is recorded");
                 }
             }
         } finally {

@@ -1,6 +1,5 @@
 package org.tracegas.ui.dialogs;
 
-import java.sql.SQLException;
 import java.util.Locale;
 
 import org.eclipse.jface.dialogs.Dialog;
@@ -19,6 +18,7 @@ import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.audit.SignatureRefusedException;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
+import org.tracegas.store.StoreException;
 import org.tracegas.ui.session.ResultApproval;
 
 /**
@@ -108,7 +108,7 @@ public final class SignatureDialog extends Dialog {
             message.setText(refusal(e.reason()));
             password.setText("");
             return;
-        } catch (SQLException e) {
+        } catch (StoreException e) {
             message.setText("The signature could not be stored: " + e.getMessage());
             return;
         }

@@ -5,8 +5,7 @@ import java.io.Writer;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.sql.Connection;
-import java.sql.SQLException;
+import java.nio.file.StandardCopyOption;
 import java.time.Instant;
 import java.time.LocalDate;
 import java.time.ZoneOffset;
@@ -34,6 +33,8 @@ import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditRecord;
 import org.tracegas.audit.AuditReview;
 import org.tracegas.audit.VerificationReport;
+import org.tracegas.store.Session;
+import org.tracegas.store.StoreException;
 import org.tracegas.ui.jobs.ChainVerificationJob;
 import org.tracegas.ui.session.WorkspaceAccess;
 
@@ -61,6 +62,7 @@ public final class AuditTrailPanel extends Composite {
     private final Table table;
     private final Font large;
     private WorkspaceAccess access;
+    private Session reader;
     private AuditReview.Result shown;
     private Consumer<Job> scheduler = Job::schedule;
     private final java.util.Map<String, String> logins = new java.util.HashMap<>();
@@ -129,9 +131,13 @@ public final class AuditTrailPanel extends Composite {
         return c;
     }
 
-    /** Connects the panel to a workspace and reads the trail. */
-    public void setWorkspace(WorkspaceAccess access) {
+    /**
+     * Connects the panel to a workspace and reads the trail as {@code reader} (the store lets reviewers, quality
+     * managers and administrators read it; others see the refusal).
+     */
+    public void setWorkspace(WorkspaceAccess access, Session reader) {
         this.access = access;
+        this.reader = reader;
         refresh();
     }
 
@@ -153,9 +159,13 @@ public final class AuditTrailPanel extends Composite {
         refresh.setEnabled(false);
         chainState.setText("Verifying the chain…");
         chainState.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY));
-        scheduler.accept(new ChainVerificationJob(access, q, result -> getDisplay().asyncExec(() -> {
+        scheduler.accept(new ChainVerificationJob(access.store(), reader, q, result -> getDisplay().asyncExec(() -> {
             if (!isDisposed()) {
                 show(result);
+            }
+        }), message -> getDisplay().asyncExec(() -> {
+            if (!isDisposed()) {
+                failed(message);
             }
         })));
     }
@@ -231,6 +241,15 @@ public final class AuditTrailPanel extends Composite {
         layout(true);
     }
 
+    private void failed(String message) {
+        refresh.setEnabled(true);
+        chainState.setText("Chain not verified.");
+        chainState.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY));
+        problem.setText("The audit trail could not be read: " + message);
+        table.removeAll();
+        layout(true);
+    }
+
     private static String details(AuditRecord r) {
         if (r.meaning() != null) {
             return r.meaning() + " by " + r.signerName() + (r.reason() == null ? "" : " — " + r.reason());
@@ -256,17 +275,38 @@ public final class AuditTrailPanel extends Composite {
     }
 
     /**
-     * Writes the records matching the filter as CSV.
+     * Writes the records matching the filter as CSV. The file appears only when complete: the records go to a
+     * file beside it first, which is then moved into place.
      *
-     * @return records written, or -1 when the filter or the file could not be used (the reason is shown)
+     * @return records written, or -1 when the filter, the store or the file refused (the reason is shown)
      */
     public long exportTo(Path file) {
-        try (Connection c = access.connection();
-                Writer w = Files.newBufferedWriter(file, StandardCharsets.UTF_8)) {
-            return AuditReview.exportCsv(c, query(), w);
-        } catch (IOException | SQLException | IllegalArgumentException e) {
+        Path part = null;
+        try {
+            AuditQuery q = query();
+            part = Files.createTempFile(file.toAbsolutePath().getParent(), ".audit-trail-", ".part");
+            long written;
+            try (Writer w = Files.newBufferedWriter(part, StandardCharsets.UTF_8)) {
+                written = access.store().audit().exportCsv(reader, q, w);
+            }
+            Files.move(part, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
+            return written;
+        } catch (IOException | StoreException | IllegalArgumentException e) {
             problem.setText("Export to " + file + " failed: " + e.getMessage());
             return -1;
+        } finally {
+            deleteQuietly(part);
+        }
+    }
+
+    private void deleteQuietly(Path part) {
+        if (part == null) {
+            return;
+        }
+        try {
+            Files.deleteIfExists(part);
+        } catch (IOException e) {
+            problem.setText(problem.getText() + " (" + part + " could not be removed: " + e.getMessage() + ")");
         }
     }
 

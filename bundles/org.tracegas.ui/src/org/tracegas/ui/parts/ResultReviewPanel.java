@@ -1,6 +1,5 @@
 package org.tracegas.ui.parts;
 
-import java.sql.SQLException;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.List;
@@ -17,6 +16,7 @@ import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
+import org.tracegas.store.StoreException;
 import org.tracegas.ui.dialogs.SignatureDialog;
 import org.tracegas.ui.session.ResultApproval;
 import org.tracegas.ui.session.WorkspaceAccess;
@@ -77,8 +77,8 @@ public final class ResultReviewPanel extends Composite {
             TableItem item = new TableItem(table, SWT.NONE);
             String signatures;
             try {
-                signatures = approval.signatureSummary(r.id());
-            } catch (SQLException e) {
+                signatures = approval.signatureSummary(session, r.id());
+            } catch (StoreException e) {
                 signatures = "signatures unreadable: " + e.getMessage();
             }
             item.setText(new String[] {r.values().compound(),

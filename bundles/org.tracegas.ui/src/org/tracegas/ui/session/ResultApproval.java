@@ -1,56 +1,38 @@
 package org.tracegas.ui.session;
 
-import java.nio.charset.StandardCharsets;
-import java.sql.Connection;
-import java.sql.SQLException;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
 import java.util.List;
-import java.util.Locale;
 import java.util.stream.Collectors;
 
-import org.tracegas.audit.CredentialCheck;
 import org.tracegas.audit.Signature;
 import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.audit.SignatureRefusedException;
-import org.tracegas.audit.SignatureRequest;
-import org.tracegas.audit.SignatureService;
-import org.tracegas.store.LoginFailedException;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.ResultInfo;
+import org.tracegas.store.ResultSignatureRequest;
 import org.tracegas.store.Session;
-import org.tracegas.store.UserService;
+import org.tracegas.store.WorkspaceStore;
 
 /**
- * Electronic review and approval of stored results. The password typed at signing is checked by the user
- * store (so a wrong one counts towards the lock-out like a failed log-in); nobody signs their own results
- * as reviewer or approver.
+ * Electronic review and approval of stored results, as the desk shows them. The store signs: it checks the
+ * password typed at signing through the log-in (so a wrong one counts towards the lock-out), refuses signing
+ * one's own results as reviewer or approver, and defines the content a result signature covers.
  */
 public final class ResultApproval {
 
-    /** Object type of results in the audit trail. */
-    public static final String OBJECT_TYPE = "result";
+    private static final DateTimeFormatter SHOWN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'")
+            .withZone(ZoneOffset.UTC);
 
-    private static final java.time.format.DateTimeFormatter SHOWN = java.time.format.DateTimeFormatter
-            .ofPattern("yyyy-MM-dd HH:mm 'UTC'").withZone(java.time.ZoneOffset.UTC);
-
-    private final WorkspaceAccess access;
-    private final SignatureService signatures;
+    private final WorkspaceStore store;
 
     public ResultApproval(WorkspaceAccess access) {
-        this.access = access;
-        UserService users = access.store().users();
-        CredentialCheck check = (userId, password) -> {
-            try {
-                return users.logIn(users.user(userId).login(), password.clone()).userId().equals(userId);
-            } catch (LoginFailedException | NoSuchObjectException e) {
-                return false;
-            }
-        };
-        this.signatures = new SignatureService(check);
+        this.store = access.store();
     }
 
     /** The signer's printed name as shown in the signature dialog and with the signature. */
     public String printedName(Session session) {
-        return access.store().users().user(session.userId()).displayName();
+        return store.users().user(session.userId()).displayName();
     }
 
     /**
@@ -60,36 +42,22 @@ public final class ResultApproval {
      * @param password   typed at signing; cleared afterwards
      * @throws SignatureRefusedException wrong password, own result, or another user's login (the refusal is
      *                                   in the audit trail)
+     * @throws org.tracegas.store.StoreException if the signature cannot be stored or the project not read
      */
     public Signature sign(Session session, ResultInfo result, String typedLogin, char[] password,
-            SignatureMeaning meaning, String comment) throws SignatureRefusedException, SQLException {
-        String signerId = session.login().equals(typedLogin) ? session.userId() : typedLogin;
-        SignatureRequest request = new SignatureRequest(session.userId(), signerId, password, printedName(session),
-                meaning, OBJECT_TYPE, result.id(), 0, signedContent(result), result.recordedBy(),
-                comment == null || comment.isBlank() ? null : comment);
-        try (Connection c = access.connection()) {
-            c.setAutoCommit(false);
-            try {
-                Signature s = signatures.sign(c, request);
-                c.commit();
-                return s;
-            } catch (SQLException | RuntimeException e) {
-                c.rollback();
-                throw e;
-            }
-        }
+            SignatureMeaning meaning, String comment) throws SignatureRefusedException {
+        return store.reviews().signResult(session,
+                new ResultSignatureRequest(result.id(), typedLogin, password, meaning, comment));
     }
 
-    /** Signatures given on a result so far. */
-    public List<Signature> signaturesOf(String resultId) throws SQLException {
-        try (Connection c = access.connection()) {
-            return SignatureService.signaturesOf(c, OBJECT_TYPE, resultId);
-        }
+    /** Signatures given on a result so far, as the reader may see them. */
+    public List<Signature> signaturesOf(Session reader, String resultId) {
+        return store.reviews().resultSignatures(reader, resultId);
     }
 
     /** "APPROVED by Jane Roe 2026-03-10 14:03 UTC; ..." or "not signed". */
-    public String signatureSummary(String resultId) throws SQLException {
-        List<Signature> s = signaturesOf(resultId);
+    public String signatureSummary(Session reader, String resultId) {
+        List<Signature> s = signaturesOf(reader, resultId);
         return s.isEmpty() ? "not signed" : s.stream().map(g -> g.meaning() + " by " + g.printedName() + " "
                 + SHOWN.format(g.signedAt())).collect(Collectors.joining("; "));
     }
@@ -97,20 +65,9 @@ public final class ResultApproval {
     /** The login of a user id, or the id itself when there is no such user. */
     public String loginOf(String userId) {
         try {
-            return access.store().users().user(userId).login();
+            return store.users().user(userId).login();
         } catch (NoSuchObjectException e) {
             return userId;
         }
-    }
-
-    /** The exact text a signature covers: the result's values and what made them. */
-    static byte[] signedContent(ResultInfo r) {
-        String text = String.format(Locale.ROOT,
-                "result=%s%ncompound=%s%nconcentration=%s%nuncertainty=%s%ndetection_limit=%s%nunit=%s%n"
-                        + "method_version=%s%nlibrary_version=%s%ninput_sha256=%s%nrecorded_by=%s%nrecorded=%s%n",
-                r.id(), r.values().compound(), r.values().concentration(), r.values().uncertainty(),
-                r.values().detectionLimit(), r.values().unit(), r.values().methodVersionId(),
-                r.values().libraryVersionId(), r.values().inputHash(), r.recordedBy(), r.recorded());
-        return text.getBytes(StandardCharsets.UTF_8);
     }
 }

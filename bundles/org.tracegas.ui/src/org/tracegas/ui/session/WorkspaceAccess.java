@@ -1,31 +1,22 @@
 package org.tracegas.ui.session;
 
 import java.nio.file.Path;
-import java.sql.Connection;
-import java.sql.SQLException;
 
-import javax.sql.DataSource;
-
-import org.h2.jdbcx.JdbcDataSource;
-import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
 /**
- * An open workspace as the desk uses it: the store's services, and JDBC connections to the same database for
- * reading the audit trail and signing (the audit functions work on a connection in the caller's
- * transaction).
+ * An open workspace as the desk uses it: where it is, and the store's services, through which the desk reads
+ * and changes everything (the audit trail and signatures included), as the runner does.
  */
 public final class WorkspaceAccess implements AutoCloseable {
 
     private final WorkspaceLocation location;
     private final WorkspaceStore store;
-    private final DataSource auditSource;
 
-    private WorkspaceAccess(WorkspaceLocation location, WorkspaceStore store, DataSource auditSource) {
+    private WorkspaceAccess(WorkspaceLocation location, WorkspaceStore store) {
         this.location = location;
         this.store = store;
-        this.auditSource = auditSource;
     }
 
     /**
@@ -36,21 +27,11 @@ public final class WorkspaceAccess implements AutoCloseable {
      */
     public static WorkspaceAccess open(WorkspaceLocation location) {
         if (location instanceof WorkspaceLocation.LabServer server) {
-            WorkspaceStore store = Workspaces.openPostgres(server.url(), server.user(), server.password());
-            PGSimpleDataSource ds = new PGSimpleDataSource();
-            ds.setURL(server.url());
-            ds.setUser(server.user());
-            ds.setPassword(server.password());
-            return new WorkspaceAccess(location, store, ds);
+            return new WorkspaceAccess(location,
+                    Workspaces.openPostgres(server.url(), server.user(), server.password()));
         }
         Path database = ((WorkspaceLocation.Folder) location).folder().resolve("db");
-        WorkspaceStore store = Workspaces.openH2(database);
-        JdbcDataSource ds = new JdbcDataSource();
-        // the store offers no connection of its own: join the database it keeps open in this JVM with the
-        // same URL and settings
-        ds.setURL("jdbc:h2:file:" + database.toAbsolutePath().resolve("workspace")
-                + ";DB_CLOSE_DELAY=-1;LAZY_QUERY_EXECUTION=TRUE;LOCK_TIMEOUT=30000;CACHE_SIZE=16384;WRITE_DELAY=0");
-        return new WorkspaceAccess(location, store, ds);
+        return new WorkspaceAccess(location, Workspaces.openH2(database));
     }
 
     /** Opens (or creates) the embedded workspace in {@code folder} (database in {@code folder/db}). */
@@ -64,11 +45,6 @@ public final class WorkspaceAccess implements AutoCloseable {
 
     public WorkspaceLocation location() {
         return location;
-    }
-
-    /** A new connection to the workspace database, in auto-commit mode; close it after use. */
-    public Connection connection() throws SQLException {
-        return auditSource.getConnection();
     }
 
     @Override

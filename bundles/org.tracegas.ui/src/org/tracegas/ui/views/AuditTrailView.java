@@ -17,7 +17,7 @@ public final class AuditTrailView extends ViewPart {
     public void createPartControl(Composite parent) {
         panel = new AuditTrailPanel(parent, SWT.NONE);
         if (Desk.get().access() != null) {
-            panel.setWorkspace(Desk.get().access());
+            panel.setWorkspace(Desk.get().access(), Desk.get().session());
         }
     }
 
