@@ -181,7 +181,7 @@ class WorkUnitProcessesTest {
         List<Class<?>> needed = new ArrayList<>(List.of(WorkUnitWorkerProcess.class, WorkspaceStore.class,
                 Spectrum.class, org.tracegas.model.Role.class, org.eclipse.emf.common.util.Enumerator.class,
                 org.eclipse.emf.ecore.EObject.class, AuditTrail.class, Flyway.class, org.postgresql.Driver.class,
-                org.h2.Driver.class));
+                org.h2.jdbcx.JdbcDataSource.class));
         needed.add(Class.forName("com.google.gson.Gson", false, Flyway.class.getClassLoader()));
         for (Class<?> k : needed) {
             entries.add(Path.of(k.getProtectionDomain().getCodeSource().getLocation().toURI()).toString());

@@ -15,8 +15,10 @@ import java.util.Optional;
  * <p>
  * Claiming takes the first claimable unit in unit order without waiting for units other runners are
  * claiming at the same moment (PostgreSQL: {@code SELECT ... FOR UPDATE SKIP LOCKED}; H2: the same clause on
- * one candidate row at a time, because H2 applies a row limit before skipping locked rows). In both the
- * update that claims checks the attempt it read, so two runners can never hold the same claim.
+ * one candidate row at a time, because H2 applies a row limit before skipping locked rows). In both, the
+ * locking statement evaluates the claim condition on the locked row itself, so two runners can never hold
+ * the same claim. An embedded H2 workspace is opened by one process at a time, so there the runners are
+ * threads of that process; runners in separate processes share a PostgreSQL workspace.
  * <p>
  * Every change (batch creation, claim, renewal, release, completion) writes an audit record in its own
  * transaction. All operations need write access to the batch's project, {@link #progress} read access.
