@@ -9,7 +9,9 @@ import java.time.Duration;
 import java.time.Instant;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Set;
 import java.util.Optional;
 import java.util.stream.Stream;
 
@@ -20,6 +22,7 @@ import org.tracegas.importer.sidechannel.SideChannelReader;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.qa.checks.CheckOutcome;
+import org.tracegas.qa.control.ChartEvaluation;
 import org.tracegas.quantify.FitSpectra;
 import org.tracegas.quantify.Sample;
 import org.tracegas.report.CsvExport;
@@ -37,7 +40,9 @@ import org.tracegas.store.WorkspaceStore;
 
 /**
  * The report of a campaign made from stored data only: the results and QA checks a method version made, the
- * O2 side channel, and for the spectrum plot a stored absorbance spectrum fitted again with the stored method.
+ * control charts of the repeated QA readings drawn again from the stored readings and the same history, the
+ * O2 side channel, for the spectrum plot a stored absorbance spectrum fitted again with the stored method, and
+ * the review and approval signatures given on the report's id with the audit anchor of now.
  */
 public final class CampaignReport {
 
@@ -55,7 +60,8 @@ public final class CampaignReport {
 
     /**
      * @throws IllegalStateException if the method version has no stored results or QA checks in the project
-     * @throws FileFormatException   if the plan's example fit names no stored sample
+     * @throws FileFormatException   if the plan's example fit names no stored sample, or its QA plan charts a
+     *                               reading otherwise than the stored checks were charted
      * @throws ImportException       if the O2 file cannot be read
      */
     public ReportContent content(VersionInfo methodVersion, StoredMethod method, ReportPlan plan)
@@ -75,14 +81,62 @@ public final class CampaignReport {
         SideChannelJoin o2 = new SideChannelJoin(new SideChannelReader(ZoneOffset.UTC).read(plan.o2File(),
                 ImportOptions.defaults()));
         VersionInfo library = store.versions().version(method.libraryVersionId());
-        return new CampaignReportBuilder(plan.basis(), plan.budget(method.method().pathLengthMetres()),
-                plan.cellTemperatureK(), plan.cellPressureKPa(), plan.o2UncertaintyPercent())
+        ReportContent content = new CampaignReportBuilder(plan.basis(),
+                plan.budget(method.method().pathLengthMetres()), plan.cellTemperatureK(), plan.cellPressureKPa(),
+                plan.o2UncertaintyPercent())
                 .build(plan.campaign(), new MethodVersion(method.method().name(), "v" + methodVersion.number(),
                         methodVersion.contentHash()),
                         new LibraryVersion(library.name(), "v" + library.number() + ", content "
                                 + method.libraryContentHash().substring(0, 16)),
-                        checks, series, plan.reported(), plan.water(), t -> oxygen(o2, plan.o2Channel(), t),
-                        plan.periods(), exampleFit(measurements, method, plan));
+                        checks, charts(method, plan, checks), series, plan.reported(), plan.water(),
+                        t -> oxygen(o2, plan.o2Channel(), t), plan.periods(), exampleFit(measurements, method, plan));
+        return ReportSignatures.attach(store, actor, projectId, content);
+    }
+
+    /**
+     * The users who recorded the stored QA checks and results the report of a method version is made from, those
+     * of the QA checks first: the report's authors, who may not review or approve it.
+     */
+    public List<String> authors(String methodVersionId) {
+        Set<String> authors = new LinkedHashSet<>();
+        store.qa().checks(actor, projectId).stream().filter(c -> c.methodVersionId().equals(methodVersionId))
+                .forEach(c -> authors.add(c.recordedBy()));
+        store.results().results(actor, projectId).stream()
+                .filter(r -> r.values().methodVersionId().equals(methodVersionId))
+                .forEach(r -> authors.add(r.recordedBy()));
+        return List.copyOf(authors);
+    }
+
+    /**
+     * The control charts of the plan's QA plan drawn again: this campaign's stored readings (the charts' own
+     * outcomes are not readings) against the history the evaluation saw. Each must decide as its stored outcome
+     * did, else the QA plan is not the one the checks were evaluated with. No QA plan, no charts drawn.
+     */
+    private List<ChartEvaluation> charts(StoredMethod method, ReportPlan plan, List<CheckOutcome> checks)
+            throws IOException {
+        if (plan.qaPlan() == null) {
+            return List.of();
+        }
+        QaPlan qaPlan = QaPlan.read(plan.qaPlan());
+        List<CheckOutcome> readings = checks.stream()
+                .filter(c -> qaPlan.charts().stream().noneMatch(q -> q.isChartOutcome(c))).toList();
+        List<CheckOutcome> history = StoredQaChecks.history(store, actor, projectId, method.method().name());
+        List<ChartEvaluation> charts = new ArrayList<>();
+        for (QaControlCharts q : qaPlan.charts()) {
+            List<ChartEvaluation> remade = q.evaluate(history, readings);
+            List<CheckOutcome> stored = checks.stream().filter(q::isChartOutcome).toList();
+            boolean same = remade.size() == stored.size() && remade.stream().map(ChartEvaluation::outcome)
+                    .allMatch(r -> stored.stream().anyMatch(c -> c.check().equals(r.check())
+                            && c.passed() == r.passed() && c.measured() == r.measured()));
+            if (!same) {
+                throw new FileFormatException(qaPlan.file(), 0, "[chart]", "drawn again, the charts of "
+                        + q.readings() + " give " + remade.stream().map(e -> e.outcome().summary()).toList()
+                        + ", the stored QA checks " + stored.stream().map(CheckOutcome::summary).toList()
+                        + "; is this the QA plan the checks were evaluated with?");
+            }
+            charts.addAll(remade);
+        }
+        return charts;
     }
 
     /** Writes the PDF and the CSV of results, each whole or not at all. */

@@ -26,7 +26,25 @@ public final class QaControlCharts {
      */
     public QaControlCharts(List<String> readings, int baselineSize) {
         this.readings = List.copyOf(readings);
+        if (baselineSize < 2) {
+            throw new IllegalArgumentException("baselineSize must be at least 2, was " + baselineSize);
+        }
         this.baselineSize = baselineSize;
+    }
+
+    /** Names of the checked readings charted, as the repeated checks are named. */
+    public List<String> readings() {
+        return readings;
+    }
+
+    public int baselineSize() {
+        return baselineSize;
+    }
+
+    /** Whether an outcome is the decision of one of these charts, not a reading to chart. */
+    public boolean isChartOutcome(CheckOutcome outcome) {
+        return readings.stream().anyMatch(r -> new ControlChartCheck(r, "", baselineSize).checkName()
+                .equals(outcome.check()));
     }
 
     /**

@@ -2,6 +2,7 @@ package org.tracegas.campaign;
 
 import java.io.IOException;
 import java.time.Instant;
+import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.List;
 
@@ -20,7 +21,9 @@ import org.tracegas.store.WorkspaceStore;
 /**
  * Evaluates a campaign's QA checks once per method version and stores them: the QA measurements are transformed
  * and fitted with the stored method, the CTS reference comes from the method's own library version, and the
- * background ages span the project's stored samples. Checks stored already are returned as they are.
+ * background ages span the project's stored samples. The repeated readings the plan charts are judged on their
+ * control charts against the earlier campaigns of the same method, and the charts' outcomes are stored with the
+ * other checks. Checks stored already are returned as they are.
  */
 public final class QaEvaluation {
 
@@ -68,8 +71,13 @@ public final class QaEvaluation {
                 method.quantifier(qa.backgrounds().get(0).singleBeam().axis(), software, false));
         Instant first = samples.get(0).time();
         Instant last = samples.get(samples.size() - 1).time();
-        List<CheckOutcome> checks = CampaignQaChecks.evaluate(checksPlan(plan, library, method), fitted,
+        List<CheckOutcome> readings = CampaignQaChecks.evaluate(checksPlan(plan, library, method), fitted,
                 qa.backgrounds(), first, last);
+        List<CheckOutcome> checks = new ArrayList<>(readings);
+        List<CheckOutcome> history = StoredQaChecks.history(store, actor, projectId, method.method().name());
+        for (QaControlCharts charts : plan.charts()) {
+            charts.evaluate(history, readings).forEach(e -> checks.add(e.outcome()));
+        }
         StoredQaChecks.store(store, actor, projectId, methodVersionId, checks);
         return new Outcome(StoredQaChecks.load(store, actor, projectId, methodVersionId), false);
     }

@@ -46,6 +46,8 @@ import org.tracegas.report.Campaign;
  * periods = 30 min, 1 d                averaging periods
  * example-fit = 2026-03-17T07:10:30Z CO morning upset   (optional) the stored sample and analyte to plot,
  *                                      and a caption
+ * qa-plan = qa.plan                    (optional) the QA plan the checks were evaluated with, whose control
+ *                                      charts the report draws again; needed when the stored checks hold charts
  *
  * [compound]                           one block per reported compound
  * name = CO
@@ -57,12 +59,12 @@ public record ReportPlan(Path file, Campaign campaign, ReportingBasis basis, Pat
         double o2UncertaintyPercent, String water, double cellTemperatureK, double cellPressureKPa, double referenceUncertainty,
         double pathUncertaintyM, double temperatureUncertaintyK, double pressureUncertaintyKPa,
         List<Duration> periods, Instant exampleTime, String exampleCompound, String exampleCaption,
-        List<CampaignReportBuilder.Reported> reported) {
+        List<CampaignReportBuilder.Reported> reported, Path qaPlan) {
 
     private static final Set<String> HEAD = Set.of("report-id", "client", "plant", "source", "first-day", "last-day",
             "issued", "standard-temperature", "standard-pressure", "reference-o2", "o2-guard", "o2-file",
             "o2-channel", "o2-uncertainty", "water", "cell-temperature", "cell-pressure", "reference-uncertainty",
-            "path-uncertainty", "temperature-uncertainty", "pressure-uncertainty", "periods", "example-fit");
+            "path-uncertainty", "temperature-uncertainty", "pressure-uncertainty", "periods", "example-fit", "qa-plan");
 
     public ReportPlan {
         periods = List.copyOf(periods);
@@ -144,7 +146,8 @@ public record ReportPlan(Path file, Campaign campaign, ReportingBasis basis, Pat
         return new ReportPlan(file, campaign, basis, f.resolve(h.text("o2-file")), h.text("o2-channel"),
                 h.number("o2-uncertainty"), h.text("water"), h.number("cell-temperature"), h.number("cell-pressure"),
                 h.number("reference-uncertainty"), h.number("path-uncertainty"), h.number("temperature-uncertainty"),
-                h.number("pressure-uncertainty"), periods, exampleTime, exampleCompound, exampleCaption, reported);
+                h.number("pressure-uncertainty"), periods, exampleTime, exampleCompound, exampleCaption, reported,
+                h.has("qa-plan") ? f.resolve(h.text("qa-plan")) : null);
     }
 
     private static LocalDate day(KeyValueFile.Section h, String key) throws FileFormatException {

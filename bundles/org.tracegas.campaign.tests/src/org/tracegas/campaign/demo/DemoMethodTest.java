@@ -56,7 +56,7 @@ class DemoMethodTest {
         assertEquals("SF6", qa.tracer());
         assertEquals(Duration.ofHours(24), qa.backgroundAgeLimit());
 
-        ReportPlan report = ReportPlan.read(write("report.plan", DemoMethod.reportPlanText("raw/o2.csv")));
+        ReportPlan report = ReportPlan.read(write("report.plan", DemoMethod.reportPlanText("raw/o2.csv", "qa.plan")));
         assertEquals(List.of(Duration.ofMinutes(30), Duration.ofDays(1)), report.periods());
         assertEquals(6, report.reported().size());
         assertEquals("morning upset", report.exampleCaption());

@@ -8,6 +8,8 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Set;
 
+import org.tracegas.audit.SignatureMeaning;
+import org.tracegas.audit.SignatureRefusedException;
 import org.tracegas.audit.VerificationReport;
 import org.tracegas.campaign.CampaignReport;
 import org.tracegas.campaign.ContainerContents;
@@ -19,6 +21,7 @@ import org.tracegas.campaign.ProjectQuantification;
 import org.tracegas.campaign.QaEvaluation;
 import org.tracegas.campaign.QaPlan;
 import org.tracegas.campaign.ReportPlan;
+import org.tracegas.campaign.ReportSignatures;
 import org.tracegas.campaign.WholeFile;
 import org.tracegas.importer.ImportException;
 import org.tracegas.library.ReferenceLibrary;
@@ -41,8 +44,8 @@ import org.tracegas.store.Workspaces;
  * The demo campaign end to end on a workspace folder: synthesizes the day's raw files (once), writes its
  * library plan, method file, QA plan and report plan in the runner's formats into the folder, and runs the
  * runner's jobs over them: library synthesis (once), method and library versions, quantification of every
- * interferogram into the workspace, the QA checks, the report from stored data; then verifies the audit
- * trail. A second run on the same folder reuses the files, the library, the versions, the stored results and
+ * interferogram into the workspace, the QA checks with control charts of the repeated readings, the report from
+ * stored data, which the demo reviewer signs as reviewed; then verifies the audit trail. A second run on the same folder reuses the files, the library, the versions, the stored results and
  * QA checks, and makes the report again from the stored data.
  */
 public final class DemoCampaign {
@@ -99,7 +102,7 @@ public final class DemoCampaign {
         }
         QaPlan qaPlan = QaPlan.read(write(workspace.resolve("qa.plan"), DemoMethod.qaPlanText()));
         ReportPlan reportPlan = ReportPlan.read(write(workspace.resolve("report.plan"),
-                DemoMethod.reportPlanText("raw/" + DemoCampaignFiles.SIDE_CHANNEL_FILE)));
+                DemoMethod.reportPlanText("raw/" + DemoCampaignFiles.SIDE_CHANNEL_FILE, "qa.plan")));
 
         try (WorkspaceStore store = Workspaces.openH2(workspace.resolve("db"))) {
             Session analyst = DemoStaff.ensure(store);
@@ -126,13 +129,35 @@ public final class DemoCampaign {
             }
             List<CheckOutcome> checks = new QaEvaluation(store, analyst, project.id(), SOFTWARE)
                     .run(methodVersion.id(), recorded.method(), qaPlan, qa).checks();
-            ReportContent content = new CampaignReport(store, analyst, project.id(), SOFTWARE)
-                    .content(methodVersion, recorded.method(), reportPlan);
+            CampaignReport report = new CampaignReport(store, analyst, project.id(), SOFTWARE);
+            ReportContent content = report.content(methodVersion, recorded.method(), reportPlan);
+            String hash = content.contentHash();
+            if (content.signatures().stream().noneMatch(s -> s.signedContentHash().equals(hash))) {
+                reviewerSigns(store, project.id(), analyst, content);
+                content = report.content(methodVersion, recorded.method(), reportPlan);
+            }
             Files.createDirectories(reportFolder);
             Path pdf = reportFolder.resolve("tarnbeck-line2-report.pdf");
             Path csv = reportFolder.resolve("tarnbeck-line2-results.csv");
             CampaignReport.write(content, pdf, csv);
             return new Outcome(processed, reuse, false, pdf, csv, checks, store.verifyAuditTrail());
+        }
+    }
+
+    /**
+     * Demo only: the demo reviewer signs the report as reviewed right away, so that the demo's report shows a
+     * review signature. In a lab the reviewer reads the report first and signs it from the workbench or with the
+     * runner's report-sign command.
+     */
+    private void reviewerSigns(WorkspaceStore store, String projectId, Session analyst, ReportContent content) {
+        log.println("The demo reviewer signs the report as reviewed (demo only) ...");
+        Session reviewer = store.users().logIn(REVIEWER, DEMO_PASSWORD.clone());
+        try {
+            ReportSignatures.sign(store, reviewer, projectId, content, analyst.userId(), REVIEWER,
+                    DEMO_PASSWORD.clone(), SignatureMeaning.REVIEWED, "demo review");
+        } catch (SignatureRefusedException e) {
+            // the demo's own staff and passwords: a refusal means the demo workspace was changed by hand
+            throw new IllegalStateException("the demo reviewer's signature was refused: " + e.getMessage(), e);
         }
     }
 

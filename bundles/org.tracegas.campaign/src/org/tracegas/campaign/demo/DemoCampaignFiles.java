@@ -28,9 +28,9 @@ import org.tracegas.spectrum.Interferogram;
 
 /**
  * Writes the raw files of the demo day as the invented instrument and its neighbours would leave them: one
- * interferogram container per hour of stack gas, one container of the QA measurements (backgrounds,
- * calibration transfer standard before and after, zero gas, spiked and unspiked pairs), and the O2 analyzer's
- * time-stamped CSV.
+ * interferogram container per hour of stack gas, one container of the QA measurements (backgrounds and
+ * calibration transfer standard every 6 hours and after the day, zero gas every 2 hours, spiked and unspiked
+ * pairs), and the O2 analyzer's time-stamped CSV.
  */
 public final class DemoCampaignFiles {
 
@@ -44,6 +44,8 @@ public final class DemoCampaignFiles {
     /** Detector noise relative to the centre burst. */
     static final double NOISE = 4e-6;
     static final String QA_FILE = "qa-measurements.tgc";
+    /** Backgrounds, CTS, zero gas and spike pairs in the QA file (see {@link #writeQa}). */
+    private static final int QA_MEASUREMENTS = 4 + 5 + 12 + 6;
     public static final String SIDE_CHANNEL_FILE = "o2-analyzer.csv";
 
     private DemoCampaignFiles() {
@@ -73,10 +75,10 @@ public final class DemoCampaignFiles {
             throws IOException {
         Files.createDirectories(folder);
         InterferogramSynthesizer synthesizer = physics.interferograms();
-        long total = DemoScenario.SAMPLES + 11L;
+        long total = DemoScenario.SAMPLES + QA_MEASUREMENTS;
         AtomicLong done = new AtomicLong();
         writeQa(qaFile(folder), synthesizer);
-        progress.progress(done.addAndGet(11), total);
+        progress.progress(done.addAndGet(QA_MEASUREMENTS), total);
         List<Path> files = stackFiles(folder);
         for (int hour = 0; hour < 24 && !cancel.isCancelled(); hour++) {
             int first = hour * 60;
@@ -106,33 +108,53 @@ public final class DemoCampaignFiles {
                 DemoScenario.CELL_PRESSURE * 10.0, DemoScenario.PATH_LENGTH, extra);
     }
 
+    /**
+     * The QA measurements as a lab repeats them through the day, so that the repeated readings can be charted:
+     * a background every 6 hours, the CTS every 6 hours and once more after the last sample (its first and
+     * last reading give the drift), zero gas every 2 hours, and the spiked and unspiked pairs at mid-morning.
+     * Every measurement comes from the same synthesizer with the same detector noise as the stack gas.
+     */
     private static void writeQa(Path file, InterferogramSynthesizer synthesizer) throws IOException {
         Instant day = DemoScenario.DAY_START;
         Map<String, Double> nitrogen = Map.of();
         Map<String, Double> cts = Map.of("CO", CTS_CO_PPM);
         try (ContainerWriter out = ContainerWriter.create(file)) {
             Random random = new Random(-1);
-            out.append(header(SampleKind.BACKGROUND, day.minusSeconds(1200), Map.of()),
-                    synthesizer.synthesize(nitrogen, 1.0, NOISE, random));
-            out.append(header(SampleKind.SAMPLE, day.minusSeconds(900), Map.of(MeasurementRole.KEY, MeasurementRole.CTS)),
-                    synthesizer.synthesize(cts, 1.0, NOISE, random));
-            out.append(header(SampleKind.SAMPLE, day.minusSeconds(600), Map.of(MeasurementRole.KEY, MeasurementRole.ZERO)),
-                    synthesizer.synthesize(nitrogen, 1.0, NOISE, random));
-            for (int i = 0; i < 3; i++) {
-                int minute = 600 + 2 * i;
-                Map<String, Double> stack = DayOfStackGas.at(minute);
-                out.append(header(SampleKind.SAMPLE, minuteTime(minute).minusSeconds(15), Map.of(MeasurementRole.KEY, MeasurementRole.UNSPIKED)),
-                        synthesizer.synthesize(stack, DayOfStackGas.gain(minute), NOISE, random));
-                out.append(header(SampleKind.SAMPLE, minuteTime(minute + 1).minusSeconds(15), Map.of(MeasurementRole.KEY, MeasurementRole.SPIKE)),
-                        synthesizer.synthesize(spiked(DayOfStackGas.at(minute + 1)), DayOfStackGas.gain(minute + 1),
-                                NOISE, random));
+            for (int hour = 0; hour < 24; hour += 2) {
+                Instant slot = day.plus(hour, ChronoUnit.HOURS);
+                if (hour % 6 == 0) {
+                    out.append(header(SampleKind.BACKGROUND, slot.minusSeconds(1200), Map.of()),
+                            synthesizer.synthesize(nitrogen, gain(hour), NOISE, random));
+                    out.append(qaHeader(slot.minusSeconds(900), MeasurementRole.CTS),
+                            synthesizer.synthesize(cts, gain(hour), NOISE, random));
+                }
+                out.append(qaHeader(slot.minusSeconds(600), MeasurementRole.ZERO),
+                        synthesizer.synthesize(nitrogen, gain(hour), NOISE, random));
+                if (hour == 10) {
+                    for (int i = 0; i < 3; i++) {
+                        int minute = 600 + 2 * i;
+                        out.append(qaHeader(minuteTime(minute).minusSeconds(15), MeasurementRole.UNSPIKED),
+                                synthesizer.synthesize(DayOfStackGas.at(minute), DayOfStackGas.gain(minute), NOISE,
+                                        random));
+                        out.append(qaHeader(minuteTime(minute + 1).minusSeconds(15), MeasurementRole.SPIKE),
+                                synthesizer.synthesize(spiked(DayOfStackGas.at(minute + 1)),
+                                        DayOfStackGas.gain(minute + 1), NOISE, random));
+                    }
+                }
             }
-            out.append(header(SampleKind.BACKGROUND, day.plus(12, ChronoUnit.HOURS), Map.of()),
-                    synthesizer.synthesize(nitrogen, 1.0, NOISE, random));
-            out.append(header(SampleKind.SAMPLE, day.plus(1, ChronoUnit.DAYS).plusSeconds(300), Map.of(MeasurementRole.KEY, MeasurementRole.CTS)),
-                    synthesizer.synthesize(cts, 0.995, NOISE, random));
+            out.append(qaHeader(day.plus(1, ChronoUnit.DAYS).plusSeconds(300), MeasurementRole.CTS),
+                    synthesizer.synthesize(cts, gain(24), NOISE, random));
             out.commit();
         }
+    }
+
+    /** Gain of the source and detector for the QA gases, sagging by 0.5 % over the day (invented). */
+    private static double gain(int hour) {
+        return 1.0 - 0.005 * hour / 24.0;
+    }
+
+    private static AcquisitionHeader qaHeader(Instant time, String role) {
+        return header(SampleKind.SAMPLE, time, Map.of(MeasurementRole.KEY, role));
     }
 
     /** Stack gas with the spike gas mixed in at the spike fraction. */

@@ -143,7 +143,11 @@ public final class DemoMethod {
         return s.toString();
     }
 
-    /** The QA plan: CTS of CO, spike of HCl with SF6 as tracer, zero gas for every analyte but the majors. */
+    /**
+     * The QA plan: CTS of CO, spike of HCl with SF6 as tracer, zero gas for every analyte but the majors; the
+     * zero readings and noise of the 12 zero-gas measurements charted with limits from 8 readings, the path
+     * length of the 5 CTS measurements with limits from 3.
+     */
     static String qaPlanText() {
         return """
                 library = library/library.manifest
@@ -158,6 +162,14 @@ public final class DemoMethod {
                 noise-region = 2450..2600
                 maximum-noise = 2e-3
                 background-age-limit = 24 h
+
+                [chart]
+                readings = Zero CO, Zero NO, Zero N2O, Zero NH3, Zero HCl, Zero CH4, Noise level
+                baseline = 8
+
+                [chart]
+                readings = CTS path length
+                baseline = 3
                 """.formatted(number(DemoCampaignFiles.CTS_CO_PPM), number(DemoCampaignFiles.SPIKE_HCL_PPM),
                 number(DemoCampaignFiles.SPIKE_SF6_PPM));
     }
@@ -168,8 +180,9 @@ public final class DemoMethod {
      * upset as the example.
      *
      * @param o2File the O2 analyser's file, relative to the plans
+     * @param qaPlan the QA plan, whose control charts the report draws, relative to the plans
      */
-    static String reportPlanText(String o2File) {
+    static String reportPlanText(String o2File, String qaPlan) {
         return """
                 report-id = FRR-2026-031
                 client = %s
@@ -194,6 +207,7 @@ public final class DemoMethod {
                 pressure-uncertainty = 0.5
                 periods = 30 min, 1 d
                 example-fit = 2026-03-17T07:10:30Z CO morning upset
+                qa-plan = %s
 
                 [compound]
                 name = CO
@@ -224,7 +238,7 @@ public final class DemoMethod {
                 name = CH4
                 molar-mass = 16.043
                 """.formatted(DemoScenario.CLIENT, DemoScenario.PLANT, DemoScenario.SOURCE, o2File,
-                number(DemoScenario.CELL_TEMPERATURE), number(DemoScenario.CELL_PRESSURE));
+                number(DemoScenario.CELL_TEMPERATURE), number(DemoScenario.CELL_PRESSURE), qaPlan);
     }
 
     /** The transform of the demo instrument's double-sided interferograms, as the method file states it. */

@@ -35,6 +35,7 @@ import org.tracegas.library.synthesis.AbsorptionPath;
 import org.tracegas.library.synthesis.HitranLineListReader;
 import org.tracegas.library.synthesis.LineByLineModel;
 import org.tracegas.library.synthesis.PowerLawPartitionFunction;
+import org.tracegas.model.AccessLevel;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.report.PdfReportWriter;
@@ -54,8 +55,9 @@ import org.tracegas.store.Workspaces;
  * The analysis jobs from the command line on one real H2 workspace for the class, with a small invented band
  * system (CO-like, an N2O-like tracer and a few water-like lines near 2200 cm-1) at 7.7 cm-1: a library
  * synthesized from line lists, a method defined over it, three stack samples quantified with the stored method
- * version, the QA checks from a QA container (CTS before and after, zero gas, an unspiked and spiked pair) and
- * the report from stored data with an O2 side channel. The tests use their own projects or method names, so
+ * version, the QA checks from a QA container (CTS before and after, zero gas, an unspiked and spiked pair) with a
+ * control chart of the CTS readings, the report from stored data with an O2 side channel, its review signature,
+ * and a later campaign charted against the first. The tests use their own projects or method names, so
  * they do not depend on each other's order. Malformed files are named with file, line and key and store nothing.
  */
 class AnalysisCommandsTest {
@@ -96,7 +98,8 @@ class AnalysisCommandsTest {
         CancellationFlag cancel = new CancellationFlag();
         CommandTable table = new CommandTable("test", List.of(new WorkspaceInitCommand(), new UserAddCommand(),
                 new ProjectAddCommand(), new LibraryBuildCommand(cancel), new LibraryAddCommand(),
-                new MethodDefineCommand(), new QuantifyCommand(cancel), new QaCommand(), new ReportCommand()));
+                new MethodDefineCommand(), new QuantifyCommand(cancel), new QaCommand(), new ReportCommand(),
+                new ReportSignCommand()));
         return table.dispatch(argv, new RunnerContext(new PrintStream(out, true, StandardCharsets.UTF_8),
                 new PrintStream(err, true, StandardCharsets.UTF_8), ENV));
     }
@@ -254,7 +257,7 @@ class AnalysisCommandsTest {
         ok("workspace-init", "--workspace", ws, "--admin", "root", "--name", "Admin");
         ok("user-add", "--workspace", ws, "--as", "root", "--login", "ana", "--name", "Ana Lyst", "--roles",
                 "analyst");
-        for (String code : List.of("P-1", "P-2", "P-3")) {
+        for (String code : List.of("P-1", "P-2", "P-3", "P-4")) {
             ok("project-add", "--workspace", ws, "--as", "ana", "--client", "Client " + code, "--code", code,
                     "--name", "Survey");
         }
@@ -393,7 +396,8 @@ class AnalysisCommandsTest {
         int qa = run(concat(where, "qa", "--plan", qaPlan.toString(), "--qa-file", qaFile.toString()));
         String printed = out.toString(StandardCharsets.UTF_8);
         assertEquals(ExitCode.OK, qa, printed + err);
-        for (String check : List.of("pass ", "Spike recovery", "CTS", "Zero CO", "Noise", "Background age")) {
+        for (String check : List.of("pass ", "Spike recovery", "CTS", "Zero CO", "Noise", "Background age",
+                "Control chart: CTS path length")) {
             assertTrue(printed.toLowerCase(Locale.ROOT).contains(check.toLowerCase(Locale.ROOT)), check + " in "
                     + printed);
         }
@@ -402,7 +406,7 @@ class AnalysisCommandsTest {
         try (WorkspaceStore store = open()) {
             checks = store.qa().checks(ana(store), store.projects().findByCode(ana(store), "P-1").orElseThrow().id())
                     .size();
-            assertTrue(checks >= 7, "CTS twice, drift, spike, two zeros, noise, background age: " + checks);
+            assertTrue(checks >= 8, "CTS twice, drift, spike, two zeros, noise, background age, chart: " + checks);
         }
         out.reset();
         assertEquals(ExitCode.OK, run(concat(where, "qa", "--plan", qaPlan.toString(), "--qa-file",
@@ -412,16 +416,21 @@ class AnalysisCommandsTest {
         Path reportPlan = folder.resolve("report.plan");
         Files.writeString(reportPlan, reportPlanText("o2.csv"));
         Path report = folder.resolve("report-P-1");
+        out.reset();
         assertEquals(ExitCode.OK, run(concat(where, "report", "--plan", reportPlan.toString(), "--out",
                 report.toString())), err.toString());
-        try (PDDocument doc = Loader.loadPDF(report.resolve("report.pdf").toFile())) {
-            String text = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
-            assertTrue(text.contains("R-TEST-1"), "report id");
-            assertTrue(text.contains("Test plant"), "plant of the campaign");
-            assertTrue(text.contains("Stack") && text.contains("v1"), "method and its version");
-            String caution = PdfReportWriter.STANDARD_CAUTIONS.get(0);
-            assertTrue(text.contains(caution.substring(0, Math.min(40, caution.length()))), "the standard caution");
-        }
+        String hash = printed("Content hash (SHA-256): ");
+        assertEquals(64, hash.length(), out.toString());
+        assertEquals("R-TEST-1", printed("Report id: "));
+        assertFalse(out.toString(StandardCharsets.UTF_8).contains("Signature:"), "not signed yet");
+        String text = pdfText(report);
+        assertTrue(text.contains("R-TEST-1"), "report id");
+        assertTrue(text.contains(hash), "the content hash printed is the report's");
+        assertTrue(text.contains("Test plant"), "plant of the campaign");
+        assertTrue(text.contains("Stack") && text.contains("v1"), "method and its version");
+        String caution = PdfReportWriter.STANDARD_CAUTIONS.get(0);
+        assertTrue(text.contains(caution.substring(0, Math.min(40, caution.length()))), "the standard caution");
+        assertTrue(text.contains("CTS path length, readings of this campaign"), "the chart drawn from stored checks");
         List<String> csv = Files.readAllLines(report.resolve("results.csv"), StandardCharsets.UTF_8);
         String row = csv.stream().filter(l -> l.startsWith("CO,") && l.contains("3 min")).findFirst()
                 .orElseThrow(() -> new AssertionError("no 3-min CO row in " + csv));
@@ -434,6 +443,105 @@ class AnalysisCommandsTest {
                 / (21 - O2_WET / (1 - h2o));
         // the CO readings hold within 4 % (above) and the water reading enters as 1 / (1 - H2O)
         assertEquals(expected, mean, 0.05 * expected, row);
+
+        signedByAnotherUserOnly(where, reportPlan, report, hash);
+        laterCampaignIsChartedAgainstThisOne(qaPlan, reportPlan);
+    }
+
+    /**
+     * A later campaign of the same method: its CTS readings are charted with limits from this campaign's, and a
+     * report drawn with another baseline than the checks were evaluated with is refused, naming the QA plan.
+     */
+    private void laterCampaignIsChartedAgainstThisOne(Path qaPlan, Path reportPlan) throws Exception {
+        String[] where = { "--workspace", ws, "--as", "ana", "--project", "P-4", "--method", "Stack" };
+        ok(concat(where, "quantify", "--backgrounds", qaFile.toString(), "--file", stackFile.toString()));
+        ok(concat(where, "qa", "--plan", qaPlan.toString(), "--qa-file", qaFile.toString()));
+        try (WorkspaceStore store = open()) {
+            String project = store.projects().findByCode(ana(store), "P-4").orElseThrow().id();
+            String rule = store.qa().checks(ana(store), project).stream()
+                    .filter(c -> c.outcome().check().equals("Control chart: CTS path length")).findFirst()
+                    .orElseThrow().outcome().rule();
+            assertTrue(rule.contains("the latest 2 readings of earlier campaigns"), rule);
+        }
+        Path report = folder.resolve("report-P-4");
+        ok(concat(where, "report", "--plan", reportPlan.toString(), "--out", report.toString()));
+        assertTrue(pdfText(report).contains("(limits from earlier campaigns)"), "history set the limits");
+
+        Path otherBaseline = folder.resolve("other-baseline.plan");
+        Files.writeString(otherBaseline, qaPlanText("lib/library.manifest").replace("baseline = 2", "baseline = 3"));
+        Path otherReportPlan = folder.resolve("other-report.plan");
+        Files.writeString(otherReportPlan, reportPlanText("o2.csv").replace("qa-plan = qa.plan",
+                "qa-plan = other-baseline.plan"));
+        err.reset();
+        assertEquals(ExitCode.BAD_INPUT, run(concat(where, "report", "--plan", otherReportPlan.toString(), "--out",
+                folder.resolve("report-P-4-other").toString())));
+        String message = err.toString(StandardCharsets.UTF_8);
+        assertTrue(message.contains("other-baseline.plan") && message.contains("[chart]"), message);
+    }
+
+    /** The report's review: never by its analyst, only on the content read, then printed with the report. */
+    private void signedByAnotherUserOnly(String[] where, Path reportPlan, Path report, String hash)
+            throws Exception {
+        String[] sign = { "--plan", reportPlan.toString(), "--report", "R-TEST-1", "--meaning", "reviewed" };
+        err.reset();
+        assertEquals(ExitCode.CHECK_FAILED, run(plus(concat(where, "report-sign", sign), "--content-hash",
+                hash)), "the analyst who recorded the results reviews her own report");
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("refused"), err.toString());
+
+        ok("user-add", "--workspace", ws, "--as", "root", "--login", "rev", "--name", "Rhea Viewer", "--roles",
+                "reviewer");
+        try (WorkspaceStore store = open()) {
+            Session ana = ana(store);
+            store.projects().grant(ana, store.projects().findByCode(ana, "P-1").orElseThrow().id(),
+                    store.users().logIn("rev", "admin-pw-1".toCharArray()).userId(), AccessLevel.READ);
+        }
+        String[] asReviewer = where.clone();
+        asReviewer[3] = "rev";
+        String other = hash.substring(0, 63) + (hash.endsWith("0") ? "1" : "0");
+        err.reset();
+        assertEquals(ExitCode.BAD_INPUT, run(plus(concat(asReviewer, "report-sign", sign), "--content-hash",
+                other)), "a content other than the one the stored data give");
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains(hash), err.toString());
+        err.reset();
+        String[] otherReport = sign.clone();
+        otherReport[3] = "R-TEST-2";
+        assertEquals(ExitCode.BAD_INPUT, run(plus(concat(asReviewer, "report-sign", otherReport),
+                "--content-hash", hash)));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("R-TEST-2"), err.toString());
+
+        out.reset();
+        assertEquals(ExitCode.OK, run(plus(concat(asReviewer, "report-sign", sign), "--content-hash",
+                hash.toUpperCase(Locale.ROOT), "--comment", "checked against the raw files")), err.toString());
+        assertTrue(out.toString(StandardCharsets.UTF_8).contains("REVIEWED by Rhea Viewer"), out.toString());
+
+        out.reset();
+        assertEquals(ExitCode.OK, run(concat(where, "report", "--plan", reportPlan.toString(), "--out",
+                report.toString())), err.toString());
+        assertEquals(hash, printed("Content hash (SHA-256): "), "signatures are not part of the content");
+        assertTrue(printed("Signature: ").startsWith("REVIEW by Rhea Viewer at "), out.toString());
+        assertFalse(printed("Signature: ").contains("earlier content"), out.toString());
+        String text = pdfText(report);
+        assertTrue(text.contains("Rhea Viewer"), "the signature is on the report made again");
+    }
+
+    /** The rest of the line the last command printed after a label. */
+    private String printed(String label) {
+        return out.toString(StandardCharsets.UTF_8).lines().filter(l -> l.startsWith(label))
+                .map(l -> l.substring(label.length())).findFirst()
+                .orElseThrow(() -> new AssertionError("no '" + label + "' in " + out));
+    }
+
+    private static String pdfText(Path report) throws IOException {
+        try (PDDocument doc = Loader.loadPDF(report.resolve("report.pdf").toFile())) {
+            return new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+        }
+    }
+
+    private static String[] plus(String[] first, String... more) {
+        String[] all = new String[first.length + more.length];
+        System.arraycopy(first, 0, all, 0, first.length);
+        System.arraycopy(more, 0, all, first.length, more.length);
+        return all;
     }
 
     private static String[] concat(String[] where, String command, String... more) {
@@ -458,6 +566,10 @@ class AnalysisCommandsTest {
                 noise-region = 2285..2298
                 maximum-noise = 2e-3
                 background-age-limit = 24 h
+
+                [chart]
+                readings = CTS path length, Zero CO
+                baseline = 2
                 """, library, CTS_PPM, SPIKE_CO_PPM, SPIKE_TRACER_PPM);
     }
 
@@ -486,6 +598,7 @@ class AnalysisCommandsTest {
                 pressure-uncertainty = 0.5
                 periods = 3 min
                 example-fit = 2026-03-17T08:00:00Z CO
+                qa-plan = qa.plan
 
                 [compound]
                 name = CO
@@ -526,7 +639,7 @@ class AnalysisCommandsTest {
         assertEquals(ExitCode.BAD_INPUT, run(concat(where, "report", "--plan", reportPlan.toString(), "--out",
                 report.toString())));
         message = err.toString(StandardCharsets.UTF_8);
-        assertTrue(message.contains("bad-report.plan") && message.contains("line 28") && message.contains("'limit'"),
+        assertTrue(message.contains("bad-report.plan") && message.contains("line 29") && message.contains("'limit'"),
                 message);
         Files.writeString(reportPlan, reportPlanText("o2.csv").replace("issued = 2026-03-19T00:00:00Z",
                 "issued = 19 March"));
@@ -619,7 +732,8 @@ class AnalysisCommandsTest {
 
     @Test
     void everyCommandHasHelp() {
-        for (String c : List.of("library-build", "library-add", "method-define", "quantify", "qa", "report")) {
+        for (String c : List.of("library-build", "library-add", "method-define", "quantify", "qa", "report",
+                "report-sign")) {
             out.reset();
             assertEquals(ExitCode.OK, run("help", c));
             String text = out.toString(StandardCharsets.UTF_8);

@@ -9,6 +9,7 @@ import org.tracegas.campaign.ReportPlan;
 import org.tracegas.importer.ImportException;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.report.ReportContent;
+import org.tracegas.report.Signature;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
@@ -26,7 +27,8 @@ public final class ReportCommand implements Command {
 
     @Override
     public String summary() {
-        return "make the PDF report and the CSV of results from stored results and stored QA checks";
+        return "make the PDF report and the CSV of results from stored results and stored QA checks, with its "
+                + "signatures";
     }
 
     @Override
@@ -38,7 +40,9 @@ public final class ReportCommand implements Command {
                   issued), the reporting basis (standard conditions, reference-o2), the O2 side-channel file and
                   column, the water compound, the uncertainty budget, the averaging periods, an optional
                   example fit, and one [compound] block per reported compound (name, molar-mass, limit lines
-                  such as '100 per 30 min'). Writes report.pdf and results.csv into --out, each whole.
+                  such as '100 per 30 min'), and the QA plan whose control charts the report draws again
+                  (qa-plan). Writes report.pdf and results.csv into --out, each whole, and prints the report id
+                  and content hash that report-sign is given, and the signatures given on the report.
                 exit codes: 0 written, 2 wrong arguments, 3 bad plan or O2 file (file, line and field named;
                   nothing written), 5 failure (for example: no stored results or QA checks yet)""";
     }
@@ -64,6 +68,14 @@ public final class ReportCommand implements Command {
             CampaignReport.write(content, out.resolve("report.pdf"), out.resolve("results.csv"));
             context.out().println("Report: " + out.resolve("report.pdf"));
             context.out().println("Results: " + out.resolve("results.csv"));
+            // what report-sign is given, so that a signature covers exactly the content reviewed
+            context.out().println("Report id: " + content.campaign().reportId());
+            context.out().println("Content hash (SHA-256): " + content.contentHash());
+            for (Signature s : content.signatures()) {
+                context.out().println("Signature: " + s.meaning() + " by " + s.printedName() + " at " + s.signedAt()
+                        + (s.signedContentHash().equals(content.contentHash()) ? ""
+                                : " (on earlier content " + s.signedContentHash() + ")"));
+            }
             return ExitCode.OK;
         }
     }

@@ -17,6 +17,7 @@ import org.tracegas.runner.commands.ProjectAddCommand;
 import org.tracegas.runner.commands.QaCommand;
 import org.tracegas.runner.commands.QuantifyCommand;
 import org.tracegas.runner.commands.ReportCommand;
+import org.tracegas.runner.commands.ReportSignCommand;
 import org.tracegas.runner.commands.UserAddCommand;
 import org.tracegas.runner.commands.WorkspaceInitCommand;
 import org.tracegas.importer.ReaderRegistry;
@@ -35,7 +36,7 @@ public final class RunnerApplication implements IApplication {
                 new WorkspaceInitCommand(), new UserAddCommand(), new ProjectAddCommand(),
                 new ImportCommand(ReaderRegistry.fromPlatform()), new LibraryBuildCommand(cancel),
                 new LibraryAddCommand(), new MethodDefineCommand(), new QuantifyCommand(cancel), new QaCommand(),
-                new ReportCommand()));
+                new ReportCommand(), new ReportSignCommand()));
         return table.dispatch(argv == null ? new String[0] : argv, new RunnerContext(System.out, System.err));
     }
 

@@ -1,0 +1,116 @@
+package org.tracegas.campaign;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.library.io.FileFormatException;
+import org.tracegas.qa.checks.CheckOutcome;
+import org.tracegas.qa.checks.NoiseCheck;
+import org.tracegas.qa.checks.ZeroSpanCheck;
+
+/** The control charts a QA plan file asks for: which repeated readings, the baseline size, and bad blocks. */
+class QaPlanTest {
+
+    @TempDir
+    Path folder;
+
+    private static final String HEAD = """
+            library = lib/library.manifest
+            cts-compound = CO
+            cts-ppm = 100
+            cts-band = 2050..2200
+            spike-analyte = HCl
+            tracer = SF6
+            spike-analyte-ppm = 60
+            spike-tracer-ppm = 2
+            analytes = CO, NO
+            noise-region = 2450..2600
+            maximum-noise = 2e-3
+            background-age-limit = 24 h
+            """;
+
+    private QaPlan read(String charts) throws Exception {
+        Path file = folder.resolve("qa.plan");
+        Files.writeString(file, HEAD + charts);
+        return QaPlan.read(file);
+    }
+
+    @Test
+    void chartBlocksNameTheRepeatedReadingsAndTheirBaseline() throws Exception {
+        assertTrue(read("").charts().isEmpty(), "charts are optional");
+        QaPlan plan = read("""
+
+                [chart]
+                readings = Zero CO,  Zero   NO, Noise level
+                baseline = 8
+
+                [chart]
+                readings = CTS path length
+                baseline = 3
+                """);
+        assertEquals(2, plan.charts().size());
+        assertEquals(List.of("Zero CO", "Zero NO", "Noise level"), plan.charts().get(0).readings());
+        assertEquals(8, plan.charts().get(0).baselineSize());
+        assertEquals(List.of("CTS path length"), plan.charts().get(1).readings());
+        assertEquals(3, plan.charts().get(1).baselineSize());
+
+        // a chart's own outcome is told apart from the readings it charts (the check names are the qa bundle's)
+        CheckOutcome zero = new ZeroSpanCheck(1.0, 5.0).zero("CO", 0.1);
+        CheckOutcome noise = new NoiseCheck(new org.tracegas.qa.checks.AbsorbanceRegion(2450, 2600), 2e-3)
+                .evaluate(new double[] { 2450, 2500, 2550, 2600 }, new double[] { 1e-4, -1e-4, 2e-4, 0 });
+        List<CheckOutcome> current = List.of(zero, zero, noise, noise);
+        QaControlCharts charts = new QaControlCharts(List.of("Zero CO", "Noise level"), 2);
+        CheckOutcome chartOutcome = new QaControlCharts(List.of("Zero CO"), 2)
+                .evaluate(List.of(new ZeroSpanCheck(1.0, 5.0).zero("CO", 0.0), new ZeroSpanCheck(1.0, 5.0)
+                        .zero("CO", 0.2)), current).get(0).outcome();
+        assertTrue(charts.isChartOutcome(chartOutcome), chartOutcome.check());
+        assertTrue(!charts.isChartOutcome(zero) && !charts.isChartOutcome(noise));
+    }
+
+    @Test
+    void badChartBlocksAreNamedByLineAndKey() {
+        // line 15 is the readings line of the block starting on line 14 (12 head lines and a blank one)
+        FileFormatException unknown = assertThrows(FileFormatException.class, () -> read("""
+
+                [chart]
+                readings = Zero CO, Zero SO2
+                baseline = 8
+                """));
+        assertTrue(unknown.getMessage().contains("line 15") && unknown.getMessage().contains("'readings'")
+                && unknown.getMessage().contains("Zero SO2"), unknown.getMessage());
+        FileFormatException twice = assertThrows(FileFormatException.class, () -> read("""
+
+                [chart]
+                readings = Zero CO
+                baseline = 8
+
+                [chart]
+                readings = Noise level, Zero CO
+                baseline = 3
+                """));
+        assertTrue(twice.getMessage().contains("line 19") && twice.getMessage().contains("charted twice"),
+                twice.getMessage());
+        FileFormatException small = assertThrows(FileFormatException.class, () -> read("""
+
+                [chart]
+                readings = Noise level
+                baseline = 1
+                """));
+        assertTrue(small.getMessage().contains("'baseline'") && small.getMessage().contains("at least 2"),
+                small.getMessage());
+        FileFormatException key = assertThrows(FileFormatException.class, () -> read("""
+
+                [chart]
+                readings = Noise level
+                limit = 8
+                """));
+        assertTrue(key.getMessage().contains("line 16") && key.getMessage().contains("'limit'"), key.getMessage());
+    }
+}
