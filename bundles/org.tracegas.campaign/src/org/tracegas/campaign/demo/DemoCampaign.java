@@ -44,8 +44,8 @@ import org.tracegas.store.Workspaces;
  * The demo campaign end to end on a workspace folder: synthesizes the day's raw files (once), writes its
  * library plan, method file, QA plan and report plan in the runner's formats into the folder, and runs the
  * runner's jobs over them: library synthesis (once), method and library versions, quantification of every
- * interferogram into the workspace, the QA checks with control charts of the repeated readings, the report from
- * stored data, which the demo reviewer signs as reviewed; then verifies the audit trail. A second run on the same folder reuses the files, the library, the versions, the stored results and
+ * interferogram into the workspace, the QA checks with control charts of the repeated readings, the report
+ * from stored data, which the demo reviewer signs as reviewed; then verifies the audit trail. A second run on the same folder reuses the files, the library, the versions, the stored results and
  * QA checks, and makes the report again from the stored data.
  */
 public final class DemoCampaign {

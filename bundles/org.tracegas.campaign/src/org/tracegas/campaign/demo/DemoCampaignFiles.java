@@ -114,7 +114,7 @@ public final class DemoCampaignFiles {
      * last reading give the drift), zero gas every 2 hours, and the spiked and unspiked pairs at mid-morning.
      * Every measurement comes from the same synthesizer with the same detector noise as the stack gas.
      */
-    private static void writeQa(Path file, InterferogramSynthesizer synthesizer) throws IOException {
+    static void writeQa(Path file, InterferogramSynthesizer synthesizer) throws IOException {
         Instant day = DemoScenario.DAY_START;
         Map<String, Double> nitrogen = Map.of();
         Map<String, Double> cts = Map.of("CO", CTS_CO_PPM);
