@@ -68,29 +68,10 @@ public final class CampaignReportBuilder {
     }
 
     /**
-     * A builder whose budgets take the side channel's O2 as exact: their O2 row shows a zero contribution.
-     *
-     * @deprecated give the O2 analyser's uncertainty with the five-argument constructor
-     */
-    @Deprecated(forRemoval = true)
-    public CampaignReportBuilder(ReportingBasis basis, FtirResultBudget budget, double cellTemperatureK,
-            double cellPressureKPa) {
-        this(basis, budget, cellTemperatureK, cellPressureKPa, 0);
-    }
-
-    /**
+     * @param qa            the campaign's QA check outcomes, the charts' own among them
+     * @param charts        the control charts of repeated QA readings, drawn in the report
      * @param o2PercentWet  O2 of the side channel at a time, %vol on wet gas
      * @param waterCompound name of the water result (the FTIR measures the moisture itself)
-     */
-    public ReportContent build(Campaign campaign, MethodVersion method, LibraryVersion library,
-            List<CheckOutcome> qa, MinuteSeries series, List<Reported> reported, String waterCompound,
-            Function<Instant, Double> o2PercentWet, List<Duration> periods, SpectrumFit exampleFit) {
-        return build(campaign, method, library, qa, List.of(), series, reported, waterCompound, o2PercentWet, periods,
-                exampleFit);
-    }
-
-    /**
-     * As above, with the control charts of repeated QA readings; their check outcomes are among {@code qa}.
      */
     public ReportContent build(Campaign campaign, MethodVersion method, LibraryVersion library,
             List<CheckOutcome> qa, List<ChartEvaluation> charts, MinuteSeries series, List<Reported> reported,

@@ -74,7 +74,8 @@ public final class QaEvaluation {
         List<CheckOutcome> readings = CampaignQaChecks.evaluate(checksPlan(plan, library, method), fitted,
                 qa.backgrounds(), first, last);
         List<CheckOutcome> checks = new ArrayList<>(readings);
-        List<CheckOutcome> history = StoredQaChecks.history(store, actor, projectId, method.method().name());
+        List<CheckOutcome> history = plan.charts().isEmpty() ? List.of()
+                : StoredQaChecks.history(store, actor, projectId, method.method().name());
         for (QaControlCharts charts : plan.charts()) {
             charts.evaluate(history, readings).forEach(e -> checks.add(e.outcome()));
         }

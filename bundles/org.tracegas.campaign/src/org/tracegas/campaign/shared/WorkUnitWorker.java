@@ -34,6 +34,16 @@ import org.tracegas.store.WorkspaceStore;
  * Stopping: setting the run's cancellation flag stops the processor of the current unit, gives that unit
  * back unprocessed (so another runner may take it at once) and ends the run. A processor exception also gives
  * the unit back and is rethrown. Not for concurrent use: run one worker per thread.
+ * <p>
+ * A runner processing container files, one file per unit:
+ * <pre>{@code
+ * StackProcessor stack = new StackProcessor(store, actor, projectId, chain, quantifier, versions);
+ * WorkUnitWorker worker = new WorkUnitWorker(store, actor, batchId, host + ":" + pid, Duration.ofMinutes(2),
+ *         Duration.ofSeconds(5), (payload, stop) -> stack.process(List.of(Path.of(payload)), stop));
+ * WorkerOutcome outcome = worker.run((unit, spectra, progress) -> report(progress), cancel);
+ * }</pre>
+ * The batch itself is created once, by whoever starts the work, with {@link WorkUnitService#createBatch},
+ * one payload per file.
  */
 public final class WorkUnitWorker {
 
