@@ -163,6 +163,14 @@ abstract class WorkUnitServiceContract {
     }
 
     @Test
+    void batchIsReadBackAsCreated() {
+        WorkBatchInfo created = batch(2);
+        assertEquals(created, units.batch(f.reader, created.id()), "a reader of the project sees the batch");
+        assertEquals("hour files of 17 March", units.batch(f.analyst, created.id()).description());
+        assertThrows(NoSuchObjectException.class, () -> units.batch(f.analyst, "no-such-batch"));
+    }
+
+    @Test
     void wrongArgumentsAndMissingRightsAreRefused() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> units.createBatch(f.analyst, f.project.id(), "x", List.of("/a", " ", "/c")));

@@ -72,6 +72,14 @@ public interface WorkUnitService {
      */
     List<StoredMeasurement> complete(Session actor, WorkUnitLease lease, List<ProcessedSpectrum> block);
 
+    /**
+     * The batch as it was created, so that a runner joining it finds what its units are to be processed with.
+     * Needs read access to the batch's project.
+     *
+     * @throws NoSuchObjectException if there is no such batch
+     */
+    WorkBatchInfo batch(Session actor, String batchId);
+
     /** Counts of the batch's units by state. */
     BatchProgress progress(Session actor, String batchId);
 

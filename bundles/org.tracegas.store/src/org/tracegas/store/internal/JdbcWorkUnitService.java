@@ -252,6 +252,17 @@ final class JdbcWorkUnitService implements WorkUnitService {
     }
 
     @Override
+    public WorkBatchInfo batch(Session actor, String batchId) {
+        return transactions.run("reading work batch " + batchId, tx -> {
+            requireBatchAccess(tx, actor, batchId, AccessLevel.READ);
+            return tx.queryOne("SELECT id, project_id, description, unit_count, created_by, created_at"
+                    + " FROM work_batch WHERE id = ?", rs -> new WorkBatchInfo(rs.getString("id"),
+                            rs.getString("project_id"), rs.getString("description"), rs.getInt("unit_count"),
+                            rs.getString("created_by"), Tx.instant(rs, "created_at")), batchId).orElseThrow();
+        });
+    }
+
+    @Override
     public BatchProgress progress(Session actor, String batchId) {
         return transactions.run("reading the progress of work batch " + batchId, tx -> {
             requireBatchAccess(tx, actor, batchId, AccessLevel.READ);
