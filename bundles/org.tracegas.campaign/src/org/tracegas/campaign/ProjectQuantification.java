@@ -9,10 +9,7 @@ import org.tracegas.importer.container.ContainerReader;
 import org.tracegas.importer.container.ContainerRecord;
 import org.tracegas.importer.container.SampleKind;
 import org.tracegas.preprocess.Background;
-import org.tracegas.preprocess.BackgroundRatio;
-import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.quantify.BatchOutcome;
-import org.tracegas.quantify.BatchQuantifier;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.quantify.ProgressListener;
 import org.tracegas.store.Session;
@@ -72,13 +69,7 @@ public final class ProjectQuantification {
      */
     public BatchOutcome run(VersionInfo methodVersion, StoredMethod method, List<Path> files, long samples,
             List<Background> backgrounds, ProgressListener progress, CancellationFlag cancel) {
-        BackgroundTimeline timeline = new BackgroundTimeline(backgrounds);
-        SpectrumChain chain = new SpectrumChain(new InterferogramTransform(method.transform()), new BackgroundRatio(),
-                timeline);
-        BatchQuantifier quantifier = BatchQuantifier.onAllCores(
-                method.quantifier(timeline.all().get(0).singleBeam().axis(), software, false));
-        return new StackProcessor(store, actor, projectId, chain, quantifier,
-                new AnalysisVersions(methodVersion.id(), method.libraryVersionId()))
-                .run(files, samples, progress, cancel);
+        return new QuantificationSetup(methodVersion, method, backgrounds, software)
+                .processor(store, actor, projectId).run(files, samples, progress, cancel);
     }
 }

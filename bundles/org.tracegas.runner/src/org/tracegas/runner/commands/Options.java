@@ -1,6 +1,7 @@
 package org.tracegas.runner.commands;
 
 import java.nio.file.Path;
+import java.time.Duration;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -75,6 +76,28 @@ final class Options {
             // named below
         }
         throw new UsageException("option " + name + " needs a whole number of at least 1, was '" + v + "'");
+    }
+
+    /**
+     * A duration given in seconds, decimals allowed (e.g. 0.5), or the default when the option is absent.
+     *
+     * @throws UsageException naming the option if its value is not a positive number
+     */
+    Duration seconds(String name, Duration byDefault) throws UsageException {
+        if (!has(name)) {
+            return byDefault;
+        }
+        String v = text(name);
+        try {
+            double s = Double.parseDouble(v.strip());
+            if (s >= 0.001 && s <= 86_400) {
+                return Duration.ofMillis(Math.round(s * 1000));
+            }
+        } catch (NumberFormatException e) {
+            // named below
+        }
+        throw new UsageException("option " + name + " needs a number of seconds from 0.001 to 86400, was '" + v
+                + "'");
     }
 
     Path path(String name) throws UsageException {

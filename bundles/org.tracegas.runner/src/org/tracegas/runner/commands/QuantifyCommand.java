@@ -1,14 +1,8 @@
 package org.tracegas.runner.commands;
 
-import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 
-import org.tracegas.campaign.ContainerContents;
 import org.tracegas.campaign.ProjectQuantification;
-import org.tracegas.importer.ImportException;
-import org.tracegas.library.io.FileFormatException;
-import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.quantify.BatchOutcome;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.Command;
@@ -40,9 +34,8 @@ public final class QuantifyCommand implements Command {
 
     @Override
     public String usage() {
-        return "usage: tracegas quantify <workspace and --as options> --project <code> --method <name>\n"
-                + "                         --backgrounds <container> [--backgrounds ...] --file <container> "
-                + "[--file ...]\n" + WorkspaceLogin.USAGE + "\n"
+        return "usage: tracegas quantify <workspace and --as options> " + QuantifyArguments.USAGE_LINE + "\n"
+                + WorkspaceLogin.USAGE + "\n"
                 + StoredMethods.USAGE + "\n" + """
                   The chosen version of the method is rebuilt from the workspace. Backgrounds are the background
                   records of the --backgrounds files; each sample is ratioed against the last one before it.
@@ -54,44 +47,24 @@ public final class QuantifyCommand implements Command {
     }
 
     @Override
-    public int run(List<String> arguments, RunnerContext context) throws Exception {
-        List<String> rest = new ArrayList<>();
-        List<Path> files = Options.repeated(arguments, "--file", rest);
-        List<String> rest2 = new ArrayList<>();
-        List<Path> backgroundFiles = Options.repeated(rest, "--backgrounds", rest2);
-        if (files.isEmpty() || backgroundFiles.isEmpty()) {
-            throw new UsageException("give at least one --file and one --backgrounds file");
-        }
-        Options options = Options.parse(rest2, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--project", "--method", "--method-version"));
+    public int run(List<String> commandLine, RunnerContext context) throws Exception {
+        QuantifyArguments arguments = QuantifyArguments.parse(commandLine);
+        Options options = arguments.options();
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             ProjectQuantification job = new ProjectQuantification(store, actor, project.id(), StoredMethods.SOFTWARE);
-            StoredMethods.Found found;
-            ContainerContents backgrounds;
-            long samples;
+            QuantifyArguments.Checked checked;
             try {
-                found = StoredMethods.find(store, options);
-                if (job.hasResults(found.version().id())) {
-                    context.err().println("tracegas quantify: project " + project.code() + " holds results of "
-                            + "method version " + found.version().number() + " already; nothing done");
-                    return ExitCode.BAD_INPUT;
-                }
-                backgrounds = ContainerContents.read(backgroundFiles,
-                        new InterferogramTransform(found.method().transform()));
-                if (backgrounds.backgrounds().isEmpty()) {
-                    context.err().println("tracegas quantify: the --backgrounds files hold no background record");
-                    return ExitCode.BAD_INPUT;
-                }
-                samples = ProjectQuantification.countSamples(files);
-            } catch (FileFormatException | ImportException e) {
+                checked = arguments.check(store, project, job);
+            } catch (BadInputException e) {
                 context.err().println("tracegas quantify: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
+            StoredMethods.Found found = checked.found();
             context.progress().begin("quantify");
-            BatchOutcome outcome = job.run(found.version(), found.method(), files, samples, backgrounds.backgrounds(),
-                    context.progress()::update, cancel);
+            BatchOutcome outcome = job.run(found.version(), found.method(), arguments.files(),
+                    checked.inputs().samples(), checked.inputs().backgrounds(), context.progress()::update, cancel);
             if (outcome.cancelled()) {
                 context.err().println("tracegas quantify: cancelled after " + outcome.delivered() + " spectra");
                 return ExitCode.CANCELLED;

@@ -3,6 +3,7 @@ package org.tracegas.runner.commands;
 import org.tracegas.campaign.StoredMethod;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.runner.UsageException;
+import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
@@ -42,6 +43,28 @@ final class StoredMethods {
                         + newest);
             }
         }
+        return rebuild(store, version);
+    }
+
+    /**
+     * The method version a work batch was recorded with.
+     *
+     * @throws BadInputException if the id names no METHOD version
+     */
+    static Found byId(WorkspaceStore store, String versionId) throws BadInputException, FileFormatException {
+        VersionInfo version;
+        try {
+            version = store.versions().version(versionId);
+        } catch (NoSuchObjectException e) {
+            throw new BadInputException("no stored version " + versionId, e);
+        }
+        if (version.kind() != VersionKind.METHOD) {
+            throw new BadInputException("version " + versionId + " is a " + version.kind() + " version, not a method");
+        }
+        return rebuild(store, version);
+    }
+
+    private static Found rebuild(WorkspaceStore store, VersionInfo version) throws FileFormatException {
         return new Found(version, StoredMethod.parse(store.versions().content(version.id()),
                 "method version " + version.id()));
     }

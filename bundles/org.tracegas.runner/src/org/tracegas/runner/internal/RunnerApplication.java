@@ -8,6 +8,9 @@ import org.osgi.framework.FrameworkUtil;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.commands.AuditVerifyCommand;
+import org.tracegas.runner.commands.BatchSplitCommand;
+import org.tracegas.runner.commands.BatchStatusCommand;
+import org.tracegas.runner.commands.BatchWorkCommand;
 import org.tracegas.runner.commands.DemoCommand;
 import org.tracegas.runner.commands.ImportCommand;
 import org.tracegas.runner.commands.LibraryAddCommand;
@@ -36,7 +39,8 @@ public final class RunnerApplication implements IApplication {
                 new WorkspaceInitCommand(), new UserAddCommand(), new ProjectAddCommand(),
                 new ImportCommand(ReaderRegistry.fromPlatform()), new LibraryBuildCommand(cancel),
                 new LibraryAddCommand(), new MethodDefineCommand(), new QuantifyCommand(cancel), new QaCommand(),
-                new ReportCommand(), new ReportSignCommand()));
+                new ReportCommand(), new ReportSignCommand(), new BatchSplitCommand(), new BatchWorkCommand(cancel),
+                new BatchStatusCommand()));
         return table.dispatch(argv == null ? new String[0] : argv, new RunnerContext(System.out, System.err));
     }
 

@@ -1,0 +1,46 @@
+package org.tracegas.campaign;
+
+import java.util.List;
+
+import org.tracegas.preprocess.Background;
+import org.tracegas.preprocess.BackgroundRatio;
+import org.tracegas.preprocess.InterferogramTransform;
+import org.tracegas.quantify.BatchQuantifier;
+import org.tracegas.store.Session;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.WorkspaceStore;
+
+/**
+ * A stored method version made ready for stack files: each sample transformed as the version says, ratioed
+ * against the last background before it and fitted on all cores, its results pointing at the method and library
+ * versions. One place for this, so that a project processed in one run and one split into work units among
+ * several runners give the same results.
+ */
+public final class QuantificationSetup {
+
+    private final SpectrumChain chain;
+    private final BatchQuantifier quantifier;
+    private final AnalysisVersions versions;
+
+    /**
+     * @param backgrounds at least one, taken before the first sample
+     * @param software    named in each result's reprocessing record
+     * @throws IllegalArgumentException if there is no background
+     */
+    public QuantificationSetup(VersionInfo methodVersion, StoredMethod method, List<Background> backgrounds,
+            String software) {
+        if (backgrounds.isEmpty()) {
+            throw new IllegalArgumentException("backgrounds must hold at least one background");
+        }
+        BackgroundTimeline timeline = new BackgroundTimeline(backgrounds);
+        chain = new SpectrumChain(new InterferogramTransform(method.transform()), new BackgroundRatio(), timeline);
+        quantifier = BatchQuantifier.onAllCores(
+                method.quantifier(timeline.all().get(0).singleBeam().axis(), software, false));
+        versions = new AnalysisVersions(methodVersion.id(), method.libraryVersionId());
+    }
+
+    /** The processor storing into a project of the workspace as the actor. */
+    public StackProcessor processor(WorkspaceStore store, Session actor, String projectId) {
+        return new StackProcessor(store, actor, projectId, chain, quantifier, versions);
+    }
+}

@@ -1,0 +1,87 @@
+package org.tracegas.runner.commands;
+
+import java.nio.file.Path;
+import java.util.List;
+
+import org.tracegas.campaign.ProjectQuantification;
+import org.tracegas.runner.Command;
+import org.tracegas.runner.ExitCode;
+import org.tracegas.runner.RunnerContext;
+import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.WorkBatchInfo;
+import org.tracegas.store.WorkUnitService;
+import org.tracegas.store.WorkspaceStore;
+
+/**
+ * Records a quantification as a batch of work units, one per sample file, for any number of batch-work runners
+ * to share; checks every input as quantify does before anything is recorded.
+ */
+public final class BatchSplitCommand implements Command {
+
+    @Override
+    public String name() {
+        return "batch-split";
+    }
+
+    @Override
+    public String summary() {
+        return "record a quantification as a batch of work units, one per file, for batch-work runners";
+    }
+
+    @Override
+    public String usage() {
+        return "usage: tracegas batch-split <workspace and --as options> " + QuantifyArguments.USAGE_LINE + "\n"
+                + WorkspaceLogin.USAGE + "\n"
+                + StoredMethods.USAGE + "\n" + """
+                  Checks everything quantify checks (every file read once, the method version exists, the
+                  backgrounds files hold backgrounds, no sample file twice) and then records a batch: one work unit
+                  per --file, the project, method version and background files in the batch's description.
+                  Prints the batch id alone on standard output; give it to batch-work and batch-status.
+                exit codes: 0 recorded, 2 wrong arguments, 3 bad input file (file, record and field named) or the
+                  project holds this version's results already; nothing is recorded then, 5 failure""";
+    }
+
+    @Override
+    public int run(List<String> commandLine, RunnerContext context) throws Exception {
+        QuantifyArguments arguments = QuantifyArguments.parse(commandLine);
+        Options options = arguments.options();
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+            Session actor = WorkspaceLogin.logIn(store, options, context);
+            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            QuantifyArguments.Checked checked;
+            String description;
+            try {
+                checked = arguments.check(store, project,
+                        new ProjectQuantification(store, actor, project.id(), StoredMethods.SOFTWARE));
+                description = new BatchDescription(project.id(), checked.found().version().id(),
+                        arguments.backgroundFiles()).text();
+                requireFits(description, arguments.files());
+            } catch (BadInputException e) {
+                context.err().println("tracegas batch-split: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
+            WorkBatchInfo batch = store.workUnits().createBatch(actor, project.id(), description,
+                    arguments.files().stream().map(Path::toString).toList());
+            context.out().println(batch.id());
+            context.err().printf("Recorded batch %s: %d work units with %d samples of project %s, method '%s' "
+                    + "version %d%n", batch.id(), batch.unitCount(), checked.inputs().samples(), project.code(),
+                    checked.found().method().method().name(), checked.found().version().number());
+            return ExitCode.OK;
+        }
+    }
+
+    /** Checked here so that the store's refusal cannot come after a partly successful check. */
+    private static void requireFits(String description, List<Path> files) throws BadInputException {
+        if (description.length() > WorkUnitService.MAX_TEXT_LENGTH) {
+            throw new BadInputException("the --backgrounds file names take " + description.length()
+                    + " characters, more than a batch holds (" + WorkUnitService.MAX_TEXT_LENGTH + ")");
+        }
+        for (Path f : files) {
+            if (f.toString().length() > WorkUnitService.MAX_TEXT_LENGTH) {
+                throw new BadInputException("--file " + f + ": the name is longer than a work unit holds ("
+                        + WorkUnitService.MAX_TEXT_LENGTH + " characters)");
+            }
+        }
+    }
+}

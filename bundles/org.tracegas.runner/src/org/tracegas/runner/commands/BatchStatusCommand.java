@@ -1,0 +1,48 @@
+package org.tracegas.runner.commands;
+
+import java.util.List;
+
+import org.tracegas.runner.Command;
+import org.tracegas.runner.ExitCode;
+import org.tracegas.runner.RunnerContext;
+import org.tracegas.store.BatchProgress;
+import org.tracegas.store.Session;
+import org.tracegas.store.WorkspaceStore;
+
+/** How far a batch of work units is: for scripts that wait for the runners of a batch-split. */
+public final class BatchStatusCommand implements Command {
+
+    @Override
+    public String name() {
+        return "batch-status";
+    }
+
+    @Override
+    public String summary() {
+        return "count a batch's open, claimed and done work units";
+    }
+
+    @Override
+    public String usage() {
+        return "usage: tracegas batch-status <workspace and --as options> --batch <id>\n" + WorkspaceLogin.USAGE
+                + "\n" + """
+                  --batch <id>                the batch, as batch-split printed it
+                  Prints the units open, claimed (held by a runner, or left by one that stopped until its lease
+                  ends) and done. Needs read access to the batch's project.
+                exit codes: 0 every unit done, 1 units remain, 2 wrong arguments or no such batch, 5 failure""";
+    }
+
+    @Override
+    public int run(List<String> arguments, RunnerContext context) throws Exception {
+        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
+                "--batch"));
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+            Session actor = WorkspaceLogin.logIn(store, options, context);
+            String batchId = BatchWorkCommand.batch(store, actor, options).id();
+            BatchProgress p = store.workUnits().progress(actor, batchId);
+            context.out().printf("batch %s: %d units, %d open, %d claimed, %d done: %s%n", batchId, p.total(),
+                    p.open(), p.claimed(), p.done(), p.finished() ? "complete" : "not complete");
+            return p.finished() ? ExitCode.OK : ExitCode.CHECK_FAILED;
+        }
+    }
+}

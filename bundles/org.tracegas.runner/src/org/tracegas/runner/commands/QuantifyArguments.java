@@ -1,0 +1,64 @@
+package org.tracegas.runner.commands;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.tracegas.campaign.ProjectQuantification;
+import org.tracegas.library.io.FileFormatException;
+import org.tracegas.runner.UsageException;
+import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.WorkspaceStore;
+
+/**
+ * The command line of a quantification (quantify, batch-split): the workspace and login, project, method and
+ * version, the --backgrounds files and the --file sample files, each at least once.
+ */
+record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path> files) {
+
+    static final String USAGE_LINE = "--project <code> --method <name>\n"
+            + "       --backgrounds <container> [--backgrounds ...] --file <container> [--file ...]";
+
+    QuantifyArguments {
+        backgroundFiles = List.copyOf(backgroundFiles);
+        files = List.copyOf(files);
+    }
+
+    /** The method version rebuilt from the workspace and the inputs read, ready to process. */
+    record Checked(StoredMethods.Found found, SampleInputs inputs) {
+    }
+
+    /**
+     * Finds the method version and reads every input file once, before anything is stored or recorded.
+     *
+     * @throws BadInputException naming the file, record and field at fault, or when the project holds this
+     *                           version's results already (processing again would repeat them)
+     * @throws UsageException    if the method or its version does not exist
+     */
+    Checked check(WorkspaceStore store, ProjectInfo project, ProjectQuantification job)
+            throws BadInputException, UsageException {
+        StoredMethods.Found found;
+        try {
+            found = StoredMethods.find(store, options);
+        } catch (FileFormatException e) {
+            throw new BadInputException(e.getMessage(), e);
+        }
+        if (job.hasResults(found.version().id())) {
+            throw new BadInputException("project " + project.code() + " holds results of method version "
+                    + found.version().number() + " already; nothing done");
+        }
+        return new Checked(found, SampleInputs.read(found.method(), backgroundFiles, files));
+    }
+
+    static QuantifyArguments parse(List<String> arguments) throws UsageException {
+        List<String> rest = new ArrayList<>();
+        List<Path> files = Options.repeated(arguments, "--file", rest);
+        List<String> rest2 = new ArrayList<>();
+        List<Path> backgroundFiles = Options.repeated(rest, "--backgrounds", rest2);
+        if (files.isEmpty() || backgroundFiles.isEmpty()) {
+            throw new UsageException("give at least one --file and one --backgrounds file");
+        }
+        return new QuantifyArguments(Options.parse(rest2, List.of("--workspace", "--server", "--user", "--password",
+                "--as", "--project", "--method", "--method-version")), backgroundFiles, files);
+    }
+}
