@@ -3,6 +3,9 @@ package org.tracegas.runner.commands;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.tracegas.runner.commands.InventedBandSystem.TRANSFORM;
+import static org.tracegas.runner.commands.InventedBandSystem.header;
+import static org.tracegas.runner.commands.InventedBandSystem.methodFile;
 
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
@@ -23,28 +26,17 @@ import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.campaign.KeyValueFile;
 import org.tracegas.campaign.MeasurementRole;
 import org.tracegas.campaign.MinuteSeries;
 import org.tracegas.campaign.StoredMethod;
-import org.tracegas.campaign.TransformText;
-import org.tracegas.importer.container.AcquisitionHeader;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
-import org.tracegas.library.synthesis.AbsorptionPath;
-import org.tracegas.library.synthesis.HitranLineListReader;
-import org.tracegas.library.synthesis.LineByLineModel;
-import org.tracegas.library.synthesis.PowerLawPartitionFunction;
 import org.tracegas.model.AccessLevel;
-import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.report.PdfReportWriter;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
-import org.tracegas.spectrum.AxisUnit;
-import org.tracegas.spectrum.Interferogram;
-import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -62,11 +54,6 @@ import org.tracegas.store.Workspaces;
  */
 class AnalysisCommandsTest {
 
-    private static final double LASER = 15798.0;
-    private static final int HALF = 1024;
-    private static final double PATH = 4.85;
-    private static final double CELL_T = 464.15;
-    private static final double CELL_P = 101.3;
     private static final Instant T0 = Instant.parse("2026-03-17T08:00:00Z");
     /** The stack samples, ppm: CO 20 at a reference amount, 60 and 120 half-way up a bracket of ratio 1.5. */
     private static final double[] CO_PPM = { 20, 60, 120 };
@@ -80,7 +67,7 @@ class AnalysisCommandsTest {
     @TempDir
     static Path folder;
     private static String ws;
-    private static Map<String, LineByLineModel> gases;
+    private static InventedBandSystem bands;
     private static Path qaFile;
     private static Path stackFile;
 
@@ -110,144 +97,11 @@ class AnalysisCommandsTest {
         assertEquals(ExitCode.OK, run(o, e, argv), () -> String.join(" ", argv) + ": " + e + o);
     }
 
-    /**
-     * Invented lines (numbers plausible, not real molecular data) in the HITRAN 160-character record: n lines
-     * from a first wavenumber at a spacing, intensities (cm/molecule at 296 K) shaped like a rotational branch.
-     */
-    private static Path lineList(String file, int molecule, double first, double spacing, int n, double strongest,
-            double rotational) throws IOException {
-        StringBuilder s = new StringBuilder();
-        for (int j = 0; j < n; j++) {
-            double lower = rotational * j * (j + 1);
-            double intensity = strongest * (j + 1) * Math.exp(-lower * 1.4388 / 296.0);
-            StringBuilder r = new StringBuilder(String.format(Locale.ROOT, "%2d%1d%12.6f%10.3E%10.3E", molecule, 1,
-                    first + spacing * j, intensity, 1.0));
-            r.append(".0600 .070").append(String.format(Locale.ROOT, "%10.4f%4.2f", lower, 0.72)).append("-.002500");
-            while (r.length() < 160) {
-                r.append(' ');
-            }
-            s.append(r).append('\n');
-        }
-        Path path = folder.resolve(file);
-        Files.writeString(path, s);
-        return path;
-    }
-
-    /**
-     * CO-like P and R branches of 12 lines each, 3.86 cm-1 apart around 2143 cm-1. The strengths give a band
-     * of about 1.0e-17 cm/molecule at 296 K, the integrated intensity of the CO fundamental (HITRAN, from
-     * memory), so the band saturates at stack levels as a real one does and not more.
-     */
-    private static Path coLines() throws IOException {
-        StringBuilder s = new StringBuilder();
-        for (int sign : new int[] { -1, 1 }) {
-            for (int j = 0; j < 12; j++) {
-                double lower = 1.93 * j * (j + 1);
-                double intensity = 1.07e-19 * (j + 1) * Math.exp(-lower * 1.4388 / 296.0);
-                StringBuilder r = new StringBuilder(String.format(Locale.ROOT, "%2d%1d%12.6f%10.3E%10.3E", 5, 1,
-                        2143.0 + sign * 3.86 * (j + 0.5), intensity, 1.0));
-                r.append(".0600 .070").append(String.format(Locale.ROOT, "%10.4f%4.2f", lower, 0.72))
-                        .append("-.002500");
-                while (r.length() < 160) {
-                    r.append(' ');
-                }
-                s.append(r).append('\n');
-            }
-        }
-        Path file = folder.resolve("co.par");
-        Files.writeString(file, s);
-        return file;
-    }
-
-    /**
-     * The interferogram of the cell in front of a smooth source, by a direct cosine sum (double-sided) over a
-     * grid of 0.02 cm-1, half the Lorentz half width of the lines at the cell's conditions, with detector noise.
-     */
-    private static Interferogram interferogram(Map<String, Double> ppm, Random noise) {
-        double step = 0.02;
-        SpectralAxis fine = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1800, step, 35_001);
-        double[] t = new double[fine.size()];
-        java.util.Arrays.fill(t, 1.0);
-        ppm.forEach((gas, c) -> {
-            if (c > 0) {
-                double[] g = gases.get(gas).transmittance(fine, new AbsorptionPath(CELL_T, CELL_P, c, PATH))
-                        .toArray();
-                for (int k = 0; k < t.length; k++) {
-                    t[k] *= g[k];
-                }
-            }
-        });
-        double[] samples = new double[2 * HALF];
-        for (int k = 0; k < fine.size(); k++) {
-            double sigma = fine.get(k);
-            double b = Math.min(1.0, Math.min(sigma - 1800, 2500 - sigma) / 100.0) * t[k] * step / 0.1;
-            // cos(j theta) for j = |i - HALF| by the Chebyshev recurrence
-            double theta = 2 * Math.PI * sigma * 2 / LASER;
-            double twoCos = 2 * Math.cos(theta);
-            double previous = Math.cos(theta);
-            double current = 1.0;
-            samples[HALF] += b;
-            for (int j = 1; j <= HALF; j++) {
-                double next = twoCos * current - previous;
-                previous = current;
-                current = next;
-                samples[HALF - j] += b * current;
-                if (j < HALF) {
-                    samples[HALF + j] += b * current;
-                }
-            }
-        }
-        // detector noise of 4e-6 of the centre burst (about 7000 here), as the demo instrument's
-        for (int i = 0; i < samples.length; i++) {
-            samples[i] += 2000.0 + 0.028 * noise.nextGaussian();
-        }
-        return new Interferogram(samples, LASER, 2);
-    }
-
     private static Map<String, Double> stack(double co) {
         Map<String, Double> m = new LinkedHashMap<>();
         m.put("CO", co);
         m.put("H2O", H2O_PPM);
         return m;
-    }
-
-    private static AcquisitionHeader header(SampleKind kind, Instant time, String role) {
-        return new AcquisitionHeader(HALF, kind, time, CELL_T, CELL_P * 10, PATH,
-                role == null ? Map.of() : Map.of(MeasurementRole.KEY, role));
-    }
-
-    private static final String TRANSFORM = """
-            [transform]
-            apodization = norton-beer-medium
-            phase-correction = mertz
-            sidedness = double-sided
-            zero-fill = 2
-            range = 2000..2300
-            """;
-
-    private static String methodFile(String name) {
-        return "method = " + name + """
-
-                library = lib/library.manifest
-                path-length = 4.85
-                nonlinearity = yes
-                tolerance = 1e-6
-                """ + TRANSFORM + """
-
-                [analyte]
-                compound = CO
-                interferents = N2O
-                region = 2050..2200 baseline 1
-
-                [analyte]
-                compound = N2O
-                interferents = CO
-                region = 2200..2240 baseline 1
-
-                [analyte]
-                compound = H2O
-                region = 2245..2295 baseline 1
-                """;
     }
 
     /** The workspace, projects, raw files, library and method every test of the class starts from. */
@@ -261,38 +115,33 @@ class AnalysisCommandsTest {
             ok("project-add", "--workspace", ws, "--as", "ana", "--client", "Client " + code, "--code", code,
                     "--name", "Survey");
         }
-        HitranLineListReader reader = new HitranLineListReader();
-        gases = Map.of("CO", new LineByLineModel(reader.read(coLines()), 28.010,
-                PowerLawPartitionFunction.linearMolecule()),
-                "N2O", new LineByLineModel(reader.read(lineList("n2o.par", 4, 2205, 5, 7, 6e-20, 0.42)), 44.013,
-                        PowerLawPartitionFunction.linearMolecule()),
-                "H2O", new LineByLineModel(reader.read(lineList("h2o.par", 1, 2250, 8, 5, 2e-23, 14.5)), 18.015,
-                        PowerLawPartitionFunction.nonLinearMolecule()));
+        bands = new InventedBandSystem(folder);
         Random noise = new Random(17);
         qaFile = folder.resolve("qa.tgc");
         try (ContainerWriter w = ContainerWriter.create(qaFile)) {
-            w.append(header(SampleKind.BACKGROUND, T0.minusSeconds(1200), null), interferogram(Map.of(), noise));
+            w.append(header(SampleKind.BACKGROUND, T0.minusSeconds(1200), null),
+                    bands.interferogram(Map.of(), noise));
             w.append(header(SampleKind.SAMPLE, T0.minusSeconds(900), MeasurementRole.CTS),
-                    interferogram(Map.of("CO", CTS_PPM), noise));
+                    bands.interferogram(Map.of("CO", CTS_PPM), noise));
             w.append(header(SampleKind.SAMPLE, T0.minusSeconds(720), MeasurementRole.ZERO),
-                    interferogram(Map.of(), noise));
+                    bands.interferogram(Map.of(), noise));
             w.append(header(SampleKind.SAMPLE, T0.minusSeconds(540), MeasurementRole.UNSPIKED),
-                    interferogram(stack(CO_PPM[0]), noise));
+                    bands.interferogram(stack(CO_PPM[0]), noise));
             Map<String, Double> spiked = new LinkedHashMap<>();
             stack(CO_PPM[0]).forEach((g, c) -> spiked.put(g, (1 - SPIKE_FRACTION) * c));
             spiked.merge("CO", SPIKE_FRACTION * SPIKE_CO_PPM, Double::sum);
             spiked.put("N2O", SPIKE_FRACTION * SPIKE_TRACER_PPM);
             w.append(header(SampleKind.SAMPLE, T0.minusSeconds(480), MeasurementRole.SPIKE),
-                    interferogram(spiked, noise));
+                    bands.interferogram(spiked, noise));
             w.append(header(SampleKind.SAMPLE, T0.plusSeconds(600), MeasurementRole.CTS),
-                    interferogram(Map.of("CO", CTS_PPM), noise));
+                    bands.interferogram(Map.of("CO", CTS_PPM), noise));
             w.commit();
         }
         stackFile = folder.resolve("stack.tgc");
         try (ContainerWriter w = ContainerWriter.create(stackFile)) {
             for (int i = 0; i < CO_PPM.length; i++) {
-                w.append(header(SampleKind.SAMPLE, T0.plusSeconds(60L * i), null), interferogram(stack(CO_PPM[i]),
-                        noise));
+                w.append(header(SampleKind.SAMPLE, T0.plusSeconds(60L * i), null),
+                        bands.interferogram(stack(CO_PPM[i]), noise));
             }
             w.commit();
         }
@@ -302,50 +151,7 @@ class AnalysisCommandsTest {
         }
         Files.writeString(folder.resolve("o2.csv"), o2);
 
-        SpectralAxis axis = new InterferogramTransform(TransformText.read(KeyValueFile.parse(TRANSFORM,
-                folder.resolve("t")).blocks("transform").get(0))).singleBeam(interferogram(Map.of(), noise)).axis();
-        Path plan = folder.resolve("library.plan");
-        // references at most a factor 1.5 apart over the stack and QA levels; the CTS (485 ppm·m) and the first
-        // sample (97 ppm·m) sit on references, the spike's tracer (24.25 ppm·m) too
-        Files.writeString(plan, String.format(Locale.ROOT, """
-                library = Invented references
-                temperature = %s
-                pressure = %s
-                path-length = %s
-                resolution = %s
-                apodization = norton-beer-medium
-                first-wavenumber = %s
-                step = %s
-                points = %d
-                uncertainty = 0.02
-
-                [compound]
-                name = CO
-                cas = 630-08-0
-                formula = CO
-                molar-mass = 28.010
-                line-list = co.par
-                partition = linear
-                ppm-m = 72.75, 97, 145.5, 218.25, 327.375, 485, 727.5
-
-                [compound]
-                name = N2O
-                cas = 10024-97-2
-                formula = N2O
-                molar-mass = 44.013
-                line-list = n2o.par
-                partition = linear
-                ppm-m = 24.25, 36.375
-
-                [compound]
-                name = H2O
-                cas = 7732-18-5
-                formula = H2O
-                molar-mass = 18.015
-                line-list = h2o.par
-                partition = non-linear
-                ppm-m = 363750, 606250
-                """, CELL_T, CELL_P, PATH, LASER / 2 / HALF, axis.first(), axis.step(), axis.size()));
+        Path plan = bands.libraryPlan();
         ok("library-build", "--workspace", ws, "--as", "ana", "--plan", plan.toString(), "--out",
                 folder.resolve("lib").toString());
         Files.writeString(folder.resolve("stack.method"), methodFile("Stack"));

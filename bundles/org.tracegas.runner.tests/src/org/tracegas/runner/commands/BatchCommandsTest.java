@@ -1,0 +1,187 @@
+package org.tracegas.runner.commands;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayOutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.stream.Collectors;
+
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.audit.AuditQuery;
+import org.tracegas.runner.ExitCode;
+import org.tracegas.store.MeasurementInfo;
+import org.tracegas.store.NewResult;
+import org.tracegas.store.ResultInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.WorkspaceStore;
+import org.tracegas.store.Workspaces;
+
+/**
+ * batch-split, batch-work and batch-status on a real H2 workspace: a batch worked by one runner stores what
+ * quantify stores for the same files, and bad input to batch-split records no batch.
+ */
+class BatchCommandsTest {
+
+    private static final int FILES = 3;
+    private static final int SAMPLES_PER_FILE = 2;
+    /** CO, N2O and H2O: the analytes of the method. */
+    private static final int COMPOUNDS = 3;
+
+    @TempDir
+    static Path folder;
+    private static BatchCampaign campaign;
+    private static Path ws;
+
+    @BeforeAll
+    static void workspaceAndFiles() throws Exception {
+        ws = folder.resolve("ws");
+        campaign = new BatchCampaign(folder, List.of("--workspace", ws.toString()), List.of("Q", "B", "X"), FILES,
+                SAMPLES_PER_FILE);
+    }
+
+    @Test
+    void batchWorkedByOneRunnerStoresWhatQuantifyStores() throws Exception {
+        campaign.ok("quantify", campaign.quantification("Q", campaign.stackFiles));
+        String batchId = campaign.ok("batch-split", campaign.quantification("B", campaign.stackFiles)).strip();
+
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        assertEquals(ExitCode.CHECK_FAILED, campaign.run(out, new ByteArrayOutputStream(), "batch-status", "--as",
+                "ana", "--batch", batchId), "nothing done yet");
+        assertTrue(out.toString(StandardCharsets.UTF_8).contains(FILES + " units, " + FILES + " open, 0 claimed, "
+                + "0 done"), out::toString);
+        String worked = campaign.ok("batch-work", "--as", "ana", "--batch", batchId, "--lease", "30", "--idle-poll",
+                "0.2");
+        assertTrue(worked.contains("complete: " + FILES + " units") && worked.contains("completed " + FILES),
+                worked);
+        assertTrue(campaign.ok("batch-status", "--as", "ana", "--batch", batchId).contains(FILES + " done: complete"));
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.BAD_INPUT, campaign.run(new ByteArrayOutputStream(), err, "batch-split",
+                campaign.quantification("B", campaign.stackFiles)), "a second batch would repeat the results");
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("holds results of method version"), err::toString);
+
+        try (WorkspaceStore store = Workspaces.openH2(ws.resolve("db"))) {
+            Session ana = store.users().logIn("ana", BatchCampaign.PASSWORD.toCharArray());
+            Map<String, NewResult> quantified = resultsByTimeAndCompound(store, ana, "Q");
+            Map<String, NewResult> batched = resultsByTimeAndCompound(store, ana, "B");
+            assertEquals(FILES * SAMPLES_PER_FILE * COMPOUNDS, quantified.size());
+            assertEquals(quantified.keySet(), batched.keySet());
+            // the same chain and fit on the same input: the same numbers, bit for bit, and the same input hashes
+            quantified.forEach((key, q) -> {
+                NewResult b = batched.get(key);
+                assertEquals(q.concentration(), b.concentration(), 0.0, key);
+                assertEquals(q.uncertainty(), b.uncertainty(), 0.0, key);
+                assertEquals(q.flags(), b.flags(), key);
+                assertEquals(q.inputHash(), b.inputHash(), key);
+                assertEquals(q.methodVersionId(), b.methodVersionId(), key);
+                assertEquals(q.libraryVersionId(), b.libraryVersionId(), key);
+            });
+            for (int unit = 0; unit < FILES; unit++) {
+                List<Instant> times = store.workUnits().measurementsOf(ana, batchId, unit).stream()
+                        .map(id -> measurementTime(store, ana, "B", id)).toList();
+                final int f = unit;
+                assertEquals(List.of(campaign.time(f, 0), campaign.time(f, 1)), times, "unit " + unit + " holds "
+                        + "the samples of " + campaign.stackFiles.get(unit));
+            }
+            assertTrue(store.verifyAuditTrail().intact());
+        }
+    }
+
+    @Test
+    void badInputToBatchSplitRecordsNoBatch() throws Exception {
+        Path truncated = folder.resolve("truncated.tgc");
+        byte[] whole = Files.readAllBytes(campaign.stackFiles.get(0));
+        Files.write(truncated, java.util.Arrays.copyOf(whole, whole.length / 2));
+        long before = batchesRecorded();
+        Path sample = campaign.stackFiles.get(0);
+        expectBadInput(List.of("--file", folder.resolve("missing.tgc").toString()), "missing.tgc");
+        expectBadInput(List.of("--file", sample.toString(), "--file", sample.toString()), "given twice");
+        expectBadInput(List.of("--file", truncated.toString()), "truncated.tgc");
+        expectBadInput(List.of("--file", campaign.backgrounds.toString()), "a background among the samples");
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.BAD_INPUT, campaign.run(new ByteArrayOutputStream(), err, "batch-split", "--as", "ana",
+                "--project", "X", "--method", BatchCampaign.METHOD, "--backgrounds", sample.toString(), "--file",
+                sample.toString()));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("hold no background record"), err::toString);
+        assertEquals(ExitCode.USAGE, campaign.run(new ByteArrayOutputStream(), new ByteArrayOutputStream(),
+                "batch-split", "--as", "ana", "--project", "X", "--method", BatchCampaign.METHOD, "--method-version",
+                "9", "--backgrounds", campaign.backgrounds.toString(), "--file", sample.toString()), "no version 9");
+        assertEquals(ExitCode.USAGE, campaign.run(new ByteArrayOutputStream(), new ByteArrayOutputStream(),
+                "batch-split", "--as", "ana", "--project", "X", "--method", "Unknown", "--backgrounds",
+                campaign.backgrounds.toString(), "--file", sample.toString()), "no such method");
+        assertEquals(before, batchesRecorded(), "no batch recorded");
+    }
+
+    @Test
+    void unknownBatchAndWrongLeaseAreUsageErrors() {
+        for (String command : List.of("batch-work", "batch-status")) {
+            ByteArrayOutputStream err = new ByteArrayOutputStream();
+            assertEquals(ExitCode.USAGE, campaign.run(new ByteArrayOutputStream(), err, command, "--as", "ana",
+                    "--batch", "no-such-batch"), command);
+            assertTrue(err.toString(StandardCharsets.UTF_8).contains("no work batch with id no-such-batch"),
+                    err::toString);
+        }
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.USAGE, campaign.run(new ByteArrayOutputStream(), err, "batch-work", "--as", "ana",
+                "--batch", "b", "--lease", "0"));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("option --lease needs a number of seconds"),
+                err::toString);
+    }
+
+    @Test
+    void batchCommandsExplainThemselves() {
+        String work = campaign.ok("batch-work", "--help");
+        assertTrue(work.contains("--lease <seconds>") && work.contains("--idle-poll <seconds>")
+                && work.contains("4 cancelled"), work);
+        assertTrue(campaign.ok("batch-split", "--help").contains("Prints the batch id"));
+        assertTrue(campaign.ok("batch-status", "--help").contains("0 every unit done, 1 units remain"));
+    }
+
+    private void expectBadInput(List<String> files, String named) throws Exception {
+        List<String> args = new java.util.ArrayList<>(List.of("--as", "ana", "--project", "X", "--method",
+                BatchCampaign.METHOD, "--backgrounds", campaign.backgrounds.toString()));
+        args.addAll(files);
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.BAD_INPUT, campaign.run(out, err, "batch-split", args.toArray(String[]::new)),
+                () -> files + ": " + err);
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains(named), () -> named + " in " + err);
+        assertEquals("", out.toString(StandardCharsets.UTF_8), "no batch id printed");
+    }
+
+    /** Batches ever recorded in the workspace, as the audit trail has them (read as the administrator). */
+    private static long batchesRecorded() {
+        try (WorkspaceStore store = Workspaces.openH2(ws.resolve("db"))) {
+            Session root = store.users().logIn("root", BatchCampaign.PASSWORD.toCharArray());
+            return store.audit().review(root, AuditQuery.all().objectType("work-batch").build()).records().size();
+        }
+    }
+
+    /** The project's results keyed by measurement time and compound; fails on a key seen twice. */
+    private static Map<String, NewResult> resultsByTimeAndCompound(WorkspaceStore store, Session actor,
+            String project) {
+        String projectId = store.projects().findByCode(actor, project).orElseThrow().id();
+        Map<String, Instant> times = store.projects().measurements(actor, projectId).stream()
+                .collect(Collectors.toMap(MeasurementInfo::id, MeasurementInfo::time));
+        Map<String, NewResult> byKey = new TreeMap<>();
+        for (ResultInfo r : store.results().results(actor, projectId)) {
+            String key = times.get(r.values().measurementId()) + " " + r.values().compound();
+            assertEquals(null, byKey.put(key, r.values()), "one result per measurement time and compound: " + key);
+        }
+        return byKey;
+    }
+
+    private static Instant measurementTime(WorkspaceStore store, Session actor, String project, String id) {
+        String projectId = store.projects().findByCode(actor, project).orElseThrow().id();
+        return store.projects().measurements(actor, projectId).stream().filter(m -> m.id().equals(id)).findFirst()
+                .orElseThrow().time();
+    }
+}
