@@ -105,9 +105,15 @@ final class BatchCampaign {
 
     /** Runs a command on this workspace: the command, then the workspace options, then the rest. */
     int run(ByteArrayOutputStream out, ByteArrayOutputStream err, String command, String... rest) {
+        return run(new CancellationFlag(), out, err, command, rest);
+    }
+
+    /** Runs a command on this workspace with the cancellation flag the application would set on stopping. */
+    int run(CancellationFlag cancel, ByteArrayOutputStream out, ByteArrayOutputStream err, String command,
+            String... rest) {
         String[] argv = Stream.of(Stream.of(command), workspace.stream(), Stream.of(rest)).flatMap(s -> s)
                 .toArray(String[]::new);
-        return commands(new CancellationFlag()).dispatch(argv, new RunnerContext(
+        return commands(cancel).dispatch(argv, new RunnerContext(
                 new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8),
                 ENV));
     }

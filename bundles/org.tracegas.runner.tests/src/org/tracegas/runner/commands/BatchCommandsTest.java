@@ -17,6 +17,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
+import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.NewResult;
@@ -118,6 +119,20 @@ class BatchCommandsTest {
                 "batch-split", "--as", "ana", "--project", "X", "--method", "Unknown", "--backgrounds",
                 campaign.backgrounds.toString(), "--file", sample.toString()), "no such method");
         assertEquals(before, batchesRecorded(), "no batch recorded");
+    }
+
+    @Test
+    void stoppedRunnerEndsCancelledAndLeavesItsUnitsOpen() {
+        String batchId = campaign.ok("batch-split", campaign.quantification("X", campaign.stackFiles)).strip();
+        CancellationFlag stopped = new CancellationFlag();
+        stopped.cancel();
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.CANCELLED, campaign.run(stopped, new ByteArrayOutputStream(), err, "batch-work",
+                "--as", "ana", "--batch", batchId), err::toString);
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        assertEquals(ExitCode.CHECK_FAILED, campaign.run(out, new ByteArrayOutputStream(), "batch-status", "--as",
+                "ana", "--batch", batchId));
+        assertTrue(out.toString(StandardCharsets.UTF_8).contains(FILES + " open, 0 claimed, 0 done"), out::toString);
     }
 
     @Test
