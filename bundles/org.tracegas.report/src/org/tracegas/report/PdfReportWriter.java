@@ -25,6 +25,7 @@ import org.tracegas.report.internal.Check;
 import org.tracegas.report.internal.Numbers;
 import org.tracegas.report.internal.PageWriter;
 import org.tracegas.report.internal.PlotRenderer;
+import org.tracegas.report.internal.QaTables;
 import org.tracegas.report.internal.TableRenderer;
 import org.tracegas.report.internal.TableRenderer.Column;
 
@@ -79,6 +80,7 @@ public final class PdfReportWriter {
                 timeSeries(pw, content);
                 spectra(pw, content);
                 signatures(pw, content);
+                qaAppendix(pw, content);
                 pw.close();
                 pw.footers("Report " + content.campaign().reportId() + "  |  " + content.campaign().plant()
                         + "  |  content hash " + content.contentHash().substring(0, 16));
@@ -161,17 +163,9 @@ public final class PdfReportWriter {
 
     private static void qa(PageWriter pw, ReportContent content) throws IOException {
         pw.heading("4  Quality assurance summary", 90);
-        long failed = content.qa().stream().filter(q -> !q.passed()).count();
-        pw.paragraph(content.qa().size() + " checks, " + (content.qa().size() - failed) + " passed, " + failed
-                + " failed.", 9.5f);
-        List<String[]> rows = new ArrayList<>();
-        for (QaLine q : content.qa()) {
-            rows.add(new String[] {q.check(), q.passed() ? "pass" : "FAIL", q.measured(), q.limits(),
-                    q.rule() + " [Source: " + q.source() + "]"});
-        }
-        new TableRenderer(List.of(new Column("Check", 85, false), new Column("Result", 34, false),
-                new Column("Measured", 55, true), new Column("Limits", 66, true), new Column("Rule and source", 255,
-                        false)), 7.5f, ALARMS).draw(pw, rows);
+        QaTables tables = new QaTables(content.qa());
+        pw.paragraph(tables.overview(), 9.5f);
+        tables.summaryTable(ALARMS).draw(pw, tables.summaryRows());
         if (!content.controlCharts().isEmpty()) {
             pw.subheading("Control charts of repeated QA readings");
             pw.paragraph("Readings in order, centre line and warning (2 sigma) and action (3 sigma) limits; marked "
@@ -180,6 +174,22 @@ public final class PdfReportWriter {
                 plot(pw, p, CHART_HEIGHT);
             }
         }
+    }
+
+    /** Every QA reading, when the summary in section 4 shows repeated checks as one row. */
+    private static void qaAppendix(PageWriter pw, ReportContent content) {
+        QaTables tables = new QaTables(content.qa());
+        if (!tables.needsAppendix()) {
+            return;
+        }
+        // an appendix starts on a page of its own
+        if (!pw.atPageTop()) {
+            pw.newPage();
+        }
+        pw.heading(QaTables.APPENDIX, 60);
+        pw.paragraph("Each QA reading of section 4, grouped by check and numbered in the order taken; the rules and "
+                + "their sources are given once per check in section 4.", 9f);
+        tables.appendixTable(ALARMS).draw(pw, tables.appendixRows());
     }
 
     private static void results(PageWriter pw, ReportContent content) {
