@@ -9,13 +9,19 @@ import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
+import java.util.HashMap;
+import java.util.Map;
+import java.util.stream.Collectors;
 
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.tracegas.qa.checks.CtsDriftCheck;
+import org.tracegas.qa.checks.ZeroSpanCheck;
 import org.tracegas.report.internal.Numbers;
+import org.tracegas.report.internal.QaTables;
 
 class PdfReportWriterTest {
 
@@ -58,20 +64,90 @@ class PdfReportWriterTest {
         }
     }
 
+    /** Section 4 up to its control charts. */
+    private static String qaSummary(String all) {
+        return all.substring(all.indexOf("Quality assurance summary"), all.indexOf("Control charts of repeated QA"));
+    }
+
+    private static long linesStartingWith(String text, String prefix) {
+        return text.lines().filter(l -> l.startsWith(prefix)).count();
+    }
+
     @Test
     void showsQaOutcomesWithRulesAndSources() throws IOException {
         try (PDDocument doc = Loader.loadPDF(pdf)) {
-            String t = text(doc, 1, doc.getNumberOfPages());
-            assertTrue(t.contains("CTS path length"));
+            String t = qaSummary(text(doc, 1, doc.getNumberOfPages()));
             assertTrue(t.contains("Spike recovery HCl"));
             assertTrue(t.contains("8.11.3"), "source of the CTS drift rule");
-            // the NH3 span reads 48.1 on 49.7 ppm: -3.2 %, outside ±2 %
-            assertTrue(t.contains("FAIL"));
+            // the NH3 span reads 48.1 on 49.7 ppm: -3.2 %, outside ±2 % (hand-computed)
             assertTrue(t.contains("-3.219 %"), "measured NH3 span drift");
-            // and the zero chart: the CO zero drifts upwards through the campaign and signals
-            long failed = content.qa().stream().filter(q -> !q.passed()).count();
-            assertEquals(2, failed);
-            assertTrue(t.contains("10 checks, 8 passed, 2 failed."));
+            // 5 CTS paths, drift, spike, 12 times 6 zeros and a noise level, detection limit, background age,
+            // 2 spans and the CO zero chart; the 2 NH3 zeros, the NH3 span and the chart fail (fixture design)
+            assertTrue(t.contains("96 readings of 15 checks: 92 passed, 4 failed."), t);
+            assertTrue(t.contains("Failed: Zero NH3 (2 of 12), Span NH3, Control chart: Zero CO."), t);
+        }
+    }
+
+    @Test
+    void qaSummaryHasOneRowPerCheckAndEachFailedReading() throws IOException {
+        try (PDDocument doc = Loader.loadPDF(pdf)) {
+            String t = qaSummary(text(doc, 1, doc.getNumberOfPages()));
+            assertEquals(1, linesStartingWith(t, "CTS path length pass 5, all pass worst "), t);
+            for (String analyte : CampaignFixture.ZERO_ANALYTES) {
+                long rows = linesStartingWith(t, "Zero " + analyte + " ");
+                if (analyte.equals("NH3")) {
+                    assertEquals(1, linesStartingWith(t, "Zero NH3 FAIL 12, 2 fail worst "), t);
+                    for (int n : CampaignFixture.FAILED_NH3_ZEROS) {
+                        assertEquals(1, linesStartingWith(t, "Zero NH3 FAIL no. " + n + " of 12 "), "failed " + n);
+                    }
+                    assertEquals(1 + CampaignFixture.FAILED_NH3_ZEROS.size(), rows);
+                } else {
+                    assertEquals(1, linesStartingWith(t, "Zero " + analyte + " pass 12, all pass worst "), analyte);
+                    assertEquals(1, rows, "rows of Zero " + analyte);
+                }
+            }
+            assertEquals(1, linesStartingWith(t, "Noise level pass 12, all pass worst "));
+            assertEquals(1, linesStartingWith(t, "Span NH3 FAIL 1 -3.219 %"));
+            // the rule text once per zero check name, not once per reading
+            assertEquals(CampaignFixture.ZERO_ANALYTES.size(), t.split("Zero reading within", -1).length - 1);
+            // the worst CO zero is the largest, 0.35 ppm against ±1 ppm (fixture readings)
+            assertTrue(t.contains("Zero CO pass 12, all pass worst 0.35 ppm -1 .. 1 ppm Zero reading within ±1"), t);
+        }
+    }
+
+    @Test
+    void appendixAtTheEndListsEveryQaReading() throws IOException {
+        try (PDDocument doc = Loader.loadPDF(pdf)) {
+            String all = text(doc, 1, doc.getNumberOfPages());
+            int start = all.indexOf(QaTables.APPENDIX);
+            assertTrue(start > all.indexOf("Review and approval"), "appendix after the last section");
+            String appendix = all.substring(start);
+            Map<String, Integer> seen = new HashMap<>();
+            Map<String, Long> total = content.qa().stream().collect(Collectors.groupingBy(QaLine::check,
+                    Collectors.counting()));
+            for (QaLine q : content.qa()) {
+                int n = seen.merge(q.check(), 1, Integer::sum);
+                String row = q.check() + " " + n + " of " + total.get(q.check()) + " " + (q.passed() ? "pass" : "FAIL")
+                        + " " + q.measured() + " " + q.limits();
+                assertEquals(1, linesStartingWith(appendix, row), row);
+            }
+            assertEquals(96, content.qa().size());
+        }
+    }
+
+    @Test
+    void checksReadOnceAreNotRepeatedInAnAppendix() throws IOException {
+        ReportContent.Builder b = ReportContent.builder(CampaignFixture.campaign());
+        b.qa(QaLine.of(new CtsDriftCheck(5).evaluate(1.00, 0.88)));
+        b.qa(QaLine.of(new ZeroSpanCheck(1.0, 2.0).zero("CO", 0.4)));
+        try (PDDocument doc = Loader.loadPDF(new PdfReportWriter().write(b.build()))) {
+            String t = text(doc, 1, doc.getNumberOfPages());
+            // 0.06/0.94 = 6.383 % > 5 % fails, 0.4 ppm within ±1 ppm passes (hand-computed)
+            assertTrue(t.contains("2 readings of 2 checks: 1 passed, 1 failed. Failed: CTS drift."), t);
+            assertEquals(1, linesStartingWith(t, "CTS drift FAIL 1 6.383 % <= 5 %"), t);
+            assertEquals(1, linesStartingWith(t, "Zero CO pass 1 0.4 ppm -1 .. 1 ppm"), t);
+            assertFalse(t.contains("QA readings in full"));
+            assertFalse(t.contains("Appendix A"));
         }
     }
 
@@ -91,7 +167,7 @@ class PdfReportWriterTest {
     @Test
     void signaturesAndMissingApproval() throws IOException {
         try (PDDocument doc = Loader.loadPDF(pdf)) {
-            String t = text(doc, doc.getNumberOfPages() - 1, doc.getNumberOfPages());
+            String t = text(doc, 1, doc.getNumberOfPages());
             assertTrue(t.contains("Reviewed by Dr. Imogen Hartle"));
             assertTrue(t.contains("2026-03-10 09:12 UTC"));
             assertTrue(t.contains("Applies to this content yes"));
@@ -104,7 +180,7 @@ class PdfReportWriterTest {
         ReportContent c = CampaignFixture.unsigned().build().withSignature(new Signature("A. Checker",
                 CampaignFixture.START, SignatureMeaning.APPROVAL, CampaignFixture.sha256("an earlier draft")));
         try (PDDocument doc = Loader.loadPDF(new PdfReportWriter().write(c))) {
-            String t = text(doc, doc.getNumberOfPages() - 1, doc.getNumberOfPages());
+            String t = text(doc, 1, doc.getNumberOfPages());
             assertTrue(t.contains("NO: signed an earlier version"), t);
             assertTrue(t.contains("Not yet approved"));
             assertTrue(t.contains("Not yet reviewed"));
