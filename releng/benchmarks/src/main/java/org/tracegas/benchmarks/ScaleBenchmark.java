@@ -4,12 +4,10 @@ import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
 import java.lang.management.MemoryUsage;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
-import java.util.Set;
 import java.util.concurrent.TimeUnit;
 
 import org.openjdk.jmh.annotations.AuxCounters;
@@ -26,38 +24,18 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
-import org.tracegas.campaign.AnalysisVersions;
-import org.tracegas.campaign.BackgroundTimeline;
-import org.tracegas.campaign.SpectrumChain;
 import org.tracegas.campaign.StackProcessor;
-import org.tracegas.campaign.demo.DemoCampaignFiles;
-import org.tracegas.campaign.demo.DemoMethod;
-import org.tracegas.campaign.demo.DemoPhysics;
 import org.tracegas.campaign.demo.DemoScenario;
-import org.tracegas.importer.container.ContainerReader;
-import org.tracegas.importer.container.ContainerRecord;
-import org.tracegas.importer.container.SampleKind;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.ReferenceSpectrum;
-import org.tracegas.model.Role;
-import org.tracegas.preprocess.Background;
-import org.tracegas.preprocess.BackgroundRatio;
-import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.BatchOutcome;
 import org.tracegas.quantify.BatchQuantifier;
 import org.tracegas.quantify.CancellationFlag;
-import org.tracegas.quantify.PreparedMethod;
 import org.tracegas.quantify.ProgressListener;
 import org.tracegas.quantify.QuantificationMethod;
-import org.tracegas.quantify.Quantifier;
 import org.tracegas.quantify.ReportingUnit;
-import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
-import org.tracegas.store.WorkspaceStore;
-import org.tracegas.store.Workspaces;
 
 /**
  * Memory of a large batch: 100,000 of the demo's interferograms (its hour file read over and over) through the
@@ -79,14 +57,8 @@ public class ScaleBenchmark {
     @Param("100000")
     public int spectra;
 
-    private Path folder;
+    private DemoBatchFixture demo;
     private List<Path> files;
-    private SpectrumChain chain;
-    private Quantifier quantifier;
-    private WorkspaceStore store;
-    private Session analyst;
-    private String projectId;
-    private AnalysisVersions versions;
 
     /** Heap figures of the run, reported by JMH beside the time. */
     @State(Scope.Thread)
@@ -100,39 +72,8 @@ public class ScaleBenchmark {
 
     @Setup(Level.Trial)
     public void setUp() throws Exception {
-        folder = Files.createTempDirectory("tracegas-scale-bench");
-        Path raw = folder.resolve("raw");
-        DemoPhysics physics = DemoPhysics.fromInventedLineLists(folder.resolve("line-lists"));
-        DemoCampaignFiles.write(raw, physics, ProgressListener.NONE, new CancellationFlag());
-        Path hour = DemoCampaignFiles.stackFiles(raw).get(3);
-        files = new ArrayList<>(Collections.nCopies((spectra + 59) / 60, hour));
-        InterferogramTransform transform = new InterferogramTransform(DemoMethod.transform());
-        List<Background> backgrounds = new ArrayList<>();
-        try (ContainerReader reader = ContainerReader.open(DemoCampaignFiles.qaFile(raw))) {
-            while (reader.hasNext()) {
-                ContainerRecord r = reader.next();
-                if (r.header().kind() == SampleKind.BACKGROUND) {
-                    backgrounds.add(new Background(r.header().time().toString(), r.header().time(),
-                            transform.singleBeam(r.interferogram())));
-                }
-            }
-        }
-        chain = new SpectrumChain(transform, new BackgroundRatio(), new BackgroundTimeline(backgrounds));
-        ReferenceLibrary library = DemoMethod.library(physics, backgrounds.get(0).singleBeam().axis());
-        QuantificationMethod method = coN2o(library);
-        quantifier = new Quantifier(PreparedMethod.prepare(method, backgrounds.get(0).singleBeam().axis()),
-                library.contentHash(), "bench", false);
-        store = Workspaces.openH2(folder.resolve("db"));
-        Session admin = store.users().createFirstAdministrator("admin", "Admin", "bench-admin-1".toCharArray());
-        store.users().createUser(admin, "ana", "Analyst", Set.of(Role.ANALYST), "bench-ana-12".toCharArray());
-        analyst = store.users().logIn("ana", "bench-ana-12".toCharArray());
-        projectId = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "S-1",
-                "Scale").id();
-        VersionInfo met = store.versions().create(analyst, VersionKind.METHOD, method.name(), method.canonicalText(),
-                "bench");
-        VersionInfo lib = store.versions().create(analyst, VersionKind.LIBRARY, library.name(),
-                "sha=" + library.contentHash() + "\n", "bench");
-        versions = new AnalysisVersions(met.id(), lib.id());
+        demo = new DemoBatchFixture("tracegas-scale-bench", ScaleBenchmark::coN2o);
+        files = new ArrayList<>(Collections.nCopies((spectra + 59) / 60, demo.hour));
     }
 
     private static QuantificationMethod coN2o(ReferenceLibrary library) {
@@ -152,7 +93,7 @@ public class ScaleBenchmark {
 
     @TearDown(Level.Trial)
     public void tearDown() {
-        store.close();
+        demo.close();
     }
 
     @Benchmark
@@ -161,8 +102,8 @@ public class ScaleBenchmark {
         Thread t = new Thread(sampler, "heap sampler");
         t.setDaemon(true);
         t.start();
-        BatchOutcome outcome = new StackProcessor(store, analyst, projectId, chain,
-                BatchQuantifier.onAllCores(quantifier), versions)
+        BatchOutcome outcome = new StackProcessor(demo.store, demo.analyst, demo.projectId, demo.chain,
+                BatchQuantifier.onAllCores(demo.quantifier), demo.versions)
                 .run(files, spectra, ProgressListener.NONE, new CancellationFlag());
         sampler.stop();
         t.join();

@@ -1,0 +1,92 @@
+package org.tracegas.benchmarks;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+import java.util.function.Function;
+
+import org.tracegas.campaign.AnalysisVersions;
+import org.tracegas.campaign.BackgroundTimeline;
+import org.tracegas.campaign.SpectrumChain;
+import org.tracegas.campaign.demo.DemoCampaignFiles;
+import org.tracegas.campaign.demo.DemoMethod;
+import org.tracegas.campaign.demo.DemoPhysics;
+import org.tracegas.importer.container.ContainerReader;
+import org.tracegas.importer.container.ContainerRecord;
+import org.tracegas.importer.container.SampleKind;
+import org.tracegas.library.ReferenceLibrary;
+import org.tracegas.model.Role;
+import org.tracegas.preprocess.Background;
+import org.tracegas.preprocess.BackgroundRatio;
+import org.tracegas.preprocess.InterferogramTransform;
+import org.tracegas.quantify.CancellationFlag;
+import org.tracegas.quantify.PreparedMethod;
+import org.tracegas.quantify.ProgressListener;
+import org.tracegas.quantify.QuantificationMethod;
+import org.tracegas.quantify.Quantifier;
+import org.tracegas.store.Session;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.VersionKind;
+import org.tracegas.store.WorkspaceStore;
+import org.tracegas.store.Workspaces;
+
+/**
+ * The batch benchmarks' common ground: the demo day's raw files in a temporary folder, the demo's processing
+ * chain, a quantifier for a method over the demo library, and an H2 workspace with an analyst, a project and
+ * the method and library versions the results name.
+ */
+final class DemoBatchFixture implements AutoCloseable {
+
+    final Path folder;
+    /** One hour (60) of the demo's stack-gas interferograms. */
+    final Path hour;
+    final SpectrumChain chain;
+    final Quantifier quantifier;
+    final WorkspaceStore store;
+    final Session analyst;
+    final String projectId;
+    final AnalysisVersions versions;
+
+    /** @param method the method to fit with, made from the demo library */
+    DemoBatchFixture(String prefix, Function<ReferenceLibrary, QuantificationMethod> method) throws Exception {
+        folder = Files.createTempDirectory(prefix);
+        Path raw = folder.resolve("raw");
+        DemoPhysics physics = DemoPhysics.fromInventedLineLists(folder.resolve("line-lists"));
+        DemoCampaignFiles.write(raw, physics, ProgressListener.NONE, new CancellationFlag());
+        hour = DemoCampaignFiles.stackFiles(raw).get(3);
+        InterferogramTransform transform = new InterferogramTransform(DemoMethod.transform());
+        List<Background> backgrounds = new ArrayList<>();
+        try (ContainerReader reader = ContainerReader.open(DemoCampaignFiles.qaFile(raw))) {
+            while (reader.hasNext()) {
+                ContainerRecord r = reader.next();
+                if (r.header().kind() == SampleKind.BACKGROUND) {
+                    backgrounds.add(new Background(r.header().time().toString(), r.header().time(),
+                            transform.singleBeam(r.interferogram())));
+                }
+            }
+        }
+        chain = new SpectrumChain(transform, new BackgroundRatio(), new BackgroundTimeline(backgrounds));
+        ReferenceLibrary library = DemoMethod.library(physics, backgrounds.get(0).singleBeam().axis());
+        QuantificationMethod fitted = method.apply(library);
+        quantifier = new Quantifier(PreparedMethod.prepare(fitted, backgrounds.get(0).singleBeam().axis()),
+                library.contentHash(), "bench", false);
+        store = Workspaces.openH2(folder.resolve("db"));
+        Session admin = store.users().createFirstAdministrator("admin", "Admin", "bench-admin-1".toCharArray());
+        store.users().createUser(admin, "ana", "Analyst", Set.of(Role.ANALYST), "bench-ana-12".toCharArray());
+        analyst = store.users().logIn("ana", "bench-ana-12".toCharArray());
+        projectId = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "B-1",
+                "Benchmark").id();
+        VersionInfo met = store.versions().create(analyst, VersionKind.METHOD, fitted.name(), fitted.canonicalText(),
+                "bench");
+        VersionInfo lib = store.versions().create(analyst, VersionKind.LIBRARY, library.name(),
+                "sha=" + library.contentHash() + "\n", "bench");
+        versions = new AnalysisVersions(met.id(), lib.id());
+    }
+
+    @Override
+    public void close() {
+        store.close();
+    }
+}
