@@ -10,6 +10,8 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 import java.util.Optional;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
@@ -168,6 +170,106 @@ abstract class WorkUnitServiceContract {
         assertEquals(created, units.batch(f.reader, created.id()), "a reader of the project sees the batch");
         assertEquals("hour files of 17 March", units.batch(f.analyst, created.id()).description());
         assertThrows(NoSuchObjectException.class, () -> units.batch(f.analyst, "no-such-batch"));
+    }
+
+    private WorkBatchInfo quantification(VersionInfo method, String... files) {
+        return quantification(method.id(), files);
+    }
+
+    private WorkBatchInfo quantification(String methodVersionId, String... files) {
+        return units.createBatch(f.analyst, f.project.id(), methodVersionId, "quantification", List.of(files));
+    }
+
+    @Test
+    void secondBatchOfAMethodVersionIsRefusedUntilTheFirstIsFinished() throws Exception {
+        WorkBatchInfo first = quantification(f.method, "/data/a.tgc", "/data/b.tgc");
+        assertEquals(f.method.id(), first.methodVersionId());
+        assertEquals(first, units.batch(f.reader, first.id()));
+        assertEquals(Optional.of(first), units.unfinishedBatch(f.reader, f.project.id(), f.method.id()));
+
+        // other files are refused too: the project holds one set of results per method version
+        UnfinishedBatchException refused = assertThrows(UnfinishedBatchException.class,
+                () -> quantification(f.method, "/data/c.tgc"));
+        assertEquals(first.id(), refused.batchId());
+        assertTrue(refused.getMessage().contains("project WU-1 has the unfinished work batch " + first.id())
+                && refused.getMessage().contains("2 of 2 units not done"), refused.getMessage());
+        assertEquals(1, f.count("SELECT COUNT(*) FROM work_batch"), "the refused batch wrote nothing");
+
+        // another method version, and work not tied to a method version, go on beside it
+        VersionInfo otherMethod = f.store.versions().create(f.analyst, VersionKind.METHOD, "NO in flue gas",
+                "analyte=NO\n", "first");
+        WorkBatchInfo beside = quantification(otherMethod, "/data/a.tgc");
+        batch(1);
+
+        WorkUnitLease a = units.claim(f.analyst, first.id(), "runner-a", LONG).orElseThrow();
+        units.complete(f.analyst, a, blockOf(0));
+        WorkUnitLease b = units.claim(f.analyst, first.id(), "runner-a", LONG).orElseThrow();
+        refused = assertThrows(UnfinishedBatchException.class, () -> quantification(f.method, "/data/a.tgc"),
+                "a claimed unit is unfinished");
+        assertTrue(refused.getMessage().contains("1 of 2 units not done"), refused.getMessage());
+        units.release(f.analyst, b);
+        assertThrows(UnfinishedBatchException.class, () -> quantification(f.method, "/data/a.tgc"),
+                "a released unit is open again");
+        units.complete(f.analyst, units.claim(f.analyst, first.id(), "runner-a", LONG).orElseThrow(), blockOf(1));
+
+        assertEquals(Optional.empty(), units.unfinishedBatch(f.analyst, f.project.id(), f.method.id()));
+        assertEquals(Optional.of(beside), units.unfinishedBatch(f.analyst, f.project.id(), otherMethod.id()));
+        WorkBatchInfo next = quantification(f.method, "/data/a.tgc");
+        assertEquals(Optional.of(next), units.unfinishedBatch(f.analyst, f.project.id(), f.method.id()));
+        assertEquals(4, f.count("SELECT COUNT(*) FROM work_batch"));
+        assertTrue(f.store.verifyAuditTrail().intact());
+    }
+
+    @Test
+    void batchOfAnUnknownOrNonMethodVersionIsRefused() throws Exception {
+        assertThrows(NoSuchObjectException.class, () -> quantification(f.library, "/data/a.tgc"),
+                "a LIBRARY version does not quantify");
+        assertThrows(NoSuchObjectException.class, () -> quantification("no-such-version", "/data/a.tgc"));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> units.createBatch(f.analyst, f.project.id(), " ", "x", List.of("/a")));
+        assertTrue(e.getMessage().startsWith("methodVersionId"), e.getMessage());
+        assertThrows(AccessDeniedException.class, () -> units.createBatch(f.reader, f.project.id(), f.method.id(),
+                "x", List.of("/a")));
+        assertEquals(0, f.count("SELECT COUNT(*) FROM work_batch"));
+    }
+
+    @Test
+    void ofRunnersCreatingBatchesOfOneMethodVersionAtOnceExactlyOneSucceeds() throws Exception {
+        int runners = 8;
+        for (int round = 0; round < 3; round++) {
+            VersionInfo method = f.store.versions().create(f.analyst, VersionKind.METHOD, "method " + round,
+                    "analyte=CO\n", "first");
+            CountDownLatch start = new CountDownLatch(1);
+            ExecutorService pool = Executors.newFixedThreadPool(runners);
+            List<Future<WorkBatchInfo>> tries = new ArrayList<>();
+            try {
+                for (int r = 0; r < runners; r++) {
+                    String file = "/data/runner-" + r + ".tgc";
+                    tries.add(pool.submit(() -> {
+                        start.await();
+                        return quantification(method, file);
+                    }));
+                }
+                start.countDown();
+                List<WorkBatchInfo> created = new ArrayList<>();
+                List<String> named = new ArrayList<>();
+                for (Future<WorkBatchInfo> t : tries) {
+                    try {
+                        created.add(t.get());
+                    } catch (ExecutionException e) {
+                        named.add(((UnfinishedBatchException) e.getCause()).batchId());
+                    }
+                }
+                assertEquals(1, created.size(), "round " + round + ": batches created " + created);
+                assertEquals(Collections.nCopies(runners - 1, created.get(0).id()), named);
+                assertEquals(Optional.of(created.get(0)),
+                        units.unfinishedBatch(f.analyst, f.project.id(), method.id()));
+            } finally {
+                pool.shutdownNow();
+            }
+        }
+        assertEquals(3, f.count("SELECT COUNT(*) FROM work_batch"));
+        assertTrue(f.store.verifyAuditTrail().intact());
     }
 
     @Test

@@ -21,7 +21,8 @@ import java.util.Optional;
  * threads of that process; runners in separate processes share a PostgreSQL workspace.
  * <p>
  * Every change (batch creation, claim, renewal, release, completion) writes an audit record in its own
- * transaction. All operations need write access to the batch's project, {@link #progress} read access.
+ * transaction. Changes need write access to the batch's project, reads ({@link #batch}, {@link #progress},
+ * {@link #unfinishedBatch}, {@link #measurementsOf}) read access.
  */
 public interface WorkUnitService {
 
@@ -29,12 +30,38 @@ public interface WorkUnitService {
     int MAX_TEXT_LENGTH = 4000;
 
     /**
-     * Creates a batch with one unit per payload, numbered from 0 in the given order.
+     * Creates a batch of work not tied to a method version, with one unit per payload, numbered from 0 in the
+     * given order. Such batches do not exclude one another.
      *
      * @param payloads what each unit processes (e.g. file paths), at least one, none blank
      * @throws IllegalArgumentException naming the blank or too long {@code payloads[i]} or description
      */
     WorkBatchInfo createBatch(Session actor, String projectId, String description, List<String> payloads);
+
+    /**
+     * Creates a batch that quantifies the payloads with a METHOD version, as {@link #createBatch(Session, String,
+     * String, List)} does, unless the project has an unfinished batch of the same method version.
+     * <p>
+     * A project holds one set of results per method version, so a second batch of that version would store the
+     * same samples again whatever its files (and file names are no reliable identity: one file may be given
+     * under two paths). The check and the creation are one transaction holding the project row's lock, so of two
+     * runners creating such batches at once exactly one succeeds.
+     *
+     * @param methodVersionId an existing METHOD version
+     * @throws UnfinishedBatchException  naming the unfinished batch of the project and method version
+     * @throws NoSuchObjectException     if there is no such METHOD version
+     * @throws IllegalArgumentException  naming the blank or too long {@code payloads[i]} or description
+     */
+    WorkBatchInfo createBatch(Session actor, String projectId, String methodVersionId, String description,
+            List<String> payloads);
+
+    /**
+     * The oldest batch of the project and METHOD version that still has open or claimed units. Needs read access
+     * to the project.
+     *
+     * @return the batch, or empty when every such batch is finished or there is none
+     */
+    Optional<WorkBatchInfo> unfinishedBatch(Session actor, String projectId, String methodVersionId);
 
     /**
      * Claims the next open unit of the batch, or one whose lease has expired, for {@code lease} from now.

@@ -7,16 +7,29 @@ enum Backend {
      * sort, which gathers the whole result before the first row; the hint keeps the read a streamed
      * walk along (project_id, seq).
      */
-    H2("FROM spectral_data USE INDEX (spectral_data_project)", false),
-    /** PostgreSQL; with a fetch size inside a transaction the driver reads through a cursor. */
-    POSTGRESQL("FROM spectral_data", true);
+    H2("FROM spectral_data USE INDEX (spectral_data_project)", false, "FOR UPDATE"),
+    /**
+     * PostgreSQL; with a fetch size inside a transaction the driver reads through a cursor. FOR NO KEY UPDATE
+     * does not conflict with the key-share locks that inserts referencing the project take.
+     */
+    POSTGRESQL("FROM spectral_data", true, "FOR NO KEY UPDATE");
 
     private final String spectraSource;
     private final boolean skipLockedWithLimit;
+    private final String rowLockClause;
 
-    Backend(String spectraSource, boolean skipLockedWithLimit) {
+    Backend(String spectraSource, boolean skipLockedWithLimit, String rowLockClause) {
         this.spectraSource = spectraSource;
         this.skipLockedWithLimit = skipLockedWithLimit;
+        this.rowLockClause = rowLockClause;
+    }
+
+    /**
+     * Query that locks the project row (parameter 1) until commit without keeping other transactions from
+     * storing rows that reference the project: it serialises checks that span several rows of one project.
+     */
+    String lockProject() {
+        return "SELECT id FROM project WHERE id = ? " + rowLockClause;
     }
 
     /**

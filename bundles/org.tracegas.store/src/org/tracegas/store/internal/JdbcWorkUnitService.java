@@ -25,12 +25,15 @@ import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.Session;
 import org.tracegas.store.StoredMeasurement;
+import org.tracegas.store.UnfinishedBatchException;
 import org.tracegas.store.WorkBatchInfo;
 import org.tracegas.store.WorkUnitLease;
 import org.tracegas.store.WorkUnitService;
 
 final class JdbcWorkUnitService implements WorkUnitService {
 
+    private static final String BATCH_COLUMNS = "b.id, b.project_id, b.method_version_id, b.description,"
+            + " b.unit_count, b.created_by, b.created_at";
     private static final String UNIT_COLUMNS = "seq, payload, state, claimed_by, lease_until, attempt";
     private static final String CLAIMABLE = "batch_id = ? AND (state = 'OPEN' OR (state = 'CLAIMED' AND lease_until < ?))";
 
@@ -62,6 +65,20 @@ final class JdbcWorkUnitService implements WorkUnitService {
 
     @Override
     public WorkBatchInfo createBatch(Session actor, String projectId, String description, List<String> payloads) {
+        return create(actor, projectId, null, description, payloads);
+    }
+
+    @Override
+    public WorkBatchInfo createBatch(Session actor, String projectId, String methodVersionId, String description,
+            List<String> payloads) {
+        if (methodVersionId == null || methodVersionId.isBlank()) {
+            throw new IllegalArgumentException("methodVersionId must name a METHOD version, was " + methodVersionId);
+        }
+        return create(actor, projectId, methodVersionId, description, payloads);
+    }
+
+    private WorkBatchInfo create(Session actor, String projectId, String methodVersionId, String description,
+            List<String> payloads) {
         if (description == null || description.length() > MAX_TEXT_LENGTH) {
             throw new IllegalArgumentException("description must be given and at most " + MAX_TEXT_LENGTH
                     + " characters long");
@@ -79,11 +96,21 @@ final class JdbcWorkUnitService implements WorkUnitService {
         return transactions.run("creating a batch of " + payloads.size() + " work units in project " + projectId,
                 tx -> {
                     Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
-                    WorkBatchInfo batch = new WorkBatchInfo(UUID.randomUUID().toString(), projectId, description,
-                            payloads.size(), actor.userId(), Instant.now().truncatedTo(ChronoUnit.MICROS));
-                    tx.update("INSERT INTO work_batch (id, project_id, description, unit_count, created_by,"
-                            + " created_at) VALUES (?, ?, ?, ?, ?, ?)", batch.id(), projectId, description,
-                            batch.unitCount(), actor.userId(), batch.createdAt());
+                    if (methodVersionId != null) {
+                        // held until commit: a second runner's check waits and then sees this batch
+                        tx.queryOne(backend.lockProject(), rs -> rs.getString(1), projectId);
+                        requireMethodVersion(tx, methodVersionId);
+                        Optional<WorkBatchInfo> other = findUnfinished(tx, projectId, methodVersionId);
+                        if (other.isPresent()) {
+                            throw refusal(tx, other.get());
+                        }
+                    }
+                    WorkBatchInfo batch = new WorkBatchInfo(UUID.randomUUID().toString(), projectId, methodVersionId,
+                            description, payloads.size(), actor.userId(),
+                            Instant.now().truncatedTo(ChronoUnit.MICROS));
+                    tx.update("INSERT INTO work_batch (id, project_id, method_version_id, description, unit_count,"
+                            + " created_by, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)", batch.id(), projectId,
+                            methodVersionId, description, batch.unitCount(), actor.userId(), batch.createdAt());
                     try (PreparedStatement ps = tx.connection().prepareStatement("INSERT INTO work_unit (batch_id,"
                             + " seq, payload, state, attempt) VALUES (?, ?, ?, 'OPEN', 0)")) {
                         for (int i = 0; i < payloads.size(); i++) {
@@ -94,6 +121,7 @@ final class JdbcWorkUnitService implements WorkUnitService {
                     }
                     Map<String, Object> fields = new LinkedHashMap<>();
                     fields.put("project", projectId);
+                    fields.put("methodVersion", methodVersionId);
                     fields.put("description", description);
                     fields.put("units", payloads.size());
                     // SHA-256 of the payloads in unit order, each followed by a line feed
@@ -255,11 +283,51 @@ final class JdbcWorkUnitService implements WorkUnitService {
     public WorkBatchInfo batch(Session actor, String batchId) {
         return transactions.run("reading work batch " + batchId, tx -> {
             requireBatchAccess(tx, actor, batchId, AccessLevel.READ);
-            return tx.queryOne("SELECT id, project_id, description, unit_count, created_by, created_at"
-                    + " FROM work_batch WHERE id = ?", rs -> new WorkBatchInfo(rs.getString("id"),
-                            rs.getString("project_id"), rs.getString("description"), rs.getInt("unit_count"),
-                            rs.getString("created_by"), Tx.instant(rs, "created_at")), batchId).orElseThrow();
+            return tx.queryOne("SELECT " + BATCH_COLUMNS + " FROM work_batch b WHERE b.id = ?",
+                    JdbcWorkUnitService::readBatch, batchId).orElseThrow();
         });
+    }
+
+    @Override
+    public Optional<WorkBatchInfo> unfinishedBatch(Session actor, String projectId, String methodVersionId) {
+        return transactions.run("looking for an unfinished work batch of project " + projectId
+                + " and method version " + methodVersionId, tx -> {
+                    Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+                    return findUnfinished(tx, projectId, methodVersionId);
+                });
+    }
+
+    private static Optional<WorkBatchInfo> findUnfinished(Tx tx, String projectId, String methodVersionId)
+            throws SQLException {
+        return tx.queryOne("SELECT " + BATCH_COLUMNS + " FROM work_batch b WHERE b.project_id = ?"
+                + " AND b.method_version_id = ? AND EXISTS (SELECT 1 FROM work_unit u WHERE u.batch_id = b.id"
+                + " AND u.state <> 'DONE') ORDER BY b.created_at, b.id LIMIT 1", JdbcWorkUnitService::readBatch,
+                projectId, methodVersionId);
+    }
+
+    private static UnfinishedBatchException refusal(Tx tx, WorkBatchInfo other) throws SQLException {
+        String code = tx.queryOne("SELECT code FROM project WHERE id = ?", rs -> rs.getString(1), other.projectId())
+                .orElseThrow();
+        long notDone = tx.queryOne("SELECT COUNT(*) FROM work_unit WHERE batch_id = ? AND state <> 'DONE'",
+                rs -> rs.getLong(1), other.id()).orElseThrow();
+        return new UnfinishedBatchException(other.id(), "project " + code + " has the unfinished work batch "
+                + other.id() + " of method version " + other.methodVersionId() + " (" + notDone + " of "
+                + other.unitCount() + " units not done, recorded " + other.createdAt() + "): another batch of that"
+                + " version would store the same samples again; work batch " + other.id() + " to the end instead;"
+                + " nothing was written");
+    }
+
+    private static void requireMethodVersion(Tx tx, String methodVersionId) throws SQLException {
+        if (tx.queryOne("SELECT v.id FROM content_version v JOIN versioned_item i ON i.id = v.item_id"
+                + " WHERE v.id = ? AND i.kind = 'METHOD'", rs -> rs.getString(1), methodVersionId).isEmpty()) {
+            throw new NoSuchObjectException("METHOD version", methodVersionId);
+        }
+    }
+
+    private static WorkBatchInfo readBatch(ResultSet rs) throws SQLException {
+        return new WorkBatchInfo(rs.getString("id"), rs.getString("project_id"), rs.getString("method_version_id"),
+                rs.getString("description"), rs.getInt("unit_count"), rs.getString("created_by"),
+                Tx.instant(rs, "created_at"));
     }
 
     @Override

@@ -36,7 +36,7 @@ final class Migrations {
 
     /** The migrations, oldest first; add new files here. */
     static final List<String> SCRIPTS = List.of("V1__workspace_schema.sql", "V2__qa_checks.sql",
-            "V3__work_units.sql");
+            "V3__work_units.sql", "V4__work_batch_method_version.sql");
 
     private Migrations() {
     }
