@@ -28,7 +28,8 @@ import org.tracegas.store.Workspaces;
 
 /**
  * batch-split, batch-work and batch-status on a real H2 workspace: a batch worked by one runner stores what
- * quantify stores for the same files, and bad input to batch-split records no batch.
+ * quantify stores for the same files, bad input to batch-split records no batch, and an unfinished batch of a
+ * project and method version refuses a second split and quantify.
  */
 class BatchCommandsTest {
 
@@ -45,7 +46,7 @@ class BatchCommandsTest {
     @BeforeAll
     static void workspaceAndFiles() throws Exception {
         ws = folder.resolve("ws");
-        campaign = new BatchCampaign(folder, List.of("--workspace", ws.toString()), List.of("Q", "B", "X"), FILES,
+        campaign = new BatchCampaign(folder, List.of("--workspace", ws.toString()), List.of("Q", "B", "X", "S", "D"), FILES,
                 SAMPLES_PER_FILE);
     }
 
@@ -122,8 +123,29 @@ class BatchCommandsTest {
     }
 
     @Test
+    void unfinishedBatchRefusesASecondSplitAndQuantifyUntilItIsWorked() throws Exception {
+        String first = campaign.ok("batch-split", campaign.quantification("D", campaign.stackFiles)).strip();
+        long recorded = batchesRecorded();
+        expectUnfinished("batch-split", campaign.stackFiles, first);
+        expectUnfinished("batch-split", campaign.stackFiles.subList(0, 1), first);
+        expectUnfinished("quantify", campaign.stackFiles, first);
+        assertEquals(recorded, batchesRecorded(), "no second batch recorded");
+        try (WorkspaceStore store = Workspaces.openH2(ws.resolve("db"))) {
+            Session ana = store.users().logIn("ana", BatchCampaign.PASSWORD.toCharArray());
+            assertEquals(Map.of(), resultsByTimeAndCompound(store, ana, "D"), "quantify stored nothing");
+        }
+
+        campaign.ok("batch-work", "--as", "ana", "--batch", first, "--lease", "30", "--idle-poll", "0.2");
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.BAD_INPUT, campaign.run(new ByteArrayOutputStream(), err, "batch-split",
+                campaign.quantification("D", campaign.stackFiles)), "the finished batch stored the results");
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("holds results of method version"), err::toString);
+        assertEquals(recorded, batchesRecorded());
+    }
+
+    @Test
     void stoppedRunnerEndsCancelledAndLeavesItsUnitsOpen() {
-        String batchId = campaign.ok("batch-split", campaign.quantification("X", campaign.stackFiles)).strip();
+        String batchId = campaign.ok("batch-split", campaign.quantification("S", campaign.stackFiles)).strip();
         CancellationFlag stopped = new CancellationFlag();
         stopped.cancel();
         ByteArrayOutputStream err = new ByteArrayOutputStream();
@@ -170,6 +192,19 @@ class BatchCommandsTest {
                 () -> files + ": " + err);
         assertTrue(err.toString(StandardCharsets.UTF_8).contains(named), () -> named + " in " + err);
         assertEquals("", out.toString(StandardCharsets.UTF_8), "no batch id printed");
+    }
+
+    /** A quantification of project D that must be refused, naming its unfinished batch. */
+    private void expectUnfinished(String command, List<Path> files, String batchId) {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.BAD_INPUT, campaign.run(out, err, command, campaign.quantification("D", files)),
+                () -> command + ": " + err);
+        String message = err.toString(StandardCharsets.UTF_8);
+        assertTrue(message.contains("project D has the unfinished work batch " + batchId + " of method version 1 ("
+                + FILES + " open and 0 claimed of " + FILES + " units); finish it with batch-work --batch " + batchId),
+                message);
+        assertEquals("", out.toString(StandardCharsets.UTF_8), command + " printed nothing on standard output");
     }
 
     /** Batches ever recorded in the workspace, as the audit trail has them (read as the administrator). */

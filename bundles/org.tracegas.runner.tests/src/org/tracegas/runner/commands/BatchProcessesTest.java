@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.ByteArrayOutputStream;
 import java.io.File;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -20,6 +21,10 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.UUID;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Collectors;
 import java.util.stream.IntStream;
@@ -46,6 +51,7 @@ import org.tracegas.store.Workspaces;
  * tracegas.test.pg.url, .user and .password; a fresh schema per test). One is killed with SIGKILL while it holds
  * a unit; the others finish the batch and take that unit once its lease has ended. Every unit is done exactly
  * once, every sample of every file is stored once with one result per analyte, and the audit chain verifies.
+ * Of runners splitting the same quantification at once, one records the batch and the others are refused.
  */
 class BatchProcessesTest {
 
@@ -146,6 +152,52 @@ class BatchProcessesTest {
             resultsPerMeasurement.forEach((m, n) -> assertEquals(COMPOUNDS, n, "results of measurement at "
                     + times.get(m)));
             assertTrue(store.verifyAuditTrail().intact(), store.verifyAuditTrail().findings().toString());
+        }
+    }
+
+    @Test
+    void ofRunnersSplittingAtOnceOneRecordsTheBatchAndTheOthersNameIt() throws Exception {
+        List<String> server = List.of("--server", schemaUrl, "--user", USER, "--password", PASSWORD);
+        BatchCampaign campaign = new BatchCampaign(folder, server, List.of("R"), 2, 1);
+        // each runner its own connections, as separate processes would have. Their starts are 100 ms apart:
+        // opening a PostgreSQL workspace at the very same moment can deadlock on installing the audit triggers,
+        // while reading and checking the files still overlaps
+        int runners = 4;
+        CountDownLatch start = new CountDownLatch(1);
+        ExecutorService pool = Executors.newFixedThreadPool(runners);
+        List<Future<String[]>> splits = new ArrayList<>();
+        try {
+            for (int r = 0; r < runners; r++) {
+                long delay = 100L * r;
+                splits.add(pool.submit(() -> {
+                    start.await();
+                    Thread.sleep(delay);
+                    ByteArrayOutputStream out = new ByteArrayOutputStream();
+                    ByteArrayOutputStream err = new ByteArrayOutputStream();
+                    int code = campaign.run(out, err, "batch-split", campaign.quantification("R",
+                            campaign.stackFiles));
+                    return new String[] {Integer.toString(code), out.toString(StandardCharsets.UTF_8).strip(),
+                            err.toString(StandardCharsets.UTF_8)};
+                }));
+            }
+            start.countDown();
+            List<String> recorded = new ArrayList<>();
+            List<String> refusals = new ArrayList<>();
+            for (Future<String[]> f : splits) {
+                String[] r = f.get();
+                if (r[0].equals(Integer.toString(ExitCode.OK))) {
+                    recorded.add(r[1]);
+                } else {
+                    assertEquals(Integer.toString(ExitCode.BAD_INPUT), r[0], r[2]);
+                    refusals.add(r[2]);
+                }
+            }
+            assertEquals(1, recorded.size(), () -> "batches recorded: " + recorded + ", refusals: " + refusals);
+            for (String refusal : refusals) {
+                assertTrue(refusal.contains("unfinished work batch " + recorded.get(0)), refusal);
+            }
+        } finally {
+            pool.shutdownNow();
         }
     }
 

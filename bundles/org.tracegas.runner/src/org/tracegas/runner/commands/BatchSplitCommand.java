@@ -9,6 +9,7 @@ import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
+import org.tracegas.store.UnfinishedBatchException;
 import org.tracegas.store.WorkBatchInfo;
 import org.tracegas.store.WorkUnitService;
 import org.tracegas.store.WorkspaceStore;
@@ -37,9 +38,12 @@ public final class BatchSplitCommand implements Command {
                   Checks everything quantify checks (every file read once, the method version exists, the
                   backgrounds files hold backgrounds, no sample file twice) and then records a batch: one work unit
                   per --file, the project, method version and background files in the batch's description.
+                  A project has at most one unfinished batch per method version, whatever its files: a second one
+                  would store the same samples again. Finish the first with batch-work.
                   Prints the batch id alone on standard output; give it to batch-work and batch-status.
-                exit codes: 0 recorded, 2 wrong arguments, 3 bad input file (file, record and field named) or the
-                  project holds this version's results already; nothing is recorded then, 5 failure""";
+                exit codes: 0 recorded, 2 wrong arguments, 3 bad input file (file, record and field named), the
+                  project holds this version's results already or has an unfinished batch of it (named); nothing
+                  is recorded then, 5 failure""";
     }
 
     @Override
@@ -52,7 +56,7 @@ public final class BatchSplitCommand implements Command {
             QuantifyArguments.Checked checked;
             String description;
             try {
-                checked = arguments.check(store, project,
+                checked = arguments.check(store, actor, project,
                         new ProjectQuantification(store, actor, project.id(), StoredMethods.SOFTWARE));
                 description = new BatchDescription(project.id(), checked.found().version().id(),
                         arguments.backgroundFiles()).text();
@@ -61,8 +65,15 @@ public final class BatchSplitCommand implements Command {
                 context.err().println("tracegas batch-split: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
-            WorkBatchInfo batch = store.workUnits().createBatch(actor, project.id(), description,
-                    arguments.files().stream().map(Path::toString).toList());
+            WorkBatchInfo batch;
+            try {
+                batch = store.workUnits().createBatch(actor, project.id(), checked.found().version().id(),
+                        description, arguments.files().stream().map(Path::toString).toList());
+            } catch (UnfinishedBatchException e) {
+                // another runner recorded its batch between the check and now
+                context.err().println("tracegas batch-split: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
             context.out().println(batch.id());
             context.err().printf("Recorded batch %s: %d work units with %d samples of project %s, method '%s' "
                     + "version %d%n", batch.id(), batch.unitCount(), checked.inputs().samples(), project.code(),

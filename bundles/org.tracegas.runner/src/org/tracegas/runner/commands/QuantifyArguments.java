@@ -3,11 +3,15 @@ package org.tracegas.runner.commands;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 import org.tracegas.campaign.ProjectQuantification;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.runner.UsageException;
+import org.tracegas.store.BatchProgress;
 import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.WorkBatchInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -31,17 +35,28 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
     /**
      * Finds the method version and reads every input file once, before anything is stored or recorded.
      *
-     * @throws BadInputException naming the file, record and field at fault, or when the project holds this
-     *                           version's results already (processing again would repeat them)
+     * @throws BadInputException naming the file, record and field at fault, naming the unfinished batch of this
+     *                           project and version (working it stores these results), or when the project holds
+     *                           this version's results already (processing again would repeat them)
      * @throws UsageException    if the method or its version does not exist
      */
-    Checked check(WorkspaceStore store, ProjectInfo project, ProjectQuantification job)
+    Checked check(WorkspaceStore store, Session actor, ProjectInfo project, ProjectQuantification job)
             throws BadInputException, UsageException {
         StoredMethods.Found found;
         try {
             found = StoredMethods.find(store, options);
         } catch (FileFormatException e) {
             throw new BadInputException(e.getMessage(), e);
+        }
+        Optional<WorkBatchInfo> unfinished = store.workUnits().unfinishedBatch(actor, project.id(),
+                found.version().id());
+        if (unfinished.isPresent()) {
+            String id = unfinished.get().id();
+            BatchProgress progress = store.workUnits().progress(actor, id);
+            throw new BadInputException("project " + project.code() + " has the unfinished work batch " + id
+                    + " of method version " + found.version().number() + " (" + progress.open() + " open and "
+                    + progress.claimed() + " claimed of " + progress.total() + " units); finish it with batch-work"
+                    + " --batch " + id + "; nothing done");
         }
         if (job.hasResults(found.version().id())) {
             throw new BadInputException("project " + project.code() + " holds results of method version "

@@ -42,8 +42,8 @@ public final class QuantifyCommand implements Command {
                   Every file is read once before anything is stored; each sample is stored with its absorbance
                   and its results, which point at the method and library versions.
                 exit codes: 0 done, 2 wrong arguments, 3 bad input file (file, record and field named; nothing
-                  stored) or the project holds this version's results already, 4 cancelled (samples stored so
-                  far stay), 5 failure""";
+                  stored), the project holds this version's results already or has an unfinished batch-split
+                  batch of it (named), 4 cancelled (samples stored so far stay), 5 failure""";
     }
 
     @Override
@@ -56,7 +56,7 @@ public final class QuantifyCommand implements Command {
             ProjectQuantification job = new ProjectQuantification(store, actor, project.id(), StoredMethods.SOFTWARE);
             QuantifyArguments.Checked checked;
             try {
-                checked = arguments.check(store, project, job);
+                checked = arguments.check(store, actor, project, job);
             } catch (BadInputException e) {
                 context.err().println("tracegas quantify: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
