@@ -15,6 +15,9 @@ import org.tracegas.audit.internal.H2TriggerClasses;
  */
 public final class AuditSchema {
 
+    /** Key of the PostgreSQL advisory lock that serializes concurrent installs (any fixed number). */
+    private static final long INSTALL_LOCK = 0x7472616365676173L;
+
     private AuditSchema() {
     }
 
@@ -32,6 +35,10 @@ public final class AuditSchema {
         boolean autoCommit = c.getAutoCommit();
         c.setAutoCommit(false);
         try (Statement s = c.createStatement()) {
+            if (dialect == Dialect.POSTGRESQL) {
+                // runners opening the workspace at the same moment would otherwise deadlock on the trigger DDL
+                s.execute("SELECT pg_advisory_xact_lock(" + INSTALL_LOCK + ")");
+            }
             for (String sql : dialect.ddl()) {
                 s.execute(sql);
             }
