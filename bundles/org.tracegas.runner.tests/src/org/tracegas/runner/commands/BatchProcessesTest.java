@@ -92,6 +92,11 @@ class BatchProcessesTest {
 
         List<Process> runners = new ArrayList<>();
         for (int r = 0; r < RUNNERS; r++) {
+            if (r == 1) {
+                // the first runner holds a unit before the others start, so that they cannot take every unit
+                // while its JVM is still starting on a busy machine
+                awaitClaimWithUnitsLeft(runners.get(0), "%:" + runners.get(0).pid());
+            }
             List<String> command = new ArrayList<>(List.of(Path.of(System.getProperty("java.home"), "bin", "java")
                     .toString(), "-cp", childClassPath(), BatchRunnerProcess.class.getName(), "batch-work"));
             command.addAll(server);
