@@ -6,21 +6,15 @@ package org.tracegas.store;
  * @param open    units no runner has claimed (or that were released)
  * @param claimed units held by a runner
  * @param done    units completed with their results
- * @param failed  units whose payload could not be processed; they are not claimed again
  */
-public record BatchProgress(int open, int claimed, int done, int failed) {
+public record BatchProgress(int open, int claimed, int done) {
 
     public int total() {
-        return open + claimed + done + failed;
+        return open + claimed + done;
     }
 
-    /** Whether no unit is left to work: every unit is done or failed. */
+    /** Whether every unit is done. */
     public boolean finished() {
         return open == 0 && claimed == 0;
-    }
-
-    /** Whether every unit is done with its results. */
-    public boolean complete() {
-        return finished() && failed == 0;
     }
 }
