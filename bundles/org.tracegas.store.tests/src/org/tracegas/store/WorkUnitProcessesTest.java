@@ -65,7 +65,7 @@ class WorkUnitProcessesTest {
                 r.reader.join(10_000);
             }
 
-            assertEquals(new BatchProgress(0, 0, UNITS), f.store.workUnits().progress(f.analyst, batch.id()));
+            assertEquals(new BatchProgress(0, 0, UNITS, 0), f.store.workUnits().progress(f.analyst, batch.id()));
             List<Integer> completed = new ArrayList<>();
             runners.forEach(r -> completed.addAll(r.numbers("completed ")));
             assertEquals(IntStream.range(0, UNITS).boxed().toList(), completed.stream().sorted().toList(),

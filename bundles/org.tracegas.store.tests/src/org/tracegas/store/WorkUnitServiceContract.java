@@ -55,7 +55,7 @@ abstract class WorkUnitServiceContract {
     @Test
     void unitsAreClaimedInOrderAndCompletedWithTheirBlock() throws Exception {
         WorkBatchInfo batch = batch(3);
-        assertEquals(new BatchProgress(3, 0, 0), units.progress(f.analyst, batch.id()));
+        assertEquals(new BatchProgress(3, 0, 0, 0), units.progress(f.analyst, batch.id()));
 
         WorkUnitLease a = units.claim(f.analyst, batch.id(), "runner-a", LONG).orElseThrow();
         WorkUnitLease b = units.claim(f.analyst, batch.id(), "runner-b", LONG).orElseThrow();
@@ -64,11 +64,11 @@ abstract class WorkUnitServiceContract {
         assertEquals("/data/stack/hour-1.tgc", b.payload());
         assertEquals(1, b.attempt());
         assertEquals(Optional.empty(), units.claim(f.analyst, batch.id(), "runner-c", LONG), "all units held");
-        assertEquals(new BatchProgress(0, 3, 0), units.progress(f.analyst, batch.id()));
+        assertEquals(new BatchProgress(0, 3, 0, 0), units.progress(f.analyst, batch.id()));
 
         List<StoredMeasurement> stored = units.complete(f.analyst, b, blockOf(1));
 
-        assertEquals(new BatchProgress(0, 2, 1), units.progress(f.reader, batch.id()));
+        assertEquals(new BatchProgress(0, 2, 1, 0), units.progress(f.reader, batch.id()));
         assertEquals(stored.stream().map(StoredMeasurement::measurementId).toList(),
                 units.measurementsOf(f.analyst, batch.id(), 1));
         assertEquals(6, f.store.results().results(f.analyst, f.project.id()).size());
@@ -113,7 +113,7 @@ abstract class WorkUnitServiceContract {
         WorkUnitLease late = units.claim(f.analyst, batch.id(), "runner-a", SHORT).orElseThrow();
         Thread.sleep(3 * SHORT.toMillis());
         units.complete(f.analyst, late, blockOf(0));
-        assertEquals(new BatchProgress(0, 0, 1), units.progress(f.analyst, batch.id()));
+        assertEquals(new BatchProgress(0, 0, 1, 0), units.progress(f.analyst, batch.id()));
     }
 
     @Test
@@ -159,7 +159,7 @@ abstract class WorkUnitServiceContract {
             pool.shutdownNow();
         }
         assertEquals(IntStream.range(0, count).boxed().toList(), claimed.stream().sorted().toList());
-        assertEquals(new BatchProgress(0, 0, count), units.progress(f.analyst, batch.id()));
+        assertEquals(new BatchProgress(0, 0, count, 0), units.progress(f.analyst, batch.id()));
         assertEquals(count, f.count("SELECT COUNT(*) FROM work_unit WHERE attempt = 1"));
         assertTrue(f.store.verifyAuditTrail().intact());
     }
@@ -286,5 +286,41 @@ abstract class WorkUnitServiceContract {
         assertTrue(e.getMessage().startsWith("lease"), e.getMessage());
         assertThrows(NoSuchObjectException.class, () -> units.progress(f.analyst, "no-such-batch"));
         assertFalse(units.progress(f.reader, batch.id()).finished());
+    }
+
+    @Test
+    void failedUnitIsNeverClaimedAgainAndFinishesItsBatchIncomplete() throws Exception {
+        WorkBatchInfo batch = quantification(f.method, "/data/a.tgc", "/data/b.tgc", "/data/c.tgc");
+        WorkUnitLease a = units.claim(f.analyst, batch.id(), "runner-a", LONG).orElseThrow();
+        WorkUnitLease b = units.claim(f.analyst, batch.id(), "runner-b", LONG).orElseThrow();
+        units.fail(f.analyst, a, "/data/a.tgc: record 2 is cut short");
+        assertEquals(new BatchProgress(1, 1, 0, 1), units.progress(f.reader, batch.id()));
+        assertThrows(LeaseLostException.class, () -> units.complete(f.analyst, a, blockOf(0)),
+                "a failed unit takes no results");
+        assertThrows(LeaseLostException.class, () -> units.fail(f.analyst, a, "again"));
+        assertThrows(IllegalArgumentException.class, () -> units.fail(f.analyst, b, " "));
+
+        units.complete(f.analyst, b, blockOf(1));
+        WorkUnitLease c = units.claim(f.analyst, batch.id(), "runner-b", SHORT).orElseThrow();
+        assertEquals(2, c.seq(), "the failed unit 0 is skipped");
+        units.fail(f.analyst, c, "x".repeat(WorkUnitService.MAX_TEXT_LENGTH + 10));
+        Thread.sleep(2 * SHORT.toMillis());
+        assertEquals(Optional.empty(), units.claim(f.analyst, batch.id(), "runner-c", LONG),
+                "failed units have no lease to expire");
+
+        BatchProgress p = units.progress(f.analyst, batch.id());
+        assertEquals(new BatchProgress(0, 0, 1, 2), p);
+        assertTrue(p.finished());
+        assertFalse(p.complete());
+        List<FailedUnit> failed = units.failures(f.reader, batch.id());
+        assertEquals(List.of(0, 2), failed.stream().map(FailedUnit::seq).toList());
+        assertEquals(new FailedUnit(0, "/data/a.tgc", "/data/a.tgc: record 2 is cut short"), failed.get(0));
+        assertEquals(WorkUnitService.MAX_TEXT_LENGTH, failed.get(1).error().length());
+        assertEquals(List.of(), units.measurementsOf(f.analyst, batch.id(), 0));
+        assertEquals(Optional.empty(), units.unfinishedBatch(f.analyst, f.project.id(), f.method.id()),
+                "a finished batch with failures no longer blocks a batch of its failed files");
+        assertEquals(2, f.count("SELECT COUNT(*) FROM work_unit WHERE state = 'FAILED' AND lease_until IS NULL"
+                + " AND done_at IS NOT NULL"));
+        assertTrue(f.store.verifyAuditTrail().intact());
     }
 }

@@ -6,15 +6,21 @@ package org.tracegas.store;
  * @param open    units no runner has claimed (or that were released)
  * @param claimed units held by a runner
  * @param done    units completed with their results
+ * @param failed  units whose payload could not be processed; they are not claimed again
  */
-public record BatchProgress(int open, int claimed, int done) {
+public record BatchProgress(int open, int claimed, int done, int failed) {
 
     public int total() {
-        return open + claimed + done;
+        return open + claimed + done + failed;
     }
 
-    /** Whether every unit is done. */
+    /** Whether no unit is left to work: every unit is done or failed. */
     public boolean finished() {
         return open == 0 && claimed == 0;
+    }
+
+    /** Whether every unit is done with its results. */
+    public boolean complete() {
+        return finished() && failed == 0;
     }
 }

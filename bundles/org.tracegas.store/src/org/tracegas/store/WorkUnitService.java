@@ -20,7 +20,11 @@ import java.util.Optional;
  * the same claim. An embedded H2 workspace is opened by one process at a time, so there the runners are
  * threads of that process; runners in separate processes share a PostgreSQL workspace.
  * <p>
- * Every change (batch creation, claim, renewal, release, completion) writes an audit record in its own
+ * A unit whose payload cannot be processed (e.g. a corrupt file) is marked failed with the error instead of
+ * being given back, so that it does not stall the batch; a failed unit is never claimed again. A batch whose
+ * units are all done or failed is finished; it is complete only without failed units.
+ * <p>
+ * Every change (batch creation, claim, renewal, release, completion, failure) writes an audit record in its own
  * transaction. Changes need write access to the batch's project, reads ({@link #batch}, {@link #progress},
  * {@link #unfinishedBatch}, {@link #measurementsOf}) read access.
  */
@@ -59,7 +63,7 @@ public interface WorkUnitService {
      * The oldest batch of the project and METHOD version that still has open or claimed units. Needs read access
      * to the project.
      *
-     * @return the batch, or empty when every such batch is finished or there is none
+     * @return the batch, or empty when every such batch is finished (its units done or failed) or there is none
      */
     Optional<WorkBatchInfo> unfinishedBatch(Session actor, String projectId, String methodVersionId);
 
@@ -88,13 +92,25 @@ public interface WorkUnitService {
     void release(Session actor, WorkUnitLease lease);
 
     /**
+     * Marks a claimed unit failed with the error that stopped its processing, so that no runner claims it again.
+     *
+     * @param error why the payload could not be processed, not blank; cut to {@link #MAX_TEXT_LENGTH}
+     * @throws LeaseLostException       if the claim is no longer the runner's
+     * @throws IllegalArgumentException if error is blank
+     */
+    void fail(Session actor, WorkUnitLease lease, String error);
+
+    /** The batch's failed units, in unit order. */
+    List<FailedUnit> failures(Session actor, String batchId);
+
+    /**
      * Stores the unit's block of processed spectra as {@link BlockService#store} does and marks the unit
      * done, in one transaction. A lease that expired is still accepted as long as no other runner has
      * claimed the unit since.
      *
      * @param block the unit's processed spectra, may be empty
      * @return what was stored, as {@link BlockService#store}
-     * @throws LeaseLostException       if the unit was claimed again by another runner, released or is done
+     * @throws LeaseLostException       if the unit was claimed again by another runner, released, done or failed
      * @throws IllegalArgumentException naming the index of a wrong block entry
      */
     List<StoredMeasurement> complete(Session actor, WorkUnitLease lease, List<ProcessedSpectrum> block);

@@ -2,7 +2,6 @@ package org.tracegas.campaign.shared;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
@@ -32,6 +31,7 @@ import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.BatchProgress;
+import org.tracegas.store.FailedUnit;
 import org.tracegas.store.NewResult;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.ProjectInfo;
@@ -123,7 +123,7 @@ class WorkUnitWorkerTest {
             pool.shutdownNow();
         }
         assertEquals(IntStream.range(0, 9).boxed().toList(), done.stream().sorted().toList());
-        assertEquals(new BatchProgress(0, 0, 9), store.workUnits().progress(analyst, batch.id()));
+        assertEquals(new BatchProgress(0, 0, 9, 0), store.workUnits().progress(analyst, batch.id()));
         List<Instant> times = store.projects().measurements(analyst, project.id()).stream().map(m -> m.time()).toList();
         assertEquals(IntStream.range(0, 18).mapToObj(m -> Instant.EPOCH.plusSeconds(60L * m)).toList(), times);
         assertTrue(store.verifyAuditTrail().intact());
@@ -138,7 +138,7 @@ class WorkUnitWorkerTest {
             assertTrue(store.workUnits().claim(analyst, batch.id(), "runner-b", LEASE).isEmpty());
             return block(payload);
         }).run(UnitListener.NONE, new CancellationFlag());
-        assertEquals(new WorkerOutcome(1, 0, false), outcome);
+        assertEquals(new WorkerOutcome(1, 0, 0, false), outcome);
     }
 
     @Test
@@ -157,8 +157,8 @@ class WorkUnitWorkerTest {
             return block(payload);
         }).run(UnitListener.NONE, stop);
 
-        assertEquals(new WorkerOutcome(1, 0, true), outcome);
-        assertEquals(new BatchProgress(2, 0, 1), store.workUnits().progress(analyst, batch.id()),
+        assertEquals(new WorkerOutcome(1, 0, 0, true), outcome);
+        assertEquals(new BatchProgress(2, 0, 1, 0), store.workUnits().progress(analyst, batch.id()),
                 "unit 1 is open again at once");
         assertEquals(2, store.projects().measurements(analyst, project.id()).size());
     }
@@ -185,15 +185,30 @@ class WorkUnitWorkerTest {
     }
 
     @Test
-    void failingProcessorGivesTheUnitBackAndNamesIt() {
-        WorkBatchInfo batch = batch(2);
-        IllegalStateException e = assertThrows(IllegalStateException.class, () -> worker(batch, "runner-a",
-                (payload, cancel) -> {
-                    throw new java.io.IOException("file " + payload + " is truncated");
-                }).run(UnitListener.NONE, new CancellationFlag()));
-        assertTrue(e.getMessage().contains(batch.id() + "/0") && e.getMessage().contains("truncated"),
-                e.getMessage());
-        assertEquals(new BatchProgress(2, 0, 0), store.workUnits().progress(analyst, batch.id()));
+    void unitWhosePayloadAlwaysFailsIsMarkedFailedAndTheOthersAreWorked() throws Exception {
+        WorkBatchInfo batch = batch(4);
+        List<String> tried = Collections.synchronizedList(new ArrayList<>());
+        UnitProcessor processor = (payload, cancel) -> {
+            tried.add(payload);
+            if (payload.equals("1")) {
+                throw new java.io.IOException("file " + payload + " is truncated");
+            }
+            return block(payload);
+        };
+        WorkerOutcome first = worker(batch, "runner-a", processor).run(UnitListener.NONE, new CancellationFlag());
+        WorkerOutcome second = worker(batch, "runner-b", processor).run(UnitListener.NONE, new CancellationFlag());
+
+        assertEquals(new WorkerOutcome(3, 0, 1, false), first);
+        assertEquals(new WorkerOutcome(0, 0, 0, false), second, "the failed unit is not tried again");
+        assertEquals(List.of("0", "1", "2", "3"), tried);
+        BatchProgress progress = store.workUnits().progress(analyst, batch.id());
+        assertEquals(new BatchProgress(0, 0, 3, 1), progress);
+        assertTrue(progress.finished());
+        assertFalse(progress.complete());
+        assertEquals(List.of(new FailedUnit(1, "1", "file 1 is truncated")),
+                store.workUnits().failures(analyst, batch.id()));
+        assertEquals(6, store.projects().measurements(analyst, project.id()).size());
+        assertTrue(store.verifyAuditTrail().intact());
     }
 
     /** The batch never finishes (unit 0 is held by a runner that does not exist), so the test stops the worker. */

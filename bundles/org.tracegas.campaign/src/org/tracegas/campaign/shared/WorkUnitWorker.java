@@ -29,11 +29,13 @@ import org.tracegas.store.WorkspaceStore;
  * finds the lease lost (the worker stalled longer than the lease and another runner took the unit), the
  * processor is told to stop through its cancellation flag and the unit's work is dropped. When all remaining
  * units are held by other runners, the worker waits {@code idlePoll} and asks again, so that it picks up a
- * unit whose runner died once its lease expires; it returns when the whole batch is done.
+ * unit whose runner died once its lease expires; it returns when the whole batch is finished (every unit done
+ * or failed).
  * <p>
  * Stopping: setting the run's cancellation flag stops the processor of the current unit, gives that unit
- * back unprocessed (so another runner may take it at once) and ends the run. A processor exception also gives
- * the unit back and is rethrown. Not for concurrent use: run one worker per thread.
+ * back unprocessed (so another runner may take it at once) and ends the run. A processor exception marks the
+ * unit failed with the exception's message, so that no runner tries it again (a corrupt file would fail every
+ * time), and the worker goes on with the next unit. Not for concurrent use: run one worker per thread.
  * <p>
  * A runner processing container files, one file per unit:
  * <pre>{@code
@@ -86,12 +88,11 @@ public final class WorkUnitWorker {
     }
 
     /**
-     * Works on the batch until it is done or the flag is set.
+     * Works on the batch until it is finished or the flag is set.
      *
      * @param listener told after each unit this worker completed
      * @param cancel   stops the run; the unit in hand is given back unprocessed
-     * @throws IllegalStateException naming the unit and payload when the processor failed (the unit was given
-     *                               back); database errors propagate as {@link org.tracegas.store.StoreException}
+     * @throws org.tracegas.store.StoreException on database errors
      */
     public WorkerOutcome run(UnitListener listener, CancellationFlag cancel) throws InterruptedException {
         ScheduledExecutorService timer = Executors.newSingleThreadScheduledExecutor(r -> {
@@ -101,44 +102,54 @@ public final class WorkUnitWorker {
         });
         int completed = 0;
         int lost = 0;
+        int failed = 0;
         try {
             WorkUnitService units = store.workUnits();
             while (!cancel.isCancelled()) {
                 Optional<WorkUnitLease> claimed = units.claim(actor, batchId, runnerId, lease);
                 if (claimed.isEmpty()) {
                     if (units.progress(actor, batchId).finished()) {
-                        return new WorkerOutcome(completed, lost, false);
+                        return new WorkerOutcome(completed, lost, failed, false);
                     }
                     sleep(idlePoll.toMillis(), cancel);
                     continue;
                 }
-                List<ProcessedSpectrum> block = work(claimed.get(), timer, cancel);
-                if (block == null) {
+                Processed result = work(claimed.get(), timer, cancel);
+                if (result.lost()) {
                     lost++;
+                } else if (result.failure() != null) {
+                    if (markFailed(claimed.get(), result.failure())) {
+                        failed++;
+                    } else {
+                        lost++;
+                    }
                 } else if (!cancel.isCancelled()) {
                     try {
-                        units.complete(actor, claimed.get(), block);
+                        units.complete(actor, claimed.get(), result.block());
                         completed++;
-                        listener.unitDone(claimed.get(), block.size(), units.progress(actor, batchId));
+                        listener.unitDone(claimed.get(), result.block().size(), units.progress(actor, batchId));
                     } catch (LeaseLostException e) {
                         lost++;
                     }
                 } else {
-                    giveBack(claimed.get(), null);
+                    giveBack(claimed.get());
                 }
             }
-            return new WorkerOutcome(completed, lost, true);
+            return new WorkerOutcome(completed, lost, failed, true);
         } finally {
             timer.shutdownNow();
         }
     }
 
+    /** What processing one unit came to: its block, the processor's error, or a lost lease. */
+    private record Processed(List<ProcessedSpectrum> block, String failure, boolean lost) {
+    }
+
     /**
-     * Processes one unit while its lease is renewed.
-     *
-     * @return the unit's block, or null when the lease was lost
+     * Processes one unit while its lease is renewed. A processor exception after the run was cancelled is taken
+     * for the processor stopping, and the unit counts as unprocessed rather than failed.
      */
-    private List<ProcessedSpectrum> work(WorkUnitLease unit, ScheduledExecutorService timer, CancellationFlag cancel)
+    private Processed work(WorkUnitLease unit, ScheduledExecutorService timer, CancellationFlag cancel)
             throws InterruptedException {
         CancellationFlag stopUnit = new CancellationFlag();
         AtomicReference<WorkUnitLease> current = new AtomicReference<>(unit);
@@ -159,20 +170,34 @@ public final class WorkUnitWorker {
                 stopUnit.cancel();
             }
         }, 0, CANCEL_POLL_MILLIS, TimeUnit.MILLISECONDS);
-        List<ProcessedSpectrum> block;
+        List<ProcessedSpectrum> block = null;
+        String failure = null;
         try {
             block = processor.process(unit.payload(), stopUnit);
-        } catch (Exception e) {
+        } catch (InterruptedException e) {
             stop(timer, renewal, stopping);
-            IllegalStateException failure = new IllegalStateException("work unit " + unit.unitName() + " ("
-                    + unit.payload() + ") could not be processed: " + e.getMessage(), e);
             if (!leaseLost.get()) {
-                giveBack(unit, failure);
+                giveBack(unit);
             }
-            throw failure;
+            throw e;
+        } catch (Exception e) {
+            failure = e.getMessage() == null || e.getMessage().isBlank() ? e.toString() : e.getMessage();
         }
         stop(timer, renewal, stopping);
-        return leaseLost.get() ? null : block;
+        if (leaseLost.get()) {
+            return new Processed(null, null, true);
+        }
+        return new Processed(block, cancel.isCancelled() ? null : failure, false);
+    }
+
+    /** @return false when the unit was no longer this runner's to mark */
+    private boolean markFailed(WorkUnitLease unit, String failure) {
+        try {
+            store.workUnits().fail(actor, unit, failure);
+            return true;
+        } catch (LeaseLostException e) {
+            return false;
+        }
     }
 
     /** Stops the unit's timer tasks and waits for a renewal that is running, so none overlaps what follows. */
@@ -188,16 +213,11 @@ public final class WorkUnitWorker {
         }
     }
 
-    private void giveBack(WorkUnitLease unit, Exception cause) {
+    private void giveBack(WorkUnitLease unit) {
         try {
             store.workUnits().release(actor, unit);
         } catch (LeaseLostException e) {
             // another runner has it already
-        } catch (RuntimeException e) {
-            if (cause == null) {
-                throw e;
-            }
-            cause.addSuppressed(e);
         }
     }
 

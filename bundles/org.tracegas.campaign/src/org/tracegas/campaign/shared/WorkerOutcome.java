@@ -5,7 +5,8 @@ package org.tracegas.campaign.shared;
  *
  * @param completed units this worker completed with their results
  * @param lost      units whose lease this worker lost to another runner; their work was dropped
- * @param cancelled whether the run stopped on its cancellation flag before the batch was done
+ * @param failed    units this worker marked failed because their payload could not be processed
+ * @param cancelled whether the run stopped on its cancellation flag before the batch was finished
  */
-public record WorkerOutcome(int completed, int lost, boolean cancelled) {
+public record WorkerOutcome(int completed, int lost, int failed, boolean cancelled) {
 }

@@ -29,7 +29,8 @@ import org.tracegas.store.Workspaces;
 /**
  * batch-split, batch-work and batch-status on a real H2 workspace: a batch worked by one runner stores what
  * quantify stores for the same files, bad input to batch-split records no batch, and an unfinished batch of a
- * project and method version refuses a second split and quantify.
+ * project and method version refuses a second split and quantify, and a file that cannot be processed fails its
+ * unit without stopping the batch.
  */
 class BatchCommandsTest {
 
@@ -46,7 +47,7 @@ class BatchCommandsTest {
     @BeforeAll
     static void workspaceAndFiles() throws Exception {
         ws = folder.resolve("ws");
-        campaign = new BatchCampaign(folder, List.of("--workspace", ws.toString()), List.of("Q", "B", "X", "S", "D"), FILES,
+        campaign = new BatchCampaign(folder, List.of("--workspace", ws.toString()), List.of("Q", "B", "X", "S", "D", "F"), FILES,
                 SAMPLES_PER_FILE);
     }
 
@@ -64,7 +65,7 @@ class BatchCommandsTest {
                 "0.2");
         assertTrue(worked.contains("complete: " + FILES + " units") && worked.contains("completed " + FILES),
                 worked);
-        assertTrue(campaign.ok("batch-status", "--as", "ana", "--batch", batchId).contains(FILES + " done: complete"));
+        assertTrue(campaign.ok("batch-status", "--as", "ana", "--batch", batchId).contains(FILES + " done, 0 failed: complete"));
         ByteArrayOutputStream err = new ByteArrayOutputStream();
         assertEquals(ExitCode.BAD_INPUT, campaign.run(new ByteArrayOutputStream(), err, "batch-split",
                 campaign.quantification("B", campaign.stackFiles)), "a second batch would repeat the results");
@@ -141,6 +142,39 @@ class BatchCommandsTest {
                 campaign.quantification("D", campaign.stackFiles)), "the finished batch stored the results");
         assertTrue(err.toString(StandardCharsets.UTF_8).contains("holds results of method version"), err::toString);
         assertEquals(recorded, batchesRecorded());
+    }
+
+    @Test
+    void fileCutShortAfterTheSplitFailsItsUnitAndTheBatchFinishesTheOthers() throws Exception {
+        List<Path> files = new java.util.ArrayList<>();
+        for (int f = 0; f < FILES; f++) {
+            files.add(Files.copy(campaign.stackFiles.get(f), folder.resolve("f-" + f + ".tgc")));
+        }
+        String batchId = campaign.ok("batch-split", campaign.quantification("F", files)).strip();
+        byte[] whole = Files.readAllBytes(files.get(1));
+        Files.write(files.get(1), java.util.Arrays.copyOf(whole, whole.length / 2));
+
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.BAD_INPUT, campaign.run(new ByteArrayOutputStream(), err, "batch-work", "--as", "ana",
+                "--batch", batchId, "--lease", "30", "--idle-poll", "0.2"), err::toString);
+        String message = err.toString(StandardCharsets.UTF_8);
+        assertTrue(message.contains("finished with 1 of " + FILES + " files failed")
+                && message.contains("failed: " + files.get(1)), message);
+        assertTrue(!message.contains("f-0.tgc") && !message.contains("f-2.tgc"), message);
+
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        assertEquals(ExitCode.BAD_INPUT, campaign.run(out, new ByteArrayOutputStream(), "batch-status", "--as", "ana",
+                "--batch", batchId));
+        String status = out.toString(StandardCharsets.UTF_8);
+        assertTrue(status.contains("0 open, 0 claimed, " + (FILES - 1) + " done, 1 failed: finished with failures")
+                && status.contains("failed: " + files.get(1)), status);
+        try (WorkspaceStore store = Workspaces.openH2(ws.resolve("db"))) {
+            Session ana = store.users().logIn("ana", BatchCampaign.PASSWORD.toCharArray());
+            assertEquals((FILES - 1) * SAMPLES_PER_FILE * COMPOUNDS, resultsByTimeAndCompound(store, ana, "F").size(),
+                    "the good files' results are stored");
+            assertEquals(List.of(), store.workUnits().measurementsOf(ana, batchId, 1));
+            assertTrue(store.verifyAuditTrail().intact());
+        }
     }
 
     @Test

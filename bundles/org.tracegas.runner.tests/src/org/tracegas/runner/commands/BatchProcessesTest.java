@@ -125,7 +125,7 @@ class BatchProcessesTest {
             assertTrue(out.contains("Batch " + batchId + " complete: " + FILES + " units"), out);
         }
 
-        assertTrue(campaign.ok("batch-status", "--as", "ana", "--batch", batchId).contains(FILES + " done: complete"));
+        assertTrue(campaign.ok("batch-status", "--as", "ana", "--batch", batchId).contains(FILES + " done, 0 failed: complete"));
         int heldUnit = held.get(0);
         assertTrue(query("SELECT attempt FROM work_unit WHERE seq = ?", rs -> rs.getInt(1), heldUnit).get(0) >= 2,
                 "the killed runner's unit was claimed again");
@@ -134,7 +134,7 @@ class BatchProcessesTest {
         try (WorkspaceStore store = Workspaces.openPostgres(schemaUrl, USER, PASSWORD)) {
             Session ana = store.users().logIn("ana", BatchCampaign.PASSWORD.toCharArray());
             String project = store.projects().findByCode(ana, "P").orElseThrow().id();
-            assertEquals(new BatchProgress(0, 0, FILES), store.workUnits().progress(ana, batchId));
+            assertEquals(new BatchProgress(0, 0, FILES, 0), store.workUnits().progress(ana, batchId));
             Map<String, Instant> times = store.projects().measurements(ana, project).stream()
                     .collect(Collectors.toMap(MeasurementInfo::id, MeasurementInfo::time));
             for (int unit = 0; unit < FILES; unit++) {

@@ -1,11 +1,13 @@
 package org.tracegas.runner.commands;
 
+import java.io.PrintStream;
 import java.util.List;
 
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.store.BatchProgress;
+import org.tracegas.store.FailedUnit;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -19,7 +21,7 @@ public final class BatchStatusCommand implements Command {
 
     @Override
     public String summary() {
-        return "count a batch's open, claimed and done work units";
+        return "count a batch's open, claimed, done and failed work units";
     }
 
     @Override
@@ -28,8 +30,10 @@ public final class BatchStatusCommand implements Command {
                 + "\n" + """
                   --batch <id>                the batch, as batch-split printed it
                   Prints the units open, claimed (held by a runner, or left by one that stopped until its lease
-                  ends) and done. Needs read access to the batch's project.
-                exit codes: 0 every unit done, 1 units remain, 2 wrong arguments or no such batch, 5 failure""";
+                  ends), done and failed, then each failed unit's file and error. Needs read access to the batch's
+                  project.
+                exit codes: 0 every unit done, 1 units remain, 2 wrong arguments or no such batch, 3 no units remain
+                  but some files failed, 5 failure""";
     }
 
     @Override
@@ -40,9 +44,21 @@ public final class BatchStatusCommand implements Command {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             String batchId = BatchWorkCommand.batch(store, actor, options).id();
             BatchProgress p = store.workUnits().progress(actor, batchId);
-            context.out().printf("batch %s: %d units, %d open, %d claimed, %d done: %s%n", batchId, p.total(),
-                    p.open(), p.claimed(), p.done(), p.finished() ? "complete" : "not complete");
-            return p.finished() ? ExitCode.OK : ExitCode.CHECK_FAILED;
+            context.out().printf("batch %s: %d units, %d open, %d claimed, %d done, %d failed: %s%n", batchId,
+                    p.total(), p.open(), p.claimed(), p.done(), p.failed(),
+                    p.complete() ? "complete" : p.finished() ? "finished with failures" : "not complete");
+            listFailures(store, actor, batchId, context.out());
+            if (!p.finished()) {
+                return ExitCode.CHECK_FAILED;
+            }
+            return p.complete() ? ExitCode.OK : ExitCode.BAD_INPUT;
+        }
+    }
+
+    /** One line per failed unit: its file and why it failed. */
+    static void listFailures(WorkspaceStore store, Session actor, String batchId, PrintStream to) {
+        for (FailedUnit f : store.workUnits().failures(actor, batchId)) {
+            to.printf("failed: %s: %s%n", f.payload(), f.error());
         }
     }
 }

@@ -46,7 +46,7 @@ public final class BatchWorkCommand implements Command {
 
     @Override
     public String summary() {
-        return "work on a batch-split batch with other runners until all its units are done";
+        return "work on a batch-split batch with other runners until all its units are done or failed";
     }
 
     @Override
@@ -63,9 +63,11 @@ public final class BatchWorkCommand implements Command {
                   completion, so a unit is done once, with all its results, or not at all: a runner that stops
                   or dies leaves its unit to the others once its lease ends. The runner is named host:process id
                   in the units and the audit trail. The progress line counts the batch's done units (all runners).
+                  A sample file that cannot be processed (e.g. a corrupt file) fails its unit with the error; no
+                  runner tries it again and the others go on with the remaining files.
                 exit codes: 0 the batch is complete, 2 wrong arguments or no such batch, 3 the batch's method version
-                  or background files cannot be read, 4 cancelled (the unit in hand is given back), 5 failure (a
-                  sample file could not be processed: its unit is given back, file and record named)""";
+                  or background files cannot be read, or the batch finished with failed files (each named with its
+                  error), 4 cancelled (the unit in hand is given back), 5 failure""";
     }
 
     @Override
@@ -100,6 +102,13 @@ public final class BatchWorkCommand implements Command {
                 return ExitCode.CANCELLED;
             }
             BatchProgress done = store.workUnits().progress(actor, batch.id());
+            if (!done.complete()) {
+                context.err().printf("tracegas batch-work: batch %s finished with %d of %d files failed; runner %s"
+                        + " completed %d units and failed %d%n", batch.id(), done.failed(), done.total(), runner,
+                        outcome.completed(), outcome.failed());
+                BatchStatusCommand.listFailures(store, actor, batch.id(), context.err());
+                return ExitCode.BAD_INPUT;
+            }
             context.out().printf("Batch %s complete: %d units; runner %s completed %d of them%n", batch.id(),
                     done.total(), runner, outcome.completed());
             return ExitCode.OK;

@@ -20,6 +20,7 @@ import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.store.BatchProgress;
+import org.tracegas.store.FailedUnit;
 import org.tracegas.store.LeaseLostException;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.ProcessedSpectrum;
@@ -219,6 +220,41 @@ final class JdbcWorkUnitService implements WorkUnitService {
     }
 
     @Override
+    public void fail(Session actor, WorkUnitLease lease, String error) {
+        if (error == null || error.isBlank()) {
+            throw new IllegalArgumentException("error must say why work unit " + name(lease) + " failed, was "
+                    + error);
+        }
+        String failure = error.length() > MAX_TEXT_LENGTH ? error.substring(0, MAX_TEXT_LENGTH) : error;
+        transactions.run("marking work unit " + name(lease) + " failed", tx -> {
+            requireBatchAccess(tx, actor, lease.batchId(), AccessLevel.WRITE);
+            Unit before = lockOwn(tx, lease, "fail");
+            Instant at = databaseTime(tx);
+            tx.update("UPDATE work_unit SET state = 'FAILED', lease_until = NULL, done_at = ?, failure = ?"
+                    + " WHERE batch_id = ? AND seq = ?", at, failure, lease.batchId(), lease.seq());
+            Map<String, Object> after = new LinkedHashMap<>();
+            after.put("state", "FAILED");
+            after.put("claimedBy", lease.runnerId());
+            after.put("attempt", lease.attempt());
+            after.put("doneAt", at);
+            after.put("failure", failure);
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "work-unit", lease.unitName())
+                    .version(lease.attempt()).oldValue(AuditValues.canonical(before.fields()))
+                    .newValue(AuditValues.canonical(after)).build());
+            return null;
+        });
+    }
+
+    @Override
+    public List<FailedUnit> failures(Session actor, String batchId) {
+        return transactions.run("reading the failed units of work batch " + batchId, tx -> {
+            requireBatchAccess(tx, actor, batchId, AccessLevel.READ);
+            return tx.queryList("SELECT seq, payload, failure FROM work_unit WHERE batch_id = ? AND state = 'FAILED'"
+                    + " ORDER BY seq", rs -> new FailedUnit(rs.getInt(1), rs.getString(2), rs.getString(3)), batchId);
+        });
+    }
+
+    @Override
     public List<StoredMeasurement> complete(Session actor, WorkUnitLease lease, List<ProcessedSpectrum> block) {
         JdbcBlockService.requireEntries(block);
         return transactions.run("completing work unit " + name(lease) + " with " + block.size()
@@ -301,14 +337,15 @@ final class JdbcWorkUnitService implements WorkUnitService {
             throws SQLException {
         return tx.queryOne("SELECT " + BATCH_COLUMNS + " FROM work_batch b WHERE b.project_id = ?"
                 + " AND b.method_version_id = ? AND EXISTS (SELECT 1 FROM work_unit u WHERE u.batch_id = b.id"
-                + " AND u.state <> 'DONE') ORDER BY b.created_at, b.id LIMIT 1", JdbcWorkUnitService::readBatch,
+                + " AND u.state IN ('OPEN', 'CLAIMED')) ORDER BY b.created_at, b.id LIMIT 1", JdbcWorkUnitService::readBatch,
                 projectId, methodVersionId);
     }
 
     private static UnfinishedBatchException refusal(Tx tx, WorkBatchInfo other) throws SQLException {
         String code = tx.queryOne("SELECT code FROM project WHERE id = ?", rs -> rs.getString(1), other.projectId())
                 .orElseThrow();
-        long notDone = tx.queryOne("SELECT COUNT(*) FROM work_unit WHERE batch_id = ? AND state <> 'DONE'",
+        long notDone = tx.queryOne("SELECT COUNT(*) FROM work_unit WHERE batch_id = ?"
+                + " AND state IN ('OPEN', 'CLAIMED')",
                 rs -> rs.getLong(1), other.id()).orElseThrow();
         return new UnfinishedBatchException(other.id(), "project " + code + " has the unfinished work batch "
                 + other.id() + " of method version " + other.methodVersionId() + " (" + notDone + " of "
@@ -334,17 +371,18 @@ final class JdbcWorkUnitService implements WorkUnitService {
     public BatchProgress progress(Session actor, String batchId) {
         return transactions.run("reading the progress of work batch " + batchId, tx -> {
             requireBatchAccess(tx, actor, batchId, AccessLevel.READ);
-            int[] counts = new int[3];
+            int[] counts = new int[4];
             for (Object[] row : tx.queryList("SELECT state, COUNT(*) FROM work_unit WHERE batch_id = ?"
                     + " GROUP BY state", rs -> new Object[] {rs.getString(1), rs.getInt(2)}, batchId)) {
                 int index = switch ((String) row[0]) {
                     case "OPEN" -> 0;
                     case "CLAIMED" -> 1;
-                    default -> 2;
+                    case "DONE" -> 2;
+                    default -> 3;
                 };
                 counts[index] = (Integer) row[1];
             }
-            return new BatchProgress(counts[0], counts[1], counts[2]);
+            return new BatchProgress(counts[0], counts[1], counts[2], counts[3]);
         });
     }
 
