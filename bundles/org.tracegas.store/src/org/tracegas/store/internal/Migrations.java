@@ -23,8 +23,9 @@ import org.flywaydb.core.api.resource.LoadableResource;
  * Flyway normally finds migrations by scanning class-path locations. Inside OSGi that scan cannot see
  * into this bundle (Flyway's bundle class loader does not know it, and bundle URLs are not file or jar
  * URLs), so the migrations are handed over explicitly: a {@link ResourceProvider} that serves the SQL
- * files listed in {@link #SCRIPTS} from this bundle, and a Java migration provider serving {@link #CLASSES}, which
- * together switch Flyway's scanner off. Flyway is given its own class loader because it finds its database
+ * files listed in {@link #SCRIPTS} from this bundle, an empty Java migration class provider, which together
+ * switch Flyway's scanner off, and the Java migrations as instances made here, since Flyway's class loader
+ * cannot load classes of this bundle. Flyway is given its own class loader because it finds its database
  * support (PostgreSQL, H2) through {@link java.util.ServiceLoader} files inside its own bundle. The same
  * code runs unchanged outside OSGi.
  * <p>
@@ -38,8 +39,10 @@ final class Migrations {
     static final List<String> SCRIPTS = List.of("V1__workspace_schema.sql", "V2__qa_checks.sql",
             "V3__work_units.sql", "V4__work_batch_method_version.sql");
 
-    /** Migrations that plain SQL cannot write for H2 and PostgreSQL alike; add new classes here. */
-    static final List<Class<? extends JavaMigration>> CLASSES = List.of(V5__work_unit_failed.class);
+    /** Migrations that plain SQL cannot write for H2 and PostgreSQL alike; add new ones here. */
+    static JavaMigration[] javaMigrations() {
+        return new JavaMigration[] { new V5__work_unit_failed() };
+    }
 
     private Migrations() {
     }
@@ -49,17 +52,18 @@ final class Migrations {
         MigrateResult result = Flyway.configure(Flyway.class.getClassLoader())
                 .dataSource(dataSource)
                 .resourceProvider(new BundleScripts())
-                .javaMigrationClassProvider(new BundleClasses())
+                .javaMigrationClassProvider(new NoJavaMigrationClasses())
+                .javaMigrations(javaMigrations())
                 .table("schema_history")
                 .load()
                 .migrate();
         return result.migrationsExecuted;
     }
 
-    private static final class BundleClasses implements ClassProvider<JavaMigration> {
+    private static final class NoJavaMigrationClasses implements ClassProvider<JavaMigration> {
         @Override
         public Collection<Class<? extends JavaMigration>> getClasses() {
-            return CLASSES;
+            return List.of();
         }
     }
 
