@@ -38,8 +38,7 @@ public final class BatchStatusCommand implements Command {
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
-        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--batch"));
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--batch"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             String batchId = BatchWorkCommand.batch(store, actor, options).id();

@@ -72,8 +72,8 @@ public final class BatchWorkCommand implements Command {
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
-        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--batch", "--lease", "--idle-poll"));
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--batch", "--lease",
+                "--idle-poll"));
         Duration lease = options.seconds("--lease", DEFAULT_LEASE);
         Duration idlePoll = options.seconds("--idle-poll", DEFAULT_IDLE_POLL);
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {

@@ -72,8 +72,7 @@ public final class ImportCommand implements Command {
         if (files.isEmpty()) {
             throw new UsageException("give at least one --file");
         }
-        Options options = Options.parse(rest, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--project"));
+        Options options = Options.parse(rest, WorkspaceLogin.optionsWith("--project"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             String code = options.text("--project");

@@ -41,8 +41,7 @@ public final class LibraryAddCommand implements Command {
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
-        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--manifest"));
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--manifest"));
         Path manifest = options.path("--manifest");
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);

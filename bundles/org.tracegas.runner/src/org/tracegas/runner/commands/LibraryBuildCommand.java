@@ -55,8 +55,7 @@ public final class LibraryBuildCommand implements Command {
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
-        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--plan", "--out"));
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--plan", "--out"));
         Path out = options.path("--out");
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);

@@ -40,8 +40,7 @@ public final class MethodDefineCommand implements Command {
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
-        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--method"));
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--method"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             MethodDefinition.Recorded recorded;

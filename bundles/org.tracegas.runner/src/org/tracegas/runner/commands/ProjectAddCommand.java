@@ -32,8 +32,7 @@ public final class ProjectAddCommand implements Command {
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
-        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--client", "--code", "--name"));
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--client", "--code", "--name"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             String clientId = store.projects().createClient(actor, options.text("--client"));

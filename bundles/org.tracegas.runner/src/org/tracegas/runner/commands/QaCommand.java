@@ -46,8 +46,8 @@ public final class QaCommand implements Command {
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
-        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--project", "--method", "--method-version", "--plan", "--qa-file"));
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--project", "--method",
+                "--method-version", "--plan", "--qa-file"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));

@@ -73,7 +73,7 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
         if (files.isEmpty() || backgroundFiles.isEmpty()) {
             throw new UsageException("give at least one --file and one --backgrounds file");
         }
-        return new QuantifyArguments(Options.parse(rest2, List.of("--workspace", "--server", "--user", "--password",
-                "--as", "--project", "--method", "--method-version")), backgroundFiles, files);
+        return new QuantifyArguments(Options.parse(rest2,
+                WorkspaceLogin.optionsWith("--project", "--method", "--method-version")), backgroundFiles, files);
     }
 }

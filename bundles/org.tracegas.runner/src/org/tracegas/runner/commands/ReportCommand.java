@@ -49,8 +49,8 @@ public final class ReportCommand implements Command {
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
-        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--project", "--method", "--method-version", "--plan", "--out"));
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--project", "--method",
+                "--method-version", "--plan", "--out"));
         Path out = options.path("--out");
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);

@@ -55,8 +55,8 @@ public final class ReportSignCommand implements Command {
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
-        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--project", "--method", "--method-version", "--plan", "--report", "--content-hash", "--meaning",
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--project", "--method",
+                "--method-version", "--plan", "--report", "--content-hash", "--meaning",
                 "--comment"));
         SignatureMeaning meaning = meaning(options.text("--meaning"));
         String reportId = options.text("--report");

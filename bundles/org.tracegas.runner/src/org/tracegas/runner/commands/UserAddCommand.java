@@ -39,8 +39,7 @@ public final class UserAddCommand implements Command {
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
-        Options options = Options.parse(arguments, List.of("--workspace", "--server", "--user", "--password", "--as",
-                "--login", "--name", "--roles"));
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--login", "--name", "--roles"));
         Set<Role> roles = roles(options.text("--roles"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             UserInfo user = store.users().createUser(WorkspaceLogin.logIn(store, options, context), options.text("--login"),

@@ -1,5 +1,8 @@
 package org.tracegas.runner.commands;
 
+import java.util.ArrayList;
+import java.util.List;
+
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.Session;
@@ -21,6 +24,13 @@ final class WorkspaceLogin {
               --as <login>                who acts; the password is read from $TRACEGAS_PASSWORD""";
 
     private WorkspaceLogin() {
+    }
+
+    /** The options of a command acting in a workspace: the workspace and log-in options, then its own. */
+    static List<String> optionsWith(String... commandOptions) {
+        List<String> all = new ArrayList<>(List.of("--workspace", "--server", "--user", "--password", "--as"));
+        all.addAll(List.of(commandOptions));
+        return all;
     }
 
     /** The workspace the options name: an embedded folder or the lab server. */
