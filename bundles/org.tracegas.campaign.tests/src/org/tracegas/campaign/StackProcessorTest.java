@@ -104,8 +104,8 @@ class StackProcessorTest {
                 Interferogram full = fixture.interferogram(truth.get(i), new Random(i));
                 Interferogram written = i != bad ? full : new Interferogram(Arrays.copyOf(full.toArray(),
                         full.size() * 3 / 4), full.laserWavenumber(), full.samplingInterval());
-                out.append(new AcquisitionHeader(fixture.zpd(), SampleKind.SAMPLE, START.plusSeconds(60L * i), 464.15,
-                        1013.0, 4.85, Map.of()), written);
+                out.append(new AcquisitionHeader(fixture.zpd(), SampleKind.SAMPLE, START.plusSeconds(60L * i), 438.15,
+                        1013.0, 6.4, Map.of()), written);
             }
             out.commit();
         }

@@ -16,11 +16,11 @@ import org.tracegas.spectrum.SpectralAxis;
  * What synthetic references to make, read from a library plan file:
  *
  * <pre>
- * library = Stack gas references 191 degC       name of the library
- * temperature = 464.15                           cell temperature, K
+ * library = Stack gas references, hot cell      name of the library
+ * temperature = 438.15                           cell temperature, K
  * pressure = 101.3                               cell pressure, kPa
- * path-length = 4.85                             cell path, m (concentration = ppm-m / path-length)
- * resolution = 0.5                               nominal resolution, cm-1
+ * path-length = 6.4                              cell path, m (concentration = ppm-m / path-length)
+ * resolution = 1.0                               nominal resolution, cm-1
  * apodization = norton-beer-medium
  * first-wavenumber = 700.02                      output axis: first point, cm-1,
  * step = 0.2410888671875                         step, cm-1 (at most half the resolution),
@@ -34,7 +34,7 @@ import org.tracegas.spectrum.SpectralAxis;
  * molar-mass = 28.010
  * line-list = co.par                             HITRAN-format line list, relative to the plan
  * partition = linear                             Q(T) ~ T (linear) or T^1.5 (non-linear)
- * ppm-m = 29.1, 87.3, 465.6                      amounts to synthesize, ppm·m
+ * ppm-m = 38.4, 115.2, 614.4                     amounts to synthesize, ppm·m
  * </pre>
  */
 public record LibraryPlan(Path file, String name, double temperatureK, double pressureKPa, double pathLengthM,

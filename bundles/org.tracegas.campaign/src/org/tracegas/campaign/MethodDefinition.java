@@ -30,7 +30,7 @@ import org.tracegas.store.WorkspaceStore;
  * <pre>
  * method = Stack gas, 8 analytes
  * library = references/library.manifest     the library folder's manifest, relative to this file
- * path-length = 4.85                         m
+ * path-length = 6.4                          m
  * nonlinearity = yes                         interpolate between references of several amounts
  * tolerance = 1e-6                           (optional) relative change at which the iteration stops
  * max-iterations = 50                        (optional)

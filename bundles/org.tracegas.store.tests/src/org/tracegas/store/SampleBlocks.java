@@ -41,7 +41,7 @@ final class SampleBlocks {
                     j == 1 ? Set.of(ResultFlag.HIGH_RESIDUAL) : Set.of(), methodVersionId, libraryVersionId, "0.1.0",
                     SHA256_OF_EMPTY));
         }
-        return new ProcessedSpectrum(MeasurementKind.SAMPLE, START.plusSeconds(60L * index), 464.15, 1013.0,
+        return new ProcessedSpectrum(MeasurementKind.SAMPLE, START.plusSeconds(60L * index), 438.15, 1013.0,
                 absorbance, SampleEncoding.FLOAT64_LE, rows);
     }
 

@@ -44,10 +44,14 @@ class DemoMethodTest {
         assertEquals(axis.first(), plan.axis().first());
         assertEquals(axis.step(), plan.axis().step());
         assertEquals(DemoScenario.GASES.size(), plan.gases().size());
+        assertEquals(DemoScenario.CELL_TEMPERATURE, plan.temperatureK());
+        assertEquals(DemoScenario.RESOLUTION, plan.resolution());
+        // the conditions travel with the plan and the references, not in the library's name
+        assertTrue(plan.name().chars().noneMatch(Character::isDigit), plan.name());
         LibraryPlan.Gas co = plan.gases().stream().filter(g -> g.compound().name().equals("CO")).findFirst()
                 .orElseThrow();
-        // CO at 0.5, 1.5 and 8 times its nominal 12 ppm over 4.85 m
-        assertEquals(List.of(29.1, 87.3, 465.6), co.ppmMetres().stream().map(v -> Math.round(v * 1e6) / 1e6)
+        // CO at 0.5, 1.5 and 8 times its nominal 12 ppm over 6.4 m
+        assertEquals(List.of(38.4, 115.2, 614.4), co.ppmMetres().stream().map(v -> Math.round(v * 1e6) / 1e6)
                 .toList());
         assertEquals(folder.resolve("line-lists/co-invented.par"), co.lineList());
 

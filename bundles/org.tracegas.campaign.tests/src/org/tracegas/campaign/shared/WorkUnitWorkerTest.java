@@ -81,7 +81,7 @@ class WorkUnitWorkerTest {
         List<ProcessedSpectrum> block = new ArrayList<>();
         for (int k = 0; k < 2; k++) {
             int minute = 2 * n + k;
-            block.add(new ProcessedSpectrum(MeasurementKind.SAMPLE, Instant.EPOCH.plusSeconds(60L * minute), 464.15,
+            block.add(new ProcessedSpectrum(MeasurementKind.SAMPLE, Instant.EPOCH.plusSeconds(60L * minute), 438.15,
                     1013.0, new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 1, 4),
                             new double[] {minute, 0, 0, minute}, Ordinate.ABSORBANCE), SampleEncoding.FLOAT32_LE,
                     List.of(new NewResult(null, "CO", minute, 0.5, 0.2, "ppm", Set.of(), methodId, libraryId,

@@ -26,7 +26,7 @@ import org.tracegas.spectrum.SpectralAxis;
 public final class DemoMethod {
 
     public static final String METHOD_NAME = "Tarnbeck hot-wet stack gas, 8 analytes";
-    public static final String LIBRARY_NAME = "Demo synthetic references 191 degC 0.5 cm-1 NB medium";
+    public static final String LIBRARY_NAME = "Demo synthetic references, Tarnbeck hot cell, NB medium";
     public static final Apodization APODIZATION = Apodization.NORTON_BEER_MEDIUM;
     /** Folder of the library, relative to the plans. */
     static final String LIBRARY_FOLDER = "library";
@@ -36,11 +36,16 @@ public final class DemoMethod {
 
     /**
      * Reference amounts relative to the nominal level: at least two per gas, so the fit can correct
-     * nonlinearity; CO reaches higher because its upsets do, NH3 because its slip rises in the afternoon.
+     * nonlinearity; CO reaches higher because its upsets do, NH3 because its slip rises in the afternoon. Water's
+     * strong lines are saturated over the cell's path, so its absorbance bends most between references and it
+     * gets one at its nominal level as well.
      */
     private static double[] referenceFactors(Gas gas) {
         if (gas == DemoScenario.CO) {
             return new double[] { 0.5, 1.5, 8.0 };
+        }
+        if (gas == DemoScenario.H2O) {
+            return new double[] { 0.5, 1.0, 1.5 };
         }
         return gas == DemoScenario.NH3 ? new double[] { 0.5, 2.0 } : new double[] { 0.5, 1.5 };
     }

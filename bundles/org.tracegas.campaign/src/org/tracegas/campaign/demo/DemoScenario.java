@@ -22,12 +22,21 @@ public final class DemoScenario {
     public static final double LASER_WAVENUMBER = 15798.0;
     /** One sample every second laser fringe: the spectrum reaches 3949.5 cm-1 before folding. */
     public static final int SAMPLING_INTERVAL = 2;
-    /** Nominal resolution, cm-1; the maximum optical path difference is its reciprocal, 2 cm. */
-    public static final double RESOLUTION = 0.5;
-    /** Cell path length of the invented multipass cell, m. */
-    public static final double PATH_LENGTH = 4.85;
-    /** Cell temperature, K (191 degC, a usual hot-wet cell temperature: common practice, no source). */
-    public static final double CELL_TEMPERATURE = 464.15;
+    /**
+     * Nominal resolution, cm-1; the maximum optical path difference is its reciprocal, 1 cm. Lines of a gas at
+     * atmospheric pressure are about 0.1 to 0.2 cm-1 wide at half height, so none is resolved at either 0.5 or
+     * 1 cm-1; the lab takes the coarser one for half the interferogram and a better signal-to-noise per scan
+     * (common practice, no source). EPA Method 320 fixes no resolution (standards notes, Method 320 §10.3).
+     */
+    public static final double RESOLUTION = 1.0;
+    /** Cell path length of the invented multipass cell: a 0.4 m base folded into 16 passes, m. */
+    public static final double PATH_LENGTH = 6.4;
+    /**
+     * Cell temperature, K (165 degC): the cell and the line are kept well above the acid and water dew points of
+     * the wet stack gas, as EPA Method 320 §6.3 asks ("sufficient to prevent condensation", no number given);
+     * the figure is the invented lab's own choice (common practice, no source).
+     */
+    public static final double CELL_TEMPERATURE = 438.15;
     /** Cell pressure, kPa. */
     public static final double CELL_PRESSURE = 101.3;
     /** Lowest and highest wavenumber processed, cm-1. */

@@ -38,7 +38,7 @@ class LibraryManifestWriterTest {
             a[i] = ppmMetres * 1e-3 / (1 + Math.pow((axis.get(i) - 2004.3) / 0.7, 2)) / 3.0;
         }
         return new ReferenceSpectrum(new Spectrum(axis, a, Ordinate.ABSORBANCE), new ReferenceMetadata(compound,
-                new ReferenceConditions(ppmMetres, 464.15, 101.3, 0.5, "NORTON_BEER_MEDIUM"),
+                new ReferenceConditions(ppmMetres, 438.15, 101.3, 0.5, "NORTON_BEER_MEDIUM"),
                 new Origin(kind, kind == OriginKind.SYNTHETIC ? "line by line, Voigt profile" : ""), 0.02));
     }
 

@@ -396,7 +396,7 @@ class AnalysisCommandsTest {
                 o2-channel = O2
                 o2-uncertainty = 0.2
                 water = H2O
-                cell-temperature = 464.15
+                cell-temperature = 438.15
                 cell-pressure = 101.3
                 reference-uncertainty = 0.02
                 path-uncertainty = 0.05

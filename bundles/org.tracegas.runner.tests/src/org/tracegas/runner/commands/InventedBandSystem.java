@@ -32,7 +32,7 @@ final class InventedBandSystem {
     static final double LASER = 15798.0;
     static final int HALF = 1024;
     static final double PATH = 4.85;
-    static final double CELL_T = 464.15;
+    static final double CELL_T = 438.15;
     static final double CELL_P = 101.3;
 
     private final Path folder;

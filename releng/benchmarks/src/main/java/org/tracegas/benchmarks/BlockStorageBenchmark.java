@@ -102,7 +102,7 @@ public class BlockStorageBenchmark {
                 results.add(new NewResult(null, compound, 10 + i, 0.5, 0.2, "ppm", Set.of(ResultFlag.HIGH_RESIDUAL),
                         method, library, "bench", "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855"));
             }
-            block.add(new ProcessedSpectrum(MeasurementKind.SAMPLE, Instant.EPOCH.plusSeconds(60L * i), 464.15,
+            block.add(new ProcessedSpectrum(MeasurementKind.SAMPLE, Instant.EPOCH.plusSeconds(60L * i), 438.15,
                     1013.0, new Spectrum(axis, values, Ordinate.ABSORBANCE),
                     SampleEncoding.FLOAT32_LE, results));
         }
