@@ -21,11 +21,11 @@ import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
 
 /**
- * Reads the spectrum export of the Kestrel K-200 analyzer, an example format of this product:
+ * Reads the spectrum export of an invented example FTIR analyzer, an example format of this product:
  *
  * <pre>
- * KESTREL K-200 EXPORT 1
- * serial: K200-0042
+ * EXAMPLE FTIR EXPORT 1
+ * serial: EX-0042
  * acquired: 2026-11-30T10:15:00Z
  * quantity: absorbance            (absorbance or transmittance)
  * points: 3
@@ -38,17 +38,17 @@ import org.tracegas.spectrum.Spectrum;
  *
  * Header lines are {@code key: value}; all header lines are kept as metadata.
  */
-public final class KestrelReader implements ImportReader {
+public final class ExampleExportReader implements ImportReader {
 
-    static final String MAGIC = "KESTREL K-200 EXPORT";
+    static final String MAGIC = "EXAMPLE FTIR EXPORT";
 
     @Override
     public Recognition recognise(byte[] head, String fileName) {
         String text = new String(head, StandardCharsets.ISO_8859_1);
         if (text.startsWith(MAGIC + " 1")) {
-            return new Recognition(0.99, "first line is the Kestrel K-200 export header");
+            return new Recognition(0.99, "first line is the example FTIR export header");
         }
-        return Recognition.no("first line is not the Kestrel K-200 export header");
+        return Recognition.no("first line is not the example FTIR export header");
     }
 
     @Override
@@ -106,7 +106,7 @@ public final class KestrelReader implements ImportReader {
         } catch (IllegalArgumentException e) {
             throw new ImportException(source, i + 2, "wavenumber", e.getMessage());
         }
-        return new ImportedData(source, "Kestrel K-200 export 1", List.of(new ImportedSpectrum(
+        return new ImportedData(source, "Example FTIR export 1", List.of(new ImportedSpectrum(
                 new Spectrum(axis, y, ordinate), metadata, 1, i + points + 2)));
     }
 
