@@ -33,7 +33,9 @@ class DemoMethodTest {
     void plansReadBackWithTheDemoNumbers() throws Exception {
         MethodDefinition method = MethodDefinition.read(write("demo.method", DemoMethod.methodText()));
         assertEquals(DemoMethod.METHOD_NAME, method.name());
-        assertEquals(9, method.analytes().size(), "8 analytes and the tracer");
+        assertEquals(9, method.analytes().size(), "8 gases of the stack and the tracer");
+        assertTrue(method.name().contains(method.analytes().size() + " analytes"), "the title counts them: "
+                + method.name());
         assertEquals(folder.resolve("library/library.manifest"), method.libraryManifest());
         assertEquals(DemoScenario.PATH_LENGTH, method.pathLengthM());
         assertEquals(Apodization.NORTON_BEER_MEDIUM, method.transform().apodization());
@@ -51,8 +53,9 @@ class DemoMethodTest {
         LibraryPlan.Gas co = plan.gases().stream().filter(g -> g.compound().name().equals("CO")).findFirst()
                 .orElseThrow();
         // CO at 0.5, 1.5 and 8 times its nominal 12 ppm over 6.4 m
-        assertEquals(List.of(38.4, 115.2, 614.4), co.ppmMetres().stream().map(v -> Math.round(v * 1e6) / 1e6)
-                .toList());
+        // written as a person writes them, not as double arithmetic leaves them (38.400000000000006)
+        assertEquals(List.of(38.4, 115.2, 614.4), co.ppmMetres());
+        assertTrue(Files.readString(folder.resolve("library.plan")).contains("ppm-m = 38.4, 115.2, 614.4\n"));
         assertEquals(folder.resolve("line-lists/co-invented.par"), co.lineList());
 
         QaPlan qa = QaPlan.read(write("qa.plan", DemoMethod.qaPlanText()));

@@ -2,6 +2,8 @@ package org.tracegas.campaign.demo;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.file.Path;
 import java.util.Locale;
 
@@ -25,7 +27,7 @@ import org.tracegas.spectrum.SpectralAxis;
  */
 public final class DemoMethod {
 
-    public static final String METHOD_NAME = "Tarnbeck hot-wet stack gas, 8 analytes";
+    public static final String METHOD_NAME = "Tarnbeck hot-wet stack gas, 9 analytes with the SF6 tracer";
     public static final String LIBRARY_NAME = "Demo synthetic references, Tarnbeck hot cell, NB medium";
     public static final Apodization APODIZATION = Apodization.NORTON_BEER_MEDIUM;
     /** Folder of the library, relative to the plans. */
@@ -140,7 +142,7 @@ public final class DemoMethod {
             StringBuilder amounts = new StringBuilder();
             for (double factor : referenceFactors(gas)) {
                 amounts.append(amounts.length() == 0 ? "" : ", ")
-                        .append(number(nominal * factor * DemoScenario.PATH_LENGTH));
+                        .append(amount(nominal * factor * DemoScenario.PATH_LENGTH));
             }
             s.append("\n[compound]\nname = ").append(gas.name()).append("\ncas = ").append(gas.casNumber())
                     .append("\nformula = ").append(gas.formula()).append("\nmolar-mass = ")
@@ -288,6 +290,14 @@ public final class DemoMethod {
         } catch (FileFormatException e) {
             throw new IllegalStateException("the demo method does not fit its library: " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * An amount as the lab writes it in a plan, to six significant digits: 12 ppm x 0.5 x 6.4 m is 38.4, not the
+     * 38.400000000000006 of double arithmetic. The plan's amount is the reference's amount from then on.
+     */
+    static String amount(double value) {
+        return new BigDecimal(value).round(new MathContext(6)).stripTrailingZeros().toPlainString();
     }
 
     /** Plain decimal with every digit a double needs, so that a plan read back gives the same numbers. */

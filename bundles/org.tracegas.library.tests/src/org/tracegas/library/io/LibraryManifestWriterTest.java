@@ -9,7 +9,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Set;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -66,6 +68,22 @@ class LibraryManifestWriterTest {
             }
         }
         assertFalse(Files.exists(dir.resolve("lib.part")));
+    }
+
+    @Test
+    void fileNamesCarryTheAmountAsPeopleWriteIt() {
+        Compound co = new Compound("CO", "630-08-0", "CO", 28.010);
+        // 12 ppm x 0.5 x 4.85 m in double arithmetic is 29.099999999999998 (IEEE 754 binary64, Java Language
+        // Specification 15.17.1); the file is named after the amount a person would write
+        double computed = 12.0 * 0.5 * 4.85;
+        assertEquals("29.099999999999998", Double.toString(computed));
+        Set<String> taken = new HashSet<>();
+        assertEquals("co-29.1.txt", LibraryManifestWriter.fileName(reference(co, computed, OriginKind.SYNTHETIC),
+                taken));
+        assertEquals("co-29.1-2.txt", LibraryManifestWriter.fileName(reference(co, 29.1, OriginKind.SYNTHETIC),
+                taken), "a second reference of the same written amount gets its own name");
+        assertEquals("co-614.4.txt", LibraryManifestWriter.fileName(reference(co, 614.4000000000001,
+                OriginKind.SYNTHETIC), taken));
     }
 
     @Test

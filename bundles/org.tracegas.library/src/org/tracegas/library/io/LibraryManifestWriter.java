@@ -2,6 +2,8 @@ package org.tracegas.library.io;
 
 import java.io.IOException;
 import java.io.Writer;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -81,10 +83,16 @@ public final class LibraryManifestWriter {
         m.append("uncertainty = ").append(r.metadata().relativeUncertainty()).append('\n');
     }
 
-    /** A file name from the compound and its amount, made unique within the folder. */
-    private static String fileName(ReferenceSpectrum r, Set<String> taken) {
-        String base = (r.compound().formula() + "-" + r.metadata().conditions().concentrationPathLength())
-                .toLowerCase(Locale.ROOT).replaceAll("[^a-z0-9.+-]", "_");
+    /**
+     * A file name from the compound and its amount as a person writes it (six significant digits, so an amount
+     * computed as 29.099999999999998 is named 29.1), made unique within the folder; the manifest keeps the exact
+     * amount.
+     */
+    static String fileName(ReferenceSpectrum r, Set<String> taken) {
+        String amount = new BigDecimal(r.metadata().conditions().concentrationPathLength())
+                .round(new MathContext(6)).stripTrailingZeros().toPlainString();
+        String base = (r.compound().formula() + "-" + amount).toLowerCase(Locale.ROOT)
+                .replaceAll("[^a-z0-9.+-]", "_");
         String name = base + ".txt";
         for (int i = 2; !taken.add(name); i++) {
             name = base + "-" + i + ".txt";
