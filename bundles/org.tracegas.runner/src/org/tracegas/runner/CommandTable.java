@@ -7,9 +7,17 @@ import java.util.Collections;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import java.util.logging.Level;
+import java.util.logging.Logger;
+
+import org.tracegas.store.AccessDeniedException;
+import org.tracegas.store.LoginFailedException;
+import org.tracegas.store.StoreException;
 
 /** The runner's commands by name, and the dispatch of one command line to one of them. */
 public final class CommandTable {
+
+    private static final Logger LOG = Logger.getLogger(CommandTable.class.getName());
 
     private final Map<String, Command> commands = new TreeMap<>();
     private final String version;
@@ -27,16 +35,24 @@ public final class CommandTable {
         return Collections.unmodifiableCollection(commands.values());
     }
 
+    private static final String HELP_USAGE = """
+            usage: tracegas help [<command>]
+              Lists the commands, or explains one: its arguments, options and exit codes.
+            exit codes: 0 done, 2 no such command""";
+    private static final String VERSION_USAGE = """
+            usage: tracegas version
+              Prints the version of the runner.
+            exit codes: 0 done""";
+
     /** Runs the command a command line names; prints help for an empty line or "help". */
     public int dispatch(String[] argv, RunnerContext context) {
         if (argv.length == 0 || argv[0].equals("help") || argv[0].equals("--help")) {
             if (argv.length > 1) {
-                Command c = commands.get(argv[1]);
-                if (c == null) {
-                    context.err().println("tracegas: no command '" + argv[1] + "'; 'help' lists them");
-                    return ExitCode.USAGE;
+                String usage = usage(argv[1]);
+                if (usage == null) {
+                    return noSuchCommand(argv[1], context);
                 }
-                context.out().println(c.usage());
+                context.out().println(usage);
                 return ExitCode.OK;
             }
             printOverview(context);
@@ -48,8 +64,7 @@ public final class CommandTable {
         }
         Command c = commands.get(argv[0]);
         if (c == null) {
-            context.err().println("tracegas: no command '" + argv[0] + "'; 'help' lists them");
-            return ExitCode.USAGE;
+            return noSuchCommand(argv[0], context);
         }
         List<String> args = new ArrayList<>(Arrays.asList(argv).subList(1, argv.length));
         if (args.contains("--help")) {
@@ -60,12 +75,45 @@ public final class CommandTable {
             return c.run(args, context);
         } catch (UsageException e) {
             context.err().println("tracegas " + c.name() + ": " + e.getMessage());
-            context.err().println(c.usage());
+            if (e.showUsage()) {
+                context.err().println(c.usage());
+            }
             return ExitCode.USAGE;
+        } catch (LoginFailedException | AccessDeniedException e) {
+            context.err().println("tracegas " + c.name() + ": refused: " + e.getMessage());
+            return ExitCode.REFUSED;
+        } catch (StoreException e) {
+            // the message says what failed in words; the database's own text is for the log, not the console
+            context.err().println("tracegas " + c.name() + ": " + e.getMessage());
+            LOG.log(Level.WARNING, c.name() + " failed", e);
+            return ExitCode.FAILURE;
         } catch (Exception e) {
             context.err().println("tracegas " + c.name() + ": " + describe(e));
+            LOG.log(Level.WARNING, c.name() + " failed", e);
             return ExitCode.FAILURE;
         }
+    }
+
+    /** The help text of a command or of the table's own words, or null if there is no such command. */
+    private String usage(String name) {
+        if (name.equals("help")) {
+            return HELP_USAGE;
+        }
+        if (name.equals("version")) {
+            return VERSION_USAGE;
+        }
+        Command c = commands.get(name);
+        return c == null ? null : c.usage();
+    }
+
+    private int noSuchCommand(String name, RunnerContext context) {
+        List<String> names = new ArrayList<>(commands.keySet());
+        names.add("help");
+        names.add("version");
+        context.err().println("tracegas: no command '" + name + "'"
+                + NearestName.of(name, names).map(n -> "; did you mean " + n + "?").orElse("")
+                + " ('help' lists them)");
+        return ExitCode.USAGE;
     }
 
     private static String describe(Throwable e) {
@@ -87,8 +135,7 @@ public final class CommandTable {
             context.out().printf("  %-16s %s%n", c.name(), c.summary());
         }
         context.out().println();
-        context.out().println("Exit codes: 0 done, 1 a check failed, 2 wrong command line, 3 bad input, "
-                + "4 cancelled, 5 failure.");
+        context.out().println("Exit codes: " + ExitCode.SUMMARY + ".");
         context.out().println("Caution: results concern toxic gases and may feed compliance decisions; they need "
                 + "review by qualified staff under local regulations and accredited practice.");
     }

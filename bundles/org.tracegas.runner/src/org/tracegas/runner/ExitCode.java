@@ -15,6 +15,15 @@ public final class ExitCode {
     public static final int CANCELLED = 4;
     /** An unexpected failure. */
     public static final int FAILURE = 5;
+    /**
+     * The workspace refused the user: unknown login or wrong password, a locked account, or a role or project
+     * grant the job needs is missing. Nothing was done; a refusal is not a failure of the software.
+     */
+    public static final int REFUSED = 6;
+
+    /** The exit codes in one line, for help texts. */
+    public static final String SUMMARY = "0 done, 1 a check failed, 2 wrong command line or no such workspace, "
+            + "3 bad input, 4 cancelled, 5 failure, 6 refused (log-in, locked account or missing rights)";
 
     private ExitCode() {
     }

@@ -1,5 +1,6 @@
 package org.tracegas.store;
 
+import java.util.Optional;
 import java.util.Set;
 
 import org.tracegas.model.Role;
@@ -46,6 +47,9 @@ public interface UserService {
 
     /** @throws NoSuchObjectException if there is no such user */
     UserInfo user(String userId);
+
+    /** The user with this login, if any; for an administrator's commands that name users by login. */
+    Optional<UserInfo> findByLogin(String login);
 
     /** Whether the workspace has any user yet (before the first administrator, it has none). */
     boolean hasUsers();

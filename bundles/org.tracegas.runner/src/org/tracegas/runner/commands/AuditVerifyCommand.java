@@ -31,7 +31,7 @@ public final class AuditVerifyCommand implements Command {
                   Walks the whole audit chain in order and checks each record's hash and its link to the one
                   before. Prints the number of records and, for each finding, its kind (ALTERED, REMOVED,
                   INSERTED, REORDERED), sequence number and record id.
-                exit codes: 0 chain intact, 1 findings, 2 wrong arguments, 5 failure""";
+                exit codes: 0 chain intact, 1 findings, 2 wrong arguments or no workspace in the folder, 5 failure""";
     }
 
     @Override

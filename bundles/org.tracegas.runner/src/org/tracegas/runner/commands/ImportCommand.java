@@ -69,10 +69,11 @@ public final class ImportCommand implements Command {
                 rest.add(arguments.get(i));
             }
         }
+        // --file is among the accepted options only so that a mistyped one is told its nearest name
+        Options options = Options.parse(rest, WorkspaceLogin.optionsWith("--project", "--file"));
         if (files.isEmpty()) {
             throw new UsageException("give at least one --file");
         }
-        Options options = Options.parse(rest, WorkspaceLogin.optionsWith("--project"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             String code = options.text("--project");

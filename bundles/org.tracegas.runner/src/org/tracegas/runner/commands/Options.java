@@ -6,6 +6,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
+import org.tracegas.runner.NearestName;
 import org.tracegas.runner.UsageException;
 
 /** The "--name value" options of a command line, checked against the names a command accepts. */
@@ -22,7 +23,9 @@ final class Options {
         for (int i = 0; i < arguments.size(); i++) {
             String name = arguments.get(i);
             if (!accepted.contains(name)) {
-                throw new UsageException("unknown argument '" + name + "'; accepted: " + String.join(", ", accepted));
+                throw new UsageException("unknown option '" + name + "'"
+                        + NearestName.of(name, accepted).map(n -> "; did you mean " + n + "?").orElse("")
+                        + " Accepted: " + String.join(", ", accepted));
             }
             if (i + 1 >= arguments.size()) {
                 throw new UsageException("option " + name + " needs a value");

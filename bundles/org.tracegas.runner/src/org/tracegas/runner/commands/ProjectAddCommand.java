@@ -6,6 +6,7 @@ import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
+import org.tracegas.store.ClientInfo;
 import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
@@ -27,7 +28,9 @@ public final class ProjectAddCommand implements Command {
     public String usage() {
         return "usage: tracegas project-add <workspace and --as options> --client <client name> --code <code>\n"
                 + "                            --name <project name>\n" + WorkspaceLogin.USAGE + "\n"
-                + "exit codes: 0 added, 2 wrong arguments, 5 failure";
+                + "  A project of a client the user already works for joins that client.\n"
+                + "exit codes: 0 added, 2 wrong arguments, 5 failure (for example: the client has a project of that "
+                + "code already), 6 refused";
     }
 
     @Override
@@ -35,7 +38,10 @@ public final class ProjectAddCommand implements Command {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--client", "--code", "--name"));
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            String clientId = store.projects().createClient(actor, options.text("--client"));
+            // a client's second project joins the client the user already works for
+            String client = options.text("--client");
+            String clientId = store.projects().clients(actor).stream().filter(c -> c.name().equals(client))
+                    .map(ClientInfo::id).findFirst().orElseGet(() -> store.projects().createClient(actor, client));
             ProjectInfo project = store.projects().createProject(actor, clientId, options.text("--code"),
                     options.text("--name"));
             context.out().println("Added project " + project.code() + " (" + project.id() + ")");

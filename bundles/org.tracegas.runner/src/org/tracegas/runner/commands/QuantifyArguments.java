@@ -70,10 +70,12 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
         List<Path> files = Options.repeated(arguments, "--file", rest);
         List<String> rest2 = new ArrayList<>();
         List<Path> backgroundFiles = Options.repeated(rest, "--backgrounds", rest2);
+        // the repeated options are among the accepted ones only so that a mistyped one is told its nearest name
+        Options options = Options.parse(rest2, WorkspaceLogin.optionsWith("--project", "--method",
+                "--method-version", "--file", "--backgrounds"));
         if (files.isEmpty() || backgroundFiles.isEmpty()) {
             throw new UsageException("give at least one --file and one --backgrounds file");
         }
-        return new QuantifyArguments(Options.parse(rest2,
-                WorkspaceLogin.optionsWith("--project", "--method", "--method-version")), backgroundFiles, files);
+        return new QuantifyArguments(options, backgroundFiles, files);
     }
 }

@@ -34,7 +34,7 @@ public final class UserAddCommand implements Command {
                 + "                         --roles <role>[,<role>...]\n" + WorkspaceLogin.USAGE + "\n"
                 + "  roles: analyst, reviewer, quality-manager, administrator\n"
                 + "  The new user's password is read from $" + NEW_PASSWORD_VARIABLE + ".\n"
-                + "exit codes: 0 added, 2 wrong arguments, 5 failure (for example: not an administrator)";
+                + "exit codes: 0 added, 2 wrong arguments, 5 failure, 6 refused (for example: not an administrator)";
     }
 
     @Override

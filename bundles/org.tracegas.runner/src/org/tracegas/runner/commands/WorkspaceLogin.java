@@ -1,5 +1,7 @@
 package org.tracegas.runner.commands;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
@@ -18,10 +20,14 @@ import org.tracegas.store.Workspaces;
 final class WorkspaceLogin {
 
     static final String PASSWORD_VARIABLE = "TRACEGAS_PASSWORD";
+    /** The embedded database's file in the workspace's db folder (H2 names it after the database). */
+    static final String H2_FILE = "workspace.mv.db";
     static final String USAGE = """
               --workspace <folder>        the workspace on the embedded database, or
               --server <jdbc url> --user <db user> --password <db password>   the lab server
-              --as <login>                who acts; the password is read from $TRACEGAS_PASSWORD""";
+              --as <login>                who acts; the password is read from $TRACEGAS_PASSWORD
+              exit code 2 also when the --workspace folder holds no workspace (it is never created here);
+              exit code 6: refused (unknown login or wrong password, locked account, or missing role or grant)""";
 
     private WorkspaceLogin() {
     }
@@ -33,8 +39,26 @@ final class WorkspaceLogin {
         return all;
     }
 
-    /** The workspace the options name: an embedded folder or the lab server. */
+    /**
+     * The existing workspace the options name: an embedded folder or the lab server. A command that reads or
+     * adds to a workspace never creates one, so a mistyped folder is named instead of becoming an empty
+     * workspace.
+     *
+     * @throws UsageException naming the folder if it holds no workspace
+     */
     static WorkspaceStore open(Options options) throws UsageException {
+        if (options.has("--workspace") && !options.has("--server")) {
+            Path folder = options.path("--workspace");
+            if (!Files.isRegularFile(folder.resolve("db").resolve(H2_FILE))) {
+                throw new UsageException("no workspace in " + folder + " (it has no db/" + H2_FILE + "); check the "
+                        + "folder, or create a workspace there with workspace-init", false);
+            }
+        }
+        return openOrCreate(options);
+    }
+
+    /** The workspace the options name, created (schema and all) when it does not exist yet. */
+    static WorkspaceStore openOrCreate(Options options) throws UsageException {
         if (options.has("--workspace") == options.has("--server")) {
             throw new UsageException("give either --workspace <folder> or --server <jdbc url>");
         }

@@ -6,6 +6,7 @@ import org.eclipse.equinox.app.IApplication;
 import org.eclipse.equinox.app.IApplicationContext;
 import org.osgi.framework.FrameworkUtil;
 import org.tracegas.quantify.CancellationFlag;
+import org.tracegas.runner.Command;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.commands.AuditVerifyCommand;
 import org.tracegas.runner.commands.BatchSplitCommand;
@@ -22,6 +23,7 @@ import org.tracegas.runner.commands.QuantifyCommand;
 import org.tracegas.runner.commands.ReportCommand;
 import org.tracegas.runner.commands.ReportSignCommand;
 import org.tracegas.runner.commands.UserAddCommand;
+import org.tracegas.runner.commands.UserUnlockCommand;
 import org.tracegas.runner.commands.WorkspaceInitCommand;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.runner.RunnerContext;
@@ -35,13 +37,17 @@ public final class RunnerApplication implements IApplication {
     public Object start(IApplicationContext context) {
         String[] argv = (String[]) context.getArguments().get(IApplicationContext.APPLICATION_ARGS);
         String version = FrameworkUtil.getBundle(getClass()).getVersion().toString();
-        CommandTable table = new CommandTable(version, List.of(new DemoCommand(cancel), new AuditVerifyCommand(),
-                new WorkspaceInitCommand(), new UserAddCommand(), new ProjectAddCommand(),
-                new ImportCommand(ReaderRegistry.fromPlatform()), new LibraryBuildCommand(cancel),
-                new LibraryAddCommand(), new MethodDefineCommand(), new QuantifyCommand(cancel), new QaCommand(),
-                new ReportCommand(), new ReportSignCommand(), new BatchSplitCommand(), new BatchWorkCommand(cancel),
-                new BatchStatusCommand()));
+        CommandTable table = new CommandTable(version, commands(cancel, ReaderRegistry.fromPlatform()));
         return table.dispatch(argv == null ? new String[0] : argv, new RunnerContext(System.out, System.err));
+    }
+
+    /** Every command of the runner. */
+    static List<Command> commands(CancellationFlag cancel, ReaderRegistry readers) {
+        return List.of(new DemoCommand(cancel), new AuditVerifyCommand(), new WorkspaceInitCommand(),
+                new UserAddCommand(), new UserUnlockCommand(), new ProjectAddCommand(), new ImportCommand(readers),
+                new LibraryBuildCommand(cancel), new LibraryAddCommand(), new MethodDefineCommand(),
+                new QuantifyCommand(cancel), new QaCommand(), new ReportCommand(), new ReportSignCommand(),
+                new BatchSplitCommand(), new BatchWorkCommand(cancel), new BatchStatusCommand());
     }
 
     @Override

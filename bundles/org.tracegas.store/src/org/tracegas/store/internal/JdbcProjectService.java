@@ -21,6 +21,7 @@ import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.Session;
+import org.tracegas.store.StoreException;
 
 final class JdbcProjectService implements ProjectService {
 
@@ -35,6 +36,9 @@ final class JdbcProjectService implements ProjectService {
         JdbcUserService.requireText("name", name);
         return transactions.run("creating client " + name, tx -> {
             Guard.roles(tx, actor);
+            if (tx.queryOne("SELECT 1 FROM client WHERE name = ?", rs -> 1, name).isPresent()) {
+                throw new StoreException("a client named '" + name + "' exists already in this workspace");
+            }
             String id = UUID.randomUUID().toString();
             tx.update("INSERT INTO client (id, name, row_version) VALUES (?, ?, 0)", id, name);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "client", id)
@@ -51,6 +55,11 @@ final class JdbcProjectService implements ProjectService {
             Guard.roles(tx, actor);
             if (tx.queryOne("SELECT 1 FROM client WHERE id = ?", rs -> 1, clientId).isEmpty()) {
                 throw new NoSuchObjectException("client", clientId);
+            }
+            if (tx.queryOne("SELECT 1 FROM project WHERE client_id = ? AND code = ?", rs -> 1, clientId, code)
+                    .isPresent()) {
+                throw new StoreException("the client has a project with the code '" + code
+                        + "' already; choose another code");
             }
             ProjectInfo project = new ProjectInfo(UUID.randomUUID().toString(), clientId, code, name, 0);
             tx.update("INSERT INTO project (id, client_id, code, name, row_version) VALUES (?, ?, ?, ?, 0)",

@@ -4,6 +4,7 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.LinkedHashMap;
 import java.util.Map;
+import java.util.Optional;
 import java.util.Set;
 import java.util.UUID;
 
@@ -166,6 +167,13 @@ final class JdbcUserService implements UserService {
     @Override
     public UserInfo user(String userId) {
         return transactions.run("reading user " + userId, tx -> load(tx, userId));
+    }
+
+    @Override
+    public Optional<UserInfo> findByLogin(String login) {
+        return transactions.run("finding user " + login,
+                tx -> tx.queryOne("SELECT " + USER_COLUMNS + " FROM app_user WHERE login = ?", JdbcUserService::map,
+                        login));
     }
 
     private static UserInfo load(Tx tx, String userId) throws SQLException {

@@ -93,10 +93,33 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
                 AuditSchema.install(c);
             }
         } catch (SQLException | RuntimeException e) {
-            store.close();
-            throw new StoreException("opening the workspace store failed: " + e.getMessage(), e);
+            StoreException failure = new StoreException("opening the workspace failed: " + openingFailure(e), e);
+            try {
+                store.close();
+            } catch (RuntimeException closing) {
+                // the opening failure is what the user must see; closing a database that never opened fails too
+                failure.addSuppressed(closing);
+            }
+            throw failure;
         }
         return store;
+    }
+
+    /**
+     * Why a workspace did not open, as a sentence. H2 reports a database file locked by another process with
+     * error code 90020 (DATABASE_ALREADY_OPEN_1 in H2's ErrorCode); the usual holder is the workbench.
+     */
+    private static String openingFailure(Throwable e) {
+        for (Throwable t = e; t != null; t = t.getCause()) {
+            if (t instanceof SQLException sql && sql.getErrorCode() == 90020) {
+                return "the database is in use by another program, for example the workbench with this "
+                        + "workspace open; close it there and try again";
+            }
+            if (t.getCause() == t) {
+                break;
+            }
+        }
+        return e.getMessage();
     }
 
     @Override

@@ -40,8 +40,18 @@ final class Transactions {
                 throw e;
             }
         } catch (SQLException e) {
-            throw new StoreException(operation + " failed: " + e.getMessage(), e);
+            throw new StoreException(operation + " failed: " + sentence(e), e);
         }
+    }
+
+    /**
+     * What went wrong, said for people where it can be foreseen. SQLSTATE 23505 is the unique-constraint
+     * violation of the SQL standard, which both H2 and PostgreSQL report; the database's own text stays in the
+     * cause.
+     */
+    static String sentence(SQLException e) {
+        return "23505".equals(e.getSQLState()) ? "a record with the same name, code or number exists already"
+                : e.getMessage();
     }
 
     /** A connection for a reader that outlives this call (a streamed query); the caller closes it. */
