@@ -10,6 +10,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.HashMap;
+import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
 
@@ -32,8 +33,11 @@ class PdfReportWriterTest {
     static void write() throws IOException {
         content = CampaignFixture.reviewed();
         pdf = new PdfReportWriter().write(content);
-        // kept for looking at the pages; the tests read the bytes
-        Files.write(Path.of(System.getProperty("java.io.tmpdir"), "tracegas-report-test.pdf"), pdf);
+        // the tests read the bytes; -Dtracegas.test.keep-report=<file> keeps the pages to look at
+        String keep = System.getProperty("tracegas.test.keep-report");
+        if (keep != null) {
+            Files.write(Path.of(keep), pdf);
+        }
     }
 
     private static String text(PDDocument doc, int first, int last) throws IOException {
@@ -41,6 +45,20 @@ class PdfReportWriterTest {
         s.setStartPage(first);
         s.setEndPage(last);
         return s.getText(doc);
+    }
+
+    @Test
+    void firstPageSaysThatQaChecksFailed() throws IOException {
+        long failed = content.qa().stream().filter(q -> !q.passed()).count();
+        assertTrue(failed >= CampaignFixture.FAILED_NH3_ZEROS.size(), "the fixture has failed NH3 zeros");
+        try (PDDocument doc = Loader.loadPDF(pdf)) {
+            String first = text(doc, 1, 1);
+            assertTrue(first.contains("Quality assurance: " + failed + " of " + content.qa().size()
+                    + " QA readings FAILED"), first);
+        }
+        QaLine zero = new QaLine("Zero CO", true, "0.01 ppm", "|x| <= 0.5 ppm", "zero", "common practice");
+        assertEquals("Quality assurance: all 2 QA readings passed (section 4).", PdfReportWriter.qaVerdict(
+                List.of(zero, zero)));
     }
 
     @Test

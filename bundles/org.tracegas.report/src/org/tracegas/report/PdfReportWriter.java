@@ -110,15 +110,29 @@ public final class PdfReportWriter {
 
     private static void titleBlock(PageWriter pw, ReportContent content) {
         Campaign c = content.campaign();
-        pw.ensure(80);
+        pw.ensure(96);
         pw.down(20);
         pw.text(pw.bold(), 18, pw.left(), pw.y(), "Emission measurement report");
         pw.down(18);
         pw.text(pw.regular(), 11, pw.left(), pw.y(),
                 "Extractive FTIR measurements at " + c.plant() + ", " + c.source());
+        pw.down(16);
+        // the QA verdict stands on the first page, so that a failed check is not first seen in section 4
+        pw.text(pw.bold(), 10.5f, pw.left(), pw.y(), qaVerdict(content.qa()));
         pw.down(6);
         pw.line(pw.left(), pw.y(), pw.left() + pw.width(), pw.y(), 1.2f, 0f);
         pw.down(4);
+    }
+
+    /** One line: whether every QA reading passed, or how many failed. */
+    static String qaVerdict(List<QaLine> qa) {
+        long failed = qa.stream().filter(q -> !q.passed()).count();
+        if (qa.isEmpty()) {
+            return "Quality assurance: no QA checks are recorded; see section 4.";
+        }
+        return failed == 0 ? "Quality assurance: all " + qa.size() + " QA readings passed (section 4)."
+                : "Quality assurance: " + failed + " of " + qa.size() + " QA readings FAILED; see section 4 "
+                        + "before using the results.";
     }
 
     private static void campaign(PageWriter pw, ReportContent content) {

@@ -1,6 +1,7 @@
 package org.tracegas.store;
 
 import java.util.List;
+import java.util.Optional;
 
 import org.tracegas.audit.Signature;
 import org.tracegas.audit.SignatureRefusedException;
@@ -37,6 +38,12 @@ public interface ReviewService {
      * @throws AccessDeniedException if the reader cannot read the project
      */
     List<Signature> signatures(Session reader, String projectId, String reportId);
+
+    /**
+     * The code of another project of the workspace that has a signed report of this id, if any: a report id
+     * names one report in the whole workspace, so that a signature quoted by its report id is never ambiguous.
+     */
+    Optional<String> otherProjectWithReport(String projectId, String reportId);
 
     /**
      * Signs a stored result in the signer's session. The signed content is the UTF-8 text of the lines

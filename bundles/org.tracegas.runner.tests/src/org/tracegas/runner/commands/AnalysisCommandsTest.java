@@ -261,7 +261,12 @@ class AnalysisCommandsTest {
     private void laterCampaignIsChartedAgainstThisOne(Path qaPlan, Path reportPlan) throws Exception {
         String[] where = { "--workspace", ws, "--as", "ana", "--project", "P-4", "--method", "Stack" };
         ok(concat(where, "quantify", "--backgrounds", qaFile.toString(), "--file", stackFile.toString()));
-        ok(concat(where, "qa", "--plan", qaPlan.toString(), "--qa-file", qaFile.toString()));
+        // a noise limit far below the noise of the spectra: the noise check of this campaign fails
+        Path strictPlan = folder.resolve("strict-qa.plan");
+        Files.writeString(strictPlan, Files.readString(qaPlan).replace("maximum-noise = 2e-3",
+                "maximum-noise = 1e-9"));
+        assertEquals(ExitCode.CHECK_FAILED, run(concat(where, "qa", "--plan", strictPlan.toString(), "--qa-file",
+                qaFile.toString())));
         try (WorkspaceStore store = open()) {
             String project = store.projects().findByCode(ana(store), "P-4").orElseThrow().id();
             String rule = store.qa().checks(ana(store), project).stream()
@@ -270,13 +275,27 @@ class AnalysisCommandsTest {
             assertTrue(rule.contains("the latest 2 readings of earlier campaigns"), rule);
         }
         Path report = folder.resolve("report-P-4");
-        ok(concat(where, "report", "--plan", reportPlan.toString(), "--out", report.toString()));
+        // R-TEST-1 is signed on P-1: the same id on another project would make its signatures ambiguous
+        err.reset();
+        assertEquals(ExitCode.BAD_INPUT, run(concat(where, "report", "--plan", reportPlan.toString(), "--out",
+                report.toString())));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("report id R-TEST-1 is signed already on project "
+                + "P-1"), err.toString());
+        assertFalse(Files.exists(report.resolve("report.pdf")), "nothing written");
+        Path laterPlan = folder.resolve("later-report.plan");
+        Files.writeString(laterPlan, reportPlanText("o2.csv").replace("report-id = R-TEST-1", "report-id = R-TEST-4"));
+        reportPlan = laterPlan;
+        out.reset();
+        assertEquals(ExitCode.CHECK_FAILED, run(concat(where, "report", "--plan", reportPlan.toString(), "--out",
+                report.toString())), "written, but a QA reading failed: " + err);
+        assertTrue(out.toString(StandardCharsets.UTF_8).contains("QA readings failed"), out.toString());
+        assertTrue(pdfText(report).contains("QA readings FAILED"), "the first page says so");
         assertTrue(pdfText(report).contains("(limits from earlier campaigns)"), "history set the limits");
 
         Path otherBaseline = folder.resolve("other-baseline.plan");
         Files.writeString(otherBaseline, qaPlanText("lib/library.manifest").replace("baseline = 2", "baseline = 3"));
         Path otherReportPlan = folder.resolve("other-report.plan");
-        Files.writeString(otherReportPlan, reportPlanText("o2.csv").replace("qa-plan = qa.plan",
+        Files.writeString(otherReportPlan, Files.readString(reportPlan).replace("qa-plan = qa.plan",
                 "qa-plan = other-baseline.plan"));
         err.reset();
         assertEquals(ExitCode.BAD_INPUT, run(concat(where, "report", "--plan", otherReportPlan.toString(), "--out",

@@ -3,6 +3,7 @@ package org.tracegas.runner.commands;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 
 import org.tracegas.campaign.CampaignReport;
 import org.tracegas.campaign.ReportPlan;
@@ -43,8 +44,11 @@ public final class ReportCommand implements Command {
                   such as '100 per 30 min'), and the QA plan whose control charts the report draws again
                   (qa-plan). Writes report.pdf and results.csv into --out, each whole, and prints the report id
                   and content hash that report-sign is given, and the signatures given on the report.
-                exit codes: 0 written, 2 wrong arguments, 3 bad plan or O2 file (file, line and field named;
-                  nothing written), 5 failure (for example: no stored results or QA checks yet)""";
+                  A report id names one report in the workspace: an id signed on another project is refused.
+                exit codes: 0 written and every QA reading passed, 1 written but a QA reading failed (the first
+                  page says so), 2 wrong arguments, 3 bad plan or O2 file (file, line and field named; nothing
+                  written) or a report id of another project, 5 failure (for example: no stored results or QA
+                  checks yet), 6 refused""";
     }
 
     @Override
@@ -64,6 +68,14 @@ public final class ReportCommand implements Command {
                 context.err().println("tracegas report: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
+            String reportId = content.campaign().reportId();
+            Optional<String> other = store.reviews().otherProjectWithReport(project.id(), reportId);
+            if (other.isPresent()) {
+                context.err().println("tracegas report: report id " + reportId + " is signed already on project "
+                        + other.get() + " of this workspace; give this report its own report-id in the plan "
+                        + options.path("--plan") + " (nothing written)");
+                return ExitCode.BAD_INPUT;
+            }
             Files.createDirectories(out);
             CampaignReport.write(content, out.resolve("report.pdf"), out.resolve("results.csv"));
             context.out().println("Report: " + out.resolve("report.pdf"));
@@ -75,6 +87,12 @@ public final class ReportCommand implements Command {
                 context.out().println("Signature: " + s.meaning() + " by " + s.printedName() + " at " + s.signedAt()
                         + (s.signedContentHash().equals(content.contentHash()) ? ""
                                 : " (on earlier content " + s.signedContentHash() + ")"));
+            }
+            long failed = content.qa().stream().filter(q -> !q.passed()).count();
+            if (failed > 0) {
+                context.out().println("QA: " + failed + " of " + content.qa().size() + " QA readings failed; the "
+                        + "report says so on its first page");
+                return ExitCode.CHECK_FAILED;
             }
             return ExitCode.OK;
         }

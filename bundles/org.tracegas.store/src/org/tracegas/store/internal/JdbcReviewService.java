@@ -3,6 +3,7 @@ package org.tracegas.store.internal;
 import java.sql.SQLException;
 import java.util.Arrays;
 import java.util.List;
+import java.util.Optional;
 
 import org.tracegas.audit.CredentialCheck;
 import org.tracegas.audit.Signature;
@@ -65,6 +66,24 @@ final class JdbcReviewService implements ReviewService {
     public List<Signature> signatures(Session reader, String projectId, String reportId) {
         return signatures(reader, "reading the signatures of report " + reportId,
                 report(projectId, reportId, null, null));
+    }
+
+    @Override
+    public Optional<String> otherProjectWithReport(String projectId, String reportId) {
+        return transactions.run("looking for report " + reportId + " in other projects", tx -> {
+            // the object id is "<project id>/<report id>"; project ids are UUIDs, which hold no slash
+            List<String> projects = tx.queryList("SELECT DISTINCT object_id FROM audit_record WHERE object_type = ?",
+                    rs -> rs.getString(1), OBJECT_TYPE).stream().filter(id -> id.endsWith("/" + reportId))
+                    .map(id -> id.substring(0, id.indexOf('/'))).filter(p -> !p.equals(projectId)).toList();
+            for (String other : projects) {
+                Optional<String> code = tx.queryOne("SELECT code FROM project WHERE id = ?", rs -> rs.getString(1),
+                        other);
+                if (code.isPresent()) {
+                    return code;
+                }
+            }
+            return Optional.empty();
+        });
     }
 
     @Override
