@@ -83,13 +83,13 @@ public final class CommandTable {
             context.err().println("tracegas " + c.name() + ": refused: " + e.getMessage());
             return ExitCode.REFUSED;
         } catch (StoreException e) {
-            // the message says what failed in words; the database's own text is for the log, not the console
+            // the message says what failed in words; the database's own text goes to the log file, not the console
             context.err().println("tracegas " + c.name() + ": " + e.getMessage());
-            LOG.log(Level.WARNING, c.name() + " failed", e);
+            LOG.log(Level.INFO, "details of the failure of " + c.name(), e);
             return ExitCode.FAILURE;
         } catch (Exception e) {
             context.err().println("tracegas " + c.name() + ": " + describe(e));
-            LOG.log(Level.WARNING, c.name() + " failed", e);
+            LOG.log(Level.INFO, "details of the failure of " + c.name(), e);
             return ExitCode.FAILURE;
         }
     }

@@ -37,8 +37,11 @@ public final class RunnerApplication implements IApplication {
     public Object start(IApplicationContext context) {
         String[] argv = (String[]) context.getArguments().get(IApplicationContext.APPLICATION_ARGS);
         String version = FrameworkUtil.getBundle(getClass()).getVersion().toString();
-        CommandTable table = new CommandTable(version, commands(cancel, ReaderRegistry.fromPlatform()));
-        return table.dispatch(argv == null ? new String[0] : argv, new RunnerContext(System.out, System.err));
+        String[] line = argv == null ? new String[0] : argv;
+        try (RunnerLogging logging = RunnerLogging.configure(List.of(line))) {
+            CommandTable table = new CommandTable(version, commands(cancel, ReaderRegistry.fromPlatform()));
+            return table.dispatch(line, new RunnerContext(System.out, System.err));
+        }
     }
 
     /** Every command of the runner. */
