@@ -57,6 +57,16 @@ public final class DemoCampaign {
     static final char[] DEMO_PASSWORD = "demo-only-Tarnbeck-2026".toCharArray();
     private static final String SOFTWARE = "tracegas-demo";
 
+    /**
+     * The demo users and their password, as the demo command prints them: they exist in the demo's workspace
+     * only, which the demo makes; the product has no users or passwords of its own anywhere else.
+     */
+    public static String demoUsers() {
+        return "Demo users of this workspace (demo password " + new String(DEMO_PASSWORD) + ", for the demo only): "
+                + ADMIN + " (administrator), " + ANALYST + " (analyst), " + REVIEWER
+                + " (reviewer and quality manager)";
+    }
+
     /** What a run did, for the runner to print and the tests to check. */
     public record Outcome(long spectraProcessed, boolean reusedResults, boolean cancelled, Path report, Path csv,
             List<CheckOutcome> qa, VerificationReport audit) {

@@ -39,7 +39,7 @@ public final class DemoCommand implements Command {
                   workspace in <folder>/db, runs the QA checks, writes the PDF report and the CSV of results
                   into the --out folder and verifies the audit trail. A second run reuses the workspace and
                   makes the report again from the stored results.
-                  Demo users: admin, r.achterberg (analyst), i.halvorsen (reviewer); demo data only.
+                  Makes the demo users in this workspace only and prints them with their demo password.
                 exit codes: 0 done and every QA check passed, 1 a QA check failed or the audit chain is broken,
                   2 wrong arguments, 3 bad input file, 4 cancelled, 5 failure""";
     }
@@ -68,6 +68,7 @@ public final class DemoCommand implements Command {
                 outcome.audit().intact() ? "chain intact" : "CHAIN BROKEN: " + outcome.audit().findings());
         context.out().println("Report: " + outcome.report());
         context.out().println("Results: " + outcome.csv());
+        context.out().println(DemoCampaign.demoUsers());
         context.out().printf("Wall time: %.1f s%n", (System.nanoTime() - started) / 1e9);
         context.out().println("Caution: demo data are invented and the references synthetic; real results need review "
                 + "by qualified staff under local regulations and accredited practice.");

@@ -40,6 +40,7 @@ import org.tracegas.ui.parts.ResultReviewPanel;
 import org.tracegas.ui.parts.SpectrumPanel;
 import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.DemoProject;
+import org.tracegas.ui.session.DemoStaff;
 import org.tracegas.ui.session.WorkspaceAccess;
 
 /**
@@ -63,7 +64,7 @@ class DeskFlowsTest {
         shell.setLayout(new FillLayout());
         shell.setSize(1100, 700);
         access = WorkspaceAccess.openH2(folder.resolve("ws"));
-        demo = DemoProject.seed(access.store());
+        demo = DemoStaff.seed(access.store());
     }
 
     @AfterEach
@@ -81,16 +82,16 @@ class DeskFlowsTest {
         LoginDialog dialog = new LoginDialog(shell, access.store().users(), access.location().description());
         dialog.setBlockOnOpen(false);
         dialog.open();
-        dialog.loginField().setText(DemoProject.ANALYST);
+        dialog.loginField().setText(DemoStaff.ANALYST);
         dialog.passwordField().setText("not-the-password");
         press(dialog.okButton());
         assertTrue(dialog.message().getText().startsWith("Log-in refused"), dialog.message().getText());
         assertNull(dialog.session());
         assertFalse(dialog.getShell().isDisposed(), "a refused log-in keeps the dialog open");
         Screens.save(dialog.getShell(), "flow1-login-refused");
-        dialog.passwordField().setText(DemoProject.PASSWORD);
+        dialog.passwordField().setText(DemoStaff.PASSWORD);
         press(dialog.okButton());
-        assertEquals(DemoProject.ANALYST, dialog.session().login());
+        assertEquals(DemoStaff.ANALYST, dialog.session().login());
         assertNull(dialog.getShell(), "the dialog closes after a successful log-in");
     }
 
@@ -115,7 +116,7 @@ class DeskFlowsTest {
 
     @Test
     void runningTheMethodInABackgroundJobRecordsResultsAndShowsTheFitAndResidual() throws Exception {
-        Session analyst = access.store().users().logIn(DemoProject.ANALYST, DemoProject.PASSWORD.toCharArray());
+        Session analyst = access.store().users().logIn(DemoStaff.ANALYST, DemoStaff.PASSWORD.toCharArray());
         SpectrumPanel panel = new SpectrumPanel(shell, SWT.NONE);
         shell.open();
         AtomicReference<List<BatchQuantificationJob.Outcome>> done = new AtomicReference<>();
@@ -154,7 +155,7 @@ class DeskFlowsTest {
     }
 
     private List<ResultInfo> runAsAnalyst() throws InterruptedException {
-        Session analyst = access.store().users().logIn(DemoProject.ANALYST, DemoProject.PASSWORD.toCharArray());
+        Session analyst = access.store().users().logIn(DemoStaff.ANALYST, DemoStaff.PASSWORD.toCharArray());
         BatchQuantificationJob job = AnalysisRuns.job(access, analyst, demo, outcomes -> { });
         job.schedule();
         job.join();
@@ -164,14 +165,14 @@ class DeskFlowsTest {
     @Test
     void aManagerApprovesAResultThroughTheSignatureDialogAndTheAnalystCannotApproveOwnWork() throws Exception {
         runAsAnalyst();
-        Session analyst = access.store().users().logIn(DemoProject.ANALYST, DemoProject.PASSWORD.toCharArray());
+        Session analyst = access.store().users().logIn(DemoStaff.ANALYST, DemoStaff.PASSWORD.toCharArray());
         ResultReviewPanel own = new ResultReviewPanel(shell, SWT.NONE);
         own.open(access, analyst, demo.projectId(), DemoProject.PROJECT_CODE);
         SignatureDialog refused = own.signatureDialog(own.selected());
         refused.setBlockOnOpen(false);
         refused.open();
-        refused.loginField().setText(DemoProject.ANALYST);
-        refused.passwordField().setText(DemoProject.PASSWORD);
+        refused.loginField().setText(DemoStaff.ANALYST);
+        refused.passwordField().setText(DemoStaff.PASSWORD);
         press(refused.okButton());
         assertTrue(refused.message().getText().contains("you recorded this result yourself"),
                 refused.message().getText());
@@ -180,7 +181,7 @@ class DeskFlowsTest {
         refused.close();
         own.dispose();
 
-        Session manager = access.store().users().logIn(DemoProject.MANAGER, DemoProject.PASSWORD.toCharArray());
+        Session manager = access.store().users().logIn(DemoStaff.MANAGER, DemoStaff.PASSWORD.toCharArray());
         ResultReviewPanel review = new ResultReviewPanel(shell, SWT.NONE);
         review.open(access, manager, demo.projectId(), DemoProject.PROJECT_CODE);
         shell.layout(true, true);
@@ -190,8 +191,8 @@ class DeskFlowsTest {
         dialog.setBlockOnOpen(false);
         dialog.open();
         dialog.meaningField().select(1);
-        dialog.loginField().setText(DemoProject.MANAGER);
-        dialog.passwordField().setText(DemoProject.PASSWORD);
+        dialog.loginField().setText(DemoStaff.MANAGER);
+        dialog.passwordField().setText(DemoStaff.PASSWORD);
         dialog.commentField().setText("fit and residual inspected");
         Screens.save(dialog.getShell(), "flow4-signature-dialog");
         press(dialog.okButton());
@@ -215,7 +216,7 @@ class DeskFlowsTest {
             j.schedule();
         });
         shell.open();
-        Session manager = access.store().users().logIn(DemoProject.MANAGER, DemoProject.PASSWORD.toCharArray());
+        Session manager = access.store().users().logIn(DemoStaff.MANAGER, DemoStaff.PASSWORD.toCharArray());
         panel.setWorkspace(access, manager);
         Screens.waitFor(display, () -> panel.shown() != null, 30_000);
         assertTrue(panel.shown().chain().intact());
@@ -249,7 +250,7 @@ class DeskFlowsTest {
     @Test
     void theAuditTrailIsRefusedToTheAnalystAndNoFileIsExported() throws Exception {
         runAsAnalyst();
-        Session analyst = access.store().users().logIn(DemoProject.ANALYST, DemoProject.PASSWORD.toCharArray());
+        Session analyst = access.store().users().logIn(DemoStaff.ANALYST, DemoStaff.PASSWORD.toCharArray());
         AuditTrailPanel panel = new AuditTrailPanel(shell, SWT.NONE);
         List<Job> jobs = new ArrayList<>();
         panel.setScheduler(j -> {

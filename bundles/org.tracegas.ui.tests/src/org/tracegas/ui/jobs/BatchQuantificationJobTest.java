@@ -13,6 +13,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.store.Session;
 import org.tracegas.ui.session.DemoProject;
+import org.tracegas.ui.session.DemoStaff;
 import org.tracegas.ui.session.WorkspaceAccess;
 
 class BatchQuantificationJobTest {
@@ -23,8 +24,8 @@ class BatchQuantificationJobTest {
     @Test
     void cancellingStopsAfterTheMeasurementInHandAndReportsWhatWasDone() {
         try (WorkspaceAccess access = WorkspaceAccess.openH2(folder)) {
-            DemoProject.Seeded demo = DemoProject.seed(access.store());
-            Session analyst = access.store().users().logIn(DemoProject.ANALYST, DemoProject.PASSWORD.toCharArray());
+            DemoProject.Seeded demo = DemoStaff.seed(access.store());
+            Session analyst = access.store().users().logIn(DemoStaff.ANALYST, DemoStaff.PASSWORD.toCharArray());
             AtomicReference<List<BatchQuantificationJob.Outcome>> delivered = new AtomicReference<>();
             BatchQuantificationJob job = AnalysisRuns.job(access, analyst, demo, delivered::set);
             NullProgressMonitor monitor = new NullProgressMonitor() {

@@ -23,8 +23,8 @@ class DeskTest {
     @Test
     void aFinishedRunReachesTheListenersAndMarksTheMethodVersionFrozen() throws Exception {
         try (WorkspaceAccess access = WorkspaceAccess.openH2(folder)) {
-            DemoProject.Seeded demo = DemoProject.seed(access.store());
-            Session analyst = access.store().users().logIn(DemoProject.ANALYST, DemoProject.PASSWORD.toCharArray());
+            DemoProject.Seeded demo = DemoStaff.seed(access.store());
+            Session analyst = access.store().users().logIn(DemoStaff.ANALYST, DemoStaff.PASSWORD.toCharArray());
             Desk desk = Desk.get();
             desk.start(access, analyst, demo);
             MethodVersion version = demo.model().getMethods().get(0).getVersions().get(0);

@@ -11,18 +11,17 @@ import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.IWorkbench;
 import org.eclipse.ui.PlatformUI;
 import org.eclipse.ui.preferences.ScopedPreferenceStore;
-import org.tracegas.store.AccessDeniedException;
 import org.tracegas.store.StoreException;
 import org.tracegas.ui.dialogs.LoginDialog;
 import org.tracegas.ui.prefs.DeskPreferences;
-import org.tracegas.ui.session.DemoProject;
 import org.tracegas.ui.session.Desk;
 import org.tracegas.ui.session.WorkspaceAccess;
 import org.tracegas.ui.session.WorkspaceLocation;
 
 /**
- * Opens the workspace named in the preferences, on the lab server or in the local folder (a fresh local one
- * gets the demo project), asks for the log-in and starts the workbench window.
+ * Opens the workspace named in the preferences, on the lab server or in the local folder, asks for the log-in
+ * and starts the workbench window. A folder without a workspace is refused with what to run: the workbench
+ * creates no workspace and no users (the runner's workspace-init and demo commands do).
  */
 public final class WorkbenchApplication implements IApplication {
 
@@ -34,7 +33,7 @@ public final class WorkbenchApplication implements IApplication {
         WorkspaceLocation location = DeskPreferences.location(prefs, System.getenv());
         WorkspaceAccess opened;
         try {
-            opened = WorkspaceAccess.open(location);
+            opened = WorkspaceAccess.openExisting(location);
         } catch (StoreException e) {
             MessageDialog.openError(null, "Tracegas Workbench", "The " + location.description()
                     + " could not be opened: " + e.getMessage());
@@ -42,20 +41,11 @@ public final class WorkbenchApplication implements IApplication {
             return IApplication.EXIT_OK;
         }
         try (WorkspaceAccess access = opened) {
-            DemoProject.Seeded demo = null;
-            // only a local workspace is seeded: a lab server gets its first administrator from the runner
-            if (location instanceof WorkspaceLocation.Folder) {
-                try {
-                    demo = DemoProject.seed(access.store());
-                } catch (AccessDeniedException alreadyInUse) {
-                    // users exist: the workspace is not fresh, nothing to seed
-                }
-            }
             LoginDialog login = new LoginDialog(new Shell(display), access.store().users(), location.description());
             if (login.open() != Window.OK) {
                 return IApplication.EXIT_OK;
             }
-            Desk.get().start(access, login.session(), demo);
+            Desk.get().start(access, login.session(), null);
             int code = PlatformUI.createAndRunWorkbench(display, new DeskWorkbenchAdvisor(login.session().login()));
             return code == PlatformUI.RETURN_RESTART ? IApplication.EXIT_RESTART : IApplication.EXIT_OK;
         } finally {

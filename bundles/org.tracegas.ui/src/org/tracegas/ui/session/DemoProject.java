@@ -3,10 +3,8 @@ package org.tracegas.ui.session;
 import java.time.Duration;
 import java.time.Instant;
 import java.util.ArrayList;
-import java.util.EnumSet;
 import java.util.List;
 import java.util.Random;
-import java.util.Set;
 
 import org.tracegas.library.Compound;
 import org.tracegas.library.Origin;
@@ -21,7 +19,6 @@ import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
-import org.tracegas.model.Role;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.qa.checks.AbsorbanceRegion;
@@ -43,17 +40,13 @@ import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
- * The demo project a fresh workspace is seeded with: a client, a kiln stack campaign with three sample
- * measurements, an analyst and a quality manager, a library of invented (synthetic) band shapes and a CO /
+ * The demo project of the desk: a client, a kiln stack campaign with three sample measurements granted to an
+ * analyst and a quality manager the workspace has, a library of invented (synthetic) band shapes and a CO /
  * N2O method. The band shapes are sums of Lorentz lines around invented band centres; they are for trying
  * the desk out and are marked synthetic everywhere.
  */
 public final class DemoProject {
 
-    public static final String ANALYST = "avogel";
-    public static final String MANAGER = "qmorel";
-    /** Demo password of all demo users (the demo is not for production data). */
-    public static final String PASSWORD = "demo-desk-2026";
     public static final String PROJECT_CODE = "HLW-26-03";
 
     static final SpectralAxis AXIS = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1950, 0.5, 701);
@@ -72,20 +65,20 @@ public final class DemoProject {
     private DemoProject() {
     }
 
-    /** Seeds an empty workspace store. */
-    public static Seeded seed(WorkspaceStore store) {
-        Session admin = store.users().createFirstAdministrator("admin", "Workspace administrator",
-                PASSWORD.toCharArray());
-        String analystId = store.users().createUser(admin, ANALYST, "Anna Vogel", Set.of(Role.ANALYST),
-                PASSWORD.toCharArray()).id();
-        String managerId = store.users().createUser(admin, MANAGER, "Quentin Morel",
-                EnumSet.of(Role.QUALITY_MANAGER, Role.REVIEWER), PASSWORD.toCharArray()).id();
+    /**
+     * Seeds a workspace with the demo project. The users come from the caller (the workspace's administrator
+     * made them): the desk has no users or passwords of its own.
+     *
+     * @param analyst   records the measurements and versions, and may write the project
+     * @param managerId may read the project (a quality manager or reviewer)
+     */
+    public static Seeded seed(WorkspaceStore store, Session admin, Session analyst, String managerId) {
+        String analystId = analyst.userId();
         String clientId = store.projects().createClient(admin, "Harbour Lime Works");
         ProjectInfo project = store.projects().createProject(admin, clientId, PROJECT_CODE,
                 "Kiln stack, March campaign");
         store.projects().grant(admin, project.id(), analystId, AccessLevel.WRITE);
         store.projects().grant(admin, project.id(), managerId, AccessLevel.READ);
-        Session analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
         List<String> measurements = new ArrayList<>();
         for (Instant t : TIMES) {
             measurements.add(store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE, t,

@@ -1,7 +1,9 @@
 package org.tracegas.ui.session;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 
+import org.tracegas.store.StoreException;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -32,6 +34,28 @@ public final class WorkspaceAccess implements AutoCloseable {
         }
         Path database = ((WorkspaceLocation.Folder) location).folder().resolve("db");
         return new WorkspaceAccess(location, Workspaces.openH2(database));
+    }
+
+    /**
+     * Opens a workspace that exists and has its administrator, as the workbench does at start. The workbench
+     * never creates a workspace or users of its own (no built-in passwords): an empty folder needs
+     * {@code tracegas workspace-init}, and the demo's workspace comes from {@code tracegas demo}.
+     *
+     * @throws StoreException naming the folder and what to run, or if the database cannot be opened
+     */
+    public static WorkspaceAccess openExisting(WorkspaceLocation location) {
+        String create = "create one with 'tracegas workspace-init', which makes its first administrator, or run "
+                + "'releng/demo.sh' and start the workbench on workspace-data/demo";
+        if (location instanceof WorkspaceLocation.Folder folder
+                && !Files.isRegularFile(folder.folder().resolve("db").resolve("workspace.mv.db"))) {
+            throw new StoreException("there is no workspace in " + folder.folder() + "; " + create);
+        }
+        WorkspaceAccess access = open(location);
+        if (!access.store().users().hasUsers()) {
+            access.close();
+            throw new StoreException("the " + location.description() + " has no users yet; " + create);
+        }
+        return access;
     }
 
     /** Opens (or creates) the embedded workspace in {@code folder} (database in {@code folder/db}). */
