@@ -4,8 +4,11 @@
 # The workspace lives in workspace-data/demo; a second run reuses it. Extra arguments go to the runner.
 set -euo pipefail
 top=$(cd "$(dirname "$0")/.." && pwd)
+"$top/releng/require-java.sh"
 product=$top/releng/org.tracegas.product/target/products/org.tracegas.product/linux/gtk/x86_64
 if [ ! -x "$product/tracegas" ] || [ -n "$(find "$top/bundles" "$top/features" -newer "$product/tracegas" -name '*.java' -print -quit)" ]; then
+  # the build takes SWTChart from Debian's package, which needs unzip
+  command -v unzip >/dev/null || { echo "releng/demo.sh: building needs unzip; install it with: sudo apt-get install unzip" >&2; exit 1; }
   "$top/releng/build.sh" -q
 fi
 exec "$product/tracegas" demo --workspace "$top/workspace-data/demo" --out "$top/workspace-data/demo-report" "$@"

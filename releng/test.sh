@@ -1,12 +1,33 @@
 #!/usr/bin/env bash
 # Runs every test: the reactor's unit, integration and UI tests (UI tests under Xvfb when there is no
 # display), the lab-server tests against a throw-away PostgreSQL server, and the model's regeneration check.
+# As root it first installs the system packages it needs (releng/install-prerequisites.sh); as another user it
+# names the missing ones and how to install them, before building anything.
 set -euo pipefail
 top=$(cd "$(dirname "$0")/.." && pwd)
+"$top/releng/require-java.sh"
+if [ "$(id -u)" = 0 ]; then
+  "$top/releng/install-prerequisites.sh"
+elif ! missing=$("$top/releng/install-prerequisites.sh" --check); then
+  echo "releng/test.sh: these Debian packages are missing: $(echo $missing)" >&2
+  echo "  install them as root with: sudo $top/releng/install-prerequisites.sh" >&2
+  echo "  (or: sudo apt-get install $(echo $missing)), then run releng/test.sh again" >&2
+  exit 1
+fi
 "$top/releng/fetch-swtchart.sh"
 
-pgdir=$(mktemp -d /tmp/tracegas-pg.XXXXXX)
-port=${TRACEGAS_TEST_PG_PORT:-55433}
+pgdir=$(mktemp -d "${TMPDIR:-/tmp}/tracegas-pg.XXXXXX")
+# a free port of its own unless one is given, so that two runs at once (two users, two checkouts) do not meet
+free_port() {
+  local p
+  for _ in $(seq 1 50); do
+    p=$((20000 + RANDOM % 40000))
+    (exec 3<>"/dev/tcp/127.0.0.1/$p") 2>/dev/null || { echo "$p"; return; }
+  done
+  echo "releng/test.sh: found no free port for the throw-away PostgreSQL server" >&2
+  return 1
+}
+port=${TRACEGAS_TEST_PG_PORT:-$(free_port)}
 trap '"$top/releng/postgres-throwaway.sh" stop "$pgdir"' EXIT
 url=$("$top/releng/postgres-throwaway.sh" start "$pgdir" "$port")
 

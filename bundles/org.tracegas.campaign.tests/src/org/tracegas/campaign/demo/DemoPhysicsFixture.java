@@ -4,8 +4,10 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Comparator;
 import java.util.Map;
 import java.util.Random;
+import java.util.stream.Stream;
 
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.spectrum.Interferogram;
@@ -28,12 +30,23 @@ public final class DemoPhysicsFixture {
         if (instance == null) {
             try {
                 Path folder = Files.createTempDirectory("tracegas-line-lists");
+                // the library synthesis reads the line lists again in every test class, so the folder lives as
+                // long as the test JVM and goes with it
+                Runtime.getRuntime().addShutdownHook(new Thread(() -> deleteTree(folder)));
                 instance = new DemoPhysicsFixture(DemoPhysics.fromInventedLineLists(folder));
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             }
         }
         return instance;
+    }
+
+    private static void deleteTree(Path folder) {
+        try (Stream<Path> all = Files.walk(folder)) {
+            all.sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+        } catch (IOException e) {
+            // the JVM is ending; a folder in the temporary directory that could not go is left to the system
+        }
     }
 
     DemoPhysics physics() {
