@@ -50,6 +50,8 @@ class DemoMethodTest {
         assertEquals(List.of(29.1, 87.3, 465.6), co.ppmMetres().stream().map(v -> Math.round(v * 1e6) / 1e6)
                 .toList());
         assertEquals(folder.resolve("line-lists/co-invented.par"), co.lineList());
+        assertEquals("table", co.partition());
+        assertEquals(folder.resolve("line-lists/co-q.txt"), co.partitionTable());
 
         QaPlan qa = QaPlan.read(write("qa.plan", DemoMethod.qaPlanText()));
         assertEquals(DemoCampaignFiles.CTS_CO_PPM, qa.ctsPpm());
