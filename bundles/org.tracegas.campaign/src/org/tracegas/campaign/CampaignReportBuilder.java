@@ -4,18 +4,25 @@ import java.time.Duration;
 import java.time.Instant;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
+import java.util.EnumSet;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 import java.util.OptionalDouble;
+import java.util.Set;
 import java.util.function.Function;
 
+import org.tracegas.model.ResultFlag;
 import org.tracegas.qa.basis.Averaging;
+import org.tracegas.qa.basis.DetectionLimitConvention;
 import org.tracegas.qa.basis.EmissionLimit;
 import org.tracegas.qa.basis.GasReading;
 import org.tracegas.qa.basis.LimitComparison;
 import org.tracegas.qa.basis.PeriodAverage;
 import org.tracegas.qa.basis.ReportingBasis;
 import org.tracegas.qa.basis.TimedValue;
+import org.tracegas.qa.basis.ValidityRule;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.qa.control.ChartEvaluation;
 import org.tracegas.qa.uncertainty.BasisConversion;
@@ -35,15 +42,27 @@ import org.tracegas.report.UncertaintyTable;
 /**
  * Assembles the report of a campaign from stored results: each compound converted to the reporting basis
  * (dry gas, reference O2, mg/m³ at standard conditions) minute by minute, averaged over the reporting periods
- * with the minimum-data rule, compared with the client's limits, with an expanded uncertainty (k = 2) from
- * the result's GUM budget on the reporting basis (fit, reference, path, cell conditions, and the H2O and O2 of
- * the conversion), whose table the report shows for the minute of largest relative uncertainty.
+ * with flagged minutes left out and counted and the minimum-data rule, compared with the client's limits (a
+ * period short of data is not assessed), with an expanded uncertainty (k = 2) whose random part (the fit of each
+ * minute) averages down and whose systematic part (reference, path, cell conditions, H2O and O2 of the
+ * conversion) does not; the report shows the GUM budget of the minute of largest relative uncertainty.
  */
 public final class CampaignReportBuilder {
 
     /** A compound to report: its name and molar mass, and the client's limits for it. */
     public record Reported(String compound, double molarMass, List<EmissionLimit> limits) {
     }
+
+    /** Fit flags that make a minute unusable for averages. */
+    private static final Set<ResultFlag> EXCLUDING = EnumSet.of(ResultFlag.SATURATED, ResultFlag.NOT_CONVERGED,
+            ResultFlag.HIGH_RESIDUAL, ResultFlag.BACKGROUND_TOO_OLD, ResultFlag.QA_FAILED);
+    private static final String EXCLUSION_RULE = "Minutes flagged saturated, not converged, high residual, "
+            + "background too old or QA failed, and minutes whose O2 lies at the guard of the reference-O2 "
+            + "correction, are left out of the averages and counted in the availability (common practice, no "
+            + "source).";
+    private static final String UNCERTAINTY_RULE = "U of an average (k = 2) combines the random part of the minutes "
+            + "(spectral fit), which averages down as sqrt(sum u^2)/n, with the systematic part (reference, path, "
+            + "cell conditions, H2O and O2), which does not, taken fully correlated (JCGM 100:2008 5.2.2, r = 1).";
 
     private final ReportingBasis basis;
     private final FtirResultBudget budget;
@@ -88,7 +107,7 @@ public final class CampaignReportBuilder {
                 : series.compound(waterCompound).get(0).time();
         for (Reported r : reported) {
             List<MinuteSeries.Point> points = series.compound(r.compound());
-            List<GasReading> readings = new ArrayList<>();
+            List<TimedValue> converted = new ArrayList<>();
             double relativeU = 0;
             UncertaintyBudget worst = null;
             Instant worstTime = null;
@@ -99,49 +118,74 @@ public final class CampaignReportBuilder {
                 }
                 double h2o = w.ppm() / 1e6;
                 double o2Wet = o2PercentWet.apply(p.time());
-                readings.add(new GasReading(p.time(), p.ppm(), h2o, o2Wet / (1 - h2o)));
-                if (p.ppm() != 0 && (basis.oxygen().isEmpty() || basis.oxygen().get().canCorrect(o2Wet / (1 - h2o)))) {
-                    BasisConversion conversion = basis.oxygen().map(o -> new BasisConversion(h2o,
-                            w.uncertainty() / 1e6, o2Wet, o2UncertaintyPercent, true, o.referencePercent()))
-                            .orElseGet(() -> BasisConversion.dryOnly(h2o, w.uncertainty() / 1e6));
-                    UncertaintyBudget u = budget.budgetOnBasis(r.compound(), p.ppm(), p.uncertainty(),
-                            cellTemperatureK, cellPressureKPa, conversion);
-                    if (u.relativeExpandedPercent() > relativeU) {
-                        relativeU = u.relativeExpandedPercent();
-                        worst = u;
-                        worstTime = p.time();
-                    }
+                double o2Dry = o2Wet / (1 - h2o);
+                GasReading reading = new GasReading(p.time(), p.ppm(), h2o, o2Dry);
+                // the basis factor from a unit reading: exact, the same conversion applied to every minute
+                Optional<TimedValue> perPpm = basis.convert(new GasReading(p.time(), 1.0, h2o, o2Dry), r.molarMass());
+                if (perPpm.isEmpty()) {
+                    converted.add(new TimedValue(p.time(), 0.0, 0, 0, 0, "O2 guard"));
+                    continue;
+                }
+                double f = perPpm.get().value();
+                BasisConversion conversion = basis.oxygen().map(o -> new BasisConversion(h2o, w.uncertainty() / 1e6,
+                        o2Wet, o2UncertaintyPercent, true, o.referencePercent()))
+                        .orElseGet(() -> BasisConversion.dryOnly(h2o, w.uncertainty() / 1e6));
+                UncertaintyBudget u = budget.budgetOnBasis(r.compound(), p.ppm(), p.uncertainty(), cellTemperatureK,
+                        cellPressureKPa, conversion);
+                // from ppm on the basis (the budget's unit) to mg/m³: the same exact factor as the value
+                double toMass = f / conversion.factor();
+                converted.add(new TimedValue(p.time(), basis.convert(reading, r.molarMass()).orElseThrow().value(),
+                        toMass * u.combinedStandardUncertainty(FtirResultBudget::random),
+                        toMass * u.combinedStandardUncertainty(c -> !FtirResultBudget.random(c)),
+                        f * Math.max(0, p.detectionLimit()), exclusion(p.flags())));
+                if (p.ppm() != 0 && u.relativeExpandedPercent() > relativeU) {
+                    relativeU = u.relativeExpandedPercent();
+                    worst = u;
+                    worstTime = p.time();
                 }
             }
             if (worst != null) {
-                // the minute with the largest relative U sets the U of every average, so its budget is shown
                 b.budget(UncertaintyTable.of(r.compound() + " at " + worstTime + ", the minute of largest relative U",
                         worst));
             }
-            List<TimedValue> converted = basis.convertAll(readings, r.molarMass());
             for (Duration period : periods) {
-                Averaging averaging = new Averaging(period, Duration.ofMinutes(1),
-                        Averaging.COMMON_PRACTICE_MINIMUM_FRACTION, ZoneOffset.UTC);
+                Averaging averaging = new Averaging(period, Duration.ofMinutes(1), ValidityRule.commonPractice(),
+                        DetectionLimitConvention.AS_MEASURED, ZoneOffset.UTC);
+                b.averagingRule(averaging.validityRule().statement() + " (" + averaging.validityRule().source()
+                        + ").");
+                b.averagingRule("Values below the detection limit: " + averaging.convention().statement()
+                        + " (common practice, no source).");
+                b.averagingRule(EXCLUSION_RULE);
+                b.averagingRule(UNCERTAINTY_RULE);
                 List<PeriodAverage> averages = averaging.average(converted);
                 EmissionLimit limit = r.limits().stream().filter(l -> l.period().equals(period)).findFirst()
                         .orElse(null);
                 LimitComparison comparison = new LimitComparison(0);
                 for (PeriodAverage a : averages) {
-                    boolean exceeded = limit != null && a.valid() && comparison.validatedValue(limit, a.mean()) > limit.value();
+                    if (a.count() == 0) {
+                        continue; // nothing to average: the availability of the neighbours shows the gap
+                    }
                     List<String> flags = new ArrayList<>();
+                    flags.add(String.format(Locale.ROOT, "availability %.0f %% (%d of %d%s)", a.capturePercent(),
+                            a.count(), a.expected(), a.excluded() > 0 ? ", " + a.excluded() + " excluded" : ""));
                     if (!a.valid()) {
-                        flags.add(String.format(java.util.Locale.ROOT, "invalid: %.0f %% data", a.capturePercent()));
+                        flags.add("invalid: too few values");
+                    }
+                    if (a.belowDetectionLimit() > 0) {
+                        flags.add(a.belowDetectionLimit() + " below detection limit");
                     }
                     b.result(new ResultRow(r.compound(), label(period), a.start(), a.mean(),
-                            Math.abs(a.mean()) * relativeU / 100.0, "mg/m³", flags,
-                            limit == null ? OptionalDouble.empty() : OptionalDouble.of(limit.value()), exceeded));
+                            2.0 * a.combinedUncertainty(), "mg/m³", flags,
+                            limit == null ? OptionalDouble.empty() : OptionalDouble.of(limit.value()),
+                            comparison.status(limit, a)));
                 }
             }
-            double[] hours = new double[converted.size()];
-            double[] values = new double[converted.size()];
+            List<TimedValue> used = converted.stream().filter(v -> !v.excluded()).toList();
+            double[] hours = new double[used.size()];
+            double[] values = new double[used.size()];
             for (int i = 0; i < hours.length; i++) {
-                hours[i] = Duration.between(origin, converted.get(i).time()).toSeconds() / 3600.0;
-                values[i] = converted.get(i).value();
+                hours[i] = Duration.between(origin, used.get(i).time()).toSeconds() / 3600.0;
+                values[i] = used.get(i).value();
             }
             b.timeSeries(new Plot(r.compound() + ", 1-minute values on the reporting basis", "hours since "
                     + origin, "mg/m³", List.of(new Series(r.compound(), hours, values)), false));
@@ -150,6 +194,17 @@ public final class CampaignReportBuilder {
             b.spectrum(exampleFit);
         }
         return b.build();
+    }
+
+    /** Why a stored minute is left out of the averages, from its flags; empty if it is used. */
+    private static String exclusion(Set<ResultFlag> flags) {
+        List<String> reasons = new ArrayList<>();
+        for (ResultFlag f : flags) {
+            if (EXCLUDING.contains(f)) {
+                reasons.add(f.getLiteral().toLowerCase(Locale.ROOT).replace('_', ' '));
+            }
+        }
+        return reasons.isEmpty() ? "" : "flagged: " + String.join(", ", reasons);
     }
 
     private static String label(Duration period) {

@@ -8,6 +8,10 @@ import java.util.Set;
 
 import org.tracegas.library.Compound;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.library.io.PartitionTableText;
+import org.tracegas.library.synthesis.PartitionFunction;
+import org.tracegas.library.synthesis.PowerLawPartitionFunction;
+import org.tracegas.library.synthesis.PublishedMolecularConstants;
 import org.tracegas.preprocess.Apodization;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.SpectralAxis;
@@ -33,22 +37,50 @@ import org.tracegas.spectrum.SpectralAxis;
  * formula = CO
  * molar-mass = 28.010
  * line-list = co.par                             HITRAN-format line list, relative to the plan
- * partition = linear                             Q(T) ~ T (linear) or T^1.5 (non-linear)
- * ppm-m = 38.4, 115.2, 614.4                     amounts to synthesize, ppm·m
+ * partition = table                              Q(T): table (from partition-table), constants (published
+ *                                                molecular constants of the formula), or the rough power laws
+ *                                                linear (Q ~ T) and non-linear (Q ~ T^1.5)
+ * partition-table = co-q.txt                     temperature/K and Q per line, relative to the plan
+ * ppm-m = 38.4, 115.2, 614.4                      amounts to synthesize, ppm·m
  * </pre>
  */
 public record LibraryPlan(Path file, String name, double temperatureK, double pressureKPa, double pathLengthM,
         double resolution, Apodization apodization, SpectralAxis axis, double relativeUncertainty,
         List<Gas> gases) {
 
-    /** One gas of the plan and the amounts to synthesize of it. */
-    public record Gas(Compound compound, Path lineList, boolean linear, List<Double> ppmMetres, int line) {
+    /**
+     * One gas of the plan, how its partition function is had and the amounts to synthesize of it.
+     *
+     * @param partition      table, constants, linear or non-linear
+     * @param partitionTable the Q(T) table when partition is table, else null
+     */
+    public record Gas(Compound compound, Path lineList, String partition, Path partitionTable,
+            List<Double> ppmMetres, int line) {
+
+        /**
+         * The partition function: read from the table, taken from the published constants of the formula, or
+         * one of the power laws.
+         *
+         * @throws FileFormatException naming the table file and line at fault
+         */
+        public PartitionFunction partitionFunction() throws IOException {
+            switch (partition) {
+                case "table":
+                    return PartitionTableText.read(partitionTable);
+                case "constants":
+                    return PublishedMolecularConstants.forFormula(compound.formula()).orElseThrow();
+                case "linear":
+                    return PowerLawPartitionFunction.linearMolecule();
+                default:
+                    return PowerLawPartitionFunction.nonLinearMolecule();
+            }
+        }
     }
 
     private static final Set<String> HEAD = Set.of("library", "temperature", "pressure", "path-length", "resolution",
             "apodization", "first-wavenumber", "step", "points", "uncertainty");
     private static final Set<String> GAS = Set.of("name", "cas", "formula", "molar-mass", "line-list", "partition",
-            "ppm-m");
+            "partition-table", "ppm-m");
 
     public LibraryPlan {
         gases = List.copyOf(gases);
@@ -95,17 +127,15 @@ public record LibraryPlan(Path file, String name, double temperatureK, double pr
                         : m.startsWith("formula") ? "formula" : "name", m);
             }
             String partition = b.text("partition");
-            if (!partition.equals("linear") && !partition.equals("non-linear")) {
-                throw b.error("partition", "'" + partition + "' is neither linear nor non-linear");
-            }
+            checkPartition(b, partition, compound.formula());
             List<Double> amounts = b.value("ppm-m").numbers();
             for (double a : amounts) {
                 if (!(a > 0)) {
                     throw b.error("ppm-m", "amounts must be positive, found " + a);
                 }
             }
-            gases.add(new Gas(compound, f.resolve(b.text("line-list")), partition.equals("linear"), amounts,
-                    b.line()));
+            gases.add(new Gas(compound, f.resolve(b.text("line-list")), partition,
+                    partition.equals("table") ? f.resolve(b.text("partition-table")) : null, amounts, b.line()));
         }
         if (gases.isEmpty()) {
             throw new FileFormatException(file, 0, "[compound]", "the plan names no compound");
@@ -125,5 +155,19 @@ public record LibraryPlan(Path file, String name, double temperatureK, double pr
         return new LibraryPlan(file, h.text("library"), h.number("temperature"), h.number("pressure"),
                 h.number("path-length"), h.number("resolution"), h.constant("apodization", Apodization.class), axis,
                 uncertainty, gases);
+    }
+
+    private static void checkPartition(KeyValueFile.Section b, String kind, String formula)
+            throws FileFormatException {
+        if (!List.of("table", "constants", "linear", "non-linear").contains(kind)) {
+            throw b.error("partition", "'" + kind + "' is none of table, constants, linear, non-linear");
+        }
+        if (b.has("partition-table") != kind.equals("table")) {
+            throw b.error("partition-table", "is given exactly when partition = table");
+        }
+        if (kind.equals("constants") && PublishedMolecularConstants.forFormula(formula).isEmpty()) {
+            throw b.error("partition", "no published constants for " + formula + ", known: "
+                    + PublishedMolecularConstants.formulas());
+        }
     }
 }

@@ -10,7 +10,6 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.synthesis.AbsorptionPath;
 import org.tracegas.library.synthesis.HitranLineListReader;
 import org.tracegas.library.synthesis.LineByLineModel;
-import org.tracegas.library.synthesis.PowerLawPartitionFunction;
 import org.tracegas.library.synthesis.ReferenceSynthesizer;
 import org.tracegas.library.synthesis.SynthesisRequest;
 import org.tracegas.quantify.CancellationFlag;
@@ -34,8 +33,7 @@ public final class LibrarySynthesis {
         HitranLineListReader reader = new HitranLineListReader();
         for (LibraryPlan.Gas gas : plan.gases()) {
             LineByLineModel model = new LineByLineModel(reader.read(gas.lineList()), gas.compound().molarMass(),
-                    gas.linear() ? PowerLawPartitionFunction.linearMolecule()
-                            : PowerLawPartitionFunction.nonLinearMolecule());
+                    gas.partitionFunction());
             ReferenceSynthesizer synthesizer = new ReferenceSynthesizer(model, gas.compound());
             for (double ppmMetres : gas.ppmMetres()) {
                 if (cancel.isCancelled()) {

@@ -12,12 +12,25 @@ class ApodizationTest {
 
     @Test
     void nortonBeerCoefficientsAreThePublishedOnes() {
-        // Norton & Beer, J. Opt. Soc. Am. 66, 259 (1976), erratum 67, 419 (1977); values from memory.
-        // The weak constant term is 0.384093 (with 0.348093 the set would not sum to 1).
+        // Norton & Beer, J. Opt. Soc. Am. 66, 259 (1976), erratum 67, 419 (1977), table of C0, C1, C2, C4 for
+        // sum C_i (1 - x^2)^i: weak 0.384093, -0.087577, 0.703484, -; medium 0.152442, -0.136176, 0.983734, -;
+        // strong 0.045335, 0, 0.554883, 0.399782. Checked against the table as reproduced by Naylor & Tahic,
+        // J. Opt. Soc. Am. A 24, 3644 (2007), whose extended family also uses only powers 0, 1, 2, 4, 6, 8.
         assertArrayEquals(new double[] {0.384093, -0.087577, 0.703484}, Apodization.NORTON_BEER_WEAK.coefficients());
         assertArrayEquals(new double[] {0.152442, -0.136176, 0.983734}, Apodization.NORTON_BEER_MEDIUM.coefficients());
-        assertArrayEquals(new double[] {0.045335, 0.0, 0.554883, 0.399782},
+        assertArrayEquals(new double[] {0.045335, 0.0, 0.554883, 0.0, 0.399782},
                 Apodization.NORTON_BEER_STRONG.coefficients());
+    }
+
+    @Test
+    void nortonBeerStrongCarriesItsLastCoefficientOnTheFourthPower() {
+        // Norton & Beer (1976), strong: 0.045335 + 0.554883 (1 - x^2)^2 + 0.399782 (1 - x^2)^4, written out here
+        // from the published form; at x = 0.5, 1 - x^2 = 0.75
+        double u = 0.75;
+        assertEquals(0.045335 + 0.554883 * u * u + 0.399782 * u * u * u * u, Apodization.NORTON_BEER_STRONG.weight(0.5),
+                1e-15);
+        // the cubic form would give 0.045335 + 0.554883 u^2 + 0.399782 u^3 = 0.526... instead of 0.484...
+        assertEquals(0.48395, Apodization.NORTON_BEER_STRONG.weight(0.5), 1e-5);
     }
 
     @ParameterizedTest

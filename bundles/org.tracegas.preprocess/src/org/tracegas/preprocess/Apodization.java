@@ -15,12 +15,18 @@ public enum Apodization {
     BLACKMAN_HARRIS_3(Form.COSINE_SERIES, 0.42323, 0.49755, 0.07922),
     /** Blackman-Harris 4-term (minimum side lobe), Harris, Proc. IEEE 66, 51 (1978). */
     BLACKMAN_HARRIS_4(Form.COSINE_SERIES, 0.35875, 0.48829, 0.14128, 0.01168),
-    /** Norton-Beer weak, J. Opt. Soc. Am. 66, 259 (1976), erratum 67, 419 (1977). */
+    /**
+     * Norton-Beer weak, J. Opt. Soc. Am. 66, 259 (1976), erratum 67, 419 (1977): line width 1.2 times the
+     * unapodized one.
+     */
     NORTON_BEER_WEAK(Form.POLYNOMIAL, 0.384093, -0.087577, 0.703484),
-    /** Norton-Beer medium, same source. */
+    /** Norton-Beer medium, same source: line width 1.4 times the unapodized one. */
     NORTON_BEER_MEDIUM(Form.POLYNOMIAL, 0.152442, -0.136176, 0.983734),
-    /** Norton-Beer strong, same source. */
-    NORTON_BEER_STRONG(Form.POLYNOMIAL, 0.045335, 0.0, 0.554883, 0.399782);
+    /**
+     * Norton-Beer strong, same source: line width 1.6 times the unapodized one. The published table gives the
+     * coefficients of (1 - x^2)^0, ^1, ^2 and ^4; the third power has none.
+     */
+    NORTON_BEER_STRONG(Form.POLYNOMIAL, 0.045335, 0.0, 0.554883, 0.0, 0.399782);
 
     private enum Form {
         /** sum c_k cos(k pi x). */
@@ -70,8 +76,8 @@ public enum Apodization {
     }
 
     /**
-     * The coefficients that define the function: of cos(k pi x) for the cosine windows, of (1 - x^2)^i for the
-     * Norton-Beer functions, none for the triangle.
+     * The coefficients that define the function: element k of cos(k pi x) for the cosine windows, element i of
+     * (1 - x^2)^i for the Norton-Beer functions, none for the triangle.
      */
     public double[] coefficients() {
         return coefficients.clone();

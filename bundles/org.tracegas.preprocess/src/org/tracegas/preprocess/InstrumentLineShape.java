@@ -1,5 +1,6 @@
 package org.tracegas.preprocess;
 
+import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
 
@@ -90,14 +91,23 @@ public final class InstrumentLineShape {
      * domain (convolution theorem), where the transform of the ILS is the apodization itself over [-L, L]: this is
      * exact for the circular convolution and costs O(n log n). Each end is extended by its end value over
      * several resolution elements so that the ends do not see each other or a step.
+     * <p>
+     * Absorbance is refused: the instrument convolves the transmitted light, and the logarithm of a convolution
+     * is not the convolution of the logarithm, so a convolved absorbance underestimates narrow, strong lines.
+     * Deresolve the transmittance (or truncate the interferogram) and take the absorbance afterwards.
      *
-     * @throws IllegalArgumentException if the spectrum is null, its axis is not uniform, it has fewer than 2
-     *                                  points, or its step is coarser than half the nominal resolution (the
-     *                                  path difference range L would then not be reached)
+     * @throws IllegalArgumentException if the spectrum is null or absorbance, its axis is not uniform, it has
+     *                                  fewer than 2 points, or its step is coarser than half the nominal
+     *                                  resolution (the path difference range L would then not be reached)
      */
     public Spectrum apply(Spectrum highResolution) {
         if (highResolution == null) {
             throw new IllegalArgumentException("highResolution spectrum must not be null");
+        }
+        if (highResolution.ordinate() == Ordinate.ABSORBANCE) {
+            throw new IllegalArgumentException("highResolution spectrum is absorbance: the line shape acts on the "
+                    + "transmitted light, so deresolve the transmittance (or truncate the interferogram) and take the "
+                    + "absorbance afterwards");
         }
         SpectralAxis axis = highResolution.axis();
         if (!axis.isUniform() || axis.size() < 2) {

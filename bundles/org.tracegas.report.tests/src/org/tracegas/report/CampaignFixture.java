@@ -15,15 +15,18 @@ import java.util.OptionalDouble;
 import java.util.Random;
 
 import org.tracegas.qa.basis.Averaging;
+import org.tracegas.qa.basis.DetectionLimitConvention;
 import org.tracegas.qa.basis.EmissionLimit;
 import org.tracegas.qa.basis.Exceedance;
 import org.tracegas.qa.basis.GasReading;
 import org.tracegas.qa.basis.LimitComparison;
+import org.tracegas.qa.basis.LimitStatus;
 import org.tracegas.qa.basis.OxygenCorrection;
 import org.tracegas.qa.basis.PeriodAverage;
 import org.tracegas.qa.basis.ReportingBasis;
 import org.tracegas.qa.basis.StandardConditions;
 import org.tracegas.qa.basis.TimedValue;
+import org.tracegas.qa.basis.ValidityRule;
 import org.tracegas.qa.checks.AbsorbanceRegion;
 import org.tracegas.qa.checks.BackgroundAgeCheck;
 import org.tracegas.qa.checks.CtsBand;
@@ -98,7 +101,8 @@ final class CampaignFixture {
         }
         Averaging halfHour = new Averaging(Duration.ofMinutes(30), Duration.ofMinutes(1),
                 Averaging.COMMON_PRACTICE_MINIMUM_FRACTION, ZoneOffset.UTC);
-        Averaging daily = new Averaging(Duration.ofDays(1), Duration.ofMinutes(30), 43 / 48.0, ZoneOffset.UTC);
+        Averaging daily = new Averaging(Duration.ofDays(1), Duration.ofMinutes(30),
+                ValidityRule.iedDailyFromHalfHours(), DetectionLimitConvention.AS_MEASURED, ZoneOffset.UTC);
         EmissionLimit coLimit = new EmissionLimit("CO", CO_HALF_HOUR_LIMIT, BASIS.describe(), Duration.ofMinutes(30));
 
         List<TimedValue> coBasis = BASIS.convertAll(co, MOLAR_MASS.get("CO"));
@@ -232,8 +236,10 @@ final class CampaignFixture {
                 flags.add(String.format(java.util.Locale.ROOT, "invalid: %.0f %% data", a.capturePercent()));
             }
             boolean over = exceeded.stream().anyMatch(e -> e.average().start().equals(a.start()));
+            LimitStatus status = limit.isEmpty() ? LimitStatus.NO_LIMIT : !a.valid() ? LimitStatus.NOT_ASSESSED
+                    : over ? LimitStatus.EXCEEDED : LimitStatus.WITHIN;
             b.result(new ResultRow(compound, period, a.start(), a.mean(), relative * a.mean(), "mg/m³", flags, limit,
-                    over));
+                    status));
         }
     }
 

@@ -1,6 +1,7 @@
 package org.tracegas.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.time.Instant;
@@ -8,6 +9,7 @@ import java.util.List;
 import java.util.OptionalDouble;
 
 import org.junit.jupiter.api.Test;
+import org.tracegas.qa.basis.LimitStatus;
 
 class CsvExportTest {
 
@@ -19,8 +21,9 @@ class CsvExportTest {
         // a quote inside a quoted field is doubled
         String csv = CsvExport.toCsv(List.of(
                 new ResultRow("CO", "30 min", T, 181.25, 17.0, "mg/m³", List.of("upset, plant log", "say \"hi\""),
-                        OptionalDouble.of(150), true),
-                new ResultRow("HCl", "30 min", T, 7.5, 1.0, "mg/m³", List.of(), OptionalDouble.empty(), false)));
+                        OptionalDouble.of(150), LimitStatus.EXCEEDED),
+                new ResultRow("HCl", "30 min", T, 7.5, 1.0, "mg/m³", List.of(), OptionalDouble.empty(),
+                        LimitStatus.NO_LIMIT)));
         String[] lines = csv.split("\r\n", -1);
         assertEquals(4, lines.length); // header, two records, empty after the last CRLF
         assertEquals(CsvExport.HEADER, lines[0]);
@@ -29,6 +32,16 @@ class CsvExportTest {
         assertEquals("HCl,30 min,2026-03-02T21:00:00Z,7.5,1.0,mg/m³,,,no limit", lines[2]);
         assertEquals("", lines[3]);
         assertTrue(csv.indexOf('\n') == csv.indexOf("\r\n") + 1, "no bare LF");
+    }
+
+    @Test
+    void aPeriodShortOfDataIsExportedAsNotAssessedNeverWithin() {
+        String csv = CsvExport.toCsv(List.of(new ResultRow("CO", "30 min", T, 20.0, 2.0, "mg/m³",
+                List.of("availability 60 % (18 of 30)"), OptionalDouble.of(150), LimitStatus.NOT_ASSESSED)));
+        assertTrue(csv.contains(",not assessed (insufficient data)"), csv);
+        assertTrue(!csv.contains("within"), csv);
+        assertThrows(IllegalArgumentException.class, () -> new ResultRow("CO", "30 min", T, 20.0, 2.0, "mg/m³",
+                List.of(), OptionalDouble.empty(), LimitStatus.WITHIN));
     }
 
     @Test
@@ -42,7 +55,7 @@ class CsvExportTest {
         ReportContent c = CampaignFixture.unsigned().build();
         String csv = CsvExport.toCsv(c.results());
         assertEquals(c.results().size() + 1, csv.split("\r\n").length);
-        assertEquals(c.results().stream().filter(ResultRow::exceeded).count(),
+        assertEquals(c.results().stream().filter(r -> r.status() == LimitStatus.EXCEEDED).count(),
                 csv.lines().filter(l -> l.endsWith(",exceeded")).count());
     }
 }

@@ -19,6 +19,7 @@ import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.tracegas.qa.basis.LimitStatus;
 import org.tracegas.qa.checks.CtsDriftCheck;
 import org.tracegas.qa.checks.ZeroSpanCheck;
 import org.tracegas.report.internal.Numbers;
@@ -173,7 +174,8 @@ class PdfReportWriterTest {
     void showsResultsWithUncertaintyAndExceedances() throws IOException {
         try (PDDocument doc = Loader.loadPDF(pdf)) {
             String t = text(doc, 1, doc.getNumberOfPages());
-            ResultRow exceeded = content.results().stream().filter(ResultRow::exceeded).findFirst().orElseThrow();
+            ResultRow exceeded = content.results().stream().filter(r -> r.status() == LimitStatus.EXCEEDED)
+                    .findFirst().orElseThrow();
             String[] vu = Numbers.withUncertainty(exceeded.value(), exceeded.expandedUncertainty());
             assertTrue(t.contains(vu[0] + " " + vu[1]), "value and U of the exceedance " + vu[0] + " " + vu[1]);
             assertTrue(t.contains("EXCEEDED"));

@@ -62,10 +62,7 @@ public final class CsvExport {
     }
 
     static String limitStatus(ResultRow r) {
-        if (r.limit().isEmpty()) {
-            return "no limit";
-        }
-        return r.exceeded() ? "exceeded" : "within limit";
+        return r.status().label();
     }
 
     static String quote(String field) {

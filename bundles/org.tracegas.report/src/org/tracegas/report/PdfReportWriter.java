@@ -20,6 +20,7 @@ import org.apache.pdfbox.cos.COSString;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.tracegas.qa.basis.LimitStatus;
 import org.tracegas.qa.uncertainty.BudgetRow;
 import org.tracegas.report.internal.Check;
 import org.tracegas.report.internal.Numbers;
@@ -211,11 +212,14 @@ public final class PdfReportWriter {
         pw.paragraph("Concentrations on the reporting basis (" + content.campaign().reportingBasis() + "). U is the "
                 + "expanded uncertainty with coverage factor k = 2 (JCGM 100:2008); values are rounded to the "
                 + "decimal place of U given with two significant digits.", 9f);
+        for (String rule : content.averagingRules()) {
+            pw.paragraph(rule, 9f);
+        }
         List<String[]> rows = new ArrayList<>();
         for (ResultRow r : content.results()) {
             String[] vu = Numbers.withUncertainty(r.value(), r.expandedUncertainty());
             String limit = r.limit().isPresent() ? Numbers.significant(r.limit().getAsDouble()) : "-";
-            String status = r.limit().isEmpty() ? "no limit" : r.exceeded() ? "EXCEEDED" : "within";
+            String status = r.status() == LimitStatus.EXCEEDED ? "EXCEEDED" : r.status().label();
             rows.add(new String[] {r.compound(), r.period(), TABLE_TIME.format(r.periodStart()), vu[0], vu[1], r.unit(),
                     String.join("; ", r.flags()), limit, status});
         }

@@ -21,6 +21,7 @@ public final class ReportContent {
     private final List<Plot> controlCharts;
     private final List<UncertaintyTable> budgets;
     private final List<ResultRow> results;
+    private final List<String> averagingRules;
     private final List<Plot> timeSeries;
     private final List<SpectrumFit> spectra;
     private final List<String> cautions;
@@ -37,6 +38,7 @@ public final class ReportContent {
         controlCharts = Check.list("controlCharts", b.controlCharts);
         budgets = Check.list("budgets", b.budgets);
         results = Check.list("results", b.results);
+        averagingRules = Check.list("averagingRules", b.averagingRules);
         timeSeries = Check.list("timeSeries", b.timeSeries);
         spectra = Check.list("spectra", b.spectra);
         cautions = Check.list("cautions", b.cautions);
@@ -79,6 +81,14 @@ public final class ReportContent {
 
     public List<ResultRow> results() {
         return results;
+    }
+
+    /**
+     * The rules the averages were made by, each with its source: validity of a period, treatment of values below
+     * the detection limit, what was excluded.
+     */
+    public List<String> averagingRules() {
+        return averagingRules;
     }
 
     public List<Plot> timeSeries() {
@@ -177,8 +187,10 @@ public final class ReportContent {
             d.add(r.compound()).add(r.period()).add(r.periodStart()).add(r.value()).add(r.expandedUncertainty())
                     .add(r.unit()).add(r.flags().size());
             r.flags().forEach(d::add);
-            d.add(r.limit().isPresent() ? Double.toString(r.limit().getAsDouble()) : "none").add(r.exceeded());
+            d.add(r.limit().isPresent() ? Double.toString(r.limit().getAsDouble()) : "none").add(r.status().name());
         }
+        d.add(averagingRules.size());
+        averagingRules.forEach(d::add);
         d.add(timeSeries.size());
         for (Plot p : timeSeries) {
             digestPlot(d, p);
@@ -210,6 +222,7 @@ public final class ReportContent {
         private final List<Plot> controlCharts = new ArrayList<>();
         private final List<UncertaintyTable> budgets = new ArrayList<>();
         private final List<ResultRow> results = new ArrayList<>();
+        private final List<String> averagingRules = new ArrayList<>();
         private final List<Plot> timeSeries = new ArrayList<>();
         private final List<SpectrumFit> spectra = new ArrayList<>();
         private final List<String> cautions = new ArrayList<>();
@@ -247,6 +260,15 @@ public final class ReportContent {
 
         public Builder result(ResultRow row) {
             results.add(row);
+            return this;
+        }
+
+        /** A rule the averages were made by, with its source; each distinct text is kept once. */
+        public Builder averagingRule(String text) {
+            Check.text("averaging rule", text);
+            if (!averagingRules.contains(text)) {
+                averagingRules.add(text);
+            }
             return this;
         }
 

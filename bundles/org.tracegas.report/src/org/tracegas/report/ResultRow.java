@@ -4,6 +4,7 @@ import java.time.Instant;
 import java.util.List;
 import java.util.OptionalDouble;
 
+import org.tracegas.qa.basis.LimitStatus;
 import org.tracegas.report.internal.Check;
 
 /**
@@ -17,10 +18,11 @@ import org.tracegas.report.internal.Check;
  * @param unit                unit, for example "mg/m³"
  * @param flags               data flags, for example "invalid: 70 % data", "O2 guard"
  * @param limit               the client's limit for this compound and period, if any
- * @param exceeded            whether the limit comparison found an exceedance
+ * @param status              how the value stands against the limit: no limit, not assessed (the period lacks the
+ *                            data its validity rule asks for), within, or exceeded
  */
 public record ResultRow(String compound, String period, Instant periodStart, double value, double expandedUncertainty,
-        String unit, List<String> flags, OptionalDouble limit, boolean exceeded) {
+        String unit, List<String> flags, OptionalDouble limit, LimitStatus status) {
 
     public ResultRow {
         Check.text("compound", compound);
@@ -36,9 +38,10 @@ public record ResultRow(String compound, String period, Instant periodStart, dou
         Check.notNull("unit", unit);
         flags = Check.list("flags", flags);
         Check.notNull("limit", limit);
-        if (exceeded && limit.isEmpty()) {
-            throw new IllegalArgumentException("result of " + compound + " at " + periodStart
-                    + " is marked exceeded but has no limit");
+        Check.notNull("status", status);
+        if ((status == LimitStatus.NO_LIMIT) != limit.isEmpty()) {
+            throw new IllegalArgumentException("result of " + compound + " at " + periodStart + " has status "
+                    + status + (limit.isEmpty() ? " but no limit" : " but a limit"));
         }
     }
 }

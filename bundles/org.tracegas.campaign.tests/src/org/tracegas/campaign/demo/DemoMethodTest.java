@@ -57,6 +57,8 @@ class DemoMethodTest {
         assertEquals(List.of(38.4, 115.2, 614.4), co.ppmMetres());
         assertTrue(Files.readString(folder.resolve("library.plan")).contains("ppm-m = 38.4, 115.2, 614.4\n"));
         assertEquals(folder.resolve("line-lists/co-invented.par"), co.lineList());
+        assertEquals("table", co.partition());
+        assertEquals(folder.resolve("line-lists/co-q.txt"), co.partitionTable());
 
         QaPlan qa = QaPlan.read(write("qa.plan", DemoMethod.qaPlanText()));
         assertEquals(DemoCampaignFiles.CTS_CO_PPM, qa.ctsPpm());

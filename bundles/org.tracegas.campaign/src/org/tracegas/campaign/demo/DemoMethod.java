@@ -147,8 +147,9 @@ public final class DemoMethod {
             s.append("\n[compound]\nname = ").append(gas.name()).append("\ncas = ").append(gas.casNumber())
                     .append("\nformula = ").append(gas.formula()).append("\nmolar-mass = ")
                     .append(number(gas.molarMass())).append("\nline-list = ").append(lineLists).append('/')
-                    .append(InventedLineLists.fileName(gas)).append("\npartition = ")
-                    .append(gas.linear() ? "linear" : "non-linear").append("\nppm-m = ").append(amounts)
+                    .append(InventedLineLists.fileName(gas)).append("\npartition = table\npartition-table = ")
+                    .append(lineLists).append('/').append(DemoPhysics.partitionTableName(gas)).append("\nppm-m = ")
+                    .append(amounts)
                     .append('\n');
         }
         return s.toString();

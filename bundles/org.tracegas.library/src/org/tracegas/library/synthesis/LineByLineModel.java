@@ -56,6 +56,10 @@ public final class LineByLineModel {
         return lines;
     }
 
+    public PartitionFunction partitionFunction() {
+        return partitionFunction;
+    }
+
     public LineCutoff cutoff() {
         return cutoff;
     }

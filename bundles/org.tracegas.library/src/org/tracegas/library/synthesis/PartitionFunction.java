@@ -10,6 +10,11 @@ public interface PartitionFunction {
      */
     double value(double temperature);
 
+    /** Where the values come from, for the provenance of what is computed with them. */
+    default String description() {
+        return getClass().getSimpleName();
+    }
+
     /** Q(numerator) / Q(denominator). */
     default double ratio(double numeratorTemperature, double denominatorTemperature) {
         return value(numeratorTemperature) / value(denominatorTemperature);

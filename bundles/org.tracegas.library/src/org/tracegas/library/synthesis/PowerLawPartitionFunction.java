@@ -10,7 +10,8 @@ package org.tracegas.library.synthesis;
  * for CO (w = 2143 cm-1) it stays below 0.02 % between 250 and 350 K, for H2O (lowest w = 1595 cm-1) below
  * 0.1 %, but for molecules with low bending modes it is large, for CO2 (w2 = 667 cm-1, twofold) about 6 % at
  * 350 K and 12 % at 400 K (harmonic estimate; fundamental wavenumbers from memory). Use a
- * {@link TabulatedPartitionFunction} for those, and for all molecules far from 296 K.
+ * {@link TabulatedPartitionFunction} or {@link MolecularConstantsPartitionFunction} for those, and for all
+ * molecules far from 296 K (against TIPS-2021 at 450 K this law is 17 % off for CO2, 20 % for N2O, 80 % for SF6).
  */
 public final class PowerLawPartitionFunction implements PartitionFunction {
 
@@ -40,6 +41,11 @@ public final class PowerLawPartitionFunction implements PartitionFunction {
             throw new IllegalArgumentException("temperature must be positive and finite, was " + temperature);
         }
         return Math.pow(temperature, exponent);
+    }
+
+    @Override
+    public String description() {
+        return "Q ~ T^" + exponent + " (rigid rotor without vibration)";
     }
 
     public double exponent() {

@@ -68,8 +68,9 @@ public final class ReferenceSynthesizer {
         ReferenceConditions conditions = new ReferenceConditions(path.concentrationPathLength(), path.temperature(),
                 path.pressure(), request.resolution(), request.apodization().name());
         Origin origin = new Origin(OriginKind.SYNTHETIC, String.format(Locale.ROOT,
-                "line by line from %s (%d lines), Voigt profile, cut-off %s, %s ppm over %s m",
-                model.lines().name(), model.lines().size(), model.cutoff(), path.concentration(), path.pathLength()));
+                "line by line from %s (%d lines), Voigt profile, cut-off %s, Q(T) %s, %s ppm over %s m",
+                model.lines().name(), model.lines().size(), model.cutoff(), model.partitionFunction().description(),
+                path.concentration(), path.pathLength()));
         return new ReferenceSpectrum(new Spectrum(out, absorbance, Ordinate.ABSORBANCE),
                 new ReferenceMetadata(compound, conditions, origin, request.relativeUncertainty()));
     }

@@ -9,12 +9,22 @@ public final class TabulatedPartitionFunction implements PartitionFunction {
 
     private final double[] temperatures;
     private final double[] values;
+    private final String source;
 
     /**
      * @param temperatures strictly rising temperatures in K, at least 2
      * @param values       Q at each temperature, positive
      */
     public TabulatedPartitionFunction(double[] temperatures, double[] values) {
+        this(temperatures, values, "table of " + (temperatures == null ? 0 : temperatures.length) + " values");
+    }
+
+    /**
+     * @param temperatures strictly rising temperatures in K, at least 2
+     * @param values       Q at each temperature, positive
+     * @param source       where the table comes from, for provenance
+     */
+    public TabulatedPartitionFunction(double[] temperatures, double[] values, String source) {
         if (temperatures == null || values == null || temperatures.length < 2
                 || temperatures.length != values.length) {
             throw new IllegalArgumentException("temperatures and values must have the same length, at least 2");
@@ -30,6 +40,12 @@ public final class TabulatedPartitionFunction implements PartitionFunction {
         }
         this.temperatures = temperatures.clone();
         this.values = values.clone();
+        this.source = source;
+    }
+
+    @Override
+    public String description() {
+        return source;
     }
 
     @Override

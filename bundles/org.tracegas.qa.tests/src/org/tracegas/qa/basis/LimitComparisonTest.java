@@ -17,7 +17,7 @@ class LimitComparisonTest {
 
     private static PeriodAverage day(int n, double mean, boolean valid) {
         Instant s = D0.plus(Duration.ofDays(n));
-        return new PeriodAverage(s, s.plus(Duration.ofDays(1)), mean, valid ? 48 : 20, 48, valid);
+        return new PeriodAverage(s, s.plus(Duration.ofDays(1)), mean, valid ? 48 : 20, 0, 0, 48, valid, 0, 0);
     }
 
     @Test
@@ -39,8 +39,20 @@ class LimitComparisonTest {
     }
 
     @Test
+    void aPeriodShortOfDataIsNotAssessedEvenBelowTheLimit() {
+        // a value from a period that fails its availability rule says nothing about compliance: IED 2010/75/EU
+        // Annex VI Part 8 point 1.2 discards such days; reporting them "within limit" would claim what was not shown
+        LimitComparison plain = new LimitComparison(0);
+        assertEquals(LimitStatus.NOT_ASSESSED, plain.status(SO2_DAILY, day(0, 10, false)));
+        assertEquals(LimitStatus.NOT_ASSESSED, plain.status(SO2_DAILY, day(0, 80, false)));
+        assertEquals(LimitStatus.WITHIN, plain.status(SO2_DAILY, day(0, 49.9, true)));
+        assertEquals(LimitStatus.EXCEEDED, plain.status(SO2_DAILY, day(0, 50.1, true)));
+        assertEquals(LimitStatus.NO_LIMIT, plain.status(null, day(0, 80, true)));
+    }
+
+    @Test
     void rejectsAveragesOfAnotherPeriod() {
-        PeriodAverage halfHour = new PeriodAverage(D0, D0.plus(Duration.ofMinutes(30)), 60, 30, 30, true);
+        PeriodAverage halfHour = new PeriodAverage(D0, D0.plus(Duration.ofMinutes(30)), 60, 30, 0, 0, 30, true, 0, 0);
         assertThrows(IllegalArgumentException.class,
                 () -> new LimitComparison(0).exceedances(SO2_DAILY, List.of(halfHour)));
     }

@@ -28,6 +28,23 @@ public final class LimitComparison {
     }
 
     /**
+     * How one average stands: without a limit {@link LimitStatus#NO_LIMIT}; a period that fails its validity rule
+     * is {@link LimitStatus#NOT_ASSESSED}, never within; otherwise the validated value against the limit.
+     *
+     * @param limit the limit of the compound and period, or null when none applies
+     */
+    public LimitStatus status(EmissionLimit limit, PeriodAverage average) {
+        Require.notNull("average", average);
+        if (limit == null) {
+            return LimitStatus.NO_LIMIT;
+        }
+        if (!average.valid()) {
+            return LimitStatus.NOT_ASSESSED;
+        }
+        return validatedValue(limit, average.mean()) > limit.value() ? LimitStatus.EXCEEDED : LimitStatus.WITHIN;
+    }
+
+    /**
      * Valid averages whose validated value exceeds the limit.
      *
      * @throws IllegalArgumentException if an average's period differs from the limit's period

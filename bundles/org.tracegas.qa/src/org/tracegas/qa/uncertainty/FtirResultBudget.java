@@ -13,6 +13,8 @@ import org.tracegas.qa.internal.Require;
  */
 public final class FtirResultBudget {
 
+    /** Name of the budget row of the fit residual: noise of the single spectrum. */
+    public static final String FIT_ROW = "spectral fit";
     /** Name of the budget row of the water vapour used for the wet-to-dry conversion. */
     public static final String H2O_ROW = "H2O for wet-to-dry";
     /** Name of the budget row of the side-channel O2 used for the reference-oxygen correction. */
@@ -56,13 +58,22 @@ public final class FtirResultBudget {
         double c = concentration;
         // sensitivities of a product model at the estimates: C/x_i for factors, -C/x_i for divisors
         return UncertaintyBudget.of(compound, c, "ppm", List.of(
-                new UncertaintyComponent("spectral fit", c, fitUncertainty, 1.0, "ppm"),
+                new UncertaintyComponent(FIT_ROW, c, fitUncertainty, 1.0, "ppm"),
                 new UncertaintyComponent("reference spectrum", 1.0, relativeReferenceUncertainty, c, "1"),
                 new UncertaintyComponent("path length", pathM, pathUncertaintyM, -c / pathM, "m"),
                 new UncertaintyComponent("cell temperature", temperatureK, temperatureUncertaintyK, c / temperatureK,
                         "K"),
                 new UncertaintyComponent("cell pressure", pressureKPa, pressureUncertaintyKPa, -c / pressureKPa,
                         "kPa")));
+    }
+
+    /**
+     * Whether a row of these budgets varies at random from one spectrum to the next: the fit residual does; the
+     * reference spectrum, path, temperature and pressure calibrations, and the H2O and O2 rows (whose own
+     * calibration dominates over minutes) are taken as systematic, common to every value of a campaign.
+     */
+    public static boolean random(UncertaintyComponent row) {
+        return row.name().equals(FIT_ROW);
     }
 
     /**

@@ -2,6 +2,7 @@ package org.tracegas.qa.uncertainty;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Predicate;
 
 import org.tracegas.qa.internal.Require;
 
@@ -104,14 +105,27 @@ public final class UncertaintyBudget {
 
     /** u_c(y). */
     public double combinedStandardUncertainty() {
+        return combinedStandardUncertainty(c -> true);
+    }
+
+    /**
+     * The part of u_c(y) from some of the inputs (with their correlations among themselves), for example the
+     * random part that averages down over repeated results apart from the systematic part that does not.
+     */
+    public double combinedStandardUncertainty(Predicate<UncertaintyComponent> which) {
         int n = components.size();
         double variance = 0;
         for (int i = 0; i < n; i++) {
+            if (!which.test(components.get(i))) {
+                continue;
+            }
             double ci = components.get(i).contribution();
             variance += ci * ci;
             if (correlation != null) {
                 for (int j = i + 1; j < n; j++) {
-                    variance += 2 * ci * components.get(j).contribution() * correlation[i][j];
+                    if (which.test(components.get(j))) {
+                        variance += 2 * ci * components.get(j).contribution() * correlation[i][j];
+                    }
                 }
             }
         }

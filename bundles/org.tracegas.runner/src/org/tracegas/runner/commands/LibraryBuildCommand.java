@@ -46,7 +46,8 @@ public final class LibraryBuildCommand implements Command {
                   The plan (key = value lines) names the library, the cell (temperature K, pressure kPa,
                   path-length m), resolution cm-1, apodization, the output axis (first-wavenumber, step, points),
                   uncertainty, and one [compound] block per gas (name, cas, formula, molar-mass, line-list,
-                  partition linear|non-linear, ppm-m list). The folder gets library.manifest and one two-column
+                  partition table|constants|linear|non-linear with partition-table for a Q(T) file, ppm-m
+                  list). The folder gets library.manifest and one two-column
                   text file per reference; the workspace records a LIBRARY version of the manifest text and
                   the SHA-256 of each file.
                 exit codes: 0 built and recorded, 2 wrong arguments, 3 bad plan or line list (file, line and
