@@ -34,7 +34,7 @@ public final class AnalysisRuns {
     /** A job running the project's method over all its measurements and recording the results. */
     public static BatchQuantificationJob job(WorkspaceAccess access, Session session, Seeded project,
             Consumer<List<BatchQuantificationJob.Outcome>> whenDone) {
-        QuantificationMethod method = project.method();
+        QuantificationMethod method = project.method().method();
         Quantifier quantifier = new Quantifier(PreparedMethod.prepare(method, project.samples().get(0).axis()),
                 project.libraryVersionId(), SOFTWARE, true);
         List<BatchQuantificationJob.Item> items = new ArrayList<>();
