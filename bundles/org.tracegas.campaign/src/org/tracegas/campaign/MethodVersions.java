@@ -37,6 +37,13 @@ public final class MethodVersions {
 
     /** The model of a method version whose stored method is at hand. */
     public static AnalysisMethod model(VersionInfo version, StoredMethod stored) {
+        AnalysisMethod m = model(version);
+        fillRegions(m.getVersions().get(0), stored.method());
+        return m;
+    }
+
+    /** The model of a method version as the store lists it, without its regions. */
+    public static AnalysisMethod model(VersionInfo version) {
         WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
         AnalysisMethod m = f.createAnalysisMethod();
         m.setId(version.itemId());
@@ -48,7 +55,6 @@ public final class MethodVersions {
         mv.setReason(version.reason());
         mv.setCreated(version.created());
         mv.setContentHash(version.contentHash());
-        fillRegions(mv, stored.method());
         m.getVersions().add(mv);
         return m;
     }
