@@ -85,7 +85,8 @@ class StackProcessorTest {
                 "Project");
         lib = store.versions().create(analyst, VersionKind.LIBRARY, library.name(),
                 "sha=" + library.contentHash() + "\n", "test");
-        met = store.versions().create(analyst, VersionKind.METHOD, method.name(), method.canonicalText(), "test");
+        met = store.versions().create(analyst, VersionKind.METHOD, method.name(),
+                new StoredMethod(method, DemoMethod.transform(), lib.id(), library.contentHash()).content(), "test");
     }
 
     @AfterEach

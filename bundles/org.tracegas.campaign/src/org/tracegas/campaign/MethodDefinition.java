@@ -4,6 +4,8 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
 import java.util.Set;
 
 import org.tracegas.library.ReferenceLibrary;
@@ -18,6 +20,7 @@ import org.tracegas.quantify.ReferenceSpectrum;
 import org.tracegas.quantify.ReportingUnit;
 import org.tracegas.quantify.ShiftTerm;
 import org.tracegas.quantify.WavenumberWindow;
+import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -25,7 +28,8 @@ import org.tracegas.store.WorkspaceStore;
 
 /**
  * A quantification method as a lab writes it, read from a method file; with the references of its library it
- * becomes a {@link QuantificationMethod}.
+ * becomes a {@link QuantificationMethod}. A stored method version is written in the same text, with the library
+ * pinned by its version instead of named by its folder (see {@link StoredMethod}).
  *
  * <pre>
  * method = Stack gas, 8 analytes
@@ -48,6 +52,8 @@ import org.tracegas.store.WorkspaceStore;
  * region = 2150..2160, 2170..2180 baseline 0 residual-limit 0.004     baseline order and an optional
  *                                                                     residual RMS limit; one line per region
  * </pre>
+ *
+ * @param libraryManifest the library folder's manifest; null in the definition read from a stored version
  */
 public record MethodDefinition(Path file, String name, Path libraryManifest, double pathLengthM, boolean nonlinearity,
         double tolerance, int maxIterations, double maxAbsorbance, ShiftTerm shift, ReportingUnit unit,
@@ -57,7 +63,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
     public record Recorded(VersionInfo libraryVersion, VersionInfo methodVersion, StoredMethod method) {
     }
 
-    private static final Set<String> HEAD = Set.of("method", "library", "path-length", "nonlinearity", "tolerance",
+    private static final Set<String> SETTINGS = Set.of("method", "path-length", "nonlinearity", "tolerance",
             "max-iterations", "max-absorbance", "shift", "reporting-unit");
     private static final Set<String> ANALYTE = Set.of("compound", "interferents", "region");
 
@@ -67,7 +73,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
 
     /** @throws FileFormatException naming the file, line and key of the first error */
     public static MethodDefinition read(Path file) throws IOException {
-        return parse(KeyValueFile.read(file));
+        return parse(KeyValueFile.read(file), Set.of("library"));
     }
 
     /**
@@ -77,13 +83,19 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
      * @throws FileFormatException naming the file, line and key of the first error
      */
     public static MethodDefinition parse(String text, Path file) throws FileFormatException {
-        return parse(KeyValueFile.parse(text, file));
+        return parse(KeyValueFile.parse(text, file), Set.of("library"));
     }
 
-    private static MethodDefinition parse(KeyValueFile f) throws FileFormatException {
+    /**
+     * @param libraryKeys the head's keys that name the library: {@code library} in a method file, the pinned
+     *                    version's keys in a stored version (whose definition then names no manifest)
+     */
+    static MethodDefinition parse(KeyValueFile f, Set<String> libraryKeys) throws FileFormatException {
         Path file = f.file();
         f.allowBlocks(Set.of("transform", "analyte"));
-        KeyValueFile.Section h = f.head().allow(HEAD);
+        Set<String> head = new java.util.HashSet<>(SETTINGS);
+        head.addAll(libraryKeys);
+        KeyValueFile.Section h = f.head().allow(head);
         List<KeyValueFile.Section> transforms = f.blocks("transform");
         if (transforms.size() != 1) {
             throw new FileFormatException(file, transforms.isEmpty() ? 0 : transforms.get(1).line(), "[transform]",
@@ -109,7 +121,8 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         if (analytes.isEmpty()) {
             throw new FileFormatException(file, 0, "[analyte]", "the method names no analyte");
         }
-        return new MethodDefinition(file, h.text("method"), f.resolve(h.text("library")), h.number("path-length"),
+        Path manifest = libraryKeys.contains("library") ? f.resolve(h.text("library")) : null;
+        return new MethodDefinition(file, h.text("method"), manifest, h.number("path-length"),
                 h.flag("nonlinearity", false), h.number("tolerance", QuantificationMethod.DEFAULT_TOLERANCE),
                 h.integer("max-iterations", QuantificationMethod.DEFAULT_MAX_ITERATIONS),
                 h.number("max-absorbance", QuantificationMethod.DEFAULT_MAX_ABSORBANCE),
@@ -149,19 +162,72 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
      * @throws FileFormatException naming the method file when the library lacks a compound the method fits
      */
     public QuantificationMethod build(ReferenceLibrary library) throws FileFormatException {
+        List<ReferenceSpectrum> references = new ArrayList<>();
+        for (org.tracegas.library.ReferenceSpectrum r : library.references()) {
+            references.add(new ReferenceSpectrum(r.compound().name(), r.spectrum(),
+                    r.metadata().conditions().concentrationPathLength()));
+        }
+        try {
+            return build(references, Optional.empty());
+        } catch (IllegalArgumentException e) {
+            throw new FileFormatException(file, 0, "", e.getMessage() + " (library " + libraryManifest + ")");
+        }
+    }
+
+    /**
+     * The method over given references and fit weights.
+     *
+     * @throws IllegalArgumentException when the references do not suit the analytes
+     */
+    QuantificationMethod build(List<ReferenceSpectrum> references, Optional<Spectrum> weights) {
         QuantificationMethod.Builder b = QuantificationMethod.builder(name).pathLengthMetres(pathLengthM)
                 .nonlinearity(nonlinearity).tolerance(tolerance).maxIterations(maxIterations)
                 .maxAbsorbance(maxAbsorbance).shiftTerm(shift).reportingUnit(unit);
         analytes.forEach(b::analyte);
-        for (org.tracegas.library.ReferenceSpectrum r : library.references()) {
-            b.reference(new ReferenceSpectrum(r.compound().name(), r.spectrum(),
-                    r.metadata().conditions().concentrationPathLength()));
+        references.forEach(b::reference);
+        weights.ifPresent(b::weights);
+        return b.build();
+    }
+
+    /**
+     * A method in this file's text: its settings, the given lines naming the library, its transform and its
+     * analytes. Numbers are written in Java's shortest exact decimal form, so the text reads back to the very
+     * same method.
+     */
+    static String write(QuantificationMethod m, String libraryLines, TransformSettings transform) {
+        StringBuilder s = new StringBuilder();
+        s.append("method = ").append(m.name()).append('\n').append(libraryLines);
+        s.append("path-length = ").append(m.pathLengthMetres()).append('\n');
+        s.append("nonlinearity = ").append(m.nonlinearity() ? "yes" : "no").append('\n');
+        s.append("tolerance = ").append(m.tolerance()).append('\n');
+        s.append("max-iterations = ").append(m.maxIterations()).append('\n');
+        s.append("max-absorbance = ").append(m.maxAbsorbance()).append('\n');
+        s.append("shift = ").append(constant(m.shiftTerm())).append('\n');
+        s.append("reporting-unit = ").append(constant(m.reportingUnit())).append('\n');
+        s.append("\n[transform]\n").append(TransformText.write(transform));
+        for (Analyte a : m.analytes()) {
+            s.append("\n[analyte]\ncompound = ").append(a.compound()).append('\n');
+            if (!a.interferents().isEmpty()) {
+                s.append("interferents = ").append(String.join(", ", a.interferents())).append('\n');
+            }
+            for (AnalysisRegion r : a.regions()) {
+                s.append("region = ");
+                for (int i = 0; i < r.windows().size(); i++) {
+                    WavenumberWindow w = r.windows().get(i);
+                    s.append(i == 0 ? "" : ", ").append(w.low()).append("..").append(w.high());
+                }
+                s.append(" baseline ").append(r.baselineOrder());
+                if (Double.isFinite(r.residualRmsLimit())) {
+                    s.append(" residual-limit ").append(r.residualRmsLimit());
+                }
+                s.append('\n');
+            }
         }
-        try {
-            return b.build();
-        } catch (IllegalArgumentException e) {
-            throw new FileFormatException(file, 0, "", e.getMessage() + " (library " + libraryManifest + ")");
-        }
+        return s.toString();
+    }
+
+    private static String constant(Enum<?> e) {
+        return e.name().toLowerCase(Locale.ROOT).replace('_', '-');
     }
 
     /**
@@ -172,6 +238,9 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
      * @throws FileFormatException naming the manifest, spectrum or method file at fault; nothing recorded
      */
     public Recorded record(WorkspaceStore store, Session actor) throws IOException {
+        if (libraryManifest == null) {
+            throw new IllegalStateException("the method of " + file + " is recorded already; it names no library folder");
+        }
         ReferenceLibrary library = LibraryManifestReader.forTwoColumnText().read(libraryManifest);
         String libraryContent = LibraryVersionText.of(libraryManifest);
         QuantificationMethod method = build(library);

@@ -11,25 +11,32 @@ import org.tracegas.quantify.Quantifier;
 import org.tracegas.spectrum.SpectralAxis;
 
 /**
- * What a METHOD version of a workspace holds, so that any runner rebuilds the exact method from it: the library
- * version the references came from, the transform of the interferograms, and the method's canonical text (which
- * holds every reference value).
+ * What a METHOD version of a workspace holds, so that any runner and the workbench rebuild the exact method from
+ * it: the method in the text of a method file ({@link MethodDefinition}), with the library pinned by its version
+ * and content hash in place of its folder, followed by the method's exact text (every reference value, see
+ * {@link QuantificationMethod#canonicalText()}). The head is what a person reads, edits and compares; the exact
+ * text must describe the very method the head declares over its references, or the version is refused.
  *
  * <pre>
- * tracegas-method-version 1
+ * method = Stack gas, 8 analytes
  * library-version = ...                 id of the LIBRARY version
  * library-sha256 = ...                  content hash of the library's references
+ * path-length = 4.85
+ * ...                                   the other settings of a method file, each written out
  * [transform]
- * ...                                   see {@link TransformText}
- * [method]
- * ...                                   the canonical text of the method
+ * ...
+ * [analyte]
+ * ...
+ * [exact]
+ * tracegas-quantification-method 1      the exact text of the method
+ * ...
  * </pre>
  */
 public record StoredMethod(QuantificationMethod method, TransformSettings transform, String libraryVersionId,
         String libraryContentHash) {
 
-    private static final String FORMAT = "tracegas-method-version 1";
-    private static final String METHOD = "\n[method]\n";
+    private static final String EXACT = "\n[exact]\n";
+    private static final Set<String> LIBRARY_KEYS = Set.of("library-version", "library-sha256");
 
     /**
      * The fit of this method on spectra of an axis.
@@ -41,9 +48,15 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
         return new Quantifier(PreparedMethod.prepare(method, axis), libraryContentHash, software, withSpectra);
     }
 
+    /** The method as a method file writes it, with its library version: what a person reads and compares. */
+    public String declaration() {
+        return MethodDefinition.write(method, "library-version = " + libraryVersionId + "\nlibrary-sha256 = "
+                + libraryContentHash + "\n", transform);
+    }
+
+    /** The text a METHOD version stores. */
     public String content() {
-        return FORMAT + "\nlibrary-version = " + libraryVersionId + "\nlibrary-sha256 = " + libraryContentHash
-                + "\n[transform]\n" + TransformText.write(transform) + METHOD.substring(1) + method.canonicalText();
+        return declaration() + EXACT + method.canonicalText();
     }
 
     /**
@@ -52,26 +65,31 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
      */
     public static StoredMethod parse(String content, String source) throws FileFormatException {
         Path where = Path.of(source);
-        if (!content.startsWith(FORMAT + "\n")) {
-            throw new FileFormatException(where, 1, "format", "expected '" + FORMAT + "'");
-        }
-        int split = content.indexOf(METHOD);
+        int split = content.indexOf(EXACT);
         if (split < 0) {
-            throw new FileFormatException(where, 0, "[method]", "the method text is missing");
+            throw new FileFormatException(where, 0, "[exact]", "the exact text of the method is missing");
         }
-        String head = content.substring(FORMAT.length() + 1, split + 1);
-        KeyValueFile settings = KeyValueFile.parse(head, where);
-        settings.allowBlocks(Set.of("transform"));
-        KeyValueFile.Section h = settings.head().allow(Set.of("library-version", "library-sha256"));
-        TransformSettings transform = TransformText.read(settings.blocks("transform").get(0));
-        int methodLine = (int) head.lines().count() + 3;
+        KeyValueFile head = KeyValueFile.parse(content.substring(0, split + 1), where);
+        MethodDefinition declared = MethodDefinition.parse(head, LIBRARY_KEYS);
+        int exactLine = (int) content.substring(0, split + 1).lines().count() + 2;
         QuantificationMethod method;
         try {
-            method = QuantificationMethod.parse(content.substring(split + METHOD.length()));
+            method = QuantificationMethod.parse(content.substring(split + EXACT.length()));
         } catch (IllegalArgumentException e) {
-            throw new FileFormatException(where, 0, "[method]", "method text starting at line " + methodLine + ": "
+            throw new FileFormatException(where, 0, "[exact]", "method text starting at line " + exactLine + ": "
                     + e.getMessage());
         }
-        return new StoredMethod(method, transform, h.text("library-version"), h.text("library-sha256"));
+        QuantificationMethod rebuilt;
+        try {
+            rebuilt = declared.build(method.references(), method.weights());
+        } catch (IllegalArgumentException e) {
+            throw new FileFormatException(where, 0, "[analyte]", e.getMessage());
+        }
+        if (!rebuilt.equals(method)) {
+            throw new FileFormatException(where, exactLine, "[exact]",
+                    "the exact text describes another method than the settings and analytes above it");
+        }
+        KeyValueFile.Section h = head.head();
+        return new StoredMethod(method, declared.transform(), h.text("library-version"), h.text("library-sha256"));
     }
 }

@@ -19,7 +19,6 @@ import org.eclipse.emf.common.util.EList;
  * <ul>
  *   <li>{@link org.tracegas.model.Client#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.Client#getContact <em>Contact</em>}</li>
- *   <li>{@link org.tracegas.model.Client#getSites <em>Sites</em>}</li>
  *   <li>{@link org.tracegas.model.Client#getProjects <em>Projects</em>}</li>
  * </ul>
  *
@@ -71,18 +70,6 @@ public interface Client extends StoredObject {
 	 * @generated
 	 */
 	void setContact(String value);
-
-	/**
-	 * Returns the value of the '<em><b>Sites</b></em>' containment reference list.
-	 * The list contents are of type {@link org.tracegas.model.Site}.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Sites</em>' containment reference list.
-	 * @see org.tracegas.model.WorkspacePackage#getClient_Sites()
-	 * @model containment="true"
-	 * @generated
-	 */
-	EList<Site> getSites();
 
 	/**
 	 * Returns the value of the '<em><b>Projects</b></em>' containment reference list.

@@ -19,7 +19,6 @@ import java.time.Instant;
  * <ul>
  *   <li>{@link org.tracegas.model.ContentVersion#getNumber <em>Number</em>}</li>
  *   <li>{@link org.tracegas.model.ContentVersion#getParent <em>Parent</em>}</li>
- *   <li>{@link org.tracegas.model.ContentVersion#getAuthor <em>Author</em>}</li>
  *   <li>{@link org.tracegas.model.ContentVersion#getReason <em>Reason</em>}</li>
  *   <li>{@link org.tracegas.model.ContentVersion#getCreated <em>Created</em>}</li>
  *   <li>{@link org.tracegas.model.ContentVersion#getContentHash <em>Content Hash</em>}</li>
@@ -80,28 +79,6 @@ public interface ContentVersion extends StoredObject {
 	 * @generated
 	 */
 	void setParent(ContentVersion value);
-
-	/**
-	 * Returns the value of the '<em><b>Author</b></em>' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Author</em>' reference.
-	 * @see #setAuthor(User)
-	 * @see org.tracegas.model.WorkspacePackage#getContentVersion_Author()
-	 * @model
-	 * @generated
-	 */
-	User getAuthor();
-
-	/**
-	 * Sets the value of the '{@link org.tracegas.model.ContentVersion#getAuthor <em>Author</em>}' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @param value the new value of the '<em>Author</em>' reference.
-	 * @see #getAuthor()
-	 * @generated
-	 */
-	void setAuthor(User value);
 
 	/**
 	 * Returns the value of the '<em><b>Reason</b></em>' attribute.

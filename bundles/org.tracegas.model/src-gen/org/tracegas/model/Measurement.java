@@ -4,8 +4,6 @@ package org.tracegas.model;
 
 import java.time.Instant;
 
-import org.eclipse.emf.common.util.EList;
-
 /**
  * <!-- begin-user-doc -->
  * A representation of the model object '<em><b>Measurement</b></em>'.
@@ -23,10 +21,6 @@ import org.eclipse.emf.common.util.EList;
  *   <li>{@link org.tracegas.model.Measurement#getTime <em>Time</em>}</li>
  *   <li>{@link org.tracegas.model.Measurement#getCellTemperature <em>Cell Temperature</em>}</li>
  *   <li>{@link org.tracegas.model.Measurement#getCellPressure <em>Cell Pressure</em>}</li>
- *   <li>{@link org.tracegas.model.Measurement#getOperator <em>Operator</em>}</li>
- *   <li>{@link org.tracegas.model.Measurement#getInstrument <em>Instrument</em>}</li>
- *   <li>{@link org.tracegas.model.Measurement#getSource <em>Source</em>}</li>
- *   <li>{@link org.tracegas.model.Measurement#getData <em>Data</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getMeasurement()
@@ -133,86 +127,5 @@ public interface Measurement extends StoredObject {
 	 * @generated
 	 */
 	void setCellPressure(double value);
-
-	/**
-	 * Returns the value of the '<em><b>Operator</b></em>' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Operator</em>' reference.
-	 * @see #setOperator(User)
-	 * @see org.tracegas.model.WorkspacePackage#getMeasurement_Operator()
-	 * @model
-	 * @generated
-	 */
-	User getOperator();
-
-	/**
-	 * Sets the value of the '{@link org.tracegas.model.Measurement#getOperator <em>Operator</em>}' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @param value the new value of the '<em>Operator</em>' reference.
-	 * @see #getOperator()
-	 * @generated
-	 */
-	void setOperator(User value);
-
-	/**
-	 * Returns the value of the '<em><b>Instrument</b></em>' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Instrument</em>' reference.
-	 * @see #setInstrument(Instrument)
-	 * @see org.tracegas.model.WorkspacePackage#getMeasurement_Instrument()
-	 * @model
-	 * @generated
-	 */
-	Instrument getInstrument();
-
-	/**
-	 * Sets the value of the '{@link org.tracegas.model.Measurement#getInstrument <em>Instrument</em>}' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @param value the new value of the '<em>Instrument</em>' reference.
-	 * @see #getInstrument()
-	 * @generated
-	 */
-	void setInstrument(Instrument value);
-
-	/**
-	 * Returns the value of the '<em><b>Source</b></em>' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Source</em>' reference.
-	 * @see #setSource(EmissionSource)
-	 * @see org.tracegas.model.WorkspacePackage#getMeasurement_Source()
-	 * @model
-	 * @generated
-	 */
-	EmissionSource getSource();
-
-	/**
-	 * Sets the value of the '{@link org.tracegas.model.Measurement#getSource <em>Source</em>}' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @param value the new value of the '<em>Source</em>' reference.
-	 * @see #getSource()
-	 * @generated
-	 */
-	void setSource(EmissionSource value);
-
-	/**
-	 * Returns the value of the '<em><b>Data</b></em>' containment reference list.
-	 * The list contents are of type {@link org.tracegas.model.SpectralDataRef}.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * <!-- begin-model-doc -->
-	 * Stored spectral arrays of this measurement (interferogram, single beam, absorbance).
-	 * <!-- end-model-doc -->
-	 * @return the value of the '<em>Data</em>' containment reference list.
-	 * @see org.tracegas.model.WorkspacePackage#getMeasurement_Data()
-	 * @model containment="true"
-	 * @generated
-	 */
-	EList<SpectralDataRef> getData();
 
 } // Measurement

@@ -17,7 +17,6 @@ import org.eclipse.emf.common.util.EList;
  * The following features are supported:
  * </p>
  * <ul>
- *   <li>{@link org.tracegas.model.MethodVersion#getLibrary <em>Library</em>}</li>
  *   <li>{@link org.tracegas.model.MethodVersion#getRegions <em>Regions</em>}</li>
  * </ul>
  *
@@ -26,31 +25,6 @@ import org.eclipse.emf.common.util.EList;
  * @generated
  */
 public interface MethodVersion extends ContentVersion {
-	/**
-	 * Returns the value of the '<em><b>Library</b></em>' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * <!-- begin-model-doc -->
-	 * Reference library version the method fits against.
-	 * <!-- end-model-doc -->
-	 * @return the value of the '<em>Library</em>' reference.
-	 * @see #setLibrary(LibraryVersion)
-	 * @see org.tracegas.model.WorkspacePackage#getMethodVersion_Library()
-	 * @model
-	 * @generated
-	 */
-	LibraryVersion getLibrary();
-
-	/**
-	 * Sets the value of the '{@link org.tracegas.model.MethodVersion#getLibrary <em>Library</em>}' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @param value the new value of the '<em>Library</em>' reference.
-	 * @see #getLibrary()
-	 * @generated
-	 */
-	void setLibrary(LibraryVersion value);
-
 	/**
 	 * Returns the value of the '<em><b>Regions</b></em>' containment reference list.
 	 * The list contents are of type {@link org.tracegas.model.AnalysisRegion}.

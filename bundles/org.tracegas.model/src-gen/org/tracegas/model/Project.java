@@ -23,11 +23,7 @@ import org.eclipse.emf.common.util.EList;
  *   <li>{@link org.tracegas.model.Project#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getEnd <em>End</em>}</li>
- *   <li>{@link org.tracegas.model.Project#getSources <em>Sources</em>}</li>
- *   <li>{@link org.tracegas.model.Project#getGrants <em>Grants</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getMeasurements <em>Measurements</em>}</li>
- *   <li>{@link org.tracegas.model.Project#getRuns <em>Runs</em>}</li>
- *   <li>{@link org.tracegas.model.Project#getReports <em>Reports</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getProject()
@@ -127,33 +123,6 @@ public interface Project extends StoredObject {
 	void setEnd(Instant value);
 
 	/**
-	 * Returns the value of the '<em><b>Sources</b></em>' reference list.
-	 * The list contents are of type {@link org.tracegas.model.EmissionSource}.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * <!-- begin-model-doc -->
-	 * Emission sources sampled in this campaign.
-	 * <!-- end-model-doc -->
-	 * @return the value of the '<em>Sources</em>' reference list.
-	 * @see org.tracegas.model.WorkspacePackage#getProject_Sources()
-	 * @model
-	 * @generated
-	 */
-	EList<EmissionSource> getSources();
-
-	/**
-	 * Returns the value of the '<em><b>Grants</b></em>' containment reference list.
-	 * The list contents are of type {@link org.tracegas.model.ProjectGrant}.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Grants</em>' containment reference list.
-	 * @see org.tracegas.model.WorkspacePackage#getProject_Grants()
-	 * @model containment="true"
-	 * @generated
-	 */
-	EList<ProjectGrant> getGrants();
-
-	/**
 	 * Returns the value of the '<em><b>Measurements</b></em>' containment reference list.
 	 * The list contents are of type {@link org.tracegas.model.Measurement}.
 	 * <!-- begin-user-doc -->
@@ -164,29 +133,5 @@ public interface Project extends StoredObject {
 	 * @generated
 	 */
 	EList<Measurement> getMeasurements();
-
-	/**
-	 * Returns the value of the '<em><b>Runs</b></em>' containment reference list.
-	 * The list contents are of type {@link org.tracegas.model.AnalysisRun}.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Runs</em>' containment reference list.
-	 * @see org.tracegas.model.WorkspacePackage#getProject_Runs()
-	 * @model containment="true"
-	 * @generated
-	 */
-	EList<AnalysisRun> getRuns();
-
-	/**
-	 * Returns the value of the '<em><b>Reports</b></em>' containment reference list.
-	 * The list contents are of type {@link org.tracegas.model.Report}.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Reports</em>' containment reference list.
-	 * @see org.tracegas.model.WorkspacePackage#getProject_Reports()
-	 * @model containment="true"
-	 * @generated
-	 */
-	EList<Report> getReports();
 
 } // Project

@@ -2,7 +2,6 @@
  */
 package org.tracegas.model;
 
-import org.eclipse.emf.common.util.EList;
 
 /**
  * <!-- begin-user-doc -->
@@ -19,7 +18,6 @@ import org.eclipse.emf.common.util.EList;
  * <ul>
  *   <li>{@link org.tracegas.model.ReferenceLibrary#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.ReferenceLibrary#getDescription <em>Description</em>}</li>
- *   <li>{@link org.tracegas.model.ReferenceLibrary#getVersions <em>Versions</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getReferenceLibrary()
@@ -70,17 +68,5 @@ public interface ReferenceLibrary extends StoredObject {
 	 * @generated
 	 */
 	void setDescription(String value);
-
-	/**
-	 * Returns the value of the '<em><b>Versions</b></em>' containment reference list.
-	 * The list contents are of type {@link org.tracegas.model.LibraryVersion}.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Versions</em>' containment reference list.
-	 * @see org.tracegas.model.WorkspacePackage#getReferenceLibrary_Versions()
-	 * @model containment="true"
-	 * @generated
-	 */
-	EList<LibraryVersion> getVersions();
 
 } // ReferenceLibrary

@@ -21,10 +21,8 @@ import org.eclipse.emf.ecore.EObject;
  * <ul>
  *   <li>{@link org.tracegas.model.Workspace#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.Workspace#getClients <em>Clients</em>}</li>
- *   <li>{@link org.tracegas.model.Workspace#getInstruments <em>Instruments</em>}</li>
  *   <li>{@link org.tracegas.model.Workspace#getLibraries <em>Libraries</em>}</li>
  *   <li>{@link org.tracegas.model.Workspace#getMethods <em>Methods</em>}</li>
- *   <li>{@link org.tracegas.model.Workspace#getUsers <em>Users</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getWorkspace()
@@ -67,18 +65,6 @@ public interface Workspace extends EObject {
 	EList<Client> getClients();
 
 	/**
-	 * Returns the value of the '<em><b>Instruments</b></em>' containment reference list.
-	 * The list contents are of type {@link org.tracegas.model.Instrument}.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Instruments</em>' containment reference list.
-	 * @see org.tracegas.model.WorkspacePackage#getWorkspace_Instruments()
-	 * @model containment="true"
-	 * @generated
-	 */
-	EList<Instrument> getInstruments();
-
-	/**
 	 * Returns the value of the '<em><b>Libraries</b></em>' containment reference list.
 	 * The list contents are of type {@link org.tracegas.model.ReferenceLibrary}.
 	 * <!-- begin-user-doc -->
@@ -101,17 +87,5 @@ public interface Workspace extends EObject {
 	 * @generated
 	 */
 	EList<AnalysisMethod> getMethods();
-
-	/**
-	 * Returns the value of the '<em><b>Users</b></em>' containment reference list.
-	 * The list contents are of type {@link org.tracegas.model.User}.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return the value of the '<em>Users</em>' containment reference list.
-	 * @see org.tracegas.model.WorkspacePackage#getWorkspace_Users()
-	 * @model containment="true"
-	 * @generated
-	 */
-	EList<User> getUsers();
 
 } // Workspace

@@ -40,24 +40,6 @@ public interface WorkspaceFactory extends EFactory {
 	Client createClient();
 
 	/**
-	 * Returns a new object of class '<em>Site</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Site</em>'.
-	 * @generated
-	 */
-	Site createSite();
-
-	/**
-	 * Returns a new object of class '<em>Emission Source</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Emission Source</em>'.
-	 * @generated
-	 */
-	EmissionSource createEmissionSource();
-
-	/**
 	 * Returns a new object of class '<em>Project</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -65,24 +47,6 @@ public interface WorkspaceFactory extends EFactory {
 	 * @generated
 	 */
 	Project createProject();
-
-	/**
-	 * Returns a new object of class '<em>Project Grant</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Project Grant</em>'.
-	 * @generated
-	 */
-	ProjectGrant createProjectGrant();
-
-	/**
-	 * Returns a new object of class '<em>Instrument</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Instrument</em>'.
-	 * @generated
-	 */
-	Instrument createInstrument();
 
 	/**
 	 * Returns a new object of class '<em>Measurement</em>'.
@@ -94,15 +58,6 @@ public interface WorkspaceFactory extends EFactory {
 	Measurement createMeasurement();
 
 	/**
-	 * Returns a new object of class '<em>Spectral Data Ref</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Spectral Data Ref</em>'.
-	 * @generated
-	 */
-	SpectralDataRef createSpectralDataRef();
-
-	/**
 	 * Returns a new object of class '<em>Reference Library</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -110,24 +65,6 @@ public interface WorkspaceFactory extends EFactory {
 	 * @generated
 	 */
 	ReferenceLibrary createReferenceLibrary();
-
-	/**
-	 * Returns a new object of class '<em>Library Version</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Library Version</em>'.
-	 * @generated
-	 */
-	LibraryVersion createLibraryVersion();
-
-	/**
-	 * Returns a new object of class '<em>Reference Spectrum</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Reference Spectrum</em>'.
-	 * @generated
-	 */
-	ReferenceSpectrum createReferenceSpectrum();
 
 	/**
 	 * Returns a new object of class '<em>Analysis Method</em>'.
@@ -155,51 +92,6 @@ public interface WorkspaceFactory extends EFactory {
 	 * @generated
 	 */
 	AnalysisRegion createAnalysisRegion();
-
-	/**
-	 * Returns a new object of class '<em>Analysis Run</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Analysis Run</em>'.
-	 * @generated
-	 */
-	AnalysisRun createAnalysisRun();
-
-	/**
-	 * Returns a new object of class '<em>Result</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Result</em>'.
-	 * @generated
-	 */
-	Result createResult();
-
-	/**
-	 * Returns a new object of class '<em>Qa Check</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Qa Check</em>'.
-	 * @generated
-	 */
-	QaCheck createQaCheck();
-
-	/**
-	 * Returns a new object of class '<em>Report</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>Report</em>'.
-	 * @generated
-	 */
-	Report createReport();
-
-	/**
-	 * Returns a new object of class '<em>User</em>'.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @return a new object of class '<em>User</em>'.
-	 * @generated
-	 */
-	User createUser();
 
 	/**
 	 * Returns the package supported by this factory.

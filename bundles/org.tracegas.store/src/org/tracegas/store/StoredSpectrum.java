@@ -6,7 +6,7 @@ import org.tracegas.spectrum.Spectrum;
 /**
  * A spectrum read back from the store.
  *
- * @param dataId        the stored array's id (what {@link org.tracegas.model.SpectralDataRef} refers to)
+ * @param dataId        the stored array's id
  * @param measurementId the measurement, or null
  * @param sha256        SHA-256, hex, of the stored value bytes
  */

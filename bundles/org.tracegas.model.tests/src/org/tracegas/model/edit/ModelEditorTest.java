@@ -10,12 +10,13 @@ import java.util.List;
 
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.tracegas.model.AnalysisMethod;
+import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.Client;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Measurement;
+import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
-import org.tracegas.model.Role;
-import org.tracegas.model.User;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.model.WorkspacePackage.Literals;
@@ -76,20 +77,25 @@ class ModelEditorTest {
 
     @Test
     void manyValuedEnumAndReferenceChangesAreUndone() {
-        User user = factory.createUser();
-        editor.add(workspace, Literals.WORKSPACE__USERS, user);
-        editor.addAll(user, Literals.USER__ROLES, List.of(Role.ANALYST, Role.REVIEWER));
-        assertEquals(List.of(Role.ANALYST, Role.REVIEWER), user.getRoles());
+        AnalysisMethod method = factory.createAnalysisMethod();
+        MethodVersion first = factory.createMethodVersion();
+        MethodVersion second = factory.createMethodVersion();
+        method.getVersions().addAll(List.of(first, second));
+        editor.add(workspace, Literals.WORKSPACE__METHODS, method);
+        AnalysisRegion region = factory.createAnalysisRegion();
+        editor.add(second, Literals.METHOD_VERSION__REGIONS, region);
+        editor.addAll(region, Literals.ANALYSIS_REGION__INTERFERENTS, List.of("H2O", "CO2"));
+        assertEquals(List.of("H2O", "CO2"), region.getInterferents());
 
         Measurement measurement = factory.createMeasurement();
         editor.set(measurement, Literals.MEASUREMENT__KIND, MeasurementKind.SPIKE);
-        editor.set(measurement, Literals.MEASUREMENT__OPERATOR, user);
+        editor.set(second, Literals.CONTENT_VERSION__PARENT, first);
         editor.undo();
-        assertNull(measurement.getOperator());
+        assertNull(second.getParent());
         editor.undo();
         assertEquals(MeasurementKind.SAMPLE, measurement.getKind());
         editor.undo();
-        assertTrue(user.getRoles().isEmpty());
+        assertTrue(region.getInterferents().isEmpty());
     }
 
     @Test
@@ -97,7 +103,7 @@ class ModelEditorTest {
         Client client = factory.createClient();
         editor.add(workspace, Literals.WORKSPACE__CLIENTS, client);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> editor.add(client, Literals.CLIENT__PROJECTS, factory.createUser()));
+                () -> editor.add(client, Literals.CLIENT__PROJECTS, factory.createMeasurement()));
         assertTrue(e.getMessage().contains("'projects'"), e.getMessage());
         // the refused change left nothing on the stack: one undo empties the workspace again
         editor.undo();

@@ -19,7 +19,6 @@ import org.eclipse.emf.ecore.util.InternalEList;
 
 import org.tracegas.model.Client;
 import org.tracegas.model.Project;
-import org.tracegas.model.Site;
 import org.tracegas.model.WorkspacePackage;
 
 /**
@@ -32,7 +31,6 @@ import org.tracegas.model.WorkspacePackage;
  * <ul>
  *   <li>{@link org.tracegas.model.impl.ClientImpl#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ClientImpl#getContact <em>Contact</em>}</li>
- *   <li>{@link org.tracegas.model.impl.ClientImpl#getSites <em>Sites</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ClientImpl#getProjects <em>Projects</em>}</li>
  * </ul>
  *
@@ -78,16 +76,6 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 	 * @ordered
 	 */
 	protected String contact = CONTACT_EDEFAULT;
-
-	/**
-	 * The cached value of the '{@link #getSites() <em>Sites</em>}' containment reference list.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getSites()
-	 * @generated
-	 * @ordered
-	 */
-	protected EList<Site> sites;
 
 	/**
 	 * The cached value of the '{@link #getProjects() <em>Projects</em>}' containment reference list.
@@ -170,19 +158,6 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 	 * @generated
 	 */
 	@Override
-	public EList<Site> getSites() {
-		if (sites == null) {
-			sites = new EObjectContainmentEList<Site>(Site.class, this, WorkspacePackage.CLIENT__SITES);
-		}
-		return sites;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
 	public EList<Project> getProjects() {
 		if (projects == null) {
 			projects = new EObjectContainmentEList<Project>(Project.class, this, WorkspacePackage.CLIENT__PROJECTS);
@@ -198,8 +173,6 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
-			case WorkspacePackage.CLIENT__SITES:
-				return ((InternalEList<?>)getSites()).basicRemove(otherEnd, msgs);
 			case WorkspacePackage.CLIENT__PROJECTS:
 				return ((InternalEList<?>)getProjects()).basicRemove(otherEnd, msgs);
 		}
@@ -218,8 +191,6 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 				return getName();
 			case WorkspacePackage.CLIENT__CONTACT:
 				return getContact();
-			case WorkspacePackage.CLIENT__SITES:
-				return getSites();
 			case WorkspacePackage.CLIENT__PROJECTS:
 				return getProjects();
 		}
@@ -240,10 +211,6 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 				return;
 			case WorkspacePackage.CLIENT__CONTACT:
 				setContact((String)newValue);
-				return;
-			case WorkspacePackage.CLIENT__SITES:
-				getSites().clear();
-				getSites().addAll((Collection<? extends Site>)newValue);
 				return;
 			case WorkspacePackage.CLIENT__PROJECTS:
 				getProjects().clear();
@@ -267,9 +234,6 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 			case WorkspacePackage.CLIENT__CONTACT:
 				setContact(CONTACT_EDEFAULT);
 				return;
-			case WorkspacePackage.CLIENT__SITES:
-				getSites().clear();
-				return;
 			case WorkspacePackage.CLIENT__PROJECTS:
 				getProjects().clear();
 				return;
@@ -289,8 +253,6 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 				return NAME_EDEFAULT == null ? name != null : !NAME_EDEFAULT.equals(name);
 			case WorkspacePackage.CLIENT__CONTACT:
 				return CONTACT_EDEFAULT == null ? contact != null : !CONTACT_EDEFAULT.equals(contact);
-			case WorkspacePackage.CLIENT__SITES:
-				return sites != null && !sites.isEmpty();
 			case WorkspacePackage.CLIENT__PROJECTS:
 				return projects != null && !projects.isEmpty();
 		}

@@ -12,7 +12,6 @@ import org.eclipse.emf.ecore.InternalEObject;
 import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
 import org.tracegas.model.ContentVersion;
-import org.tracegas.model.User;
 import org.tracegas.model.WorkspacePackage;
 
 /**
@@ -25,7 +24,6 @@ import org.tracegas.model.WorkspacePackage;
  * <ul>
  *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getNumber <em>Number</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getParent <em>Parent</em>}</li>
- *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getAuthor <em>Author</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getReason <em>Reason</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getCreated <em>Created</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getContentHash <em>Content Hash</em>}</li>
@@ -64,16 +62,6 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 	 * @ordered
 	 */
 	protected ContentVersion parent;
-
-	/**
-	 * The cached value of the '{@link #getAuthor() <em>Author</em>}' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getAuthor()
-	 * @generated
-	 * @ordered
-	 */
-	protected User author;
 
 	/**
 	 * The default value of the '{@link #getReason() <em>Reason</em>}' attribute.
@@ -243,46 +231,6 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 	 * @generated
 	 */
 	@Override
-	public User getAuthor() {
-		if (author != null && author.eIsProxy()) {
-			InternalEObject oldAuthor = (InternalEObject)author;
-			author = (User)eResolveProxy(oldAuthor);
-			if (author != oldAuthor) {
-				if (eNotificationRequired())
-					eNotify(new ENotificationImpl(this, Notification.RESOLVE, WorkspacePackage.CONTENT_VERSION__AUTHOR, oldAuthor, author));
-			}
-		}
-		return author;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public User basicGetAuthor() {
-		return author;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public void setAuthor(User newAuthor) {
-		User oldAuthor = author;
-		author = newAuthor;
-		if (eNotificationRequired())
-			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.CONTENT_VERSION__AUTHOR, oldAuthor, author));
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
 	public String getReason() {
 		return reason;
 	}
@@ -382,9 +330,6 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 			case WorkspacePackage.CONTENT_VERSION__PARENT:
 				if (resolve) return getParent();
 				return basicGetParent();
-			case WorkspacePackage.CONTENT_VERSION__AUTHOR:
-				if (resolve) return getAuthor();
-				return basicGetAuthor();
 			case WorkspacePackage.CONTENT_VERSION__REASON:
 				return getReason();
 			case WorkspacePackage.CONTENT_VERSION__CREATED:
@@ -410,9 +355,6 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 				return;
 			case WorkspacePackage.CONTENT_VERSION__PARENT:
 				setParent((ContentVersion)newValue);
-				return;
-			case WorkspacePackage.CONTENT_VERSION__AUTHOR:
-				setAuthor((User)newValue);
 				return;
 			case WorkspacePackage.CONTENT_VERSION__REASON:
 				setReason((String)newValue);
@@ -444,9 +386,6 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 			case WorkspacePackage.CONTENT_VERSION__PARENT:
 				setParent((ContentVersion)null);
 				return;
-			case WorkspacePackage.CONTENT_VERSION__AUTHOR:
-				setAuthor((User)null);
-				return;
 			case WorkspacePackage.CONTENT_VERSION__REASON:
 				setReason(REASON_EDEFAULT);
 				return;
@@ -475,8 +414,6 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 				return number != NUMBER_EDEFAULT;
 			case WorkspacePackage.CONTENT_VERSION__PARENT:
 				return parent != null;
-			case WorkspacePackage.CONTENT_VERSION__AUTHOR:
-				return author != null;
 			case WorkspacePackage.CONTENT_VERSION__REASON:
 				return REASON_EDEFAULT == null ? reason != null : !REASON_EDEFAULT.equals(reason);
 			case WorkspacePackage.CONTENT_VERSION__CREATED:

@@ -4,27 +4,14 @@ package org.tracegas.model.impl;
 
 import java.time.Instant;
 
-import java.util.Collection;
-
 import org.eclipse.emf.common.notify.Notification;
-import org.eclipse.emf.common.notify.NotificationChain;
-
-import org.eclipse.emf.common.util.EList;
 
 import org.eclipse.emf.ecore.EClass;
-import org.eclipse.emf.ecore.InternalEObject;
 
 import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
-import org.eclipse.emf.ecore.util.EObjectContainmentEList;
-import org.eclipse.emf.ecore.util.InternalEList;
-
-import org.tracegas.model.EmissionSource;
-import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
-import org.tracegas.model.SpectralDataRef;
-import org.tracegas.model.User;
 import org.tracegas.model.WorkspacePackage;
 
 /**
@@ -39,10 +26,6 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getTime <em>Time</em>}</li>
  *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getCellTemperature <em>Cell Temperature</em>}</li>
  *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getCellPressure <em>Cell Pressure</em>}</li>
- *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getOperator <em>Operator</em>}</li>
- *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getInstrument <em>Instrument</em>}</li>
- *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getSource <em>Source</em>}</li>
- *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getData <em>Data</em>}</li>
  * </ul>
  *
  * @generated
@@ -127,46 +110,6 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 	 * @ordered
 	 */
 	protected double cellPressure = CELL_PRESSURE_EDEFAULT;
-
-	/**
-	 * The cached value of the '{@link #getOperator() <em>Operator</em>}' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getOperator()
-	 * @generated
-	 * @ordered
-	 */
-	protected User operator;
-
-	/**
-	 * The cached value of the '{@link #getInstrument() <em>Instrument</em>}' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getInstrument()
-	 * @generated
-	 * @ordered
-	 */
-	protected Instrument instrument;
-
-	/**
-	 * The cached value of the '{@link #getSource() <em>Source</em>}' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getSource()
-	 * @generated
-	 * @ordered
-	 */
-	protected EmissionSource source;
-
-	/**
-	 * The cached value of the '{@link #getData() <em>Data</em>}' containment reference list.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getData()
-	 * @generated
-	 * @ordered
-	 */
-	protected EList<SpectralDataRef> data;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -285,153 +228,6 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 	 * @generated
 	 */
 	@Override
-	public User getOperator() {
-		if (operator != null && operator.eIsProxy()) {
-			InternalEObject oldOperator = (InternalEObject)operator;
-			operator = (User)eResolveProxy(oldOperator);
-			if (operator != oldOperator) {
-				if (eNotificationRequired())
-					eNotify(new ENotificationImpl(this, Notification.RESOLVE, WorkspacePackage.MEASUREMENT__OPERATOR, oldOperator, operator));
-			}
-		}
-		return operator;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public User basicGetOperator() {
-		return operator;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public void setOperator(User newOperator) {
-		User oldOperator = operator;
-		operator = newOperator;
-		if (eNotificationRequired())
-			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.MEASUREMENT__OPERATOR, oldOperator, operator));
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public Instrument getInstrument() {
-		if (instrument != null && instrument.eIsProxy()) {
-			InternalEObject oldInstrument = (InternalEObject)instrument;
-			instrument = (Instrument)eResolveProxy(oldInstrument);
-			if (instrument != oldInstrument) {
-				if (eNotificationRequired())
-					eNotify(new ENotificationImpl(this, Notification.RESOLVE, WorkspacePackage.MEASUREMENT__INSTRUMENT, oldInstrument, instrument));
-			}
-		}
-		return instrument;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public Instrument basicGetInstrument() {
-		return instrument;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public void setInstrument(Instrument newInstrument) {
-		Instrument oldInstrument = instrument;
-		instrument = newInstrument;
-		if (eNotificationRequired())
-			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.MEASUREMENT__INSTRUMENT, oldInstrument, instrument));
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public EmissionSource getSource() {
-		if (source != null && source.eIsProxy()) {
-			InternalEObject oldSource = (InternalEObject)source;
-			source = (EmissionSource)eResolveProxy(oldSource);
-			if (source != oldSource) {
-				if (eNotificationRequired())
-					eNotify(new ENotificationImpl(this, Notification.RESOLVE, WorkspacePackage.MEASUREMENT__SOURCE, oldSource, source));
-			}
-		}
-		return source;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public EmissionSource basicGetSource() {
-		return source;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public void setSource(EmissionSource newSource) {
-		EmissionSource oldSource = source;
-		source = newSource;
-		if (eNotificationRequired())
-			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.MEASUREMENT__SOURCE, oldSource, source));
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public EList<SpectralDataRef> getData() {
-		if (data == null) {
-			data = new EObjectContainmentEList<SpectralDataRef>(SpectralDataRef.class, this, WorkspacePackage.MEASUREMENT__DATA);
-		}
-		return data;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
-		switch (featureID) {
-			case WorkspacePackage.MEASUREMENT__DATA:
-				return ((InternalEList<?>)getData()).basicRemove(otherEnd, msgs);
-		}
-		return super.eInverseRemove(otherEnd, featureID, msgs);
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case WorkspacePackage.MEASUREMENT__KIND:
@@ -442,17 +238,6 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 				return getCellTemperature();
 			case WorkspacePackage.MEASUREMENT__CELL_PRESSURE:
 				return getCellPressure();
-			case WorkspacePackage.MEASUREMENT__OPERATOR:
-				if (resolve) return getOperator();
-				return basicGetOperator();
-			case WorkspacePackage.MEASUREMENT__INSTRUMENT:
-				if (resolve) return getInstrument();
-				return basicGetInstrument();
-			case WorkspacePackage.MEASUREMENT__SOURCE:
-				if (resolve) return getSource();
-				return basicGetSource();
-			case WorkspacePackage.MEASUREMENT__DATA:
-				return getData();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -462,7 +247,6 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
-	@SuppressWarnings("unchecked")
 	@Override
 	public void eSet(int featureID, Object newValue) {
 		switch (featureID) {
@@ -477,19 +261,6 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 				return;
 			case WorkspacePackage.MEASUREMENT__CELL_PRESSURE:
 				setCellPressure((Double)newValue);
-				return;
-			case WorkspacePackage.MEASUREMENT__OPERATOR:
-				setOperator((User)newValue);
-				return;
-			case WorkspacePackage.MEASUREMENT__INSTRUMENT:
-				setInstrument((Instrument)newValue);
-				return;
-			case WorkspacePackage.MEASUREMENT__SOURCE:
-				setSource((EmissionSource)newValue);
-				return;
-			case WorkspacePackage.MEASUREMENT__DATA:
-				getData().clear();
-				getData().addAll((Collection<? extends SpectralDataRef>)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -515,18 +286,6 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 			case WorkspacePackage.MEASUREMENT__CELL_PRESSURE:
 				setCellPressure(CELL_PRESSURE_EDEFAULT);
 				return;
-			case WorkspacePackage.MEASUREMENT__OPERATOR:
-				setOperator((User)null);
-				return;
-			case WorkspacePackage.MEASUREMENT__INSTRUMENT:
-				setInstrument((Instrument)null);
-				return;
-			case WorkspacePackage.MEASUREMENT__SOURCE:
-				setSource((EmissionSource)null);
-				return;
-			case WorkspacePackage.MEASUREMENT__DATA:
-				getData().clear();
-				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -547,14 +306,6 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 				return cellTemperature != CELL_TEMPERATURE_EDEFAULT;
 			case WorkspacePackage.MEASUREMENT__CELL_PRESSURE:
 				return cellPressure != CELL_PRESSURE_EDEFAULT;
-			case WorkspacePackage.MEASUREMENT__OPERATOR:
-				return operator != null;
-			case WorkspacePackage.MEASUREMENT__INSTRUMENT:
-				return instrument != null;
-			case WorkspacePackage.MEASUREMENT__SOURCE:
-				return source != null;
-			case WorkspacePackage.MEASUREMENT__DATA:
-				return data != null && !data.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}

@@ -4,7 +4,6 @@ package org.tracegas.model.impl;
 
 import java.util.Collection;
 
-import org.eclipse.emf.common.notify.Notification;
 import org.eclipse.emf.common.notify.NotificationChain;
 
 import org.eclipse.emf.common.util.EList;
@@ -12,13 +11,10 @@ import org.eclipse.emf.common.util.EList;
 import org.eclipse.emf.ecore.EClass;
 import org.eclipse.emf.ecore.InternalEObject;
 
-import org.eclipse.emf.ecore.impl.ENotificationImpl;
-
 import org.eclipse.emf.ecore.util.EObjectContainmentEList;
 import org.eclipse.emf.ecore.util.InternalEList;
 
 import org.tracegas.model.AnalysisRegion;
-import org.tracegas.model.LibraryVersion;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.WorkspacePackage;
 
@@ -30,23 +26,12 @@ import org.tracegas.model.WorkspacePackage;
  * The following features are implemented:
  * </p>
  * <ul>
- *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getLibrary <em>Library</em>}</li>
  *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getRegions <em>Regions</em>}</li>
  * </ul>
  *
  * @generated
  */
 public class MethodVersionImpl extends ContentVersionImpl implements MethodVersion {
-	/**
-	 * The cached value of the '{@link #getLibrary() <em>Library</em>}' reference.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getLibrary()
-	 * @generated
-	 * @ordered
-	 */
-	protected LibraryVersion library;
-
 	/**
 	 * The cached value of the '{@link #getRegions() <em>Regions</em>}' containment reference list.
 	 * <!-- begin-user-doc -->
@@ -74,46 +59,6 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	@Override
 	protected EClass eStaticClass() {
 		return WorkspacePackage.Literals.METHOD_VERSION;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public LibraryVersion getLibrary() {
-		if (library != null && library.eIsProxy()) {
-			InternalEObject oldLibrary = (InternalEObject)library;
-			library = (LibraryVersion)eResolveProxy(oldLibrary);
-			if (library != oldLibrary) {
-				if (eNotificationRequired())
-					eNotify(new ENotificationImpl(this, Notification.RESOLVE, WorkspacePackage.METHOD_VERSION__LIBRARY, oldLibrary, library));
-			}
-		}
-		return library;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public LibraryVersion basicGetLibrary() {
-		return library;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public void setLibrary(LibraryVersion newLibrary) {
-		LibraryVersion oldLibrary = library;
-		library = newLibrary;
-		if (eNotificationRequired())
-			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__LIBRARY, oldLibrary, library));
 	}
 
 	/**
@@ -151,9 +96,6 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
-			case WorkspacePackage.METHOD_VERSION__LIBRARY:
-				if (resolve) return getLibrary();
-				return basicGetLibrary();
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
 				return getRegions();
 		}
@@ -169,9 +111,6 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	@Override
 	public void eSet(int featureID, Object newValue) {
 		switch (featureID) {
-			case WorkspacePackage.METHOD_VERSION__LIBRARY:
-				setLibrary((LibraryVersion)newValue);
-				return;
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
 				getRegions().clear();
 				getRegions().addAll((Collection<? extends AnalysisRegion>)newValue);
@@ -188,9 +127,6 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	@Override
 	public void eUnset(int featureID) {
 		switch (featureID) {
-			case WorkspacePackage.METHOD_VERSION__LIBRARY:
-				setLibrary((LibraryVersion)null);
-				return;
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
 				getRegions().clear();
 				return;
@@ -206,8 +142,6 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	@Override
 	public boolean eIsSet(int featureID) {
 		switch (featureID) {
-			case WorkspacePackage.METHOD_VERSION__LIBRARY:
-				return library != null;
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
 				return regions != null && !regions.isEmpty();
 		}

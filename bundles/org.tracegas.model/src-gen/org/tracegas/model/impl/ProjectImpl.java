@@ -17,15 +17,10 @@ import org.eclipse.emf.ecore.InternalEObject;
 import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
 import org.eclipse.emf.ecore.util.EObjectContainmentEList;
-import org.eclipse.emf.ecore.util.EObjectResolvingEList;
 import org.eclipse.emf.ecore.util.InternalEList;
 
-import org.tracegas.model.AnalysisRun;
-import org.tracegas.model.EmissionSource;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
-import org.tracegas.model.ProjectGrant;
-import org.tracegas.model.Report;
 import org.tracegas.model.WorkspacePackage;
 
 /**
@@ -40,11 +35,7 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getEnd <em>End</em>}</li>
- *   <li>{@link org.tracegas.model.impl.ProjectImpl#getSources <em>Sources</em>}</li>
- *   <li>{@link org.tracegas.model.impl.ProjectImpl#getGrants <em>Grants</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getMeasurements <em>Measurements</em>}</li>
- *   <li>{@link org.tracegas.model.impl.ProjectImpl#getRuns <em>Runs</em>}</li>
- *   <li>{@link org.tracegas.model.impl.ProjectImpl#getReports <em>Reports</em>}</li>
  * </ul>
  *
  * @generated
@@ -131,26 +122,6 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	protected Instant end = END_EDEFAULT;
 
 	/**
-	 * The cached value of the '{@link #getSources() <em>Sources</em>}' reference list.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getSources()
-	 * @generated
-	 * @ordered
-	 */
-	protected EList<EmissionSource> sources;
-
-	/**
-	 * The cached value of the '{@link #getGrants() <em>Grants</em>}' containment reference list.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getGrants()
-	 * @generated
-	 * @ordered
-	 */
-	protected EList<ProjectGrant> grants;
-
-	/**
 	 * The cached value of the '{@link #getMeasurements() <em>Measurements</em>}' containment reference list.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -159,26 +130,6 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @ordered
 	 */
 	protected EList<Measurement> measurements;
-
-	/**
-	 * The cached value of the '{@link #getRuns() <em>Runs</em>}' containment reference list.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getRuns()
-	 * @generated
-	 * @ordered
-	 */
-	protected EList<AnalysisRun> runs;
-
-	/**
-	 * The cached value of the '{@link #getReports() <em>Reports</em>}' containment reference list.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getReports()
-	 * @generated
-	 * @ordered
-	 */
-	protected EList<Report> reports;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -297,32 +248,6 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @generated
 	 */
 	@Override
-	public EList<EmissionSource> getSources() {
-		if (sources == null) {
-			sources = new EObjectResolvingEList<EmissionSource>(EmissionSource.class, this, WorkspacePackage.PROJECT__SOURCES);
-		}
-		return sources;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public EList<ProjectGrant> getGrants() {
-		if (grants == null) {
-			grants = new EObjectContainmentEList<ProjectGrant>(ProjectGrant.class, this, WorkspacePackage.PROJECT__GRANTS);
-		}
-		return grants;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
 	public EList<Measurement> getMeasurements() {
 		if (measurements == null) {
 			measurements = new EObjectContainmentEList<Measurement>(Measurement.class, this, WorkspacePackage.PROJECT__MEASUREMENTS);
@@ -336,42 +261,10 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @generated
 	 */
 	@Override
-	public EList<AnalysisRun> getRuns() {
-		if (runs == null) {
-			runs = new EObjectContainmentEList<AnalysisRun>(AnalysisRun.class, this, WorkspacePackage.PROJECT__RUNS);
-		}
-		return runs;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public EList<Report> getReports() {
-		if (reports == null) {
-			reports = new EObjectContainmentEList<Report>(Report.class, this, WorkspacePackage.PROJECT__REPORTS);
-		}
-		return reports;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
-			case WorkspacePackage.PROJECT__GRANTS:
-				return ((InternalEList<?>)getGrants()).basicRemove(otherEnd, msgs);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return ((InternalEList<?>)getMeasurements()).basicRemove(otherEnd, msgs);
-			case WorkspacePackage.PROJECT__RUNS:
-				return ((InternalEList<?>)getRuns()).basicRemove(otherEnd, msgs);
-			case WorkspacePackage.PROJECT__REPORTS:
-				return ((InternalEList<?>)getReports()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -392,16 +285,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return getStart();
 			case WorkspacePackage.PROJECT__END:
 				return getEnd();
-			case WorkspacePackage.PROJECT__SOURCES:
-				return getSources();
-			case WorkspacePackage.PROJECT__GRANTS:
-				return getGrants();
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return getMeasurements();
-			case WorkspacePackage.PROJECT__RUNS:
-				return getRuns();
-			case WorkspacePackage.PROJECT__REPORTS:
-				return getReports();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -427,25 +312,9 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 			case WorkspacePackage.PROJECT__END:
 				setEnd((Instant)newValue);
 				return;
-			case WorkspacePackage.PROJECT__SOURCES:
-				getSources().clear();
-				getSources().addAll((Collection<? extends EmissionSource>)newValue);
-				return;
-			case WorkspacePackage.PROJECT__GRANTS:
-				getGrants().clear();
-				getGrants().addAll((Collection<? extends ProjectGrant>)newValue);
-				return;
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				getMeasurements().clear();
 				getMeasurements().addAll((Collection<? extends Measurement>)newValue);
-				return;
-			case WorkspacePackage.PROJECT__RUNS:
-				getRuns().clear();
-				getRuns().addAll((Collection<? extends AnalysisRun>)newValue);
-				return;
-			case WorkspacePackage.PROJECT__REPORTS:
-				getReports().clear();
-				getReports().addAll((Collection<? extends Report>)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -471,20 +340,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 			case WorkspacePackage.PROJECT__END:
 				setEnd(END_EDEFAULT);
 				return;
-			case WorkspacePackage.PROJECT__SOURCES:
-				getSources().clear();
-				return;
-			case WorkspacePackage.PROJECT__GRANTS:
-				getGrants().clear();
-				return;
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				getMeasurements().clear();
-				return;
-			case WorkspacePackage.PROJECT__RUNS:
-				getRuns().clear();
-				return;
-			case WorkspacePackage.PROJECT__REPORTS:
-				getReports().clear();
 				return;
 		}
 		super.eUnset(featureID);
@@ -506,16 +363,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return START_EDEFAULT == null ? start != null : !START_EDEFAULT.equals(start);
 			case WorkspacePackage.PROJECT__END:
 				return END_EDEFAULT == null ? end != null : !END_EDEFAULT.equals(end);
-			case WorkspacePackage.PROJECT__SOURCES:
-				return sources != null && !sources.isEmpty();
-			case WorkspacePackage.PROJECT__GRANTS:
-				return grants != null && !grants.isEmpty();
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return measurements != null && !measurements.isEmpty();
-			case WorkspacePackage.PROJECT__RUNS:
-				return runs != null && !runs.isEmpty();
-			case WorkspacePackage.PROJECT__REPORTS:
-				return reports != null && !reports.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}

@@ -2,22 +2,12 @@
  */
 package org.tracegas.model.impl;
 
-import java.util.Collection;
-
 import org.eclipse.emf.common.notify.Notification;
-import org.eclipse.emf.common.notify.NotificationChain;
-
-import org.eclipse.emf.common.util.EList;
 
 import org.eclipse.emf.ecore.EClass;
-import org.eclipse.emf.ecore.InternalEObject;
 
 import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
-import org.eclipse.emf.ecore.util.EObjectContainmentEList;
-import org.eclipse.emf.ecore.util.InternalEList;
-
-import org.tracegas.model.LibraryVersion;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.WorkspacePackage;
 
@@ -31,7 +21,6 @@ import org.tracegas.model.WorkspacePackage;
  * <ul>
  *   <li>{@link org.tracegas.model.impl.ReferenceLibraryImpl#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ReferenceLibraryImpl#getDescription <em>Description</em>}</li>
- *   <li>{@link org.tracegas.model.impl.ReferenceLibraryImpl#getVersions <em>Versions</em>}</li>
  * </ul>
  *
  * @generated
@@ -76,16 +65,6 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 	 * @ordered
 	 */
 	protected String description = DESCRIPTION_EDEFAULT;
-
-	/**
-	 * The cached value of the '{@link #getVersions() <em>Versions</em>}' containment reference list.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getVersions()
-	 * @generated
-	 * @ordered
-	 */
-	protected EList<LibraryVersion> versions;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -158,41 +137,12 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 	 * @generated
 	 */
 	@Override
-	public EList<LibraryVersion> getVersions() {
-		if (versions == null) {
-			versions = new EObjectContainmentEList<LibraryVersion>(LibraryVersion.class, this, WorkspacePackage.REFERENCE_LIBRARY__VERSIONS);
-		}
-		return versions;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
-		switch (featureID) {
-			case WorkspacePackage.REFERENCE_LIBRARY__VERSIONS:
-				return ((InternalEList<?>)getVersions()).basicRemove(otherEnd, msgs);
-		}
-		return super.eInverseRemove(otherEnd, featureID, msgs);
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case WorkspacePackage.REFERENCE_LIBRARY__NAME:
 				return getName();
 			case WorkspacePackage.REFERENCE_LIBRARY__DESCRIPTION:
 				return getDescription();
-			case WorkspacePackage.REFERENCE_LIBRARY__VERSIONS:
-				return getVersions();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -202,7 +152,6 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
-	@SuppressWarnings("unchecked")
 	@Override
 	public void eSet(int featureID, Object newValue) {
 		switch (featureID) {
@@ -211,10 +160,6 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 				return;
 			case WorkspacePackage.REFERENCE_LIBRARY__DESCRIPTION:
 				setDescription((String)newValue);
-				return;
-			case WorkspacePackage.REFERENCE_LIBRARY__VERSIONS:
-				getVersions().clear();
-				getVersions().addAll((Collection<? extends LibraryVersion>)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -234,9 +179,6 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 			case WorkspacePackage.REFERENCE_LIBRARY__DESCRIPTION:
 				setDescription(DESCRIPTION_EDEFAULT);
 				return;
-			case WorkspacePackage.REFERENCE_LIBRARY__VERSIONS:
-				getVersions().clear();
-				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -253,8 +195,6 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 				return NAME_EDEFAULT == null ? name != null : !NAME_EDEFAULT.equals(name);
 			case WorkspacePackage.REFERENCE_LIBRARY__DESCRIPTION:
 				return DESCRIPTION_EDEFAULT == null ? description != null : !DESCRIPTION_EDEFAULT.equals(description);
-			case WorkspacePackage.REFERENCE_LIBRARY__VERSIONS:
-				return versions != null && !versions.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}

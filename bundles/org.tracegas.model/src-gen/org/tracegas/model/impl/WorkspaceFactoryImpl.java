@@ -61,24 +61,12 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 		switch (eClass.getClassifierID()) {
 			case WorkspacePackage.WORKSPACE: return createWorkspace();
 			case WorkspacePackage.CLIENT: return createClient();
-			case WorkspacePackage.SITE: return createSite();
-			case WorkspacePackage.EMISSION_SOURCE: return createEmissionSource();
 			case WorkspacePackage.PROJECT: return createProject();
-			case WorkspacePackage.PROJECT_GRANT: return createProjectGrant();
-			case WorkspacePackage.INSTRUMENT: return createInstrument();
 			case WorkspacePackage.MEASUREMENT: return createMeasurement();
-			case WorkspacePackage.SPECTRAL_DATA_REF: return createSpectralDataRef();
 			case WorkspacePackage.REFERENCE_LIBRARY: return createReferenceLibrary();
-			case WorkspacePackage.LIBRARY_VERSION: return createLibraryVersion();
-			case WorkspacePackage.REFERENCE_SPECTRUM: return createReferenceSpectrum();
 			case WorkspacePackage.ANALYSIS_METHOD: return createAnalysisMethod();
 			case WorkspacePackage.METHOD_VERSION: return createMethodVersion();
 			case WorkspacePackage.ANALYSIS_REGION: return createAnalysisRegion();
-			case WorkspacePackage.ANALYSIS_RUN: return createAnalysisRun();
-			case WorkspacePackage.RESULT: return createResult();
-			case WorkspacePackage.QA_CHECK: return createQaCheck();
-			case WorkspacePackage.REPORT: return createReport();
-			case WorkspacePackage.USER: return createUser();
 			default:
 				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier");
 		}
@@ -94,18 +82,12 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 		switch (eDataType.getClassifierID()) {
 			case WorkspacePackage.ACCESS_LEVEL:
 				return createAccessLevelFromString(eDataType, initialValue);
-			case WorkspacePackage.DETECTOR_TYPE:
-				return createDetectorTypeFromString(eDataType, initialValue);
 			case WorkspacePackage.MEASUREMENT_KIND:
 				return createMeasurementKindFromString(eDataType, initialValue);
 			case WorkspacePackage.SPECTRAL_CONTENT:
 				return createSpectralContentFromString(eDataType, initialValue);
-			case WorkspacePackage.RUN_STATUS:
-				return createRunStatusFromString(eDataType, initialValue);
 			case WorkspacePackage.RESULT_FLAG:
 				return createResultFlagFromString(eDataType, initialValue);
-			case WorkspacePackage.REPORT_STATUS:
-				return createReportStatusFromString(eDataType, initialValue);
 			case WorkspacePackage.ROLE:
 				return createRoleFromString(eDataType, initialValue);
 			case WorkspacePackage.INSTANT:
@@ -125,18 +107,12 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 		switch (eDataType.getClassifierID()) {
 			case WorkspacePackage.ACCESS_LEVEL:
 				return convertAccessLevelToString(eDataType, instanceValue);
-			case WorkspacePackage.DETECTOR_TYPE:
-				return convertDetectorTypeToString(eDataType, instanceValue);
 			case WorkspacePackage.MEASUREMENT_KIND:
 				return convertMeasurementKindToString(eDataType, instanceValue);
 			case WorkspacePackage.SPECTRAL_CONTENT:
 				return convertSpectralContentToString(eDataType, instanceValue);
-			case WorkspacePackage.RUN_STATUS:
-				return convertRunStatusToString(eDataType, instanceValue);
 			case WorkspacePackage.RESULT_FLAG:
 				return convertResultFlagToString(eDataType, instanceValue);
-			case WorkspacePackage.REPORT_STATUS:
-				return convertReportStatusToString(eDataType, instanceValue);
 			case WorkspacePackage.ROLE:
 				return convertRoleToString(eDataType, instanceValue);
 			case WorkspacePackage.INSTANT:
@@ -174,53 +150,9 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	 * @generated
 	 */
 	@Override
-	public Site createSite() {
-		SiteImpl site = new SiteImpl();
-		return site;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public EmissionSource createEmissionSource() {
-		EmissionSourceImpl emissionSource = new EmissionSourceImpl();
-		return emissionSource;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
 	public Project createProject() {
 		ProjectImpl project = new ProjectImpl();
 		return project;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public ProjectGrant createProjectGrant() {
-		ProjectGrantImpl projectGrant = new ProjectGrantImpl();
-		return projectGrant;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public Instrument createInstrument() {
-		InstrumentImpl instrument = new InstrumentImpl();
-		return instrument;
 	}
 
 	/**
@@ -240,42 +172,9 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	 * @generated
 	 */
 	@Override
-	public SpectralDataRef createSpectralDataRef() {
-		SpectralDataRefImpl spectralDataRef = new SpectralDataRefImpl();
-		return spectralDataRef;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
 	public ReferenceLibrary createReferenceLibrary() {
 		ReferenceLibraryImpl referenceLibrary = new ReferenceLibraryImpl();
 		return referenceLibrary;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public LibraryVersion createLibraryVersion() {
-		LibraryVersionImpl libraryVersion = new LibraryVersionImpl();
-		return libraryVersion;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public ReferenceSpectrum createReferenceSpectrum() {
-		ReferenceSpectrumImpl referenceSpectrum = new ReferenceSpectrumImpl();
-		return referenceSpectrum;
 	}
 
 	/**
@@ -316,61 +215,6 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
-	@Override
-	public AnalysisRun createAnalysisRun() {
-		AnalysisRunImpl analysisRun = new AnalysisRunImpl();
-		return analysisRun;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public Result createResult() {
-		ResultImpl result = new ResultImpl();
-		return result;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public QaCheck createQaCheck() {
-		QaCheckImpl qaCheck = new QaCheckImpl();
-		return qaCheck;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public Report createReport() {
-		ReportImpl report = new ReportImpl();
-		return report;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
-	public User createUser() {
-		UserImpl user = new UserImpl();
-		return user;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
 	public AccessLevel createAccessLevelFromString(EDataType eDataType, String initialValue) {
 		AccessLevel result = AccessLevel.get(initialValue);
 		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
@@ -383,26 +227,6 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	 * @generated
 	 */
 	public String convertAccessLevelToString(EDataType eDataType, Object instanceValue) {
-		return instanceValue == null ? null : instanceValue.toString();
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public DetectorType createDetectorTypeFromString(EDataType eDataType, String initialValue) {
-		DetectorType result = DetectorType.get(initialValue);
-		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
-		return result;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public String convertDetectorTypeToString(EDataType eDataType, Object instanceValue) {
 		return instanceValue == null ? null : instanceValue.toString();
 	}
 
@@ -451,26 +275,6 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
-	public RunStatus createRunStatusFromString(EDataType eDataType, String initialValue) {
-		RunStatus result = RunStatus.get(initialValue);
-		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
-		return result;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public String convertRunStatusToString(EDataType eDataType, Object instanceValue) {
-		return instanceValue == null ? null : instanceValue.toString();
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
 	public ResultFlag createResultFlagFromString(EDataType eDataType, String initialValue) {
 		ResultFlag result = ResultFlag.get(initialValue);
 		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
@@ -483,26 +287,6 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	 * @generated
 	 */
 	public String convertResultFlagToString(EDataType eDataType, Object instanceValue) {
-		return instanceValue == null ? null : instanceValue.toString();
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public ReportStatus createReportStatusFromString(EDataType eDataType, String initialValue) {
-		ReportStatus result = ReportStatus.get(initialValue);
-		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
-		return result;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public String convertReportStatusToString(EDataType eDataType, Object instanceValue) {
 		return instanceValue == null ? null : instanceValue.toString();
 	}
 

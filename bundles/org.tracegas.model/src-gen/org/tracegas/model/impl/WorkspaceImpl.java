@@ -20,9 +20,7 @@ import org.eclipse.emf.ecore.util.InternalEList;
 
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.Client;
-import org.tracegas.model.Instrument;
 import org.tracegas.model.ReferenceLibrary;
-import org.tracegas.model.User;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspacePackage;
 
@@ -36,10 +34,8 @@ import org.tracegas.model.WorkspacePackage;
  * <ul>
  *   <li>{@link org.tracegas.model.impl.WorkspaceImpl#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.impl.WorkspaceImpl#getClients <em>Clients</em>}</li>
- *   <li>{@link org.tracegas.model.impl.WorkspaceImpl#getInstruments <em>Instruments</em>}</li>
  *   <li>{@link org.tracegas.model.impl.WorkspaceImpl#getLibraries <em>Libraries</em>}</li>
  *   <li>{@link org.tracegas.model.impl.WorkspaceImpl#getMethods <em>Methods</em>}</li>
- *   <li>{@link org.tracegas.model.impl.WorkspaceImpl#getUsers <em>Users</em>}</li>
  * </ul>
  *
  * @generated
@@ -76,16 +72,6 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 	protected EList<Client> clients;
 
 	/**
-	 * The cached value of the '{@link #getInstruments() <em>Instruments</em>}' containment reference list.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getInstruments()
-	 * @generated
-	 * @ordered
-	 */
-	protected EList<Instrument> instruments;
-
-	/**
 	 * The cached value of the '{@link #getLibraries() <em>Libraries</em>}' containment reference list.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -104,16 +90,6 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 	 * @ordered
 	 */
 	protected EList<AnalysisMethod> methods;
-
-	/**
-	 * The cached value of the '{@link #getUsers() <em>Users</em>}' containment reference list.
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @see #getUsers()
-	 * @generated
-	 * @ordered
-	 */
-	protected EList<User> users;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -176,19 +152,6 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 	 * @generated
 	 */
 	@Override
-	public EList<Instrument> getInstruments() {
-		if (instruments == null) {
-			instruments = new EObjectContainmentEList<Instrument>(Instrument.class, this, WorkspacePackage.WORKSPACE__INSTRUMENTS);
-		}
-		return instruments;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
 	public EList<ReferenceLibrary> getLibraries() {
 		if (libraries == null) {
 			libraries = new EObjectContainmentEList<ReferenceLibrary>(ReferenceLibrary.class, this, WorkspacePackage.WORKSPACE__LIBRARIES);
@@ -215,31 +178,14 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 	 * @generated
 	 */
 	@Override
-	public EList<User> getUsers() {
-		if (users == null) {
-			users = new EObjectContainmentEList<User>(User.class, this, WorkspacePackage.WORKSPACE__USERS);
-		}
-		return users;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case WorkspacePackage.WORKSPACE__CLIENTS:
 				return ((InternalEList<?>)getClients()).basicRemove(otherEnd, msgs);
-			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
-				return ((InternalEList<?>)getInstruments()).basicRemove(otherEnd, msgs);
 			case WorkspacePackage.WORKSPACE__LIBRARIES:
 				return ((InternalEList<?>)getLibraries()).basicRemove(otherEnd, msgs);
 			case WorkspacePackage.WORKSPACE__METHODS:
 				return ((InternalEList<?>)getMethods()).basicRemove(otherEnd, msgs);
-			case WorkspacePackage.WORKSPACE__USERS:
-				return ((InternalEList<?>)getUsers()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -256,14 +202,10 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 				return getName();
 			case WorkspacePackage.WORKSPACE__CLIENTS:
 				return getClients();
-			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
-				return getInstruments();
 			case WorkspacePackage.WORKSPACE__LIBRARIES:
 				return getLibraries();
 			case WorkspacePackage.WORKSPACE__METHODS:
 				return getMethods();
-			case WorkspacePackage.WORKSPACE__USERS:
-				return getUsers();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -284,10 +226,6 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 				getClients().clear();
 				getClients().addAll((Collection<? extends Client>)newValue);
 				return;
-			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
-				getInstruments().clear();
-				getInstruments().addAll((Collection<? extends Instrument>)newValue);
-				return;
 			case WorkspacePackage.WORKSPACE__LIBRARIES:
 				getLibraries().clear();
 				getLibraries().addAll((Collection<? extends ReferenceLibrary>)newValue);
@@ -295,10 +233,6 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 			case WorkspacePackage.WORKSPACE__METHODS:
 				getMethods().clear();
 				getMethods().addAll((Collection<? extends AnalysisMethod>)newValue);
-				return;
-			case WorkspacePackage.WORKSPACE__USERS:
-				getUsers().clear();
-				getUsers().addAll((Collection<? extends User>)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -318,17 +252,11 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 			case WorkspacePackage.WORKSPACE__CLIENTS:
 				getClients().clear();
 				return;
-			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
-				getInstruments().clear();
-				return;
 			case WorkspacePackage.WORKSPACE__LIBRARIES:
 				getLibraries().clear();
 				return;
 			case WorkspacePackage.WORKSPACE__METHODS:
 				getMethods().clear();
-				return;
-			case WorkspacePackage.WORKSPACE__USERS:
-				getUsers().clear();
 				return;
 		}
 		super.eUnset(featureID);
@@ -346,14 +274,10 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 				return NAME_EDEFAULT == null ? name != null : !NAME_EDEFAULT.equals(name);
 			case WorkspacePackage.WORKSPACE__CLIENTS:
 				return clients != null && !clients.isEmpty();
-			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
-				return instruments != null && !instruments.isEmpty();
 			case WorkspacePackage.WORKSPACE__LIBRARIES:
 				return libraries != null && !libraries.isEmpty();
 			case WorkspacePackage.WORKSPACE__METHODS:
 				return methods != null && !methods.isEmpty();
-			case WorkspacePackage.WORKSPACE__USERS:
-				return users != null && !users.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}

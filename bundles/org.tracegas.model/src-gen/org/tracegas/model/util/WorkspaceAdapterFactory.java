@@ -80,32 +80,12 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 				return createClientAdapter();
 			}
 			@Override
-			public Adapter caseSite(Site object) {
-				return createSiteAdapter();
-			}
-			@Override
-			public Adapter caseEmissionSource(EmissionSource object) {
-				return createEmissionSourceAdapter();
-			}
-			@Override
 			public Adapter caseProject(Project object) {
 				return createProjectAdapter();
 			}
 			@Override
-			public Adapter caseProjectGrant(ProjectGrant object) {
-				return createProjectGrantAdapter();
-			}
-			@Override
-			public Adapter caseInstrument(Instrument object) {
-				return createInstrumentAdapter();
-			}
-			@Override
 			public Adapter caseMeasurement(Measurement object) {
 				return createMeasurementAdapter();
-			}
-			@Override
-			public Adapter caseSpectralDataRef(SpectralDataRef object) {
-				return createSpectralDataRefAdapter();
 			}
 			@Override
 			public Adapter caseContentVersion(ContentVersion object) {
@@ -114,14 +94,6 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 			@Override
 			public Adapter caseReferenceLibrary(ReferenceLibrary object) {
 				return createReferenceLibraryAdapter();
-			}
-			@Override
-			public Adapter caseLibraryVersion(LibraryVersion object) {
-				return createLibraryVersionAdapter();
-			}
-			@Override
-			public Adapter caseReferenceSpectrum(ReferenceSpectrum object) {
-				return createReferenceSpectrumAdapter();
 			}
 			@Override
 			public Adapter caseAnalysisMethod(AnalysisMethod object) {
@@ -134,26 +106,6 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 			@Override
 			public Adapter caseAnalysisRegion(AnalysisRegion object) {
 				return createAnalysisRegionAdapter();
-			}
-			@Override
-			public Adapter caseAnalysisRun(AnalysisRun object) {
-				return createAnalysisRunAdapter();
-			}
-			@Override
-			public Adapter caseResult(Result object) {
-				return createResultAdapter();
-			}
-			@Override
-			public Adapter caseQaCheck(QaCheck object) {
-				return createQaCheckAdapter();
-			}
-			@Override
-			public Adapter caseReport(Report object) {
-				return createReportAdapter();
-			}
-			@Override
-			public Adapter caseUser(User object) {
-				return createUserAdapter();
 			}
 			@Override
 			public Adapter defaultCase(EObject object) {
@@ -218,34 +170,6 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	}
 
 	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Site <em>Site</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.Site
-	 * @generated
-	 */
-	public Adapter createSiteAdapter() {
-		return null;
-	}
-
-	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.EmissionSource <em>Emission Source</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.EmissionSource
-	 * @generated
-	 */
-	public Adapter createEmissionSourceAdapter() {
-		return null;
-	}
-
-	/**
 	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Project <em>Project</em>}'.
 	 * <!-- begin-user-doc -->
 	 * This default implementation returns null so that we can easily ignore cases;
@@ -260,34 +184,6 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	}
 
 	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.ProjectGrant <em>Project Grant</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.ProjectGrant
-	 * @generated
-	 */
-	public Adapter createProjectGrantAdapter() {
-		return null;
-	}
-
-	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Instrument <em>Instrument</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.Instrument
-	 * @generated
-	 */
-	public Adapter createInstrumentAdapter() {
-		return null;
-	}
-
-	/**
 	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Measurement <em>Measurement</em>}'.
 	 * <!-- begin-user-doc -->
 	 * This default implementation returns null so that we can easily ignore cases;
@@ -298,20 +194,6 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createMeasurementAdapter() {
-		return null;
-	}
-
-	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.SpectralDataRef <em>Spectral Data Ref</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.SpectralDataRef
-	 * @generated
-	 */
-	public Adapter createSpectralDataRefAdapter() {
 		return null;
 	}
 
@@ -340,34 +222,6 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createReferenceLibraryAdapter() {
-		return null;
-	}
-
-	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.LibraryVersion <em>Library Version</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.LibraryVersion
-	 * @generated
-	 */
-	public Adapter createLibraryVersionAdapter() {
-		return null;
-	}
-
-	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.ReferenceSpectrum <em>Reference Spectrum</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.ReferenceSpectrum
-	 * @generated
-	 */
-	public Adapter createReferenceSpectrumAdapter() {
 		return null;
 	}
 
@@ -410,76 +264,6 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createAnalysisRegionAdapter() {
-		return null;
-	}
-
-	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.AnalysisRun <em>Analysis Run</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.AnalysisRun
-	 * @generated
-	 */
-	public Adapter createAnalysisRunAdapter() {
-		return null;
-	}
-
-	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Result <em>Result</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.Result
-	 * @generated
-	 */
-	public Adapter createResultAdapter() {
-		return null;
-	}
-
-	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.QaCheck <em>Qa Check</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.QaCheck
-	 * @generated
-	 */
-	public Adapter createQaCheckAdapter() {
-		return null;
-	}
-
-	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Report <em>Report</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.Report
-	 * @generated
-	 */
-	public Adapter createReportAdapter() {
-		return null;
-	}
-
-	/**
-	 * Creates a new adapter for an object of class '{@link org.tracegas.model.User <em>User</em>}'.
-	 * <!-- begin-user-doc -->
-	 * This default implementation returns null so that we can easily ignore cases;
-	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
-	 * <!-- end-user-doc -->
-	 * @return the new adapter.
-	 * @see org.tracegas.model.User
-	 * @generated
-	 */
-	public Adapter createUserAdapter() {
 		return null;
 	}
 

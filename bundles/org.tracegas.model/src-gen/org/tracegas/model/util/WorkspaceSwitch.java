@@ -85,20 +85,6 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
-			case WorkspacePackage.SITE: {
-				Site site = (Site)theEObject;
-				T result = caseSite(site);
-				if (result == null) result = caseStoredObject(site);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
-			case WorkspacePackage.EMISSION_SOURCE: {
-				EmissionSource emissionSource = (EmissionSource)theEObject;
-				T result = caseEmissionSource(emissionSource);
-				if (result == null) result = caseStoredObject(emissionSource);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
 			case WorkspacePackage.PROJECT: {
 				Project project = (Project)theEObject;
 				T result = caseProject(project);
@@ -106,29 +92,10 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
-			case WorkspacePackage.PROJECT_GRANT: {
-				ProjectGrant projectGrant = (ProjectGrant)theEObject;
-				T result = caseProjectGrant(projectGrant);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
-			case WorkspacePackage.INSTRUMENT: {
-				Instrument instrument = (Instrument)theEObject;
-				T result = caseInstrument(instrument);
-				if (result == null) result = caseStoredObject(instrument);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
 			case WorkspacePackage.MEASUREMENT: {
 				Measurement measurement = (Measurement)theEObject;
 				T result = caseMeasurement(measurement);
 				if (result == null) result = caseStoredObject(measurement);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
-			case WorkspacePackage.SPECTRAL_DATA_REF: {
-				SpectralDataRef spectralDataRef = (SpectralDataRef)theEObject;
-				T result = caseSpectralDataRef(spectralDataRef);
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
@@ -143,20 +110,6 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 				ReferenceLibrary referenceLibrary = (ReferenceLibrary)theEObject;
 				T result = caseReferenceLibrary(referenceLibrary);
 				if (result == null) result = caseStoredObject(referenceLibrary);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
-			case WorkspacePackage.LIBRARY_VERSION: {
-				LibraryVersion libraryVersion = (LibraryVersion)theEObject;
-				T result = caseLibraryVersion(libraryVersion);
-				if (result == null) result = caseContentVersion(libraryVersion);
-				if (result == null) result = caseStoredObject(libraryVersion);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
-			case WorkspacePackage.REFERENCE_SPECTRUM: {
-				ReferenceSpectrum referenceSpectrum = (ReferenceSpectrum)theEObject;
-				T result = caseReferenceSpectrum(referenceSpectrum);
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
@@ -178,41 +131,6 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 			case WorkspacePackage.ANALYSIS_REGION: {
 				AnalysisRegion analysisRegion = (AnalysisRegion)theEObject;
 				T result = caseAnalysisRegion(analysisRegion);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
-			case WorkspacePackage.ANALYSIS_RUN: {
-				AnalysisRun analysisRun = (AnalysisRun)theEObject;
-				T result = caseAnalysisRun(analysisRun);
-				if (result == null) result = caseStoredObject(analysisRun);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
-			case WorkspacePackage.RESULT: {
-				Result result = (Result)theEObject;
-				T theResult = caseResult(result);
-				if (theResult == null) theResult = caseStoredObject(result);
-				if (theResult == null) theResult = defaultCase(theEObject);
-				return theResult;
-			}
-			case WorkspacePackage.QA_CHECK: {
-				QaCheck qaCheck = (QaCheck)theEObject;
-				T result = caseQaCheck(qaCheck);
-				if (result == null) result = caseStoredObject(qaCheck);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
-			case WorkspacePackage.REPORT: {
-				Report report = (Report)theEObject;
-				T result = caseReport(report);
-				if (result == null) result = caseStoredObject(report);
-				if (result == null) result = defaultCase(theEObject);
-				return result;
-			}
-			case WorkspacePackage.USER: {
-				User user = (User)theEObject;
-				T result = caseUser(user);
-				if (result == null) result = caseStoredObject(user);
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
@@ -266,36 +184,6 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	}
 
 	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Site</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Site</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseSite(Site object) {
-		return null;
-	}
-
-	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Emission Source</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Emission Source</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseEmissionSource(EmissionSource object) {
-		return null;
-	}
-
-	/**
 	 * Returns the result of interpreting the object as an instance of '<em>Project</em>'.
 	 * <!-- begin-user-doc -->
 	 * This implementation returns null;
@@ -311,36 +199,6 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	}
 
 	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Project Grant</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Project Grant</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseProjectGrant(ProjectGrant object) {
-		return null;
-	}
-
-	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Instrument</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Instrument</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseInstrument(Instrument object) {
-		return null;
-	}
-
-	/**
 	 * Returns the result of interpreting the object as an instance of '<em>Measurement</em>'.
 	 * <!-- begin-user-doc -->
 	 * This implementation returns null;
@@ -352,21 +210,6 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseMeasurement(Measurement object) {
-		return null;
-	}
-
-	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Spectral Data Ref</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Spectral Data Ref</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseSpectralDataRef(SpectralDataRef object) {
 		return null;
 	}
 
@@ -397,36 +240,6 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseReferenceLibrary(ReferenceLibrary object) {
-		return null;
-	}
-
-	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Library Version</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Library Version</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseLibraryVersion(LibraryVersion object) {
-		return null;
-	}
-
-	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Reference Spectrum</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Reference Spectrum</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseReferenceSpectrum(ReferenceSpectrum object) {
 		return null;
 	}
 
@@ -472,81 +285,6 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseAnalysisRegion(AnalysisRegion object) {
-		return null;
-	}
-
-	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Analysis Run</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Analysis Run</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseAnalysisRun(AnalysisRun object) {
-		return null;
-	}
-
-	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Result</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Result</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseResult(Result object) {
-		return null;
-	}
-
-	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Qa Check</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Qa Check</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseQaCheck(QaCheck object) {
-		return null;
-	}
-
-	/**
-	 * Returns the result of interpreting the object as an instance of '<em>Report</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>Report</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseReport(Report object) {
-		return null;
-	}
-
-	/**
-	 * Returns the result of interpreting the object as an instance of '<em>User</em>'.
-	 * <!-- begin-user-doc -->
-	 * This implementation returns null;
-	 * returning a non-null result will terminate the switch.
-	 * <!-- end-user-doc -->
-	 * @param object the target of the switch.
-	 * @return the result of interpreting the object as an instance of '<em>User</em>'.
-	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
-	 * @generated
-	 */
-	public T caseUser(User object) {
 		return null;
 	}
 

@@ -49,13 +49,4 @@ class BatchQuantificationJobTest {
             assertTrue(job.outcomes().get(0).result().compound("CO").isPresent());
         }
     }
-
-    @Test
-    void inputHashIsTheSha256OfTheLittleEndianValues() {
-        // SHA-256 of 8 zero bytes (one 0.0 as float64), computed with sha256sum
-        var s = new org.tracegas.spectrum.Spectrum(
-                org.tracegas.spectrum.SpectralAxis.uniform(org.tracegas.spectrum.AxisUnit.WAVENUMBER, 1, 1, 1),
-                new double[] {0.0}, org.tracegas.spectrum.Ordinate.ABSORBANCE);
-        assertEquals("af5570f5a1810b7af78caf4bc70a660f0df51e42baf91d4de5b2328de0e83dfc", BatchQuantificationJob.sha256(s));
-    }
 }

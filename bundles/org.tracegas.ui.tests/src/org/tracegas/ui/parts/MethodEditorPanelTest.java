@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Path;
+
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.Color;
 import org.eclipse.swt.layout.FillLayout;
@@ -14,46 +16,55 @@ import org.eclipse.swt.widgets.TableItem;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.campaign.StoredMethod;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.MethodVersion;
-import org.tracegas.model.Workspace;
-import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.model.edit.ModelEditor;
+import org.tracegas.quantify.Analyte;
+import org.tracegas.store.Session;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.VersionKind;
 import org.tracegas.ui.Screens;
+import org.tracegas.ui.session.DemoProject;
+import org.tracegas.ui.session.WorkspaceAccess;
 
+/**
+ * The method editor on the demo method of a real embedded workspace: edits through the command stack, checks
+ * of each field, the comparison in the method file's text, and saving a new version into the store.
+ */
 class MethodEditorPanelTest {
 
+    @TempDir
+    Path folder;
+
+    private WorkspaceAccess access;
+    private Session analyst;
+    private DemoProject.Seeded demo;
     private Display display;
     private Shell shell;
-    private ModelEditor editor;
     private AnalysisMethod method;
     private AnalysisRegion region;
     private MethodEditorPanel panel;
 
     @BeforeEach
     void open() {
+        access = WorkspaceAccess.openH2(folder);
+        demo = DemoProject.seed(access.store());
+        analyst = access.store().users().logIn(DemoProject.ANALYST, DemoProject.PASSWORD.toCharArray());
         display = Display.getDefault();
         shell = new Shell(display);
         shell.setLayout(new FillLayout());
-        shell.setSize(800, 640);
-        editor = new ModelEditor();
-        WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
-        Workspace w = f.createWorkspace();
-        method = f.createAnalysisMethod();
-        method.setName("Stack CO");
-        MethodVersion v = f.createMethodVersion();
-        v.setNumber(2);
-        region = f.createAnalysisRegion();
-        region.setCompound("CO");
-        region.setLowerWavenumber(2085);
-        region.setUpperWavenumber(2190);
-        v.getRegions().add(region);
-        method.getVersions().add(v);
-        w.getMethods().add(method);
-        editor.createResource("test:/w").getContents().add(w);
+        shell.setSize(900, 640);
+        ModelEditor editor = new ModelEditor();
+        editor.createResource("test:/w").getContents().add(demo.model());
+        method = demo.model().getMethods().get(0);
+        MethodVersion v = method.getVersions().get(0);
+        region = v.getRegions().get(0);
         panel = new MethodEditorPanel(shell, SWT.NONE, editor);
-        panel.open(method, v);
+        panel.open(method, v, demo.method());
+        panel.saveTo(access.store(), analyst);
         shell.open();
         Screens.flush(display);
     }
@@ -61,6 +72,7 @@ class MethodEditorPanelTest {
     @AfterEach
     void close() {
         shell.dispose();
+        access.close();
     }
 
     private static void press(org.eclipse.swt.widgets.Button b) {
@@ -70,6 +82,7 @@ class MethodEditorPanelTest {
     @Test
     void aValidEditGoesIntoTheModelAndUndoRedoWalkThroughIt() {
         assertFalse(panel.undoButton().isEnabled());
+        assertFalse(panel.saveButton().isEnabled(), "nothing to save before an edit");
         panel.lowerField().setText("2070");
         assertEquals(2070, region.getLowerWavenumber());
         assertTrue(panel.undoButton().isEnabled());
@@ -93,8 +106,7 @@ class MethodEditorPanelTest {
         assertEquals(2085, region.getLowerWavenumber());
         panel.nameField().setText(" ");
         assertEquals("Method name: must not be empty", panel.problems().getText());
-        assertEquals("Stack CO", method.getName());
-        panel.nameField().setText("Stack CO, wider");
+        assertEquals("Kiln stack CO and N2O", method.getName());
         panel.lowerField().setText("2080");
         assertEquals("", panel.problems().getText());
         assertFalse(panel.decorated(panel.lowerField()));
@@ -108,13 +120,43 @@ class MethodEditorPanelTest {
         assertEquals("1 field differs (highlighted).", c.summary().getText());
         Color changed = null;
         for (TableItem i : c.table().getItems()) {
-            if (i.getText(0).equals("region.1.upper_cm-1")) {
-                assertEquals("2190.00", i.getText(1));
-                assertEquals("2195.00", i.getText(2));
+            if (i.getText(0).equals("analyte.1.region.1")) {
+                assertEquals("2085.0..2190.0 baseline 1", i.getText(1));
+                assertEquals("2085.0..2195.0 baseline 1", i.getText(2));
                 changed = i.getBackground();
             }
         }
         assertEquals(Palette.CHANGED, changed);
-        assertEquals("Version 2 as opened", c.table().getColumn(1).getText());
+        assertEquals("Version 1 as opened", c.table().getColumn(1).getText());
+    }
+
+    @Test
+    void saveRecordsTheDraftAsANewVersionRevisedFromTheOpenedOne() throws Exception {
+        panel.lowerField().setText("2070");
+        press(panel.saveButton());
+        assertEquals("reason: a new method version needs a reason", panel.problems().getText());
+        assertEquals(1, access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow()
+                .number(), "nothing stored without a reason");
+
+        panel.reasonField().setText("CO window widened below the water lines");
+        press(panel.saveButton());
+        assertEquals("Saved as version 2.", panel.problems().getText());
+        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
+        assertEquals(2, saved.number());
+        assertEquals(demo.methodVersionId(), saved.parentId());
+        assertEquals(analyst.userId(), saved.authorId());
+        assertEquals("CO window widened below the water lines", saved.reason());
+        StoredMethod back = StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+        Analyte co = back.method().analytes().get(0);
+        assertEquals(2070, co.regions().get(0).low());
+        assertEquals(2190, co.regions().get(0).high());
+        assertEquals(demo.method().method().references(), back.method().references());
+        assertEquals(demo.method().libraryVersionId(), back.libraryVersionId());
+        // the version as opened stays as stored; the editor now holds the new one
+        assertEquals(2085, method.getVersions().get(0).getRegions().get(0).getLowerWavenumber());
+        assertEquals(2, method.getVersions().size());
+        assertEquals(2070, method.getVersions().get(1).getRegions().get(0).getLowerWavenumber());
+        assertEquals("Version 2 as opened", panel.comparison().table().getColumn(1).getText());
+        assertFalse(panel.undoButton().isEnabled());
     }
 }

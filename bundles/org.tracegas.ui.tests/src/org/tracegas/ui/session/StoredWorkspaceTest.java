@@ -18,6 +18,7 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.Project;
 import org.tracegas.model.Workspace;
 import org.tracegas.store.Session;
@@ -94,6 +95,10 @@ class StoredWorkspaceTest {
         nav.viewer().expandAll();
         assertEquals("Stack references", top[1].getItem(0).getText());
         assertEquals("Stack CO and NO", top[2].getItem(0).getText());
+        // that version holds no method text the runner could run; the model says so instead of hiding it
+        AnalysisMethod unreadable = ((Workspace) nav.viewer().getInput()).getMethods().get(0);
+        assertTrue(unreadable.getDescription().startsWith("version 1 cannot be read: "), unreadable.getDescription());
+        assertTrue(unreadable.getVersions().get(0).getRegions().isEmpty());
         assertEquals("version 1 (frozen)", top[2].getItem(0).getItem(0).getText());
         nav.viewer().collapseAll();
         assertTrue(nav.openProject(ExistingWorkspace.CODE));

@@ -9,8 +9,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Consumer;
 
+import org.tracegas.campaign.AnalysisVersions;
 import org.tracegas.quantify.CompoundResult;
-import org.tracegas.quantify.PreparedMethod;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.Quantifier;
 import org.tracegas.store.Session;
@@ -34,9 +34,8 @@ public final class AnalysisRuns {
     /** A job running the project's method over all its measurements and recording the results. */
     public static BatchQuantificationJob job(WorkspaceAccess access, Session session, Seeded project,
             Consumer<List<BatchQuantificationJob.Outcome>> whenDone) {
-        QuantificationMethod method = project.method();
-        Quantifier quantifier = new Quantifier(PreparedMethod.prepare(method, project.samples().get(0).axis()),
-                project.libraryVersionId(), SOFTWARE, true);
+        QuantificationMethod method = project.method().method();
+        Quantifier quantifier = project.method().quantifier(project.samples().get(0).axis(), SOFTWARE, true);
         List<BatchQuantificationJob.Item> items = new ArrayList<>();
         for (int i = 0; i < project.measurementIds().size(); i++) {
             items.add(new BatchQuantificationJob.Item(project.measurementIds().get(i),
@@ -45,7 +44,7 @@ public final class AnalysisRuns {
         }
         return new BatchQuantificationJob("Running " + method.name(), quantifier, items,
                 new BatchQuantificationJob.Target(access.store(), session, project.projectId(),
-                        project.methodVersionId(), project.libraryVersionId(), SOFTWARE), whenDone);
+                        new AnalysisVersions(project.methodVersionId(), project.libraryVersionId())), whenDone);
     }
 
     /** The fit of one outcome for the spectrum view. */

@@ -1,13 +1,7 @@
 package org.tracegas.ui.jobs;
 
-import java.nio.ByteBuffer;
-import java.nio.ByteOrder;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
-import java.util.HexFormat;
 import java.util.List;
-import java.util.Set;
 import java.util.function.Consumer;
 
 import org.eclipse.core.runtime.IProgressMonitor;
@@ -15,20 +9,21 @@ import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.SubMonitor;
 import org.eclipse.core.runtime.jobs.Job;
-import org.tracegas.quantify.CompoundResult;
+import org.tracegas.campaign.AnalysisVersions;
+import org.tracegas.campaign.ProcessedSpectra;
 import org.tracegas.quantify.Quantifier;
 import org.tracegas.quantify.Sample;
 import org.tracegas.quantify.SpectrumResult;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
 /**
  * Runs a method over a batch of measurements in the background and records each compound's result in the
- * workspace. Cancelling stops after the measurement in hand; what was recorded stays recorded (each result is
- * its own audited transaction).
+ * workspace as the batch path records it ({@link ProcessedSpectra#results}: flags, input hash, versions).
+ * Cancelling stops after the measurement in hand; what was recorded stays recorded (each measurement's
+ * results are one audited transaction).
  */
 public final class BatchQuantificationJob extends Job {
 
@@ -47,8 +42,7 @@ public final class BatchQuantificationJob extends Job {
     }
 
     /** Where results are recorded and under which versions. */
-    public record Target(WorkspaceStore store, Session session, String projectId, String methodVersionId,
-            String libraryVersionId, String softwareVersion) {
+    public record Target(WorkspaceStore store, Session session, String projectId, AnalysisVersions versions) {
     }
 
     private final Quantifier quantifier;
@@ -99,28 +93,10 @@ public final class BatchQuantificationJob extends Job {
         return outcomes;
     }
 
+    /** The results as the batch path stores them (flags, input hash, versions), in one transaction. */
     private List<ResultInfo> record(Item item, SpectrumResult result) {
-        String hash = sha256(item.absorbance());
-        List<ResultInfo> recorded = new ArrayList<>();
-        for (CompoundResult c : result.compounds()) {
-            recorded.add(target.store().results().record(target.session(), target.projectId(),
-                    new NewResult(item.measurementId(), c.compound(), c.concentration(), c.standardUncertainty(),
-                            c.detectionLimit(), "ppm", Set.of(), target.methodVersionId(), target.libraryVersionId(),
-                            target.softwareVersion(), hash)));
-        }
-        return recorded;
-    }
-
-    /** SHA-256 of the values as little-endian float64, the stored form of a spectrum. */
-    static String sha256(Spectrum s) {
-        ByteBuffer b = ByteBuffer.allocate(8 * s.size()).order(ByteOrder.LITTLE_ENDIAN);
-        for (int i = 0; i < s.size(); i++) {
-            b.putDouble(s.get(i));
-        }
-        try {
-            return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(b.array()));
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("SHA-256 is part of every Java runtime", e);
-        }
+        return target.store().results().recordAll(target.session(), target.projectId(),
+                ProcessedSpectra.results(result, target.versions()).stream()
+                        .map(r -> r.withMeasurement(item.measurementId())).toList());
     }
 }

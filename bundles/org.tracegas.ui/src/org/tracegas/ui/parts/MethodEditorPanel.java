@@ -19,17 +19,25 @@ import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Text;
+import org.tracegas.campaign.MethodVersions;
+import org.tracegas.campaign.StoredMethod;
+import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.WorkspacePackage.Literals;
 import org.tracegas.model.edit.ModelEditor;
+import org.tracegas.store.Session;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.WorkspaceStore;
 
 /**
  * Edits a draft method version in the model through the editing domain: every accepted change is one
  * command, so Undo and Redo walk back and forth through them. Fields are checked as they are typed; a
  * wrong field is marked and named below the form and the model keeps its last good value. The comparison
- * below shows the version as opened (A) beside the draft (B).
+ * below shows the version as opened (A) beside the draft (B), both in the text of a method file. Saving
+ * records the draft as a new version of the method, revised from the opened one with the reason given, in
+ * the stored text the runner reads ({@link MethodVersions#save}).
  */
 public final class MethodEditorPanel extends Composite {
 
@@ -42,14 +50,19 @@ public final class MethodEditorPanel extends Composite {
     private final Label problems;
     private final Button undo;
     private final Button redo;
+    private final Text reason;
+    private final Button save;
     private final VersionComparisonPanel comparison;
     private final Map<Text, ControlDecoration> decorations = new LinkedHashMap<>();
     private final Image errorMark;
     private final CommandStackListener stackListener = e -> getDisplay().asyncExec(this::afterCommand);
     private AnalysisMethod method;
     private MethodVersion version;
+    private StoredMethod stored;
     private String opened;
     private boolean filling;
+    private WorkspaceStore store;
+    private Session actor;
 
     public MethodEditorPanel(Composite parent, int style, ModelEditor editor) {
         super(parent, style);
@@ -73,7 +86,7 @@ public final class MethodEditorPanel extends Composite {
         problems.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
         problems.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1));
         Composite buttons = new Composite(form, SWT.NONE);
-        buttons.setLayout(new GridLayout(2, true));
+        buttons.setLayout(new GridLayout(4, false));
         buttons.setLayoutData(new GridData(SWT.BEGINNING, SWT.TOP, false, false, 4, 1));
         undo = new Button(buttons, SWT.PUSH);
         undo.setText("Undo");
@@ -87,6 +100,14 @@ public final class MethodEditorPanel extends Composite {
             editor.redo();
             fill();
         });
+        reason = new Text(buttons, SWT.BORDER);
+        reason.setMessage("Reason for the new version");
+        GridData rd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        rd.widthHint = 260;
+        reason.setLayoutData(rd);
+        save = new Button(buttons, SWT.PUSH);
+        save.setText("Save as new version");
+        save.addListener(SWT.Selection, e -> save());
         comparison = new VersionComparisonPanel(sash, SWT.NONE);
         sash.setWeights(1, 1);
         editor.domain().getCommandStack().addCommandStackListener(stackListener);
@@ -129,11 +150,22 @@ public final class MethodEditorPanel extends Composite {
         return img;
     }
 
-    /** Opens a method version (it must sit in a resource of the editor's resource set). */
-    public void open(AnalysisMethod method, MethodVersion version) {
+    /** Where Save records new versions, and as whom; without it Save stays disabled. */
+    public void saveTo(WorkspaceStore store, Session actor) {
+        this.store = store;
+        this.actor = actor;
+        updateButtons();
+    }
+
+    /**
+     * Opens a method version (it must sit in a resource of the editor's resource set) with the method its stored
+     * text holds.
+     */
+    public void open(AnalysisMethod method, MethodVersion version, StoredMethod stored) {
         this.method = method;
         this.version = version;
-        this.opened = MethodText.of(method, version);
+        this.stored = stored;
+        this.opened = stored.declaration();
         region.removeAll();
         for (AnalysisRegion r : version.getRegions()) {
             region.add(r.getCompound() + "  " + Math.round(r.getLowerWavenumber()) + "–"
@@ -207,13 +239,65 @@ public final class MethodEditorPanel extends Composite {
     }
 
     private void refreshComparison() {
-        comparison.compare("Version " + version.getNumber() + " as opened", opened, "Draft", MethodText.of(method,
-                version));
+        String draft;
+        try {
+            draft = MethodVersions.edited(stored, method, version).declaration();
+        } catch (IllegalArgumentException e) {
+            draft = opened;
+            problems.setText(e.getMessage());
+        }
+        comparison.compare("Version " + version.getNumber() + " as opened", fields(opened), "Draft", fields(draft));
+    }
+
+    /**
+     * A method file's text as one key=value line per value, each key made unique by its block and the value's
+     * place: "analyte.2.region.1=...".
+     */
+    static String fields(String methodText) {
+        StringBuilder s = new StringBuilder();
+        Map<String, Integer> blocks = new LinkedHashMap<>();
+        Map<String, Integer> keys = new LinkedHashMap<>();
+        String prefix = "";
+        for (String line : methodText.split("\n")) {
+            String t = line.strip();
+            if (t.startsWith("[") && t.endsWith("]")) {
+                String block = t.substring(1, t.length() - 1);
+                prefix = block + "." + blocks.merge(block, 1, Integer::sum) + ".";
+                keys.clear();
+            } else if (t.contains("=")) {
+                String key = t.substring(0, t.indexOf('=')).strip();
+                String value = t.substring(t.indexOf('=') + 1).strip();
+                String unique = key.equals("region") ? key + "." + keys.merge(key, 1, Integer::sum) : key;
+                s.append(prefix).append(unique).append('=').append(value).append('\n');
+            }
+        }
+        return s.toString();
+    }
+
+    private void save() {
+        VersionInfo next;
+        StoredMethod edited;
+        try {
+            edited = MethodVersions.edited(stored, method, version);
+            next = MethodVersions.save(store, actor, method, version, reason.getText());
+        } catch (IllegalArgumentException | FileFormatException e) {
+            problems.setText(e.getMessage());
+            return;
+        }
+        // the opened version stays as it was stored; the draft becomes the new version, opened afresh
+        MethodVersions.fillRegions(version, stored.method());
+        MethodVersion saved = MethodVersions.model(next, edited).getVersions().get(0);
+        method.getVersions().add(saved);
+        editor.domain().getCommandStack().flush();
+        reason.setText("");
+        open(method, saved, edited);
+        problems.setText("Saved as version " + next.number() + ".");
     }
 
     private void updateButtons() {
         undo.setEnabled(editor.canUndo());
         redo.setEnabled(editor.canRedo());
+        save.setEnabled(store != null && editor.canUndo());
     }
 
     private static String number(double v) {
@@ -246,6 +330,14 @@ public final class MethodEditorPanel extends Composite {
 
     public Button redoButton() {
         return redo;
+    }
+
+    public Text reasonField() {
+        return reason;
+    }
+
+    public Button saveButton() {
+        return save;
     }
 
     public VersionComparisonPanel comparison() {

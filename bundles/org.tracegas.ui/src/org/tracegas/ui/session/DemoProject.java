@@ -6,21 +6,22 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 
+import org.tracegas.campaign.MethodVersions;
+import org.tracegas.campaign.StoredMethod;
 import org.tracegas.library.Compound;
 import org.tracegas.library.Origin;
 import org.tracegas.library.OriginKind;
 import org.tracegas.library.ReferenceConditions;
 import org.tracegas.library.ReferenceMetadata;
 import org.tracegas.model.AccessLevel;
-import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
-import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.qa.checks.AbsorbanceRegion;
 import org.tracegas.qa.checks.BackgroundAgeCheck;
 import org.tracegas.qa.checks.CheckOutcome;
@@ -56,9 +57,9 @@ public final class DemoProject {
             Instant.parse("2026-03-10T08:01:00Z"), Instant.parse("2026-03-10T09:10:00Z"));
     static final Instant BACKGROUND = Instant.parse("2026-03-10T07:20:00Z");
 
-    /** Ids of what was seeded, the model tree for the navigator and the method for runs. */
+    /** Ids of what was seeded, the model tree for the navigator and the method version as stored. */
     public record Seeded(Workspace model, String projectId, List<String> measurementIds, String methodVersionId,
-            String libraryVersionId, QuantificationMethod method, List<org.tracegas.library.ReferenceSpectrum> library,
+            String libraryVersionId, StoredMethod method, List<org.tracegas.library.ReferenceSpectrum> library,
             List<Spectrum> samples, List<Instant> measurementTimes, Instant backgroundTime) {
     }
 
@@ -88,14 +89,17 @@ public final class DemoProject {
         QuantificationMethod method = method(refs);
         VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Demo band shapes",
                 "origin=synthetic\ncompounds=CO,N2O,H2O\n", "demo library");
+        // the demo's samples are absorbance spectra already; the transform is recorded as the default one
+        StoredMethod stored = new StoredMethod(method, TransformSettings.defaults(), library.id(),
+                library.contentHash());
         VersionInfo methodVersion = store.versions().create(analyst, VersionKind.METHOD, method.name(),
-                method.canonicalText(), "demo method");
+                stored.content(), "demo method");
         List<Spectrum> samples = new ArrayList<>();
         for (int i = 0; i < measurements.size(); i++) {
             samples.add(sample(refs, 40 + 15 * i, 8 + 2 * i, 9000, 11 + i));
         }
-        Workspace model = model(project, measurements, method, methodVersion, library);
-        return new Seeded(model, project.id(), List.copyOf(measurements), methodVersion.id(), library.id(), method,
+        Workspace model = model(project, measurements, stored, methodVersion, library);
+        return new Seeded(model, project.id(), List.copyOf(measurements), methodVersion.id(), library.id(), stored,
                 libraryEntries(refs), List.copyOf(samples), TIMES, BACKGROUND);
     }
 
@@ -174,8 +178,8 @@ public final class DemoProject {
         return List.copyOf(out);
     }
 
-    private static Workspace model(ProjectInfo info, List<String> measurementIds,
-            QuantificationMethod method, VersionInfo methodVersion, VersionInfo library) {
+    private static Workspace model(ProjectInfo info, List<String> measurementIds, StoredMethod method,
+            VersionInfo methodVersion, VersionInfo library) {
         WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
         Workspace w = f.createWorkspace();
         w.setName("Demo workspace");
@@ -202,24 +206,7 @@ public final class DemoProject {
         lib.setName(library.name());
         lib.setDescription("synthetic band shapes");
         w.getLibraries().add(lib);
-        AnalysisMethod am = f.createAnalysisMethod();
-        am.setId(methodVersion.itemId());
-        am.setName(method.name());
-        MethodVersion mv = f.createMethodVersion();
-        mv.setId(methodVersion.id());
-        mv.setNumber(methodVersion.number());
-        for (Analyte a : method.analytes()) {
-            for (AnalysisRegion r : a.regions()) {
-                org.tracegas.model.AnalysisRegion region = f.createAnalysisRegion();
-                region.setCompound(a.compound());
-                region.setLowerWavenumber(r.low());
-                region.setUpperWavenumber(r.high());
-                region.getInterferents().addAll(a.interferents());
-                mv.getRegions().add(region);
-            }
-        }
-        am.getVersions().add(mv);
-        w.getMethods().add(am);
+        w.getMethods().add(MethodVersions.model(methodVersion, method));
         return w;
     }
 }

@@ -8,10 +8,11 @@ import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.OperationCanceledException;
 import org.eclipse.core.runtime.SubMonitor;
 
+import org.tracegas.campaign.MethodVersions;
+import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
-import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.Workspace;
@@ -27,7 +28,7 @@ import org.tracegas.store.WorkspaceStore;
 /**
  * The navigator's model of a workspace that already held data when it was opened: the clients, projects and
  * measurements the signed-in user may read, and the newest version of each reference library and analysis
- * method, as the store lists them.
+ * method (with its regions, as {@link MethodVersions} reads them for the workbench and the runner alike).
  */
 public final class StoredWorkspace {
 
@@ -87,16 +88,19 @@ public final class StoredWorkspace {
             w.getLibraries().add(l);
         }
         for (VersionInfo v : store.versions().latest(VersionKind.METHOD)) {
-            AnalysisMethod m = f.createAnalysisMethod();
-            m.setId(v.itemId());
-            m.setName(v.name());
-            MethodVersion mv = f.createMethodVersion();
-            mv.setId(v.id());
-            mv.setNumber(v.number());
-            mv.setFrozen(v.frozen());
-            m.getVersions().add(mv);
-            w.getMethods().add(m);
+            w.getMethods().add(method(store, v));
         }
         return w;
+    }
+
+    /** The method with its regions; one whose stored text cannot be read is listed with the reason. */
+    private static AnalysisMethod method(WorkspaceStore store, VersionInfo v) {
+        try {
+            return MethodVersions.read(store, v);
+        } catch (FileFormatException e) {
+            AnalysisMethod m = MethodVersions.model(v);
+            m.setDescription("version " + v.number() + " cannot be read: " + e.getMessage());
+            return m;
+        }
     }
 }

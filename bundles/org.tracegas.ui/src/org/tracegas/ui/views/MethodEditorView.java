@@ -20,7 +20,8 @@ public final class MethodEditorView extends ViewPart {
         panel = new MethodEditorPanel(parent, SWT.NONE, desk.editor());
         if (desk.project() != null && !desk.project().model().getMethods().isEmpty()) {
             AnalysisMethod m = desk.project().model().getMethods().get(0);
-            panel.open(m, m.getVersions().get(m.getVersions().size() - 1));
+            panel.open(m, m.getVersions().get(m.getVersions().size() - 1), desk.project().method());
+            panel.saveTo(desk.access().store(), desk.session());
         }
     }
 

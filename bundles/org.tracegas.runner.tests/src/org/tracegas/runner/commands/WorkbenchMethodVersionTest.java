@@ -1,0 +1,144 @@
+package org.tracegas.runner.commands;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.tracegas.runner.commands.InventedBandSystem.header;
+import static org.tracegas.runner.commands.InventedBandSystem.methodFile;
+
+import java.io.ByteArrayOutputStream;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.Instant;
+import java.util.List;
+import java.util.Map;
+import java.util.Random;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.campaign.MethodVersions;
+import org.tracegas.campaign.StoredMethod;
+import org.tracegas.importer.container.ContainerWriter;
+import org.tracegas.importer.container.SampleKind;
+import org.tracegas.model.AnalysisMethod;
+import org.tracegas.model.AnalysisRegion;
+import org.tracegas.model.MethodVersion;
+import org.tracegas.model.WorkspacePackage.Literals;
+import org.tracegas.model.edit.ModelEditor;
+import org.tracegas.quantify.CancellationFlag;
+import org.tracegas.runner.CommandTable;
+import org.tracegas.runner.ExitCode;
+import org.tracegas.runner.RunnerContext;
+import org.tracegas.store.ResultInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.VersionKind;
+import org.tracegas.store.WorkspaceStore;
+import org.tracegas.store.Workspaces;
+
+/**
+ * A method version saved the way the workbench's method editor saves it (the workspace model edited through the
+ * editor's command stack, then {@link MethodVersions#save}) into a real embedded workspace, and run by the
+ * runner's quantify command on real container files of interferograms: the front ends share one method text.
+ */
+class WorkbenchMethodVersionTest {
+
+    private static final Instant T0 = Instant.parse("2026-03-18T08:00:00Z");
+    /** CO of the stack samples, ppm, with 10 % water vapour. */
+    private static final double[] CO_PPM = { 20, 60 };
+    private static final Map<String, String> ENV = Map.of("TRACEGAS_PASSWORD", "analyst-pw-1",
+            "TRACEGAS_NEW_PASSWORD", "analyst-pw-1");
+
+    @TempDir
+    Path folder;
+
+    private int run(ByteArrayOutputStream err, String... argv) {
+        CancellationFlag cancel = new CancellationFlag();
+        CommandTable table = new CommandTable("test", List.of(new WorkspaceInitCommand(), new UserAddCommand(),
+                new ProjectAddCommand(), new LibraryBuildCommand(cancel), new MethodDefineCommand(),
+                new QuantifyCommand(cancel)));
+        return table.dispatch(argv, new RunnerContext(new PrintStream(new ByteArrayOutputStream(), true,
+                StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8), ENV));
+    }
+
+    private void ok(String... argv) {
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.OK, run(err, argv), () -> String.join(" ", argv) + ": " + err);
+    }
+
+    @Test
+    void aVersionSavedFromTheEditorIsRunByTheRunner() throws Exception {
+        String ws = folder.resolve("ws").toString();
+        ok("workspace-init", "--workspace", ws, "--admin", "root", "--name", "Admin");
+        ok("user-add", "--workspace", ws, "--as", "root", "--login", "ana", "--name", "Ana Lyst", "--roles",
+                "analyst");
+        ok("project-add", "--workspace", ws, "--as", "ana", "--client", "Client W", "--code", "P-W", "--name",
+                "Kiln survey");
+        InventedBandSystem bands = new InventedBandSystem(folder);
+        ok("library-build", "--workspace", ws, "--as", "ana", "--plan", bands.libraryPlan().toString(), "--out",
+                folder.resolve("lib").toString());
+        Files.writeString(folder.resolve("stack.method"), methodFile("Stack"));
+        ok("method-define", "--workspace", ws, "--as", "ana", "--method", folder.resolve("stack.method").toString());
+
+        Random noise = new Random(23);
+        Path backgrounds = folder.resolve("background.tgc");
+        try (ContainerWriter w = ContainerWriter.create(backgrounds)) {
+            w.append(header(SampleKind.BACKGROUND, T0.minusSeconds(600), null), bands.interferogram(Map.of(), noise));
+            w.commit();
+        }
+        Path stack = folder.resolve("stack.tgc");
+        try (ContainerWriter w = ContainerWriter.create(stack)) {
+            for (int i = 0; i < CO_PPM.length; i++) {
+                w.append(header(SampleKind.SAMPLE, T0.plusSeconds(60L * i), null),
+                        bands.interferogram(Map.of("CO", CO_PPM[i], "H2O", 100_000.0), noise));
+            }
+            w.commit();
+        }
+
+        VersionInfo saved;
+        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
+            Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
+            VersionInfo first = store.versions().latest(VersionKind.METHOD, "Stack").orElseThrow();
+            // what the workbench does: the version in the model, edited through the editor's command stack
+            AnalysisMethod method = MethodVersions.read(store, first);
+            ModelEditor editor = new ModelEditor();
+            editor.createResource("desk:/workspace").getContents().add(method);
+            MethodVersion draft = method.getVersions().get(0);
+            AnalysisRegion co = draft.getRegions().get(0);
+            assertEquals("CO", co.getCompound());
+            assertEquals(2050, co.getLowerWavenumber());
+            editor.set(co, Literals.ANALYSIS_REGION__LOWER_WAVENUMBER, 2060.0);
+            saved = MethodVersions.save(store, ana, method, draft, "CO window starts above the band's far wing");
+            assertEquals(2, saved.number());
+            assertEquals(first.id(), saved.parentId());
+            StoredMethod stored = StoredMethod.parse(store.versions().content(saved.id()), "saved");
+            assertEquals(2060, stored.method().analytes().get(0).regions().get(0).low());
+            assertEquals(StoredMethod.parse(store.versions().content(first.id()), "first").transform(),
+                    stored.transform());
+        }
+
+        ok("quantify", "--workspace", ws, "--as", "ana", "--project", "P-W", "--method", "Stack",
+                "--method-version", "2", "--backgrounds", backgrounds.toString(), "--file", stack.toString());
+
+        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
+            Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
+            String project = store.projects().findByCode(ana, "P-W").orElseThrow().id();
+            List<ResultInfo> results = store.results().results(ana, project);
+            assertEquals(3 * CO_PPM.length, results.size(), "CO, N2O and H2O of each sample");
+            assertTrue(results.stream().allMatch(r -> r.values().methodVersionId().equals(saved.id())),
+                    "every result names the version saved from the editor");
+            assertTrue(store.versions().version(saved.id()).frozen(), "a version with results is frozen");
+            Map<String, Instant> times = new java.util.HashMap<>();
+            store.projects().measurements(ana, project).forEach(m -> times.put(m.id(), m.time()));
+            List<Double> co = results.stream().filter(r -> r.values().compound().equals("CO"))
+                    .sorted(java.util.Comparator.comparing(r -> times.get(r.values().measurementId())))
+                    .map(r -> r.values().concentration()).toList();
+            for (int i = 0; i < CO_PPM.length; i++) {
+                // the truth is the mixture the interferograms were synthesised from; 4 % as in the runner's
+                // analysis test (interpolation between references 1.5 apart plus the detector noise)
+                assertEquals(CO_PPM[i], co.get(i), 0.04 * CO_PPM[i], "sample " + i);
+            }
+        }
+    }
+}
