@@ -41,7 +41,7 @@ import org.tracegas.spectrum.SpectralAxis;
  *                                                molecular constants of the formula), or the rough power laws
  *                                                linear (Q ~ T) and non-linear (Q ~ T^1.5)
  * partition-table = co-q.txt                     temperature/K and Q per line, relative to the plan
- * ppm-m = 38.4, 115.2, 614.4                      amounts to synthesize, ppm·m
+ * ppm-m = 38.4, 115.2, 614.4                     amounts to synthesize, ppm·m
  * </pre>
  */
 public record LibraryPlan(Path file, String name, double temperatureK, double pressureKPa, double pathLengthM,
