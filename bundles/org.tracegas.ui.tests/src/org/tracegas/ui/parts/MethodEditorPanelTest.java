@@ -28,6 +28,7 @@ import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
 import org.tracegas.ui.Screens;
 import org.tracegas.ui.session.DemoProject;
+import org.tracegas.ui.session.DemoStaff;
 import org.tracegas.ui.session.WorkspaceAccess;
 
 /**
@@ -51,8 +52,8 @@ class MethodEditorPanelTest {
     @BeforeEach
     void open() {
         access = WorkspaceAccess.openH2(folder);
-        demo = DemoProject.seed(access.store());
-        analyst = access.store().users().logIn(DemoProject.ANALYST, DemoProject.PASSWORD.toCharArray());
+        demo = DemoStaff.seed(access.store());
+        analyst = access.store().users().logIn(DemoStaff.ANALYST, DemoStaff.PASSWORD.toCharArray());
         display = Display.getDefault();
         shell = new Shell(display);
         shell.setLayout(new FillLayout());
