@@ -4,7 +4,8 @@ import org.tracegas.spectrum.Spectrum;
 
 /**
  * Integrated absorbance of a band over a wavenumber window, above the straight line through the window's end
- * points: the band area that the CTS path-length check compares.
+ * points: the band area that the CTS path-length check compares. The sign is kept: an inverted band (the CTS gas
+ * in the background) comes out negative and fails the check instead of passing as its mirror image.
  */
 public final class BandArea {
 
@@ -39,6 +40,6 @@ public final class BandArea {
             double yb = absorbance.get(i + 1) - (y0 + (y1 - y0) * (xb - x0) / (x1 - x0));
             area += 0.5 * (ya + yb) * (xb - xa);
         }
-        return Math.abs(area);
+        return area;
     }
 }

@@ -62,8 +62,10 @@ public final class CampaignQaChecks {
                     pair.getValue().ppm(plan.spikeAnalyte())));
         }
         if (!spiked.isEmpty()) {
-            outcomes.add(new SpikeRecoveryCheck(SpikeRecoveryCheck.METHOD_320_LIMITS).evaluate(plan.spikeAnalyte(),
-                    plan.spikeGas(), spiked));
+            SpikeGas gas = spikeGas(plan, qa.withRole(MeasurementRole.SPIKE_DIRECT));
+            SpikeRecoveryCheck check = new SpikeRecoveryCheck(SpikeRecoveryCheck.METHOD_320_LIMITS);
+            outcomes.add(check.dilution(plan.spikeAnalyte(), gas, spiked));
+            outcomes.add(check.evaluate(plan.spikeAnalyte(), gas, spiked));
         }
         for (QaMeasurements.Fitted zero : qa.withRole(MeasurementRole.ZERO)) {
             for (String analyte : plan.analytes()) {
@@ -77,6 +79,19 @@ public final class CampaignQaChecks {
         }
         outcomes.add(worstBackgroundAge(plan.backgroundAgeLimit(), backgrounds, firstSample, lastSample));
         return outcomes;
+    }
+
+    /**
+     * The spike gas as measured directly when the campaign holds such readings (mean of them), else the cylinder
+     * contents of the plan, each saying which it is.
+     */
+    private static SpikeGas spikeGas(Plan plan, List<QaMeasurements.Fitted> direct) {
+        if (direct.isEmpty()) {
+            return plan.spikeGas();
+        }
+        double tracer = direct.stream().mapToDouble(f -> f.ppm(plan.tracer())).average().orElseThrow();
+        double analyte = direct.stream().mapToDouble(f -> f.ppm(plan.spikeAnalyte())).average().orElseThrow();
+        return new SpikeGas(tracer, analyte, "direct reading of the spike gas, mean of " + direct.size());
     }
 
     /** The oldest background any sample of the run was ratioed against: at the last sample before a new one. */

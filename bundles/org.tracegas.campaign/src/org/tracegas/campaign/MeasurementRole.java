@@ -13,6 +13,8 @@ public final class MeasurementRole {
     public static final String CTS = "cts";
     public static final String ZERO = "zero";
     public static final String SPIKE = "spike";
+    /** The spike gas sent to the spectrometer directly, undiluted: its measured analyte and tracer. */
+    public static final String SPIKE_DIRECT = "spike-direct";
     /** The sample taken just before a spiked one, for the native analyte level. */
     public static final String UNSPIKED = "unspiked";
 

@@ -81,6 +81,23 @@ class ApodizationTest {
         assertEquals(1.0, Apodization.BOXCAR.weight(1.0), 0.0);
     }
 
+    @ParameterizedTest
+    @org.junit.jupiter.params.provider.CsvSource({"BOXCAR, 1.00", "TRIANGULAR, 1.33", "HAPP_GENZEL, 1.36",
+            "BLACKMAN_HARRIS_3, 1.71", "BLACKMAN_HARRIS_4, 2.00"})
+    void meanSquareMatchesTheEquivalentNoiseBandwidthsOfHarris(Apodization a, double enbwBins) {
+        // Harris, Proc. IEEE 66, 51 (1978), Table 1 (from memory): equivalent noise bandwidth in bins
+        // ENBW = mean(w^2) / mean(w)^2 for rectangle 1.00, triangle 1.33, Hamming (0.54/0.46) 1.36,
+        // 3-term (-67 dB) 1.71 and 4-term (-92 dB) Blackman-Harris 2.00, given to two decimals; mean(w) here by
+        // the trapezoid rule, independent of the Simpson rule of meanSquare()
+        int n = 100000;
+        double mean = 0;
+        for (int i = 0; i <= n; i++) {
+            mean += (i == 0 || i == n ? 0.5 : 1.0) * a.weight((double) i / n);
+        }
+        mean /= n;
+        assertEquals(enbwBins, a.meanSquare() / (mean * mean), 0.006);
+    }
+
     @Test
     void parseIgnoresCaseAndNamesUnknownText() {
         assertEquals(Apodization.HAPP_GENZEL, Apodization.parse("happ_genzel"));

@@ -76,6 +76,26 @@ public enum Apodization {
     }
 
     /**
+     * Mean square weight m2 = integral from 0 to 1 of A(x)^2 dx (composite Simpson rule, 2048 panels): the noise
+     * power the apodization lets through, relative to none. It sets how far apodization correlates the noise of
+     * neighbouring spectral points (see {@link InterferogramTransform#noiseVarianceFactor}).
+     */
+    public double meanSquare() {
+        int panels = 2048;
+        double h = 1.0 / panels;
+        double sum = square(0.0) + square(1.0);
+        for (int i = 1; i < panels; i++) {
+            sum += (i % 2 == 1 ? 4 : 2) * square(i * h);
+        }
+        return sum * h / 3.0;
+    }
+
+    private double square(double x) {
+        double w = weight(x);
+        return w * w;
+    }
+
+    /**
      * The coefficients that define the function: element k of cos(k pi x) for the cosine windows, element i of
      * (1 - x^2)^i for the Norton-Beer functions, none for the triangle.
      */

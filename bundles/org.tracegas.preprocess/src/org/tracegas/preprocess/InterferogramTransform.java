@@ -77,19 +77,12 @@ public final class InterferogramTransform {
         if (interferogram == null) {
             throw new IllegalArgumentException("interferogram must not be null");
         }
-        int n = interferogram.size();
-        zpdLocator.locate(interferogram, settings.zpdSearch(), settings.phasePoints() / 2);
+        int size = layOut(interferogram);
         double dc = zpdLocator.dc();
         int zpd = zpdLocator.zpd();
-        int before = zpd;
-        int after = n - 1 - zpd;
-        int direction = after >= before ? 1 : -1;
-        int shortSide = Math.min(before, after);
-        int longSide = settings.sidedness() == Sidedness.DOUBLE_SIDED ? shortSide : Math.max(before, after);
-        checkSides(zpd, n, shortSide, longSide);
+        int direction = interferogram.size() - 1 - zpd >= zpd ? 1 : -1;
+        int shortSide = Math.min(zpd, interferogram.size() - 1 - zpd);
         double spacing = interferogram.sampleSpacingCm();
-        int size = settings.zeroFillFactor() * (Integer.highestOneBit(shortSide + longSide) << 1);
-        prepare(size, shortSide, longSide, spacing);
         window.weigh(interferogram, dc, zpd, direction, buffer);
         fft.forward(buffer, re, im);
 
@@ -118,6 +111,42 @@ public final class InterferogramTransform {
             axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, kLow * step, step, count);
         }
         return new Spectrum(axis, out, Ordinate.SINGLE_BEAM);
+    }
+
+    /**
+     * How much the noise of neighbouring spectral points is correlated by this transform of an interferogram
+     * (apodization, Mertz ramp, zero filling): F = N g(0)^2 / sum_j g_j^2 for the weights g_j of the samples and
+     * the transform length N, the equivalent width of the noise autocorrelation (the Fourier transform of g^2)
+     * in units of the point spacing. A least-squares fit over points whose model varies slowly on that width
+     * that takes the points as independent understates the variance of its estimates by this factor: multiply
+     * its standard uncertainties by sqrt(F). Without apodization or zero filling F = 1 (independent points);
+     * zero filling by 2 doubles it; apodization raises it by 1 / mean(w^2); a single-sided recording whose
+     * transform samples the spectrum more coarsely than its resolution gives F below 1. This is the factor the
+     * quantitative fit takes from the transform of its spectra.
+     *
+     * @throws IllegalArgumentException as {@link #singleBeam} for an interferogram it cannot transform
+     */
+    public double noiseVarianceFactor(Interferogram interferogram) {
+        if (interferogram == null) {
+            throw new IllegalArgumentException("interferogram must not be null");
+        }
+        int size = layOut(interferogram);
+        return window.noiseVarianceFactor(size);
+    }
+
+    /** Finds ZPD and the sides, prepares transform and window for them, and returns the transform length. */
+    private int layOut(Interferogram interferogram) {
+        int n = interferogram.size();
+        zpdLocator.locate(interferogram, settings.zpdSearch(), settings.phasePoints() / 2);
+        int zpd = zpdLocator.zpd();
+        int before = zpd;
+        int after = n - 1 - zpd;
+        int shortSide = Math.min(before, after);
+        int longSide = settings.sidedness() == Sidedness.DOUBLE_SIDED ? shortSide : Math.max(before, after);
+        checkSides(zpd, n, shortSide, longSide);
+        int size = settings.zeroFillFactor() * (Integer.highestOneBit(shortSide + longSide) << 1);
+        prepare(size, shortSide, longSide, interferogram.sampleSpacingCm());
+        return size;
     }
 
     private void checkSides(int zpd, int n, int shortSide, int longSide) {

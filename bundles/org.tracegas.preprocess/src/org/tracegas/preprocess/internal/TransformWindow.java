@@ -33,6 +33,19 @@ public final class TransformWindow {
         }
     }
 
+    /**
+     * N g(0)^2 / sum g_j^2 for a transform of length N: the width of the noise autocorrelation of the spectrum in
+     * point spacings (see InterferogramTransform#noiseVarianceFactor).
+     */
+    public double noiseVarianceFactor(int transformLength) {
+        double sum = 0;
+        for (double g : weights) {
+            sum += g * g;
+        }
+        double g0 = weights[shortSide];
+        return transformLength * g0 * g0 / sum;
+    }
+
     public boolean fits(int shortSideWanted, int longSideWanted, double spacingWanted) {
         return shortSide == shortSideWanted && longSide == longSideWanted && spacing == spacingWanted;
     }

@@ -2,6 +2,7 @@ package org.tracegas.qa.checks;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.junit.jupiter.api.Test;
@@ -30,5 +31,31 @@ class PathLengthCheckTest {
         assertFalse(bad.passed()); // 10.6 m is 6 % above the nominal 10 m
         assertTrue(bad.rule().source().contains("common practice"));
         assertEquals(9.5, bad.limits().lower(), 1e-12);
+    }
+
+    @Test
+    void anInvertedBandFailsInsteadOfPassingAsItsMirrorImage() {
+        // an inverted CTS band (CTS gas in the background, common practice, no source) has the same magnitude as
+        // a good one: with |A| it would pass at 10.4 m; with its sign the path is -10.4 m and fails
+        PathLengthCheck check = new PathLengthCheck(10.0, PathLengthCheck.COMMON_PRACTICE_TOLERANCE_PERCENT);
+        CheckOutcome inverted = check.evaluate(new CtsBand(-0.520, 100, 298.15, 101.325), REFERENCE, 10.0);
+        assertFalse(inverted.passed());
+        assertEquals(-10.4, inverted.measured(), 1e-12);
+        assertTrue(inverted.rule().statement().contains("inverted"), inverted.rule().statement());
+        assertThrows(IllegalArgumentException.class, () -> PathLengthCheck.effectivePath(REFERENCE,
+                new CtsBand(-0.5, 100, 298.15, 101.325), 10.0));
+    }
+
+    @Test
+    void theCtsDerivedPathFeedsTheConditionsCorrection() {
+        // a mirror drift that lengthens the path by 4 % reads 4 % high; the CTS-derived path takes it back out
+        // (EPA FTIR Protocol section 11.2 with L_r/L_s, not confirmed against the official text)
+        double path = PathLengthCheck.effectivePath(new CtsBand(0.520, 100, 298.15, 101.325), REFERENCE, 10.0);
+        org.tracegas.qa.basis.CellConditions cell = new org.tracegas.qa.basis.CellConditions(
+                new org.tracegas.qa.basis.ConditionValue(298.15, org.tracegas.qa.basis.ConditionOrigin.FILE_LABEL),
+                new org.tracegas.qa.basis.ConditionValue(101.325, org.tracegas.qa.basis.ConditionOrigin.FILE_LABEL),
+                path, org.tracegas.qa.basis.PathOrigin.CTS_DERIVED);
+        assertEquals(50.0, new org.tracegas.qa.basis.ConditionsCorrection(298.15, 101.325, 10.0).correct(52.0, cell)
+                .corrected(), 1e-9);
     }
 }

@@ -43,4 +43,22 @@ class SpikeRecoveryCheckTest {
                 () -> SpikeRecovery.of(GAS, new SpikedSample(12.0, 13.8, 5.0)));
         assertTrue(e.getMessage().contains("dilution factor"), e.getMessage());
     }
+
+    @Test
+    void dilutionAboveOneTenthFailsAndTheSpikeGasOriginIsStated() {
+        // EPA Method 320 section 9.2 (not confirmed against the official text): spike flow at most 10 % of the
+        // total flow, so DF = tracer(spiked) / tracer(direct) <= 0.10. SF6 0.9 of 10 ppm: DF 0.09; 1.2: DF 0.12
+        SpikeGas direct = new SpikeGas(10.0, 100.0, "direct reading of the spike gas, mean of 3");
+        SpikeRecoveryCheck check = new SpikeRecoveryCheck(SpikeRecoveryCheck.METHOD_320_LIMITS);
+        CheckOutcome ok = check.dilution("HCl", direct, List.of(new SpikedSample(0.9, 13.0, 5.0)));
+        assertTrue(ok.passed());
+        assertEquals(0.09, ok.measured(), 1e-12);
+        assertTrue(ok.rule().statement().contains("direct reading"), ok.rule().statement());
+        CheckOutcome tooMuch = check.dilution("HCl", direct, List.of(new SpikedSample(0.9, 13.0, 5.0),
+                new SpikedSample(1.2, 16.0, 5.0)));
+        assertFalse(tooMuch.passed());
+        assertEquals(0.12, tooMuch.measured(), 1e-12);
+        assertTrue(check.evaluate("HCl", GAS, List.of(new SpikedSample(1.0, 13.8, 5.0))).rule().statement()
+                .contains(SpikeGas.CYLINDER_LABEL));
+    }
 }

@@ -60,11 +60,41 @@ class ControlChartCheckTest {
         assertEquals(1.0, e.chart().centre(), 1e-12);
         assertEquals(5, e.baseline().length);
         assertTrue(e.outcome().passed());
+        // the first five set the limits and are not judged (Montgomery's phase I / phase II, from memory)
+        assertTrue(e.outcome().rule().statement().contains("none of the 2 readings judged signals (readings 6 to 7)"),
+                e.outcome().rule().statement());
+    }
+
+    @Test
+    void aReadingThatSetTheLimitsIsNeverJudgedAgainstThem() {
+        // 8 readings set the limits (centre 10); readings 9..12 are judged. Counting the baseline's last four
+        // high readings, readings 5..12 would be 8 in a row above the centre, a WE4 signal made of readings that
+        // set the limits; judged alone, the four cannot make that run
+        ControlChartCheck eight = new ControlChartCheck("Noise", "mAU", 8);
+        double[] current = {9, 9, 9, 9, 11, 11, 11, 11, 11, 11, 11, 11};
+        ChartEvaluation e = eight.evaluate(new double[0], current).orElseThrow();
+        assertEquals(10.0, e.chart().centre(), 1e-12);
+        assertTrue(e.signals().stream().noneMatch(g -> g.rule().startsWith("WE4")), e.signals().toString());
+        assertTrue(e.outcome().rule().statement().contains("4 readings judged"), e.outcome().rule().statement());
+        assertTrue(eight.evaluate(new double[0], java.util.Arrays.copyOf(current, 8)).isEmpty(),
+                "nothing left to judge");
+    }
+
+    @Test
+    void limitsFromAStatedSigmaJudgeEveryReadingAndNameTheirSource() {
+        // centre 10, sigma 0.1 from a stated source: 10.35 lies 3.5 sigma out, WE1 at reading 2
+        ChartEvaluation e = check.evaluate(10.0, 0.1, "QAL1 repeatability of the analyser", new double[] {10.05,
+                10.35}).orElseThrow();
+        assertEquals(0, e.baseline().length);
+        assertFalse(e.outcome().passed());
+        assertTrue(e.outcome().rule().statement().contains("reading 2 WE1"), e.outcome().rule().statement());
+        assertTrue(e.outcome().rule().source().contains("QAL1 repeatability"), e.outcome().rule().source());
     }
 
     @Test
     void tooFewReadingsGiveNoChart() {
         assertTrue(check.evaluate(new double[] {1, 2}, new double[] {1, 2, 3, 4}).isEmpty());
+        assertTrue(check.evaluate(new double[] {1, 2}, new double[] {1, 2, 3, 4, 5}).isEmpty());
         assertTrue(check.evaluate(new double[] {1, 2, 3, 4, 5}, new double[0]).isEmpty());
     }
 

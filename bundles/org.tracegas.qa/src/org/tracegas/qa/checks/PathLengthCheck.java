@@ -26,14 +26,17 @@ public final class PathLengthCheck {
 
     /**
      * Effective path L_s = L_r·(A_s/A_r)·(C_r/C_s)·(T_s/T_r)·(p_r/p_s): Beer-Lambert absorbance scales with
-     * path, concentration and number density (p/T).
+     * path, concentration and number density (p/T). An inverted measured band gives a path at or below zero,
+     * which no tolerance accepts. The path is what a result's conditions correction takes as a CTS-derived path.
      *
      * @param referencePathM path of the reference CTS spectrum in m
+     * @throws IllegalArgumentException if the reference band is not positive (a reference cannot be inverted)
      */
     public static double effectivePath(CtsBand measured, CtsBand reference, double referencePathM) {
         Require.notNull("measured", measured);
         Require.notNull("reference", reference);
         Require.positive("referencePathM", referencePathM);
+        Require.positive("reference band absorbance", reference.absorbance());
         return referencePathM * (measured.absorbance() / reference.absorbance())
                 * (reference.concentrationPpm() / measured.concentrationPpm())
                 * (measured.temperatureK() / reference.temperatureK())
@@ -44,7 +47,8 @@ public final class PathLengthCheck {
         double path = effectivePath(measured, reference, referencePathM);
         Rule rule = new Rule("Effective path from the CTS band, L_s = L_r(A_s/A_r)(C_r/C_s)(T_s/T_r)(p_r/p_s), "
                 + "within " + Format.number(tolerancePercent) + " % of the nominal " + Format.number(nominalPathM)
-                + " m",
+                + " m" + (measured.absorbance() > 0 ? "" : "; the measured band is inverted (area "
+                        + Format.number(measured.absorbance()) + "): CTS gas in the background or a reversed ratio"),
                 "formula: EPA Method 320 section 10.2 (not confirmed against the official text); tolerance: "
                         + "common practice, no source");
         return CheckOutcome.judge("CTS path length", path, "m",

@@ -42,7 +42,7 @@ public final class ChartEvaluation {
         return unit;
     }
 
-    /** The readings the centre line and σ were estimated from (a copy). */
+    /** The readings the centre line and σ were estimated from (a copy); empty for a stated centre and σ. */
     public double[] baseline() {
         return baseline.clone();
     }
@@ -66,6 +66,7 @@ public final class ChartEvaluation {
         return signals;
     }
 
+    /** The CUSUM of the readings judged (those after a baseline taken from this campaign, else all). */
     public CusumResult cusum() {
         return cusum;
     }

@@ -17,7 +17,9 @@ import org.tracegas.qa.internal.Stats;
  * Judges a campaign's repeated readings of one QA check (zero, span, noise level ...) on a Shewhart chart
  * with Western Electric rules 1, 2 and 4 and a tabular CUSUM. Limit rule: centre line and σ are the mean
  * and sample standard deviation of the latest n readings of earlier campaigns when there are n of them,
- * otherwise of the first n readings of this campaign; with fewer readings there is no chart.
+ * otherwise of the first n readings of this campaign, which then set the limits and are not judged (a reading
+ * cannot be tested against limits it helped set); with fewer readings there is no chart. Limits may instead come
+ * from a stated centre and σ (for example a QAL1 repeatability), with its source.
  */
 public final class ControlChartCheck {
 
@@ -58,14 +60,15 @@ public final class ControlChartCheck {
     /**
      * @param history readings of earlier campaigns, oldest first
      * @param current this campaign's readings, in order
-     * @return empty when neither holds enough readings for the limits, or this campaign has none
+     * @return empty when neither holds enough readings for the limits, or no reading of this campaign is left
+     *         to judge
      * @throws IllegalArgumentException if the baseline readings are all equal (no σ to chart with)
      */
     public Optional<ChartEvaluation> evaluate(double[] history, double[] current) {
         Require.notNull("history", history);
         Require.notNull("current", current);
         boolean fromHistory = history.length >= baselineSize;
-        if (current.length == 0 || (!fromHistory && current.length < baselineSize)) {
+        if (current.length == 0 || (!fromHistory && current.length <= baselineSize)) {
             return Optional.empty();
         }
         double[] baseline = fromHistory ? Arrays.copyOfRange(history, history.length - baselineSize, history.length)
@@ -75,19 +78,47 @@ public final class ControlChartCheck {
             throw new IllegalArgumentException("the " + baselineSize + " baseline readings of " + reading
                     + " are all equal; a control chart needs their spread");
         }
-        ShewhartChart chart = new ShewhartChart(Stats.mean(baseline), sigma);
-        CusumResult cusum = new CusumChart(chart.centre(), sigma, CUSUM_K, CUSUM_H).evaluate(current);
-        List<ControlSignal> signals = new ArrayList<>(chart.evaluate(current));
-        signals.addAll(cusum.signals());
-        signals.sort(Comparator.comparingInt(ControlSignal::index));
         String basis = fromHistory ? "the latest " + baselineSize + " readings of earlier campaigns"
-                : "the first " + baselineSize + " readings of this campaign";
-        StringBuilder statement = new StringBuilder("Passes when none of the " + current.length + " readings signals. Centre "
-                + Format.number(chart.centre()) + " " + unit + ", sigma " + Format.number(sigma) + " " + unit
-                + " from " + basis + "; action limits " + Format.number(chart.lowerActionLimit()) + " .. "
-                + Format.number(chart.upperActionLimit()) + ", warning limits "
-                + Format.number(chart.lowerWarningLimit()) + " .. " + Format.number(chart.upperWarningLimit())
-                + "; CUSUM k = 0.5 sigma, h = 5 sigma.");
+                : "the first " + baselineSize + " readings of this campaign, which are not judged";
+        return Optional.of(judge(baseline, fromHistory, current, fromHistory ? 0 : baselineSize,
+                new ShewhartChart(Stats.mean(baseline), sigma), basis, SOURCE));
+    }
+
+    /**
+     * Judges every reading of this campaign against limits from a stated centre and σ.
+     *
+     * @param sigmaSource where the centre and σ come from, for example the QAL1 report of the analyser
+     * @return empty when this campaign has no reading
+     */
+    public Optional<ChartEvaluation> evaluate(double centre, double sigma, String sigmaSource, double[] current) {
+        Require.notNull("current", current);
+        Require.text("sigmaSource", sigmaSource);
+        if (current.length == 0) {
+            return Optional.empty();
+        }
+        return Optional.of(judge(new double[0], false, current, 0, new ShewhartChart(centre, sigma),
+                "the stated values (" + sigmaSource + ")", SOURCE + "; limits: " + sigmaSource));
+    }
+
+    private ChartEvaluation judge(double[] baseline, boolean fromHistory, double[] current, int firstJudged,
+            ShewhartChart chart, String basis, String source) {
+        double[] judged = Arrays.copyOfRange(current, firstJudged, current.length);
+        CusumResult cusum = new CusumChart(chart.centre(), chart.sigma(), CUSUM_K, CUSUM_H).evaluate(judged);
+        List<ControlSignal> signals = new ArrayList<>();
+        for (ControlSignal g : chart.evaluate(judged)) {
+            signals.add(new ControlSignal(g.index() + firstJudged, g.rule()));
+        }
+        for (ControlSignal g : cusum.signals()) {
+            signals.add(new ControlSignal(g.index() + firstJudged, g.rule()));
+        }
+        signals.sort(Comparator.comparingInt(ControlSignal::index));
+        StringBuilder statement = new StringBuilder("Passes when none of the " + judged.length
+                + " readings judged signals" + (firstJudged > 0 ? " (readings " + (firstJudged + 1) + " to "
+                        + current.length + ")" : "") + ". Centre " + Format.number(chart.centre()) + " " + unit
+                + ", sigma " + Format.number(chart.sigma()) + " " + unit + " from " + basis + "; action limits "
+                + Format.number(chart.lowerActionLimit()) + " .. " + Format.number(chart.upperActionLimit())
+                + ", warning limits " + Format.number(chart.lowerWarningLimit()) + " .. "
+                + Format.number(chart.upperWarningLimit()) + "; CUSUM k = 0.5 sigma, h = 5 sigma.");
         for (int i = 0; i < Math.min(LISTED_SIGNALS, signals.size()); i++) {
             statement.append(i == 0 ? " Signals: " : "; ").append("reading ").append(signals.get(i).index() + 1)
                     .append(' ').append(signals.get(i).rule());
@@ -96,8 +127,7 @@ public final class ControlChartCheck {
             statement.append("; and ").append(signals.size() - LISTED_SIGNALS).append(" more");
         }
         CheckOutcome outcome = CheckOutcome.judge(checkName(), signals.size(), "signals", AcceptanceLimits.atMost(0),
-                new Rule(statement.toString(), SOURCE));
-        return Optional.of(new ChartEvaluation(reading, unit, baseline, fromHistory, current, chart, signals, cusum,
-                outcome));
+                new Rule(statement.toString(), source));
+        return new ChartEvaluation(reading, unit, baseline, fromHistory, current, chart, signals, cusum, outcome);
     }
 }
