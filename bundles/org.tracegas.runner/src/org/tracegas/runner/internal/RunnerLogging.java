@@ -13,8 +13,8 @@ import java.util.logging.SimpleFormatter;
 
 /**
  * Keeps the console for the runner's own output and progress: what the libraries log (Flyway's migration
- * notes, PDFBox, the database drivers) goes through java.util.logging to {@value #LOG_FILE} in the workspace
- * folder, and only warnings and errors reach the console.
+ * notes, PDFBox's font notes, the database drivers) goes through java.util.logging to {@value #LOG_FILE} in
+ * the workspace folder, and only severe errors reach the console; the runner says what went wrong itself.
  */
 final class RunnerLogging implements AutoCloseable {
 
@@ -37,14 +37,14 @@ final class RunnerLogging implements AutoCloseable {
     }
 
     /**
-     * Sets the console to warnings and opens the log file in the workspace folder the command line names with
+     * Sets the console to severe errors and opens the log file in the workspace folder the command line names with
      * {@code --workspace}, when there is such a folder (a command that creates a workspace makes it first).
      */
     static RunnerLogging configure(List<String> arguments) {
         Logger root = Logger.getLogger("");
         for (Handler h : root.getHandlers()) {
             if (h instanceof ConsoleHandler) {
-                h.setLevel(Level.WARNING);
+                h.setLevel(Level.SEVERE);
             }
         }
         FLYWAY_DATABASE_NOTICE.setLevel(Level.SEVERE);
