@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Runs every test: the reactor's unit, integration and UI tests (UI tests under Xvfb when there is no
-# display), the lab-server tests against a throw-away PostgreSQL server, and the model's regeneration check.
+# display), the lab-server tests against a throw-away PostgreSQL server, the model's regeneration check and
+# a lab add-on built, installed, updated and removed end to end (addons-end-to-end.sh).
 set -euo pipefail
 top=$(cd "$(dirname "$0")/.." && pwd)
 "$top/releng/fetch-swtchart.sh"
@@ -19,6 +20,9 @@ fi
 
 echo "== the generated model code matches what its genmodel generates"
 "$top/releng/emfgen/check.sh"
+
+echo "== a lab's add-on: built from the template outside the reactor, installed, used, updated, removed"
+"$top/releng/addons-end-to-end.sh"
 
 echo "== coverage-guided fuzzing of the JCAMP-DX reader (bounded time)"
 "$top/releng/fuzz/run.sh"
