@@ -21,6 +21,9 @@ fi
 echo "== the generated model code matches what its genmodel generates"
 "$top/releng/emfgen/check.sh"
 
+echo "== the bundles' API against the last release (releng/api-baseline)"
+"$top/releng/api-baseline/check.sh"
+
 echo "== a lab's add-on: built from the template outside the reactor, installed, used, updated, removed"
 "$top/releng/addons-end-to-end.sh"
 
