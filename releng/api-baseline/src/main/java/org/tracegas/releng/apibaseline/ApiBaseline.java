@@ -8,11 +8,13 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.jar.Attributes;
 import java.util.jar.JarEntry;
 import java.util.jar.JarFile;
 import java.util.jar.JarOutputStream;
 import java.util.jar.Manifest;
+import java.util.stream.Collectors;
 import java.util.stream.Stream;
 
 import aQute.bnd.differ.Baseline;
@@ -22,6 +24,8 @@ import aQute.bnd.header.Parameters;
 import aQute.bnd.osgi.Jar;
 import aQute.bnd.osgi.Processor;
 import aQute.bnd.service.diff.Delta;
+import aQute.bnd.service.diff.Diff;
+import aQute.bnd.service.diff.Type;
 import aQute.bnd.version.Version;
 
 /**
@@ -30,8 +34,11 @@ import aQute.bnd.version.Version;
  * <ul>
  * <li>{@code check <baseline folder> <bundles folder>}: every exported package of every built bundle
  * ({@code bundles/<id>/target/<id>-*.jar}) carries a version, and no package exported as API (not
- * {@code x-internal}) in the baseline changed incompatibly (bnd: MAJOR, or removed) without a major step
- * of its version. A compatible addition without a minor step is reported, not failed. Exit 1 on a failure.</li>
+ * {@code x-internal}) in the baseline changed incompatibly without a major step of its version. Incompatible
+ * is what bnd finds removed or changed, and a method added to one of the interfaces that add-ons implement
+ * ({@code consumer-types.txt}); a method added to any other type is compatible, since only the workbench
+ * implements those. A compatible addition without a minor step is reported, not failed. Exit 1 on a
+ * failure.</li>
  * <li>{@code record <baseline folder> <bundles folder>}: writes the built bundles' API (their manifests and
  * the classes of their non-internal exported packages) as the baseline of a release.</li>
  * </ul>
@@ -45,9 +52,9 @@ public final class ApiBaseline {
     }
 
     public static void main(String[] args) throws Exception {
-        if (args.length != 3 || !(args[0].equals("check") || args[0].equals("record"))) {
-            throw new IllegalArgumentException("usage: (check|record) <baseline folder> <bundles folder>, got "
-                    + List.of(args));
+        if (args.length != 4 || !(args[0].equals("check") || args[0].equals("record"))) {
+            throw new IllegalArgumentException("usage: (check|record) <baseline folder> <bundles folder>"
+                    + " <consumer types file>, got " + List.of(args));
         }
         Path baseline = Path.of(args[1]);
         List<Path> built = builtBundles(Path.of(args[2]));
@@ -62,12 +69,13 @@ public final class ApiBaseline {
             System.out.println("recorded the API of " + built.size() + " bundles in " + baseline);
             return;
         }
+        Set<String> consumerTypes = consumerTypes(Path.of(args[3]));
         List<String> failures = new ArrayList<>();
         for (Path jar : built) {
             failures.addAll(unversionedExports(jar));
             Path older = baseline.resolve(symbolicName(jar) + ".jar");
             if (Files.exists(older)) {
-                failures.addAll(compare(jar, older));
+                failures.addAll(compare(jar, older, consumerTypes));
             } else {
                 System.out.println(symbolicName(jar) + ": new since the baseline, nothing to compare");
             }
@@ -110,7 +118,7 @@ public final class ApiBaseline {
         return failures;
     }
 
-    static List<String> compare(Path newer, Path older) throws Exception {
+    static List<String> compare(Path newer, Path older, Set<String> consumerTypes) throws Exception {
         List<String> failures = new ArrayList<>();
         Parameters olderExports = exports(older);
         try (Processor reporter = new Processor(); Jar n = new Jar(newer.toFile()); Jar o = new Jar(older.toFile())) {
@@ -121,40 +129,50 @@ public final class ApiBaseline {
                 }
                 Delta delta = info.packageDiff.getDelta();
                 String where = symbolicName(newer) + ": package " + info.packageName;
+                List<String> incompatible = new ArrayList<>();
+                collect(info.packageDiff, false, consumerTypes, incompatible);
                 if (delta == Delta.REMOVED) {
                     failures.add(where + " was API in the baseline and is no longer exported");
-                } else if (delta == Delta.MAJOR && majorOf(info.newerVersion) <= majorOf(info.olderVersion)) {
-                    failures.add(where + " changed incompatibly (" + incompatibleChanges(info) + ") but its version"
+                } else if (!incompatible.isEmpty() && majorOf(info.newerVersion) <= majorOf(info.olderVersion)) {
+                    failures.add(where + " changed incompatibly (" + summary(incompatible) + ") but its version"
                             + " went from " + info.olderVersion + " to " + info.newerVersion + "; an incompatible"
-                            + " change needs the next major version, " + info.suggestedVersion);
-                } else if (delta == Delta.MINOR && info.newerVersion.compareTo(info.olderVersion) <= 0) {
-                    System.out.println(where + ": compatible additions; raise its version to "
-                            + info.suggestedVersion + " at the next release");
+                            + " change needs the next major version, " + (majorOf(info.olderVersion) + 1) + ".0.0");
+                } else if (delta != Delta.UNCHANGED && delta != Delta.MICRO
+                        && info.newerVersion.compareTo(info.olderVersion) <= 0) {
+                    System.out.println(where + ": compatible additions; raise its minor version at the next release");
                 }
             }
         }
         return failures;
     }
 
-    private static String incompatibleChanges(Baseline.Info info) {
-        List<String> changes = new ArrayList<>();
-        collect(info.packageDiff, changes);
+    private static String summary(List<String> changes) {
         return changes.size() <= 5 ? String.join("; ", changes)
                 : String.join("; ", changes.subList(0, 5)) + "; and " + (changes.size() - 5) + " more";
     }
 
-    private static void collect(aQute.bnd.service.diff.Diff diff, List<String> out) {
-        if (diff.getDelta() != Delta.MAJOR && diff.getDelta() != Delta.REMOVED) {
-            return;
+    /** The changes that break a user of the package, walking bnd's tree of differences. */
+    private static void collect(Diff diff, boolean inConsumerType, Set<String> consumerTypes, List<String> out) {
+        boolean consumer = inConsumerType
+                || (diff.getType() == Type.INTERFACE && consumerTypes.contains(diff.getName()));
+        switch (diff.getDelta()) {
+            case REMOVED, CHANGED -> out.add(diff.getDelta().toString().toLowerCase() + " "
+                    + diff.getType().toString().toLowerCase() + " " + diff.getName());
+            case ADDED -> {
+                if (consumer && diff.getType() == Type.METHOD) {
+                    out.add("added method " + diff.getName() + " to a type add-ons implement");
+                }
+            }
+            case MAJOR, MINOR -> diff.getChildren().forEach(c -> collect(c, consumer, consumerTypes, out));
+            default -> {
+                // unchanged, ignored or a micro change: compatible
+            }
         }
-        if (diff.getChildren().isEmpty() || diff.getDelta() == Delta.REMOVED) {
-            out.add(diff.getDelta().toString().toLowerCase() + " " + diff.getType().toString().toLowerCase() + " "
-                    + diff.getName());
-            return;
-        }
-        for (aQute.bnd.service.diff.Diff child : diff.getChildren()) {
-            collect(child, out);
-        }
+    }
+
+    private static Set<String> consumerTypes(Path file) throws IOException {
+        return Files.readAllLines(file).stream().map(String::trim).filter(l -> !l.isEmpty() && !l.startsWith("#"))
+                .collect(Collectors.toSet());
     }
 
     private static int majorOf(Version v) {
