@@ -42,20 +42,20 @@ step "build it outside the reactor against the product's p2 repository (with its
 (cd "$lab" && ./mvnw -B -q verify) || fail "the lab's project does not build"
 labrepo=$lab/repository/target/repository
 
-step "install it into a copy of the product"
+step "install it into a copy of the product, which has opened a workspace before"
 cp -a "$product" "$work/product"
 installation=$work/product
+export TRACEGAS_PASSWORD=end-to-end-only
+ws=$work/workspace
+"$installation/tracegas" workspace-init --workspace "$ws" --admin admin --name "Test Administrator" >/dev/null
+"$installation/tracegas" project-add --workspace "$ws" --as admin --client "Northfield Lime Works" \
+  --code NLW-1 --name "Kiln stack" >/dev/null
 "$installation/tracegas-addons" install "$labrepo" org.example.lab.kestrel.feature >"$work/install.log" 2>&1 \
   || { cat "$work/install.log"; fail "install failed"; }
 "$installation/tracegas-addons" list 2>/dev/null | grep -q '^org.example.lab.kestrel.feature.feature.group/' \
   || fail "the installed feature is not listed"
 
 step "import a file of the example instrument with the runner"
-export TRACEGAS_PASSWORD=end-to-end-only
-ws=$work/workspace
-"$installation/tracegas" workspace-init --workspace "$ws" --admin admin --name "Test Administrator" >/dev/null
-"$installation/tracegas" project-add --workspace "$ws" --as admin --client "Northfield Lime Works" \
-  --code NLW-1 --name "Kiln stack" >/dev/null
 "$installation/tracegas" import --workspace "$ws" --as admin --project NLW-1 --file "$sample" >"$work/import.log" 2>&1 \
   || { cat "$work/import.log"; fail "the import failed"; }
 grep -qF "as $format" "$work/import.log" || { cat "$work/import.log"; fail "the file was not read by the add-on's reader"; }
@@ -80,4 +80,16 @@ grep -q org.example.lab.kestrel "$installation/configuration/org.eclipse.equinox
   && fail "the bundle is still in the bundle list"
 "$installation/tracegas" import --workspace "$ws" --as admin --project NLW-1 --file "$sample" >"$work/import2.log" 2>&1 || true
 grep -qF "as $format" "$work/import2.log" && fail "the removed reader still reads files"
+step "the workspace's audit trail holds the software of each opening that changed it"
+h2=$(ls "$installation"/plugins/com.h2database_*.jar | head -n 1)
+audit=$(ls "$installation"/plugins/org.tracegas.audit_*.jar | head -n 1)
+java -cp "$h2:$audit" org.h2.tools.Shell -url "jdbc:h2:file:$ws/db/workspace" -user "" -password "" \
+  -sql "SELECT action, new_value, reason FROM audit_record WHERE object_type = 'installed-software' ORDER BY seq" \
+  > "$work/audit.txt"
+cat "$work/audit.txt"
+[ "$(grep -c 'Tracegas Workbench' "$work/audit.txt")" -eq 3 ] || fail "expected 3 software records (before, with, after the add-on)"
+grep 'CHANGE' "$work/audit.txt" | grep -q "with org.example.lab.kestrel.feature 1.0.0" \
+  || fail "no record of the software with the add-on"
+grep -q "$(id -un) install org.example.lab.kestrel.feature from file:" "$work/audit.txt" \
+  || fail "the record does not say who installed the add-on"
 step "done"
