@@ -1,6 +1,7 @@
 #!/usr/bin/env bash
 # Runs every test: the reactor's unit, integration and UI tests (UI tests under Xvfb when there is no
-# display), the lab-server tests against a throw-away PostgreSQL server, and the model's regeneration check.
+# display), the lab-server tests against a throw-away PostgreSQL server, the model's regeneration check and
+# a lab add-on built, installed, updated and removed end to end (addons-end-to-end.sh).
 # As root it first installs the system packages it needs (releng/install-prerequisites.sh); as another user it
 # names the missing ones and how to install them, before building anything.
 set -euo pipefail
@@ -40,6 +41,12 @@ fi
 
 echo "== the generated model code matches what its genmodel generates"
 "$top/releng/emfgen/check.sh"
+
+echo "== the bundles' API against the last release (releng/api-baseline)"
+"$top/releng/api-baseline/check.sh"
+
+echo "== a lab's add-on: built from the template outside the reactor, installed, used, updated, removed"
+"$top/releng/addons-end-to-end.sh"
 
 echo "== coverage-guided fuzzing of the JCAMP-DX reader (bounded time)"
 "$top/releng/fuzz/run.sh"

@@ -77,6 +77,30 @@ abstract class AuditServiceContract {
     }
 
     @Test
+    void theSoftwareOfAnInstallationIsRecordedOnceEachTimeItChanges() {
+        String folder = "/opt/tracegas";
+        String before = "Tracegas Workbench 0.1.0.1";
+        String after = before + " with org.example.lab.reader.feature 1.0.0.2";
+        assertTrue(store.audit().recordSoftware(analyst, folder, before, "first opening"));
+        assertEquals(false, store.audit().recordSoftware(analyst, folder, before, "opened again"), "unchanged");
+        assertTrue(store.audit().recordSoftware(analyst, folder, after, "2026-12-01T08:00:00Z lab install"));
+        assertTrue(store.audit().recordSoftware(analyst, "/srv/other", before, "another installation"));
+
+        List<AuditRecord> records = store.audit().review(reviewer,
+                AuditQuery.all().object(AuditService.SOFTWARE_OBJECT, folder).build()).records();
+        assertEquals(2, records.size());
+        assertEquals(AuditAction.CREATE, records.get(0).action());
+        AuditRecord change = records.get(1);
+        assertEquals(AuditAction.CHANGE, change.action());
+        // prior values are kept beside the new ones (21 CFR 11.10(e), from memory)
+        assertEquals(before, change.oldValue());
+        assertEquals(after, change.newValue());
+        assertEquals("2026-12-01T08:00:00Z lab install", change.reason());
+        assertEquals(analyst.userId(), change.userId());
+        assertThrows(IllegalArgumentException.class, () -> store.audit().recordSoftware(analyst, folder, " ", "x"));
+    }
+
+    @Test
     void theFilterNarrowsToTheAnalystsRecordsOfOneAction() throws Exception {
         AuditReview.Result mine = store.audit().review(reviewer,
                 AuditQuery.all().user(analyst.userId()).actions(AuditAction.CREATE).build());

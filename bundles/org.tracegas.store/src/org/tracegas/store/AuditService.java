@@ -32,6 +32,23 @@ public interface AuditService {
      */
     long exportCsv(Session reader, AuditQuery query, Writer out) throws IOException;
 
+    /** Object type of the records of an installation's software (see {@link #recordSoftware}). */
+    String SOFTWARE_OBJECT = "installed-software";
+
+    /**
+     * Records the software of the installation that opens the workspace when it differs from what was last
+     * recorded for that installation: a record of object type {@value #SOFTWARE_OBJECT} with the installation
+     * as object id, the previous and the current description side by side, and {@code reason} (who installed,
+     * updated or removed which add-on, and when). Any logged-in user's opening may write it: it records the
+     * state of the software the workspace is used with, not a decision of that user.
+     *
+     * @param installation where the software is installed (its folder), not blank
+     * @param software     what is installed, e.g. the product and its add-on features with versions, not blank
+     * @param reason       how it came to differ, not blank
+     * @return whether a record was written (false when the software is as last recorded)
+     */
+    boolean recordSoftware(Session actor, String installation, String software, String reason);
+
     /**
      * Walks the whole chain and reports every record that was altered, removed, inserted or reordered. Needs no
      * session: the report holds the chain's state and the positions of findings, not the records' content.

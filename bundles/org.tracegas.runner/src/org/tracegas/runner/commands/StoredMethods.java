@@ -1,6 +1,7 @@
 package org.tracegas.runner.commands;
 
 import org.tracegas.campaign.StoredMethod;
+import org.tracegas.installation.InstalledSoftware;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.NoSuchObjectException;
@@ -13,7 +14,8 @@ import org.tracegas.store.WorkspaceStore;
 /** How the commands that work with results find a project and a stored version of a method. */
 final class StoredMethods {
 
-    static final String SOFTWARE = "tracegas-runner";
+    /** What results record as their software: the installation's release and its add-ons with versions. */
+    static final String SOFTWARE = InstalledSoftware.describeRunning("tracegas-runner");
     static final String USAGE = """
               --method <name> [--method-version <n>]   the stored method, its version n (default: the newest)""";
 

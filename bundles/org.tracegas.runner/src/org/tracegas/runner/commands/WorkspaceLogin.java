@@ -1,10 +1,13 @@
 package org.tracegas.runner.commands;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.tracegas.installation.InstalledSoftware;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.Session;
@@ -67,8 +70,19 @@ final class WorkspaceLogin {
                         options.text("--password"));
     }
 
+    /**
+     * Logs in; then, when this installation's software (its release and add-ons) differs from what the
+     * workspace last recorded for it, writes the new state to the audit trail first.
+     */
     static Session logIn(WorkspaceStore store, Options options, RunnerContext context) throws UsageException {
-        return store.users().logIn(options.text("--as"), password(context, PASSWORD_VARIABLE));
+        Session session = store.users().logIn(options.text("--as"), password(context, PASSWORD_VARIABLE));
+        try {
+            InstalledSoftware.running().ifPresent(software -> software.recordIn(store, session));
+        } catch (IOException e) {
+            throw new UncheckedIOException("recording the installation's software in the audit trail: "
+                    + e.getMessage(), e);
+        }
+        return session;
     }
 
     static char[] password(RunnerContext context, String variable) throws UsageException {

@@ -4,8 +4,13 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.sql.Connection;
+import java.util.ArrayList;
+import java.util.List;
 
+import org.tracegas.audit.AuditAction;
+import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditQuery;
+import org.tracegas.audit.AuditRecord;
 import org.tracegas.audit.AuditReview;
 import org.tracegas.audit.AuditVerifier;
 import org.tracegas.audit.VerificationReport;
@@ -51,6 +56,27 @@ final class JdbcAuditService implements AuditService {
         } catch (UncheckedIOException e) {
             throw e.getCause();
         }
+    }
+
+    @Override
+    public boolean recordSoftware(Session actor, String installation, String software, String reason) {
+        JdbcUserService.requireText("installation", installation);
+        JdbcUserService.requireText("software", software);
+        JdbcUserService.requireText("reason", reason);
+        return transactions.run("recording the software of " + installation, tx -> {
+            Guard.roles(tx, actor);
+            List<AuditRecord> earlier = new ArrayList<>();
+            AuditReview.forEach(tx.connection(), AuditQuery.all().object(SOFTWARE_OBJECT, installation).build(),
+                    earlier::add);
+            String previous = earlier.isEmpty() ? null : earlier.get(earlier.size() - 1).newValue();
+            if (software.equals(previous)) {
+                return false;
+            }
+            tx.audit(AuditEntry.builder(actor.userId(), previous == null ? AuditAction.CREATE : AuditAction.CHANGE,
+                    SOFTWARE_OBJECT, installation).version(earlier.size()).oldValue(previous).newValue(software)
+                    .reason(reason).build());
+            return true;
+        });
     }
 
     @Override
