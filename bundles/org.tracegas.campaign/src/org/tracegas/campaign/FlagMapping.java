@@ -22,6 +22,8 @@ final class FlagMapping {
                 case ABSORBANCE_TOO_HIGH -> ResultFlag.SATURATED;
                 case BACKGROUND_TOO_OLD -> ResultFlag.BACKGROUND_TOO_OLD;
                 case NOT_CONVERGED -> ResultFlag.NOT_CONVERGED;
+                // the stored model has no flag of its own for a fit that left out unusable spectrum points
+                case POINTS_MASKED -> ResultFlag.QA_FAILED;
             });
         }
         return stored;

@@ -32,6 +32,10 @@ final class CanonicalMethodText {
         s.append("max_absorbance ").append(num(m.maxAbsorbance())).append('\n');
         s.append("tolerance ").append(num(m.tolerance())).append('\n');
         s.append("max_iterations ").append(m.maxIterations()).append('\n');
+        if (m.algorithm() != FitAlgorithm.CLASSICAL_LEAST_SQUARES) {
+            // written only when not the default, so that the texts and hashes of earlier methods stay as they were
+            s.append("algorithm ").append(m.algorithm().name()).append('\n');
+        }
         for (Analyte a : m.analytes()) {
             s.append("analyte ").append(a.compound()).append('\n');
             for (String i : a.interferents()) {
@@ -127,6 +131,9 @@ final class CanonicalMethodText {
             b.maxAbsorbance(number(single("max_absorbance"), "max_absorbance"));
             b.tolerance(number(single("tolerance"), "tolerance"));
             b.maxIterations(integer(single("max_iterations"), "max_iterations"));
+            if (peek("algorithm")) {
+                b.algorithm(constant(FitAlgorithm.class, single("algorithm"), "algorithm"));
+            }
             while (peek("analyte")) {
                 b.analyte(analyte());
             }

@@ -20,11 +20,13 @@ import java.util.Set;
  * @param iterations          iterations of the non-linear part of the fit, 0 for a linear fit
  * @param shift               fitted wavenumber shift in cm-1, NaN when the method fits none
  * @param width               fitted width change in cm-2, NaN when the method fits none
+ * @param scale               fitted relative wavenumber scale of the sample against the references (the sample's
+ *                            lines lie at nu (1 + scale) for reference lines at nu), NaN when the method fits none
  * @param spectra             fitted spectra for plots, present only when requested
  */
 public record CompoundResult(String compound, double concentration, double standardUncertainty, double detectionLimit,
         ReportingUnit reportingUnit, List<RegionResidual> residuals, Set<QualityFlag> flags, int iterations,
-        double shift, double width, Optional<FitSpectra> spectra) {
+        double shift, double width, double scale, Optional<FitSpectra> spectra) {
 
     public CompoundResult {
         residuals = List.copyOf(residuals);

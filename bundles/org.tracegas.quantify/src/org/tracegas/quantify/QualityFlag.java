@@ -13,5 +13,7 @@ public enum QualityFlag {
     /** The background spectrum was older than the caller's limit when the sample was measured. */
     BACKGROUND_TOO_OLD,
     /** The non-linear iteration stopped at its iteration cap before meeting its tolerance. */
-    NOT_CONVERGED
+    NOT_CONVERGED,
+    /** Points of the fit windows where the sample is not finite were left out of the fit. */
+    POINTS_MASKED
 }

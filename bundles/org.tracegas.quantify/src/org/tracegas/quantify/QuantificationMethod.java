@@ -30,6 +30,7 @@ public final class QuantificationMethod {
     private final double pathLengthMetres;
     private final List<Analyte> analytes;
     private final List<ReferenceSpectrum> references;
+    private final FitAlgorithm algorithm;
     private final boolean nonlinearity;
     private final ShiftTerm shiftTerm;
     private final ReportingUnit reportingUnit;
@@ -48,6 +49,7 @@ public final class QuantificationMethod {
         // Canonical order, so that the same references added in another order give the same method.
         sorted.sort(Comparator.comparing(ReferenceSpectrum::compound).thenComparingDouble(ReferenceSpectrum::ppmMetres));
         this.references = List.copyOf(sorted);
+        this.algorithm = b.algorithm;
         this.nonlinearity = b.nonlinearity;
         this.shiftTerm = b.shiftTerm;
         this.reportingUnit = b.reportingUnit;
@@ -97,7 +99,15 @@ public final class QuantificationMethod {
         return references.stream().filter(r -> r.compound().equals(compound)).toList();
     }
 
-    /** Whether references of several amounts are interpolated at the current estimate (non-linear response). */
+    /** How the method fits the sample absorbance. */
+    public FitAlgorithm algorithm() {
+        return algorithm;
+    }
+
+    /**
+     * Whether references of several amounts are interpolated at the current estimate (non-linear response); only
+     * for {@link FitAlgorithm#CLASSICAL_LEAST_SQUARES}, the curve of growth uses all references anyway.
+     */
     public boolean nonlinearity() {
         return nonlinearity;
     }
@@ -168,6 +178,7 @@ public final class QuantificationMethod {
         private double pathLengthMetres = Double.NaN;
         private final List<Analyte> analytes = new ArrayList<>();
         private final List<ReferenceSpectrum> references = new ArrayList<>();
+        private FitAlgorithm algorithm = FitAlgorithm.CLASSICAL_LEAST_SQUARES;
         private boolean nonlinearity;
         private ShiftTerm shiftTerm = ShiftTerm.NONE;
         private ReportingUnit reportingUnit = ReportingUnit.PPM;
@@ -192,6 +203,11 @@ public final class QuantificationMethod {
 
         public Builder reference(ReferenceSpectrum reference) {
             references.add(reference);
+            return this;
+        }
+
+        public Builder algorithm(FitAlgorithm fitAlgorithm) {
+            this.algorithm = fitAlgorithm;
             return this;
         }
 
@@ -275,8 +291,18 @@ public final class QuantificationMethod {
                     }
                 }
             }
+            if (algorithm == null) {
+                throw new IllegalArgumentException("algorithm must not be null");
+            }
             if (shiftTerm == null) {
                 throw new IllegalArgumentException("shiftTerm must not be null");
+            }
+            boolean scale = shiftTerm == ShiftTerm.SCALE;
+            boolean curveOfGrowth = algorithm == FitAlgorithm.CURVE_OF_GROWTH;
+            if (shiftTerm != ShiftTerm.NONE && scale != curveOfGrowth) {
+                throw new IllegalArgumentException("shiftTerm " + shiftTerm + " is not offered by the algorithm "
+                        + algorithm + (curveOfGrowth ? ", which offers SCALE" : ", which offers SHIFT and "
+                                + "SHIFT_AND_WIDTH"));
             }
             if (reportingUnit == null) {
                 throw new IllegalArgumentException("reportingUnit must not be null");

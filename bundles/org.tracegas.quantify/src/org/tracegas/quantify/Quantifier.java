@@ -6,9 +6,10 @@ import java.util.EnumSet;
 import java.util.List;
 import java.util.Optional;
 
-import org.tracegas.quantify.internal.FitSystem;
+import org.tracegas.quantify.internal.FitPoints;
 import org.tracegas.quantify.internal.Sha256;
 import org.tracegas.quantify.internal.SystemFit;
+import org.tracegas.quantify.internal.SystemSolver;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.Spectrum;
 
@@ -55,8 +56,9 @@ public final class Quantifier {
     /**
      * Fits a sample and records what the result was computed from.
      *
-     * @throws IllegalArgumentException if the spectrum is not absorbance, not on the prepared axis, or not finite
-     *                                  at a fit point (the message names the index)
+     * @throws IllegalArgumentException if the spectrum is not absorbance or not on the prepared axis, or if the
+     *                                  method's algorithm cannot fit a point that is not finite (the message names
+     *                                  the index)
      */
     public SpectrumResult quantify(Sample sample) {
         List<CompoundResult> results = fit(sample);
@@ -89,24 +91,15 @@ public final class Quantifier {
         List<CompoundResult> results = new ArrayList<>(method.analytes().size());
         for (int a = 0; a < method.analytes().size(); a++) {
             int s = prepared.systemOfAnalyte(a);
-            FitSystem system = prepared.system(s);
+            SystemSolver system = prepared.system(s);
             if (fits[s] == null) {
-                requireFinite(y, system);
                 fits[s] = system.fit(y);
-                statistics[s] = new RegionStatistics(system, fits[s], y);
+                statistics[s] = new RegionStatistics(system.points(), fits[s], y);
             }
             results.add(result(method, method.analytes().get(a), system, fits[s], statistics[s],
-                    prepared.columnOfAnalyte(a), y, spectrum, sample.background()));
+                    prepared.columnOfAnalyte(a), y, spectrum, sample));
         }
         return results;
-    }
-
-    private static void requireFinite(double[] y, FitSystem system) {
-        for (int i : system.rows()) {
-            if (!Double.isFinite(y[i])) {
-                throw new IllegalArgumentException("sample absorbance at index " + i + " is not finite: " + y[i]);
-            }
-        }
     }
 
     /** Residual RMS per region and highest sample absorbance of one system's fit, shared by its analytes. */
@@ -115,34 +108,37 @@ public final class Quantifier {
         final double highest;
         final int[] rows;
 
-        RegionStatistics(FitSystem system, SystemFit fit, double[] y) {
-            this.rows = system.rows();
+        RegionStatistics(FitPoints points, SystemFit fit, double[] y) {
+            this.rows = points.rows();
             double[] residual = fit.residual();
-            this.rms = new double[system.regions()];
+            this.rms = new double[points.regions()];
             double max = Double.NEGATIVE_INFINITY;
             for (int r = 0; r < rms.length; r++) {
                 double sum = 0;
-                int from = system.regionStart(r);
-                int to = system.regionStart(r + 1);
-                for (int j = from; j < to; j++) {
-                    sum += residual[j] * residual[j];
-                    max = Math.max(max, y[rows[j]]);
+                int used = 0;
+                for (int j = points.regionStart(r); j < points.regionStart(r + 1); j++) {
+                    // a masked point (not finite in the sample) has a NaN residual and takes no part
+                    if (Double.isFinite(residual[j])) {
+                        sum += residual[j] * residual[j];
+                        max = Math.max(max, y[rows[j]]);
+                        used++;
+                    }
                 }
-                rms[r] = Math.sqrt(sum / (to - from));
+                rms[r] = Math.sqrt(sum / used);
             }
             this.highest = max;
         }
     }
 
-    private CompoundResult result(QuantificationMethod method, Analyte analyte, FitSystem system, SystemFit fit,
-            RegionStatistics statistics, int column, double[] y, Spectrum spectrum, BackgroundAge background) {
+    private CompoundResult result(QuantificationMethod method, Analyte analyte, SystemSolver system, SystemFit fit,
+            RegionStatistics statistics, int column, double[] y, Spectrum spectrum, Sample sample) {
         double path = method.pathLengthMetres();
         double amount = fit.amounts()[column];
         double concentration = amount / path;
-        double uncertainty = fit.amountSd()[column] / path;
+        double uncertainty = fit.amountSd()[column] / path * sample.noiseCorrelation();
         double detectionLimit = 3 * uncertainty;
         EnumSet<QualityFlag> flags = EnumSet.noneOf(QualityFlag.class);
-        if (amount > system.compounds().get(column).highestAmount()) {
+        if (amount > system.highestAmount(column)) {
             flags.add(QualityFlag.OUTSIDE_CALIBRATED_RANGE);
         }
         if (concentration < -detectionLimit) {
@@ -151,11 +147,15 @@ public final class Quantifier {
         if (!fit.converged()) {
             flags.add(QualityFlag.NOT_CONVERGED);
         }
+        if (fit.masked() > 0) {
+            flags.add(QualityFlag.POINTS_MASKED);
+        }
+        BackgroundAge background = sample.background();
         if (background != null && background.tooOld()) {
             flags.add(QualityFlag.BACKGROUND_TOO_OLD);
         }
-        List<RegionResidual> residuals = new ArrayList<>(system.regions());
-        for (int r = 0; r < system.regions(); r++) {
+        List<RegionResidual> residuals = new ArrayList<>(statistics.rms.length);
+        for (int r = 0; r < statistics.rms.length; r++) {
             RegionResidual rr = new RegionResidual(analyte.regions().get(r), statistics.rms[r]);
             if (rr.aboveLimit()) {
                 flags.add(QualityFlag.RESIDUAL_ABOVE_LIMIT);
@@ -168,7 +168,8 @@ public final class Quantifier {
         Optional<FitSpectra> spectra = keepSpectra ? Optional.of(spectra(spectrum, statistics.rows, fit, column, y))
                 : Optional.empty();
         return new CompoundResult(analyte.compound(), concentration, uncertainty, detectionLimit,
-                method.reportingUnit(), residuals, flags, fit.iterations(), fit.shift(), fit.width(), spectra);
+                method.reportingUnit(), residuals, flags, fit.iterations(), fit.shift(), fit.width(), fit.scale(),
+                spectra);
     }
 
     private static FitSpectra spectra(Spectrum spectrum, int[] rows, SystemFit fit, int column, double[] y) {

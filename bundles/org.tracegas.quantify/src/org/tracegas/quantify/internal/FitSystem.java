@@ -5,22 +5,23 @@ import java.util.List;
 
 import org.apache.commons.math3.exception.MaxCountExceededException;
 
-import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.ShiftTerm;
 
 /**
- * One least-squares system: a set of compounds fitted together over a set of regions, each region with its own
- * polynomial baseline. Everything that does not depend on the sample is computed in the constructor.
+ * The classical least-squares fit of one system: a set of compounds fitted together over a set of regions, each
+ * region with its own polynomial baseline, optionally with the absorptivity interpolated between references at the
+ * current estimate and with line position terms. Everything that does not depend on the sample is computed in the
+ * constructor.
  * <p>
  * Columns: one per compound (absorptivity in absorbance per ppm·m, so coefficients are ppm·m), then the baseline
  * terms region by region, then for a shift fit the shift (cm-1) and optionally the width change (cm-2).
  */
-public final class FitSystem {
+public final class FitSystem implements SystemSolver {
 
     private final String label;
     private final List<Absorptivity> compounds;
+    private final FitPoints points;
     private final int[] rows;          // sample axis indices, region by region
-    private final int[] regionStart;   // index into rows where each region starts; last entry = rows.length
     private final double[] weights;    // per row, or null
     private final double[][][] k;      // [compound][reference][row] absorptivity
     private final double[][][] k1;     // first derivative, only for a shift fit
@@ -36,53 +37,30 @@ public final class FitSystem {
     /**
      * @param label         names the system in messages, for example "fit of CO"
      * @param compounds     compound columns in order
-     * @param regions       the regions
+     * @param points        the fit points, regions and baselines
      * @param wavenumbers   the sample axis
-     * @param axisWeights   weight per sample axis point, or null
      * @param nonlinearity  whether to interpolate between references at the current estimate
-     * @param shiftTerm     the non-linear line position terms
+     * @param shiftTerm     the non-linear line position terms: NONE, SHIFT or SHIFT_AND_WIDTH
      * @param tolerance     relative convergence tolerance of the non-linear iteration
      * @param maxIterations iteration cap
-     * @throws IllegalArgumentException if a region holds too few axis points, a reference does not cover a
-     *                                  region, or the design cannot be solved
+     * @throws IllegalArgumentException if a reference does not cover a region, the design cannot be solved or the
+     *                                  shift term is one this fit does not offer
      */
-    public FitSystem(String label, List<Absorptivity> compounds, List<AnalysisRegion> regions, double[] wavenumbers,
-            double[] axisWeights, boolean nonlinearity, ShiftTerm shiftTerm, double tolerance, int maxIterations) {
+    public FitSystem(String label, List<Absorptivity> compounds, FitPoints points, double[] wavenumbers,
+            boolean nonlinearity, ShiftTerm shiftTerm, double tolerance, int maxIterations) {
+        if (shiftTerm == ShiftTerm.SCALE) {
+            throw new IllegalArgumentException(label + ": the classical least-squares fit offers no " + shiftTerm
+                    + " term");
+        }
         this.label = label;
         this.compounds = List.copyOf(compounds);
+        this.points = points;
         this.shiftTerm = shiftTerm;
         this.tolerance = tolerance;
         this.maxIterations = maxIterations;
-        int nr = regions.size();
-        this.regionStart = new int[nr + 1];
-        int[] buffer = new int[wavenumbers.length * nr];
-        int count = 0;
-        int terms = 0;
-        for (int r = 0; r < nr; r++) {
-            regionStart[r] = count;
-            AnalysisRegion region = regions.get(r);
-            for (int i = 0; i < wavenumbers.length; i++) {
-                if (region.contains(wavenumbers[i])) {
-                    buffer[count++] = i;
-                }
-            }
-            if (count - regionStart[r] <= region.baselineOrder() + 1) {
-                throw new IllegalArgumentException(label + ": region " + r + " (" + region.windows()
-                        + ") holds " + (count - regionStart[r]) + " sample axis points, too few for its baseline");
-            }
-            terms += region.baselineOrder() + 1;
-        }
-        regionStart[nr] = count;
-        this.rows = Arrays.copyOf(buffer, count);
-        this.weights = axisWeights == null ? null : gather(axisWeights);
-        if (weights != null) {
-            for (int j = 0; j < count; j++) {
-                if (!(weights[j] > 0 && Double.isFinite(weights[j]))) {
-                    throw new IllegalArgumentException(label + ": weights do not extend to "
-                            + wavenumbers[rows[j]] + " cm-1");
-                }
-            }
-        }
+        this.rows = points.rows();
+        this.weights = points.weightsUnsafe();
+        this.baseline = points.baselineUnsafe();
         int nc = compounds.size();
         boolean shift = shiftTerm != ShiftTerm.NONE;
         this.k = new double[nc][][];
@@ -99,19 +77,6 @@ public final class FitSystem {
             }
         }
         this.iterate = nonlinearity && multi;
-        this.baseline = new double[terms][count];
-        int t = 0;
-        for (int r = 0; r < nr; r++) {
-            AnalysisRegion region = regions.get(r);
-            double mid = (region.low() + region.high()) / 2;
-            double half = (region.high() - region.low()) / 2;
-            for (int o = 0; o <= region.baselineOrder(); o++, t++) {
-                for (int j = regionStart[r]; j < regionStart[r + 1]; j++) {
-                    // wavenumber mapped onto [-1, 1] over the region keeps the powers comparable in size
-                    baseline[t][j] = Math.pow((wavenumbers[rows[j]] - mid) / half, o);
-                }
-            }
-        }
         this.pooledColumns = new double[nc][];
         for (int c = 0; c < nc; c++) {
             pooledColumns[c] = mix(k[c], compounds.get(c).pooledMix());
@@ -130,14 +95,6 @@ public final class FitSystem {
                 }
                 out[i][j] = a.at(i, order, nu);
             }
-        }
-        return out;
-    }
-
-    private double[] gather(double[] full) {
-        double[] out = new double[rows.length];
-        for (int j = 0; j < rows.length; j++) {
-            out[j] = full[rows[j]];
         }
         return out;
     }
@@ -164,30 +121,44 @@ public final class FitSystem {
         return LinearDesign.of(all, weights, label);
     }
 
+    @Override
     public String label() {
         return label;
     }
 
-    public List<Absorptivity> compounds() {
-        return compounds;
+    @Override
+    public FitPoints points() {
+        return points;
     }
 
-    public int regions() {
-        return regionStart.length - 1;
+    @Override
+    public int compounds() {
+        return compounds.size();
     }
 
-    /** Sample axis indices of the fit points, region by region. */
-    public int[] rows() {
-        return rows.clone();
+    @Override
+    public String compound(int column) {
+        return compounds.get(column).compound();
     }
 
-    public int regionStart(int region) {
-        return regionStart[region];
+    @Override
+    public double highestAmount(int column) {
+        return compounds.get(column).highestAmount();
     }
 
-    /** Fits one sample given as absorbance on the full sample axis. */
+    /**
+     * {@inheritDoc}
+     *
+     * @throws IllegalArgumentException if the sample is not finite at a fit point (the message names the index)
+     */
+    @Override
     public SystemFit fit(double[] sample) {
-        double[] y = gather(sample);
+        for (int i : rows) {
+            if (!Double.isFinite(sample[i])) {
+                throw new IllegalArgumentException("sample absorbance at index " + i + " is not finite: " + sample[i]);
+            }
+        }
+        double[] y = points.gather(sample);
         int nc = compounds.size();
         LinearSolution solution = pooledDesign.solve(y);
         double[][] mixes = new double[nc][];
@@ -247,8 +218,9 @@ public final class FitSystem {
         for (int c = 0; c < sd.length; c++) {
             sd[c] = solution.standardDeviation(c);
         }
-        return new SystemFit(solution.coefficients(), sd, solution.residualUnsafe(), columns, iterations, converged,
-                Double.NaN, Double.NaN);
+        double[] amounts = solution.coefficients();
+        return new SystemFit(amounts, sd, solution.residualUnsafe(), SystemFit.linear(columns, amounts), iterations,
+                converged, Double.NaN, Double.NaN, Double.NaN, 0);
     }
 
     private SystemFit fitShift(double[] y, LinearSolution linear, double[][] mixes, int iterations,
@@ -308,7 +280,8 @@ public final class FitSystem {
         }
         double[] amounts = Arrays.copyOf(q, nc);
         double[] sd = Arrays.copyOf(fit.standardDeviations(), nc);
-        return new SystemFit(amounts, sd, fit.residual(), columns, iterations + fit.iterations(), converged, shift,
-                width ? w : Double.NaN);
+        return new SystemFit(amounts, sd, fit.residual(), SystemFit.linear(columns, amounts),
+                iterations + fit.iterations(), converged, shift,
+                width ? w : Double.NaN, Double.NaN, 0);
     }
 }

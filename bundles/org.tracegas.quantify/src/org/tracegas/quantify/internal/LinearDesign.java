@@ -144,47 +144,17 @@ public final class LinearDesign {
         }
         // projection onto the orthonormal basis: z = U^T y_w, then residual_w = y_w - U z
         double[] z = new double[cols];
-        int k = 0;
-        // four basis vectors at a time: four independent sums keep the processor busy, each in plain row order
-        for (; k + 4 <= cols; k += 4) {
-            double[] u0 = basis[k];
-            double[] u1 = basis[k + 1];
-            double[] u2 = basis[k + 2];
-            double[] u3 = basis[k + 3];
-            double s0 = 0;
-            double s1 = 0;
-            double s2 = 0;
-            double s3 = 0;
-            for (int i = 0; i < rows; i++) {
-                double yi = yw[i];
-                s0 += u0[i] * yi;
-                s1 += u1[i] * yi;
-                s2 += u2[i] * yi;
-                s3 += u3[i] * yi;
-            }
-            z[k] = s0;
-            z[k + 1] = s1;
-            z[k + 2] = s2;
-            z[k + 3] = s3;
-        }
-        for (; k < cols; k++) {
-            double[] uk = basis[k];
-            double sum = 0;
-            for (int i = 0; i < rows; i++) {
-                sum += uk[i] * yw[i];
-            }
-            z[k] = sum;
-        }
+        DotProducts.of(basis, yw, rows, z);
         double[] c = new double[cols];
         for (int j = 0; j < cols; j++) {
             double sum = 0;
-            for (k = 0; k < cols; k++) {
+            for (int k = 0; k < cols; k++) {
                 sum += toCoefficients[j][k] * z[k];
             }
             c[j] = sum;
         }
         double[] residual = yw.clone();
-        for (k = 0; k < cols; k++) {
+        for (int k = 0; k < cols; k++) {
             double[] uk = basis[k];
             double zk = z[k];
             for (int i = 0; i < rows; i++) {
