@@ -5,13 +5,17 @@ import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.sql.Connection;
 
+import java.util.List;
+
 import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditReview;
 import org.tracegas.audit.AuditVerifier;
+import org.tracegas.audit.ChainAnchor;
 import org.tracegas.audit.VerificationReport;
 import org.tracegas.model.Role;
 import org.tracegas.store.AuditService;
 import org.tracegas.store.Session;
+import org.tracegas.store.WorkspaceVerification;
 
 final class JdbcAuditService implements AuditService {
 
@@ -56,6 +60,15 @@ final class JdbcAuditService implements AuditService {
     @Override
     public VerificationReport verify() {
         return snapshot("verifying the audit trail", tx -> AuditVerifier.verify(tx.connection()));
+    }
+
+    @Override
+    public WorkspaceVerification verifyWorkspace(List<ChainAnchor> anchors) {
+        if (anchors == null) {
+            throw new IllegalArgumentException("anchors must not be null: List.of() verifies without anchors");
+        }
+        return snapshot("verifying the audit trail and the data it vouches for", 
+                tx -> DataVerifier.verify(tx.connection(), anchors));
     }
 
     /**
