@@ -62,6 +62,10 @@ public final class CommandTable {
             context.err().println("tracegas " + c.name() + ": " + e.getMessage());
             context.err().println(c.usage());
             return ExitCode.USAGE;
+        } catch (org.tracegas.store.TamperedDataException e) {
+            // stored data no longer matches the audit trail: a check failed, and the message names the rows
+            context.err().println("tracegas " + c.name() + ": " + e.getMessage());
+            return ExitCode.CHECK_FAILED;
         } catch (Exception e) {
             context.err().println("tracegas " + c.name() + ": " + describe(e));
             return ExitCode.FAILURE;

@@ -41,6 +41,18 @@ public record WorkspaceVerification(VerificationReport chain, long rowsChecked, 
                 && f.rowKey().equals(rowKey));
     }
 
+    /**
+     * @return this verification, when intact
+     * @throws TamperedDataException naming the findings, when not intact
+     * @param purpose what would have used the data, e.g. "make the report"
+     */
+    public WorkspaceVerification requireIntact(String purpose) {
+        if (!intact()) {
+            throw new TamperedDataException(purpose, this);
+        }
+        return this;
+    }
+
     /** One line for a report or log: what was verified, the outcome and the chain anchor. */
     public String statement() {
         ChainAnchor head = head();
