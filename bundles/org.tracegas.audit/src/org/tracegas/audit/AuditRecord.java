@@ -15,7 +15,8 @@ import java.time.Instant;
  * @param recordedAt     database time of the append (UTC, microseconds)
  * @param signerName     printed name of the signer, or null
  * @param meaning        meaning of the signature, or null
- * @param contentSha256  SHA-256 (hex) of the signed content, or null
+ * @param contentSha256  SHA-256 (hex) of the signed content; on a record without signer and meaning, the digest
+ *                       of the data rows the record vouches for ({@link AuditTrail#appendBound}); or null
  * @param previousHash   hash of the preceding record (64 zeros for the first), hex
  * @param hash           hash of this record, hex
  */

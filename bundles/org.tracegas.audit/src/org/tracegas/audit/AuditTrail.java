@@ -37,6 +37,41 @@ public final class AuditTrail {
     }
 
     /**
+     * Appends one record that vouches for stored data rows: {@code dataSha256} is the digest of the rows'
+     * {@link CanonicalRow} hashes (see the store's binding of data rows), kept in the record's
+     * {@link AuditRecord#contentSha256()} and so covered by the chain hash.
+     *
+     * @see #append(Connection, AuditEntry)
+     */
+    public static AuditRecord appendBound(Connection c, AuditEntry e, String dataSha256) throws SQLException {
+        return appendAllBound(c, List.of(e), java.util.Collections.singletonList(dataSha256)).get(0);
+    }
+
+    /**
+     * As {@link #appendAll}, each record vouching for the data digest at the same index (null for a record
+     * that vouches for no data row).
+     *
+     * @throws IllegalArgumentException if the lists differ in length or a digest is not a SHA-256 hex value
+     */
+    public static List<AuditRecord> appendAllBound(Connection c, List<AuditEntry> entries, List<String> dataSha256)
+            throws SQLException {
+        if (entries.size() != dataSha256.size()) {
+            throw new IllegalArgumentException("dataSha256: " + dataSha256.size() + " digests for " + entries.size()
+                    + " entries");
+        }
+        List<Pending> pending = new ArrayList<>(entries.size());
+        for (int i = 0; i < entries.size(); i++) {
+            String digest = dataSha256.get(i);
+            if (digest != null && !org.tracegas.audit.internal.ChainHash.isSha256Hex(digest)) {
+                throw new IllegalArgumentException("dataSha256[" + i + "]: not 64 lower-case hex digits: " + digest);
+            }
+            pending.add(new Pending(entries.get(i), digest == null ? SignatureFields.NONE
+                    : new SignatureFields(null, null, digest)));
+        }
+        return ChainWriter.append(c, pending);
+    }
+
+    /**
      * Appends several records in the given order, with one lock and one batched insert; does not commit.
      * All get the same database time.
      *

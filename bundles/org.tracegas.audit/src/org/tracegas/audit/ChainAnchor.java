@@ -22,6 +22,31 @@ public record ChainAnchor(long sequence, String hash) {
         }
     }
 
+    /**
+     * Reads an anchor written as {@code <sequence>:<hash>}, the form {@link #text()} writes and reports print.
+     *
+     * @throws IllegalArgumentException naming what is wrong with {@code text}
+     */
+    public static ChainAnchor parse(String text) {
+        String t = text == null ? "" : text.strip();
+        int colon = t.indexOf(':');
+        if (colon < 1) {
+            throw new IllegalArgumentException("anchor: expected <sequence>:<hash>, was '" + text + "'");
+        }
+        long sequence;
+        try {
+            sequence = Long.parseLong(t.substring(0, colon));
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("anchor: sequence '" + t.substring(0, colon) + "' is not a whole number");
+        }
+        return new ChainAnchor(sequence, t.substring(colon + 1));
+    }
+
+    /** {@code <sequence>:<hash>}, as {@link #parse} reads it. */
+    public String text() {
+        return sequence + ":" + hash;
+    }
+
     /** The anchor of the chain's last record as given by a verification report, or null for an empty chain. */
     public static ChainAnchor headOf(VerificationReport report) {
         return report.headSequence() == 0 ? null : new ChainAnchor(report.headSequence(), report.headHash());

@@ -66,6 +66,7 @@ public final class CampaignReport {
      */
     public ReportContent content(VersionInfo methodVersion, StoredMethod method, ReportPlan plan)
             throws IOException, ImportException {
+        store.audit().verifyWorkspace(List.of()).requireIntact("make the report of project " + projectId);
         List<MeasurementInfo> measurements = store.projects().measurements(actor, projectId);
         MinuteSeries series = MinuteSeries.of(measurements, store.results().results(actor, projectId),
                 methodVersion.id());

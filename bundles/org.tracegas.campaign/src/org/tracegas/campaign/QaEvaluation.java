@@ -50,6 +50,7 @@ public final class QaEvaluation {
      */
     public Outcome run(String methodVersionId, StoredMethod method, QaPlan plan, ContainerContents qa)
             throws IOException {
+        store.audit().verifyWorkspace(List.of()).requireIntact("evaluate the QA checks of project " + projectId);
         List<CheckOutcome> stored = StoredQaChecks.load(store, actor, projectId, methodVersionId);
         if (!stored.isEmpty()) {
             return new Outcome(stored, true);

@@ -9,6 +9,7 @@ import org.tracegas.report.ReportContent;
 import org.tracegas.store.ReportSignatureRequest;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
+import org.tracegas.store.WorkspaceVerification;
 
 /**
  * A report's review and approval signatures through the workspace store: signing its canonical content, and
@@ -29,13 +30,17 @@ public final class ReportSignatures {
     public static Signature sign(WorkspaceStore store, Session signer, String projectId, ReportContent content,
             String authorId, String typedLogin, char[] password, SignatureMeaning meaning, String comment)
             throws SignatureRefusedException {
+        store.audit().verifyWorkspace(java.util.List.of()).requireIntact("sign the report of project " + projectId);
         return store.reviews().sign(signer, new ReportSignatureRequest(projectId, content.campaign().reportId(),
                 content.canonicalContent(), authorId, typedLogin, password, meaning, comment));
     }
 
     /**
      * The content with the review and approval signatures stored for its report id and the audit anchor of
-     * now; authorship and responsibility signatures are not part of the report's review block.
+     * now, with the verification of the chain and the data it was made under; authorship and responsibility
+     * signatures are not part of the report's review block.
+     *
+     * @throws org.tracegas.store.TamperedDataException if stored data no longer matches the audit trail
      */
     public static ReportContent attach(WorkspaceStore store, Session reader, String projectId,
             ReportContent content) {
@@ -52,7 +57,10 @@ public final class ReportSignatures {
                         meaning, s.contentSha256()));
             }
         }
-        ChainAnchor head = ChainAnchor.headOf(store.verifyAuditTrail());
-        return head == null ? signed : signed.withAuditAnchor(new AuditAnchor(head.sequence(), head.hash()));
+        WorkspaceVerification verified = store.audit().verifyWorkspace(java.util.List.of())
+                .requireIntact("make the report of project " + projectId);
+        ChainAnchor head = verified.head();
+        return head == null ? signed
+                : signed.withAuditAnchor(new AuditAnchor(head.sequence(), head.hash(), verified.statement()));
     }
 }

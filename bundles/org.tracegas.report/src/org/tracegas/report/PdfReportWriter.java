@@ -316,8 +316,12 @@ public final class PdfReportWriter {
             pw.subheading("Audit trail at report time");
             pw.keyValues(List.of(new String[] {"Last audit record", Long.toString(a.sequence())},
                     new String[] {"Its chain hash", a.hash()}), 130);
+            if (a.verification() != null) {
+                pw.paragraph("Made under: " + a.verification(), 9f);
+            }
             pw.paragraph("Verifying the workspace's audit trail against this record and hash reveals any later "
-                    + "rewrite of the trail up to it.", 9f);
+                    + "rewrite of the trail up to it (tracegas audit-verify --anchor " + a.sequence() + ":"
+                    + a.hash() + ").", 9f);
         });
     }
 }

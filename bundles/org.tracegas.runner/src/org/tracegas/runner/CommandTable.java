@@ -79,6 +79,10 @@ public final class CommandTable {
                 context.err().println(c.usage());
             }
             return ExitCode.USAGE;
+        } catch (org.tracegas.store.TamperedDataException e) {
+            // stored data no longer matches the audit trail: a check failed, and the message names the rows
+            context.err().println("tracegas " + c.name() + ": " + e.getMessage());
+            return ExitCode.CHECK_FAILED;
         } catch (LoginFailedException | AccessDeniedException e) {
             context.err().println("tracegas " + c.name() + ": refused: " + e.getMessage());
             return ExitCode.REFUSED;

@@ -45,6 +45,15 @@ final class PostgresBackend implements TestBackend {
         return schemaUrl();
     }
 
+    /** A connection to this test's schema as another database role. */
+    Connection connectAs(String user, String password) throws SQLException {
+        PGSimpleDataSource ds = new PGSimpleDataSource();
+        ds.setURL(schemaUrl());
+        ds.setUser(user);
+        ds.setPassword(password);
+        return ds.getConnection();
+    }
+
     String user() {
         return USER;
     }

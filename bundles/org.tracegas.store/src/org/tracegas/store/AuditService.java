@@ -3,8 +3,11 @@ package org.tracegas.store;
 import java.io.IOException;
 import java.io.Writer;
 
+import java.util.List;
+
 import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditReview;
+import org.tracegas.audit.ChainAnchor;
 import org.tracegas.audit.VerificationReport;
 
 /**
@@ -54,4 +57,14 @@ public interface AuditService {
      * session: the report holds the chain's state and the positions of findings, not the records' content.
      */
     VerificationReport verify();
+
+    /**
+     * Verifies the chain (and that it still passes through each anchor) and every stored data row against the
+     * audit record that vouches for it, in one snapshot and in bounded memory (rows are streamed). Names every
+     * data row that was changed, deleted or inserted outside the store's services. Needs no session, as
+     * {@link #verify()}.
+     *
+     * @param anchors chain positions kept outside the database (printed on reports); may be empty
+     */
+    WorkspaceVerification verifyWorkspace(List<ChainAnchor> anchors);
 }

@@ -62,6 +62,16 @@ public final class ChainHash {
         return ChronoUnit.MICROS.between(Instant.EPOCH, t);
     }
 
+    /** A fresh SHA-256 digest. */
+    public static MessageDigest newSha256() {
+        return sha256();
+    }
+
+    /** Lower-case hex of {@code bytes}. */
+    public static String hex(byte[] bytes) {
+        return HEX.formatHex(bytes);
+    }
+
     static MessageDigest sha256() {
         try {
             return MessageDigest.getInstance("SHA-256");

@@ -86,7 +86,7 @@ class AnalysisCommandsTest {
         CommandTable table = new CommandTable("test", List.of(new WorkspaceInitCommand(), new UserAddCommand(),
                 new ProjectAddCommand(), new LibraryBuildCommand(cancel), new LibraryAddCommand(),
                 new MethodDefineCommand(), new QuantifyCommand(cancel), new QaCommand(), new ReportCommand(),
-                new ReportSignCommand()));
+                new ReportSignCommand(), new AuditVerifyCommand()));
         return table.dispatch(argv, new RunnerContext(new PrintStream(out, true, StandardCharsets.UTF_8),
                 new PrintStream(err, true, StandardCharsets.UTF_8), ENV));
     }
@@ -252,6 +252,41 @@ class AnalysisCommandsTest {
 
         signedByAnotherUserOnly(where, reportPlan, report, hash);
         laterCampaignIsChartedAgainstThisOne(qaPlan, reportPlan);
+        assertTrue(text.contains("Made under: Verified: audit chain of"), "the verification the report was made under");
+        refusedAfterTampering(where, reportPlan, text);
+    }
+
+    /**
+     * Every stored result halved through H2's own connection, outside the store: a report is refused naming the
+     * rows, audit-verify names them, and the anchor printed on the earlier report still passes after the numbers
+     * are put back.
+     */
+    private void refusedAfterTampering(String[] where, Path reportPlan, String earlierReportText) throws Exception {
+        java.util.regex.Matcher anchor = java.util.regex.Pattern.compile("audit-verify --anchor (\\d+:[0-9a-f]{64})")
+                .matcher(earlierReportText);
+        assertTrue(anchor.find(), "the report prints its anchor");
+        halveResults(0.5);
+        try {
+            assertEquals(ExitCode.CHECK_FAILED, run(concat(where, "report", "--plan", reportPlan.toString(), "--out",
+                    folder.resolve("report-after-tampering").toString())));
+            String refusal = err.toString(StandardCharsets.UTF_8);
+            assertTrue(refusal.contains("refusing to make the report") && refusal.contains("CHANGED result "),
+                    refusal);
+            assertFalse(Files.exists(folder.resolve("report-after-tampering").resolve("report.pdf")), "no report");
+            assertEquals(ExitCode.CHECK_FAILED, run("audit-verify", "--workspace", ws, "--anchor", anchor.group(1)));
+            assertTrue(out.toString(StandardCharsets.UTF_8).contains("CHANGED result "), out.toString());
+        } finally {
+            halveResults(2); // exact in binary floating point: the stored numbers are as before
+        }
+        assertEquals(ExitCode.OK, run("audit-verify", "--workspace", ws, "--anchor", anchor.group(1)), out.toString());
+    }
+
+    private static void halveResults(double factor) throws Exception {
+        org.h2.Driver.load();
+        try (java.sql.Connection c = java.sql.DriverManager.getConnection("jdbc:h2:file:"
+                + Path.of(ws).resolve("db").resolve("workspace")); java.sql.Statement s = c.createStatement()) {
+            s.executeUpdate("UPDATE analysis_result SET concentration = concentration * " + factor);
+        }
     }
 
     /**

@@ -41,13 +41,18 @@ final class Options {
      * @param rest receives the other arguments, in order
      */
     static List<Path> repeated(List<String> arguments, String name, List<String> rest) throws UsageException {
-        List<Path> values = new java.util.ArrayList<>();
+        return repeatedText(arguments, name, rest).stream().map(v -> Path.of(v).toAbsolutePath()).toList();
+    }
+
+    /** As {@link #repeated}, the values as given. */
+    static List<String> repeatedText(List<String> arguments, String name, List<String> rest) throws UsageException {
+        List<String> values = new java.util.ArrayList<>();
         for (int i = 0; i < arguments.size(); i++) {
             if (arguments.get(i).equals(name)) {
                 if (i + 1 >= arguments.size()) {
                     throw new UsageException("option " + name + " needs a value");
                 }
-                values.add(Path.of(arguments.get(++i)).toAbsolutePath());
+                values.add(arguments.get(++i));
             } else {
                 rest.add(arguments.get(i));
             }

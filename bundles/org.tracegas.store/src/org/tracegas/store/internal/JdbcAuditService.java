@@ -13,10 +13,12 @@ import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditRecord;
 import org.tracegas.audit.AuditReview;
 import org.tracegas.audit.AuditVerifier;
+import org.tracegas.audit.ChainAnchor;
 import org.tracegas.audit.VerificationReport;
 import org.tracegas.model.Role;
 import org.tracegas.store.AuditService;
 import org.tracegas.store.Session;
+import org.tracegas.store.WorkspaceVerification;
 
 final class JdbcAuditService implements AuditService {
 
@@ -82,6 +84,15 @@ final class JdbcAuditService implements AuditService {
     @Override
     public VerificationReport verify() {
         return snapshot("verifying the audit trail", tx -> AuditVerifier.verify(tx.connection()));
+    }
+
+    @Override
+    public WorkspaceVerification verifyWorkspace(List<ChainAnchor> anchors) {
+        if (anchors == null) {
+            throw new IllegalArgumentException("anchors must not be null: List.of() verifies without anchors");
+        }
+        return snapshot("verifying the audit trail and the data it vouches for", 
+                tx -> DataVerifier.verify(tx.connection(), anchors));
     }
 
     /**

@@ -28,8 +28,12 @@ import org.tracegas.store.StoredMeasurement;
 
 final class JdbcBlockService implements BlockService {
 
-    /** What inserting a block wrote, and the audit records the caller appends before committing. */
-    record Written(List<StoredMeasurement> stored, List<AuditEntry> audit, int resultCount) {
+    /**
+     * What inserting a block wrote, and the audit records the caller appends before committing, each with the
+     * rows it vouches for.
+     */
+    record Written(List<StoredMeasurement> stored, List<AuditEntry> audit, List<List<RowBindings.RowRef>> rows,
+            int resultCount) {
     }
 
     private final Transactions transactions;
@@ -48,7 +52,7 @@ final class JdbcBlockService implements BlockService {
                 tx -> {
                     Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
                     Written written = insert(tx, actor, projectId, block);
-                    tx.auditAll(written.audit());
+                    tx.auditAll(written.audit(), written.rows());
                     return written.stored();
                 });
     }
@@ -123,6 +127,7 @@ final class JdbcBlockService implements BlockService {
         }
         List<StoredMeasurement> stored = new ArrayList<>(block.size());
         List<AuditEntry> audit = new ArrayList<>(block.size());
+        List<List<RowBindings.RowRef>> rows = new ArrayList<>(block.size());
         for (int i = 0; i < block.size(); i++) {
             ProcessedSpectrum p = block.get(i);
             List<String> resultIds = results.get(i).stream().map(ResultInfo::id).toList();
@@ -139,8 +144,15 @@ final class JdbcBlockService implements BlockService {
             fields.put("resultsSha256", resultsSha256(results.get(i)));
             audit.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement", measurementIds.get(i))
                     .newValue(AuditValues.canonical(fields)).build());
+            List<RowBindings.RowRef> bound = new ArrayList<>(2 + resultIds.size());
+            bound.add(new RowBindings.RowRef(DataKind.MEASUREMENT, measurementIds.get(i)));
+            bound.add(new RowBindings.RowRef(DataKind.SPECTRAL_DATA, spectra.get(i)[0]));
+            for (String id : resultIds) {
+                bound.add(new RowBindings.RowRef(DataKind.RESULT, id));
+            }
+            rows.add(bound);
         }
-        return new Written(List.copyOf(stored), audit, resultCount);
+        return new Written(List.copyOf(stored), audit, rows, resultCount);
     }
 
     /** As documented on {@link BlockService}: an auditor recomputes it from the stored results. */

@@ -41,6 +41,7 @@ final class JdbcProjectService implements ProjectService {
             }
             String id = UUID.randomUUID().toString();
             tx.update("INSERT INTO client (id, name, row_version) VALUES (?, ?, 0)", id, name);
+            tx.wrote(DataKind.CLIENT, id);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "client", id)
                     .newValue(AuditValues.canonical(Map.of("name", name))).build());
             return id;
@@ -64,6 +65,7 @@ final class JdbcProjectService implements ProjectService {
             ProjectInfo project = new ProjectInfo(UUID.randomUUID().toString(), clientId, code, name, 0);
             tx.update("INSERT INTO project (id, client_id, code, name, row_version) VALUES (?, ?, ?, ?, 0)",
                     project.id(), clientId, code, name);
+            tx.wrote(DataKind.PROJECT, project.id());
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "project", project.id())
                     .newValue(values(project)).build());
             insertGrant(tx, actor, project.id(), actor.userId(), AccessLevel.WRITE);
@@ -90,6 +92,7 @@ final class JdbcProjectService implements ProjectService {
             } else {
                 tx.update("UPDATE project_grant SET access = ? WHERE project_id = ? AND user_id = ?", access,
                         projectId, userId);
+                tx.wrote(DataKind.GRANT, projectId + "/" + userId);
                 tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "project-grant",
                         projectId + "/" + userId).oldValue(AuditValues.canonical(Map.of("access", before)))
                         .newValue(AuditValues.canonical(Map.of("access", access.getName()))).build());
@@ -102,6 +105,7 @@ final class JdbcProjectService implements ProjectService {
             throws SQLException {
         tx.update("INSERT INTO project_grant (project_id, user_id, access) VALUES (?, ?, ?)", projectId, userId,
                 access);
+        tx.wrote(DataKind.GRANT, projectId + "/" + userId);
         tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "project-grant", projectId + "/" + userId)
                 .newValue(AuditValues.canonical(Map.of("access", access.getName()))).build());
     }
@@ -122,6 +126,7 @@ final class JdbcProjectService implements ProjectService {
             ProjectInfo before = load(tx, projectId);
             long version = RowVersions.update(tx, "project", "project", projectId, expectedVersion, "name = ?",
                     newName);
+            tx.wrote(DataKind.PROJECT, projectId);
             ProjectInfo after = new ProjectInfo(projectId, before.clientId(), before.code(), newName, version);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "project", projectId).version(version)
                     .oldValue(values(before)).newValue(values(after)).build());
@@ -143,6 +148,7 @@ final class JdbcProjectService implements ProjectService {
             Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
             String id = UUID.randomUUID().toString();
             tx.update(INSERT_MEASUREMENT, id, projectId, kind, time, cellTemperature, cellPressure, actor.userId());
+            tx.wrote(DataKind.MEASUREMENT, id);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement", id)
                     .newValue(AuditValues.canonical(measurementValues(projectId, kind, time, cellTemperature,
                             cellPressure))).build());

@@ -51,6 +51,7 @@ final class JdbcQaService implements QaService {
                         + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)", info.id(), projectId, methodVersionId,
                         i, c.check(), c.passed(), c.measured(), c.unit(), c.lower(), c.upper(), c.rule(), c.source(),
                         actor.userId(), now);
+                tx.wrote(DataKind.QA_CHECK, info.id());
                 tx.audit(AuditEntry.builder(actor.userId(), AuditAction.DECISION, "qa-check", info.id())
                         .newValue(values(info)).build());
                 stored.add(info);

@@ -83,6 +83,7 @@ final class JdbcResultService implements ResultService {
             bindInsert(ps, stored);
             ps.executeUpdate();
         }
+        tx.wrote(DataKind.RESULT, stored.id());
         tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "result", stored.id())
                 .newValue(values(stored)).build());
         return stored;

@@ -51,6 +51,7 @@ final class JdbcSpectrumService implements SpectrumService {
                     String[] idAndHash = SpectrumRows.bindInsert(ps, projectId, input);
                     ps.executeUpdate();
                     ids.add(idAndHash[0]);
+                    tx.wrote(DataKind.SPECTRAL_DATA, idAndHash[0]);
                     tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "spectral-data", idAndHash[0])
                             .newValue(values(projectId, input, idAndHash[1])).build());
                 }

@@ -71,6 +71,7 @@ final class JdbcUserService implements UserService {
         tx.update("INSERT INTO app_user (id, login, display_name, roles, password_salt, password_hash,"
                 + " password_iterations, failed_logins, locked, row_version) VALUES (?, ?, ?, ?, ?, ?, ?, 0, FALSE, 0)",
                 id, login, displayName, RoleSets.format(roles), salt, hash, PasswordHasher.ITERATIONS);
+        tx.wrote(DataKind.USER, id);
         return new UserInfo(id, login, displayName, roles, false, 0);
     }
 
@@ -113,12 +114,14 @@ final class JdbcUserService implements UserService {
                     && PasswordHasher.verify(password, stored.salt(), stored.iterations(), stored.hash());
             if (ok) {
                 tx.update("UPDATE app_user SET failed_logins = 0 WHERE id = ?", stored.id());
+                tx.wrote(DataKind.USER, stored.id());
                 tx.audit(AuditEntry.builder(stored.id(), AuditAction.LOGIN, "user", stored.id()).build());
                 return new Attempt(new Session(stored.id(), login, RoleSets.parse(stored.roles())), false);
             }
             int failures = stored.failures() + 1;
             boolean lock = failures >= maxFailedLogins;
             tx.update("UPDATE app_user SET failed_logins = ?, locked = ? WHERE id = ?", failures, lock, stored.id());
+            tx.wrote(DataKind.USER, stored.id());
             tx.audit(AuditEntry.builder(stored.id(), AuditAction.REFUSED, "user", stored.id())
                     .reason("wrong password, failure " + failures + " of " + maxFailedLogins
                             + (lock ? "; account locked" : ""))
@@ -141,6 +144,7 @@ final class JdbcUserService implements UserService {
             UserInfo before = load(tx, userId);
             long version = RowVersions.update(tx, "app_user", "user", userId, expectedVersion, "roles = ?",
                     RoleSets.format(roles));
+            tx.wrote(DataKind.USER, userId);
             UserInfo after = new UserInfo(before.id(), before.login(), before.displayName(), roles,
                     before.locked(), version);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "user", userId).version(version)
@@ -156,6 +160,7 @@ final class JdbcUserService implements UserService {
             UserInfo before = load(tx, userId);
             long version = RowVersions.update(tx, "app_user", "user", userId, before.rowVersion(),
                     "locked = FALSE, failed_logins = 0");
+            tx.wrote(DataKind.USER, userId);
             UserInfo after = new UserInfo(before.id(), before.login(), before.displayName(), before.roles(), false,
                     version);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "user", userId).version(version)

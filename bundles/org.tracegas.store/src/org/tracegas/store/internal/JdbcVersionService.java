@@ -48,6 +48,7 @@ final class JdbcVersionService implements VersionService {
             Guard.requireRole(tx, actor, "create a " + kind.name().toLowerCase(), EDITORS);
             String itemId = UUID.randomUUID().toString();
             tx.update("INSERT INTO versioned_item (id, kind, name) VALUES (?, ?, ?)", itemId, kind, name);
+            tx.wrote(DataKind.VERSIONED_ITEM, itemId);
             return insertVersion(tx, actor, itemId, 1, null, content, reason);
         });
     }
@@ -78,6 +79,7 @@ final class JdbcVersionService implements VersionService {
             RowVersions.update(tx, "content_version", objectType(before.kind()), versionId, expectedVersion,
                     "content = ?, content_hash = ?, reason = ?, author_id = ?", content, hash(content), reason,
                     actor.userId());
+            tx.wrote(DataKind.CONTENT_VERSION, versionId);
             VersionInfo after = load(tx, versionId);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, objectType(after.kind()), versionId)
                     .version(after.rowVersion()).oldValue(oldContent).newValue(content).reason(reason).build());
@@ -119,6 +121,7 @@ final class JdbcVersionService implements VersionService {
         tx.update("INSERT INTO content_version (id, item_id, number, parent_id, author_id, reason, created_at,"
                 + " content, content_hash, frozen, row_version) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, FALSE, 0)", id,
                 itemId, number, parentId, actor.userId(), reason, Instant.now().truncatedTo(ChronoUnit.MICROS), content, hash(content));
+        tx.wrote(DataKind.CONTENT_VERSION, id);
         VersionInfo created = load(tx, id);
         Map<String, Object> fields = new LinkedHashMap<>();
         fields.put("item", itemId);

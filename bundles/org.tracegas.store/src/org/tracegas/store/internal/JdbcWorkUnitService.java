@@ -262,7 +262,7 @@ final class JdbcWorkUnitService implements WorkUnitService {
                     String projectId = requireBatchAccess(tx, actor, lease.batchId(), AccessLevel.WRITE);
                     Unit before = lockOwn(tx, lease, "complete");
                     JdbcBlockService.Written written = block.isEmpty()
-                            ? new JdbcBlockService.Written(List.of(), List.of(), 0)
+                            ? new JdbcBlockService.Written(List.of(), List.of(), List.of(), 0)
                             : JdbcBlockService.insert(tx, actor, projectId, block);
                     List<String> measurementIds = written.stored().stream().map(StoredMeasurement::measurementId)
                             .toList();
@@ -288,10 +288,12 @@ final class JdbcWorkUnitService implements WorkUnitService {
                     after.put("measurementIds", String.join(",", measurementIds));
                     after.put("results", written.resultCount());
                     List<AuditEntry> audit = new ArrayList<>(written.audit());
+                    List<List<RowBindings.RowRef>> rows = new ArrayList<>(written.rows());
+                    rows.add(List.of());
                     audit.add(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "work-unit", lease.unitName())
                             .version(lease.attempt()).oldValue(AuditValues.canonical(before.fields()))
                             .newValue(AuditValues.canonical(after)).build());
-                    tx.auditAll(audit);
+                    tx.auditAll(audit, rows);
                     return written.stored();
                 });
     }

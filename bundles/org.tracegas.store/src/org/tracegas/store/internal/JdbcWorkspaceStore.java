@@ -92,6 +92,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
             try (Connection c = ds.getConnection()) {
                 AuditSchema.install(c);
             }
+            DataBaseline.bindExistingData(new Transactions(ds));
         } catch (SQLException | RuntimeException e) {
             StoreException failure = new StoreException("opening the workspace failed: " + openingFailure(e), e);
             try {

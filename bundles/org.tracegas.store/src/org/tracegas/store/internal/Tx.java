@@ -12,6 +12,7 @@ import java.util.List;
 import java.util.Optional;
 
 import org.tracegas.audit.AuditEntry;
+import org.tracegas.audit.AuditRecord;
 import org.tracegas.audit.AuditTrail;
 
 /** One open transaction: small JDBC helpers and the audit record of the change. */
@@ -24,6 +25,8 @@ final class Tx {
     }
 
     private final Connection connection;
+    /** Rows written since the last audit record, bound to the next one. */
+    private final List<RowBindings.RowRef> written = new ArrayList<>();
 
     Tx(Connection connection) {
         this.connection = connection;
@@ -33,17 +36,43 @@ final class Tx {
         return connection;
     }
 
-    /**
-     * Appends the audit record of this transaction's change. This is the only place where the storage
-     * layer writes the audit trail; it shares the transaction, so a rollback removes the record too.
-     */
-    void audit(AuditEntry entry) throws SQLException {
-        AuditTrail.append(connection, entry);
+    /** Marks a data row as written or changed: the next audit record of this transaction vouches for it. */
+    void wrote(DataKind kind, String key) {
+        written.add(new RowBindings.RowRef(kind, key));
     }
 
-    /** As {@link #audit}, for several records in order, with one lock of the chain head and one batched insert. */
-    void auditAll(List<AuditEntry> entries) throws SQLException {
-        AuditTrail.appendAll(connection, entries);
+    /**
+     * Appends the audit record of this transaction's change, vouching for the rows marked by {@link #wrote}
+     * since the last record. This is the only place where the storage layer writes the audit trail; it shares
+     * the transaction, so a rollback removes the record and its bindings too.
+     */
+    void audit(AuditEntry entry) throws SQLException {
+        auditAll(List.of(entry), List.of(List.of()));
+    }
+
+    /**
+     * As {@link #audit}, for several records in order, with one lock of the chain head and one batched insert;
+     * record i vouches for {@code rows.get(i)}, the first also for the rows marked by {@link #wrote}.
+     */
+    void auditAll(List<AuditEntry> entries, List<List<RowBindings.RowRef>> rows) throws SQLException {
+        List<List<RowBindings.RowRef>> bound = new ArrayList<>(rows);
+        if (!written.isEmpty()) {
+            List<RowBindings.RowRef> first = new ArrayList<>(written);
+            first.addAll(rows.get(0));
+            bound.set(0, first);
+            written.clear();
+        }
+        List<List<String>> hashes = new ArrayList<>(bound.size());
+        List<String> digests = new ArrayList<>(bound.size());
+        for (List<RowBindings.RowRef> r : bound) {
+            List<String> h = RowBindings.hashes(connection, r);
+            hashes.add(h);
+            digests.add(RowBindings.digest(r, h));
+        }
+        List<AuditRecord> records = AuditTrail.appendAllBound(connection, entries, digests);
+        for (int i = 0; i < records.size(); i++) {
+            RowBindings.insert(connection, records.get(i).sequence(), bound.get(i), hashes.get(i));
+        }
     }
 
     int update(String sql, Object... params) throws SQLException {

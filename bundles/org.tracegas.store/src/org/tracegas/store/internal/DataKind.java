@@ -1,0 +1,121 @@
+package org.tracegas.store.internal;
+
+import static org.tracegas.audit.CanonicalRow.Type.BOOLEAN;
+import static org.tracegas.audit.CanonicalRow.Type.BYTES;
+import static org.tracegas.audit.CanonicalRow.Type.INTEGER;
+import static org.tracegas.audit.CanonicalRow.Type.REAL;
+import static org.tracegas.audit.CanonicalRow.Type.TEXT;
+import static org.tracegas.audit.CanonicalRow.Type.TIME;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Collectors;
+
+import org.tracegas.audit.CanonicalRow;
+import org.tracegas.audit.CanonicalRow.Column;
+
+/**
+ * The tables whose rows the audit trail vouches for, and which of their columns are bound: every column
+ * that carries a stored value, in the order given here (the {@link CanonicalRow} field order). Left out are
+ * only bookkeeping columns that change without a change of the data: {@code row_version} (optimistic
+ * locking), {@code spectral_data.seq} (storage position), {@code content_version.frozen} (set when a result
+ * first uses a version, which from then on cannot change) and {@code app_user.failed_logins} (counted on
+ * every log-in attempt; the lock it leads to is bound). Work batches and units are the runners' schedule,
+ * not data, and are not bound.
+ */
+enum DataKind {
+    USER("user", "app_user", "id", col("id", TEXT), col("login", TEXT), col("display_name", TEXT),
+            col("roles", TEXT), col("password_salt", BYTES), col("password_hash", BYTES),
+            col("password_iterations", INTEGER), col("locked", BOOLEAN)),
+    CLIENT("client", "client", "id", col("id", TEXT), col("name", TEXT)),
+    PROJECT("project", "project", "id", col("id", TEXT), col("client_id", TEXT), col("code", TEXT),
+            col("name", TEXT)),
+    /** Key {@code <project id>/<user id>}, as the grant's audit records name it. */
+    GRANT("project-grant", "project_grant", "project_id,user_id", col("project_id", TEXT),
+            col("user_id", TEXT), col("access", TEXT)),
+    MEASUREMENT("measurement", "measurement", "id", col("id", TEXT), col("project_id", TEXT), col("kind", TEXT),
+            col("measured_at", TIME), col("cell_temperature", REAL), col("cell_pressure", REAL),
+            col("operator_id", TEXT)),
+    SPECTRAL_DATA("spectral-data", "spectral_data", "id", col("id", TEXT), col("project_id", TEXT),
+            col("measurement_id", TEXT), col("content", TEXT), col("ordinate", TEXT), col("axis_unit", TEXT),
+            col("point_count", INTEGER), col("axis_first", REAL), col("axis_step", REAL), col("axis_values", BYTES),
+            col("value_encoding", TEXT), col("value_data", BYTES), col("sha256", TEXT)),
+    VERSIONED_ITEM("versioned-item", "versioned_item", "id", col("id", TEXT), col("kind", TEXT), col("name", TEXT)),
+    /** Method and library versions. */
+    CONTENT_VERSION("content-version", "content_version", "id", col("id", TEXT), col("item_id", TEXT),
+            col("number", INTEGER), col("parent_id", TEXT), col("author_id", TEXT), col("reason", TEXT),
+            col("created_at", TIME), col("content", TEXT), col("content_hash", TEXT)),
+    RESULT("result", "analysis_result", "id", col("id", TEXT), col("project_id", TEXT), col("measurement_id", TEXT),
+            col("compound", TEXT), col("concentration", REAL), col("uncertainty", REAL),
+            col("detection_limit", REAL), col("unit", TEXT), col("flags", TEXT), col("method_version_id", TEXT),
+            col("library_version_id", TEXT), col("software_version", TEXT), col("input_hash", TEXT),
+            col("recorded_by", TEXT), col("recorded_at", TIME)),
+    QA_CHECK("qa-check", "qa_check", "id", col("id", TEXT), col("project_id", TEXT),
+            col("method_version_id", TEXT), col("seq", INTEGER), col("check_name", TEXT), col("passed", BOOLEAN),
+            col("measured", REAL), col("unit", TEXT), col("lower_limit", REAL), col("upper_limit", REAL),
+            col("rule", TEXT), col("source", TEXT), col("recorded_by", TEXT), col("recorded_at", TIME));
+
+    private final String label;
+    private final String table;
+    /** The key columns, comma-separated. */
+    private final String key;
+    private final List<Column> columns;
+
+    DataKind(String label, String table, String key, Column... columns) {
+        this.label = label;
+        this.table = table;
+        this.key = key;
+        this.columns = List.of(columns);
+    }
+
+    private static Column col(String name, CanonicalRow.Type type) {
+        return new Column(name, type);
+    }
+
+    /** The name findings and bindings use, e.g. "result". */
+    String label() {
+        return label;
+    }
+
+    /** The kind with this {@link #label()}, or null. */
+    static DataKind ofLabel(String label) {
+        for (DataKind k : values()) {
+            if (k.label.equals(label)) {
+                return k;
+            }
+        }
+        return null;
+    }
+
+    String table() {
+        return table;
+    }
+
+    /** The key columns; a key of several columns is written with '/' between their values. */
+    String[] keyColumns() {
+        return key.split(",");
+    }
+
+    /** SQL expression of a row's key (a text value): its key columns joined by '/'. */
+    String keyExpression(String alias) {
+        return java.util.Arrays.stream(keyColumns()).map(k -> alias + "." + k)
+                .collect(Collectors.joining(" || '/' || "));
+    }
+
+    boolean hasProject() {
+        return columns.stream().anyMatch(c -> c.name().equals("project_id"));
+    }
+
+    /** The bound columns, selected with the key as {@code row_key}. */
+    String selectList(String alias) {
+        List<String> names = new ArrayList<>();
+        names.add(keyExpression(alias) + " AS row_key");
+        names.addAll(columns.stream().map(c -> alias + "." + c.name()).collect(Collectors.toList()));
+        return String.join(", ", names);
+    }
+
+    /** SHA-256 of the current row of a result set holding the bound columns. */
+    String sha256(java.sql.ResultSet rs) throws java.sql.SQLException {
+        return CanonicalRow.sha256(label, columns, rs);
+    }
+}
