@@ -159,5 +159,23 @@ class MethodEditorPanelTest {
         assertEquals(2070, method.getVersions().get(1).getRegions().get(0).getLowerWavenumber());
         assertEquals("Version 2 as opened", panel.comparison().table().getColumn(1).getText());
         assertFalse(panel.undoButton().isEnabled());
+
+        // the first version, opened again from the store, is as it was stored
+        panel.openStored(demo.methodVersionId());
+        assertEquals("Version 1 as opened", panel.comparison().table().getColumn(1).getText());
+        assertEquals("2085.00", panel.lowerField().getText());
+        assertEquals("The versions hold the same values.", panel.comparison().summary().getText());
+    }
+
+    @Test
+    void aVersionWithoutAMethodTextIsNamedAndNotOpened() {
+        VersionInfo other = access.store().versions().create(analyst, VersionKind.METHOD, "Not a method",
+                "compounds=CO\n", "an old note");
+        panel.openStored(other.id());
+        assertTrue(panel.problems().getText().startsWith("The method version cannot be opened: "),
+                panel.problems().getText());
+        assertTrue(panel.problems().getText().contains(other.id()), panel.problems().getText());
+        assertEquals("Version 1 as opened", panel.comparison().table().getColumn(1).getText());
+        assertEquals("Kiln stack CO and N2O", panel.nameField().getText());
     }
 }

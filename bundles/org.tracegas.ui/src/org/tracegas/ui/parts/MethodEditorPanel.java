@@ -158,6 +158,26 @@ public final class MethodEditorPanel extends Composite {
     }
 
     /**
+     * Opens a stored method version afresh from the store given to {@link #saveTo}; an unsaved draft of another
+     * version is dropped. A version whose text cannot be read is named below the form, and nothing is opened.
+     */
+    public void openStored(String versionId) {
+        StoredMethod read;
+        VersionInfo info;
+        try {
+            info = store.versions().version(versionId);
+            read = StoredMethod.parse(store.versions().content(versionId), "method version " + versionId);
+        } catch (FileFormatException | RuntimeException e) {
+            problems.setText("The method version cannot be opened: " + e.getMessage());
+            return;
+        }
+        AnalysisMethod opened = MethodVersions.model(info, read);
+        editor.createResource("desk:/method/" + versionId).getContents().add(opened);
+        editor.domain().getCommandStack().flush();
+        open(opened, opened.getVersions().get(0), read);
+    }
+
+    /**
      * Opens a method version (it must sit in a resource of the editor's resource set) with the method its stored
      * text holds.
      */
