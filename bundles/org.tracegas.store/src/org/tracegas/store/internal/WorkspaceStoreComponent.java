@@ -79,6 +79,16 @@ public final class WorkspaceStoreComponent implements WorkspaceStore {
     public org.tracegas.store.ReviewService reviews() { return store.reviews(); }
 
     @Override
+    public org.tracegas.store.ImportService imports() {
+        return store.imports();
+    }
+
+    @Override
+    public org.tracegas.store.AnalysisService analyses() {
+        return store.analyses();
+    }
+
+    @Override
     public ResultService results() {
         return store.results();
     }
