@@ -46,7 +46,8 @@ import org.tracegas.store.RawFile;
  * in °C (JCAMP-DX 4.24, from memory);</li>
  * <li>cell pressure: {@code ##$CELL PRESSURE} or {@code cell.pressure.hPa} in hPa;</li>
  * <li>kind: {@code ##$KIND} or {@code kind}: sample, background, zero, span, spike or
- * calibration-transfer-standard.</li>
+ * calibration-transfer-standard;</li>
+ * <li>content: values in arbitrary units are a single beam when {@code ##$CONTENT=single beam} says so.</li>
  * </ul>
  * An interferogram keeps its laser wavenumber and sampling interval as the labels {@value #LASER} and
  * {@value #SAMPLING}, so that it can be transformed later.
@@ -126,8 +127,16 @@ public final class FileMeasurements {
                 case TRANSMITTANCE -> SpectralContent.TRANSMITTANCE;
                 case SINGLE_BEAM -> SpectralContent.SINGLE_BEAM;
                 case INTERFEROGRAM -> SpectralContent.INTERFEROGRAM;
-                case ARBITRARY -> throw where.error("##YUNITS", "the values' meaning (absorbance, transmittance,"
-                        + " single beam) is not stated");
+                // JCAMP-DX has no unit of single beams: a file says it with a label
+                case ARBITRARY -> {
+                    if (!byKey.getOrDefault("CONTENT", "").toUpperCase(Locale.ROOT).replaceAll("[^A-Z]", "")
+                            .equals("SINGLEBEAM")) {
+                        throw where.error("##YUNITS", "the values' meaning (absorbance, transmittance, single beam)"
+                                + " is not stated; label a single beam ##$CONTENT=single beam");
+                    }
+                    values = values.withValues(values.toArray(), Ordinate.SINGLE_BEAM);
+                    yield SpectralContent.SINGLE_BEAM;
+                }
             };
         } else {
             Interferogram igm = ((ImportedInterferogram) record).interferogram();
@@ -135,7 +144,7 @@ public final class FileMeasurements {
                     Ordinate.INTERFEROGRAM);
             content = SpectralContent.INTERFEROGRAM;
             labels.put(LASER, Double.toString(igm.laserWavenumber()));
-            labels.put(SAMPLING, Double.toString(igm.samplingInterval()));
+            labels.put(SAMPLING, Integer.toString(igm.samplingInterval()));
         }
         String title = byKey.getOrDefault("TITLE", "").isBlank() ? name + " record " + (index + 1)
                 : byKey.get("TITLE");

@@ -8,8 +8,8 @@ import java.util.Set;
 
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
-import org.tracegas.library.io.LibraryManifestReader;
 import org.tracegas.library.io.LibraryVersionText;
+import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
@@ -41,6 +41,9 @@ import org.tracegas.store.WorkspaceStore;
  * [transform]                                see {@link TransformText}
  * apodization = norton-beer-medium
  *
+ * [recipe]                                   (optional) processing before the fit, see {@link MethodRecipe}
+ * step = resample first=2000.0;size=801;step=0.5
+ *
  * [analyte]                                  one block per analyte, in reporting order
  * compound = CO                              as the library names the compound
  * interferents = CO2, N2O                    (optional)
@@ -51,7 +54,7 @@ import org.tracegas.store.WorkspaceStore;
  */
 public record MethodDefinition(Path file, String name, Path libraryManifest, double pathLengthM, boolean nonlinearity,
         double tolerance, int maxIterations, double maxAbsorbance, ShiftTerm shift, ReportingUnit unit,
-        TransformSettings transform, List<Analyte> analytes) {
+        TransformSettings transform, Recipe recipe, List<Analyte> analytes) {
 
     /** The versions a method file gave: its library's, its own, and the method as its version holds it. */
     public record Recorded(VersionInfo libraryVersion, VersionInfo methodVersion, StoredMethod method) {
@@ -82,7 +85,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
 
     private static MethodDefinition parse(KeyValueFile f) throws FileFormatException {
         Path file = f.file();
-        f.allowBlocks(Set.of("transform", "analyte"));
+        f.allowBlocks(Set.of("transform", "recipe", "analyte"));
         KeyValueFile.Section h = f.head().allow(HEAD);
         List<KeyValueFile.Section> transforms = f.blocks("transform");
         if (transforms.size() != 1) {
@@ -90,6 +93,12 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
                     "a method file needs exactly one [transform] block, found " + transforms.size());
         }
         TransformSettings transform = TransformText.read(transforms.get(0));
+        List<KeyValueFile.Section> recipes = f.blocks("recipe");
+        if (recipes.size() > 1) {
+            throw new FileFormatException(file, recipes.get(1).line(), "[recipe]",
+                    "a method file has at most one [recipe] block, found " + recipes.size());
+        }
+        Recipe recipe = recipes.isEmpty() ? MethodRecipe.none() : MethodRecipe.read(recipes.get(0));
         List<Analyte> analytes = new ArrayList<>();
         for (KeyValueFile.Section b : f.blocks("analyte")) {
             b.allow(ANALYTE);
@@ -114,7 +123,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
                 h.integer("max-iterations", QuantificationMethod.DEFAULT_MAX_ITERATIONS),
                 h.number("max-absorbance", QuantificationMethod.DEFAULT_MAX_ABSORBANCE),
                 h.constant("shift", ShiftTerm.class, ShiftTerm.NONE),
-                h.constant("reporting-unit", ReportingUnit.class, ReportingUnit.PPM), transform, analytes);
+                h.constant("reporting-unit", ReportingUnit.class, ReportingUnit.PPM), transform, recipe, analytes);
     }
 
     /** "low..high[, low..high] baseline n [residual-limit x]". */
@@ -172,12 +181,12 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
      * @throws FileFormatException naming the manifest, spectrum or method file at fault; nothing recorded
      */
     public Recorded record(WorkspaceStore store, Session actor) throws IOException {
-        ReferenceLibrary library = LibraryManifestReader.forTwoColumnText().read(libraryManifest);
+        ReferenceLibrary library = LabReferenceSource.manifestReader().read(libraryManifest);
         String libraryContent = LibraryVersionText.of(libraryManifest);
         QuantificationMethod method = build(library);
         VersionInfo libraryVersion = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
                 libraryContent, "library of method " + method.name());
-        StoredMethod stored = new StoredMethod(method, transform, libraryVersion.id(), library.contentHash());
+        StoredMethod stored = new StoredMethod(method, transform, libraryVersion.id(), library.contentHash(), recipe);
         VersionInfo methodVersion = VersionRecorder.ensure(store, actor, VersionKind.METHOD, method.name(),
                 stored.content(), "defined from " + file.getFileName());
         return new Recorded(libraryVersion, methodVersion, stored);

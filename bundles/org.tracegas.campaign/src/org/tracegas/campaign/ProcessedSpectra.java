@@ -18,13 +18,19 @@ public final class ProcessedSpectra {
 
     /** The cell pressure is stored in hPa; concentrations in ppm, pointing at the run's versions. */
     public static ProcessedSpectrum of(MeasuredSpectrum measured, SpectrumResult result, AnalysisVersions versions) {
+        return new ProcessedSpectrum(MeasurementKind.SAMPLE, measured.time(), measured.cellTemperatureK(),
+                measured.cellPressureKPa() * 10.0, measured.ratio().spectrum(), SampleEncoding.FLOAT32_LE,
+                results(result, versions));
+    }
+
+    /** The results of a fit as the store takes them: concentrations in ppm, pointing at the run's versions. */
+    public static List<NewResult> results(SpectrumResult result, AnalysisVersions versions) {
         List<NewResult> rows = new ArrayList<>(result.compounds().size());
         for (CompoundResult c : result.compounds()) {
             rows.add(new NewResult(null, c.compound(), c.concentration(), c.standardUncertainty(),
                     c.detectionLimit(), "ppm", FlagMapping.toStored(c.flags()), versions.methodVersionId(),
                     versions.libraryVersionId(), result.record().softwareVersion(), result.record().inputHash()));
         }
-        return new ProcessedSpectrum(MeasurementKind.SAMPLE, measured.time(), measured.cellTemperatureK(),
-                measured.cellPressureKPa() * 10.0, measured.ratio().spectrum(), SampleEncoding.FLOAT32_LE, rows);
+        return rows;
     }
 }

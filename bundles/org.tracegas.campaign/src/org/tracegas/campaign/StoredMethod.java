@@ -1,9 +1,11 @@
 package org.tracegas.campaign;
 
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Set;
 
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.quantify.PreparedMethod;
 import org.tracegas.quantify.QuantificationMethod;
@@ -21,15 +23,23 @@ import org.tracegas.spectrum.SpectralAxis;
  * library-sha256 = ...                  content hash of the library's references
  * [transform]
  * ...                                   see {@link TransformText}
+ * [recipe]                              (only when the method has processing steps)
+ * step = ...                            see {@link MethodRecipe}
  * [method]
  * ...                                   the canonical text of the method
  * </pre>
  */
 public record StoredMethod(QuantificationMethod method, TransformSettings transform, String libraryVersionId,
-        String libraryContentHash) {
+        String libraryContentHash, Recipe recipe) {
 
     private static final String FORMAT = "tracegas-method-version 1";
     private static final String METHOD = "\n[method]\n";
+
+    /** A method without processing steps before the fit. */
+    public StoredMethod(QuantificationMethod method, TransformSettings transform, String libraryVersionId,
+            String libraryContentHash) {
+        this(method, transform, libraryVersionId, libraryContentHash, MethodRecipe.none());
+    }
 
     /**
      * The fit of this method on spectra of an axis.
@@ -43,7 +53,10 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
 
     public String content() {
         return FORMAT + "\nlibrary-version = " + libraryVersionId + "\nlibrary-sha256 = " + libraryContentHash
-                + "\n[transform]\n" + TransformText.write(transform) + METHOD.substring(1) + method.canonicalText();
+                + "\n[transform]\n" + TransformText.write(transform)
+                // a method without steps keeps the text (and hash) it had before recipes were stored
+                + (recipe.entries().isEmpty() ? "" : "[recipe]\n" + MethodRecipe.write(recipe))
+                + METHOD.substring(1) + method.canonicalText();
     }
 
     /**
@@ -61,7 +74,7 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
         }
         String head = content.substring(FORMAT.length() + 1, split + 1);
         KeyValueFile settings = KeyValueFile.parse(head, where);
-        settings.allowBlocks(Set.of("transform"));
+        settings.allowBlocks(Set.of("transform", "recipe"));
         KeyValueFile.Section h = settings.head().allow(Set.of("library-version", "library-sha256"));
         TransformSettings transform = TransformText.read(settings.blocks("transform").get(0));
         int methodLine = (int) head.lines().count() + 3;
@@ -72,6 +85,8 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
             throw new FileFormatException(where, 0, "[method]", "method text starting at line " + methodLine + ": "
                     + e.getMessage());
         }
-        return new StoredMethod(method, transform, h.text("library-version"), h.text("library-sha256"));
+        List<KeyValueFile.Section> recipe = settings.blocks("recipe");
+        return new StoredMethod(method, transform, h.text("library-version"), h.text("library-sha256"),
+                recipe.isEmpty() ? MethodRecipe.none() : MethodRecipe.read(recipe.get(0)));
     }
 }

@@ -1,5 +1,9 @@
 package org.tracegas.store;
 
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
+
 import org.tracegas.model.SpectralContent;
 
 /**
@@ -12,7 +16,12 @@ import org.tracegas.model.SpectralContent;
  * @param recordIndex the record's place in the file, from 0
  * @param content     what the stored values are
  * @param spectrumId  the stored values as read from the file
+ * @param labels      the record's labels as imported
  */
 public record SourcedMeasurement(MeasurementInfo measurement, String title, String fileName, String fileSha256,
-        int recordIndex, SpectralContent content, String spectrumId) {
+        int recordIndex, SpectralContent content, String spectrumId, Map<String, String> labels) {
+
+    public SourcedMeasurement {
+        labels = Collections.unmodifiableMap(new LinkedHashMap<>(labels));
+    }
 }

@@ -89,6 +89,12 @@ final class FileImports {
      */
     static Outcome importAll(WorkspaceStore store, Session actor, ProjectInfo project, ReaderRegistry readers,
             List<Path> files, FileMeasurements.Defaults defaults, RunnerContext context) throws BadInputException {
+        return storeAll(store, actor, project, files, readAll(readers, files, defaults), context);
+    }
+
+    /** @throws BadInputException naming the file, line and label at fault */
+    static List<FileMeasurements.Read> readAll(ReaderRegistry readers, List<Path> files,
+            FileMeasurements.Defaults defaults) throws BadInputException {
         List<FileMeasurements.Read> read = new ArrayList<>(files.size());
         for (Path f : files) {
             try {
@@ -97,6 +103,12 @@ final class FileImports {
                 throw new BadInputException(e.getMessage() + "; nothing imported", e);
             }
         }
+        return read;
+    }
+
+    /** Stores each file read that the project does not hold yet, telling which were known. */
+    static Outcome storeAll(WorkspaceStore store, Session actor, ProjectInfo project, List<Path> files,
+            List<FileMeasurements.Read> read, RunnerContext context) {
         int added = 0;
         int known = 0;
         List<ImportedFile> stored = new ArrayList<>(read.size());

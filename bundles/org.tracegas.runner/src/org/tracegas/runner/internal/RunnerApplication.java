@@ -21,9 +21,12 @@ import org.tracegas.runner.commands.QaCommand;
 import org.tracegas.runner.commands.QuantifyCommand;
 import org.tracegas.runner.commands.ReportCommand;
 import org.tracegas.runner.commands.ReportSignCommand;
+import org.tracegas.runner.commands.ResultsExportCommand;
 import org.tracegas.runner.commands.UserAddCommand;
 import org.tracegas.runner.commands.WorkspaceInitCommand;
 import org.tracegas.importer.ReaderRegistry;
+import org.tracegas.preprocess.StepRegistry;
+import org.eclipse.core.runtime.RegistryFactory;
 import org.tracegas.runner.RunnerContext;
 
 /** The headless Equinox application: hands the command line to the runner's command table. */
@@ -35,12 +38,14 @@ public final class RunnerApplication implements IApplication {
     public Object start(IApplicationContext context) {
         String[] argv = (String[]) context.getArguments().get(IApplicationContext.APPLICATION_ARGS);
         String version = FrameworkUtil.getBundle(getClass()).getVersion().toString();
+        ReaderRegistry readers = ReaderRegistry.fromPlatform();
+        StepRegistry steps = StepRegistry.fromExtensions(RegistryFactory.getRegistry());
         CommandTable table = new CommandTable(version, List.of(new DemoCommand(cancel), new AuditVerifyCommand(),
                 new WorkspaceInitCommand(), new UserAddCommand(), new ProjectAddCommand(),
-                new ImportCommand(ReaderRegistry.fromPlatform()), new LibraryBuildCommand(cancel),
-                new LibraryAddCommand(), new MethodDefineCommand(), new QuantifyCommand(cancel), new QaCommand(),
-                new ReportCommand(), new ReportSignCommand(), new BatchSplitCommand(), new BatchWorkCommand(cancel),
-                new BatchStatusCommand()));
+                new ImportCommand(readers), new LibraryBuildCommand(cancel),
+                new LibraryAddCommand(), new MethodDefineCommand(), new QuantifyCommand(cancel, readers, steps),
+                new QaCommand(), new ReportCommand(), new ResultsExportCommand(), new ReportSignCommand(),
+                new BatchSplitCommand(), new BatchWorkCommand(cancel), new BatchStatusCommand()));
         return table.dispatch(argv == null ? new String[0] : argv, new RunnerContext(System.out, System.err));
     }
 

@@ -147,7 +147,7 @@ final class JdbcImportService implements ImportService {
             Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
             return tx.queryList("SELECT m.id, m.project_id, m.kind, m.measured_at, m.cell_temperature,"
                     + " m.cell_pressure, m.operator_id, i.title, f.file_name, i.raw_sha256, i.record_index,"
-                    + " i.content, i.spectrum_id FROM imported_measurement i"
+                    + " i.content, i.spectrum_id, i.labels FROM imported_measurement i"
                     + " JOIN measurement m ON m.id = i.measurement_id"
                     + " JOIN raw_file f ON f.project_id = i.project_id AND f.sha256 = i.raw_sha256"
                     + " WHERE i.project_id = ? ORDER BY m.measured_at, f.file_name, i.record_index",
@@ -161,6 +161,36 @@ final class JdbcImportService implements ImportService {
                 rs.getDouble("cell_temperature"), rs.getDouble("cell_pressure"), rs.getString("operator_id"));
         return new SourcedMeasurement(m, rs.getString("title"), rs.getString("file_name"),
                 rs.getString("raw_sha256").trim(), rs.getInt("record_index"),
-                SpectralContent.valueOf(rs.getString("content")), rs.getString("spectrum_id"));
+                SpectralContent.valueOf(rs.getString("content")), rs.getString("spectrum_id"),
+                labels(rs.getString("labels")));
+    }
+
+    /** Reads back the canonical text the labels were stored as ({@link AuditValues#canonical}). */
+    static Map<String, String> labels(String canonical) {
+        Map<String, String> labels = new LinkedHashMap<>();
+        for (String line : canonical.split("\n")) {
+            int eq = line.indexOf('=');
+            if (eq < 1) {
+                continue;
+            }
+            String raw = line.substring(eq + 1);
+            StringBuilder value = new StringBuilder(raw.length());
+            for (int i = 0; i < raw.length(); i++) {
+                char ch = raw.charAt(i);
+                if (ch == '\\' && i + 1 < raw.length()) {
+                    char next = raw.charAt(++i);
+                    value.append(switch (next) {
+                        case 'n' -> '\n';
+                        case 'r' -> '\r';
+                        case '0' -> '\0';
+                        default -> next;
+                    });
+                } else {
+                    value.append(ch);
+                }
+            }
+            labels.put(line.substring(0, eq), value.toString());
+        }
+        return labels;
     }
 }
