@@ -71,13 +71,21 @@ class LabJcampQuantificationTest {
         final LabSpectra spectra = new LabSpectra();
         final Map<String, Map<String, Double>> truthByFile = new LinkedHashMap<>();
         final List<Path> samples = new ArrayList<>();
+        final int sampleCount;
+        /** The readers of the lab's files: JCAMP-DX and delimited text unless a test gives others. */
+        ReaderRegistry readers = new ReaderRegistry().register("jcamp", "JCAMP-DX", new JcampReader())
+                .register("delimited", "delimited text", new DelimitedReader());
+        /** Whether the next command runs already cancelled (as if the user stopped it before its first fit). */
+        boolean cancelNext;
         Path background;
         final ByteArrayOutputStream out = new ByteArrayOutputStream();
         final ByteArrayOutputStream err = new ByteArrayOutputStream();
 
-        Lab(Path folder, List<String> workspace) {
+        /** @param sampleCount samples of the day: the last three are single beams, the three before transmittances */
+        Lab(Path folder, List<String> workspace, int sampleCount) {
             this.folder = folder;
             this.workspace = List.copyOf(workspace);
+            this.sampleCount = sampleCount;
         }
 
         int run(String... argv) {
@@ -89,8 +97,10 @@ class LabJcampQuantificationTest {
             }
             all.addAll(1, workspace);
             CancellationFlag cancel = new CancellationFlag();
-            ReaderRegistry readers = new ReaderRegistry().register("jcamp", "JCAMP-DX", new JcampReader())
-                    .register("delimited", "delimited text", new DelimitedReader());
+            if (cancelNext) {
+                cancel.cancel();
+                cancelNext = false;
+            }
             CommandTable table = new CommandTable("test", List.of(new WorkspaceInitCommand(), new UserAddCommand(),
                     new ProjectAddCommand(), new MethodDefineCommand(), new ImportCommand(readers),
                     new QuantifyCommand(cancel, readers, StepRegistry.withBuiltInSteps()),
@@ -112,13 +122,18 @@ class LabJcampQuantificationTest {
         }
 
         void setUp() throws Exception {
+            setUpWorkspace();
+            writeSamples();
+        }
+
+        /** The workspace, its users and project, the library and the method, without samples. */
+        void setUpWorkspace() throws Exception {
             ok("workspace-init", "--admin", "root", "--name", "Lab administrator");
             ok("user-add", "--login", "ana", "--name", "Ana Lyst", "--roles", "analyst");
             ok("project-add", "--client", "Larkspur Bay Kilns", "--code", "LBK-5", "--name", "Kiln 5 stack, May");
             writeLibrary();
             Files.writeString(folder.resolve("kiln.method"), METHOD);
             ok("method-define", "--method", folder.resolve("kiln.method").toString());
-            writeSamples();
         }
 
         /** JCAMP-DX references at several amounts; CO's files state every condition, N2O's leave some to the manifest. */
@@ -179,7 +194,7 @@ class LabJcampQuantificationTest {
                             "$KIND", "background", "$CELL TEMPERATURE", "313.15", "$CELL PRESSURE", "1009.0"),
                     JcampForms.Form.AFFN));
             JcampForms.Form[] forms = JcampForms.Form.values();
-            for (int i = 0; i < SAMPLES; i++) {
+            for (int i = 0; i < sampleCount; i++) {
                 double co = 30 + 270 * r.nextDouble();
                 double n2o = 8 + 55 * r.nextDouble();
                 Map<String, Double> amounts = Map.of("CO", co * PATH_M, "N2O", n2o * PATH_M);
@@ -197,19 +212,19 @@ class LabJcampQuantificationTest {
                 String title = "Kiln 5 stack " + (i + 1);
                 Path file = day.resolve(String.format(Locale.ROOT, "stack-%02d.jdx", i + 1));
                 String text;
-                if (i >= 21) {
+                if (i >= sampleCount - 3) {
                     labels.put("$CONTENT", "single beam");
                     double[] t1 = spectra.transmittance(amounts);
                     text = JcampForms.write(new Spectrum(LabSpectra.AXIS, LabSpectra.times(source, t1),
                             Ordinate.SINGLE_BEAM), title, labels, JcampForms.Form.SQZ);
-                } else if (i >= 18) {
+                } else if (i >= sampleCount - 6) {
                     Spectrum a = spectra.absorbance(amounts, 0, 0, 0, null);
                     double[] t1 = new double[a.size()];
                     for (int k = 0; k < t1.length; k++) {
                         t1[k] = Math.pow(10, -a.get(k));
                     }
                     text = JcampForms.write(new Spectrum(LabSpectra.AXIS, t1, Ordinate.TRANSMITTANCE), title, labels,
-                            i == 18 ? JcampForms.Form.DIFDUP : JcampForms.Form.PAC);
+                            i == sampleCount - 6 ? JcampForms.Form.DIFDUP : JcampForms.Form.PAC);
                 } else {
                     Spectrum a = spectra.absorbance(amounts, 0.004 + 0.001 * r.nextGaussian(),
                             2e-5 * r.nextGaussian(), 2e-4, r);
@@ -266,7 +281,7 @@ class LabJcampQuantificationTest {
 
     @Test
     void labQuantifiesItsJcampSpectraOnTheEmbeddedWorkspace() throws Exception {
-        Lab lab = new Lab(folder, List.of("--workspace", folder.resolve("ws").toString()));
+        Lab lab = new Lab(folder, List.of("--workspace", folder.resolve("ws").toString()), SAMPLES);
         lab.setUp();
         dayOfTheLab(lab);
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
@@ -285,7 +300,8 @@ class LabJcampQuantificationTest {
         }
         String schemaUrl = url + (url.contains("?") ? "&" : "?") + "currentSchema=" + schema;
         try {
-            Lab lab = new Lab(folder, List.of("--server", schemaUrl, "--user", user, "--password", password));
+            Lab lab = new Lab(folder, List.of("--server", schemaUrl, "--user", user, "--password", password),
+                    SAMPLES);
             lab.setUp();
             dayOfTheLab(lab);
             try (WorkspaceStore store = Workspaces.openPostgres(schemaUrl, user, password)) {
