@@ -212,33 +212,39 @@ public final class FileMeasurements {
 
     private static double temperature(Map<String, String> labels, Defaults defaults, Where where)
             throws ImportException {
-        for (String k : List.of("CELLTEMPERATUREK", "CELLTEMPERATURE")) {
-            if (labels.containsKey(k)) {
-                return number(labels.get(k), k, where);
-            }
+        Double kelvin = stated(labels, List.of("CELLTEMPERATUREK", "CELLTEMPERATURE"), where);
+        if (kelvin == null && labels.containsKey("TEMPERATURE")) {
+            kelvin = number(labels.get("TEMPERATURE"), "##TEMPERATURE", where) + 273.15;
         }
-        if (labels.containsKey("TEMPERATURE")) {
-            return number(labels.get("TEMPERATURE"), "##TEMPERATURE", where) + 273.15;
-        }
-        if (defaults.cellTemperature() != null) {
-            return defaults.cellTemperature();
-        }
-        throw where.error("##$CELL TEMPERATURE", "the record states no cell temperature; state it in the file or"
-                + " give it for files without one");
+        return orDefault(kelvin, defaults.cellTemperature(), "##$CELL TEMPERATURE", "cell temperature", where);
     }
 
     private static double pressure(Map<String, String> labels, Defaults defaults, Where where)
             throws ImportException {
-        for (String k : List.of("CELLPRESSUREHPA", "CELLPRESSURE")) {
+        return orDefault(stated(labels, List.of("CELLPRESSUREHPA", "CELLPRESSURE"), where), defaults.cellPressure(),
+                "##$CELL PRESSURE", "cell pressure", where);
+    }
+
+    /** The number under the first of the labels the record has, or null. */
+    private static Double stated(Map<String, String> labels, List<String> keys, Where where) throws ImportException {
+        for (String k : keys) {
             if (labels.containsKey(k)) {
                 return number(labels.get(k), k, where);
             }
         }
-        if (defaults.cellPressure() != null) {
-            return defaults.cellPressure();
+        return null;
+    }
+
+    private static double orDefault(Double stated, Double byDefault, String label, String what, Where where)
+            throws ImportException {
+        if (stated != null) {
+            return stated;
         }
-        throw where.error("##$CELL PRESSURE", "the record states no cell pressure; state it in the file or give it"
-                + " for files without one");
+        if (byDefault != null) {
+            return byDefault;
+        }
+        throw where.error(label, "the record states no " + what + "; state it in the file or give it for files"
+                + " without one");
     }
 
     private static double number(String value, String label, Where where) throws ImportException {

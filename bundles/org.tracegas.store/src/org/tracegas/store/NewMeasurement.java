@@ -28,19 +28,7 @@ public record NewMeasurement(MeasurementKind kind, Instant time, double cellTemp
 
     /** @throws IllegalArgumentException naming the field that is missing or wrong */
     public NewMeasurement {
-        if (kind == null) {
-            throw new IllegalArgumentException("kind must not be null");
-        }
-        if (time == null) {
-            throw new IllegalArgumentException("time must not be null");
-        }
-        if (!(cellTemperature > 0)) {
-            throw new IllegalArgumentException("cellTemperature must be a positive number of K, was "
-                    + cellTemperature);
-        }
-        if (!(cellPressure > 0)) {
-            throw new IllegalArgumentException("cellPressure must be a positive number of hPa, was " + cellPressure);
-        }
+        MeasurementChecks.require(kind, time, cellTemperature, cellPressure);
         if (title == null || title.isBlank()) {
             throw new IllegalArgumentException("title must not be blank");
         }
