@@ -10,8 +10,8 @@ import java.util.Set;
 
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
-import org.tracegas.library.io.LibraryManifestReader;
 import org.tracegas.library.io.LibraryVersionText;
+import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
@@ -45,6 +45,9 @@ import org.tracegas.store.WorkspaceStore;
  * [transform]                                see {@link TransformText}
  * apodization = norton-beer-medium
  *
+ * [recipe]                                   (optional) processing before the fit, see {@link MethodRecipe}
+ * step = resample first=2000.0;size=801;step=0.5
+ *
  * [analyte]                                  one block per analyte, in reporting order
  * compound = CO                              as the library names the compound
  * interferents = CO2, N2O                    (optional)
@@ -57,7 +60,7 @@ import org.tracegas.store.WorkspaceStore;
  */
 public record MethodDefinition(Path file, String name, Path libraryManifest, double pathLengthM, boolean nonlinearity,
         double tolerance, int maxIterations, double maxAbsorbance, ShiftTerm shift, ReportingUnit unit,
-        TransformSettings transform, List<Analyte> analytes) {
+        TransformSettings transform, Recipe recipe, List<Analyte> analytes) {
 
     /** The versions a method file gave: its library's, its own, and the method as its version holds it. */
     public record Recorded(VersionInfo libraryVersion, VersionInfo methodVersion, StoredMethod method) {
@@ -92,7 +95,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
      */
     static MethodDefinition parse(KeyValueFile f, Set<String> libraryKeys) throws FileFormatException {
         Path file = f.file();
-        f.allowBlocks(Set.of("transform", "analyte"));
+        f.allowBlocks(Set.of("transform", "recipe", "analyte"));
         Set<String> head = new java.util.HashSet<>(SETTINGS);
         head.addAll(libraryKeys);
         KeyValueFile.Section h = f.head().allow(head);
@@ -102,6 +105,12 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
                     "a method file needs exactly one [transform] block, found " + transforms.size());
         }
         TransformSettings transform = TransformText.read(transforms.get(0));
+        List<KeyValueFile.Section> recipes = f.blocks("recipe");
+        if (recipes.size() > 1) {
+            throw new FileFormatException(file, recipes.get(1).line(), "[recipe]",
+                    "a method file has at most one [recipe] block, found " + recipes.size());
+        }
+        Recipe recipe = recipes.isEmpty() ? MethodRecipe.none() : MethodRecipe.read(recipes.get(0));
         List<Analyte> analytes = new ArrayList<>();
         for (KeyValueFile.Section b : f.blocks("analyte")) {
             b.allow(ANALYTE);
@@ -127,7 +136,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
                 h.integer("max-iterations", QuantificationMethod.DEFAULT_MAX_ITERATIONS),
                 h.number("max-absorbance", QuantificationMethod.DEFAULT_MAX_ABSORBANCE),
                 h.constant("shift", ShiftTerm.class, ShiftTerm.NONE),
-                h.constant("reporting-unit", ReportingUnit.class, ReportingUnit.PPM), transform, analytes);
+                h.constant("reporting-unit", ReportingUnit.class, ReportingUnit.PPM), transform, recipe, analytes);
     }
 
     /** "low..high[, low..high] baseline n [residual-limit x]". */
@@ -190,11 +199,11 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
     }
 
     /**
-     * A method in this file's text: its settings, the given lines naming the library, its transform and its
-     * analytes. Numbers are written in Java's shortest exact decimal form, so the text reads back to the very
+     * A method in this file's text: its settings, the given lines naming the library, its transform, its recipe
+     * (when it has steps) and its analytes. Numbers are written in Java's shortest exact decimal form, so the text reads back to the very
      * same method.
      */
-    static String write(QuantificationMethod m, String libraryLines, TransformSettings transform) {
+    static String write(QuantificationMethod m, String libraryLines, TransformSettings transform, Recipe recipe) {
         StringBuilder s = new StringBuilder();
         s.append("method = ").append(m.name()).append('\n').append(libraryLines);
         s.append("path-length = ").append(m.pathLengthMetres()).append('\n');
@@ -205,6 +214,9 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         s.append("shift = ").append(constant(m.shiftTerm())).append('\n');
         s.append("reporting-unit = ").append(constant(m.reportingUnit())).append('\n');
         s.append("\n[transform]\n").append(TransformText.write(transform));
+        if (!recipe.entries().isEmpty()) {
+            s.append("\n[recipe]\n").append(MethodRecipe.write(recipe));
+        }
         for (Analyte a : m.analytes()) {
             s.append("\n[analyte]\ncompound = ").append(a.compound()).append('\n');
             if (!a.interferents().isEmpty()) {
@@ -241,12 +253,12 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         if (libraryManifest == null) {
             throw new IllegalStateException("the method of " + file + " is recorded already; it names no library folder");
         }
-        ReferenceLibrary library = LibraryManifestReader.forTwoColumnText().read(libraryManifest);
+        ReferenceLibrary library = LabReferenceSource.manifestReader().read(libraryManifest);
         String libraryContent = LibraryVersionText.of(libraryManifest);
         QuantificationMethod method = build(library);
         VersionInfo libraryVersion = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
                 libraryContent, "library of method " + method.name());
-        StoredMethod stored = new StoredMethod(method, transform, libraryVersion.id(), library.contentHash());
+        StoredMethod stored = new StoredMethod(method, transform, libraryVersion.id(), library.contentHash(), recipe);
         VersionInfo methodVersion = VersionRecorder.ensure(store, actor, VersionKind.METHOD, method.name(),
                 stored.content(), "defined from " + file.getFileName());
         return new Recorded(libraryVersion, methodVersion, stored);

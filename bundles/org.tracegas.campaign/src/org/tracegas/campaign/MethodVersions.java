@@ -114,7 +114,7 @@ public final class MethodVersions {
         base.references().forEach(b::reference);
         base.weights().ifPresent(b::weights);
         return new StoredMethod(b.build(), opened.transform(), opened.libraryVersionId(),
-                opened.libraryContentHash());
+                opened.libraryContentHash(), opened.recipe());
     }
 
     /** A region with the model's span: a region of one window takes it; one of several keeps its windows. */

@@ -9,7 +9,6 @@ import java.util.List;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.ReferenceSpectrum;
 import org.tracegas.library.io.FileFormatException;
-import org.tracegas.library.io.LibraryManifestReader;
 import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
@@ -64,7 +63,7 @@ public final class QaEvaluation {
             throw new FileFormatException(plan.file(), 0, "library", plan.libraryManifest()
                     + " is not the library version " + method.libraryVersionId() + " the method was made with");
         }
-        ReferenceLibrary library = LibraryManifestReader.forTwoColumnText().read(plan.libraryManifest());
+        ReferenceLibrary library = LabReferenceSource.manifestReader().read(plan.libraryManifest());
         SpectrumChain chain = new SpectrumChain(new InterferogramTransform(method.transform()),
                 new BackgroundRatio(plan.backgroundAgeLimit()), new BackgroundTimeline(qa.backgrounds()));
         List<MeasuredSpectrum> measured = qa.others().stream().map(chain::process).toList();

@@ -4,6 +4,7 @@ import java.nio.file.Path;
 import java.util.Set;
 
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.quantify.PreparedMethod;
 import org.tracegas.quantify.QuantificationMethod;
@@ -25,6 +26,8 @@ import org.tracegas.spectrum.SpectralAxis;
  * ...                                   the other settings of a method file, each written out
  * [transform]
  * ...
+ * [recipe]                              (only when the method has processing steps, see {@link MethodRecipe})
+ * ...
  * [analyte]
  * ...
  * [exact]
@@ -33,10 +36,16 @@ import org.tracegas.spectrum.SpectralAxis;
  * </pre>
  */
 public record StoredMethod(QuantificationMethod method, TransformSettings transform, String libraryVersionId,
-        String libraryContentHash) {
+        String libraryContentHash, Recipe recipe) {
 
     private static final String EXACT = "\n[exact]\n";
     private static final Set<String> LIBRARY_KEYS = Set.of("library-version", "library-sha256");
+
+    /** A method without processing steps before the fit. */
+    public StoredMethod(QuantificationMethod method, TransformSettings transform, String libraryVersionId,
+            String libraryContentHash) {
+        this(method, transform, libraryVersionId, libraryContentHash, MethodRecipe.none());
+    }
 
     /**
      * The fit of this method on spectra of an axis.
@@ -51,7 +60,7 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
     /** The method as a method file writes it, with its library version: what a person reads and compares. */
     public String declaration() {
         return MethodDefinition.write(method, "library-version = " + libraryVersionId + "\nlibrary-sha256 = "
-                + libraryContentHash + "\n", transform);
+                + libraryContentHash + "\n", transform, recipe);
     }
 
     /** The text a METHOD version stores. */
@@ -90,6 +99,7 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
                     "the exact text describes another method than the settings and analytes above it");
         }
         KeyValueFile.Section h = head.head();
-        return new StoredMethod(method, declared.transform(), h.text("library-version"), h.text("library-sha256"));
+        return new StoredMethod(method, declared.transform(), h.text("library-version"), h.text("library-sha256"),
+                declared.recipe());
     }
 }

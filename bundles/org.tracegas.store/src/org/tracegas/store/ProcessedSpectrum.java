@@ -23,19 +23,7 @@ public record ProcessedSpectrum(MeasurementKind kind, Instant time, double cellT
 
     /** @throws IllegalArgumentException naming the field (and result index) that is missing or wrong */
     public ProcessedSpectrum {
-        if (kind == null) {
-            throw new IllegalArgumentException("kind must not be null");
-        }
-        if (time == null) {
-            throw new IllegalArgumentException("time must not be null");
-        }
-        if (!(cellTemperature > 0)) {
-            throw new IllegalArgumentException("cellTemperature must be a positive number of K, was "
-                    + cellTemperature);
-        }
-        if (!(cellPressure > 0)) {
-            throw new IllegalArgumentException("cellPressure must be a positive number of hPa, was " + cellPressure);
-        }
+        MeasurementChecks.require(kind, time, cellTemperature, cellPressure);
         if (absorbance == null) {
             throw new IllegalArgumentException("absorbance must not be null");
         }

@@ -30,6 +30,12 @@ public interface WorkspaceStore extends AutoCloseable {
     /** Batches shared by several runner processes, unit by unit. */
     WorkUnitService workUnits();
 
+    /** The lab's own files, kept whole by content hash, and the measurements imported from them. */
+    ImportService imports();
+
+    /** Analyses of measurements already in a project, each result naming the recipe that ran. */
+    AnalysisService analyses();
+
     /** Releases the database (an embedded H2 database is shut down and its files unlocked). */
     @Override
     void close();

@@ -43,7 +43,8 @@ import org.tracegas.library.ReferenceSpectrum;
  * uncertainty = 0.02                    relative standard uncertainty
  * </pre>
  *
- * Every key of a block is required except {@code origin-text}; unknown and repeated keys are errors. The
+ * Every key of a block is required except {@code origin-text}, unless the spectrum file states it (see
+ * {@link ReferenceSpectrumSource#conditions}; the block's value wins); unknown and repeated keys are errors. The
  * spectrum files are read by the given {@link ReferenceSpectrumSource}. Errors name the manifest, the line
  * and the field; nothing is returned unless the whole manifest and all its files are good.
  */
@@ -142,6 +143,8 @@ public final class LibraryManifestReader {
         private final int line;
         private final Map<String, String> values = new LinkedHashMap<>();
         private final Map<String, Integer> lineOf = new LinkedHashMap<>();
+        /** What the spectrum file states, under manifest keys. */
+        private Map<String, String> fromFile = Map.of();
 
         Block(int line) {
             this.line = line;
@@ -163,7 +166,7 @@ public final class LibraryManifestReader {
         }
 
         private String text(Path manifest, String key) throws FileFormatException {
-            String v = values.get(key);
+            String v = values.containsKey(key) ? values.get(key) : fromFile.get(key);
             if (v == null) {
                 throw new FileFormatException(manifest, line, key, "missing in the " + BLOCK + " block");
             }
@@ -175,11 +178,18 @@ public final class LibraryManifestReader {
             try {
                 return Double.parseDouble(v);
             } catch (NumberFormatException e) {
-                throw new FileFormatException(manifest, lineOf.get(key), key, "'" + v + "' is not a number");
+                throw new FileFormatException(manifest, lineOf.getOrDefault(key, line), key, "'" + v
+                        + "' is not a number" + (values.containsKey(key) ? "" : " (as the spectrum file states it)"));
             }
         }
 
         ReferenceSpectrum toReference(Path manifest, ReferenceSpectrumSource source) throws IOException {
+            Path file = manifest.toAbsolutePath().getParent().resolve(text(manifest, "file"));
+            try {
+                fromFile = source.conditions(file);
+            } catch (NoSuchFileException e) {
+                throw new FileFormatException(manifest, lineOf.get("file"), "file", "no such file: " + file);
+            }
             ReferenceMetadata metadata;
             try {
                 Compound compound = new Compound(text(manifest, "compound"), text(manifest, "cas"),
@@ -193,7 +203,6 @@ public final class LibraryManifestReader {
                 String key = keyOf(e.getMessage());
                 throw new FileFormatException(manifest, lineOf.getOrDefault(key, line), key, e.getMessage());
             }
-            Path file = manifest.toAbsolutePath().getParent().resolve(text(manifest, "file"));
             try {
                 return new ReferenceSpectrum(source.read(file), metadata);
             } catch (NoSuchFileException e) {
@@ -210,7 +219,7 @@ public final class LibraryManifestReader {
                     return k;
                 }
             }
-            throw new FileFormatException(manifest, lineOf.get("origin"), "origin",
+            throw new FileFormatException(manifest, lineOf.getOrDefault("origin", line), "origin",
                     "'" + v + "' is none of measured, synthetic, imported");
         }
     }

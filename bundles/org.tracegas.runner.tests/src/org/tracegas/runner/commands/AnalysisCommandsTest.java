@@ -111,7 +111,7 @@ class AnalysisCommandsTest {
         ok("workspace-init", "--workspace", ws, "--admin", "root", "--name", "Admin");
         ok("user-add", "--workspace", ws, "--as", "root", "--login", "ana", "--name", "Ana Lyst", "--roles",
                 "analyst");
-        for (String code : List.of("P-1", "P-2", "P-3", "P-4")) {
+        for (String code : List.of("P-1", "P-2", "P-3", "P-4", "P-5", "P-6")) {
             ok("project-add", "--workspace", ws, "--as", "ana", "--client", "Client " + code, "--code", code,
                     "--name", "Survey");
         }
@@ -402,6 +402,48 @@ class AnalysisCommandsTest {
         System.arraycopy(first, 0, all, 0, first.length);
         System.arraycopy(more, 0, all, first.length, more.length);
         return all;
+    }
+
+    /**
+     * The containers of the stack path, imported as the lab's files (no --backgrounds: the background record
+     * serves as a background measurement), give the stack path's concentrations: one chain of transform, ratio
+     * and fit, whichever way the interferograms come in; and both recover the amounts the interferograms were
+     * made with (the tolerance of {@link #quantifyQaAndReportFromTheCommandLine}).
+     */
+    @Test
+    void containersImportedAsMeasurementsGiveTheStackPathsConcentrations() throws Exception {
+        ok("quantify", "--workspace", ws, "--as", "ana", "--project", "P-5", "--method", "Stack", "--backgrounds",
+                qaFile.toString(), "--file", stackFile.toString());
+        ok("quantify", "--workspace", ws, "--as", "ana", "--project", "P-6", "--method", "Stack",
+                "--background-file", qaFile.toString(), "--file", stackFile.toString());
+        try (WorkspaceStore store = open()) {
+            Session s = ana(store);
+            String stack = store.projects().findByCode(s, "P-5").orElseThrow().id();
+            Map<Instant, Double> byStackPath = new java.util.HashMap<>();
+            Map<String, Instant> times = new java.util.HashMap<>();
+            store.projects().measurements(s, stack).forEach(m -> times.put(m.id(), m.time()));
+            for (var r : store.results().results(s, stack)) {
+                if (r.values().compound().equals("CO")) {
+                    byStackPath.put(times.get(r.values().measurementId()), r.values().concentration());
+                }
+            }
+            String imported = store.projects().findByCode(s, "P-6").orElseThrow().id();
+            int compared = 0;
+            for (var row : store.analyses().rows(s, imported)) {
+                Double stackValue = byStackPath.get(row.measured());
+                if (stackValue == null || !row.result().values().compound().equals("CO")) {
+                    continue; // the QA records of the file were quantified as samples too
+                }
+                int i = (int) java.time.Duration.between(T0, row.measured()).toSeconds() / 60;
+                assertEquals(stackValue, row.result().values().concentration(), 1e-6 * stackValue,
+                        "sample " + i + ": the same chain");
+                assertEquals(CO_PPM[i], row.result().values().concentration(), 0.04 * CO_PPM[i], "sample " + i);
+                assertTrue(store.analyses().recipe(s, row.recipeSha256()).contains("transform settings="),
+                        "the recipe names the transform");
+                compared++;
+            }
+            assertEquals(CO_PPM.length, compared);
+        }
     }
 
     private static String[] concat(String[] where, String command, String... more) {

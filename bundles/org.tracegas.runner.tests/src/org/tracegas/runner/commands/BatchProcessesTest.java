@@ -265,7 +265,7 @@ class BatchProcessesTest {
      * java.class.path is only the launcher. Third-party classes are looked up through the class loader of the
      * bundle that imports them.
      */
-    private static String childClassPath() throws Exception {
+    static String childClassPath() throws Exception {
         List<Class<?>> needed = new ArrayList<>(List.of(BatchRunnerProcess.class, CommandTable.class,
                 QuantificationSetup.class, WorkspaceStore.class, Spectrum.class, InterferogramTransform.class,
                 BatchQuantifier.class, org.tracegas.library.io.FileFormatException.class,

@@ -60,14 +60,26 @@ class WorkspaceCommandsTest {
 
         Path good = folder.resolve("absorbance.csv");
         Files.writeString(good, "wavenumber,absorbance\n1000,0.01\n1001,0.02\n1002,0.03\n");
-        assertEquals(ExitCode.OK, run(ana, "import", "--workspace", ws, "--as", "ana", "--project", "CA-1", "--file",
-                good.toString()), err.toString(StandardCharsets.UTF_8));
+        String[] conditions = { "--time", "2026-03-17T08:00:00Z", "--cell-temperature", "296", "--cell-pressure",
+            "1013" };
+        err.reset();
+        assertEquals(ExitCode.BAD_INPUT, run(ana, "import", "--workspace", ws, "--as", "ana", "--project", "CA-1",
+                "--file", good.toString()));
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("absorbance.csv")
+                && err.toString(StandardCharsets.UTF_8).contains("LONGDATE"), err.toString(StandardCharsets.UTF_8));
+        assertEquals(ExitCode.OK, run(ana, withOptions(new String[] { "import", "--workspace", ws, "--as", "ana",
+            "--project", "CA-1", "--file", good.toString() }, conditions)), err.toString(StandardCharsets.UTF_8));
+        out.reset();
+        assertEquals(ExitCode.OK, run(ana, withOptions(new String[] { "import", "--workspace", ws, "--as", "ana",
+            "--project", "CA-1", "--file", good.toString() }, conditions)), err.toString(StandardCharsets.UTF_8));
+        assertTrue(out.toString(StandardCharsets.UTF_8).contains("already imported as absorbance.csv"),
+                out.toString(StandardCharsets.UTF_8));
 
         Path bad = folder.resolve("broken.csv");
         Files.writeString(bad, "wavenumber,absorbance\n1000,0.01\n1001,zero point two\n");
         err.reset();
-        assertEquals(ExitCode.BAD_INPUT, run(ana, "import", "--workspace", ws, "--as", "ana", "--project", "CA-1",
-                "--file", bad.toString()));
+        assertEquals(ExitCode.BAD_INPUT, run(ana, withOptions(new String[] { "import", "--workspace", ws, "--as",
+            "ana", "--project", "CA-1", "--file", bad.toString() }, conditions)));
         String message = err.toString(StandardCharsets.UTF_8);
         assertTrue(message.contains("broken.csv") && message.contains("3"), message);
 
@@ -75,8 +87,15 @@ class WorkspaceCommandsTest {
             Session session = store.users().logIn("ana", "ana-pw-22".toCharArray());
             String project = store.projects().findByCode(session, "CA-1").orElseThrow().id();
             try (var spectra = store.spectra().stream(session, project)) {
-                assertEquals(1, spectra.count(), "only the good file's spectrum is stored");
+                assertEquals(1, spectra.count(), "only the good file's spectrum is stored, once");
             }
+            var measurements = store.imports().measurements(session, project);
+            assertEquals(1, measurements.size());
+            assertEquals("absorbance.csv", measurements.get(0).fileName());
+            assertEquals(296, measurements.get(0).measurement().cellTemperature());
+            // the stored bytes are the file's bytes
+            assertEquals(java.util.Arrays.toString(Files.readAllBytes(good)), java.util.Arrays.toString(
+                    store.imports().content(session, project, measurements.get(0).fileSha256())));
             assertTrue(store.verifyAuditTrail().intact());
         }
     }
@@ -198,6 +217,12 @@ class WorkspaceCommandsTest {
     void mistypedOptionIsNamedWithTheNearestOne() {
         assertEquals(ExitCode.USAGE, run(Map.of(), "import", "--workspace", folder.toString(), "--flie", "a.csv"));
         assertTrue(errText().contains("unknown option '--flie'; did you mean --file?"), errText());
+    }
+
+    private static String[] withOptions(String[] argv, String[] more) {
+        String[] all = java.util.Arrays.copyOf(argv, argv.length + more.length);
+        System.arraycopy(more, 0, all, argv.length, more.length);
+        return all;
     }
 
     @Test

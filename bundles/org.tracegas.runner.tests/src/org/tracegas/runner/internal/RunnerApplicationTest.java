@@ -12,6 +12,7 @@ import java.util.regex.Pattern;
 
 import org.junit.jupiter.api.Test;
 import org.tracegas.importer.ReaderRegistry;
+import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.ExitCode;
@@ -24,7 +25,7 @@ class RunnerApplicationTest {
     private final RunnerContext context = new RunnerContext(new PrintStream(out, true, StandardCharsets.UTF_8),
             new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8));
     private final CommandTable table = new CommandTable("test",
-            RunnerApplication.commands(new CancellationFlag(), new ReaderRegistry()));
+            RunnerApplication.commands(new CancellationFlag(), new ReaderRegistry(), StepRegistry.withBuiltInSteps()));
 
     @Test
     void helpExplainsEveryListedCommand() {

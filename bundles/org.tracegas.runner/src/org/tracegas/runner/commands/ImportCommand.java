@@ -4,31 +4,19 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.tracegas.importer.ImportException;
-import org.tracegas.importer.ImportOptions;
-import org.tracegas.importer.ImportedData;
-import org.tracegas.importer.ImportedInterferogram;
-import org.tracegas.importer.ImportedRecord;
-import org.tracegas.importer.ImportedSpectrum;
+import org.tracegas.campaign.FileMeasurements;
 import org.tracegas.importer.ReaderRegistry;
-import org.tracegas.model.SpectralContent;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
-import org.tracegas.spectrum.AxisUnit;
-import org.tracegas.spectrum.Interferogram;
-import org.tracegas.spectrum.Ordinate;
-import org.tracegas.spectrum.SpectralAxis;
-import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
-import org.tracegas.store.SpectrumInput;
 import org.tracegas.store.WorkspaceStore;
 
 /**
- * Imports files into a project: the reader that recognises each file's content reads it, and each file's
- * spectra or interferograms are stored in one transaction, so a bad file leaves nothing behind.
+ * Imports the lab's files into a project as measurements: each file kept whole by content hash, each record a
+ * measurement with its kind, time, title and conditions; a file imported before adds nothing.
  */
 public final class ImportCommand implements Command {
 
@@ -51,78 +39,40 @@ public final class ImportCommand implements Command {
     @Override
     public String usage() {
         return "usage: tracegas import <workspace and --as options> --project <code> --file <file> [--file ...]\n"
-                + WorkspaceLogin.USAGE + "\n"
-                + "  Each file is read by the reader that recognises its content; its records are stored in one\n"
-                + "  transaction. A file that cannot be read is named with the line and field at fault.\n"
-                + "exit codes: 0 all imported, 2 wrong arguments, 3 a file could not be read (earlier files stay),"
-                + " 5 failure";
+                + WorkspaceLogin.USAGE + "\n" + FileImports.USAGE + "\n"
+                + "  Each file is read by the reader that recognises its content and kept whole under the SHA-256 of\n"
+                + "  its bytes; each record becomes a measurement with its kind, time, title and cell conditions from\n"
+                + "  the file's labels. A file the project holds already adds nothing. Every file is read before\n"
+                + "  anything is stored; a file that cannot be read is named with the line and label at fault.\n"
+                + "exit codes: 0 all imported or known, 2 wrong arguments, 3 a file could not be read (nothing"
+                + " imported), 5 failure";
     }
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
-        List<Path> files = new ArrayList<>();
         List<String> rest = new ArrayList<>();
-        for (int i = 0; i < arguments.size(); i++) {
-            if (arguments.get(i).equals("--file") && i + 1 < arguments.size()) {
-                files.add(Path.of(arguments.get(++i)));
-            } else {
-                rest.add(arguments.get(i));
-            }
-        }
+        List<Path> files = Options.repeated(arguments, "--file", rest);
         // --file is among the accepted options only so that a mistyped one is told its nearest name
-        Options options = Options.parse(rest, WorkspaceLogin.optionsWith("--project", "--file"));
+        List<String> accepted = new ArrayList<>(WorkspaceLogin.optionsWith("--project", "--file"));
+        accepted.addAll(FileImports.optionNames());
+        Options options = Options.parse(rest, accepted);
         if (files.isEmpty()) {
             throw new UsageException("give at least one --file");
         }
+        FileMeasurements.Defaults defaults = FileImports.defaults(options);
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            String code = options.text("--project");
-            ProjectInfo project = store.projects().findByCode(actor, code)
-                    .orElseThrow(() -> new UsageException("no project with code " + code));
-            context.progress().begin("import");
-            for (int i = 0; i < files.size(); i++) {
-                Path file = files.get(i);
-                ImportedData data;
-                try {
-                    data = readers.read(file, ImportOptions.defaults());
-                } catch (ImportException e) {
-                    context.err().println("tracegas import: " + e.getMessage());
-                    return ExitCode.BAD_INPUT;
-                }
-                List<SpectrumInput> inputs = new ArrayList<>();
-                for (ImportedRecord r : data.records()) {
-                    SpectrumInput input = toInput(r);
-                    if (input == null) {
-                        context.err().println("tracegas import: " + file + " lines " + r.firstLine() + "-"
-                                + r.lastLine() + ": the values' meaning (absorbance, transmittance, single beam) is"
-                                + " not stated; nothing of this file was imported");
-                        return ExitCode.BAD_INPUT;
-                    }
-                    inputs.add(input);
-                }
-                store.spectra().storeAll(actor, project.id(), inputs);
-                context.out().println(file + ": " + inputs.size() + " record(s) as " + data.format());
-                context.progress().update(i + 1, files.size());
+            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            FileImports.Outcome outcome;
+            try {
+                outcome = FileImports.importAll(store, actor, project, readers, files, defaults, context);
+            } catch (BadInputException e) {
+                context.err().println("tracegas import: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
             }
+            context.out().printf("Imported %d file(s) into project %s; %d already imported%n", outcome.added(),
+                    project.code(), outcome.known());
             return ExitCode.OK;
         }
-    }
-
-    /** @return null when a spectrum does not say what its values are */
-    private static SpectrumInput toInput(ImportedRecord record) {
-        if (record instanceof ImportedSpectrum s) {
-            Spectrum spectrum = s.spectrum();
-            SpectralContent content = switch (spectrum.ordinate()) {
-                case ABSORBANCE -> SpectralContent.ABSORBANCE;
-                case TRANSMITTANCE -> SpectralContent.TRANSMITTANCE;
-                case SINGLE_BEAM -> SpectralContent.SINGLE_BEAM;
-                case INTERFEROGRAM -> SpectralContent.INTERFEROGRAM;
-                case ARBITRARY -> null;
-            };
-            return content == null ? null : SpectrumInput.of(content, spectrum);
-        }
-        Interferogram igm = ((ImportedInterferogram) record).interferogram();
-        return SpectrumInput.of(SpectralContent.INTERFEROGRAM, new Spectrum(
-                SpectralAxis.uniform(AxisUnit.SAMPLE_INDEX, 0, 1, igm.size()), igm.toArray(), Ordinate.INTERFEROGRAM));
     }
 }

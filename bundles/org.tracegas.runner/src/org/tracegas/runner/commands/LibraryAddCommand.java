@@ -3,10 +3,10 @@ package org.tracegas.runner.commands;
 import java.nio.file.Path;
 import java.util.List;
 
+import org.tracegas.campaign.LabReferenceSource;
 import org.tracegas.campaign.VersionRecorder;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
-import org.tracegas.library.io.LibraryManifestReader;
 import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
@@ -48,7 +48,7 @@ public final class LibraryAddCommand implements Command {
             ReferenceLibrary library;
             String content;
             try {
-                library = LibraryManifestReader.forTwoColumnText().read(manifest);
+                library = LabReferenceSource.manifestReader().read(manifest);
                 content = LibraryVersionText.of(manifest);
             } catch (FileFormatException e) {
                 context.err().println("tracegas library-add: " + e.getMessage());

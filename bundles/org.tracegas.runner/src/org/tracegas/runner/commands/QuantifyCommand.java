@@ -1,8 +1,22 @@
 package org.tracegas.runner.commands;
 
+import java.io.IOException;
+import java.io.InputStream;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 
+import org.tracegas.campaign.FileMeasurements;
+import org.tracegas.campaign.MeasurementQuantification;
 import org.tracegas.campaign.ProjectQuantification;
+import org.tracegas.importer.ImportException;
+import org.tracegas.importer.ImportReader;
+import org.tracegas.importer.ReaderRegistry;
+import org.tracegas.importer.container.ContainerImportReader;
+import org.tracegas.library.io.FileFormatException;
+import org.tracegas.model.MeasurementKind;
+import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.quantify.BatchOutcome;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.Command;
@@ -13,13 +27,28 @@ import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
-/** Processes a project's interferogram files with a stored method version on all cores into the workspace. */
+/**
+ * Quantifies a project with a stored method version: the lab's files and the measurements already in the
+ * workspace, of any kind, each once per method version; or, given interferogram containers with their
+ * backgrounds, streams them on all cores as a stack campaign.
+ */
 public final class QuantifyCommand implements Command {
 
     private final CancellationFlag cancel;
+    private final ReaderRegistry readers;
+    private final StepRegistry steps;
 
-    public QuantifyCommand(CancellationFlag cancel) {
+    /** The command with the given readers of the lab's files and the steps a method's recipe may name. */
+    public QuantifyCommand(CancellationFlag cancel, ReaderRegistry readers, StepRegistry steps) {
         this.cancel = cancel;
+        this.readers = readers;
+        this.steps = steps;
+    }
+
+    /** The command for interferogram containers only, with the built-in recipe steps. */
+    public QuantifyCommand(CancellationFlag cancel) {
+        this(cancel, new ReaderRegistry().register("org.tracegas.importer.container", "interferogram container",
+                new ContainerImportReader()), StepRegistry.withBuiltInSteps());
     }
 
     @Override
@@ -29,25 +58,107 @@ public final class QuantifyCommand implements Command {
 
     @Override
     public String summary() {
-        return "transform, ratio and fit a project's interferogram files with a stored method, on all cores";
+        return "quantify a project's files and measurements (interferogram, single beam, transmittance,"
+                + " absorbance) with a stored method";
     }
 
     @Override
     public String usage() {
-        return "usage: tracegas quantify <workspace and --as options> " + QuantifyArguments.USAGE_LINE + "\n"
-                + WorkspaceLogin.USAGE + "\n"
-                + StoredMethods.USAGE + "\n" + """
-                  The chosen version of the method is rebuilt from the workspace. Backgrounds are the background
-                  records of the --backgrounds files; each sample is ratioed against the last one before it.
-                  Every file is read once before anything is stored; each sample is stored with its absorbance
-                  and its results, which point at the method and library versions.
-                exit codes: 0 done, 2 wrong arguments, 3 bad input file (file, record and field named; nothing
-                  stored), the project holds this version's results already or has an unfinished batch-split
-                  batch of it (named), 4 cancelled (samples stored so far stay), 5 failure""";
+        return "usage: tracegas quantify <workspace and --as options> --project <code> --method <name>\n"
+                + "       [--file <file> ...] [--background-file <file> ...] [import options]\n"
+                + "   or: tracegas quantify <workspace and --as options> " + QuantifyArguments.USAGE_LINE + "\n"
+                + WorkspaceLogin.USAGE + "\n" + StoredMethods.USAGE + "\n" + FileImports.USAGE + "\n" + """
+                  The first form imports the --file files (samples) and --background-file files (backgrounds) as
+                  the import command does (a file imported before adds nothing), then quantifies every sample
+                  measurement of the project not yet quantified with the method version, and says how many it
+                  skipped. Absorbance is fitted as it is; transmittance becomes -log10 T; single beams and
+                  interferograms (transformed as the method says) are ratioed against the last background before
+                  them. The method's [recipe] steps apply next, and the recipe that ran is recorded with every
+                  result. Every sample is checked before anything is stored. A run that stops (cancelled,
+                  killed) is finished by running it again.
+                  The second form streams interferogram containers: backgrounds are the background records of the
+                  --backgrounds files; each sample is ratioed against the last one before it.
+                exit codes: 0 done, 2 wrong arguments, 3 bad input (file, record and field named; nothing
+                  stored), or in the second form the project holds this version's results already or has an
+                  unfinished batch-split batch of it (named), 4 cancelled (what was stored stays), 5 failure""";
     }
 
     @Override
     public int run(List<String> commandLine, RunnerContext context) throws Exception {
+        if (commandLine.contains("--backgrounds") && containersOnly(commandLine)) {
+            return runStack(commandLine, context);
+        }
+        List<String> rest = new ArrayList<>();
+        List<Path> files = Options.repeated(commandLine, "--file", rest);
+        List<String> rest2 = new ArrayList<>();
+        List<Path> backgroundFiles = Options.repeated(rest, "--background-file", rest2);
+        List<String> accepted = new ArrayList<>(WorkspaceLogin.optionsWith("--project", "--method",
+                "--method-version"));
+        accepted.addAll(FileImports.optionNames());
+        Options options = Options.parse(rest2, accepted);
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+            Session actor = WorkspaceLogin.logIn(store, options, context);
+            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            StoredMethods.Found found;
+            MeasurementQuantification job;
+            MeasurementQuantification.Plan plan;
+            try {
+                found = StoredMethods.find(store, options);
+                job = new MeasurementQuantification(store, actor, project.id(), found.version(), found.method(),
+                        steps, StoredMethods.SOFTWARE);
+                FileMeasurements.Defaults d = FileImports.defaults(options);
+                List<Path> all = new ArrayList<>(backgroundFiles);
+                all.addAll(files);
+                List<FileMeasurements.Read> read = new ArrayList<>(FileImports.readAll(readers, backgroundFiles,
+                        new FileMeasurements.Defaults(MeasurementKind.BACKGROUND, d.time(), d.cellTemperature(),
+                                d.cellPressure())));
+                read.addAll(FileImports.readAll(readers, files, d));
+                // every sample, stored or in the files, is checked before anything is stored
+                job.check(job.plan(read));
+                FileImports.storeAll(store, actor, project, all, read, context);
+                plan = job.plan();
+            } catch (FileFormatException | ImportException | IllegalArgumentException e) {
+                context.err().println("tracegas quantify: " + e.getMessage() + "; nothing quantified");
+                return ExitCode.BAD_INPUT;
+            } catch (BadInputException e) {
+                context.err().println("tracegas quantify: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
+            }
+            context.progress().begin("quantify");
+            MeasurementQuantification.Outcome outcome = job.run(plan, context.progress()::update, cancel);
+            if (outcome.cancelled()) {
+                context.err().printf("tracegas quantify: cancelled after %d of %d measurements; run again to"
+                        + " finish%n", outcome.stored(), plan.samples().size());
+                return ExitCode.CANCELLED;
+            }
+            context.out().printf("Quantified %d measurement(s) of project %s with method '%s' version %d;"
+                    + " skipped %d quantified with it before%n", outcome.stored(), project.code(),
+                    found.method().method().name(), found.version().number(), outcome.skipped());
+            return ExitCode.OK;
+        }
+    }
+
+    /** Whether every --file and --backgrounds file is an interferogram container (the stack campaign form). */
+    private static boolean containersOnly(List<String> commandLine) {
+        ContainerImportReader container = new ContainerImportReader();
+        for (int i = 0; i + 1 < commandLine.size(); i++) {
+            String o = commandLine.get(i);
+            if (o.equals("--file") || o.equals("--backgrounds")) {
+                Path f = Path.of(commandLine.get(i + 1));
+                try (InputStream in = Files.newInputStream(f)) {
+                    if (!container.recognise(in.readNBytes(ImportReader.HEAD_BYTES), f.getFileName().toString())
+                            .recognised()) {
+                        return false;
+                    }
+                } catch (IOException e) {
+                    return true; // the stack form names the file it cannot read
+                }
+            }
+        }
+        return true;
+    }
+
+    private int runStack(List<String> commandLine, RunnerContext context) throws Exception {
         QuantifyArguments arguments = QuantifyArguments.parse(commandLine);
         Options options = arguments.options();
         try (WorkspaceStore store = WorkspaceLogin.open(options)) {

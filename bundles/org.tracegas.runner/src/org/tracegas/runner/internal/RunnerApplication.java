@@ -22,10 +22,13 @@ import org.tracegas.runner.commands.QaCommand;
 import org.tracegas.runner.commands.QuantifyCommand;
 import org.tracegas.runner.commands.ReportCommand;
 import org.tracegas.runner.commands.ReportSignCommand;
+import org.tracegas.runner.commands.ResultsExportCommand;
 import org.tracegas.runner.commands.UserAddCommand;
 import org.tracegas.runner.commands.UserUnlockCommand;
 import org.tracegas.runner.commands.WorkspaceInitCommand;
 import org.tracegas.importer.ReaderRegistry;
+import org.tracegas.preprocess.StepRegistry;
+import org.eclipse.core.runtime.RegistryFactory;
 import org.tracegas.runner.RunnerContext;
 
 /** The headless Equinox application: hands the command line to the runner's command table. */
@@ -39,18 +42,20 @@ public final class RunnerApplication implements IApplication {
         String version = FrameworkUtil.getBundle(getClass()).getVersion().toString();
         String[] line = argv == null ? new String[0] : argv;
         try (RunnerLogging logging = RunnerLogging.configure(List.of(line))) {
-            CommandTable table = new CommandTable(version, commands(cancel, ReaderRegistry.fromPlatform()));
+            CommandTable table = new CommandTable(version, commands(cancel, ReaderRegistry.fromPlatform(),
+                    StepRegistry.fromExtensions(RegistryFactory.getRegistry())));
             return table.dispatch(line, new RunnerContext(System.out, System.err));
         }
     }
 
     /** Every command of the runner. */
-    static List<Command> commands(CancellationFlag cancel, ReaderRegistry readers) {
+    static List<Command> commands(CancellationFlag cancel, ReaderRegistry readers, StepRegistry steps) {
         return List.of(new DemoCommand(cancel), new AuditVerifyCommand(), new WorkspaceInitCommand(),
                 new UserAddCommand(), new UserUnlockCommand(), new ProjectAddCommand(), new ImportCommand(readers),
                 new LibraryBuildCommand(cancel), new LibraryAddCommand(), new MethodDefineCommand(),
-                new QuantifyCommand(cancel), new QaCommand(), new ReportCommand(), new ReportSignCommand(),
-                new BatchSplitCommand(), new BatchWorkCommand(cancel), new BatchStatusCommand());
+                new QuantifyCommand(cancel, readers, steps), new QaCommand(), new ReportCommand(),
+                new ResultsExportCommand(), new ReportSignCommand(), new BatchSplitCommand(),
+                new BatchWorkCommand(cancel), new BatchStatusCommand());
     }
 
     @Override

@@ -10,8 +10,10 @@ import org.h2.jdbcx.JdbcDataSource;
 import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.audit.AuditSchema;
 import org.tracegas.audit.VerificationReport;
+import org.tracegas.store.AnalysisService;
 import org.tracegas.store.AuditService;
 import org.tracegas.store.BlockService;
+import org.tracegas.store.ImportService;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.QaService;
 import org.tracegas.store.ResultService;
@@ -42,6 +44,8 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     private final BlockService blocks;
     private final WorkUnitService workUnits;
     private final AuditService audit;
+    private final ImportService imports;
+    private final AnalysisService analyses;
 
     private JdbcWorkspaceStore(DataSource dataSource, Backend backend, int maxFailedLogins) {
         this.dataSource = dataSource;
@@ -56,6 +60,8 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         blocks = new JdbcBlockService(transactions);
         workUnits = new JdbcWorkUnitService(transactions, backend);
         audit = new JdbcAuditService(transactions);
+        imports = new JdbcImportService(transactions);
+        analyses = new JdbcAnalysisService(transactions);
     }
 
     /** An embedded H2 database in {@code folder} (created when missing), file {@code workspace.mv.db}. */
@@ -160,6 +166,16 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
 
     @Override
     public org.tracegas.store.ReviewService reviews() { return new JdbcReviewService(new Transactions(dataSource), users); }
+
+    @Override
+    public ImportService imports() {
+        return imports;
+    }
+
+    @Override
+    public AnalysisService analyses() {
+        return analyses;
+    }
 
     @Override
     public ResultService results() {

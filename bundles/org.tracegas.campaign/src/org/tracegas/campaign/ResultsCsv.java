@@ -1,0 +1,72 @@
+package org.tracegas.campaign;
+
+import java.io.IOException;
+import java.io.Writer;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.function.Function;
+
+import org.tracegas.store.NewResult;
+import org.tracegas.store.ResultRow;
+import org.tracegas.store.VersionInfo;
+
+/**
+ * A project's stored results as CSV (RFC 4180: CRLF line ends, a header line, fields with comma, quote or line
+ * break in double quotes with inner quotes doubled), one line per result, each standing alone: its measurement
+ * and time, the file it came from, the value with its standard uncertainty, detection limit, unit and flags, the
+ * method and library by name and version number, the SHA-256 of the absorbance it was fitted from (its
+ * provenance) and of the recipe that made that absorbance. Numbers are written in full with a point; times in
+ * ISO 8601 UTC.
+ */
+public final class ResultsCsv {
+
+    /** The header line's fields. */
+    public static final List<String> HEADER = List.of("measurement", "measured_utc", "source_file", "compound",
+            "value", "standard_uncertainty", "detection_limit", "unit", "flags", "method", "method_version",
+            "library", "library_version", "provenance_sha256", "recipe_sha256");
+
+    private ResultsCsv() {
+    }
+
+    /**
+     * @param versions the stored version of an id (method and library versions named by the results)
+     * @return the number of result lines written
+     */
+    public static int write(List<ResultRow> rows, Function<String, VersionInfo> versions, Writer out)
+            throws IOException {
+        Map<String, VersionInfo> known = new HashMap<>();
+        line(out, HEADER);
+        for (ResultRow row : rows) {
+            NewResult r = row.result().values();
+            VersionInfo method = known.computeIfAbsent(r.methodVersionId(), versions);
+            VersionInfo library = known.computeIfAbsent(r.libraryVersionId(), versions);
+            line(out, List.of(text(r.measurementId()), row.measured() == null ? "" : row.measured().toString(),
+                    text(row.sourceFile()), r.compound(), Double.toString(r.concentration()),
+                    Double.toString(r.uncertainty()), Double.toString(r.detectionLimit()), r.unit(),
+                    String.join(" ", r.flags().stream().map(f -> f.getName()).sorted().toList()), method.name(),
+                    Integer.toString(method.number()), library.name(), Integer.toString(library.number()),
+                    r.inputHash(), text(row.recipeSha256())));
+        }
+        return rows.size();
+    }
+
+    private static String text(String value) {
+        return value == null ? "" : value;
+    }
+
+    private static void line(Writer out, List<String> fields) throws IOException {
+        for (int i = 0; i < fields.size(); i++) {
+            if (i > 0) {
+                out.write(',');
+            }
+            String f = fields.get(i);
+            if (f.indexOf(',') >= 0 || f.indexOf('"') >= 0 || f.indexOf('\n') >= 0 || f.indexOf('\r') >= 0) {
+                out.write('"' + f.replace("\"", "\"\"") + '"');
+            } else {
+                out.write(f);
+            }
+        }
+        out.write("\r\n");
+    }
+}

@@ -1,0 +1,63 @@
+package org.tracegas.runner.commands;
+
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Path;
+import java.util.List;
+
+import org.tracegas.campaign.ResultsCsv;
+import org.tracegas.campaign.WholeFile;
+import org.tracegas.runner.Command;
+import org.tracegas.runner.ExitCode;
+import org.tracegas.runner.RunnerContext;
+import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.ResultRow;
+import org.tracegas.store.Session;
+import org.tracegas.store.WorkspaceStore;
+
+/** Writes a project's stored results as CSV, one line per result, without a report plan. */
+public final class ResultsExportCommand implements Command {
+
+    @Override
+    public String name() {
+        return "results-export";
+    }
+
+    @Override
+    public String summary() {
+        return "write a project's stored results as CSV: measurement, time, file, value, uncertainty, versions";
+    }
+
+    @Override
+    public String usage() {
+        return "usage: tracegas results-export <workspace and --as options> --project <code> --out <file.csv>\n"
+                + WorkspaceLogin.USAGE + "\n" + """
+                  One line per stored result: measurement, measured_utc, source_file, compound, value,
+                  standard_uncertainty, detection_limit, unit, flags, method, method_version, library,
+                  library_version, provenance_sha256 (of the absorbance fitted), recipe_sha256. The file is
+                  written whole or not at all.
+                exit codes: 0 written, 2 wrong arguments, 5 failure""";
+    }
+
+    @Override
+    public int run(List<String> arguments, RunnerContext context) throws Exception {
+        Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--project", "--out"));
+        Path out = options.path("--out");
+        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+            Session actor = WorkspaceLogin.logIn(store, options, context);
+            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            List<ResultRow> rows = store.analyses().rows(actor, project.id());
+            int[] written = new int[1];
+            WholeFile.write(out, stream -> {
+                Writer w = new java.io.OutputStreamWriter(stream, StandardCharsets.UTF_8);
+                written[0] = ResultsCsv.write(rows, id -> store.versions().version(id), w);
+                w.flush();
+            });
+            context.out().printf("Wrote %d result(s) of project %s to %s%n", written[0], project.code(), out);
+            // the values are of toxic gases: they are not to be used without their uncertainty and flags
+            context.out().println("Caution: results of toxic gases; read each value with its uncertainty, detection"
+                    + " limit and flags, and have them reviewed before acting on them.");
+            return ExitCode.OK;
+        }
+    }
+}

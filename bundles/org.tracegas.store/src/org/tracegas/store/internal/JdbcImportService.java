@@ -1,0 +1,196 @@
+package org.tracegas.store.internal;
+
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.Instant;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.UUID;
+
+import org.tracegas.audit.AuditAction;
+import org.tracegas.audit.AuditEntry;
+import org.tracegas.audit.AuditValues;
+import org.tracegas.model.AccessLevel;
+import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.SpectralContent;
+import org.tracegas.store.ImportService;
+import org.tracegas.store.ImportedFile;
+import org.tracegas.store.MeasurementInfo;
+import org.tracegas.store.NewMeasurement;
+import org.tracegas.store.NoSuchObjectException;
+import org.tracegas.store.RawFile;
+import org.tracegas.store.SampleEncoding;
+import org.tracegas.store.Session;
+import org.tracegas.store.SourcedMeasurement;
+import org.tracegas.store.SpectrumInput;
+
+final class JdbcImportService implements ImportService {
+
+    private final Transactions transactions;
+
+    JdbcImportService(Transactions transactions) {
+        this.transactions = transactions;
+    }
+
+    @Override
+    public ImportedFile importFile(Session actor, String projectId, RawFile file, List<NewMeasurement> measurements) {
+        if (file == null) {
+            throw new IllegalArgumentException("file must not be null");
+        }
+        if (measurements == null || measurements.isEmpty()) {
+            throw new IllegalArgumentException("measurements of " + file.fileName() + " must not be empty");
+        }
+        for (int i = 0; i < measurements.size(); i++) {
+            if (measurements.get(i) == null) {
+                throw new IllegalArgumentException("measurements[" + i + "] of " + file.fileName() + " is null");
+            }
+        }
+        return transactions.run("importing " + file.fileName() + " into project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
+            Optional<ImportedFile> known = find(tx, projectId, file.sha256());
+            if (known.isPresent()) {
+                return known.get();
+            }
+            Instant now = Instant.now().truncatedTo(ChronoUnit.MICROS);
+            tx.update("INSERT INTO raw_file (project_id, sha256, file_name, format, byte_count, content, imported_by,"
+                    + " imported_at) VALUES (?, ?, ?, ?, ?, ?, ?, ?)", projectId, file.sha256(), file.fileName(),
+                    file.format(), (long) file.size(), file.content(), actor.userId(), now);
+            List<String> ids = new ArrayList<>(measurements.size());
+            List<AuditEntry> audit = new ArrayList<>();
+            for (int i = 0; i < measurements.size(); i++) {
+                NewMeasurement m = measurements.get(i);
+                String id = UUID.randomUUID().toString();
+                ids.add(id);
+                tx.update(JdbcProjectService.INSERT_MEASUREMENT, id, projectId, m.kind(), m.time(),
+                        m.cellTemperature(), m.cellPressure(), actor.userId());
+                String[] spectrum;
+                try (PreparedStatement ps = tx.connection().prepareStatement(SpectrumRows.INSERT)) {
+                    spectrum = SpectrumRows.bindInsert(ps, projectId,
+                            new SpectrumInput(id, m.content(), m.spectrum(), SampleEncoding.FLOAT64_LE));
+                    ps.executeUpdate();
+                }
+                String labels = AuditValues.canonical(m.labels());
+                tx.update("INSERT INTO imported_measurement (measurement_id, project_id, raw_sha256, record_index,"
+                        + " title, content, spectrum_id, labels) VALUES (?, ?, ?, ?, ?, ?, ?, ?)", id, projectId,
+                        file.sha256(), i, m.title(), m.content(), spectrum[0], labels);
+                Map<String, Object> fields = JdbcProjectService.measurementValues(projectId, m.kind(), m.time(),
+                        m.cellTemperature(), m.cellPressure());
+                fields.put("title", m.title());
+                fields.put("sourceFile", file.fileName());
+                fields.put("sourceSha256", file.sha256());
+                fields.put("sourceRecord", i);
+                fields.put("labelsSha256", SpectrumCodec.sha256Hex(labels.getBytes(
+                        java.nio.charset.StandardCharsets.UTF_8)));
+                fields.put("spectrum", spectrum[0]);
+                fields.put("spectrumContent", m.content().getName());
+                fields.put("spectrumAxis", m.spectrum().axis());
+                fields.put("spectrumEncoding", SampleEncoding.FLOAT64_LE);
+                fields.put("spectrumSha256", spectrum[1]);
+                audit.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement", id)
+                        .newValue(AuditValues.canonical(fields)).build());
+            }
+            Map<String, Object> fileFields = new LinkedHashMap<>();
+            fileFields.put("project", projectId);
+            fileFields.put("fileName", file.fileName());
+            fileFields.put("format", file.format());
+            fileFields.put("bytes", file.size());
+            fileFields.put("sha256", file.sha256());
+            fileFields.put("measurements", String.join(",", ids));
+            audit.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "raw-file",
+                    projectId + "/" + file.sha256()).newValue(AuditValues.canonical(fileFields)).build());
+            tx.auditAll(audit);
+            return new ImportedFile(file.sha256(), file.fileName(), file.format(), file.size(), now, ids, true);
+        });
+    }
+
+    @Override
+    public Optional<ImportedFile> find(Session actor, String projectId, String sha256) {
+        return transactions.run("looking up file " + sha256 + " in project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+            return find(tx, projectId, sha256);
+        });
+    }
+
+    private static Optional<ImportedFile> find(Tx tx, String projectId, String sha256) throws SQLException {
+        Optional<ImportedFile> file = tx.queryOne("SELECT sha256, file_name, format, byte_count, imported_at"
+                + " FROM raw_file WHERE project_id = ? AND sha256 = ?", rs -> new ImportedFile(rs.getString(1).trim(),
+                        rs.getString(2), rs.getString(3), rs.getLong(4), Tx.instant(rs, "imported_at"), List.of(),
+                        false), projectId, sha256);
+        if (file.isEmpty()) {
+            return file;
+        }
+        List<String> ids = tx.queryList("SELECT measurement_id FROM imported_measurement WHERE project_id = ?"
+                + " AND raw_sha256 = ? ORDER BY record_index", rs -> rs.getString(1), projectId, sha256);
+        ImportedFile f = file.get();
+        return Optional.of(new ImportedFile(f.sha256(), f.fileName(), f.format(), f.byteCount(), f.importedAt(), ids,
+                false));
+    }
+
+    @Override
+    public byte[] content(Session actor, String projectId, String sha256) {
+        return transactions.run("reading file " + sha256 + " of project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+            return tx.queryOne("SELECT content FROM raw_file WHERE project_id = ? AND sha256 = ?",
+                    rs -> rs.getBytes(1), projectId, sha256)
+                    .orElseThrow(() -> new NoSuchObjectException("raw file", sha256));
+        });
+    }
+
+    @Override
+    public List<SourcedMeasurement> measurements(Session actor, String projectId) {
+        return transactions.run("reading the imported measurements of project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+            return tx.queryList("SELECT m.id, m.project_id, m.kind, m.measured_at, m.cell_temperature,"
+                    + " m.cell_pressure, m.operator_id, i.title, f.file_name, i.raw_sha256, i.record_index,"
+                    + " i.content, i.spectrum_id, i.labels FROM imported_measurement i"
+                    + " JOIN measurement m ON m.id = i.measurement_id"
+                    + " JOIN raw_file f ON f.project_id = i.project_id AND f.sha256 = i.raw_sha256"
+                    + " WHERE i.project_id = ? ORDER BY m.measured_at, f.file_name, i.record_index",
+                    JdbcImportService::map, projectId);
+        });
+    }
+
+    private static SourcedMeasurement map(ResultSet rs) throws SQLException {
+        MeasurementInfo m = new MeasurementInfo(rs.getString("id"), rs.getString("project_id"),
+                MeasurementKind.valueOf(rs.getString("kind")), Tx.instant(rs, "measured_at"),
+                rs.getDouble("cell_temperature"), rs.getDouble("cell_pressure"), rs.getString("operator_id"));
+        return new SourcedMeasurement(m, rs.getString("title"), rs.getString("file_name"),
+                rs.getString("raw_sha256").trim(), rs.getInt("record_index"),
+                SpectralContent.valueOf(rs.getString("content")), rs.getString("spectrum_id"),
+                labels(rs.getString("labels")));
+    }
+
+    /** Reads back the canonical text the labels were stored as ({@link AuditValues#canonical}). */
+    static Map<String, String> labels(String canonical) {
+        Map<String, String> labels = new LinkedHashMap<>();
+        for (String line : canonical.split("\n")) {
+            int eq = line.indexOf('=');
+            if (eq < 1) {
+                continue;
+            }
+            String raw = line.substring(eq + 1);
+            StringBuilder value = new StringBuilder(raw.length());
+            for (int i = 0; i < raw.length(); i++) {
+                char ch = raw.charAt(i);
+                if (ch == '\\' && i + 1 < raw.length()) {
+                    char next = raw.charAt(++i);
+                    value.append(switch (next) {
+                        case 'n' -> '\n';
+                        case 'r' -> '\r';
+                        case '0' -> '\0';
+                        default -> next;
+                    });
+                } else {
+                    value.append(ch);
+                }
+            }
+            labels.put(line.substring(0, eq), value.toString());
+        }
+        return labels;
+    }
+}
