@@ -49,11 +49,22 @@ enum DataKind {
             col("compound", TEXT), col("concentration", REAL), col("uncertainty", REAL),
             col("detection_limit", REAL), col("unit", TEXT), col("flags", TEXT), col("method_version_id", TEXT),
             col("library_version_id", TEXT), col("software_version", TEXT), col("input_hash", TEXT),
-            col("recorded_by", TEXT), col("recorded_at", TIME)),
+            col("recorded_by", TEXT), col("recorded_at", TIME), col("recipe_sha256", TEXT)),
     QA_CHECK("qa-check", "qa_check", "id", col("id", TEXT), col("project_id", TEXT),
             col("method_version_id", TEXT), col("seq", INTEGER), col("check_name", TEXT), col("passed", BOOLEAN),
             col("measured", REAL), col("unit", TEXT), col("lower_limit", REAL), col("upper_limit", REAL),
-            col("rule", TEXT), col("source", TEXT), col("recorded_by", TEXT), col("recorded_at", TIME));
+            col("rule", TEXT), col("source", TEXT), col("recorded_by", TEXT), col("recorded_at", TIME)),
+    /** A lab's file kept whole; key {@code <project id>/<sha256>}, as its audit record names it. */
+    RAW_FILE("raw-file", "raw_file", "project_id,sha256", col("project_id", TEXT), col("sha256", TEXT),
+            col("file_name", TEXT), col("format", TEXT), col("byte_count", INTEGER), col("content", BYTES),
+            col("imported_by", TEXT), col("imported_at", TIME)),
+    /** What a measurement imported from a lab's file came from: file, record, title and labels. */
+    IMPORTED_MEASUREMENT("imported-measurement", "imported_measurement", "measurement_id",
+            col("measurement_id", TEXT), col("project_id", TEXT), col("raw_sha256", TEXT),
+            col("record_index", INTEGER), col("title", TEXT), col("content", TEXT), col("spectrum_id", TEXT),
+            col("labels", TEXT)),
+    /** A processing recipe that ran, kept once under the SHA-256 of its text. */
+    PROCESSING_RECIPE("processing-recipe", "processing_recipe", "sha256", col("sha256", TEXT), col("text", TEXT));
 
     private final String label;
     private final String table;

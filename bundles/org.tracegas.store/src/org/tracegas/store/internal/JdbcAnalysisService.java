@@ -62,10 +62,13 @@ final class JdbcAnalysisService implements AnalysisService {
             Instant recorded = Instant.now().truncatedTo(ChronoUnit.MICROS);
             List<StoredMeasurement> stored = new ArrayList<>(analyses.size());
             List<AuditEntry> audit = new ArrayList<>(analyses.size());
+            List<List<RowBindings.RowRef>> bound = new ArrayList<>(analyses.size());
             for (MeasurementAnalysis a : analyses) {
+                List<RowBindings.RowRef> written = new ArrayList<>();
                 String recipeSha = SpectrumCodec.sha256Hex(a.recipe().getBytes(StandardCharsets.UTF_8));
                 if (tx.queryOne("SELECT 1 FROM processing_recipe WHERE sha256 = ?", rs -> 1, recipeSha).isEmpty()) {
                     tx.update("INSERT INTO processing_recipe (sha256, text) VALUES (?, ?)", recipeSha, a.recipe());
+                    written.add(new RowBindings.RowRef(DataKind.PROCESSING_RECIPE, recipeSha));
                 }
                 String[] spectrum;
                 try (PreparedStatement ps = tx.connection().prepareStatement(SpectrumRows.INSERT)) {
@@ -74,19 +77,15 @@ final class JdbcAnalysisService implements AnalysisService {
                     ps.executeUpdate();
                 }
                 List<ResultInfo> rows = new ArrayList<>(a.results().size());
-                try (PreparedStatement ps = tx.connection().prepareStatement(JdbcResultService.INSERT);
-                        PreparedStatement recipe = tx.connection().prepareStatement(
-                                "UPDATE analysis_result SET recipe_sha256 = ? WHERE id = ?")) {
+                try (PreparedStatement ps = tx.connection().prepareStatement(JdbcResultService.INSERT_WITH_RECIPE)) {
                     for (NewResult r : a.results()) {
                         ResultInfo row = JdbcResultService.newInfo(actor, projectId, r, recorded);
                         JdbcResultService.bindInsert(ps, row);
+                        ps.setString(16, recipeSha);
                         ps.addBatch();
-                        Tx.bind(recipe, recipeSha, row.id());
-                        recipe.addBatch();
                         rows.add(row);
                     }
                     ps.executeBatch();
-                    recipe.executeBatch();
                 }
                 List<String> resultIds = rows.stream().map(ResultInfo::id).toList();
                 stored.add(new StoredMeasurement(a.measurementId(), spectrum[0], resultIds));
@@ -103,8 +102,11 @@ final class JdbcAnalysisService implements AnalysisService {
                 fields.put("resultsSha256", JdbcBlockService.resultsSha256(rows));
                 audit.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement-analysis",
                         a.measurementId()).newValue(AuditValues.canonical(fields)).build());
+                written.add(new RowBindings.RowRef(DataKind.SPECTRAL_DATA, spectrum[0]));
+                resultIds.forEach(id -> written.add(new RowBindings.RowRef(DataKind.RESULT, id)));
+                bound.add(written);
             }
-            tx.auditAll(audit);
+            tx.auditAll(audit, bound);
             return stored;
         });
     }

@@ -62,6 +62,7 @@ final class JdbcImportService implements ImportService {
                     file.format(), (long) file.size(), file.content(), actor.userId(), now);
             List<String> ids = new ArrayList<>(measurements.size());
             List<AuditEntry> audit = new ArrayList<>();
+            List<List<RowBindings.RowRef>> bound = new ArrayList<>();
             for (int i = 0; i < measurements.size(); i++) {
                 NewMeasurement m = measurements.get(i);
                 String id = UUID.randomUUID().toString();
@@ -93,6 +94,9 @@ final class JdbcImportService implements ImportService {
                 fields.put("spectrumSha256", spectrum[1]);
                 audit.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement", id)
                         .newValue(AuditValues.canonical(fields)).build());
+                bound.add(List.of(new RowBindings.RowRef(DataKind.MEASUREMENT, id),
+                        new RowBindings.RowRef(DataKind.SPECTRAL_DATA, spectrum[0]),
+                        new RowBindings.RowRef(DataKind.IMPORTED_MEASUREMENT, id)));
             }
             Map<String, Object> fileFields = new LinkedHashMap<>();
             fileFields.put("project", projectId);
@@ -103,7 +107,8 @@ final class JdbcImportService implements ImportService {
             fileFields.put("measurements", String.join(",", ids));
             audit.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "raw-file",
                     projectId + "/" + file.sha256()).newValue(AuditValues.canonical(fileFields)).build());
-            tx.auditAll(audit);
+            bound.add(List.of(new RowBindings.RowRef(DataKind.RAW_FILE, projectId + "/" + file.sha256())));
+            tx.auditAll(audit, bound);
             return new ImportedFile(file.sha256(), file.fileName(), file.format(), file.size(), now, ids, true);
         });
     }

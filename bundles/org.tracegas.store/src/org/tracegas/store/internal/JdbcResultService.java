@@ -63,10 +63,19 @@ final class JdbcResultService implements ResultService {
     }
 
     /** Columns of table analysis_result, in the order {@link #bindInsert} binds them. */
-    static final String INSERT = "INSERT INTO analysis_result (id, project_id, measurement_id, compound, concentration,"
+    private static final String COLUMNS = "id, project_id, measurement_id, compound, concentration,"
             + " uncertainty, detection_limit, unit, flags, method_version_id, library_version_id,"
-            + " software_version, input_hash, recorded_by, recorded_at, row_version)"
-            + " VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 0)";
+            + " software_version, input_hash, recorded_by, recorded_at, row_version";
+    private static final String VALUES = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 0";
+
+    static final String INSERT = "INSERT INTO analysis_result (" + COLUMNS + ") VALUES (" + VALUES + ")";
+
+    /**
+     * As {@link #INSERT}, with the recipe that processed the spectrum as the 16th parameter: written with the row,
+     * since the lab server's everyday role cannot update a stored result.
+     */
+    static final String INSERT_WITH_RECIPE = "INSERT INTO analysis_result (" + COLUMNS + ", recipe_sha256) VALUES ("
+            + VALUES + ", ?)";
 
     /** @param checked versions and measurements already checked and frozen in this transaction */
     private static ResultInfo insert(Tx tx, Session actor, String projectId, NewResult result,
