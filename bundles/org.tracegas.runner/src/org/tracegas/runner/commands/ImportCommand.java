@@ -73,7 +73,7 @@ public final class ImportCommand implements Command {
             throw new UsageException("give at least one --file");
         }
         Options options = Options.parse(rest, WorkspaceLogin.optionsWith("--project"));
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             String code = options.text("--project");
             ProjectInfo project = store.projects().findByCode(actor, code)

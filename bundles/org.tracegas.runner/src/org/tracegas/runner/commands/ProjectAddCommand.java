@@ -33,7 +33,7 @@ public final class ProjectAddCommand implements Command {
     @Override
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--client", "--code", "--name"));
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             String clientId = store.projects().createClient(actor, options.text("--client"));
             ProjectInfo project = store.projects().createProject(actor, clientId, options.text("--code"),

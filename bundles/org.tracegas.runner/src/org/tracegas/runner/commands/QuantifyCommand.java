@@ -50,7 +50,7 @@ public final class QuantifyCommand implements Command {
     public int run(List<String> commandLine, RunnerContext context) throws Exception {
         QuantifyArguments arguments = QuantifyArguments.parse(commandLine);
         Options options = arguments.options();
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             ProjectQuantification job = new ProjectQuantification(store, actor, project.id(), StoredMethods.SOFTWARE);
