@@ -34,7 +34,8 @@ final class BatchCampaign {
 
     static final String METHOD = "Stack";
     static final String PASSWORD = "admin-pw-1";
-    static final Map<String, String> ENV = Map.of("TRACEGAS_PASSWORD", PASSWORD, "TRACEGAS_NEW_PASSWORD", PASSWORD);
+    static final Map<String, String> ENV = Map.of("TRACEGAS_PASSWORD", PASSWORD, "TRACEGAS_NEW_PASSWORD", PASSWORD,
+            "TRACEGAS_DB_PASSWORD", System.getProperty("tracegas.test.pg.password", "tracegas"));
     static final Instant T0 = Instant.parse("2026-03-17T08:00:00Z");
 
     final List<String> workspace;
@@ -43,7 +44,7 @@ final class BatchCampaign {
     final int samplesPerFile;
 
     /**
-     * @param workspace the workspace options: --workspace folder, or --server, --user and --password
+     * @param workspace the workspace options: --workspace folder, or --server and --user (the password in the environment)
      */
     BatchCampaign(Path folder, List<String> workspace, List<String> projects, int files, int samplesPerFile)
             throws IOException {

@@ -1,6 +1,7 @@
 package org.tracegas.runner.commands;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -86,7 +87,7 @@ class BatchProcessesTest {
 
     @Test
     void killedRunnerLosesNoUnitAndNoSampleIsStoredTwice() throws Exception {
-        List<String> server = List.of("--server", schemaUrl, "--user", USER, "--password", PASSWORD);
+        List<String> server = List.of("--server", schemaUrl, "--user", USER);
         BatchCampaign campaign = new BatchCampaign(folder, server, List.of("P"), FILES, SAMPLES_PER_FILE);
         String batchId = campaign.ok("batch-split", campaign.quantification("P", campaign.stackFiles)).strip();
 
@@ -106,6 +107,18 @@ class BatchProcessesTest {
                     .toFile()).redirectError(folder.resolve("runner-" + r + ".err").toFile());
             pb.environment().putAll(BatchCampaign.ENV);
             runners.add(pb.start());
+        }
+        for (Process runner : runners) {
+            // what every user of the machine sees in the process list (/proc/<pid>/cmdline): no password
+            Path cmdline = Path.of("/proc", Long.toString(runner.pid()), "cmdline");
+            List<String> args = List.of(new String(Files.readAllBytes(cmdline), StandardCharsets.UTF_8).split("\0"));
+            assertTrue(args.contains("batch-work"), "the runner's own arguments were read: " + args);
+            for (int i = 0; i < args.size(); i++) {
+                assertFalse(args.get(i).toLowerCase(java.util.Locale.ROOT).contains("password"), args.toString());
+                // the test server's user and password are alike: the user may appear, as --user's value only
+                assertTrue(!args.get(i).equals(PASSWORD) || i > 0 && args.get(i - 1).equals("--user"),
+                        "a password on the command line: " + args);
+            }
         }
         Process victim = runners.get(0);
         String victimId = "%:" + victim.pid();
@@ -162,7 +175,7 @@ class BatchProcessesTest {
 
     @Test
     void ofRunnersSplittingAtOnceOneRecordsTheBatchAndTheOthersNameIt() throws Exception {
-        List<String> server = List.of("--server", schemaUrl, "--user", USER, "--password", PASSWORD);
+        List<String> server = List.of("--server", schemaUrl, "--user", USER);
         BatchCampaign campaign = new BatchCampaign(folder, server, List.of("R"), 2, 1);
         // each runner its own connections, as separate processes would have. Their starts are 100 ms apart:
         // opening a PostgreSQL workspace at the very same moment can deadlock on installing the audit triggers,

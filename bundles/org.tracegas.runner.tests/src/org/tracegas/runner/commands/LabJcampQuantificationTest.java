@@ -58,8 +58,9 @@ class LabJcampQuantificationTest {
     static final double[] N2O_REFS = { 12, 18, 27, 40.5, 60.75, 91.125, 136.6875 };
     static final int SAMPLES = 24;
     static final Instant T0 = Instant.parse("2026-05-04T06:00:00Z");
+    /** The users' passwords, and the lab server's, in the environment: never on a command line. */
     static final Map<String, String> ENV = Map.of("TRACEGAS_PASSWORD", "lab-pw-12", "TRACEGAS_NEW_PASSWORD",
-            "lab-pw-12");
+            "lab-pw-12", "TRACEGAS_DB_PASSWORD", System.getProperty("tracegas.test.pg.password", "tracegas"));
 
     @TempDir
     Path folder;
@@ -300,7 +301,7 @@ class LabJcampQuantificationTest {
         }
         String schemaUrl = url + (url.contains("?") ? "&" : "?") + "currentSchema=" + schema;
         try {
-            Lab lab = new Lab(folder, List.of("--server", schemaUrl, "--user", user, "--password", password),
+            Lab lab = new Lab(folder, List.of("--server", schemaUrl, "--user", user),
                     SAMPLES);
             lab.setUp();
             dayOfTheLab(lab);

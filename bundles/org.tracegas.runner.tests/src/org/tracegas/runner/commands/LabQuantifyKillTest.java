@@ -48,7 +48,7 @@ class LabQuantifyKillTest {
             s.execute("CREATE SCHEMA " + schema);
         }
         String schemaUrl = URL + (URL.contains("?") ? "&" : "?") + "currentSchema=" + schema;
-        List<String> server = List.of("--server", schemaUrl, "--user", USER, "--password", PASSWORD);
+        List<String> server = List.of("--server", schemaUrl, "--user", USER);
         try {
             LabJcampQuantificationTest.Lab lab = new LabJcampQuantificationTest.Lab(folder, server, SAMPLES);
             lab.setUp();

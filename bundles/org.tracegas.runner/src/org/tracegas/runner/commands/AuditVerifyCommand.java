@@ -37,7 +37,7 @@ public final class AuditVerifyCommand implements Command {
     public String usage() {
         return """
                 usage: tracegas audit-verify --workspace <folder> [--anchor <seq>:<hash>]... [--anchors <file>]
-                       tracegas audit-verify --server <jdbc:postgresql://...> --user <name> --password <secret> [anchors]
+                       tracegas audit-verify --server <jdbc:postgresql://...> --user <name> [anchors as above]
                   Walks the whole audit chain in order and checks each record's hash and its link to the one
                   before, then every stored data row (measurements, spectra, results, QA checks, method and
                   library versions, users, projects, grants) against the audit record that vouches for it.
@@ -71,7 +71,7 @@ public final class AuditVerifyCommand implements Command {
                 return ExitCode.BAD_INPUT;
             }
         }
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             WorkspaceVerification v = store.audit().verifyWorkspace(anchors);
             context.out().printf("Audit trail: %d records checked, head sequence %d; %d data rows checked;"
                     + " %d anchor(s) given%n", v.chain().recordsChecked(), v.chain().headSequence(), v.rowsChecked(),

@@ -50,7 +50,7 @@ public final class BatchSplitCommand implements Command {
     public int run(List<String> commandLine, RunnerContext context) throws Exception {
         QuantifyArguments arguments = QuantifyArguments.parse(commandLine);
         Options options = arguments.options();
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             QuantifyArguments.Checked checked;

@@ -39,7 +39,7 @@ public final class BatchStatusCommand implements Command {
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--batch"));
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             String batchId = BatchWorkCommand.batch(store, actor, options).id();
             BatchProgress p = store.workUnits().progress(actor, batchId);

@@ -76,7 +76,7 @@ public final class BatchWorkCommand implements Command {
                 "--idle-poll"));
         Duration lease = options.seconds("--lease", DEFAULT_LEASE);
         Duration idlePoll = options.seconds("--idle-poll", DEFAULT_IDLE_POLL);
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             WorkBatchInfo batch = batch(store, actor, options);
             StackProcessor stack;

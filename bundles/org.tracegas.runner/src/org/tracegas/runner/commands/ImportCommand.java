@@ -60,7 +60,7 @@ public final class ImportCommand implements Command {
             throw new UsageException("give at least one --file");
         }
         FileMeasurements.Defaults defaults = FileImports.defaults(options);
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             FileImports.Outcome outcome;

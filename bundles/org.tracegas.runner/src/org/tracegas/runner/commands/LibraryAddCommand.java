@@ -43,7 +43,7 @@ public final class LibraryAddCommand implements Command {
     public int run(List<String> arguments, RunnerContext context) throws Exception {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--manifest"));
         Path manifest = options.path("--manifest");
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ReferenceLibrary library;
             String content;

@@ -58,7 +58,7 @@ public final class LibraryBuildCommand implements Command {
     public int run(List<String> arguments, RunnerContext context) throws Exception {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--plan", "--out"));
         Path out = options.path("--out");
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             LibraryPlan plan;
             ReferenceLibrary library;

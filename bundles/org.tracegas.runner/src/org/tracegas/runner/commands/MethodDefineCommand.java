@@ -41,7 +41,7 @@ public final class MethodDefineCommand implements Command {
     @Override
     public int run(List<String> arguments, RunnerContext context) throws Exception {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--method"));
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             MethodDefinition.Recorded recorded;
             try {

@@ -36,7 +36,7 @@ public final class ProjectAddCommand implements Command {
     @Override
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--client", "--code", "--name"));
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             // a client's second project joins the client the user already works for
             String client = options.text("--client");

@@ -48,7 +48,7 @@ public final class QaCommand implements Command {
     public int run(List<String> arguments, RunnerContext context) throws Exception {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--project", "--method",
                 "--method-version", "--plan", "--qa-file"));
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             QaEvaluation.Outcome outcome;

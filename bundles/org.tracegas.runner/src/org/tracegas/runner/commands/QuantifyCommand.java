@@ -96,7 +96,7 @@ public final class QuantifyCommand implements Command {
                 "--method-version"));
         accepted.addAll(FileImports.optionNames());
         Options options = Options.parse(rest2, accepted);
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             StoredMethods.Found found;
@@ -161,7 +161,7 @@ public final class QuantifyCommand implements Command {
     private int runStack(List<String> commandLine, RunnerContext context) throws Exception {
         QuantifyArguments arguments = QuantifyArguments.parse(commandLine);
         Options options = arguments.options();
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             ProjectQuantification job = new ProjectQuantification(store, actor, project.id(), StoredMethods.SOFTWARE);

@@ -56,7 +56,7 @@ public final class ReportCommand implements Command {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--project", "--method",
                 "--method-version", "--plan", "--out"));
         Path out = options.path("--out");
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             ReportContent content;

@@ -61,7 +61,7 @@ public final class ReportSignCommand implements Command {
         SignatureMeaning meaning = meaning(options.text("--meaning"));
         String reportId = options.text("--report");
         String reviewedHash = options.text("--content-hash").strip().toLowerCase(Locale.ROOT);
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session signer = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, signer, options.text("--project"));
             CampaignReport report = new CampaignReport(store, signer, project.id(), StoredMethods.SOFTWARE);

@@ -43,7 +43,7 @@ public final class ResultsExportCommand implements Command {
     public int run(List<String> arguments, RunnerContext context) throws Exception {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--project", "--out"));
         Path out = options.path("--out");
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
             List<ResultRow> rows = store.analyses().rows(actor, project.id());

@@ -41,7 +41,7 @@ public final class UserAddCommand implements Command {
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--login", "--name", "--roles"));
         Set<Role> roles = roles(options.text("--roles"));
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             UserInfo user = store.users().createUser(WorkspaceLogin.logIn(store, options, context), options.text("--login"),
                     options.text("--name"), roles, WorkspaceLogin.password(context, NEW_PASSWORD_VARIABLE));
             context.out().println("Added " + user.login() + " with roles " + user.roles());

@@ -37,7 +37,7 @@ public final class UserUnlockCommand implements Command {
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--login"));
         String login = options.text("--login");
-        try (WorkspaceStore store = WorkspaceLogin.open(options)) {
+        try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session admin = WorkspaceLogin.logIn(store, options, context);
             UserInfo user = store.users().findByLogin(login).orElse(null);
             if (user == null) {

@@ -24,17 +24,18 @@ public final class WorkspaceInitCommand implements Command {
 
     @Override
     public String usage() {
-        return "usage: tracegas workspace-init (--workspace <folder> | --server <url> --user <u> --password <p>)\n"
+        return "usage: tracegas workspace-init (--workspace <folder> | --server <url> --user <u>)\n"
                 + "                               --admin <login> --name <printed name>\n"
-                + "  The administrator's password is read from $" + WorkspaceLogin.PASSWORD_VARIABLE + ".\n"
+                + "  The administrator's password is read from $" + WorkspaceLogin.PASSWORD_VARIABLE + ";\n"
+                + "  the lab server's as " + WorkspaceLogin.SERVER_PASSWORD_RULE + ".\n"
                 + "exit codes: 0 created, 2 wrong arguments, 5 failure, 6 refused (the workspace has users already)";
     }
 
     @Override
     public int run(List<String> arguments, RunnerContext context) throws UsageException {
         Options options = Options.parse(arguments,
-                List.of("--workspace", "--server", "--user", "--password", "--admin", "--name"));
-        try (WorkspaceStore store = WorkspaceLogin.openOrCreate(options)) {
+                List.of("--workspace", "--server", "--user", "--admin", "--name"));
+        try (WorkspaceStore store = WorkspaceLogin.openOrCreate(options, context)) {
             Session admin = store.users().createFirstAdministrator(options.text("--admin"), options.text("--name"),
                     WorkspaceLogin.password(context, WorkspaceLogin.PASSWORD_VARIABLE));
             context.out().println("Workspace ready; administrator " + admin.login() + " (" + admin.userId() + ")");

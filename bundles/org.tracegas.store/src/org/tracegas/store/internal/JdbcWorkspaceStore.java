@@ -96,7 +96,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         try {
             Migrations.migrate(ds);
             try (Connection c = ds.getConnection()) {
-                AuditSchema.install(c);
+                installAuditSchema(c);
             }
             DataBaseline.bindExistingData(new Transactions(ds));
         } catch (SQLException | RuntimeException e) {
@@ -127,6 +127,26 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
             }
         }
         return e.getMessage();
+    }
+
+    /**
+     * Installs or confirms the audit tables; on a lab server an everyday role that may not change the schema
+     * (see {@link org.tracegas.store.LabServerRoles}) finds them installed by the owner and goes on.
+     */
+    private static void installAuditSchema(Connection c) throws SQLException {
+        try {
+            AuditSchema.install(c);
+        } catch (SQLException e) {
+            if (!"42501".equals(e.getSQLState())) {
+                throw e;
+            }
+            try (Statement s = c.createStatement()) {
+                s.executeQuery("SELECT last_seq FROM audit_chain_head").close();
+            } catch (SQLException missing) {
+                e.addSuppressed(missing);
+                throw e; // not installed, and this role may not install it
+            }
+        }
     }
 
     @Override

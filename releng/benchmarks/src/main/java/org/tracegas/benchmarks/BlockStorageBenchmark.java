@@ -90,7 +90,12 @@ public class BlockStorageBenchmark {
                 "Benchmark").id();
         String method = store.versions().create(analyst, VersionKind.METHOD, "m", "a=1\n", "bench").id();
         String library = store.versions().create(analyst, VersionKind.LIBRARY, "l", "b=1\n", "bench").id();
-        block = new ArrayList<>();
+        block = block(method, library);
+    }
+
+    /** 64 processed spectra as the demo campaign makes them, each with 9 results of the given versions. */
+    public static List<ProcessedSpectrum> block(String method, String library) {
+        List<ProcessedSpectrum> block = new ArrayList<>();
         SpectralAxis axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 600.0, 0.5, POINTS);
         for (int i = 0; i < SPECTRA; i++) {
             double[] values = new double[POINTS];
@@ -106,6 +111,7 @@ public class BlockStorageBenchmark {
                     1013.0, new Spectrum(axis, values, Ordinate.ABSORBANCE),
                     SampleEncoding.FLOAT32_LE, results));
         }
+        return block;
     }
 
     @TearDown(Level.Trial)
