@@ -85,6 +85,34 @@ class CurveOfGrowthFitTest {
         }
     }
 
+    /**
+     * With one reference per compound the curve is the Beer-Lambert line through it, absorbance proportional to the
+     * amount: the fit then is the classical least-squares fit, to rounding (references on the sample axis, so that
+     * neither fit resamples them).
+     */
+    @Test
+    void oneReferenceIsTheBeerLambertLine() {
+        QuantificationMethod.Builder b = QuantificationMethod.builder("one each").pathLengthMetres(1).maxAbsorbance(3);
+        for (int c = 0; c < 3; c++) {
+            List<String> others = new ArrayList<>(LineByLineMixture.COMPOUNDS);
+            others.remove(c);
+            b.analyte(new Analyte(LineByLineMixture.COMPOUNDS.get(c), others,
+                    List.of(AnalysisRegion.of(2090, 2210, 1))));
+            double[] amounts = new double[3];
+            amounts[c] = LineByLineMixture.HIGHEST[c];
+            b.reference(new ReferenceSpectrum(LineByLineMixture.COMPOUNDS.get(c), generator.absorbance(
+                    LineByLineMixture.SAMPLE_AXIS, amounts, 0, 0, 0, 0, new Random(c)), amounts[c]));
+        }
+        Spectrum s = sample(new double[] {0.3, 0.6, 0.2}, 0, 6);
+        List<CompoundResult> classical = quantifier(b.build()).fit(Sample.of(s));
+        List<CompoundResult> curves = quantifier(b.algorithm(FitAlgorithm.CURVE_OF_GROWTH).build())
+                .fit(Sample.of(s));
+        for (int c = 0; c < 3; c++) {
+            assertEquals(classical.get(c).concentration(), curves.get(c).concentration(),
+                    1e-9 * LineByLineMixture.HIGHEST[c]);
+        }
+    }
+
     /** Above the highest reference the result is an extrapolation of the curve and is flagged as such. */
     @Test
     void flagsAmountAboveHighestReference() {
