@@ -144,6 +144,26 @@ class CurveOfGrowthFitTest {
         }
     }
 
+    /** A blank (baseline and noise only): every amount within its detection limit of zero, the fit converged. */
+    @Test
+    void blankSampleGivesAmountsWithinDetectionLimit() {
+        List<CompoundResult> r = quantifier(method(ShiftTerm.SCALE).build())
+                .fit(Sample.of(sample(new double[] {0, 0, 0}, 0, 8)));
+        for (CompoundResult c : r) {
+            assertEquals(0, c.concentration(), c.detectionLimit(), c.compound());
+            assertFalse(c.flagged(QualityFlag.NOT_CONVERGED), c.compound());
+        }
+    }
+
+    /** An iteration cap too low for the saturated compound is reported, not hidden. */
+    @Test
+    void flagsIterationCapReached() {
+        List<CompoundResult> r = quantifier(method(ShiftTerm.NONE).maxIterations(1).build())
+                .fit(Sample.of(sample(new double[] {0.9, 0.5, 0.5}, 0, 9)));
+        assertTrue(r.get(0).flagged(QualityFlag.NOT_CONVERGED), r.get(0).flags().toString());
+        assertEquals(1, r.get(0).iterations());
+    }
+
     /** A scale beyond the bound ends at the bound, flagged as not converged. */
     @Test
     void scaleBeyondItsBoundIsFlagged() {
