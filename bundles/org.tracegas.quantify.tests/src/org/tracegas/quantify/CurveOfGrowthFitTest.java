@@ -85,6 +85,34 @@ class CurveOfGrowthFitTest {
         }
     }
 
+    /**
+     * With one reference per compound the curve is the Beer-Lambert line through it, absorbance proportional to the
+     * amount: the fit then is the classical least-squares fit, to rounding (references on the sample axis, so that
+     * neither fit resamples them).
+     */
+    @Test
+    void oneReferenceIsTheBeerLambertLine() {
+        QuantificationMethod.Builder b = QuantificationMethod.builder("one each").pathLengthMetres(1).maxAbsorbance(3);
+        for (int c = 0; c < 3; c++) {
+            List<String> others = new ArrayList<>(LineByLineMixture.COMPOUNDS);
+            others.remove(c);
+            b.analyte(new Analyte(LineByLineMixture.COMPOUNDS.get(c), others,
+                    List.of(AnalysisRegion.of(2090, 2210, 1))));
+            double[] amounts = new double[3];
+            amounts[c] = LineByLineMixture.HIGHEST[c];
+            b.reference(new ReferenceSpectrum(LineByLineMixture.COMPOUNDS.get(c), generator.absorbance(
+                    LineByLineMixture.SAMPLE_AXIS, amounts, 0, 0, 0, 0, new Random(c)), amounts[c]));
+        }
+        Spectrum s = sample(new double[] {0.3, 0.6, 0.2}, 0, 6);
+        List<CompoundResult> classical = quantifier(b.build()).fit(Sample.of(s));
+        List<CompoundResult> curves = quantifier(b.algorithm(FitAlgorithm.CURVE_OF_GROWTH).build())
+                .fit(Sample.of(s));
+        for (int c = 0; c < 3; c++) {
+            assertEquals(classical.get(c).concentration(), curves.get(c).concentration(),
+                    1e-9 * LineByLineMixture.HIGHEST[c]);
+        }
+    }
+
     /** Above the highest reference the result is an extrapolation of the curve and is flagged as such. */
     @Test
     void flagsAmountAboveHighestReference() {
@@ -114,6 +142,26 @@ class CurveOfGrowthFitTest {
                     without.get(c).concentration() - truth), LineByLineMixture.COMPOUNDS.get(c));
             assertFalse(withScale.get(c).flagged(QualityFlag.NOT_CONVERGED));
         }
+    }
+
+    /** A blank (baseline and noise only): every amount within its detection limit of zero, the fit converged. */
+    @Test
+    void blankSampleGivesAmountsWithinDetectionLimit() {
+        List<CompoundResult> r = quantifier(method(ShiftTerm.SCALE).build())
+                .fit(Sample.of(sample(new double[] {0, 0, 0}, 0, 8)));
+        for (CompoundResult c : r) {
+            assertEquals(0, c.concentration(), c.detectionLimit(), c.compound());
+            assertFalse(c.flagged(QualityFlag.NOT_CONVERGED), c.compound());
+        }
+    }
+
+    /** An iteration cap too low for the saturated compound is reported, not hidden. */
+    @Test
+    void flagsIterationCapReached() {
+        List<CompoundResult> r = quantifier(method(ShiftTerm.NONE).maxIterations(1).build())
+                .fit(Sample.of(sample(new double[] {0.9, 0.5, 0.5}, 0, 9)));
+        assertTrue(r.get(0).flagged(QualityFlag.NOT_CONVERGED), r.get(0).flags().toString());
+        assertEquals(1, r.get(0).iterations());
     }
 
     /** A scale beyond the bound ends at the bound, flagged as not converged. */

@@ -11,8 +11,10 @@ import java.util.Set;
  *
  * @param compound            the analyte
  * @param concentration       concentration in ppm
- * @param standardUncertainty standard uncertainty in ppm, from sigma^2 (A^T A)^-1 with sigma^2 the residual
- *                            variance of the fit
+ * @param standardUncertainty standard uncertainty in ppm, from sigma^2 (J^T W J)^-1 with J the design (the
+ *                            Jacobian at the optimum for a non-linear fit) and sigma^2 the residual variance of
+ *                            the fit (for the curve-of-growth fit, where the compound's information lies), times
+ *                            the sample's noise-correlation factor
  * @param detectionLimit      three standard uncertainties, in ppm
  * @param reportingUnit       unit for {@link #reported(double)}
  * @param residuals           residual per region of the analyte, in the method's region order

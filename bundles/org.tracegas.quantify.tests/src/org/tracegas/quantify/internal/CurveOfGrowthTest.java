@@ -42,7 +42,7 @@ class CurveOfGrowthTest {
 
     private static double at(CurveOfGrowth c, double[][] coefficients, double u) {
         double a = 0;
-        for (int p = 0; p < CurveOfGrowth.MAX_DEGREE; p++) {
+        for (int p = 0; p < CurveOfGrowth.TERMS; p++) {
             a += coefficients[p][0] * c.shape(p, u);
         }
         return a;

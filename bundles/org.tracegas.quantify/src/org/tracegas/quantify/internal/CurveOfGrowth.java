@@ -8,17 +8,18 @@ import org.apache.commons.math3.linear.RealMatrix;
  * The curve of growth of one compound: its absorbance at every spectral point as a smooth, monotone function of
  * the amount, through the origin and fixed by the references.
  * <p>
- * Form: at each point a polynomial A = x1 v + x2 v^2 + x3 v^3 in the bent amount v = u / sqrt(1 + {@link #BEND}
- * |u|), u = amount / highest reference, fitted through the origin to the references by least squares; with three
- * references (or fewer, then of their number's degree) it passes through every reference. Why: the absorbance a
+ * Form: at each point A = x1 u + x2 v + x3 v^2, u = amount / highest reference, v = u / sqrt(1 + {@link #BEND} |u|)
+ * the bent amount, fitted through the origin to the references by least squares; with three references (or
+ * fewer, then with as many terms) it passes through every reference, and with one it is the Beer-Lambert line.
+ * Why: the absorbance a
  * spectrometer reports for a line narrower than its line shape is the logarithm of the line-shape average of
  * exp(-k amount) (Beer-Lambert law applied before the instrument, as Griffith, Appl. Spectrosc. 50, 59 (1996)
  * describes), an analytic function of the amount that starts as k u and bends over smoothly towards square-root
- * growth as the line saturates; the bent variable takes up most of that bend, a low-order polynomial through the
- * origin the rest, and three references fix it.
+ * growth as the line saturates; the bent variable takes up most of that bend, and three references fix how much
+ * of it each point shows.
  * Monotone: where the polynomial would turn back anywhere between zero and the highest reference (weak points, where
- * the references hold little but noise), the degree is lowered until it does not; the first degree, monotone in the
- * amount, always is. Overlapping lines of different compounds are added as absorbances: exact where they do not
+ * the references hold little but noise), terms are dropped from the last until it does not; the Beer-Lambert line
+ * always is. Overlapping lines of different compounds are added as absorbances: exact where they do not
  * overlap within the instrument line shape, and in error where saturated lines of two compounds coincide within
  * it, since the instrument averages their joint transmittance. Above the highest reference the polynomial is an
  * extrapolation, and results there are flagged.
@@ -28,8 +29,8 @@ import org.apache.commons.math3.linear.RealMatrix;
  */
 public final class CurveOfGrowth {
 
-    /** Highest degree of the polynomial in the bent amount. */
-    public static final int MAX_DEGREE = 3;
+    /** Number of terms of the curve, the most references it can pass through. */
+    public static final int TERMS = 3;
 
     /**
      * Bend of the amount variable, v = u / sqrt(1 + BEND |u|), with u the amount over the highest reference: the
@@ -37,7 +38,7 @@ public final class CurveOfGrowth {
      * (Ladenburg-Reiche growth, in the Rodgers-Williams approximation W = S u / sqrt(1 + S u / (4 gamma)), from
      * memory), here with the bend at the highest reference. Checked on line-by-line spectra of single compounds
      * (the accuracy test's generator): the error between references falls from 3e-3 of the highest amount for a
-     * polynomial in u (BEND = 0) to 1e-4 with BEND = 1; bends of 3 and more do worse on weak compounds.
+     * cubic polynomial in u to 1e-4 with BEND = 1; a bend of 2 or 4 does worse (5e-4).
      */
     static final double BEND = 1;
 
@@ -45,7 +46,7 @@ public final class CurveOfGrowth {
     private final double[] amounts;               // ascending ppm·m
     private final BandLimitedResampler[] value;   // absorbance of each reference
     private final BandLimitedResampler[] slope;   // its derivative in wavenumber
-    private final double[][][] fits;              // [degree - 1][term][reference]: least squares through 0
+    private final double[][][] fits;              // [terms - 1][term][reference]: least squares through 0
 
     /**
      * @param compound   compound name, for messages
@@ -68,10 +69,10 @@ public final class CurveOfGrowth {
             slope[i] = new BandLimitedResampler(first[i], step[i],
                     BandLimitedDerivative.of(absorbance[i], step[i], 1));
         }
-        int degrees = Math.min(m, MAX_DEGREE);
-        this.fits = new double[degrees][][];
+        int most = Math.min(m, TERMS);
+        this.fits = new double[most][][];
         double highest = amounts[m - 1];
-        for (int d = 1; d <= degrees; d++) {
+        for (int d = 1; d <= most; d++) {
             RealMatrix x = new Array2DRowRealMatrix(m, d);
             for (int i = 0; i < m; i++) {
                 for (int p = 0; p < d; p++) {
@@ -83,10 +84,10 @@ public final class CurveOfGrowth {
         }
     }
 
-    /** Term p of the curve at scaled amount u: v^(p+1) with v = u / sqrt(1 + beta |u|). */
+    /** Term p of the curve at scaled amount u: u, v, v^2 with v = u / sqrt(1 + BEND |u|). */
     public double shape(int p, double u) {
         double v = u / Math.sqrt(1 + BEND * Math.abs(u));
-        return p == 0 ? v : p == 1 ? v * v : v * v * v;
+        return p == 0 ? u : p == 1 ? v : v * v;
     }
 
     /** Derivative of term p by the scaled amount. */
@@ -94,7 +95,7 @@ public final class CurveOfGrowth {
         double q = 1 + BEND * Math.abs(u);
         double v = u / Math.sqrt(q);
         double dv = (1 + BEND * Math.abs(u) / 2) / (q * Math.sqrt(q));
-        return p == 0 ? dv : p == 1 ? 2 * v * dv : 3 * v * v * dv;
+        return p == 0 ? 1 : p == 1 ? dv : 2 * v * dv;
     }
 
     public String compound() {
@@ -110,8 +111,9 @@ public final class CurveOfGrowth {
     }
 
     /**
-     * The polynomial coefficients at the fit points, [power - 1][point], with the amount scaled by
-     * {@link #highestAmount()}; and if asked for, their derivatives in wavenumber in the same layout.
+     * The coefficients of the curve's terms ({@link #shape(int, double)}) at the fit points, [term][point], with
+     * the amount scaled by {@link #highestAmount()}; and if asked for, their derivatives in wavenumber in the same
+     * layout.
      *
      * @param label       names the fit in messages
      * @param wavenumbers wavenumber of each fit point
@@ -121,11 +123,11 @@ public final class CurveOfGrowth {
     public double[][][] onPoints(String label, double[] wavenumbers, boolean derivative) {
         int n = wavenumbers.length;
         int m = amounts.length;
-        double[][] coefficients = new double[MAX_DEGREE][n];
-        double[][] slopes = derivative ? new double[MAX_DEGREE][n] : null;
+        double[][] coefficients = new double[TERMS][n];
+        double[][] slopes = derivative ? new double[TERMS][n] : null;
         double[] a = new double[m];
         double[] da = new double[m];
-        double[] x = new double[MAX_DEGREE];
+        double[] x = new double[TERMS];
         for (int j = 0; j < n; j++) {
             double nu = wavenumbers[j];
             for (int i = 0; i < m; i++) {
@@ -144,13 +146,13 @@ public final class CurveOfGrowth {
                 }
                 d--;
             }
-            for (int p = 0; p < MAX_DEGREE; p++) {
+            for (int p = 0; p < TERMS; p++) {
                 coefficients[p][j] = x[p];
             }
             if (derivative) {
                 // the derivative of the same per-point fit: the curve of growth at a slightly moved wavenumber
                 apply(fits[d - 1], da, x, d);
-                for (int p = 0; p < MAX_DEGREE; p++) {
+                for (int p = 0; p < TERMS; p++) {
                     slopes[p][j] = x[p];
                 }
             }
@@ -158,9 +160,9 @@ public final class CurveOfGrowth {
         return new double[][][] {coefficients, slopes};
     }
 
-    private static void apply(double[][] fit, double[] a, double[] x, int degree) {
+    private static void apply(double[][] fit, double[] a, double[] x, int terms) {
         java.util.Arrays.fill(x, 0);
-        for (int p = 0; p < degree; p++) {
+        for (int p = 0; p < terms; p++) {
             double sum = 0;
             for (int i = 0; i < a.length; i++) {
                 sum += fit[p][i] * a[i];
@@ -172,14 +174,14 @@ public final class CurveOfGrowth {
     /** Whether the curve with these coefficients keeps the sign of its value at u = 1 in its slope over [0, 1]. */
     private boolean monotone(double[] x) {
         double end = 0;
-        for (int p = 0; p < MAX_DEGREE; p++) {
+        for (int p = 0; p < TERMS; p++) {
             end += x[p] * shape(p, 1);
         }
         double sign = Math.signum(end);
         for (int i = 0; i <= MONOTONE_CHECKS; i++) {
             double u = i / (double) MONOTONE_CHECKS;
             double slope = 0;
-            for (int p = 0; p < MAX_DEGREE; p++) {
+            for (int p = 0; p < TERMS; p++) {
                 slope += x[p] * shapeSlope(p, u);
             }
             if (sign * slope < 0) {

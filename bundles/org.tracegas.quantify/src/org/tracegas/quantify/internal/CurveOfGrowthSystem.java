@@ -12,10 +12,10 @@ import org.tracegas.quantify.ShiftTerm;
  * polynomials, and optionally a relative wavenumber scale of the sample; amounts, baselines and scale are fitted
  * together by Gauss-Newton steps with Levenberg-Marquardt damping and the analytic Jacobian.
  * <p>
- * Why it is fast: at every point the model is a sum of fixed vectors (the polynomial coefficients of each compound,
+ * Why it is fast: at every point the model is a sum of fixed vectors (the curve coefficients of each compound,
  * their wavenumber derivatives times the wavenumber for the scale, the baseline terms) times coefficients that
- * depend on the parameters only (u, u^2, u^3, scale u^p, baseline values). The Gram matrix G of those vectors is
- * formed once per method and axis, the sample enters only through its projection b onto them (one pass over the
+ * depend on the parameters only (the curve terms u, v, v^2 of each amount, the scale times each, the baseline
+ * values). The Gram matrix G of those vectors is formed once per method and axis, the sample enters only through its projection b onto them (one pass over the
  * points), and each iteration works on the small vectors: the weighted residual sum of squares is
  * y'Wy - 2 beta'b + beta'G beta, its Gauss-Newton matrix J'WJ = D'GD and gradient D'(b - G beta) with D the
  * derivative of the coefficients beta by the parameters. No iteration touches the spectrum, and none decomposes
@@ -86,8 +86,8 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         this.tolerance = tolerance;
         this.maxIterations = maxIterations;
         int n = points.size();
-        int powers = CurveOfGrowth.MAX_DEGREE;
-        this.vectors = powers * nc * (scale ? 2 : 1) + nb;
+        int terms = CurveOfGrowth.TERMS;
+        this.vectors = terms * nc * (scale ? 2 : 1) + nb;
         this.parameters = nc + nb + (scale ? 1 : 0);
         if (n <= parameters) {
             throw new IllegalArgumentException(label + " has " + n + " points for " + parameters
@@ -100,8 +100,8 @@ public final class CurveOfGrowthSystem implements SystemSolver {
             CurveOfGrowth curve = curves.get(c);
             lowest[c] = curve.lowestAmount() / curve.highestAmount();
             double[][][] onPoints = curve.onPoints(label, nu, scale);
-            for (int p = 0; p < powers; p++) {
-                basis[powerVector(c, p)] = onPoints[0][p];
+            for (int p = 0; p < terms; p++) {
+                basis[termVector(c, p)] = onPoints[0][p];
                 if (scale) {
                     // the sample's lines at nu (1 + s): A(nu / (1 + s)) = A(nu) - s nu dA/dnu to first order
                     double[] moved = new double[n];
@@ -118,8 +118,8 @@ public final class CurveOfGrowthSystem implements SystemSolver {
             CurveOfGrowth curve = curves.get(c);
             for (int j = 0; j < n; j++) {
                 double slope = 0;
-                for (int p = 0; p < powers; p++) {
-                    slope += curve.shapeSlope(p, INFORMATION_AMOUNT) * basis[powerVector(c, p)][j];
+                for (int p = 0; p < terms; p++) {
+                    slope += curve.shapeSlope(p, INFORMATION_AMOUNT) * basis[termVector(c, p)][j];
                 }
                 information[c][j] = slope * slope * (weights == null ? 1 : weights[j]);
                 informationSum[c] += information[c][j];
@@ -148,12 +148,12 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         }
         // which basis vectors each parameter moves: the sparsity of D = d beta / d theta
         this.entryStart = new int[parameters + 1];
-        int[] index = new int[nc * powers * (scale ? 3 : 1) + nb];
+        int[] index = new int[nc * terms * (scale ? 3 : 1) + nb];
         int e = 0;
         for (int c = 0; c < nc; c++) {
             entryStart[c] = e;
-            for (int p = 0; p < powers; p++) {
-                index[e++] = powerVector(c, p);
+            for (int p = 0; p < terms; p++) {
+                index[e++] = termVector(c, p);
                 if (scale) {
                     index[e++] = scaleVector(c, p);
                 }
@@ -166,7 +166,7 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         if (scale) {
             entryStart[nc + nb] = e;
             for (int c = 0; c < nc; c++) {
-                for (int p = 0; p < powers; p++) {
+                for (int p = 0; p < terms; p++) {
                     index[e++] = scaleVector(c, p);
                 }
             }
@@ -176,16 +176,16 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         this.work = ThreadLocal.withInitial(Work::new);
     }
 
-    private int powerVector(int compound, int power) {
-        return compound * CurveOfGrowth.MAX_DEGREE + power;
+    private int termVector(int compound, int term) {
+        return compound * CurveOfGrowth.TERMS + term;
     }
 
-    private int scaleVector(int compound, int power) {
-        return (nc + compound) * CurveOfGrowth.MAX_DEGREE + power;
+    private int scaleVector(int compound, int term) {
+        return (nc + compound) * CurveOfGrowth.TERMS + term;
     }
 
     private int baselineVector(int term) {
-        return CurveOfGrowth.MAX_DEGREE * nc * (scale ? 2 : 1) + term;
+        return CurveOfGrowth.TERMS * nc * (scale ? 2 : 1) + term;
     }
 
     private static double dot(double[] a, double[] b, int n) {
@@ -336,10 +336,10 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         for (int c = 0; c < nc; c++) {
             CurveOfGrowth curve = curves.get(c);
             double u = theta[c];
-            for (int p = 0; p < CurveOfGrowth.MAX_DEGREE; p++) {
+            for (int p = 0; p < CurveOfGrowth.TERMS; p++) {
                 double f = curve.shape(p, u);
                 double d = curve.shapeSlope(p, u);
-                w.beta[powerVector(c, p)] = f;
+                w.beta[termVector(c, p)] = f;
                 w.entryWeight[e++] = d;
                 if (scale) {
                     w.beta[scaleVector(c, p)] = s * f;
@@ -353,7 +353,7 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         }
         if (scale) {
             for (int c = 0; c < nc; c++) {
-                for (int p = 0; p < CurveOfGrowth.MAX_DEGREE; p++) {
+                for (int p = 0; p < CurveOfGrowth.TERMS; p++) {
                     w.entryWeight[e++] = curves.get(c).shape(p, theta[c]);
                 }
             }
@@ -584,16 +584,16 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         return c -> {
             double s = scale ? theta[parameters - 1] : 0;
             double[] out = new double[points.size()];
-            for (int p = 0; p < CurveOfGrowth.MAX_DEGREE; p++) {
-                double power = curves.get(c).shape(p, theta[c]);
-                double[] v = basis[powerVector(c, p)];
+            for (int p = 0; p < CurveOfGrowth.TERMS; p++) {
+                double term = curves.get(c).shape(p, theta[c]);
+                double[] v = basis[termVector(c, p)];
                 for (int j = 0; j < out.length; j++) {
-                    out[j] += power * v[j];
+                    out[j] += term * v[j];
                 }
                 if (scale) {
                     double[] moved = basis[scaleVector(c, p)];
                     for (int j = 0; j < out.length; j++) {
-                        out[j] += s * power * moved[j];
+                        out[j] += s * term * moved[j];
                     }
                 }
             }

@@ -1,6 +1,5 @@
 package org.tracegas.benchmarks;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 import java.util.concurrent.TimeUnit;
@@ -12,8 +11,6 @@ import org.openjdk.jmh.annotations.OutputTimeUnit;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
-import org.tracegas.quantify.AnalysisRegion;
-import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.CompoundResult;
 import org.tracegas.quantify.FitAlgorithm;
 import org.tracegas.quantify.PreparedMethod;
@@ -22,9 +19,7 @@ import org.tracegas.quantify.Quantifier;
 import org.tracegas.quantify.ReferenceSpectrum;
 import org.tracegas.quantify.Sample;
 import org.tracegas.quantify.ShiftTerm;
-import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
-import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
 
 /**
@@ -40,10 +35,7 @@ import org.tracegas.spectrum.Spectrum;
 @OutputTimeUnit(TimeUnit.MICROSECONDS)
 public class CurveOfGrowthBenchmark {
 
-    private static final int COMPOUNDS = 20;
-    private static final int POINTS = 4000;
     private static final double[] AMOUNTS = {25, 50, 100};
-    private static final SpectralAxis AXIS = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1000.0, 0.5, POINTS);
 
     private Quantifier linear;
     private Quantifier interpolated;
@@ -56,22 +48,13 @@ public class CurveOfGrowthBenchmark {
     @Setup
     public void setUp() {
         Random random = new Random(2026);
-        List<String> names = new ArrayList<>();
-        List<double[]> absorptivities = new ArrayList<>();
-        for (int c = 0; c < COMPOUNDS; c++) {
-            names.add(String.format("G%02d", c + 1));
-            absorptivities.add(lines(random, 60));
-        }
-        List<AnalysisRegion> regions = List.of(AnalysisRegion.of(1000, 1666, 1), AnalysisRegion.of(1666.5, 2333, 1),
-                AnalysisRegion.of(2333.5, 2999.5, 1));
+        TwentyCompoundDesign design = new TwentyCompoundDesign(random, 4e-3);
         QuantificationMethod.Builder b = QuantificationMethod.builder("twenty compounds").pathLengthMetres(10);
-        for (int c = 0; c < COMPOUNDS; c++) {
-            List<String> others = new ArrayList<>(names);
-            others.remove(c);
-            b.analyte(new Analyte(names.get(c), others, regions));
+        for (int c = 0; c < TwentyCompoundDesign.COMPOUNDS; c++) {
+            b.analyte(design.analyte(c));
             for (double amount : AMOUNTS) {
-                b.reference(new ReferenceSpectrum(names.get(c), new Spectrum(AXIS,
-                        saturated(absorptivities.get(c), amount), Ordinate.ABSORBANCE), amount));
+                b.reference(new ReferenceSpectrum(design.name(c), new Spectrum(TwentyCompoundDesign.AXIS,
+                        saturated(design.absorptivity(c), amount), Ordinate.ABSORBANCE), amount));
             }
         }
         linear = quantifier(b.nonlinearity(false).build());
@@ -79,39 +62,23 @@ public class CurveOfGrowthBenchmark {
         b.nonlinearity(false).algorithm(FitAlgorithm.CURVE_OF_GROWTH);
         curveOfGrowth = quantifier(b.build());
         curveOfGrowthWithScale = quantifier(b.shiftTerm(ShiftTerm.SCALE).build());
-        double[] mixture = new double[POINTS];
-        for (int c = 0; c < COMPOUNDS; c++) {
-            double[] a = saturated(absorptivities.get(c), 5 + 90 * random.nextDouble());
-            for (int i = 0; i < POINTS; i++) {
+        double[] mixture = new double[TwentyCompoundDesign.POINTS];
+        for (int c = 0; c < TwentyCompoundDesign.COMPOUNDS; c++) {
+            double[] a = saturated(design.absorptivity(c), 5 + 90 * random.nextDouble());
+            for (int i = 0; i < mixture.length; i++) {
                 mixture[i] += a[i];
             }
         }
-        for (int i = 0; i < POINTS; i++) {
+        for (int i = 0; i < mixture.length; i++) {
             mixture[i] += 0.01 + 5e-4 * random.nextGaussian();
         }
-        sample = Sample.of(new Spectrum(AXIS, mixture, Ordinate.ABSORBANCE));
-        matrix = new double[COMPOUNDS][];
-        for (int c = 0; c < COMPOUNDS; c++) {
-            matrix[c] = absorptivities.get(c).clone();
-        }
+        sample = Sample.of(new Spectrum(TwentyCompoundDesign.AXIS, mixture, Ordinate.ABSORBANCE));
+        matrix = design.matrix();
         vector = mixture.clone();
     }
 
     private static Quantifier quantifier(QuantificationMethod method) {
-        return new Quantifier(PreparedMethod.prepare(method, AXIS), "library", "bench", false);
-    }
-
-    private static double[] lines(Random random, int count) {
-        double[] a = new double[POINTS];
-        for (int l = 0; l < count; l++) {
-            double centre = 1000 + 2000 * random.nextDouble();
-            double strength = 4e-3 * random.nextDouble();
-            for (int i = 0; i < POINTS; i++) {
-                double d = (AXIS.get(i) - centre) / 1.0;
-                a[i] += strength / (1 + d * d);
-            }
-        }
-        return a;
+        return new Quantifier(PreparedMethod.prepare(method, TwentyCompoundDesign.AXIS), "library", "bench", false);
     }
 
     /** Absorbance at an amount, bending over as it grows: k a / (1 + k a). */
@@ -146,15 +113,6 @@ public class CurveOfGrowthBenchmark {
     /** The yardstick: a plain 20 x 4,000 matrix times a 4,000-vector. */
     @Benchmark
     public double[] matrixVector() {
-        double[] out = new double[COMPOUNDS];
-        for (int c = 0; c < COMPOUNDS; c++) {
-            double[] row = matrix[c];
-            double sum = 0;
-            for (int i = 0; i < POINTS; i++) {
-                sum += row[i] * vector[i];
-            }
-            out[c] = sum;
-        }
-        return out;
+        return TwentyCompoundDesign.matrixVector(matrix, vector);
     }
 }
