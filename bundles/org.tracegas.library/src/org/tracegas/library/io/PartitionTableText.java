@@ -44,8 +44,8 @@ public final class PartitionTableText {
                 throw new FileFormatException(file, i + 1, "", "expected a temperature and Q, found " + f.length
                         + " fields");
             }
-            double temperature = number(file, i + 1, "temperature", f[0]);
-            double q = number(file, i + 1, "Q", f[1]);
+            double temperature = NumberField.parse(file, i + 1, "temperature", f[0]);
+            double q = NumberField.parse(file, i + 1, "Q", f[1]);
             if (!(q > 0)) {
                 throw new FileFormatException(file, i + 1, "Q", "must be positive, was " + f[1]);
             }
@@ -90,17 +90,5 @@ public final class PartitionTableText {
 
     private static String stripped(double t) {
         return t == Math.rint(t) ? Long.toString((long) t) : Double.toString(t);
-    }
-
-    private static double number(Path file, int line, String field, String text) throws FileFormatException {
-        try {
-            double v = Double.parseDouble(text);
-            if (Double.isFinite(v)) {
-                return v;
-            }
-        } catch (NumberFormatException e) {
-            // reported below with the file, line and column
-        }
-        throw new FileFormatException(file, line, field, "'" + text + "' is not a finite number");
     }
 }

@@ -45,8 +45,8 @@ public final class TwoColumnTextSource implements ReferenceSpectrumSource {
                     x = Arrays.copyOf(x, 2 * n);
                     y = Arrays.copyOf(y, 2 * n);
                 }
-                x[n] = parse(file, lineNumber, "wavenumber", parts[0]);
-                y[n] = parse(file, lineNumber, "absorbance", parts[1]);
+                x[n] = NumberField.parse(file, lineNumber, "wavenumber", parts[0]);
+                y[n] = NumberField.parse(file, lineNumber, "absorbance", parts[1]);
                 if (n > 0 && (x[n] == x[n - 1] || (n > 1 && (x[n] > x[n - 1]) != (x[1] > x[0])))) {
                     throw new FileFormatException(file, lineNumber, "wavenumber",
                             "wavenumbers must rise or fall strictly, " + x[n - 1] + " is followed by " + x[n]);
@@ -58,18 +58,6 @@ public final class TwoColumnTextSource implements ReferenceSpectrumSource {
             throw new FileFormatException(file, 0, "", "needs at least 2 data lines, found " + n);
         }
         return new Spectrum(axis(Arrays.copyOf(x, n)), Arrays.copyOf(y, n), Ordinate.ABSORBANCE);
-    }
-
-    private static double parse(Path file, int line, String field, String text) throws FileFormatException {
-        try {
-            double v = Double.parseDouble(text);
-            if (Double.isFinite(v)) {
-                return v;
-            }
-        } catch (NumberFormatException e) {
-            // reported below with file, line and field
-        }
-        throw new FileFormatException(file, line, field, "'" + text + "' is not a finite number");
     }
 
     private static SpectralAxis axis(double[] x) {
