@@ -83,10 +83,10 @@ grep -qF "as $format" "$work/import2.log" && fail "the removed reader still read
 step "the workspace's audit trail holds the software of each opening that changed it"
 h2=$(ls "$installation"/plugins/com.h2database_*.jar | head -n 1)
 audit=$(ls "$installation"/plugins/org.tracegas.audit_*.jar | head -n 1)
-java -cp "$h2:$audit" org.h2.tools.Shell -url "jdbc:h2:file:$ws/db/workspace" -user "" -password "" \
-  -sql "SELECT action, new_value, reason FROM audit_record WHERE object_type = 'installed-software' ORDER BY seq" \
-  > "$work/audit.txt"
-cat "$work/audit.txt"
+printf 'maxwidth 100000\nSELECT action, new_value, reason FROM audit_record WHERE object_type = %s ORDER BY seq;\n' \
+  "'installed-software'" | java -cp "$h2:$audit" org.h2.tools.Shell -url "jdbc:h2:file:$ws/db/workspace" -user "" \
+  -password "" > "$work/audit.txt"
+grep -E "^(ACTION|CREATE|CHANGE) " "$work/audit.txt"
 [ "$(grep -c 'Tracegas Workbench' "$work/audit.txt")" -eq 3 ] || fail "expected 3 software records (before, with, after the add-on)"
 grep 'CHANGE' "$work/audit.txt" | grep -q "with org.example.lab.kestrel.feature 1.0.0" \
   || fail "no record of the software with the add-on"

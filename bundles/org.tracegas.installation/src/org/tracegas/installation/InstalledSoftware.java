@@ -28,6 +28,7 @@ import org.tracegas.store.WorkspaceStore;
  */
 public record InstalledSoftware(String location, String product, List<Addon> addons, List<AddonChange> history) {
 
+    private static final String INSTALL_AREA = "osgi.install.area";
     /** How many of the latest logged changes the audit record names. */
     static final int CHANGES_NAMED = 5;
 
@@ -76,7 +77,7 @@ public record InstalledSoftware(String location, String product, List<Addon> add
         if (roots.isEmpty()) {
             return Optional.empty();
         }
-        Path location = folder(System.getProperty("osgi.install.area"));
+        Path location = folder(property(INSTALL_AREA));
         return Optional.of(new InstalledSoftware(location.toString(), product(roots.get()), roots.get().addons(),
                 AddonLog.read(location.resolve("p2").resolve(AddonLog.FILE))));
     }
@@ -95,17 +96,21 @@ public record InstalledSoftware(String location, String product, List<Addon> add
     }
 
     private static Optional<P2Profile.Roots> selfProfile() {
-        Bundle self = FrameworkUtil.getBundle(InstalledSoftware.class);
-        String productId = System.getProperty("eclipse.product");
-        if (self == null || self.getBundleContext() == null || productId == null
-                || System.getProperty("osgi.install.area") == null) {
+        String productId = property("eclipse.product");
+        if (productId == null || property(INSTALL_AREA) == null) {
             return Optional.empty();
         }
         try {
-            return P2Profile.self(self.getBundleContext(), productId);
+            return P2Profile.self(FrameworkUtil.getBundle(InstalledSoftware.class).getBundleContext(), productId);
         } catch (NoClassDefFoundError e) {
             return Optional.empty(); // p2 is not part of this runtime
         }
+    }
+
+    /** A framework property (config.ini), or null outside OSGi. */
+    private static String property(String name) {
+        Bundle self = FrameworkUtil.getBundle(InstalledSoftware.class);
+        return self == null || self.getBundleContext() == null ? null : self.getBundleContext().getProperty(name);
     }
 
     private static Path folder(String installArea) throws IOException {
