@@ -52,4 +52,50 @@ class UncertaintyBudgetTest {
                 () -> UncertaintyBudget.of("y", 2, "", two, new double[][] {{1, 0.5}, {0.2, 1}}, 2));
         assertTrue(e.getMessage().contains("r[0][1]"), e.getMessage());
     }
+
+    @Test
+    void welchSatterthwaiteOfAWorkedPair() {
+        // JCGM 100:2008 G.4.1: u1 = 1 with nu1 = 4 and u2 = 1 exactly known: nu_eff = (1 + 1)^2 / (1^4 / 4) = 16,
+        // k95 = t95(16) = 2.12 (Table G.2)
+        UncertaintyBudget b = UncertaintyBudget.of("y", 10, "ppm", List.of(
+                new UncertaintyComponent("repeatability", 10, 1, 1, "ppm", 4),
+                new UncertaintyComponent("reference", 1, 1, 1, "ppm")));
+        assertEquals(16.0, b.effectiveDegreesOfFreedom(), 1e-12);
+        assertEquals(2.12, b.coverageFactorFor(0.95), 0.005);
+    }
+
+    @Test
+    void welchSatterthwaiteCoverageHoldsWhereKTwoFallsShort() {
+        // Monte Carlo as the outside truth: a mean of 3 readings (Type A, nu = 2, true u = 1) plus an exactly
+        // known Type B input of u = 0.3; over 20000 draws the interval y +- t95(nu_eff) u_c holds the truth
+        // 92-97 % of the time (Welch-Satterthwaite is an approximation), y +- 2 u_c well below 90 %
+        java.util.Random rnd = new java.util.Random(3);
+        int draws = 20000;
+        int welch = 0;
+        int two = 0;
+        for (int i = 0; i < draws; i++) {
+            double[] x = new double[3];
+            double mean = 0;
+            for (int j = 0; j < 3; j++) {
+                x[j] = Math.sqrt(3) * rnd.nextGaussian();
+                mean += x[j] / 3;
+            }
+            double ss = 0;
+            for (double v : x) {
+                ss += (v - mean) * (v - mean);
+            }
+            double uA = Math.sqrt(ss / 2 / 3);
+            double y = mean + 0.3 * rnd.nextGaussian();
+            UncertaintyBudget b = UncertaintyBudget.of("y", y, "ppm", List.of(
+                    new UncertaintyComponent("repeatability", y, uA, 1, "ppm", 2),
+                    new UncertaintyComponent("calibration", 0, 0.3, 1, "ppm")));
+            double uc = b.combinedStandardUncertainty();
+            welch += Math.abs(y) <= b.coverageFactorFor(0.95) * uc ? 1 : 0;
+            two += Math.abs(y) <= 2 * uc ? 1 : 0;
+        }
+        double welchCoverage = 100.0 * welch / draws;
+        double twoCoverage = 100.0 * two / draws;
+        assertTrue(welchCoverage >= 92 && welchCoverage <= 97, welchCoverage + " %");
+        assertTrue(twoCoverage < 90, twoCoverage + " %");
+    }
 }

@@ -5,6 +5,7 @@ import java.util.List;
 import java.util.function.Predicate;
 
 import org.tracegas.qa.internal.Require;
+import org.tracegas.qa.internal.StudentT;
 
 /**
  * Immutable GUM uncertainty budget of one result y: u_c²(y) = Σ c_i²u_i² + 2 Σ_{i<j} c_i c_j u_i u_j r_ij
@@ -133,6 +134,38 @@ public final class UncertaintyBudget {
             throw new IllegalStateException("the correlation matrix gives a negative variance " + variance);
         }
         return Math.sqrt(variance);
+    }
+
+    /**
+     * Effective degrees of freedom by the Welch-Satterthwaite formula, nu_eff = u_c^4 / sum (c_i u_i)^4 / nu_i
+     * (JCGM 100:2008 G.4.1), for uncorrelated inputs; positive infinity when every input has infinite degrees
+     * of freedom.
+     *
+     * @throws IllegalStateException for a budget with correlated inputs, where the formula does not hold
+     */
+    public double effectiveDegreesOfFreedom() {
+        if (correlation != null) {
+            throw new IllegalStateException("the Welch-Satterthwaite formula needs uncorrelated inputs; the budget of "
+                    + quantity + " has a correlation matrix");
+        }
+        double uc = combinedStandardUncertainty();
+        double denominator = 0;
+        for (UncertaintyComponent c : components) {
+            if (Double.isFinite(c.degreesOfFreedom())) {
+                double ui = c.contribution();
+                denominator += ui * ui * ui * ui / c.degreesOfFreedom();
+            }
+        }
+        return denominator == 0 ? Double.POSITIVE_INFINITY : uc * uc * uc * uc / denominator;
+    }
+
+    /**
+     * The coverage factor of a coverage probability from the t distribution with the effective degrees of
+     * freedom, k_p = t_p(nu_eff) (JCGM 100:2008 G.4.1, G.6.4), rounding nu_eff down as G.4.1 note 1 says.
+     */
+    public double coverageFactorFor(double probability) {
+        double nu = effectiveDegreesOfFreedom();
+        return StudentT.twoSidedQuantile(probability, Double.isInfinite(nu) ? nu : Math.max(1, Math.floor(nu)));
     }
 
     /** U = k·u_c(y). */
