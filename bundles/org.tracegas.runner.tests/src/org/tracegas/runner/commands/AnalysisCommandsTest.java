@@ -379,6 +379,7 @@ class AnalysisCommandsTest {
         assertEquals(ExitCode.OK, run(plus(concat(asReviewer, "report-sign", sign), "--content-hash",
                 hash.toUpperCase(Locale.ROOT), "--comment", "checked against the raw files")), err.toString());
         assertTrue(out.toString(StandardCharsets.UTF_8).contains("REVIEWED by Rhea Viewer"), out.toString());
+        assertTrue(printed("Chain anchor: ").matches("\\d+:[0-9a-f]{64}"), "the signer keeps the chain anchor");
 
         out.reset();
         assertEquals(ExitCode.OK, run(concat(where, "report", "--plan", reportPlan.toString(), "--out",

@@ -95,6 +95,9 @@ public final class ReportSignCommand implements Command {
                         meaning, options.has("--comment") ? options.text("--comment") : null);
                 context.out().println("Report " + reportId + " signed: " + s.manifestation());
                 context.out().println("Content hash (SHA-256): " + s.contentSha256());
+                // the signature is now the chain's newest record: kept outside, it anchors the chain
+                org.tracegas.audit.ChainAnchor head = org.tracegas.audit.ChainAnchor.headOf(store.audit().verify());
+                context.out().println("Chain anchor: " + (head == null ? "none" : head.text()));
                 return ExitCode.OK;
             } catch (SignatureRefusedException e) {
                 context.err().println("tracegas report-sign: signature refused: " + e.getMessage());
