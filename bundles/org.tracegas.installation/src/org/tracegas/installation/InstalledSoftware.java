@@ -109,8 +109,12 @@ public record InstalledSoftware(String location, String product, List<Addon> add
 
     /** A framework property (config.ini), or null outside OSGi. */
     private static String property(String name) {
-        Bundle self = FrameworkUtil.getBundle(InstalledSoftware.class);
-        return self == null || self.getBundleContext() == null ? null : self.getBundleContext().getProperty(name);
+        try {
+            Bundle self = FrameworkUtil.getBundle(InstalledSoftware.class);
+            return self == null || self.getBundleContext() == null ? null : self.getBundleContext().getProperty(name);
+        } catch (NoClassDefFoundError e) {
+            return null; // plain Java without the OSGi framework: no installation
+        }
     }
 
     private static Path folder(String installArea) throws IOException {
