@@ -90,6 +90,6 @@ grep -E "^(ACTION|CREATE|CHANGE) " "$work/audit.txt"
 [ "$(grep -c 'Tracegas Workbench' "$work/audit.txt")" -eq 3 ] || fail "expected 3 software records (before, with, after the add-on)"
 grep 'CHANGE' "$work/audit.txt" | grep -q "with org.example.lab.kestrel.feature 1.0.0" \
   || fail "no record of the software with the add-on"
-grep -q "$(id -un) install org.example.lab.kestrel.feature from file:" "$work/audit.txt" \
+grep -q "${USER:-$(id -un)} install org.example.lab.kestrel.feature from file:" "$work/audit.txt" \
   || fail "the record does not say who installed the add-on"
 step "done"

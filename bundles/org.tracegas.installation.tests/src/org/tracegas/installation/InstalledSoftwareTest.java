@@ -35,6 +35,21 @@ class InstalledSoftwareTest {
     }
 
     @Test
+    void resultsNameALongAddonListByCountAndDigestWithinTheirColumn() {
+        InstalledSoftware one = new InstalledSoftware("/opt/tracegas", "Tracegas Workbench 0.1.0.1", List.of(READER),
+                List.of());
+        assertEquals(one.description(), one.resultSoftware(), "fits: named in full");
+        InstalledSoftware three = new InstalledSoftware("/opt/tracegas", "Tracegas Workbench 0.1.0.1",
+                List.of(READER, new Addon("org.example.lab.step.feature", "2.1.0"),
+                        new Addon("org.example.lab.check.feature", "3.0.0")), List.of());
+        assertEquals(154, three.description().length());
+        // digest: `printf %s '<description>' | sha256sum` (GNU coreutils), first 16 hex digits
+        assertEquals("Tracegas Workbench 0.1.0.1 with 3 add-ons #2b97cdcb204383dc", three.resultSoftware());
+        assertTrue(three.resultSoftware().length() <= InstalledSoftware.RESULT_SOFTWARE_LENGTH);
+        assertTrue(three.reason().contains("results name it \"" + three.resultSoftware() + "\""), three.reason());
+    }
+
+    @Test
     void theTestRuntimeIsNoInstallationThatP2Manages() throws Exception {
         assertTrue(InstalledSoftware.running().isEmpty());
         assertEquals("fallback", InstalledSoftware.describeRunning("fallback"));

@@ -3,7 +3,11 @@ package org.tracegas.installation;
 import java.io.IOException;
 import java.net.URI;
 import java.net.URISyntaxException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -18,7 +22,7 @@ import org.tracegas.store.WorkspaceStore;
 /**
  * The software of an installation: the workbench release and the add-on features installed into it, read
  * from the installation's p2 profile, with the changes {@code tracegas-addons} logged. Results record its
- * {@link #description()} as their software, so a result computed with a lab's reader names that reader's
+ * {@link #resultSoftware()} as their software, so a result computed with a lab's reader names that reader's
  * version; {@link #recordIn} writes it to a workspace's audit trail whenever it changed.
  *
  * @param location where the software is installed (a folder), not blank
@@ -29,6 +33,9 @@ import org.tracegas.store.WorkspaceStore;
 public record InstalledSoftware(String location, String product, List<Addon> addons, List<AddonChange> history) {
 
     private static final String INSTALL_AREA = "osgi.install.area";
+    /** The length of the results' software column (store schema V1: software_version VARCHAR(100)). */
+    public static final int RESULT_SOFTWARE_LENGTH = 100;
+    private static final int DIGEST_DIGITS = 16;
     /** How many of the latest logged changes the audit record names. */
     static final int CHANGES_NAMED = 5;
 
@@ -46,14 +53,35 @@ public record InstalledSoftware(String location, String product, List<Addon> add
                 : product + " with " + addons.stream().map(Addon::toString).collect(Collectors.joining(", "));
     }
 
+    /**
+     * The software as results record it, at most {@value #RESULT_SOFTWARE_LENGTH} characters (the results'
+     * column): the {@link #description()} when it fits, else the release, the number of add-ons and the first
+     * digits of the description's SHA-256, which the audit record of this software names beside the full list.
+     */
+    public String resultSoftware() {
+        String full = description();
+        return full.length() <= RESULT_SOFTWARE_LENGTH ? full
+                : product + " with " + addons.size() + " add-ons #" + digest(full);
+    }
+
     /** Why the software differs from the last record: the latest changes tracegas-addons logged. */
     String reason() {
+        String named = "results name it \"" + resultSoftware() + "\"";
         if (history.isEmpty()) {
-            return "software of the installation at " + location + " (no add-on changes logged)";
+            return "software of the installation at " + location + "; " + named + " (no add-on changes logged)";
         }
         List<AddonChange> latest = history.subList(Math.max(0, history.size() - CHANGES_NAMED), history.size());
-        return "software of the installation at " + location + "; latest add-on changes: "
+        return "software of the installation at " + location + "; " + named + "; latest add-on changes: "
                 + latest.stream().map(AddonChange::toString).collect(Collectors.joining("; "));
+    }
+
+    private static String digest(String text) {
+        try {
+            byte[] hash = MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8));
+            return HexFormat.of().formatHex(hash).substring(0, DIGEST_DIGITS);
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("every Java runtime has SHA-256", e);
+        }
     }
 
     /**
@@ -83,11 +111,11 @@ public record InstalledSoftware(String location, String product, List<Addon> add
     }
 
     /**
-     * The running installation's {@link #description()} (its log is not read), or {@code fallback} when p2
+     * The running installation's {@link #resultSoftware()} (its log is not read), or {@code fallback} when p2
      * does not manage the installation.
      */
     public static String describeRunning(String fallback) {
-        return selfProfile().map(r -> new InstalledSoftware("-", product(r), r.addons(), List.of()).description())
+        return selfProfile().map(r -> new InstalledSoftware("-", product(r), r.addons(), List.of()).resultSoftware())
                 .orElse(fallback);
     }
 
@@ -109,8 +137,12 @@ public record InstalledSoftware(String location, String product, List<Addon> add
 
     /** A framework property (config.ini), or null outside OSGi. */
     private static String property(String name) {
-        Bundle self = FrameworkUtil.getBundle(InstalledSoftware.class);
-        return self == null || self.getBundleContext() == null ? null : self.getBundleContext().getProperty(name);
+        try {
+            Bundle self = FrameworkUtil.getBundle(InstalledSoftware.class);
+            return self == null || self.getBundleContext() == null ? null : self.getBundleContext().getProperty(name);
+        } catch (NoClassDefFoundError e) {
+            return null; // plain Java without the OSGi framework: no installation
+        }
     }
 
     private static Path folder(String installArea) throws IOException {

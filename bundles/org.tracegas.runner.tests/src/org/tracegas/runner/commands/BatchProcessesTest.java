@@ -283,7 +283,8 @@ class BatchProcessesTest {
                 QuantificationSetup.class, WorkspaceStore.class, Spectrum.class, InterferogramTransform.class,
                 BatchQuantifier.class, org.tracegas.library.io.FileFormatException.class,
                 org.tracegas.importer.container.ContainerReader.class, org.tracegas.model.Role.class,
-                org.tracegas.audit.AuditTrail.class, org.eclipse.emf.common.util.Enumerator.class,
+                org.tracegas.audit.AuditTrail.class, org.tracegas.installation.InstalledSoftware.class,
+                org.eclipse.emf.common.util.Enumerator.class,
                 org.eclipse.emf.ecore.EObject.class, PGSimpleDataSource.class));
         ClassLoader store = WorkspaceStore.class.getClassLoader();
         Class<?> flyway = Class.forName("org.flywaydb.core.Flyway", false, store);

@@ -1,5 +1,7 @@
 package org.tracegas.ui.internal;
 
+import java.io.IOException;
+
 import org.eclipse.core.runtime.preferences.InstanceScope;
 import org.eclipse.equinox.app.IApplication;
 import org.eclipse.equinox.app.IApplicationContext;
@@ -11,6 +13,7 @@ import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.IWorkbench;
 import org.eclipse.ui.PlatformUI;
 import org.eclipse.ui.preferences.ScopedPreferenceStore;
+import org.tracegas.installation.InstalledSoftware;
 import org.tracegas.store.StoreException;
 import org.tracegas.ui.dialogs.LoginDialog;
 import org.tracegas.ui.prefs.DeskPreferences;
@@ -43,6 +46,14 @@ public final class WorkbenchApplication implements IApplication {
         try (WorkspaceAccess access = opened) {
             LoginDialog login = new LoginDialog(new Shell(display), access.store().users(), location.description());
             if (login.open() != Window.OK) {
+                return IApplication.EXIT_OK;
+            }
+            try {
+                // a changed release or add-on set of this installation goes to the audit trail first
+                InstalledSoftware.running().ifPresent(software -> software.recordIn(access.store(), login.session()));
+            } catch (IOException e) {
+                MessageDialog.openError(null, "Tracegas Workbench", "The installation's software could not be"
+                        + " recorded in the audit trail: " + e.getMessage());
                 return IApplication.EXIT_OK;
             }
             Desk.get().start(access, login.session(), null);

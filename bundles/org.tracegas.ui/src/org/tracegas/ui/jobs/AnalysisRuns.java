@@ -10,6 +10,7 @@ import java.util.Map;
 import java.util.function.Consumer;
 
 import org.tracegas.campaign.AnalysisVersions;
+import org.tracegas.installation.InstalledSoftware;
 import org.tracegas.quantify.CompoundResult;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.Quantifier;
@@ -22,7 +23,7 @@ import org.tracegas.ui.session.WorkspaceAccess;
 /** Builds method runs over a project's measurements and turns their outcomes into what the views draw. */
 public final class AnalysisRuns {
 
-    /** Software version recorded with results made at the desk. */
+    /** Software version recorded with results made at the desk outside an installed product. */
     public static final String SOFTWARE = "Tracegas Workbench 0.1.0";
 
     private static final java.time.format.DateTimeFormatter SHOWN = java.time.format.DateTimeFormatter
@@ -35,7 +36,7 @@ public final class AnalysisRuns {
     public static BatchQuantificationJob job(WorkspaceAccess access, Session session, Seeded project,
             Consumer<List<BatchQuantificationJob.Outcome>> whenDone) {
         QuantificationMethod method = project.method().method();
-        Quantifier quantifier = project.method().quantifier(project.samples().get(0).axis(), SOFTWARE, true);
+        Quantifier quantifier = project.method().quantifier(project.samples().get(0).axis(), software(), true);
         List<BatchQuantificationJob.Item> items = new ArrayList<>();
         for (int i = 0; i < project.measurementIds().size(); i++) {
             items.add(new BatchQuantificationJob.Item(project.measurementIds().get(i),
@@ -45,6 +46,14 @@ public final class AnalysisRuns {
         return new BatchQuantificationJob("Running " + method.name(), quantifier, items,
                 new BatchQuantificationJob.Target(access.store(), session, project.projectId(),
                         new AnalysisVersions(project.methodVersionId(), project.libraryVersionId())), whenDone);
+    }
+
+    /**
+     * Software version recorded with results made at the desk: the installation's release and its add-ons with
+     * versions (see InstalledSoftware), or {@link #SOFTWARE} outside an installed product.
+     */
+    public static String software() {
+        return InstalledSoftware.describeRunning(SOFTWARE);
     }
 
     /** The fit of one outcome for the spectrum view. */

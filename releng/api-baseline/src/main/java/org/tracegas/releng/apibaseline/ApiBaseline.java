@@ -156,8 +156,14 @@ public final class ApiBaseline {
         boolean consumer = inConsumerType
                 || (diff.getType() == Type.INTERFACE && consumerTypes.contains(diff.getName()));
         switch (diff.getDelta()) {
-            case REMOVED, CHANGED -> out.add(diff.getDelta().toString().toLowerCase() + " "
-                    + diff.getType().toString().toLowerCase() + " " + diff.getName());
+            case REMOVED -> out.add("removed " + diff.getType().toString().toLowerCase() + " " + diff.getName());
+            case CHANGED -> {
+                if (diff.getChildren().isEmpty()) {
+                    out.add("changed " + diff.getType().toString().toLowerCase() + " " + diff.getName());
+                } else {
+                    diff.getChildren().forEach(c -> collect(c, consumer, consumerTypes, out));
+                }
+            }
             case ADDED -> {
                 if (consumer && diff.getType() == Type.METHOD) {
                     out.add("added method " + diff.getName() + " to a type add-ons implement");
