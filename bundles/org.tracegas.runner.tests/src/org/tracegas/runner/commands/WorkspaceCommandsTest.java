@@ -48,12 +48,7 @@ class WorkspaceCommandsTest {
 
     @Test
     void workspaceUserProjectAndImport() throws Exception {
-        String ws = folder.resolve("ws").toString();
-        assertEquals(ExitCode.OK, run(Map.of("TRACEGAS_PASSWORD", "admin-pw-1"), "workspace-init", "--workspace", ws,
-                "--admin", "root", "--name", "Lab administrator"));
-        assertEquals(ExitCode.OK, run(Map.of("TRACEGAS_PASSWORD", "admin-pw-1", "TRACEGAS_NEW_PASSWORD", "ana-pw-22"),
-                "user-add", "--workspace", ws, "--as", "root", "--login", "ana", "--name", "Ana Lyst", "--roles",
-                "analyst"));
+        String ws = workspaceWithAnalyst();
         Map<String, String> ana = Map.of("TRACEGAS_PASSWORD", "ana-pw-22");
         assertEquals(ExitCode.OK, run(ana, "project-add", "--workspace", ws, "--as", "ana", "--client", "Client A",
                 "--code", "CA-1", "--name", "First survey"));
