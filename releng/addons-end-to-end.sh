@@ -29,13 +29,13 @@ format=$(grep -o 'new ImportedData(source, "[^"]*"' "$example/src/${package//.//
 
 step "create the lab's project from the template"
 lab=$work/lab
-"$top/releng/lab-bundle-template/create-lab-project.sh" --into "$lab" --bundle org.example.lab.kestrel \
-  --package "$package" --reader "$reader" --name "Kestrel K-200 export (lab add-on)" --vendor "Example lab" \
-  --header "KESTREL K-200 EXPORT" --repository "$repository" >/dev/null
+"$top/releng/lab-bundle-template/create-lab-project.sh" --into "$lab" --bundle org.example.lab.exportreader \
+  --package "$package" --reader "$reader" --name "Example FTIR export (lab add-on)" --vendor "Example lab" \
+  --header "EXAMPLE FTIR EXPORT" --repository "$repository" >/dev/null
 # the example reader's own code and tests take the place of the template's starting point
-rm -rf "$lab/org.example.lab.kestrel/src" "$lab/org.example.lab.kestrel.tests/src"
-cp -r "$example/src" "$example/plugin.xml" "$lab/org.example.lab.kestrel/"
-cp -r "$example_tests/src" "$lab/org.example.lab.kestrel.tests/"
+rm -rf "$lab/org.example.lab.exportreader/src" "$lab/org.example.lab.exportreader.tests/src"
+cp -r "$example/src" "$example/plugin.xml" "$lab/org.example.lab.exportreader/"
+cp -r "$example_tests/src" "$lab/org.example.lab.exportreader.tests/"
 grep -rqE "org.tracegas.parent|relativePath|\.\./" "$lab/pom.xml" "$lab"/*/pom.xml && fail "the lab's project refers to the workbench's build"
 
 step "build it outside the reactor against the product's p2 repository (with its tests)"
@@ -50,9 +50,9 @@ ws=$work/workspace
 "$installation/tracegas" workspace-init --workspace "$ws" --admin admin --name "Test Administrator" >/dev/null
 "$installation/tracegas" project-add --workspace "$ws" --as admin --client "Northfield Lime Works" \
   --code NLW-1 --name "Kiln stack" >/dev/null
-"$installation/tracegas-addons" install "$labrepo" org.example.lab.kestrel.feature >"$work/install.log" 2>&1 \
+"$installation/tracegas-addons" install "$labrepo" org.example.lab.exportreader.feature >"$work/install.log" 2>&1 \
   || { cat "$work/install.log"; fail "install failed"; }
-"$installation/tracegas-addons" list 2>/dev/null | grep -q '^org.example.lab.kestrel.feature.feature.group/' \
+"$installation/tracegas-addons" list 2>/dev/null | grep -q '^org.example.lab.exportreader.feature.feature.group/' \
   || fail "the installed feature is not listed"
 
 step "import a file of the example instrument with the runner"
@@ -62,21 +62,21 @@ grep -qF "as $format" "$work/import.log" || { cat "$work/import.log"; fail "the 
 grep -F "as $format" "$work/import.log"
 
 step "update it from a rebuilt repository"
-before=$("$installation/tracegas-addons" list 2>/dev/null | grep '^org.example.lab.kestrel.feature.feature.group/')
+before=$("$installation/tracegas-addons" list 2>/dev/null | grep '^org.example.lab.exportreader.feature.feature.group/')
 # a later qualifier than the first build's, even within the same minute
 (cd "$lab" && ./mvnw -B -q verify -DskipTests "-DforceContextQualifier=$(date -u +%Y%m%d%H%M)-update") \
   || fail "the rebuild failed"
-"$installation/tracegas-addons" update "$labrepo" org.example.lab.kestrel.feature >"$work/update.log" 2>&1 \
+"$installation/tracegas-addons" update "$labrepo" org.example.lab.exportreader.feature >"$work/update.log" 2>&1 \
   || { cat "$work/update.log"; fail "update failed"; }
-after=$("$installation/tracegas-addons" list 2>/dev/null | grep '^org.example.lab.kestrel.feature.feature.group/')
+after=$("$installation/tracegas-addons" list 2>/dev/null | grep '^org.example.lab.exportreader.feature.feature.group/')
 [ "$before" != "$after" ] || fail "update left $before in place"
 echo "$before -> $after"
 
 step "remove it"
-"$installation/tracegas-addons" remove org.example.lab.kestrel.feature >"$work/remove.log" 2>&1 \
+"$installation/tracegas-addons" remove org.example.lab.exportreader.feature >"$work/remove.log" 2>&1 \
   || { cat "$work/remove.log"; fail "remove failed"; }
-! "$installation/tracegas-addons" list 2>/dev/null | grep -q '^org.example.lab.kestrel' || fail "still installed after remove"
-grep -q org.example.lab.kestrel "$installation/configuration/org.eclipse.equinox.simpleconfigurator/bundles.info" \
+! "$installation/tracegas-addons" list 2>/dev/null | grep -q '^org.example.lab.exportreader' || fail "still installed after remove"
+grep -q org.example.lab.exportreader "$installation/configuration/org.eclipse.equinox.simpleconfigurator/bundles.info" \
   && fail "the bundle is still in the bundle list"
 "$installation/tracegas" import --workspace "$ws" --as admin --project NLW-1 --file "$sample" >"$work/import2.log" 2>&1 || true
 grep -qF "as $format" "$work/import2.log" && fail "the removed reader still reads files"
@@ -88,8 +88,8 @@ printf 'maxwidth 100000\nSELECT action, new_value, reason FROM audit_record WHER
   -password "" > "$work/audit.txt"
 grep -E "^(ACTION|CREATE|CHANGE) " "$work/audit.txt"
 [ "$(grep -c 'Tracegas Workbench' "$work/audit.txt")" -eq 3 ] || fail "expected 3 software records (before, with, after the add-on)"
-grep 'CHANGE' "$work/audit.txt" | grep -q "with org.example.lab.kestrel.feature 1.0.0" \
+grep 'CHANGE' "$work/audit.txt" | grep -q "with org.example.lab.exportreader.feature 1.0.0" \
   || fail "no record of the software with the add-on"
-grep -q "${USER:-$(id -un)} install org.example.lab.kestrel.feature from file:" "$work/audit.txt" \
+grep -q "${USER:-$(id -un)} install org.example.lab.exportreader.feature from file:" "$work/audit.txt" \
   || fail "the record does not say who installed the add-on"
 step "done"

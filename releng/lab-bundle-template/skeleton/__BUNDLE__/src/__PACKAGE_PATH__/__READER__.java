@@ -13,7 +13,7 @@ import org.tracegas.importer.Recognition;
  * Reads the files of @NAME@. Recognition is in place: a file whose first line starts with {@link #HEADER} is
  * this reader's. Reading is yours to write: return every record of the file with its metadata and the lines
  * it came from, or throw an {@link ImportException} naming file, line and field; never return part of a file.
- * The workbench's example reader (Kestrel K-200) shows a complete one.
+ * The workbench's example reader (org.tracegas.importer.example) shows a complete one.
  */
 public final class @READER@ implements ImportReader {
 

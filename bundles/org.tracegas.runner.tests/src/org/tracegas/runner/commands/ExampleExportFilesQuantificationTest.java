@@ -27,13 +27,13 @@ import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
 /**
- * The lab's day of {@link LabJcampQuantificationTest} with the files of the example instrument, the Kestrel K-200
- * (its spectrum export: acquisition time, absorbance or transmittance, no cell conditions), read by the reader
+ * The lab's day of {@link LabJcampQuantificationTest} with the files of the example instrument (its
+ * spectrum export: acquisition time, absorbance or transmittance, no cell conditions), read by the reader
  * that bundle contributes through the readers' extension point. The export states no cell conditions, so the lab
  * gives them on the command line. The concentrations recovered are checked against the amounts the spectra were
  * made with by {@link LabSpectra}.
  */
-class KestrelFilesQuantificationTest {
+class ExampleExportFilesQuantificationTest {
 
     private static final int SAMPLES = 20;
 
@@ -60,7 +60,7 @@ class KestrelFilesQuantificationTest {
             Spectrum a = lab.spectra.absorbance(Map.of("CO", co * LabJcampQuantificationTest.PATH_M, "N2O",
                     n2o * LabJcampQuantificationTest.PATH_M), 0.003, 1e-5, 2e-4, r);
             boolean transmittance = i % 4 == 3;
-            StringBuilder b = new StringBuilder("KESTREL K-200 EXPORT 1\nserial: K200-0107\nacquired: ")
+            StringBuilder b = new StringBuilder("EXAMPLE FTIR EXPORT 1\nserial: EX-0107\nacquired: ")
                     .append(Instant.parse("2026-11-30T06:00:00Z").plusSeconds(900L * i)).append("\nquantity: ")
                     .append(transmittance ? "transmittance" : "absorbance").append("\npoints: ").append(a.size())
                     .append("\ndata:\n");
@@ -68,14 +68,14 @@ class KestrelFilesQuantificationTest {
                 double v = transmittance ? Math.pow(10, -a.get(k)) : a.get(k);
                 b.append(a.axis().get(k)).append(' ').append(String.format(Locale.ROOT, "%.7g", v)).append('\n');
             }
-            Path f = folder.resolve(String.format(Locale.ROOT, "k200-%02d.txt", i + 1));
+            Path f = folder.resolve(String.format(Locale.ROOT, "example-export-%02d.txt", i + 1));
             Files.writeString(f, b.append("end\n"));
             truth.put(f.getFileName().toString(), Map.of("CO", co, "N2O", n2o));
             args.addAll(List.of("--file", f.toString()));
         }
         String out = lab.ok(args.toArray(String[]::new));
         assertTrue(out.contains("Quantified " + SAMPLES + " measurement(s)"), out);
-        assertTrue(out.contains("as Kestrel"), "the contributed reader read the files: " + out);
+        assertTrue(out.contains("as Example FTIR export"), "the contributed reader read the files: " + out);
 
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "lab-pw-12".toCharArray());
@@ -97,7 +97,7 @@ class KestrelFilesQuantificationTest {
                 assertTrue(error <= 0.03 * t + 0.3, () -> m.fileName() + " " + res.values().compound() + ": "
                         + res.values().concentration() + " ppm, made with " + t + " ppm");
             }
-            System.out.printf(Locale.ROOT, "Kestrel K-200 exports: worst relative error %.4f over %d results%n",
+            System.out.printf(Locale.ROOT, "Example FTIR exports: worst relative error %.4f over %d results%n",
                     worst, results.size());
             assertTrue(store.verifyAuditTrail().intact());
         }
