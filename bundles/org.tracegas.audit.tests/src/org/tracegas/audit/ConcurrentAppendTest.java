@@ -35,12 +35,8 @@ class ConcurrentAppendTest {
      */
     private static final int WALKS = 400;
 
-    static List<String> kinds() {
-        return TestDatabase.kinds();
-    }
-
     @ParameterizedTest
-    @MethodSource("kinds")
+    @MethodSource("org.tracegas.audit.TestDatabase#kinds")
     void concurrentAppendersBuildOneUnbrokenChainThatVerifiesIntactEveryTime(String kind) throws Exception {
         try (TestDatabase db = TestDatabase.create(kind)) {
             try (Connection c = db.openInstalled()) {
