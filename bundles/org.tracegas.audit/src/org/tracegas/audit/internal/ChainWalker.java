@@ -83,24 +83,30 @@ public final class ChainWalker {
         try (PreparedStatement q = c.prepareStatement("SELECT " + RecordRows.COLUMNS + " FROM audit_record ORDER BY seq")) {
             q.setFetchSize(FETCH_SIZE);
             try (ResultSet rs = q.executeQuery()) {
-                // window: prev, cur, next, after; cur is classified once after is known
-                AuditRecord[] w = new AuditRecord[4];
+                // window: prev, cur, next, after; cur is classified once after is known. Four variables
+                // shifted by assignment, not an array shifted by System.arraycopy onto itself: HotSpot C2 in
+                // JDK 17.0.15 (JDK-8356989) can read stale elements of such a non-escaping array once the walk
+                // is compiled, which showed the last two records as a fork of the chain
+                AuditRecord prev = null;
+                AuditRecord cur = null;
+                AuditRecord next = null;
                 boolean prevFlagged = false;
                 while (rs.next()) {
-                    w[3] = RecordRows.readLenient(rs);
+                    AuditRecord after = RecordRows.readLenient(rs);
                     count++;
-                    checkAnchor(w[3]);
-                    if (w[1] != null) {
-                        prevFlagged = check(w[0], prevFlagged, w[1], w[2], w[3]);
+                    checkAnchor(after);
+                    if (cur != null) {
+                        prevFlagged = check(prev, prevFlagged, cur, next, after);
                     }
-                    System.arraycopy(w, 1, w, 0, 3);
-                    w[3] = null;
+                    prev = cur;
+                    cur = next;
+                    next = after;
                 }
-                if (w[1] != null) {
-                    prevFlagged = check(w[0], prevFlagged, w[1], w[2], null);
+                if (cur != null) {
+                    prevFlagged = check(prev, prevFlagged, cur, next, null);
                 }
-                if (w[2] != null) {
-                    check(w[1], prevFlagged, w[2], null, null);
+                if (next != null) {
+                    check(cur, prevFlagged, next, null, null);
                 } else if (headSeq > 0) {
                     add(Kind.REMOVED, 1, headRecordId, "no audit records stored, but the chain head names record " + headSeq);
                 }
