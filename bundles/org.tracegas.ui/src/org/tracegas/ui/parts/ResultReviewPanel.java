@@ -27,6 +27,9 @@ public final class ResultReviewPanel extends Composite {
     private static final DateTimeFormatter SHOWN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss")
             .withZone(ZoneOffset.UTC);
 
+    /** The heading while no project is open. */
+    public static final String NO_PROJECT = "No project open: select a project in the workspace tree.";
+
     private final Label heading;
     private final Table table;
     private final Button sign;
@@ -41,12 +44,15 @@ public final class ResultReviewPanel extends Composite {
         setLayout(new GridLayout(2, false));
         heading = new Label(this, SWT.NONE);
         heading.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
-        heading.setText("No project open.");
+        heading.setText(NO_PROJECT);
         sign = new Button(this, SWT.PUSH);
         sign.setText("Review and sign…");
         sign.addListener(SWT.Selection, e -> {
             ResultInfo r = selected();
-            if (r != null && signatureDialog(r).open() == SignatureDialog.OK) {
+            if (r == null) {
+                // a button that does nothing leaves the reviewer guessing: say what is missing
+                heading.setText(access == null ? NO_PROJECT : "Select a result in the table to review and sign it.");
+            } else if (signatureDialog(r).open() == SignatureDialog.OK) {
                 reload();
             }
         });
@@ -107,6 +113,14 @@ public final class ResultReviewPanel extends Composite {
     /** A signature dialog for a result, in this panel's session. */
     public SignatureDialog signatureDialog(ResultInfo r) {
         return new SignatureDialog(getShell(), approval, session, r);
+    }
+
+    public Label heading() {
+        return heading;
+    }
+
+    public Button signButton() {
+        return sign;
     }
 
     public Table table() {

@@ -1,0 +1,157 @@
+package org.tracegas.ui.views;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.file.Path;
+
+import org.eclipse.jface.viewers.StructuredSelection;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.layout.FillLayout;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Shell;
+import org.eclipse.swt.widgets.TableItem;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.model.Client;
+import org.tracegas.model.Measurement;
+import org.tracegas.model.Project;
+import org.tracegas.store.Session;
+import org.tracegas.ui.Screens;
+import org.tracegas.ui.parts.QaOverviewPanel;
+import org.tracegas.ui.parts.ResultReviewPanel;
+import org.tracegas.ui.parts.SpectrumPanel;
+import org.tracegas.ui.parts.WorkspaceNavigator;
+import org.tracegas.ui.session.Desk;
+import org.tracegas.ui.session.WorkspaceAccess;
+
+/**
+ * The spectrum, QA and review views on a workspace the desk did not make (no demo model): everything they show
+ * comes from the store through its services, following what is selected in the workspace tree.
+ */
+class StoredProjectViewsTest {
+
+    @TempDir
+    Path folder;
+
+    private Display display;
+    private Shell shell;
+    private WorkspaceAccess access;
+    private StoredProject stored;
+    private WorkspaceNavigator nav;
+    private SpectrumView spectrumView;
+    private QaOverviewView qaView;
+    private ResultReviewView reviewView;
+
+    @BeforeEach
+    void openWorkspace() {
+        try (WorkspaceAccess first = WorkspaceAccess.openH2(folder)) {
+            stored = new StoredProject(first.store());
+        }
+        access = WorkspaceAccess.openH2(folder);
+        Session analyst = access.store().users().logIn(StoredProject.ANALYST, StoredProject.PASSWORD.toCharArray());
+        Desk.get().start(access, analyst, null);
+        display = Display.getDefault();
+        shell = new Shell(display);
+        shell.setText("Tracegas Workbench — " + StoredProject.ANALYST);
+        shell.setLayout(new FillLayout());
+        // the smallest screen the desk is made for
+        shell.setSize(1280, 800);
+        SashForm columns = new SashForm(shell, SWT.HORIZONTAL);
+        nav = new NavigatorView().createContent(columns);
+        SashForm rows = new SashForm(columns, SWT.VERTICAL);
+        spectrumView = new SpectrumView();
+        spectrumView.createContent(rows);
+        SashForm tables = new SashForm(rows, SWT.HORIZONTAL);
+        qaView = new QaOverviewView();
+        qaView.createContent(tables);
+        reviewView = new ResultReviewView();
+        reviewView.createContent(tables);
+        columns.setWeights(1, 3);
+        rows.setWeights(3, 2);
+        shell.open();
+        Screens.waitFor(display, () -> nav.workspace() != null, 30_000);
+    }
+
+    @AfterEach
+    void close() {
+        shell.dispose();
+        access.close();
+    }
+
+    /** What the page's selection service does when the navigator's selection changes. */
+    private void select(Object element) {
+        nav.viewer().setSelection(new StructuredSelection(element), true);
+        spectrumView.selected(null, nav.viewer().getSelection());
+        qaView.selected(null, nav.viewer().getSelection());
+        reviewView.selected(null, nav.viewer().getSelection());
+    }
+
+    private Project project() {
+        for (Client c : nav.workspace().getClients()) {
+            for (Project p : c.getProjects()) {
+                if (p.getCode().equals(StoredProject.CODE)) {
+                    return p;
+                }
+            }
+        }
+        throw new AssertionError("no project " + StoredProject.CODE);
+    }
+
+    @Test
+    void selectingAStoredProjectListsItsQaOutcomesWithRulesAndItsResultsToSign() throws Exception {
+        QaOverviewPanel qa = qaView.panel();
+        ResultReviewPanel review = reviewView.panel();
+        assertEquals(ResultReviewPanel.NO_PROJECT, review.heading().getText());
+        review.signButton().notifyListeners(SWT.Selection, null);
+        assertEquals(ResultReviewPanel.NO_PROJECT, review.heading().getText(), "signing without a project says why");
+
+        select(project());
+        Screens.waitFor(display, () -> qa.table().getItemCount() == 2, 10_000);
+        TableItem cts = qa.table().getItem(0);
+        assertEquals("pass", cts.getText(0));
+        assertEquals("CTS pre/post agreement", cts.getText(1));
+        assertEquals("3.100 %", cts.getText(2));
+        assertEquals(StoredProject.CTS_RULE, cts.getText(4));
+        assertEquals(StoredProject.CTS_SOURCE, cts.getText(5));
+        TableItem spike = qa.table().getItem(1);
+        // 0.62 lies below the 0.7 of EPA Method 320 §8.6.2
+        assertEquals("FAIL", spike.getText(0));
+        assertEquals(StoredProject.SPIKE_SOURCE, spike.getText(5));
+        assertEquals(StoredProject.CODE + ": 2 checks: 1 passed, 1 failed", qa.summary().getText());
+
+        assertEquals(2 * StoredProject.SAMPLES, review.table().getItemCount());
+        assertTrue(review.heading().getText().startsWith("Results of " + StoredProject.CODE), review.heading()
+                .getText());
+        review.table().deselectAll();
+        review.signButton().notifyListeners(SWT.Selection, null);
+        assertEquals("Select a result in the table to review and sign it.", review.heading().getText());
+        Screens.save(shell, "stored-project-qa-and-results");
+    }
+
+    @Test
+    void selectingAStoredMeasurementDrawsItsStoredSpectrumHeadedByItsResultsAndFlags() throws Exception {
+        SpectrumPanel spectrum = spectrumView.panel();
+        String last = stored.sampleIds.get(StoredProject.SAMPLES - 1);
+        Measurement m = project().getMeasurements().stream().filter(x -> x.getId().equals(last)).findFirst()
+                .orElseThrow();
+        select(m);
+        Screens.waitFor(display, () -> spectrum.shown() != null, 10_000);
+        String title = spectrum.shown().title();
+        assertTrue(title.startsWith("sample 2026-09-22 10:03:00 UTC of " + StoredProject.CODE
+                + " — stored absorbance, fit not kept"), title);
+        assertTrue(title.contains("CO 33.00 ± 0.50 ppm"), title);
+        assertTrue(title.contains("NO 83.00 ± 0.50 ppm [HIGH_RESIDUAL]"), title);
+        // the values drawn are those stored, bit for bit (float64 encoding)
+        assertArrayEquals(StoredProject.band(0.4).toArray(), spectrum.shown().sample());
+        assertEquals(0.4, StoredProject.band(0.4).get(286), 1e-12, "band peak at 2143 cm⁻¹");
+        // the QA and review views follow the measurement's project
+        Screens.waitFor(display, () -> qaView.panel().table().getItemCount() == 2, 10_000);
+        assertEquals(2 * StoredProject.SAMPLES, reviewView.panel().table().getItemCount());
+        Screens.save(shell, "stored-measurement-spectrum");
+    }
+}
