@@ -34,7 +34,7 @@ final class DeskWorkbenchAdvisor extends WorkbenchAdvisor {
             public void preWindowOpen() {
                 IWorkbenchWindowConfigurer c = getWindowConfigurer();
                 c.setInitialSize(new Point(1280, 860));
-                c.setShowCoolBar(false);
+                c.setShowCoolBar(true); // the Analysis toolbar
                 c.setShowStatusLine(true);
                 c.setShowPerspectiveBar(true);
                 c.setShowProgressIndicator(true);

@@ -47,15 +47,7 @@ public final class ResultReviewPanel extends Composite {
         heading.setText(NO_PROJECT);
         sign = new Button(this, SWT.PUSH);
         sign.setText("Review and sign…");
-        sign.addListener(SWT.Selection, e -> {
-            ResultInfo r = selected();
-            if (r == null) {
-                // a button that does nothing leaves the reviewer guessing: say what is missing
-                heading.setText(access == null ? NO_PROJECT : "Select a result in the table to review and sign it.");
-            } else if (signatureDialog(r).open() == SignatureDialog.OK) {
-                reload();
-            }
-        });
+        sign.addListener(SWT.Selection, e -> reviewSelected());
         table = new Table(this, SWT.BORDER | SWT.FULL_SELECTION);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
@@ -102,6 +94,20 @@ public final class ResultReviewPanel extends Composite {
             table.select(0);
         }
         layout(true);
+    }
+
+    /**
+     * Opens the signature dialog on the selected result and shows the new signature; without a project or a
+     * selected result, says in the heading what is missing (a command that does nothing leaves the reviewer
+     * guessing).
+     */
+    public void reviewSelected() {
+        ResultInfo r = selected();
+        if (r == null) {
+            heading.setText(access == null ? NO_PROJECT : "Select a result in the table to review and sign it.");
+        } else if (signatureDialog(r).open() == SignatureDialog.OK) {
+            reload();
+        }
     }
 
     /** The selected result, or null. */

@@ -6,7 +6,6 @@ import java.util.function.Consumer;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
-import org.eclipse.swt.widgets.Display;
 import org.eclipse.ui.part.ViewPart;
 import org.tracegas.model.Project;
 import org.tracegas.model.Workspace;
@@ -56,9 +55,7 @@ public final class NavigatorView extends ViewPart {
         navigator.viewer().addDoubleClickListener(e -> {
             Object o = ((IStructuredSelection) e.getSelection()).getFirstElement();
             if (o instanceof Project p && desk.project() != null && p.getId().equals(desk.project().projectId())) {
-                Display display = navigator.getDisplay();
-                AnalysisRuns.job(desk.access(), desk.session(), desk.project(),
-                        outcomes -> display.asyncExec(() -> desk.runFinished(outcomes))).schedule();
+                AnalysisRuns.runOnDesk(navigator.getDisplay());
             }
         });
         desk.addRunListener(refresh);
