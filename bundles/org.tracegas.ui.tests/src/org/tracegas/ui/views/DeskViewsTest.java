@@ -186,7 +186,11 @@ class DeskViewsTest {
         // give a late delivery of the first read every chance to arrive; it must be dropped
         long until = System.currentTimeMillis() + 500;
         Screens.waitFor(display, () -> System.currentTimeMillis() > until, 5_000);
-        assertEquals("Stored results of KLN-2026-07, hours from 2026-07-14 00:00 UTC", panel.heading().getText());
+        assertEquals("Stored results of KLN-2026-07 from 2026-07-14 00:00 UTC", panel.heading().getText());
+        // clock time on the axis, not hours from a start: the day is one calendar day in UTC
+        org.eclipse.swtchart.IAxis time = panel.chart().getAxisSet().getXAxis(0);
+        assertEquals("Time (UTC) on 2026-07-14", time.getTitle().getText());
+        assertEquals("06:30", time.getTick().getFormat().format(6.5));
 
         assertEquals(List.of("CO", "NO", "N2O", "H2O", "CO2"), panel.compounds());
         // at first the trace gases only; water vapour and CO2 are percent-level, major components

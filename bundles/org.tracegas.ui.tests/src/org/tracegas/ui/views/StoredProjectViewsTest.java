@@ -10,6 +10,11 @@ import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.custom.SashForm;
 import org.eclipse.swt.layout.FillLayout;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
+import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
+import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.TableItem;
@@ -22,6 +27,7 @@ import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
 import org.tracegas.store.Session;
 import org.tracegas.ui.Screens;
+import org.tracegas.ui.parts.Caution;
 import org.tracegas.ui.parts.QaOverviewPanel;
 import org.tracegas.ui.parts.ResultReviewPanel;
 import org.tracegas.ui.parts.SpectrumPanel;
@@ -58,10 +64,16 @@ class StoredProjectViewsTest {
         display = Display.getDefault();
         shell = new Shell(display);
         shell.setText("Tracegas Workbench — " + StoredProject.ANALYST);
-        shell.setLayout(new FillLayout());
+        shell.setLayout(new GridLayout(1, false));
         // the smallest screen the desk is made for
         shell.setSize(1280, 800);
         SashForm columns = new SashForm(shell, SWT.HORIZONTAL);
+        columns.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        // the window's status line, where the desk puts the caution once
+        Composite status = new Composite(shell, SWT.NONE);
+        status.setLayout(new FillLayout());
+        status.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        Caution.statusItem().fill(status);
         nav = new NavigatorView().createContent(columns);
         SashForm rows = new SashForm(columns, SWT.VERTICAL);
         spectrumView = new SpectrumView();
@@ -102,6 +114,16 @@ class StoredProjectViewsTest {
         throw new AssertionError("no project " + StoredProject.CODE);
     }
 
+    private static int cautions(Control c) {
+        int n = c instanceof Label l && Caution.TEXT.equals(l.getText()) ? 1 : 0;
+        if (c instanceof Composite parent) {
+            for (Control child : parent.getChildren()) {
+                n += cautions(child);
+            }
+        }
+        return n;
+    }
+
     @Test
     void selectingAStoredProjectListsItsQaOutcomesWithRulesAndItsResultsToSign() throws Exception {
         QaOverviewPanel qa = qaView.panel();
@@ -130,6 +152,7 @@ class StoredProjectViewsTest {
         review.table().deselectAll();
         review.signButton().notifyListeners(SWT.Selection, null);
         assertEquals("Select a result in the table to review and sign it.", review.heading().getText());
+        assertEquals(1, cautions(shell), "one caution per window, not one per view");
         Screens.save(shell, "stored-project-qa-and-results");
     }
 

@@ -4,6 +4,7 @@ import org.eclipse.jface.action.Action;
 import org.eclipse.jface.action.GroupMarker;
 import org.eclipse.jface.action.IContributionItem;
 import org.eclipse.jface.action.IMenuManager;
+import org.eclipse.jface.action.IStatusLineManager;
 import org.eclipse.jface.action.MenuManager;
 import org.eclipse.jface.action.Separator;
 import org.eclipse.ui.IWorkbenchActionConstants;
@@ -14,9 +15,10 @@ import org.eclipse.ui.actions.ContributionItemFactory;
 import org.eclipse.ui.application.ActionBarAdvisor;
 import org.eclipse.ui.application.IActionBarConfigurer;
 import org.tracegas.ui.dialogs.AboutDialog;
+import org.tracegas.ui.parts.Caution;
 
 /**
- * File, Window and Help menus of the desk window. The desk's own commands (File → Import…, Export results…, the
+ * File, Window and Help menus of the desk window, and its status line with the caution (once per window). The desk's own commands (File → Import…, Export results…, the
  * Analysis menu and the toolbar) come from plugin.xml into the "additions" groups left here for them.
  */
 final class DeskMenus extends ActionBarAdvisor {
@@ -46,6 +48,11 @@ final class DeskMenus extends ActionBarAdvisor {
                 new AboutDialog(window.getShell()).open();
             }
         };
+    }
+
+    @Override
+    protected void fillStatusLine(IStatusLineManager line) {
+        line.add(Caution.statusItem());
     }
 
     @Override

@@ -21,7 +21,6 @@ public final class QaOverviewPanel extends Composite {
     public QaOverviewPanel(Composite parent, int style) {
         super(parent, style);
         setLayout(new GridLayout(1, false));
-        Caution.banner(this, 1);
         summary = new Label(this, SWT.NONE);
         summary.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
         table = new Table(this, SWT.BORDER | SWT.FULL_SELECTION);

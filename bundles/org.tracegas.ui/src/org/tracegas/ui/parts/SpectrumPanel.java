@@ -42,12 +42,11 @@ public final class SpectrumPanel extends Composite {
     public SpectrumPanel(Composite parent, int style) {
         super(parent, style);
         setLayout(new GridLayout(2, false));
-        Caution.banner(this, 2);
         heading = new Label(this, SWT.WRAP);
         GridData hd = new GridData(SWT.FILL, SWT.CENTER, true, false);
         hd.widthHint = 300; // wraps a long heading (a measurement's results) instead of clipping it
         heading.setLayoutData(hd);
-        heading.setText("No spectrum open: run a method on a measurement to see its fit.");
+        heading.setText("No spectrum open: select a measurement in the workspace tree, or run a method.");
         readout = new Label(this, SWT.RIGHT);
         GridData rd = new GridData(SWT.END, SWT.CENTER, false, false);
         rd.widthHint = 330;
@@ -82,9 +81,8 @@ public final class SpectrumPanel extends Composite {
         spectrumData.clear();
         residualData.clear();
         spectrumData.put(ChartStyle.line(spectrum, SAMPLE, Palette.SAMPLE, 1), fit.wavenumber(), fit.sample());
-        int i = 0;
         for (Map.Entry<String, double[]> e : fit.shares().entrySet()) {
-            spectrumData.put(ChartStyle.line(spectrum, SHARE_PREFIX + e.getKey(), Palette.compound(i++), 1),
+            spectrumData.put(ChartStyle.line(spectrum, SHARE_PREFIX + e.getKey(), Palette.compound(e.getKey()), 1),
                     fit.wavenumber(), e.getValue());
         }
         if (java.util.Arrays.stream(fit.model()).anyMatch(v -> !Double.isNaN(v))) {

@@ -1,5 +1,6 @@
 package org.tracegas.ui.parts;
 
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.HashMap;
@@ -25,6 +26,7 @@ import org.eclipse.swtchart.ILineSeries.PlotSymbolType;
 import org.eclipse.swtchart.LineStyle;
 import org.eclipse.swtchart.Range;
 import org.tracegas.ui.chart.ChartNavigation;
+import org.tracegas.ui.chart.ClockTime;
 import org.tracegas.ui.chart.CursorReadout;
 import org.tracegas.ui.chart.DecimatedSeries;
 
@@ -43,12 +45,17 @@ public final class TimeSeriesPanel extends Composite {
 
     private static final String FLAGS_SUFFIX = " flagged";
 
+    /** The key to the flag markers, shown under the compound list. */
+    public static final String FLAG_KEY = "✕ red cross: the value carries a quality flag (e.g. a high fit "
+            + "residual); Results to sign lists the flags";
+
     private final Chart chart;
     private final DecimatedSeries data;
     private final Label heading;
     private final Table compounds;
     private final ChartNavigation navigation;
-    private final Map<Integer, Image> swatches = new HashMap<>();
+    private final CursorReadout cursor;
+    private final Map<String, Image> swatches = new HashMap<>();
     private List<ConcentrationTrace> traces = List.of();
     private List<Limit> limits = List.of();
     private Set<String> majors = Set.of();
@@ -58,7 +65,6 @@ public final class TimeSeriesPanel extends Composite {
     public TimeSeriesPanel(Composite parent, int style) {
         super(parent, style);
         setLayout(new GridLayout(2, false));
-        Caution.banner(this, 2);
         heading = new Label(this, SWT.WRAP);
         GridData hd = new GridData(SWT.FILL, SWT.CENTER, true, false);
         // wraps rather than clipping the time the hours count from when the view is narrow
@@ -89,6 +95,12 @@ public final class TimeSeriesPanel extends Composite {
         GridData cd = new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1);
         cd.widthHint = 120;
         compounds.setLayoutData(cd);
+        Label flags = new Label(side, SWT.WRAP);
+        GridData fd = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+        fd.widthHint = 120;
+        flags.setLayoutData(fd);
+        // the red crosses carry no legend entry of their own (one per compound would crowd the legend)
+        flags.setText(FLAG_KEY);
         compounds.addListener(SWT.Selection, e -> {
             if (e.detail == SWT.CHECK) {
                 draw(false);
@@ -110,7 +122,7 @@ public final class TimeSeriesPanel extends Composite {
         chart.getAxisSet().getYAxis(0).getTick().setFormat(new java.text.DecimalFormat("0.###"));
         data = new DecimatedSeries(chart);
         navigation = new ChartNavigation(this::rethin, chart);
-        new CursorReadout(chart, readout, "%.4f h", "concentration");
+        cursor = new CursorReadout(chart, readout, "%.4f h", "concentration");
         addListener(SWT.Dispose, e -> swatches.values().forEach(Image::dispose));
     }
 
@@ -119,7 +131,28 @@ public final class TimeSeriesPanel extends Composite {
      * the user chose when the same compounds were shown before.
      */
     public void show(String title, List<ConcentrationTrace> traces, List<Limit> limits) {
+        show(title, traces, limits, null);
+    }
+
+    /**
+     * Shows traces as {@link #show(String, List, List)} does, on a clock-time axis (UTC) when {@code start},
+     * the instant hour 0 of the traces stands for, is known.
+     */
+    public void show(String title, List<ConcentrationTrace> traces, List<Limit> limits, Instant start) {
         heading.setText(title);
+        double last = traces.stream().filter(t -> t.hours().length > 0)
+                .mapToDouble(t -> t.hours()[t.hours().length - 1]).max().orElse(0);
+        IAxis time = chart.getAxisSet().getXAxis(0);
+        if (start == null) {
+            time.getTitle().setText("Time (h)");
+            time.getTick().setFormat(null);
+            cursor.setXText(x -> String.format(java.util.Locale.ROOT, "%.4f h", x));
+        } else {
+            ClockTime clock = new ClockTime(start, last);
+            time.getTitle().setText(clock.axisTitle(last));
+            time.getTick().setFormat(clock);
+            cursor.setXText(clock::full);
+        }
         List<String> before = compounds();
         Set<String> chosen = selectedCompounds();
         this.traces = List.copyOf(traces);
@@ -201,19 +234,19 @@ public final class TimeSeriesPanel extends Composite {
 
     private void fillList(Set<String> checked) {
         compounds.removeAll();
-        for (int i = 0; i < traces.size(); i++) {
-            String c = traces.get(i).compound();
+        for (ConcentrationTrace t : traces) {
+            String c = t.compound();
             TableItem item = new TableItem(compounds, SWT.NONE);
             item.setData(c);
             item.setText(majors.contains(c) ? c + "  (major)" : c);
-            item.setImage(swatch(i));
+            item.setImage(swatch(c));
             item.setChecked(checked.contains(c));
         }
     }
 
     /** A small square in the compound's line colour, so the list doubles as a key. */
-    private Image swatch(int i) {
-        return swatches.computeIfAbsent(Math.floorMod(i, 8), k -> {
+    private Image swatch(String compound) {
+        return swatches.computeIfAbsent(compound, k -> {
             Image img = new Image(getDisplay(), 12, 12);
             GC gc = new GC(img);
             try {
@@ -233,11 +266,9 @@ public final class TimeSeriesPanel extends Composite {
         data.clear();
         Set<String> chosen = selectedCompounds();
         List<ConcentrationTrace> drawn = new ArrayList<>();
-        List<Integer> colours = new ArrayList<>();
-        for (int i = 0; i < traces.size(); i++) {
-            if (chosen.contains(traces.get(i).compound())) {
-                drawn.add(traces.get(i));
-                colours.add(i);
+        for (ConcentrationTrace t : traces) {
+            if (chosen.contains(t.compound())) {
+                drawn.add(t);
             }
         }
         boolean anyTrace = drawn.stream().anyMatch(t -> !majors.contains(t.compound()));
@@ -251,7 +282,8 @@ public final class TimeSeriesPanel extends Composite {
             majorAxis().getTitle().setText("Major components, dashed" + unitOf(drawn, true, true));
         }
         for (int k = 0; k < drawn.size(); k++) {
-            ILineSeries<?> s = ChartStyle.line(chart, drawn.get(k).compound(), Palette.compound(colours.get(k)), 1);
+            String compound = drawn.get(k).compound();
+            ILineSeries<?> s = ChartStyle.line(chart, compound, Palette.compound(compound), 1);
             s.setYAxisId(axisOf(drawn.get(k)));
             if (s.getYAxisId() != 0) {
                 // dashed, so that a line tells by itself which axis it is read against

@@ -39,7 +39,7 @@ public final class StoredResults {
 
     /** The heading of a project's stored traces. */
     public static String title(String projectCode, Traces traces) {
-        return "Stored results of " + projectCode + ", hours from " + SHOWN.format(traces.start());
+        return "Stored results of " + projectCode + " from " + SHOWN.format(traces.start());
     }
 
     /**

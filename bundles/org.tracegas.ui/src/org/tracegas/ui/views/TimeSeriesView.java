@@ -53,8 +53,9 @@ public final class TimeSeriesView extends ViewPart {
             return;
         }
         loads.cancel(); // a run that finishes now is newer than any stored results still being read
-        panel.show("Concentrations of " + DemoProject.PROJECT_CODE + ", hours from the first measurement",
-                AnalysisRuns.traces(outcomes, p.measurementTimes(), p.measurementTimes().get(0)), List.of());
+        panel.show("Concentrations of " + DemoProject.PROJECT_CODE + " from the method run",
+                AnalysisRuns.traces(outcomes, p.measurementTimes(), p.measurementTimes().get(0)), List.of(),
+                p.measurementTimes().get(0));
     }
 
     /** Reads the selected project's stored results in the background; a later selection wins. */
@@ -77,7 +78,7 @@ public final class TimeSeriesView extends ViewPart {
         if (stored.traces().isEmpty()) {
             panel.showNote("No stored results for " + code + " yet.");
         } else {
-            panel.show(StoredResults.title(code, stored), stored.traces(), List.of());
+            panel.show(StoredResults.title(code, stored), stored.traces(), List.of(), stored.start());
         }
     }
 
