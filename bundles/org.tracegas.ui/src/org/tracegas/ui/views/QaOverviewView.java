@@ -2,15 +2,12 @@ package org.tracegas.ui.views;
 
 import java.util.List;
 
-import org.eclipse.core.runtime.preferences.InstanceScope;
-import org.eclipse.jface.preference.IPreferenceStore;
 import org.eclipse.jface.viewers.ISelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.ui.ISelectionListener;
 import org.eclipse.ui.IWorkbenchPart;
 import org.eclipse.ui.part.ViewPart;
-import org.eclipse.ui.preferences.ScopedPreferenceStore;
 import org.tracegas.campaign.StoredQaChecks;
 import org.tracegas.model.Project;
 import org.tracegas.qa.checks.CheckOutcome;
@@ -19,7 +16,6 @@ import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.jobs.LatestLoad;
 import org.tracegas.ui.parts.QaOverviewPanel;
-import org.tracegas.ui.prefs.DeskPreferences;
 import org.tracegas.ui.session.DemoProject;
 import org.tracegas.ui.session.Desk;
 
@@ -46,9 +42,7 @@ public final class QaOverviewView extends ViewPart {
         panel = new QaOverviewPanel(parent, SWT.NONE);
         loads = new LatestLoad<>(panel);
         if (Desk.get().project() != null) {
-            IPreferenceStore prefs = new ScopedPreferenceStore(InstanceScope.INSTANCE, "org.tracegas.ui");
-            DeskPreferences.setDefaults(prefs);
-            panel.show(DemoProject.checks(Desk.get().project(), DeskPreferences.backgroundAgeLimit(prefs)));
+            panel.show(DemoProject.checks(Desk.get().project(), DemoProject.BACKGROUND_AGE_LIMIT));
         } else {
             panel.showNote("Select a project in the workspace tree to see its stored QA checks.");
         }
