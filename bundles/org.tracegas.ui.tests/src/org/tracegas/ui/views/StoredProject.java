@@ -1,5 +1,8 @@
 package org.tracegas.ui.views;
 
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
 import java.util.ArrayList;
@@ -7,6 +10,7 @@ import java.util.List;
 import java.util.Set;
 
 import org.tracegas.campaign.StoredQaChecks;
+import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.ResultFlag;
@@ -50,7 +54,10 @@ final class StoredProject {
     final ProjectInfo project;
     final List<String> sampleIds = new ArrayList<>();
 
-    StoredProject(WorkspaceStore store) {
+    /** Name of the library; its version is recorded from a manifest as the runner records it. */
+    static final String LIBRARY = "Furnace references";
+
+    StoredProject(WorkspaceStore store, Path folder) throws IOException {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", PASSWORD.toCharArray());
         String analystId = store.users().createUser(admin, ANALYST, "Marta Ferreira", Set.of(Role.ANALYST),
                 PASSWORD.toCharArray()).id();
@@ -62,8 +69,8 @@ final class StoredProject {
                 FIRST.minus(Duration.ofMinutes(5)), 453.15, 1013.0);
         VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "Furnace CO and NO",
                 "compounds=CO,NO\n", "first");
-        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Furnace references",
-                "CO=1\nNO=1\n", "first");
+        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, LIBRARY,
+                libraryText(folder), "first");
         List<NewResult> results = new ArrayList<>();
         for (int i = 0; i < SAMPLES; i++) {
             String m = store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE,
@@ -81,6 +88,27 @@ final class StoredProject {
                         new Rule(CTS_RULE, CTS_SOURCE)),
                 CheckOutcome.judge("Spike recovery", 0.62, "", new AcceptanceLimits(0.7, 1.3),
                         new Rule(SPIKE_RULE, SPIKE_SOURCE))));
+    }
+
+    /**
+     * The stored text of a library folder with a measured CO and a synthetic NO reference (CAS numbers from the
+     * NIST Chemistry WebBook, from memory), made by {@link LibraryVersionText} from real files.
+     */
+    private static String libraryText(Path folder) throws IOException {
+        Path lib = Files.createDirectories(folder.resolve("furnace-library"));
+        Files.writeString(lib.resolve("co.txt"), "2000 0.0\n2001 0.1\n");
+        Files.writeString(lib.resolve("no.txt"), "1850 0.0\n1851 0.2\n");
+        Path manifest = Files.writeString(lib.resolve("library.manifest"), String.join("\n",
+                "library = " + LIBRARY, "",
+                "[reference]", "file = co.txt", "compound = Carbon monoxide", "cas = 630-08-0", "formula = CO",
+                "molar-mass = 28.010", "ppm-m = 200", "temperature = 296", "pressure = 101.325",
+                "resolution = 0.5", "apodization = triangular", "origin = measured",
+                "origin-text = 10 m cell, 2026 calibration", "uncertainty = 0.02", "",
+                "[reference]", "file = no.txt", "compound = Nitric oxide", "cas = 10102-43-9", "formula = NO",
+                "molar-mass = 30.006", "ppm-m = 100", "temperature = 296", "pressure = 101.325",
+                "resolution = 0.5", "apodization = triangular", "origin = synthetic",
+                "origin-text = computed from line parameters", "uncertainty = 0.05", ""));
+        return LibraryVersionText.of(manifest);
     }
 
     /** A CO-like band at 2143 cm⁻¹ (CO fundamental, NIST Chemistry WebBook, from memory) of a given height. */

@@ -28,6 +28,7 @@ import org.tracegas.model.Project;
 import org.tracegas.store.Session;
 import org.tracegas.ui.Screens;
 import org.tracegas.ui.parts.Caution;
+import org.tracegas.ui.parts.LibraryBrowserPanel;
 import org.tracegas.ui.parts.QaOverviewPanel;
 import org.tracegas.ui.parts.ResultReviewPanel;
 import org.tracegas.ui.parts.SpectrumPanel;
@@ -52,11 +53,12 @@ class StoredProjectViewsTest {
     private SpectrumView spectrumView;
     private QaOverviewView qaView;
     private ResultReviewView reviewView;
+    private LibraryView libraryView;
 
     @BeforeEach
-    void openWorkspace() {
+    void openWorkspace() throws Exception {
         try (WorkspaceAccess first = WorkspaceAccess.openH2(folder)) {
-            stored = new StoredProject(first.store());
+            stored = new StoredProject(first.store(), folder);
         }
         access = WorkspaceAccess.openH2(folder);
         Session analyst = access.store().users().logIn(StoredProject.ANALYST, StoredProject.PASSWORD.toCharArray());
@@ -83,6 +85,8 @@ class StoredProjectViewsTest {
         qaView.createContent(tables);
         reviewView = new ResultReviewView();
         reviewView.createContent(tables);
+        libraryView = new LibraryView();
+        libraryView.createContent(tables);
         columns.setWeights(1, 3);
         rows.setWeights(3, 2);
         shell.open();
@@ -101,6 +105,7 @@ class StoredProjectViewsTest {
         spectrumView.selected(null, nav.viewer().getSelection());
         qaView.selected(null, nav.viewer().getSelection());
         reviewView.selected(null, nav.viewer().getSelection());
+        libraryView.selected(null, nav.viewer().getSelection());
     }
 
     private Project project() {
@@ -176,5 +181,23 @@ class StoredProjectViewsTest {
         Screens.waitFor(display, () -> qaView.panel().table().getItemCount() == 2, 10_000);
         assertEquals(2 * StoredProject.SAMPLES, reviewView.panel().table().getItemCount());
         Screens.save(shell, "stored-measurement-spectrum");
+    }
+
+    @Test
+    void selectingAStoredLibraryListsTheReferencesItsVersionRecorded() throws Exception {
+        LibraryBrowserPanel library = libraryView.panel();
+        select(nav.workspace().getLibraries().get(0));
+        Screens.waitFor(display, () -> library.table().getItemCount() == 2, 10_000);
+        assertEquals(StoredProject.LIBRARY + ", version 1: 2 references", library.summary().getText());
+        TableItem co = library.table().getItem(0);
+        assertEquals("Carbon monoxide", co.getText(0));
+        assertEquals("630-08-0", co.getText(1));
+        assertEquals("measured (10 m cell, 2026 calibration)", co.getText(2));
+        assertEquals("200", co.getText(3));
+        TableItem no = library.table().getItem(1);
+        assertEquals("10102-43-9", no.getText(1));
+        // a computed spectrum is never shown as a measured one
+        assertEquals("SYNTHETIC — computed from line parameters", no.getText(2));
+        Screens.save(shell, "stored-library-references");
     }
 }

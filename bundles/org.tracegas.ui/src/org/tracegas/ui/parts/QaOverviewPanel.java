@@ -21,8 +21,10 @@ public final class QaOverviewPanel extends Composite {
     public QaOverviewPanel(Composite parent, int style) {
         super(parent, style);
         setLayout(new GridLayout(1, false));
-        summary = new Label(this, SWT.NONE);
-        summary.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        summary = new Label(this, SWT.WRAP);
+        GridData sd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        sd.widthHint = 200; // wraps in a narrow view instead of clipping
+        summary.setLayoutData(sd);
         table = new Table(this, SWT.BORDER | SWT.FULL_SELECTION);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);

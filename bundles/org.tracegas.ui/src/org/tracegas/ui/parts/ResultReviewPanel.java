@@ -42,8 +42,10 @@ public final class ResultReviewPanel extends Composite {
     public ResultReviewPanel(Composite parent, int style) {
         super(parent, style);
         setLayout(new GridLayout(2, false));
-        heading = new Label(this, SWT.NONE);
-        heading.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        heading = new Label(this, SWT.WRAP);
+        GridData hd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        hd.widthHint = 200; // wraps in a narrow view instead of clipping
+        heading.setLayoutData(hd);
         heading.setText(NO_PROJECT);
         sign = new Button(this, SWT.PUSH);
         sign.setText("Review and sign…");
