@@ -31,6 +31,14 @@ class ClockTimeTest {
     }
 
     @Test
+    void aFewMinutesCarryTheSecondsInTheirLabels() throws Exception {
+        ClockTime minutes = new ClockTime(START, 0.05);
+        // 0.0125 h = 45 s
+        assertEquals("05:55:45", minutes.format(0.0125));
+        assertEquals(0.0125, (Double) minutes.parseObject("05:55:45"), 1e-9);
+    }
+
+    @Test
     void labelsReadBackIntoHoursFromTheStart() throws Exception {
         ClockTime day = new ClockTime(START, 12);
         assertEquals(6.5, (Double) day.parseObject("12:25"), 1e-9);

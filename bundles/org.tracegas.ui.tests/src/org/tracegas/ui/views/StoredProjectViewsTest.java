@@ -16,6 +16,7 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.TableItem;
 import org.junit.jupiter.api.AfterEach;
@@ -28,6 +29,8 @@ import org.tracegas.model.Project;
 import org.tracegas.store.Session;
 import org.tracegas.ui.Screens;
 import org.tracegas.ui.parts.Caution;
+import org.tracegas.ui.parts.ConcentrationTrace;
+import org.tracegas.ui.parts.TimeSeriesPanel;
 import org.tracegas.ui.parts.LibraryBrowserPanel;
 import org.tracegas.ui.parts.QaOverviewPanel;
 import org.tracegas.ui.parts.ResultReviewPanel;
@@ -54,6 +57,7 @@ class StoredProjectViewsTest {
     private QaOverviewView qaView;
     private ResultReviewView reviewView;
     private LibraryView libraryView;
+    private TimeSeriesView seriesView;
 
     @BeforeEach
     void openWorkspace() throws Exception {
@@ -80,6 +84,8 @@ class StoredProjectViewsTest {
         SashForm rows = new SashForm(columns, SWT.VERTICAL);
         spectrumView = new SpectrumView();
         spectrumView.createContent(rows);
+        seriesView = new TimeSeriesView();
+        seriesView.createContent(rows);
         SashForm tables = new SashForm(rows, SWT.HORIZONTAL);
         qaView = new QaOverviewView();
         qaView.createContent(tables);
@@ -88,7 +94,7 @@ class StoredProjectViewsTest {
         libraryView = new LibraryView();
         libraryView.createContent(tables);
         columns.setWeights(1, 3);
-        rows.setWeights(3, 2);
+        rows.setWeights(3, 3, 3);
         shell.open();
         Screens.waitFor(display, () -> nav.workspace() != null, 30_000);
     }
@@ -106,6 +112,7 @@ class StoredProjectViewsTest {
         qaView.selected(null, nav.viewer().getSelection());
         reviewView.selected(null, nav.viewer().getSelection());
         libraryView.selected(null, nav.viewer().getSelection());
+        seriesView.selected(null, nav.viewer().getSelection());
     }
 
     private Project project() {
@@ -199,5 +206,34 @@ class StoredProjectViewsTest {
         // a computed spectrum is never shown as a measured one
         assertEquals("SYNTHETIC — computed from line parameters", no.getText(2));
         Screens.save(shell, "stored-library-references");
+    }
+
+    @Test
+    void doubleClickingAValueOfTheTimeSeriesOpensTheSpectrumOfItsMeasurement() throws Exception {
+        // in the workbench the series view brings up the spectrum view; here the two are wired directly
+        seriesView.spectrumOpener = pick -> spectrumView.open(seriesView.shownProjectId(),
+                pick.trace().measurementIds().get(pick.index()), seriesView.label(pick));
+        select(project());
+        TimeSeriesPanel series = seriesView.panel();
+        Screens.waitFor(display, () -> series.heading().getText().startsWith("Stored results of"), 10_000);
+        Screens.flush(display);
+        ConcentrationTrace no = series.traces().stream().filter(t -> t.compound().equals("NO")).findFirst()
+                .orElseThrow();
+        int last = StoredProject.SAMPLES - 1;
+        Event click = new Event();
+        click.x = series.chart().getAxisSet().getXAxis(0).getPixelCoordinate(no.hours()[last]);
+        click.y = series.chart().getAxisSet().getYAxis(0).getPixelCoordinate(no.values()[last]) + 3;
+        click.button = 1;
+        series.chart().getPlotArea().getControl().notifyListeners(SWT.MouseDoubleClick, click);
+        SpectrumPanel spectrum = spectrumView.panel();
+        Screens.waitFor(display, () -> spectrum.shown() != null, 10_000);
+        String title = spectrum.shown().title();
+        assertTrue(title.startsWith("NO value at 2026-09-22 10:03 UTC of " + StoredProject.CODE
+                + " — stored absorbance"), title);
+        assertTrue(title.contains("NO 83.00 ± 0.50 ppm [HIGH_RESIDUAL]"), title);
+        assertArrayEquals(StoredProject.band(0.4).toArray(), spectrum.shown().sample());
+        // far from every value nothing is picked
+        assertEquals(null, series.nearest(0, 0));
+        Screens.save(shell, "time-series-point-opens-spectrum");
     }
 }

@@ -14,7 +14,8 @@ import java.time.format.DateTimeParseException;
 
 /**
  * Tick labels and readouts of a time axis whose values count hours from a start: the clock time in UTC (the
- * time base of stored measurements), with the day in front when the period shown spans more than one day.
+ * time base of stored measurements), with the day in front when the period shown spans more than one day and
+ * with the seconds when it spans less than half an hour.
  */
 public final class ClockTime extends Format {
 
@@ -34,8 +35,9 @@ public final class ClockTime extends Format {
             throw new IllegalArgumentException("start must not be null");
         }
         this.start = start;
-        this.pattern = DateTimeFormatter.ofPattern(spanHours > 24 ? "MM-dd HH:mm" : "HH:mm")
-                .withZone(ZoneOffset.UTC);
+        // a few minutes of one-minute samples need the seconds to tell ticks apart; more than a day the date
+        this.pattern = DateTimeFormatter.ofPattern(spanHours > 24 ? "MM-dd HH:mm"
+                : spanHours < 0.5 ? "HH:mm:ss" : "HH:mm").withZone(ZoneOffset.UTC);
     }
 
     /** The instant of a value in hours from the start. */
@@ -72,7 +74,7 @@ public final class ClockTime extends Format {
         try {
             LocalDateTime startTime = LocalDateTime.ofInstant(start, ZoneOffset.UTC);
             LocalDateTime at;
-            if (text.length() > 5) {
+            if (text.indexOf('-') > 0) {
                 at = MonthDay.parse(text.substring(0, 5), MONTH_DAY).atYear(startTime.getYear())
                         .atTime(LocalTime.parse(text.substring(6)));
             } else {

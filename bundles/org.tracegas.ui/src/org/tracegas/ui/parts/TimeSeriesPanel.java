@@ -8,6 +8,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.function.Consumer;
 
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.GC;
@@ -16,7 +17,10 @@ import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Menu;
+import org.eclipse.swt.widgets.MenuItem;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swtchart.Chart;
@@ -43,6 +47,13 @@ public final class TimeSeriesPanel extends Composite {
     public record Limit(String name, double value) {
     }
 
+    /** A value picked on the chart: the trace and the value's index in it. */
+    public record Pick(ConcentrationTrace trace, int index) {
+    }
+
+    /** How near, in pixels, a click must come to a value to pick it. */
+    static final int PICK_PIXELS = 12;
+
     private static final String FLAGS_SUFFIX = " flagged";
 
     /** The key to the flag markers, shown under the compound list. */
@@ -55,6 +66,7 @@ public final class TimeSeriesPanel extends Composite {
     private final Table compounds;
     private final ChartNavigation navigation;
     private final CursorReadout cursor;
+    private final List<Consumer<Pick>> openers = new java.util.concurrent.CopyOnWriteArrayList<>();
     private final Map<String, Image> swatches = new HashMap<>();
     private List<ConcentrationTrace> traces = List.of();
     private List<Limit> limits = List.of();
@@ -124,6 +136,22 @@ public final class TimeSeriesPanel extends Composite {
         navigation = new ChartNavigation(this::rethin, chart);
         cursor = new CursorReadout(chart, readout, "%.4f h", "concentration");
         addListener(SWT.Dispose, e -> swatches.values().forEach(Image::dispose));
+        Control plot = chart.getPlotArea().getControl();
+        plot.addListener(SWT.MouseDoubleClick, e -> open(nearest(e.x, e.y)));
+        // the context menu acts on the value nearest to where it was asked for
+        Menu menu = new Menu(plot);
+        MenuItem openSpectrum = new MenuItem(menu, SWT.PUSH);
+        openSpectrum.setText("Open the spectrum of this measurement");
+        int[] at = new int[2];
+        plot.addListener(SWT.MenuDetect, e -> {
+            org.eclipse.swt.graphics.Point p = plot.toControl(e.x, e.y);
+            at[0] = p.x;
+            at[1] = p.y;
+            Pick pick = nearest(p.x, p.y);
+            openSpectrum.setEnabled(pick != null && !pick.trace().measurementIds().isEmpty());
+        });
+        openSpectrum.addListener(SWT.Selection, e -> open(nearest(at[0], at[1])));
+        plot.setMenu(menu);
     }
 
     /**
@@ -221,6 +249,11 @@ public final class TimeSeriesPanel extends Composite {
 
     public Table compoundList() {
         return compounds;
+    }
+
+    /** The traces shown (drawn or not). */
+    public List<ConcentrationTrace> traces() {
+        return traces;
     }
 
     public Label heading() {
@@ -368,6 +401,43 @@ public final class TimeSeriesPanel extends Composite {
     private void rethin() {
         data.refresh();
         chart.redraw();
+    }
+
+    /** Calls {@code opener} with the value picked by a double-click or the context menu. */
+    public void addPointOpener(Consumer<Pick> opener) {
+        openers.add(opener);
+    }
+
+    private void open(Pick pick) {
+        if (pick != null && !pick.trace().measurementIds().isEmpty()) {
+            openers.forEach(o -> o.accept(pick));
+        }
+    }
+
+    /**
+     * The drawn value nearest to a pixel of the plot area, or null when none lies within {@value #PICK_PIXELS}
+     * pixels.
+     */
+    public Pick nearest(int x, int y) {
+        Pick best = null;
+        double bestDistance = PICK_PIXELS;
+        Set<String> chosen = selectedCompounds();
+        for (ConcentrationTrace t : traces) {
+            if (!chosen.contains(t.compound())) {
+                continue;
+            }
+            IAxis xAxis = chart.getAxisSet().getXAxis(0);
+            IAxis yAxis = chart.getAxisSet().getYAxis(axisOf(t));
+            for (int i = 0; i < t.hours().length; i++) {
+                double d = Math.hypot(xAxis.getPixelCoordinate(t.hours()[i]) - x,
+                        yAxis.getPixelCoordinate(t.values()[i]) - y);
+                if (d <= bestDistance) {
+                    bestDistance = d;
+                    best = new Pick(t, i);
+                }
+            }
+        }
+        return best;
     }
 
     public ChartNavigation navigation() {
