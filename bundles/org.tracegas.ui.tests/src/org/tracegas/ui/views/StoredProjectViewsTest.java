@@ -19,6 +19,7 @@ import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.TableItem;
+import org.eclipse.swt.widgets.TreeItem;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
@@ -235,5 +236,45 @@ class StoredProjectViewsTest {
         // far from every value nothing is picked
         assertEquals(null, series.nearest(0, 0));
         Screens.save(shell, "time-series-point-opens-spectrum");
+    }
+
+    @Test
+    void theTreeGroupsMeasurementsByDayAndKindFiltersThemAndOffersActionsForWhatIsSelected() throws Exception {
+        Project p = project();
+        nav.viewer().expandToLevel(p, 3);
+        Screens.flush(display);
+        TreeItem projectItem = nav.viewer().getTree().getItem(0).getItem(0);
+        TreeItem day = projectItem.getItem(0);
+        assertEquals("2026-09-22", day.getText());
+        // samples first, then the background taken before them
+        assertEquals("sample", day.getItem(0).getText());
+        assertEquals(StoredProject.SAMPLES, day.getItem(0).getItemCount());
+        assertEquals("background", day.getItem(1).getText());
+
+        nav.filter().setText("10:02");
+        Screens.flush(display);
+        nav.viewer().expandToLevel(p, 3);
+        Screens.flush(display);
+        TreeItem filteredDay = nav.viewer().getTree().getItem(0).getItem(0).getItem(0);
+        assertEquals(1, filteredDay.getItemCount(), "the background has no 10:02 measurement");
+        assertEquals(1, filteredDay.getItem(0).getItemCount());
+        assertEquals("sample  2026-09-22 10:02:00 UTC", filteredDay.getItem(0).getItem(0).getText());
+        Screens.save(shell, "navigator-filtered");
+        nav.filter().setText("");
+        Screens.flush(display);
+
+        java.util.List<Object> opened = new java.util.ArrayList<>();
+        nav.addMenuAction(new WorkspaceNavigator.MenuAction("Open spectrum and fit", Measurement.class::isInstance,
+                opened::add));
+        nav.addMenuAction(new WorkspaceNavigator.MenuAction("Show results to sign", Project.class::isInstance,
+                opened::add));
+        assertEquals(java.util.List.of("Show results to sign"),
+                nav.actionsFor(p).stream().map(WorkspaceNavigator.MenuAction::label).toList());
+        Measurement first = p.getMeasurements().get(1);
+        assertEquals(java.util.List.of("Open spectrum and fit"),
+                nav.actionsFor(first).stream().map(WorkspaceNavigator.MenuAction::label).toList());
+        nav.actionsFor(first).get(0).run().accept(first);
+        assertEquals(java.util.List.of(first), opened);
+        assertTrue(nav.actionsFor(nav.workspace().getLibraries().get(0)).isEmpty());
     }
 }

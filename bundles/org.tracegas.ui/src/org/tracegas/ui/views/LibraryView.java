@@ -19,7 +19,7 @@ import org.tracegas.ui.session.StoredLibrary;
  * The references of a library in {@link LibraryBrowserPanel}: at first the demo's spectra, then those the newest
  * stored version lists of the library selected in the navigator, read in the background.
  */
-public final class LibraryView extends ViewPart {
+public final class LibraryView extends ViewPart implements FollowsTree {
 
     public static final String ID = "org.tracegas.ui.views.library";
 
@@ -47,7 +47,8 @@ public final class LibraryView extends ViewPart {
     }
 
     /** Reads the selected library's newest stored version in the background; a later selection wins. */
-    void selected(IWorkbenchPart part, ISelection selection) {
+    @Override
+    public void selected(IWorkbenchPart part, ISelection selection) {
         if (panel.isDisposed() || !(selection instanceof IStructuredSelection s)
                 || !(s.getFirstElement() instanceof ReferenceLibrary library) || library.getName() == null) {
             return;

@@ -23,7 +23,7 @@ import org.tracegas.ui.session.Desk;
  * QA check outcomes in {@link QaOverviewPanel}: those stored for the project selected in the navigator (or
  * for the project of the selected measurement), read in the background; at first the demo's checks.
  */
-public final class QaOverviewView extends ViewPart {
+public final class QaOverviewView extends ViewPart implements FollowsTree {
 
     public static final String ID = "org.tracegas.ui.views.qaOverview";
 
@@ -50,7 +50,8 @@ public final class QaOverviewView extends ViewPart {
     }
 
     /** Reads the stored QA outcomes of the selected project in the background; a later selection wins. */
-    void selected(IWorkbenchPart part, ISelection selection) {
+    @Override
+    public void selected(IWorkbenchPart part, ISelection selection) {
         Project project = Selections.project(selection);
         if (panel.isDisposed() || project == null) {
             return;

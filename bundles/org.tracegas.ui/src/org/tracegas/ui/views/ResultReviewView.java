@@ -19,7 +19,7 @@ import org.tracegas.ui.session.Desk;
  * The results of the project selected in the navigator (or of the selected measurement's project) for review
  * and signing, in {@link ResultReviewPanel}; at first the demo's project.
  */
-public final class ResultReviewView extends ViewPart {
+public final class ResultReviewView extends ViewPart implements FollowsTree {
 
     public static final String ID = "org.tracegas.ui.views.resultReview";
 
@@ -51,7 +51,8 @@ public final class ResultReviewView extends ViewPart {
     }
 
     /** Opens the results of the selected project, unless they are open already. */
-    void selected(IWorkbenchPart part, ISelection selection) {
+    @Override
+    public void selected(IWorkbenchPart part, ISelection selection) {
         Project project = Selections.project(selection);
         if (panel.isDisposed() || project == null || project.getId().equals(openProjectId)) {
             return;

@@ -24,7 +24,7 @@ import org.tracegas.ui.session.MeasurementSpectrum;
  * Draws in {@link SpectrumPanel} the fit of the last measurement run, or the stored spectrum of the measurement
  * selected in the navigator, read in the background.
  */
-public final class SpectrumView extends ViewPart {
+public final class SpectrumView extends ViewPart implements FollowsTree {
 
     public static final String ID = "org.tracegas.ui.views.spectrum";
 
@@ -56,7 +56,8 @@ public final class SpectrumView extends ViewPart {
     }
 
     /** Reads the selected measurement's stored spectrum in the background; a later selection wins. */
-    void selected(IWorkbenchPart part, ISelection selection) {
+    @Override
+    public void selected(IWorkbenchPart part, ISelection selection) {
         Measurement m = Selections.measurement(selection);
         Project project = Selections.project(selection);
         if (panel.isDisposed() || m == null || project == null) {

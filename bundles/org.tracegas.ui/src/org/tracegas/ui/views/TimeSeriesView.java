@@ -25,7 +25,7 @@ import org.tracegas.ui.session.StoredResults;
  * Concentrations over time, drawn by {@link TimeSeriesPanel}: those of the last run, or the stored results of
  * the project selected in the navigator.
  */
-public final class TimeSeriesView extends ViewPart {
+public final class TimeSeriesView extends ViewPart implements FollowsTree {
 
     public static final String ID = "org.tracegas.ui.views.timeSeries";
 
@@ -67,7 +67,8 @@ public final class TimeSeriesView extends ViewPart {
     }
 
     /** Reads the selected project's stored results in the background; a later selection wins. */
-    void selected(IWorkbenchPart part, ISelection selection) {
+    @Override
+    public void selected(IWorkbenchPart part, ISelection selection) {
         if (panel.isDisposed() || !(selection instanceof IStructuredSelection s)
                 || !(s.getFirstElement() instanceof Project project)) {
             return;
