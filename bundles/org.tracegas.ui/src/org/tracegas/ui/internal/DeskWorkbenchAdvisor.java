@@ -33,7 +33,7 @@ final class DeskWorkbenchAdvisor extends WorkbenchAdvisor {
             @Override
             public void preWindowOpen() {
                 IWorkbenchWindowConfigurer c = getWindowConfigurer();
-                c.setInitialSize(new Point(1280, 860));
+                c.setInitialSize(new Point(1280, 800)); // fits the smallest screen the desk is made for
                 c.setShowCoolBar(true); // the Analysis toolbar
                 c.setShowStatusLine(true);
                 c.setShowPerspectiveBar(true);
