@@ -45,7 +45,7 @@ class StoredResultsTest {
             third.set(2);
             assertEquals(third, traces.get(1).flagged());
             assertTrue(traces.get(0).flagged().isEmpty());
-            assertEquals("Stored results of RIV-2026-05, hours from 2026-05-04 06:00 UTC",
+            assertEquals("Stored results of RIV-2026-05 from 2026-05-04 06:00 UTC",
                     StoredResults.title(ExistingWorkspace.CODE, t));
         }
     }

@@ -85,11 +85,20 @@ class StoredWorkspaceTest {
         Screens.flush(display);
         Project selected = (Project) ((IStructuredSelection) nav.viewer().getSelection()).getFirstElement();
         assertEquals(written.project.id(), selected.getId());
-        // all 231 fit on the first page, in time order: the background, then samples a minute apart
-        assertEquals(231, project.getItemCount());
-        assertEquals("background  2026-05-04 05:55:00 UTC", project.getItem(0).getText());
-        assertEquals("sample  2026-05-04 06:00:00 UTC", project.getItem(1).getText());
-        assertEquals("sample  2026-05-04 09:49:00 UTC", project.getItem(230).getText());
+        // one day, its samples and its background apart; all fit on the first page, in time order
+        nav.viewer().expandToLevel(selected, 3);
+        Screens.flush(display);
+        assertEquals(1, project.getItemCount());
+        TreeItem day = project.getItem(0);
+        assertEquals("2026-05-04", day.getText());
+        assertEquals(2, day.getItemCount());
+        TreeItem samples = day.getItem(0);
+        assertEquals("sample", samples.getText());
+        assertEquals(230, samples.getItemCount());
+        assertEquals("sample  2026-05-04 06:00:00 UTC", samples.getItem(0).getText());
+        assertEquals("sample  2026-05-04 09:49:00 UTC", samples.getItem(229).getText());
+        assertEquals("background", day.getItem(1).getText());
+        assertEquals("background  2026-05-04 05:55:00 UTC", day.getItem(1).getItem(0).getText());
         // newest versions from the store; recording the results froze the method version
         assertEquals("Reference libraries", top[1].getText());
         nav.viewer().expandAll();

@@ -143,26 +143,38 @@ class DeskViewsTest {
         assertTrue(nav.openProject(CampaignDay.CODE));
         Screens.flush(display);
         TreeItem projectItem = client.getItem(0);
+        // grouped by day (UTC) and kind: one day of samples
+        assertEquals(1, projectItem.getItemCount());
+        TreeItem dayItem = projectItem.getItem(0);
+        assertEquals("2026-07-14", dayItem.getText());
+        nav.viewer().expandToLevel(dayItem.getData(), 1);
+        Screens.flush(display);
+        assertEquals(1, dayItem.getItemCount());
+        TreeItem samples = dayItem.getItem(0);
+        assertEquals("sample", samples.getText());
+        WorkspaceNavigator.KindGroup group = (WorkspaceNavigator.KindGroup) samples.getData();
+        nav.viewer().expandToLevel(group, 1);
+        Screens.flush(display);
         // one page of 500, then the node standing for the other 940
-        assertEquals(WorkspaceNavigator.PAGE + 1, projectItem.getItemCount());
-        assertEquals("sample  2026-07-14 00:00:00 UTC", projectItem.getItem(0).getText());
-        assertEquals("sample  2026-07-14 08:19:00 UTC", projectItem.getItem(499).getText());
-        TreeItem more = projectItem.getItem(500);
+        assertEquals(WorkspaceNavigator.PAGE + 1, samples.getItemCount());
+        assertEquals("sample  2026-07-14 00:00:00 UTC", samples.getItem(0).getText());
+        assertEquals("sample  2026-07-14 08:19:00 UTC", samples.getItem(499).getText());
+        TreeItem more = samples.getItem(500);
         assertEquals("… 940 more measurements (expand for the next 500)", more.getText());
 
         // the user expands the node, as with a click on its arrow
         Event expand = new Event();
         expand.item = more;
         nav.viewer().getTree().notifyListeners(SWT.Expand, expand);
-        Screens.waitFor(display, () -> projectItem.getItemCount() == 2 * WorkspaceNavigator.PAGE + 1, 5_000);
-        assertEquals("sample  2026-07-14 08:20:00 UTC", projectItem.getItem(500).getText());
-        assertEquals("… 440 more measurements (expand for the next 440)", projectItem.getItem(1000).getText());
+        Screens.waitFor(display, () -> samples.getItemCount() == 2 * WorkspaceNavigator.PAGE + 1, 5_000);
+        assertEquals("sample  2026-07-14 08:20:00 UTC", samples.getItem(500).getText());
+        assertEquals("… 440 more measurements (expand for the next 440)", samples.getItem(1000).getText());
         Screens.save(shell, "desk-views-navigator-pages");
 
-        nav.showMore(project(nav, CampaignDay.CODE));
+        nav.showMore(group);
         Screens.flush(display);
-        assertEquals(CampaignDay.MINUTES, projectItem.getItemCount(), "all pages shown, no node for more");
-        assertEquals("sample  2026-07-14 23:59:00 UTC", projectItem.getItem(CampaignDay.MINUTES - 1).getText());
+        assertEquals(CampaignDay.MINUTES, samples.getItemCount(), "all pages shown, no node for more");
+        assertEquals("sample  2026-07-14 23:59:00 UTC", samples.getItem(CampaignDay.MINUTES - 1).getText());
     }
 
     @Test
@@ -186,7 +198,11 @@ class DeskViewsTest {
         // give a late delivery of the first read every chance to arrive; it must be dropped
         long until = System.currentTimeMillis() + 500;
         Screens.waitFor(display, () -> System.currentTimeMillis() > until, 5_000);
-        assertEquals("Stored results of KLN-2026-07, hours from 2026-07-14 00:00 UTC", panel.heading().getText());
+        assertEquals("Stored results of KLN-2026-07 from 2026-07-14 00:00 UTC", panel.heading().getText());
+        // clock time on the axis, not hours from a start: the day is one calendar day in UTC
+        org.eclipse.swtchart.IAxis time = panel.chart().getAxisSet().getXAxis(0);
+        assertEquals("Time (UTC) on 2026-07-14", time.getTitle().getText());
+        assertEquals("06:30", time.getTick().getFormat().format(6.5));
 
         assertEquals(List.of("CO", "NO", "N2O", "H2O", "CO2"), panel.compounds());
         // at first the trace gases only; water vapour and CO2 are percent-level, major components

@@ -1,6 +1,7 @@
 package org.tracegas.ui.chart;
 
 import java.util.Locale;
+import java.util.function.DoubleFunction;
 
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Label;
@@ -10,7 +11,7 @@ import org.eclipse.swtchart.Chart;
 public final class CursorReadout {
 
     private final Label label;
-    private final String xFormat;
+    private DoubleFunction<String> xText;
     private final String yName;
 
     /**
@@ -19,10 +20,15 @@ public final class CursorReadout {
      */
     public CursorReadout(Chart chart, Label label, String xFormat, String yName) {
         this.label = label;
-        this.xFormat = xFormat;
+        this.xText = x -> String.format(Locale.ROOT, xFormat, x);
         this.yName = yName;
         chart.getPlotArea().getControl().addListener(SWT.MouseMove, e -> show(chart, e.x, e.y));
         chart.getPlotArea().getControl().addListener(SWT.MouseExit, e -> label.setText(""));
+    }
+
+    /** Writes the x value from now on as {@code xText} gives it, e.g. as a clock time. */
+    public void setXText(DoubleFunction<String> xText) {
+        this.xText = xText;
     }
 
     /** Shows the values at pixel (x, y) of the chart's plot area. */
@@ -34,6 +40,6 @@ public final class CursorReadout {
 
     /** The readout text for a data point. */
     public String text(double x, double y) {
-        return String.format(Locale.ROOT, xFormat, x) + "   " + yName + " " + String.format(Locale.ROOT, "%.5f", y);
+        return xText.apply(x) + "   " + yName + " " + String.format(Locale.ROOT, "%.5f", y);
     }
 }

@@ -33,8 +33,8 @@ final class DeskWorkbenchAdvisor extends WorkbenchAdvisor {
             @Override
             public void preWindowOpen() {
                 IWorkbenchWindowConfigurer c = getWindowConfigurer();
-                c.setInitialSize(new Point(1280, 860));
-                c.setShowCoolBar(false);
+                c.setInitialSize(new Point(1280, 800)); // fits the smallest screen the desk is made for
+                c.setShowCoolBar(true); // the Analysis toolbar
                 c.setShowStatusLine(true);
                 c.setShowPerspectiveBar(true);
                 c.setShowProgressIndicator(true);

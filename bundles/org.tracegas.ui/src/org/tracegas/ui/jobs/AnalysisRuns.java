@@ -9,6 +9,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Consumer;
 
+import org.eclipse.swt.widgets.Display;
+
 import org.tracegas.campaign.AnalysisVersions;
 import org.tracegas.installation.InstalledSoftware;
 import org.tracegas.quantify.CompoundResult;
@@ -18,6 +20,7 @@ import org.tracegas.store.Session;
 import org.tracegas.ui.parts.ConcentrationTrace;
 import org.tracegas.ui.parts.FitDisplay;
 import org.tracegas.ui.session.DemoProject.Seeded;
+import org.tracegas.ui.session.Desk;
 import org.tracegas.ui.session.WorkspaceAccess;
 
 /** Builds method runs over a project's measurements and turns their outcomes into what the views draw. */
@@ -30,6 +33,16 @@ public final class AnalysisRuns {
             .ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'").withZone(java.time.ZoneOffset.UTC);
 
     private AnalysisRuns() {
+    }
+
+    /**
+     * Runs the desk's project through its method in the background; the desk hears of the outcomes in the UI
+     * thread of {@code display}.
+     */
+    public static void runOnDesk(Display display) {
+        Desk desk = Desk.get();
+        job(desk.access(), desk.session(), desk.project(),
+                outcomes -> display.asyncExec(() -> desk.runFinished(outcomes))).schedule();
     }
 
     /** A job running the project's method over all its measurements and recording the results. */

@@ -1,6 +1,7 @@
 package org.tracegas.ui.parts;
 
 import java.util.BitSet;
+import java.util.List;
 
 /**
  * One compound's concentrations over time, for the time-series view.
@@ -10,16 +11,31 @@ import java.util.BitSet;
  * @param hours    time of each value in hours from the start of the shown period, ascending
  * @param values   concentration at each time
  * @param flagged  indices of values that carry a quality flag
+ * @param measurementIds the stored measurement of each value, or empty when the values are not stored
  */
-public record ConcentrationTrace(String compound, String unit, double[] hours, double[] values, BitSet flagged) {
+public record ConcentrationTrace(String compound, String unit, double[] hours, double[] values, BitSet flagged,
+        List<String> measurementIds) {
 
-    /** @throws IllegalArgumentException naming the compound whose arrays differ in length */
+    /**
+     * @throws IllegalArgumentException naming the compound whose arrays differ in length, or whose measurement
+     *                                  ids (when known) do not match its values
+     */
     public ConcentrationTrace {
         if (hours.length != values.length) {
             throw new IllegalArgumentException("trace " + compound + ": " + values.length + " values for "
                     + hours.length + " times");
         }
+        if (!measurementIds.isEmpty() && measurementIds.size() != values.length) {
+            throw new IllegalArgumentException("trace " + compound + ": " + measurementIds.size()
+                    + " measurement ids for " + values.length + " values");
+        }
         flagged = (BitSet) flagged.clone();
+        measurementIds = List.copyOf(measurementIds);
+    }
+
+    /** A trace whose values are not tied to stored measurements (e.g. of a run not yet stored). */
+    public ConcentrationTrace(String compound, String unit, double[] hours, double[] values, BitSet flagged) {
+        this(compound, unit, hours, values, flagged, List.of());
     }
 
     /** Times of the flagged values only. */

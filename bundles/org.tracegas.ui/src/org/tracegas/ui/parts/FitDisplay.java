@@ -48,6 +48,13 @@ public record FitDisplay(String title, double[] wavenumber, double[] sample, dou
         return new FitDisplay(title, sample.axis().toArray(), sample.toArray(), model, shares, residual, windows);
     }
 
+    /** A stored spectrum whose fit was not kept: the spectrum alone, no model, residual or windows. */
+    public static FitDisplay unfitted(String title, Spectrum sample) {
+        int n = sample.size();
+        return new FitDisplay(title, sample.axis().toArray(), sample.toArray(), nanArray(n), Map.of(), nanArray(n),
+                List.of());
+    }
+
     private static double[] nanArray(int n) {
         double[] a = new double[n];
         java.util.Arrays.fill(a, Double.NaN);

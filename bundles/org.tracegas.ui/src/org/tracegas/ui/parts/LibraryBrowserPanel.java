@@ -71,6 +71,33 @@ public final class LibraryBrowserPanel extends Composite {
         layout(true);
     }
 
+    /**
+     * Shows references as rows of {@link #COLUMNS} texts, e.g. those a stored library version lists.
+     *
+     * @throws IllegalArgumentException naming a row whose cells do not match the columns
+     */
+    public void showRows(String heading, List<String[]> rows) {
+        table.removeAll();
+        for (int i = 0; i < rows.size(); i++) {
+            String[] cells = rows.get(i);
+            if (cells.length != COLUMNS.size()) {
+                throw new IllegalArgumentException("row " + i + " has " + cells.length + " cells for "
+                        + COLUMNS.size() + " columns");
+            }
+            TableItem item = new TableItem(table, SWT.NONE);
+            item.setText(cells);
+            if (cells[2].startsWith("SYNTHETIC")) {
+                item.setFont(2, bold);
+                item.setBackground(2, Palette.CHANGED);
+            }
+        }
+        for (TableColumn col : table.getColumns()) {
+            col.pack();
+        }
+        summary.setText(heading);
+        layout(true);
+    }
+
     public Table table() {
         return table;
     }

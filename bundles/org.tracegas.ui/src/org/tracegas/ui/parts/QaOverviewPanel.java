@@ -21,9 +21,10 @@ public final class QaOverviewPanel extends Composite {
     public QaOverviewPanel(Composite parent, int style) {
         super(parent, style);
         setLayout(new GridLayout(1, false));
-        Caution.banner(this, 1);
-        summary = new Label(this, SWT.NONE);
-        summary.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        summary = new Label(this, SWT.WRAP);
+        GridData sd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        sd.widthHint = 200; // wraps in a narrow view instead of clipping
+        summary.setLayoutData(sd);
         table = new Table(this, SWT.BORDER | SWT.FULL_SELECTION);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
@@ -33,7 +34,17 @@ public final class QaOverviewPanel extends Composite {
         }
     }
 
+    /** Shows outcomes without naming their project (the demo's). */
     public void show(List<CheckOutcome> outcomes) {
+        show(null, outcomes);
+    }
+
+    /**
+     * Shows the outcomes of a project.
+     *
+     * @param projectCode the project the outcomes belong to, or null
+     */
+    public void show(String projectCode, List<CheckOutcome> outcomes) {
         table.removeAll();
         long failed = outcomes.stream().filter(o -> !o.passed()).count();
         for (CheckOutcome o : outcomes) {
@@ -46,7 +57,16 @@ public final class QaOverviewPanel extends Composite {
         for (TableColumn col : table.getColumns()) {
             col.pack();
         }
-        summary.setText(outcomes.size() + " checks: " + (outcomes.size() - failed) + " passed, " + failed + " failed");
+        String of = projectCode == null ? "" : projectCode + ": ";
+        summary.setText(outcomes.isEmpty() ? of + "no QA checks stored yet"
+                : of + outcomes.size() + " checks: " + (outcomes.size() - failed) + " passed, " + failed + " failed");
+        layout(true);
+    }
+
+    /** A line of text instead of outcomes, e.g. while they are read. */
+    public void showNote(String text) {
+        table.removeAll();
+        summary.setText(text);
         layout(true);
     }
 

@@ -27,6 +27,9 @@ public final class ResultReviewPanel extends Composite {
     private static final DateTimeFormatter SHOWN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss")
             .withZone(ZoneOffset.UTC);
 
+    /** The heading while no project is open. */
+    public static final String NO_PROJECT = "No project open: select a project in the workspace tree.";
+
     private final Label heading;
     private final Table table;
     private final Button sign;
@@ -39,17 +42,14 @@ public final class ResultReviewPanel extends Composite {
     public ResultReviewPanel(Composite parent, int style) {
         super(parent, style);
         setLayout(new GridLayout(2, false));
-        heading = new Label(this, SWT.NONE);
-        heading.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
-        heading.setText("No project open.");
+        heading = new Label(this, SWT.WRAP);
+        GridData hd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        hd.widthHint = 200; // wraps in a narrow view instead of clipping
+        heading.setLayoutData(hd);
+        heading.setText(NO_PROJECT);
         sign = new Button(this, SWT.PUSH);
         sign.setText("Review and sign…");
-        sign.addListener(SWT.Selection, e -> {
-            ResultInfo r = selected();
-            if (r != null && signatureDialog(r).open() == SignatureDialog.OK) {
-                reload();
-            }
-        });
+        sign.addListener(SWT.Selection, e -> reviewSelected());
         table = new Table(this, SWT.BORDER | SWT.FULL_SELECTION);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
@@ -98,6 +98,20 @@ public final class ResultReviewPanel extends Composite {
         layout(true);
     }
 
+    /**
+     * Opens the signature dialog on the selected result and shows the new signature; without a project or a
+     * selected result, says in the heading what is missing (a command that does nothing leaves the reviewer
+     * guessing).
+     */
+    public void reviewSelected() {
+        ResultInfo r = selected();
+        if (r == null) {
+            heading.setText(access == null ? NO_PROJECT : "Select a result in the table to review and sign it.");
+        } else if (signatureDialog(r).open() == SignatureDialog.OK) {
+            reload();
+        }
+    }
+
     /** The selected result, or null. */
     public ResultInfo selected() {
         int i = table.getSelectionIndex();
@@ -107,6 +121,14 @@ public final class ResultReviewPanel extends Composite {
     /** A signature dialog for a result, in this panel's session. */
     public SignatureDialog signatureDialog(ResultInfo r) {
         return new SignatureDialog(getShell(), approval, session, r);
+    }
+
+    public Label heading() {
+        return heading;
+    }
+
+    public Button signButton() {
+        return sign;
     }
 
     public Table table() {

@@ -1,5 +1,6 @@
 package org.tracegas.ui.parts;
 
+import java.util.List;
 import java.util.Map;
 
 import org.eclipse.swt.SWT;
@@ -41,10 +42,11 @@ public final class SpectrumPanel extends Composite {
     public SpectrumPanel(Composite parent, int style) {
         super(parent, style);
         setLayout(new GridLayout(2, false));
-        Caution.banner(this, 2);
-        heading = new Label(this, SWT.NONE);
-        heading.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
-        heading.setText("No spectrum open: run a method on a measurement to see its fit.");
+        heading = new Label(this, SWT.WRAP);
+        GridData hd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        hd.widthHint = 300; // wraps a long heading (a measurement's results) instead of clipping it
+        heading.setLayoutData(hd);
+        heading.setText("No spectrum open: select a measurement in the workspace tree, or run a method.");
         readout = new Label(this, SWT.RIGHT);
         GridData rd = new GridData(SWT.END, SWT.CENTER, false, false);
         rd.widthHint = 330;
@@ -79,13 +81,16 @@ public final class SpectrumPanel extends Composite {
         spectrumData.clear();
         residualData.clear();
         spectrumData.put(ChartStyle.line(spectrum, SAMPLE, Palette.SAMPLE, 1), fit.wavenumber(), fit.sample());
-        int i = 0;
         for (Map.Entry<String, double[]> e : fit.shares().entrySet()) {
-            spectrumData.put(ChartStyle.line(spectrum, SHARE_PREFIX + e.getKey(), Palette.compound(i++), 1),
+            spectrumData.put(ChartStyle.line(spectrum, SHARE_PREFIX + e.getKey(), Palette.compound(e.getKey()), 1),
                     fit.wavenumber(), e.getValue());
         }
-        spectrumData.put(ChartStyle.line(spectrum, FIT, Palette.FIT, 1), fit.wavenumber(), fit.model());
-        residualData.put(ChartStyle.line(residual, RESIDUAL, Palette.RESIDUAL, 1), fit.wavenumber(), fit.residual());
+        if (java.util.Arrays.stream(fit.model()).anyMatch(v -> !Double.isNaN(v))) {
+            // a stored spectrum whose fit was not kept has neither: no empty series in the legends
+            spectrumData.put(ChartStyle.line(spectrum, FIT, Palette.FIT, 1), fit.wavenumber(), fit.model());
+            residualData.put(ChartStyle.line(residual, RESIDUAL, Palette.RESIDUAL, 1), fit.wavenumber(),
+                    fit.residual());
+        }
         spectrumShading.setBands(fit.windows());
         residualShading.setBands(fit.windows());
         Range full = spectrumData.fullXRange();
@@ -93,9 +98,25 @@ public final class SpectrumPanel extends Composite {
         residual.getAxisSet().getXAxis(0).setRange(full);
         rethin();
         spectrum.getAxisSet().getYAxis(0).setRange(spectrumData.fullYRange());
-        residual.getAxisSet().getYAxis(0).setRange(residualData.fullYRange());
+        if (residualData.fullYRange() != null) { // a stored spectrum without its fit has no residual
+            residual.getAxisSet().getYAxis(0).setRange(residualData.fullYRange());
+        }
         spectrum.suspendUpdate(false);
         residual.suspendUpdate(false);
+        layout(true, true);
+        redrawCharts();
+    }
+
+    /** Clears the charts and says why, e.g. while a stored spectrum is read. */
+    public void showNote(String text) {
+        shown = null;
+        heading.setText(text);
+        ChartStyle.removeAllSeries(spectrum);
+        ChartStyle.removeAllSeries(residual);
+        spectrumData.clear();
+        residualData.clear();
+        spectrumShading.setBands(List.of());
+        residualShading.setBands(List.of());
         layout(true, true);
         redrawCharts();
     }

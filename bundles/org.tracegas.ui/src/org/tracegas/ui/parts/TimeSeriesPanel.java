@@ -1,5 +1,6 @@
 package org.tracegas.ui.parts;
 
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.HashMap;
@@ -7,6 +8,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.function.Consumer;
 
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.GC;
@@ -15,7 +17,10 @@ import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Label;
+import org.eclipse.swt.widgets.Menu;
+import org.eclipse.swt.widgets.MenuItem;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swtchart.Chart;
@@ -25,6 +30,7 @@ import org.eclipse.swtchart.ILineSeries.PlotSymbolType;
 import org.eclipse.swtchart.LineStyle;
 import org.eclipse.swtchart.Range;
 import org.tracegas.ui.chart.ChartNavigation;
+import org.tracegas.ui.chart.ClockTime;
 import org.tracegas.ui.chart.CursorReadout;
 import org.tracegas.ui.chart.DecimatedSeries;
 
@@ -41,14 +47,27 @@ public final class TimeSeriesPanel extends Composite {
     public record Limit(String name, double value) {
     }
 
+    /** A value picked on the chart: the trace and the value's index in it. */
+    public record Pick(ConcentrationTrace trace, int index) {
+    }
+
+    /** How near, in pixels, a click must come to a value to pick it. */
+    static final int PICK_PIXELS = 12;
+
     private static final String FLAGS_SUFFIX = " flagged";
+
+    /** The key to the flag markers, shown under the compound list. */
+    public static final String FLAG_KEY = "✕ red cross: the value carries a quality flag (e.g. a high fit "
+            + "residual); Results to sign lists the flags";
 
     private final Chart chart;
     private final DecimatedSeries data;
     private final Label heading;
     private final Table compounds;
     private final ChartNavigation navigation;
-    private final Map<Integer, Image> swatches = new HashMap<>();
+    private final CursorReadout cursor;
+    private final List<Consumer<Pick>> openers = new java.util.concurrent.CopyOnWriteArrayList<>();
+    private final Map<String, Image> swatches = new HashMap<>();
     private List<ConcentrationTrace> traces = List.of();
     private List<Limit> limits = List.of();
     private Set<String> majors = Set.of();
@@ -58,7 +77,6 @@ public final class TimeSeriesPanel extends Composite {
     public TimeSeriesPanel(Composite parent, int style) {
         super(parent, style);
         setLayout(new GridLayout(2, false));
-        Caution.banner(this, 2);
         heading = new Label(this, SWT.WRAP);
         GridData hd = new GridData(SWT.FILL, SWT.CENTER, true, false);
         // wraps rather than clipping the time the hours count from when the view is narrow
@@ -89,6 +107,12 @@ public final class TimeSeriesPanel extends Composite {
         GridData cd = new GridData(SWT.FILL, SWT.FILL, true, true, 2, 1);
         cd.widthHint = 120;
         compounds.setLayoutData(cd);
+        Label flags = new Label(side, SWT.WRAP);
+        GridData fd = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+        fd.widthHint = 120;
+        flags.setLayoutData(fd);
+        // the red crosses carry no legend entry of their own (one per compound would crowd the legend)
+        flags.setText(FLAG_KEY);
         compounds.addListener(SWT.Selection, e -> {
             if (e.detail == SWT.CHECK) {
                 draw(false);
@@ -110,8 +134,24 @@ public final class TimeSeriesPanel extends Composite {
         chart.getAxisSet().getYAxis(0).getTick().setFormat(new java.text.DecimalFormat("0.###"));
         data = new DecimatedSeries(chart);
         navigation = new ChartNavigation(this::rethin, chart);
-        new CursorReadout(chart, readout, "%.4f h", "concentration");
+        cursor = new CursorReadout(chart, readout, "%.4f h", "concentration");
         addListener(SWT.Dispose, e -> swatches.values().forEach(Image::dispose));
+        Control plot = chart.getPlotArea().getControl();
+        plot.addListener(SWT.MouseDoubleClick, e -> open(nearest(e.x, e.y)));
+        // the context menu acts on the value nearest to where it was asked for
+        Menu menu = new Menu(plot);
+        MenuItem openSpectrum = new MenuItem(menu, SWT.PUSH);
+        openSpectrum.setText("Open the spectrum of this measurement");
+        int[] at = new int[2];
+        plot.addListener(SWT.MenuDetect, e -> {
+            org.eclipse.swt.graphics.Point p = plot.toControl(e.x, e.y);
+            at[0] = p.x;
+            at[1] = p.y;
+            Pick pick = nearest(p.x, p.y);
+            openSpectrum.setEnabled(pick != null && !pick.trace().measurementIds().isEmpty());
+        });
+        openSpectrum.addListener(SWT.Selection, e -> open(nearest(at[0], at[1])));
+        plot.setMenu(menu);
     }
 
     /**
@@ -119,7 +159,28 @@ public final class TimeSeriesPanel extends Composite {
      * the user chose when the same compounds were shown before.
      */
     public void show(String title, List<ConcentrationTrace> traces, List<Limit> limits) {
+        show(title, traces, limits, null);
+    }
+
+    /**
+     * Shows traces as {@link #show(String, List, List)} does, on a clock-time axis (UTC) when {@code start},
+     * the instant hour 0 of the traces stands for, is known.
+     */
+    public void show(String title, List<ConcentrationTrace> traces, List<Limit> limits, Instant start) {
         heading.setText(title);
+        double last = traces.stream().filter(t -> t.hours().length > 0)
+                .mapToDouble(t -> t.hours()[t.hours().length - 1]).max().orElse(0);
+        IAxis time = chart.getAxisSet().getXAxis(0);
+        if (start == null) {
+            time.getTitle().setText("Time (h)");
+            time.getTick().setFormat(null);
+            cursor.setXText(x -> String.format(java.util.Locale.ROOT, "%.4f h", x));
+        } else {
+            ClockTime clock = new ClockTime(start, last);
+            time.getTitle().setText(clock.axisTitle(last));
+            time.getTick().setFormat(clock);
+            cursor.setXText(clock::full);
+        }
         List<String> before = compounds();
         Set<String> chosen = selectedCompounds();
         this.traces = List.copyOf(traces);
@@ -190,6 +251,11 @@ public final class TimeSeriesPanel extends Composite {
         return compounds;
     }
 
+    /** The traces shown (drawn or not). */
+    public List<ConcentrationTrace> traces() {
+        return traces;
+    }
+
     public Label heading() {
         return heading;
     }
@@ -201,19 +267,19 @@ public final class TimeSeriesPanel extends Composite {
 
     private void fillList(Set<String> checked) {
         compounds.removeAll();
-        for (int i = 0; i < traces.size(); i++) {
-            String c = traces.get(i).compound();
+        for (ConcentrationTrace t : traces) {
+            String c = t.compound();
             TableItem item = new TableItem(compounds, SWT.NONE);
             item.setData(c);
             item.setText(majors.contains(c) ? c + "  (major)" : c);
-            item.setImage(swatch(i));
+            item.setImage(swatch(c));
             item.setChecked(checked.contains(c));
         }
     }
 
     /** A small square in the compound's line colour, so the list doubles as a key. */
-    private Image swatch(int i) {
-        return swatches.computeIfAbsent(Math.floorMod(i, 8), k -> {
+    private Image swatch(String compound) {
+        return swatches.computeIfAbsent(compound, k -> {
             Image img = new Image(getDisplay(), 12, 12);
             GC gc = new GC(img);
             try {
@@ -233,11 +299,9 @@ public final class TimeSeriesPanel extends Composite {
         data.clear();
         Set<String> chosen = selectedCompounds();
         List<ConcentrationTrace> drawn = new ArrayList<>();
-        List<Integer> colours = new ArrayList<>();
-        for (int i = 0; i < traces.size(); i++) {
-            if (chosen.contains(traces.get(i).compound())) {
-                drawn.add(traces.get(i));
-                colours.add(i);
+        for (ConcentrationTrace t : traces) {
+            if (chosen.contains(t.compound())) {
+                drawn.add(t);
             }
         }
         boolean anyTrace = drawn.stream().anyMatch(t -> !majors.contains(t.compound()));
@@ -251,7 +315,8 @@ public final class TimeSeriesPanel extends Composite {
             majorAxis().getTitle().setText("Major components, dashed" + unitOf(drawn, true, true));
         }
         for (int k = 0; k < drawn.size(); k++) {
-            ILineSeries<?> s = ChartStyle.line(chart, drawn.get(k).compound(), Palette.compound(colours.get(k)), 1);
+            String compound = drawn.get(k).compound();
+            ILineSeries<?> s = ChartStyle.line(chart, compound, Palette.compound(compound), 1);
             s.setYAxisId(axisOf(drawn.get(k)));
             if (s.getYAxisId() != 0) {
                 // dashed, so that a line tells by itself which axis it is read against
@@ -336,6 +401,43 @@ public final class TimeSeriesPanel extends Composite {
     private void rethin() {
         data.refresh();
         chart.redraw();
+    }
+
+    /** Calls {@code opener} with the value picked by a double-click or the context menu. */
+    public void addPointOpener(Consumer<Pick> opener) {
+        openers.add(opener);
+    }
+
+    private void open(Pick pick) {
+        if (pick != null && !pick.trace().measurementIds().isEmpty()) {
+            openers.forEach(o -> o.accept(pick));
+        }
+    }
+
+    /**
+     * The drawn value nearest to a pixel of the plot area, or null when none lies within {@value #PICK_PIXELS}
+     * pixels.
+     */
+    public Pick nearest(int x, int y) {
+        Pick best = null;
+        double bestDistance = PICK_PIXELS;
+        Set<String> chosen = selectedCompounds();
+        for (ConcentrationTrace t : traces) {
+            if (!chosen.contains(t.compound())) {
+                continue;
+            }
+            IAxis xAxis = chart.getAxisSet().getXAxis(0);
+            IAxis yAxis = chart.getAxisSet().getYAxis(axisOf(t));
+            for (int i = 0; i < t.hours().length; i++) {
+                double d = Math.hypot(xAxis.getPixelCoordinate(t.hours()[i]) - x,
+                        yAxis.getPixelCoordinate(t.values()[i]) - y);
+                if (d <= bestDistance) {
+                    bestDistance = d;
+                    best = new Pick(t, i);
+                }
+            }
+        }
+        return best;
     }
 
     public ChartNavigation navigation() {

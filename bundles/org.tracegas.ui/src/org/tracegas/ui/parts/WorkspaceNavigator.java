@@ -1,12 +1,21 @@
 package org.tracegas.ui.parts;
 
+import java.time.LocalDate;
 import java.time.ZoneOffset;
 import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
 import java.util.IdentityHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
+import java.util.TreeMap;
+import java.util.function.Consumer;
+import java.util.function.Predicate;
 
+import org.eclipse.jface.action.Action;
+import org.eclipse.jface.action.MenuManager;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.viewers.ITreeContentProvider;
 import org.eclipse.jface.viewers.ITreeViewerListener;
@@ -14,22 +23,28 @@ import org.eclipse.jface.viewers.LabelProvider;
 import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.jface.viewers.TreeExpansionEvent;
 import org.eclipse.jface.viewers.TreeViewer;
+import org.eclipse.jface.viewers.Viewer;
+import org.eclipse.jface.viewers.ViewerFilter;
 import org.eclipse.swt.SWT;
-import org.eclipse.swt.layout.FillLayout;
+import org.eclipse.swt.layout.GridData;
+import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Text;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
+import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.Workspace;
 
 /**
- * The workspace as a tree: clients with their projects and measurements, then the reference libraries and
- * the analysis methods with their versions. A project's measurements are listed a page at a time; the node
- * after the last page shown brings the next page when it is expanded or double-clicked. While the workspace
- * is read, the tree holds a single note saying so.
+ * The workspace as a tree: clients with their projects, each project's measurements grouped by day (UTC) and
+ * kind, then the reference libraries and the analysis methods with their versions. A group's measurements are
+ * listed a page at a time; the node after the last page shown brings the next page when it is expanded or
+ * double-clicked. A filter box above the tree keeps what matches its text; the context menu offers what the
+ * desk registered for the element. While the workspace is read, the tree holds a single note saying so.
  */
 public final class WorkspaceNavigator extends Composite {
 
@@ -37,8 +52,20 @@ public final class WorkspaceNavigator extends Composite {
     public record Group(String label, List<?> members) {
     }
 
-    /** Stands for the measurements of a project beyond those shown; expanding it shows the next page. */
-    public record More(Project project, int hidden) {
+    /** A project's measurements of one calendar day (UTC). */
+    public record Day(Project project, LocalDate day) {
+    }
+
+    /** A day's measurements of one kind (samples, backgrounds, ...), listed a page at a time. */
+    public record KindGroup(Day day, MeasurementKind kind) {
+    }
+
+    /** Stands for the measurements of a group beyond those shown; expanding it shows the next page. */
+    public record More(KindGroup group, int hidden) {
+    }
+
+    /** An entry of the tree's context menu, offered for the elements it applies to. */
+    public record MenuAction(String label, Predicate<Object> appliesTo, Consumer<Object> run) {
     }
 
     /** A line of text instead of a workspace, e.g. while it is read or when reading failed. */
@@ -51,14 +78,48 @@ public final class WorkspaceNavigator extends Composite {
     private static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'")
             .withZone(ZoneOffset.UTC);
 
+    private final Text filter;
     private final TreeViewer viewer;
-    /** Measurements shown per project, in pages; identity keys, as projects of two reads may be equal. */
-    private final Map<Project, Integer> shown = new IdentityHashMap<>();
+    /** Measurements shown per group, in pages. */
+    private final Map<KindGroup, Integer> shown = new HashMap<>();
+    /** Each project's measurements by day and kind, in time order; identity keys (projects of two reads may be equal). */
+    private final Map<Project, Map<LocalDate, Map<MeasurementKind, List<Measurement>>>> grouped =
+            new IdentityHashMap<>();
+    private final List<MenuAction> menuActions = new ArrayList<>();
 
     public WorkspaceNavigator(Composite parent, int style) {
         super(parent, style);
-        setLayout(new FillLayout());
+        GridLayout layout = new GridLayout(1, false);
+        layout.marginWidth = 0;
+        layout.marginHeight = 0;
+        setLayout(layout);
+        filter = new Text(this, SWT.SEARCH | SWT.ICON_CANCEL | SWT.ICON_SEARCH);
+        filter.setMessage("Filter: project, client, kind or day (e.g. 2026-07-14)");
+        filter.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
         viewer = new TreeViewer(this, SWT.SINGLE | SWT.V_SCROLL | SWT.H_SCROLL);
+        viewer.getTree().setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
+        viewer.addFilter(new ViewerFilter() {
+            @Override
+            public boolean select(Viewer v, Object parentElement, Object element) {
+                return matches(element, filter.getText().strip().toLowerCase(Locale.ROOT));
+            }
+        });
+        filter.addListener(SWT.Modify, e -> viewer.refresh());
+        MenuManager menu = new MenuManager();
+        menu.setRemoveAllWhenShown(true);
+        menu.addMenuListener(m -> {
+            Object o = ((IStructuredSelection) viewer.getSelection()).getFirstElement();
+            for (MenuAction a : actionsFor(o)) {
+                m.add(new Action(a.label()) {
+                    @Override
+                    public void run() {
+                        a.run().accept(o);
+                    }
+                });
+            }
+        });
+        viewer.getTree().setMenu(menu.createContextMenu(viewer.getTree()));
+        addDisposeListener(e -> menu.dispose());
         viewer.setContentProvider(new Content());
         viewer.setLabelProvider(new LabelProvider() {
             @Override
@@ -74,7 +135,7 @@ public final class WorkspaceNavigator extends Composite {
                     // the tree is still expanding the node; change its parent's children afterwards
                     getDisplay().asyncExec(() -> {
                         if (!isDisposed()) {
-                            showMore(m.project());
+                            showMore(m.group());
                         }
                     });
                 }
@@ -87,13 +148,14 @@ public final class WorkspaceNavigator extends Composite {
         });
         viewer.addDoubleClickListener(e -> {
             if (((IStructuredSelection) e.getSelection()).getFirstElement() instanceof More m) {
-                showMore(m.project());
+                showMore(m.group());
             }
         });
     }
 
     public void setWorkspace(Workspace workspace) {
         shown.clear();
+        grouped.clear();
         viewer.setInput(workspace);
         viewer.expandToLevel(2);
     }
@@ -101,6 +163,7 @@ public final class WorkspaceNavigator extends Composite {
     /** Shows a note instead of a workspace, e.g. "Reading the workspace …". */
     public void showNote(String text) {
         shown.clear();
+        grouped.clear();
         viewer.setInput(new Note(text));
     }
 
@@ -113,20 +176,84 @@ public final class WorkspaceNavigator extends Composite {
         return viewer;
     }
 
-    /** How many of the project's measurements are listed. */
-    public int shownMeasurements(Project p) {
-        return Math.min(p.getMeasurements().size(), shown.getOrDefault(p, PAGE));
+    /** The filter box above the tree. */
+    public Text filter() {
+        return filter;
     }
 
-    /** Lists the next page of the project's measurements and selects the first of them. */
-    public void showMore(Project p) {
-        int before = shownMeasurements(p);
-        if (before >= p.getMeasurements().size()) {
+    /** Offers an entry in the tree's context menu for the elements it applies to. */
+    public void addMenuAction(MenuAction action) {
+        menuActions.add(action);
+    }
+
+    /** The context-menu entries offered for an element. */
+    public List<MenuAction> actionsFor(Object element) {
+        return menuActions.stream().filter(a -> element != null && a.appliesTo().test(element)).toList();
+    }
+
+    /** The groups of a project: its days, in time order. */
+    public List<Day> days(Project p) {
+        return byDay(p).keySet().stream().map(d -> new Day(p, d)).toList();
+    }
+
+    /** The measurements of a group, in time order. */
+    public List<Measurement> measurements(KindGroup g) {
+        return byDay(g.day().project()).getOrDefault(g.day().day(), Map.of()).getOrDefault(g.kind(), List.of());
+    }
+
+    /** How many of the group's measurements are listed. */
+    public int shownMeasurements(KindGroup g) {
+        return Math.min(measurements(g).size(), shown.getOrDefault(g, PAGE));
+    }
+
+    /** Lists the next page of the group's measurements and selects the first of them. */
+    public void showMore(KindGroup g) {
+        int before = shownMeasurements(g);
+        List<Measurement> all = measurements(g);
+        if (before >= all.size()) {
             return;
         }
-        shown.put(p, before + PAGE);
-        viewer.refresh(p);
-        viewer.setSelection(new StructuredSelection(p.getMeasurements().get(before)), true);
+        shown.put(g, before + PAGE);
+        viewer.refresh(g);
+        viewer.setSelection(new StructuredSelection(all.get(before)), true);
+    }
+
+    private Map<LocalDate, Map<MeasurementKind, List<Measurement>>> byDay(Project p) {
+        return grouped.computeIfAbsent(p, k -> {
+            Map<LocalDate, Map<MeasurementKind, List<Measurement>>> days = new TreeMap<>();
+            List<Measurement> sorted = new ArrayList<>(p.getMeasurements());
+            sorted.sort(Comparator.comparing(Measurement::getTime, Comparator.nullsLast(Comparator.naturalOrder())));
+            for (Measurement m : sorted) {
+                LocalDate day = m.getTime() == null ? LocalDate.MIN : LocalDate.ofInstant(m.getTime(), ZoneOffset.UTC);
+                days.computeIfAbsent(day, d -> new TreeMap<>()).computeIfAbsent(m.getKind(), x -> new ArrayList<>())
+                        .add(m);
+            }
+            return days;
+        });
+    }
+
+    /** Whether an element, or something beneath it, matches the filter text (lower case; empty matches all). */
+    private boolean matches(Object e, String text) {
+        if (text.isEmpty() || !(e instanceof Client || e instanceof Project || e instanceof Day
+                || e instanceof KindGroup || e instanceof Measurement)) {
+            return true;
+        }
+        if (label(e).toLowerCase(Locale.ROOT).contains(text)) {
+            return true;
+        }
+        if (e instanceof Client c) {
+            return c.getProjects().stream().anyMatch(p -> matches(p, text));
+        } else if (e instanceof Project p) {
+            return days(p).stream().anyMatch(d -> matches(d, text));
+        } else if (e instanceof Day d) {
+            return byDay(d.project()).get(d.day()).keySet().stream().anyMatch(k -> matches(new KindGroup(d, k), text));
+        } else if (e instanceof KindGroup g) {
+            return measurements(g).stream().anyMatch(m -> matches(m, text));
+        } else if (e instanceof Measurement m) {
+            // a measurement matches through its project, day or kind too, so "2026-07-14" keeps that day's
+            return m.eContainer() instanceof Project p && label(p).toLowerCase(Locale.ROOT).contains(text);
+        }
+        return false;
     }
 
     /** Selects and reveals a project by its code; returns false if there is none. */
@@ -154,8 +281,11 @@ public final class WorkspaceNavigator extends Composite {
         } else if (e instanceof Project p) {
             return p.getCode() + "  " + p.getName() + "  (" + p.getMeasurements().size() + " measurements)";
         } else if (e instanceof Measurement m) {
-            return m.getKind().getLiteral().toLowerCase().replace('_', ' ') + "  "
-                    + (m.getTime() == null ? "time unknown" : TIME.format(m.getTime()));
+            return kind(m.getKind()) + "  " + (m.getTime() == null ? "time unknown" : TIME.format(m.getTime()));
+        } else if (e instanceof Day d) {
+            return d.day().equals(LocalDate.MIN) ? "time unknown" : d.day().toString();
+        } else if (e instanceof KindGroup g) {
+            return kind(g.kind());
         } else if (e instanceof More m) {
             return "… " + m.hidden() + " more measurements (expand for the next " + Math.min(PAGE, m.hidden()) + ")";
         } else if (e instanceof Note n) {
@@ -170,6 +300,10 @@ public final class WorkspaceNavigator extends Composite {
             return "version " + v.getNumber() + (v.isFrozen() ? " (frozen)" : " (draft)");
         }
         return String.valueOf(e);
+    }
+
+    private static String kind(MeasurementKind k) {
+        return k.getLiteral().toLowerCase(Locale.ROOT).replace('_', ' ');
     }
 
     private final class Content implements ITreeContentProvider {
@@ -190,7 +324,11 @@ public final class WorkspaceNavigator extends Composite {
             if (e instanceof Client c) {
                 return c.getProjects().toArray();
             } else if (e instanceof Project p) {
-                return measurements(p);
+                return days(p).toArray();
+            } else if (e instanceof Day d) {
+                return byDay(d.project()).get(d.day()).keySet().stream().map(k -> new KindGroup(d, k)).toArray();
+            } else if (e instanceof KindGroup g) {
+                return page(g);
             } else if (e instanceof Group g) {
                 return g.members().toArray();
             } else if (e instanceof AnalysisMethod m) {
@@ -202,12 +340,12 @@ public final class WorkspaceNavigator extends Composite {
             return new Object[0];
         }
 
-        private Object[] measurements(Project p) {
-            List<?> all = p.getMeasurements();
-            int n = shownMeasurements(p);
+        private Object[] page(KindGroup g) {
+            List<Measurement> all = measurements(g);
+            int n = shownMeasurements(g);
             List<Object> page = new ArrayList<>(all.subList(0, n));
             if (n < all.size()) {
-                page.add(new More(p, all.size() - n));
+                page.add(new More(g, all.size() - n));
             }
             return page.toArray();
         }
@@ -215,7 +353,13 @@ public final class WorkspaceNavigator extends Composite {
         @Override
         public Object getParent(Object e) {
             if (e instanceof More m) {
-                return m.project();
+                return m.group();
+            } else if (e instanceof KindGroup g) {
+                return g.day();
+            } else if (e instanceof Day d) {
+                return d.project();
+            } else if (e instanceof Measurement m && m.eContainer() instanceof Project p && m.getTime() != null) {
+                return new KindGroup(new Day(p, LocalDate.ofInstant(m.getTime(), ZoneOffset.UTC)), m.getKind());
             }
             return e instanceof org.eclipse.emf.ecore.EObject o ? o.eContainer() : null;
         }

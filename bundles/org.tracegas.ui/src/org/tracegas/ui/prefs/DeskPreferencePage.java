@@ -1,24 +1,23 @@
 package org.tracegas.ui.prefs;
 
 import org.eclipse.jface.preference.FieldEditorPreferencePage;
-import org.eclipse.jface.preference.IntegerFieldEditor;
 import org.eclipse.jface.preference.StringFieldEditor;
 import org.eclipse.ui.IWorkbench;
 import org.eclipse.ui.IWorkbenchPreferencePage;
 import org.eclipse.ui.preferences.ScopedPreferenceStore;
 import org.eclipse.core.runtime.preferences.InstanceScope;
 
-/** Background age limit, workspace folder and lab server. */
+/**
+ * Workspace folder and lab server. No acceptance criterion is set here: those come with the method and QA plan.
+ */
 public final class DeskPreferencePage extends FieldEditorPreferencePage implements IWorkbenchPreferencePage {
-
-    /** Accepted background age limits in minutes (a day at most). */
-    static final int MAX_BACKGROUND_MINUTES = 24 * 60;
 
     public DeskPreferencePage() {
         super(GRID);
-        setDescription("Settings of the analysis and review desks. A changed workspace or server is used at the "
+        setDescription("Where the desks find the workspace. A changed workspace or server is used at the "
                 + "next start. The lab server's database password is taken from the environment variable "
-                + DeskPreferences.SERVER_PASSWORD_VARIABLE + ".");
+                + DeskPreferences.SERVER_PASSWORD_VARIABLE + ". Acceptance criteria, such as a background's age limit, "
+                + "come with the method and QA plan, not from here.");
     }
 
     @Override
@@ -29,11 +28,6 @@ public final class DeskPreferencePage extends FieldEditorPreferencePage implemen
 
     @Override
     protected void createFieldEditors() {
-        IntegerFieldEditor age = new IntegerFieldEditor(DeskPreferences.BACKGROUND_AGE_MINUTES,
-                "Background age limit (minutes)", getFieldEditorParent());
-        age.setValidRange(1, MAX_BACKGROUND_MINUTES);
-        age.setErrorMessage("Background age limit: a whole number of minutes from 1 to " + MAX_BACKGROUND_MINUTES);
-        addField(age);
         // a plain text field: the folder may not exist yet, it is created at the next start
         StringFieldEditor folder = new StringFieldEditor(DeskPreferences.WORKSPACE_FOLDER,
                 "Workspace folder (created when missing)", getFieldEditorParent());

@@ -1,17 +1,18 @@
 package org.tracegas.ui.prefs;
 
 import java.nio.file.Path;
-import java.time.Duration;
 import java.util.Map;
 
 import org.eclipse.jface.preference.IPreferenceStore;
 import org.tracegas.ui.session.WorkspaceLocation;
 
-/** Preference keys of the desk and their defaults. */
+/**
+ * Preference keys of the desk and their defaults: where the workspace is, nothing else. Acceptance criteria
+ * (a background's age limit, noise limits) belong to the versioned method and QA plan, never to one user's
+ * preferences, so that every result is judged by the criteria recorded with it.
+ */
 public final class DeskPreferences {
 
-    /** Longest accepted age of a background spectrum, in minutes. */
-    public static final String BACKGROUND_AGE_MINUTES = "backgroundAgeMinutes";
     /** Folder of the embedded workspace. */
     public static final String WORKSPACE_FOLDER = "workspaceFolder";
     /** A lab server's jdbc:postgresql: URL; empty for the embedded workspace. */
@@ -24,13 +25,10 @@ public final class DeskPreferences {
      */
     public static final String SERVER_PASSWORD_VARIABLE = "TRACEGAS_SERVER_PASSWORD";
 
-    public static final int DEFAULT_BACKGROUND_AGE_MINUTES = 60;
-
     private DeskPreferences() {
     }
 
     public static void setDefaults(IPreferenceStore store) {
-        store.setDefault(BACKGROUND_AGE_MINUTES, DEFAULT_BACKGROUND_AGE_MINUTES);
         store.setDefault(WORKSPACE_FOLDER, defaultWorkspaceFolder().toString());
         store.setDefault(SERVER_URL, "");
         store.setDefault(SERVER_USER, "tracegas");
@@ -41,10 +39,6 @@ public final class DeskPreferences {
         String fromEnvironment = System.getenv("TRACEGAS_WORKSPACE");
         return fromEnvironment != null && !fromEnvironment.isBlank() ? Path.of(fromEnvironment).toAbsolutePath()
                 : Path.of(System.getProperty("user.home"), "tracegas-workspace");
-    }
-
-    public static Duration backgroundAgeLimit(IPreferenceStore store) {
-        return Duration.ofMinutes(store.getInt(BACKGROUND_AGE_MINUTES));
     }
 
     public static Path workspaceFolder(IPreferenceStore store) {

@@ -52,7 +52,13 @@ public final class DemoProject {
 
     static final SpectralAxis AXIS = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1950, 0.5, 701);
     static final double PATH_METRES = 5.0;
-    /** Sample times; the last comes long after the background, so its background-age check fails. */
+    /**
+     * The demo's QA plan limit on a background's age, as the demo campaign's QA plan sets it
+     * ({@code background-age-limit = 24 h}): part of the demo's definition, the same for every user.
+     */
+    public static final Duration BACKGROUND_AGE_LIMIT = Duration.ofHours(24);
+
+    /** Sample times; the last comes 110 min after the background, well within the QA plan's limit. */
     static final List<Instant> TIMES = List.of(Instant.parse("2026-03-10T08:00:00Z"),
             Instant.parse("2026-03-10T08:01:00Z"), Instant.parse("2026-03-10T09:10:00Z"));
     static final Instant BACKGROUND = Instant.parse("2026-03-10T07:20:00Z");

@@ -39,7 +39,7 @@ public final class StoredResults {
 
     /** The heading of a project's stored traces. */
     public static String title(String projectCode, Traces traces) {
-        return "Stored results of " + projectCode + ", hours from " + SHOWN.format(traces.start());
+        return "Stored results of " + projectCode + " from " + SHOWN.format(traces.start());
     }
 
     /**
@@ -75,15 +75,17 @@ public final class StoredResults {
             double[] hours = new double[points.size()];
             double[] values = new double[points.size()];
             BitSet flagged = new BitSet();
+            List<String> ids = new ArrayList<>();
             for (int i = 0; i < points.size(); i++) {
                 hours[i] = Duration.between(start, points.get(i).time()).toMillis() / 3.6e6;
                 values[i] = points.get(i).result().values().concentration();
+                ids.add(points.get(i).result().values().measurementId());
                 if (!points.get(i).result().values().flags().isEmpty()) {
                     flagged.set(i);
                 }
             }
             traces.add(new ConcentrationTrace(e.getKey(), points.get(0).result().values().unit(), hours, values,
-                    flagged));
+                    flagged, ids));
         }
         return new Traces(List.copyOf(traces), start);
     }

@@ -6,8 +6,10 @@ import java.util.function.Consumer;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
-import org.eclipse.swt.widgets.Display;
+import org.eclipse.ui.IViewPart;
+import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.part.ViewPart;
+import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
 import org.tracegas.model.Workspace;
 import org.tracegas.ui.jobs.AnalysisRuns;
@@ -34,6 +36,28 @@ public final class NavigatorView extends ViewPart {
     public void createPartControl(Composite parent) {
         createContent(parent);
         getSite().setSelectionProvider(navigator.viewer());
+        offer("Open spectrum and fit", Measurement.class, SpectrumView.ID);
+        offer("Show concentrations over time", Project.class, TimeSeriesView.ID);
+        offer("Show results to sign", Project.class, ResultReviewView.ID);
+        offer("Show QA checks", Project.class, QaOverviewView.ID);
+        offer("Show QA checks of its project", Measurement.class, QaOverviewView.ID);
+    }
+
+    /**
+     * A context-menu entry bringing up a view for an element of a type; the view, perhaps opened just now, is
+     * handed the tree's selection at once.
+     */
+    private void offer(String label, Class<?> type, String viewId) {
+        navigator.addMenuAction(new WorkspaceNavigator.MenuAction(label, type::isInstance, element -> {
+            try {
+                IViewPart view = getSite().getPage().showView(viewId);
+                if (view instanceof FollowsTree follower) {
+                    follower.selected(this, navigator.viewer().getSelection());
+                }
+            } catch (PartInitException e) {
+                navigator.showNote("The view could not be opened: " + e.getMessage());
+            }
+        }));
     }
 
     /** The tree and its loading, without the workbench site (so that it can be shown in any shell). */
@@ -56,9 +80,7 @@ public final class NavigatorView extends ViewPart {
         navigator.viewer().addDoubleClickListener(e -> {
             Object o = ((IStructuredSelection) e.getSelection()).getFirstElement();
             if (o instanceof Project p && desk.project() != null && p.getId().equals(desk.project().projectId())) {
-                Display display = navigator.getDisplay();
-                AnalysisRuns.job(desk.access(), desk.session(), desk.project(),
-                        outcomes -> display.asyncExec(() -> desk.runFinished(outcomes))).schedule();
+                AnalysisRuns.runOnDesk(navigator.getDisplay());
             }
         });
         desk.addRunListener(refresh);

@@ -9,8 +9,10 @@ import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.ui.ISelectionListener;
 import org.eclipse.ui.IWorkbenchPart;
+import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.part.ViewPart;
 import org.tracegas.model.Project;
+import org.tracegas.ui.chart.ClockTime;
 import org.tracegas.ui.jobs.AnalysisRuns;
 import org.tracegas.ui.jobs.BatchQuantificationJob;
 import org.tracegas.ui.jobs.LatestLoad;
@@ -23,7 +25,7 @@ import org.tracegas.ui.session.StoredResults;
  * Concentrations over time, drawn by {@link TimeSeriesPanel}: those of the last run, or the stored results of
  * the project selected in the navigator.
  */
-public final class TimeSeriesView extends ViewPart {
+public final class TimeSeriesView extends ViewPart implements FollowsTree {
 
     public static final String ID = "org.tracegas.ui.views.timeSeries";
 
@@ -31,6 +33,11 @@ public final class TimeSeriesView extends ViewPart {
     private LatestLoad<StoredResults.Traces> loads;
     private final Consumer<List<BatchQuantificationJob.Outcome>> listener = this::show;
     private final ISelectionListener projectListener = this::selected;
+    private String shownProjectId;
+    private java.time.Instant shownStart;
+    private String shownProjectCode;
+    /** Opens a picked value's spectrum; in the workbench, in the spectrum view. */
+    Consumer<TimeSeriesPanel.Pick> spectrumOpener = this::openInSpectrumView;
 
     @Override
     public void createPartControl(Composite parent) {
@@ -42,6 +49,7 @@ public final class TimeSeriesView extends ViewPart {
     TimeSeriesPanel createContent(Composite parent) {
         panel = new TimeSeriesPanel(parent, SWT.NONE);
         loads = new LatestLoad<>(panel);
+        panel.addPointOpener(pick -> spectrumOpener.accept(pick));
         show(Desk.get().lastRun());
         Desk.get().addRunListener(listener);
         return panel;
@@ -53,12 +61,14 @@ public final class TimeSeriesView extends ViewPart {
             return;
         }
         loads.cancel(); // a run that finishes now is newer than any stored results still being read
-        panel.show("Concentrations of " + DemoProject.PROJECT_CODE + ", hours from the first measurement",
-                AnalysisRuns.traces(outcomes, p.measurementTimes(), p.measurementTimes().get(0)), List.of());
+        panel.show("Concentrations of " + DemoProject.PROJECT_CODE + " from the method run",
+                AnalysisRuns.traces(outcomes, p.measurementTimes(), p.measurementTimes().get(0)), List.of(),
+                p.measurementTimes().get(0));
     }
 
     /** Reads the selected project's stored results in the background; a later selection wins. */
-    void selected(IWorkbenchPart part, ISelection selection) {
+    @Override
+    public void selected(IWorkbenchPart part, ISelection selection) {
         if (panel.isDisposed() || !(selection instanceof IStructuredSelection s)
                 || !(s.getFirstElement() instanceof Project project)) {
             return;
@@ -66,6 +76,8 @@ public final class TimeSeriesView extends ViewPart {
         Desk desk = Desk.get();
         String id = project.getId();
         String code = project.getCode();
+        shownProjectId = id;
+        shownProjectCode = code;
         panel.showNote("Reading the stored results of " + code + " …");
         loads.start("Reading the stored results of " + code,
                 monitor -> StoredResults.traces(desk.access().store(), desk.session(), id, monitor),
@@ -73,12 +85,39 @@ public final class TimeSeriesView extends ViewPart {
                 message -> panel.showNote("The stored results of " + code + " could not be read: " + message));
     }
 
+    /** Brings up the spectrum view with the stored spectrum of the picked value's measurement. */
+    private void openInSpectrumView(TimeSeriesPanel.Pick pick) {
+        try {
+            SpectrumView view = (SpectrumView) getSite().getPage().showView(SpectrumView.ID);
+            view.open(shownProjectId, pick.trace().measurementIds().get(pick.index()), label(pick));
+        } catch (PartInitException e) {
+            panel.showNote("The spectrum view could not be opened: " + e.getMessage());
+        }
+    }
+
+    /** What the spectrum view calls the picked value's measurement. */
+    String label(TimeSeriesPanel.Pick pick) {
+        return pick.trace().compound() + " value at " + new ClockTime(shownStart, 0).full(pick.trace().hours()[pick
+                .index()]) + " of " + shownProjectCode;
+    }
+
+    /** The project whose stored results are shown, or null. */
+    String shownProjectId() {
+        return shownProjectId;
+    }
+
     private void showStored(StoredResults.Traces stored, String code) {
         if (stored.traces().isEmpty()) {
             panel.showNote("No stored results for " + code + " yet.");
         } else {
-            panel.show(StoredResults.title(code, stored), stored.traces(), List.of());
+            shownStart = stored.start();
+            panel.show(StoredResults.title(code, stored), stored.traces(), List.of(), stored.start());
         }
+    }
+
+    /** The panel shown. */
+    public TimeSeriesPanel panel() {
+        return panel;
     }
 
     @Override

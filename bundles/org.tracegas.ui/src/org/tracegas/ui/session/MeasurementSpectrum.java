@@ -1,0 +1,73 @@
+package org.tracegas.ui.session;
+
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.stream.Collectors;
+import java.util.stream.Stream;
+
+import org.eclipse.core.runtime.IProgressMonitor;
+import org.eclipse.core.runtime.OperationCanceledException;
+
+import org.tracegas.store.ResultInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.StoredSpectrum;
+import org.tracegas.store.WorkspaceStore;
+import org.tracegas.ui.parts.FitDisplay;
+
+/**
+ * The spectrum stored for one measurement, as the spectrum view shows it, headed by the measurement and the
+ * results stored for it (with uncertainty and flags), so that a number is never shown without its spectrum's
+ * provenance.
+ */
+public final class MeasurementSpectrum {
+
+    private static final DateTimeFormatter SHOWN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'")
+            .withZone(ZoneOffset.UTC);
+
+    private MeasurementSpectrum() {
+    }
+
+    /**
+     * Reads the spectrum of a measurement. Meant for a background job.
+     *
+     * @param label what the measurement is, e.g. "sample 2026-05-04 06:02 of RIV-2026-05"
+     * @return the display, or empty when no spectrum is stored for the measurement
+     * @throws OperationCanceledException when the monitor was cancelled
+     */
+    public static Optional<FitDisplay> read(WorkspaceStore store, Session actor, String projectId,
+            String measurementId, String label, IProgressMonitor monitor) {
+        StoredSpectrum found;
+        try (Stream<StoredSpectrum> all = store.spectra().stream(actor, projectId)) {
+            found = all.filter(s -> {
+                if (monitor.isCanceled()) {
+                    throw new OperationCanceledException();
+                }
+                return measurementId.equals(s.measurementId());
+            }).findFirst().orElse(null);
+        }
+        if (found == null) {
+            return Optional.empty();
+        }
+        String results = store.results().results(actor, projectId).stream()
+                .filter(r -> measurementId.equals(r.values().measurementId())).map(MeasurementSpectrum::result)
+                .collect(Collectors.joining("; "));
+        String title = label + " — stored " + found.content().getLiteral().toLowerCase(Locale.ROOT).replace('_', ' ')
+                + ", fit not kept" + (results.isEmpty() ? "; no results stored" : "; " + results);
+        return Optional.of(FitDisplay.unfitted(title, found.spectrum()));
+    }
+
+    /** What the tree and the spectrum view call a measurement: "sample 2026-05-04 06:02:00 UTC". */
+    public static String label(String kind, Instant time) {
+        return kind.toLowerCase(Locale.ROOT).replace('_', ' ') + " " + (time == null ? "(time unknown)"
+                : SHOWN.format(time));
+    }
+
+    private static String result(ResultInfo r) {
+        return String.format(Locale.ROOT, "%s %.4g ± %.2g %s%s", r.values().compound(), r.values().concentration(),
+                r.values().uncertainty(), r.values().unit(),
+                r.values().flags().isEmpty() ? "" : " " + r.values().flags());
+    }
+}
