@@ -48,6 +48,12 @@ class StoredMethodTest {
                 "a".repeat(64));
     }
 
+    /** A stored head with the library named by its folder: a method file the runner defines methods from. */
+    private static String asMethodFile(String head) {
+        return head.replace("library-version = lib-version-1\nlibrary-sha256 = " + "a".repeat(64) + "\n",
+                "library = lib/library.manifest\n");
+    }
+
     @Test
     void theStoredTextReadsBackToTheSameMethod() throws Exception {
         StoredMethod s = stored();
@@ -92,17 +98,15 @@ class StoredMethodTest {
         // earlier method versions were written before a method file could choose the algorithm: they read as before
         String head = stored().declaration();
         assertTrue(!head.contains("algorithm"), head);
-        String file = head.replace("library-version = lib-version-1\nlibrary-sha256 = " + "a".repeat(64) + "\n",
-                "library = lib/library.manifest\n");
+        String file = asMethodFile(head);
         assertEquals(FitAlgorithm.CLASSICAL_LEAST_SQUARES,
                 MethodDefinition.parse(file, Path.of("/lab/kiln.method")).algorithm());
     }
 
     @Test
     void anUnknownAlgorithmIsRefusedNamingItsLine() {
-        String file = stored().declaration().replace("library-version = lib-version-1\nlibrary-sha256 = "
-                + "a".repeat(64) + "\n", "library = lib/library.manifest\n")
-                .replace("reporting-unit = ppm\n", "reporting-unit = ppm\nalgorithm = curve-fitting\n");
+        String file = asMethodFile(stored().declaration()).replace("reporting-unit = ppm\n",
+                "reporting-unit = ppm\nalgorithm = curve-fitting\n");
         FileFormatException e = assertThrows(FileFormatException.class,
                 () -> MethodDefinition.parse(file, Path.of("/lab/kiln.method")));
         assertTrue(e.getMessage().contains("kiln.method"), e.getMessage());
