@@ -12,6 +12,7 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
+import org.tracegas.quantify.FitAlgorithm;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.ReferenceSpectrum;
 import org.tracegas.quantify.ShiftTerm;
@@ -47,6 +48,12 @@ class StoredMethodTest {
                 "a".repeat(64));
     }
 
+    /** A stored head with the library named by its folder: a method file the runner defines methods from. */
+    private static String asMethodFile(String head) {
+        return head.replace("library-version = lib-version-1\nlibrary-sha256 = " + "a".repeat(64) + "\n",
+                "library = lib/library.manifest\n");
+    }
+
     @Test
     void theStoredTextReadsBackToTheSameMethod() throws Exception {
         StoredMethod s = stored();
@@ -67,6 +74,44 @@ class StoredMethodTest {
         assertEquals(Path.of("/lab/lib/library.manifest"), d.libraryManifest());
         assertEquals(stored().method().analytes(), d.analytes());
         assertEquals(stored().transform(), d.transform());
+    }
+
+    @Test
+    void theFitAlgorithmIsChosenInTheMethodFileAndKeptByTheStoredVersion() throws Exception {
+        QuantificationMethod m = QuantificationMethod.builder("Kiln CO").pathLengthMetres(4.85)
+                .algorithm(FitAlgorithm.CURVE_OF_GROWTH).shiftTerm(ShiftTerm.SCALE)
+                .analyte(new Analyte("CO", List.of(), List.of(AnalysisRegion.of(2040, 2080, 1))))
+                .reference(new ReferenceSpectrum("CO", band(2060), 100)).build();
+        StoredMethod s = new StoredMethod(m, TransformSettings.defaults().withRange(2000, 2200), "lib-version-1",
+                "a".repeat(64));
+        assertTrue(s.declaration().contains("shift = scale\nreporting-unit = ppm\nalgorithm = curve-of-growth\n"), s.declaration());
+        StoredMethod back = StoredMethod.parse(s.content(), "v2");
+        assertEquals(FitAlgorithm.CURVE_OF_GROWTH, back.method().algorithm());
+        assertEquals(s.content(), back.content());
+        // the head's algorithm must agree with the exact method's, like every other setting
+        String tampered = s.content().replace("algorithm = curve-of-growth\n", "");
+        assertThrows(FileFormatException.class, () -> StoredMethod.parse(tampered, "v3"));
+    }
+
+    @Test
+    void aMethodFileWithoutAnAlgorithmFitsByClassicalLeastSquaresAndItsStoredTextNamesNone() throws Exception {
+        // earlier method versions were written before a method file could choose the algorithm: they read as before
+        String head = stored().declaration();
+        assertTrue(!head.contains("algorithm"), head);
+        String file = asMethodFile(head);
+        assertEquals(FitAlgorithm.CLASSICAL_LEAST_SQUARES,
+                MethodDefinition.parse(file, Path.of("/lab/kiln.method")).algorithm());
+    }
+
+    @Test
+    void anUnknownAlgorithmIsRefusedNamingItsLine() {
+        String file = asMethodFile(stored().declaration()).replace("reporting-unit = ppm\n",
+                "reporting-unit = ppm\nalgorithm = curve-fitting\n");
+        FileFormatException e = assertThrows(FileFormatException.class,
+                () -> MethodDefinition.parse(file, Path.of("/lab/kiln.method")));
+        assertTrue(e.getMessage().contains("kiln.method"), e.getMessage());
+        assertTrue(e.getMessage().contains("algorithm"), e.getMessage());
+        assertEquals(10, e.line(), e.getMessage());
     }
 
     @Test

@@ -15,6 +15,7 @@ import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
+import org.tracegas.quantify.FitAlgorithm;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.ReferenceSpectrum;
 import org.tracegas.quantify.ReportingUnit;
@@ -41,6 +42,9 @@ import org.tracegas.store.WorkspaceStore;
  * max-absorbance = 1.0                       (optional)
  * shift = none                               (optional) none, shift, shift-and-width
  * reporting-unit = ppm                       (optional) ppm, ppb, percent
+ * algorithm = curve-of-growth                (optional) classical-least-squares (the default) or
+ *                                            curve-of-growth, see {@link FitAlgorithm}; shift = scale
+ *                                            goes with curve-of-growth only
  *
  * [transform]                                see {@link TransformText}
  * apodization = norton-beer-medium
@@ -60,14 +64,14 @@ import org.tracegas.store.WorkspaceStore;
  */
 public record MethodDefinition(Path file, String name, Path libraryManifest, double pathLengthM, boolean nonlinearity,
         double tolerance, int maxIterations, double maxAbsorbance, ShiftTerm shift, ReportingUnit unit,
-        TransformSettings transform, Recipe recipe, List<Analyte> analytes) {
+        FitAlgorithm algorithm, TransformSettings transform, Recipe recipe, List<Analyte> analytes) {
 
     /** The versions a method file gave: its library's, its own, and the method as its version holds it. */
     public record Recorded(VersionInfo libraryVersion, VersionInfo methodVersion, StoredMethod method) {
     }
 
     private static final Set<String> SETTINGS = Set.of("method", "path-length", "nonlinearity", "tolerance",
-            "max-iterations", "max-absorbance", "shift", "reporting-unit");
+            "max-iterations", "max-absorbance", "shift", "reporting-unit", "algorithm");
     private static final Set<String> ANALYTE = Set.of("compound", "interferents", "region");
 
     public MethodDefinition {
@@ -136,7 +140,9 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
                 h.integer("max-iterations", QuantificationMethod.DEFAULT_MAX_ITERATIONS),
                 h.number("max-absorbance", QuantificationMethod.DEFAULT_MAX_ABSORBANCE),
                 h.constant("shift", ShiftTerm.class, ShiftTerm.NONE),
-                h.constant("reporting-unit", ReportingUnit.class, ReportingUnit.PPM), transform, recipe, analytes);
+                h.constant("reporting-unit", ReportingUnit.class, ReportingUnit.PPM),
+                h.constant("algorithm", FitAlgorithm.class, FitAlgorithm.CLASSICAL_LEAST_SQUARES), transform, recipe,
+                analytes);
     }
 
     /** "low..high[, low..high] baseline n [residual-limit x]". */
@@ -191,7 +197,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
     QuantificationMethod build(List<ReferenceSpectrum> references, Optional<Spectrum> weights) {
         QuantificationMethod.Builder b = QuantificationMethod.builder(name).pathLengthMetres(pathLengthM)
                 .nonlinearity(nonlinearity).tolerance(tolerance).maxIterations(maxIterations)
-                .maxAbsorbance(maxAbsorbance).shiftTerm(shift).reportingUnit(unit);
+                .maxAbsorbance(maxAbsorbance).shiftTerm(shift).reportingUnit(unit).algorithm(algorithm);
         analytes.forEach(b::analyte);
         references.forEach(b::reference);
         weights.ifPresent(b::weights);
@@ -213,6 +219,10 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         s.append("max-absorbance = ").append(m.maxAbsorbance()).append('\n');
         s.append("shift = ").append(constant(m.shiftTerm())).append('\n');
         s.append("reporting-unit = ").append(constant(m.reportingUnit())).append('\n');
+        if (m.algorithm() != FitAlgorithm.CLASSICAL_LEAST_SQUARES) {
+            // only when not the default, so that the stored versions of earlier methods read as they were written
+            s.append("algorithm = ").append(constant(m.algorithm())).append('\n');
+        }
         s.append("\n[transform]\n").append(TransformText.write(transform));
         if (!recipe.entries().isEmpty()) {
             s.append("\n[recipe]\n").append(MethodRecipe.write(recipe));

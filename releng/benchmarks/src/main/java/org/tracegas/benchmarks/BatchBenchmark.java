@@ -10,7 +10,9 @@ import org.openjdk.jmh.annotations.Fork;
 import org.openjdk.jmh.annotations.Level;
 import org.openjdk.jmh.annotations.Measurement;
 import org.openjdk.jmh.annotations.Mode;
+import org.openjdk.jmh.annotations.OperationsPerInvocation;
 import org.openjdk.jmh.annotations.OutputTimeUnit;
+import org.openjdk.jmh.annotations.Param;
 import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
@@ -25,23 +27,55 @@ import org.tracegas.quantify.ProgressListener;
 import org.tracegas.quantify.Sample;
 
 /**
- * End-to-end batch throughput of the campaign path on all cores: an hour of the demo's interferograms (60)
- * read from their container file, transformed, ratioed, fitted with the demo's 9-analyte method and stored
- * with their audit records in an H2 workspace, against the same work without storage in the same run.
+ * End-to-end batch throughput of the campaign path, in spectra per second: an hour of the demo's interferograms
+ * (60) read from their container file, transformed, ratioed, fitted with the demo's 9-analyte method and stored
+ * with their audit records in an H2 workspace, against the same work without storage in the same run. Each
+ * fork runs on {@link #cores} processors: the setup restricts the whole JVM (workers, reader, compiler and
+ * collector threads) to that many CPUs with util-linux {@code taskset}, so that the scaling from 1 to 2 cores
+ * is measured in one run.
  */
 @State(Scope.Benchmark)
-@BenchmarkMode(Mode.AverageTime)
-@OutputTimeUnit(TimeUnit.MILLISECONDS)
+@BenchmarkMode(Mode.Throughput)
+@OutputTimeUnit(TimeUnit.SECONDS)
+@OperationsPerInvocation(BatchBenchmark.SPECTRA)
 @Fork(value = 1, jvmArgs = "-Xmx3g")
 @Warmup(iterations = 2, time = 10)
 @Measurement(iterations = 3, time = 20)
 public class BatchBenchmark {
 
+    /** Interferograms in the demo's hour. */
+    static final int SPECTRA = 60;
+
+    /** Processors the fork's JVM runs on: CPUs 0 to cores - 1. */
+    @Param({ "1", "2" })
+    public int cores;
+
     private DemoBatchFixture demo;
 
     @Setup(Level.Trial)
     public void setUp() throws Exception {
+        pinTo(cores);
         demo = new DemoBatchFixture("tracegas-batch-bench", DemoMethod::method);
+    }
+
+    /**
+     * Restricts every thread of this JVM, and so every thread they start, to the first CPUs; the JVM's processor
+     * count follows, so {@link BatchQuantifier#onAllCores} starts that many workers.
+     */
+    private static void pinTo(int cores) throws Exception {
+        if (cores > Runtime.getRuntime().availableProcessors()) {
+            throw new IllegalStateException("cores " + cores + " exceeds the " + Runtime.getRuntime()
+                    .availableProcessors() + " processors of this machine");
+        }
+        // a thread that ends while taskset walks the JVM's threads fails the call: try again
+        for (int attempt = 0; attempt < 5 && Runtime.getRuntime().availableProcessors() != cores; attempt++) {
+            new ProcessBuilder("taskset", "--all-tasks", "--pid", "--cpu-list", "0-" + (cores - 1),
+                    Long.toString(ProcessHandle.current().pid())).redirectErrorStream(true)
+                    .redirectOutput(ProcessBuilder.Redirect.DISCARD).start().waitFor();
+        }
+        if (Runtime.getRuntime().availableProcessors() != cores) {
+            throw new IllegalStateException("could not restrict the benchmark to " + cores + " CPUs with taskset");
+        }
     }
 
     @TearDown(Level.Trial)
@@ -54,7 +88,7 @@ public class BatchBenchmark {
     public long hourIntoTheWorkspace() {
         return new StackProcessor(demo.store, demo.analyst, demo.projectId, demo.chain,
                 BatchQuantifier.onAllCores(demo.quantifier), demo.versions)
-                .run(List.of(demo.hour), 60, ProgressListener.NONE, new CancellationFlag()).delivered();
+                .run(List.of(demo.hour), SPECTRA, ProgressListener.NONE, new CancellationFlag()).delivered();
     }
 
     /** The bound: the same hour read, transformed, ratioed and fitted on all cores, nothing stored. */
