@@ -27,7 +27,8 @@ class StoredMethodTest {
 
     private static final SpectralAxis AXIS = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.5, 401);
 
-    private static Spectrum band(double centre) {
+    /** A Lorentzian band of 0.01 peak absorbance and 2 cm-1 half width on the test axis. */
+    static Spectrum band(double centre) {
         double[] v = new double[AXIS.size()];
         for (int i = 0; i < v.length; i++) {
             double d = (AXIS.get(i) - centre) / 2.0;

@@ -4,6 +4,7 @@ import java.time.Duration;
 import java.time.Instant;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
+import java.util.DoubleSummaryStatistics;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
@@ -15,6 +16,7 @@ import java.util.function.Function;
 
 import org.tracegas.model.ResultFlag;
 import org.tracegas.qa.basis.Averaging;
+import org.tracegas.qa.basis.ConditionsCorrection;
 import org.tracegas.qa.basis.DetectionLimitConvention;
 import org.tracegas.qa.basis.EmissionLimit;
 import org.tracegas.qa.basis.GasReading;
@@ -38,6 +40,7 @@ import org.tracegas.report.ResultRow;
 import org.tracegas.report.Series;
 import org.tracegas.report.SpectrumFit;
 import org.tracegas.report.UncertaintyTable;
+import org.tracegas.store.ResultConditions;
 
 /**
  * Assembles the report of a campaign from stored results: each compound converted to the reporting basis
@@ -63,6 +66,12 @@ public final class CampaignReportBuilder {
     private static final String UNCERTAINTY_RULE = "U of an average (k = 2) combines the random part of the minutes "
             + "(spectral fit), which averages down as sqrt(sum u^2)/n, with the systematic part (reference, path, "
             + "cell conditions, H2O and O2), which does not, taken fully correlated (JCGM 100:2008 5.2.2, r = 1).";
+
+    private static final String CORRECTION_RULE = "Each result is corrected from its references' cell to the "
+            + "sample cell: " + ConditionsCorrection.RULE + ". Each period states the range of the factor applied, "
+            + "where the cell temperature and pressure came from, and the noise factor F of the transform, whose "
+            + "square root widens the fit's uncertainty (F = 1 for absorbance imported as such, whose transform is "
+            + "unknown).";
 
     private final ReportingBasis basis;
     private final FtirResultBudget budget;
@@ -157,6 +166,7 @@ public final class CampaignReportBuilder {
                         + " (common practice, no source).");
                 b.averagingRule(EXCLUSION_RULE);
                 b.averagingRule(UNCERTAINTY_RULE);
+                b.averagingRule(CORRECTION_RULE);
                 List<PeriodAverage> averages = averaging.average(converted);
                 EmissionLimit limit = r.limits().stream().filter(l -> l.period().equals(period)).findFirst()
                         .orElse(null);
@@ -174,6 +184,7 @@ public final class CampaignReportBuilder {
                     if (a.belowDetectionLimit() > 0) {
                         flags.add(a.belowDetectionLimit() + " below detection limit");
                     }
+                    flags.add(corrections(points, a.start(), a.start().plus(period)));
                     b.result(new ResultRow(r.compound(), label(period), a.start(), a.mean(),
                             2.0 * a.combinedUncertainty(), "mg/m³", flags,
                             limit == null ? OptionalDouble.empty() : OptionalDouble.of(limit.value()),
@@ -194,6 +205,42 @@ public final class CampaignReportBuilder {
             b.spectrum(exampleFit);
         }
         return b.build();
+    }
+
+    /**
+     * The corrections applied to the minutes of a period: the range of the factor, where the cell's temperature,
+     * pressure and path came from, and the range of the noise factor F.
+     */
+    static String corrections(List<MinuteSeries.Point> points, Instant from, Instant to) {
+        DoubleSummaryStatistics factor = new DoubleSummaryStatistics();
+        DoubleSummaryStatistics noise = new DoubleSummaryStatistics();
+        Set<String> origins = new java.util.TreeSet<>();
+        int uncorrected = 0;
+        for (MinuteSeries.Point p : points) {
+            if (p.time().isBefore(from) || !p.time().isBefore(to)) {
+                continue;
+            }
+            ResultConditions c = p.conditions();
+            if (c == null) {
+                uncorrected++;
+                continue;
+            }
+            factor.accept(c.correctionFactor());
+            noise.accept(c.noiseFactor());
+            origins.add("T " + c.temperatureOrigin() + ", p " + c.pressureOrigin() + ", path " + c.pathOrigin());
+        }
+        if (factor.getCount() == 0) {
+            return "not corrected to the sample cell";
+        }
+        return String.format(Locale.ROOT, "cell correction x%s (%s); F %s%s", range(factor, "%.4f"),
+                String.join("; ", origins), range(noise, "%.3f"),
+                uncorrected > 0 ? "; " + uncorrected + " not corrected" : "");
+    }
+
+    private static String range(DoubleSummaryStatistics s, String format) {
+        String low = String.format(Locale.ROOT, format, s.getMin());
+        String high = String.format(Locale.ROOT, format, s.getMax());
+        return low.equals(high) ? low : low + ".." + high;
     }
 
     /** Why a stored minute is left out of the averages, from its flags; empty if it is used. */

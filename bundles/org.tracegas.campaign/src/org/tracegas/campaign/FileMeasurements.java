@@ -210,9 +210,24 @@ public final class FileMeasurements {
                 + " or an ISO-8601 time.utc)");
     }
 
+    /** The labels of a cell temperature in K, as {@link #key} matches them; ##TEMPERATURE is in degrees C. */
+    private static final List<String> KELVIN = List.of("CELLTEMPERATUREK", "CELLTEMPERATURE");
+    private static final List<String> HECTOPASCAL = List.of("CELLPRESSUREHPA", "CELLPRESSURE");
+
+    /** Whether a record's labels state its cell temperature; else it is the one given for files without. */
+    static boolean statesTemperature(Map<String, String> labels) {
+        return labels.keySet().stream().map(FileMeasurements::key)
+                .anyMatch(k -> KELVIN.contains(k) || k.equals("TEMPERATURE"));
+    }
+
+    /** Whether a record's labels state its cell pressure; else it is the one given for files without. */
+    static boolean statesPressure(Map<String, String> labels) {
+        return labels.keySet().stream().map(FileMeasurements::key).anyMatch(HECTOPASCAL::contains);
+    }
+
     private static double temperature(Map<String, String> labels, Defaults defaults, Where where)
             throws ImportException {
-        Double kelvin = stated(labels, List.of("CELLTEMPERATUREK", "CELLTEMPERATURE"), where);
+        Double kelvin = stated(labels, KELVIN, where);
         if (kelvin == null && labels.containsKey("TEMPERATURE")) {
             kelvin = number(labels.get("TEMPERATURE"), "##TEMPERATURE", where) + 273.15;
         }
@@ -221,7 +236,7 @@ public final class FileMeasurements {
 
     private static double pressure(Map<String, String> labels, Defaults defaults, Where where)
             throws ImportException {
-        return orDefault(stated(labels, List.of("CELLPRESSUREHPA", "CELLPRESSURE"), where), defaults.cellPressure(),
+        return orDefault(stated(labels, HECTOPASCAL, where), defaults.cellPressure(),
                 "##$CELL PRESSURE", "cell pressure", where);
     }
 

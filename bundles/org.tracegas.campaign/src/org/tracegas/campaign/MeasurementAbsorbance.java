@@ -33,7 +33,12 @@ final class MeasurementAbsorbance {
     static final String TRANSFORM = "transform";
 
     /** An absorbance, the entries saying how it was made, and the background's age when one was used. */
-    record Converted(Spectrum absorbance, List<Recipe.Entry> entries, RatioResult ratio) {
+    /**
+     * @param noiseFactor F of the transform that made the absorbance, 1 when it is not known
+     * @param noiseOrigin where F came from
+     */
+    record Converted(Spectrum absorbance, List<Recipe.Entry> entries, RatioResult ratio, double noiseFactor,
+            String noiseOrigin) {
     }
 
     private final InterferogramTransform transform;
@@ -67,7 +72,7 @@ final class MeasurementAbsorbance {
     /** @throws ImportException naming the measurement's file and record when it cannot become absorbance */
     Converted convert(SourcedMeasurement m, Spectrum values) throws ImportException {
         return switch (m.content()) {
-            case ABSORBANCE -> new Converted(values, List.of(), null);
+            case ABSORBANCE -> new Converted(values, List.of(), null, 1.0, ResultCorrection.NO_TRANSFORM);
             case TRANSMITTANCE -> {
                 double[] a = new double[values.size()];
                 for (int i = 0; i < a.length; i++) {
@@ -75,17 +80,24 @@ final class MeasurementAbsorbance {
                     a[i] = t > 0 ? -Math.log10(t) : Double.NaN;
                 }
                 yield new Converted(values.withValues(a, Ordinate.ABSORBANCE),
-                        List.of(new Recipe.Entry(FROM_TRANSMITTANCE, new TreeMap<>())), null);
+                        List.of(new Recipe.Entry(FROM_TRANSMITTANCE, new TreeMap<>())), null, 1.0,
+                        "transmittance imported as such: its transform is unknown; F = 1 taken");
             }
-            case SINGLE_BEAM -> ratioed(m, values, List.of());
-            case INTERFEROGRAM -> ratioed(m, transform.singleBeam(interferogram(m, values)),
-                    List.of(new Recipe.Entry(TRANSFORM, new TreeMap<>(Map.of("settings", transformText)))));
+            case SINGLE_BEAM -> ratioed(m, values, List.of(), 1.0,
+                    "single beam imported as such: its transform is unknown; F = 1 taken");
+            case INTERFEROGRAM -> {
+                Interferogram igm = interferogram(m, values);
+                Spectrum singleBeam = transform.singleBeam(igm);
+                yield ratioed(m, singleBeam,
+                        List.of(new Recipe.Entry(TRANSFORM, new TreeMap<>(Map.of("settings", transformText)))),
+                        transform.noiseVarianceFactor(igm), ResultCorrection.transformOrigin(transform.settings()));
+            }
             default -> throw error(m, "content", "cannot be quantified: " + m.content());
         };
     }
 
-    private Converted ratioed(SourcedMeasurement m, Spectrum singleBeam, List<Recipe.Entry> before)
-            throws ImportException {
+    private Converted ratioed(SourcedMeasurement m, Spectrum singleBeam, List<Recipe.Entry> before,
+            double noiseFactor, String noiseOrigin) throws ImportException {
         if (backgrounds == null) {
             throw error(m, "background", "a " + m.content().getName().toLowerCase(java.util.Locale.ROOT)
                     .replace('_', ' ') + " needs a background measurement before it; the project holds none");
@@ -105,7 +117,7 @@ final class MeasurementAbsorbance {
         List<Recipe.Entry> entries = new ArrayList<>(before);
         SortedMap<String, String> p = new TreeMap<>(Map.of("background", background.id()));
         entries.add(new Recipe.Entry(RATIO, p));
-        return new Converted(r.spectrum(), entries, r);
+        return new Converted(r.spectrum(), entries, r, noiseFactor, noiseOrigin);
     }
 
     private static Interferogram interferogram(SourcedMeasurement m, Spectrum values) throws ImportException {

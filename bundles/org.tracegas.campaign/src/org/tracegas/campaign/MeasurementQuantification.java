@@ -14,6 +14,8 @@ import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.SpectrumStep;
 import org.tracegas.preprocess.StepRegistry;
+import org.tracegas.qa.basis.ConditionOrigin;
+import org.tracegas.qa.basis.ConditionValue;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.BackgroundAge;
@@ -72,6 +74,7 @@ public final class MeasurementQuantification {
     private final String projectId;
     private final StoredMethod method;
     private final AnalysisVersions versions;
+    private final ResultCorrection correction;
     private final List<SpectrumStep> steps;
     private final InterferogramTransform transform;
     private final String software;
@@ -92,6 +95,7 @@ public final class MeasurementQuantification {
         this.method = method;
         this.versionId = version.id();
         this.versions = new AnalysisVersions(version.id(), method.libraryVersionId());
+        this.correction = ResultCorrection.of(method);
         this.steps = new ArrayList<>();
         for (Recipe.Entry e : method.recipe().entries()) {
             try {
@@ -188,7 +192,8 @@ public final class MeasurementQuantification {
             Prepared p = prepare(m, values(m, Map.of()));
             SpectrumResult result = quantifier(p.absorbance().axis()).quantify(p.sample());
             block.add(new MeasurementAnalysis(m.measurement().id(), p.recipe().toCanonicalString(), p.absorbance(),
-                    SampleEncoding.FLOAT32_LE, ProcessedSpectra.results(result, versions)));
+                    SampleEncoding.FLOAT32_LE, correction.results(result, versions, temperature(m), pressure(m),
+                            p.noiseFactor(), p.noiseOrigin())));
             if (block.size() == BLOCK) {
                 stored += store(block);
                 progress.progress(stored, plan.samples().size());
@@ -208,8 +213,21 @@ public final class MeasurementQuantification {
         return n;
     }
 
-    /** An absorbance ready to fit and the recipe that made it. */
-    private record Prepared(Spectrum absorbance, Sample sample, Recipe recipe) {
+    /** An absorbance ready to fit, the recipe that made it and the noise factor F of its transform. */
+    private record Prepared(Spectrum absorbance, Sample sample, Recipe recipe, double noiseFactor,
+            String noiseOrigin) {
+    }
+
+    /** The cell temperature the measurement was stored with: from its file's labels, or given at import. */
+    private static ConditionValue temperature(SourcedMeasurement m) {
+        return new ConditionValue(m.measurement().cellTemperature(), FileMeasurements.statesTemperature(m.labels())
+                ? ConditionOrigin.FILE_LABEL : ConditionOrigin.IMPORT_STATED);
+    }
+
+    /** The cell pressure in kPa (stored in hPa), from the file's labels or given at import. */
+    private static ConditionValue pressure(SourcedMeasurement m) {
+        return new ConditionValue(m.measurement().cellPressure() / 10.0, FileMeasurements.statesPressure(m.labels())
+                ? ConditionOrigin.FILE_LABEL : ConditionOrigin.IMPORT_STATED);
     }
 
     private Prepared prepare(SourcedMeasurement m, Spectrum values) throws ImportException {
@@ -228,9 +246,10 @@ public final class MeasurementQuantification {
         }
         List<Recipe.Entry> entries = new ArrayList<>(c.entries());
         entries.addAll(method.recipe().entries());
-        Sample sample = c.ratio() == null ? Sample.of(a)
-                : new Sample(a, new BackgroundAge(c.ratio().backgroundAge(), absorbance.ageLimit()));
-        return new Prepared(a, sample, Recipe.of(entries));
+        BackgroundAge age = c.ratio() == null ? null
+                : new BackgroundAge(c.ratio().backgroundAge(), absorbance.ageLimit());
+        Sample sample = new Sample(a, age, ResultCorrection.noiseCorrelation(c.noiseFactor()));
+        return new Prepared(a, sample, Recipe.of(entries), c.noiseFactor(), c.noiseOrigin());
     }
 
     /** The axis covers every window of every region, and the absorbance is finite at each point inside one. */

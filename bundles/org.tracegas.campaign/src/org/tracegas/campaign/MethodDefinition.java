@@ -36,6 +36,8 @@ import org.tracegas.store.WorkspaceStore;
  * method = Stack gas, 8 analytes
  * library = references/library.manifest     the library folder's manifest, relative to this file
  * path-length = 6.4                          m
+ * resolution = 0.5                           (optional) the instrument's nominal resolution, cm-1: every
+ *                                            reference must have been recorded at it
  * nonlinearity = yes                         interpolate between references of several amounts
  * tolerance = 1e-6                           (optional) relative change at which the iteration stops
  * max-iterations = 50                        (optional)
@@ -60,9 +62,14 @@ import org.tracegas.store.WorkspaceStore;
  *                                                                     residual RMS limit; one line per region
  * </pre>
  *
+ * The references must have been recorded with the apodization of the {@code [transform]} block and, when the
+ * method states one, at its resolution; a library with another reference is refused, naming it.
+ *
  * @param libraryManifest the library folder's manifest; null in the definition read from a stored version
+ * @param resolution      the instrument's nominal resolution in cm-1, NaN when the method states none
  */
-public record MethodDefinition(Path file, String name, Path libraryManifest, double pathLengthM, boolean nonlinearity,
+public record MethodDefinition(Path file, String name, Path libraryManifest, double pathLengthM, double resolution,
+        boolean nonlinearity,
         double tolerance, int maxIterations, double maxAbsorbance, ShiftTerm shift, ReportingUnit unit,
         FitAlgorithm algorithm, TransformSettings transform, Recipe recipe, List<Analyte> analytes) {
 
@@ -70,8 +77,8 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
     public record Recorded(VersionInfo libraryVersion, VersionInfo methodVersion, StoredMethod method) {
     }
 
-    private static final Set<String> SETTINGS = Set.of("method", "path-length", "nonlinearity", "tolerance",
-            "max-iterations", "max-absorbance", "shift", "reporting-unit", "algorithm");
+    private static final Set<String> SETTINGS = Set.of("method", "path-length", "resolution", "nonlinearity",
+            "tolerance", "max-iterations", "max-absorbance", "shift", "reporting-unit", "algorithm");
     private static final Set<String> ANALYTE = Set.of("compound", "interferents", "region");
 
     public MethodDefinition {
@@ -99,7 +106,8 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
      */
     static MethodDefinition parse(KeyValueFile f, Set<String> libraryKeys) throws FileFormatException {
         Path file = f.file();
-        f.allowBlocks(Set.of("transform", "recipe", "analyte"));
+        f.allowBlocks(libraryKeys.contains("library") ? Set.of("transform", "recipe", "analyte")
+                : Set.of("transform", "recipe", "analyte", "references"));
         Set<String> head = new java.util.HashSet<>(SETTINGS);
         head.addAll(libraryKeys);
         KeyValueFile.Section h = f.head().allow(head);
@@ -135,7 +143,11 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
             throw new FileFormatException(file, 0, "[analyte]", "the method names no analyte");
         }
         Path manifest = libraryKeys.contains("library") ? f.resolve(h.text("library")) : null;
-        return new MethodDefinition(file, h.text("method"), manifest, h.number("path-length"),
+        double resolution = h.number("resolution", Double.NaN);
+        if (!Double.isNaN(resolution) && !(resolution > 0 && Double.isFinite(resolution))) {
+            throw h.error("resolution", "must be positive, was " + resolution);
+        }
+        return new MethodDefinition(file, h.text("method"), manifest, h.number("path-length"), resolution,
                 h.flag("nonlinearity", false), h.number("tolerance", QuantificationMethod.DEFAULT_TOLERANCE),
                 h.integer("max-iterations", QuantificationMethod.DEFAULT_MAX_ITERATIONS),
                 h.number("max-absorbance", QuantificationMethod.DEFAULT_MAX_ABSORBANCE),
@@ -174,16 +186,29 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
     /**
      * The method over a library's references (by compound name).
      *
-     * @throws FileFormatException naming the method file when the library lacks a compound the method fits
+     * @throws FileFormatException naming the method file when the library lacks a compound the method fits, or
+     *                             has a reference of another apodization or resolution than the instrument's
      */
     public QuantificationMethod build(ReferenceLibrary library) throws FileFormatException {
+        return stored(library, "", "").method();
+    }
+
+    /**
+     * The method over a library's references with the conditions of each, as a version stores it.
+     *
+     * @throws FileFormatException as {@link #build(ReferenceLibrary)}
+     */
+    private StoredMethod stored(ReferenceLibrary library, String libraryVersionId, String libraryContentHash)
+            throws FileFormatException {
         List<ReferenceSpectrum> references = new ArrayList<>();
         for (org.tracegas.library.ReferenceSpectrum r : library.references()) {
             references.add(new ReferenceSpectrum(r.compound().name(), r.spectrum(),
                     r.metadata().conditions().concentrationPathLength()));
         }
         try {
-            return build(references, Optional.empty());
+            QuantificationMethod method = build(references, Optional.empty());
+            return new StoredMethod(method, transform, libraryVersionId, libraryContentHash, recipe, resolution,
+                    MethodReferences.of(library, method.references(), transform, resolution));
         } catch (IllegalArgumentException e) {
             throw new FileFormatException(file, 0, "", e.getMessage() + " (library " + libraryManifest + ")");
         }
@@ -206,13 +231,17 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
 
     /**
      * A method in this file's text: its settings, the given lines naming the library, its transform, its recipe
-     * (when it has steps) and its analytes. Numbers are written in Java's shortest exact decimal form, so the text reads back to the very
+     * (when it has steps) and its analytes; a stored version adds the conditions of its references. Numbers are written in Java's shortest exact decimal form, so the text reads back to the very
      * same method.
      */
-    static String write(QuantificationMethod m, String libraryLines, TransformSettings transform, Recipe recipe) {
+    static String write(QuantificationMethod m, String libraryLines, double resolution, TransformSettings transform,
+            Recipe recipe) {
         StringBuilder s = new StringBuilder();
         s.append("method = ").append(m.name()).append('\n').append(libraryLines);
         s.append("path-length = ").append(m.pathLengthMetres()).append('\n');
+        if (!Double.isNaN(resolution)) {
+            s.append("resolution = ").append(resolution).append('\n');
+        }
         s.append("nonlinearity = ").append(m.nonlinearity() ? "yes" : "no").append('\n');
         s.append("tolerance = ").append(m.tolerance()).append('\n');
         s.append("max-iterations = ").append(m.maxIterations()).append('\n');
@@ -265,10 +294,12 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         }
         ReferenceLibrary library = LabReferenceSource.manifestReader().read(libraryManifest);
         String libraryContent = LibraryVersionText.of(libraryManifest);
-        QuantificationMethod method = build(library);
+        StoredMethod built = stored(library, "", "");
+        QuantificationMethod method = built.method();
         VersionInfo libraryVersion = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
                 libraryContent, "library of method " + method.name());
-        StoredMethod stored = new StoredMethod(method, transform, libraryVersion.id(), library.contentHash(), recipe);
+        StoredMethod stored = new StoredMethod(method, transform, libraryVersion.id(), library.contentHash(), recipe,
+                resolution, built.referenceConditions());
         VersionInfo methodVersion = VersionRecorder.ensure(store, actor, VersionKind.METHOD, method.name(),
                 stored.content(), "defined from " + file.getFileName());
         return new Recorded(libraryVersion, methodVersion, stored);

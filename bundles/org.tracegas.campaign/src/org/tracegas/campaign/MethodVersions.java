@@ -113,8 +113,9 @@ public final class MethodVersions {
         }
         base.references().forEach(b::reference);
         base.weights().ifPresent(b::weights);
+        // the references are the opened version's, so are their conditions
         return new StoredMethod(b.build(), opened.transform(), opened.libraryVersionId(),
-                opened.libraryContentHash(), opened.recipe());
+                opened.libraryContentHash(), opened.recipe(), opened.resolution(), opened.referenceConditions());
     }
 
     /** A region with the model's span: a region of one window takes it; one of several keeps its windows. */

@@ -9,6 +9,7 @@ import java.util.TreeMap;
 
 import org.tracegas.model.ResultFlag;
 import org.tracegas.store.MeasurementInfo;
+import org.tracegas.store.ResultConditions;
 import org.tracegas.store.ResultInfo;
 
 /**
@@ -17,9 +18,13 @@ import org.tracegas.store.ResultInfo;
  */
 public final class MinuteSeries {
 
-    /** One stored result at its measurement's time. */
+    /**
+     * One stored result at its measurement's time.
+     *
+     * @param conditions what the result was corrected with, null when it was not corrected
+     */
     public record Point(Instant time, double ppm, double uncertainty, double detectionLimit,
-            java.util.Set<ResultFlag> flags) {
+            java.util.Set<ResultFlag> flags, ResultConditions conditions) {
     }
 
     private final Map<String, List<Point>> byCompound;
@@ -53,7 +58,7 @@ public final class MinuteSeries {
             }
             sorted.computeIfAbsent(r.values().compound(), c -> new TreeMap<>()).put(t, new Point(t,
                     r.values().concentration(), r.values().uncertainty(), r.values().detectionLimit(),
-                    r.values().flags()));
+                    r.values().flags(), r.values().conditions()));
         }
         Map<String, List<Point>> lists = new TreeMap<>();
         sorted.forEach((c, m) -> lists.put(c, new ArrayList<>(m.values())));

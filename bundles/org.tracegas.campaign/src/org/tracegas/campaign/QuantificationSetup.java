@@ -21,6 +21,7 @@ public final class QuantificationSetup {
     private final SpectrumChain chain;
     private final BatchQuantifier quantifier;
     private final AnalysisVersions versions;
+    private final ResultCorrection correction;
 
     /**
      * @param backgrounds at least one, taken before the first sample
@@ -37,10 +38,12 @@ public final class QuantificationSetup {
         quantifier = BatchQuantifier.onAllCores(
                 method.quantifier(timeline.all().get(0).singleBeam().axis(), software, false));
         versions = new AnalysisVersions(methodVersion.id(), method.libraryVersionId());
+        correction = ResultCorrection.of(method);
     }
 
     /** The processor storing into a project of the workspace as the actor. */
     public StackProcessor processor(WorkspaceStore store, Session actor, String projectId) {
-        return new StackProcessor(store, actor, projectId, chain, quantifier, versions);
+        return new StackProcessor(store, actor, projectId, chain, quantifier, versions, correction,
+                StackProcessor.DEFAULT_BLOCK_SIZE);
     }
 }

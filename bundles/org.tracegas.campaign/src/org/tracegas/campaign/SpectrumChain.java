@@ -5,6 +5,7 @@ import org.tracegas.importer.container.ContainerRecord;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.preprocess.RatioResult;
+import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.spectrum.Spectrum;
 
 /**
@@ -23,6 +24,11 @@ public final class SpectrumChain {
         this.backgrounds = backgrounds;
     }
 
+    /** The settings of the transform, which the noise factor of each spectrum comes from. */
+    public TransformSettings transformSettings() {
+        return transform.settings();
+    }
+
     public java.time.Duration backgroundAgeLimit() {
         return ratio.ageLimit();
     }
@@ -32,6 +38,7 @@ public final class SpectrumChain {
         Spectrum singleBeam = transform.singleBeam(record.interferogram());
         RatioResult absorbance = ratio.absorbance(singleBeam, h.time(), backgrounds.latestBefore(h.time()));
         return new MeasuredSpectrum(h.time(), h.extra().getOrDefault(MeasurementRole.KEY, MeasurementRole.SAMPLE),
-                h.cellTemperatureK(), h.cellPressureHpa() / 10.0, absorbance);
+                h.cellTemperatureK(), h.cellPressureHpa() / 10.0, absorbance,
+                transform.noiseVarianceFactor(record.interferogram()));
     }
 }

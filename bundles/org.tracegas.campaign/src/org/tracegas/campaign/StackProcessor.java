@@ -44,6 +44,7 @@ public final class StackProcessor {
     private final SpectrumChain chain;
     private final BatchQuantifier quantifier;
     private final AnalysisVersions versions;
+    private final ResultCorrection correction;
     private final int blockSize;
 
     /** A processor storing blocks of {@link #DEFAULT_BLOCK_SIZE} spectra. */
@@ -58,6 +59,12 @@ public final class StackProcessor {
      */
     public StackProcessor(WorkspaceStore store, Session actor, String projectId, SpectrumChain chain,
             BatchQuantifier quantifier, AnalysisVersions versions, int blockSize) {
+        this(store, actor, projectId, chain, quantifier, versions, ResultCorrection.none(), blockSize);
+    }
+
+    /** @param correction corrects each result to the conditions of the cell its spectrum was recorded in */
+    StackProcessor(WorkspaceStore store, Session actor, String projectId, SpectrumChain chain,
+            BatchQuantifier quantifier, AnalysisVersions versions, ResultCorrection correction, int blockSize) {
         if (blockSize < 1) {
             throw new IllegalArgumentException("blockSize must be at least 1, was " + blockSize);
         }
@@ -67,6 +74,7 @@ public final class StackProcessor {
         this.chain = chain;
         this.quantifier = quantifier;
         this.versions = versions;
+        this.correction = correction;
         this.blockSize = blockSize;
     }
 
@@ -115,8 +123,9 @@ public final class StackProcessor {
             CancellationFlag cancel) {
         Queue<MeasuredSpectrum> inFlight = new ConcurrentLinkedQueue<>();
         Iterator<Sample> samples = new SampleIterator(files, inFlight);
-        return quantifier.run(samples, expected,
-                result -> consumer.accept(ProcessedSpectra.of(inFlight.remove(), result, versions)),
+        String noiseOrigin = ResultCorrection.transformOrigin(chain.transformSettings());
+        return quantifier.run(samples, expected, result -> consumer.accept(
+                ProcessedSpectra.of(inFlight.remove(), result, versions, correction, noiseOrigin)),
                 ProgressListener.NONE, cancel);
     }
 
@@ -162,7 +171,8 @@ public final class StackProcessor {
             MeasuredSpectrum measured = chain.process(record);
             inFlight.add(measured);
             return new Sample(measured.ratio().spectrum(),
-                    new BackgroundAge(measured.ratio().backgroundAge(), chain.backgroundAgeLimit()));
+                    new BackgroundAge(measured.ratio().backgroundAge(), chain.backgroundAgeLimit()),
+                    ResultCorrection.noiseCorrelation(measured.noiseFactor()));
         }
     }
 }

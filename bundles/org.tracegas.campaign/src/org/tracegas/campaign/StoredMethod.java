@@ -1,14 +1,17 @@
 package org.tracegas.campaign;
 
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Set;
 
+import org.tracegas.library.ReferenceConditions;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.quantify.PreparedMethod;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.Quantifier;
+import org.tracegas.quantify.ReferenceSpectrum;
 import org.tracegas.spectrum.SpectralAxis;
 
 /**
@@ -30,18 +33,49 @@ import org.tracegas.spectrum.SpectralAxis;
  * ...
  * [analyte]
  * ...
+ * [references]                          (when the method was defined from a library's folder) the conditions
+ * ...                                   of each reference, see {@link MethodReferences}
  * [exact]
  * tracegas-quantification-method 1      the exact text of the method
  * ...
  * </pre>
+ *
+ * @param resolution          the instrument's nominal resolution in cm-1 the method states, NaN when none
+ * @param referenceConditions the conditions of each of the method's references in their order; empty for a
+ *                            method whose references came without them
  */
 public record StoredMethod(QuantificationMethod method, TransformSettings transform, String libraryVersionId,
-        String libraryContentHash, Recipe recipe) {
+        String libraryContentHash, Recipe recipe, double resolution, List<ReferenceConditions> referenceConditions) {
 
     private static final String EXACT = "\n[exact]\n";
     private static final Set<String> LIBRARY_KEYS = Set.of("library-version", "library-sha256");
 
-    /** A method without processing steps before the fit. */
+    /**
+     * @throws IllegalArgumentException when the conditions are not one per reference, or a reference's
+     *                                  apodization or resolution is not the instrument's
+     */
+    public StoredMethod {
+        referenceConditions = List.copyOf(referenceConditions);
+        if (!referenceConditions.isEmpty()) {
+            if (referenceConditions.size() != method.references().size()) {
+                throw new IllegalArgumentException("referenceConditions must be one per reference, "
+                        + method.references().size() + ", were " + referenceConditions.size());
+            }
+            for (int i = 0; i < referenceConditions.size(); i++) {
+                ReferenceSpectrum r = method.references().get(i);
+                MethodReferences.check(r.compound() + " " + r.ppmMetres() + " ppm·m", referenceConditions.get(i),
+                        transform, resolution);
+            }
+        }
+    }
+
+    /** A method whose references came without their conditions. */
+    public StoredMethod(QuantificationMethod method, TransformSettings transform, String libraryVersionId,
+            String libraryContentHash, Recipe recipe) {
+        this(method, transform, libraryVersionId, libraryContentHash, recipe, Double.NaN, List.of());
+    }
+
+    /** A method without processing steps before the fit, whose references came without their conditions. */
     public StoredMethod(QuantificationMethod method, TransformSettings transform, String libraryVersionId,
             String libraryContentHash) {
         this(method, transform, libraryVersionId, libraryContentHash, MethodRecipe.none());
@@ -59,8 +93,10 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
 
     /** The method as a method file writes it, with its library version: what a person reads and compares. */
     public String declaration() {
-        return MethodDefinition.write(method, "library-version = " + libraryVersionId + "\nlibrary-sha256 = "
-                + libraryContentHash + "\n", transform, recipe);
+        String declaration = MethodDefinition.write(method, "library-version = " + libraryVersionId
+                + "\nlibrary-sha256 = " + libraryContentHash + "\n", resolution, transform, recipe);
+        return referenceConditions.isEmpty() ? declaration
+                : declaration + "\n[references]\n" + MethodReferences.write(method.references(), referenceConditions);
     }
 
     /** The text a METHOD version stores. */
@@ -98,8 +134,19 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
             throw new FileFormatException(where, exactLine, "[exact]",
                     "the exact text describes another method than the settings and analytes above it");
         }
+        List<KeyValueFile.Section> blocks = head.blocks("references");
+        if (blocks.size() > 1) {
+            throw new FileFormatException(where, blocks.get(1).line(), "[references]",
+                    "a stored method has at most one [references] block, found " + blocks.size());
+        }
+        List<ReferenceConditions> conditions = blocks.isEmpty() ? List.of()
+                : MethodReferences.read(blocks.get(0), method.references());
         KeyValueFile.Section h = head.head();
-        return new StoredMethod(method, declared.transform(), h.text("library-version"), h.text("library-sha256"),
-                declared.recipe());
+        try {
+            return new StoredMethod(method, declared.transform(), h.text("library-version"),
+                    h.text("library-sha256"), declared.recipe(), declared.resolution(), conditions);
+        } catch (IllegalArgumentException e) {
+            throw new FileFormatException(where, blocks.get(0).line(), "[references]", e.getMessage());
+        }
     }
 }

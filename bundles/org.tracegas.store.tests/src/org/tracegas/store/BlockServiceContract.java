@@ -146,6 +146,21 @@ abstract class BlockServiceContract {
             fields.put("libraryVersion", v.libraryVersionId());
             fields.put("softwareVersion", v.softwareVersion());
             fields.put("inputHash", v.inputHash());
+            ResultConditions c = v.conditions();
+            if (c != null) {
+                fields.put("cellTemperature", c.cellTemperatureK());
+                fields.put("cellTemperatureOrigin", c.temperatureOrigin());
+                fields.put("cellPressure", c.cellPressureKPa());
+                fields.put("cellPressureOrigin", c.pressureOrigin());
+                fields.put("pathLength", c.pathM());
+                fields.put("pathLengthOrigin", c.pathOrigin());
+                fields.put("referenceTemperature", c.referenceTemperatureK());
+                fields.put("referencePressure", c.referencePressureKPa());
+                fields.put("fitPathLength", c.fitPathM());
+                fields.put("correctionFactor", c.correctionFactor());
+                fields.put("noiseFactor", c.noiseFactor());
+                fields.put("noiseFactorOrigin", c.noiseFactorOrigin());
+            }
             text.append(AuditValues.canonical(fields));
         }
         return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256")

@@ -26,7 +26,8 @@ final class SampleBlocks {
     /**
      * Spectrum number {@code index}: measured {@code index} minutes after {@link #START}, 32 absorbance values
      * starting at {@code index}, and {@code results} results (at most 4) whose concentration is
-     * {@code index + compound number / 10}.
+     * {@code index + compound number / 10}; the results of an odd-numbered spectrum carry the conditions they
+     * were corrected with, those of an even-numbered one none (as results stored before corrections were).
      */
     static ProcessedSpectrum processed(int index, int results, String methodVersionId, String libraryVersionId) {
         double[] values = new double[32];
@@ -36,10 +37,14 @@ final class SampleBlocks {
         Spectrum absorbance = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000.0, 0.5, values.length),
                 values, Ordinate.ABSORBANCE);
         List<NewResult> rows = new ArrayList<>();
+        ResultConditions conditions = index % 2 == 0 ? null
+                : new ResultConditions(438.15 + index, "instrument-channel", 101.3, "instrument-channel", 6.4,
+                        "nominal", 423.15, 101.325, 6.4, (438.15 + index) / 423.15 * 101.325 / 101.3, 1.96,
+                        "transform of the method: happ-genzel; zero filling 2; single-sided");
         for (int j = 0; j < results; j++) {
             rows.add(new NewResult(null, COMPOUNDS[j], index + j / 10.0, 0.5, 0.2, "ppm",
                     j == 1 ? Set.of(ResultFlag.HIGH_RESIDUAL) : Set.of(), methodVersionId, libraryVersionId, "0.1.0",
-                    SHA256_OF_EMPTY));
+                    SHA256_OF_EMPTY, conditions));
         }
         return new ProcessedSpectrum(MeasurementKind.SAMPLE, START.plusSeconds(60L * index), 438.15, 1013.0,
                 absorbance, SampleEncoding.FLOAT64_LE, rows);

@@ -14,10 +14,11 @@ import org.tracegas.model.ResultFlag;
  * @param libraryVersionId the library version used; it is frozen by recording the result
  * @param softwareVersion  version of the software that computed the result
  * @param inputHash        SHA-256, hex, of the spectral input
+ * @param conditions       what the result was corrected with, or null when it was not corrected
  */
 public record NewResult(String measurementId, String compound, double concentration, double uncertainty,
         double detectionLimit, String unit, Set<ResultFlag> flags, String methodVersionId,
-        String libraryVersionId, String softwareVersion, String inputHash) {
+        String libraryVersionId, String softwareVersion, String inputHash, ResultConditions conditions) {
 
     public NewResult {
         requireText("compound", compound);
@@ -32,10 +33,18 @@ public record NewResult(String measurementId, String compound, double concentrat
         flags = Set.copyOf(flags);
     }
 
+    /** A result not corrected to the sample cell's conditions. */
+    public NewResult(String measurementId, String compound, double concentration, double uncertainty,
+            double detectionLimit, String unit, Set<ResultFlag> flags, String methodVersionId,
+            String libraryVersionId, String softwareVersion, String inputHash) {
+        this(measurementId, compound, concentration, uncertainty, detectionLimit, unit, flags, methodVersionId,
+                libraryVersionId, softwareVersion, inputHash, null);
+    }
+
     /** This result for another measurement. */
     public NewResult withMeasurement(String id) {
         return new NewResult(id, compound, concentration, uncertainty, detectionLimit, unit, flags, methodVersionId,
-                libraryVersionId, softwareVersion, inputHash);
+                libraryVersionId, softwareVersion, inputHash, conditions);
     }
 
     private static void requireText(String field, String value) {

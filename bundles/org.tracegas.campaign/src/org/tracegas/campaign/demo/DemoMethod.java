@@ -64,6 +64,7 @@ public final class DemoMethod {
         return "method = " + METHOD_NAME + "\n" + """
                 library = library/library.manifest
                 path-length = %s
+                resolution = %s
                 tolerance = 1e-6
                 reporting-unit = ppm
                 algorithm = curve-of-growth
@@ -119,7 +120,8 @@ public final class DemoMethod {
                 compound = SF6
                 interferents = NH3
                 region = 918..978 baseline 1
-                """.formatted(number(DemoScenario.PATH_LENGTH), number(DemoScenario.RANGE_LOW),
+                """.formatted(number(DemoScenario.PATH_LENGTH), number(DemoScenario.RESOLUTION),
+                        number(DemoScenario.RANGE_LOW),
                         number(DemoScenario.RANGE_HIGH));
     }
 

@@ -10,5 +10,7 @@ public enum ConditionOrigin {
     /** The instrument's side channel at the time of the spectrum. */
     INSTRUMENT_CHANNEL,
     /** The value the method states for its cell. */
-    METHOD_STATED
+    METHOD_STATED,
+    /** The value the operator gave when importing a file that states none. */
+    IMPORT_STATED
 }

@@ -285,6 +285,7 @@ class BatchProcessesTest {
         List<Class<?>> needed = new ArrayList<>(List.of(BatchRunnerProcess.class, CommandTable.class,
                 QuantificationSetup.class, WorkspaceStore.class, Spectrum.class, InterferogramTransform.class,
                 BatchQuantifier.class, org.tracegas.library.io.FileFormatException.class,
+                org.tracegas.qa.basis.ConditionsCorrection.class,
                 org.tracegas.importer.container.ContainerReader.class, org.tracegas.model.Role.class,
                 org.tracegas.audit.AuditTrail.class, org.tracegas.installation.InstalledSoftware.class,
                 org.eclipse.emf.common.util.Enumerator.class,

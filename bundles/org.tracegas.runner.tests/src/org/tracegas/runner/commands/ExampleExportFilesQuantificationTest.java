@@ -57,8 +57,11 @@ class ExampleExportFilesQuantificationTest {
         for (int i = 0; i < SAMPLES; i++) {
             double co = 30 + 270 * r.nextDouble();
             double n2o = 8 + 55 * r.nextDouble();
-            Spectrum a = lab.spectra.absorbance(Map.of("CO", co * LabJcampQuantificationTest.PATH_M, "N2O",
-                    n2o * LabJcampQuantificationTest.PATH_M), 0.003, 1e-5, 2e-4, r);
+            // made with the absorbers the cell at the given 313.15 K and 1009 hPa holds (ideal gas, p/T), which
+            // the results are corrected for
+            double perPpm = LabJcampQuantificationTest.PATH_M * LabJcampQuantificationTest.CELL_DENSITY;
+            Spectrum a = lab.spectra.absorbance(Map.of("CO", co * perPpm, "N2O", n2o * perPpm), 0.003, 1e-5, 2e-4,
+                    r);
             boolean transmittance = i % 4 == 3;
             StringBuilder b = new StringBuilder("EXAMPLE FTIR EXPORT 1\nserial: EX-0107\nacquired: ")
                     .append(Instant.parse("2026-11-30T06:00:00Z").plusSeconds(900L * i)).append("\nquantity: ")

@@ -34,6 +34,7 @@ import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.Spectrum;
+import org.tracegas.store.ResultConditions;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.SourcedMeasurement;
@@ -53,6 +54,8 @@ import org.tracegas.store.Workspaces;
 class LabJcampQuantificationTest {
 
     static final double PATH_M = 2.0;
+    /** Molecules in the sample cell (313.15 K, 1009 hPa) per those in the references' (296 K, 1013.25 hPa). */
+    static final double CELL_DENSITY = (296.0 / 313.15) * (1009.0 / 1013.25);
     /** Reference amounts, ppm·m, each a factor 1.5 from the next (as the runner's other tests space them). */
     static final double[] CO_REFS = { 40, 60, 90, 135, 202.5, 303.75, 455.625, 683.4375 };
     static final double[] N2O_REFS = { 12, 18, 27, 40.5, 60.75, 91.125, 136.6875 };
@@ -152,7 +155,7 @@ class LabJcampQuantificationTest {
                 labels.put("$CELL TEMPERATURE", "296.0");
                 labels.put("$CELL PRESSURE", "1013.25");
                 labels.put("RESOLUTION", "0.5");
-                labels.put("$APODIZATION", "Gaussian line shape");
+                labels.put("$APODIZATION", "Norton-Beer medium");
                 labels.put("$REFERENCE ORIGIN", "synthetic");
                 labels.put("$UNCERTAINTY", "0.02");
                 Files.writeString(lib.resolve(name), JcampForms.write(spectra.absorbance(Map.of("CO", x), 0, 0, 0,
@@ -171,7 +174,7 @@ class LabJcampQuantificationTest {
                         temperature = 296
                         pressure = 101.325
                         resolution = 0.5
-                        apodization = Gaussian line shape
+                        apodization = Norton-Beer medium
                         origin = synthetic
                         origin-text = Larkspur Bay generator, Lorentz lines
                         uncertainty = 0.02
@@ -198,7 +201,11 @@ class LabJcampQuantificationTest {
             for (int i = 0; i < sampleCount; i++) {
                 double co = 30 + 270 * r.nextDouble();
                 double n2o = 8 + 55 * r.nextDouble();
-                Map<String, Double> amounts = Map.of("CO", co * PATH_M, "N2O", n2o * PATH_M);
+                // the cell at 313.15 K and 100.9 kPa holds fewer molecules per ppm than the references' at 296 K
+                // and 101.325 kPa: absorbance follows the number density, p/T for an ideal gas (EPA FTIR
+                // Protocol section 11.2 corrects by these ratios), so the made amount shows as this much less
+                Map<String, Double> amounts = Map.of("CO", co * PATH_M * CELL_DENSITY, "N2O",
+                        n2o * PATH_M * CELL_DENSITY);
                 Instant t = T0.plusSeconds(1800L * i);
                 Map<String, String> labels = new LinkedHashMap<>();
                 if (i % 2 == 0) {
@@ -398,6 +405,20 @@ class LabJcampQuantificationTest {
             assertTrue(error <= 0.03 * truth + 0.3, () -> m.fileName() + " " + r.values().compound() + ": "
                     + r.values().concentration() + " ppm, made with " + truth + " ppm");
             assertTrue(r.values().uncertainty() > 0 && Double.isFinite(r.values().uncertainty()));
+            // corrected from the references' cell to the file's, EPA FTIR Protocol section 11.2 (standards notes)
+            ResultConditions c = r.values().conditions();
+            assertEquals(313.15, c.cellTemperatureK());
+            assertEquals("file-label", c.temperatureOrigin());
+            assertEquals(100.9, c.cellPressureKPa(), 1e-12);
+            assertEquals("file-label", c.pressureOrigin());
+            assertEquals(296.0, c.referenceTemperatureK());
+            assertEquals(101.325, c.referencePressureKPa());
+            assertEquals(PATH_M, c.pathM());
+            assertEquals("nominal", c.pathOrigin());
+            assertEquals(1 / CELL_DENSITY, c.correctionFactor(), 1e-12);
+            // no file here is an interferogram: the transform of none is known, F = 1 is stated
+            assertEquals(1.0, c.noiseFactor());
+            assertTrue(c.noiseFactorOrigin().contains("imported as such"), c.noiseFactorOrigin());
         }
         System.out.printf(Locale.ROOT, "lab JCAMP-DX day: worst relative error %.4f over %d results%n", worst,
                 results.size());
@@ -412,6 +433,10 @@ class LabJcampQuantificationTest {
             assertEquals(stored.values().concentration(), Double.parseDouble(f[4]));
             assertEquals(byId.get(f[0]).fileName(), f[2]);
             assertEquals(stored.values().inputHash(), f[13]);
+            assertEquals(313.15, Double.parseDouble(f[15]));
+            assertEquals("file-label", f[16]);
+            assertEquals(stored.values().conditions().correctionFactor(), Double.parseDouble(f[24]));
+            assertEquals(1.0, Double.parseDouble(f[25]));
             String recipe = store.analyses().recipe(ana, f[14]);
             assertTrue(recipe.contains("baseline degree=1;regions=2000:2060,2270:2300"), recipe);
             if (f[2].compareTo("stack-22.jdx") >= 0) {

@@ -34,8 +34,10 @@ public final class ResultsExportCommand implements Command {
                 + WorkspaceLogin.USAGE + "\n" + """
                   One line per stored result: measurement, measured_utc, source_file, compound, value,
                   standard_uncertainty, detection_limit, unit, flags, method, method_version, library,
-                  library_version, provenance_sha256 (of the absorbance fitted), recipe_sha256. The file is
-                  written whole or not at all.
+                  library_version, provenance_sha256 (of the absorbance fitted), recipe_sha256, and what the
+                  value was corrected with: cell temperature, pressure and path with their origins, the
+                  references' temperature and pressure, the fit's path, the factor, and the transform's noise
+                  factor F with its origin. The file is written whole or not at all.
                 exit codes: 0 written, 2 wrong arguments, 5 failure""";
     }
 

@@ -81,7 +81,7 @@ final class JdbcAnalysisService implements AnalysisService {
                     for (NewResult r : a.results()) {
                         ResultInfo row = JdbcResultService.newInfo(actor, projectId, r, recorded);
                         JdbcResultService.bindInsert(ps, row);
-                        ps.setString(16, recipeSha);
+                        ps.setString(JdbcResultService.RECIPE_PARAMETER, recipeSha);
                         ps.addBatch();
                         rows.add(row);
                     }

@@ -22,6 +22,7 @@ import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.store.NewResult;
+import org.tracegas.store.ResultConditions;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.Session;
@@ -65,13 +66,20 @@ final class JdbcResultService implements ResultService {
     /** Columns of table analysis_result, in the order {@link #bindInsert} binds them. */
     private static final String COLUMNS = "id, project_id, measurement_id, compound, concentration,"
             + " uncertainty, detection_limit, unit, flags, method_version_id, library_version_id,"
-            + " software_version, input_hash, recorded_by, recorded_at, row_version";
-    private static final String VALUES = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, 0";
+            + " software_version, input_hash, recorded_by, recorded_at, cell_temperature, cell_temperature_origin,"
+            + " cell_pressure, cell_pressure_origin, path_length, path_length_origin, reference_temperature,"
+            + " reference_pressure, fit_path_length, correction_factor, noise_factor, noise_factor_origin,"
+            + " row_version";
+    private static final String VALUES = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?,"
+            + " ?, ?, ?, 0";
+
+    /** The parameter of {@link #INSERT_WITH_RECIPE} that takes the recipe. */
+    static final int RECIPE_PARAMETER = 28;
 
     static final String INSERT = "INSERT INTO analysis_result (" + COLUMNS + ") VALUES (" + VALUES + ")";
 
     /**
-     * As {@link #INSERT}, with the recipe that processed the spectrum as the 16th parameter: written with the row,
+     * As {@link #INSERT}, with the recipe that processed the spectrum as parameter {@link #RECIPE_PARAMETER}: written with the row,
      * since the lab server's everyday role cannot update a stored result.
      */
     static final String INSERT_WITH_RECIPE = "INSERT INTO analysis_result (" + COLUMNS + ", recipe_sha256) VALUES ("
@@ -104,10 +112,17 @@ final class JdbcResultService implements ResultService {
 
     static void bindInsert(PreparedStatement ps, ResultInfo stored) throws SQLException {
         NewResult result = stored.values();
+        ResultConditions c = result.conditions();
         Tx.bind(ps, stored.id(), stored.projectId(), result.measurementId(), result.compound(),
                 result.concentration(), result.uncertainty(), result.detectionLimit(), result.unit(),
                 formatFlags(result), result.methodVersionId(), result.libraryVersionId(), result.softwareVersion(),
-                result.inputHash(), stored.recordedBy(), stored.recorded());
+                result.inputHash(), stored.recordedBy(), stored.recorded(),
+                c == null ? null : c.cellTemperatureK(), c == null ? null : c.temperatureOrigin(),
+                c == null ? null : c.cellPressureKPa(), c == null ? null : c.pressureOrigin(),
+                c == null ? null : c.pathM(), c == null ? null : c.pathOrigin(),
+                c == null ? null : c.referenceTemperatureK(), c == null ? null : c.referencePressureKPa(),
+                c == null ? null : c.fitPathM(), c == null ? null : c.correctionFactor(),
+                c == null ? null : c.noiseFactor(), c == null ? null : c.noiseFactorOrigin());
     }
 
     /**
@@ -161,9 +176,22 @@ final class JdbcResultService implements ResultService {
         NewResult values = new NewResult(rs.getString("measurement_id"), rs.getString("compound"),
                 rs.getDouble("concentration"), rs.getDouble("uncertainty"), rs.getDouble("detection_limit"),
                 rs.getString("unit"), flags, rs.getString("method_version_id"), rs.getString("library_version_id"),
-                rs.getString("software_version"), rs.getString("input_hash"));
+                rs.getString("software_version"), rs.getString("input_hash"), conditions(rs));
         return new ResultInfo(rs.getString("id"), rs.getString("project_id"), values, rs.getString("recorded_by"),
                 Tx.instant(rs, "recorded_at"));
+    }
+
+    /** The conditions of a stored result, null for a result not corrected. */
+    private static ResultConditions conditions(ResultSet rs) throws SQLException {
+        double factor = rs.getDouble("correction_factor");
+        if (rs.wasNull()) {
+            return null;
+        }
+        return new ResultConditions(rs.getDouble("cell_temperature"), rs.getString("cell_temperature_origin"),
+                rs.getDouble("cell_pressure"), rs.getString("cell_pressure_origin"), rs.getDouble("path_length"),
+                rs.getString("path_length_origin"), rs.getDouble("reference_temperature"),
+                rs.getDouble("reference_pressure"), rs.getDouble("fit_path_length"), factor,
+                rs.getDouble("noise_factor"), rs.getString("noise_factor_origin"));
     }
 
     /** The canonical values of a result's audit record. */
@@ -187,6 +215,22 @@ final class JdbcResultService implements ResultService {
         fields.put("libraryVersion", v.libraryVersionId());
         fields.put("softwareVersion", v.softwareVersion());
         fields.put("inputHash", v.inputHash());
+        ResultConditions c = v.conditions();
+        if (c != null) {
+            // only a corrected result has them, so the audit values of results without stay as they were
+            fields.put("cellTemperature", c.cellTemperatureK());
+            fields.put("cellTemperatureOrigin", c.temperatureOrigin());
+            fields.put("cellPressure", c.cellPressureKPa());
+            fields.put("cellPressureOrigin", c.pressureOrigin());
+            fields.put("pathLength", c.pathM());
+            fields.put("pathLengthOrigin", c.pathOrigin());
+            fields.put("referenceTemperature", c.referenceTemperatureK());
+            fields.put("referencePressure", c.referencePressureKPa());
+            fields.put("fitPathLength", c.fitPathM());
+            fields.put("correctionFactor", c.correctionFactor());
+            fields.put("noiseFactor", c.noiseFactor());
+            fields.put("noiseFactorOrigin", c.noiseFactorOrigin());
+        }
         return fields;
     }
 }
