@@ -97,7 +97,7 @@ class QaPlanTest {
 
     @Test
     void badStatedSigmaIsNamedByLineAndKey() {
-        // line 16 is the stated-sigma line of the block starting on line 14 (12 head lines and a blank one)
+        // line 17 is the stated-sigma line of the block starting on line 14 (12 head lines and a blank one)
         for (String[] bad : new String[][] { { "Noise level 0.1 ppm", "not a zero reading" },
                 { "Zero N2O 0.1 ppm", "not a zero reading" }, { "Zero NO 0.03 mg/m3", "'reading sigma ppm'" },
                 { "Zero NO -0.03 ppm", "must be positive" }, { "Zero NO abc ppm", "not a number" },
@@ -110,7 +110,7 @@ class QaPlanTest {
                     stated-sigma = %s
                     sigma-source = sheet
                     """.formatted(bad[0])));
-            assertTrue(e.getMessage().contains("line 16") && e.getMessage().contains("'stated-sigma'")
+            assertTrue(e.getMessage().contains("line 17") && e.getMessage().contains("'stated-sigma'")
                     && e.getMessage().contains(bad[1]) && e.getMessage().contains("qa.plan"), e.getMessage());
         }
         FileFormatException missing = assertThrows(FileFormatException.class, () -> read("""
