@@ -9,6 +9,7 @@ import java.time.Instant;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
 
 import org.junit.jupiter.api.Test;
@@ -43,6 +44,46 @@ class QaControlChartsTest {
             out.add(new ZeroSpanCheck(1.0, 5.0).zero("CO", r));
         }
         return out;
+    }
+
+    /** 12 zero readings rising steadily from -0.07 to +0.08 ppm, as a zero drifting over a day. */
+    private static double[] drift() {
+        double[] x = new double[12];
+        for (int i = 0; i < x.length; i++) {
+            x[i] = -0.07 + i * 0.15 / 11;
+        }
+        return x;
+    }
+
+    @Test
+    void aStatedSigmaChartsAZeroAroundNoneAndNamesItsSource() {
+        List<CheckOutcome> day = zeros(drift());
+        // limits from the day's first 8 readings: mean -0.0223, s = 0.15/11 * sqrt(6) = 0.0334 ppm, so the last
+        // reading, 0.08 ppm, lies beyond mean + 3 s = 0.0779 ppm (Shewhart action limit, rule 1 of the Western
+        // Electric handbook, from memory)
+        ChartEvaluation own = new QaControlCharts(List.of("Zero CO"), 8).evaluate(List.of(), day).get(0);
+        assertFalse(own.outcome().passed(), own.outcome().rule().statement());
+
+        String source = "performance sheet PS-1, repeatability at zero";
+        QaControlCharts stated = new QaControlCharts(List.of("Zero CO"), 8, Map.of("Zero CO", 0.05), source);
+        ChartEvaluation e = stated.evaluate(List.of(), day).get(0);
+        // around 0 with sigma 0.05 ppm: every reading within the 2-sigma warning limits of +-0.10 ppm (rule 1 and 2
+        // silent), 6 readings each side of 0 (rule 4 needs 8), and the upper CUSUM of k = 0.025 ppm sums to
+        // 0.139 ppm, below h = 0.25 ppm (Montgomery's tabular CUSUM, from memory): all 12 judged, none signals
+        assertTrue(e.outcome().passed(), e.outcome().rule().statement());
+        assertEquals(12, e.values().length);
+        assertEquals(0, e.baseline().length);
+        assertEquals(0.0, e.chart().centre());
+        assertEquals(0.15, e.chart().upperActionLimit(), 1e-12);
+        assertTrue(e.outcome().rule().statement().contains("none of the 12 readings judged")
+                && e.outcome().rule().statement().contains(source), e.outcome().rule().statement());
+        assertTrue(e.outcome().rule().source().contains(source), e.outcome().rule().source());
+        assertTrue(QaControlCharts.plot(e).title().contains("stated sigma"), QaControlCharts.plot(e).title());
+
+        // the same sigma still flags a zero beyond 3 sigma: 0.16 ppm > 0.15 ppm (rule 1)
+        double[] upset = drift();
+        upset[5] = 0.16;
+        assertFalse(stated.evaluate(List.of(), zeros(upset)).get(0).outcome().passed());
     }
 
     @Test

@@ -7,6 +7,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -72,6 +73,64 @@ class QaPlanTest {
                         .zero("CO", 0.2)), current).get(0).outcome();
         assertTrue(charts.isChartOutcome(chartOutcome), chartOutcome.check());
         assertTrue(!charts.isChartOutcome(zero) && !charts.isChartOutcome(noise));
+    }
+
+    @Test
+    void aChartBlockMayStateTheSigmaOfZeroReadingsWithItsSource() throws Exception {
+        QaControlCharts charts = read("""
+
+                [chart]
+                readings = Zero CO, Zero NO, Noise level
+                baseline = 8
+                stated-sigma = Zero NO 0.03 ppm,  Zero   CO 0.05 ppm
+                sigma-source = QAL1 report 17-004, repeatability at zero
+                """).charts().get(0);
+        assertEquals(Map.of("Zero NO", 0.03, "Zero CO", 0.05), charts.statedSigma());
+        assertEquals("QAL1 report 17-004, repeatability at zero", charts.sigmaSource());
+        assertTrue(read("""
+
+                [chart]
+                readings = Noise level
+                baseline = 8
+                """).charts().get(0).statedSigma().isEmpty());
+    }
+
+    @Test
+    void badStatedSigmaIsNamedByLineAndKey() {
+        // line 17 is the stated-sigma line of the block starting on line 14 (12 head lines and a blank one)
+        for (String[] bad : new String[][] { { "Noise level 0.1 ppm", "not a zero reading" },
+                { "Zero N2O 0.1 ppm", "not a zero reading" }, { "Zero NO 0.03 mg/m3", "'reading sigma ppm'" },
+                { "Zero NO -0.03 ppm", "must be positive" }, { "Zero NO abc ppm", "not a number" },
+                { "Zero NO 0.03 ppm, Zero NO 0.04 ppm", "stated twice" } }) {
+            FileFormatException e = assertThrows(FileFormatException.class, () -> read("""
+
+                    [chart]
+                    readings = Zero CO, Zero NO, Noise level
+                    baseline = 8
+                    stated-sigma = %s
+                    sigma-source = sheet
+                    """.formatted(bad[0])));
+            assertTrue(e.getMessage().contains("line 17") && e.getMessage().contains("'stated-sigma'")
+                    && e.getMessage().contains(bad[1]) && e.getMessage().contains("qa.plan"), e.getMessage());
+        }
+        FileFormatException missing = assertThrows(FileFormatException.class, () -> read("""
+
+                [chart]
+                readings = Zero NO
+                baseline = 8
+                stated-sigma = Zero NO 0.03 ppm
+                """));
+        assertTrue(missing.getMessage().contains("line 14") && missing.getMessage().contains("'sigma-source'")
+                && missing.getMessage().contains("needs its source"), missing.getMessage());
+        FileFormatException orphan = assertThrows(FileFormatException.class, () -> read("""
+
+                [chart]
+                readings = Zero NO
+                baseline = 8
+                sigma-source = sheet
+                """));
+        assertTrue(orphan.getMessage().contains("line 17") && orphan.getMessage().contains("'sigma-source'"),
+                orphan.getMessage());
     }
 
     @Test

@@ -6,8 +6,12 @@ import java.time.Duration;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashSet;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.qa.checks.AbsorbanceRegion;
@@ -36,10 +40,19 @@ import org.tracegas.qa.checks.SpikeGas;
  * baseline = 8                             readings the centre line and sigma are set from (at least 2): the
  *                                          latest of earlier campaigns of the same method when there are
  *                                          that many, otherwise the first readings of this campaign
+ * stated-sigma = Zero NO 0.03 ppm, Zero HCl 0.05 ppm
+ *                                          (optional) sigma of zero readings of this block, stated rather than
+ *                                          estimated: such a reading is charted around 0 ppm, the zero gas's
+ *                                          content, with that sigma, and every reading of the campaign is judged
+ * sigma-source = QAL1 report 17-004, repeatability at zero
+ *                                          where the stated sigma come from (required with stated-sigma); the
+ *                                          chart's rule, stored with its check and printed in the report, names it
  * </pre>
  *
  * A reading is charted in one block at most; each chart adds the check "Control chart: " and the reading's
- * name, stored with the other checks.
+ * name, stored with the other checks. A stated sigma follows EN 14181:2014 QAL3, which sets the chart
+ * parameters from S taken from QAL1 data (its table of contents); it suits a reading that drifts within the
+ * analyser's stated performance, which limits from the day's first readings would flag.
  */
 public record QaPlan(Path file, Path libraryManifest, String ctsCompound, double ctsPpm, double ctsLow,
         double ctsHigh, String spikeAnalyte, String tracer, SpikeGas spikeGas, List<String> analytes,
@@ -49,6 +62,8 @@ public record QaPlan(Path file, Path libraryManifest, String ctsCompound, double
     private static final Set<String> KEYS = Set.of("library", "cts-compound", "cts-ppm", "cts-band",
             "spike-analyte", "tracer", "spike-analyte-ppm", "spike-tracer-ppm", "analytes", "noise-region",
             "maximum-noise", "background-age-limit");
+    /** One stated sigma: the reading's name, a number and the unit ppm. */
+    private static final Pattern STATED = Pattern.compile("(.+?)\\s+(\\S+)\\s+ppm");
 
     public QaPlan {
         analytes = List.copyOf(analytes);
@@ -82,7 +97,7 @@ public record QaPlan(Path file, Path libraryManifest, String ctsCompound, double
         Set<String> charted = new HashSet<>();
         List<QaControlCharts> charts = new ArrayList<>();
         for (KeyValueFile.Section b : f.blocks("chart")) {
-            b.allow(Set.of("readings", "baseline"));
+            b.allow(Set.of("readings", "baseline", "stated-sigma", "sigma-source"));
             KeyValueFile.Value v = b.value("readings");
             List<String> readings = new ArrayList<>();
             for (String r : v.text().split(",")) {
@@ -99,8 +114,50 @@ public record QaPlan(Path file, Path libraryManifest, String ctsCompound, double
             if (baseline < 2) {
                 throw b.error("baseline", "must be at least 2 readings, was " + baseline);
             }
-            charts.add(new QaControlCharts(readings, baseline));
+            Map<String, Double> stated = statedSigma(b, readings);
+            if (!stated.isEmpty() && !b.has("sigma-source")) {
+                throw b.error("sigma-source", "missing in the [chart] block of line " + b.line()
+                        + ": a stated sigma needs its source");
+            }
+            if (stated.isEmpty() && b.has("sigma-source")) {
+                throw b.error("sigma-source", "states the source of no sigma: stated-sigma is missing");
+            }
+            charts.add(new QaControlCharts(readings, baseline, stated, b.text("sigma-source", "")));
         }
         return charts;
+    }
+
+    /** The block's stated-sigma entries, "reading sigma ppm" each, for its zero readings only. */
+    private static Map<String, Double> statedSigma(KeyValueFile.Section b, List<String> readings)
+            throws FileFormatException {
+        Map<String, Double> stated = new LinkedHashMap<>();
+        if (!b.has("stated-sigma")) {
+            return stated;
+        }
+        KeyValueFile.Value v = b.value("stated-sigma");
+        for (String entry : v.text().split(",")) {
+            Matcher m = STATED.matcher(entry.strip().replaceAll("\\s+", " "));
+            if (!m.matches()) {
+                throw v.error("'" + entry.strip() + "' is not 'reading sigma ppm', for example 'Zero NO 0.03 ppm'");
+            }
+            String reading = m.group(1);
+            if (!readings.contains(reading) || !reading.startsWith("Zero ")) {
+                throw v.error("'" + reading + "' is not a zero reading of this block; those are "
+                        + readings.stream().filter(r -> r.startsWith("Zero ")).toList());
+            }
+            double sigma;
+            try {
+                sigma = Double.parseDouble(m.group(2));
+            } catch (NumberFormatException e) {
+                throw v.error("sigma '" + m.group(2) + "' of " + reading + " is not a number");
+            }
+            if (!(sigma > 0) || !Double.isFinite(sigma)) {
+                throw v.error("sigma of " + reading + " must be positive, was " + m.group(2));
+            }
+            if (stated.put(reading, sigma) != null) {
+                throw v.error("'" + reading + "' is stated twice");
+            }
+        }
+        return stated;
     }
 }

@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
 import java.util.List;
+import java.util.Set;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -66,6 +67,12 @@ class DemoCampaignFilesTest {
         }
         assertEquals(8, plan.charts().get(0).baselineSize());
         assertEquals(3, plan.charts().get(1).baselineSize());
+        // the zeros are charted with the demo instrument's stated sigma, its noise and path length from readings
+        assertEquals(Set.of("Zero CO", "Zero NO", "Zero NH3", "Zero HCl"),
+                plan.charts().get(0).statedSigma().keySet());
+        assertTrue(plan.charts().get(0).sigmaSource().contains("the demo instrument's stated figures"),
+                plan.charts().get(0).sigmaSource());
+        assertTrue(plan.charts().get(1).statedSigma().isEmpty());
     }
 
     private static List<Instant> times(ContainerContents qa, String role) {

@@ -161,10 +161,12 @@ public final class DemoMethod {
 
     /**
      * The QA plan: CTS of CO, spike of HCl with SF6 as tracer, zero gas for every analyte but the majors; the
-     * zero readings of the analytes the client reports against limits, and NO, and the noise of the 12 zero-gas
-     * measurements charted with limits from 8 readings, the path length of the 5 CTS measurements with limits
-     * from 3. Limits from 8 readings of one day are tight: charting N2O's zero too flags its slow drift of a
-     * thousandth of a ppm (the invented source sag), far inside its zero acceptance.
+     * zero readings of the analytes the client reports against limits, and NO, of the 12 zero-gas measurements
+     * charted with the σ the demo instrument's performance sheet states (invented figures, as the instrument is),
+     * their noise with limits from 8 readings, the path length of the 5 CTS measurements with limits from 3.
+     * Limits from 8 readings of one day are tight: they flag a zero that drifts by a few hundredths of a ppm over
+     * the day (the invented source sag), far inside its zero acceptance, which is why the zeros are charted with
+     * the stated σ, as EN 14181:2014 QAL3 charts with S from QAL1 data (its table of contents).
      */
     static String qaPlanText() {
         return """
@@ -184,6 +186,9 @@ public final class DemoMethod {
                 [chart]
                 readings = Zero CO, Zero NO, Zero NH3, Zero HCl, Noise level
                 baseline = 8
+                stated-sigma = Zero CO 0.03 ppm, Zero NO 0.05 ppm, Zero NH3 0.03 ppm, Zero HCl 0.05 ppm
+                sigma-source = the demo instrument's stated figures (invented performance sheet TG-PS-12 of the \
+                demo analyser, repeatability standard deviation at zero)
 
                 [chart]
                 readings = CTS path length
