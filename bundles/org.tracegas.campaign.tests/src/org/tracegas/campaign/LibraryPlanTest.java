@@ -17,7 +17,7 @@ class LibraryPlanTest {
 
     private static final String HEAD = """
             library = test
-            temperature = 464.15
+            temperature = 438.15
             pressure = 101.3
             path-length = 4.85
             resolution = 0.5

@@ -76,7 +76,7 @@ class LabServerRolesTest {
             store.blocks().store(ana, p.id(), SampleBlocks.block(0, 2, 2, method.id(), library.id()));
             store.qa().recordAll(ana, p.id(), method.id(), List.of(new NewQaCheck("Noise level", true, 0.001,
                     "absorbance", Double.NEGATIVE_INFINITY, 0.002, "RMS <= 0.002", "common practice, no source")));
-            store.projects().recordMeasurement(ana, p.id(), MeasurementKind.BACKGROUND, SampleBlocks.START, 464.15,
+            store.projects().recordMeasurement(ana, p.id(), MeasurementKind.BACKGROUND, SampleBlocks.START, 438.15,
                     1013.0);
             assertTrue(store.audit().verifyWorkspace(List.of()).intact());
         }

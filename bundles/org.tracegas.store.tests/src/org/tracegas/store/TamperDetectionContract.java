@@ -86,7 +86,7 @@ abstract class TamperDetectionContract {
         fixture = new AnalysisFixture(backend);
         WorkspaceStore store = fixture.store;
         String m = store.projects().recordMeasurement(fixture.analyst, fixture.project.id(), MeasurementKind.SAMPLE,
-                SampleBlocks.START, 464.15, 1013.0);
+                SampleBlocks.START, 438.15, 1013.0);
         store.spectra().store(fixture.analyst, fixture.project.id(), new SpectrumInput(m,
                 org.tracegas.model.SpectralContent.ABSORBANCE, SampleBlocks.processed(0, 0, fixture.method.id(),
                         fixture.library.id()).absorbance(), SampleEncoding.FLOAT32_LE));

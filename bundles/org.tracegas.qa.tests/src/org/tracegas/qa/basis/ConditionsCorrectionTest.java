@@ -79,7 +79,7 @@ class ConditionsCorrectionTest {
         double calculated = quantifier.quantify(Sample.of(synthesize(synthesizer, 470.0, 97.0, TRUE_PPM)))
                 .compounds().get(0).concentration();
 
-        CellConditions cell = new CellConditions(ConditionValue.firstOf(470.0, null, 464.15),
+        CellConditions cell = new CellConditions(ConditionValue.firstOf(470.0, null, 438.15),
                 ConditionValue.firstOf(null, 97.0, 101.3), 1.0, PathOrigin.NOMINAL);
         ConditionsCorrection.CorrectedConcentration c = new ConditionsCorrection(453.0, 101.3, 1.0)
                 .correct(calculated, cell);
@@ -106,8 +106,8 @@ class ConditionsCorrectionTest {
 
     @Test
     void methodStatedValuesAreTheLastResort() {
-        assertEquals(new ConditionValue(464.15, ConditionOrigin.METHOD_STATED), ConditionValue.firstOf(null, null,
-                464.15));
-        assertEquals(ConditionOrigin.FILE_LABEL, ConditionValue.firstOf(463.0, 465.0, 464.15).origin());
+        assertEquals(new ConditionValue(438.15, ConditionOrigin.METHOD_STATED), ConditionValue.firstOf(null, null,
+                438.15));
+        assertEquals(ConditionOrigin.FILE_LABEL, ConditionValue.firstOf(437.0, 439.0, 438.15).origin());
     }
 }
