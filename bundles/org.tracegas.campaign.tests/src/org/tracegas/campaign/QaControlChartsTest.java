@@ -129,11 +129,13 @@ class QaControlChartsTest {
                     "rev-pw-1234".toCharArray(), SignatureMeaning.REVIEWED, null);
 
             ReportContent again = ReportSignatures.attach(store, analyst, now.id(),
-                    ReportContent.builder(campaign).controlChart(QaControlCharts.plot(e)).build());
+                    ReportContent.builder(campaign).controlChart(QaControlCharts.plot(e)).build(),
+                    store.audit().verifyWorkspace(List.of()).requireIntact("attach the signatures"));
             assertEquals(first.contentHash(), again.signatures().get(0).signedContentHash(), "applies");
             assertTrue(again.auditAnchor().orElseThrow().sequence() > 0);
             ReportContent changed = ReportSignatures.attach(store, analyst, now.id(),
-                    ReportContent.builder(campaign).caution("a changed report").build());
+                    ReportContent.builder(campaign).caution("a changed report").build(),
+                    store.audit().verifyWorkspace(List.of()).requireIntact("attach the signatures"));
             assertEquals(1, changed.signatures().size());
             assertFalse(changed.signatures().get(0).signedContentHash().equals(changed.contentHash()),
                     "signed an earlier version");

@@ -37,6 +37,7 @@ import org.tracegas.store.Session;
 import org.tracegas.store.StoredSpectrum;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
+import org.tracegas.store.WorkspaceVerification;
 
 /**
  * The report of a campaign made from stored data only: the results and QA checks a method version made, the
@@ -66,7 +67,9 @@ public final class CampaignReport {
      */
     public ReportContent content(VersionInfo methodVersion, StoredMethod method, ReportPlan plan)
             throws IOException, ImportException {
-        store.audit().verifyWorkspace(List.of()).requireIntact("make the report of project " + projectId);
+        // the data are verified once, before they are read; the report states this verification and its anchor
+        WorkspaceVerification verified = store.audit().verifyWorkspace(List.of())
+                .requireIntact("make the report of project " + projectId);
         List<MeasurementInfo> measurements = store.projects().measurements(actor, projectId);
         MinuteSeries series = MinuteSeries.of(measurements, store.results().results(actor, projectId),
                 methodVersion.id());
@@ -91,7 +94,7 @@ public final class CampaignReport {
                                 + method.libraryContentHash().substring(0, 16)),
                         checks, charts(method, plan, checks), series, plan.reported(), plan.water(),
                         t -> oxygen(o2, plan.o2Channel(), t), plan.periods(), exampleFit(measurements, method, plan));
-        return ReportSignatures.attach(store, actor, projectId, content);
+        return ReportSignatures.attach(store, actor, projectId, content, verified);
     }
 
     /**

@@ -36,14 +36,15 @@ public final class ReportSignatures {
     }
 
     /**
-     * The content with the review and approval signatures stored for its report id and the audit anchor of
-     * now, with the verification of the chain and the data it was made under; authorship and responsibility
-     * signatures are not part of the report's review block.
+     * The content with the review and approval signatures stored for its report id and the audit anchor of the
+     * verification of the chain and the data it was made under; authorship and responsibility signatures are not
+     * part of the report's review block.
      *
-     * @throws org.tracegas.store.TamperedDataException if stored data no longer matches the audit trail
+     * @param verified the verification the report's data were read under, intact (see
+     *                 {@link WorkspaceVerification#requireIntact}); its chain head is the report's anchor
      */
     public static ReportContent attach(WorkspaceStore store, Session reader, String projectId,
-            ReportContent content) {
+            ReportContent content, WorkspaceVerification verified) {
         ReportContent signed = content;
         for (Signature s : store.reviews().signatures(reader, projectId, content.campaign().reportId())) {
             org.tracegas.report.SignatureMeaning meaning = switch (s.meaning()) {
@@ -57,8 +58,6 @@ public final class ReportSignatures {
                         meaning, s.contentSha256()));
             }
         }
-        WorkspaceVerification verified = store.audit().verifyWorkspace(java.util.List.of())
-                .requireIntact("make the report of project " + projectId);
         ChainAnchor head = verified.head();
         return head == null ? signed
                 : signed.withAuditAnchor(new AuditAnchor(head.sequence(), head.hash(), verified.statement()));
