@@ -3,11 +3,9 @@ package org.tracegas.campaign;
 import java.io.IOException;
 import java.time.Instant;
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 
 import org.tracegas.library.ReferenceLibrary;
-import org.tracegas.library.ReferenceSpectrum;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.preprocess.BackgroundRatio;
@@ -71,8 +69,8 @@ public final class QaEvaluation {
                 method.quantifier(qa.backgrounds().get(0).singleBeam().axis(), software, false));
         Instant first = samples.get(0).time();
         Instant last = samples.get(samples.size() - 1).time();
-        List<CheckOutcome> readings = CampaignQaChecks.evaluate(checksPlan(plan, library, method), fitted,
-                qa.backgrounds(), first, last);
+        List<CheckOutcome> readings = CampaignQaChecks.evaluate(plan.checks(), new PlanInputs(plan, fitted,
+                qa.backgrounds(), first, last, method.method().pathLengthMetres(), library));
         List<CheckOutcome> checks = new ArrayList<>(readings);
         List<CheckOutcome> history = plan.charts().isEmpty() ? List.of()
                 : StoredQaChecks.history(store, actor, projectId, method.method().name());
@@ -81,23 +79,5 @@ public final class QaEvaluation {
         }
         StoredQaChecks.store(store, actor, projectId, methodVersionId, checks);
         return new Outcome(StoredQaChecks.load(store, actor, projectId, methodVersionId), false);
-    }
-
-    /** The CTS reference nearest in amount to the CTS gas in the cell, so that saturation does not bias the ratio. */
-    private static CampaignQaChecks.Plan checksPlan(QaPlan plan, ReferenceLibrary library, StoredMethod method)
-            throws FileFormatException {
-        double path = method.method().pathLengthMetres();
-        double ctsPpmMetres = plan.ctsPpm() * path;
-        ReferenceSpectrum cts = library.references().stream()
-                .filter(r -> r.compound().name().equals(plan.ctsCompound()))
-                .min(Comparator.comparingDouble(
-                        r -> Math.abs(r.metadata().conditions().concentrationPathLength() - ctsPpmMetres)))
-                .orElseThrow(() -> new FileFormatException(plan.file(), 0, "cts-compound", "the library has no "
-                        + "reference of " + plan.ctsCompound()));
-        return new CampaignQaChecks.Plan(plan.ctsCompound(), plan.ctsPpm(), plan.ctsLow(), plan.ctsHigh(),
-                cts.spectrum(), cts.metadata().conditions().concentrationPathLength(),
-                cts.metadata().conditions().temperature(), cts.metadata().conditions().pressure(), path,
-                plan.spikeAnalyte(), plan.tracer(), plan.spikeGas(), plan.analytes(), plan.noiseRegion(),
-                plan.maximumNoise(), plan.backgroundAgeLimit());
     }
 }

@@ -37,8 +37,9 @@ public final class QaCommand implements Command {
                   The QA file holds backgrounds and the QA measurements, each with its role in the header (cts,
                   zero, spike, unspiked). The plan (key = value lines) names the method's library folder, the CTS
                   gas, band and content, the spike gas, the zero-gas analytes, the noise region and limit, and
-                  the background age limit, and in [chart] blocks (readings, baseline) the repeated readings
-                  charted against earlier campaigns of the method. Checks are evaluated once per method version
+                  the background age limit, optionally the checks to evaluate by name (checks = ...; all built-in
+                  ones by default, contributed ones too), and in [chart] blocks (readings, baseline) the repeated
+                  readings charted against earlier campaigns of the method. Checks are evaluated once per method version
                   and stored; later runs print the stored ones.
                 exit codes: 0 every check passed, 1 a check failed, 2 wrong arguments, 3 bad plan or QA file
                   (file, line and field named; nothing stored), 5 failure""";
