@@ -14,7 +14,10 @@ import org.tracegas.qa.checks.QaReading;
 import org.tracegas.qa.checks.QaReference;
 import org.tracegas.qa.checks.QaSettings;
 
-/** A campaign's QA readings, backgrounds, sample span, method path and library, as its QA plan's checks see them. */
+/**
+ * A campaign's QA readings, backgrounds (none for spectra imported as absorbance), sample span, method path and
+ * library, as its QA plan's checks see them.
+ */
 final class PlanInputs implements QaInputs {
 
     private final QaPlan plan;
@@ -29,7 +32,7 @@ final class PlanInputs implements QaInputs {
             Instant lastSample, double nominalPathMetres, ReferenceLibrary library) {
         this.plan = plan;
         this.readings = readings;
-        this.backgrounds = new BackgroundTimeline(backgrounds);
+        this.backgrounds = backgrounds.isEmpty() ? null : new BackgroundTimeline(backgrounds);
         this.firstSample = firstSample;
         this.lastSample = lastSample;
         this.nominalPathMetres = nominalPathMetres;
@@ -43,11 +46,14 @@ final class PlanInputs implements QaInputs {
 
     @Override
     public List<Instant> backgrounds() {
-        return backgrounds.all().stream().map(Background::measured).toList();
+        return backgrounds == null ? List.of() : backgrounds.all().stream().map(Background::measured).toList();
     }
 
     @Override
     public Instant backgroundBefore(Instant time) {
+        if (backgrounds == null) {
+            throw new IllegalArgumentException("the project holds no background");
+        }
         return backgrounds.latestBefore(time).measured();
     }
 

@@ -14,33 +14,13 @@ import org.tracegas.spectrum.Spectrum;
 /** The QA measurements of a campaign (CTS, zero, spiked and unspiked pairs), each with its fit. */
 public final class QaMeasurements {
 
-    /** A QA measurement and what the method found in it. */
-    public record Fitted(MeasuredSpectrum measured, SpectrumResult result) implements QaReading {
-
-        @Override
-        public Instant time() {
-            return measured.time();
-        }
-
-        @Override
-        public String role() {
-            return measured.role();
-        }
-
-        @Override
-        public Spectrum absorbance() {
-            return measured.ratio().spectrum();
-        }
-
-        @Override
-        public double cellTemperatureK() {
-            return measured.cellTemperatureK();
-        }
-
-        @Override
-        public double cellPressureKPa() {
-            return measured.cellPressureKPa();
-        }
+    /**
+     * A QA measurement and what the method found in it.
+     *
+     * @param absorbance the absorbance the method fitted
+     */
+    public record Fitted(Instant time, String role, double cellTemperatureK, double cellPressureKPa,
+            Spectrum absorbance, SpectrumResult result) implements QaReading {
 
         @Override
         public double ppm(String compound) {
@@ -67,14 +47,25 @@ public final class QaMeasurements {
     public static QaMeasurements fit(List<MeasuredSpectrum> measured, Quantifier quantifier) {
         List<Fitted> fitted = new ArrayList<>();
         for (MeasuredSpectrum m : measured) {
-            fitted.add(new Fitted(m, quantifier.quantify(Sample.of(m.ratio().spectrum()))));
+            Spectrum a = m.ratio().spectrum();
+            fitted.add(new Fitted(m.time(), m.role(), m.cellTemperatureK(), m.cellPressureKPa(), a,
+                    quantifier.quantify(Sample.of(a))));
         }
         return new QaMeasurements(fitted);
     }
 
+    /** QA measurements fitted already. */
+    public static QaMeasurements of(List<Fitted> fitted) {
+        return new QaMeasurements(fitted);
+    }
+
+    public boolean isEmpty() {
+        return all.isEmpty();
+    }
+
     /** The measurements of one role, in time order. */
     public List<Fitted> withRole(String role) {
-        return all.stream().filter(f -> f.measured().role().equals(role))
-                .sorted((a, b) -> a.measured().time().compareTo(b.measured().time())).toList();
+        return all.stream().filter(f -> f.role().equals(role)).sorted((a, b) -> a.time().compareTo(b.time()))
+                .toList();
     }
 }

@@ -25,8 +25,12 @@ public final class BackgroundAgeQaCheck implements QaCheck {
         return Set.of();
     }
 
+    /** No outcome when the campaign has no backgrounds: its spectra came as absorbance or transmittance. */
     @Override
     public List<CheckOutcome> evaluate(QaInputs inputs) throws IOException {
+        if (inputs.backgrounds().isEmpty()) {
+            return List.of();
+        }
         Duration limit = inputs.settings().duration("background-age-limit");
         Instant first = inputs.firstSample();
         Instant worstSample = inputs.lastSample();
