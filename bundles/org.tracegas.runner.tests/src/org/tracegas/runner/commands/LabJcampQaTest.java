@@ -30,6 +30,21 @@ class LabJcampQaTest {
 
     static final double CTS_PPM = 100;
     static final double NOISE = 2e-4;
+    /** The QA plan of the lab's CO and N2O method; the plan folder holds the method's library folder lib. */
+    static final String PLAN = """
+            library = lib/library.manifest
+            cts-compound = CO
+            cts-ppm = 100
+            cts-band = 2060..2195
+            spike-analyte = CO
+            tracer = N2O
+            spike-analyte-ppm = 60
+            spike-tracer-ppm = 2
+            analytes = CO, N2O
+            noise-region = 2250..2300
+            maximum-noise = 2e-3
+            background-age-limit = 24 h
+            """;
     static final Pattern LINE = Pattern.compile("(pass|FAIL) +([A-Za-z0-9 ]+): (\\S+) ");
 
     @TempDir
@@ -80,21 +95,8 @@ class LabJcampQaTest {
         assertTrue(lab.ok(lab.quantifyArguments().toArray(String[]::new)).contains("Quantified 0 measurement(s)"),
                 "the QA measurements are not samples");
 
-        Path plan = Files.writeString(folder.resolve("qa.plan"), """
-                library = lib/library.manifest
-                cts-compound = CO
-                cts-ppm = 100
-                cts-band = 2060..2195
-                spike-analyte = CO
-                tracer = N2O
-                spike-analyte-ppm = 60
-                spike-tracer-ppm = 2
-                analytes = CO, N2O
-                noise-region = 2250..2300
-                maximum-noise = 2e-3
-                background-age-limit = 24 h
-                checks = cts-path, cts-drift, zero-gas, background-age
-                """);
+        Path plan = Files.writeString(folder.resolve("qa.plan"),
+                PLAN + "checks = cts-path, cts-drift, zero-gas, background-age\n");
         String out = lab.ok("qa", "--project", "LBK-5", "--method", "Kiln stack CO and N2O", "--plan",
                 plan.toString());
         assertTrue(out.startsWith("QA checks: 7, failed: 0"), out);
@@ -112,20 +114,7 @@ class LabJcampQaTest {
                 List.of("--workspace", folder.resolve("ws").toString()), 6);
         lab.setUp();
         lab.ok(lab.quantifyArguments().toArray(String[]::new));
-        Path plan = Files.writeString(folder.resolve("qa.plan"), """
-                library = lib/library.manifest
-                cts-compound = CO
-                cts-ppm = 100
-                cts-band = 2060..2195
-                spike-analyte = CO
-                tracer = N2O
-                spike-analyte-ppm = 60
-                spike-tracer-ppm = 2
-                analytes = CO, N2O
-                noise-region = 2250..2300
-                maximum-noise = 2e-3
-                background-age-limit = 24 h
-                """);
+        Path plan = Files.writeString(folder.resolve("qa.plan"), PLAN);
         assertEquals(ExitCode.FAILURE, lab.run("qa", "--project", "LBK-5", "--method", "Kiln stack CO and N2O",
                 "--plan", plan.toString()));
         assertTrue(lab.errors().contains("holds no QA measurements") && lab.errors().contains("##$ROLE="),
