@@ -8,15 +8,22 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.qa.checks.CheckOutcome;
+import org.tracegas.qa.checks.QaCheck;
+import org.tracegas.qa.checks.QaCheckRegistry;
+import org.tracegas.qa.checks.QaInputs;
 import org.tracegas.qa.checks.NoiseCheck;
 import org.tracegas.qa.checks.ZeroSpanCheck;
 
-/** The control charts a QA plan file asks for: which repeated readings, the baseline size, and bad blocks. */
+/**
+ * The control charts a QA plan file asks for (which repeated readings, the baseline size, and bad blocks) and the
+ * checks it names.
+ */
 class QaPlanTest {
 
     @TempDir
@@ -38,9 +45,40 @@ class QaPlanTest {
             """;
 
     private QaPlan read(String charts) throws Exception {
-        Path file = folder.resolve("qa.plan");
-        Files.writeString(file, HEAD + charts);
-        return QaPlan.read(file);
+        return QaPlan.read(write(charts));
+    }
+
+    /** The plan file with lines after the head (whose 12 lines put a first key there on line 13). */
+    private Path write(String tail) throws Exception {
+        return Files.writeString(folder.resolve("qa.plan"), HEAD + tail);
+    }
+
+    private static List<String> names(QaPlan plan) {
+        return plan.checks().stream().map(QaCheck::name).toList();
+    }
+
+    /** A check with a setting of its own, as another bundle would contribute it. */
+    static final class LineLeakCheck implements QaCheck {
+
+        @Override
+        public String name() {
+            return "line-leak";
+        }
+
+        @Override
+        public Set<String> readings() {
+            return Set.of(MeasurementRole.ZERO);
+        }
+
+        @Override
+        public Set<String> settings() {
+            return Set.of("leak-limit");
+        }
+
+        @Override
+        public List<CheckOutcome> evaluate(QaInputs inputs) {
+            return List.of();
+        }
     }
 
     @Test
@@ -171,5 +209,42 @@ class QaPlanTest {
                 limit = 8
                 """));
         assertTrue(key.getMessage().contains("line 16") && key.getMessage().contains("'limit'"), key.getMessage());
+    }
+
+    @Test
+    void aPlanWithoutChecksEvaluatesTheBuiltInOnesInTheirOrder() throws Exception {
+        assertEquals(CampaignQaChecks.BUILT_IN, names(read("")));
+        assertEquals(CampaignQaChecks.BUILT_IN, names(QaPlan.read(write(""), CampaignQaChecks.builtIn())));
+    }
+
+    @Test
+    void aPlanNamesItsChecksInTheOrderTheyAreEvaluated() throws Exception {
+        QaPlan plan = QaPlan.read(write("checks = zero-gas, cts-drift\n"), CampaignQaChecks.builtIn());
+        assertEquals(List.of("zero-gas", "cts-drift"), names(plan));
+    }
+
+    @Test
+    void anUnknownCheckNamesFileLineAndTheKnownChecks() throws Exception {
+        Path file = write("checks = cts-path, zero-gass\n");
+        FileFormatException e = assertThrows(FileFormatException.class,
+                () -> QaPlan.read(file, CampaignQaChecks.builtIn()));
+        String m = e.getMessage();
+        assertTrue(m.contains(file.toString()) && m.contains("line 13") && m.contains("'checks'")
+                && m.contains("'zero-gass'") && m.contains(CampaignQaChecks.BUILT_IN.toString()), m);
+        FileFormatException twice = assertThrows(FileFormatException.class,
+                () -> QaPlan.read(write("checks = cts-path, cts-path\n"), CampaignQaChecks.builtIn()));
+        assertTrue(twice.getMessage().contains("line 13") && twice.getMessage().contains("named twice"),
+                twice.getMessage());
+    }
+
+    @Test
+    void aContributedCheckMayReadSettingsOfItsOwnOnlyWhenNamed() throws Exception {
+        QaCheckRegistry known = CampaignQaChecks.builtIn().register(new LineLeakCheck());
+        QaPlan plan = QaPlan.read(write("checks = zero-gas, line-leak\nleak-limit = 0.5\n"), known);
+        assertEquals(List.of("zero-gas", "line-leak"), names(plan));
+        assertEquals(0.5, plan.settings().number("leak-limit"), 0.0);
+        FileFormatException e = assertThrows(FileFormatException.class,
+                () -> QaPlan.read(write("checks = zero-gas\nleak-limit = 0.5\n"), known));
+        assertTrue(e.getMessage().contains("line 14") && e.getMessage().contains("unknown key"), e.getMessage());
     }
 }

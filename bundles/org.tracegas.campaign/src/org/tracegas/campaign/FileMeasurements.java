@@ -225,6 +225,16 @@ public final class FileMeasurements {
         return labels.keySet().stream().map(FileMeasurements::key).anyMatch(HECTOPASCAL::contains);
     }
 
+    /**
+     * What a measurement was for, as its label {@value MeasurementRole#KEY} (in a JCAMP-DX file {@code ##$ROLE=})
+     * states it, in lower case: a QA role such as {@value MeasurementRole#CTS}, or {@value MeasurementRole#SAMPLE}
+     * when no label states one.
+     */
+    static String role(Map<String, String> labels) {
+        return labels.entrySet().stream().filter(e -> key(e.getKey()).equals("ROLE"))
+                .map(e -> e.getValue().strip().toLowerCase(Locale.ROOT)).findFirst().orElse(MeasurementRole.SAMPLE);
+    }
+
     private static double temperature(Map<String, String> labels, Defaults defaults, Where where)
             throws ImportException {
         Double kelvin = stated(labels, KELVIN, where);

@@ -81,6 +81,8 @@ public final class MeasurementQuantification {
     private final Map<SpectralAxis, Quantifier> quantifiers = new HashMap<>();
     private final String versionId;
     private MeasurementAbsorbance absorbance;
+    private List<SourcedMeasurement> qa = List.of();
+    private List<Background> backgrounds = List.of();
 
     /**
      * @param registry creates the steps of the method's recipe
@@ -110,8 +112,8 @@ public final class MeasurementQuantification {
     }
 
     /**
-     * The project's samples (every kind but background) not yet analysed with the version, in time order, and
-     * the backgrounds read.
+     * The project's samples (every kind but background, without the QA measurements: those whose labels state a
+     * QA role) not yet analysed with the version, in time order, and the backgrounds read.
      *
      * @throws ImportException naming a background measurement that cannot serve as one
      */
@@ -145,10 +147,13 @@ public final class MeasurementQuantification {
         all.sort(Comparator.comparing((SourcedMeasurement m) -> m.measurement().time()));
         List<SourcedMeasurement> samples = new ArrayList<>();
         List<Background> backgrounds = new ArrayList<>();
+        List<SourcedMeasurement> qa = new ArrayList<>();
         int skipped = 0;
         for (SourcedMeasurement m : all) {
             if (m.measurement().kind() == MeasurementKind.BACKGROUND) {
                 backgrounds.add(MeasurementAbsorbance.background(m, values(m, pendingValues), transform));
+            } else if (!FileMeasurements.role(m.labels()).equals(MeasurementRole.SAMPLE)) {
+                qa.add(m);
             } else if (analysed.contains(m.measurement().id())) {
                 skipped++;
             } else {
@@ -157,7 +162,31 @@ public final class MeasurementQuantification {
         }
         absorbance = new MeasurementAbsorbance(transform,
                 backgrounds.isEmpty() ? null : new BackgroundTimeline(backgrounds));
+        this.qa = List.copyOf(qa);
+        this.backgrounds = List.copyOf(backgrounds);
         return new Plan(samples, skipped, pendingValues);
+    }
+
+    /**
+     * The project's QA measurements found by the last plan, made absorbance, put through the method's recipe and
+     * fitted as its samples are, and nothing stored; each with the role its label states.
+     *
+     * @throws ImportException naming the file, record and field of a QA measurement that cannot be fitted
+     */
+    public QaMeasurements qaMeasurements() throws ImportException {
+        List<QaMeasurements.Fitted> fitted = new ArrayList<>();
+        for (SourcedMeasurement m : qa) {
+            Prepared p = prepare(m, values(m, Map.of()));
+            fitted.add(new QaMeasurements.Fitted(m.measurement().time(), FileMeasurements.role(m.labels()),
+                    temperature(m).value(), pressure(m).value(), p.absorbance(),
+                    quantifier(p.absorbance().axis()).quantify(p.sample())));
+        }
+        return QaMeasurements.of(fitted);
+    }
+
+    /** The project's backgrounds found by the last plan, as single beams, in time order. */
+    public List<Background> backgrounds() {
+        return backgrounds;
     }
 
     /**

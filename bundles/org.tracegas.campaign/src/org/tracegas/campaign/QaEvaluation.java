@@ -3,13 +3,13 @@ package org.tracegas.campaign;
 import java.io.IOException;
 import java.time.Instant;
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.List;
 
+import org.tracegas.importer.ImportException;
 import org.tracegas.library.ReferenceLibrary;
-import org.tracegas.library.ReferenceSpectrum;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryVersionText;
+import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.qa.checks.CheckOutcome;
@@ -18,11 +18,12 @@ import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
 /**
- * Evaluates a campaign's QA checks once per method version and stores them: the QA measurements are transformed
- * and fitted with the stored method, the CTS reference comes from the method's own library version, and the
- * background ages span the project's stored samples. The repeated readings the plan charts are judged on their
- * control charts against the earlier campaigns of the same method, and the charts' outcomes are stored with the
- * other checks. Checks stored already are returned as they are.
+ * Evaluates a campaign's QA checks once per method version and stores them: the QA measurements (of a QA
+ * container file, or imported from the lab's files) are made absorbance and fitted with the stored method, the
+ * CTS reference comes from the method's own library version, and the background ages span the project's stored
+ * samples. The repeated readings the plan charts are judged on their control charts against the earlier
+ * campaigns of the same method, and the charts' outcomes are stored with the other checks. Checks stored already
+ * are returned as they are.
  */
 public final class QaEvaluation {
 
@@ -42,6 +43,12 @@ public final class QaEvaluation {
         this.software = software;
     }
 
+    /** The QA measurements fitted with the method: made only when the checks are not stored yet. */
+    @FunctionalInterface
+    private interface Readings<E extends Exception> {
+        QaMeasurements fit() throws E;
+    }
+
     /**
      * @param qa the QA file's contents: its backgrounds and its QA measurements (role in the header)
      * @throws FileFormatException if the plan's library folder is not the library version the method was made
@@ -49,6 +56,39 @@ public final class QaEvaluation {
      */
     public Outcome run(String methodVersionId, StoredMethod method, QaPlan plan, ContainerContents qa)
             throws IOException {
+        return run(methodVersionId, method, plan, () -> {
+            SpectrumChain chain = new SpectrumChain(new InterferogramTransform(method.transform()),
+                    new BackgroundRatio(plan.backgroundAgeLimit()), new BackgroundTimeline(qa.backgrounds()));
+            List<MeasuredSpectrum> measured = qa.others().stream().map(chain::process).toList();
+            return QaMeasurements.fit(measured,
+                    method.quantifier(qa.backgrounds().get(0).singleBeam().axis(), software, false));
+        }, qa.backgrounds());
+    }
+
+    /**
+     * Evaluates the checks on the QA measurements the project holds from the lab's files (those whose labels
+     * state a QA role), made absorbance, put through the method's recipe and fitted as quantify treats its
+     * samples, with the project's backgrounds.
+     *
+     * @param imports the quantification of the project with the method version the checks are for
+     * @throws ImportException     naming the file, record and field of a QA measurement that cannot be fitted
+     * @throws FileFormatException as {@link #run(String, StoredMethod, QaPlan, ContainerContents)}
+     */
+    public Outcome run(String methodVersionId, StoredMethod method, QaPlan plan, MeasurementQuantification imports)
+            throws IOException, ImportException {
+        imports.plan();
+        return run(methodVersionId, method, plan, () -> {
+            QaMeasurements fitted = imports.qaMeasurements();
+            if (fitted.isEmpty()) {
+                throw new IllegalStateException("the project holds no QA measurements; import the lab's QA files,"
+                        + " each record stating its role (label " + MeasurementRole.KEY + ", in JCAMP-DX ##$ROLE=)");
+            }
+            return fitted;
+        }, imports.backgrounds());
+    }
+
+    private <E extends Exception> Outcome run(String methodVersionId, StoredMethod method, QaPlan plan,
+            Readings<E> qa, List<Background> backgrounds) throws IOException, E {
         store.audit().verifyWorkspace(List.of()).requireIntact("evaluate the QA checks of project " + projectId);
         List<CheckOutcome> stored = StoredQaChecks.load(store, actor, projectId, methodVersionId);
         if (!stored.isEmpty()) {
@@ -64,15 +104,11 @@ public final class QaEvaluation {
                     + " is not the library version " + method.libraryVersionId() + " the method was made with");
         }
         ReferenceLibrary library = LabReferenceSource.manifestReader().read(plan.libraryManifest());
-        SpectrumChain chain = new SpectrumChain(new InterferogramTransform(method.transform()),
-                new BackgroundRatio(plan.backgroundAgeLimit()), new BackgroundTimeline(qa.backgrounds()));
-        List<MeasuredSpectrum> measured = qa.others().stream().map(chain::process).toList();
-        QaMeasurements fitted = QaMeasurements.fit(measured,
-                method.quantifier(qa.backgrounds().get(0).singleBeam().axis(), software, false));
+        QaMeasurements fitted = qa.fit();
         Instant first = samples.get(0).time();
         Instant last = samples.get(samples.size() - 1).time();
-        List<CheckOutcome> readings = CampaignQaChecks.evaluate(checksPlan(plan, library, method), fitted,
-                qa.backgrounds(), first, last);
+        List<CheckOutcome> readings = CampaignQaChecks.evaluate(plan.checks(), new PlanInputs(plan, fitted,
+                backgrounds, first, last, method.method().pathLengthMetres(), library));
         List<CheckOutcome> checks = new ArrayList<>(readings);
         List<CheckOutcome> history = plan.charts().isEmpty() ? List.of()
                 : StoredQaChecks.history(store, actor, projectId, method.method().name());
@@ -81,23 +117,5 @@ public final class QaEvaluation {
         }
         StoredQaChecks.store(store, actor, projectId, methodVersionId, checks);
         return new Outcome(StoredQaChecks.load(store, actor, projectId, methodVersionId), false);
-    }
-
-    /** The CTS reference nearest in amount to the CTS gas in the cell, so that saturation does not bias the ratio. */
-    private static CampaignQaChecks.Plan checksPlan(QaPlan plan, ReferenceLibrary library, StoredMethod method)
-            throws FileFormatException {
-        double path = method.method().pathLengthMetres();
-        double ctsPpmMetres = plan.ctsPpm() * path;
-        ReferenceSpectrum cts = library.references().stream()
-                .filter(r -> r.compound().name().equals(plan.ctsCompound()))
-                .min(Comparator.comparingDouble(
-                        r -> Math.abs(r.metadata().conditions().concentrationPathLength() - ctsPpmMetres)))
-                .orElseThrow(() -> new FileFormatException(plan.file(), 0, "cts-compound", "the library has no "
-                        + "reference of " + plan.ctsCompound()));
-        return new CampaignQaChecks.Plan(plan.ctsCompound(), plan.ctsPpm(), plan.ctsLow(), plan.ctsHigh(),
-                cts.spectrum(), cts.metadata().conditions().concentrationPathLength(),
-                cts.metadata().conditions().temperature(), cts.metadata().conditions().pressure(), path,
-                plan.spikeAnalyte(), plan.tracer(), plan.spikeGas(), plan.analytes(), plan.noiseRegion(),
-                plan.maximumNoise(), plan.backgroundAgeLimit());
     }
 }

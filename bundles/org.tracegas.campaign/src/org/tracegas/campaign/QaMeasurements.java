@@ -1,23 +1,40 @@
 package org.tracegas.campaign;
 
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Map;
 
+import org.tracegas.qa.checks.QaReading;
 import org.tracegas.quantify.CompoundResult;
 import org.tracegas.quantify.Quantifier;
 import org.tracegas.quantify.Sample;
 import org.tracegas.quantify.SpectrumResult;
+import org.tracegas.spectrum.Spectrum;
 
 /** The QA measurements of a campaign (CTS, zero, spiked and unspiked pairs), each with its fit. */
 public final class QaMeasurements {
 
-    /** A QA measurement and what the method found in it. */
-    public record Fitted(MeasuredSpectrum measured, SpectrumResult result) {
+    /**
+     * A QA measurement and what the method found in it.
+     *
+     * @param absorbance the absorbance the method fitted
+     */
+    public record Fitted(Instant time, String role, double cellTemperatureK, double cellPressureKPa,
+            Spectrum absorbance, SpectrumResult result) implements QaReading {
 
+        @Override
         public double ppm(String compound) {
-            return result.compound(compound).map(CompoundResult::concentration)
-                    .orElseThrow(() -> new IllegalArgumentException("the method does not report " + compound));
+            return compound(compound).concentration();
+        }
+
+        @Override
+        public double detectionLimit(String compound) {
+            return compound(compound).detectionLimit();
+        }
+
+        private CompoundResult compound(String name) {
+            return result.compound(name)
+                    .orElseThrow(() -> new IllegalArgumentException("the method does not report " + name));
         }
     }
 
@@ -30,35 +47,25 @@ public final class QaMeasurements {
     public static QaMeasurements fit(List<MeasuredSpectrum> measured, Quantifier quantifier) {
         List<Fitted> fitted = new ArrayList<>();
         for (MeasuredSpectrum m : measured) {
-            fitted.add(new Fitted(m, quantifier.quantify(Sample.of(m.ratio().spectrum()))));
+            Spectrum a = m.ratio().spectrum();
+            fitted.add(new Fitted(m.time(), m.role(), m.cellTemperatureK(), m.cellPressureKPa(), a,
+                    quantifier.quantify(Sample.of(a))));
         }
         return new QaMeasurements(fitted);
     }
 
-    /** The measurements of one role, in time order. */
-    public List<Fitted> withRole(String role) {
-        return all.stream().filter(f -> f.measured().role().equals(role))
-                .sorted((a, b) -> a.measured().time().compareTo(b.measured().time())).toList();
+    /** QA measurements fitted already. */
+    public static QaMeasurements of(List<Fitted> fitted) {
+        return new QaMeasurements(fitted);
     }
 
-    /** Pairs each spiked measurement with the unspiked one taken just before it. */
-    public List<Map.Entry<Fitted, Fitted>> spikePairs(String spikeRole, String unspikedRole) {
-        List<Fitted> spikes = withRole(spikeRole);
-        List<Fitted> natives = withRole(unspikedRole);
-        List<Map.Entry<Fitted, Fitted>> pairs = new ArrayList<>();
-        for (Fitted spike : spikes) {
-            Fitted before = null;
-            for (Fitted n : natives) {
-                if (n.measured().time().isBefore(spike.measured().time())) {
-                    before = n;
-                }
-            }
-            if (before == null) {
-                throw new IllegalArgumentException("spiked measurement at " + spike.measured().time()
-                        + " has no unspiked measurement before it");
-            }
-            pairs.add(Map.entry(spike, before));
-        }
-        return pairs;
+    public boolean isEmpty() {
+        return all.isEmpty();
+    }
+
+    /** The measurements of one role, in time order. */
+    public List<Fitted> withRole(String role) {
+        return all.stream().filter(f -> f.role().equals(role)).sorted((a, b) -> a.time().compareTo(b.time()))
+                .toList();
     }
 }

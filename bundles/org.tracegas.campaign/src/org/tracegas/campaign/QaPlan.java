@@ -14,6 +14,9 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.qa.checks.QaCheck;
+import org.tracegas.qa.checks.QaCheckRegistry;
+import org.tracegas.qa.checks.QaSettings;
 import org.tracegas.qa.checks.AbsorbanceRegion;
 import org.tracegas.qa.checks.SpikeGas;
 
@@ -33,6 +36,10 @@ import org.tracegas.qa.checks.SpikeGas;
  * noise-region = 2450..2600                region of the noise check, cm-1
  * maximum-noise = 2e-3                     absorbance
  * background-age-limit = 24 h
+ * checks = cts-path, cts-drift, zero-gas   (optional) the checks evaluated, in this order, by the names they are
+ *                                          registered under (built in: cts-path, cts-drift, spike-recovery,
+ *                                          zero-gas, background-age, which are the default); a contributed check
+ *                                          may read keys of its own here
  *
  * [chart]                                  (optional, repeatable) control charts of repeated readings
  * readings = Zero CO, Zero NO, Noise level readings charted, comma-separated, named as the checks are: "Zero "
@@ -57,24 +64,42 @@ import org.tracegas.qa.checks.SpikeGas;
 public record QaPlan(Path file, Path libraryManifest, String ctsCompound, double ctsPpm, double ctsLow,
         double ctsHigh, String spikeAnalyte, String tracer, SpikeGas spikeGas, List<String> analytes,
         AbsorbanceRegion noiseRegion, double maximumNoise, Duration backgroundAgeLimit,
-        List<QaControlCharts> charts) {
+        List<QaControlCharts> charts, List<QaCheck> checks, QaSettings settings) {
 
     private static final Set<String> KEYS = Set.of("library", "cts-compound", "cts-ppm", "cts-band",
             "spike-analyte", "tracer", "spike-analyte-ppm", "spike-tracer-ppm", "analytes", "noise-region",
-            "maximum-noise", "background-age-limit");
+            "maximum-noise", "background-age-limit", "checks");
     /** One stated sigma: the reading's name, a number and the unit ppm. */
     private static final Pattern STATED = Pattern.compile("(.+?)\\s+(\\S+)\\s+ppm");
 
     public QaPlan {
         analytes = List.copyOf(analytes);
         charts = List.copyOf(charts);
+        checks = List.copyOf(checks);
     }
 
-    /** @throws FileFormatException naming the file, line and key of the first error */
+    /**
+     * A plan whose checks are those {@link CampaignQaChecks#available()} knows.
+     *
+     * @throws FileFormatException naming the file, line and key of the first error
+     */
     public static QaPlan read(Path file) throws IOException {
+        return read(file, CampaignQaChecks.available());
+    }
+
+    /**
+     * @param known the checks the plan may name
+     * @throws FileFormatException naming the file, line and key of the first error; for a check no one
+     *                             registered, the names of those that are
+     */
+    public static QaPlan read(Path file, QaCheckRegistry known) throws IOException {
         KeyValueFile f = KeyValueFile.read(file);
         f.allowBlocks(Set.of("chart"));
-        KeyValueFile.Section h = f.head().allow(KEYS);
+        KeyValueFile.Section h = f.head();
+        List<QaCheck> checks = checks(h, known);
+        Set<String> keys = new HashSet<>(KEYS);
+        checks.forEach(c -> keys.addAll(c.settings()));
+        h.allow(keys);
         double[] cts = h.value("cts-band").range();
         double[] noise = h.value("noise-region").range();
         for (String key : List.of("cts-ppm", "spike-analyte-ppm", "spike-tracer-ppm", "maximum-noise")) {
@@ -87,7 +112,27 @@ public record QaPlan(Path file, Path libraryManifest, String ctsCompound, double
                 cts[1], h.text("spike-analyte"), h.text("tracer"),
                 new SpikeGas(h.number("spike-tracer-ppm"), h.number("spike-analyte-ppm")), analytes,
                 new AbsorbanceRegion(noise[0], noise[1]), h.number("maximum-noise"),
-                h.value("background-age-limit").duration(), charts(f, analytes));
+                h.value("background-age-limit").duration(), charts(f, analytes), checks, new PlanSettings(h));
+    }
+
+    /** The checks the plan names, or the built-in ones; each name must be registered, and named once. */
+    private static List<QaCheck> checks(KeyValueFile.Section h, QaCheckRegistry known) throws FileFormatException {
+        KeyValueFile.Value v = h.has("checks") ? h.value("checks") : null;
+        List<String> names = v == null ? CampaignQaChecks.BUILT_IN : v.words();
+        List<QaCheck> checks = new ArrayList<>();
+        Set<String> named = new HashSet<>();
+        for (String name : names) {
+            QaCheck check = known.find(name).orElse(null);
+            if (check == null) {
+                String reason = "no QA check is named '" + name + "'; known checks are " + known.names();
+                throw v != null ? v.error(reason) : h.error("checks", reason);
+            }
+            if (!named.add(name)) {
+                throw v.error("'" + name + "' is named twice");
+            }
+            checks.add(check);
+        }
+        return checks;
     }
 
     /** The chart blocks; only readings the plan's checks repeat can be charted, each once. */

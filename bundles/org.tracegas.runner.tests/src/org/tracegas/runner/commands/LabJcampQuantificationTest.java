@@ -108,7 +108,7 @@ class LabJcampQuantificationTest {
             CommandTable table = new CommandTable("test", List.of(new WorkspaceInitCommand(), new UserAddCommand(),
                     new ProjectAddCommand(), new MethodDefineCommand(), new ImportCommand(readers),
                     new QuantifyCommand(cancel, readers, StepRegistry.withBuiltInSteps()),
-                    new ResultsExportCommand()));
+                    new ResultsExportCommand(), new QaCommand()));
             return table.dispatch(all.toArray(String[]::new), new RunnerContext(new PrintStream(out, true,
                     StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8), ENV));
         }

@@ -39,6 +39,11 @@ public final class BatchWorkCommand implements Command {
         this.cancel = cancel;
     }
 
+    /** The command as the runner's extension point creates it: it stops on the runner's cancellation. */
+    public BatchWorkCommand() {
+        this(null);
+    }
+
     @Override
     public String name() {
         return "batch-work";
@@ -95,7 +100,7 @@ public final class BatchWorkCommand implements Command {
                     (payload, stop) -> stack.process(List.of(Path.of(payload)), stop));
             context.progress().begin("batch " + batch.id() + " units done");
             WorkerOutcome outcome = worker.run((unit, spectra, progress) -> context.progress().update(progress.done(),
-                    progress.total()), cancel);
+                    progress.total()), cancel != null ? cancel : context.cancellation());
             if (outcome.cancelled()) {
                 context.err().println("tracegas batch-work: cancelled; runner " + runner + " completed "
                         + outcome.completed() + " units");

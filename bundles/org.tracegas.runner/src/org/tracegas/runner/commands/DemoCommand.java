@@ -20,6 +20,11 @@ public final class DemoCommand implements Command {
         this.cancel = cancel;
     }
 
+    /** The command as the runner's extension point creates it: it stops on the runner's cancellation. */
+    public DemoCommand() {
+        this(null);
+    }
+
     @Override
     public String name() {
         return "demo";
@@ -52,7 +57,7 @@ public final class DemoCommand implements Command {
         long started = System.nanoTime();
         context.progress().begin("demo");
         DemoCampaign.Outcome outcome = new DemoCampaign(workspace, out, context.out())
-                .run(context.progress()::update, cancel);
+                .run(context.progress()::update, cancel != null ? cancel : context.cancellation());
         if (outcome.cancelled()) {
             context.err().println("tracegas demo: cancelled after " + outcome.spectraProcessed() + " spectra");
             return ExitCode.CANCELLED;

@@ -26,6 +26,11 @@ public final class ImportCommand implements Command {
         this.readers = readers;
     }
 
+    /** The command as the runner's extension point creates it: with the readers contributed to the platform. */
+    public ImportCommand() {
+        this(ReaderRegistry.fromPlatform());
+    }
+
     @Override
     public String name() {
         return "import";

@@ -29,6 +29,11 @@ public final class LibraryBuildCommand implements Command {
         this.cancel = cancel;
     }
 
+    /** The command as the runner's extension point creates it: it stops on the runner's cancellation. */
+    public LibraryBuildCommand() {
+        this(null);
+    }
+
     @Override
     public String name() {
         return "library-build";
@@ -65,7 +70,8 @@ public final class LibraryBuildCommand implements Command {
             try {
                 plan = LibraryPlan.read(options.path("--plan"));
                 context.progress().begin("synthesis");
-                library = LibrarySynthesis.run(plan, context.progress()::update, cancel);
+                library = LibrarySynthesis.run(plan, context.progress()::update,
+                        cancel != null ? cancel : context.cancellation());
             } catch (FileFormatException e) {
                 context.err().println("tracegas library-build: " + e.getMessage());
                 return ExitCode.BAD_INPUT;

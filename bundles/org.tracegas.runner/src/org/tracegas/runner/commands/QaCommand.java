@@ -2,12 +2,16 @@ package org.tracegas.runner.commands;
 
 import java.util.List;
 
+import org.eclipse.core.runtime.IExtensionRegistry;
+import org.eclipse.core.runtime.RegistryFactory;
 import org.tracegas.campaign.ContainerContents;
+import org.tracegas.campaign.MeasurementQuantification;
 import org.tracegas.campaign.QaEvaluation;
 import org.tracegas.campaign.QaPlan;
 import org.tracegas.importer.ImportException;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.InterferogramTransform;
+import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
@@ -32,16 +36,26 @@ public final class QaCommand implements Command {
     @Override
     public String usage() {
         return "usage: tracegas qa <workspace and --as options> --project <code> --method <name>\n"
-                + "                   --plan <QA plan> --qa-file <container>\n" + WorkspaceLogin.USAGE + "\n"
+                + "                   --plan <QA plan> [--qa-file <container>]\n" + WorkspaceLogin.USAGE + "\n"
                 + StoredMethods.USAGE + "\n" + """
                   The QA file holds backgrounds and the QA measurements, each with its role in the header (cts,
-                  zero, spike, unspiked). The plan (key = value lines) names the method's library folder, the CTS
+                  zero, spike, unspiked, spike-direct). Without --qa-file, the QA measurements are those the
+                  project holds from imported files whose records state their role (label role; in JCAMP-DX
+                  ##$ROLE=cts), made absorbance, put through the method's recipe and fitted as quantify does,
+                  with the project's backgrounds; quantify leaves them out of the results. The plan (key = value lines) names the method's library folder, the CTS
                   gas, band and content, the spike gas, the zero-gas analytes, the noise region and limit, and
-                  the background age limit, and in [chart] blocks (readings, baseline) the repeated readings
-                  charted against earlier campaigns of the method. Checks are evaluated once per method version
+                  the background age limit, optionally the checks to evaluate by name (checks = ...; all built-in
+                  ones by default, contributed ones too), and in [chart] blocks (readings, baseline) the repeated
+                  readings charted against earlier campaigns of the method. Checks are evaluated once per method version
                   and stored; later runs print the stored ones.
                 exit codes: 0 every check passed, 1 a check failed, 2 wrong arguments, 3 bad plan or QA file
                   (file, line and field named; nothing stored), 5 failure""";
+    }
+
+    /** The steps a method's recipe may name: those contributed to the running platform, else the built-in ones. */
+    private static StepRegistry steps() {
+        IExtensionRegistry running = RegistryFactory.getRegistry();
+        return running == null ? StepRegistry.withBuiltInSteps() : StepRegistry.fromExtensions(running);
     }
 
     @Override
@@ -55,10 +69,16 @@ public final class QaCommand implements Command {
             try {
                 StoredMethods.Found found = StoredMethods.find(store, options);
                 QaPlan plan = QaPlan.read(options.path("--plan"));
-                ContainerContents qa = ContainerContents.read(List.of(options.path("--qa-file")),
-                        new InterferogramTransform(found.method().transform()));
-                outcome = new QaEvaluation(store, actor, project.id(), StoredMethods.SOFTWARE)
-                        .run(found.version().id(), found.method(), plan, qa);
+                QaEvaluation evaluation = new QaEvaluation(store, actor, project.id(), StoredMethods.SOFTWARE);
+                if (options.has("--qa-file")) {
+                    ContainerContents qa = ContainerContents.read(List.of(options.path("--qa-file")),
+                            new InterferogramTransform(found.method().transform()));
+                    outcome = evaluation.run(found.version().id(), found.method(), plan, qa);
+                } else {
+                    outcome = evaluation.run(found.version().id(), found.method(), plan,
+                            new MeasurementQuantification(store, actor, project.id(), found.version(),
+                                    found.method(), steps(), StoredMethods.SOFTWARE));
+                }
             } catch (FileFormatException | ImportException e) {
                 context.err().println("tracegas qa: " + e.getMessage());
                 return ExitCode.BAD_INPUT;

@@ -7,6 +7,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.eclipse.core.runtime.RegistryFactory;
 import org.tracegas.campaign.FileMeasurements;
 import org.tracegas.campaign.MeasurementQuantification;
 import org.tracegas.campaign.ProjectQuantification;
@@ -45,6 +46,14 @@ public final class QuantifyCommand implements Command {
         this.steps = steps;
     }
 
+    /**
+     * The command as the runner's extension point creates it: the readers and steps contributed to the running
+     * platform, and the runner's cancellation.
+     */
+    public QuantifyCommand() {
+        this(null, ReaderRegistry.fromPlatform(), StepRegistry.fromExtensions(RegistryFactory.getRegistry()));
+    }
+
     /** The command for interferogram containers only, with the built-in recipe steps. */
     public QuantifyCommand(CancellationFlag cancel) {
         this(cancel, new ReaderRegistry().register("org.tracegas.importer.container", "interferogram container",
@@ -54,6 +63,11 @@ public final class QuantifyCommand implements Command {
     @Override
     public String name() {
         return "quantify";
+    }
+
+    /** The flag given to the command, else the runner's. */
+    private CancellationFlag cancel(RunnerContext context) {
+        return cancel != null ? cancel : context.cancellation();
     }
 
     @Override
@@ -125,7 +139,7 @@ public final class QuantifyCommand implements Command {
                 return ExitCode.BAD_INPUT;
             }
             context.progress().begin("quantify");
-            MeasurementQuantification.Outcome outcome = job.run(plan, context.progress()::update, cancel);
+            MeasurementQuantification.Outcome outcome = job.run(plan, context.progress()::update, cancel(context));
             if (outcome.cancelled()) {
                 context.err().printf("tracegas quantify: cancelled after %d of %d measurements; run again to"
                         + " finish%n", outcome.stored(), plan.samples().size());
@@ -175,7 +189,8 @@ public final class QuantifyCommand implements Command {
             StoredMethods.Found found = checked.found();
             context.progress().begin("quantify");
             BatchOutcome outcome = job.run(found.version(), found.method(), arguments.files(),
-                    checked.inputs().samples(), checked.inputs().backgrounds(), context.progress()::update, cancel);
+                    checked.inputs().samples(), checked.inputs().backgrounds(), context.progress()::update,
+                    cancel(context));
             if (outcome.cancelled()) {
                 context.err().println("tracegas quantify: cancelled after " + outcome.delivered() + " spectra");
                 return ExitCode.CANCELLED;

@@ -7,6 +7,7 @@ import org.eclipse.equinox.app.IApplicationContext;
 import org.osgi.framework.FrameworkUtil;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.Command;
+import org.tracegas.runner.CommandContributions;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.commands.AuditVerifyCommand;
 import org.tracegas.runner.commands.BatchSplitCommand;
@@ -42,13 +43,16 @@ public final class RunnerApplication implements IApplication {
         String version = FrameworkUtil.getBundle(getClass()).getVersion().toString();
         String[] line = argv == null ? new String[0] : argv;
         try (RunnerLogging logging = RunnerLogging.configure(List.of(line))) {
-            CommandTable table = new CommandTable(version, commands(cancel, ReaderRegistry.fromPlatform(),
-                    StepRegistry.fromExtensions(RegistryFactory.getRegistry())));
-            return table.dispatch(line, new RunnerContext(System.out, System.err));
+            CommandTable table = new CommandTable(version,
+                    CommandContributions.fromExtensions(RegistryFactory.getRegistry()));
+            return table.dispatch(line, new RunnerContext(System.out, System.err, System.getenv(), cancel));
         }
     }
 
-    /** Every command of the runner. */
+    /**
+     * The runner's own commands, as its plugin.xml contributes them, for use without an extension registry: with
+     * the given cancellation, readers and steps.
+     */
     static List<Command> commands(CancellationFlag cancel, ReaderRegistry readers, StepRegistry steps) {
         return List.of(new DemoCommand(cancel), new AuditVerifyCommand(), new WorkspaceInitCommand(),
                 new UserAddCommand(), new UserUnlockCommand(), new ProjectAddCommand(), new ImportCommand(readers),
