@@ -10,7 +10,6 @@ import java.security.MessageDigest;
 import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.List;
-import java.util.Set;
 
 import org.eclipse.swt.SWT;
 import org.junit.jupiter.api.AfterEach;
@@ -20,15 +19,9 @@ import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditRecord;
-import org.tracegas.campaign.FileMeasurements;
-import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.store.AuditService;
-import org.tracegas.store.VersionKind;
 import org.tracegas.ui.Screens;
-import org.tracegas.ui.dialogs.ImportWizard;
 import org.tracegas.ui.internal.ExportResultsHandler;
-import org.tracegas.ui.internal.ImportHandler;
-import org.tracegas.ui.internal.RunMethodHandler;
 import org.tracegas.ui.parts.AuditTrailPanel;
 
 /**
@@ -56,15 +49,7 @@ class DeskExportTest {
     @Test
     void writesTheStoredResultsAsCsvAndTheAuditTrailRecordsTheExport() throws Exception {
         LimeKilnLab lab = desk.lab;
-        List<String> reports = new ArrayList<>();
-        ImportHandler.schedule(new ImportWizard.Request(lab.project, lab.morning(), new FileMeasurements.Defaults(
-                null, LimeKilnLab.T0.plusSeconds(180), LimeKilnLab.T_CELL, LimeKilnLab.P_CELL)),
-                ReaderRegistry.fromPlatform(), desk.display, reports::add);
-        Screens.waitFor(desk.display, () -> reports.size() == 1, 60_000);
-        RunMethodHandler.schedule(RunMethodHandler.target(desk.access.store(), lab.project,
-                desk.access.store().versions().latest(VersionKind.METHOD).get(0)), Set.of(), desk.display,
-                reports::add);
-        Screens.waitFor(desk.display, () -> reports.size() == 2, 120_000);
+        List<String> reports = new ArrayList<>(desk.quantifiedMorning());
         assertTrue(reports.get(1).startsWith("Quantified 4 measurement(s)"), reports.get(1));
 
         Path out = folder.resolve("qlw-results.csv");

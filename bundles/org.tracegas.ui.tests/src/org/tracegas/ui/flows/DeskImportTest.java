@@ -48,18 +48,10 @@ class DeskImportTest {
     Path folder;
 
     private LabDesk desk;
-    private Display display;
-    private Shell shell;
-    private WorkspaceAccess access;
-    private LimeKilnLab lab;
 
     @BeforeEach
     void openWorkspace() throws Exception {
         desk = new LabDesk(folder, 640, 600);
-        display = desk.display;
-        shell = desk.shell;
-        access = desk.access;
-        lab = desk.lab;
     }
 
     @AfterEach
@@ -69,6 +61,10 @@ class DeskImportTest {
 
     @Test
     void importsTheFilesTheWizardListsAndTheTreeShowsThem() throws Exception {
+        Display display = desk.display;
+        Shell shell = desk.shell;
+        WorkspaceAccess access = desk.access;
+        LimeKilnLab lab = desk.lab;
         WorkspaceNavigator nav = ViewContents.navigator(shell);
         shell.open();
         Screens.waitFor(display, () -> LabDesk.project(nav) != null, 20_000);

@@ -4,7 +4,6 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
@@ -18,8 +17,6 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.campaign.FileMeasurements;
-import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
 import org.tracegas.model.ResultFlag;
@@ -27,10 +24,8 @@ import org.tracegas.store.NewResult;
 import org.tracegas.store.ResultRow;
 import org.tracegas.store.VersionKind;
 import org.tracegas.ui.Screens;
-import org.tracegas.ui.internal.ImportHandler;
 import org.tracegas.ui.internal.RunMethodHandler;
 import org.tracegas.ui.internal.TreeChoice;
-import org.tracegas.ui.dialogs.ImportWizard;
 import org.tracegas.ui.parts.ConcentrationTrace;
 import org.tracegas.ui.parts.TimeSeriesPanel;
 import org.tracegas.ui.parts.WorkspaceNavigator;
@@ -49,18 +44,10 @@ class DeskMethodRunTest {
     Path folder;
 
     private LabDesk desk;
-    private Display display;
-    private Shell shell;
-    private WorkspaceAccess access;
-    private LimeKilnLab lab;
 
     @BeforeEach
     void openWorkspace() throws Exception {
         desk = new LabDesk(folder, 1280, 800);
-        display = desk.display;
-        shell = desk.shell;
-        access = desk.access;
-        lab = desk.lab;
     }
 
     @AfterEach
@@ -71,16 +58,17 @@ class DeskMethodRunTest {
     @Test
     void runsTheStoredMethodOnTheChosenMeasurementsThenSkipsThemAndTheTimeSeriesShowsTheResults()
             throws Exception {
+        Display display = desk.display;
+        Shell shell = desk.shell;
+        WorkspaceAccess access = desk.access;
+        LimeKilnLab lab = desk.lab;
         SashForm columns = new SashForm(shell, SWT.HORIZONTAL);
         WorkspaceNavigator nav = ViewContents.navigator(columns);
         TimeSeriesView series = ViewContents.timeSeries(columns);
         columns.setWeights(1, 3);
         shell.open();
-        List<String> reports = new ArrayList<>();
-        ImportHandler.schedule(new ImportWizard.Request(lab.project, lab.morning(), new FileMeasurements.Defaults(
-                null, LimeKilnLab.T0.plusSeconds(180), LimeKilnLab.T_CELL, LimeKilnLab.P_CELL)),
-                ReaderRegistry.fromPlatform(), display, reports::add);
-        Screens.waitFor(display, () -> reports.size() == 1 && LabDesk.project(nav) != null
+        List<String> reports = desk.importedMorning();
+        Screens.waitFor(display, () -> LabDesk.project(nav) != null
                 && LabDesk.project(nav).getMeasurements().size() == 4, 60_000);
 
         // the first and the third measurement of the morning, chosen in the tree

@@ -1,11 +1,21 @@
 package org.tracegas.ui.flows;
 
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
 
 import org.eclipse.swt.layout.FillLayout;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Shell;
+import org.tracegas.campaign.FileMeasurements;
+import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.model.Project;
+import org.tracegas.store.VersionKind;
+import org.tracegas.ui.Screens;
+import org.tracegas.ui.dialogs.ImportWizard;
+import org.tracegas.ui.internal.ImportHandler;
+import org.tracegas.ui.internal.RunMethodHandler;
 import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.Desk;
 import org.tracegas.ui.session.WorkspaceAccess;
@@ -37,6 +47,35 @@ final class LabDesk implements AutoCloseable {
         }
         return nav.workspace().getClients().stream().flatMap(c -> c.getProjects().stream())
                 .filter(p -> p.getCode().equals(LimeKilnLab.CODE)).findFirst().orElse(null);
+    }
+
+    /**
+     * Imports the lab's morning (conditions given for the file without) through the desk's import job, waiting
+     * for it.
+     *
+     * @return the import's closing message, in a list the caller may add to
+     */
+    List<String> importedMorning() throws Exception {
+        List<String> reports = new ArrayList<>();
+        ImportHandler.schedule(new ImportWizard.Request(lab.project, lab.morning(), new FileMeasurements.Defaults(
+                null, LimeKilnLab.T0.plusSeconds(180), LimeKilnLab.T_CELL, LimeKilnLab.P_CELL)),
+                ReaderRegistry.fromPlatform(), display, reports::add);
+        Screens.waitFor(display, () -> reports.size() == 1, 60_000);
+        return reports;
+    }
+
+    /**
+     * Imports the lab's morning and runs the stored method over all of it, through the desk's jobs, waiting for
+     * both.
+     *
+     * @return the closing messages of the import and of the run
+     */
+    List<String> quantifiedMorning() throws Exception {
+        List<String> reports = importedMorning();
+        RunMethodHandler.schedule(RunMethodHandler.target(access.store(), lab.project,
+                access.store().versions().latest(VersionKind.METHOD).get(0)), Set.of(), display, reports::add);
+        Screens.waitFor(display, () -> reports.size() == 2, 120_000);
+        return reports;
     }
 
     @Override
