@@ -125,6 +125,8 @@ class DeskWorkbenchTest {
         assertTrue(audit.shown().records().stream().anyMatch(r -> r.action() == AuditAction.LOGIN
                 && r.userId().equals(Desk.get().session().userId())), "the reviewer's log-in is recorded");
         assertTrue(audit.shown().records().stream().anyMatch(r -> r.objectType().equals("raw-file")));
+        assertEquals(audit.shown().records().size(), audit.table().getItemCount());
+        audit.table().showItem(audit.table().getItem(audit.table().getItemCount() - 1));
         shots.add(Screens.save(shell, "workbench-audit-trail"));
     }
 
