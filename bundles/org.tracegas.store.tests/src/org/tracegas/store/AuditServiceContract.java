@@ -101,6 +101,28 @@ abstract class AuditServiceContract {
     }
 
     @Test
+    void anExportOfResultsIsRecordedWithItsFileAndHashByThoseWhoMayReadTheProject() {
+        String sha = "ab".repeat(32);
+        store.audit().recordExport(analyst, project.id(), "a-1-results.csv", 12, sha);
+        List<AuditRecord> records = store.audit().review(reviewer,
+                AuditQuery.all().object(AuditService.EXPORT_OBJECT, project.id()).build()).records();
+        assertEquals(1, records.size());
+        AuditRecord export = records.get(0);
+        assertEquals(AuditAction.EXPORT, export.action());
+        assertEquals(analyst.userId(), export.userId());
+        assertTrue(export.newValue().contains("a-1-results.csv") && export.newValue().contains(sha)
+                && export.newValue().contains("12"), export.newValue());
+        assertTrue(store.audit().verify().intact());
+        // the reviewer holds no grant on the project, so may not have read its results to export them
+        assertThrows(AccessDeniedException.class,
+                () -> store.audit().recordExport(reviewer, project.id(), "a-1-results.csv", 12, sha));
+        assertThrows(IllegalArgumentException.class,
+                () -> store.audit().recordExport(analyst, project.id(), "a-1-results.csv", 12, "not a hash"));
+        assertThrows(IllegalArgumentException.class,
+                () -> store.audit().recordExport(analyst, project.id(), "a-1-results.csv", -1, sha));
+    }
+
+    @Test
     void theFilterNarrowsToTheAnalystsRecordsOfOneAction() throws Exception {
         AuditReview.Result mine = store.audit().review(reviewer,
                 AuditQuery.all().user(analyst.userId()).actions(AuditAction.CREATE).build());

@@ -52,6 +52,22 @@ public interface AuditService {
      */
     boolean recordSoftware(Session actor, String installation, String software, String reason);
 
+    /** Object type of the records of a project's results written to a file (see {@link #recordExport}). */
+    String EXPORT_OBJECT = "results-export";
+
+    /**
+     * Records that a project's stored results were written to a file: an {@link org.tracegas.audit.AuditAction#EXPORT}
+     * record of object type {@value #EXPORT_OBJECT} with the project as object id, and as its new value the file's
+     * name, the number of results and the SHA-256 of the bytes written, so that a copy met later can be matched
+     * to its export. Anyone who may read the project's results may export them.
+     *
+     * @param fileName where the results went, not blank
+     * @param results  how many results were written, not negative
+     * @param sha256   SHA-256 of the file's bytes, 64 hex digits
+     * @throws AccessDeniedException without read access to the project
+     */
+    void recordExport(Session actor, String projectId, String fileName, long results, String sha256);
+
     /**
      * Walks the whole chain and reports every record that was altered, removed, inserted or reordered. Needs no
      * session: the report holds the chain's state and the positions of findings, not the records' content.

@@ -1,17 +1,13 @@
 package org.tracegas.runner.commands;
 
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
 import java.util.List;
 
-import org.tracegas.campaign.ResultsCsv;
-import org.tracegas.campaign.WholeFile;
+import org.tracegas.campaign.ResultsExport;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.store.ProjectInfo;
-import org.tracegas.store.ResultRow;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -37,7 +33,8 @@ public final class ResultsExportCommand implements Command {
                   library_version, provenance_sha256 (of the absorbance fitted), recipe_sha256, and what the
                   value was corrected with: cell temperature, pressure and path with their origins, the
                   references' temperature and pressure, the fit's path, the factor, and the transform's noise
-                  factor F with its origin. The file is written whole or not at all.
+                  factor F with its origin. The file is written whole or not at all, and the export is recorded in
+                  the audit trail with the file's SHA-256.
                 exit codes: 0 written, 2 wrong arguments, 5 failure""";
     }
 
@@ -48,14 +45,9 @@ public final class ResultsExportCommand implements Command {
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
-            List<ResultRow> rows = store.analyses().rows(actor, project.id());
-            int[] written = new int[1];
-            WholeFile.write(out, stream -> {
-                Writer w = new java.io.OutputStreamWriter(stream, StandardCharsets.UTF_8);
-                written[0] = ResultsCsv.write(rows, id -> store.versions().version(id), w);
-                w.flush();
-            });
-            context.out().printf("Wrote %d result(s) of project %s to %s%n", written[0], project.code(), out);
+            ResultsExport.Written written = ResultsExport.write(store, actor, project.id(), out);
+            context.out().printf("Wrote %d result(s) of project %s to %s (sha256 %s, recorded in the audit trail)%n",
+                    written.results(), project.code(), out, written.sha256());
             // the values are of toxic gases: they are not to be used without their uncertainty and flags
             context.out().println("Caution: results of toxic gases; read each value with its uncertainty, detection"
                     + " limit and flags, and have them reviewed before acting on them.");

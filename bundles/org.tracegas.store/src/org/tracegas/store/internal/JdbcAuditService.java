@@ -5,16 +5,20 @@ import java.io.UncheckedIOException;
 import java.io.Writer;
 import java.sql.Connection;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditRecord;
 import org.tracegas.audit.AuditReview;
+import org.tracegas.audit.AuditValues;
 import org.tracegas.audit.AuditVerifier;
 import org.tracegas.audit.ChainAnchor;
 import org.tracegas.audit.VerificationReport;
+import org.tracegas.model.AccessLevel;
 import org.tracegas.model.Role;
 import org.tracegas.store.AuditService;
 import org.tracegas.store.Session;
@@ -78,6 +82,27 @@ final class JdbcAuditService implements AuditService {
                     SOFTWARE_OBJECT, installation).version(earlier.size()).oldValue(previous).newValue(software)
                     .reason(reason).build());
             return true;
+        });
+    }
+
+    @Override
+    public void recordExport(Session actor, String projectId, String fileName, long results, String sha256) {
+        JdbcUserService.requireText("fileName", fileName);
+        if (results < 0) {
+            throw new IllegalArgumentException("results must not be negative, was " + results);
+        }
+        if (sha256 == null || !sha256.matches("[0-9a-f]{64}")) {
+            throw new IllegalArgumentException("sha256 must be 64 lower-case hex digits, was " + sha256);
+        }
+        transactions.run("recording an export of the results of project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+            Map<String, Object> fields = new LinkedHashMap<>();
+            fields.put("file", fileName);
+            fields.put("results", results);
+            fields.put("sha256", sha256);
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.EXPORT, EXPORT_OBJECT, projectId)
+                    .newValue(AuditValues.canonical(fields)).build());
+            return null;
         });
     }
 

@@ -110,9 +110,9 @@ class DeskCommandsTest {
 
     @Test
     void aCommandOnlyTheRunnerDoesNamesTheRunnerCommand() {
-        String m = RunnerCommandHandler.message("import");
-        assertTrue(m.startsWith("Importing measurement files into a project is not available in the workbench yet."),
-                m);
-        assertTrue(m.contains("'tracegas import --help'"), m);
+        String m = RunnerCommandHandler.message("report");
+        assertTrue(m.startsWith("Making a campaign report (PDF with its CSV of results) is not available in the"
+                + " workbench yet."), m);
+        assertTrue(m.contains("'tracegas report --help'"), m);
     }
 }

@@ -9,11 +9,11 @@ import org.eclipse.ui.application.WorkbenchWindowAdvisor;
 import org.tracegas.ui.AnalysisDeskLayout;
 
 /** Opens the analysis desk first; the window carries the product's name and the signed-in user. */
-final class DeskWorkbenchAdvisor extends WorkbenchAdvisor {
+public final class DeskWorkbenchAdvisor extends WorkbenchAdvisor {
 
     private final String user;
 
-    DeskWorkbenchAdvisor(String user) {
+    public DeskWorkbenchAdvisor(String user) {
         this.user = user;
     }
 

@@ -21,9 +21,7 @@ public final class RunnerCommandHandler extends AbstractHandler implements IExec
 
     /** What each runner command does, as the message names it. */
     private static final Map<String, String> WORK = Map.of(
-            "import", "Importing measurement files into a project",
-            "report", "Making a campaign report (PDF with its CSV of results)",
-            "quantify", "Running a method over a stored project's measurements");
+            "report", "Making a campaign report (PDF with its CSV of results)");
 
     private String runnerCommand;
 

@@ -96,7 +96,7 @@ public final class WorkspaceNavigator extends Composite {
         filter = new Text(this, SWT.SEARCH | SWT.ICON_CANCEL | SWT.ICON_SEARCH);
         filter.setMessage("Filter: project, client, kind or day (e.g. 2026-07-14)");
         filter.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
-        viewer = new TreeViewer(this, SWT.SINGLE | SWT.V_SCROLL | SWT.H_SCROLL);
+        viewer = new TreeViewer(this, SWT.MULTI | SWT.V_SCROLL | SWT.H_SCROLL);
         viewer.getTree().setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         viewer.addFilter(new ViewerFilter() {
             @Override

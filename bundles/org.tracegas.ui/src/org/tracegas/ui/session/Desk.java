@@ -18,6 +18,7 @@ public final class Desk {
     private static final Desk INSTANCE = new Desk();
 
     private final List<Consumer<List<BatchQuantificationJob.Outcome>>> runListeners = new CopyOnWriteArrayList<>();
+    private final List<Runnable> storeListeners = new CopyOnWriteArrayList<>();
     private volatile WorkspaceAccess access;
     private volatile Session session;
     private volatile DemoProject.Seeded project;
@@ -85,5 +86,21 @@ public final class Desk {
 
     public void removeRunListener(Consumer<List<BatchQuantificationJob.Outcome>> l) {
         runListeners.remove(l);
+    }
+
+    /**
+     * Called in the UI thread when the desk stored measurements or results (an import, a method run), so that
+     * the views read what they show again.
+     */
+    public void storeChanged() {
+        storeListeners.forEach(Runnable::run);
+    }
+
+    public void addStoreListener(Runnable l) {
+        storeListeners.add(l);
+    }
+
+    public void removeStoreListener(Runnable l) {
+        storeListeners.remove(l);
     }
 }

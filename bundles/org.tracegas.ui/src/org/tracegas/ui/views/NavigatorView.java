@@ -3,11 +3,13 @@ package org.tracegas.ui.views;
 import java.util.List;
 import java.util.function.Consumer;
 
+import org.eclipse.core.commands.common.CommandException;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.ui.IViewPart;
 import org.eclipse.ui.PartInitException;
+import org.eclipse.ui.handlers.IHandlerService;
 import org.eclipse.ui.part.ViewPart;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
@@ -19,16 +21,30 @@ import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.Desk;
 import org.tracegas.ui.session.StoredWorkspace;
 
-/** The workspace tree; double-clicking a project runs its method over its measurements in the background. */
+/**
+ * The workspace tree; double-clicking the demo project runs its method over its measurements in the background,
+ * and the context menu runs a stored method over the selected measurements. The tree is read again when the
+ * desk stores measurements or results.
+ */
 public final class NavigatorView extends ViewPart {
 
     public static final String ID = "org.tracegas.ui.views.navigator";
+    /** The command that runs a method over the tree's selection. */
+    static final String RUN_METHOD = "org.tracegas.ui.commands.runMethod";
 
     private WorkspaceNavigator navigator;
     private LatestLoad<Workspace> loads;
     private final Consumer<List<BatchQuantificationJob.Outcome>> refresh = outcomes -> {
         if (!navigator.isDisposed()) {
             navigator.viewer().refresh();
+        }
+    };
+
+    /** After the desk stored measurements or results: the tree read again, its project selected again. */
+    private final Runnable reread = () -> {
+        if (!navigator.isDisposed()) {
+            Project selected = Selections.project(navigator.viewer().getSelection());
+            read(selected == null ? null : selected.getCode());
         }
     };
 
@@ -41,6 +57,14 @@ public final class NavigatorView extends ViewPart {
         offer("Show results to sign", Project.class, ResultReviewView.ID);
         offer("Show QA checks", Project.class, QaOverviewView.ID);
         offer("Show QA checks of its project", Measurement.class, QaOverviewView.ID);
+        navigator.addMenuAction(new WorkspaceNavigator.MenuAction("Run method on the selection…",
+                o -> o instanceof Project || o instanceof Measurement, o -> {
+                    try {
+                        getSite().getService(IHandlerService.class).executeCommand(RUN_METHOD, null);
+                    } catch (CommandException e) {
+                        navigator.showNote("The method could not be run: " + e.getMessage());
+                    }
+                }));
     }
 
     /**
@@ -68,14 +92,9 @@ public final class NavigatorView extends ViewPart {
         if (desk.project() != null) {
             navigator.setWorkspace(desk.project().model());
         } else {
-            // a workspace that was not fresh has no demo model: read what the signed-in user may see, in the
-            // background, so that the window stays responsive on a large workspace
-            String name = desk.access().location().description();
-            navigator.showNote("Reading the " + name + " …");
-            loads.start("Reading the workspace tree",
-                    monitor -> StoredWorkspace.load(desk.access().store(), desk.session(), name, monitor),
-                    navigator::setWorkspace, message -> navigator.showNote("The workspace could not be read: "
-                            + message));
+            navigator.showNote("Reading the " + desk.access().location().description() + " …");
+            read(null);
+            desk.addStoreListener(reread);
         }
         navigator.viewer().addDoubleClickListener(e -> {
             Object o = ((IStructuredSelection) e.getSelection()).getFirstElement();
@@ -87,9 +106,27 @@ public final class NavigatorView extends ViewPart {
         return navigator;
     }
 
+    /**
+     * Reads the tree of a workspace that was not fresh (it has no demo model): what the signed-in user may see, in
+     * the background, so that the window stays responsive on a large workspace; then selects the project of that
+     * code again, if one is given.
+     */
+    private void read(String projectCode) {
+        Desk desk = Desk.get();
+        String name = desk.access().location().description();
+        loads.start("Reading the workspace tree",
+                monitor -> StoredWorkspace.load(desk.access().store(), desk.session(), name, monitor), w -> {
+                    navigator.setWorkspace(w);
+                    if (projectCode != null) {
+                        navigator.openProject(projectCode);
+                    }
+                }, message -> navigator.showNote("The workspace could not be read: " + message));
+    }
+
     @Override
     public void dispose() {
         Desk.get().removeRunListener(refresh);
+        Desk.get().removeStoreListener(reread);
         if (loads != null) {
             loads.cancel();
         }

@@ -36,6 +36,12 @@ public final class TimeSeriesView extends ViewPart implements FollowsTree {
     private String shownProjectId;
     private java.time.Instant shownStart;
     private String shownProjectCode;
+    /** After the desk stored results: those of the project shown read again. */
+    private final Runnable reread = () -> {
+        if (shownProjectId != null && !panel.isDisposed()) {
+            read(shownProjectId, shownProjectCode);
+        }
+    };
     /** Opens a picked value's spectrum; in the workbench, in the spectrum view. */
     Consumer<TimeSeriesPanel.Pick> spectrumOpener = this::openInSpectrumView;
 
@@ -52,6 +58,7 @@ public final class TimeSeriesView extends ViewPart implements FollowsTree {
         panel.addPointOpener(pick -> spectrumOpener.accept(pick));
         show(Desk.get().lastRun());
         Desk.get().addRunListener(listener);
+        Desk.get().addStoreListener(reread);
         return panel;
     }
 
@@ -73,9 +80,12 @@ public final class TimeSeriesView extends ViewPart implements FollowsTree {
                 || !(s.getFirstElement() instanceof Project project)) {
             return;
         }
+        read(project.getId(), project.getCode());
+    }
+
+    /** Reads a project's stored results in the background; a later request wins. */
+    private void read(String id, String code) {
         Desk desk = Desk.get();
-        String id = project.getId();
-        String code = project.getCode();
         shownProjectId = id;
         shownProjectCode = code;
         panel.showNote("Reading the stored results of " + code + " …");
@@ -125,6 +135,7 @@ public final class TimeSeriesView extends ViewPart implements FollowsTree {
         getSite().getPage().removeSelectionListener(NavigatorView.ID, projectListener);
         loads.cancel();
         Desk.get().removeRunListener(listener);
+        Desk.get().removeStoreListener(reread);
         super.dispose();
     }
 
