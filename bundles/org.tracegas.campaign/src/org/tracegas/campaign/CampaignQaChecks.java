@@ -12,17 +12,20 @@ import org.tracegas.qa.checks.BackgroundAgeCheck;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.qa.checks.CtsBand;
 import org.tracegas.qa.checks.CtsDriftCheck;
+import org.tracegas.qa.checks.MethodDetectionLimit;
 import org.tracegas.qa.checks.NoiseCheck;
 import org.tracegas.qa.checks.PathLengthCheck;
 import org.tracegas.qa.checks.SpikeGas;
 import org.tracegas.qa.checks.SpikeRecoveryCheck;
 import org.tracegas.qa.checks.SpikedSample;
 import org.tracegas.qa.checks.ZeroSpanCheck;
+import org.tracegas.quantify.CompoundResult;
 import org.tracegas.spectrum.Spectrum;
 
 /**
  * The QA checks of a campaign from its QA measurements: path length from the calibration transfer standard
- * before and after, its drift, spike recovery with a tracer, zero, noise and background age.
+ * before and after, its drift, spike recovery with a tracer, zero, noise, the method detection limit and minimum
+ * analyte uncertainty of each zero-gas analyte from the replicate zero readings, and background age.
  */
 public final class CampaignQaChecks {
 
@@ -67,7 +70,8 @@ public final class CampaignQaChecks {
             outcomes.add(check.dilution(plan.spikeAnalyte(), gas, spiked));
             outcomes.add(check.evaluate(plan.spikeAnalyte(), gas, spiked));
         }
-        for (QaMeasurements.Fitted zero : qa.withRole(MeasurementRole.ZERO)) {
+        List<QaMeasurements.Fitted> zeros = qa.withRole(MeasurementRole.ZERO);
+        for (QaMeasurements.Fitted zero : zeros) {
             for (String analyte : plan.analytes()) {
                 // a zero reading within twice the 3-sigma detection limit passes (common practice, no source)
                 double dl = zero.result().compound(analyte).orElseThrow().detectionLimit();
@@ -77,8 +81,25 @@ public final class CampaignQaChecks {
             outcomes.add(new NoiseCheck(plan.noiseRegion(), plan.maximumNoise()).evaluate(a.axis().toArray(),
                     a.toArray()));
         }
+        if (zeros.size() >= 2) {
+            for (String analyte : plan.analytes()) {
+                outcomes.addAll(methodDetectionLimit(analyte, zeros).outcomes());
+            }
+        }
         outcomes.add(worstBackgroundAge(plan.backgroundAgeLimit(), backgrounds, firstSample, lastSample));
         return outcomes;
+    }
+
+    /** The MDL and MAU of an analyte from the replicate zero-gas readings, each fitted as a sample is. */
+    private static MethodDetectionLimit methodDetectionLimit(String analyte, List<QaMeasurements.Fitted> zeros) {
+        double[] ppm = new double[zeros.size()];
+        double[] u = new double[zeros.size()];
+        for (int i = 0; i < ppm.length; i++) {
+            CompoundResult c = zeros.get(i).result().compound(analyte).orElseThrow();
+            ppm[i] = c.concentration();
+            u[i] = c.standardUncertainty();
+        }
+        return MethodDetectionLimit.fromZeroReadings(analyte, ppm, u);
     }
 
     /**

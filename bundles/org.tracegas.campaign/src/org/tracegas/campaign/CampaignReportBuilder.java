@@ -26,6 +26,7 @@ import org.tracegas.qa.basis.ReportingBasis;
 import org.tracegas.qa.basis.TimedValue;
 import org.tracegas.qa.basis.ValidityRule;
 import org.tracegas.qa.checks.CheckOutcome;
+import org.tracegas.qa.checks.MethodDetectionLimit;
 import org.tracegas.qa.control.ChartEvaluation;
 import org.tracegas.qa.uncertainty.BasisConversion;
 import org.tracegas.qa.uncertainty.FtirResultBudget;
@@ -33,6 +34,7 @@ import org.tracegas.qa.uncertainty.UncertaintyBudget;
 import org.tracegas.report.Campaign;
 import org.tracegas.report.LibraryVersion;
 import org.tracegas.report.MethodVersion;
+import org.tracegas.report.PdfReportWriter;
 import org.tracegas.report.Plot;
 import org.tracegas.report.QaLine;
 import org.tracegas.report.ReportContent;
@@ -107,6 +109,11 @@ public final class CampaignReportBuilder {
             SpectrumFit exampleFit) {
         ReportContent.Builder b = ReportContent.builder(campaign).method(method).library(library);
         qa.forEach(o -> b.qa(QaLine.of(o)));
+        Map<String, MethodDetectionLimit> mdl = new java.util.HashMap<>();
+        for (MethodDetectionLimit l : MethodDetectionLimit.fromOutcomes(qa)) {
+            b.detectionLimit(l);
+            mdl.put(l.analyte(), l);
+        }
         charts.forEach(c -> b.controlChart(QaControlCharts.plot(c)));
         Map<Instant, MinuteSeries.Point> water = new java.util.HashMap<>();
         for (MinuteSeries.Point p : series.compound(waterCompound)) {
@@ -117,6 +124,7 @@ public final class CampaignReportBuilder {
         for (Reported r : reported) {
             List<MinuteSeries.Point> points = series.compound(r.compound());
             List<TimedValue> converted = new ArrayList<>();
+            Map<Instant, Double> perPpmOfMinute = new java.util.HashMap<>();
             double relativeU = 0;
             UncertaintyBudget worst = null;
             Instant worstTime = null;
@@ -136,6 +144,7 @@ public final class CampaignReportBuilder {
                     continue;
                 }
                 double f = perPpm.get().value();
+                perPpmOfMinute.put(p.time(), f);
                 BasisConversion conversion = basis.oxygen().map(o -> new BasisConversion(h2o, w.uncertainty() / 1e6,
                         o2Wet, o2UncertaintyPercent, true, o.referencePercent()))
                         .orElseGet(() -> BasisConversion.dryOnly(h2o, w.uncertainty() / 1e6));
@@ -184,6 +193,11 @@ public final class CampaignReportBuilder {
                     if (a.belowDetectionLimit() > 0) {
                         flags.add(a.belowDetectionLimit() + " below detection limit");
                     }
+                    MethodDetectionLimit limitOfDetection = mdl.get(r.compound());
+                    if (limitOfDetection != null) {
+                        b.averagingRule(PdfReportWriter.BELOW_MDL_CONVENTION);
+                        belowMdl(limitOfDetection, perPpmOfMinute, a, period).ifPresent(flags::add);
+                    }
                     flags.add(corrections(points, a.start(), a.start().plus(period)));
                     b.result(new ResultRow(r.compound(), label(period), a.start(), a.mean(),
                             2.0 * a.combinedUncertainty(), "mg/m³", flags,
@@ -205,6 +219,24 @@ public final class CampaignReportBuilder {
             b.spectrum(exampleFit);
         }
         return b.build();
+    }
+
+    /**
+     * The flag of an average below the MDL, which is converted to the reporting basis with the mean factor of the
+     * period's converted minutes; empty when the average is not below it.
+     */
+    static Optional<String> belowMdl(MethodDetectionLimit mdl, Map<Instant, Double> perPpmOfMinute, PeriodAverage a,
+            Duration period) {
+        Instant end = a.start().plus(period);
+        OptionalDouble factor = perPpmOfMinute.entrySet().stream()
+                .filter(e -> !e.getKey().isBefore(a.start()) && e.getKey().isBefore(end))
+                .mapToDouble(Map.Entry::getValue).average();
+        if (factor.isEmpty()) {
+            return Optional.empty();
+        }
+        double limit = mdl.ppm() * factor.getAsDouble();
+        return a.mean() < limit ? Optional.of(String.format(Locale.ROOT, "%s %.3g mg/m³", ResultRow.BELOW_MDL,
+                limit)) : Optional.empty();
     }
 
     /**

@@ -30,7 +30,10 @@ public final class QaMeasurements {
     public static QaMeasurements fit(List<MeasuredSpectrum> measured, Quantifier quantifier) {
         List<Fitted> fitted = new ArrayList<>();
         for (MeasuredSpectrum m : measured) {
-            fitted.add(new Fitted(m, quantifier.quantify(Sample.of(m.ratio().spectrum()))));
+            // the uncertainty widened by the transform's noise factor as a sample's is, so that zero readings
+            // judge, and give detection limits for, the uncertainty the samples carry
+            fitted.add(new Fitted(m, quantifier.quantify(new Sample(m.ratio().spectrum(), null,
+                    ResultCorrection.noiseCorrelation(m.noiseFactor())))));
         }
         return new QaMeasurements(fitted);
     }

@@ -21,6 +21,7 @@ import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.tracegas.qa.basis.LimitStatus;
+import org.tracegas.qa.checks.MethodDetectionLimit;
 import org.tracegas.qa.uncertainty.BudgetRow;
 import org.tracegas.report.internal.Check;
 import org.tracegas.report.internal.Numbers;
@@ -54,6 +55,11 @@ public final class PdfReportWriter {
     private static final float RESIDUAL_HEIGHT = 130;
     private static final float CHART_HEIGHT = 170;
     private static final Set<String> ALARMS = Set.of("FAIL", "EXCEEDED");
+    /** How a result below its compound's method detection limit is shown. */
+    public static final String BELOW_MDL_CONVENTION = "A period average below its compound's MDL, converted to the "
+            + "reporting basis with the mean conversion factor of the period's minutes, is shown as \""
+            + ResultRow.BELOW_MDL + "\" in the results table and flagged with that MDL; the value itself is kept in the CSV export and "
+            + "enters the comparison with the limit as measured (common practice, no source).";
 
     /** The report as PDF bytes. */
     public byte[] write(ReportContent content) {
@@ -181,6 +187,7 @@ public final class PdfReportWriter {
         QaTables tables = new QaTables(content.qa());
         pw.paragraph(tables.overview(), 9.5f);
         tables.summaryTable(ALARMS).draw(pw, tables.summaryRows());
+        detectionLimits(pw, content);
         if (!content.controlCharts().isEmpty()) {
             pw.subheading("Control charts of repeated QA readings");
             pw.paragraph("Readings in order, centre line and warning (2 sigma) and action (3 sigma) limits; marked "
@@ -189,6 +196,27 @@ public final class PdfReportWriter {
                 plot(pw, p, CHART_HEIGHT);
             }
         }
+    }
+
+    /** The method detection limits and minimum analyte uncertainties, one row per compound. */
+    private static void detectionLimits(PageWriter pw, ReportContent content) {
+        if (content.detectionLimits().isEmpty()) {
+            return;
+        }
+        pw.ensure(60 + 12 * content.detectionLimits().size());
+        pw.subheading("Method detection limits");
+        pw.paragraph("From the replicate zero-gas readings of the campaign, each quantified as a sample is: MDL = "
+                + "t(n-1, 0.99) x S (40 CFR Part 136 Appendix B), MAU the minimum analyte uncertainty (EPA Method 320 "
+                + "section 8.1.6), both in ppm in the cell as fitted. " + BELOW_MDL_CONVENTION, 9f);
+        List<String[]> rows = new ArrayList<>();
+        for (MethodDetectionLimit l : content.detectionLimits()) {
+            rows.add(new String[] {l.analyte(), Numbers.significant(l.ppm()),
+                    Numbers.significant(l.minimumAnalyteUncertainty()), Integer.toString(l.readings()),
+                    String.format(Locale.ROOT, "%.3f", l.t()), Numbers.significant(l.standardDeviation()), "ppm"});
+        }
+        new TableRenderer(List.of(new Column("Compound", 80, false), new Column("MDL", 65, true),
+                new Column("MAU", 65, true), new Column("n", 40, true), new Column("t(n-1, 0.99)", 70, true),
+                new Column("S", 65, true), new Column("Unit", 50, false)), 7.5f, ALARMS).draw(pw, rows);
     }
 
     /** Every QA reading, when the summary in section 4 shows repeated checks as one row. */
@@ -218,6 +246,9 @@ public final class PdfReportWriter {
         List<String[]> rows = new ArrayList<>();
         for (ResultRow r : content.results()) {
             String[] vu = Numbers.withUncertainty(r.value(), r.expandedUncertainty());
+            if (r.belowMethodDetectionLimit()) {
+                vu[0] = ResultRow.BELOW_MDL;
+            }
             String limit = r.limit().isPresent() ? Numbers.significant(r.limit().getAsDouble()) : "-";
             String status = r.status() == LimitStatus.EXCEEDED ? "EXCEEDED" : r.status().label();
             rows.add(new String[] {r.compound(), r.period(), TABLE_TIME.format(r.periodStart()), vu[0], vu[1], r.unit(),

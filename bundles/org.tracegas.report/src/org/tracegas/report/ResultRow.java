@@ -24,6 +24,12 @@ import org.tracegas.report.internal.Check;
 public record ResultRow(String compound, String period, Instant periodStart, double value, double expandedUncertainty,
         String unit, List<String> flags, OptionalDouble limit, LimitStatus status) {
 
+    /**
+     * Start of the flag of a value below its compound's method detection limit: the report's table shows the
+     * value as this text, the CSV export keeps the value with the flag.
+     */
+    public static final String BELOW_MDL = "< MDL";
+
     public ResultRow {
         Check.text("compound", compound);
         Check.text("period", period);
@@ -43,5 +49,10 @@ public record ResultRow(String compound, String period, Instant periodStart, dou
             throw new IllegalArgumentException("result of " + compound + " at " + periodStart + " has status "
                     + status + (limit.isEmpty() ? " but no limit" : " but a limit"));
         }
+    }
+
+    /** Whether the value lies below its compound's method detection limit (a flag starting {@link #BELOW_MDL}). */
+    public boolean belowMethodDetectionLimit() {
+        return flags.stream().anyMatch(f -> f.startsWith(BELOW_MDL));
     }
 }

@@ -112,7 +112,7 @@ class AnalysisCommandsTest {
         ok("workspace-init", "--workspace", ws, "--admin", "root", "--name", "Admin");
         ok("user-add", "--workspace", ws, "--as", "root", "--login", "ana", "--name", "Ana Lyst", "--roles",
                 "analyst");
-        for (String code : List.of("P-1", "P-2", "P-3", "P-4", "P-5", "P-6")) {
+        for (String code : List.of("P-1", "P-2", "P-3", "P-4", "P-5", "P-6", "P-7")) {
             ok("project-add", "--workspace", ws, "--as", "ana", "--client", "Client " + code, "--code", code,
                     "--name", "Survey");
         }
@@ -257,6 +257,75 @@ class AnalysisCommandsTest {
         laterCampaignIsChartedAgainstThisOne(qaPlan, reportPlan);
         assertTrue(text.contains("Made under: Verified: audit chain of"), "the verification the report was made under");
         refusedAfterTampering(where, reportPlan, text);
+    }
+
+    /**
+     * A campaign whose QA file repeats zero gas 8 times: each analyte of the zero gas gets its method detection
+     * limit and minimum analyte uncertainty as stored QA checks, the report states them in a table, and N2O, absent
+     * from the stack, is shown below its MDL in the report while the export keeps its value.
+     */
+    @Test
+    void replicateZeroReadingsGiveMethodDetectionLimitsThatTheReportStates() throws Exception {
+        int zeros = 8;
+        Random noise = new Random(29);
+        Path qa = folder.resolve("qa-zeros.tgc");
+        try (ContainerWriter w = ContainerWriter.create(qa)) {
+            w.append(header(SampleKind.BACKGROUND, T0.minusSeconds(3600), null), bands.interferogram(Map.of(), noise));
+            w.append(header(SampleKind.SAMPLE, T0.minusSeconds(3000), MeasurementRole.CTS),
+                    bands.interferogram(Map.of("CO", CTS_PPM), noise));
+            for (int i = 0; i < zeros; i++) {
+                w.append(header(SampleKind.SAMPLE, T0.minusSeconds(2400 - 240L * i), MeasurementRole.ZERO),
+                        bands.interferogram(Map.of(), noise));
+            }
+            w.commit();
+        }
+        // a method of its own, so that these zero readings are no history of the other campaigns' charts
+        Path method = folder.resolve("zeros.method");
+        Files.writeString(method, methodFile("Zeros"));
+        ok("method-define", "--workspace", ws, "--as", "ana", "--method", method.toString());
+        Path qaPlan = folder.resolve("qa-zeros.plan");
+        String plan = qaPlanText("lib/library.manifest");
+        Files.writeString(qaPlan, plan.substring(0, plan.indexOf("[chart]")));
+        String[] where = { "--workspace", ws, "--as", "ana", "--project", "P-7", "--method", "Zeros" };
+        ok(concat(where, "quantify", "--backgrounds", qa.toString(), "--file", stackFile.toString()));
+        ok(concat(where, "qa", "--plan", qaPlan.toString(), "--qa-file", qa.toString()));
+        List<org.tracegas.qa.checks.MethodDetectionLimit> limits;
+        try (WorkspaceStore store = open()) {
+            Session s = ana(store);
+            String project = store.projects().findByCode(s, "P-7").orElseThrow().id();
+            VersionInfo version = store.versions().latest(VersionKind.METHOD, "Zeros").orElseThrow();
+            limits = org.tracegas.qa.checks.MethodDetectionLimit.fromOutcomes(
+                    org.tracegas.campaign.StoredQaChecks.load(store, s, project, version.id()));
+        }
+        assertEquals(List.of("CO", "N2O"), limits.stream().map(l -> l.analyte()).toList());
+        for (var l : limits) {
+            assertEquals(zeros, l.readings(), l.toString());
+            // t(7, 0.99) = 2.998 (40 CFR Part 136 Appendix B table, as reproduced in Wis. Adm. Code NR 252.0365)
+            assertEquals(2.998, l.t(), 0.0005, l.toString());
+            // S of 8 results of white noise lies within sigma sqrt(chi2(7)/7) for chi2(7) between its 0.1 % and
+            // 99.9 % points 0.598 and 24.32 (chi-square table, from memory): the fit's noise-limited sigma (MAU / 3)
+            // must account for the scatter the chain leaves in repeated zero readings
+            double ratio = l.standardDeviation() / (l.minimumAnalyteUncertainty() / 3);
+            assertTrue(ratio > Math.sqrt(0.598 / 7) && ratio < Math.sqrt(24.32 / 7), l + ": S / sigma " + ratio);
+        }
+
+        Path reportPlan = folder.resolve("report-zeros.plan");
+        Files.writeString(reportPlan, reportPlanText("o2.csv").replace("qa-plan = qa.plan", "qa-plan = qa-zeros.plan")
+                .replace("R-TEST-1", "R-TEST-7") + "\n[compound]\nname = N2O\nmolar-mass = 44.013\n");
+        Path report = folder.resolve("report-P-7");
+        ok(concat(where, "report", "--plan", reportPlan.toString(), "--out", report.toString()));
+        String text = pdfText(report);
+        assertTrue(text.contains("Method detection limits"), "the table's heading");
+        assertTrue(text.contains("t(n-1, 0.99) x S"), "the formula stated");
+        assertTrue(text.contains(PdfReportWriter.BELOW_MDL_CONVENTION.substring(0, 60)), "the convention stated");
+        List<String> csv = Files.readAllLines(report.resolve("results.csv"), StandardCharsets.UTF_8);
+        String n2o = csv.stream().filter(l -> l.startsWith("N2O,")).findFirst().orElseThrow(() -> new AssertionError(
+                "no N2O row in " + csv));
+        assertTrue(n2o.contains("< MDL"), "no N2O in the stack: below its MDL: " + n2o);
+        Double.parseDouble(n2o.split(",")[3]); // the value is kept in the export
+        assertTrue(text.contains("N2O 3 min"), text);
+        String co = csv.stream().filter(l -> l.startsWith("CO,")).findFirst().orElseThrow();
+        assertFalse(co.contains("< MDL"), "CO at 20 to 120 ppm is far above its MDL: " + co);
     }
 
     /**
