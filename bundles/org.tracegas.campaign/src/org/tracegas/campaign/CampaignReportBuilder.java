@@ -70,10 +70,10 @@ public final class CampaignReportBuilder {
             + "cell conditions, H2O and O2), which does not, taken fully correlated (JCGM 100:2008 5.2.2, r = 1).";
 
     private static final String CORRECTION_RULE = "Each result is corrected from its references' cell to the "
-            + "sample cell: " + ConditionsCorrection.RULE + ". Each period states the range of the factor applied, "
-            + "where the cell temperature and pressure came from, and the noise factor F of the transform, whose "
-            + "square root widens the fit's uncertainty (F = 1 for absorbance imported as such, whose transform is "
-            + "unknown).";
+            + "sample cell: " + ConditionsCorrection.RULE + ". It is stated once for the results table: the range of "
+            + "the factor applied, where the cell temperature, pressure and path came from, and the noise factor F of "
+            + "the transform, whose square root widens the fit's uncertainty (F = 1 for absorbance imported as such, "
+            + "whose transform is unknown); each row's own is in the export, column cell_correction.";
 
     private final ReportingBasis basis;
     private final FtirResultBudget budget;
@@ -121,8 +121,11 @@ public final class CampaignReportBuilder {
         }
         Instant origin = series.compound(waterCompound).isEmpty() ? campaign.issued()
                 : series.compound(waterCompound).get(0).time();
+        List<MinuteSeries.Point> everyPoint = new ArrayList<>();
+        Set<String> rowCorrections = new java.util.HashSet<>();
         for (Reported r : reported) {
             List<MinuteSeries.Point> points = series.compound(r.compound());
+            everyPoint.addAll(points);
             List<TimedValue> converted = new ArrayList<>();
             Map<Instant, Double> perPpmOfMinute = new java.util.HashMap<>();
             double relativeU = 0;
@@ -198,11 +201,12 @@ public final class CampaignReportBuilder {
                         b.averagingRule(PdfReportWriter.BELOW_MDL_CONVENTION);
                         belowMdl(limitOfDetection, perPpmOfMinute, a, period).ifPresent(flags::add);
                     }
-                    flags.add(corrections(points, a.start(), a.start().plus(period)));
+                    String rowCorrection = corrections(points, a.start(), a.start().plus(period));
+                    rowCorrections.add(rowCorrection);
                     b.result(new ResultRow(r.compound(), label(period), a.start(), a.mean(),
                             2.0 * a.combinedUncertainty(), "mg/m³", flags,
                             limit == null ? OptionalDouble.empty() : OptionalDouble.of(limit.value()),
-                            comparison.status(limit, a)));
+                            comparison.status(limit, a), rowCorrection));
                 }
             }
             List<TimedValue> used = converted.stream().filter(v -> !v.excluded()).toList();
@@ -214,6 +218,11 @@ public final class CampaignReportBuilder {
             }
             b.timeSeries(new Plot(r.compound() + ", 1-minute values on the reporting basis", "hours since "
                     + origin, "mg/m³", List.of(new Series(r.compound(), hours, values)), false));
+        }
+        if (rowCorrections.size() > 1) {
+            // the report says the rows differ; this gives their span in one line
+            b.averagingRule("Cell correction over every row of the results table: " + corrections(everyPoint,
+                    Instant.MIN, Instant.MAX) + ".");
         }
         if (exampleFit != null) {
             b.spectrum(exampleFit);
@@ -241,7 +250,8 @@ public final class CampaignReportBuilder {
 
     /**
      * The corrections applied to the minutes of a period: the range of the factor, where the cell's temperature,
-     * pressure and path came from, and the range of the noise factor F.
+     * pressure and path came from, and the range of the noise factor F, for example "x1.0012 (T header, p header,
+     * path nominal); F 2.378".
      */
     static String corrections(List<MinuteSeries.Point> points, Instant from, Instant to) {
         DoubleSummaryStatistics factor = new DoubleSummaryStatistics();
@@ -264,7 +274,7 @@ public final class CampaignReportBuilder {
         if (factor.getCount() == 0) {
             return "not corrected to the sample cell";
         }
-        return String.format(Locale.ROOT, "cell correction x%s (%s); F %s%s", range(factor, "%.4f"),
+        return String.format(Locale.ROOT, "x%s (%s); F %s%s", range(factor, "%.4f"),
                 String.join("; ", origins), range(noise, "%.3f"),
                 uncorrected > 0 ? "; " + uncorrected + " not corrected" : "");
     }

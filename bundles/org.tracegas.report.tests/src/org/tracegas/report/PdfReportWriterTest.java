@@ -207,6 +207,33 @@ class PdfReportWriterTest {
     }
 
     @Test
+    void theCellCorrectionIsStatedOnceForTheTable() {
+        String same = "x1.0031 (T header, p header, path nominal); F 1.2";
+        List<ResultRow> rows = content.results().stream().map(r -> new ResultRow(r.compound(), r.period(),
+                r.periodStart(), r.value(), r.expandedUncertainty(), r.unit(), r.flags(), r.limit(), r.status(),
+                same)).toList();
+        assertEquals("Cell correction of every row: " + same + ".", PdfReportWriter.cellCorrection(rows)
+                .orElseThrow());
+        List<ResultRow> varied = new java.util.ArrayList<>(rows);
+        ResultRow r = rows.get(0);
+        varied.set(0, new ResultRow(r.compound(), r.period(), r.periodStart(), r.value(), r.expandedUncertainty(),
+                r.unit(), r.flags(), r.limit(), r.status(), "x1.0102 (T header, p header, path "
+                        + "nominal); F 1.2"));
+        assertTrue(PdfReportWriter.cellCorrection(varied).orElseThrow().contains("varies per row (2 different): see "
+                + "the export"), PdfReportWriter.cellCorrection(varied).orElseThrow());
+        assertTrue(PdfReportWriter.cellCorrection(content.results()).isEmpty(), "no row states one");
+        ReportContent c = CampaignFixture.unsigned().build();
+        ReportContent.Builder b = ReportContent.builder(c.campaign());
+        rows.forEach(b::result);
+        try (PDDocument doc = Loader.loadPDF(new PdfReportWriter().write(b.build()))) {
+            String t = text(doc, 1, doc.getNumberOfPages()).replaceAll("\\s+", " ");
+            assertEquals(1, t.split(java.util.regex.Pattern.quote("x1.0031"), -1).length - 1, "stated once: " + t);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    @Test
     void signaturesAndMissingApproval() throws IOException {
         try (PDDocument doc = Loader.loadPDF(pdf)) {
             String t = text(doc, 1, doc.getNumberOfPages());

@@ -10,7 +10,9 @@ import java.util.ArrayList;
 import java.util.Calendar;
 import java.util.GregorianCalendar;
 import java.util.List;
+import java.util.LinkedHashSet;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.Set;
 import java.util.TimeZone;
 
@@ -243,6 +245,7 @@ public final class PdfReportWriter {
         for (String rule : content.averagingRules()) {
             pw.paragraph(rule, 9f);
         }
+        cellCorrection(content.results()).ifPresent(text -> pw.paragraph(text, 9f));
         List<String[]> rows = new ArrayList<>();
         for (ResultRow r : content.results()) {
             String[] vu = Numbers.withUncertainty(r.value(), r.expandedUncertainty());
@@ -262,6 +265,22 @@ public final class PdfReportWriter {
         for (UncertaintyTable t : content.budgets()) {
             budget(pw, t);
         }
+    }
+
+    /**
+     * The cell correction of the results table, stated once: the one every row states, or that it varies and
+     * each row's is in the export; empty when no row states one.
+     */
+    static Optional<String> cellCorrection(List<ResultRow> results) {
+        Set<String> stated = new LinkedHashSet<>();
+        results.stream().map(ResultRow::cellCorrection).filter(c -> !c.isEmpty()).forEach(stated::add);
+        if (stated.isEmpty()) {
+            return Optional.empty();
+        }
+        boolean everyRow = results.stream().noneMatch(r -> r.cellCorrection().isEmpty());
+        return Optional.of(stated.size() == 1 && everyRow ? "Cell correction of every row: " + stated.iterator().next()
+                + "." : "Cell correction: varies per row (" + stated.size() + " different" + (everyRow ? ""
+                        : ", some rows none") + "): see the export, column cell_correction.");
     }
 
     /** One GUM budget: inputs with c_i and contributions, then u_c and U. */

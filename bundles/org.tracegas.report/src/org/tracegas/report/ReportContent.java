@@ -200,7 +200,8 @@ public final class ReportContent {
             d.add(r.compound()).add(r.period()).add(r.periodStart()).add(r.value()).add(r.expandedUncertainty())
                     .add(r.unit()).add(r.flags().size());
             r.flags().forEach(d::add);
-            d.add(r.limit().isPresent() ? Double.toString(r.limit().getAsDouble()) : "none").add(r.status().name());
+            d.add(r.limit().isPresent() ? Double.toString(r.limit().getAsDouble()) : "none").add(r.status().name())
+                    .add(r.cellCorrection());
         }
         d.add(averagingRules.size());
         averagingRules.forEach(d::add);
