@@ -45,13 +45,10 @@ public final class CampaignQaChecks {
         List<QaMeasurements.Fitted> cts = qa.withRole(MeasurementRole.CTS);
         PathLengthCheck pathCheck = new PathLengthCheck(plan.nominalPathM(),
                 PathLengthCheck.COMMON_PRACTICE_TOLERANCE_PERCENT);
-        CtsBand reference = new CtsBand(BandArea.of(plan.ctsReference(), plan.ctsLow(), plan.ctsHigh()),
-                plan.ctsReferencePpmMetres() / plan.nominalPathM(), plan.referenceTemperatureK(),
-                plan.referencePressureKPa());
+        CtsBand reference = referenceBand(plan);
         List<Double> paths = new ArrayList<>();
         for (QaMeasurements.Fitted f : cts) {
-            CtsBand measured = new CtsBand(BandArea.of(f.measured().ratio().spectrum(), plan.ctsLow(), plan.ctsHigh()),
-                    plan.ctsPpm(), f.measured().cellTemperatureK(), f.measured().cellPressureKPa());
+            CtsBand measured = measuredBand(plan, f.measured());
             outcomes.add(pathCheck.evaluate(measured, reference, plan.nominalPathM()));
             paths.add(PathLengthCheck.effectivePath(measured, reference, plan.nominalPathM()));
         }
@@ -88,6 +85,24 @@ public final class CampaignQaChecks {
         }
         outcomes.add(worstBackgroundAge(plan.backgroundAgeLimit(), backgrounds, firstSample, lastSample));
         return outcomes;
+    }
+
+    /** The effective path of each CTS reading, in the order given (EPA Method 320 section 10.2). */
+    static List<Double> ctsPaths(Plan plan, List<MeasuredSpectrum> cts) {
+        CtsBand reference = referenceBand(plan);
+        return cts.stream().map(m -> PathLengthCheck.effectivePath(measuredBand(plan, m), reference,
+                plan.nominalPathM())).toList();
+    }
+
+    private static CtsBand referenceBand(Plan plan) {
+        return new CtsBand(BandArea.of(plan.ctsReference(), plan.ctsLow(), plan.ctsHigh()),
+                plan.ctsReferencePpmMetres() / plan.nominalPathM(), plan.referenceTemperatureK(),
+                plan.referencePressureKPa());
+    }
+
+    private static CtsBand measuredBand(Plan plan, MeasuredSpectrum m) {
+        return new CtsBand(BandArea.of(m.ratio().spectrum(), plan.ctsLow(), plan.ctsHigh()), plan.ctsPpm(),
+                m.cellTemperatureK(), m.cellPressureKPa());
     }
 
     /** The MDL and MAU of an analyte from the replicate zero-gas readings, each fitted as a sample is. */

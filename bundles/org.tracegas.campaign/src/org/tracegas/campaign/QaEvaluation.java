@@ -58,15 +58,8 @@ public final class QaEvaluation {
         if (samples.isEmpty()) {
             throw new IllegalStateException("the project holds no processed samples yet; quantify them first");
         }
-        if (!LibraryVersionText.of(plan.libraryManifest())
-                .equals(store.versions().content(method.libraryVersionId()))) {
-            throw new FileFormatException(plan.file(), 0, "library", plan.libraryManifest()
-                    + " is not the library version " + method.libraryVersionId() + " the method was made with");
-        }
-        ReferenceLibrary library = LabReferenceSource.manifestReader().read(plan.libraryManifest());
-        SpectrumChain chain = new SpectrumChain(new InterferogramTransform(method.transform()),
-                new BackgroundRatio(plan.backgroundAgeLimit()), new BackgroundTimeline(qa.backgrounds()));
-        List<MeasuredSpectrum> measured = qa.others().stream().map(chain::process).toList();
+        ReferenceLibrary library = methodLibrary(store, plan, method);
+        List<MeasuredSpectrum> measured = measured(plan, method, qa);
         QaMeasurements fitted = QaMeasurements.fit(measured,
                 method.quantifier(qa.backgrounds().get(0).singleBeam().axis(), software, false));
         Instant first = samples.get(0).time();
@@ -83,8 +76,30 @@ public final class QaEvaluation {
         return new Outcome(StoredQaChecks.load(store, actor, projectId, methodVersionId), false);
     }
 
+    /**
+     * The plan's library, which must be the library version the method was made with.
+     *
+     * @throws FileFormatException if it is another
+     */
+    static ReferenceLibrary methodLibrary(WorkspaceStore store, QaPlan plan, StoredMethod method)
+            throws IOException {
+        if (!LibraryVersionText.of(plan.libraryManifest())
+                .equals(store.versions().content(method.libraryVersionId()))) {
+            throw new FileFormatException(plan.file(), 0, "library", plan.libraryManifest()
+                    + " is not the library version " + method.libraryVersionId() + " the method was made with");
+        }
+        return LabReferenceSource.manifestReader().read(plan.libraryManifest());
+    }
+
+    /** The QA measurements through the method's transform and the ratio against the QA file's backgrounds. */
+    static List<MeasuredSpectrum> measured(QaPlan plan, StoredMethod method, ContainerContents qa) {
+        SpectrumChain chain = new SpectrumChain(new InterferogramTransform(method.transform()),
+                new BackgroundRatio(plan.backgroundAgeLimit()), new BackgroundTimeline(qa.backgrounds()));
+        return qa.others().stream().map(chain::process).toList();
+    }
+
     /** The CTS reference nearest in amount to the CTS gas in the cell, so that saturation does not bias the ratio. */
-    private static CampaignQaChecks.Plan checksPlan(QaPlan plan, ReferenceLibrary library, StoredMethod method)
+    static CampaignQaChecks.Plan checksPlan(QaPlan plan, ReferenceLibrary library, StoredMethod method)
             throws FileFormatException {
         double path = method.method().pathLengthMetres();
         double ctsPpmMetres = plan.ctsPpm() * path;

@@ -112,7 +112,7 @@ class AnalysisCommandsTest {
         ok("workspace-init", "--workspace", ws, "--admin", "root", "--name", "Admin");
         ok("user-add", "--workspace", ws, "--as", "root", "--login", "ana", "--name", "Ana Lyst", "--roles",
                 "analyst");
-        for (String code : List.of("P-1", "P-2", "P-3", "P-4", "P-5", "P-6", "P-7")) {
+        for (String code : List.of("P-1", "P-2", "P-3", "P-4", "P-5", "P-6", "P-7", "P-8", "P-9")) {
             ok("project-add", "--workspace", ws, "--as", "ana", "--client", "Client " + code, "--code", code,
                     "--name", "Survey");
         }
@@ -326,6 +326,90 @@ class AnalysisCommandsTest {
         assertTrue(text.contains("N2O 3 min"), text);
         String co = csv.stream().filter(l -> l.startsWith("CO,")).findFirst().orElseThrow();
         assertFalse(co.contains("< MDL"), "CO at 20 to 120 ppm is far above its MDL: " + co);
+    }
+
+    /**
+     * A method whose path source is the CTS: the campaign's CTS readings were made with 3 % more CTS gas in the
+     * cell than the QA plan states, which by Beer-Lambert (absorbance proportional to concentration times path)
+     * has the absorbance of a path 3 % longer than the nominal. Every result is then the nominal path over the
+     * path the CTS band gives times what the same method with the nominal path gives on the same spectra, its
+     * stored conditions name the CTS-derived path, and so does the report.
+     */
+    @Test
+    void ctsDerivedPathCorrectsEveryResultAndTheReportNamesIt() throws Exception {
+        double longer = 1.03;
+        Random noise = new Random(31);
+        Path qa = folder.resolve("qa-cts.tgc");
+        try (ContainerWriter w = ContainerWriter.create(qa)) {
+            w.append(header(SampleKind.BACKGROUND, T0.minusSeconds(3600), null), bands.interferogram(Map.of(), noise));
+            w.append(header(SampleKind.SAMPLE, T0.minusSeconds(3000), MeasurementRole.CTS),
+                    bands.interferogram(Map.of("CO", longer * CTS_PPM), noise));
+            w.append(header(SampleKind.SAMPLE, T0.plusSeconds(600), MeasurementRole.CTS),
+                    bands.interferogram(Map.of("CO", longer * CTS_PPM), noise));
+            w.commit();
+        }
+        Path qaPlan = folder.resolve("qa-cts.plan");
+        String plan = qaPlanText("lib/library.manifest");
+        Files.writeString(qaPlan, plan.substring(0, plan.indexOf("[chart]")));
+        Path nominal = folder.resolve("cts-nominal.method");
+        Files.writeString(nominal, methodFile("Nominal path"));
+        ok("method-define", "--workspace", ws, "--as", "ana", "--method", nominal.toString());
+        Path derived = folder.resolve("cts-derived.method");
+        Files.writeString(derived, methodFile("CTS path").replace("path-length = 4.85\n",
+                "path-length = 4.85\npath-source = cts-derived\n"));
+        ok("method-define", "--workspace", ws, "--as", "ana", "--method", derived.toString());
+
+        String[] cts = { "--workspace", ws, "--as", "ana", "--project", "P-8", "--method", "CTS path" };
+        err.reset();
+        assertEquals(ExitCode.BAD_INPUT, run(concat(cts, "quantify", "--backgrounds", qa.toString(), "--file",
+                stackFile.toString())), "the CTS path needs the QA plan");
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("--qa-plan"), err.toString());
+        ok(concat(cts, "quantify", "--backgrounds", qa.toString(), "--file", stackFile.toString(), "--qa-plan",
+                qaPlan.toString()));
+        ok("quantify", "--workspace", ws, "--as", "ana", "--project", "P-9", "--method", "Nominal path",
+                "--backgrounds", qa.toString(), "--file", stackFile.toString());
+        ok(concat(cts, "qa", "--plan", qaPlan.toString(), "--qa-file", qa.toString()));
+        try (WorkspaceStore store = open()) {
+            Session s = ana(store);
+            List<MinuteSeries.Point> fromCts = co(store, s, "P-8", "CTS path");
+            List<MinuteSeries.Point> fromNominal = co(store, s, "P-9", "Nominal path");
+            assertEquals(CO_PPM.length, fromCts.size());
+            double path = fromCts.get(0).conditions().pathM();
+            // 3 % more CO on the path is, to Beer-Lambert, the absorbance of a 3 % longer path; the band area
+            // L_s = L_r (A_s/A_r)(C_r/C_s) reads less than that, as the strong CO lines at 7.7 cm-1 saturate and
+            // their band grows slower than the amount (curve of growth, Goody and Yung, from memory): here 2.1 %.
+            // The path is the band's, as the CTS check measured it: between 1.5 and 3 % over the nominal
+            assertTrue(path > 1.015 * 4.85 && path <= longer * 4.85, "CTS path " + path);
+            assertEquals(path, ctsCheckPath(store, s, "P-8"), 1e-9 * path, "the path the CTS check measured");
+            for (int i = 0; i < CO_PPM.length; i++) {
+                MinuteSeries.Point c = fromCts.get(i);
+                assertEquals("cts-derived", c.conditions().pathOrigin());
+                assertEquals("nominal", fromNominal.get(i).conditions().pathOrigin());
+                // C_corr = (L_r/L_s)... C_calc (EPA FTIR Protocol 11.2): the same fit, L_s the CTS path
+                assertEquals(fromNominal.get(i).ppm() * 4.85 / path, c.ppm(), 1e-9 * c.ppm(), "sample " + i);
+            }
+        }
+        Path reportPlan = folder.resolve("report-cts.plan");
+        Files.writeString(reportPlan, reportPlanText("o2.csv").replace("qa-plan = qa.plan", "qa-plan = qa-cts.plan")
+                .replace("R-TEST-1", "R-TEST-8"));
+        Path report = folder.resolve("report-P-8");
+        ok(concat(cts, "report", "--plan", reportPlan.toString(), "--out", report.toString()));
+        String text = pdfText(report);
+        assertTrue(text.contains("path cts-derived"), "the report names the path's source: " + text);
+    }
+
+    /** The mean of the stored CTS path length checks of a project. */
+    private static double ctsCheckPath(WorkspaceStore store, Session s, String code) {
+        String project = store.projects().findByCode(s, code).orElseThrow().id();
+        return store.qa().checks(s, project).stream().filter(c -> c.outcome().check().equals("CTS path length"))
+                .mapToDouble(c -> c.outcome().measured()).average().orElseThrow();
+    }
+
+    private static List<MinuteSeries.Point> co(WorkspaceStore store, Session s, String code, String method) {
+        String project = store.projects().findByCode(s, code).orElseThrow().id();
+        VersionInfo version = store.versions().latest(VersionKind.METHOD, method).orElseThrow();
+        return MinuteSeries.of(store.projects().measurements(s, project), store.results().results(s, project),
+                version.id()).compound("CO");
     }
 
     /**
