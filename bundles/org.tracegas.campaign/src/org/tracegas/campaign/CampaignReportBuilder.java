@@ -151,8 +151,14 @@ public final class CampaignReportBuilder {
                 BasisConversion conversion = basis.oxygen().map(o -> new BasisConversion(h2o, w.uncertainty() / 1e6,
                         o2Wet, o2UncertaintyPercent, true, o.referencePercent()))
                         .orElseGet(() -> BasisConversion.dryOnly(h2o, w.uncertainty() / 1e6));
-                UncertaintyBudget u = budget.budgetOnBasis(r.compound(), p.ppm(), p.uncertainty(), cellTemperatureK,
-                        cellPressureKPa, conversion);
+                // at the cell the result was corrected to, so that the budget's model is the correction's; a
+                // result without conditions at the plan's cell and the method's path
+                ResultConditions cell = p.conditions();
+                UncertaintyBudget u = cell == null
+                        ? budget.budgetOnBasis(r.compound(), p.ppm(), p.uncertainty(), cellTemperatureK,
+                                cellPressureKPa, conversion)
+                        : budget.budgetOnBasis(r.compound(), p.ppm(), p.uncertainty(), cell.pathM(),
+                                cell.cellTemperatureK(), cell.cellPressureKPa(), conversion);
                 // from ppm on the basis (the budget's unit) to mg/m³: the same exact factor as the value
                 double toMass = f / conversion.factor();
                 converted.add(new TimedValue(p.time(), basis.convert(reading, r.molarMass()).orElseThrow().value(),

@@ -338,6 +338,7 @@ class AnalysisCommandsTest {
     @Test
     void ctsDerivedPathCorrectsEveryResultAndTheReportNamesIt() throws Exception {
         double longer = 1.03;
+        double ctsPath;
         Random noise = new Random(31);
         Path qa = folder.resolve("qa-cts.tgc");
         try (ContainerWriter w = ContainerWriter.create(qa)) {
@@ -375,6 +376,7 @@ class AnalysisCommandsTest {
             List<MinuteSeries.Point> fromNominal = co(store, s, "P-9", "Nominal path");
             assertEquals(CO_PPM.length, fromCts.size());
             double path = fromCts.get(0).conditions().pathM();
+            ctsPath = path;
             // 3 % more CO on the path is, to Beer-Lambert, the absorbance of a 3 % longer path; the band area
             // L_s = L_r (A_s/A_r)(C_r/C_s) reads less than that, as the strong CO lines at 7.7 cm-1 saturate and
             // their band grows slower than the amount (curve of growth, Goody and Yung, from memory): here 2.1 %.
@@ -396,6 +398,10 @@ class AnalysisCommandsTest {
         ok(concat(cts, "report", "--plan", reportPlan.toString(), "--out", report.toString()));
         String text = pdfText(report);
         assertTrue(text.contains("path cts-derived"), "the report names the path's source: " + text);
+        // the budget is at the path the results were corrected to (4 significant digits, as the report prints)
+        String budgetPath = new java.math.BigDecimal(ctsPath).round(new java.math.MathContext(4)).stripTrailingZeros()
+                .toPlainString();
+        assertTrue(text.contains("path length " + budgetPath + " 0.05 m"), "the budget's path " + budgetPath);
     }
 
     /** The mean of the stored CTS path length checks of a project. */
