@@ -77,6 +77,24 @@ class ResultCorrectionTest {
     }
 
     @Test
+    void aCtsDerivedPathThreePercentLongerLowersEveryValueByThatRatio() {
+        // C_corr = (L_r/L_s)(T_s/T_r)(p_r/p_s) C_calc (EPA FTIR Protocol 11.2): the cell at the references' T and
+        // p with L_s = 1.03 L_r gives 1/1.03 = 0.9708738 (worked by hand)
+        NewResult r = ResultCorrection.of(stored(423.15)).withCtsPath(1.03 * 4.85).results(fitted(100.0, 1.0),
+                new AnalysisVersions("m", "l"), new ConditionValue(423.15, ConditionOrigin.METHOD_STATED),
+                new ConditionValue(101.325, ConditionOrigin.METHOD_STATED), 1.0, ResultCorrection.NO_TRANSFORM)
+                .get(0);
+        assertEquals(97.08738, r.concentration(), 1e-5);
+        assertEquals(0.9708738, r.uncertainty(), 1e-7);
+        assertEquals(1.03 * 4.85, r.conditions().pathM(), 1e-12);
+        assertEquals("cts-derived", r.conditions().pathOrigin());
+        assertEquals(4.85, r.conditions().fitPathM());
+        StoredMethod bare = new StoredMethod(method(), TransformSettings.defaults(), "lib-1", HASH);
+        assertThrows(IllegalArgumentException.class, () -> ResultCorrection.of(bare).withCtsPath(5.0));
+        assertThrows(IllegalArgumentException.class, () -> ResultCorrection.of(stored(423.15)).withCtsPath(0));
+    }
+
+    @Test
     void theCellAtTheReferencesConditionsLeavesTheValueAsFitted() {
         NewResult r = ResultCorrection.of(stored(423.15)).results(fitted(42.0, 0.5), new AnalysisVersions("m", "l"),
                 new ConditionValue(423.15, ConditionOrigin.METHOD_STATED),

@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
+import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.quantify.AnalysisRegion;
@@ -113,6 +114,27 @@ class StoredMethodTest {
         assertTrue(e.getMessage().contains("kiln.method"), e.getMessage());
         assertTrue(e.getMessage().contains("algorithm"), e.getMessage());
         assertEquals(10, e.line(), e.getMessage());
+    }
+
+    @Test
+    void aCtsDerivedPathSourceIsReadFromTheMethodFileAndKeptByTheStoredVersion() throws Exception {
+        String head = stored().declaration();
+        assertTrue(!head.contains("path-source"), "the nominal path is the default and not written: " + head);
+        assertEquals(PathOrigin.NOMINAL, MethodDefinition.parse(asMethodFile(head), Path.of("/lab/kiln.method"))
+                .pathSource());
+        String file = asMethodFile(head).replace("path-length = 4.85\n", "path-length = 4.85\npath-source = "
+                + "cts-derived\n");
+        assertEquals(PathOrigin.CTS_DERIVED, MethodDefinition.parse(file, Path.of("/lab/kiln.method")).pathSource());
+        StoredMethod s = stored();
+        StoredMethod derived = new StoredMethod(s.method(), s.transform(), s.libraryVersionId(),
+                s.libraryContentHash(), s.recipe(), s.resolution(), s.referenceConditions(), PathOrigin.CTS_DERIVED);
+        StoredMethod back = StoredMethod.parse(derived.content(), "v4");
+        assertEquals(PathOrigin.CTS_DERIVED, back.pathSource());
+        assertEquals(derived.content(), back.content());
+        FileFormatException e = assertThrows(FileFormatException.class, () -> MethodDefinition.parse(
+                file.replace("cts-derived", "from-cts"), Path.of("/lab/kiln.method")));
+        assertTrue(e.getMessage().contains("path-source"), e.getMessage());
+        assertEquals(4, e.line(), e.getMessage());
     }
 
     @Test

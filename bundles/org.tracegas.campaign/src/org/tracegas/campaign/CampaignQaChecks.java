@@ -9,6 +9,7 @@ import org.eclipse.core.runtime.RegistryFactory;
 import org.tracegas.campaign.internal.BackgroundAgeQaCheck;
 import org.tracegas.campaign.internal.CtsDriftQaCheck;
 import org.tracegas.campaign.internal.CtsPathQaCheck;
+import org.tracegas.campaign.internal.MethodDetectionLimitQaCheck;
 import org.tracegas.campaign.internal.SpikeRecoveryQaCheck;
 import org.tracegas.campaign.internal.ZeroGasQaCheck;
 import org.tracegas.qa.checks.CheckOutcome;
@@ -19,13 +20,14 @@ import org.tracegas.qa.checks.QaInputs;
 /**
  * The QA checks of a campaign from its QA measurements, as its QA plan names them: the built-in ones (path
  * length from the calibration transfer standard before and after, its drift, spike recovery with a tracer, zero
- * gas with its noise, background age) and those other bundles contribute to {@link QaCheckRegistry#EXTENSION_POINT}.
+ * gas with its noise, the method detection limit and minimum analyte uncertainty from the replicate zero-gas
+ * readings, background age) and those other bundles contribute to {@link QaCheckRegistry#EXTENSION_POINT}.
  */
 public final class CampaignQaChecks {
 
     /** The built-in checks by name, in the order a plan without a "checks" key evaluates them. */
     public static final List<String> BUILT_IN = List.of("cts-path", "cts-drift", "spike-recovery", "zero-gas",
-            "background-age");
+            "method-detection-limit", "background-age");
 
     private CampaignQaChecks() {
     }
@@ -34,7 +36,7 @@ public final class CampaignQaChecks {
     public static QaCheckRegistry builtIn() {
         return new QaCheckRegistry().register(new CtsPathQaCheck()).register(new CtsDriftQaCheck())
                 .register(new SpikeRecoveryQaCheck()).register(new ZeroGasQaCheck())
-                .register(new BackgroundAgeQaCheck());
+                .register(new MethodDetectionLimitQaCheck()).register(new BackgroundAgeQaCheck());
     }
 
     /** The checks contributed to the running platform, or the built-in ones when no extension registry runs. */

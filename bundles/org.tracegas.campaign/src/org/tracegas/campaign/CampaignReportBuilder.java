@@ -26,6 +26,7 @@ import org.tracegas.qa.basis.ReportingBasis;
 import org.tracegas.qa.basis.TimedValue;
 import org.tracegas.qa.basis.ValidityRule;
 import org.tracegas.qa.checks.CheckOutcome;
+import org.tracegas.qa.checks.MethodDetectionLimit;
 import org.tracegas.qa.control.ChartEvaluation;
 import org.tracegas.qa.uncertainty.BasisConversion;
 import org.tracegas.qa.uncertainty.FtirResultBudget;
@@ -33,6 +34,7 @@ import org.tracegas.qa.uncertainty.UncertaintyBudget;
 import org.tracegas.report.Campaign;
 import org.tracegas.report.LibraryVersion;
 import org.tracegas.report.MethodVersion;
+import org.tracegas.report.PdfReportWriter;
 import org.tracegas.report.Plot;
 import org.tracegas.report.QaLine;
 import org.tracegas.report.ReportContent;
@@ -68,10 +70,10 @@ public final class CampaignReportBuilder {
             + "cell conditions, H2O and O2), which does not, taken fully correlated (JCGM 100:2008 5.2.2, r = 1).";
 
     private static final String CORRECTION_RULE = "Each result is corrected from its references' cell to the "
-            + "sample cell: " + ConditionsCorrection.RULE + ". Each period states the range of the factor applied, "
-            + "where the cell temperature and pressure came from, and the noise factor F of the transform, whose "
-            + "square root widens the fit's uncertainty (F = 1 for absorbance imported as such, whose transform is "
-            + "unknown).";
+            + "sample cell: " + ConditionsCorrection.RULE + ". It is stated once for the results table: the range of "
+            + "the factor applied, where the cell temperature, pressure and path came from, and the noise factor F of "
+            + "the transform, whose square root widens the fit's uncertainty (F = 1 for absorbance imported as such, "
+            + "whose transform is unknown); each row's own is in the export, column cell_correction.";
 
     private final ReportingBasis basis;
     private final FtirResultBudget budget;
@@ -107,6 +109,11 @@ public final class CampaignReportBuilder {
             SpectrumFit exampleFit) {
         ReportContent.Builder b = ReportContent.builder(campaign).method(method).library(library);
         qa.forEach(o -> b.qa(QaLine.of(o)));
+        Map<String, MethodDetectionLimit> mdl = new java.util.HashMap<>();
+        for (MethodDetectionLimit l : MethodDetectionLimit.fromOutcomes(qa)) {
+            b.detectionLimit(l);
+            mdl.put(l.analyte(), l);
+        }
         charts.forEach(c -> b.controlChart(QaControlCharts.plot(c)));
         Map<Instant, MinuteSeries.Point> water = new java.util.HashMap<>();
         for (MinuteSeries.Point p : series.compound(waterCompound)) {
@@ -114,9 +121,13 @@ public final class CampaignReportBuilder {
         }
         Instant origin = series.compound(waterCompound).isEmpty() ? campaign.issued()
                 : series.compound(waterCompound).get(0).time();
+        List<MinuteSeries.Point> everyPoint = new ArrayList<>();
+        Set<String> rowCorrections = new java.util.HashSet<>();
         for (Reported r : reported) {
             List<MinuteSeries.Point> points = series.compound(r.compound());
+            everyPoint.addAll(points);
             List<TimedValue> converted = new ArrayList<>();
+            Map<Instant, Double> perPpmOfMinute = new java.util.HashMap<>();
             double relativeU = 0;
             UncertaintyBudget worst = null;
             Instant worstTime = null;
@@ -136,11 +147,18 @@ public final class CampaignReportBuilder {
                     continue;
                 }
                 double f = perPpm.get().value();
+                perPpmOfMinute.put(p.time(), f);
                 BasisConversion conversion = basis.oxygen().map(o -> new BasisConversion(h2o, w.uncertainty() / 1e6,
                         o2Wet, o2UncertaintyPercent, true, o.referencePercent()))
                         .orElseGet(() -> BasisConversion.dryOnly(h2o, w.uncertainty() / 1e6));
-                UncertaintyBudget u = budget.budgetOnBasis(r.compound(), p.ppm(), p.uncertainty(), cellTemperatureK,
-                        cellPressureKPa, conversion);
+                // at the cell the result was corrected to, so that the budget's model is the correction's; a
+                // result without conditions at the plan's cell and the method's path
+                ResultConditions cell = p.conditions();
+                UncertaintyBudget u = cell == null
+                        ? budget.budgetOnBasis(r.compound(), p.ppm(), p.uncertainty(), cellTemperatureK,
+                                cellPressureKPa, conversion)
+                        : budget.budgetOnBasis(r.compound(), p.ppm(), p.uncertainty(), cell.pathM(),
+                                cell.cellTemperatureK(), cell.cellPressureKPa(), conversion);
                 // from ppm on the basis (the budget's unit) to mg/m³: the same exact factor as the value
                 double toMass = f / conversion.factor();
                 converted.add(new TimedValue(p.time(), basis.convert(reading, r.molarMass()).orElseThrow().value(),
@@ -184,11 +202,17 @@ public final class CampaignReportBuilder {
                     if (a.belowDetectionLimit() > 0) {
                         flags.add(a.belowDetectionLimit() + " below detection limit");
                     }
-                    flags.add(corrections(points, a.start(), a.start().plus(period)));
+                    MethodDetectionLimit limitOfDetection = mdl.get(r.compound());
+                    if (limitOfDetection != null) {
+                        b.averagingRule(PdfReportWriter.BELOW_MDL_CONVENTION);
+                        belowMdl(limitOfDetection, perPpmOfMinute, a, period).ifPresent(flags::add);
+                    }
+                    String rowCorrection = corrections(points, a.start(), a.start().plus(period));
+                    rowCorrections.add(rowCorrection);
                     b.result(new ResultRow(r.compound(), label(period), a.start(), a.mean(),
                             2.0 * a.combinedUncertainty(), "mg/m³", flags,
                             limit == null ? OptionalDouble.empty() : OptionalDouble.of(limit.value()),
-                            comparison.status(limit, a)));
+                            comparison.status(limit, a), rowCorrection));
                 }
             }
             List<TimedValue> used = converted.stream().filter(v -> !v.excluded()).toList();
@@ -201,6 +225,11 @@ public final class CampaignReportBuilder {
             b.timeSeries(new Plot(r.compound() + ", 1-minute values on the reporting basis", "hours since "
                     + origin, "mg/m³", List.of(new Series(r.compound(), hours, values)), false));
         }
+        if (rowCorrections.size() > 1) {
+            // the report says the rows differ; this gives their span in one line
+            b.averagingRule("Cell correction over every row of the results table: " + corrections(everyPoint,
+                    Instant.MIN, Instant.MAX) + ".");
+        }
         if (exampleFit != null) {
             b.spectrum(exampleFit);
         }
@@ -208,8 +237,27 @@ public final class CampaignReportBuilder {
     }
 
     /**
+     * The flag of an average below the MDL, which is converted to the reporting basis with the mean factor of the
+     * period's converted minutes; empty when the average is not below it.
+     */
+    static Optional<String> belowMdl(MethodDetectionLimit mdl, Map<Instant, Double> perPpmOfMinute, PeriodAverage a,
+            Duration period) {
+        Instant end = a.start().plus(period);
+        OptionalDouble factor = perPpmOfMinute.entrySet().stream()
+                .filter(e -> !e.getKey().isBefore(a.start()) && e.getKey().isBefore(end))
+                .mapToDouble(Map.Entry::getValue).average();
+        if (factor.isEmpty()) {
+            return Optional.empty();
+        }
+        double limit = mdl.ppm() * factor.getAsDouble();
+        return a.mean() < limit ? Optional.of(String.format(Locale.ROOT, "%s %.3g mg/m³", ResultRow.BELOW_MDL,
+                limit)) : Optional.empty();
+    }
+
+    /**
      * The corrections applied to the minutes of a period: the range of the factor, where the cell's temperature,
-     * pressure and path came from, and the range of the noise factor F.
+     * pressure and path came from, and the range of the noise factor F, for example "x1.0012 (T header, p header,
+     * path nominal); F 2.378".
      */
     static String corrections(List<MinuteSeries.Point> points, Instant from, Instant to) {
         DoubleSummaryStatistics factor = new DoubleSummaryStatistics();
@@ -232,7 +280,7 @@ public final class CampaignReportBuilder {
         if (factor.getCount() == 0) {
             return "not corrected to the sample cell";
         }
-        return String.format(Locale.ROOT, "cell correction x%s (%s); F %s%s", range(factor, "%.4f"),
+        return String.format(Locale.ROOT, "x%s (%s); F %s%s", range(factor, "%.4f"),
                 String.join("; ", origins), range(noise, "%.3f"),
                 uncorrected > 0 ? "; " + uncorrected + " not corrected" : "");
     }

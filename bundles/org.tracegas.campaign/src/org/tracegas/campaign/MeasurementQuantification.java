@@ -87,7 +87,7 @@ public final class MeasurementQuantification {
     /**
      * @param registry creates the steps of the method's recipe
      * @throws IllegalArgumentException naming the recipe step the registry does not know or whose parameters it
-     *                                  rejects
+     *                                  rejects, or if the method takes its path from CTS readings
      */
     public MeasurementQuantification(WorkspaceStore store, Session actor, String projectId, VersionInfo version,
             StoredMethod method, StepRegistry registry, String software) {
@@ -97,6 +97,11 @@ public final class MeasurementQuantification {
         this.method = method;
         this.versionId = version.id();
         this.versions = new AnalysisVersions(version.id(), method.libraryVersionId());
+        if (method.pathSource() == org.tracegas.qa.basis.PathOrigin.CTS_DERIVED) {
+            throw new IllegalArgumentException("method " + method.method().name() + " takes its path from the "
+                    + "campaign's CTS readings, which imported measurements do not bring; quantify interferogram "
+                    + "containers with the QA plan instead");
+        }
         this.correction = ResultCorrection.of(method);
         this.steps = new ArrayList<>();
         for (Recipe.Entry e : method.recipe().entries()) {

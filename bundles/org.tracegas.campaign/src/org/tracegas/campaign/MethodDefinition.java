@@ -13,6 +13,7 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.TransformSettings;
+import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.FitAlgorithm;
@@ -36,6 +37,9 @@ import org.tracegas.store.WorkspaceStore;
  * method = Stack gas, 8 analytes
  * library = references/library.manifest     the library folder's manifest, relative to this file
  * path-length = 6.4                          m
+ * path-source = nominal                      (optional) nominal, or cts-derived: results are corrected to the
+ *                                            effective path the campaign's CTS readings measure (see
+ *                                            {@link CtsPath}) instead of the nominal path-length
  * resolution = 0.5                           (optional) the instrument's nominal resolution, cm-1: every
  *                                            reference must have been recorded at it
  * nonlinearity = yes                         interpolate between references of several amounts
@@ -67,17 +71,20 @@ import org.tracegas.store.WorkspaceStore;
  *
  * @param libraryManifest the library folder's manifest; null in the definition read from a stored version
  * @param resolution      the instrument's nominal resolution in cm-1, NaN when the method states none
+ * @param pathSource      where the sample cell's path that results are corrected to comes from
  */
 public record MethodDefinition(Path file, String name, Path libraryManifest, double pathLengthM, double resolution,
         boolean nonlinearity,
         double tolerance, int maxIterations, double maxAbsorbance, ShiftTerm shift, ReportingUnit unit,
-        FitAlgorithm algorithm, TransformSettings transform, Recipe recipe, List<Analyte> analytes) {
+        FitAlgorithm algorithm, TransformSettings transform, Recipe recipe, List<Analyte> analytes,
+        PathOrigin pathSource) {
 
     /** The versions a method file gave: its library's, its own, and the method as its version holds it. */
     public record Recorded(VersionInfo libraryVersion, VersionInfo methodVersion, StoredMethod method) {
     }
 
-    private static final Set<String> SETTINGS = Set.of("method", "path-length", "resolution", "nonlinearity",
+    private static final Set<String> SETTINGS = Set.of("method", "path-length", "path-source", "resolution",
+            "nonlinearity",
             "tolerance", "max-iterations", "max-absorbance", "shift", "reporting-unit", "algorithm");
     private static final Set<String> ANALYTE = Set.of("compound", "interferents", "region");
 
@@ -154,7 +161,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
                 h.constant("shift", ShiftTerm.class, ShiftTerm.NONE),
                 h.constant("reporting-unit", ReportingUnit.class, ReportingUnit.PPM),
                 h.constant("algorithm", FitAlgorithm.class, FitAlgorithm.CLASSICAL_LEAST_SQUARES), transform, recipe,
-                analytes);
+                analytes, h.constant("path-source", PathOrigin.class, PathOrigin.NOMINAL));
     }
 
     /** "low..high[, low..high] baseline n [residual-limit x]". */
@@ -208,7 +215,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         try {
             QuantificationMethod method = build(references, Optional.empty());
             return new StoredMethod(method, transform, libraryVersionId, libraryContentHash, recipe, resolution,
-                    MethodReferences.of(library, method.references(), transform, resolution));
+                    MethodReferences.of(library, method.references(), transform, resolution), pathSource);
         } catch (IllegalArgumentException e) {
             throw new FileFormatException(file, 0, "", e.getMessage() + " (library " + libraryManifest + ")");
         }
@@ -235,10 +242,14 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
      * same method.
      */
     static String write(QuantificationMethod m, String libraryLines, double resolution, TransformSettings transform,
-            Recipe recipe) {
+            Recipe recipe, PathOrigin pathSource) {
         StringBuilder s = new StringBuilder();
         s.append("method = ").append(m.name()).append('\n').append(libraryLines);
         s.append("path-length = ").append(m.pathLengthMetres()).append('\n');
+        if (pathSource != PathOrigin.NOMINAL) {
+            // only when not the default, so that the stored versions of earlier methods read as they were written
+            s.append("path-source = ").append(constant(pathSource)).append('\n');
+        }
         if (!Double.isNaN(resolution)) {
             s.append("resolution = ").append(resolution).append('\n');
         }
@@ -299,7 +310,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         VersionInfo libraryVersion = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
                 libraryContent, "library of method " + method.name());
         StoredMethod stored = new StoredMethod(method, transform, libraryVersion.id(), library.contentHash(), recipe,
-                resolution, built.referenceConditions());
+                resolution, built.referenceConditions(), pathSource);
         VersionInfo methodVersion = VersionRecorder.ensure(store, actor, VersionKind.METHOD, method.name(),
                 stored.content(), "defined from " + file.getFileName());
         return new Recorded(libraryVersion, methodVersion, stored);

@@ -115,7 +115,8 @@ public final class MethodVersions {
         base.weights().ifPresent(b::weights);
         // the references are the opened version's, so are their conditions
         return new StoredMethod(b.build(), opened.transform(), opened.libraryVersionId(),
-                opened.libraryContentHash(), opened.recipe(), opened.resolution(), opened.referenceConditions());
+                opened.libraryContentHash(), opened.recipe(), opened.resolution(), opened.referenceConditions(),
+                opened.pathSource());
     }
 
     /** A region with the model's span: a region of one window takes it; one of several keeps its windows. */

@@ -3,6 +3,7 @@ package org.tracegas.campaign;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.OptionalDouble;
 
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.container.ContainerReader;
@@ -69,7 +70,18 @@ public final class ProjectQuantification {
      */
     public BatchOutcome run(VersionInfo methodVersion, StoredMethod method, List<Path> files, long samples,
             List<Background> backgrounds, ProgressListener progress, CancellationFlag cancel) {
-        return new QuantificationSetup(methodVersion, method, backgrounds, software)
+        return run(methodVersion, method, files, samples, backgrounds, OptionalDouble.empty(), progress, cancel);
+    }
+
+    /**
+     * @param ctsPathM the effective path of the campaign's CTS readings ({@link CtsPath}), for a method whose path
+     *                 source is CTS-derived; empty for one of nominal path
+     * @see QuantificationSetup
+     */
+    public BatchOutcome run(VersionInfo methodVersion, StoredMethod method, List<Path> files, long samples,
+            List<Background> backgrounds, OptionalDouble ctsPathM, ProgressListener progress,
+            CancellationFlag cancel) {
+        return new QuantificationSetup(methodVersion, method, backgrounds, software, ctsPathM)
                 .processor(store, actor, projectId).run(files, samples, progress, cancel);
     }
 }

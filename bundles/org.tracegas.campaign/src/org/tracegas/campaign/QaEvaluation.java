@@ -56,13 +56,9 @@ public final class QaEvaluation {
      */
     public Outcome run(String methodVersionId, StoredMethod method, QaPlan plan, ContainerContents qa)
             throws IOException {
-        return run(methodVersionId, method, plan, () -> {
-            SpectrumChain chain = new SpectrumChain(new InterferogramTransform(method.transform()),
-                    new BackgroundRatio(plan.backgroundAgeLimit()), new BackgroundTimeline(qa.backgrounds()));
-            List<MeasuredSpectrum> measured = qa.others().stream().map(chain::process).toList();
-            return QaMeasurements.fit(measured,
-                    method.quantifier(qa.backgrounds().get(0).singleBeam().axis(), software, false));
-        }, qa.backgrounds());
+        return run(methodVersionId, method, plan, () -> QaMeasurements.fit(measured(plan, method, qa),
+                method.quantifier(qa.backgrounds().get(0).singleBeam().axis(), software, false)),
+                qa.backgrounds());
     }
 
     /**
@@ -98,12 +94,7 @@ public final class QaEvaluation {
         if (samples.isEmpty()) {
             throw new IllegalStateException("the project holds no processed samples yet; quantify them first");
         }
-        if (!LibraryVersionText.of(plan.libraryManifest())
-                .equals(store.versions().content(method.libraryVersionId()))) {
-            throw new FileFormatException(plan.file(), 0, "library", plan.libraryManifest()
-                    + " is not the library version " + method.libraryVersionId() + " the method was made with");
-        }
-        ReferenceLibrary library = LabReferenceSource.manifestReader().read(plan.libraryManifest());
+        ReferenceLibrary library = methodLibrary(store, plan, method);
         QaMeasurements fitted = qa.fit();
         Instant first = samples.get(0).time();
         Instant last = samples.get(samples.size() - 1).time();
@@ -117,5 +108,27 @@ public final class QaEvaluation {
         }
         StoredQaChecks.store(store, actor, projectId, methodVersionId, checks);
         return new Outcome(StoredQaChecks.load(store, actor, projectId, methodVersionId), false);
+    }
+
+    /**
+     * The plan's library, which must be the library version the method was made with.
+     *
+     * @throws FileFormatException if it is another
+     */
+    static ReferenceLibrary methodLibrary(WorkspaceStore store, QaPlan plan, StoredMethod method)
+            throws IOException {
+        if (!LibraryVersionText.of(plan.libraryManifest())
+                .equals(store.versions().content(method.libraryVersionId()))) {
+            throw new FileFormatException(plan.file(), 0, "library", plan.libraryManifest()
+                    + " is not the library version " + method.libraryVersionId() + " the method was made with");
+        }
+        return LabReferenceSource.manifestReader().read(plan.libraryManifest());
+    }
+
+    /** The QA measurements through the method's transform and the ratio against the QA file's backgrounds. */
+    static List<MeasuredSpectrum> measured(QaPlan plan, StoredMethod method, ContainerContents qa) {
+        SpectrumChain chain = new SpectrumChain(new InterferogramTransform(method.transform()),
+                new BackgroundRatio(plan.backgroundAgeLimit()), new BackgroundTimeline(qa.backgrounds()));
+        return qa.others().stream().map(chain::process).toList();
     }
 }

@@ -32,6 +32,11 @@ public final class QaMeasurements {
             return compound(compound).detectionLimit();
         }
 
+        @Override
+        public double standardUncertainty(String compound) {
+            return compound(compound).standardUncertainty();
+        }
+
         private CompoundResult compound(String name) {
             return result.compound(name)
                     .orElseThrow(() -> new IllegalArgumentException("the method does not report " + name));
@@ -48,8 +53,10 @@ public final class QaMeasurements {
         List<Fitted> fitted = new ArrayList<>();
         for (MeasuredSpectrum m : measured) {
             Spectrum a = m.ratio().spectrum();
+            // the uncertainty widened by the transform's noise factor as a sample's is, so that zero readings
+            // judge, and give detection limits for, the uncertainty the samples carry
             fitted.add(new Fitted(m.time(), m.role(), m.cellTemperatureK(), m.cellPressureKPa(), a,
-                    quantifier.quantify(Sample.of(a))));
+                    quantifier.quantify(new Sample(a, null, ResultCorrection.noiseCorrelation(m.noiseFactor())))));
         }
         return new QaMeasurements(fitted);
     }

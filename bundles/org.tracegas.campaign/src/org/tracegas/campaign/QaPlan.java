@@ -38,7 +38,8 @@ import org.tracegas.qa.checks.SpikeGas;
  * background-age-limit = 24 h
  * checks = cts-path, cts-drift, zero-gas   (optional) the checks evaluated, in this order, by the names they are
  *                                          registered under (built in: cts-path, cts-drift, spike-recovery,
- *                                          zero-gas, background-age, which are the default); a contributed check
+ *                                          zero-gas, method-detection-limit, background-age, which are the
+ *                                          default); a contributed check
  *                                          may read keys of its own here
  *
  * [chart]                                  (optional, repeatable) control charts of repeated readings

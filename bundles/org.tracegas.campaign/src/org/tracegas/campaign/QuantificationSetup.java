@@ -1,10 +1,12 @@
 package org.tracegas.campaign;
 
 import java.util.List;
+import java.util.OptionalDouble;
 
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
+import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.BatchQuantifier;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
@@ -24,12 +26,33 @@ public final class QuantificationSetup {
     private final ResultCorrection correction;
 
     /**
+     * A method whose results are corrected to its nominal path.
+     *
      * @param backgrounds at least one, taken before the first sample
      * @param software    named in each result's reprocessing record
-     * @throws IllegalArgumentException if there is no background
+     * @throws IllegalArgumentException if there is no background, or the method takes its path from a CTS
      */
     public QuantificationSetup(VersionInfo methodVersion, StoredMethod method, List<Background> backgrounds,
             String software) {
+        this(methodVersion, method, backgrounds, software, OptionalDouble.empty());
+    }
+
+    /**
+     * @param backgrounds at least one, taken before the first sample
+     * @param software    named in each result's reprocessing record
+     * @param ctsPathM    the effective path the campaign's CTS readings measured ({@link CtsPath}), in m: required
+     *                    by a method whose path source is CTS-derived, refused by one whose path is nominal
+     * @throws IllegalArgumentException if there is no background, or the CTS path is missing or not wanted
+     */
+    public QuantificationSetup(VersionInfo methodVersion, StoredMethod method, List<Background> backgrounds,
+            String software, OptionalDouble ctsPathM) {
+        boolean fromCts = method.pathSource() == PathOrigin.CTS_DERIVED;
+        if (fromCts != ctsPathM.isPresent()) {
+            throw new IllegalArgumentException(fromCts ? "method " + method.method().name() + " takes its path from "
+                    + "the campaign's CTS readings: give the QA plan and the QA file with them"
+                    : "method " + method.method().name() + " corrects to its nominal path: a CTS-derived path is "
+                            + "not used (path-source = cts-derived in the method would use it)");
+        }
         if (backgrounds.isEmpty()) {
             throw new IllegalArgumentException("backgrounds must hold at least one background");
         }
@@ -38,7 +61,8 @@ public final class QuantificationSetup {
         quantifier = BatchQuantifier.onAllCores(
                 method.quantifier(timeline.all().get(0).singleBeam().axis(), software, false));
         versions = new AnalysisVersions(methodVersion.id(), method.libraryVersionId());
-        correction = ResultCorrection.of(method);
+        correction = fromCts ? ResultCorrection.of(method).withCtsPath(ctsPathM.getAsDouble())
+                : ResultCorrection.of(method);
     }
 
     /** The processor storing into a project of the workspace as the actor. */

@@ -37,7 +37,7 @@ import org.tracegas.report.Campaign;
  * o2-channel = O2                      its column, %vol wet
  * o2-uncertainty = 0.2                 standard uncertainty of the O2 reading, %vol
  * water = H2O                          compound of the moisture result
- * cell-temperature = 438.15            K, for the uncertainty budget
+ * cell-temperature = 438.15            K, for the budget of results stored without cell conditions
  * cell-pressure = 101.3                kPa
  * reference-uncertainty = 0.02         relative; path-uncertainty m, temperature-uncertainty K,
  * path-uncertainty = 0.05              pressure-uncertainty kPa: standard uncertainties of the budget

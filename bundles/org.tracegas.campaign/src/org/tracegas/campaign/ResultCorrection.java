@@ -23,7 +23,8 @@ import org.tracegas.store.ResultConditions;
  * conditions to the sample cell's ({@link ConditionsCorrection}) and with the noise factor of the transform that
  * made the spectrum. The correction scales concentration, uncertainty and detection limit alike: it is a known
  * factor, whose own uncertainty (of the cell's thermometer and gauge) is not propagated here. The sample path
- * is the method's nominal path, so L_r/L_s = 1; a path derived from a CTS is not yet applied.
+ * is the method's nominal path, so L_r/L_s = 1, unless the method takes it from the campaign's CTS readings
+ * ({@link #withCtsPath}), whose effective path then gives L_s and is stored as the path's origin.
  * <p>
  * A method whose references came without their conditions gives results without a correction, as before.
  */
@@ -32,14 +33,36 @@ final class ResultCorrection {
     /** Where F comes from for absorbance imported as such. */
     static final String NO_TRANSFORM = "absorbance imported as such: its transform is unknown; F = 1 taken";
 
-    private static final ResultCorrection NONE = new ResultCorrection(Map.of(), 1.0);
+    private static final ResultCorrection NONE = new ResultCorrection(Map.of(), 1.0, 1.0, PathOrigin.NOMINAL);
 
     private final Map<String, ConditionsCorrection> byCompound;
     private final double fitPathM;
+    private final double samplePathM;
+    private final PathOrigin pathOrigin;
 
-    private ResultCorrection(Map<String, ConditionsCorrection> byCompound, double fitPathM) {
+    private ResultCorrection(Map<String, ConditionsCorrection> byCompound, double fitPathM, double samplePathM,
+            PathOrigin pathOrigin) {
         this.byCompound = Map.copyOf(byCompound);
         this.fitPathM = fitPathM;
+        this.samplePathM = samplePathM;
+        this.pathOrigin = pathOrigin;
+    }
+
+    /**
+     * The same correction to a sample cell of the effective path a CTS measured.
+     *
+     * @throws IllegalArgumentException if the path is not positive and finite, or there is no correction (a method
+     *                                  whose references came without their conditions)
+     */
+    ResultCorrection withCtsPath(double pathM) {
+        if (!(pathM > 0 && Double.isFinite(pathM))) {
+            throw new IllegalArgumentException("the CTS-derived path must be positive and finite, was " + pathM);
+        }
+        if (byCompound.isEmpty()) {
+            throw new IllegalArgumentException("the method's references came without their conditions: its results "
+                    + "are not corrected, so a CTS-derived path cannot be applied");
+        }
+        return new ResultCorrection(byCompound, fitPathM, pathM, PathOrigin.CTS_DERIVED);
     }
 
     /** No correction: results as fitted. */
@@ -72,7 +95,8 @@ final class ResultCorrection {
             corrections.put(compound, new ConditionsCorrection(c.temperature(), c.pressure(),
                     method.method().pathLengthMetres()));
         }
-        return new ResultCorrection(corrections, method.method().pathLengthMetres());
+        return new ResultCorrection(corrections, method.method().pathLengthMetres(),
+                method.method().pathLengthMetres(), PathOrigin.NOMINAL);
     }
 
     /**
@@ -104,7 +128,7 @@ final class ResultCorrection {
             double factor = 1.0;
             ResultConditions conditions = null;
             if (correction != null) {
-                CellConditions cell = new CellConditions(temperature, pressure, fitPathM, PathOrigin.NOMINAL);
+                CellConditions cell = new CellConditions(temperature, pressure, samplePathM, pathOrigin);
                 ConditionsCorrection.CorrectedConcentration corrected = correction.correct(c.concentration(), cell);
                 factor = corrected.factor();
                 conditions = new ResultConditions(temperature.value(), name(temperature.origin()), pressure.value(),

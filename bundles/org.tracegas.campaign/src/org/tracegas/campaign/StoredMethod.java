@@ -8,6 +8,7 @@ import org.tracegas.library.ReferenceConditions;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.TransformSettings;
+import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.PreparedMethod;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.Quantifier;
@@ -26,6 +27,7 @@ import org.tracegas.spectrum.SpectralAxis;
  * library-version = ...                 id of the LIBRARY version
  * library-sha256 = ...                  content hash of the library's references
  * path-length = 4.85
+ * path-source = cts-derived            (only when not nominal)
  * ...                                   the other settings of a method file, each written out
  * [transform]
  * ...
@@ -43,9 +45,11 @@ import org.tracegas.spectrum.SpectralAxis;
  * @param resolution          the instrument's nominal resolution in cm-1 the method states, NaN when none
  * @param referenceConditions the conditions of each of the method's references in their order; empty for a
  *                            method whose references came without them
+ * @param pathSource          where the sample cell's path that results are corrected to comes from
  */
 public record StoredMethod(QuantificationMethod method, TransformSettings transform, String libraryVersionId,
-        String libraryContentHash, Recipe recipe, double resolution, List<ReferenceConditions> referenceConditions) {
+        String libraryContentHash, Recipe recipe, double resolution, List<ReferenceConditions> referenceConditions,
+        PathOrigin pathSource) {
 
     private static final String EXACT = "\n[exact]\n";
     private static final Set<String> LIBRARY_KEYS = Set.of("library-version", "library-sha256");
@@ -56,6 +60,9 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
      */
     public StoredMethod {
         referenceConditions = List.copyOf(referenceConditions);
+        if (pathSource == null) {
+            throw new IllegalArgumentException("pathSource must not be null");
+        }
         if (!referenceConditions.isEmpty()) {
             if (referenceConditions.size() != method.references().size()) {
                 throw new IllegalArgumentException("referenceConditions must be one per reference, "
@@ -67,6 +74,13 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
                         transform, resolution);
             }
         }
+    }
+
+    /** A method whose results are corrected to its nominal path. */
+    public StoredMethod(QuantificationMethod method, TransformSettings transform, String libraryVersionId,
+            String libraryContentHash, Recipe recipe, double resolution, List<ReferenceConditions> referenceConditions) {
+        this(method, transform, libraryVersionId, libraryContentHash, recipe, resolution, referenceConditions,
+                PathOrigin.NOMINAL);
     }
 
     /** A method whose references came without their conditions. */
@@ -94,7 +108,7 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
     /** The method as a method file writes it, with its library version: what a person reads and compares. */
     public String declaration() {
         String declaration = MethodDefinition.write(method, "library-version = " + libraryVersionId
-                + "\nlibrary-sha256 = " + libraryContentHash + "\n", resolution, transform, recipe);
+                + "\nlibrary-sha256 = " + libraryContentHash + "\n", resolution, transform, recipe, pathSource);
         return referenceConditions.isEmpty() ? declaration
                 : declaration + "\n[references]\n" + MethodReferences.write(method.references(), referenceConditions);
     }
@@ -144,7 +158,8 @@ public record StoredMethod(QuantificationMethod method, TransformSettings transf
         KeyValueFile.Section h = head.head();
         try {
             return new StoredMethod(method, declared.transform(), h.text("library-version"),
-                    h.text("library-sha256"), declared.recipe(), declared.resolution(), conditions);
+                    h.text("library-sha256"), declared.recipe(), declared.resolution(), conditions,
+                    declared.pathSource());
         } catch (IllegalArgumentException e) {
             throw new FileFormatException(where, blocks.get(0).line(), "[references]", e.getMessage());
         }

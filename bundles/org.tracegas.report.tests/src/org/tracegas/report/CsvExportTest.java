@@ -23,14 +23,19 @@ class CsvExportTest {
                 new ResultRow("CO", "30 min", T, 181.25, 17.0, "mg/m³", List.of("upset, plant log", "say \"hi\""),
                         OptionalDouble.of(150), LimitStatus.EXCEEDED),
                 new ResultRow("HCl", "30 min", T, 7.5, 1.0, "mg/m³", List.of(), OptionalDouble.empty(),
-                        LimitStatus.NO_LIMIT)));
+                        LimitStatus.NO_LIMIT),
+                new ResultRow("NO", "30 min", T, 12.0, 1.0, "mg/m³", List.of(), OptionalDouble.empty(),
+                        LimitStatus.NO_LIMIT, "x1.0031 (T header, p header, path nominal); F 1.2")));
         String[] lines = csv.split("\r\n", -1);
-        assertEquals(4, lines.length); // header, two records, empty after the last CRLF
+        assertEquals(5, lines.length); // header, three records, empty after the last CRLF
         assertEquals(CsvExport.HEADER, lines[0]);
         assertEquals("CO,30 min,2026-03-02T21:00:00Z,181.25,17.0,mg/m³,"
-                + "\"upset, plant log; say \"\"hi\"\"\",150.0,exceeded", lines[1]);
-        assertEquals("HCl,30 min,2026-03-02T21:00:00Z,7.5,1.0,mg/m³,,,no limit", lines[2]);
-        assertEquals("", lines[3]);
+                + "\"upset, plant log; say \"\"hi\"\"\",150.0,exceeded,", lines[1]);
+        assertEquals("HCl,30 min,2026-03-02T21:00:00Z,7.5,1.0,mg/m³,,,no limit,", lines[2]);
+        // the row's own cell correction, which the report states once for its table
+        assertEquals("NO,30 min,2026-03-02T21:00:00Z,12.0,1.0,mg/m³,,,no limit,"
+                + "\"x1.0031 (T header, p header, path nominal); F 1.2\"", lines[3]);
+        assertEquals("", lines[4]);
         assertTrue(csv.indexOf('\n') == csv.indexOf("\r\n") + 1, "no bare LF");
     }
 
@@ -56,6 +61,6 @@ class CsvExportTest {
         String csv = CsvExport.toCsv(c.results());
         assertEquals(c.results().size() + 1, csv.split("\r\n").length);
         assertEquals(c.results().stream().filter(r -> r.status() == LimitStatus.EXCEEDED).count(),
-                csv.lines().filter(l -> l.endsWith(",exceeded")).count());
+                csv.lines().filter(l -> l.contains(",exceeded,")).count());
     }
 }

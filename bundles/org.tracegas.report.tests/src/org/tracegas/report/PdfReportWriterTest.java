@@ -21,6 +21,7 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.tracegas.qa.basis.LimitStatus;
 import org.tracegas.qa.checks.CtsDriftCheck;
+import org.tracegas.qa.checks.MethodDetectionLimit;
 import org.tracegas.qa.checks.ZeroSpanCheck;
 import org.tracegas.report.internal.Numbers;
 import org.tracegas.report.internal.QaTables;
@@ -181,6 +182,54 @@ class PdfReportWriterTest {
             assertTrue(t.contains("EXCEEDED"));
             assertTrue(t.contains("2026-03-02 21:00"), "the upset half hour");
             assertTrue(t.contains("invalid: 60 % data"), "the half hour with the purge");
+        }
+    }
+
+    @Test
+    void methodDetectionLimitsHaveTheirTableAndValuesBelowThemAreMarked() throws IOException {
+        // 7 readings, S = 0.216025 ppm (hand-computed), t(6, 0.99) = 3.143 (40 CFR Part 136 Appendix B table)
+        MethodDetectionLimit mdl = MethodDetectionLimit.fromZeroReadings("HCl",
+                new double[] { 0.1, -0.1, 0.2, -0.2, 0, 0.3, -0.3 }, new double[] { 0.05, 0.05, 0.05, 0.05, 0.05,
+                        0.05, 0.05 });
+        ReportContent c = CampaignFixture.unsigned().detectionLimit(mdl).result(new ResultRow("HCl", "30 min",
+                CampaignFixture.START, 0.123456, 0.05, "mg/m³", List.of(ResultRow.BELOW_MDL + " 1.1 mg/m³"),
+                java.util.OptionalDouble.empty(), LimitStatus.NO_LIMIT)).build();
+        try (PDDocument doc = Loader.loadPDF(new PdfReportWriter().write(c))) {
+            String t = text(doc, 1, doc.getNumberOfPages()).replaceAll("\\s+", " ");
+            assertTrue(t.contains("Method detection limits"), "the table's heading");
+            assertTrue(t.contains("HCl " + Numbers.significant(mdl.ppm()) + " 0.15 7 3.143"), t);
+            assertTrue(t.contains(PdfReportWriter.BELOW_MDL_CONVENTION.substring(0, 50)), "the convention");
+            String[] vu = Numbers.withUncertainty(0.123456, 0.05);
+            assertTrue(t.contains("2026-03-02 00:00 < MDL " + vu[1]), "the value shown as < MDL, with its U: " + t);
+            assertFalse(t.contains(vu[0] + " " + vu[1]), "the value itself is left to the export");
+        }
+        assertTrue(CsvExport.toCsv(c.results()).contains("0.123456"), "the export keeps the value");
+    }
+
+    @Test
+    void theCellCorrectionIsStatedOnceForTheTable() {
+        String same = "x1.0031 (T header, p header, path nominal); F 1.2";
+        List<ResultRow> rows = content.results().stream().map(r -> new ResultRow(r.compound(), r.period(),
+                r.periodStart(), r.value(), r.expandedUncertainty(), r.unit(), r.flags(), r.limit(), r.status(),
+                same)).toList();
+        assertEquals("Cell correction of every row: " + same + ".", PdfReportWriter.cellCorrection(rows)
+                .orElseThrow());
+        List<ResultRow> varied = new java.util.ArrayList<>(rows);
+        ResultRow r = rows.get(0);
+        varied.set(0, new ResultRow(r.compound(), r.period(), r.periodStart(), r.value(), r.expandedUncertainty(),
+                r.unit(), r.flags(), r.limit(), r.status(), "x1.0102 (T header, p header, path "
+                        + "nominal); F 1.2"));
+        assertTrue(PdfReportWriter.cellCorrection(varied).orElseThrow().contains("varies per row (2 different): see "
+                + "the export"), PdfReportWriter.cellCorrection(varied).orElseThrow());
+        assertTrue(PdfReportWriter.cellCorrection(content.results()).isEmpty(), "no row states one");
+        ReportContent c = CampaignFixture.unsigned().build();
+        ReportContent.Builder b = ReportContent.builder(c.campaign());
+        rows.forEach(b::result);
+        try (PDDocument doc = Loader.loadPDF(new PdfReportWriter().write(b.build()))) {
+            String t = text(doc, 1, doc.getNumberOfPages()).replaceAll("\\s+", " ");
+            assertEquals(1, t.split(java.util.regex.Pattern.quote("x1.0031"), -1).length - 1, "stated once: " + t);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
         }
     }
 

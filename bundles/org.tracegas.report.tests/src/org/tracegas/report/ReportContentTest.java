@@ -6,8 +6,10 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.time.Instant;
+import java.util.List;
 
 import org.junit.jupiter.api.Test;
+import org.tracegas.qa.checks.MethodDetectionLimit;
 
 class ReportContentTest {
 
@@ -40,6 +42,20 @@ class ReportContentTest {
         assertEquals(sha, c.contentHash());
         assertTrue(java.util.Arrays.equals(c.canonicalContent(), CampaignFixture.unsigned().build()
                 .canonicalContent()), "the same content gives the same bytes");
+    }
+
+    @Test
+    void detectionLimitsAreContentAndEverythingSurvivesSigning() {
+        MethodDetectionLimit mdl = MethodDetectionLimit.fromZeroReadings("HCl",
+                new double[] { 0.1, -0.1, 0.2, -0.2, 0, 0.3, -0.3 }, new double[7]);
+        ReportContent plain = CampaignFixture.unsigned().averagingRule("a rule").build();
+        ReportContent withMdl = CampaignFixture.unsigned().averagingRule("a rule").detectionLimit(mdl).build();
+        assertNotEquals(plain.contentHash(), withMdl.contentHash(), "the MDL table is part of what is signed");
+        ReportContent signed = withMdl.withSignature(new Signature("B. Second", Instant.EPOCH,
+                SignatureMeaning.REVIEW, withMdl.contentHash()));
+        assertEquals(withMdl.contentHash(), signed.contentHash(), "signing changes no content");
+        assertEquals(List.of(mdl), signed.detectionLimits());
+        assertEquals(withMdl.averagingRules(), signed.averagingRules());
     }
 
     @Test

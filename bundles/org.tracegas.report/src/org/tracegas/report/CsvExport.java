@@ -15,7 +15,7 @@ import java.util.List;
 public final class CsvExport {
 
     static final String HEADER = "compound,period,period_start_utc,value,expanded_uncertainty_k2,unit,flags,limit,"
-            + "limit_status";
+            + "limit_status,cell_correction";
 
     private CsvExport() {
     }
@@ -49,7 +49,7 @@ public final class CsvExport {
         for (ResultRow r : rows) {
             String[] fields = {r.compound(), r.period(), DateTimeFormatter.ISO_INSTANT.format(r.periodStart()),
                     number(r.value()), number(r.expandedUncertainty()), r.unit(), String.join("; ", r.flags()),
-                    r.limit().isPresent() ? number(r.limit().getAsDouble()) : "", limitStatus(r)};
+                    r.limit().isPresent() ? number(r.limit().getAsDouble()) : "", limitStatus(r), r.cellCorrection()};
             for (int i = 0; i < fields.length; i++) {
                 if (i > 0) {
                     out.write(',');

@@ -10,7 +10,9 @@ import java.util.ArrayList;
 import java.util.Calendar;
 import java.util.GregorianCalendar;
 import java.util.List;
+import java.util.LinkedHashSet;
 import java.util.Locale;
+import java.util.Optional;
 import java.util.Set;
 import java.util.TimeZone;
 
@@ -21,6 +23,7 @@ import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.tracegas.qa.basis.LimitStatus;
+import org.tracegas.qa.checks.MethodDetectionLimit;
 import org.tracegas.qa.uncertainty.BudgetRow;
 import org.tracegas.report.internal.Check;
 import org.tracegas.report.internal.Numbers;
@@ -54,6 +57,11 @@ public final class PdfReportWriter {
     private static final float RESIDUAL_HEIGHT = 130;
     private static final float CHART_HEIGHT = 170;
     private static final Set<String> ALARMS = Set.of("FAIL", "EXCEEDED");
+    /** How a result below its compound's method detection limit is shown. */
+    public static final String BELOW_MDL_CONVENTION = "A period average below its compound's MDL, converted to the "
+            + "reporting basis with the mean conversion factor of the period's minutes, is shown as \""
+            + ResultRow.BELOW_MDL + "\" in the results table and flagged with that MDL; the value itself is kept in the CSV export and "
+            + "enters the comparison with the limit as measured (common practice, no source).";
 
     /** The report as PDF bytes. */
     public byte[] write(ReportContent content) {
@@ -181,6 +189,7 @@ public final class PdfReportWriter {
         QaTables tables = new QaTables(content.qa());
         pw.paragraph(tables.overview(), 9.5f);
         tables.summaryTable(ALARMS).draw(pw, tables.summaryRows());
+        detectionLimits(pw, content);
         if (!content.controlCharts().isEmpty()) {
             pw.subheading("Control charts of repeated QA readings");
             pw.paragraph("Readings in order, centre line and warning (2 sigma) and action (3 sigma) limits; marked "
@@ -189,6 +198,27 @@ public final class PdfReportWriter {
                 plot(pw, p, CHART_HEIGHT);
             }
         }
+    }
+
+    /** The method detection limits and minimum analyte uncertainties, one row per compound. */
+    private static void detectionLimits(PageWriter pw, ReportContent content) {
+        if (content.detectionLimits().isEmpty()) {
+            return;
+        }
+        pw.ensure(60 + 12 * content.detectionLimits().size());
+        pw.subheading("Method detection limits");
+        pw.paragraph("From the replicate zero-gas readings of the campaign, each quantified as a sample is: MDL = "
+                + "t(n-1, 0.99) x S (40 CFR Part 136 Appendix B), MAU the minimum analyte uncertainty (EPA Method 320 "
+                + "section 8.1.6), both in ppm in the cell as fitted. " + BELOW_MDL_CONVENTION, 9f);
+        List<String[]> rows = new ArrayList<>();
+        for (MethodDetectionLimit l : content.detectionLimits()) {
+            rows.add(new String[] {l.analyte(), Numbers.significant(l.ppm()),
+                    Numbers.significant(l.minimumAnalyteUncertainty()), Integer.toString(l.readings()),
+                    String.format(Locale.ROOT, "%.3f", l.t()), Numbers.significant(l.standardDeviation()), "ppm"});
+        }
+        new TableRenderer(List.of(new Column("Compound", 80, false), new Column("MDL", 65, true),
+                new Column("MAU", 65, true), new Column("n", 40, true), new Column("t(n-1, 0.99)", 70, true),
+                new Column("S", 65, true), new Column("Unit", 50, false)), 7.5f, ALARMS).draw(pw, rows);
     }
 
     /** Every QA reading, when the summary in section 4 shows repeated checks as one row. */
@@ -215,9 +245,13 @@ public final class PdfReportWriter {
         for (String rule : content.averagingRules()) {
             pw.paragraph(rule, 9f);
         }
+        cellCorrection(content.results()).ifPresent(text -> pw.paragraph(text, 9f));
         List<String[]> rows = new ArrayList<>();
         for (ResultRow r : content.results()) {
             String[] vu = Numbers.withUncertainty(r.value(), r.expandedUncertainty());
+            if (r.belowMethodDetectionLimit()) {
+                vu[0] = ResultRow.BELOW_MDL;
+            }
             String limit = r.limit().isPresent() ? Numbers.significant(r.limit().getAsDouble()) : "-";
             String status = r.status() == LimitStatus.EXCEEDED ? "EXCEEDED" : r.status().label();
             rows.add(new String[] {r.compound(), r.period(), TABLE_TIME.format(r.periodStart()), vu[0], vu[1], r.unit(),
@@ -231,6 +265,22 @@ public final class PdfReportWriter {
         for (UncertaintyTable t : content.budgets()) {
             budget(pw, t);
         }
+    }
+
+    /**
+     * The cell correction of the results table, stated once: the one every row states, or that it varies and
+     * each row's is in the export; empty when no row states one.
+     */
+    static Optional<String> cellCorrection(List<ResultRow> results) {
+        Set<String> stated = new LinkedHashSet<>();
+        results.stream().map(ResultRow::cellCorrection).filter(c -> !c.isEmpty()).forEach(stated::add);
+        if (stated.isEmpty()) {
+            return Optional.empty();
+        }
+        boolean everyRow = results.stream().noneMatch(r -> r.cellCorrection().isEmpty());
+        return Optional.of(stated.size() == 1 && everyRow ? "Cell correction of every row: " + stated.iterator().next()
+                + "." : "Cell correction: varies per row (" + stated.size() + " different" + (everyRow ? ""
+                        : ", some rows none") + "): see the export, column cell_correction.");
     }
 
     /** One GUM budget: inputs with c_i and contributions, then u_c and U. */

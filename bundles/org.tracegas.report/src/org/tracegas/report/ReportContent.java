@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
+import org.tracegas.qa.checks.MethodDetectionLimit;
 import org.tracegas.report.internal.Check;
 import org.tracegas.report.internal.ContentDigest;
 
@@ -18,6 +19,7 @@ public final class ReportContent {
     private final List<MethodVersion> methods;
     private final List<LibraryVersion> libraries;
     private final List<QaLine> qa;
+    private final List<MethodDetectionLimit> detectionLimits;
     private final List<Plot> controlCharts;
     private final List<UncertaintyTable> budgets;
     private final List<ResultRow> results;
@@ -35,6 +37,7 @@ public final class ReportContent {
         methods = Check.list("methods", b.methods);
         libraries = Check.list("libraries", b.libraries);
         qa = Check.list("qa", b.qa);
+        detectionLimits = Check.list("detectionLimits", b.detectionLimits);
         controlCharts = Check.list("controlCharts", b.controlCharts);
         budgets = Check.list("budgets", b.budgets);
         results = Check.list("results", b.results);
@@ -70,6 +73,11 @@ public final class ReportContent {
     }
 
     /** Control charts of repeated QA readings. */
+    /** The method detection limits of the compounds, from the replicate zero-gas readings. */
+    public List<MethodDetectionLimit> detectionLimits() {
+        return detectionLimits;
+    }
+
     public List<Plot> controlCharts() {
         return controlCharts;
     }
@@ -150,9 +158,11 @@ public final class ReportContent {
         b.methods.addAll(methods);
         b.libraries.addAll(libraries);
         b.qa.addAll(qa);
+        b.detectionLimits.addAll(detectionLimits);
         b.controlCharts.addAll(controlCharts);
         b.budgets.addAll(budgets);
         b.results.addAll(results);
+        b.averagingRules.addAll(averagingRules);
         b.timeSeries.addAll(timeSeries);
         b.spectra.addAll(spectra);
         b.cautions.addAll(cautions);
@@ -173,6 +183,9 @@ public final class ReportContent {
         d.add(qa.size());
         qa.forEach(q -> d.add(q.check()).add(q.passed()).add(q.measured()).add(q.limits()).add(q.rule())
                 .add(q.source()));
+        d.add(detectionLimits.size());
+        detectionLimits.forEach(l -> d.add(l.analyte()).add(l.readings()).add(l.standardDeviation()).add(l.t())
+                .add(l.minimumAnalyteUncertainty()));
         d.add(controlCharts.size());
         controlCharts.forEach(p -> digestPlot(d, p));
         d.add(budgets.size());
@@ -187,7 +200,8 @@ public final class ReportContent {
             d.add(r.compound()).add(r.period()).add(r.periodStart()).add(r.value()).add(r.expandedUncertainty())
                     .add(r.unit()).add(r.flags().size());
             r.flags().forEach(d::add);
-            d.add(r.limit().isPresent() ? Double.toString(r.limit().getAsDouble()) : "none").add(r.status().name());
+            d.add(r.limit().isPresent() ? Double.toString(r.limit().getAsDouble()) : "none").add(r.status().name())
+                    .add(r.cellCorrection());
         }
         d.add(averagingRules.size());
         averagingRules.forEach(d::add);
@@ -219,6 +233,7 @@ public final class ReportContent {
         private final List<MethodVersion> methods = new ArrayList<>();
         private final List<LibraryVersion> libraries = new ArrayList<>();
         private final List<QaLine> qa = new ArrayList<>();
+        private final List<MethodDetectionLimit> detectionLimits = new ArrayList<>();
         private final List<Plot> controlCharts = new ArrayList<>();
         private final List<UncertaintyTable> budgets = new ArrayList<>();
         private final List<ResultRow> results = new ArrayList<>();
@@ -245,6 +260,12 @@ public final class ReportContent {
 
         public Builder qa(QaLine line) {
             qa.add(line);
+            return this;
+        }
+
+        /** The method detection limit and minimum analyte uncertainty of a compound, for their table. */
+        public Builder detectionLimit(MethodDetectionLimit limit) {
+            detectionLimits.add(Check.notNull("limit", limit));
             return this;
         }
 

@@ -36,4 +36,15 @@ public final class CtsPathQaCheck implements QaCheck {
         }
         return outcomes;
     }
+
+    /** The effective path of each CTS reading, in time order (EPA Method 320 section 10.2), m. */
+    public static List<Double> effectivePaths(QaInputs inputs) throws IOException {
+        CtsBands bands = new CtsBands(inputs);
+        double path = inputs.nominalPathMetres();
+        List<Double> paths = new ArrayList<>();
+        for (QaReading cts : inputs.readings(MeasurementRole.CTS)) {
+            paths.add(PathLengthCheck.effectivePath(bands.measured(cts), bands.reference(), path));
+        }
+        return paths;
+    }
 }

@@ -59,6 +59,11 @@ class CellLeakCheckTest {
         public double detectionLimit(String compound) {
             throw new IllegalArgumentException("no gas in the evacuated cell");
         }
+
+        @Override
+        public double standardUncertainty(String compound) {
+            throw new IllegalArgumentException("no gas in the evacuated cell");
+        }
     }
 
     /** The plan's barometric pressure and the readings of the sealed cell. */

@@ -34,6 +34,20 @@ class FtirResultBudgetTest {
     }
 
     @Test
+    void theBudgetOfAResultIsAtThePathItWasCorrectedTo() {
+        // a budget stated for the nominal 5.0 m, evaluated for a result corrected to a CTS-derived 5.12 m: the
+        // same as one stated for 5.12 m, whose path row the numeric GUM model above checks
+        FtirResultBudget nominal = new FtirResultBudget(0.02, 5.0, 0.05, 1.5, 0.3);
+        FtirResultBudget derived = new FtirResultBudget(0.02, 5.12, 0.05, 1.5, 0.3);
+        UncertaintyBudget atCts = nominal.budget("HCl", 25.0, 0.4, 5.12, 458.0, 99.8);
+        UncertaintyBudget stated = derived.budget("HCl", 25.0, 0.4, 458.0, 99.8);
+        assertEquals(5.12, atCts.components().get(2).estimate(), 0);
+        assertEquals(stated.combinedStandardUncertainty(), atCts.combinedStandardUncertainty(), 0);
+        // |c_i u| of the path = C u(L) / L = 25 x 0.05 / 5.12 = 0.244140625 ppm (hand-computed)
+        assertEquals(0.244140625, Math.abs(atCts.components().get(2).contribution()), 1e-12);
+    }
+
+    @Test
     void basisBudgetWorkedByHand() {
         // worked by hand: C = 50 ppm wet, h = 0.15 ± 0.005, O2 = 8.0 ± 0.2 % dry, reference 11 %.
         // F = 1/0.85 · 10/13 = 0.9049774, E = 45.248869 ppm;

@@ -32,4 +32,11 @@ public interface QaReading {
      * @throws IllegalArgumentException if the method does not report the compound
      */
     double detectionLimit(String compound);
+
+    /**
+     * The standard uncertainty of the fit's amount fraction for the compound, ppm.
+     *
+     * @throws IllegalArgumentException if the method does not report the compound
+     */
+    double standardUncertainty(String compound);
 }

@@ -52,7 +52,19 @@ public final class FtirResultBudget {
      */
     public UncertaintyBudget budget(String compound, double concentration, double fitUncertainty,
             double temperatureK, double pressureKPa) {
+        return budget(compound, concentration, fitUncertainty, pathM, temperatureK, pressureKPa);
+    }
+
+    /**
+     * The budget at the sample cell a result was corrected to: its own path, temperature and pressure as the
+     * correction C_corr = (L_r/L_s)(T_s/T_r)(p_r/p_s) C_calc took them, with the stated standard uncertainties.
+     *
+     * @param samplePathM the path the result was corrected to (nominal or CTS-derived), m
+     */
+    public UncertaintyBudget budget(String compound, double concentration, double fitUncertainty, double samplePathM,
+            double temperatureK, double pressureKPa) {
         Require.finite("concentration", concentration);
+        Require.positive("samplePathM", samplePathM);
         Require.positive("temperatureK", temperatureK);
         Require.positive("pressureKPa", pressureKPa);
         double c = concentration;
@@ -60,7 +72,7 @@ public final class FtirResultBudget {
         return UncertaintyBudget.of(compound, c, "ppm", List.of(
                 new UncertaintyComponent(FIT_ROW, c, fitUncertainty, 1.0, "ppm"),
                 new UncertaintyComponent("reference spectrum", 1.0, relativeReferenceUncertainty, c, "1"),
-                new UncertaintyComponent("path length", pathM, pathUncertaintyM, -c / pathM, "m"),
+                new UncertaintyComponent("path length", samplePathM, pathUncertaintyM, -c / samplePathM, "m"),
                 new UncertaintyComponent("cell temperature", temperatureK, temperatureUncertaintyK, c / temperatureK,
                         "K"),
                 new UncertaintyComponent("cell pressure", pressureKPa, pressureUncertaintyKPa, -c / pressureKPa,
@@ -85,12 +97,21 @@ public final class FtirResultBudget {
      */
     public UncertaintyBudget budgetOnBasis(String compound, double concentration, double fitUncertainty,
             double temperatureK, double pressureKPa, BasisConversion conversion) {
+        return budgetOnBasis(compound, concentration, fitUncertainty, pathM, temperatureK, pressureKPa, conversion);
+    }
+
+    /**
+     * {@link #budgetOnBasis(String, double, double, double, double, BasisConversion)} at the sample cell a result
+     * was corrected to, as {@link #budget(String, double, double, double, double, double)}.
+     */
+    public UncertaintyBudget budgetOnBasis(String compound, double concentration, double fitUncertainty,
+            double samplePathM, double temperatureK, double pressureKPa, BasisConversion conversion) {
         Require.notNull("conversion", conversion);
         double f = conversion.factor();
         double e = concentration * f;
         List<UncertaintyComponent> components = new ArrayList<>();
-        for (UncertaintyComponent c : budget(compound, concentration, fitUncertainty, temperatureK, pressureKPa)
-                .components()) {
+        for (UncertaintyComponent c : budget(compound, concentration, fitUncertainty, samplePathM, temperatureK,
+                pressureKPa).components()) {
             components.add(new UncertaintyComponent(c.name(), c.estimate(), c.standardUncertainty(),
                     c.sensitivity() * f, c.unit()));
         }

@@ -112,7 +112,7 @@ class AnalysisCommandsTest {
         ok("workspace-init", "--workspace", ws, "--admin", "root", "--name", "Admin");
         ok("user-add", "--workspace", ws, "--as", "root", "--login", "ana", "--name", "Ana Lyst", "--roles",
                 "analyst");
-        for (String code : List.of("P-1", "P-2", "P-3", "P-4", "P-5", "P-6")) {
+        for (String code : List.of("P-1", "P-2", "P-3", "P-4", "P-5", "P-6", "P-7", "P-8", "P-9")) {
             ok("project-add", "--workspace", ws, "--as", "ana", "--client", "Client " + code, "--code", code,
                     "--name", "Survey");
         }
@@ -257,6 +257,165 @@ class AnalysisCommandsTest {
         laterCampaignIsChartedAgainstThisOne(qaPlan, reportPlan);
         assertTrue(text.contains("Made under: Verified: audit chain of"), "the verification the report was made under");
         refusedAfterTampering(where, reportPlan, text);
+    }
+
+    /**
+     * A campaign whose QA file repeats zero gas 8 times: each analyte of the zero gas gets its method detection
+     * limit and minimum analyte uncertainty as stored QA checks, the report states them in a table, and N2O, absent
+     * from the stack, is shown below its MDL in the report while the export keeps its value.
+     */
+    @Test
+    void replicateZeroReadingsGiveMethodDetectionLimitsThatTheReportStates() throws Exception {
+        int zeros = 8;
+        Random noise = new Random(29);
+        Path qa = folder.resolve("qa-zeros.tgc");
+        try (ContainerWriter w = ContainerWriter.create(qa)) {
+            w.append(header(SampleKind.BACKGROUND, T0.minusSeconds(3600), null), bands.interferogram(Map.of(), noise));
+            w.append(header(SampleKind.SAMPLE, T0.minusSeconds(3000), MeasurementRole.CTS),
+                    bands.interferogram(Map.of("CO", CTS_PPM), noise));
+            for (int i = 0; i < zeros; i++) {
+                w.append(header(SampleKind.SAMPLE, T0.minusSeconds(2400 - 240L * i), MeasurementRole.ZERO),
+                        bands.interferogram(Map.of(), noise));
+            }
+            w.commit();
+        }
+        // a method of its own, so that these zero readings are no history of the other campaigns' charts
+        Path method = folder.resolve("zeros.method");
+        Files.writeString(method, methodFile("Zeros"));
+        ok("method-define", "--workspace", ws, "--as", "ana", "--method", method.toString());
+        Path qaPlan = folder.resolve("qa-zeros.plan");
+        String plan = qaPlanText("lib/library.manifest");
+        Files.writeString(qaPlan, plan.substring(0, plan.indexOf("[chart]")));
+        String[] where = { "--workspace", ws, "--as", "ana", "--project", "P-7", "--method", "Zeros" };
+        ok(concat(where, "quantify", "--backgrounds", qa.toString(), "--file", stackFile.toString()));
+        ok(concat(where, "qa", "--plan", qaPlan.toString(), "--qa-file", qa.toString()));
+        List<org.tracegas.qa.checks.MethodDetectionLimit> limits;
+        try (WorkspaceStore store = open()) {
+            Session s = ana(store);
+            String project = store.projects().findByCode(s, "P-7").orElseThrow().id();
+            VersionInfo version = store.versions().latest(VersionKind.METHOD, "Zeros").orElseThrow();
+            limits = org.tracegas.qa.checks.MethodDetectionLimit.fromOutcomes(
+                    org.tracegas.campaign.StoredQaChecks.load(store, s, project, version.id()));
+        }
+        assertEquals(List.of("CO", "N2O"), limits.stream().map(l -> l.analyte()).toList());
+        for (var l : limits) {
+            assertEquals(zeros, l.readings(), l.toString());
+            // t(7, 0.99) = 2.998 (40 CFR Part 136 Appendix B table, as reproduced in Wis. Adm. Code NR 252.0365)
+            assertEquals(2.998, l.t(), 0.0005, l.toString());
+            // S of 8 results of white noise lies within sigma sqrt(chi2(7)/7) for chi2(7) between its 0.1 % and
+            // 99.9 % points 0.598 and 24.32 (chi-square table, from memory): the fit's noise-limited sigma (MAU / 3)
+            // must account for the scatter the chain leaves in repeated zero readings
+            double ratio = l.standardDeviation() / (l.minimumAnalyteUncertainty() / 3);
+            assertTrue(ratio > Math.sqrt(0.598 / 7) && ratio < Math.sqrt(24.32 / 7), l + ": S / sigma " + ratio);
+        }
+
+        Path reportPlan = folder.resolve("report-zeros.plan");
+        Files.writeString(reportPlan, reportPlanText("o2.csv").replace("qa-plan = qa.plan", "qa-plan = qa-zeros.plan")
+                .replace("R-TEST-1", "R-TEST-7") + "\n[compound]\nname = N2O\nmolar-mass = 44.013\n");
+        Path report = folder.resolve("report-P-7");
+        ok(concat(where, "report", "--plan", reportPlan.toString(), "--out", report.toString()));
+        String text = pdfText(report);
+        assertTrue(text.contains("Method detection limits"), "the table's heading");
+        assertTrue(text.contains("t(n-1, 0.99) x S"), "the formula stated");
+        assertTrue(text.contains(PdfReportWriter.BELOW_MDL_CONVENTION.substring(0, 60)), "the convention stated");
+        List<String> csv = Files.readAllLines(report.resolve("results.csv"), StandardCharsets.UTF_8);
+        String n2o = csv.stream().filter(l -> l.startsWith("N2O,")).findFirst().orElseThrow(() -> new AssertionError(
+                "no N2O row in " + csv));
+        assertTrue(n2o.contains("< MDL"), "no N2O in the stack: below its MDL: " + n2o);
+        Double.parseDouble(n2o.split(",")[3]); // the value is kept in the export
+        assertTrue(text.contains("N2O 3 min"), text);
+        String co = csv.stream().filter(l -> l.startsWith("CO,")).findFirst().orElseThrow();
+        assertFalse(co.contains("< MDL"), "CO at 20 to 120 ppm is far above its MDL: " + co);
+    }
+
+    /**
+     * A method whose path source is the CTS: the campaign's CTS readings were made with 3 % more CTS gas in the
+     * cell than the QA plan states, which by Beer-Lambert (absorbance proportional to concentration times path)
+     * has the absorbance of a path 3 % longer than the nominal. Every result is then the nominal path over the
+     * path the CTS band gives times what the same method with the nominal path gives on the same spectra, its
+     * stored conditions name the CTS-derived path, and so does the report.
+     */
+    @Test
+    void ctsDerivedPathCorrectsEveryResultAndTheReportNamesIt() throws Exception {
+        double longer = 1.03;
+        double ctsPath;
+        Random noise = new Random(31);
+        Path qa = folder.resolve("qa-cts.tgc");
+        try (ContainerWriter w = ContainerWriter.create(qa)) {
+            w.append(header(SampleKind.BACKGROUND, T0.minusSeconds(3600), null), bands.interferogram(Map.of(), noise));
+            w.append(header(SampleKind.SAMPLE, T0.minusSeconds(3000), MeasurementRole.CTS),
+                    bands.interferogram(Map.of("CO", longer * CTS_PPM), noise));
+            w.append(header(SampleKind.SAMPLE, T0.plusSeconds(600), MeasurementRole.CTS),
+                    bands.interferogram(Map.of("CO", longer * CTS_PPM), noise));
+            w.commit();
+        }
+        Path qaPlan = folder.resolve("qa-cts.plan");
+        String plan = qaPlanText("lib/library.manifest");
+        Files.writeString(qaPlan, plan.substring(0, plan.indexOf("[chart]")));
+        Path nominal = folder.resolve("cts-nominal.method");
+        Files.writeString(nominal, methodFile("Nominal path"));
+        ok("method-define", "--workspace", ws, "--as", "ana", "--method", nominal.toString());
+        Path derived = folder.resolve("cts-derived.method");
+        Files.writeString(derived, methodFile("CTS path").replace("path-length = 4.85\n",
+                "path-length = 4.85\npath-source = cts-derived\n"));
+        ok("method-define", "--workspace", ws, "--as", "ana", "--method", derived.toString());
+
+        String[] cts = { "--workspace", ws, "--as", "ana", "--project", "P-8", "--method", "CTS path" };
+        err.reset();
+        assertEquals(ExitCode.BAD_INPUT, run(concat(cts, "quantify", "--backgrounds", qa.toString(), "--file",
+                stackFile.toString())), "the CTS path needs the QA plan");
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("--qa-plan"), err.toString());
+        ok(concat(cts, "quantify", "--backgrounds", qa.toString(), "--file", stackFile.toString(), "--qa-plan",
+                qaPlan.toString()));
+        ok("quantify", "--workspace", ws, "--as", "ana", "--project", "P-9", "--method", "Nominal path",
+                "--backgrounds", qa.toString(), "--file", stackFile.toString());
+        ok(concat(cts, "qa", "--plan", qaPlan.toString(), "--qa-file", qa.toString()));
+        try (WorkspaceStore store = open()) {
+            Session s = ana(store);
+            List<MinuteSeries.Point> fromCts = co(store, s, "P-8", "CTS path");
+            List<MinuteSeries.Point> fromNominal = co(store, s, "P-9", "Nominal path");
+            assertEquals(CO_PPM.length, fromCts.size());
+            double path = fromCts.get(0).conditions().pathM();
+            ctsPath = path;
+            // 3 % more CO on the path is, to Beer-Lambert, the absorbance of a 3 % longer path; the band area
+            // L_s = L_r (A_s/A_r)(C_r/C_s) reads less than that, as the strong CO lines at 7.7 cm-1 saturate and
+            // their band grows slower than the amount (curve of growth, Goody and Yung, from memory): here 2.1 %.
+            // The path is the band's, as the CTS check measured it: between 1.5 and 3 % over the nominal
+            assertTrue(path > 1.015 * 4.85 && path <= longer * 4.85, "CTS path " + path);
+            assertEquals(path, ctsCheckPath(store, s, "P-8"), 1e-9 * path, "the path the CTS check measured");
+            for (int i = 0; i < CO_PPM.length; i++) {
+                MinuteSeries.Point c = fromCts.get(i);
+                assertEquals("cts-derived", c.conditions().pathOrigin());
+                assertEquals("nominal", fromNominal.get(i).conditions().pathOrigin());
+                // C_corr = (L_r/L_s)... C_calc (EPA FTIR Protocol 11.2): the same fit, L_s the CTS path
+                assertEquals(fromNominal.get(i).ppm() * 4.85 / path, c.ppm(), 1e-9 * c.ppm(), "sample " + i);
+            }
+        }
+        Path reportPlan = folder.resolve("report-cts.plan");
+        Files.writeString(reportPlan, reportPlanText("o2.csv").replace("qa-plan = qa.plan", "qa-plan = qa-cts.plan")
+                .replace("R-TEST-1", "R-TEST-8"));
+        Path report = folder.resolve("report-P-8");
+        ok(concat(cts, "report", "--plan", reportPlan.toString(), "--out", report.toString()));
+        String text = pdfText(report);
+        assertTrue(text.contains("path cts-derived"), "the report names the path's source: " + text);
+        // the budget is at the path the results were corrected to (4 significant digits, as the report prints)
+        String budgetPath = new java.math.BigDecimal(ctsPath).round(new java.math.MathContext(4)).stripTrailingZeros()
+                .toPlainString();
+        assertTrue(text.contains("path length " + budgetPath + " 0.05 m"), "the budget's path " + budgetPath);
+    }
+
+    /** The mean of the stored CTS path length checks of a project. */
+    private static double ctsCheckPath(WorkspaceStore store, Session s, String code) {
+        String project = store.projects().findByCode(s, code).orElseThrow().id();
+        return store.qa().checks(s, project).stream().filter(c -> c.outcome().check().equals("CTS path length"))
+                .mapToDouble(c -> c.outcome().measured()).average().orElseThrow();
+    }
+
+    private static List<MinuteSeries.Point> co(WorkspaceStore store, Session s, String code, String method) {
+        String project = store.projects().findByCode(s, code).orElseThrow().id();
+        VersionInfo version = store.versions().latest(VersionKind.METHOD, method).orElseThrow();
+        return MinuteSeries.of(store.projects().measurements(s, project), store.results().results(s, project),
+                version.id()).compound("CO");
     }
 
     /**

@@ -21,7 +21,8 @@ import org.tracegas.store.WorkspaceStore;
 record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path> files) {
 
     static final String USAGE_LINE = "--project <code> --method <name>\n"
-            + "       --backgrounds <container> [--backgrounds ...] --file <container> [--file ...]";
+            + "       --backgrounds <container> [--backgrounds ...] --file <container> [--file ...]\n"
+            + "       [--qa-plan <file>]";
 
     QuantifyArguments {
         backgroundFiles = List.copyOf(backgroundFiles);
@@ -72,7 +73,7 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
         List<Path> backgroundFiles = Options.repeated(rest, "--backgrounds", rest2);
         // the repeated options are among the accepted ones only so that a mistyped one is told its nearest name
         Options options = Options.parse(rest2, WorkspaceLogin.optionsWith("--project", "--method",
-                "--method-version", "--file", "--backgrounds"));
+                "--method-version", "--file", "--backgrounds", "--qa-plan"));
         if (files.isEmpty() || backgroundFiles.isEmpty()) {
             throw new UsageException("give at least one --file and one --backgrounds file");
         }

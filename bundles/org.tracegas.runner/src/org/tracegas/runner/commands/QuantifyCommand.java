@@ -6,18 +6,24 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
 
 import org.eclipse.core.runtime.RegistryFactory;
+import org.tracegas.campaign.ContainerContents;
+import org.tracegas.campaign.CtsPath;
 import org.tracegas.campaign.FileMeasurements;
 import org.tracegas.campaign.MeasurementQuantification;
 import org.tracegas.campaign.ProjectQuantification;
+import org.tracegas.campaign.QaPlan;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ImportReader;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.importer.container.ContainerImportReader;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.preprocess.StepRegistry;
+import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.BatchOutcome;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.Command;
@@ -91,7 +97,9 @@ public final class QuantifyCommand implements Command {
                   result. Every sample is checked before anything is stored. A run that stops (cancelled,
                   killed) is finished by running it again.
                   The second form streams interferogram containers: backgrounds are the background records of the
-                  --backgrounds files; each sample is ratioed against the last one before it.
+                  --backgrounds files; each sample is ratioed against the last one before it. A method whose path
+                  source is cts-derived needs --qa-plan: the CTS readings among the --backgrounds files give the
+                  effective path (mean of the readings) every result is corrected to.
                 exit codes: 0 done, 2 wrong arguments, 3 bad input (file, record and field named; nothing
                   stored), or in the second form the project holds this version's results already or has an
                   unfinished batch-split batch of it (named), 4 cancelled (what was stored stays), 5 failure""";
@@ -187,9 +195,32 @@ public final class QuantifyCommand implements Command {
                 return ExitCode.BAD_INPUT;
             }
             StoredMethods.Found found = checked.found();
+            OptionalDouble ctsPath = OptionalDouble.empty();
+            if (found.method().pathSource() == PathOrigin.CTS_DERIVED) {
+                if (!options.has("--qa-plan")) {
+                    context.err().println("tracegas quantify: method '" + found.method().method().name() + "' takes "
+                            + "its path from the CTS readings: give --qa-plan; nothing done");
+                    return ExitCode.BAD_INPUT;
+                }
+                try {
+                    ContainerContents qa = ContainerContents.read(arguments.backgroundFiles(),
+                            new InterferogramTransform(found.method().transform()));
+                    ctsPath = OptionalDouble.of(CtsPath.measure(store, QaPlan.read(options.path("--qa-plan")),
+                            found.method(), qa, StoredMethods.SOFTWARE));
+                } catch (FileFormatException | ImportException e) {
+                    context.err().println("tracegas quantify: " + e.getMessage() + "; nothing done");
+                    return ExitCode.BAD_INPUT;
+                }
+                context.out().printf(java.util.Locale.ROOT, "Path: %.4f m, derived from the CTS readings (nominal "
+                        + "%s m)%n", ctsPath.getAsDouble(), found.method().method().pathLengthMetres());
+            } else if (options.has("--qa-plan")) {
+                context.err().println("tracegas quantify: method '" + found.method().method().name() + "' corrects "
+                        + "to its nominal path; --qa-plan is for a method whose path source is cts-derived");
+                return ExitCode.USAGE;
+            }
             context.progress().begin("quantify");
             BatchOutcome outcome = job.run(found.version(), found.method(), arguments.files(),
-                    checked.inputs().samples(), checked.inputs().backgrounds(), context.progress()::update,
+                    checked.inputs().samples(), checked.inputs().backgrounds(), ctsPath, context.progress()::update,
                     cancel(context));
             if (outcome.cancelled()) {
                 context.err().println("tracegas quantify: cancelled after " + outcome.delivered() + " spectra");
