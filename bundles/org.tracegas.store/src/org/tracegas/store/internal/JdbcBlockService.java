@@ -11,7 +11,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.UUID;
 
 import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
@@ -157,7 +156,7 @@ final class JdbcBlockService implements BlockService {
         List<AuditEntry> audit = new ArrayList<>(block.size());
         List<List<RowBindings.RowRef>> rows = new ArrayList<>(block.size());
         for (ProcessedSpectrum p : block) {
-            String measurementId = UUID.randomUUID().toString();
+            String measurementId = RowIds.next();
             // stored to the microsecond, the precision both databases keep, so the hash is that of the row
             Instant time = p.time().truncatedTo(ChronoUnit.MICROS);
             Map<String, Object> measurement = JdbcProjectService.measurementRow(measurementId, projectId, p.kind(),

@@ -14,7 +14,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.UUID;
 import java.util.stream.Collectors;
 
 import org.tracegas.audit.AuditAction;
@@ -89,7 +88,7 @@ final class JdbcResultService implements ResultService {
     }
 
     static ResultInfo newInfo(Session actor, String projectId, NewResult result, Instant recorded) {
-        return new ResultInfo(UUID.randomUUID().toString(), projectId, result, actor.userId(), recorded);
+        return new ResultInfo(RowIds.next(), projectId, result, actor.userId(), recorded);
     }
 
     /** Binds a result without recipe to {@link #INSERT}. */
@@ -147,14 +146,20 @@ final class JdbcResultService implements ResultService {
      */
     static void requireVersions(Tx tx, NewResult result, Set<String> checked, String where) throws SQLException {
         if (checked.add("method:" + result.methodVersionId())) {
-            requireKind(JdbcVersionService.load(tx, result.methodVersionId()), VersionKind.METHOD,
-                    where + "methodVersionId");
-            JdbcVersionService.freeze(tx, result.methodVersionId());
+            requireKindAndFreeze(tx, result.methodVersionId(), VersionKind.METHOD, where + "methodVersionId");
         }
         if (checked.add("library:" + result.libraryVersionId())) {
-            requireKind(JdbcVersionService.load(tx, result.libraryVersionId()), VersionKind.LIBRARY,
-                    where + "libraryVersionId");
-            JdbcVersionService.freeze(tx, result.libraryVersionId());
+            requireKindAndFreeze(tx, result.libraryVersionId(), VersionKind.LIBRARY, where + "libraryVersionId");
+        }
+    }
+
+    private static void requireKindAndFreeze(Tx tx, String versionId, VersionKind expected, String field)
+            throws SQLException {
+        VersionInfo version = JdbcVersionService.load(tx, versionId);
+        requireKind(version, expected, field);
+        // a frozen version stays frozen: only the first use writes the flag, later blocks only read it
+        if (!version.frozen()) {
+            JdbcVersionService.freeze(tx, versionId);
         }
     }
 

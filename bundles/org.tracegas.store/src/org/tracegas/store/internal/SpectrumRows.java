@@ -5,7 +5,6 @@ import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.util.HashMap;
 import java.util.Map;
-import java.util.UUID;
 
 import org.tracegas.model.SpectralContent;
 import org.tracegas.spectrum.AxisUnit;
@@ -40,7 +39,7 @@ final class SpectrumRows {
         SpectralAxis axis = s.axis();
         byte[] values = SpectrumCodec.encode(s.toArray(), input.encoding());
         Map<String, Object> row = new HashMap<>();
-        row.put("id", UUID.randomUUID().toString());
+        row.put("id", RowIds.next());
         row.put("project_id", projectId);
         row.put("measurement_id", input.measurementId());
         row.put("content", input.content().name());
