@@ -8,7 +8,8 @@ import java.util.concurrent.BlockingQueue;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
 import java.util.concurrent.ConcurrentLinkedQueue;
-import java.util.concurrent.ForkJoinPool;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
 
 import org.tracegas.quantify.ProgressListener;
 import org.tracegas.store.ProcessedSpectrum;
@@ -16,8 +17,8 @@ import org.tracegas.store.ProcessedSpectrum;
 /**
  * Collects processed spectra into blocks of a fixed size (the last one may be smaller) and stores them behind
  * the caller's back, so that the batch reads and fits the next block while one is being written: each full
- * block is encoded on a pool thread and then stored, block after block in order, by one storage thread fed by
- * a short queue. A block the sink refuses stops the storing: the blocks queued after it are dropped, so what
+ * block is encoded on an encoding thread and then stored, block after block in order, by one storage thread
+ * fed by a short queue. A block the sink refuses stops the storing: the blocks queued after it are dropped, so what
  * is stored is always the first blocks in order, and the refusal is thrown to the caller. Progress is told
  * on the caller's thread, once per stored block, so what it reports is stored. Not thread-safe: the batch
  * delivers results on one thread.
@@ -29,7 +30,7 @@ final class BlockBuffer<E> implements AutoCloseable {
     /** Stores blocks in two steps, so that the first can run apart from the database work. */
     interface Sink<E> {
 
-        /** Makes a block ready for storing; called on a pool thread, for several blocks at once. */
+        /** Makes a block ready for storing; called on the encoding thread, ahead of the block's turn. */
         E encode(List<ProcessedSpectrum> block);
 
         /** Stores one encoded block, all of it or nothing; called on the storage thread, in order. */
@@ -51,13 +52,18 @@ final class BlockBuffer<E> implements AutoCloseable {
     private final BlockingQueue<Queued<E>> queue = new ArrayBlockingQueue<>(QUEUED_BLOCKS);
     /** Sizes of the blocks stored and not yet told, in order. */
     private final Queue<Integer> storedBlocks = new ConcurrentLinkedQueue<>();
+    private final ExecutorService encoder = Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "block encoding");
+        t.setDaemon(true);
+        return t;
+    });
     private final Thread writer;
     private volatile RuntimeException failure;
     private boolean ended;
     private long stored;
 
     /**
-     * Starts the storage thread.
+     * Starts the encoding and the storage thread.
      *
      * @param total number of spectra expected, for the progress listener, or -1 if not known
      * @throws IllegalArgumentException if the block size is below 1
@@ -116,7 +122,7 @@ final class BlockBuffer<E> implements AutoCloseable {
         return failure != null;
     }
 
-    /** Stops the storage thread after the blocks handed over, waiting for it; pending spectra are not stored. */
+    /** Stops the threads after the blocks handed over, waiting for them; pending spectra are not stored. */
     @Override
     public void close() {
         end();
@@ -125,7 +131,7 @@ final class BlockBuffer<E> implements AutoCloseable {
     private void handOver() {
         List<ProcessedSpectrum> block = List.copyOf(pending);
         pending.clear();
-        put(new Queued<>(CompletableFuture.supplyAsync(() -> sink.encode(block), ForkJoinPool.commonPool()),
+        put(new Queued<>(CompletableFuture.supplyAsync(() -> sink.encode(block), encoder),
                 block.size()));
     }
 
@@ -144,6 +150,7 @@ final class BlockBuffer<E> implements AutoCloseable {
                 interrupted = true;
             }
         }
+        encoder.shutdown();
         if (interrupted) {
             Thread.currentThread().interrupt();
         }
