@@ -7,9 +7,15 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import java.nio.ByteBuffer;
 import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
+import java.time.Instant;
+import java.time.OffsetDateTime;
+import java.util.Arrays;
 import java.util.HexFormat;
+import java.util.List;
 
 import org.junit.jupiter.api.Test;
+import org.tracegas.audit.CanonicalRow.Column;
+import org.tracegas.audit.CanonicalRow.Type;
 
 class CanonicalRowTest {
 
@@ -32,11 +38,30 @@ class CanonicalRowTest {
         expected.put((byte) 5).putInt(3).put(new byte[] {7, 8, 9});
         expected.put((byte) 6).putLong(1_773_734_400_000_000L);
         String want = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(
-                java.util.Arrays.copyOf(expected.array(), expected.position())));
+                Arrays.copyOf(expected.array(), expected.position())));
 
         String got = CanonicalRow.of("result").text("CO₂").integer(-5L).real(0.1).bool(true).real(null)
                 .bytes(new byte[] {7, 8, 9}).time(1_773_734_400_000_000L).sha256Hex();
         assertEquals(want, got);
+        // the same row from the values as a writer binds them: 1_773_734_400 s after the epoch is 2026-03-17T08:00Z
+        List<Column> columns = List.of(new Column("compound", Type.TEXT), new Column("n", Type.INTEGER),
+                new Column("c", Type.REAL), new Column("ok", Type.BOOLEAN), new Column("u", Type.REAL),
+                new Column("b", Type.BYTES), new Column("at", Type.TIME));
+        assertEquals(want, CanonicalRow.sha256("result", columns, Arrays.asList("CO₂", -5, 0.1, true, null,
+                new byte[] {7, 8, 9}, Instant.parse("2026-03-17T08:00:00Z"))));
+        assertEquals(want, CanonicalRow.sha256("result", columns, Arrays.asList("CO₂", -5L, 0.1, true, null,
+                new byte[] {7, 8, 9}, OffsetDateTime.parse("2026-03-17T09:00:00+01:00"))));
+    }
+
+    @Test
+    void aValueOfTheWrongTypeIsRefusedNamingItsColumn() {
+        List<Column> columns = List.of(new Column("kind", Type.TEXT));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> CanonicalRow.sha256("measurement", columns, List.of(Type.TEXT)));
+        assertEquals("value of column kind: a Type is not a TEXT value", e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> CanonicalRow.sha256("measurement", columns,
+                List.of()));
+        assertEquals("values: 0 given for 1 columns of measurement", e.getMessage());
     }
 
     @Test

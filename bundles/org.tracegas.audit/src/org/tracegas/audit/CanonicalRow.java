@@ -3,6 +3,7 @@ package org.tracegas.audit;
 import java.nio.charset.StandardCharsets;
 import java.sql.ResultSet;
 import java.sql.SQLException;
+import java.time.Instant;
 import java.time.OffsetDateTime;
 import java.util.List;
 
@@ -73,32 +74,95 @@ public final class CanonicalRow {
     public static String sha256(String kind, List<Column> columns, ResultSet rs) throws SQLException {
         CanonicalRow row = of(kind);
         for (Column col : columns) {
-            row.column(col, rs);
+            row.value(col, read(col, rs));
         }
         return row.sha256Hex();
     }
 
-    private void column(Column col, ResultSet rs) throws SQLException {
-        switch (col.type()) {
-            case TEXT -> text(rs.getString(col.name()));
+    /**
+     * SHA-256 (lower-case hex) of a row from the values it is written with, {@code values.get(i)} being the
+     * value of {@code columns.get(i)} (see {@link #value}): the hash {@link #sha256(String, List, ResultSet)}
+     * gives once the row is stored, taken without reading it back.
+     *
+     * @throws IllegalArgumentException if the counts differ or a value is not of its column's type
+     */
+    public static String sha256(String kind, List<Column> columns, List<?> values) {
+        if (values.size() != columns.size()) {
+            throw new IllegalArgumentException("values: " + values.size() + " given for " + columns.size()
+                    + " columns of " + kind);
+        }
+        CanonicalRow row = of(kind);
+        for (int i = 0; i < columns.size(); i++) {
+            row.value(columns.get(i), values.get(i));
+        }
+        return row.sha256Hex();
+    }
+
+    /** The value of a column of the current row, as {@link #value} takes it. */
+    private static Object read(Column col, ResultSet rs) throws SQLException {
+        Object v = switch (col.type()) {
+            case TEXT -> rs.getString(col.name());
+            case INTEGER -> rs.getLong(col.name());
+            case REAL -> rs.getDouble(col.name());
+            case BOOLEAN -> rs.getBoolean(col.name());
+            case BYTES -> rs.getBytes(col.name());
+            case TIME -> rs.getObject(col.name(), OffsetDateTime.class);
+        };
+        return rs.wasNull() ? null : v;
+    }
+
+    /**
+     * Appends one field of a column's type, from its value as written to or read from the database: a
+     * {@link String} for text, an integral {@link Number} for integer, a {@link Number} for real (its double
+     * value), a {@link Boolean}, a {@code byte[]} for bytes, an {@link Instant} or {@link OffsetDateTime} for
+     * time (whole microseconds: a value written must already be truncated to them, as both databases keep no
+     * more); null for SQL NULL of any type. The one encoding of a row's values, whether before they are
+     * written or read back.
+     *
+     * @throws IllegalArgumentException naming the column if the value is not of its type
+     */
+    public CanonicalRow value(Column column, Object value) {
+        if (value == null) {
+            return nul();
+        }
+        switch (column.type()) {
+            case TEXT -> {
+                if (value instanceof String s) {
+                    return text(s);
+                }
+            }
             case INTEGER -> {
-                long v = rs.getLong(col.name());
-                integer(rs.wasNull() ? null : v);
+                if (value instanceof Long || value instanceof Integer || value instanceof Short
+                        || value instanceof Byte) {
+                    return integer(((Number) value).longValue());
+                }
             }
             case REAL -> {
-                double v = rs.getDouble(col.name());
-                real(rs.wasNull() ? null : v);
+                if (value instanceof Number n) {
+                    return real(n.doubleValue());
+                }
             }
             case BOOLEAN -> {
-                boolean v = rs.getBoolean(col.name());
-                bool(rs.wasNull() ? null : v);
+                if (value instanceof Boolean b) {
+                    return bool(b);
+                }
             }
-            case BYTES -> bytes(rs.getBytes(col.name()));
+            case BYTES -> {
+                if (value instanceof byte[] b) {
+                    return bytes(b);
+                }
+            }
             case TIME -> {
-                OffsetDateTime t = rs.getObject(col.name(), OffsetDateTime.class);
-                time(t == null ? null : ChainHash.micros(t.toInstant()));
+                if (value instanceof Instant t) {
+                    return time(ChainHash.micros(t));
+                }
+                if (value instanceof OffsetDateTime t) {
+                    return time(ChainHash.micros(t.toInstant()));
+                }
             }
         }
+        throw new IllegalArgumentException("value of column " + column.name() + ": a " + value.getClass()
+                .getSimpleName() + " is not a " + column.type() + " value");
     }
 
     public CanonicalRow text(String value) {

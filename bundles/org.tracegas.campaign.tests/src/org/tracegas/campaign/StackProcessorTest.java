@@ -174,9 +174,11 @@ class StackProcessorTest {
 
         BatchOutcome outcome = processor(2).run(List.of(file), 5, (done, total) -> cancel.cancel(), cancel);
 
-        assertTrue(outcome.cancelled());
-        assertEquals(2, outcome.delivered());
-        assertEquals(2, store.projects().measurements(analyst, project.id()).size());
+        // the first block is told once stored, while the next spectra are fitted: the cancel stops the run
+        // somewhere after it, or comes after the last spectrum was delivered; either way what was delivered is stored
+        assertTrue(outcome.delivered() >= 2, outcome.delivered() + " delivered");
+        assertEquals(outcome.cancelled(), outcome.delivered() < 5, outcome.delivered() + " delivered");
+        assertEquals(outcome.delivered(), store.projects().measurements(analyst, project.id()).size());
     }
 
     @Test

@@ -20,6 +20,8 @@ import org.tracegas.quantify.BatchQuantifier;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.quantify.ProgressListener;
 import org.tracegas.quantify.Sample;
+import org.tracegas.store.BlockService;
+import org.tracegas.store.EncodedBlock;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
@@ -27,8 +29,8 @@ import org.tracegas.store.WorkspaceStore;
 /**
  * The batch path of a campaign: streams the interferograms of container files one record at a time,
  * transforms and ratios them, fits them on all cores, and stores the measurements with their absorbance and
- * their results in blocks, each block in one transaction. Nothing holds more than the records in flight and
- * one block, so a year of data runs in constant memory.
+ * their results in blocks, each block in one transaction, written while the next block is read and fitted.
+ * Nothing holds more than the records in flight and a few blocks, so a year of data runs in constant memory.
  */
 public final class StackProcessor {
 
@@ -81,30 +83,43 @@ public final class StackProcessor {
     /**
      * Processes the files in order and stores the spectra block by block. The spectra fitted so far are
      * stored also when the run is cancelled or a record cannot be processed (before that error is thrown), so
-     * everything fitted in order before the stop is in the workspace.
+     * everything fitted in order before the stop is in the workspace. A block the workspace refuses stops the
+     * run with its error; the blocks before it stay stored, none after it is, so a later run resumes there.
      *
      * @param expected number of interferograms, for progress
      * @param progress told after each stored block, with the number of spectra stored so far
      * @return how many spectra were processed and stored, and whether the run was cancelled
      */
     public BatchOutcome run(List<Path> files, long expected, ProgressListener progress, CancellationFlag cancel) {
-        BlockBuffer buffer = new BlockBuffer(blockSize, block -> store.blocks().store(actor, projectId, block),
-                progress, expected);
-        BatchOutcome fitted;
-        try {
-            fitted = fit(files, expected, buffer::add, cancel);
-        } catch (RuntimeException e) {
-            if (!buffer.failed()) {
-                try {
-                    buffer.flush();
-                } catch (RuntimeException storing) {
-                    e.addSuppressed(storing);
-                }
+        BlockService blocks = store.blocks();
+        BlockBuffer.Sink<EncodedBlock> sink = new BlockBuffer.Sink<>() {
+            @Override
+            public EncodedBlock encode(List<ProcessedSpectrum> block) {
+                return blocks.encode(actor, projectId, block);
             }
-            throw e;
+
+            @Override
+            public void store(EncodedBlock block) {
+                blocks.store(block);
+            }
+        };
+        try (BlockBuffer<EncodedBlock> buffer = new BlockBuffer<>(blockSize, sink, progress, expected)) {
+            BatchOutcome fitted;
+            try {
+                fitted = fit(files, expected, buffer::add, cancel);
+            } catch (RuntimeException e) {
+                if (!buffer.failed()) {
+                    try {
+                        buffer.finish();
+                    } catch (RuntimeException storing) {
+                        e.addSuppressed(storing);
+                    }
+                }
+                throw e;
+            }
+            buffer.finish();
+            return new BatchOutcome(buffer.stored(), fitted.cancelled());
         }
-        buffer.flush();
-        return new BatchOutcome(buffer.stored(), fitted.cancelled());
     }
 
     /**

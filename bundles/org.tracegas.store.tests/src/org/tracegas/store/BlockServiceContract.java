@@ -10,11 +10,13 @@ import java.security.MessageDigest;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
+import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.CompletableFuture;
 import java.util.stream.Collectors;
 
 import org.junit.jupiter.api.AfterEach;
@@ -83,6 +85,43 @@ abstract class BlockServiceContract {
         assertTrue(f.store.versions().version(f.method.id()).frozen());
         assertTrue(f.store.versions().version(f.library.id()).frozen());
         assertTrue(f.store.verifyAuditTrail().intact());
+    }
+
+    @Test
+    void blockEncodedOnAnotherThreadIsBoundToTheAuditTrailAsStored() throws Exception {
+        List<ProcessedSpectrum> block = new ArrayList<>();
+        for (ProcessedSpectrum p : SampleBlocks.block(0, 3, 2, f.method.id(), f.library.id())) {
+            // a time finer than the microsecond both databases keep
+            block.add(new ProcessedSpectrum(p.kind(), p.time().plusNanos(123_456_789), p.cellTemperature(),
+                    p.cellPressure(), p.absorbance(), p.encoding(), p.results()));
+        }
+        EncodedBlock encoded = CompletableFuture.supplyAsync(() -> f.store.blocks().encode(f.analyst,
+                f.project.id(), block)).get();
+        long before = f.count(COUNT_ROWS);
+        assertEquals(before, f.count(COUNT_ROWS), "encoding writes nothing");
+
+        List<StoredMeasurement> stored = f.store.blocks().store(encoded);
+
+        assertEquals(3, stored.size());
+        List<MeasurementInfo> measurements = f.store.projects().measurements(f.analyst, f.project.id());
+        assertEquals(block.get(0).time().truncatedTo(ChronoUnit.MICROS), measurements.get(0).time());
+        // the hashes taken from the values before the insert are those the verification takes from the rows
+        WorkspaceVerification v = f.store.audit().verifyWorkspace(List.of());
+        assertEquals(List.of(), v.dataFindings());
+        assertTrue(v.intact());
+    }
+
+    @Test
+    void encodedBlockIsStoredOnlyWithItsActorsAccessAndOnlyByItsStore() throws Exception {
+        long before = f.count(COUNT_ROWS);
+        EncodedBlock byReader = f.store.blocks().encode(f.reader, f.project.id(),
+                SampleBlocks.block(0, 2, 1, f.method.id(), f.library.id()));
+        assertThrows(AccessDeniedException.class, () -> f.store.blocks().store(byReader));
+        EncodedBlock foreign = () -> 1;
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> f.store.blocks().store(foreign));
+        assertTrue(e.getMessage().startsWith("block: not encoded by this store"), e.getMessage());
+        assertEquals(before, f.count(COUNT_ROWS));
     }
 
     @Test

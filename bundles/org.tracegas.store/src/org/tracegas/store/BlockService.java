@@ -28,4 +28,27 @@ public interface BlockService {
      * @throws NoSuchObjectException    if the project or a named version does not exist
      */
     List<StoredMeasurement> store(Session actor, String projectId, List<ProcessedSpectrum> block);
+
+    /**
+     * The first half of {@link #store(Session, String, List)} without the database: assigns the ids, encodes
+     * the rows as they are stored (times to the microsecond), hashes them for the audit binding and makes the
+     * audit records. It may run on any thread, so that a batch encodes one block while the previous one is
+     * being written; the results are recorded at the time of this call.
+     *
+     * @param block the processed spectra, at least one
+     * @throws IllegalArgumentException naming the wrong argument or the index ({@code block[i]}) of a null entry
+     */
+    EncodedBlock encode(Session actor, String projectId, List<ProcessedSpectrum> block);
+
+    /**
+     * The second half of {@link #store(Session, String, List)}: stores a block encoded by {@link #encode}, all
+     * of it or, on any failure, nothing, with the access of the actor it was encoded for.
+     *
+     * @return what was created, one entry per processed spectrum in input order
+     * @throws IllegalArgumentException if the block was not encoded by this store, or as for
+     *                                  {@link #store(Session, String, List)}
+     * @throws AccessDeniedException    without write access to the project
+     * @throws NoSuchObjectException    if the project or a named version does not exist
+     */
+    List<StoredMeasurement> store(EncodedBlock block);
 }

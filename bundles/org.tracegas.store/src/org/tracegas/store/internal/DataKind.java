@@ -7,8 +7,12 @@ import static org.tracegas.audit.CanonicalRow.Type.REAL;
 import static org.tracegas.audit.CanonicalRow.Type.TEXT;
 import static org.tracegas.audit.CanonicalRow.Type.TIME;
 
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.stream.Collectors;
 
 import org.tracegas.audit.CanonicalRow;
@@ -130,7 +134,54 @@ enum DataKind {
     }
 
     /** SHA-256 of the current row of a result set holding the bound columns. */
-    String sha256(java.sql.ResultSet rs) throws java.sql.SQLException {
+    String sha256(ResultSet rs) throws SQLException {
         return CanonicalRow.sha256(label, columns, rs);
+    }
+
+    /**
+     * SHA-256 of a row from the values it is inserted with ({@link #bind}): the hash {@link #sha256(ResultSet)}
+     * gives for it once stored, so a block's rows are bound without reading them back.
+     *
+     * @param row the value of every bound column, by column name
+     * @throws IllegalStateException naming a bound column the row lacks
+     */
+    String sha256(Map<String, ?> row) {
+        return CanonicalRow.sha256(label, columns, inColumnOrder(row));
+    }
+
+    /**
+     * INSERT of a row with every bound column, in their order, plus columns with a fixed value.
+     *
+     * @param fixed column names and SQL values, e.g. {@code "row_version", "0"}
+     */
+    String insert(String... fixed) {
+        List<String> names = new ArrayList<>();
+        List<String> values = new ArrayList<>();
+        for (Column c : columns) {
+            names.add(c.name());
+            values.add("?");
+        }
+        for (int i = 0; i < fixed.length; i += 2) {
+            names.add(fixed[i]);
+            values.add(fixed[i + 1]);
+        }
+        return "INSERT INTO " + table + " (" + String.join(", ", names) + ") VALUES (" + String.join(", ", values)
+                + ")";
+    }
+
+    /** Binds a row's values, by column name, to the parameters of {@link #insert}. */
+    void bind(PreparedStatement ps, Map<String, ?> row) throws SQLException {
+        Tx.bind(ps, inColumnOrder(row).toArray());
+    }
+
+    private List<Object> inColumnOrder(Map<String, ?> row) {
+        List<Object> values = new ArrayList<>(columns.size());
+        for (Column c : columns) {
+            if (!row.containsKey(c.name())) {
+                throw new IllegalStateException(label + " row: no value for column " + c.name());
+            }
+            values.add(row.get(c.name()));
+        }
+        return values;
     }
 }

@@ -77,11 +77,10 @@ final class JdbcAnalysisService implements AnalysisService {
                     ps.executeUpdate();
                 }
                 List<ResultInfo> rows = new ArrayList<>(a.results().size());
-                try (PreparedStatement ps = tx.connection().prepareStatement(JdbcResultService.INSERT_WITH_RECIPE)) {
+                try (PreparedStatement ps = tx.connection().prepareStatement(JdbcResultService.INSERT)) {
                     for (NewResult r : a.results()) {
                         ResultInfo row = JdbcResultService.newInfo(actor, projectId, r, recorded);
-                        JdbcResultService.bindInsert(ps, row);
-                        ps.setString(JdbcResultService.RECIPE_PARAMETER, recipeSha);
+                        DataKind.RESULT.bind(ps, JdbcResultService.row(row, recipeSha));
                         ps.addBatch();
                         rows.add(row);
                     }

@@ -11,7 +11,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.UUID;
 
 import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
@@ -19,6 +18,7 @@ import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.store.BlockService;
+import org.tracegas.store.EncodedBlock;
 import org.tracegas.store.NewResult;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.ResultInfo;
@@ -36,6 +36,20 @@ final class JdbcBlockService implements BlockService {
             int resultCount) {
     }
 
+    /**
+     * A block as {@link #encode} made it: the rows by table, each by column name as it is inserted, and what
+     * inserting them writes, with every bound row's hash taken from those values.
+     */
+    record Encoded(Session actor, String projectId, List<ProcessedSpectrum> block,
+            List<Map<String, Object>> measurements, List<Map<String, Object>> spectra,
+            List<Map<String, Object>> results, Written written) implements EncodedBlock {
+
+        @Override
+        public int size() {
+            return block.size();
+        }
+    }
+
     private final Transactions transactions;
 
     JdbcBlockService(Transactions transactions) {
@@ -44,14 +58,33 @@ final class JdbcBlockService implements BlockService {
 
     @Override
     public List<StoredMeasurement> store(Session actor, String projectId, List<ProcessedSpectrum> block) {
+        return store(encode(actor, projectId, block));
+    }
+
+    @Override
+    public EncodedBlock encode(Session actor, String projectId, List<ProcessedSpectrum> block) {
+        if (actor == null) {
+            throw new IllegalArgumentException("actor must not be null");
+        }
+        if (projectId == null) {
+            throw new IllegalArgumentException("projectId must not be null");
+        }
         requireEntries(block);
         if (block.isEmpty()) {
             throw new IllegalArgumentException("block must hold at least one processed spectrum");
         }
-        return transactions.run("storing a block of " + block.size() + " processed spectra in project " + projectId,
-                tx -> {
-                    Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
-                    Written written = insert(tx, actor, projectId, block);
+        return encodeRows(actor, projectId, block);
+    }
+
+    @Override
+    public List<StoredMeasurement> store(EncodedBlock block) {
+        if (!(block instanceof Encoded encoded)) {
+            throw new IllegalArgumentException("block: not encoded by this store's encode, was " + block);
+        }
+        return transactions.run("storing a block of " + encoded.size() + " processed spectra in project "
+                + encoded.projectId(), tx -> {
+                    Guard.requireProject(tx, encoded.actor(), encoded.projectId(), AccessLevel.WRITE);
+                    Written written = insert(tx, encoded);
                     tx.auditAll(written.audit(), written.rows());
                     return written.stored();
                 });
@@ -69,14 +102,20 @@ final class JdbcBlockService implements BlockService {
         }
     }
 
-    /**
-     * Inserts measurements, spectra and results of a block with one JDBC batch per table. The audit records
-     * are returned, not appended, so that the caller appends them last: the audit chain head stays locked
-     * only for the end of the transaction.
-     */
+    /** As {@link #insert(Tx, Encoded)}, encoding the block first. */
     static Written insert(Tx tx, Session actor, String projectId, List<ProcessedSpectrum> block)
             throws SQLException {
+        return insert(tx, encodeRows(actor, projectId, block));
+    }
+
+    /**
+     * Inserts measurements, spectra and results of an encoded block with one JDBC batch per table. The audit
+     * records are returned, not appended, so that the caller appends them last: the audit chain head stays
+     * locked only for the end of the transaction.
+     */
+    static Written insert(Tx tx, Encoded encoded) throws SQLException {
         Set<String> checked = new HashSet<>();
+        List<ProcessedSpectrum> block = encoded.block();
         for (int i = 0; i < block.size(); i++) {
             List<NewResult> results = block.get(i).results();
             for (int j = 0; j < results.size(); j++) {
@@ -84,75 +123,81 @@ final class JdbcBlockService implements BlockService {
                         "block[" + i + "].results[" + j + "].");
             }
         }
+        insertAll(tx, JdbcProjectService.INSERT_MEASUREMENT, DataKind.MEASUREMENT, encoded.measurements());
+        insertAll(tx, SpectrumRows.INSERT, DataKind.SPECTRAL_DATA, encoded.spectra());
+        insertAll(tx, JdbcResultService.INSERT, DataKind.RESULT, encoded.results());
+        return encoded.written();
+    }
+
+    private static void insertAll(Tx tx, String insert, DataKind kind, List<Map<String, Object>> rows)
+            throws SQLException {
+        if (rows.isEmpty()) {
+            return;
+        }
+        try (PreparedStatement ps = tx.connection().prepareStatement(insert)) {
+            for (Map<String, Object> row : rows) {
+                kind.bind(ps, row);
+                ps.addBatch();
+            }
+            ps.executeBatch();
+        }
+    }
+
+    /**
+     * Assigns the ids, encodes the rows as they are inserted and hashes them, and makes the audit records:
+     * everything but the database work, so that it can run on any thread before the transaction.
+     */
+    private static Encoded encodeRows(Session actor, String projectId, List<ProcessedSpectrum> block) {
         Instant recorded = Instant.now().truncatedTo(ChronoUnit.MICROS);
-        List<String> measurementIds = new ArrayList<>(block.size());
-        try (PreparedStatement ps = tx.connection().prepareStatement(JdbcProjectService.INSERT_MEASUREMENT)) {
-            for (ProcessedSpectrum p : block) {
-                String id = UUID.randomUUID().toString();
-                measurementIds.add(id);
-                Tx.bind(ps, id, projectId, p.kind(), p.time(), p.cellTemperature(), p.cellPressure(),
-                        actor.userId());
-                ps.addBatch();
-            }
-            ps.executeBatch();
-        }
-        List<String[]> spectra = new ArrayList<>(block.size());
-        try (PreparedStatement ps = tx.connection().prepareStatement(SpectrumRows.INSERT)) {
-            for (int i = 0; i < block.size(); i++) {
-                ProcessedSpectrum p = block.get(i);
-                spectra.add(SpectrumRows.bindInsert(ps, projectId, new SpectrumInput(measurementIds.get(i),
-                        SpectralContent.ABSORBANCE, p.absorbance(), p.encoding())));
-                ps.addBatch();
-            }
-            ps.executeBatch();
-        }
-        List<List<ResultInfo>> results = new ArrayList<>(block.size());
-        int resultCount = 0;
-        try (PreparedStatement ps = tx.connection().prepareStatement(JdbcResultService.INSERT)) {
-            for (int i = 0; i < block.size(); i++) {
-                List<ResultInfo> rows = new ArrayList<>();
-                for (NewResult r : block.get(i).results()) {
-                    ResultInfo row = JdbcResultService.newInfo(actor, projectId,
-                            r.withMeasurement(measurementIds.get(i)), recorded);
-                    JdbcResultService.bindInsert(ps, row);
-                    ps.addBatch();
-                    rows.add(row);
-                }
-                results.add(rows);
-                resultCount += rows.size();
-            }
-            if (resultCount > 0) {
-                ps.executeBatch();
-            }
-        }
+        List<Map<String, Object>> measurementRows = new ArrayList<>(block.size());
+        List<Map<String, Object>> spectrumRows = new ArrayList<>(block.size());
+        List<Map<String, Object>> resultRows = new ArrayList<>();
         List<StoredMeasurement> stored = new ArrayList<>(block.size());
         List<AuditEntry> audit = new ArrayList<>(block.size());
         List<List<RowBindings.RowRef>> rows = new ArrayList<>(block.size());
-        for (int i = 0; i < block.size(); i++) {
-            ProcessedSpectrum p = block.get(i);
-            List<String> resultIds = results.get(i).stream().map(ResultInfo::id).toList();
-            stored.add(new StoredMeasurement(measurementIds.get(i), spectra.get(i)[0], resultIds));
+        for (ProcessedSpectrum p : block) {
+            String measurementId = RowIds.next();
+            // stored to the microsecond, the precision both databases keep, so the hash is that of the row
+            Instant time = p.time().truncatedTo(ChronoUnit.MICROS);
+            Map<String, Object> measurement = JdbcProjectService.measurementRow(measurementId, projectId, p.kind(),
+                    time, p.cellTemperature(), p.cellPressure(), actor.userId());
+            Map<String, Object> spectrum = SpectrumRows.row(projectId, new SpectrumInput(measurementId,
+                    SpectralContent.ABSORBANCE, p.absorbance(), p.encoding()));
+            String spectrumId = (String) spectrum.get("id");
+            List<ResultInfo> results = new ArrayList<>(p.results().size());
+            List<RowBindings.RowRef> bound = new ArrayList<>(2 + p.results().size());
+            bound.add(new RowBindings.RowRef(DataKind.MEASUREMENT, measurementId,
+                    DataKind.MEASUREMENT.sha256(measurement)));
+            bound.add(new RowBindings.RowRef(DataKind.SPECTRAL_DATA, spectrumId,
+                    DataKind.SPECTRAL_DATA.sha256(spectrum)));
+            for (NewResult r : p.results()) {
+                ResultInfo info = JdbcResultService.newInfo(actor, projectId, r.withMeasurement(measurementId),
+                        recorded);
+                Map<String, Object> row = JdbcResultService.row(info, null);
+                results.add(info);
+                resultRows.add(row);
+                bound.add(new RowBindings.RowRef(DataKind.RESULT, info.id(), DataKind.RESULT.sha256(row)));
+            }
+            measurementRows.add(measurement);
+            spectrumRows.add(spectrum);
+            List<String> resultIds = results.stream().map(ResultInfo::id).toList();
+            stored.add(new StoredMeasurement(measurementId, spectrumId, resultIds));
             Map<String, Object> fields = JdbcProjectService.measurementValues(projectId, p.kind(), p.time(),
                     p.cellTemperature(), p.cellPressure());
-            fields.put("spectrum", spectra.get(i)[0]);
+            fields.put("spectrum", spectrumId);
             fields.put("spectrumContent", SpectralContent.ABSORBANCE.getName());
             fields.put("spectrumAxis", p.absorbance().axis());
             fields.put("spectrumEncoding", p.encoding());
-            fields.put("spectrumSha256", spectra.get(i)[1]);
+            fields.put("spectrumSha256", spectrum.get("sha256"));
             fields.put("results", resultIds.size());
             fields.put("resultIds", String.join(",", resultIds));
-            fields.put("resultsSha256", resultsSha256(results.get(i)));
-            audit.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement", measurementIds.get(i))
+            fields.put("resultsSha256", resultsSha256(results));
+            audit.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement", measurementId)
                     .newValue(AuditValues.canonical(fields)).build());
-            List<RowBindings.RowRef> bound = new ArrayList<>(2 + resultIds.size());
-            bound.add(new RowBindings.RowRef(DataKind.MEASUREMENT, measurementIds.get(i)));
-            bound.add(new RowBindings.RowRef(DataKind.SPECTRAL_DATA, spectra.get(i)[0]));
-            for (String id : resultIds) {
-                bound.add(new RowBindings.RowRef(DataKind.RESULT, id));
-            }
             rows.add(bound);
         }
-        return new Written(List.copyOf(stored), audit, rows, resultCount);
+        return new Encoded(actor, projectId, List.copyOf(block), measurementRows, spectrumRows, resultRows,
+                new Written(List.copyOf(stored), audit, rows, resultRows.size()));
     }
 
     /** As documented on {@link BlockService}: an auditor recomputes it from the stored results. */

@@ -3,6 +3,7 @@ package org.tracegas.store.internal;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.time.Instant;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -156,8 +157,22 @@ final class JdbcProjectService implements ProjectService {
         });
     }
 
-    static final String INSERT_MEASUREMENT = "INSERT INTO measurement (id, project_id, kind, measured_at,"
-            + " cell_temperature, cell_pressure, operator_id, row_version) VALUES (?, ?, ?, ?, ?, ?, ?, 0)";
+    /** Parameters id, project_id, kind, measured_at, cell_temperature, cell_pressure, operator_id. */
+    static final String INSERT_MEASUREMENT = DataKind.MEASUREMENT.insert("row_version", "0");
+
+    /** A measurement's row by column name, as {@link DataKind#MEASUREMENT} binds and hashes it. */
+    static Map<String, Object> measurementRow(String id, String projectId, MeasurementKind kind, Instant time,
+            double cellTemperature, double cellPressure, String operatorId) {
+        Map<String, Object> row = new HashMap<>();
+        row.put("id", id);
+        row.put("project_id", projectId);
+        row.put("kind", kind.name());
+        row.put("measured_at", time);
+        row.put("cell_temperature", cellTemperature);
+        row.put("cell_pressure", cellPressure);
+        row.put("operator_id", operatorId);
+        return row;
+    }
 
     /** The fields of a new measurement's audit record. */
     static Map<String, Object> measurementValues(String projectId, MeasurementKind kind, Instant time,

@@ -8,12 +8,12 @@ import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.EnumSet;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
-import java.util.UUID;
 import java.util.stream.Collectors;
 
 import org.tracegas.audit.AuditAction;
@@ -63,27 +63,8 @@ final class JdbcResultService implements ResultService {
         });
     }
 
-    /** Columns of table analysis_result, in the order {@link #bindInsert} binds them. */
-    private static final String COLUMNS = "id, project_id, measurement_id, compound, concentration,"
-            + " uncertainty, detection_limit, unit, flags, method_version_id, library_version_id,"
-            + " software_version, input_hash, recorded_by, recorded_at, cell_temperature, cell_temperature_origin,"
-            + " cell_pressure, cell_pressure_origin, path_length, path_length_origin, reference_temperature,"
-            + " reference_pressure, fit_path_length, correction_factor, noise_factor, noise_factor_origin,"
-            + " row_version";
-    private static final String VALUES = "?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?,"
-            + " ?, ?, ?, 0";
-
-    /** The parameter of {@link #INSERT_WITH_RECIPE} that takes the recipe. */
-    static final int RECIPE_PARAMETER = 28;
-
-    static final String INSERT = "INSERT INTO analysis_result (" + COLUMNS + ") VALUES (" + VALUES + ")";
-
-    /**
-     * As {@link #INSERT}, with the recipe that processed the spectrum as parameter {@link #RECIPE_PARAMETER}: written with the row,
-     * since the lab server's everyday role cannot update a stored result.
-     */
-    static final String INSERT_WITH_RECIPE = "INSERT INTO analysis_result (" + COLUMNS + ", recipe_sha256) VALUES ("
-            + VALUES + ", ?)";
+    /** The insert of a result; the recipe that processed its spectrum, if any, is written with the row. */
+    static final String INSERT = DataKind.RESULT.insert("row_version", "0");
 
     /** @param checked versions and measurements already checked and frozen in this transaction */
     private static ResultInfo insert(Tx tx, Session actor, String projectId, NewResult result,
@@ -107,22 +88,53 @@ final class JdbcResultService implements ResultService {
     }
 
     static ResultInfo newInfo(Session actor, String projectId, NewResult result, Instant recorded) {
-        return new ResultInfo(UUID.randomUUID().toString(), projectId, result, actor.userId(), recorded);
+        return new ResultInfo(RowIds.next(), projectId, result, actor.userId(), recorded);
     }
 
+    /** Binds a result without recipe to {@link #INSERT}. */
     static void bindInsert(PreparedStatement ps, ResultInfo stored) throws SQLException {
+        DataKind.RESULT.bind(ps, row(stored, null));
+    }
+
+    /**
+     * A result's row by column name, as {@link DataKind#RESULT} binds and hashes it. The recipe is written with
+     * the row, since the lab server's everyday role cannot update a stored result.
+     *
+     * @param recipeSha256 the recipe that processed the spectrum, or null
+     */
+    static Map<String, Object> row(ResultInfo stored, String recipeSha256) {
         NewResult result = stored.values();
         ResultConditions c = result.conditions();
-        Tx.bind(ps, stored.id(), stored.projectId(), result.measurementId(), result.compound(),
-                result.concentration(), result.uncertainty(), result.detectionLimit(), result.unit(),
-                formatFlags(result), result.methodVersionId(), result.libraryVersionId(), result.softwareVersion(),
-                result.inputHash(), stored.recordedBy(), stored.recorded(),
-                c == null ? null : c.cellTemperatureK(), c == null ? null : c.temperatureOrigin(),
-                c == null ? null : c.cellPressureKPa(), c == null ? null : c.pressureOrigin(),
-                c == null ? null : c.pathM(), c == null ? null : c.pathOrigin(),
-                c == null ? null : c.referenceTemperatureK(), c == null ? null : c.referencePressureKPa(),
-                c == null ? null : c.fitPathM(), c == null ? null : c.correctionFactor(),
-                c == null ? null : c.noiseFactor(), c == null ? null : c.noiseFactorOrigin());
+        Map<String, Object> row = new HashMap<>();
+        row.put("id", stored.id());
+        row.put("project_id", stored.projectId());
+        row.put("measurement_id", result.measurementId());
+        row.put("compound", result.compound());
+        row.put("concentration", result.concentration());
+        row.put("uncertainty", result.uncertainty());
+        row.put("detection_limit", result.detectionLimit());
+        row.put("unit", result.unit());
+        row.put("flags", formatFlags(result));
+        row.put("method_version_id", result.methodVersionId());
+        row.put("library_version_id", result.libraryVersionId());
+        row.put("software_version", result.softwareVersion());
+        row.put("input_hash", result.inputHash());
+        row.put("recorded_by", stored.recordedBy());
+        row.put("recorded_at", stored.recorded());
+        row.put("recipe_sha256", recipeSha256);
+        row.put("cell_temperature", c == null ? null : c.cellTemperatureK());
+        row.put("cell_temperature_origin", c == null ? null : c.temperatureOrigin());
+        row.put("cell_pressure", c == null ? null : c.cellPressureKPa());
+        row.put("cell_pressure_origin", c == null ? null : c.pressureOrigin());
+        row.put("path_length", c == null ? null : c.pathM());
+        row.put("path_length_origin", c == null ? null : c.pathOrigin());
+        row.put("reference_temperature", c == null ? null : c.referenceTemperatureK());
+        row.put("reference_pressure", c == null ? null : c.referencePressureKPa());
+        row.put("fit_path_length", c == null ? null : c.fitPathM());
+        row.put("correction_factor", c == null ? null : c.correctionFactor());
+        row.put("noise_factor", c == null ? null : c.noiseFactor());
+        row.put("noise_factor_origin", c == null ? null : c.noiseFactorOrigin());
+        return row;
     }
 
     /**
@@ -134,14 +146,20 @@ final class JdbcResultService implements ResultService {
      */
     static void requireVersions(Tx tx, NewResult result, Set<String> checked, String where) throws SQLException {
         if (checked.add("method:" + result.methodVersionId())) {
-            requireKind(JdbcVersionService.load(tx, result.methodVersionId()), VersionKind.METHOD,
-                    where + "methodVersionId");
-            JdbcVersionService.freeze(tx, result.methodVersionId());
+            requireKindAndFreeze(tx, result.methodVersionId(), VersionKind.METHOD, where + "methodVersionId");
         }
         if (checked.add("library:" + result.libraryVersionId())) {
-            requireKind(JdbcVersionService.load(tx, result.libraryVersionId()), VersionKind.LIBRARY,
-                    where + "libraryVersionId");
-            JdbcVersionService.freeze(tx, result.libraryVersionId());
+            requireKindAndFreeze(tx, result.libraryVersionId(), VersionKind.LIBRARY, where + "libraryVersionId");
+        }
+    }
+
+    private static void requireKindAndFreeze(Tx tx, String versionId, VersionKind expected, String field)
+            throws SQLException {
+        VersionInfo version = JdbcVersionService.load(tx, versionId);
+        requireKind(version, expected, field);
+        // a frozen version stays frozen: only the first use writes the flag, later blocks only read it
+        if (!version.frozen()) {
+            JdbcVersionService.freeze(tx, versionId);
         }
     }
 

@@ -12,16 +12,25 @@ import java.util.Map;
 import org.tracegas.audit.CanonicalRow;
 
 /**
- * Binds the data rows a transaction wrote to the audit record it appends: each row is read back as stored
- * and hashed with {@link CanonicalRow} ({@link DataKind} names the columns), the list of (kind, key, hash)
- * is digested into the record's content hash, and the list is kept in table data_binding under the record's
- * sequence number. Reading back, not hashing the values handed in, makes the hash the one a later reader of
- * the same database computes (time precision, text as stored).
+ * Binds the data rows a transaction wrote to the audit record it appends: each row is hashed with
+ * {@link CanonicalRow} ({@link DataKind} names the columns), the list of (kind, key, hash) is digested into
+ * the record's content hash, and the list is kept in table data_binding under the record's sequence number.
+ * A row comes with its hash when its writer took it from the values it inserted, in the form they are stored
+ * (times in whole microseconds, text as given, exact doubles), which is what a later reader of the row
+ * computes; any other row is read back as stored and hashed.
  */
 final class RowBindings {
 
-    /** A data row: its kind and key. */
-    record RowRef(DataKind kind, String key) {
+    /**
+     * A data row: its kind and key, and its SHA-256 when the writer took it from the values it inserted
+     * ({@link DataKind#sha256(java.util.Map)}); null to read the row back and hash it as stored.
+     */
+    record RowRef(DataKind kind, String key, String sha256) {
+
+        /** A row to read back when it is bound. */
+        RowRef(DataKind kind, String key) {
+            this(kind, key, null);
+        }
     }
 
     /** The kind under which a record's binding list is digested. */
@@ -31,7 +40,7 @@ final class RowBindings {
     }
 
     /**
-     * The SHA-256 of each row as stored now, in order.
+     * The SHA-256 of each row as stored now, in order: the one it came with, or its hash read back.
      *
      * @throws SQLException naming the row when it is not stored
      */
@@ -40,6 +49,10 @@ final class RowBindings {
         Map<DataKind, PreparedStatement> queries = new EnumMap<>(DataKind.class);
         try {
             for (RowRef r : rows) {
+                if (r.sha256() != null) {
+                    hashes.add(r.sha256());
+                    continue;
+                }
                 PreparedStatement q = queries.get(r.kind());
                 if (q == null) {
                     q = c.prepareStatement(selectByKey(r.kind()));

@@ -3,7 +3,8 @@ package org.tracegas.store.internal;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
 import java.sql.SQLException;
-import java.util.UUID;
+import java.util.HashMap;
+import java.util.Map;
 
 import org.tracegas.model.SpectralContent;
 import org.tracegas.spectrum.AxisUnit;
@@ -20,24 +21,39 @@ final class SpectrumRows {
     static final String COLUMNS = "id, measurement_id, content, ordinate, axis_unit, point_count, axis_first,"
             + " axis_step, axis_values, value_encoding, value_data, sha256";
 
-    static final String INSERT = "INSERT INTO spectral_data (project_id, " + COLUMNS
-            + ") VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)";
+    static final String INSERT = DataKind.SPECTRAL_DATA.insert();
 
     private SpectrumRows() {
     }
 
     /** Binds one row to {@link #INSERT}. @return the new id and value hash */
     static String[] bindInsert(PreparedStatement ps, String projectId, SpectrumInput input) throws SQLException {
+        Map<String, Object> row = row(projectId, input);
+        DataKind.SPECTRAL_DATA.bind(ps, row);
+        return new String[] {(String) row.get("id"), (String) row.get("sha256")};
+    }
+
+    /** A new row, with a new id, by column name as {@link DataKind#SPECTRAL_DATA} binds and hashes it. */
+    static Map<String, Object> row(String projectId, SpectrumInput input) {
         Spectrum s = input.spectrum();
         SpectralAxis axis = s.axis();
         byte[] values = SpectrumCodec.encode(s.toArray(), input.encoding());
-        String id = UUID.randomUUID().toString();
-        String sha256 = SpectrumCodec.sha256Hex(values);
-        Tx.bind(ps, projectId, id, input.measurementId(), input.content(), s.ordinate(), axis.unit(), axis.size(),
-                axis.isUniform() ? axis.first() : null, axis.isUniform() ? axis.step() : null,
-                axis.isUniform() ? null : SpectrumCodec.encode(axis.toArray(), SampleEncoding.FLOAT64_LE),
-                input.encoding(), values, sha256);
-        return new String[] {id, sha256};
+        Map<String, Object> row = new HashMap<>();
+        row.put("id", RowIds.next());
+        row.put("project_id", projectId);
+        row.put("measurement_id", input.measurementId());
+        row.put("content", input.content().name());
+        row.put("ordinate", s.ordinate().name());
+        row.put("axis_unit", axis.unit().name());
+        row.put("point_count", axis.size());
+        row.put("axis_first", axis.isUniform() ? axis.first() : null);
+        row.put("axis_step", axis.isUniform() ? axis.step() : null);
+        row.put("axis_values", axis.isUniform() ? null
+                : SpectrumCodec.encode(axis.toArray(), SampleEncoding.FLOAT64_LE));
+        row.put("value_encoding", input.encoding().name());
+        row.put("value_data", values);
+        row.put("sha256", SpectrumCodec.sha256Hex(values));
+        return row;
     }
 
     static StoredSpectrum read(ResultSet rs) throws SQLException {

@@ -38,8 +38,8 @@ import org.tracegas.store.WorkspaceVerification;
  * rows/s = rows checked (printed at setup) / time per verification, from which a year of 1-minute data
  * (525,600 spectra, about 4.7 million results) is extrapolated;</li>
  * <li>{@code blockBound} against {@code blockUnbound}: one block of 64 such spectra stored in one transaction
- * with and without the rows' binding (read back, hashed, digested into the audit record, kept in
- * data_binding), in the same run, so their ratio is the binding's cost on the batch path.</li>
+ * with and without the rows' binding (hashed from the values inserted, digested into the audit record,
+ * kept in data_binding), in the same run, so their ratio is the binding's cost on the batch path.</li>
  * </ul>
  * It lives in the store's internal package to switch the binding off, which the store itself never does.
  */
