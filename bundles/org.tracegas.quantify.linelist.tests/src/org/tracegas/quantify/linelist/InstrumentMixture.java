@@ -22,11 +22,11 @@ import org.tracegas.spectrum.Spectrum;
  * Measured spectra of a two-gas mixture made the way the light makes them, apart from the fit's own shortcuts: on a
  * 0.002 cm-1 grid the monochromatic transmittance of each gas at its actual amount (its own self-broadening
  * included, every line's Voigt profile out to 60 cm-1) from the library's line-by-line model, multiplied over the
- * gases (Beer-Lambert law for the mixture); then the instrument: the line shape tabulated from its defining
- * integral ({@link InstrumentLineShape#value}, a quadrature, not the fast transform the fit uses) out to 40 cm-1
- * and convolved point by point, and the field of view as an average over 8 ray angles, each seeing the spectrum stretched by 1 / cos
- * theta; then a baseline, white noise on the transmittance, and -log10. Griffith, Appl. Spectrosc. 50, 59 (1996)
- * describes this order: high-resolution transmittance first, the instrument afterwards.
+ * gases (Beer-Lambert law for the mixture); then the instrument: the line shape tabulated out to 40 cm-1 from its
+ * defining integral ({@link InstrumentLineShape#value}, a quadrature, not the fast transform the fit uses) and
+ * convolved point by point, and the field of view as an average over 8 ray angles, each seeing the spectrum
+ * stretched by 1 / cos theta; then a baseline, white noise on the transmittance, and -log10. Griffith, Appl.
+ * Spectrosc. 50, 59 (1996) describes this order: high-resolution transmittance first, the instrument afterwards.
  * <p>
  * The gases are invented (scenario: the stack analyser of the Vellmar lime kiln): TX1 a diatomic-like band with
  * strong lines 3.8 cm-1 apart that saturate (optical depth up to about 6 at the line cores at the highest amount),

@@ -32,9 +32,8 @@ import org.tracegas.spectrum.Spectrum;
  * <p>
  * Figures at the time of writing (24 mixtures, 48 results; amounts 10 % to 100 % of the highest, 1200 ppm·m of TX1
  * and 3000 ppm·m of TX2), errors relative to the highest amount: RMS error of the line-list fit TX1 0.041 %, TX2
- * 0.085 % (mean 0.019 % and 0.037 %, mostly from the fit's 25 cm-1 line cut-off and its neglect of self-broadening against the
- * generator's 60 cm-1 and actual amounts); curve of growth TX1 0.384 %, TX2 0.395 %; line-list results within 2u
- * 85.4 % (TX1 79.2 %, TX2 91.7 %).
+ * 0.085 % (mean 0.019 % and 0.037 %, mostly from the fit's 25 cm-1 line cut-off against the generator's 60 cm-1);
+ * curve of growth TX1 0.384 %, TX2 0.395 %; line-list results within 2u 85.4 % (TX1 79.2 %, TX2 91.7 %).
  */
 class LineListAlgorithmTest {
 
@@ -85,11 +84,11 @@ class LineListAlgorithmTest {
                 within2u[g][s] = Math.abs(l.get(g).concentration() - truth) <= 2 * l.get(g).standardUncertainty();
             }
         }
-        figures = String.format(java.util.Locale.ROOT, "RMS error line list TX1 %.3f %%, TX2 %.3f %% (mean %.3f %%, %.3f"
-                + " %%); curve of growth TX1 %.3f %%, TX2 %.3f %%; line-list results within 2u %.1f %% (TX1 %.1f %%, TX2"
-                + " %.1f %%)", 100 * rms(lineListError[0]), 100 * rms(lineListError[1]), 100 * mean(lineListError[0]),
-                100 * mean(lineListError[1]), 100 * rms(curveError[0]), 100 * rms(curveError[1]), 100 * coverage(),
-                100 * share(within2u[0]), 100 * share(within2u[1]));
+        figures = String.format(java.util.Locale.ROOT, "RMS error line list TX1 %.3f %%, TX2 %.3f %% (mean %.3f %%,"
+                + " %.3f %%); curve of growth TX1 %.3f %%, TX2 %.3f %%; line-list results within 2u %.1f %% (TX1"
+                + " %.1f %%, TX2 %.1f %%)", 100 * rms(lineListError[0]), 100 * rms(lineListError[1]),
+                100 * mean(lineListError[0]), 100 * mean(lineListError[1]), 100 * rms(curveError[0]),
+                100 * rms(curveError[1]), 100 * coverage(), 100 * share(within2u[0]), 100 * share(within2u[1]));
         System.out.println("line-list fit against curve of growth: " + figures);
     }
 

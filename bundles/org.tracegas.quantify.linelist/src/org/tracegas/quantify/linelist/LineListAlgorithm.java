@@ -22,6 +22,12 @@ import org.tracegas.spectrum.SpectralAxis;
  * into absorbance. All amounts, the baselines and (with {@link ShiftTerm#SCALE}) a relative wavenumber scale are
  * fitted together by Levenberg-Marquardt; the uncertainty comes from the final Jacobian. Needs no reference
  * spectra, so no amount is outside a calibrated range.
+ * <p>
+ * A method's text names the algorithm ({@code LINE_LIST}) but does not yet hold its {@link LineListSetup}: the
+ * line lists, the cell's conditions and the instrument are given with the algorithm, so a stored method's hash
+ * does not bind them, and the algorithm is registered directly ({@link
+ * org.tracegas.quantify.FitAlgorithmRegistry#register}), not through the extension point, whose classes are
+ * created without arguments.
  */
 public final class LineListAlgorithm implements FitAlgorithm {
 
