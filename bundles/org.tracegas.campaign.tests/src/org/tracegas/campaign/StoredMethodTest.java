@@ -113,6 +113,7 @@ class StoredMethodTest {
                 () -> MethodDefinition.parse(file, Path.of("/lab/kiln.method")));
         assertTrue(e.getMessage().contains("kiln.method"), e.getMessage());
         assertTrue(e.getMessage().contains("algorithm"), e.getMessage());
+        assertTrue(e.getMessage().contains("[classical-least-squares, curve-of-growth]"), e.getMessage());
         assertEquals(10, e.line(), e.getMessage());
     }
 

@@ -17,6 +17,7 @@ import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.FitAlgorithm;
+import org.tracegas.quantify.FitAlgorithmRegistry;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.ReferenceSpectrum;
 import org.tracegas.quantify.ReportingUnit;
@@ -48,9 +49,10 @@ import org.tracegas.store.WorkspaceStore;
  * max-absorbance = 1.0                       (optional)
  * shift = none                               (optional) none, shift, shift-and-width
  * reporting-unit = ppm                       (optional) ppm, ppb, percent
- * algorithm = curve-of-growth                (optional) classical-least-squares (the default) or
- *                                            curve-of-growth, see {@link FitAlgorithm}; shift = scale
- *                                            goes with curve-of-growth only
+ * algorithm = curve-of-growth                (optional) classical-least-squares (the default),
+ *                                            curve-of-growth or an algorithm another bundle installs, see
+ *                                            {@link FitAlgorithmRegistry}; shift = scale goes with
+ *                                            curve-of-growth only
  *
  * [transform]                                see {@link TransformText}
  * apodization = norton-beer-medium
@@ -160,8 +162,19 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
                 h.number("max-absorbance", QuantificationMethod.DEFAULT_MAX_ABSORBANCE),
                 h.constant("shift", ShiftTerm.class, ShiftTerm.NONE),
                 h.constant("reporting-unit", ReportingUnit.class, ReportingUnit.PPM),
-                h.constant("algorithm", FitAlgorithm.class, FitAlgorithm.CLASSICAL_LEAST_SQUARES), transform, recipe,
-                analytes, h.constant("path-source", PathOrigin.class, PathOrigin.NOMINAL));
+                algorithm(h), transform, recipe, analytes,
+                h.constant("path-source", PathOrigin.class, PathOrigin.NOMINAL));
+    }
+
+    /** The algorithm the head names, by its name among those installed; the default when it names none. */
+    private static FitAlgorithm algorithm(KeyValueFile.Section h) throws FileFormatException {
+        if (!h.has("algorithm")) {
+            return FitAlgorithm.CLASSICAL_LEAST_SQUARES;
+        }
+        String name = h.text("algorithm");
+        FitAlgorithmRegistry installed = FitAlgorithmRegistry.installed();
+        return installed.find(name).orElseThrow(() -> h.error("algorithm", "'" + name + "' is none of the installed"
+                + " fit algorithms " + installed.names()));
     }
 
     /** "low..high[, low..high] baseline n [residual-limit x]". */
@@ -259,9 +272,9 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         s.append("max-absorbance = ").append(m.maxAbsorbance()).append('\n');
         s.append("shift = ").append(constant(m.shiftTerm())).append('\n');
         s.append("reporting-unit = ").append(constant(m.reportingUnit())).append('\n');
-        if (m.algorithm() != FitAlgorithm.CLASSICAL_LEAST_SQUARES) {
+        if (!m.algorithm().equals(FitAlgorithm.CLASSICAL_LEAST_SQUARES)) {
             // only when not the default, so that the stored versions of earlier methods read as they were written
-            s.append("algorithm = ").append(constant(m.algorithm())).append('\n');
+            s.append("algorithm = ").append(m.algorithm().name()).append('\n');
         }
         s.append("\n[transform]\n").append(TransformText.write(transform));
         if (!recipe.entries().isEmpty()) {

@@ -2,6 +2,7 @@ package org.tracegas.quantify;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
@@ -32,9 +33,10 @@ final class CanonicalMethodText {
         s.append("max_absorbance ").append(num(m.maxAbsorbance())).append('\n');
         s.append("tolerance ").append(num(m.tolerance())).append('\n');
         s.append("max_iterations ").append(m.maxIterations()).append('\n');
-        if (m.algorithm() != FitAlgorithm.CLASSICAL_LEAST_SQUARES) {
-            // written only when not the default, so that the texts and hashes of earlier methods stay as they were
-            s.append("algorithm ").append(m.algorithm().name()).append('\n');
+        if (!m.algorithm().equals(FitAlgorithm.CLASSICAL_LEAST_SQUARES)) {
+            // written only when not the default, so that the texts and hashes of earlier methods stay as they were;
+            // in the upper-case form the first stored texts gave the built-in algorithms (CURVE_OF_GROWTH)
+            s.append("algorithm ").append(storedName(m.algorithm())).append('\n');
         }
         for (Analyte a : m.analytes()) {
             s.append("analyte ").append(a.compound()).append('\n');
@@ -59,6 +61,11 @@ final class CanonicalMethodText {
         });
         s.append("end\n");
         return s.toString();
+    }
+
+    /** An algorithm's name as the text holds it: upper case, '_' for '-' (CURVE_OF_GROWTH). */
+    static String storedName(FitAlgorithm algorithm) {
+        return algorithm.name().toUpperCase(Locale.ROOT).replace('-', '_');
     }
 
     private static void spectrum(StringBuilder s, Spectrum spectrum) {
@@ -96,17 +103,22 @@ final class CanonicalMethodText {
      *
      * @throws IllegalArgumentException whose message names the line and the field at fault
      */
-    static QuantificationMethod read(String text) {
-        return new Reader(text).method();
+    static QuantificationMethod read(String text, FitAlgorithmRegistry algorithms) {
+        if (algorithms == null) {
+            throw new IllegalArgumentException("algorithms must not be null");
+        }
+        return new Reader(text, algorithms).method();
     }
 
     /** Reads the lines of a canonical text in order; every error names the line and the field. */
     private static final class Reader {
 
         private final String[] lines;
+        private final FitAlgorithmRegistry algorithms;
         private int next;
 
-        Reader(String text) {
+        Reader(String text, FitAlgorithmRegistry algorithms) {
+            this.algorithms = algorithms;
             if (text == null) {
                 throw new IllegalArgumentException("method text must not be null");
             }
@@ -132,7 +144,12 @@ final class CanonicalMethodText {
             b.tolerance(number(single("tolerance"), "tolerance"));
             b.maxIterations(integer(single("max_iterations"), "max_iterations"));
             if (peek("algorithm")) {
-                b.algorithm(constant(FitAlgorithm.class, single("algorithm"), "algorithm"));
+                String stored = single("algorithm");
+                try {
+                    b.algorithm(algorithms.get(stored.toLowerCase(Locale.ROOT).replace('_', '-')));
+                } catch (IllegalArgumentException e) {
+                    throw error("algorithm", e.getMessage());
+                }
             }
             while (peek("analyte")) {
                 b.analyte(analyte());

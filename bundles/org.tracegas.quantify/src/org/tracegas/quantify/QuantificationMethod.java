@@ -68,7 +68,17 @@ public final class QuantificationMethod {
      * @throws IllegalArgumentException whose message names the line and the field at fault
      */
     public static QuantificationMethod parse(String canonicalText) {
-        return CanonicalMethodText.read(canonicalText);
+        return parse(canonicalText, FitAlgorithmRegistry.installed());
+    }
+
+    /**
+     * As {@link #parse(String)}, the algorithm looked up by name in the given registry.
+     *
+     * @throws IllegalArgumentException whose message names the line and the field at fault; for an algorithm the
+     *                                  registry does not know, the known names
+     */
+    public static QuantificationMethod parse(String canonicalText, FitAlgorithmRegistry algorithms) {
+        return CanonicalMethodText.read(canonicalText, algorithms);
     }
 
     public static Builder builder(String name) {
@@ -285,7 +295,7 @@ public final class QuantificationMethod {
             }
             for (Analyte a : analytes) {
                 for (String c : a.fittedCompounds()) {
-                    if (!referenced.contains(c)) {
+                    if (algorithm != null && algorithm.fitsReferences() && !referenced.contains(c)) {
                         throw new IllegalArgumentException("references has no spectrum of " + c + ", fitted for "
                                 + a.compound());
                     }
@@ -297,12 +307,10 @@ public final class QuantificationMethod {
             if (shiftTerm == null) {
                 throw new IllegalArgumentException("shiftTerm must not be null");
             }
-            boolean scale = shiftTerm == ShiftTerm.SCALE;
-            boolean curveOfGrowth = algorithm == FitAlgorithm.CURVE_OF_GROWTH;
-            if (shiftTerm != ShiftTerm.NONE && scale != curveOfGrowth) {
+            if (shiftTerm != ShiftTerm.NONE && !algorithm.shiftTerms().contains(shiftTerm)) {
                 throw new IllegalArgumentException("shiftTerm " + shiftTerm + " is not offered by the algorithm "
-                        + algorithm + (curveOfGrowth ? ", which offers SCALE" : ", which offers SHIFT and "
-                                + "SHIFT_AND_WIDTH"));
+                        + algorithm.name() + " (in method texts " + CanonicalMethodText.storedName(algorithm)
+                        + "), which offers " + new java.util.TreeSet<>(algorithm.shiftTerms()));
             }
             if (reportingUnit == null) {
                 throw new IllegalArgumentException("reportingUnit must not be null");

@@ -1,15 +1,8 @@
 package org.tracegas.quantify;
 
-import java.util.ArrayList;
-import java.util.Arrays;
-import java.util.EnumSet;
 import java.util.List;
-import java.util.Optional;
 
-import org.tracegas.quantify.internal.FitPoints;
 import org.tracegas.quantify.internal.Sha256;
-import org.tracegas.quantify.internal.SystemFit;
-import org.tracegas.quantify.internal.SystemSolver;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.Spectrum;
 
@@ -84,110 +77,16 @@ public final class Quantifier {
             throw new IllegalArgumentException("sample axis " + spectrum.axis() + " differs from the prepared axis "
                     + prepared.axis());
         }
-        double[] y = spectrum.toArray();
-        QuantificationMethod method = prepared.method();
-        SystemFit[] fits = new SystemFit[prepared.systemCount()];
-        RegionStatistics[] statistics = new RegionStatistics[fits.length];
-        List<CompoundResult> results = new ArrayList<>(method.analytes().size());
-        for (int a = 0; a < method.analytes().size(); a++) {
-            int s = prepared.systemOfAnalyte(a);
-            SystemSolver system = prepared.system(s);
-            if (fits[s] == null) {
-                fits[s] = system.fit(y);
-                statistics[s] = new RegionStatistics(system.points(), fits[s], y);
+        List<CompoundResult> results = prepared.fit().fit(sample, keepSpectra);
+        List<Analyte> analytes = prepared.method().analytes();
+        for (int a = 0; a < analytes.size(); a++) {
+            // a contributed algorithm is held to the contract: results are matched to analytes by position
+            if (results.size() != analytes.size() || !results.get(a).compound().equals(analytes.get(a).compound())) {
+                throw new IllegalStateException("algorithm " + prepared.method().algorithm().name()
+                        + " returned results for " + results.stream().map(CompoundResult::compound).toList()
+                        + ", not one per analyte of " + analytes.stream().map(Analyte::compound).toList());
             }
-            results.add(result(method, method.analytes().get(a), system, fits[s], statistics[s],
-                    prepared.columnOfAnalyte(a), y, spectrum, sample));
         }
         return results;
-    }
-
-    /** Residual RMS per region and highest sample absorbance of one system's fit, shared by its analytes. */
-    private static final class RegionStatistics {
-        final double[] rms;
-        final double highest;
-        final int[] rows;
-
-        RegionStatistics(FitPoints points, SystemFit fit, double[] y) {
-            this.rows = points.rows();
-            double[] residual = fit.residual();
-            this.rms = new double[points.regions()];
-            double max = Double.NEGATIVE_INFINITY;
-            for (int r = 0; r < rms.length; r++) {
-                double sum = 0;
-                int used = 0;
-                for (int j = points.regionStart(r); j < points.regionStart(r + 1); j++) {
-                    // a masked point (not finite in the sample) has a NaN residual and takes no part
-                    if (Double.isFinite(residual[j])) {
-                        sum += residual[j] * residual[j];
-                        max = Math.max(max, y[rows[j]]);
-                        used++;
-                    }
-                }
-                rms[r] = Math.sqrt(sum / used);
-            }
-            this.highest = max;
-        }
-    }
-
-    private CompoundResult result(QuantificationMethod method, Analyte analyte, SystemSolver system, SystemFit fit,
-            RegionStatistics statistics, int column, double[] y, Spectrum spectrum, Sample sample) {
-        double path = method.pathLengthMetres();
-        double amount = fit.amounts()[column];
-        double concentration = amount / path;
-        double uncertainty = fit.amountSd()[column] / path * sample.noiseCorrelation();
-        double detectionLimit = 3 * uncertainty;
-        EnumSet<QualityFlag> flags = EnumSet.noneOf(QualityFlag.class);
-        if (amount > system.highestAmount(column)) {
-            flags.add(QualityFlag.OUTSIDE_CALIBRATED_RANGE);
-        }
-        if (concentration < -detectionLimit) {
-            flags.add(QualityFlag.NEGATIVE_BEYOND_DETECTION_LIMIT);
-        }
-        if (!fit.converged()) {
-            flags.add(QualityFlag.NOT_CONVERGED);
-        }
-        if (fit.masked() > 0) {
-            flags.add(QualityFlag.POINTS_MASKED);
-        }
-        BackgroundAge background = sample.background();
-        if (background != null && background.tooOld()) {
-            flags.add(QualityFlag.BACKGROUND_TOO_OLD);
-        }
-        List<RegionResidual> residuals = new ArrayList<>(statistics.rms.length);
-        for (int r = 0; r < statistics.rms.length; r++) {
-            RegionResidual rr = new RegionResidual(analyte.regions().get(r), statistics.rms[r]);
-            if (rr.aboveLimit()) {
-                flags.add(QualityFlag.RESIDUAL_ABOVE_LIMIT);
-            }
-            residuals.add(rr);
-        }
-        if (statistics.highest > method.maxAbsorbance()) {
-            flags.add(QualityFlag.ABSORBANCE_TOO_HIGH);
-        }
-        Optional<FitSpectra> spectra = keepSpectra ? Optional.of(spectra(spectrum, statistics.rows, fit, column, y))
-                : Optional.empty();
-        return new CompoundResult(analyte.compound(), concentration, uncertainty, detectionLimit,
-                method.reportingUnit(), residuals, flags, fit.iterations(), fit.shift(), fit.width(), fit.scale(),
-                spectra);
-    }
-
-    private static FitSpectra spectra(Spectrum spectrum, int[] rows, SystemFit fit, int column, double[] y) {
-        int n = y.length;
-        double[] contribution = new double[n];
-        double[] model = new double[n];
-        double[] residual = new double[n];
-        Arrays.fill(contribution, Double.NaN);
-        Arrays.fill(model, Double.NaN);
-        Arrays.fill(residual, Double.NaN);
-        double[] own = fit.contribution(column);
-        double[] r = fit.residual();
-        for (int j = 0; j < rows.length; j++) {
-            contribution[rows[j]] = own[j];
-            residual[rows[j]] = r[j];
-            model[rows[j]] = y[rows[j]] - r[j];
-        }
-        return new FitSpectra(spectrum.withValues(contribution, Ordinate.ABSORBANCE),
-                spectrum.withValues(model, Ordinate.ABSORBANCE), spectrum.withValues(residual, Ordinate.ABSORBANCE));
     }
 }

@@ -102,7 +102,7 @@ public final class FitPoints {
     }
 
     /** Weight per fit point, or null for equal weights; not to be written. */
-    double[] weightsUnsafe() {
+    public double[] weightsUnsafe() {
         return weights;
     }
 
@@ -112,7 +112,7 @@ public final class FitPoints {
     }
 
     /** Baseline columns [term][point]; not to be written. */
-    double[][] baselineUnsafe() {
+    public double[][] baselineUnsafe() {
         return baseline;
     }
 }

@@ -1,0 +1,163 @@
+package org.tracegas.quantify.linelist;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Random;
+
+import org.tracegas.library.synthesis.AbsorptionPath;
+import org.tracegas.library.synthesis.FaddeevaFunction;
+import org.tracegas.library.synthesis.LineByLineModel;
+import org.tracegas.library.synthesis.LineCutoff;
+import org.tracegas.library.synthesis.LineList;
+import org.tracegas.library.synthesis.PowerLawPartitionFunction;
+import org.tracegas.library.synthesis.SpectralLine;
+import org.tracegas.preprocess.Apodization;
+import org.tracegas.preprocess.InstrumentLineShape;
+import org.tracegas.spectrum.AxisUnit;
+import org.tracegas.spectrum.Ordinate;
+import org.tracegas.spectrum.SpectralAxis;
+import org.tracegas.spectrum.Spectrum;
+
+/**
+ * Measured spectra of a two-gas mixture made the way the light makes them, apart from the fit's own shortcuts: on a
+ * 0.002 cm-1 grid the monochromatic transmittance of each gas at its actual amount (its own self-broadening
+ * included, every line's Voigt profile out to 60 cm-1) from the library's line-by-line model, multiplied over the
+ * gases (Beer-Lambert law for the mixture); then the instrument: the line shape tabulated out to 40 cm-1 from its
+ * defining integral ({@link InstrumentLineShape#value}, a quadrature, not the fast transform the fit uses) and
+ * convolved point by point, and the field of view as an average over 8 ray angles, each seeing the spectrum
+ * stretched by 1 / cos theta; then a baseline, white noise on the transmittance, and -log10. Griffith, Appl.
+ * Spectrosc. 50, 59 (1996) describes this order: high-resolution transmittance first, the instrument afterwards.
+ * <p>
+ * The gases are invented (scenario: the stack analyser of the Vellmar lime kiln): TX1 a diatomic-like band with
+ * strong lines 3.8 cm-1 apart that saturate (optical depth up to about 6 at the line cores at the highest amount),
+ * TX2 a denser, weaker band whose lines fall onto and between TX1's.
+ */
+final class InstrumentMixture {
+
+    static final double TEMPERATURE = 308.15;
+    static final double PRESSURE = 99.8;
+    static final double PATH = 6.2;
+    static final double RESOLUTION = 0.5;
+    static final Apodization APODIZATION = Apodization.NORTON_BEER_MEDIUM;
+    static final double FIELD_OF_VIEW = 0.008;
+    /** Sample axis: 0.25 cm-1 steps over 2090-2210 cm-1. */
+    static final SpectralAxis AXIS = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2090.0, 0.25, 481);
+    static final List<String> GASES = List.of("TX1", "TX2");
+    /** Highest amount of each gas in ppm·m. */
+    static final double[] HIGHEST = {1200, 3000};
+
+    private static final double FINE_STEP = 0.002;
+    private static final double FINE_LOW = 2040;
+    private static final int FINE_SIZE = 110001;
+    private static final double KERNEL_REACH = 40;
+    private static final int ANGLES = 8;
+
+    private final List<LineByLineModel> exact = new ArrayList<>();
+    private final List<LineByLineModel> forFit = new ArrayList<>();
+    private final double[] kernel;
+
+    InstrumentMixture() {
+        List<LineList> lists = List.of(strongBand(), denseBand());
+        double[] molarMass = {28.0, 44.0};
+        for (int g = 0; g < 2; g++) {
+            exact.add(new LineByLineModel(lists.get(g), molarMass[g], PowerLawPartitionFunction.linearMolecule(),
+                    FaddeevaFunction.standard(), LineCutoff.wavenumbers(60)));
+            forFit.add(new LineByLineModel(lists.get(g), molarMass[g], PowerLawPartitionFunction.linearMolecule()));
+        }
+        InstrumentLineShape ils = InstrumentLineShape.forResolution(APODIZATION, RESOLUTION);
+        int half = (int) Math.round(KERNEL_REACH / FINE_STEP);
+        kernel = new double[2 * half + 1];
+        double sum = 0;
+        for (int k = 0; k <= half; k++) {
+            double v = ils.value(k * FINE_STEP);
+            kernel[half + k] = v;
+            kernel[half - k] = v;
+            sum += k == 0 ? v : 2 * v;
+        }
+        for (int k = 0; k < kernel.length; k++) {
+            kernel[k] /= sum; // unit sum: the area beyond 40 cm-1 is not lost as absorption
+        }
+    }
+
+    /** The models the fit is given: the same line lists, the standard 25 cm-1 cut-off. */
+    LineListSetup setup() {
+        return new LineListSetup(java.util.Map.of(GASES.get(0), forFit.get(0), GASES.get(1), forFit.get(1)),
+                TEMPERATURE, PRESSURE, InstrumentLineShape.forResolution(APODIZATION, RESOLUTION), FIELD_OF_VIEW);
+    }
+
+    private static LineList strongBand() {
+        List<SpectralLine> lines = new ArrayList<>();
+        for (int m = -14; m <= 14; m++) {
+            if (m != 0) {
+                double e = 1.9 * Math.abs(m) * (Math.abs(m) + 1);
+                double s = 9e-20 * Math.abs(m) * Math.exp(-e / 214.0);
+                lines.add(new SpectralLine(90, 1, 2150 + 3.8 * m - 0.018 * m * m, s, 10, 0.066 - 0.0006 * Math.abs(m),
+                        0.075, e, 0.7, -0.002));
+            }
+        }
+        return new LineList("TX1 invented band", lines);
+    }
+
+    private static LineList denseBand() {
+        List<SpectralLine> lines = new ArrayList<>();
+        Random random = new Random(1996);
+        for (int m = -60; m <= 60; m++) {
+            if (m != 0) {
+                double e = 0.4 * Math.abs(m) * (Math.abs(m) + 1);
+                double s = 2.4e-21 * Math.abs(m) * Math.exp(-e / 214.0);
+                lines.add(new SpectralLine(91, 1, 2160 + 0.95 * m + 0.2 * random.nextDouble(), s, 1,
+                        0.075 + 0.01 * random.nextDouble(), 0.09, e, 0.75, -0.003));
+            }
+        }
+        return new LineList("TX2 invented band", lines);
+    }
+
+    /**
+     * @param amounts ppm·m of each gas, zero for none
+     * @param offset  baseline absorbance at 2150 cm-1
+     * @param slope   baseline absorbance change per cm-1
+     * @param scale   relative wavenumber scale: every line at nu (1 + scale), as a mis-set laser wavenumber makes it
+     * @param noise   standard deviation of the noise on the transmittance
+     */
+    Spectrum absorbance(double[] amounts, double offset, double slope, double scale, double noise,
+            Random random) {
+        SpectralAxis fine = SpectralAxis.uniform(AxisUnit.WAVENUMBER, FINE_LOW, FINE_STEP, FINE_SIZE);
+        double[] t = new double[FINE_SIZE];
+        java.util.Arrays.fill(t, 1.0);
+        for (int g = 0; g < 2; g++) {
+            if (amounts[g] > 0) {
+                double[] own = exact.get(g).transmittance(fine, new AbsorptionPath(TEMPERATURE, PRESSURE,
+                        amounts[g] / PATH, PATH)).toArray();
+                for (int i = 0; i < FINE_SIZE; i++) {
+                    t[i] *= own[i];
+                }
+            }
+        }
+        double[] out = new double[AXIS.size()];
+        for (int p = 0; p < out.length; p++) {
+            double nu = AXIS.get(p);
+            double seen = 0;
+            for (int a = 0; a < ANGLES; a++) {
+                // theta^2 evenly spread over [0, alpha^2]: the rays of a uniformly lit circular beam
+                double theta2 = FIELD_OF_VIEW * FIELD_OF_VIEW * (a + 0.5) / ANGLES;
+                double at = (nu / (1 + scale) / Math.cos(Math.sqrt(theta2)) - FINE_LOW) / FINE_STEP;
+                int i = (int) Math.floor(at);
+                double f = at - i;
+                seen += (1 - f) * convolved(t, i) + f * convolved(t, i + 1);
+            }
+            seen /= ANGLES;
+            double baseline = Math.pow(10, -(offset + slope * (nu - 2150)));
+            out[p] = -Math.log10(seen * baseline + noise * random.nextGaussian());
+        }
+        return new Spectrum(AXIS, out, Ordinate.ABSORBANCE);
+    }
+
+    private double convolved(double[] t, int i) {
+        int half = kernel.length / 2;
+        double sum = 0;
+        for (int k = 0; k < kernel.length; k++) {
+            sum += kernel[k] * t[i + k - half];
+        }
+        return sum;
+    }
+}

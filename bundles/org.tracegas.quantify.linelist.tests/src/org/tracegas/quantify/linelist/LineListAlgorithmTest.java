@@ -1,0 +1,200 @@
+package org.tracegas.quantify.linelist;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.Random;
+
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.tracegas.quantify.AnalysisRegion;
+import org.tracegas.quantify.Analyte;
+import org.tracegas.quantify.CompoundResult;
+import org.tracegas.quantify.FitAlgorithm;
+import org.tracegas.quantify.FitAlgorithmRegistry;
+import org.tracegas.quantify.PreparedMethod;
+import org.tracegas.quantify.QualityFlag;
+import org.tracegas.quantify.QuantificationMethod;
+import org.tracegas.quantify.Quantifier;
+import org.tracegas.quantify.ReferenceSpectrum;
+import org.tracegas.quantify.Sample;
+import org.tracegas.quantify.ShiftTerm;
+import org.tracegas.spectrum.Spectrum;
+
+/**
+ * The line-list fit against spectra of {@link InstrumentMixture}: two gases whose lines overlap and saturate, a
+ * baseline, noise on the transmittance, the instrument's line shape and field of view. The same spectra go to the
+ * curve-of-growth fit with references of each gas alone at a quarter, a half and the whole of its highest amount,
+ * made by the same generator with a quarter of the noise.
+ * <p>
+ * Figures at the time of writing (24 mixtures, 48 results; amounts 10 % to 100 % of the highest, 1200 ppm·m of TX1
+ * and 3000 ppm·m of TX2), errors relative to the highest amount: RMS error of the line-list fit TX1 0.041 %, TX2
+ * 0.085 % (mean 0.019 % and 0.037 %, mostly from the fit's 25 cm-1 line cut-off against the generator's 60 cm-1);
+ * curve of growth TX1 0.384 %, TX2 0.395 %; line-list results within 2u 85.4 % (TX1 79.2 %, TX2 91.7 %).
+ */
+class LineListAlgorithmTest {
+
+    /** Transmittance noise: 0.1 % (common practice for a minute's co-adding, no source). */
+    private static final double NOISE = 1e-3;
+    private static final int MIXTURES = 24;
+
+    private static InstrumentMixture generator;
+    private static double[][] lineListError;
+    private static double[][] curveError;
+    private static boolean[][] within2u;
+    private static String figures;
+
+    @BeforeAll
+    static void fitMixtures() {
+        generator = new InstrumentMixture();
+        Random random = new Random(20261204);
+        QuantificationMethod lineList = method(new LineListAlgorithm(generator.setup())).build();
+        QuantificationMethod.Builder curves = method(FitAlgorithm.CURVE_OF_GROWTH);
+        for (int g = 0; g < 2; g++) {
+            for (double f : new double[] {0.25, 0.5, 1}) {
+                double[] amounts = new double[2];
+                amounts[g] = f * InstrumentMixture.HIGHEST[g];
+                curves.reference(new ReferenceSpectrum(InstrumentMixture.GASES.get(g),
+                        generator.absorbance(amounts, 0, 0, 0, NOISE / 4, random), amounts[g]));
+            }
+        }
+        Quantifier byLines = quantifier(lineList);
+        Quantifier byCurves = quantifier(curves.build());
+        lineListError = new double[2][MIXTURES];
+        curveError = new double[2][MIXTURES];
+        within2u = new boolean[2][MIXTURES];
+        for (int s = 0; s < MIXTURES; s++) {
+            double[] amounts = new double[2];
+            for (int g = 0; g < 2; g++) {
+                amounts[g] = InstrumentMixture.HIGHEST[g] * (0.1 + 0.9 * random.nextDouble());
+            }
+            Spectrum spectrum = generator.absorbance(amounts, 0.02 * random.nextGaussian(),
+                    1e-4 * random.nextGaussian(), 0, NOISE, random);
+            List<CompoundResult> l = byLines.fit(Sample.of(spectrum));
+            List<CompoundResult> c = byCurves.fit(Sample.of(spectrum));
+            for (int g = 0; g < 2; g++) {
+                double truth = amounts[g] / InstrumentMixture.PATH;
+                lineListError[g][s] = (l.get(g).concentration() - truth) * InstrumentMixture.PATH
+                        / InstrumentMixture.HIGHEST[g];
+                curveError[g][s] = (c.get(g).concentration() - truth) * InstrumentMixture.PATH
+                        / InstrumentMixture.HIGHEST[g];
+                within2u[g][s] = Math.abs(l.get(g).concentration() - truth) <= 2 * l.get(g).standardUncertainty();
+            }
+        }
+        figures = String.format(java.util.Locale.ROOT, "RMS error line list TX1 %.3f %%, TX2 %.3f %% (mean %.3f %%,"
+                + " %.3f %%); curve of growth TX1 %.3f %%, TX2 %.3f %%; line-list results within 2u %.1f %% (TX1"
+                + " %.1f %%, TX2 %.1f %%)", 100 * rms(lineListError[0]), 100 * rms(lineListError[1]),
+                100 * mean(lineListError[0]), 100 * mean(lineListError[1]), 100 * rms(curveError[0]),
+                100 * rms(curveError[1]), 100 * coverage(), 100 * share(within2u[0]), 100 * share(within2u[1]));
+        System.out.println("line-list fit against curve of growth: " + figures);
+    }
+
+    private static QuantificationMethod.Builder method(FitAlgorithm algorithm) {
+        QuantificationMethod.Builder b = QuantificationMethod.builder("Vellmar kiln " + algorithm.name())
+                .pathLengthMetres(InstrumentMixture.PATH).maxAbsorbance(3).algorithm(algorithm)
+                .shiftTerm(ShiftTerm.SCALE);
+        List<AnalysisRegion> regions = List.of(AnalysisRegion.of(2100, 2200, 1));
+        b.analyte(new Analyte("TX1", List.of("TX2"), regions));
+        b.analyte(new Analyte("TX2", List.of("TX1"), regions));
+        return b;
+    }
+
+    private static Quantifier quantifier(QuantificationMethod m) {
+        return new Quantifier(PreparedMethod.prepare(m, InstrumentMixture.AXIS), "library", "test", false);
+    }
+
+    private static double rms(double[] e) {
+        double sum = 0;
+        for (double v : e) {
+            sum += v * v;
+        }
+        return Math.sqrt(sum / e.length);
+    }
+
+    private static double mean(double[] e) {
+        return java.util.Arrays.stream(e).average().orElseThrow();
+    }
+
+    private static double share(boolean[] within) {
+        int covered = 0;
+        for (boolean w : within) {
+            covered += w ? 1 : 0;
+        }
+        return covered / (double) within.length;
+    }
+
+    private static double coverage() {
+        int covered = 0;
+        for (boolean[] gas : within2u) {
+            for (boolean w : gas) {
+                covered += w ? 1 : 0;
+            }
+        }
+        return covered / (2.0 * MIXTURES);
+    }
+
+    /**
+     * The truth lies within two standard uncertainties for at least 80 % of the 48 results. For a normal error with
+     * the variance the formula assumes it would be 95.4 % (normal distribution, any statistics handbook); the
+     * formula takes the noise as equal at every point, but the generator's noise is on the transmittance, so the
+     * absorbance noise at a saturated line's core, where the amounts are decided, is up to twice that of the
+     * baseline, and u comes out short (the same cause as in the curve-of-growth accuracy test of the quantify
+     * bundle).
+     */
+    @Test
+    void twoStandardUncertaintiesCoverTheTruth() {
+        assertTrue(coverage() >= 0.80, figures);
+    }
+
+    /**
+     * At least three times smaller RMS errors than the curve of growth for both gases: its references hold three
+     * amounts, between which it interpolates, while the line list holds at every amount.
+     */
+    @Test
+    void errorsThreeTimesSmallerThanCurveOfGrowth() {
+        for (int g = 0; g < 2; g++) {
+            assertTrue(3 * rms(lineListError[g]) < rms(curveError[g]), InstrumentMixture.GASES.get(g) + ": "
+                    + figures);
+        }
+    }
+
+    /** The algorithm joins a registry by its name, and a method naming it reads back from its text only with it. */
+    @Test
+    void travelsByNameThroughTheRegistry() {
+        LineListAlgorithm algorithm = new LineListAlgorithm(generator.setup());
+        QuantificationMethod m = method(algorithm).build();
+        assertTrue(m.references().isEmpty());
+        assertTrue(m.canonicalText().contains("\nalgorithm LINE_LIST\n"), m.canonicalText());
+        FitAlgorithmRegistry registry = FitAlgorithmRegistry.withBuiltInAlgorithms().register(algorithm);
+        assertEquals(m, QuantificationMethod.parse(m.canonicalText(), registry));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> QuantificationMethod.parse(m.canonicalText(), FitAlgorithmRegistry.withBuiltInAlgorithms()));
+        assertTrue(e.getMessage().contains("unknown fit algorithm 'line-list', known: classical-least-squares, "
+                + "curve-of-growth"), e.getMessage());
+    }
+
+    @Test
+    void refusesACompoundWithoutLineList() {
+        QuantificationMethod m = QuantificationMethod.builder("TX3").pathLengthMetres(InstrumentMixture.PATH)
+                .algorithm(new LineListAlgorithm(generator.setup()))
+                .analyte(new Analyte("TX3", List.of(), List.of(AnalysisRegion.of(2100, 2200, 1)))).build();
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> PreparedMethod.prepare(m, InstrumentMixture.AXIS));
+        assertTrue(e.getMessage().contains("TX3") && e.getMessage().contains("[TX1, TX2]"), e.getMessage());
+    }
+
+    /** A sample whose lines lie at nu (1 + 3e-5): the scale term finds it, and the amounts stay right. */
+    @Test
+    void scaleTermFollowsAMisSetLaser() {
+        double s = 3e-5;
+        Spectrum stretched = generator.absorbance(new double[] {600, 1500}, 0, 0, s, NOISE, new Random(1));
+        CompoundResult r = quantifier(method(new LineListAlgorithm(generator.setup())).build())
+                .fit(Sample.of(stretched)).get(0);
+        assertEquals(s, r.scale(), 3e-6);
+        assertEquals(600 / InstrumentMixture.PATH, r.concentration(), 0.01 * 600 / InstrumentMixture.PATH);
+        assertFalse(r.flagged(QualityFlag.NOT_CONVERGED));
+    }
+}

@@ -1,0 +1,105 @@
+package org.tracegas.quantify.linelist;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Set;
+
+import org.tracegas.library.synthesis.LineByLineModel;
+import org.tracegas.quantify.FitAlgorithm;
+import org.tracegas.quantify.PreparedFit;
+import org.tracegas.quantify.QuantificationMethod;
+import org.tracegas.quantify.ShiftTerm;
+import org.tracegas.quantify.internal.SystemsFit;
+import org.tracegas.quantify.linelist.internal.LineListSystem;
+import org.tracegas.quantify.linelist.internal.MixtureModel;
+import org.tracegas.spectrum.SpectralAxis;
+
+/**
+ * Fits the sample with spectra computed from line lists at the cell's conditions, after Griffith, Appl. Spectrosc.
+ * 50, 59 (1996): the monochromatic transmittance of the whole mixture, the product of every compound's
+ * exp(-tau), computed line by line on a fine grid at the cell's temperature, pressure and path, then seen through
+ * the instrument (line shape of the apodization and maximum path difference, field-of-view broadening) and turned
+ * into absorbance. All amounts, the baselines and (with {@link ShiftTerm#SCALE}) a relative wavenumber scale are
+ * fitted together by Levenberg-Marquardt; the uncertainty comes from the final Jacobian. Needs no reference
+ * spectra, so no amount is outside a calibrated range.
+ * <p>
+ * A method's text names the algorithm ({@code LINE_LIST}) but does not yet hold its {@link LineListSetup}: the
+ * line lists, the cell's conditions and the instrument are given with the algorithm, so a stored method's hash
+ * does not bind them, and the algorithm is registered directly ({@link
+ * org.tracegas.quantify.FitAlgorithmRegistry#register}), not through the extension point, whose classes are
+ * created without arguments.
+ */
+public final class LineListAlgorithm implements FitAlgorithm {
+
+    /** The name in method files and stored method versions. */
+    public static final String NAME = "line-list";
+
+    private final LineListSetup setup;
+
+    public LineListAlgorithm(LineListSetup setup) {
+        if (setup == null) {
+            throw new IllegalArgumentException("setup must not be null");
+        }
+        this.setup = setup;
+    }
+
+    public LineListSetup setup() {
+        return setup;
+    }
+
+    @Override
+    public String name() {
+        return NAME;
+    }
+
+    @Override
+    public Set<ShiftTerm> shiftTerms() {
+        return Set.of(ShiftTerm.SCALE);
+    }
+
+    @Override
+    public boolean fitsReferences() {
+        return false;
+    }
+
+    /** @throws IllegalArgumentException also if the setup has no line list of a compound the method fits */
+    @Override
+    public PreparedFit prepare(QuantificationMethod method, SpectralAxis axis) {
+        for (String compound : method.fittedCompounds()) {
+            if (!setup.models().containsKey(compound)) {
+                throw new IllegalArgumentException("method " + method.name() + " fits " + compound
+                        + ", of which the line-list setup has no line list; it has "
+                        + new java.util.TreeSet<>(setup.models().keySet()));
+            }
+        }
+        return new SystemsFit(method, axis, (label, compounds, points, wavenumbers) -> {
+            List<LineByLineModel> models = new ArrayList<>();
+            compounds.forEach(c -> models.add(setup.models().get(c)));
+            double low = Double.POSITIVE_INFINITY;
+            double high = Double.NEGATIVE_INFINITY;
+            for (int j = 0; j < points.size(); j++) {
+                low = Math.min(low, wavenumbers[points.row(j)]);
+                high = Math.max(high, wavenumbers[points.row(j)]);
+            }
+            MixtureModel mixture = new MixtureModel(models, setup.temperature(), setup.pressure(),
+                    method.pathLengthMetres(), setup.lineShape(), setup.fieldOfView(), low, high);
+            return new LineListSystem(label, compounds, mixture, points, wavenumbers,
+                    method.shiftTerm() == ShiftTerm.SCALE, method.tolerance(), method.maxIterations());
+        });
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof LineListAlgorithm a && a.setup.equals(setup);
+    }
+
+    @Override
+    public int hashCode() {
+        return setup.hashCode();
+    }
+
+    @Override
+    public String toString() {
+        return NAME;
+    }
+}

@@ -1,0 +1,231 @@
+package org.tracegas.quantify.linelist.internal;
+
+import java.util.List;
+import java.util.function.IntFunction;
+
+import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
+import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer.Optimum;
+import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
+import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunction;
+import org.apache.commons.math3.linear.Array2DRowRealMatrix;
+import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.DiagonalMatrix;
+import org.apache.commons.math3.linear.RealMatrix;
+import org.apache.commons.math3.linear.RealVector;
+import org.apache.commons.math3.util.Pair;
+import org.tracegas.quantify.ShiftTerm;
+import org.tracegas.quantify.internal.FitPoints;
+import org.tracegas.quantify.internal.LinearDesign;
+import org.tracegas.quantify.internal.SystemFit;
+import org.tracegas.quantify.internal.SystemSolver;
+
+/**
+ * One line-list fit: the sample absorbance at the fit points against -log10 of the mixture's observed
+ * transmittance ({@link MixtureModel}) read at nu / (1 + scale), plus each region's baseline polynomial. The
+ * parameters (amounts, baseline coefficients, scale) are fitted together by the Levenberg-Marquardt optimizer of
+ * Commons Math; the scale is held within +-{@link ShiftTerm#MAX_SCALE} and a fit that ends at that bound, or does
+ * not settle within the iteration cap, is reported as not converged. The amounts' standard deviations are
+ * sqrt(s^2 (J^T W J)^-1) of the final Jacobian, s^2 the weighted residual sum of squares over the degrees of freedom.
+ */
+public final class LineListSystem implements SystemSolver {
+
+    private static final double LN10 = Math.log(10);
+    /** Floor of the observed transmittance: the line shape's side lobes may dip a saturated line below zero. */
+    private static final double LEAST_TRANSMITTANCE = 1e-12;
+
+    private final String label;
+    private final List<String> compounds;
+    private final MixtureModel mixture;
+    private final CubicReader reader;
+    private final FitPoints points;
+    private final double[] nu;          // wavenumber per fit point
+    private final double[] weights;     // per fit point, or null
+    private final double[][] baseline;  // [term][fit point]
+    private final boolean scale;
+    private final double tolerance;
+    private final int maxIterations;
+
+    /**
+     * @param label       names the fit in messages
+     * @param compounds   compound names in the mixture model's order
+     * @param mixture     the mixture's model
+     * @param points      the fit points with their baselines and weights
+     * @param wavenumbers the sample axis
+     * @param scale       whether a relative wavenumber scale is fitted
+     * @param tolerance   relative change of the cost and the parameters at which the iteration stops
+     * @param maxIterations cap on iterations
+     */
+    public LineListSystem(String label, List<String> compounds, MixtureModel mixture, FitPoints points,
+            double[] wavenumbers, boolean scale, double tolerance, int maxIterations) {
+        this.label = label;
+        this.compounds = List.copyOf(compounds);
+        this.mixture = mixture;
+        this.reader = new CubicReader(mixture.grid());
+        this.points = points;
+        this.nu = points.gather(wavenumbers);
+        this.weights = points.weightsUnsafe();
+        this.baseline = points.baselineUnsafe();
+        this.scale = scale;
+        this.tolerance = tolerance;
+        this.maxIterations = maxIterations;
+    }
+
+    @Override
+    public String label() {
+        return label;
+    }
+
+    @Override
+    public FitPoints points() {
+        return points;
+    }
+
+    @Override
+    public int compounds() {
+        return compounds.size();
+    }
+
+    @Override
+    public String compound(int column) {
+        return compounds.get(column);
+    }
+
+    /** No reference bounds the amounts: a line list holds at any amount. */
+    @Override
+    public double highestAmount(int column) {
+        return Double.POSITIVE_INFINITY;
+    }
+
+    @Override
+    public SystemFit fit(double[] sample) {
+        int n = points.size();
+        int[] active = new int[n];
+        int used = 0;
+        for (int j = 0; j < n; j++) {
+            if (Double.isFinite(sample[points.row(j)])) {
+                active[used++] = j;
+            }
+        }
+        int nc = compounds.size();
+        int nb = baseline.length;
+        int p = nc + nb + (scale ? 1 : 0);
+        if (used <= p) {
+            throw new IllegalArgumentException(label + ": only " + used + " of " + n
+                    + " fit points are finite in the sample, too few for " + p + " parameters");
+        }
+        double[] target = new double[used];
+        double[] w = weights == null ? null : new double[used];
+        for (int k = 0; k < used; k++) {
+            target[k] = sample[points.row(active[k])];
+            if (w != null) {
+                w[k] = weights[active[k]];
+            }
+        }
+        int[] rows = java.util.Arrays.copyOf(active, used);
+        MultivariateJacobianFunction model = point -> {
+            double[] values = new double[rows.length];
+            double[][] jacobian = new double[rows.length][p];
+            evaluate(point.toArray(), rows, values, jacobian);
+            return new Pair<RealVector, RealMatrix>(new ArrayRealVector(values, false),
+                    new Array2DRowRealMatrix(jacobian, false));
+        };
+        boolean[] capped = new boolean[1];
+        LeastSquaresBuilder builder = new LeastSquaresBuilder().model(model).target(target).start(new double[p])
+                .maxIterations(Integer.MAX_VALUE).maxEvaluations(Integer.MAX_VALUE)
+                .checker((iteration, previous, current) -> {
+                    if (iteration >= maxIterations) {
+                        capped[0] = true;
+                        return true;
+                    }
+                    double before = previous.getCost();
+                    return Math.abs(before - current.getCost()) <= tolerance * Math.max(before, Double.MIN_NORMAL);
+                })
+                .parameterValidator(point -> {
+                    if (scale) {
+                        double s = point.getEntry(p - 1);
+                        point.setEntry(p - 1, Math.max(-ShiftTerm.MAX_SCALE, Math.min(ShiftTerm.MAX_SCALE, s)));
+                    }
+                    return point;
+                });
+        if (w != null) {
+            builder.weight(new DiagonalMatrix(w));
+        }
+        Optimum optimum = new LevenbergMarquardtOptimizer().withCostRelativeTolerance(tolerance)
+                .withParameterRelativeTolerance(tolerance).optimize(builder.build());
+        double[] best = optimum.getPoint().toArray();
+        double[] values = new double[used];
+        double[][] jacobian = new double[used][p];
+        evaluate(best, rows, values, jacobian);
+        double[] residual = new double[n];
+        java.util.Arrays.fill(residual, Double.NaN);
+        double rss = 0;
+        for (int k = 0; k < used; k++) {
+            double r = target[k] - values[k];
+            residual[rows[k]] = r;
+            rss += (w == null ? 1 : w[k]) * r * r;
+        }
+        double[][] columns = new double[p][used];
+        for (int k = 0; k < used; k++) {
+            for (int q = 0; q < p; q++) {
+                columns[q][k] = jacobian[k][q];
+            }
+        }
+        double[][] cov = LinearDesign.of(columns, w, label + ": Jacobian at the optimum").unscaledCovariance();
+        double s2 = rss / (used - p);
+        double[] amounts = java.util.Arrays.copyOf(best, nc);
+        double[] sd = new double[nc];
+        for (int c = 0; c < nc; c++) {
+            sd[c] = Math.sqrt(s2 * cov[c][c]);
+        }
+        double fitted = scale ? best[p - 1] : Double.NaN;
+        boolean atBound = scale && Math.abs(fitted) >= ShiftTerm.MAX_SCALE * (1 - 1e-9);
+        return new SystemFit(amounts, sd, residual, contributions(amounts, scale ? fitted : 0), optimum.getIterations(),
+                !capped[0] && !atBound, Double.NaN, Double.NaN, fitted, n - used);
+    }
+
+    /** Model absorbance and its derivatives at the given fit points. */
+    private void evaluate(double[] theta, int[] rows, double[] values, double[][] jacobian) {
+        int nc = compounds.size();
+        int nb = baseline.length;
+        double[] amounts = java.util.Arrays.copyOf(theta, nc);
+        double s = scale ? theta[theta.length - 1] : 0;
+        double[][] derivatives = new double[nc][];
+        double[] observed = mixture.observe(amounts, derivatives);
+        double[] read = new double[2];
+        double[] dRead = new double[2];
+        for (int k = 0; k < rows.length; k++) {
+            int j = rows[k];
+            double at = nu[j] / (1 + s);
+            reader.read(observed, at, read);
+            double t = Math.max(read[0], LEAST_TRANSMITTANCE);
+            double value = -Math.log10(t);
+            for (int c = 0; c < nc; c++) {
+                reader.read(derivatives[c], at, dRead);
+                jacobian[k][c] = -dRead[0] / (t * LN10);
+            }
+            for (int b = 0; b < nb; b++) {
+                value += theta[nc + b] * baseline[b][j];
+                jacobian[k][nc + b] = baseline[b][j];
+            }
+            if (scale) {
+                // d/ds of -log10 T(nu / (1 + s)) = (nu / (1 + s)^2) T'(at) / (T ln 10)
+                jacobian[k][nc + nb] = nu[j] / ((1 + s) * (1 + s)) * read[1] / (t * LN10);
+            }
+            values[k] = value;
+        }
+    }
+
+    /** Absorbance each compound alone would show at its fitted amount, computed when a plot asks for it. */
+    private IntFunction<double[]> contributions(double[] amounts, double s) {
+        return c -> {
+            double[] observed = mixture.observeAlone(c, amounts[c]);
+            double[] out = new double[nu.length];
+            double[] read = new double[2];
+            for (int j = 0; j < out.length; j++) {
+                reader.read(observed, nu[j] / (1 + s), read);
+                out[j] = -Math.log10(Math.max(read[0], LEAST_TRANSMITTANCE));
+            }
+            return out;
+        };
+    }
+}
