@@ -54,14 +54,15 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         users = new JdbcUserService(transactions, maxFailedLogins);
         projects = new JdbcProjectService(transactions);
         spectra = new JdbcSpectrumService(transactions, backend);
-        versions = new JdbcVersionService(transactions);
-        results = new JdbcResultService(transactions);
+        JdbcVersionService versionService = new JdbcVersionService(transactions);
+        versions = versionService;
+        results = new JdbcResultService(transactions, versionService);
         qa = new JdbcQaService(transactions);
-        blocks = new JdbcBlockService(transactions);
-        workUnits = new JdbcWorkUnitService(transactions, backend);
+        blocks = new JdbcBlockService(transactions, versionService);
+        workUnits = new JdbcWorkUnitService(transactions, backend, versionService);
         audit = new JdbcAuditService(transactions);
         imports = new JdbcImportService(transactions);
-        analyses = new JdbcAnalysisService(transactions);
+        analyses = new JdbcAnalysisService(transactions, versionService);
     }
 
     /** An embedded H2 database in {@code folder} (created when missing), file {@code workspace.mv.db}. */
