@@ -2,6 +2,7 @@ package org.tracegas.store;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -136,6 +137,47 @@ abstract class BlockServiceContract {
 
         assertTrue(e.getMessage().startsWith("block[2].results[0].methodVersionId"), e.getMessage());
         assertEquals(before, f.count(COUNT_ROWS), "nothing half written");
+    }
+
+    @Test
+    void versionsFrozenByEarlierBlocksAreStillCheckedForTheirKind() throws Exception {
+        // the second block reads the versions frozen by the first, so the third finds them remembered
+        f.store.blocks().store(f.analyst, f.project.id(), SampleBlocks.block(0, 2, 1, f.method.id(), f.library.id()));
+        f.store.blocks().store(f.analyst, f.project.id(), SampleBlocks.block(2, 2, 1, f.method.id(), f.library.id()));
+        long before = f.count(COUNT_ROWS);
+
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(
+                f.analyst, f.project.id(), SampleBlocks.block(4, 1, 1, f.library.id(), f.library.id())));
+
+        assertEquals("block[0].results[0].methodVersionId " + f.library.id()
+                + " is a LIBRARY version, not a METHOD version", e.getMessage());
+        assertEquals(before, f.count(COUNT_ROWS), "nothing half written");
+        NoSuchObjectException missing = assertThrows(NoSuchObjectException.class, () -> f.store.blocks().store(
+                f.analyst, f.project.id(), SampleBlocks.block(4, 1, 1, f.method.id(), "no-such-version")));
+        assertTrue(missing.getMessage().contains("no-such-version"), missing.getMessage());
+    }
+
+    @Test
+    void versionFrozenOnlyByARefusedBlockStaysADraftUntilAStoredBlockUsesIt() throws Exception {
+        VersionInfo draft = f.store.versions().create(f.analyst, VersionKind.LIBRARY, "Kiln gases, hot cell",
+                "sha=def\n", "hot cell");
+        // the draft is frozen by the block's first check, then the block is refused and rolled back
+        assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(f.analyst, f.project.id(),
+                SampleBlocks.block(0, 1, 1, draft.id(), draft.id())));
+        assertFalse(f.store.versions().version(draft.id()).frozen(), "the refused block froze nothing");
+        VersionInfo edited = f.store.versions().updateDraft(f.analyst, draft.id(), draft.rowVersion(), "sha=0ef\n",
+                "corrected hash");
+
+        for (int first = 0; first < 6; first += 2) {
+            f.store.blocks().store(f.analyst, f.project.id(),
+                    SampleBlocks.block(first, 2, 1, f.method.id(), draft.id()));
+        }
+
+        VersionInfo used = f.store.versions().version(draft.id());
+        assertTrue(used.frozen());
+        assertThrows(FrozenVersionException.class, () -> f.store.versions().updateDraft(f.analyst, draft.id(),
+                used.rowVersion(), "sha=1ef\n", "too late"));
+        assertEquals(edited.contentHash(), used.contentHash());
     }
 
     @Test

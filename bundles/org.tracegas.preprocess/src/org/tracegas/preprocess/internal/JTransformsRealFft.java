@@ -3,8 +3,19 @@ package org.tracegas.preprocess.internal;
 import org.jtransforms.fft.DoubleFFT_1D;
 import org.tracegas.preprocess.RealFft;
 
-/** {@link RealFft} on JTransforms' in-place real transform. */
+import pl.edu.icm.jlargearrays.ConcurrencyUtils;
+
+/**
+ * {@link RealFft} on JTransforms' in-place real transform, each transform on the thread that asks for it.
+ */
 public final class JTransformsRealFft implements RealFft {
+
+    static {
+        // The batch already keeps every core busy with whole spectra, so splitting one transform over threads
+        // only adds hand-overs; and JTransforms' shared pool starts non-daemon threads, which kept a JVM whose
+        // work was done alive until they idled out.
+        ConcurrencyUtils.setNumberOfThreads(1);
+    }
 
     private final int n;
     private final DoubleFFT_1D plan;

@@ -30,8 +30,11 @@ final class JdbcAnalysisService implements AnalysisService {
 
     private final Transactions transactions;
 
-    JdbcAnalysisService(Transactions transactions) {
+    private final JdbcVersionService versions;
+
+    JdbcAnalysisService(Transactions transactions, JdbcVersionService versions) {
         this.transactions = transactions;
+        this.versions = versions;
     }
 
     @Override
@@ -55,7 +58,7 @@ final class JdbcAnalysisService implements AnalysisService {
                             + " is not a measurement of project " + projectId);
                 }
                 for (int j = 0; j < a.results().size(); j++) {
-                    JdbcResultService.requireVersions(tx, a.results().get(j), checked,
+                    JdbcResultService.requireVersions(tx, versions, a.results().get(j), checked,
                             "analyses[" + i + "].results[" + j + "].");
                 }
             }

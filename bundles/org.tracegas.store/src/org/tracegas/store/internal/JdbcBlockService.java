@@ -51,9 +51,11 @@ final class JdbcBlockService implements BlockService {
     }
 
     private final Transactions transactions;
+    private final JdbcVersionService versions;
 
-    JdbcBlockService(Transactions transactions) {
+    JdbcBlockService(Transactions transactions, JdbcVersionService versions) {
         this.transactions = transactions;
+        this.versions = versions;
     }
 
     @Override
@@ -84,7 +86,7 @@ final class JdbcBlockService implements BlockService {
         return transactions.run("storing a block of " + encoded.size() + " processed spectra in project "
                 + encoded.projectId(), tx -> {
                     Guard.requireProject(tx, encoded.actor(), encoded.projectId(), AccessLevel.WRITE);
-                    Written written = insert(tx, encoded);
+                    Written written = insert(tx, versions, encoded);
                     tx.auditAll(written.audit(), written.rows());
                     return written.stored();
                 });
@@ -102,10 +104,10 @@ final class JdbcBlockService implements BlockService {
         }
     }
 
-    /** As {@link #insert(Tx, Encoded)}, encoding the block first. */
-    static Written insert(Tx tx, Session actor, String projectId, List<ProcessedSpectrum> block)
-            throws SQLException {
-        return insert(tx, encodeRows(actor, projectId, block));
+    /** As {@link #insert(Tx, JdbcVersionService, Encoded)}, encoding the block first. */
+    static Written insert(Tx tx, JdbcVersionService versions, Session actor, String projectId,
+            List<ProcessedSpectrum> block) throws SQLException {
+        return insert(tx, versions, encodeRows(actor, projectId, block));
     }
 
     /**
@@ -113,13 +115,13 @@ final class JdbcBlockService implements BlockService {
      * records are returned, not appended, so that the caller appends them last: the audit chain head stays
      * locked only for the end of the transaction.
      */
-    static Written insert(Tx tx, Encoded encoded) throws SQLException {
+    static Written insert(Tx tx, JdbcVersionService versions, Encoded encoded) throws SQLException {
         Set<String> checked = new HashSet<>();
         List<ProcessedSpectrum> block = encoded.block();
         for (int i = 0; i < block.size(); i++) {
             List<NewResult> results = block.get(i).results();
             for (int j = 0; j < results.size(); j++) {
-                JdbcResultService.requireVersions(tx, results.get(j), checked,
+                JdbcResultService.requireVersions(tx, versions, results.get(j), checked,
                         "block[" + i + "].results[" + j + "].");
             }
         }

@@ -26,15 +26,16 @@ import org.tracegas.store.ResultConditions;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
 
 final class JdbcResultService implements ResultService {
 
     private final Transactions transactions;
+    private final JdbcVersionService versions;
 
-    JdbcResultService(Transactions transactions) {
+    JdbcResultService(Transactions transactions, JdbcVersionService versions) {
         this.transactions = transactions;
+        this.versions = versions;
     }
 
     @Override
@@ -67,9 +68,9 @@ final class JdbcResultService implements ResultService {
     static final String INSERT = DataKind.RESULT.insert("row_version", "0");
 
     /** @param checked versions and measurements already checked and frozen in this transaction */
-    private static ResultInfo insert(Tx tx, Session actor, String projectId, NewResult result,
-            Set<String> checked) throws SQLException {
-        requireVersions(tx, result, checked, "");
+    private ResultInfo insert(Tx tx, Session actor, String projectId, NewResult result, Set<String> checked)
+            throws SQLException {
+        requireVersions(tx, versions, result, checked, "");
         if (result.measurementId() != null && checked.add("measurement:" + result.measurementId())
                 && tx.queryOne("SELECT 1 FROM measurement WHERE id = ? AND project_id = ?", rs -> 1,
                         result.measurementId(), projectId).isEmpty()) {
@@ -144,22 +145,15 @@ final class JdbcResultService implements ResultService {
      * @param checked versions already checked and frozen in this transaction
      * @param where   prefix of the field names in error messages, e.g. {@code "block[3].results[0]."}
      */
-    static void requireVersions(Tx tx, NewResult result, Set<String> checked, String where) throws SQLException {
+    static void requireVersions(Tx tx, JdbcVersionService versions, NewResult result, Set<String> checked,
+            String where) throws SQLException {
         if (checked.add("method:" + result.methodVersionId())) {
-            requireKindAndFreeze(tx, result.methodVersionId(), VersionKind.METHOD, where + "methodVersionId");
+            versions.requireUsableAndFreeze(tx, result.methodVersionId(), VersionKind.METHOD,
+                    where + "methodVersionId");
         }
         if (checked.add("library:" + result.libraryVersionId())) {
-            requireKindAndFreeze(tx, result.libraryVersionId(), VersionKind.LIBRARY, where + "libraryVersionId");
-        }
-    }
-
-    private static void requireKindAndFreeze(Tx tx, String versionId, VersionKind expected, String field)
-            throws SQLException {
-        VersionInfo version = JdbcVersionService.load(tx, versionId);
-        requireKind(version, expected, field);
-        // a frozen version stays frozen: only the first use writes the flag, later blocks only read it
-        if (!version.frozen()) {
-            JdbcVersionService.freeze(tx, versionId);
+            versions.requireUsableAndFreeze(tx, result.libraryVersionId(), VersionKind.LIBRARY,
+                    where + "libraryVersionId");
         }
     }
 
@@ -170,13 +164,6 @@ final class JdbcResultService implements ResultService {
             return tx.queryList("SELECT * FROM analysis_result WHERE project_id = ? ORDER BY recorded_at, id",
                     JdbcResultService::map, projectId);
         });
-    }
-
-    private static void requireKind(VersionInfo version, VersionKind expected, String field) {
-        if (version.kind() != expected) {
-            throw new IllegalArgumentException(field + " " + version.id() + " is a " + version.kind()
-                    + " version, not a " + expected + " version");
-        }
     }
 
     static String formatFlags(NewResult r) {

@@ -58,10 +58,12 @@ final class JdbcWorkUnitService implements WorkUnitService {
 
     private final Transactions transactions;
     private final Backend backend;
+    private final JdbcVersionService versions;
 
-    JdbcWorkUnitService(Transactions transactions, Backend backend) {
+    JdbcWorkUnitService(Transactions transactions, Backend backend, JdbcVersionService versions) {
         this.transactions = transactions;
         this.backend = backend;
+        this.versions = versions;
     }
 
     @Override
@@ -263,7 +265,7 @@ final class JdbcWorkUnitService implements WorkUnitService {
                     Unit before = lockOwn(tx, lease, "complete");
                     JdbcBlockService.Written written = block.isEmpty()
                             ? new JdbcBlockService.Written(List.of(), List.of(), List.of(), 0)
-                            : JdbcBlockService.insert(tx, actor, projectId, block);
+                            : JdbcBlockService.insert(tx, versions, actor, projectId, block);
                     List<String> measurementIds = written.stored().stream().map(StoredMeasurement::measurementId)
                             .toList();
                     try (PreparedStatement ps = tx.connection().prepareStatement("INSERT INTO work_unit_measurement"

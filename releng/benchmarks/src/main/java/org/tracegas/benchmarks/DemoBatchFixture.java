@@ -42,6 +42,8 @@ final class DemoBatchFixture implements AutoCloseable {
     final Path folder;
     /** One hour (60) of the demo's stack-gas interferograms. */
     final Path hour;
+    /** Six hours (360) of the demo's stack-gas interferograms, one file an hour, starting with {@link #hour}. */
+    final List<Path> sixHours;
     final SpectrumChain chain;
     final Quantifier quantifier;
     final WorkspaceStore store;
@@ -55,7 +57,8 @@ final class DemoBatchFixture implements AutoCloseable {
         Path raw = folder.resolve("raw");
         DemoPhysics physics = DemoPhysics.fromInventedLineLists(folder.resolve("line-lists"));
         DemoCampaignFiles.write(raw, physics, ProgressListener.NONE, new CancellationFlag());
-        hour = DemoCampaignFiles.stackFiles(raw).get(3);
+        sixHours = DemoCampaignFiles.stackFiles(raw).subList(3, 9);
+        hour = sixHours.get(0);
         InterferogramTransform transform = new InterferogramTransform(DemoMethod.transform());
         List<Background> backgrounds = new ArrayList<>();
         try (ContainerReader reader = ContainerReader.open(DemoCampaignFiles.qaFile(raw))) {

@@ -124,7 +124,8 @@ public class DataBindingBenchmark {
     public int blockUnbound(Workspace w) {
         return w.transactions.run("storing an unbound block", tx -> {
             Guard.requireProject(tx, w.analyst, w.projectId, AccessLevel.WRITE);
-            JdbcBlockService.Written written = JdbcBlockService.insert(tx, w.analyst, w.projectId, w.block);
+            JdbcBlockService.Written written = JdbcBlockService.insert(tx, (JdbcVersionService) w.store.versions(),
+                    w.analyst, w.projectId, w.block);
             List<List<RowBindings.RowRef>> none = new ArrayList<>();
             for (int i = 0; i < written.audit().size(); i++) {
                 none.add(List.of());
