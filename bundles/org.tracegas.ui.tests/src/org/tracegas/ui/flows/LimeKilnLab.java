@@ -162,19 +162,18 @@ final class LimeKilnLab {
      * memory) whose peak absorbance is 0.5 per reference amount.
      */
     static double[] band(double perReference) {
-        double[] a = new double[AXIS.size()];
-        for (int k = 0; k < a.length; k++) {
-            double x = (AXIS.get(k) - 2143) / 12;
-            a[k] = 0.5 * perReference / (1 + x * x);
-        }
-        return a;
+        return lorentzian(2143, 12, perReference);
     }
 
-    /** An invented narrow water band (Lorentzian) whose peak absorbance is 0.5 per reference amount. */
+    /** An invented narrow water band whose peak absorbance is 0.5 per reference amount. */
     static double[] waterBand(double perReference) {
+        return lorentzian(WATER_CENTRE, WATER_WIDTH, perReference);
+    }
+
+    private static double[] lorentzian(double centre, double halfWidth, double perReference) {
         double[] a = new double[AXIS.size()];
         for (int k = 0; k < a.length; k++) {
-            double x = (AXIS.get(k) - WATER_CENTRE) / WATER_WIDTH;
+            double x = (AXIS.get(k) - centre) / halfWidth;
             a[k] = 0.5 * perReference / (1 + x * x);
         }
         return a;
