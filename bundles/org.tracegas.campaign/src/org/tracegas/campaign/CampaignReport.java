@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
@@ -141,6 +142,29 @@ public final class CampaignReport {
             charts.addAll(remade);
         }
         return charts;
+    }
+
+    /** Where a report was written: its PDF and its CSV of results. */
+    public record Written(Path pdf, Path csv) {
+    }
+
+    /**
+     * Writes the report into {@code folder} (made if missing) as report.pdf and results.csv, each whole or not at
+     * all. A report id names one report in the workspace, so an id signed already on another project is refused
+     * before anything is written: its signatures would otherwise cover two reports.
+     *
+     * @throws ReportIdTakenException if the report id is signed already on another project of the workspace
+     */
+    public Written writeInto(ReportContent content, Path folder) throws IOException, ReportIdTakenException {
+        String reportId = content.campaign().reportId();
+        Optional<String> other = store.reviews().otherProjectWithReport(projectId, reportId);
+        if (other.isPresent()) {
+            throw new ReportIdTakenException(reportId, other.get());
+        }
+        Files.createDirectories(folder);
+        Written written = new Written(folder.resolve("report.pdf"), folder.resolve("results.csv"));
+        write(content, written.pdf(), written.csv());
+        return written;
     }
 
     /** Writes the PDF and the CSV of results, each whole or not at all. */

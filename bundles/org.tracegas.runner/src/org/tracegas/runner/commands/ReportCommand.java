@@ -1,11 +1,10 @@
 package org.tracegas.runner.commands;
 
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
-import java.util.Optional;
 
 import org.tracegas.campaign.CampaignReport;
+import org.tracegas.campaign.ReportIdTakenException;
 import org.tracegas.campaign.ReportPlan;
 import org.tracegas.importer.ImportException;
 import org.tracegas.library.io.FileFormatException;
@@ -59,27 +58,25 @@ public final class ReportCommand implements Command {
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            CampaignReport report = new CampaignReport(store, actor, project.id(), StoredMethods.SOFTWARE);
             ReportContent content;
             try {
                 StoredMethods.Found found = StoredMethods.find(store, options);
-                content = new CampaignReport(store, actor, project.id(), StoredMethods.SOFTWARE)
-                        .content(found.version(), found.method(), ReportPlan.read(options.path("--plan")));
+                content = report.content(found.version(), found.method(), ReportPlan.read(options.path("--plan")));
             } catch (FileFormatException | ImportException e) {
                 context.err().println("tracegas report: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
-            String reportId = content.campaign().reportId();
-            Optional<String> other = store.reviews().otherProjectWithReport(project.id(), reportId);
-            if (other.isPresent()) {
-                context.err().println("tracegas report: report id " + reportId + " is signed already on project "
-                        + other.get() + " of this workspace; give this report its own report-id in the plan "
-                        + options.path("--plan") + " (nothing written)");
+            CampaignReport.Written written;
+            try {
+                written = report.writeInto(content, out);
+            } catch (ReportIdTakenException e) {
+                context.err().println("tracegas report: " + e.getMessage() + "; give this report its own report-id"
+                        + " in the plan " + options.path("--plan") + " (nothing written)");
                 return ExitCode.BAD_INPUT;
             }
-            Files.createDirectories(out);
-            CampaignReport.write(content, out.resolve("report.pdf"), out.resolve("results.csv"));
-            context.out().println("Report: " + out.resolve("report.pdf"));
-            context.out().println("Results: " + out.resolve("results.csv"));
+            context.out().println("Report: " + written.pdf());
+            context.out().println("Results: " + written.csv());
             // what report-sign is given, so that a signature covers exactly the content reviewed
             context.out().println("Report id: " + content.campaign().reportId());
             context.out().println("Content hash (SHA-256): " + content.contentHash());

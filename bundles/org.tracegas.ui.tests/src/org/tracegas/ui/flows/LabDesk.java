@@ -32,8 +32,13 @@ final class LabDesk implements AutoCloseable {
     final LimeKilnLab lab;
 
     LabDesk(Path folder, int width, int height) throws Exception {
+        this(folder, width, height, 0);
+    }
+
+    /** @param waterPpm the stack's moisture, which the lab's method then measures as well (0: neither) */
+    LabDesk(Path folder, int width, int height, double waterPpm) throws Exception {
         access = WorkspaceAccess.openH2(folder.resolve("ws"));
-        lab = new LimeKilnLab(access.store(), folder);
+        lab = new LimeKilnLab(access.store(), folder, waterPpm);
         Desk.get().start(access, lab.analyst, null);
         shell.setText("Tracegas Workbench — " + LimeKilnLab.ANALYST);
         shell.setLayout(new FillLayout());

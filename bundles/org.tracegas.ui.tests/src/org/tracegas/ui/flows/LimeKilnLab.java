@@ -54,15 +54,31 @@ final class LimeKilnLab {
     static final double NOISE = 2e-4;
     static final SpectralAxis AXIS = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.5, 601);
 
+    /** The invented moisture band's centre and half width, cm⁻¹, and its reference amount, ppm·m. */
+    static final double WATER_CENTRE = 2030;
+    static final double WATER_WIDTH = 3;
+    static final double WATER_REFERENCE_PPM_M = 100_000;
+
     final Path folder;
     final WorkspaceStore store;
+    /** The stack's moisture in the samples, ppm; 0 when the method does not measure moisture. */
+    final double waterPpm;
     final ProjectInfo project;
     final Session analyst;
     final Session reviewer;
 
     LimeKilnLab(WorkspaceStore store, Path folder) throws IOException {
+        this(store, folder, 0);
+    }
+
+    /**
+     * @param waterPpm the moisture of the stack; above 0 the library has a water reference (an invented band, as
+     *                 the CO one) and the method measures water as well, as a report on dry gas needs
+     */
+    LimeKilnLab(WorkspaceStore store, Path folder, double waterPpm) throws IOException {
         this.folder = folder;
         this.store = store;
+        this.waterPpm = waterPpm;
         Session admin = store.users().createFirstAdministrator(ADMIN, "Administrator", PASSWORD.toCharArray());
         String analystId = store.users().createUser(admin, ANALYST, "Taro Nakamura", Set.of(Role.ANALYST),
                 PASSWORD.toCharArray()).id();
@@ -98,7 +114,25 @@ final class LimeKilnLab {
                 origin = synthetic
                 origin-text = one invented band
                 uncertainty = 0.02
-                """);
+                """ + (waterPpm > 0 ? """
+                [reference]
+                file = h2o.jdx
+                cas = 7732-18-5
+                formula = H2O
+                molar-mass = 18.015
+                temperature = 296
+                pressure = 101.325
+                resolution = 0.5
+                apodization = Norton-Beer medium
+                origin = synthetic
+                origin-text = one invented band
+                uncertainty = 0.02
+                """ : ""));
+        if (waterPpm > 0) {
+            Files.writeString(lib.resolve("h2o.jdx"), JcampWriter.defaultPrecision().write(new Spectrum(AXIS,
+                    waterBand(1), Ordinate.ABSORBANCE), "H2O 100000 ppm m", Map.of("COMPOUND", "H2O", "PPM-M",
+                            Double.toString(WATER_REFERENCE_PPM_M))));
+        }
         Path method = Files.writeString(folder.resolve("kiln.method"), """
                 method = %s
                 library = lib/library.manifest
@@ -114,7 +148,12 @@ final class LimeKilnLab {
                 [analyte]
                 compound = CO
                 region = 2060..2240 baseline 1
-                """.formatted(METHOD, PATH_M));
+                """.formatted(METHOD, PATH_M) + (waterPpm > 0 ? """
+
+                [analyte]
+                compound = H2O
+                region = 2010..2050 baseline 1
+                """ : ""));
         MethodDefinition.read(method).record(store, analyst);
     }
 
@@ -123,18 +162,34 @@ final class LimeKilnLab {
      * memory) whose peak absorbance is 0.5 per reference amount.
      */
     static double[] band(double perReference) {
+        return lorentzian(2143, 12, perReference);
+    }
+
+    /** An invented narrow water band whose peak absorbance is 0.5 per reference amount. */
+    static double[] waterBand(double perReference) {
+        return lorentzian(WATER_CENTRE, WATER_WIDTH, perReference);
+    }
+
+    private static double[] lorentzian(double centre, double halfWidth, double perReference) {
         double[] a = new double[AXIS.size()];
         for (int k = 0; k < a.length; k++) {
-            double x = (AXIS.get(k) - 2143) / 12;
+            double x = (AXIS.get(k) - centre) / halfWidth;
             a[k] = 0.5 * perReference / (1 + x * x);
         }
         return a;
     }
 
-    /** The sample absorbance of {@code ppm} CO in the heated cell, with the noise of seed {@code seed}. */
-    static Spectrum sample(double ppm, long seed) {
-        double molecules = ppm * PATH_M * (P_CELL / P_REF) * (T_REF / T_CELL);
-        double[] a = band(molecules / REFERENCE_PPM_M);
+    /**
+     * The sample absorbance of {@code ppm} CO (and the lab's moisture) in the heated cell, with the noise of seed
+     * {@code seed}.
+     */
+    Spectrum sample(double ppm, long seed) {
+        double inBeam = PATH_M * (P_CELL / P_REF) * (T_REF / T_CELL);
+        double[] a = band(ppm * inBeam / REFERENCE_PPM_M);
+        double[] water = waterBand(waterPpm * inBeam / WATER_REFERENCE_PPM_M);
+        for (int k = 0; k < a.length; k++) {
+            a[k] += water[k];
+        }
         Random r = new Random(seed);
         for (int k = 0; k < a.length; k++) {
             a[k] += NOISE * r.nextGaussian();

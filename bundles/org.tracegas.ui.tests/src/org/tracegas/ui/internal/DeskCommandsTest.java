@@ -2,7 +2,6 @@ package org.tracegas.ui.internal;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
-import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -106,13 +105,5 @@ class DeskCommandsTest {
             desks++;
         }
         assertEquals(2, desks);
-    }
-
-    @Test
-    void aCommandOnlyTheRunnerDoesNamesTheRunnerCommand() {
-        String m = RunnerCommandHandler.message("report");
-        assertTrue(m.startsWith("Making a campaign report (PDF with its CSV of results) is not available in the"
-                + " workbench yet."), m);
-        assertTrue(m.contains("'tracegas report --help'"), m);
     }
 }

@@ -57,7 +57,8 @@ public final class RunMethodHandler extends AbstractHandler {
                     + " 'tracegas method-define'.");
             return null;
         }
-        VersionInfo version = methods.size() == 1 ? methods.get(0) : choose(shell, methods);
+        VersionInfo version = methods.size() == 1 ? methods.get(0) : choose(shell, methods, "Run method",
+                "The method to run (its newest version):");
         if (version == null) {
             return null;
         }
@@ -70,7 +71,8 @@ public final class RunMethodHandler extends AbstractHandler {
         return null;
     }
 
-    private static VersionInfo choose(Shell shell, List<VersionInfo> methods) {
+    /** The method the user picks among the newest versions of the workspace's methods; null when cancelled. */
+    static VersionInfo choose(Shell shell, List<VersionInfo> methods, String title, String message) {
         ElementListSelectionDialog d = new ElementListSelectionDialog(shell, new LabelProvider() {
             @Override
             public String getText(Object element) {
@@ -78,8 +80,8 @@ public final class RunMethodHandler extends AbstractHandler {
                 return v.name() + " — version " + v.number();
             }
         });
-        d.setTitle("Run method");
-        d.setMessage("The method to run (its newest version):");
+        d.setTitle(title);
+        d.setMessage(message);
         d.setElements(methods.toArray());
         d.setMultipleSelection(false);
         return d.open() == Window.OK ? (VersionInfo) d.getFirstResult() : null;

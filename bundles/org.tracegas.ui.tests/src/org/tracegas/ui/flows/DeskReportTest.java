@@ -1,0 +1,132 @@
+package org.tracegas.ui.flows;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.audit.AuditQuery;
+import org.tracegas.audit.AuditRecord;
+import org.tracegas.store.NewQaCheck;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.VersionKind;
+import org.tracegas.store.WorkspaceStore;
+import org.tracegas.ui.Screens;
+import org.tracegas.ui.internal.ReportHandler;
+import org.tracegas.ui.jobs.CampaignReportJob;
+
+/**
+ * Analysis → Report… on a real H2 workspace holding a quantified morning and its stored QA checks: the report is
+ * made in the background through the runner's report code, report.pdf and results.csv are written whole, and the
+ * closing message gives the content hash a signature is given on, the audit anchor with the verification the
+ * report was made under, the QA reading that failed and the caution about toxic gases.
+ */
+class DeskReportTest {
+
+    @TempDir
+    Path folder;
+
+    private LabDesk desk;
+
+    @BeforeEach
+    void openWorkspace() throws Exception {
+        // 6 % moisture (invented): the report states concentrations on dry gas
+        desk = new LabDesk(folder, 800, 500, 60_000);
+    }
+
+    @AfterEach
+    void close() {
+        desk.close();
+    }
+
+    @Test
+    void makesTheReportOfTheStoredResultsAndNamesItsHashAnchorQaAndCaution() throws Exception {
+        LimeKilnLab lab = desk.lab;
+        desk.quantifiedMorning();
+        WorkspaceStore store = desk.access.store();
+        VersionInfo method = store.versions().latest(VersionKind.METHOD).get(0);
+        // the lab's QA evaluation of the morning as the runner's qa command stores it (invented readings and
+        // acceptance ranges of the Quarrymoor lab): the zero passed, the calibration transfer standard did not
+        store.qa().recordAll(lab.analyst, lab.project.id(), method.id(), List.of(
+                new NewQaCheck("Zero CO", true, 0.4, "ppm", -2, 2, "zero gas reads within ±2 ppm",
+                        "Quarrymoor lab procedure (invented)"),
+                new NewQaCheck("CTS path length", false, 2.31, "m", 1.9, 2.1, "path from the CTS within ±5 %",
+                        "Quarrymoor lab procedure (invented)")));
+        StringBuilder o2 = new StringBuilder("time,O2\nUTC,%vol\n");
+        for (int minute = 0; minute < 4; minute++) {
+            o2.append(LimeKilnLab.T0.plusSeconds(60L * minute)).append(",11.5\n");
+        }
+        Files.writeString(folder.resolve("o2.csv"), o2);
+        Path plan = Files.writeString(folder.resolve("kiln.plan"), """
+                report-id = QLW-R-01
+                client = Quarrymoor Lime Works
+                plant = Quarrymoor kiln 2
+                source = Kiln 2 stack
+                first-day = 2026-12-03
+                last-day = 2026-12-03
+                issued = 2026-12-04T09:00:00Z
+                standard-temperature = 273.15
+                standard-pressure = 101.3
+                reference-o2 = 11
+                o2-guard = 20
+                o2-file = o2.csv
+                o2-channel = O2
+                o2-uncertainty = 0.2
+                water = H2O
+                cell-temperature = 318
+                cell-pressure = 100.2
+                reference-uncertainty = 0.02
+                path-uncertainty = 0.05
+                temperature-uncertainty = 2
+                pressure-uncertainty = 0.5
+                periods = 2 min
+
+                [compound]
+                name = CO
+                molar-mass = 28.010
+                limit = 100 per 2 min
+                """);
+        Path out = folder.resolve("report-QLW");
+
+        List<String> reports = new ArrayList<>();
+        CampaignReportJob job = ReportHandler.schedule(ReportHandler.request(store, lab.project, method, plan, out),
+                desk.display, reports::add);
+        Screens.waitFor(desk.display, () -> !reports.isEmpty(), 120_000);
+        String message = reports.get(0);
+        assertNotNull(job.outcome(), message);
+
+        assertTrue(message.startsWith("Wrote report QLW-R-01 to " + out.resolve("report.pdf") + " with results.csv."
+                + " Content hash (SHA-256) " + job.outcome().content().contentHash() + "."), message);
+        // a SHA-256 digest is 256 bits, 64 hexadecimal digits (FIPS 180-4, section 1)
+        assertTrue(job.outcome().content().contentHash().matches("[0-9a-f]{64}"), message);
+        // the anchor is the newest record of the workspace's audit trail when the report was made, as the audit
+        // trail itself lists it
+        List<AuditRecord> trail = store.audit().review(lab.reviewer, AuditQuery.all().build()).records();
+        AuditRecord newest = trail.get(trail.size() - 1);
+        assertTrue(message.contains(" Audit anchor #" + newest.sequence() + " " + newest.hash() + " (Verified: audit"
+                + " chain of " + newest.sequence() + " records"), message);
+        assertTrue(message.contains(" Not signed yet."), message);
+        assertTrue(message.contains(" 1 of 2 QA readings failed; the report says so on its first page."), message);
+        assertTrue(message.contains(" Caution: Toxic gases"), message);
+
+        // the PDF file header (ISO 32000-1:2008, section 7.5.2) and the CSV's header record (RFC 4180, section 2)
+        byte[] pdf = Files.readAllBytes(out.resolve("report.pdf"));
+        assertEquals("%PDF-", new String(pdf, 0, 5, StandardCharsets.US_ASCII));
+        String csv = Files.readString(out.resolve("results.csv"), StandardCharsets.UTF_8);
+        assertFalse(csv.isEmpty());
+        try (var files = Files.list(out)) {
+            assertEquals(List.of("report.pdf", "results.csv"), files.map(f -> f.getFileName().toString()).sorted()
+                    .toList(), "each file whole, no part left beside them");
+        }
+    }
+}

@@ -1,0 +1,103 @@
+package org.tracegas.ui.internal;
+
+import java.nio.file.Path;
+import java.util.List;
+import java.util.function.Consumer;
+
+import org.eclipse.core.commands.AbstractHandler;
+import org.eclipse.core.commands.ExecutionEvent;
+import org.eclipse.core.commands.ExecutionException;
+import org.eclipse.jface.dialogs.MessageDialog;
+import org.eclipse.swt.SWT;
+import org.eclipse.swt.widgets.DirectoryDialog;
+import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.FileDialog;
+import org.eclipse.swt.widgets.Shell;
+import org.eclipse.ui.handlers.HandlerUtil;
+import org.tracegas.campaign.StoredMethod;
+import org.tracegas.library.io.FileFormatException;
+import org.tracegas.store.ProjectInfo;
+import org.tracegas.store.VersionInfo;
+import org.tracegas.store.VersionKind;
+import org.tracegas.store.WorkspaceStore;
+import org.tracegas.ui.jobs.AnalysisRuns;
+import org.tracegas.ui.jobs.CampaignReportJob;
+import org.tracegas.ui.session.Desk;
+
+/**
+ * Analysis → Report…: the campaign report of the project selected in the tree, made with a stored method's
+ * newest version and a report plan file as the runner's {@code report} command makes it, in the background; the
+ * status line then names the files, the content hash signatures are given on, the audit anchor with its
+ * verification, the QA readings that failed and the report's caution.
+ */
+public final class ReportHandler extends AbstractHandler {
+
+    @Override
+    public Object execute(ExecutionEvent event) throws ExecutionException {
+        Shell shell = HandlerUtil.getActiveShellChecked(event);
+        Desk desk = Desk.get();
+        WorkspaceStore store = desk.access().store();
+        ProjectInfo project = TreeChoice.project(HandlerUtil.getCurrentSelection(event),
+                store.projects().projects(desk.session()));
+        if (project == null) {
+            MessageDialog.openInformation(shell, "Report", "Select the project in the workspace tree first.");
+            return null;
+        }
+        List<VersionInfo> methods = store.versions().latest(VersionKind.METHOD);
+        if (methods.isEmpty()) {
+            MessageDialog.openInformation(shell, "Report", "The workspace holds no method yet, so no results to"
+                    + " report.");
+            return null;
+        }
+        VersionInfo version = methods.size() == 1 ? methods.get(0) : RunMethodHandler.choose(shell, methods,
+                "Report", "The method whose stored results and QA checks the report shows (its newest version):");
+        if (version == null) {
+            return null;
+        }
+        FileDialog plan = new FileDialog(shell, SWT.OPEN);
+        plan.setText("The report plan of " + project.code());
+        plan.setFilterExtensions(new String[] {"*.plan", "*"});
+        String chosenPlan = plan.open();
+        if (chosenPlan == null) {
+            return null;
+        }
+        DirectoryDialog folder = new DirectoryDialog(shell);
+        folder.setText("The folder for report.pdf and results.csv of " + project.code());
+        String chosenFolder = folder.open();
+        if (chosenFolder == null) {
+            return null;
+        }
+        try {
+            schedule(request(store, project, version, Path.of(chosenPlan), Path.of(chosenFolder)),
+                    shell.getDisplay(), StatusReports.of(event));
+        } catch (FileFormatException e) {
+            MessageDialog.openError(shell, "Report", e.getMessage());
+        }
+        return null;
+    }
+
+    /**
+     * The report of a method version rebuilt from its stored text, made on the desk's workspace as the desk's user.
+     *
+     * @throws FileFormatException if the stored method text cannot be read
+     */
+    public static CampaignReportJob.Request request(WorkspaceStore store, ProjectInfo project, VersionInfo version,
+            Path plan, Path folder) throws FileFormatException {
+        return new CampaignReportJob.Request(store, Desk.get().session(), project, version,
+                StoredMethod.parse(store.versions().content(version.id()), "method version " + version.id()), plan,
+                folder);
+    }
+
+    /**
+     * Starts the report job.
+     *
+     * @param report receives the closing message in the UI thread
+     */
+    public static CampaignReportJob schedule(CampaignReportJob.Request request, Display display,
+            Consumer<String> report) {
+        CampaignReportJob job = new CampaignReportJob(request, AnalysisRuns.software());
+        job.addJobChangeListener(StatusReports.whenDone(display, report));
+        job.schedule();
+        return job;
+    }
+}
