@@ -27,4 +27,11 @@ class LdrScannerTest {
         ImportException e = assertThrows(ImportException.class, () -> LdrScanner.scan("##TITLE=a\n##NPOINTS 3\n", "f"));
         assertEquals(2, e.line());
     }
+
+    @Test
+    void linesEndWithCrLfLfOrCrAndTheTextAfterTheLastEndIsALine() {
+        assertEquals(List.of("a", "b", "c", "d", ""), LdrScanner.lines("a\r\nb\nc\rd\n"));
+        assertEquals(List.of("", "", "x"), LdrScanner.lines("\r\r\nx"));
+        assertEquals(List.of(""), LdrScanner.lines(""));
+    }
 }

@@ -23,11 +23,21 @@ public final class AffnTable {
         int n = 0;
         for (int i = 0; i < table.more().size(); i++) {
             int lineNo = table.line() + 1 + i;
-            for (String token : table.more().get(i).trim().split("[\\s,;]+")) {
-                if (token.isEmpty()) {
-                    continue;
+            String text = table.more().get(i).trim();
+            int end = 0;
+            while (true) {
+                int start = end;
+                while (start < text.length() && isSeparator(text.charAt(start))) {
+                    start++;
                 }
-                double v = parse(token, source, lineNo, field);
+                if (start == text.length()) {
+                    break;
+                }
+                end = start;
+                while (end < text.length() && !isSeparator(text.charAt(end))) {
+                    end++;
+                }
+                double v = parse(text.substring(start, end), source, lineNo, field);
                 if (n / 2 >= maxPoints) {
                     throw new ImportException(source, lineNo, field, "more than " + maxPoints + " points");
                 }
@@ -57,13 +67,19 @@ public final class AffnTable {
         return new Pairs(x, y, pairLines);
     }
 
+    /** Blanks (as the regular expression class \\s has them), commas and semicolons separate the values. */
+    private static boolean isSeparator(char c) {
+        return c == ' ' || c == ',' || c == ';' || c == '\t' || c == '\n' || c == '\u000B' || c == '\f' || c == '\r';
+    }
+
     private static double parse(String token, String source, int lineNo, String field) throws ImportException {
-        String lower = token.toLowerCase(Locale.ROOT);
-        if (lower.contains("nan") || lower.contains("inf")) {
-            throw new ImportException(source, lineNo, field, "not a finite number: '" + Numbers.shown(token) + "'");
-        }
         Double v = Numbers.parseDecimal(token);
         if (v == null) {
+            String lower = token.toLowerCase(Locale.ROOT);
+            if (lower.contains("nan") || lower.contains("inf")) {
+                throw new ImportException(source, lineNo, field, "not a finite number: '" + Numbers.shown(token)
+                        + "'");
+            }
             throw new ImportException(source, lineNo, field, "malformed number '" + Numbers.shown(token) + "'");
         }
         if (!Double.isFinite(v)) {

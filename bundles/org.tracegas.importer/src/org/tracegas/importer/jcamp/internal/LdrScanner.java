@@ -11,15 +11,37 @@ public final class LdrScanner {
     private LdrScanner() {
     }
 
+    /**
+     * The lines of the text, ended by CR LF, LF or CR; the last line is what follows the last end (empty when the
+     * text ends with one). A loop rather than a regular expression: this runs over every line of every file.
+     */
+    static List<String> lines(String text) {
+        List<String> lines = new ArrayList<>();
+        int start = 0;
+        int n = text.length();
+        for (int i = 0; i < n; i++) {
+            char c = text.charAt(i);
+            if (c == '\n' || c == '\r') {
+                lines.add(text.substring(start, i));
+                if (c == '\r' && i + 1 < n && text.charAt(i + 1) == '\n') {
+                    i++;
+                }
+                start = i + 1;
+            }
+        }
+        lines.add(text.substring(start));
+        return lines;
+    }
+
     public static List<Ldr> scan(String text, String source) throws ImportException {
-        String[] lines = text.split("\r\n|\n|\r", -1);
+        List<String> lines = lines(text);
         List<Ldr> result = new ArrayList<>();
         String label = null;
         String value = null;
         int start = 0;
         List<String> more = new ArrayList<>();
-        for (int i = 0; i < lines.length; i++) {
-            String line = stripComment(lines[i]);
+        for (int i = 0; i < lines.size(); i++) {
+            String line = stripComment(lines.get(i));
             String trimmed = line.stripLeading();
             if (i == 0 && trimmed.startsWith("\uFEFF")) {
                 trimmed = trimmed.substring(1);
