@@ -25,8 +25,8 @@ import org.tracegas.campaign.StoredMethod;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.synthesis.HitranLineListReader;
+import org.tracegas.library.synthesis.HitranLineListWriter;
 import org.tracegas.library.synthesis.LineList;
-import org.tracegas.library.synthesis.SpectralLine;
 import org.tracegas.quantify.CompoundResult;
 import org.tracegas.quantify.QualityFlag;
 import org.tracegas.quantify.QuantificationMethod;
@@ -120,7 +120,7 @@ class LineListMethodFileTest {
         List<LineList> bands = InstrumentMixture.bands();
         for (int g = 0; g < 2; g++) {
             StringBuilder records = new StringBuilder();
-            bands.get(g).lines().forEach(l -> records.append(record(l)).append('\n'));
+            bands.get(g).lines().forEach(l -> records.append(HitranLineListWriter.record(l)).append('\n'));
             byte[] bytes = records.toString().getBytes(StandardCharsets.US_ASCII);
             Files.write(folder.resolve("lists/tx" + (g + 1) + ".par"), bytes);
             hashes.add(sha256(bytes));
@@ -170,23 +170,5 @@ class LineListMethodFileTest {
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException(e);
         }
-    }
-
-    /** One 160-character HITRAN 2004 record; the quanta and reference fields left blank. */
-    private static String record(SpectralLine l) {
-        String s = String.format(Locale.ROOT, "%2d%1d%12.6f%10.3E%10.3E%s%s%10.4f%s%s", l.moleculeId(),
-                l.isotopologue() % 10, l.wavenumber(), l.intensity(), l.einsteinA(), fixed(l.airHalfWidth(), 5, 4),
-                fixed(l.selfHalfWidth(), 5, 3), l.lowerStateEnergy(), fixed(l.temperatureExponent(), 4, 2),
-                fixed(l.pressureShift(), 8, 6));
-        return s + " ".repeat(160 - s.length());
-    }
-
-    /** Fortran Fw.d: the leading zero before the decimal point is dropped when the field would overflow. */
-    private static String fixed(double v, int width, int decimals) {
-        String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
-        if (s.length() > width) {
-            s = s.replaceFirst("^(-?)0\\.", "$1.");
-        }
-        return " ".repeat(width - s.length()) + s;
     }
 }
