@@ -17,6 +17,7 @@ import java.util.HexFormat;
 import java.util.List;
 import java.util.Locale;
 import java.util.Random;
+import java.util.Set;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -27,18 +28,22 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.synthesis.HitranLineListReader;
 import org.tracegas.library.synthesis.HitranLineListWriter;
 import org.tracegas.library.synthesis.LineList;
+import org.tracegas.model.Role;
 import org.tracegas.quantify.CompoundResult;
 import org.tracegas.quantify.QualityFlag;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.Quantifier;
 import org.tracegas.quantify.Sample;
 import org.tracegas.spectrum.Spectrum;
+import org.tracegas.store.Session;
+import org.tracegas.store.WorkspaceStore;
+import org.tracegas.store.Workspaces;
 
 /**
  * A method file with {@code algorithm = line-list}: the line lists (HITRAN 2004 format, HITRAN documentation of
  * the 160-character record), the cell conditions and the field of view in its {@code [line-list]} block, the
- * instrument line shape from its apodization and resolution. Defined, stored as a method version's text, read
- * back, and used on mixtures of {@link InstrumentMixture} made from the very files the method names, through the
+ * instrument line shape from its apodization and resolution. Defined and recorded as a method version in an H2
+ * workspace, read back from the version's text, and used on mixtures of {@link InstrumentMixture} made from the very files the method names, through the
  * algorithm the linelist bundle contributes to the extension point.
  */
 class LineListMethodFileTest {
@@ -50,14 +55,21 @@ class LineListMethodFileTest {
     Path folder;
 
     @Test
-    void quantifiesThroughAStoredVersionWithinItsUncertainty() throws IOException {
+    void quantifiesThroughARecordedVersionWithinItsUncertainty() throws IOException {
         Path method = writeMethod();
         MethodDefinition definition = MethodDefinition.read(method);
         assertInstanceOf(LineListAlgorithm.class, definition.algorithm(), "contributed through the extension point");
-        QuantificationMethod built = definition.build(new ReferenceLibrary("no references", List.of()));
-        StoredMethod version = new StoredMethod(built, definition.transform(), "library-version-1",
-                "library-hash-1", definition.recipe(), definition.resolution(), List.of());
-        String content = version.content();
+        String content;
+        QuantificationMethod built;
+        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("db"))) {
+            Session admin = store.users().createFirstAdministrator("admin", "Administrator",
+                    "admin-pw-12".toCharArray());
+            store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
+            Session analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
+            MethodDefinition.Recorded recorded = definition.record(store, analyst);
+            built = recorded.method().method();
+            content = store.versions().content(recorded.methodVersion().id());
+        }
         assertTrue(content.contains("\n[line-list]\n") && content.contains("setting gas \"TX1 molar-mass 28.0"),
                 content.substring(0, Math.min(content.length(), 3000)));
         StoredMethod reread = StoredMethod.parse(content, "method version 1");
@@ -125,10 +137,12 @@ class LineListMethodFileTest {
             Files.write(folder.resolve("lists/tx" + (g + 1) + ".par"), bytes);
             hashes.add(sha256(bytes));
         }
+        // the method needs no reference spectra: its library holds none
+        Files.writeString(folder.resolve("library.manifest"), "library = Vellmar kiln, no references\n");
         Path method = folder.resolve("kiln.method");
         Files.writeString(method, """
                 method = Vellmar kiln, line lists
-                library = references/library.manifest
+                library = library.manifest
                 path-length = 6.2
                 resolution = 0.5
                 max-absorbance = 3
