@@ -14,6 +14,7 @@ import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.qa.basis.PathOrigin;
+import org.tracegas.quantify.AlgorithmSetting;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.FitAlgorithm;
@@ -60,6 +61,10 @@ import org.tracegas.store.WorkspaceStore;
  * [recipe]                                   (optional) processing before the fit, see {@link MethodRecipe}
  * step = resample first=2000.0;size=801;step=0.5
  *
+ * [line-list]                                (with algorithm = line-list only, and then required with
+ * temperature = 308.15                       resolution) the line lists and cell conditions the spectra are
+ * ...                                        computed from, see {@link LineListBlock}
+ *
  * [analyte]                                  one block per analyte, in reporting order
  * compound = CO                              as the library names the compound
  * interferents = CO2, N2O                    (optional)
@@ -78,7 +83,7 @@ import org.tracegas.store.WorkspaceStore;
 public record MethodDefinition(Path file, String name, Path libraryManifest, double pathLengthM, double resolution,
         boolean nonlinearity,
         double tolerance, int maxIterations, double maxAbsorbance, ShiftTerm shift, ReportingUnit unit,
-        FitAlgorithm algorithm, TransformSettings transform, Recipe recipe, List<Analyte> analytes,
+        FitAlgorithm algorithm, List<AlgorithmSetting> algorithmSettings, TransformSettings transform, Recipe recipe, List<Analyte> analytes,
         PathOrigin pathSource) {
 
     /** The versions a method file gave: its library's, its own, and the method as its version holds it. */
@@ -88,10 +93,15 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
     private static final Set<String> SETTINGS = Set.of("method", "path-length", "path-source", "resolution",
             "nonlinearity",
             "tolerance", "max-iterations", "max-absorbance", "shift", "reporting-unit", "algorithm");
+    /** The algorithm settings a method derives from its transform and resolution, not from its [line-list]. */
+    private static final java.util.Map<String, java.util.function.Function<MethodDefinition, String>> INSTRUMENT =
+            java.util.Map.of("apodization", d -> constant(d.transform().apodization()),
+                    "resolution", d -> Double.toString(d.resolution()));
     private static final Set<String> ANALYTE = Set.of("compound", "interferents", "region");
 
     public MethodDefinition {
         analytes = List.copyOf(analytes);
+        algorithmSettings = List.copyOf(algorithmSettings);
     }
 
     /** @throws FileFormatException naming the file, line and key of the first error */
@@ -115,8 +125,8 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
      */
     static MethodDefinition parse(KeyValueFile f, Set<String> libraryKeys) throws FileFormatException {
         Path file = f.file();
-        f.allowBlocks(libraryKeys.contains("library") ? Set.of("transform", "recipe", "analyte")
-                : Set.of("transform", "recipe", "analyte", "references"));
+        f.allowBlocks(libraryKeys.contains("library") ? Set.of("transform", "recipe", "analyte", LineListBlock.NAME)
+                : Set.of("transform", "recipe", "analyte", LineListBlock.NAME, "references"));
         Set<String> head = new java.util.HashSet<>(SETTINGS);
         head.addAll(libraryKeys);
         KeyValueFile.Section h = f.head().allow(head);
@@ -156,13 +166,31 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         if (!Double.isNaN(resolution) && !(resolution > 0 && Double.isFinite(resolution))) {
             throw h.error("resolution", "must be positive, was " + resolution);
         }
+        FitAlgorithm algorithm = algorithm(h);
+        List<KeyValueFile.Section> lineLists = f.blocks(LineListBlock.NAME);
+        List<AlgorithmSetting> settings = List.of();
+        if (algorithm.name().equals(LineListBlock.NAME)) {
+            if (lineLists.size() != 1) {
+                throw new FileFormatException(file, lineLists.isEmpty() ? h.line() : lineLists.get(1).line(),
+                        "[line-list]", "a method with algorithm = line-list needs exactly one [line-list] block, found "
+                                + lineLists.size());
+            }
+            if (Double.isNaN(resolution)) {
+                throw h.error("resolution", "is needed by algorithm = line-list: with the [transform] block's"
+                        + " apodization it gives the instrument line shape of the computed spectra");
+            }
+            settings = LineListBlock.read(f, lineLists.get(0), libraryKeys.contains("library"));
+        } else if (!lineLists.isEmpty()) {
+            throw new FileFormatException(file, lineLists.get(0).line(), "[line-list]",
+                    "only a method with algorithm = line-list has a [line-list] block");
+        }
         return new MethodDefinition(file, h.text("method"), manifest, h.number("path-length"), resolution,
                 h.flag("nonlinearity", false), h.number("tolerance", QuantificationMethod.DEFAULT_TOLERANCE),
                 h.integer("max-iterations", QuantificationMethod.DEFAULT_MAX_ITERATIONS),
                 h.number("max-absorbance", QuantificationMethod.DEFAULT_MAX_ABSORBANCE),
                 h.constant("shift", ShiftTerm.class, ShiftTerm.NONE),
                 h.constant("reporting-unit", ReportingUnit.class, ReportingUnit.PPM),
-                algorithm(h), transform, recipe, analytes,
+                algorithm, settings, transform, recipe, analytes,
                 h.constant("path-source", PathOrigin.class, PathOrigin.NOMINAL));
     }
 
@@ -244,6 +272,12 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
                 .nonlinearity(nonlinearity).tolerance(tolerance).maxIterations(maxIterations)
                 .maxAbsorbance(maxAbsorbance).shiftTerm(shift).reportingUnit(unit).algorithm(algorithm);
         analytes.forEach(b::analyte);
+        algorithmSettings.forEach(b::algorithmSetting);
+        if (!algorithmSettings.isEmpty()) {
+            // the instrument the computed spectra are seen through: the method's own apodization and resolution,
+            // bound with the block's settings but written once, in their usual places
+            INSTRUMENT.forEach((key, value) -> b.algorithmSetting(new AlgorithmSetting(key, value.apply(this))));
+        }
         references.forEach(b::reference);
         weights.ifPresent(b::weights);
         return b.build();
@@ -279,6 +313,12 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         s.append("\n[transform]\n").append(TransformText.write(transform));
         if (!recipe.entries().isEmpty()) {
             s.append("\n[recipe]\n").append(MethodRecipe.write(recipe));
+        }
+        List<AlgorithmSetting> declared = m.algorithmSettings().stream()
+                .filter(a -> !INSTRUMENT.containsKey(a.key())).toList();
+        if (!declared.isEmpty()) {
+            s.append("\n[").append(m.algorithm().name()).append("]\n");
+            declared.forEach(a -> s.append(a.key()).append(" = ").append(a.value()).append('\n'));
         }
         for (Analyte a : m.analytes()) {
             s.append("\n[analyte]\ncompound = ").append(a.compound()).append('\n');

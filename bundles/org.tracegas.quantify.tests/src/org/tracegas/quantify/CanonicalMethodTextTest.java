@@ -78,6 +78,37 @@ class CanonicalMethodTextTest {
                 "line 1", "'format'");
     }
 
+    /**
+     * An algorithm's settings are part of the text and hash, in one order whatever order they were given in; a
+     * method without settings writes no setting line, so the texts of earlier methods stay as they were.
+     */
+    @Test
+    void algorithmSettingsAreBoundInTextAndHash() {
+        QuantificationMethod.Builder b = QuantificationMethod.builder("CO").pathLengthMetres(4.85)
+                .algorithm(FitAlgorithm.CURVE_OF_GROWTH)
+                .analyte(new Analyte("CO", List.of(), List.of(AnalysisRegion.of(2005, 2020, 1))))
+                .reference(new ReferenceSpectrum("CO", band(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.25,
+                        101), 2010, 0.1), 29.1));
+        QuantificationMethod plain = b.build();
+        assertTrue(!plain.canonicalText().contains("setting"), plain.canonicalText());
+        QuantificationMethod one = b.algorithmSetting(new AlgorithmSetting("gas", "CO file /lab/co \"a\".par"))
+                .algorithmSetting(new AlgorithmSetting("temperature", "308.15")).build();
+        assertTrue(one.canonicalText().contains("\nsetting gas \"CO file /lab/co \\\"a\\\".par\"\n"
+                + "setting temperature \"308.15\"\n"), one.canonicalText());
+        QuantificationMethod back = QuantificationMethod.parse(one.canonicalText());
+        assertEquals(one.contentHash(), back.contentHash());
+        assertEquals(List.of("CO file /lab/co \"a\".par"), back.algorithmSettings("gas"));
+        assertTrue(!one.contentHash().equals(plain.contentHash()));
+        assertTrue(!one.contentHash().equals(b.algorithmSetting(new AlgorithmSetting("pressure", "99.8")).build()
+                .contentHash()));
+        String[] lines = one.canonicalText().split("\n");
+        int setting = indexOf(lines, "setting temperature");
+        assertMessage(replaceLine(lines, setting, "setting temperature 308.15"), "line " + (setting + 1),
+                "'setting'");
+        assertMessage(replaceLine(lines, setting, "setting Temperature \"308.15\""), "line " + (setting + 1),
+                "'setting'", "lower-case");
+    }
+
     private static int indexOf(String[] lines, String prefix) {
         for (int i = 0; i < lines.length; i++) {
             if (lines[i].startsWith(prefix)) {

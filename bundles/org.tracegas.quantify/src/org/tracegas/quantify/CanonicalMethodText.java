@@ -38,6 +38,9 @@ final class CanonicalMethodText {
             // in the upper-case form the first stored texts gave the built-in algorithms (CURVE_OF_GROWTH)
             s.append("algorithm ").append(storedName(m.algorithm())).append('\n');
         }
+        for (AlgorithmSetting setting : m.algorithmSettings()) {
+            s.append("setting ").append(setting.key()).append(' ').append(quote(setting.value())).append('\n');
+        }
         for (Analyte a : m.analytes()) {
             s.append("analyte ").append(a.compound()).append('\n');
             for (String i : a.interferents()) {
@@ -149,6 +152,19 @@ final class CanonicalMethodText {
                     b.algorithm(algorithms.get(stored.toLowerCase(Locale.ROOT).replace('_', '-')));
                 } catch (IllegalArgumentException e) {
                     throw error("algorithm", e.getMessage());
+                }
+            }
+            while (peek("setting")) {
+                int line = next + 1;
+                String[] f = expect("setting");
+                String quoted = String.join(" ", java.util.Arrays.copyOfRange(f, Math.min(2, f.length), f.length));
+                if (f.length < 3 || quoted.length() < 2 || !quoted.startsWith("\"") || !quoted.endsWith("\"")) {
+                    throw error(line, "setting", "expected 'setting <key> \"<value>\"'");
+                }
+                try {
+                    b.algorithmSetting(new AlgorithmSetting(f[1], unquote(quoted)));
+                } catch (IllegalArgumentException e) {
+                    throw error(line, "setting", e.getMessage());
                 }
             }
             while (peek("analyte")) {

@@ -31,6 +31,7 @@ public final class QuantificationMethod {
     private final List<Analyte> analytes;
     private final List<ReferenceSpectrum> references;
     private final FitAlgorithm algorithm;
+    private final List<AlgorithmSetting> algorithmSettings;
     private final boolean nonlinearity;
     private final ShiftTerm shiftTerm;
     private final ReportingUnit reportingUnit;
@@ -50,6 +51,10 @@ public final class QuantificationMethod {
         sorted.sort(Comparator.comparing(ReferenceSpectrum::compound).thenComparingDouble(ReferenceSpectrum::ppmMetres));
         this.references = List.copyOf(sorted);
         this.algorithm = b.algorithm;
+        List<AlgorithmSetting> settings = new ArrayList<>(b.algorithmSettings);
+        // canonical order, so that the same settings given in another order give the same method
+        settings.sort(Comparator.comparing(AlgorithmSetting::key).thenComparing(AlgorithmSetting::value));
+        this.algorithmSettings = List.copyOf(settings);
         this.nonlinearity = b.nonlinearity;
         this.shiftTerm = b.shiftTerm;
         this.reportingUnit = b.reportingUnit;
@@ -112,6 +117,19 @@ public final class QuantificationMethod {
     /** How the method fits the sample absorbance. */
     public FitAlgorithm algorithm() {
         return algorithm;
+    }
+
+    /**
+     * The inputs the algorithm reads from the method besides analytes and references, sorted by key and value;
+     * empty for the built-in algorithms.
+     */
+    public List<AlgorithmSetting> algorithmSettings() {
+        return algorithmSettings;
+    }
+
+    /** The values of the settings of a key, in their canonical order. */
+    public List<String> algorithmSettings(String key) {
+        return algorithmSettings.stream().filter(s -> s.key().equals(key)).map(AlgorithmSetting::value).toList();
     }
 
     /**
@@ -189,6 +207,7 @@ public final class QuantificationMethod {
         private final List<Analyte> analytes = new ArrayList<>();
         private final List<ReferenceSpectrum> references = new ArrayList<>();
         private FitAlgorithm algorithm = FitAlgorithm.CLASSICAL_LEAST_SQUARES;
+        private final List<AlgorithmSetting> algorithmSettings = new ArrayList<>();
         private boolean nonlinearity;
         private ShiftTerm shiftTerm = ShiftTerm.NONE;
         private ReportingUnit reportingUnit = ReportingUnit.PPM;
@@ -218,6 +237,12 @@ public final class QuantificationMethod {
 
         public Builder algorithm(FitAlgorithm fitAlgorithm) {
             this.algorithm = fitAlgorithm;
+            return this;
+        }
+
+        /** Adds an input of the algorithm; see {@link QuantificationMethod#algorithmSettings()}. */
+        public Builder algorithmSetting(AlgorithmSetting setting) {
+            algorithmSettings.add(setting);
             return this;
         }
 
@@ -303,6 +328,9 @@ public final class QuantificationMethod {
             }
             if (algorithm == null) {
                 throw new IllegalArgumentException("algorithm must not be null");
+            }
+            if (algorithmSettings.contains(null)) {
+                throw new IllegalArgumentException("algorithmSettings must not contain null");
             }
             if (shiftTerm == null) {
                 throw new IllegalArgumentException("shiftTerm must not be null");

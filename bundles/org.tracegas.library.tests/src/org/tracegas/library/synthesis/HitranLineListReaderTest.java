@@ -46,7 +46,7 @@ class HitranLineListReaderTest {
     void generatedListRoundTripsSortedByWavenumber() throws IOException {
         List<SpectralLine> lines = SyntheticLineListGenerator.coLikeBand(200, 7);
         List<String> records = new ArrayList<>();
-        lines.forEach(l -> records.add(SyntheticLineListGenerator.record(l)));
+        lines.forEach(l -> records.add(HitranLineListWriter.record(l)));
         Path file = dir.resolve("band.par");
         Files.write(file, records);
         LineList read = new HitranLineListReader().read(file);
@@ -58,7 +58,7 @@ class HitranLineListReaderTest {
 
     @Test
     void badFieldNamesFileLineAndColumns() throws IOException {
-        String good = SyntheticLineListGenerator.record(SyntheticLineListGenerator.coLikeBand(0, 1).get(0));
+        String good = HitranLineListWriter.record(SyntheticLineListGenerator.coLikeBand(0, 1).get(0));
         String bad = good.substring(0, 35) + "x.071" + good.substring(40);
         Path file = write("bad.par", good + "\n" + bad);
         FileFormatException e = assertThrows(FileFormatException.class, () -> new HitranLineListReader().read(file));
@@ -77,7 +77,7 @@ class HitranLineListReaderTest {
 
     @Test
     void negativeIntensityIsRejectedWithTheLine() throws IOException {
-        String good = SyntheticLineListGenerator.record(SyntheticLineListGenerator.coLikeBand(0, 1).get(0));
+        String good = HitranLineListWriter.record(SyntheticLineListGenerator.coLikeBand(0, 1).get(0));
         String bad = good.substring(0, 15) + "-1.000E-20" + good.substring(25);
         Path file = write("neg.par", bad);
         FileFormatException e = assertThrows(FileFormatException.class, () -> new HitranLineListReader().read(file));

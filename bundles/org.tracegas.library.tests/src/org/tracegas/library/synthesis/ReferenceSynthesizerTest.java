@@ -129,7 +129,7 @@ class ReferenceSynthesizerTest {
     void synthesizesFromSeveralThousandLinesInSeconds() throws IOException {
         List<String> records = new ArrayList<>();
         SyntheticLineListGenerator.coLikeBand(5000, 42)
-                .forEach(l -> records.add(SyntheticLineListGenerator.record(l)));
+                .forEach(l -> records.add(HitranLineListWriter.record(l)));
         Path file = dir.resolve("co-like.par");
         Files.write(file, records);
         LineList lines = new HitranLineListReader().read(file);

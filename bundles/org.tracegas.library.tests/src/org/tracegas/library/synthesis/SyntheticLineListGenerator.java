@@ -62,25 +62,4 @@ final class SyntheticLineListGenerator {
     private static double roundSignificant(double v) {
         return Double.parseDouble(String.format(Locale.ROOT, "%.3E", v));
     }
-
-    /** One 160-character record of the HITRAN 2004+ format; the quanta and reference fields are left blank. */
-    static String record(SpectralLine l) {
-        String s = String.format(Locale.ROOT, "%2d%1d%12.6f%10.3E%10.3E%s%s%10.4f%s%s", l.moleculeId(),
-                l.isotopologue() % 10, l.wavenumber(), l.intensity(), l.einsteinA(), fixed(l.airHalfWidth(), 5, 4),
-                fixed(l.selfHalfWidth(), 5, 3), l.lowerStateEnergy(), fixed(l.temperatureExponent(), 4, 2),
-                fixed(l.pressureShift(), 8, 6));
-        return s + " ".repeat(160 - s.length());
-    }
-
-    /** Fortran Fw.d: the leading zero before the decimal point is dropped when the field would overflow. */
-    private static String fixed(double v, int width, int decimals) {
-        String s = String.format(Locale.ROOT, "%." + decimals + "f", v);
-        if (s.length() > width) {
-            s = s.replaceFirst("^(-?)0\\.", "$1.");
-        }
-        if (s.length() > width) {
-            throw new IllegalArgumentException(v + " does not fit F" + width + "." + decimals);
-        }
-        return " ".repeat(width - s.length()) + s;
-    }
 }

@@ -57,7 +57,11 @@ final class InstrumentMixture {
     private final double[] kernel;
 
     InstrumentMixture() {
-        List<LineList> lists = List.of(strongBand(), denseBand());
+        this(bands());
+    }
+
+    /** A generator of spectra of the given line lists of TX1 and TX2 (as read back from files, say). */
+    InstrumentMixture(List<LineList> lists) {
         double[] molarMass = {28.0, 44.0};
         for (int g = 0; g < 2; g++) {
             exact.add(new LineByLineModel(lists.get(g), molarMass[g], PowerLawPartitionFunction.linearMolecule(),
@@ -83,6 +87,11 @@ final class InstrumentMixture {
     LineListSetup setup() {
         return new LineListSetup(java.util.Map.of(GASES.get(0), forFit.get(0), GASES.get(1), forFit.get(1)),
                 TEMPERATURE, PRESSURE, InstrumentLineShape.forResolution(APODIZATION, RESOLUTION), FIELD_OF_VIEW);
+    }
+
+    /** The line lists of TX1 and TX2, in this order. */
+    static List<LineList> bands() {
+        return List.of(strongBand(), denseBand());
     }
 
     private static LineList strongBand() {

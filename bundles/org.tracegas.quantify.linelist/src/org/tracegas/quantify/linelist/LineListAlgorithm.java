@@ -12,6 +12,7 @@ import org.tracegas.quantify.ShiftTerm;
 import org.tracegas.quantify.internal.SystemsFit;
 import org.tracegas.quantify.linelist.internal.LineListSystem;
 import org.tracegas.quantify.linelist.internal.MixtureModel;
+import org.tracegas.quantify.linelist.internal.SetupSettings;
 import org.tracegas.spectrum.SpectralAxis;
 
 /**
@@ -23,18 +24,24 @@ import org.tracegas.spectrum.SpectralAxis;
  * fitted together by Levenberg-Marquardt; the uncertainty comes from the final Jacobian. Needs no reference
  * spectra, so no amount is outside a calibrated range.
  * <p>
- * A method's text names the algorithm ({@code LINE_LIST}) but does not yet hold its {@link LineListSetup}: the
- * line lists, the cell's conditions and the instrument are given with the algorithm, so a stored method's hash
- * does not bind them, and the algorithm is registered directly ({@link
- * org.tracegas.quantify.FitAlgorithmRegistry#register}), not through the extension point, whose classes are
- * created without arguments.
+ * Installed through the extension point, the algorithm takes its setup from the method's {@link
+ * QuantificationMethod#algorithmSettings() settings} (a method file's {@code [line-list]} block with the
+ * method's apodization and resolution), so the method's text and hash bind the line lists (by SHA-256), the cell's
+ * conditions and the instrument; each line list is read and checked when the method is prepared. Created with a
+ * setup, it uses that setup and ignores the method's settings.
  */
 public final class LineListAlgorithm implements FitAlgorithm {
 
     /** The name in method files and stored method versions. */
     public static final String NAME = "line-list";
 
+    /** Null when the setup comes from each method's settings. */
     private final LineListSetup setup;
+
+    /** The algorithm that builds its setup from each method's settings; the one the extension point installs. */
+    public LineListAlgorithm() {
+        this.setup = null;
+    }
 
     public LineListAlgorithm(LineListSetup setup) {
         if (setup == null) {
@@ -43,8 +50,9 @@ public final class LineListAlgorithm implements FitAlgorithm {
         this.setup = setup;
     }
 
-    public LineListSetup setup() {
-        return setup;
+    /** The setup given at creation; empty when each method's settings give it. */
+    public java.util.Optional<LineListSetup> setup() {
+        return java.util.Optional.ofNullable(setup);
     }
 
     @Override
@@ -62,9 +70,14 @@ public final class LineListAlgorithm implements FitAlgorithm {
         return false;
     }
 
-    /** @throws IllegalArgumentException also if the setup has no line list of a compound the method fits */
+    /**
+     * @throws IllegalArgumentException also if the setup has no line list of a compound the method fits, or (setup
+     *                                  from the method) a setting is missing or malformed or a line list cannot be
+     *                                  read or has another SHA-256 than the method states
+     */
     @Override
     public PreparedFit prepare(QuantificationMethod method, SpectralAxis axis) {
+        LineListSetup setup = this.setup != null ? this.setup : SetupSettings.read(method);
         for (String compound : method.fittedCompounds()) {
             if (!setup.models().containsKey(compound)) {
                 throw new IllegalArgumentException("method " + method.name() + " fits " + compound
@@ -90,12 +103,12 @@ public final class LineListAlgorithm implements FitAlgorithm {
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof LineListAlgorithm a && a.setup.equals(setup);
+        return o instanceof LineListAlgorithm a && java.util.Objects.equals(a.setup, setup);
     }
 
     @Override
     public int hashCode() {
-        return setup.hashCode();
+        return java.util.Objects.hashCode(setup);
     }
 
     @Override
