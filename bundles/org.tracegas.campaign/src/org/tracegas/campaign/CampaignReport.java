@@ -93,7 +93,7 @@ public final class CampaignReport {
                         methodVersion.contentHash()),
                         new LibraryVersion(library.name(), "v" + library.number() + ", content "
                                 + method.libraryContentHash().substring(0, 16)),
-                        checks, charts(method, plan, checks), series, plan.reported(), plan.water(),
+                        checks, charts(method, plan, checks), series, plan.reported(), plan.moisture(),
                         t -> oxygen(o2, plan.o2Channel(), t), plan.periods(), exampleFit(measurements, method, plan));
         return ReportSignatures.attach(store, actor, projectId, content, verified);
     }

@@ -58,6 +58,10 @@ public final class CampaignReportBuilder {
     public record Reported(String compound, double molarMass, List<EmissionLimit> limits) {
     }
 
+    /** The water of a minute, measured or stated, ppm with its standard uncertainty. */
+    private record Water(double ppm, double uncertaintyPpm) {
+    }
+
     /** Fit flags that make a minute unusable for averages. */
     private static final Set<ResultFlag> EXCLUDING = EnumSet.of(ResultFlag.SATURATED, ResultFlag.NOT_CONVERGED,
             ResultFlag.HIGH_RESIDUAL, ResultFlag.BACKGROUND_TOO_OLD, ResultFlag.QA_FAILED);
@@ -101,11 +105,12 @@ public final class CampaignReportBuilder {
      * @param qa            the campaign's QA check outcomes, the charts' own among them
      * @param charts        the control charts of repeated QA readings, drawn in the report
      * @param o2PercentWet  O2 of the side channel at a time, %vol on wet gas
-     * @param waterCompound name of the water result (the FTIR measures the moisture itself)
+     * @param moisture      the water result (the FTIR measures the moisture itself), or the moisture the plan
+     *                      states where the method measures no water, which the report then states
      */
     public ReportContent build(Campaign campaign, MethodVersion method, LibraryVersion library,
             List<CheckOutcome> qa, List<ChartEvaluation> charts, MinuteSeries series, List<Reported> reported,
-            String waterCompound, Function<Instant, Double> o2PercentWet, List<Duration> periods,
+            Moisture moisture, Function<Instant, Double> o2PercentWet, List<Duration> periods,
             SpectrumFit exampleFit) {
         ReportContent.Builder b = ReportContent.builder(campaign).method(method).library(library);
         qa.forEach(o -> b.qa(QaLine.of(o)));
@@ -115,12 +120,26 @@ public final class CampaignReportBuilder {
             mdl.put(l.analyte(), l);
         }
         charts.forEach(c -> b.controlChart(QaControlCharts.plot(c)));
-        Map<Instant, MinuteSeries.Point> water = new java.util.HashMap<>();
-        for (MinuteSeries.Point p : series.compound(waterCompound)) {
-            water.put(p.time(), p);
+        // the water of each minute, ppm with its standard uncertainty
+        Map<Instant, Water> water = new java.util.HashMap<>();
+        List<MinuteSeries.Point> timeline = new ArrayList<>();
+        if (moisture.isStated()) {
+            b.averagingRule(moisture.statement());
+            for (Reported r : reported) {
+                for (MinuteSeries.Point p : series.compound(r.compound())) {
+                    water.put(p.time(), new Water(moisture.statedPercent() * 1e4,
+                            moisture.statedUncertaintyPercent() * 1e4));
+                    timeline.add(p);
+                }
+            }
+            timeline.sort(java.util.Comparator.comparing(MinuteSeries.Point::time));
+        } else {
+            timeline = series.compound(moisture.compound());
+            for (MinuteSeries.Point p : timeline) {
+                water.put(p.time(), new Water(p.ppm(), p.uncertainty()));
+            }
         }
-        Instant origin = series.compound(waterCompound).isEmpty() ? campaign.issued()
-                : series.compound(waterCompound).get(0).time();
+        Instant origin = timeline.isEmpty() ? campaign.issued() : timeline.get(0).time();
         List<MinuteSeries.Point> everyPoint = new ArrayList<>();
         Set<String> rowCorrections = new java.util.HashSet<>();
         for (Reported r : reported) {
@@ -132,7 +151,7 @@ public final class CampaignReportBuilder {
             UncertaintyBudget worst = null;
             Instant worstTime = null;
             for (MinuteSeries.Point p : points) {
-                MinuteSeries.Point w = water.get(p.time());
+                Water w = water.get(p.time());
                 if (w == null) {
                     continue;
                 }
@@ -148,9 +167,9 @@ public final class CampaignReportBuilder {
                 }
                 double f = perPpm.get().value();
                 perPpmOfMinute.put(p.time(), f);
-                BasisConversion conversion = basis.oxygen().map(o -> new BasisConversion(h2o, w.uncertainty() / 1e6,
+                BasisConversion conversion = basis.oxygen().map(o -> new BasisConversion(h2o, w.uncertaintyPpm() / 1e6,
                         o2Wet, o2UncertaintyPercent, true, o.referencePercent()))
-                        .orElseGet(() -> BasisConversion.dryOnly(h2o, w.uncertainty() / 1e6));
+                        .orElseGet(() -> BasisConversion.dryOnly(h2o, w.uncertaintyPpm() / 1e6));
                 // at the cell the result was corrected to, so that the budget's model is the correction's; a
                 // result without conditions at the plan's cell and the method's path
                 ResultConditions cell = p.conditions();

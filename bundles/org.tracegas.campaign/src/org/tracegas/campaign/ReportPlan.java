@@ -36,7 +36,10 @@ import org.tracegas.report.Campaign;
  * o2-file = o2-analyzer.csv            time-stamped side channel, relative to this file
  * o2-channel = O2                      its column, %vol wet
  * o2-uncertainty = 0.2                 standard uncertainty of the O2 reading, %vol
- * water = H2O                          compound of the moisture result
+ * water = H2O                          compound of the moisture result; or none where the method measures
+ *                                      no water, with the two keys below
+ * moisture = 8.5                       (with water = none) %vol of the stack gas, stated: the dry basis rests on it
+ * moisture-uncertainty = 1.5           (with water = none) its standard uncertainty, %vol
  * cell-temperature = 438.15            K, for the budget of results stored without cell conditions
  * cell-pressure = 101.3                kPa
  * reference-uncertainty = 0.02         relative; path-uncertainty m, temperature-uncertainty K,
@@ -56,15 +59,18 @@ import org.tracegas.report.Campaign;
  * </pre>
  */
 public record ReportPlan(Path file, Campaign campaign, ReportingBasis basis, Path o2File, String o2Channel,
-        double o2UncertaintyPercent, String water, double cellTemperatureK, double cellPressureKPa, double referenceUncertainty,
+        double o2UncertaintyPercent, Moisture moisture, double cellTemperatureK, double cellPressureKPa, double referenceUncertainty,
         double pathUncertaintyM, double temperatureUncertaintyK, double pressureUncertaintyKPa,
         List<Duration> periods, Instant exampleTime, String exampleCompound, String exampleCaption,
         List<CampaignReportBuilder.Reported> reported, Path qaPlan) {
 
     private static final Set<String> HEAD = Set.of("report-id", "client", "plant", "source", "first-day", "last-day",
             "issued", "standard-temperature", "standard-pressure", "reference-o2", "o2-guard", "o2-file",
-            "o2-channel", "o2-uncertainty", "water", "cell-temperature", "cell-pressure", "reference-uncertainty",
+            "o2-channel", "o2-uncertainty", "water", "moisture", "moisture-uncertainty", "cell-temperature", "cell-pressure", "reference-uncertainty",
             "path-uncertainty", "temperature-uncertainty", "pressure-uncertainty", "periods", "example-fit", "qa-plan");
+
+    /** The value of key water where the method measures no water. */
+    public static final String NO_WATER = "none";
 
     public ReportPlan {
         periods = List.copyOf(periods);
@@ -144,10 +150,36 @@ public record ReportPlan(Path file, Campaign campaign, ReportingBasis basis, Pat
             throw h.error("o2-uncertainty", "must not be negative, was " + h.number("o2-uncertainty"));
         }
         return new ReportPlan(file, campaign, basis, f.resolve(h.text("o2-file")), h.text("o2-channel"),
-                h.number("o2-uncertainty"), h.text("water"), h.number("cell-temperature"), h.number("cell-pressure"),
+                h.number("o2-uncertainty"), moisture(h, file), h.number("cell-temperature"), h.number("cell-pressure"),
                 h.number("reference-uncertainty"), h.number("path-uncertainty"), h.number("temperature-uncertainty"),
                 h.number("pressure-uncertainty"), periods, exampleTime, exampleCompound, exampleCaption, reported,
                 h.has("qa-plan") ? f.resolve(h.text("qa-plan")) : null);
+    }
+
+    /**
+     * The water result named, or with {@code water = none} the moisture the plan states; a stated moisture beside a
+     * measured one is refused, so that the basis has one source.
+     */
+    private static Moisture moisture(KeyValueFile.Section h, Path file) throws FileFormatException {
+        String water = h.text("water");
+        if (!NO_WATER.equals(water)) {
+            for (String key : List.of("moisture", "moisture-uncertainty")) {
+                if (h.has(key)) {
+                    throw h.error(key, "is stated only with water = " + NO_WATER + "; the method measures " + water);
+                }
+            }
+            return Moisture.measured(water);
+        }
+        double percent = h.number("moisture");
+        if (!(percent >= 0 && percent < 100)) {
+            throw h.error("moisture", "must lie in 0 to below 100 % vol, was " + h.text("moisture"));
+        }
+        double u = h.number("moisture-uncertainty");
+        if (!(u >= 0 && Double.isFinite(u))) {
+            throw h.error("moisture-uncertainty", "must not be negative, was " + h.text("moisture-uncertainty"));
+        }
+        return Moisture.stated(percent, u, "report plan " + file.getFileName()
+                + ", line " + h.value("moisture").line());
     }
 
     private static LocalDate day(KeyValueFile.Section h, String key) throws FileFormatException {

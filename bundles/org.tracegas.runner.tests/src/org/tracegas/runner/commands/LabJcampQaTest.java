@@ -50,8 +50,8 @@ class LabJcampQaTest {
     @TempDir
     Path folder;
 
-    private Path write(Path dir, String name, Map<String, Double> ppmMetres, Instant time, String role, Random r,
-            LabJcampQuantificationTest.Lab lab) throws Exception {
+    private static Path write(Path dir, String name, Map<String, Double> ppmMetres, Instant time, String role,
+            Random r, LabJcampQuantificationTest.Lab lab) throws Exception {
         Map<String, String> labels = new LinkedHashMap<>();
         labels.put("LONGDATE", LabJcampQuantificationTest.stamp(time));
         labels.put("$CELL TEMPERATURE", "313.15");
@@ -78,9 +78,23 @@ class LabJcampQaTest {
         LabJcampQuantificationTest.Lab lab = new LabJcampQuantificationTest.Lab(folder,
                 List.of("--workspace", folder.resolve("ws").toString()), 8);
         lab.setUp();
+        String out = qaOfTheDay(lab);
+        Map<String, Double> read = readings(out);
+        assertEquals(LabJcampQuantificationTest.PATH_M, read.get("CTS path length"), 0.02 * 2.0, out);
+        assertEquals(0.0, read.get("CTS drift"), 1.0, out);
+        assertEquals(NOISE, read.get("Noise level"), 0.25 * NOISE, out);
+        assertTrue(read.containsKey("Zero CO") && read.containsKey("Zero N2O") && read.containsKey("Background age"),
+                out);
+    }
+
+    /**
+     * The samples quantified, the QA files of the day (CTS before and after, zero gas) imported into project LBK-5
+     * and judged with the plan written as qa.plan in the lab's folder; every check passes. The qa command's output.
+     */
+    static String qaOfTheDay(LabJcampQuantificationTest.Lab lab) throws Exception {
         lab.ok(lab.quantifyArguments().toArray(String[]::new));
 
-        Path qa = Files.createDirectories(folder.resolve("qa"));
+        Path qa = Files.createDirectories(lab.folder.resolve("qa"));
         Random r = new Random(20260505);
         // CO at the certified content fills the 2 m cell at 313.15 K and 100.9 kPa: fewer molecules than at the
         // references' conditions, as LabJcampQuantificationTest makes its samples
@@ -95,17 +109,12 @@ class LabJcampQaTest {
         assertTrue(lab.ok(lab.quantifyArguments().toArray(String[]::new)).contains("Quantified 0 measurement(s)"),
                 "the QA measurements are not samples");
 
-        Path plan = Files.writeString(folder.resolve("qa.plan"),
+        Path plan = Files.writeString(lab.folder.resolve("qa.plan"),
                 PLAN + "checks = cts-path, cts-drift, zero-gas, background-age\n");
         String out = lab.ok("qa", "--project", "LBK-5", "--method", "Kiln stack CO and N2O", "--plan",
                 plan.toString());
         assertTrue(out.startsWith("QA checks: 7, failed: 0"), out);
-        Map<String, Double> read = readings(out);
-        assertEquals(LabJcampQuantificationTest.PATH_M, read.get("CTS path length"), 0.02 * 2.0, out);
-        assertEquals(0.0, read.get("CTS drift"), 1.0, out);
-        assertEquals(NOISE, read.get("Noise level"), 0.25 * NOISE, out);
-        assertTrue(read.containsKey("Zero CO") && read.containsKey("Zero N2O") && read.containsKey("Background age"),
-                out);
+        return out;
     }
 
     @Test

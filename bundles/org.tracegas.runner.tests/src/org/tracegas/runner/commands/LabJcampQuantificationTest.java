@@ -108,7 +108,7 @@ class LabJcampQuantificationTest {
             CommandTable table = new CommandTable("test", List.of(new WorkspaceInitCommand(), new UserAddCommand(),
                     new ProjectAddCommand(), new MethodDefineCommand(), new ImportCommand(readers),
                     new QuantifyCommand(cancel, readers, StepRegistry.withBuiltInSteps()),
-                    new ResultsExportCommand(), new QaCommand()));
+                    new ResultsExportCommand(), new QaCommand(), new ReportCommand()));
             return table.dispatch(all.toArray(String[]::new), new RunnerContext(new PrintStream(out, true,
                     StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8), ENV));
         }
@@ -299,6 +299,26 @@ class LabJcampQuantificationTest {
 
     @Test
     void labQuantifiesItsJcampSpectraOnTheLabServer() throws Exception {
+        onLabServer((schemaUrl, user, password) -> {
+            Lab lab = new Lab(folder, List.of("--server", schemaUrl, "--user", user), SAMPLES);
+            lab.setUp();
+            dayOfTheLab(lab);
+            try (WorkspaceStore store = Workspaces.openPostgres(schemaUrl, user, password)) {
+                checkStored(lab, store);
+            }
+        });
+    }
+
+    /** A lab day on the lab server, given the JDBC url of its own schema, the user and the password. */
+    interface ServerDay {
+        void run(String schemaUrl, String user, String password) throws Exception;
+    }
+
+    /**
+     * Runs a day on the PostgreSQL lab server (system properties tracegas.test.pg.url, .user and .password) in a
+     * fresh schema, dropped afterwards.
+     */
+    static void onLabServer(ServerDay day) throws Exception {
         String url = System.getProperty("tracegas.test.pg.url", "jdbc:postgresql://127.0.0.1:55432/tracegas");
         String user = System.getProperty("tracegas.test.pg.user", "tracegas");
         String password = System.getProperty("tracegas.test.pg.password", "tracegas");
@@ -308,13 +328,7 @@ class LabJcampQuantificationTest {
         }
         String schemaUrl = url + (url.contains("?") ? "&" : "?") + "currentSchema=" + schema;
         try {
-            Lab lab = new Lab(folder, List.of("--server", schemaUrl, "--user", user),
-                    SAMPLES);
-            lab.setUp();
-            dayOfTheLab(lab);
-            try (WorkspaceStore store = Workspaces.openPostgres(schemaUrl, user, password)) {
-                checkStored(lab, store);
-            }
+            day.run(schemaUrl, user, password);
         } finally {
             try (Connection c = connect(url, user, password); Statement s = c.createStatement()) {
                 s.execute("DROP SCHEMA " + schema + " CASCADE");

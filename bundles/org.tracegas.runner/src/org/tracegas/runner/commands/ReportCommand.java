@@ -38,8 +38,9 @@ public final class ReportCommand implements Command {
                 + StoredMethods.USAGE + "\n" + """
                   The plan (key = value lines) gives the campaign (report-id, client, plant, source, days,
                   issued), the reporting basis (standard conditions, reference-o2), the O2 side-channel file and
-                  column, the water compound, the uncertainty budget, the averaging periods, an optional
-                  example fit, and one [compound] block per reported compound (name, molar-mass, limit lines
+                  column, the water compound (or water = none with moisture and moisture-uncertainty in
+                  % vol, stated where the method measures no water; the report prints them and their plan
+                  line), the uncertainty budget, the averaging periods, an optional example fit, and one [compound] block per reported compound (name, molar-mass, limit lines
                   such as '100 per 30 min'), and the QA plan whose control charts the report draws again
                   (qa-plan). Writes report.pdf and results.csv into --out, each whole, and prints the report id
                   and content hash that report-sign is given, and the signatures given on the report.
