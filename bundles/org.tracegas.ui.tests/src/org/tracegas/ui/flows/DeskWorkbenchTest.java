@@ -6,10 +6,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Set;
 import java.util.concurrent.atomic.AtomicReference;
 
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.graphics.GC;
+import org.eclipse.swt.graphics.Image;
+import org.eclipse.swt.graphics.ImageData;
+import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Display;
@@ -117,8 +123,8 @@ class DeskWorkbenchTest {
         shots.add(Screens.save(shell, "workbench-spectrum-from-time-series"));
 
         IWorkbenchPage page = window.getActivePage();
-        // maximized, as a reviewer reads a long trail
-        page.setPartState(page.getReference(page.showView(AuditTrailView.ID)), IWorkbenchPage.STATE_MAXIMIZED);
+        // in its place on the desk, not maximized: its rows must paint there too
+        page.showView(AuditTrailView.ID);
         AuditTrailPanel audit = find(shell, AuditTrailPanel.class);
         Screens.waitFor(display, () -> audit.shown() != null, 30_000);
         assertTrue(audit.shown().chain().intact(), audit.shown().chain().findings().toString());
@@ -126,8 +132,35 @@ class DeskWorkbenchTest {
                 && r.userId().equals(Desk.get().session().userId())), "the reviewer's log-in is recorded");
         assertTrue(audit.shown().records().stream().anyMatch(r -> r.objectType().equals("raw-file")));
         assertEquals(audit.shown().records().size(), audit.table().getItemCount());
-        audit.table().showItem(audit.table().getItem(audit.table().getItemCount() - 1));
         shots.add(Screens.save(shell, "workbench-audit-trail"));
+        // the first row's strip: the table's client coordinates start below its header
+        int colours = coloursOnScreen(display, audit.table(),
+                new Rectangle(0, 0, audit.table().getClientArea().width, audit.table().getItemHeight()));
+        // a painted row holds anti-aliased text (hundreds of colours); an unpainted one is background and a grid
+        // line or two
+        assertTrue(colours > 20, "the first row of the audit trail is painted: " + colours + " colours on screen");
+    }
+
+    /** How many colours the screen shows in {@code area} (control coordinates, clipped to 600 pixels wide). */
+    private static int coloursOnScreen(Display display, Control control, Rectangle area) {
+        Rectangle onScreen = display.map(control, null, area);
+        int width = Math.min(onScreen.width, 600);
+        Image image = new Image(display, width, onScreen.height);
+        GC gc = new GC(display);
+        try {
+            gc.copyArea(image, onScreen.x, onScreen.y);
+        } finally {
+            gc.dispose();
+        }
+        ImageData pixels = image.getImageData();
+        image.dispose();
+        Set<Integer> colours = new HashSet<>();
+        for (int y = 0; y < pixels.height; y++) {
+            for (int x = 0; x < pixels.width; x++) {
+                colours.add(pixels.getPixel(x, y));
+            }
+        }
+        return colours.size();
     }
 
     /** The first control of a type below a composite, depth first. */
