@@ -23,16 +23,20 @@ import org.tracegas.qa.internal.Stats;
  */
 public final class ControlChartCheck {
 
-    /** CUSUM reference value in σ units: detects a shift of 1σ best (Montgomery, from memory). */
+    /**
+     * CUSUM reference value in σ units: k = 1/2 with h = 4 or 5 gives good average run lengths against a shift of
+     * 1σ (Montgomery and Runger, Applied Statistics and Probability for Engineers, section 16-10).
+     */
     public static final double CUSUM_K = 0.5;
-    /** CUSUM decision interval in σ units (Montgomery, from memory). */
+    /** CUSUM decision interval in σ units (Montgomery and Runger, section 16-10: h = 4 or 5). */
     public static final double CUSUM_H = 5.0;
     /** Signals listed in the rule statement; more are counted. */
     private static final int LISTED_SIGNALS = 8;
-    private static final String SOURCE = "Shewhart chart of individual readings with Western Electric rules 1, 2 "
-            + "and 4 (Western Electric Statistical Quality Control Handbook, 1956, from memory); tabular CUSUM with "
-            + "k = 0.5 sigma, h = 5 sigma (Montgomery, Introduction to Statistical Quality Control, from memory); "
-            + "EN 14181 ongoing QA charts repeated zero and span readings (from memory)";
+    private static final String SOURCE = "Shewhart chart of individual readings with Western Electric run rules 1 "
+            + "(a point beyond 3 sigma), 2 (2 of 3 successive points beyond 2 sigma) and 4 (8 successive points on "
+            + "one side), as the StatSoft statistics glossary lists them ('Western Electric Run Rules', after AT&T "
+            + "1959); tabular CUSUM with k = 0.5 sigma, h = 5 sigma (Montgomery and Runger, Applied Statistics and "
+            + "Probability for Engineers, section 16-10)";
 
     private final String reading;
     private final String unit;
