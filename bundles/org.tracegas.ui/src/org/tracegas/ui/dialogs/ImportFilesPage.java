@@ -30,8 +30,9 @@ import org.tracegas.store.ProjectInfo;
 
 /**
  * The import wizard's page: the project, the files with the reader that recognises each, and the kind, time and
- * cell conditions for records whose files state none. Each file is read as the import will read it whenever the
- * files or the values change, so that a file the import would refuse is named here with the reason.
+ * cell conditions for records whose files state none. Each file is read as the import will read it when it is
+ * added, and again when the values change if it takes them, so that a file the import would refuse is named here
+ * with the reason.
  */
 public final class ImportFilesPage extends WizardPage {
 
@@ -151,13 +152,17 @@ public final class ImportFilesPage extends WizardPage {
         recheck();
     }
 
-    /** Reads every file again with the values now given. */
+    /**
+     * Reads again, with the values now given, every file not read yet and every file that takes those values; a
+     * file stating its own conditions is read once, not on every keystroke in the value fields.
+     */
     private void recheck() {
         if (table == null) {
             return;
         }
         FileMeasurements.Defaults d = defaults();
-        previews.replaceAll((f, p) -> ImportPreview.of(readers, f, d == null ? FileMeasurements.Defaults.none() : d));
+        previews.replaceAll((f, p) -> p != null && p.independentOfValuesGiven() ? p
+                : ImportPreview.of(readers, f, d == null ? FileMeasurements.Defaults.none() : d));
         refresh();
     }
 

@@ -20,6 +20,13 @@ import org.tracegas.importer.ReaderRegistry;
  */
 record ImportPreview(String reader, String why, int records, String conditions, String error) {
 
+    private static final String STATED = "stated in the file";
+
+    /** Whether the file states its own conditions, so that the values given below cannot change this preview. */
+    boolean independentOfValuesGiven() {
+        return error == null && STATED.equals(conditions);
+    }
+
     /** Says from the file itself whether it states its conditions, before looking at the values given. */
     static ImportPreview of(ReaderRegistry readers, Path file, FileMeasurements.Defaults given) {
         ReaderChoice choice;
@@ -32,7 +39,7 @@ record ImportPreview(String reader, String why, int records, String conditions, 
         String why = choice.recognition().reason();
         try {
             int n = FileMeasurements.read(readers, file, FileMeasurements.Defaults.none()).measurements().size();
-            return new ImportPreview(name, why, n, "stated in the file", null);
+            return new ImportPreview(name, why, n, STATED, null);
         } catch (ImportException statesNone) {
             try {
                 int n = FileMeasurements.read(readers, file, given).measurements().size();
