@@ -15,7 +15,8 @@ import org.tracegas.qa.internal.Stats;
 
 /**
  * Method detection limit and minimum analyte uncertainty of one analyte from replicate zero-gas readings that went
- * through the whole chain (transform, background ratio, fit) as samples do.
+ * through the whole chain (transform, background ratio, fit, correction to the cell's temperature, pressure and
+ * path) as samples do, so that the limit is on the basis of the results it is compared with.
  * <p>
  * MDL = t(n-1, 1-alpha = 0.99) · S, with S the sample standard deviation of the n replicate results and t the
  * one-sided 99 % Student's t value with n-1 degrees of freedom (40 CFR Part 136 Appendix B, procedure; its table
@@ -106,7 +107,8 @@ public record MethodDetectionLimit(String analyte, int readings, double standard
      */
     public List<CheckOutcome> outcomes() {
         Rule mdlRule = new Rule(String.format(Locale.ROOT, "MDL = t(n-1, 0.99) x S = %.3f x %s ppm with n = %d "
-                + "replicate zero-gas readings quantified as samples (at least %d needed)", t,
+                + "replicate zero-gas readings quantified and corrected to their cell as samples are (at least %d "
+                + "needed)", t,
                 Format.number(standardDeviation), readings, MINIMUM_READINGS), MDL_SOURCE);
         Rule mauRule = new Rule(String.format(Locale.ROOT, "MAU = 3 x RMS of the fit's noise-limited standard "
                 + "uncertainty over the same %d zero-gas readings", readings), MAU_SOURCE);
