@@ -39,7 +39,6 @@ import org.tracegas.store.Workspaces;
  */
 class BatchCtsPathTest {
 
-    private static final double CTS_PPM = 100;
     private static final double LONGER = 1.03;
     private static final String CTS_METHOD = "Stack CTS path";
 
@@ -73,25 +72,13 @@ class BatchCtsPathTest {
             w.append(header(SampleKind.BACKGROUND, BatchCampaign.T0.minusSeconds(3600), null),
                     bands.interferogram(Map.of(), noise));
             w.append(header(SampleKind.SAMPLE, BatchCampaign.T0.minusSeconds(3000), MeasurementRole.CTS),
-                    bands.interferogram(Map.of("CO", LONGER * CTS_PPM), noise));
+                    bands.interferogram(Map.of("CO", LONGER * LabJcampQaTest.CTS_PPM), noise));
             w.append(header(SampleKind.SAMPLE, BatchCampaign.T0.plusSeconds(3000), MeasurementRole.CTS),
-                    bands.interferogram(Map.of("CO", LONGER * CTS_PPM), noise));
+                    bands.interferogram(Map.of("CO", LONGER * LabJcampQaTest.CTS_PPM), noise));
             w.commit();
         }
-        Path plan = Files.writeString(folder.resolve("qa-cts.plan"), """
-                library = lib/library.manifest
-                cts-compound = CO
-                cts-ppm = 100
-                cts-band = 2050..2200
-                spike-analyte = CO
-                tracer = N2O
-                spike-analyte-ppm = 60
-                spike-tracer-ppm = 2
-                analytes = CO, N2O
-                noise-region = 2285..2298
-                maximum-noise = 2e-3
-                background-age-limit = 24 h
-                """);
+        // the lab's plan: CO at 100 ppm, its band 2060..2195 cm-1 inside the invented CO band's region
+        Path plan = Files.writeString(folder.resolve("qa-cts.plan"), LabJcampQaTest.PLAN);
         Path method = Files.writeString(folder.resolve("cts.method"), InventedBandSystem.methodFile(CTS_METHOD)
                 .replace("path-length = 4.85\n", "path-length = 4.85\npath-source = cts-derived\n"));
         campaign.ok("method-define", "--as", "ana", "--method", method.toString());

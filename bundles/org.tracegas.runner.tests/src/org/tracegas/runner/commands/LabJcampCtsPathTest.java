@@ -7,7 +7,6 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
 import java.util.ArrayList;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
@@ -70,8 +69,10 @@ class LabJcampCtsPathTest {
         double cts = LabJcampQaTest.CTS_PPM * LabJcampQuantificationTest.PATH_M
                 * LabJcampQuantificationTest.CELL_DENSITY;
         Instant t0 = LabJcampQuantificationTest.T0;
-        withPlan.addAll(List.of("--file", cts(lab, "cts-before.jdx", cts, t0.minusSeconds(300), r).toString(),
-                "--file", cts(lab, "cts-after.jdx", cts, t0.plusSeconds(8 * 1800), r).toString()));
+        Path qa = Files.createDirectories(folder.resolve("qa"));
+        withPlan.addAll(List.of("--file", LabJcampQaTest.write(qa, "cts-before.jdx", Map.of("CO", cts),
+                t0.minusSeconds(300), "cts", r, lab).toString(), "--file", LabJcampQaTest.write(qa, "cts-after.jdx",
+                        Map.of("CO", cts), t0.plusSeconds(8 * 1800), "cts", r, lab).toString()));
         String out = lab.ok(withPlan.toArray(String[]::new));
         assertTrue(out.contains("derived from the CTS readings (nominal 1.9 m)")
                 && out.contains("Quantified 8 measurement(s)"), out);
@@ -99,19 +100,5 @@ class LabJcampCtsPathTest {
             }
             assertTrue(store.verifyAuditTrail().intact());
         }
-    }
-
-    /** A CTS reading of the lab's cell: CO at the certified content on 2 m at the cell's conditions. */
-    private static Path cts(LabJcampQuantificationTest.Lab lab, String name, double ppmMetres, Instant time,
-            Random r) throws Exception {
-        Map<String, String> labels = new LinkedHashMap<>();
-        labels.put("LONGDATE", LabJcampQuantificationTest.stamp(time));
-        labels.put("$CELL TEMPERATURE", "313.15");
-        labels.put("$CELL PRESSURE", "1009.0");
-        labels.put("$ROLE", "cts");
-        Path file = Files.createDirectories(lab.folder.resolve("qa")).resolve(name);
-        Files.writeString(file, JcampForms.write(lab.spectra.absorbance(Map.of("CO", ppmMetres), 0, 0,
-                LabJcampQaTest.NOISE, r), "Kiln 5 cts " + name, labels, JcampForms.Form.AFFN));
-        return file;
     }
 }

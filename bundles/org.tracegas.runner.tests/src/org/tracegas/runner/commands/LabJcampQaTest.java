@@ -58,7 +58,8 @@ class LabJcampQaTest {
     @TempDir
     Path folder;
 
-    private static Path write(Path dir, String name, Map<String, Double> ppmMetres, Instant time, String role,
+    /** A QA measurement of the lab's cell at 313.15 K and 100.9 kPa, its role in the label $ROLE. */
+    static Path write(Path dir, String name, Map<String, Double> ppmMetres, Instant time, String role,
             Random r, LabJcampQuantificationTest.Lab lab) throws Exception {
         Map<String, String> labels = new LinkedHashMap<>();
         labels.put("LONGDATE", LabJcampQuantificationTest.stamp(time));
