@@ -95,6 +95,17 @@ class ResultCorrectionTest {
     }
 
     @Test
+    void theFactorAQaReadingGetsIsTheOneItsResultsGet() {
+        // (433.15 / 423.15) (101.325 / 98.0) = 1.0583627 as above; with L_s = 1.03 L_r, 1.0583627 / 1.03 =
+        // 1.0275366 (worked by hand); a compound the method has no correction for stays as fitted
+        ResultCorrection correction = ResultCorrection.of(stored(423.15));
+        assertEquals(1.0583627, correction.factor("CO", 433.15, 98.0), 1e-7);
+        assertEquals(1.0275366, correction.withCtsPath(1.03 * 4.85).factor("CO", 433.15, 98.0), 1e-7);
+        assertEquals(1.0, correction.factor("N2O", 433.15, 98.0));
+        assertEquals(1.0, ResultCorrection.none().factor("CO", 433.15, 98.0));
+    }
+
+    @Test
     void theCellAtTheReferencesConditionsLeavesTheValueAsFitted() {
         NewResult r = ResultCorrection.of(stored(423.15)).results(fitted(42.0, 0.5), new AnalysisVersions("m", "l"),
                 new ConditionValue(423.15, ConditionOrigin.METHOD_STATED),

@@ -16,6 +16,7 @@ import org.tracegas.preprocess.SpectrumStep;
 import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.qa.basis.ConditionOrigin;
 import org.tracegas.qa.basis.ConditionValue;
+import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.BackgroundAge;
@@ -74,7 +75,7 @@ public final class MeasurementQuantification {
     private final String projectId;
     private final StoredMethod method;
     private final AnalysisVersions versions;
-    private final ResultCorrection correction;
+    private ResultCorrection correction;
     private final List<SpectrumStep> steps;
     private final InterferogramTransform transform;
     private final String software;
@@ -83,11 +84,14 @@ public final class MeasurementQuantification {
     private MeasurementAbsorbance absorbance;
     private List<SourcedMeasurement> qa = List.of();
     private List<Background> backgrounds = List.of();
+    private Map<String, Spectrum> pendingSpectra = Map.of();
 
     /**
+     * A method whose path source is CTS-derived runs only once given the path ({@link #correctToCtsPath}).
+     *
      * @param registry creates the steps of the method's recipe
      * @throws IllegalArgumentException naming the recipe step the registry does not know or whose parameters it
-     *                                  rejects, or if the method takes its path from CTS readings
+     *                                  rejects
      */
     public MeasurementQuantification(WorkspaceStore store, Session actor, String projectId, VersionInfo version,
             StoredMethod method, StepRegistry registry, String software) {
@@ -97,11 +101,6 @@ public final class MeasurementQuantification {
         this.method = method;
         this.versionId = version.id();
         this.versions = new AnalysisVersions(version.id(), method.libraryVersionId());
-        if (method.pathSource() == org.tracegas.qa.basis.PathOrigin.CTS_DERIVED) {
-            throw new IllegalArgumentException("method " + method.method().name() + " takes its path from the "
-                    + "campaign's CTS readings, which imported measurements do not bring; quantify interferogram "
-                    + "containers with the QA plan instead");
-        }
         this.correction = ResultCorrection.of(method);
         this.steps = new ArrayList<>();
         for (Recipe.Entry e : method.recipe().entries()) {
@@ -169,24 +168,41 @@ public final class MeasurementQuantification {
                 backgrounds.isEmpty() ? null : new BackgroundTimeline(backgrounds));
         this.qa = List.copyOf(qa);
         this.backgrounds = List.copyOf(backgrounds);
+        this.pendingSpectra = Map.copyOf(pendingValues);
         return new Plan(samples, skipped, pendingValues);
     }
 
     /**
-     * The project's QA measurements found by the last plan, made absorbance, put through the method's recipe and
-     * fitted as its samples are, and nothing stored; each with the role its label states.
+     * The project's QA measurements found by the last plan (those of its files not yet stored among them), made
+     * absorbance, put through the method's recipe and fitted as its samples are, and nothing stored; each with the
+     * role its label states.
      *
      * @throws ImportException naming the file, record and field of a QA measurement that cannot be fitted
      */
     public QaMeasurements qaMeasurements() throws ImportException {
         List<QaMeasurements.Fitted> fitted = new ArrayList<>();
         for (SourcedMeasurement m : qa) {
-            Prepared p = prepare(m, values(m, Map.of()));
+            Prepared p = prepare(m, values(m, pendingSpectra));
             fitted.add(new QaMeasurements.Fitted(m.measurement().time(), FileMeasurements.role(m.labels()),
                     temperature(m).value(), pressure(m).value(), p.absorbance(),
                     quantifier(p.absorbance().axis()).quantify(p.sample())));
         }
         return QaMeasurements.of(fitted);
+    }
+
+    /**
+     * Corrects the results of the runs to come to the effective path the campaign's CTS readings measured, as a
+     * method whose path source is CTS-derived requires (see {@link CtsPath}).
+     *
+     * @throws IllegalArgumentException if the method corrects to its nominal path, the path is not positive and
+     *                                  finite, or the method's references came without their conditions
+     */
+    public void correctToCtsPath(double pathM) {
+        if (method.pathSource() != PathOrigin.CTS_DERIVED) {
+            throw new IllegalArgumentException("method " + method.method().name() + " corrects to its nominal "
+                    + "path: a CTS-derived path is not used (path-source = cts-derived in the method would use it)");
+        }
+        correction = ResultCorrection.of(method).withCtsPath(pathM);
     }
 
     /** The project's backgrounds found by the last plan, as single beams, in time order. */
@@ -216,6 +232,10 @@ public final class MeasurementQuantification {
         if (plan.pending()) {
             throw new IllegalArgumentException("the plan holds measurements of files not yet imported; import them"
                     + " and plan again");
+        }
+        if (method.pathSource() == PathOrigin.CTS_DERIVED && correction.pathOrigin() != PathOrigin.CTS_DERIVED) {
+            throw new IllegalStateException("method " + method.method().name() + " takes its path from the "
+                    + "campaign's CTS readings: derive it first (CtsPath) and give it to correctToCtsPath");
         }
         List<MeasurementAnalysis> block = new ArrayList<>(BLOCK);
         int stored = 0;

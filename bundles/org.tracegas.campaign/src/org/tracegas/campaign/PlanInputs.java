@@ -13,10 +13,13 @@ import org.tracegas.qa.checks.QaInputs;
 import org.tracegas.qa.checks.QaReading;
 import org.tracegas.qa.checks.QaReference;
 import org.tracegas.qa.checks.QaSettings;
+import org.tracegas.spectrum.Spectrum;
 
 /**
  * A campaign's QA readings, backgrounds (none for spectra imported as absorbance), sample span, method path and
- * library, as its QA plan's checks see them.
+ * library, as its QA plan's checks see them. The amounts of each reading are corrected to its cell as the
+ * method's results are ({@link ResultCorrection}), so that a check judges, and a detection limit is stated on,
+ * the basis the campaign's results are reported on; the absorbance and the cell stay as measured.
  */
 final class PlanInputs implements QaInputs {
 
@@ -27,9 +30,11 @@ final class PlanInputs implements QaInputs {
     private final Instant lastSample;
     private final double nominalPathMetres;
     private final ReferenceLibrary library;
+    private final ResultCorrection correction;
 
+    /** @param correction of the method's results; {@link ResultCorrection#none()} leaves the amounts as fitted */
     PlanInputs(QaPlan plan, QaMeasurements readings, List<Background> backgrounds, Instant firstSample,
-            Instant lastSample, double nominalPathMetres, ReferenceLibrary library) {
+            Instant lastSample, double nominalPathMetres, ReferenceLibrary library, ResultCorrection correction) {
         this.plan = plan;
         this.readings = readings;
         this.backgrounds = backgrounds.isEmpty() ? null : new BackgroundTimeline(backgrounds);
@@ -37,11 +42,12 @@ final class PlanInputs implements QaInputs {
         this.lastSample = lastSample;
         this.nominalPathMetres = nominalPathMetres;
         this.library = library;
+        this.correction = correction;
     }
 
     @Override
     public List<QaReading> readings(String role) {
-        return List.copyOf(readings.withRole(role));
+        return readings.withRole(role).stream().<QaReading>map(f -> new Corrected(f, correction)).toList();
     }
 
     @Override
@@ -86,5 +92,53 @@ final class PlanInputs implements QaInputs {
                         + "reference of " + compound));
         return new QaReference(r.spectrum(), r.metadata().conditions().concentrationPathLength(),
                 r.metadata().conditions().temperature(), r.metadata().conditions().pressure());
+    }
+
+    /** A reading whose amounts are scaled by the factor the method's results get in the reading's cell. */
+    private record Corrected(QaReading fitted, ResultCorrection correction) implements QaReading {
+
+        @Override
+        public Instant time() {
+            return fitted.time();
+        }
+
+        @Override
+        public String role() {
+            return fitted.role();
+        }
+
+        @Override
+        public Spectrum absorbance() {
+            return fitted.absorbance();
+        }
+
+        @Override
+        public double cellTemperatureK() {
+            return fitted.cellTemperatureK();
+        }
+
+        @Override
+        public double cellPressureKPa() {
+            return fitted.cellPressureKPa();
+        }
+
+        @Override
+        public double ppm(String compound) {
+            return fitted.ppm(compound) * factor(compound);
+        }
+
+        @Override
+        public double detectionLimit(String compound) {
+            return fitted.detectionLimit(compound) * factor(compound);
+        }
+
+        @Override
+        public double standardUncertainty(String compound) {
+            return fitted.standardUncertainty(compound) * factor(compound);
+        }
+
+        private double factor(String compound) {
+            return correction.factor(compound, fitted.cellTemperatureK(), fitted.cellPressureKPa());
+        }
     }
 }

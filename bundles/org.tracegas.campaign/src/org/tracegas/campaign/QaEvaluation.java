@@ -12,6 +12,7 @@ import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
+import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.Session;
@@ -21,9 +22,11 @@ import org.tracegas.store.WorkspaceStore;
  * Evaluates a campaign's QA checks once per method version and stores them: the QA measurements (of a QA
  * container file, or imported from the lab's files) are made absorbance and fitted with the stored method, the
  * CTS reference comes from the method's own library version, and the background ages span the project's stored
- * samples. The repeated readings the plan charts are judged on their control charts against the earlier
- * campaigns of the same method, and the charts' outcomes are stored with the other checks. Checks stored already
- * are returned as they are.
+ * samples. The QA readings' amounts are corrected to their cell as the method's results are (to the path of the
+ * CTS readings for a method that takes its path from them), so that the checks, the detection limits among them,
+ * are on the basis of the results they vouch for. The repeated readings the plan charts are judged on their
+ * control charts against the earlier campaigns of the same method, and the charts' outcomes are stored with the
+ * other checks. Checks stored already are returned as they are.
  */
 public final class QaEvaluation {
 
@@ -98,8 +101,14 @@ public final class QaEvaluation {
         QaMeasurements fitted = qa.fit();
         Instant first = samples.get(0).time();
         Instant last = samples.get(samples.size() - 1).time();
+        // the readings' amounts on the basis of the results: corrected to their cell, and to the path the CTS
+        // readings measured for a method that takes its path from them
+        ResultCorrection correction = ResultCorrection.of(method);
+        if (method.pathSource() == PathOrigin.CTS_DERIVED) {
+            correction = correction.withCtsPath(CtsPath.mean(store, plan, method, fitted, backgrounds));
+        }
         List<CheckOutcome> readings = CampaignQaChecks.evaluate(plan.checks(), new PlanInputs(plan, fitted,
-                backgrounds, first, last, method.method().pathLengthMetres(), library));
+                backgrounds, first, last, method.method().pathLengthMetres(), library, correction));
         List<CheckOutcome> checks = new ArrayList<>(readings);
         List<CheckOutcome> history = plan.charts().isEmpty() ? List.of()
                 : StoredQaChecks.history(store, actor, projectId, method.method().name());

@@ -9,6 +9,7 @@ import java.util.Map;
 import org.tracegas.library.ReferenceConditions;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.qa.basis.CellConditions;
+import org.tracegas.qa.basis.ConditionOrigin;
 import org.tracegas.qa.basis.ConditionValue;
 import org.tracegas.qa.basis.ConditionsCorrection;
 import org.tracegas.qa.basis.PathOrigin;
@@ -65,6 +66,11 @@ final class ResultCorrection {
         return new ResultCorrection(byCompound, fitPathM, pathM, PathOrigin.CTS_DERIVED);
     }
 
+    /** Where the sample path L_s comes from. */
+    PathOrigin pathOrigin() {
+        return pathOrigin;
+    }
+
     /** No correction: results as fitted. */
     static ResultCorrection none() {
         return NONE;
@@ -97,6 +103,19 @@ final class ResultCorrection {
         }
         return new ResultCorrection(corrections, method.method().pathLengthMetres(),
                 method.method().pathLengthMetres(), PathOrigin.NOMINAL);
+    }
+
+    /**
+     * C_corr / C_calc, by which {@link #results} scales a compound's result fitted in a cell at a temperature and
+     * pressure; 1 for a compound without a correction. Where the temperature and pressure came from is recorded
+     * with a stored result only: it does not enter the factor, so it is not asked for here.
+     */
+    double factor(String compound, double cellTemperatureK, double cellPressureKPa) {
+        ConditionsCorrection correction = byCompound.get(compound);
+        return correction == null ? 1.0
+                : correction.factor(new CellConditions(new ConditionValue(cellTemperatureK,
+                        ConditionOrigin.INSTRUMENT_CHANNEL), new ConditionValue(cellPressureKPa,
+                                ConditionOrigin.INSTRUMENT_CHANNEL), samplePathM, pathOrigin));
     }
 
     /**
