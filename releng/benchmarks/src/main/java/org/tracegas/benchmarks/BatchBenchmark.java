@@ -20,7 +20,7 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 import org.tracegas.campaign.StackProcessor;
-import org.tracegas.campaign.demo.DemoMethod;
+import org.tracegas.demo.DemoMethod;
 import org.tracegas.importer.container.ContainerReader;
 import org.tracegas.quantify.BatchQuantifier;
 import org.tracegas.quantify.CancellationFlag;

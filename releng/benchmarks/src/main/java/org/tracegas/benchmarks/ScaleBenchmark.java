@@ -25,7 +25,7 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 import org.tracegas.campaign.StackProcessor;
-import org.tracegas.campaign.demo.DemoScenario;
+import org.tracegas.demo.DemoScenario;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.ReferenceSpectrum;
 import org.tracegas.quantify.AnalysisRegion;

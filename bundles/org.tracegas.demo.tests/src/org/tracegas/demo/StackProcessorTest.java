@@ -1,4 +1,4 @@
-package org.tracegas.campaign;
+package org.tracegas.demo;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -18,8 +18,12 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.campaign.demo.DemoMethod;
-import org.tracegas.campaign.demo.DemoPhysicsFixture;
+import org.tracegas.campaign.AnalysisVersions;
+import org.tracegas.campaign.BackgroundTimeline;
+import org.tracegas.campaign.MinuteSeries;
+import org.tracegas.campaign.SpectrumChain;
+import org.tracegas.campaign.StackProcessor;
+import org.tracegas.campaign.StoredMethod;
 import org.tracegas.importer.container.AcquisitionHeader;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;

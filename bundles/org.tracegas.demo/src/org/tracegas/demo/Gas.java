@@ -1,4 +1,4 @@
-package org.tracegas.campaign.demo;
+package org.tracegas.demo;
 
 /**
  * A gas of the demo campaign: its identity, where its invented line list puts its bands, and the level at

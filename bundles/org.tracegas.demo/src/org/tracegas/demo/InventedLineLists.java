@@ -1,4 +1,4 @@
-package org.tracegas.campaign.demo;
+package org.tracegas.demo;
 
 import org.tracegas.campaign.WholeFile;
 import java.io.IOException;

@@ -1,4 +1,4 @@
-package org.tracegas.campaign.demo;
+package org.tracegas.demo;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;

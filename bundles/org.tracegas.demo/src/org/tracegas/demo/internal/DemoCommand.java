@@ -1,15 +1,16 @@
-package org.tracegas.runner.commands;
+package org.tracegas.demo.internal;
 
 import java.nio.file.Path;
 import java.util.List;
 
-import org.tracegas.campaign.demo.DemoCampaign;
+import org.tracegas.demo.DemoCampaign;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
+import org.tracegas.runner.commands.Options;
 
 /** Runs the demo campaign end to end on an embedded H2 workspace. */
 public final class DemoCommand implements Command {

@@ -1,4 +1,4 @@
-package org.tracegas.campaign.demo;
+package org.tracegas.demo;
 
 import java.util.LinkedHashMap;
 import java.util.Map;
