@@ -5,26 +5,16 @@ import java.util.List;
 
 import org.tracegas.demo.DemoCampaign;
 import org.tracegas.qa.checks.CheckOutcome;
-import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
-import org.tracegas.runner.UsageException;
 import org.tracegas.runner.commands.Options;
 
-/** Runs the demo campaign end to end on an embedded H2 workspace. */
+/**
+ * Runs the demo campaign end to end on an embedded H2 workspace. The demo bundle contributes it to the runner's
+ * commands, as a lab's bundle would its own; it stops on the runner's cancellation.
+ */
 public final class DemoCommand implements Command {
-
-    private final CancellationFlag cancel;
-
-    public DemoCommand(CancellationFlag cancel) {
-        this.cancel = cancel;
-    }
-
-    /** The command as the runner's extension point creates it: it stops on the runner's cancellation. */
-    public DemoCommand() {
-        this(null);
-    }
 
     @Override
     public String name() {
@@ -58,7 +48,7 @@ public final class DemoCommand implements Command {
         long started = System.nanoTime();
         context.progress().begin("demo");
         DemoCampaign.Outcome outcome = new DemoCampaign(workspace, out, context.out())
-                .run(context.progress()::update, cancel != null ? cancel : context.cancellation());
+                .run(context.progress()::update, context.cancellation());
         if (outcome.cancelled()) {
             context.err().println("tracegas demo: cancelled after " + outcome.spectraProcessed() + " spectra");
             return ExitCode.CANCELLED;
