@@ -12,10 +12,10 @@ import java.util.Set;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.campaign.ContainerContents;
-import org.tracegas.campaign.MeasurementRole;
-import org.tracegas.campaign.QaControlCharts;
-import org.tracegas.campaign.QaPlan;
+import org.tracegas.pipeline.ContainerContents;
+import org.tracegas.pipeline.MeasurementRole;
+import org.tracegas.qa.campaign.QaControlCharts;
+import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.importer.container.AcquisitionHeader;
 import org.tracegas.importer.container.ContainerRecord;
 import org.tracegas.preprocess.Background;

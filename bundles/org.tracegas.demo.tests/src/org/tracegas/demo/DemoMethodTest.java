@@ -11,10 +11,10 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.campaign.LibraryPlan;
-import org.tracegas.campaign.MethodDefinition;
-import org.tracegas.campaign.QaPlan;
-import org.tracegas.campaign.ReportPlan;
+import org.tracegas.method.LibraryPlan;
+import org.tracegas.method.MethodDefinition;
+import org.tracegas.qa.campaign.QaPlan;
+import org.tracegas.report.campaign.ReportPlan;
 import org.tracegas.preprocess.Apodization;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.SpectralAxis;

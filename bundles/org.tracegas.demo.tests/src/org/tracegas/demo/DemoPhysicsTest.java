@@ -13,7 +13,7 @@ import java.util.Random;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.campaign.ContainerContents;
+import org.tracegas.pipeline.ContainerContents;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;

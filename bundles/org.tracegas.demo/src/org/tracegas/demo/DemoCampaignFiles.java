@@ -1,6 +1,6 @@
 package org.tracegas.demo;
 
-import org.tracegas.campaign.WholeFile;
+import org.tracegas.report.campaign.WholeFile;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
 import java.io.Writer;
@@ -18,7 +18,7 @@ import java.util.Random;
 import java.util.concurrent.atomic.AtomicLong;
 import java.util.stream.IntStream;
 
-import org.tracegas.campaign.MeasurementRole;
+import org.tracegas.pipeline.MeasurementRole;
 import org.tracegas.importer.container.AcquisitionHeader;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;

@@ -7,9 +7,9 @@ import java.math.MathContext;
 import java.nio.file.Path;
 import java.util.Locale;
 
-import org.tracegas.campaign.LibraryPlan;
-import org.tracegas.campaign.LibrarySynthesis;
-import org.tracegas.campaign.MethodDefinition;
+import org.tracegas.method.LibraryPlan;
+import org.tracegas.method.LibrarySynthesis;
+import org.tracegas.method.MethodDefinition;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.Apodization;

@@ -7,7 +7,7 @@ import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
 
-import org.tracegas.campaign.WholeFile;
+import org.tracegas.report.campaign.WholeFile;
 import org.tracegas.library.io.PartitionTableText;
 import org.tracegas.library.synthesis.AbsorptionPath;
 import org.tracegas.library.synthesis.HitranLineListReader;

@@ -1,6 +1,6 @@
 package org.tracegas.demo;
 
-import org.tracegas.campaign.WholeFile;
+import org.tracegas.report.campaign.WholeFile;
 import java.io.IOException;
 import java.io.OutputStreamWriter;
 import java.io.Writer;

@@ -35,7 +35,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.postgresql.ds.PGSimpleDataSource;
-import org.tracegas.campaign.QuantificationSetup;
+import org.tracegas.pipeline.QuantificationSetup;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.quantify.BatchQuantifier;
 import org.tracegas.runner.CommandTable;

@@ -5,7 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
-import org.tracegas.campaign.ProjectQuantification;
+import org.tracegas.pipeline.ProjectQuantification;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.BatchProgress;

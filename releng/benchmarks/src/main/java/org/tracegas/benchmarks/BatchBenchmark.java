@@ -19,7 +19,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
-import org.tracegas.campaign.StackProcessor;
+import org.tracegas.pipeline.StackProcessor;
 import org.tracegas.demo.DemoMethod;
 import org.tracegas.importer.container.ContainerReader;
 import org.tracegas.quantify.BatchQuantifier;

@@ -7,9 +7,9 @@ import java.util.List;
 import java.util.Set;
 import java.util.function.Function;
 
-import org.tracegas.campaign.AnalysisVersions;
-import org.tracegas.campaign.BackgroundTimeline;
-import org.tracegas.campaign.SpectrumChain;
+import org.tracegas.pipeline.AnalysisVersions;
+import org.tracegas.pipeline.BackgroundTimeline;
+import org.tracegas.pipeline.SpectrumChain;
 import org.tracegas.demo.DemoCampaignFiles;
 import org.tracegas.demo.DemoMethod;
 import org.tracegas.demo.DemoPhysics;

@@ -24,7 +24,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
-import org.tracegas.campaign.StackProcessor;
+import org.tracegas.pipeline.StackProcessor;
 import org.tracegas.demo.DemoScenario;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.ReferenceSpectrum;
