@@ -24,6 +24,10 @@ import org.tracegas.quantify.ReferenceSpectrum;
 import org.tracegas.quantify.ReportingUnit;
 import org.tracegas.quantify.ReprocessingRecord;
 import org.tracegas.quantify.SpectrumResult;
+import org.tracegas.spectrum.AxisUnit;
+import org.tracegas.spectrum.Ordinate;
+import org.tracegas.spectrum.SpectralAxis;
+import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.NewResult;
 import org.tracegas.store.ResultConditions;
 
@@ -36,11 +40,22 @@ class ResultCorrectionTest {
 
     private static final String HASH = "c".repeat(64);
 
+    /** A Gaussian reference band of 0.01 peak absorbance; its shape does not enter the cell correction. */
+    private static Spectrum band(double centre) {
+        SpectralAxis axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.5, 401);
+        double[] v = new double[axis.size()];
+        for (int i = 0; i < v.length; i++) {
+            double d = axis.get(i) - centre;
+            v[i] = 0.01 * Math.exp(-d * d / 8);
+        }
+        return new Spectrum(axis, v, Ordinate.ABSORBANCE);
+    }
+
     private static QuantificationMethod method() {
         return QuantificationMethod.builder("Kiln CO").pathLengthMetres(4.85)
                 .analyte(new Analyte("CO", List.of(), List.of(AnalysisRegion.of(2040, 2140, 1))))
-                .reference(new ReferenceSpectrum("CO", StoredMethodTest.band(2090), 100))
-                .reference(new ReferenceSpectrum("CO", StoredMethodTest.band(2090.5), 400)).build();
+                .reference(new ReferenceSpectrum("CO", band(2090), 100))
+                .reference(new ReferenceSpectrum("CO", band(2090.5), 400)).build();
     }
 
     private static StoredMethod stored(double secondTemperature) {

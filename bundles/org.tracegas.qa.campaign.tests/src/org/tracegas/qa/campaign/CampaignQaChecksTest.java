@@ -17,7 +17,7 @@ class CampaignQaChecksTest {
         IExtensionRegistry running = RegistryFactory.getRegistry();
         IExtensionRegistry extensions = running != null ? running
                 : StandaloneExtensions.fromSourceTree(getClass().getClassLoader(), "org.tracegas.qa",
-                        "org.tracegas.campaign");
+                        "org.tracegas.qa.campaign");
         QaCheckRegistry contributed = QaCheckRegistry.fromExtensions(extensions);
         assertEquals(CampaignQaChecks.BUILT_IN, CampaignQaChecks.builtIn().names());
         assertTrue(contributed.names().containsAll(CampaignQaChecks.BUILT_IN), contributed.names().toString());
