@@ -21,8 +21,8 @@ import java.util.Set;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.campaign.MethodDefinition;
-import org.tracegas.campaign.StoredMethod;
+import org.tracegas.method.MethodDefinition;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.synthesis.HitranLineListReader;

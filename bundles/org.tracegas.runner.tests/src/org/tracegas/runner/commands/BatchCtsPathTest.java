@@ -17,7 +17,7 @@ import java.util.stream.Collectors;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
-import org.tracegas.campaign.MeasurementRole;
+import org.tracegas.pipeline.MeasurementRole;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
 import org.tracegas.runner.ExitCode;

@@ -6,10 +6,10 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.util.List;
 
-import org.tracegas.campaign.QuantificationSetup;
-import org.tracegas.campaign.StackProcessor;
-import org.tracegas.campaign.shared.WorkUnitWorker;
-import org.tracegas.campaign.shared.WorkerOutcome;
+import org.tracegas.pipeline.QuantificationSetup;
+import org.tracegas.pipeline.StackProcessor;
+import org.tracegas.pipeline.shared.WorkUnitWorker;
+import org.tracegas.pipeline.shared.WorkerOutcome;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.Background;
 import org.tracegas.quantify.CancellationFlag;

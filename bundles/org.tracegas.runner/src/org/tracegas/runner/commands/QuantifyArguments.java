@@ -7,11 +7,11 @@ import java.util.List;
 import java.util.Optional;
 import java.util.OptionalDouble;
 
-import org.tracegas.campaign.ContainerContents;
-import org.tracegas.campaign.CtsPath;
-import org.tracegas.campaign.ProjectQuantification;
-import org.tracegas.campaign.QaPlan;
 import org.tracegas.importer.ImportException;
+import org.tracegas.pipeline.ContainerContents;
+import org.tracegas.pipeline.ProjectQuantification;
+import org.tracegas.qa.campaign.CtsPath;
+import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.qa.basis.PathOrigin;

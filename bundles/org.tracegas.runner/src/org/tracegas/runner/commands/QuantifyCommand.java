@@ -11,11 +11,11 @@ import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.eclipse.core.runtime.RegistryFactory;
-import org.tracegas.campaign.CtsPath;
-import org.tracegas.campaign.FileMeasurements;
-import org.tracegas.campaign.MeasurementQuantification;
-import org.tracegas.campaign.ProjectQuantification;
-import org.tracegas.campaign.QaPlan;
+import org.tracegas.pipeline.FileMeasurements;
+import org.tracegas.pipeline.MeasurementQuantification;
+import org.tracegas.pipeline.ProjectQuantification;
+import org.tracegas.qa.campaign.CtsPath;
+import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ImportReader;
 import org.tracegas.importer.ReaderRegistry;
