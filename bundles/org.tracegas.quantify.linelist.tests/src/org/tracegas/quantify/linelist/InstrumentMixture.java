@@ -130,6 +130,14 @@ final class InstrumentMixture {
      */
     Spectrum absorbance(double[] amounts, double offset, double slope, double scale, double noise,
             Random random) {
+        return withNoise(transmittance(amounts, offset, slope, scale), noise, random);
+    }
+
+    /**
+     * The noise-free transmittance the spectrometer reports on {@link #AXIS}, baseline included; the parameters as
+     * {@link #absorbance}.
+     */
+    double[] transmittance(double[] amounts, double offset, double slope, double scale) {
         SpectralAxis fine = SpectralAxis.uniform(AxisUnit.WAVENUMBER, FINE_LOW, FINE_STEP, FINE_SIZE);
         double[] t = new double[FINE_SIZE];
         java.util.Arrays.fill(t, 1.0);
@@ -155,8 +163,16 @@ final class InstrumentMixture {
                 seen += (1 - f) * convolved(t, i) + f * convolved(t, i + 1);
             }
             seen /= ANGLES;
-            double baseline = Math.pow(10, -(offset + slope * (nu - 2150)));
-            out[p] = -Math.log10(seen * baseline + noise * random.nextGaussian());
+            out[p] = seen * Math.pow(10, -(offset + slope * (nu - 2150)));
+        }
+        return out;
+    }
+
+    /** The absorbance of a noise-free transmittance with white noise of the given standard deviation added. */
+    static Spectrum withNoise(double[] transmittance, double noise, Random random) {
+        double[] out = new double[transmittance.length];
+        for (int p = 0; p < out.length; p++) {
+            out[p] = -Math.log10(transmittance[p] + noise * random.nextGaussian());
         }
         return new Spectrum(AXIS, out, Ordinate.ABSORBANCE);
     }

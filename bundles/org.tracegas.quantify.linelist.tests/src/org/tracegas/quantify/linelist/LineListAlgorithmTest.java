@@ -137,16 +137,45 @@ class LineListAlgorithmTest {
     }
 
     /**
-     * The truth lies within two standard uncertainties for at least 80 % of the 48 results. For a normal error with
-     * the variance the formula assumes it would be 95.4 % (normal distribution, any statistics handbook); the
-     * formula takes the noise as equal at every point, but the generator's noise is on the transmittance, so the
-     * absorbance noise at a saturated line's core, where the amounts are decided, is up to twice that of the
-     * baseline, and u comes out short (the same cause as in the curve-of-growth accuracy test of the quantify
-     * bundle).
+     * Over 1,040 fits per gas (8 mixtures of the generator, each with 130 draws of its noise) the truth lies within
+     * two standard uncertainties for 93 % to 97 % of them. For a normally distributed error whose standard deviation
+     * u states, 2u covers 95.45 % (JCGM 100:2008, G.1.3 and Table G.1, from memory); the binomial standard deviation
+     * of a share of 1,040 is then 0.65 %, so the band holds an honest u with more than two of them to spare on each
+     * side. The generator puts its noise on the transmittance, which in absorbance is up to several times larger at
+     * a saturated line's core than on the baseline: a fit that weighed every point equally gave TX1 83.5 %, TX2
+     * 94.9 % here; with the noise weights of the fit TX1 94.5 %, TX2 95.7 % at the time of writing.
      */
     @Test
-    void twoStandardUncertaintiesCoverTheTruth() {
-        assertTrue(coverage() >= 0.80, figures);
+    void twoStandardUncertaintiesCoverTheTruthOverNoiseDraws() {
+        int mixtures = 8;
+        int draws = 130;
+        Random random = new Random(1996_0059);
+        Quantifier byLines = quantifier(method(new LineListAlgorithm(generator.setup())).build());
+        int[] covered = new int[2];
+        for (int m = 0; m < mixtures; m++) {
+            double[] amounts = new double[2];
+            for (int g = 0; g < 2; g++) {
+                amounts[g] = InstrumentMixture.HIGHEST[g] * (0.1 + 0.9 * random.nextDouble());
+            }
+            double[] transmittance = generator.transmittance(amounts, 0.02 * random.nextGaussian(),
+                    1e-4 * random.nextGaussian(), 0);
+            for (int d = 0; d < draws; d++) {
+                List<CompoundResult> r = byLines.fit(Sample.of(InstrumentMixture.withNoise(transmittance, NOISE,
+                        random)));
+                for (int g = 0; g < 2; g++) {
+                    double truth = amounts[g] / InstrumentMixture.PATH;
+                    covered[g] += Math.abs(r.get(g).concentration() - truth) <= 2 * r.get(g).standardUncertainty()
+                            ? 1 : 0;
+                }
+            }
+        }
+        String shares = String.format(java.util.Locale.ROOT, "within 2u over %d draws: TX1 %.1f %%, TX2 %.1f %%",
+                mixtures * draws, 100.0 * covered[0] / (mixtures * draws), 100.0 * covered[1] / (mixtures * draws));
+        System.out.println("line-list fit " + shares);
+        for (int g = 0; g < 2; g++) {
+            double share = covered[g] / (double) (mixtures * draws);
+            assertTrue(share >= 0.93 && share <= 0.97, InstrumentMixture.GASES.get(g) + " " + shares);
+        }
     }
 
     /**
