@@ -31,9 +31,9 @@ import org.tracegas.spectrum.Spectrum;
  * made by the same generator with a quarter of the noise.
  * <p>
  * Figures at the time of writing (24 mixtures, 48 results; amounts 10 % to 100 % of the highest, 1200 ppm·m of TX1
- * and 3000 ppm·m of TX2), errors relative to the highest amount: RMS error of the line-list fit TX1 0.041 %, TX2
- * 0.085 % (mean 0.019 % and 0.037 %, mostly from the fit's 25 cm-1 line cut-off against the generator's 60 cm-1);
- * curve of growth TX1 0.384 %, TX2 0.395 %; line-list results within 2u 85.4 % (TX1 79.2 %, TX2 91.7 %).
+ * and 3000 ppm·m of TX2), errors relative to the highest amount: RMS error of the line-list fit TX1 0.035 %, TX2
+ * 0.072 % (mean 0.008 % and 0.022 %, mostly from the fit's 25 cm-1 line cut-off against the generator's 60 cm-1);
+ * curve of growth TX1 0.384 %, TX2 0.395 %; line-list results within 2u 95.8 % (TX1 95.8 %, TX2 95.8 %).
  */
 class LineListAlgorithmTest {
 
@@ -143,7 +143,7 @@ class LineListAlgorithmTest {
      * of a share of 1,040 is then 0.65 %, so the band holds an honest u with more than two of them to spare on each
      * side. The generator puts its noise on the transmittance, which in absorbance is up to several times larger at
      * a saturated line's core than on the baseline: a fit that weighed every point equally gave TX1 83.5 %, TX2
-     * 94.9 % here; with the noise weights of the fit TX1 94.5 %, TX2 95.7 % at the time of writing.
+     * 94.9 % here; with the noise weights of the fit TX1 95.9 %, TX2 96.3 % at the time of writing.
      */
     @Test
     void twoStandardUncertaintiesCoverTheTruthOverNoiseDraws() {

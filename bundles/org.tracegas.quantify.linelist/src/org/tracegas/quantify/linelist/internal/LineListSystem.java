@@ -130,10 +130,13 @@ public final class LineListSystem implements SystemSolver {
             w[k] = (weights == null ? 1 : weights[active[k]]) * noiseWeight(target[k]);
         }
         int[] rows = java.util.Arrays.copyOf(active, used);
+        // the fine-grid spectra of one evaluation, reused by every evaluation of this fit
+        double[] observed = new double[mixture.grid().size()];
+        double[][] derivatives = new double[nc][mixture.grid().size()];
         MultivariateJacobianFunction model = point -> {
             double[] values = new double[rows.length];
             double[][] jacobian = new double[rows.length][p];
-            evaluate(point.toArray(), rows, values, jacobian);
+            evaluate(point.toArray(), rows, values, jacobian, observed, derivatives);
             return new Pair<RealVector, RealMatrix>(new ArrayRealVector(values, false),
                     new Array2DRowRealMatrix(jacobian, false));
         };
@@ -161,7 +164,7 @@ public final class LineListSystem implements SystemSolver {
         double[] best = optimum.getPoint().toArray();
         double[] values = new double[used];
         double[][] jacobian = new double[used][p];
-        evaluate(best, rows, values, jacobian);
+        evaluate(best, rows, values, jacobian, observed, derivatives);
         double[] residual = new double[n];
         java.util.Arrays.fill(residual, Double.NaN);
         double rss = 0;
@@ -200,14 +203,19 @@ public final class LineListSystem implements SystemSolver {
         return t * t;
     }
 
-    /** Model absorbance and its derivatives at the given fit points. */
-    private void evaluate(double[] theta, int[] rows, double[] values, double[][] jacobian) {
+    /**
+     * Model absorbance and its derivatives at the given fit points.
+     *
+     * @param observed    work array for the observed transmittance on the fine grid
+     * @param derivatives work arrays for its derivatives by the amounts
+     */
+    private void evaluate(double[] theta, int[] rows, double[] values, double[][] jacobian, double[] observed,
+            double[][] derivatives) {
         int nc = compounds.size();
         int nb = baseline.length;
         double[] amounts = java.util.Arrays.copyOf(theta, nc);
         double s = scale ? theta[theta.length - 1] : 0;
-        double[][] derivatives = new double[nc][];
-        double[] observed = mixture.observe(amounts, derivatives);
+        mixture.observe(amounts, observed, derivatives);
         double[] read = new double[2];
         double[] dRead = new double[2];
         for (int k = 0; k < rows.length; k++) {
