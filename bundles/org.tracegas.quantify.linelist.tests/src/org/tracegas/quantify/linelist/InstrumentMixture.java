@@ -138,12 +138,18 @@ final class InstrumentMixture {
      * {@link #absorbance}.
      */
     double[] transmittance(double[] amounts, double offset, double slope, double scale) {
+        return transmittance(amounts, offset, slope, scale, TEMPERATURE, PRESSURE);
+    }
+
+    /** The same in a cell at another temperature (K) and pressure (kPa). */
+    double[] transmittance(double[] amounts, double offset, double slope, double scale, double temperature,
+            double pressure) {
         SpectralAxis fine = SpectralAxis.uniform(AxisUnit.WAVENUMBER, FINE_LOW, FINE_STEP, FINE_SIZE);
         double[] t = new double[FINE_SIZE];
         java.util.Arrays.fill(t, 1.0);
         for (int g = 0; g < 2; g++) {
             if (amounts[g] > 0) {
-                double[] own = exact.get(g).transmittance(fine, new AbsorptionPath(TEMPERATURE, PRESSURE,
+                double[] own = exact.get(g).transmittance(fine, new AbsorptionPath(temperature, pressure,
                         amounts[g] / PATH, PATH)).toArray();
                 for (int i = 0; i < FINE_SIZE; i++) {
                     t[i] *= own[i];
