@@ -147,35 +147,73 @@ class LineListAlgorithmTest {
      */
     @Test
     void twoStandardUncertaintiesCoverTheTruthOverNoiseDraws() {
-        int mixtures = 8;
-        int draws = 130;
+        double[] shares = coverageOverDraws(random -> t -> InstrumentMixture.withNoise(t, NOISE, random), 1);
+        String figures = String.format(java.util.Locale.ROOT, "within 2u over %d draws: TX1 %.1f %%, TX2 %.1f %%",
+                DRAWS, 100 * shares[0], 100 * shares[1]);
+        System.out.println("line-list fit " + figures);
+        for (int g = 0; g < 2; g++) {
+            assertTrue(shares[g] >= 0.93 && shares[g] <= 0.97, InstrumentMixture.GASES.get(g) + " " + figures);
+        }
+    }
+
+    /**
+     * Noise as a transform leaves it, correlated between neighbouring points by the apodization (equivalent width F
+     * about 2.3 points): the sample's noise-correlation factor sqrt(F), with which the quantify bundle enlarges every
+     * fit's uncertainty, brings the share within 2u from too few to at least 93 %. It overshoots: the factor holds
+     * for a model that varies slowly over F points, and the lines here are about as narrow as the correlation, so
+     * the enlarged u is a conservative one. At the time of writing: without the factor TX1 85.8 %, TX2 90.1 %; with
+     * it TX1 97.5 %, TX2 98.2 %.
+     */
+    @Test
+    void noiseCorrelationFactorCoversCorrelatedNoise() {
+        double factor = Math.sqrt(InstrumentMixture.transformNoiseWidth());
+        double[] shares = coverageOverDraws(random -> t -> InstrumentMixture.withTransformNoise(t, NOISE, random),
+                factor);
+        double[] without = {shares[2], shares[3]};
+        String figures = String.format(java.util.Locale.ROOT, "correlated noise, factor %.3f, within 2u over %d"
+                + " draws: TX1 %.1f %%, TX2 %.1f %%; without the factor TX1 %.1f %%, TX2 %.1f %%", factor, DRAWS,
+                100 * shares[0], 100 * shares[1], 100 * without[0], 100 * without[1]);
+        System.out.println("line-list fit " + figures);
+        assertTrue(factor > 1.4 && factor < 1.6, figures);
+        for (int g = 0; g < 2; g++) {
+            assertTrue(shares[g] >= 0.93 && without[g] < 0.93, InstrumentMixture.GASES.get(g) + " " + figures);
+        }
+    }
+
+    /** Noise draws: 8 mixtures, 130 draws each. */
+    private static final int DRAWS = 8 * 130;
+
+    /**
+     * The share of fits per gas whose truth lies within 2u, over {@link #DRAWS} noise draws of the generator's
+     * mixtures, the samples given the noise-correlation factor; then the same shares within 2u / factor, the u the
+     * fit would have stated without the factor.
+     */
+    private static double[] coverageOverDraws(
+            java.util.function.Function<Random, java.util.function.Function<double[], Spectrum>> noise,
+            double noiseCorrelation) {
         Random random = new Random(1996_0059);
+        java.util.function.Function<double[], Spectrum> noisy = noise.apply(random);
         Quantifier byLines = quantifier(method(new LineListAlgorithm(generator.setup())).build());
-        int[] covered = new int[2];
-        for (int m = 0; m < mixtures; m++) {
+        int[] covered = new int[4];
+        for (int m = 0; m < DRAWS / 130; m++) {
             double[] amounts = new double[2];
             for (int g = 0; g < 2; g++) {
                 amounts[g] = InstrumentMixture.HIGHEST[g] * (0.1 + 0.9 * random.nextDouble());
             }
             double[] transmittance = generator.transmittance(amounts, 0.02 * random.nextGaussian(),
                     1e-4 * random.nextGaussian(), 0);
-            for (int d = 0; d < draws; d++) {
-                List<CompoundResult> r = byLines.fit(Sample.of(InstrumentMixture.withNoise(transmittance, NOISE,
-                        random)));
+            for (int d = 0; d < 130; d++) {
+                List<CompoundResult> r = byLines.fit(new Sample(noisy.apply(transmittance), null, noiseCorrelation));
                 for (int g = 0; g < 2; g++) {
                     double truth = amounts[g] / InstrumentMixture.PATH;
-                    covered[g] += Math.abs(r.get(g).concentration() - truth) <= 2 * r.get(g).standardUncertainty()
-                            ? 1 : 0;
+                    double error = Math.abs(r.get(g).concentration() - truth);
+                    double u = r.get(g).standardUncertainty();
+                    covered[g] += error <= 2 * u ? 1 : 0;
+                    covered[2 + g] += error <= 2 * u / noiseCorrelation ? 1 : 0;
                 }
             }
         }
-        String shares = String.format(java.util.Locale.ROOT, "within 2u over %d draws: TX1 %.1f %%, TX2 %.1f %%",
-                mixtures * draws, 100.0 * covered[0] / (mixtures * draws), 100.0 * covered[1] / (mixtures * draws));
-        System.out.println("line-list fit " + shares);
-        for (int g = 0; g < 2; g++) {
-            double share = covered[g] / (double) (mixtures * draws);
-            assertTrue(share >= 0.93 && share <= 0.97, InstrumentMixture.GASES.get(g) + " " + shares);
-        }
+        return java.util.Arrays.stream(covered).mapToDouble(c -> c / (double) DRAWS).toArray();
     }
 
     /**

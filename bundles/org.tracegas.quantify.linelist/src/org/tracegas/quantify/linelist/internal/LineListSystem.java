@@ -33,7 +33,8 @@ import org.tracegas.quantify.internal.SystemSolver;
  * residuals. Fitted with equal weights, the accuracy test's saturating gas had 83.5 % of its results within 2u
  * instead of about 95 %, because one pooled s^2 understated the noise where its amount is decided. The correlation
  * of neighbouring points by apodization and zero filling is left to the sample's noise-correlation factor, which
- * enlarges the stated uncertainties as for every fit algorithm.
+ * enlarges the stated uncertainties as for every fit algorithm; for lines about as narrow as the correlation it
+ * errs on the safe side (accuracy test, Norton-Beer medium apodization: 97.5 % and 98.2 % within 2u).
  */
 public final class LineListSystem implements SystemSolver {
 
