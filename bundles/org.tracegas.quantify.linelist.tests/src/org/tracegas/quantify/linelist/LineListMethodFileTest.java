@@ -59,17 +59,9 @@ class LineListMethodFileTest {
         Path method = writeMethod();
         MethodDefinition definition = MethodDefinition.read(method);
         assertInstanceOf(LineListAlgorithm.class, definition.algorithm(), "contributed through the extension point");
-        String content;
-        QuantificationMethod built;
-        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("db"))) {
-            Session admin = store.users().createFirstAdministrator("admin", "Administrator",
-                    "admin-pw-12".toCharArray());
-            store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
-            Session analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
-            MethodDefinition.Recorded recorded = definition.record(store, analyst);
-            built = recorded.method().method();
-            content = store.versions().content(recorded.methodVersion().id());
-        }
+        Version version = record(definition);
+        QuantificationMethod built = version.method();
+        String content = version.content();
         assertTrue(content.contains("\n[line-list]\n") && content.contains("setting gas \"TX1 molar-mass 28.0"),
                 content.substring(0, Math.min(content.length(), 3000)));
         StoredMethod reread = StoredMethod.parse(content, "method version 1");
@@ -108,15 +100,7 @@ class LineListMethodFileTest {
         String statedHash = MethodDefinition.read(stated).build(new ReferenceLibrary("no references", List.of()))
                 .contentHash();
         Path method = writeMethod("cell-conditions = measured\n");
-        String content;
-        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("db"))) {
-            Session admin = store.users().createFirstAdministrator("admin", "Administrator",
-                    "admin-pw-12".toCharArray());
-            store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
-            Session analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
-            MethodDefinition.Recorded recorded = MethodDefinition.read(method).record(store, analyst);
-            content = store.versions().content(recorded.methodVersion().id());
-        }
+        String content = record(MethodDefinition.read(method)).content();
         assertTrue(content.contains("setting cell-conditions \"measured\""),
                 content.substring(0, Math.min(content.length(), 3000)));
         StoredMethod reread = StoredMethod.parse(content, "method version 1");
@@ -167,6 +151,22 @@ class LineListMethodFileTest {
         Files.writeString(method, Files.readString(method).replace("resolution = 0.5\n", ""));
         FileFormatException e = assertThrows(FileFormatException.class, () -> MethodDefinition.read(method));
         assertTrue(e.getMessage().contains("field 'resolution'"), e.getMessage());
+    }
+
+    /** A recorded method version: the method as recorded and the version's stored text. */
+    private record Version(QuantificationMethod method, String content) {
+    }
+
+    /** Records the method as a version in a new H2 workspace, by an analyst. */
+    private Version record(MethodDefinition definition) throws IOException {
+        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("db"))) {
+            Session admin = store.users().createFirstAdministrator("admin", "Administrator",
+                    "admin-pw-12".toCharArray());
+            store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
+            Session analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
+            MethodDefinition.Recorded recorded = definition.record(store, analyst);
+            return new Version(recorded.method().method(), store.versions().content(recorded.methodVersion().id()));
+        }
     }
 
     /** The method file of the Vellmar kiln analyser over the invented TX1 and TX2 line lists; line 16 is TX1's. */
