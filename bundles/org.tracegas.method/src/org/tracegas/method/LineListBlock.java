@@ -22,6 +22,8 @@ import org.tracegas.store.RawFile;
  * temperature = 308.15        gas temperature in the cell for the model, K
  * pressure = 99.8             total pressure in the cell for the model, kPa
  * field-of-view = 0.008       half angle of the beam in the interferometer, rad
+ * cell-conditions = measured  optional: compute the spectra at each measurement's own measured cell temperature and
+ *                             pressure instead of the two above (stated, the default)
  * gas = TX1 molar-mass 28.0 partition linear sha256 &lt;64 hex digits&gt; file lists/tx1.par
  *                             one line per fitted compound: its HITRAN-format line list (relative to the method
  *                             file; the rest of the line, so the name may hold spaces) with the SHA-256 of its
@@ -36,7 +38,9 @@ final class LineListBlock {
     /** The algorithm whose method files carry this block, and the block's name. */
     static final String NAME = "line-list";
 
-    private static final Set<String> KEYS = Set.of("temperature", "pressure", "field-of-view", "gas");
+    private static final Set<String> KEYS = Set.of("temperature", "pressure", "field-of-view", "cell-conditions",
+            "gas");
+    private static final Set<String> CELL_CONDITIONS = Set.of("stated", "measured");
     private static final Set<String> PARTITIONS = Set.of("linear", "non-linear");
 
     private LineListBlock() {
@@ -60,6 +64,14 @@ final class LineListBlock {
                         : "must be positive and finite, was " + v);
             }
             settings.add(new AlgorithmSetting(key, Double.toString(v)));
+        }
+        if (b.has("cell-conditions")) {
+            // only when given, so that the versions of methods written without it keep their text and hash
+            String conditions = b.text("cell-conditions");
+            if (!CELL_CONDITIONS.contains(conditions)) {
+                throw b.error("cell-conditions", "'" + conditions + "' is none of " + CELL_CONDITIONS);
+            }
+            settings.add(new AlgorithmSetting("cell-conditions", conditions));
         }
         Set<String> compounds = new HashSet<>();
         for (KeyValueFile.Value gas : b.all("gas")) {

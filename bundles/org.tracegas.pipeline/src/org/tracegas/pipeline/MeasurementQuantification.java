@@ -303,7 +303,8 @@ public final class MeasurementQuantification {
         entries.addAll(method.recipe().entries());
         BackgroundAge age = c.ratio() == null ? null
                 : new BackgroundAge(c.ratio().backgroundAge(), absorbance.ageLimit());
-        Sample sample = new Sample(a, age, ResultCorrection.noiseCorrelation(c.noiseFactor()));
+        Sample sample = new Sample(a, age, ResultCorrection.noiseCorrelation(c.noiseFactor()))
+                .inCell(temperature(m).value(), pressure(m).value());
         return new Prepared(a, sample, Recipe.of(entries), c.noiseFactor(), c.noiseOrigin());
     }
 

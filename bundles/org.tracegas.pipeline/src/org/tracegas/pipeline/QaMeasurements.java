@@ -56,7 +56,8 @@ public final class QaMeasurements {
             // the uncertainty widened by the transform's noise factor as a sample's is, so that zero readings
             // judge, and give detection limits for, the uncertainty the samples carry
             fitted.add(new Fitted(m.time(), m.role(), m.cellTemperatureK(), m.cellPressureKPa(), a,
-                    quantifier.quantify(new Sample(a, null, ResultCorrection.noiseCorrelation(m.noiseFactor())))));
+                    quantifier.quantify(new Sample(a, null, ResultCorrection.noiseCorrelation(m.noiseFactor()))
+                            .inCell(m.cellTemperatureK(), m.cellPressureKPa()))));
         }
         return new QaMeasurements(fitted);
     }

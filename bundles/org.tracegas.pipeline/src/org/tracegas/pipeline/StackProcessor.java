@@ -187,7 +187,8 @@ public final class StackProcessor {
             inFlight.add(measured);
             return new Sample(measured.ratio().spectrum(),
                     new BackgroundAge(measured.ratio().backgroundAge(), chain.backgroundAgeLimit()),
-                    ResultCorrection.noiseCorrelation(measured.noiseFactor()));
+                    ResultCorrection.noiseCorrelation(measured.noiseFactor()))
+                    .inCell(measured.cellTemperatureK(), measured.cellPressureKPa());
         }
     }
 }
