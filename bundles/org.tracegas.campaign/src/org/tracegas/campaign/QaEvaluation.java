@@ -9,11 +9,11 @@ import org.tracegas.importer.ImportException;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryVersionText;
+import org.tracegas.model.Measurement;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.qa.checks.CheckOutcome;
-import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -90,14 +90,14 @@ public final class QaEvaluation {
         if (!stored.isEmpty()) {
             return new Outcome(stored, true);
         }
-        List<MeasurementInfo> samples = store.projects().measurements(actor, projectId);
+        List<Measurement> samples = store.projects().measurements(actor, projectId);
         if (samples.isEmpty()) {
             throw new IllegalStateException("the project holds no processed samples yet; quantify them first");
         }
         ReferenceLibrary library = methodLibrary(store, plan, method);
         QaMeasurements fitted = qa.fit();
-        Instant first = samples.get(0).time();
-        Instant last = samples.get(samples.size() - 1).time();
+        Instant first = samples.get(0).getTime();
+        Instant last = samples.get(samples.size() - 1).getTime();
         List<CheckOutcome> readings = CampaignQaChecks.evaluate(plan.checks(), new PlanInputs(plan, fitted,
                 backgrounds, first, last, method.method().pathLengthMetres(), library));
         List<CheckOutcome> checks = new ArrayList<>(readings);
