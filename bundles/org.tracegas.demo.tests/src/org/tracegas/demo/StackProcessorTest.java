@@ -7,8 +7,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
 import java.time.Instant;
-import java.util.Arrays;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
@@ -28,6 +28,8 @@ import org.tracegas.importer.container.AcquisitionHeader;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
 import org.tracegas.library.ReferenceLibrary;
+import org.tracegas.model.Measurement;
+import org.tracegas.model.Project;
 import org.tracegas.model.Role;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
@@ -40,8 +42,6 @@ import org.tracegas.quantify.ProgressListener;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.Quantifier;
 import org.tracegas.spectrum.Interferogram;
-import org.tracegas.store.MeasurementInfo;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -69,7 +69,7 @@ class StackProcessorTest {
     private ReferenceLibrary library;
     private WorkspaceStore store;
     private Session analyst;
-    private ProjectInfo project;
+    private Project project;
     private VersionInfo met;
     private VersionInfo lib;
 
@@ -85,7 +85,8 @@ class StackProcessorTest {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", "pw-123456".toCharArray());
         store.users().createUser(admin, "ana", "Analyst", Set.of(Role.ANALYST), "pw-234567".toCharArray());
         analyst = store.users().logIn("ana", "pw-234567".toCharArray());
-        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "P-1",
+        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
+                "P-1",
                 "Project");
         lib = store.versions().create(analyst, VersionKind.LIBRARY, library.name(),
                 "sha=" + library.contentHash() + "\n", "test");
@@ -126,7 +127,7 @@ class StackProcessorTest {
                 new BackgroundTimeline(List.of(background)));
         Quantifier quantifier = new Quantifier(PreparedMethod.prepare(method, background.singleBeam().axis()),
                 library.contentHash(), "test", false);
-        return new StackProcessor(store, analyst, project.id(), chain, new BatchQuantifier(quantifier, threads),
+        return new StackProcessor(store, analyst, project.getId(), chain, new BatchQuantifier(quantifier, threads),
                 new AnalysisVersions(met.id(), lib.id()), blockSize);
     }
 
@@ -138,8 +139,8 @@ class StackProcessorTest {
 
         assertEquals(TRUTH.size(), outcome.delivered());
         assertFalse(outcome.cancelled());
-        MinuteSeries series = MinuteSeries.of(store.projects().measurements(analyst, project.id()),
-                store.results().results(analyst, project.id()), met.id());
+        MinuteSeries series = MinuteSeries.of(store.projects().measurements(analyst, project.getId()),
+                store.results().results(analyst, project.getId()), met.id());
         assertEquals(lib.id(), series.libraryVersionId());
         for (int i = 0; i < TRUTH.size(); i++) {
             MinuteSeries.Point co = series.compound("CO").get(i);
@@ -165,8 +166,8 @@ class StackProcessorTest {
         assertEquals(5, outcome.delivered());
         assertEquals(List.of("2/5", "4/5", "5/5"), told.stream().map(t -> t[0] + "/" + t[1]).toList(),
                 "told once per stored block, the last one short");
-        assertEquals(5, store.projects().measurements(analyst, project.id()).size());
-        assertEquals(5 * method.analytes().size(), store.results().results(analyst, project.id()).size());
+        assertEquals(5, store.projects().measurements(analyst, project.getId()).size());
+        assertEquals(5 * method.analytes().size(), store.results().results(analyst, project.getId()).size());
         assertTrue(store.verifyAuditTrail().intact());
     }
 
@@ -182,7 +183,7 @@ class StackProcessorTest {
         // somewhere after it, or comes after the last spectrum was delivered; either way what was delivered is stored
         assertTrue(outcome.delivered() >= 2, outcome.delivered() + " delivered");
         assertEquals(outcome.cancelled(), outcome.delivered() < 5, outcome.delivered() + " delivered");
-        assertEquals(outcome.delivered(), store.projects().measurements(analyst, project.id()).size());
+        assertEquals(outcome.delivered(), store.projects().measurements(analyst, project.getId()).size());
     }
 
     @Test
@@ -199,12 +200,13 @@ class StackProcessorTest {
                         ProgressListener.NONE, new CancellationFlag()));
 
         assertTrue(e.getMessage().contains("axis"), e.getMessage());
-        List<MeasurementInfo> stored = store.projects().measurements(analyst, project.id());
+        List<Measurement> stored = store.projects().measurements(analyst, project.getId());
         // results are delivered in order, so what was stored is the first spectra, each with all its results
         assertTrue(!stored.isEmpty() && stored.size() < 5, stored.size() + " spectra stored");
         for (int i = 0; i < stored.size(); i++) {
-            assertEquals(START.plusSeconds(60L * i), stored.get(i).time());
+            assertEquals(START.plusSeconds(60L * i), stored.get(i).getTime());
         }
-        assertEquals(stored.size() * method.analytes().size(), store.results().results(analyst, project.id()).size());
+        assertEquals(stored.size() * method.analytes().size(), store.results().results(analyst,
+                project.getId()).size());
     }
 }

@@ -27,6 +27,7 @@ import org.tracegas.importer.ImportException;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.LibraryManifestWriter;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Project;
 import org.tracegas.model.Role;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.qa.checks.CheckOutcome;
@@ -34,7 +35,6 @@ import org.tracegas.quantify.BatchOutcome;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.quantify.ProgressListener;
 import org.tracegas.report.ReportContent;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
@@ -116,17 +116,17 @@ public final class DemoCampaign {
 
         try (WorkspaceStore store = Workspaces.openH2(workspace.resolve("db"))) {
             Session analyst = DemoStaff.ensure(store);
-            ProjectInfo project = store.projects().findByCode(analyst, DemoScenario.PROJECT_CODE)
+            Project project = store.projects().findByCode(analyst, DemoScenario.PROJECT_CODE)
                     .orElseGet(() -> DemoStaff.createProject(store, analyst));
             MethodDefinition.Recorded recorded = definition.record(store, analyst);
             VersionInfo methodVersion = recorded.methodVersion();
-            MinuteSeries series = MinuteSeries.of(store.projects().measurements(analyst, project.id()),
-                    store.results().results(analyst, project.id()), methodVersion.id());
+            MinuteSeries series = MinuteSeries.of(store.projects().measurements(analyst, project.getId()),
+                    store.results().results(analyst, project.getId()), methodVersion.id());
             boolean reuse = series.size() >= DemoScenario.SAMPLES;
             long processed = 0;
             if (!reuse) {
                 log.println("Processing " + DemoScenario.SAMPLES + " interferograms into the workspace ...");
-                BatchOutcome outcome = new ProjectQuantification(store, analyst, project.id(), SOFTWARE)
+                BatchOutcome outcome = new ProjectQuantification(store, analyst, project.getId(), SOFTWARE)
                         .run(methodVersion, recorded.method(), DemoCampaignFiles.stackFiles(raw),
                                 DemoScenario.SAMPLES, qa.backgrounds(), progress, cancel);
                 processed = outcome.delivered();
@@ -137,13 +137,13 @@ public final class DemoCampaign {
                 log.println("The workspace already holds this method version's results: making the report again "
                         + "from the stored data.");
             }
-            List<CheckOutcome> checks = new QaEvaluation(store, analyst, project.id(), SOFTWARE)
+            List<CheckOutcome> checks = new QaEvaluation(store, analyst, project.getId(), SOFTWARE)
                     .run(methodVersion.id(), recorded.method(), qaPlan, qa).checks();
-            CampaignReport report = new CampaignReport(store, analyst, project.id(), SOFTWARE);
+            CampaignReport report = new CampaignReport(store, analyst, project.getId(), SOFTWARE);
             ReportContent content = report.content(methodVersion, recorded.method(), reportPlan);
             String hash = content.contentHash();
             if (content.signatures().stream().noneMatch(s -> s.signedContentHash().equals(hash))) {
-                reviewerSigns(store, project.id(), analyst, content);
+                reviewerSigns(store, project.getId(), analyst, content);
                 content = report.content(methodVersion, recorded.method(), reportPlan);
             }
             Files.createDirectories(reportFolder);
@@ -197,12 +197,12 @@ public final class DemoCampaign {
         }
 
         /** The demo project, readable by the reviewer too, who reviews and approves its results. */
-        static ProjectInfo createProject(WorkspaceStore store, Session analyst) {
-            ProjectInfo project = store.projects().createProject(analyst,
-                    store.projects().createClient(analyst, DemoScenario.CLIENT), DemoScenario.PROJECT_CODE,
+        static Project createProject(WorkspaceStore store, Session analyst) {
+            Project project = store.projects().createProject(analyst,
+                    store.projects().createClient(analyst, DemoScenario.CLIENT).getId(), DemoScenario.PROJECT_CODE,
                     DemoScenario.PROJECT_NAME);
             Session reviewer = store.users().logIn(REVIEWER, DEMO_PASSWORD);
-            store.projects().grant(analyst, project.id(), reviewer.userId(), AccessLevel.READ);
+            store.projects().grant(analyst, project.getId(), reviewer.userId(), AccessLevel.READ);
             return project;
         }
     }

@@ -31,6 +31,9 @@ public interface Client extends StoredObject {
 	 * Returns the value of the '<em><b>Name</b></em>' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The client's name, unique in the workspace.
+	 * <!-- end-model-doc -->
 	 * @return the value of the '<em>Name</em>' attribute.
 	 * @see #setName(String)
 	 * @see org.tracegas.model.WorkspacePackage#getClient_Name()
@@ -74,11 +77,16 @@ public interface Client extends StoredObject {
 	/**
 	 * Returns the value of the '<em><b>Projects</b></em>' containment reference list.
 	 * The list contents are of type {@link org.tracegas.model.Project}.
+	 * It is bidirectional and its opposite is '{@link org.tracegas.model.Project#getClient <em>Client</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The client's projects; as the store reads them, only those the signed-in user may read.
+	 * <!-- end-model-doc -->
 	 * @return the value of the '<em>Projects</em>' containment reference list.
 	 * @see org.tracegas.model.WorkspacePackage#getClient_Projects()
-	 * @model containment="true"
+	 * @see org.tracegas.model.Project#getClient
+	 * @model opposite="client" containment="true"
 	 * @generated
 	 */
 	EList<Project> getProjects();

@@ -20,6 +20,7 @@ import org.eclipse.emf.common.util.EList;
  * </p>
  * <ul>
  *   <li>{@link org.tracegas.model.Project#getCode <em>Code</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getClient <em>Client</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getEnd <em>End</em>}</li>
@@ -57,9 +58,39 @@ public interface Project extends StoredObject {
 	void setCode(String value);
 
 	/**
+	 * Returns the value of the '<em><b>Client</b></em>' container reference.
+	 * It is bidirectional and its opposite is '{@link org.tracegas.model.Client#getProjects <em>Projects</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The client the campaign is made for: the project's container.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Client</em>' container reference.
+	 * @see #setClient(Client)
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Client()
+	 * @see org.tracegas.model.Client#getProjects
+	 * @model opposite="projects"
+	 * @generated
+	 */
+	Client getClient();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.Project#getClient <em>Client</em>}' container reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Client</em>' container reference.
+	 * @see #getClient()
+	 * @generated
+	 */
+	void setClient(Client value);
+
+	/**
 	 * Returns the value of the '<em><b>Name</b></em>' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * What the campaign is, in the lab's words.
+	 * <!-- end-model-doc -->
 	 * @return the value of the '<em>Name</em>' attribute.
 	 * @see #setName(String)
 	 * @see org.tracegas.model.WorkspacePackage#getProject_Name()
@@ -125,11 +156,16 @@ public interface Project extends StoredObject {
 	/**
 	 * Returns the value of the '<em><b>Measurements</b></em>' containment reference list.
 	 * The list contents are of type {@link org.tracegas.model.Measurement}.
+	 * It is bidirectional and its opposite is '{@link org.tracegas.model.Measurement#getProject <em>Project</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The project's measurements, in time order as the store reads them.
+	 * <!-- end-model-doc -->
 	 * @return the value of the '<em>Measurements</em>' containment reference list.
 	 * @see org.tracegas.model.WorkspacePackage#getProject_Measurements()
-	 * @model containment="true"
+	 * @see org.tracegas.model.Measurement#getProject
+	 * @model opposite="project" containment="true"
 	 * @generated
 	 */
 	EList<Measurement> getMeasurements();

@@ -282,13 +282,22 @@ public interface WorkspacePackage extends EPackage {
 	int PROJECT__CODE = STORED_OBJECT_FEATURE_COUNT + 0;
 
 	/**
+	 * The feature id for the '<em><b>Client</b></em>' container reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__CLIENT = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
 	 * The feature id for the '<em><b>Name</b></em>' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT__NAME = STORED_OBJECT_FEATURE_COUNT + 1;
+	int PROJECT__NAME = STORED_OBJECT_FEATURE_COUNT + 2;
 
 	/**
 	 * The feature id for the '<em><b>Start</b></em>' attribute.
@@ -297,7 +306,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT__START = STORED_OBJECT_FEATURE_COUNT + 2;
+	int PROJECT__START = STORED_OBJECT_FEATURE_COUNT + 3;
 
 	/**
 	 * The feature id for the '<em><b>End</b></em>' attribute.
@@ -306,7 +315,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT__END = STORED_OBJECT_FEATURE_COUNT + 3;
+	int PROJECT__END = STORED_OBJECT_FEATURE_COUNT + 4;
 
 	/**
 	 * The feature id for the '<em><b>Measurements</b></em>' containment reference list.
@@ -315,7 +324,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT__MEASUREMENTS = STORED_OBJECT_FEATURE_COUNT + 4;
+	int PROJECT__MEASUREMENTS = STORED_OBJECT_FEATURE_COUNT + 5;
 
 	/**
 	 * The number of structural features of the '<em>Project</em>' class.
@@ -324,7 +333,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 5;
+	int PROJECT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 6;
 
 	/**
 	 * The number of operations of the '<em>Project</em>' class.
@@ -364,13 +373,22 @@ public interface WorkspacePackage extends EPackage {
 	int MEASUREMENT__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
 
 	/**
+	 * The feature id for the '<em><b>Project</b></em>' container reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__PROJECT = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
 	 * The feature id for the '<em><b>Kind</b></em>' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int MEASUREMENT__KIND = STORED_OBJECT_FEATURE_COUNT + 0;
+	int MEASUREMENT__KIND = STORED_OBJECT_FEATURE_COUNT + 1;
 
 	/**
 	 * The feature id for the '<em><b>Time</b></em>' attribute.
@@ -379,7 +397,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int MEASUREMENT__TIME = STORED_OBJECT_FEATURE_COUNT + 1;
+	int MEASUREMENT__TIME = STORED_OBJECT_FEATURE_COUNT + 2;
 
 	/**
 	 * The feature id for the '<em><b>Cell Temperature</b></em>' attribute.
@@ -388,7 +406,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int MEASUREMENT__CELL_TEMPERATURE = STORED_OBJECT_FEATURE_COUNT + 2;
+	int MEASUREMENT__CELL_TEMPERATURE = STORED_OBJECT_FEATURE_COUNT + 3;
 
 	/**
 	 * The feature id for the '<em><b>Cell Pressure</b></em>' attribute.
@@ -397,7 +415,88 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int MEASUREMENT__CELL_PRESSURE = STORED_OBJECT_FEATURE_COUNT + 3;
+	int MEASUREMENT__CELL_PRESSURE = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Operator Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__OPERATOR_ID = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The feature id for the '<em><b>Title</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__TITLE = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The feature id for the '<em><b>Labels</b></em>' map.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__LABELS = STORED_OBJECT_FEATURE_COUNT + 7;
+
+	/**
+	 * The feature id for the '<em><b>Content</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__CONTENT = STORED_OBJECT_FEATURE_COUNT + 8;
+
+	/**
+	 * The feature id for the '<em><b>Spectrum Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__SPECTRUM_ID = STORED_OBJECT_FEATURE_COUNT + 9;
+
+	/**
+	 * The feature id for the '<em><b>Spectrum</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__SPECTRUM = STORED_OBJECT_FEATURE_COUNT + 10;
+
+	/**
+	 * The feature id for the '<em><b>Source File</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__SOURCE_FILE = STORED_OBJECT_FEATURE_COUNT + 11;
+
+	/**
+	 * The feature id for the '<em><b>Source Sha256</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__SOURCE_SHA256 = STORED_OBJECT_FEATURE_COUNT + 12;
+
+	/**
+	 * The feature id for the '<em><b>Source Record</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__SOURCE_RECORD = STORED_OBJECT_FEATURE_COUNT + 13;
 
 	/**
 	 * The number of structural features of the '<em>Measurement</em>' class.
@@ -406,7 +505,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int MEASUREMENT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 4;
+	int MEASUREMENT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 14;
 
 	/**
 	 * The number of operations of the '<em>Measurement</em>' class.
@@ -887,6 +986,16 @@ public interface WorkspacePackage extends EPackage {
 	 */
 	int INSTANT = 15;
 
+	/**
+	 * The meta object id for the '<em>Spectrum</em>' data type.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.spectrum.Spectrum
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
+	 * @generated
+	 */
+	int SPECTRUM = 16;
+
 
 	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.StoredObject <em>Stored Object</em>}'.
@@ -1039,6 +1148,17 @@ public interface WorkspacePackage extends EPackage {
 	EAttribute getProject_Code();
 
 	/**
+	 * Returns the meta object for the container reference '{@link org.tracegas.model.Project#getClient <em>Client</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the container reference '<em>Client</em>'.
+	 * @see org.tracegas.model.Project#getClient()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_Client();
+
+	/**
 	 * Returns the meta object for the attribute '{@link org.tracegas.model.Project#getName <em>Name</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1093,6 +1213,17 @@ public interface WorkspacePackage extends EPackage {
 	EClass getMeasurement();
 
 	/**
+	 * Returns the meta object for the container reference '{@link org.tracegas.model.Measurement#getProject <em>Project</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the container reference '<em>Project</em>'.
+	 * @see org.tracegas.model.Measurement#getProject()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EReference getMeasurement_Project();
+
+	/**
 	 * Returns the meta object for the attribute '{@link org.tracegas.model.Measurement#getKind <em>Kind</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1135,6 +1266,105 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EAttribute getMeasurement_CellPressure();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Measurement#getOperatorId <em>Operator Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Operator Id</em>'.
+	 * @see org.tracegas.model.Measurement#getOperatorId()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EAttribute getMeasurement_OperatorId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Measurement#getTitle <em>Title</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Title</em>'.
+	 * @see org.tracegas.model.Measurement#getTitle()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EAttribute getMeasurement_Title();
+
+	/**
+	 * Returns the meta object for the map '{@link org.tracegas.model.Measurement#getLabels <em>Labels</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the map '<em>Labels</em>'.
+	 * @see org.tracegas.model.Measurement#getLabels()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EReference getMeasurement_Labels();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Measurement#getContent <em>Content</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Content</em>'.
+	 * @see org.tracegas.model.Measurement#getContent()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EAttribute getMeasurement_Content();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Measurement#getSpectrumId <em>Spectrum Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Spectrum Id</em>'.
+	 * @see org.tracegas.model.Measurement#getSpectrumId()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EAttribute getMeasurement_SpectrumId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Measurement#getSpectrum <em>Spectrum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Spectrum</em>'.
+	 * @see org.tracegas.model.Measurement#getSpectrum()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EAttribute getMeasurement_Spectrum();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Measurement#getSourceFile <em>Source File</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Source File</em>'.
+	 * @see org.tracegas.model.Measurement#getSourceFile()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EAttribute getMeasurement_SourceFile();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Measurement#getSourceSha256 <em>Source Sha256</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Source Sha256</em>'.
+	 * @see org.tracegas.model.Measurement#getSourceSha256()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EAttribute getMeasurement_SourceSha256();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Measurement#getSourceRecord <em>Source Record</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Source Record</em>'.
+	 * @see org.tracegas.model.Measurement#getSourceRecord()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EAttribute getMeasurement_SourceRecord();
 
 	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.ContentVersion <em>Content Version</em>}'.
@@ -1427,6 +1657,20 @@ public interface WorkspacePackage extends EPackage {
 	EDataType getInstant();
 
 	/**
+	 * Returns the meta object for data type '{@link org.tracegas.spectrum.Spectrum <em>Spectrum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+     * <!-- begin-model-doc -->
+     * An immutable spectrum or interferogram: its axis and values. The store keeps the values as a block of their own, not in the model.
+     * <!-- end-model-doc -->
+	 * @return the meta object for data type '<em>Spectrum</em>'.
+	 * @see org.tracegas.spectrum.Spectrum
+	 * @model instanceClass="org.tracegas.spectrum.Spectrum" serializeable="false"
+	 * @generated
+	 */
+	EDataType getSpectrum();
+
+	/**
 	 * Returns the factory that creates the instances of the model.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1570,6 +1814,14 @@ public interface WorkspacePackage extends EPackage {
 		EAttribute PROJECT__CODE = eINSTANCE.getProject_Code();
 
 		/**
+		 * The meta object literal for the '<em><b>Client</b></em>' container reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__CLIENT = eINSTANCE.getProject_Client();
+
+		/**
 		 * The meta object literal for the '<em><b>Name</b></em>' attribute feature.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -1612,6 +1864,14 @@ public interface WorkspacePackage extends EPackage {
 		EClass MEASUREMENT = eINSTANCE.getMeasurement();
 
 		/**
+		 * The meta object literal for the '<em><b>Project</b></em>' container reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference MEASUREMENT__PROJECT = eINSTANCE.getMeasurement_Project();
+
+		/**
 		 * The meta object literal for the '<em><b>Kind</b></em>' attribute feature.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -1642,6 +1902,78 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute MEASUREMENT__CELL_PRESSURE = eINSTANCE.getMeasurement_CellPressure();
+
+		/**
+		 * The meta object literal for the '<em><b>Operator Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute MEASUREMENT__OPERATOR_ID = eINSTANCE.getMeasurement_OperatorId();
+
+		/**
+		 * The meta object literal for the '<em><b>Title</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute MEASUREMENT__TITLE = eINSTANCE.getMeasurement_Title();
+
+		/**
+		 * The meta object literal for the '<em><b>Labels</b></em>' map feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference MEASUREMENT__LABELS = eINSTANCE.getMeasurement_Labels();
+
+		/**
+		 * The meta object literal for the '<em><b>Content</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute MEASUREMENT__CONTENT = eINSTANCE.getMeasurement_Content();
+
+		/**
+		 * The meta object literal for the '<em><b>Spectrum Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute MEASUREMENT__SPECTRUM_ID = eINSTANCE.getMeasurement_SpectrumId();
+
+		/**
+		 * The meta object literal for the '<em><b>Spectrum</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute MEASUREMENT__SPECTRUM = eINSTANCE.getMeasurement_Spectrum();
+
+		/**
+		 * The meta object literal for the '<em><b>Source File</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute MEASUREMENT__SOURCE_FILE = eINSTANCE.getMeasurement_SourceFile();
+
+		/**
+		 * The meta object literal for the '<em><b>Source Sha256</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute MEASUREMENT__SOURCE_SHA256 = eINSTANCE.getMeasurement_SourceSha256();
+
+		/**
+		 * The meta object literal for the '<em><b>Source Record</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute MEASUREMENT__SOURCE_RECORD = eINSTANCE.getMeasurement_SourceRecord();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.ContentVersionImpl <em>Content Version</em>}' class.
@@ -1880,6 +2212,16 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EDataType INSTANT = eINSTANCE.getInstant();
+
+		/**
+		 * The meta object literal for the '<em>Spectrum</em>' data type.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.spectrum.Spectrum
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
+		 * @generated
+		 */
+		EDataType SPECTRUM = eINSTANCE.getSpectrum();
 
 	}
 

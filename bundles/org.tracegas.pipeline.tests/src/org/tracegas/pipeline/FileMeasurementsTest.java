@@ -13,9 +13,9 @@ import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.importer.jcamp.JcampReader;
+import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.SpectralContent;
-import org.tracegas.store.NewMeasurement;
 import org.tracegas.store.RawFile;
 
 /**
@@ -42,15 +42,15 @@ class FileMeasurementsTest {
         Path f = jcamp("stack-1.jdx", "##LONGDATE=2026/05/04 06:30:00\n##TEMPERATURE=40\n##$CELL PRESSURE=1009\n"
                 + "##$KIND=background\n", "TRANSMITTANCE");
         FileMeasurements.Read read = FileMeasurements.read(readers, f, FileMeasurements.Defaults.none());
-        NewMeasurement m = read.measurements().get(0);
-        assertEquals(Instant.parse("2026-05-04T06:30:00Z"), m.time(), "a time without zone is UTC");
-        assertEquals("Kiln 5 stack 1", m.title());
-        assertEquals(MeasurementKind.BACKGROUND, m.kind());
+        Measurement m = read.measurements().get(0);
+        assertEquals(Instant.parse("2026-05-04T06:30:00Z"), m.getTime(), "a time without zone is UTC");
+        assertEquals("Kiln 5 stack 1", m.getTitle());
+        assertEquals(MeasurementKind.BACKGROUND, m.getKind());
         // ##TEMPERATURE is in degrees Celsius (JCAMP-DX 4.24, from memory); 0 degC = 273.15 K (SI Brochure)
-        assertEquals(313.15, m.cellTemperature(), 1e-12);
-        assertEquals(1009.0, m.cellPressure());
-        assertEquals(SpectralContent.TRANSMITTANCE, m.content());
-        assertEquals(0.3, m.spectrum().get(2), 1e-12);
+        assertEquals(313.15, m.getCellTemperature(), 1e-12);
+        assertEquals(1009.0, m.getCellPressure());
+        assertEquals(SpectralContent.TRANSMITTANCE, m.getContent());
+        assertEquals(0.3, m.getSpectrum().get(2), 1e-12);
         assertEquals(RawFile.sha256Hex(Files.readAllBytes(f)), read.file().sha256());
         assertEquals("stack-1.jdx", read.file().fileName());
     }
@@ -58,12 +58,12 @@ class FileMeasurementsTest {
     @Test
     void dateAndTimeLabelsAndTheLabsDefaults() throws Exception {
         Path f = jcamp("stack-2.jdx", "##DATE=26/05/04\n##TIME=07:15:00\n", "ABSORBANCE");
-        NewMeasurement m = FileMeasurements.read(readers, f, new FileMeasurements.Defaults(null, null, 296.0,
+        Measurement m = FileMeasurements.read(readers, f, new FileMeasurements.Defaults(null, null, 296.0,
                 1013.25)).measurements().get(0);
-        assertEquals(Instant.parse("2026-05-04T07:15:00Z"), m.time());
-        assertEquals(MeasurementKind.SAMPLE, m.kind());
-        assertEquals(296.0, m.cellTemperature());
-        assertEquals(1013.25, m.cellPressure());
+        assertEquals(Instant.parse("2026-05-04T07:15:00Z"), m.getTime());
+        assertEquals(MeasurementKind.SAMPLE, m.getKind());
+        assertEquals(296.0, m.getCellTemperature());
+        assertEquals(1013.25, m.getCellPressure());
     }
 
     @Test

@@ -23,14 +23,16 @@ import org.tracegas.importer.ImportedInterferogram;
 import org.tracegas.importer.ImportedRecord;
 import org.tracegas.importer.ImportedSpectrum;
 import org.tracegas.importer.ReaderRegistry;
+import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Interferogram;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.NewMeasurement;
+import org.tracegas.store.MeasurementChecks;
 import org.tracegas.store.RawFile;
 
 /**
@@ -79,7 +81,7 @@ public final class FileMeasurements {
     }
 
     /** A file read whole: its bytes and its records as measurements, in file order. */
-    public record Read(RawFile file, List<NewMeasurement> measurements) {
+    public record Read(RawFile file, List<Measurement> measurements) {
 
         public Read {
             measurements = List.copyOf(measurements);
@@ -105,14 +107,14 @@ public final class FileMeasurements {
         }
         ImportedData data = readers.read(file, ImportOptions.defaults());
         String name = file.getFileName() == null ? file.toString() : file.getFileName().toString();
-        List<NewMeasurement> measurements = new ArrayList<>();
+        List<Measurement> measurements = new ArrayList<>();
         for (int i = 0; i < data.records().size(); i++) {
             measurements.add(measurement(file, name, i, data.records().get(i), defaults));
         }
         return new Read(new RawFile(name, data.format(), bytes), measurements);
     }
 
-    private static NewMeasurement measurement(Path file, String name, int index, ImportedRecord record,
+    private static Measurement measurement(Path file, String name, int index, ImportedRecord record,
             Defaults defaults) throws ImportException {
         Map<String, String> labels = new LinkedHashMap<>(record.metadata());
         Map<String, String> byKey = new LinkedHashMap<>();
@@ -148,13 +150,21 @@ public final class FileMeasurements {
         }
         String title = byKey.getOrDefault("TITLE", "").isBlank() ? name + " record " + (index + 1)
                 : byKey.get("TITLE");
+        Measurement m = WorkspaceFactory.eINSTANCE.createMeasurement();
+        m.setKind(kind(byKey, defaults, where));
+        m.setTime(time(byKey, defaults, where));
+        m.setCellTemperature(temperature(byKey, defaults, where));
+        m.setCellPressure(pressure(byKey, defaults, where));
+        m.setTitle(title);
+        m.getLabels().putAll(labels);
+        m.setContent(content);
+        m.setSpectrum(values);
         try {
-            return new NewMeasurement(kind(byKey, defaults, where), time(byKey, defaults, where),
-                    temperature(byKey, defaults, where), pressure(byKey, defaults, where), title, labels, content,
-                    values);
+            MeasurementChecks.requireImportable(m);
         } catch (IllegalArgumentException e) {
             throw where.error("record", e.getMessage());
         }
+        return m;
     }
 
     /** Upper case without '$' and anything but letters and digits: how labels are matched. */

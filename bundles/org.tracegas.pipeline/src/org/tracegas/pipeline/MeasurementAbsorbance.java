@@ -8,6 +8,7 @@ import java.util.TreeMap;
 
 import org.tracegas.importer.ImportException;
 import org.tracegas.method.TransformText;
+import org.tracegas.model.Measurement;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
@@ -16,7 +17,6 @@ import org.tracegas.preprocess.Recipe;
 import org.tracegas.spectrum.Interferogram;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.SourcedMeasurement;
 
 /**
  * From a stored measurement of any kind to absorbance: an absorbance as it is, a transmittance as
@@ -59,20 +59,20 @@ final class MeasurementAbsorbance {
     }
 
     /** A background measurement as the single beam the samples are ratioed against. */
-    static Background background(SourcedMeasurement m, Spectrum values, InterferogramTransform transform)
+    static Background background(Measurement m, Spectrum values, InterferogramTransform transform)
             throws ImportException {
-        Spectrum singleBeam = switch (m.content()) {
+        Spectrum singleBeam = switch (m.getContent()) {
             case SINGLE_BEAM -> values;
             case INTERFEROGRAM -> transform.singleBeam(interferogram(m, values));
             default -> throw error(m, "kind", "a background must be a single beam or an interferogram, this is "
-                    + m.content().getName().toLowerCase(java.util.Locale.ROOT).replace('_', ' '));
+                    + m.getContent().getName().toLowerCase(java.util.Locale.ROOT).replace('_', ' '));
         };
-        return new Background(m.measurement().id(), m.measurement().time(), singleBeam);
+        return new Background(m.getId(), m.getTime(), singleBeam);
     }
 
     /** @throws ImportException naming the measurement's file and record when it cannot become absorbance */
-    Converted convert(SourcedMeasurement m, Spectrum values) throws ImportException {
-        return switch (m.content()) {
+    Converted convert(Measurement m, Spectrum values) throws ImportException {
+        return switch (m.getContent()) {
             case ABSORBANCE -> new Converted(values, List.of(), null, 1.0, ResultCorrection.NO_TRANSFORM);
             case TRANSMITTANCE -> {
                 double[] a = new double[values.size()];
@@ -93,25 +93,25 @@ final class MeasurementAbsorbance {
                         List.of(new Recipe.Entry(TRANSFORM, new TreeMap<>(Map.of("settings", transformText)))),
                         transform.noiseVarianceFactor(igm), ResultCorrection.transformOrigin(transform.settings()));
             }
-            default -> throw error(m, "content", "cannot be quantified: " + m.content());
+            default -> throw error(m, "content", "cannot be quantified: " + m.getContent());
         };
     }
 
-    private Converted ratioed(SourcedMeasurement m, Spectrum singleBeam, List<Recipe.Entry> before,
+    private Converted ratioed(Measurement m, Spectrum singleBeam, List<Recipe.Entry> before,
             double noiseFactor, String noiseOrigin) throws ImportException {
         if (backgrounds == null) {
-            throw error(m, "background", "a " + m.content().getName().toLowerCase(java.util.Locale.ROOT)
+            throw error(m, "background", "a " + m.getContent().getName().toLowerCase(java.util.Locale.ROOT)
                     .replace('_', ' ') + " needs a background measurement before it; the project holds none");
         }
         Background background;
         try {
-            background = backgrounds.latestBefore(m.measurement().time());
+            background = backgrounds.latestBefore(m.getTime());
         } catch (IllegalArgumentException e) {
             throw error(m, "background", e.getMessage());
         }
         RatioResult r;
         try {
-            r = ratio.absorbance(singleBeam, m.measurement().time(), background);
+            r = ratio.absorbance(singleBeam, m.getTime(), background);
         } catch (IllegalArgumentException e) {
             throw error(m, "axis", e.getMessage());
         }
@@ -121,9 +121,9 @@ final class MeasurementAbsorbance {
         return new Converted(r.spectrum(), entries, r, noiseFactor, noiseOrigin);
     }
 
-    private static Interferogram interferogram(SourcedMeasurement m, Spectrum values) throws ImportException {
-        String laser = m.labels().get(FileMeasurements.LASER);
-        String sampling = m.labels().get(FileMeasurements.SAMPLING);
+    private static Interferogram interferogram(Measurement m, Spectrum values) throws ImportException {
+        String laser = m.getLabels().map().get(FileMeasurements.LASER);
+        String sampling = m.getLabels().map().get(FileMeasurements.SAMPLING);
         if (laser == null || sampling == null) {
             throw error(m, FileMeasurements.LASER, "the interferogram was imported without its laser wavenumber"
                     + " and sampling interval");
@@ -131,8 +131,9 @@ final class MeasurementAbsorbance {
         return new Interferogram(values.toArray(), Double.parseDouble(laser), Integer.parseInt(sampling));
     }
 
-    static ImportException error(SourcedMeasurement m, String field, String reason) {
-        return new ImportException(m.fileName(), m.recordIndex() + 1L, field, "(measurement " + m.title() + ") "
+    static ImportException error(Measurement m, String field, String reason) {
+        return new ImportException(m.getSourceFile(), m.getSourceRecord() + 1L, field,
+                "(measurement " + m.getTitle() + ") "
                 + reason);
     }
 }

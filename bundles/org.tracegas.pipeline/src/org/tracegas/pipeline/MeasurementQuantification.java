@@ -7,8 +7,10 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
+import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.tracegas.importer.ImportException;
 import org.tracegas.method.StoredMethod;
+import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.InterferogramTransform;
@@ -31,11 +33,8 @@ import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.MeasurementAnalysis;
-import org.tracegas.store.MeasurementInfo;
-import org.tracegas.store.NewMeasurement;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
-import org.tracegas.store.SourcedMeasurement;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
@@ -54,7 +53,7 @@ public final class MeasurementQuantification {
     public static final int BLOCK = 8;
 
     /** What a run will do: the samples not yet analysed with the version, and how many were. */
-    public record Plan(List<SourcedMeasurement> samples, int skipped, Map<String, Spectrum> pendingValues) {
+    public record Plan(List<Measurement> samples, int skipped, Map<String, Spectrum> pendingValues) {
 
         public Plan {
             samples = List.copyOf(samples);
@@ -83,7 +82,7 @@ public final class MeasurementQuantification {
     private final Map<SpectralAxis, Quantifier> quantifiers = new HashMap<>();
     private final String versionId;
     private MeasurementAbsorbance absorbance;
-    private List<SourcedMeasurement> qa = List.of();
+    private List<Measurement> qa = List.of();
     private List<Background> backgrounds = List.of();
     private Map<String, Spectrum> pendingSpectra = Map.of();
 
@@ -134,32 +133,35 @@ public final class MeasurementQuantification {
      */
     public Plan plan(List<FileMeasurements.Read> pending) throws ImportException {
         Set<String> analysed = store.analyses().analysed(actor, projectId, versionId);
-        List<SourcedMeasurement> all = new ArrayList<>(store.imports().measurements(actor, projectId));
+        List<Measurement> all = new ArrayList<>(store.imports().measurements(actor, projectId));
         Map<String, Spectrum> pendingValues = new HashMap<>();
         for (FileMeasurements.Read r : pending) {
             if (store.imports().find(actor, projectId, r.file().sha256()).isPresent()) {
                 continue;
             }
             for (int i = 0; i < r.measurements().size(); i++) {
-                NewMeasurement n = r.measurements().get(i);
-                String id = "pending:" + r.file().sha256() + ":" + i;
-                pendingValues.put(id, n.spectrum());
-                all.add(new SourcedMeasurement(new MeasurementInfo(id, projectId, n.kind(), n.time(),
-                        n.cellTemperature(), n.cellPressure(), actor.userId()), n.title(), r.file().fileName(),
-                        r.file().sha256(), i, n.content(), null, n.labels()));
+                // a copy, as the store would read it back: the file's measurement stays as read
+                Measurement n = EcoreUtil.copy(r.measurements().get(i));
+                n.setId("pending:" + r.file().sha256() + ":" + i);
+                n.setOperatorId(actor.userId());
+                n.setSourceFile(r.file().fileName());
+                n.setSourceSha256(r.file().sha256());
+                n.setSourceRecord(i);
+                pendingValues.put(n.getId(), n.getSpectrum());
+                all.add(n);
             }
         }
-        all.sort(Comparator.comparing((SourcedMeasurement m) -> m.measurement().time()));
-        List<SourcedMeasurement> samples = new ArrayList<>();
+        all.sort(Comparator.comparing((Measurement m) -> m.getTime()));
+        List<Measurement> samples = new ArrayList<>();
         List<Background> backgrounds = new ArrayList<>();
-        List<SourcedMeasurement> qa = new ArrayList<>();
+        List<Measurement> qa = new ArrayList<>();
         int skipped = 0;
-        for (SourcedMeasurement m : all) {
-            if (m.measurement().kind() == MeasurementKind.BACKGROUND) {
+        for (Measurement m : all) {
+            if (m.getKind() == MeasurementKind.BACKGROUND) {
                 backgrounds.add(MeasurementAbsorbance.background(m, values(m, pendingValues), transform));
-            } else if (!FileMeasurements.role(m.labels()).equals(MeasurementRole.SAMPLE)) {
+            } else if (!FileMeasurements.role(m.getLabels().map()).equals(MeasurementRole.SAMPLE)) {
                 qa.add(m);
-            } else if (analysed.contains(m.measurement().id())) {
+            } else if (analysed.contains(m.getId())) {
                 skipped++;
             } else {
                 samples.add(m);
@@ -182,9 +184,9 @@ public final class MeasurementQuantification {
      */
     public QaMeasurements qaMeasurements() throws ImportException {
         List<QaMeasurements.Fitted> fitted = new ArrayList<>();
-        for (SourcedMeasurement m : qa) {
+        for (Measurement m : qa) {
             Prepared p = prepare(m, values(m, pendingSpectra));
-            fitted.add(new QaMeasurements.Fitted(m.measurement().time(), FileMeasurements.role(m.labels()),
+            fitted.add(new QaMeasurements.Fitted(m.getTime(), FileMeasurements.role(m.getLabels().map()),
                     temperature(m).value(), pressure(m).value(), p.absorbance(),
                     quantifier(p.absorbance().axis()).quantify(p.sample())));
         }
@@ -217,7 +219,7 @@ public final class MeasurementQuantification {
      * @throws ImportException naming the file, record and field of the first sample that cannot be quantified
      */
     public void check(Plan plan) throws ImportException {
-        for (SourcedMeasurement m : plan.samples()) {
+        for (Measurement m : plan.samples()) {
             prepare(m, values(m, plan.pendingValues()));
         }
     }
@@ -240,13 +242,13 @@ public final class MeasurementQuantification {
         }
         List<MeasurementAnalysis> block = new ArrayList<>(BLOCK);
         int stored = 0;
-        for (SourcedMeasurement m : plan.samples()) {
+        for (Measurement m : plan.samples()) {
             if (cancel.isCancelled()) {
                 break;
             }
             Prepared p = prepare(m, values(m, Map.of()));
             SpectrumResult result = quantifier(p.absorbance().axis()).quantify(p.sample());
-            block.add(new MeasurementAnalysis(m.measurement().id(), p.recipe().toCanonicalString(), p.absorbance(),
+            block.add(new MeasurementAnalysis(m.getId(), p.recipe().toCanonicalString(), p.absorbance(),
                     SampleEncoding.FLOAT32_LE, correction.results(result, versions, temperature(m), pressure(m),
                             p.noiseFactor(), p.noiseOrigin())));
             if (block.size() == BLOCK) {
@@ -274,18 +276,18 @@ public final class MeasurementQuantification {
     }
 
     /** The cell temperature the measurement was stored with: from its file's labels, or given at import. */
-    private static ConditionValue temperature(SourcedMeasurement m) {
-        return new ConditionValue(m.measurement().cellTemperature(), FileMeasurements.statesTemperature(m.labels())
+    private static ConditionValue temperature(Measurement m) {
+        return new ConditionValue(m.getCellTemperature(), FileMeasurements.statesTemperature(m.getLabels().map())
                 ? ConditionOrigin.FILE_LABEL : ConditionOrigin.IMPORT_STATED);
     }
 
     /** The cell pressure in kPa (stored in hPa), from the file's labels or given at import. */
-    private static ConditionValue pressure(SourcedMeasurement m) {
-        return new ConditionValue(m.measurement().cellPressure() / 10.0, FileMeasurements.statesPressure(m.labels())
+    private static ConditionValue pressure(Measurement m) {
+        return new ConditionValue(m.getCellPressure() / 10.0, FileMeasurements.statesPressure(m.getLabels().map())
                 ? ConditionOrigin.FILE_LABEL : ConditionOrigin.IMPORT_STATED);
     }
 
-    private Prepared prepare(SourcedMeasurement m, Spectrum values) throws ImportException {
+    private Prepared prepare(Measurement m, Spectrum values) throws ImportException {
         MeasurementAbsorbance.Converted c = absorbance.convert(m, values);
         Spectrum a;
         try {
@@ -309,7 +311,7 @@ public final class MeasurementQuantification {
     }
 
     /** The axis covers every window of every region, and the absorbance is finite at each point inside one. */
-    private void requireFitWindows(SourcedMeasurement m, Spectrum a) throws ImportException {
+    private void requireFitWindows(Measurement m, Spectrum a) throws ImportException {
         SpectralAxis axis = a.axis();
         if (axis.unit() != AxisUnit.WAVENUMBER) {
             throw MeasurementAbsorbance.error(m, "axis", "the axis is in " + axis.unit() + ", not wavenumbers");
@@ -340,8 +342,8 @@ public final class MeasurementQuantification {
         return quantifiers.computeIfAbsent(axis, ax -> method.quantifier(ax, software, false));
     }
 
-    private Spectrum values(SourcedMeasurement m, Map<String, Spectrum> pending) {
-        Spectrum values = pending.get(m.measurement().id());
-        return values != null ? values : store.spectra().load(actor, m.spectrumId()).spectrum();
+    private Spectrum values(Measurement m, Map<String, Spectrum> pending) {
+        Spectrum values = pending.get(m.getId());
+        return values != null ? values : store.spectra().load(actor, m.getSpectrumId()).spectrum();
     }
 }

@@ -7,6 +7,8 @@ import java.sql.Statement;
 import java.util.Set;
 
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Client;
+import org.tracegas.model.Project;
 import org.tracegas.model.Role;
 
 /**
@@ -21,7 +23,7 @@ final class AnalysisFixture implements AutoCloseable {
     final WorkspaceStore store;
     final Session analyst;
     final Session reader;
-    final ProjectInfo project;
+    final Project project;
     final VersionInfo method;
     final VersionInfo library;
 
@@ -33,9 +35,10 @@ final class AnalysisFixture implements AutoCloseable {
         store.users().createUser(admin, "rita", "Rita Reader", Set.of(Role.ANALYST), "rita-pw-1234".toCharArray());
         analyst = store.users().logIn("ana", ANALYST_PASSWORD);
         reader = store.users().logIn("rita", "rita-pw-1234".toCharArray());
-        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "WU-1",
+        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
+                "WU-1",
                 "Stack campaign");
-        store.projects().grant(analyst, project.id(), reader.userId(), AccessLevel.READ);
+        store.projects().grant(analyst, project.getId(), reader.userId(), AccessLevel.READ);
         method = store.versions().create(analyst, VersionKind.METHOD, "CO in flue gas", "analyte=CO\n", "first");
         library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln gases", "sha=abc\n", "first");
     }

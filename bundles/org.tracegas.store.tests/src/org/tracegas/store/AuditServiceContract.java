@@ -21,6 +21,8 @@ import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditRecord;
 import org.tracegas.audit.AuditReview;
+import org.tracegas.model.Client;
+import org.tracegas.model.Project;
 import org.tracegas.model.Role;
 import org.tracegas.store.internal.JdbcWorkspaceStore;
 
@@ -33,7 +35,7 @@ abstract class AuditServiceContract {
     private Session analyst;
     private Session reviewer;
     private Session qualityManager;
-    private ProjectInfo project;
+    private Project project;
 
     abstract TestBackend newBackend() throws Exception;
 
@@ -49,7 +51,8 @@ abstract class AuditServiceContract {
         analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
         reviewer = store.users().logIn("rev", "rev-pw-1234".toCharArray());
         qualityManager = store.users().logIn("qm", "qm-pw-12345".toCharArray());
-        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "A-1",
+        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
+                "A-1",
                 "Audit project");
     }
 
@@ -103,9 +106,9 @@ abstract class AuditServiceContract {
     @Test
     void anExportOfResultsIsRecordedWithItsFileAndHashByThoseWhoMayReadTheProject() {
         String sha = "ab".repeat(32);
-        store.audit().recordExport(analyst, project.id(), "a-1-results.csv", 12, sha);
+        store.audit().recordExport(analyst, project.getId(), "a-1-results.csv", 12, sha);
         List<AuditRecord> records = store.audit().review(reviewer,
-                AuditQuery.all().object(AuditService.EXPORT_OBJECT, project.id()).build()).records();
+                AuditQuery.all().object(AuditService.EXPORT_OBJECT, project.getId()).build()).records();
         assertEquals(1, records.size());
         AuditRecord export = records.get(0);
         assertEquals(AuditAction.EXPORT, export.action());
@@ -115,11 +118,11 @@ abstract class AuditServiceContract {
         assertTrue(store.audit().verify().intact());
         // the reviewer holds no grant on the project, so may not have read its results to export them
         assertThrows(AccessDeniedException.class,
-                () -> store.audit().recordExport(reviewer, project.id(), "a-1-results.csv", 12, sha));
+                () -> store.audit().recordExport(reviewer, project.getId(), "a-1-results.csv", 12, sha));
         assertThrows(IllegalArgumentException.class,
-                () -> store.audit().recordExport(analyst, project.id(), "a-1-results.csv", 12, "not a hash"));
+                () -> store.audit().recordExport(analyst, project.getId(), "a-1-results.csv", 12, "not a hash"));
         assertThrows(IllegalArgumentException.class,
-                () -> store.audit().recordExport(analyst, project.id(), "a-1-results.csv", -1, sha));
+                () -> store.audit().recordExport(analyst, project.getId(), "a-1-results.csv", -1, sha));
     }
 
     @Test
@@ -159,11 +162,11 @@ abstract class AuditServiceContract {
 
     @Test
     void theExportWritesTheFilteredRecordsAsCsvInSequenceOrder() throws Exception {
-        AuditQuery query = AuditQuery.all().object("project", project.id()).build();
+        AuditQuery query = AuditQuery.all().object("project", project.getId()).build();
         StringWriter out = new StringWriter();
         long written = store.audit().exportCsv(qualityManager, query, out);
         long expected = count("SELECT COUNT(*) FROM audit_record WHERE object_type = 'project' AND object_id = ?",
-                List.of(project.id()));
+                List.of(project.getId()));
         assertTrue(expected >= 1, "creating the project is recorded");
         assertEquals(expected, written);
         // RFC 4180 section 2: records end in CRLF, the first line is the header

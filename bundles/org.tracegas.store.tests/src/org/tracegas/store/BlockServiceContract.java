@@ -24,6 +24,7 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.audit.AuditValues;
+import org.tracegas.model.Measurement;
 import org.tracegas.model.ResultFlag;
 
 /** Blocks of processed spectra, each in one transaction, on each backend. */
@@ -52,21 +53,21 @@ abstract class BlockServiceContract {
         block.add(SampleBlocks.processed(3, 0, f.method.id(), f.library.id())); // nothing fitted: no results
         long auditBefore = f.count("SELECT COUNT(*) FROM audit_record");
 
-        List<StoredMeasurement> stored = f.store.blocks().store(f.analyst, f.project.id(), block);
+        List<StoredMeasurement> stored = f.store.blocks().store(f.analyst, f.project.getId(), block);
 
         assertEquals(4, stored.size());
         assertEquals(List.of(4, 4, 4, 0), stored.stream().map(s -> s.resultIds().size()).toList());
         assertEquals(4, f.count("SELECT COUNT(*) FROM audit_record") - auditBefore, "one audit record per measurement");
-        List<MeasurementInfo> measurements = f.store.projects().measurements(f.analyst, f.project.id());
+        List<Measurement> measurements = f.store.projects().measurements(f.analyst, f.project.getId());
         assertEquals(stored.stream().map(StoredMeasurement::measurementId).toList(),
-                measurements.stream().map(MeasurementInfo::id).toList());
-        List<ResultInfo> results = f.store.results().results(f.analyst, f.project.id());
+                measurements.stream().map(Measurement::getId).toList());
+        List<ResultInfo> results = f.store.results().results(f.analyst, f.project.getId());
         assertEquals(12, results.size());
         for (int i = 0; i < block.size(); i++) {
             ProcessedSpectrum in = block.get(i);
             StoredMeasurement out = stored.get(i);
-            assertEquals(in.time(), measurements.get(i).time());
-            assertEquals(f.analyst.userId(), measurements.get(i).operatorId());
+            assertEquals(in.time(), measurements.get(i).getTime());
+            assertEquals(f.analyst.userId(), measurements.get(i).getOperatorId());
             StoredSpectrum spectrum = f.store.spectra().load(f.analyst, out.spectrumId());
             assertEquals(out.measurementId(), spectrum.measurementId());
             assertArrayEquals(in.absorbance().toArray(), spectrum.spectrum().toArray(), 0.0);
@@ -97,15 +98,15 @@ abstract class BlockServiceContract {
                     p.cellPressure(), p.absorbance(), p.encoding(), p.results()));
         }
         EncodedBlock encoded = CompletableFuture.supplyAsync(() -> f.store.blocks().encode(f.analyst,
-                f.project.id(), block)).get();
+                f.project.getId(), block)).get();
         long before = f.count(COUNT_ROWS);
         assertEquals(before, f.count(COUNT_ROWS), "encoding writes nothing");
 
         List<StoredMeasurement> stored = f.store.blocks().store(encoded);
 
         assertEquals(3, stored.size());
-        List<MeasurementInfo> measurements = f.store.projects().measurements(f.analyst, f.project.id());
-        assertEquals(block.get(0).time().truncatedTo(ChronoUnit.MICROS), measurements.get(0).time());
+        List<Measurement> measurements = f.store.projects().measurements(f.analyst, f.project.getId());
+        assertEquals(block.get(0).time().truncatedTo(ChronoUnit.MICROS), measurements.get(0).getTime());
         // the hashes taken from the values before the insert are those the verification takes from the rows
         WorkspaceVerification v = f.store.audit().verifyWorkspace(List.of());
         assertEquals(List.of(), v.dataFindings());
@@ -115,7 +116,7 @@ abstract class BlockServiceContract {
     @Test
     void encodedBlockIsStoredOnlyWithItsActorsAccessAndOnlyByItsStore() throws Exception {
         long before = f.count(COUNT_ROWS);
-        EncodedBlock byReader = f.store.blocks().encode(f.reader, f.project.id(),
+        EncodedBlock byReader = f.store.blocks().encode(f.reader, f.project.getId(),
                 SampleBlocks.block(0, 2, 1, f.method.id(), f.library.id()));
         assertThrows(AccessDeniedException.class, () -> f.store.blocks().store(byReader));
         EncodedBlock foreign = () -> 1;
@@ -133,7 +134,7 @@ abstract class BlockServiceContract {
         long before = f.count(COUNT_ROWS);
 
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> f.store.blocks().store(f.analyst, f.project.id(), block));
+                () -> f.store.blocks().store(f.analyst, f.project.getId(), block));
 
         assertTrue(e.getMessage().startsWith("block[2].results[0].methodVersionId"), e.getMessage());
         assertEquals(before, f.count(COUNT_ROWS), "nothing half written");
@@ -142,18 +143,20 @@ abstract class BlockServiceContract {
     @Test
     void versionsFrozenByEarlierBlocksAreStillCheckedForTheirKind() throws Exception {
         // the second block reads the versions frozen by the first, so the third finds them remembered
-        f.store.blocks().store(f.analyst, f.project.id(), SampleBlocks.block(0, 2, 1, f.method.id(), f.library.id()));
-        f.store.blocks().store(f.analyst, f.project.id(), SampleBlocks.block(2, 2, 1, f.method.id(), f.library.id()));
+        f.store.blocks().store(f.analyst, f.project.getId(), SampleBlocks.block(0, 2, 1, f.method.id(),
+                f.library.id()));
+        f.store.blocks().store(f.analyst, f.project.getId(), SampleBlocks.block(2, 2, 1, f.method.id(),
+                f.library.id()));
         long before = f.count(COUNT_ROWS);
 
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(
-                f.analyst, f.project.id(), SampleBlocks.block(4, 1, 1, f.library.id(), f.library.id())));
+                f.analyst, f.project.getId(), SampleBlocks.block(4, 1, 1, f.library.id(), f.library.id())));
 
         assertEquals("block[0].results[0].methodVersionId " + f.library.id()
                 + " is a LIBRARY version, not a METHOD version", e.getMessage());
         assertEquals(before, f.count(COUNT_ROWS), "nothing half written");
         NoSuchObjectException missing = assertThrows(NoSuchObjectException.class, () -> f.store.blocks().store(
-                f.analyst, f.project.id(), SampleBlocks.block(4, 1, 1, f.method.id(), "no-such-version")));
+                f.analyst, f.project.getId(), SampleBlocks.block(4, 1, 1, f.method.id(), "no-such-version")));
         assertTrue(missing.getMessage().contains("no-such-version"), missing.getMessage());
     }
 
@@ -162,14 +165,14 @@ abstract class BlockServiceContract {
         VersionInfo draft = f.store.versions().create(f.analyst, VersionKind.LIBRARY, "Kiln gases, hot cell",
                 "sha=def\n", "hot cell");
         // the draft is frozen by the block's first check, then the block is refused and rolled back
-        assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(f.analyst, f.project.id(),
+        assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(f.analyst, f.project.getId(),
                 SampleBlocks.block(0, 1, 1, draft.id(), draft.id())));
         assertFalse(f.store.versions().version(draft.id()).frozen(), "the refused block froze nothing");
         VersionInfo edited = f.store.versions().updateDraft(f.analyst, draft.id(), draft.rowVersion(), "sha=0ef\n",
                 "corrected hash");
 
         for (int first = 0; first < 6; first += 2) {
-            f.store.blocks().store(f.analyst, f.project.id(),
+            f.store.blocks().store(f.analyst, f.project.getId(),
                     SampleBlocks.block(first, 2, 1, f.method.id(), draft.id()));
         }
 
@@ -185,7 +188,7 @@ abstract class BlockServiceContract {
         List<ProcessedSpectrum> withNull = new ArrayList<>(SampleBlocks.block(0, 1, 1, f.method.id(), f.library.id()));
         withNull.add(null);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> f.store.blocks().store(f.analyst, f.project.id(), withNull));
+                () -> f.store.blocks().store(f.analyst, f.project.getId(), withNull));
         assertEquals("block[1] is null", e.getMessage());
 
         ProcessedSpectrum good = SampleBlocks.processed(0, 2, f.method.id(), f.library.id());
@@ -197,13 +200,14 @@ abstract class BlockServiceContract {
         e = assertThrows(IllegalArgumentException.class, () -> new ProcessedSpectrum(good.kind(), good.time(), 0.0,
                 good.cellPressure(), good.absorbance(), good.encoding(), good.results()));
         assertTrue(e.getMessage().startsWith("cellTemperature"), e.getMessage());
-        assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(f.analyst, f.project.id(), List.of()));
+        assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(f.analyst, f.project.getId(),
+                List.of()));
     }
 
     @Test
     void readerMayNotStoreABlock() throws Exception {
         long before = f.count(COUNT_ROWS);
-        assertThrows(AccessDeniedException.class, () -> f.store.blocks().store(f.reader, f.project.id(),
+        assertThrows(AccessDeniedException.class, () -> f.store.blocks().store(f.reader, f.project.getId(),
                 SampleBlocks.block(0, 2, 1, f.method.id(), f.library.id())));
         assertEquals(before, f.count(COUNT_ROWS));
     }

@@ -20,9 +20,11 @@ import java.util.Set;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
@@ -53,11 +55,19 @@ abstract class ImportServiceContract {
         f.close();
     }
 
-    private static NewMeasurement sample(int i, Map<String, String> labels) {
+    private static Measurement sample(int i, Map<String, String> labels) {
         Spectrum a = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.5, 3),
                 new double[] { 0.1 * i, 0.2, 0.3 }, Ordinate.ABSORBANCE);
-        return new NewMeasurement(MeasurementKind.SAMPLE, T0.plusSeconds(60L * i), 313.15, 1009.0,
-                "Kiln 5 stack " + i, labels, SpectralContent.ABSORBANCE, a);
+        Measurement m = WorkspaceFactory.eINSTANCE.createMeasurement();
+        m.setKind(MeasurementKind.SAMPLE);
+        m.setTime(T0.plusSeconds(60L * i));
+        m.setCellTemperature(313.15);
+        m.setCellPressure(1009.0);
+        m.setTitle("Kiln 5 stack " + i);
+        m.getLabels().putAll(labels);
+        m.setContent(SpectralContent.ABSORBANCE);
+        m.setSpectrum(a);
+        return m;
     }
 
     @Test
@@ -68,13 +78,13 @@ abstract class ImportServiceContract {
         RawFile file = new RawFile("stack-01.jdx", "JCAMP-DX 5.01", "abc".getBytes(StandardCharsets.US_ASCII));
         assertEquals(SHA256_OF_ABC, file.sha256());
 
-        ImportedFile first = f.store.imports().importFile(f.analyst, f.project.id(), file,
+        ImportedFile first = f.store.imports().importFile(f.analyst, f.project.getId(), file,
                 List.of(sample(1, labels), sample(2, Map.of())));
         assertTrue(first.added());
         assertEquals(2, first.measurementIds().size());
         long rows = f.count("SELECT COUNT(*) FROM measurement") + f.count("SELECT COUNT(*) FROM spectral_data");
 
-        ImportedFile again = f.store.imports().importFile(f.analyst, f.project.id(),
+        ImportedFile again = f.store.imports().importFile(f.analyst, f.project.getId(),
                 new RawFile("renamed.jdx", "JCAMP-DX 5.01", "abc".getBytes(StandardCharsets.US_ASCII)),
                 List.of(sample(3, Map.of())));
         assertFalse(again.added(), "the same bytes under another name are the same file");
@@ -82,16 +92,16 @@ abstract class ImportServiceContract {
         assertEquals(first.measurementIds(), again.measurementIds());
         assertEquals(rows, f.count("SELECT COUNT(*) FROM measurement") + f.count("SELECT COUNT(*) FROM spectral_data"));
 
-        List<SourcedMeasurement> stored = f.store.imports().measurements(f.analyst, f.project.id());
-        assertEquals(first.measurementIds(), stored.stream().map(m -> m.measurement().id()).toList());
-        SourcedMeasurement m = stored.get(0);
-        assertEquals("Kiln 5 stack 1", m.title());
-        assertEquals(SHA256_OF_ABC, m.fileSha256());
-        assertEquals(labels, m.labels(), "labels come back exactly, line breaks and backslashes too");
-        assertEquals(313.15, m.measurement().cellTemperature());
+        List<Measurement> stored = f.store.imports().measurements(f.analyst, f.project.getId());
+        assertEquals(first.measurementIds(), stored.stream().map(m -> m.getId()).toList());
+        Measurement m = stored.get(0);
+        assertEquals("Kiln 5 stack 1", m.getTitle());
+        assertEquals(SHA256_OF_ABC, m.getSourceSha256());
+        assertEquals(labels, m.getLabels().map(), "labels come back exactly, line breaks and backslashes too");
+        assertEquals(313.15, m.getCellTemperature());
         assertArrayEquals("abc".getBytes(StandardCharsets.US_ASCII),
-                f.store.imports().content(f.reader, f.project.id(), SHA256_OF_ABC));
-        assertTrue(f.store.imports().find(f.reader, f.project.id(), SHA256_OF_ABC).isPresent());
+                f.store.imports().content(f.reader, f.project.getId(), SHA256_OF_ABC));
+        assertTrue(f.store.imports().find(f.reader, f.project.getId(), SHA256_OF_ABC).isPresent());
 
         List<String> audit = new ArrayList<>();
         try (Connection c = f.backend.raw(); PreparedStatement ps = c.prepareStatement(
@@ -108,11 +118,55 @@ abstract class ImportServiceContract {
         }
         assertEquals(1, f.count("SELECT COUNT(*) FROM audit_record WHERE object_type = 'raw-file'"));
         assertTrue(f.store.verifyAuditTrail().intact());
+
+        // the project's measurements are the same objects of the model, in their project and client
+        Measurement read = f.store.projects().measurements(f.reader, f.project.getId()).get(0);
+        assertEquals(List.of(m.getId(), "stack-01.jdx", SHA256_OF_ABC, 0, SpectralContent.ABSORBANCE, labels),
+                List.of(read.getId(), read.getSourceFile(), read.getSourceSha256(), read.getSourceRecord(),
+                        read.getContent(), read.getLabels().map()));
+        assertEquals(f.project.getId(), read.getProject().getId());
+        assertEquals(f.project.getClient().getId(), read.getProject().getClient().getId());
+        assertEquals(0.1, f.store.spectra().load(f.reader, read.getSpectrumId()).spectrum().get(0), 0,
+                "the stored values as read, bit-exact");
+        assertEquals(null, read.getSpectrum(), "values stay in their block when measurements are read");
+    }
+
+    @Test
+    void incompleteMeasurementsAreRefusedWhereTheyComeInNamingRecordAndField() throws Exception {
+        RawFile file = new RawFile("stack-03.jdx", "JCAMP-DX 5.01", new byte[] { 4, 5, 6 });
+        Measurement untitled = sample(2, Map.of());
+        untitled.setTitle(" ");
+        Measurement unstated = sample(2, Map.of());
+        unstated.unsetContent();
+        Measurement residual = sample(2, Map.of());
+        residual.setContent(SpectralContent.RESIDUAL);
+        // an absolute temperature is positive: common practice, no source
+        Measurement frozen = sample(2, Map.of());
+        frozen.setCellTemperature(0);
+        Measurement bare = sample(2, Map.of());
+        bare.setSpectrum(null);
+        Map<Measurement, String> refused = new LinkedHashMap<>();
+        refused.put(untitled, "measurements[1] of stack-03.jdx: title must not be blank");
+        refused.put(unstated, "measurements[1] of stack-03.jdx: content must be interferogram, single beam,"
+                + " transmittance or absorbance, was null");
+        refused.put(residual, "measurements[1] of stack-03.jdx: content must be interferogram, single beam,"
+                + " transmittance or absorbance, was RESIDUAL");
+        refused.put(frozen, "measurements[1] of stack-03.jdx: cellTemperature must be a positive number of K,"
+                + " was 0.0");
+        refused.put(bare, "measurements[1] of stack-03.jdx: spectrum must not be null");
+        for (Map.Entry<Measurement, String> e : refused.entrySet()) {
+            IllegalArgumentException thrown = assertThrows(IllegalArgumentException.class,
+                    () -> f.store.imports().importFile(f.analyst, f.project.getId(), file,
+                            List.of(sample(1, Map.of()), e.getKey())));
+            assertEquals(e.getValue(), thrown.getMessage());
+        }
+        assertEquals(0, f.count("SELECT COUNT(*) FROM measurement") + f.count("SELECT COUNT(*) FROM raw_file"),
+                "nothing of a refused file is stored");
     }
 
     @Test
     void analysesAreStoredWholeWithTheRecipeThatRan() throws Exception {
-        ImportedFile file = f.store.imports().importFile(f.analyst, f.project.id(),
+        ImportedFile file = f.store.imports().importFile(f.analyst, f.project.getId(),
                 new RawFile("stack-02.jdx", "JCAMP-DX 5.01", new byte[] { 1, 2, 3 }),
                 List.of(sample(1, Map.of()), sample(2, Map.of())));
         String one = file.measurementIds().get(0);
@@ -124,19 +178,19 @@ abstract class ImportServiceContract {
                 new double[] { 0.1, 0.2, 0.3 }, Ordinate.ABSORBANCE);
         long before = f.count("SELECT COUNT(*) FROM analysis_result") + f.count("SELECT COUNT(*) FROM audit_record");
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> f.store.analyses().store(
-                f.analyst, f.project.id(), List.of(new MeasurementAnalysis(one, RECIPE, a, SampleEncoding.FLOAT32_LE,
+                f.analyst, f.project.getId(), List.of(new MeasurementAnalysis(one, RECIPE, a, SampleEncoding.FLOAT32_LE,
                         List.of(co)), new MeasurementAnalysis("no-such-measurement", RECIPE, a,
                                 SampleEncoding.FLOAT32_LE, List.of(co)))));
         assertTrue(e.getMessage().contains("analyses[1].measurementId"), e.getMessage());
         assertEquals(before, f.count("SELECT COUNT(*) FROM analysis_result")
                 + f.count("SELECT COUNT(*) FROM audit_record"), "a refused block stores nothing");
 
-        List<StoredMeasurement> stored = f.store.analyses().store(f.analyst, f.project.id(), List.of(
+        List<StoredMeasurement> stored = f.store.analyses().store(f.analyst, f.project.getId(), List.of(
                 new MeasurementAnalysis(one, RECIPE, a, SampleEncoding.FLOAT32_LE, List.of(co)),
                 new MeasurementAnalysis(two, RECIPE, a, SampleEncoding.FLOAT32_LE, List.of(co))));
         assertEquals(2, stored.size());
-        assertEquals(Set.of(one, two), f.store.analyses().analysed(f.reader, f.project.id(), f.method.id()));
-        List<ResultRow> rows = f.store.analyses().rows(f.reader, f.project.id());
+        assertEquals(Set.of(one, two), f.store.analyses().analysed(f.reader, f.project.getId(), f.method.id()));
+        List<ResultRow> rows = f.store.analyses().rows(f.reader, f.project.getId());
         assertEquals(2, rows.size());
         assertEquals(one, rows.get(0).result().values().measurementId(), "in measurement time order");
         assertEquals("stack-02.jdx", rows.get(0).sourceFile());

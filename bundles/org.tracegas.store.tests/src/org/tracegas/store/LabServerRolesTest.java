@@ -15,7 +15,9 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.postgresql.ds.PGSimpleDataSource;
+import org.tracegas.model.Client;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Project;
 import org.tracegas.model.Role;
 
 /**
@@ -68,15 +70,15 @@ class LabServerRolesTest {
             Session admin = store.users().createFirstAdministrator("admin", "Administrator", "admin-pw-12".toCharArray());
             store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
             Session ana = store.users().logIn("ana", "ana-pw-1234".toCharArray());
-            ProjectInfo p = store.projects().createProject(ana, store.projects().createClient(ana, "Client"), "R-1",
+            Project p = store.projects().createProject(ana, store.projects().createClient(ana, "Client").getId(), "R-1",
                     "Roles");
-            store.projects().rename(ana, p.id(), p.rowVersion(), "Roles, renamed");
+            store.projects().rename(ana, p.getId(), p.getRowVersion(), "Roles, renamed");
             VersionInfo method = store.versions().create(ana, VersionKind.METHOD, "m", "analyte=CO\n", "first");
             VersionInfo library = store.versions().create(ana, VersionKind.LIBRARY, "l", "sha=abc\n", "first");
-            store.blocks().store(ana, p.id(), SampleBlocks.block(0, 2, 2, method.id(), library.id()));
-            store.qa().recordAll(ana, p.id(), method.id(), List.of(new NewQaCheck("Noise level", true, 0.001,
+            store.blocks().store(ana, p.getId(), SampleBlocks.block(0, 2, 2, method.id(), library.id()));
+            store.qa().recordAll(ana, p.getId(), method.id(), List.of(new NewQaCheck("Noise level", true, 0.001,
                     "absorbance", Double.NEGATIVE_INFINITY, 0.002, "RMS <= 0.002", "common practice, no source")));
-            store.projects().recordMeasurement(ana, p.id(), MeasurementKind.BACKGROUND, SampleBlocks.START, 438.15,
+            store.projects().recordMeasurement(ana, p.getId(), MeasurementKind.BACKGROUND, SampleBlocks.START, 438.15,
                     1013.0);
             assertTrue(store.audit().verifyWorkspace(List.of()).intact());
         }

@@ -13,6 +13,8 @@ import java.util.Set;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.tracegas.model.Client;
+import org.tracegas.model.Project;
 import org.tracegas.model.Role;
 
 /** Storing a campaign's QA checks, on each backend. */
@@ -21,7 +23,7 @@ abstract class QaServiceContract {
     private TestBackend backend;
     private WorkspaceStore store;
     private Session analyst;
-    private ProjectInfo project;
+    private Project project;
     private VersionInfo method;
 
     abstract TestBackend newBackend() throws Exception;
@@ -33,7 +35,8 @@ abstract class QaServiceContract {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", "admin-pw-12".toCharArray());
         store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
         analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
-        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "QA-1",
+        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
+                "QA-1",
                 "QA project");
         method = store.versions().create(analyst, VersionKind.METHOD, "m", "analyte=CO\n", "first");
     }
@@ -51,9 +54,9 @@ abstract class QaServiceContract {
                 new NewQaCheck("Spike recovery HCl", true, 102.3, "%", 70, 130, "70 .. 130 %", "EPA Method 320"),
                 new NewQaCheck("Noise level", false, 0.004, "absorbance", Double.NEGATIVE_INFINITY, 0.002,
                         "RMS <= 0.002", "common practice, no source"));
-        store.qa().recordAll(analyst, project.id(), method.id(), checks);
+        store.qa().recordAll(analyst, project.getId(), method.id(), checks);
 
-        List<QaCheckInfo> stored = store.qa().checks(analyst, project.id());
+        List<QaCheckInfo> stored = store.qa().checks(analyst, project.getId());
         assertEquals(checks, stored.stream().map(QaCheckInfo::outcome).toList());
         assertTrue(stored.stream().allMatch(c -> c.methodVersionId().equals(method.id())));
         assertTrue(store.versions().version(method.id()).frozen());

@@ -22,6 +22,8 @@ import org.tracegas.audit.Signature;
 import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.audit.SignatureRefusedException;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Client;
+import org.tracegas.model.Project;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Role;
 
@@ -34,7 +36,7 @@ abstract class ReviewServiceContract {
     private WorkspaceStore store;
     private Session analyst;
     private Session reviewer;
-    private ProjectInfo project;
+    private Project project;
 
     abstract TestBackend newBackend() throws Exception;
 
@@ -48,9 +50,10 @@ abstract class ReviewServiceContract {
                 "rev-pw-1234".toCharArray());
         analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
         reviewer = store.users().logIn("rev", "rev-pw-1234".toCharArray());
-        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "R-1",
+        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
+                "R-1",
                 "Report project");
-        store.projects().grant(analyst, project.id(), rev.id(), AccessLevel.READ);
+        store.projects().grant(analyst, project.getId(), rev.id(), AccessLevel.READ);
     }
 
     @AfterEach
@@ -61,14 +64,14 @@ abstract class ReviewServiceContract {
     }
 
     private ReportSignatureRequest request(String login, String password, SignatureMeaning meaning, byte[] content) {
-        return new ReportSignatureRequest(project.id(), "R-1", content, analyst.userId(), login,
+        return new ReportSignatureRequest(project.getId(), "R-1", content, analyst.userId(), login,
                 password.toCharArray(), meaning, null);
     }
 
     @Test
     void aReviewerSignsTheContentHashAndTheSignatureIsFoundAgain() throws Exception {
         char[] password = "rev-pw-1234".toCharArray();
-        Signature s = store.reviews().sign(reviewer, new ReportSignatureRequest(project.id(), "R-1", CONTENT,
+        Signature s = store.reviews().sign(reviewer, new ReportSignatureRequest(project.getId(), "R-1", CONTENT,
                 analyst.userId(), "rev", password, SignatureMeaning.REVIEWED, "checked against the raw data"));
         // the stored hash is the SHA-256 of the signed bytes (FIPS 180-4 via the platform's MessageDigest)
         String sha = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(CONTENT));
@@ -78,11 +81,11 @@ abstract class ReviewServiceContract {
         store.reviews().sign(reviewer, request("rev", "rev-pw-1234", SignatureMeaning.APPROVED,
                 "report R-1 content, second issue".getBytes(StandardCharsets.UTF_8)));
 
-        List<Signature> found = store.reviews().signatures(analyst, project.id(), "R-1");
+        List<Signature> found = store.reviews().signatures(analyst, project.getId(), "R-1");
         assertEquals(2, found.size());
         assertTrue(found.get(0).covers(CONTENT));
         assertTrue(!found.get(1).covers(CONTENT), "the approval was given on other content");
-        assertEquals(List.of(), store.reviews().signatures(analyst, project.id(), "R-2"));
+        assertEquals(List.of(), store.reviews().signatures(analyst, project.getId(), "R-2"));
         assertTrue(store.verifyAuditTrail().intact());
     }
 
@@ -91,7 +94,7 @@ abstract class ReviewServiceContract {
         SignatureRefusedException e = assertThrows(SignatureRefusedException.class,
                 () -> store.reviews().sign(analyst, request("ana", "ana-pw-1234", SignatureMeaning.APPROVED, CONTENT)));
         assertEquals(SignatureRefusedException.Reason.OWN_WORK, e.reason());
-        assertEquals(List.of(), store.reviews().signatures(analyst, project.id(), "R-1"));
+        assertEquals(List.of(), store.reviews().signatures(analyst, project.getId(), "R-1"));
         try (Connection c = backend.raw(); Statement st = c.createStatement(); ResultSet rs = st.executeQuery(
                 "SELECT COUNT(*) FROM audit_record WHERE action = 'REFUSED' AND object_type = 'report'")) {
             rs.next();
@@ -119,7 +122,7 @@ abstract class ReviewServiceContract {
         Session outsider = store.users().logIn("out", "out-pw-1234".toCharArray());
         assertThrows(AccessDeniedException.class, () -> store.reviews().sign(outsider,
                 request("out", "out-pw-1234", SignatureMeaning.REVIEWED, CONTENT)));
-        assertThrows(AccessDeniedException.class, () -> store.reviews().signatures(outsider, project.id(), "R-1"));
+        assertThrows(AccessDeniedException.class, () -> store.reviews().signatures(outsider, project.getId(), "R-1"));
     }
 
     /** A result the analyst recorded in the project. */
@@ -128,7 +131,7 @@ abstract class ReviewServiceContract {
                 "first");
         VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln gases", "sha=abc\n",
                 "first");
-        return store.results().record(analyst, project.id(), new NewResult(null, "CO", 12.5, 0.8, 0.3, "ppm",
+        return store.results().record(analyst, project.getId(), new NewResult(null, "CO", 12.5, 0.8, 0.3, "ppm",
                 Set.of(ResultFlag.HIGH_RESIDUAL), method.id(), library.id(), "0.1.0", "ab".repeat(32)));
     }
 
@@ -163,7 +166,7 @@ abstract class ReviewServiceContract {
         assertEquals(1, found.size());
         assertTrue(found.get(0).covers(content));
         assertEquals(SignatureMeaning.REVIEWED, found.get(0).meaning());
-        assertEquals(List.of(), store.reviews().signatures(analyst, project.id(), result.id()),
+        assertEquals(List.of(), store.reviews().signatures(analyst, project.getId(), result.id()),
                 "a result's signature is not a report's");
         assertEquals(1, count("SELECT COUNT(*) FROM audit_record WHERE action = 'SIGNATURE' AND object_type = 'result'"
                 + " AND object_id = ?", result.id()));

@@ -85,23 +85,23 @@ abstract class TamperDetectionContract {
         backend = newBackend();
         fixture = new AnalysisFixture(backend);
         WorkspaceStore store = fixture.store;
-        String m = store.projects().recordMeasurement(fixture.analyst, fixture.project.id(), MeasurementKind.SAMPLE,
+        String m = store.projects().recordMeasurement(fixture.analyst, fixture.project.getId(), MeasurementKind.SAMPLE,
                 SampleBlocks.START, 438.15, 1013.0);
-        store.spectra().store(fixture.analyst, fixture.project.id(), new SpectrumInput(m,
+        store.spectra().store(fixture.analyst, fixture.project.getId(), new SpectrumInput(m,
                 org.tracegas.model.SpectralContent.ABSORBANCE, SampleBlocks.processed(0, 0, fixture.method.id(),
                         fixture.library.id()).absorbance(), SampleEncoding.FLOAT32_LE));
-        store.results().record(fixture.analyst, fixture.project.id(), SampleBlocks.processed(0, 1,
+        store.results().record(fixture.analyst, fixture.project.getId(), SampleBlocks.processed(0, 1,
                 fixture.method.id(), fixture.library.id()).results().get(0).withMeasurement(m));
-        store.blocks().store(fixture.analyst, fixture.project.id(), SampleBlocks.block(1, 3, 3, fixture.method.id(),
+        store.blocks().store(fixture.analyst, fixture.project.getId(), SampleBlocks.block(1, 3, 3, fixture.method.id(),
                 fixture.library.id()));
-        store.qa().recordAll(fixture.analyst, fixture.project.id(), fixture.method.id(), List.of(
+        store.qa().recordAll(fixture.analyst, fixture.project.getId(), fixture.method.id(), List.of(
                 new NewQaCheck("Spike recovery SO2", true, 96.5, "%", 70, 130, "70 .. 130 %",
                         "EPA Method 320, section 9.2"),
                 new NewQaCheck("Noise level", true, 0.0012, "absorbance", Double.NEGATIVE_INFINITY, 0.002,
                         "RMS <= 0.002", "common practice, no source")));
         // a second client and project, so that every table holds two rows to swap values between
         store.projects().createProject(fixture.analyst, store.projects().createClient(fixture.analyst,
-                "Second client"), "WU-2", "Kiln campaign");
+                "Second client").getId(), "WU-2", "Kiln campaign");
         store.users().changeRoles(admin(), fixture.reader.userId(), 0,
                 Set.of(org.tracegas.model.Role.ANALYST, org.tracegas.model.Role.REVIEWER));
     }

@@ -47,7 +47,7 @@ class WorkUnitProcessesTest {
     @Test
     void killedRunnerLosesNoUnitAndNoUnitIsStoredTwice() throws Exception {
         try (AnalysisFixture f = new AnalysisFixture(new PostgresBackend())) {
-            WorkBatchInfo batch = f.store.workUnits().createBatch(f.analyst, f.project.id(), "processes test",
+            WorkBatchInfo batch = f.store.workUnits().createBatch(f.analyst, f.project.getId(), "processes test",
                     IntStream.range(0, UNITS).mapToObj(i -> "unit-" + i).toList());
             List<Runner> runners = new ArrayList<>();
             for (int r = 0; r < RUNNERS; r++) {

@@ -44,7 +44,7 @@ abstract class WorkUnitServiceContract {
     }
 
     private WorkBatchInfo batch(int count) {
-        return units.createBatch(f.analyst, f.project.id(), "hour files of 17 March",
+        return units.createBatch(f.analyst, f.project.getId(), "hour files of 17 March",
                 IntStream.range(0, count).mapToObj(i -> "/data/stack/hour-" + i + ".tgc").toList());
     }
 
@@ -71,7 +71,7 @@ abstract class WorkUnitServiceContract {
         assertEquals(new BatchProgress(0, 2, 1, 0), units.progress(f.reader, batch.id()));
         assertEquals(stored.stream().map(StoredMeasurement::measurementId).toList(),
                 units.measurementsOf(f.analyst, batch.id(), 1));
-        assertEquals(6, f.store.results().results(f.analyst, f.project.id()).size());
+        assertEquals(6, f.store.results().results(f.analyst, f.project.getId()).size());
         units.complete(f.analyst, a, List.of()); // a unit may produce nothing
         units.complete(f.analyst, c, blockOf(2));
         assertTrue(units.progress(f.analyst, batch.id()).finished());
@@ -177,7 +177,7 @@ abstract class WorkUnitServiceContract {
     }
 
     private WorkBatchInfo quantification(String methodVersionId, String... files) {
-        return units.createBatch(f.analyst, f.project.id(), methodVersionId, "quantification", List.of(files));
+        return units.createBatch(f.analyst, f.project.getId(), methodVersionId, "quantification", List.of(files));
     }
 
     @Test
@@ -185,7 +185,7 @@ abstract class WorkUnitServiceContract {
         WorkBatchInfo first = quantification(f.method, "/data/a.tgc", "/data/b.tgc");
         assertEquals(f.method.id(), first.methodVersionId());
         assertEquals(first, units.batch(f.reader, first.id()));
-        assertEquals(Optional.of(first), units.unfinishedBatch(f.reader, f.project.id(), f.method.id()));
+        assertEquals(Optional.of(first), units.unfinishedBatch(f.reader, f.project.getId(), f.method.id()));
 
         // other files are refused too: the project holds one set of results per method version
         UnfinishedBatchException refused = assertThrows(UnfinishedBatchException.class,
@@ -212,10 +212,10 @@ abstract class WorkUnitServiceContract {
                 "a released unit is open again");
         units.complete(f.analyst, units.claim(f.analyst, first.id(), "runner-a", LONG).orElseThrow(), blockOf(1));
 
-        assertEquals(Optional.empty(), units.unfinishedBatch(f.analyst, f.project.id(), f.method.id()));
-        assertEquals(Optional.of(beside), units.unfinishedBatch(f.analyst, f.project.id(), otherMethod.id()));
+        assertEquals(Optional.empty(), units.unfinishedBatch(f.analyst, f.project.getId(), f.method.id()));
+        assertEquals(Optional.of(beside), units.unfinishedBatch(f.analyst, f.project.getId(), otherMethod.id()));
         WorkBatchInfo next = quantification(f.method, "/data/a.tgc");
-        assertEquals(Optional.of(next), units.unfinishedBatch(f.analyst, f.project.id(), f.method.id()));
+        assertEquals(Optional.of(next), units.unfinishedBatch(f.analyst, f.project.getId(), f.method.id()));
         assertEquals(4, f.count("SELECT COUNT(*) FROM work_batch"));
         assertTrue(f.store.verifyAuditTrail().intact());
     }
@@ -226,9 +226,9 @@ abstract class WorkUnitServiceContract {
                 "a LIBRARY version does not quantify");
         assertThrows(NoSuchObjectException.class, () -> quantification("no-such-version", "/data/a.tgc"));
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> units.createBatch(f.analyst, f.project.id(), " ", "x", List.of("/a")));
+                () -> units.createBatch(f.analyst, f.project.getId(), " ", "x", List.of("/a")));
         assertTrue(e.getMessage().startsWith("methodVersionId"), e.getMessage());
-        assertThrows(AccessDeniedException.class, () -> units.createBatch(f.reader, f.project.id(), f.method.id(),
+        assertThrows(AccessDeniedException.class, () -> units.createBatch(f.reader, f.project.getId(), f.method.id(),
                 "x", List.of("/a")));
         assertEquals(0, f.count("SELECT COUNT(*) FROM work_batch"));
     }
@@ -263,7 +263,7 @@ abstract class WorkUnitServiceContract {
                 assertEquals(1, created.size(), "round " + round + ": batches created " + created);
                 assertEquals(Collections.nCopies(runners - 1, created.get(0).id()), named);
                 assertEquals(Optional.of(created.get(0)),
-                        units.unfinishedBatch(f.analyst, f.project.id(), method.id()));
+                        units.unfinishedBatch(f.analyst, f.project.getId(), method.id()));
             } finally {
                 pool.shutdownNow();
             }
@@ -275,12 +275,12 @@ abstract class WorkUnitServiceContract {
     @Test
     void wrongArgumentsAndMissingRightsAreRefused() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> units.createBatch(f.analyst, f.project.id(), "x", List.of("/a", " ", "/c")));
+                () -> units.createBatch(f.analyst, f.project.getId(), "x", List.of("/a", " ", "/c")));
         assertTrue(e.getMessage().startsWith("payloads[1]"), e.getMessage());
         WorkBatchInfo batch = batch(1);
         assertThrows(AccessDeniedException.class, () -> units.claim(f.reader, batch.id(), "runner-r", LONG));
         assertThrows(AccessDeniedException.class,
-                () -> units.createBatch(f.reader, f.project.id(), "x", List.of("/a")));
+                () -> units.createBatch(f.reader, f.project.getId(), "x", List.of("/a")));
         e = assertThrows(IllegalArgumentException.class,
                 () -> units.claim(f.analyst, batch.id(), "runner-a", Duration.ZERO));
         assertTrue(e.getMessage().startsWith("lease"), e.getMessage());
@@ -317,7 +317,7 @@ abstract class WorkUnitServiceContract {
         assertEquals(new FailedUnit(0, "/data/a.tgc", "/data/a.tgc: record 2 is cut short"), failed.get(0));
         assertEquals(WorkUnitService.MAX_TEXT_LENGTH, failed.get(1).error().length());
         assertEquals(List.of(), units.measurementsOf(f.analyst, batch.id(), 0));
-        assertEquals(Optional.empty(), units.unfinishedBatch(f.analyst, f.project.id(), f.method.id()),
+        assertEquals(Optional.empty(), units.unfinishedBatch(f.analyst, f.project.getId(), f.method.id()),
                 "a finished batch with failures no longer blocks a batch of its failed files");
         assertEquals(2, f.count("SELECT COUNT(*) FROM work_unit WHERE state = 'FAILED' AND lease_until IS NULL"
                 + " AND done_at IS NOT NULL"));

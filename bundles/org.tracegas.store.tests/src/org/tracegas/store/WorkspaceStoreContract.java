@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertNotEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertSame;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -27,7 +28,10 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.audit.VerificationReport;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Client;
+import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Project;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
@@ -51,7 +55,7 @@ abstract class WorkspaceStoreContract {
     private WorkspaceStore store;
     private Session admin;
     private Session analyst;
-    private ProjectInfo project;
+    private Project project;
 
     /** A backend on a fresh, empty database. */
     abstract TestBackend newBackend() throws Exception;
@@ -63,7 +67,7 @@ abstract class WorkspaceStoreContract {
         admin = store.users().createFirstAdministrator("admin", "Workspace Administrator", ADMIN_PASSWORD);
         store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), ANALYST_PASSWORD);
         analyst = store.users().logIn("ana", ANALYST_PASSWORD);
-        String client = store.projects().createClient(analyst, "Cement works");
+        String client = store.projects().createClient(analyst, "Cement works").getId();
         project = store.projects().createProject(analyst, client, "CW-2026-01", "Kiln stack spring campaign");
     }
 
@@ -84,7 +88,7 @@ abstract class WorkspaceStoreContract {
         store = backend.open();
         assertEquals(List.of("1", "2", "3", "4", "5", "6", "20", "21"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"version\" IS NOT NULL"
                 + " ORDER BY \"installed_rank\""));
-        assertEquals("Kiln stack spring campaign", store.projects().project(analyst, project.id()).name());
+        assertEquals("Kiln stack spring campaign", store.projects().project(analyst, project.getId()).getName());
     }
 
     @Test
@@ -98,7 +102,7 @@ abstract class WorkspaceStoreContract {
                 611.0, 650.0, 700.0), values, Ordinate.SINGLE_BEAM);
 
         for (Spectrum original : List.of(uniform, explicit)) {
-            String id = store.spectra().store(analyst, project.id(), SpectrumInput.of(SpectralContent.ABSORBANCE,
+            String id = store.spectra().store(analyst, project.getId(), SpectrumInput.of(SpectralContent.ABSORBANCE,
                     original));
             StoredSpectrum back = store.spectra().load(analyst, id);
             assertEquals(original.axis(), back.spectrum().axis());
@@ -121,7 +125,7 @@ abstract class WorkspaceStoreContract {
         double[] values = {0.1, 1.0 / 3.0, 12345.678, -2.5e-7};
         Spectrum s = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 500, 1, values.length), values,
                 Ordinate.ABSORBANCE);
-        String id = store.spectra().store(analyst, project.id(), new SpectrumInput(null, SpectralContent.ABSORBANCE,
+        String id = store.spectra().store(analyst, project.getId(), new SpectrumInput(null, SpectralContent.ABSORBANCE,
                 s, SampleEncoding.FLOAT32_LE));
         double[] back = store.spectra().load(analyst, id).spectrum().toArray();
         for (int i = 0; i < values.length; i++) {
@@ -142,13 +146,13 @@ abstract class WorkspaceStoreContract {
                 v[points - 1] = -v[0];
                 inputs.add(SpectrumInput.of(SpectralContent.ABSORBANCE, new Spectrum(axis, v, Ordinate.ABSORBANCE)));
             }
-            store.spectra().storeAll(analyst, project.id(), inputs);
+            store.spectra().storeAll(analyst, project.getId(), inputs);
         }
 
         long before = usedHeapAfterGc();
         long peak = 0;
         int seen = 0;
-        try (Stream<StoredSpectrum> stream = store.spectra().stream(analyst, project.id())) {
+        try (Stream<StoredSpectrum> stream = store.spectra().stream(analyst, project.getId())) {
             Iterator<StoredSpectrum> it = stream.iterator();
             while (it.hasNext()) {
                 Spectrum s = it.next().spectrum();
@@ -180,7 +184,7 @@ abstract class WorkspaceStoreContract {
                 "compound=CO\nregion=2050-2200\nresidualLimit=0.01\n", "narrower region before first use");
         assertEquals(v1.rowVersion() + 1, draft.rowVersion());
 
-        ResultInfo result = store.results().record(analyst, project.id(), result(v1.id(), library.id()));
+        ResultInfo result = store.results().record(analyst, project.getId(), result(v1.id(), library.id()));
         assertTrue(versions.version(v1.id()).frozen());
         assertTrue(versions.version(library.id()).frozen());
         long frozenRow = versions.version(v1.id()).rowVersion();
@@ -203,7 +207,7 @@ abstract class WorkspaceStoreContract {
         assertEquals("0.01", diff.removed().get("residualLimit"));
         assertEquals(Set.of("region"), diff.changed().keySet());
 
-        ResultInfo stored = store.results().results(analyst, project.id()).get(0);
+        ResultInfo stored = store.results().results(analyst, project.getId()).get(0);
         assertEquals(result.id(), stored.id());
         assertEquals(v1.id(), stored.values().methodVersionId());
         assertEquals(library.id(), stored.values().libraryVersionId());
@@ -227,7 +231,7 @@ abstract class WorkspaceStoreContract {
         assertTrue(assertThrows(LoginFailedException.class,
                 () -> store.users().logIn("ana", ANALYST_PASSWORD)).locked());
         assertTrue(store.users().user(analyst.userId()).locked());
-        assertThrows(AccessDeniedException.class, () -> store.projects().project(analyst, project.id()));
+        assertThrows(AccessDeniedException.class, () -> store.projects().project(analyst, project.getId()));
         assertEquals(List.of("10"), column("SELECT COUNT(*) FROM audit_record WHERE action = 'REFUSED'"
                 + " AND object_id = '" + analyst.userId() + "'"));
 
@@ -256,44 +260,45 @@ abstract class WorkspaceStoreContract {
         Session reviewer = store.users().logIn("rita", "reviewer-pass".toCharArray());
         Spectrum s = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1000, 1, 3), new double[] {1, 2, 3},
                 Ordinate.ABSORBANCE);
-        String id = store.spectra().store(analyst, project.id(), SpectrumInput.of(SpectralContent.ABSORBANCE, s));
+        String id = store.spectra().store(analyst, project.getId(), SpectrumInput.of(SpectralContent.ABSORBANCE, s));
 
         AccessDeniedException denied = assertThrows(AccessDeniedException.class,
-                () -> store.projects().project(reviewer, project.id()));
+                () -> store.projects().project(reviewer, project.getId()));
         assertTrue(denied.getMessage().contains("rita") && denied.getMessage().contains("CW-2026-01"),
                 denied.getMessage());
         assertThrows(AccessDeniedException.class, () -> store.spectra().load(reviewer, id));
-        assertThrows(AccessDeniedException.class, () -> store.spectra().stream(reviewer, project.id()));
+        assertThrows(AccessDeniedException.class, () -> store.spectra().stream(reviewer, project.getId()));
         assertThrows(AccessDeniedException.class,
-                () -> store.projects().grant(reviewer, project.id(), reviewer.userId(), AccessLevel.WRITE));
+                () -> store.projects().grant(reviewer, project.getId(), reviewer.userId(), AccessLevel.WRITE));
 
-        store.projects().grant(analyst, project.id(), reviewer.userId(), AccessLevel.READ);
-        assertEquals(project.id(), store.projects().project(reviewer, project.id()).id());
+        store.projects().grant(analyst, project.getId(), reviewer.userId(), AccessLevel.READ);
+        assertEquals(project.getId(), store.projects().project(reviewer, project.getId()).getId());
         assertEquals(s, store.spectra().load(reviewer, id).spectrum());
         assertThrows(AccessDeniedException.class,
-                () -> store.projects().rename(reviewer, project.id(), project.rowVersion(), "Renamed"));
+                () -> store.projects().rename(reviewer, project.getId(), project.getRowVersion(), "Renamed"));
         assertThrows(AccessDeniedException.class,
-                () -> store.spectra().store(reviewer, project.id(), SpectrumInput.of(SpectralContent.ABSORBANCE, s)));
+                () -> store.spectra().store(reviewer, project.getId(), SpectrumInput.of(SpectralContent.ABSORBANCE,
+                        s)));
         assertThrows(AccessDeniedException.class, () -> store.users().createUser(analyst, "eve", "Eve",
                 Set.of(Role.ADMINISTRATOR), "eve-password".toCharArray()));
     }
 
     @Test
     void staleWriterGetsConcurrentChangeAndNothingIsOverwritten() {
-        ProjectInfo seenByFirst = store.projects().project(analyst, project.id());
-        ProjectInfo seenBySecond = store.projects().project(analyst, project.id());
-        ProjectInfo renamed = store.projects().rename(analyst, project.id(), seenByFirst.rowVersion(), "First name");
-        assertEquals(seenByFirst.rowVersion() + 1, renamed.rowVersion());
+        Project seenByFirst = store.projects().project(analyst, project.getId());
+        Project seenBySecond = store.projects().project(analyst, project.getId());
+        Project renamed = store.projects().rename(analyst, project.getId(), seenByFirst.getRowVersion(), "First name");
+        assertEquals(seenByFirst.getRowVersion() + 1, renamed.getRowVersion());
 
         ConcurrentChangeException e = assertThrows(ConcurrentChangeException.class,
-                () -> store.projects().rename(analyst, project.id(), seenBySecond.rowVersion(), "Second name"));
+                () -> store.projects().rename(analyst, project.getId(), seenBySecond.getRowVersion(), "Second name"));
         assertEquals("project", e.objectType());
-        assertEquals(project.id(), e.objectId());
-        assertEquals(seenBySecond.rowVersion(), e.expectedVersion());
-        assertEquals(renamed.rowVersion(), e.currentVersion());
-        assertTrue(e.getMessage().contains(project.id()) && e.getMessage().contains("version 0")
+        assertEquals(project.getId(), e.objectId());
+        assertEquals(seenBySecond.getRowVersion(), e.expectedVersion());
+        assertEquals(renamed.getRowVersion(), e.currentVersion());
+        assertTrue(e.getMessage().contains(project.getId()) && e.getMessage().contains("version 0")
                 && e.getMessage().contains("version is 1"), e.getMessage());
-        assertEquals("First name", store.projects().project(analyst, project.id()).name());
+        assertEquals("First name", store.projects().project(analyst, project.getId()).getName());
 
         UserInfo user = store.users().user(analyst.userId());
         store.users().changeRoles(admin, user.id(), user.rowVersion(), Set.of(Role.ANALYST, Role.REVIEWER));
@@ -304,7 +309,7 @@ abstract class WorkspaceStoreContract {
 
     @Test
     void failedBatchRollsBackSpectraAndTheirAuditRecords() throws Exception {
-        String measurement = store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE,
+        String measurement = store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.SAMPLE,
                 Instant.parse("2026-04-01T08:00:00Z"), 453.15, 1013.0);
         Spectrum s = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1000, 1, 2), new double[] {1, 2},
                 Ordinate.ABSORBANCE);
@@ -314,12 +319,12 @@ abstract class WorkspaceStoreContract {
         SpectrumInput bad = new SpectrumInput("no-such-measurement", SpectralContent.ABSORBANCE, s,
                 SampleEncoding.FLOAT64_LE);
 
-        assertThrows(StoreException.class, () -> store.spectra().storeAll(analyst, project.id(),
+        assertThrows(StoreException.class, () -> store.spectra().storeAll(analyst, project.getId(),
                 List.of(good, good, bad)));
         assertEquals(List.of("0"), column("SELECT COUNT(*) FROM spectral_data"));
         assertEquals(List.of("0"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'spectral-data'"));
 
-        List<String> ids = store.spectra().storeAll(analyst, project.id(), List.of(good, good));
+        List<String> ids = store.spectra().storeAll(analyst, project.getId(), List.of(good, good));
         assertEquals(List.of("2"), column("SELECT COUNT(*) FROM spectral_data"));
         assertEquals(ids.stream().sorted().toList(), column("SELECT object_id FROM audit_record"
                 + " WHERE object_type = 'spectral-data' ORDER BY object_id"));
@@ -327,18 +332,18 @@ abstract class WorkspaceStoreContract {
 
     @Test
     void everyChangeWritesItsAuditRecordWithOldAndNewValues() throws Exception {
-        ProjectInfo renamed = store.projects().rename(analyst, project.id(), project.rowVersion(), "Kiln stack");
+        Project renamed = store.projects().rename(analyst, project.getId(), project.getRowVersion(), "Kiln stack");
         try (Connection c = backend.raw(); PreparedStatement ps = c.prepareStatement(
                 "SELECT user_id, action, object_version, old_value, new_value FROM audit_record"
                         + " WHERE object_type = 'project' AND object_id = ? ORDER BY seq")) {
-            ps.setString(1, project.id());
+            ps.setString(1, project.getId());
             try (ResultSet rs = ps.executeQuery()) {
                 assertTrue(rs.next());
                 assertEquals("CREATE", rs.getString("action"));
                 assertTrue(rs.next());
                 assertEquals(analyst.userId(), rs.getString("user_id"));
                 assertEquals("CHANGE", rs.getString("action"));
-                assertEquals(renamed.rowVersion(), rs.getLong("object_version"));
+                assertEquals(renamed.getRowVersion(), rs.getLong("object_version"));
                 assertTrue(rs.getString("old_value").contains("name=Kiln stack spring campaign\n"));
                 assertTrue(rs.getString("new_value").contains("name=Kiln stack\n"));
                 assertFalse(rs.next());
@@ -346,27 +351,33 @@ abstract class WorkspaceStoreContract {
         }
         // a refused change leaves no record
         assertThrows(ConcurrentChangeException.class,
-                () -> store.projects().rename(analyst, project.id(), project.rowVersion(), "Stale"));
-        assertEquals(List.of("3"), column("SELECT COUNT(*) FROM audit_record WHERE object_id = '" + project.id()
-                + "' OR object_id LIKE '" + project.id() + "/%'"));
+                () -> store.projects().rename(analyst, project.getId(), project.getRowVersion(), "Stale"));
+        assertEquals(List.of("3"), column("SELECT COUNT(*) FROM audit_record WHERE object_id = '" + project.getId()
+                + "' OR object_id LIKE '" + project.getId() + "/%'"));
     }
 
     @Test
     void lookUpsFindProjectsMeasurementsAndNewestVersions() {
         assertTrue(store.users().hasUsers());
-        assertEquals(project, store.projects().findByCode(analyst, "CW-2026-01").orElseThrow());
+        Project found = store.projects().findByCode(analyst, "CW-2026-01").orElseThrow();
+        assertEquals(List.of(project.getId(), project.getCode(), project.getName(), project.getClient().getId()),
+                List.of(found.getId(), found.getCode(), found.getName(), found.getClient().getId()));
         assertTrue(store.projects().findByCode(analyst, "NO-SUCH-CODE").isEmpty());
 
         Instant later = Instant.parse("2026-04-01T09:00:00Z");
         Instant earlier = Instant.parse("2026-04-01T08:00:00Z");
-        String second = store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE, later,
+        String second = store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.SAMPLE, later,
                 453.15, 1013.0);
-        String first = store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.BACKGROUND,
+        String first = store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.BACKGROUND,
                 earlier, 453.0, 1012.5);
-        List<MeasurementInfo> measurements = store.projects().measurements(analyst, project.id());
-        assertEquals(List.of(first, second), measurements.stream().map(MeasurementInfo::id).toList());
-        assertEquals(new MeasurementInfo(first, project.id(), MeasurementKind.BACKGROUND, earlier, 453.0, 1012.5,
-                analyst.userId()), measurements.get(0));
+        List<Measurement> measurements = store.projects().measurements(analyst, project.getId());
+        assertEquals(List.of(first, second), measurements.stream().map(Measurement::getId).toList());
+        Measurement m = measurements.get(0);
+        assertEquals(List.of(first, project.getId(), MeasurementKind.BACKGROUND, earlier, 453.0, 1012.5,
+                analyst.userId()), List.of(m.getId(), m.getProject().getId(), m.getKind(), m.getTime(),
+                        m.getCellTemperature(), m.getCellPressure(), m.getOperatorId()));
+        assertSame(m.getProject(), measurements.get(1).getProject(), "the measurements are in one project");
+        assertFalse(m.isSetContent(), "a measurement not imported from a file has no values of its own");
 
         VersionInfo v1 = store.versions().create(analyst, VersionKind.METHOD, "SO2", "compound=SO2\n", "first");
         VersionInfo v2 = store.versions().revise(analyst, v1.id(), "compound=SO2\nregion=1100-1200\n", "region");
@@ -384,23 +395,31 @@ abstract class WorkspaceStoreContract {
 
     @Test
     void projectAndClientListingsShowOnlyWhatTheActorMayReadOrderedByCodeAndName() {
-        String glass = store.projects().createClient(admin, "Float glass plant");
-        ProjectInfo furnace = store.projects().createProject(admin, glass, "AB-2026-07", "Furnace flue");
-        ProjectInfo hidden = store.projects().createProject(admin, glass, "ZZ-2026-01", "Not granted to ana");
-        ProjectInfo secondCement = store.projects().createProject(analyst, project.clientId(), "CW-2025-11",
+        String glass = store.projects().createClient(admin, "Float glass plant").getId();
+        Project furnace = store.projects().createProject(admin, glass, "AB-2026-07", "Furnace flue");
+        Project hidden = store.projects().createProject(admin, glass, "ZZ-2026-01", "Not granted to ana");
+        Project secondCement = store.projects().createProject(analyst, project.getClient().getId(), "CW-2025-11",
                 "Kiln stack autumn campaign");
 
         // ana created the two CW projects and holds no grant on the glass plant's projects yet
-        assertEquals(List.of(secondCement, project), store.projects().projects(analyst));
-        assertEquals(List.of(new ClientInfo(project.clientId(), "Cement works")),
-                store.projects().clients(analyst));
+        List<Project> readable = store.projects().projects(analyst);
+        assertEquals(List.of(secondCement.getId(), project.getId()), readable.stream().map(Project::getId).toList());
+        assertSame(readable.get(0).getClient(), readable.get(1).getClient(), "one client object per client");
+        List<Client> clients = store.projects().clients(analyst);
+        assertEquals(List.of(project.getClient().getId()), clients.stream().map(Client::getId).toList());
+        assertEquals("Cement works", clients.get(0).getName());
+        assertEquals(List.of("CW-2025-11", "CW-2026-01"),
+                clients.get(0).getProjects().stream().map(Project::getCode).toList());
 
-        store.projects().grant(admin, furnace.id(), analyst.userId(), AccessLevel.READ);
+        store.projects().grant(admin, furnace.getId(), analyst.userId(), AccessLevel.READ);
         assertEquals(List.of("AB-2026-07", "CW-2025-11", "CW-2026-01"),
-                store.projects().projects(analyst).stream().map(ProjectInfo::code).toList());
+                store.projects().projects(analyst).stream().map(Project::getCode).toList());
         assertEquals(List.of("Cement works", "Float glass plant"),
-                store.projects().clients(analyst).stream().map(ClientInfo::name).toList());
-        assertEquals(List.of(furnace, hidden), store.projects().projects(admin));
+                store.projects().clients(analyst).stream().map(Client::getName).toList());
+        assertEquals(List.of(furnace.getId(), hidden.getId()),
+                store.projects().projects(admin).stream().map(Project::getId).toList());
+        assertEquals(List.of("AB-2026-07"), store.projects().clients(analyst).get(1).getProjects().stream()
+                .map(Project::getCode).toList(), "a client holds only the projects the actor may read");
 
         store.users().createUser(admin, "nell", "Nell Newcomer", Set.of(Role.REVIEWER), "newcomer-pass".toCharArray());
         Session newcomer = store.users().logIn("nell", "newcomer-pass".toCharArray());
@@ -419,12 +438,12 @@ abstract class WorkspaceStoreContract {
         NewResult wrongKind = result(library.id(), library.id()); // a library version given as method version
 
         assertThrows(IllegalArgumentException.class,
-                () -> store.results().recordAll(analyst, project.id(), List.of(good, wrongKind)));
-        assertTrue(store.results().results(analyst, project.id()).isEmpty());
+                () -> store.results().recordAll(analyst, project.getId(), List.of(good, wrongKind)));
+        assertTrue(store.results().results(analyst, project.getId()).isEmpty());
         assertFalse(store.versions().version(method.id()).frozen(), "the rolled-back batch froze nothing");
         assertEquals(List.of("0"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result'"));
 
-        List<ResultInfo> stored = store.results().recordAll(analyst, project.id(), List.of(good, good));
+        List<ResultInfo> stored = store.results().recordAll(analyst, project.getId(), List.of(good, good));
         assertEquals(2, stored.size());
         assertEquals(List.of("2"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result'"));
         assertTrue(store.versions().version(method.id()).frozen());
@@ -432,7 +451,7 @@ abstract class WorkspaceStoreContract {
 
     @Test
     void auditTrailOfTheStoreVerifiesIntact() {
-        store.projects().rename(analyst, project.id(), project.rowVersion(), "Kiln stack");
+        store.projects().rename(analyst, project.getId(), project.getRowVersion(), "Kiln stack");
         VerificationReport report = store.verifyAuditTrail();
         assertTrue(report.intact(), report.toString());
         // first administrator, analyst, log-in, client, project, grant, rename

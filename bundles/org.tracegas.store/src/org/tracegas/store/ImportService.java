@@ -3,6 +3,8 @@ package org.tracegas.store;
 import java.util.List;
 import java.util.Optional;
 
+import org.tracegas.model.Measurement;
+
 /**
  * The lab's own files in a project: each kept whole under the SHA-256 of its bytes, each of its records a
  * measurement that names the file. Importing the same bytes again adds nothing.
@@ -15,11 +17,14 @@ public interface ImportService {
      * the file gets one naming its measurements. When the project holds the same bytes already, nothing is
      * stored and the file as first imported is returned, with {@link ImportedFile#added()} false.
      *
-     * @param measurements the file's records, at least one, in file order
-     * @throws IllegalArgumentException naming the index of a null measurement, or if there is none
+     * @param measurements the file's records, at least one, in file order: each with kind, time, cell
+     *                     conditions, title, labels, content and spectrum (see
+     *                     {@link MeasurementChecks#requireImportable}); the store sets nothing in them
+     * @throws IllegalArgumentException naming the index (and field) of a missing or incomplete measurement, or
+     *                                  if there is none
      * @throws AccessDeniedException    without write access to the project
      */
-    ImportedFile importFile(Session actor, String projectId, RawFile file, List<NewMeasurement> measurements);
+    ImportedFile importFile(Session actor, String projectId, RawFile file, List<Measurement> measurements);
 
     /**
      * The file of the project with these bytes, if it was imported.
@@ -37,9 +42,10 @@ public interface ImportService {
     byte[] content(Session actor, String projectId, String sha256);
 
     /**
-     * The project's measurements imported from files, in time order (then file and record).
+     * The project's measurements imported from files, in time order (then file and record), each in the project
+     * and with its title, labels, content, stored spectrum and source file (name, SHA-256 and record).
      *
      * @throws AccessDeniedException without read access to the project
      */
-    List<SourcedMeasurement> measurements(Session actor, String projectId);
+    List<Measurement> measurements(Session actor, String projectId);
 }

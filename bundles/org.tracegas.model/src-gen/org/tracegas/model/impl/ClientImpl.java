@@ -14,7 +14,7 @@ import org.eclipse.emf.ecore.InternalEObject;
 
 import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
-import org.eclipse.emf.ecore.util.EObjectContainmentEList;
+import org.eclipse.emf.ecore.util.EObjectContainmentWithInverseEList;
 import org.eclipse.emf.ecore.util.InternalEList;
 
 import org.tracegas.model.Client;
@@ -160,9 +160,24 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 	@Override
 	public EList<Project> getProjects() {
 		if (projects == null) {
-			projects = new EObjectContainmentEList<Project>(Project.class, this, WorkspacePackage.CLIENT__PROJECTS);
+			projects = new EObjectContainmentWithInverseEList<Project>(Project.class, this, WorkspacePackage.CLIENT__PROJECTS, WorkspacePackage.PROJECT__CLIENT);
 		}
 		return projects;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@SuppressWarnings("unchecked")
+	@Override
+	public NotificationChain eInverseAdd(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
+		switch (featureID) {
+			case WorkspacePackage.CLIENT__PROJECTS:
+				return ((InternalEList<InternalEObject>)(InternalEList<?>)getProjects()).basicAdd(otherEnd, msgs);
+		}
+		return super.eInverseAdd(otherEnd, featureID, msgs);
 	}
 
 	/**

@@ -16,9 +16,11 @@ import org.eclipse.emf.ecore.InternalEObject;
 
 import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
-import org.eclipse.emf.ecore.util.EObjectContainmentEList;
+import org.eclipse.emf.ecore.util.EObjectContainmentWithInverseEList;
+import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.eclipse.emf.ecore.util.InternalEList;
 
+import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
 import org.tracegas.model.WorkspacePackage;
@@ -32,6 +34,7 @@ import org.tracegas.model.WorkspacePackage;
  * </p>
  * <ul>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getCode <em>Code</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ProjectImpl#getClient <em>Client</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getEnd <em>End</em>}</li>
@@ -179,6 +182,49 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @generated
 	 */
 	@Override
+	public Client getClient() {
+		if (eContainerFeatureID() != WorkspacePackage.PROJECT__CLIENT) return null;
+		return (Client)eInternalContainer();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public NotificationChain basicSetClient(Client newClient, NotificationChain msgs) {
+		msgs = eBasicSetContainer((InternalEObject)newClient, WorkspacePackage.PROJECT__CLIENT, msgs);
+		return msgs;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setClient(Client newClient) {
+		if (newClient != eInternalContainer() || (eContainerFeatureID() != WorkspacePackage.PROJECT__CLIENT && newClient != null)) {
+			if (EcoreUtil.isAncestor(this, newClient))
+				throw new IllegalArgumentException("Recursive containment not allowed for " + toString());
+			NotificationChain msgs = null;
+			if (eInternalContainer() != null)
+				msgs = eBasicRemoveFromContainer(msgs);
+			if (newClient != null)
+				msgs = ((InternalEObject)newClient).eInverseAdd(this, WorkspacePackage.CLIENT__PROJECTS, Client.class, msgs);
+			msgs = basicSetClient(newClient, msgs);
+			if (msgs != null) msgs.dispatch();
+		}
+		else if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.PROJECT__CLIENT, newClient, newClient));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public String getName() {
 		return name;
 	}
@@ -250,9 +296,28 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	@Override
 	public EList<Measurement> getMeasurements() {
 		if (measurements == null) {
-			measurements = new EObjectContainmentEList<Measurement>(Measurement.class, this, WorkspacePackage.PROJECT__MEASUREMENTS);
+			measurements = new EObjectContainmentWithInverseEList<Measurement>(Measurement.class, this, WorkspacePackage.PROJECT__MEASUREMENTS, WorkspacePackage.MEASUREMENT__PROJECT);
 		}
 		return measurements;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@SuppressWarnings("unchecked")
+	@Override
+	public NotificationChain eInverseAdd(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
+		switch (featureID) {
+			case WorkspacePackage.PROJECT__CLIENT:
+				if (eInternalContainer() != null)
+					msgs = eBasicRemoveFromContainer(msgs);
+				return basicSetClient((Client)otherEnd, msgs);
+			case WorkspacePackage.PROJECT__MEASUREMENTS:
+				return ((InternalEList<InternalEObject>)(InternalEList<?>)getMeasurements()).basicAdd(otherEnd, msgs);
+		}
+		return super.eInverseAdd(otherEnd, featureID, msgs);
 	}
 
 	/**
@@ -263,6 +328,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
+			case WorkspacePackage.PROJECT__CLIENT:
+				return basicSetClient(null, msgs);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return ((InternalEList<?>)getMeasurements()).basicRemove(otherEnd, msgs);
 		}
@@ -275,10 +342,26 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @generated
 	 */
 	@Override
+	public NotificationChain eBasicRemoveFromContainerFeature(NotificationChain msgs) {
+		switch (eContainerFeatureID()) {
+			case WorkspacePackage.PROJECT__CLIENT:
+				return eInternalContainer().eInverseRemove(this, WorkspacePackage.CLIENT__PROJECTS, Client.class, msgs);
+		}
+		return super.eBasicRemoveFromContainerFeature(msgs);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case WorkspacePackage.PROJECT__CODE:
 				return getCode();
+			case WorkspacePackage.PROJECT__CLIENT:
+				return getClient();
 			case WorkspacePackage.PROJECT__NAME:
 				return getName();
 			case WorkspacePackage.PROJECT__START:
@@ -302,6 +385,9 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 		switch (featureID) {
 			case WorkspacePackage.PROJECT__CODE:
 				setCode((String)newValue);
+				return;
+			case WorkspacePackage.PROJECT__CLIENT:
+				setClient((Client)newValue);
 				return;
 			case WorkspacePackage.PROJECT__NAME:
 				setName((String)newValue);
@@ -331,6 +417,9 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 			case WorkspacePackage.PROJECT__CODE:
 				setCode(CODE_EDEFAULT);
 				return;
+			case WorkspacePackage.PROJECT__CLIENT:
+				setClient((Client)null);
+				return;
 			case WorkspacePackage.PROJECT__NAME:
 				setName(NAME_EDEFAULT);
 				return;
@@ -357,6 +446,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 		switch (featureID) {
 			case WorkspacePackage.PROJECT__CODE:
 				return CODE_EDEFAULT == null ? code != null : !CODE_EDEFAULT.equals(code);
+			case WorkspacePackage.PROJECT__CLIENT:
+				return getClient() != null;
 			case WorkspacePackage.PROJECT__NAME:
 				return NAME_EDEFAULT == null ? name != null : !NAME_EDEFAULT.equals(name);
 			case WorkspacePackage.PROJECT__START:

@@ -31,6 +31,8 @@ import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.model.WorkspacePackage;
 
+import org.tracegas.spectrum.Spectrum;
+
 /**
  * <!-- begin-user-doc -->
  * An implementation of the model <b>Package</b>.
@@ -149,6 +151,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EDataType instantEDataType = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EDataType spectrumEDataType = null;
 
 	/**
 	 * Creates an instance of the model <b>Package</b>, registered with
@@ -356,8 +365,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getProject_Name() {
-		return (EAttribute)projectEClass.getEStructuralFeatures().get(1);
+	public EReference getProject_Client() {
+		return (EReference)projectEClass.getEStructuralFeatures().get(1);
 	}
 
 	/**
@@ -366,7 +375,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getProject_Start() {
+	public EAttribute getProject_Name() {
 		return (EAttribute)projectEClass.getEStructuralFeatures().get(2);
 	}
 
@@ -376,7 +385,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getProject_End() {
+	public EAttribute getProject_Start() {
 		return (EAttribute)projectEClass.getEStructuralFeatures().get(3);
 	}
 
@@ -386,8 +395,18 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EAttribute getProject_End() {
+		return (EAttribute)projectEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EReference getProject_Measurements() {
-		return (EReference)projectEClass.getEStructuralFeatures().get(4);
+		return (EReference)projectEClass.getEStructuralFeatures().get(5);
 	}
 
 	/**
@@ -406,8 +425,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getMeasurement_Kind() {
-		return (EAttribute)measurementEClass.getEStructuralFeatures().get(0);
+	public EReference getMeasurement_Project() {
+		return (EReference)measurementEClass.getEStructuralFeatures().get(0);
 	}
 
 	/**
@@ -416,7 +435,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getMeasurement_Time() {
+	public EAttribute getMeasurement_Kind() {
 		return (EAttribute)measurementEClass.getEStructuralFeatures().get(1);
 	}
 
@@ -426,7 +445,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getMeasurement_CellTemperature() {
+	public EAttribute getMeasurement_Time() {
 		return (EAttribute)measurementEClass.getEStructuralFeatures().get(2);
 	}
 
@@ -436,8 +455,108 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getMeasurement_CellPressure() {
+	public EAttribute getMeasurement_CellTemperature() {
 		return (EAttribute)measurementEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMeasurement_CellPressure() {
+		return (EAttribute)measurementEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMeasurement_OperatorId() {
+		return (EAttribute)measurementEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMeasurement_Title() {
+		return (EAttribute)measurementEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getMeasurement_Labels() {
+		return (EReference)measurementEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMeasurement_Content() {
+		return (EAttribute)measurementEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMeasurement_SpectrumId() {
+		return (EAttribute)measurementEClass.getEStructuralFeatures().get(9);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMeasurement_Spectrum() {
+		return (EAttribute)measurementEClass.getEStructuralFeatures().get(10);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMeasurement_SourceFile() {
+		return (EAttribute)measurementEClass.getEStructuralFeatures().get(11);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMeasurement_SourceSha256() {
+		return (EAttribute)measurementEClass.getEStructuralFeatures().get(12);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMeasurement_SourceRecord() {
+		return (EAttribute)measurementEClass.getEStructuralFeatures().get(13);
 	}
 
 	/**
@@ -716,6 +835,16 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EDataType getSpectrum() {
+		return spectrumEDataType;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public WorkspaceFactory getWorkspaceFactory() {
 		return (WorkspaceFactory)getEFactoryInstance();
 	}
@@ -756,16 +885,27 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 
 		projectEClass = createEClass(PROJECT);
 		createEAttribute(projectEClass, PROJECT__CODE);
+		createEReference(projectEClass, PROJECT__CLIENT);
 		createEAttribute(projectEClass, PROJECT__NAME);
 		createEAttribute(projectEClass, PROJECT__START);
 		createEAttribute(projectEClass, PROJECT__END);
 		createEReference(projectEClass, PROJECT__MEASUREMENTS);
 
 		measurementEClass = createEClass(MEASUREMENT);
+		createEReference(measurementEClass, MEASUREMENT__PROJECT);
 		createEAttribute(measurementEClass, MEASUREMENT__KIND);
 		createEAttribute(measurementEClass, MEASUREMENT__TIME);
 		createEAttribute(measurementEClass, MEASUREMENT__CELL_TEMPERATURE);
 		createEAttribute(measurementEClass, MEASUREMENT__CELL_PRESSURE);
+		createEAttribute(measurementEClass, MEASUREMENT__OPERATOR_ID);
+		createEAttribute(measurementEClass, MEASUREMENT__TITLE);
+		createEReference(measurementEClass, MEASUREMENT__LABELS);
+		createEAttribute(measurementEClass, MEASUREMENT__CONTENT);
+		createEAttribute(measurementEClass, MEASUREMENT__SPECTRUM_ID);
+		createEAttribute(measurementEClass, MEASUREMENT__SPECTRUM);
+		createEAttribute(measurementEClass, MEASUREMENT__SOURCE_FILE);
+		createEAttribute(measurementEClass, MEASUREMENT__SOURCE_SHA256);
+		createEAttribute(measurementEClass, MEASUREMENT__SOURCE_RECORD);
 
 		contentVersionEClass = createEClass(CONTENT_VERSION);
 		createEAttribute(contentVersionEClass, CONTENT_VERSION__NUMBER);
@@ -802,6 +942,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 
 		// Create data types
 		instantEDataType = createEDataType(INSTANT);
+		spectrumEDataType = createEDataType(SPECTRUM);
 	}
 
 	/**
@@ -854,20 +995,31 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEClass(clientEClass, Client.class, "Client", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getClient_Name(), ecorePackage.getEString(), "name", null, 0, 1, Client.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getClient_Contact(), ecorePackage.getEString(), "contact", null, 0, 1, Client.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
-		initEReference(getClient_Projects(), this.getProject(), null, "projects", null, 0, -1, Client.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getClient_Projects(), this.getProject(), this.getProject_Client(), "projects", null, 0, -1, Client.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(projectEClass, Project.class, "Project", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getProject_Code(), ecorePackage.getEString(), "code", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getProject_Client(), this.getClient(), this.getClient_Projects(), "client", null, 0, 1, Project.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getProject_Name(), ecorePackage.getEString(), "name", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getProject_Start(), this.getInstant(), "start", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getProject_End(), this.getInstant(), "end", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
-		initEReference(getProject_Measurements(), this.getMeasurement(), null, "measurements", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getProject_Measurements(), this.getMeasurement(), this.getMeasurement_Project(), "measurements", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(measurementEClass, Measurement.class, "Measurement", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEReference(getMeasurement_Project(), this.getProject(), this.getProject_Measurements(), "project", null, 0, 1, Measurement.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMeasurement_Kind(), this.getMeasurementKind(), "kind", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMeasurement_Time(), this.getInstant(), "time", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMeasurement_CellTemperature(), ecorePackage.getEDouble(), "cellTemperature", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMeasurement_CellPressure(), ecorePackage.getEDouble(), "cellPressure", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMeasurement_OperatorId(), ecorePackage.getEString(), "operatorId", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMeasurement_Title(), ecorePackage.getEString(), "title", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getMeasurement_Labels(), ecorePackage.getEStringToStringMapEntry(), null, "labels", null, 0, -1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMeasurement_Content(), this.getSpectralContent(), "content", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMeasurement_SpectrumId(), ecorePackage.getEString(), "spectrumId", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMeasurement_Spectrum(), this.getSpectrum(), "spectrum", null, 0, 1, Measurement.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMeasurement_SourceFile(), ecorePackage.getEString(), "sourceFile", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMeasurement_SourceSha256(), ecorePackage.getEString(), "sourceSha256", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMeasurement_SourceRecord(), ecorePackage.getEInt(), "sourceRecord", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(contentVersionEClass, ContentVersion.class, "ContentVersion", IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getContentVersion_Number(), ecorePackage.getEInt(), "number", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -934,6 +1086,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 
 		// Initialize data types
 		initEDataType(instantEDataType, Instant.class, "Instant", IS_SERIALIZABLE, !IS_GENERATED_INSTANCE_CLASS);
+		initEDataType(spectrumEDataType, Spectrum.class, "Spectrum", !IS_SERIALIZABLE, !IS_GENERATED_INSTANCE_CLASS);
 
 		// Create resource
 		createResource(eNS_URI);

@@ -24,6 +24,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Project;
 import org.tracegas.model.Role;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.spectrum.AxisUnit;
@@ -34,7 +35,6 @@ import org.tracegas.store.BatchProgress;
 import org.tracegas.store.FailedUnit;
 import org.tracegas.store.NewResult;
 import org.tracegas.store.ProcessedSpectrum;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkBatchInfo;
@@ -54,7 +54,7 @@ class WorkUnitWorkerTest {
 
     private WorkspaceStore store;
     private Session analyst;
-    private ProjectInfo project;
+    private Project project;
     private String methodId;
     private String libraryId;
 
@@ -64,7 +64,8 @@ class WorkUnitWorkerTest {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", "pw-123456".toCharArray());
         store.users().createUser(admin, "ana", "Analyst", Set.of(Role.ANALYST), "pw-234567".toCharArray());
         analyst = store.users().logIn("ana", "pw-234567".toCharArray());
-        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "P-1",
+        project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
+                "P-1",
                 "Project");
         methodId = store.versions().create(analyst, org.tracegas.store.VersionKind.METHOD, "m", "a=1\n", "t").id();
         libraryId = store.versions().create(analyst, org.tracegas.store.VersionKind.LIBRARY, "l", "b=1\n", "t").id();
@@ -91,7 +92,7 @@ class WorkUnitWorkerTest {
     }
 
     private WorkBatchInfo batch(int units) {
-        return store.workUnits().createBatch(analyst, project.id(), "test batch",
+        return store.workUnits().createBatch(analyst, project.getId(), "test batch",
                 IntStream.range(0, units).mapToObj(Integer::toString).toList());
     }
 
@@ -124,7 +125,8 @@ class WorkUnitWorkerTest {
         }
         assertEquals(IntStream.range(0, 9).boxed().toList(), done.stream().sorted().toList());
         assertEquals(new BatchProgress(0, 0, 9, 0), store.workUnits().progress(analyst, batch.id()));
-        List<Instant> times = store.projects().measurements(analyst, project.id()).stream().map(m -> m.time()).toList();
+        List<Instant> times = store.projects().measurements(analyst,
+                project.getId()).stream().map(m -> m.getTime()).toList();
         assertEquals(IntStream.range(0, 18).mapToObj(m -> Instant.EPOCH.plusSeconds(60L * m)).toList(), times);
         assertTrue(store.verifyAuditTrail().intact());
     }
@@ -160,7 +162,7 @@ class WorkUnitWorkerTest {
         assertEquals(new WorkerOutcome(1, 0, 0, true), outcome);
         assertEquals(new BatchProgress(2, 0, 1, 0), store.workUnits().progress(analyst, batch.id()),
                 "unit 1 is open again at once");
-        assertEquals(2, store.projects().measurements(analyst, project.id()).size());
+        assertEquals(2, store.projects().measurements(analyst, project.getId()).size());
     }
 
     @Test
@@ -207,7 +209,7 @@ class WorkUnitWorkerTest {
         assertFalse(progress.complete());
         assertEquals(List.of(new FailedUnit(1, "1", "file 1 is truncated")),
                 store.workUnits().failures(analyst, batch.id()));
-        assertEquals(6, store.projects().measurements(analyst, project.id()).size());
+        assertEquals(6, store.projects().measurements(analyst, project.getId()).size());
         assertTrue(store.verifyAuditTrail().intact());
     }
 

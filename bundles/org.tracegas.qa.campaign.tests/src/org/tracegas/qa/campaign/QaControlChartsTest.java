@@ -16,6 +16,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Project;
 import org.tracegas.model.Role;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.qa.checks.ZeroSpanCheck;
@@ -23,7 +24,6 @@ import org.tracegas.qa.control.ChartEvaluation;
 import org.tracegas.report.Campaign;
 import org.tracegas.report.ReportContent;
 import org.tracegas.report.campaign.ReportSignatures;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.UserInfo;
 import org.tracegas.store.VersionInfo;
@@ -95,23 +95,23 @@ class QaControlChartsTest {
             UserInfo rev = store.users().createUser(admin, "rev", "Dr. Rhea Viewer", Set.of(Role.REVIEWER),
                     "rev-pw-1234".toCharArray());
             Session analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
-            String client = store.projects().createClient(analyst, "Client");
+            String client = store.projects().createClient(analyst, "Client").getId();
             VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "stack CO", "co=1\n", "v1");
-            ProjectInfo earlier = store.projects().createProject(analyst, client, "P-1", "first campaign");
-            StoredQaChecks.store(store, analyst, earlier.id(), method.id(),
+            Project earlier = store.projects().createProject(analyst, client, "P-1", "first campaign");
+            StoredQaChecks.store(store, analyst, earlier.getId(), method.id(),
                     zeros(0.10, -0.05, 0.08, 0.02, -0.10, 0.04, 0.12, -0.02, 0.06, -0.07));
-            ProjectInfo other = store.projects().createProject(analyst, client, "P-0", "another method");
+            Project other = store.projects().createProject(analyst, client, "P-0", "another method");
             VersionInfo otherMethod = store.versions().create(analyst, VersionKind.METHOD, "other", "x=1\n", "v1");
-            StoredQaChecks.store(store, analyst, other.id(), otherMethod.id(), zeros(5, 5.5, 6, 7));
-            ProjectInfo now = store.projects().createProject(analyst, client, "P-2", "this campaign");
-            StoredQaChecks.store(store, analyst, now.id(), method.id(), zeros(0.05, 0.9, 0.0));
+            StoredQaChecks.store(store, analyst, other.getId(), otherMethod.id(), zeros(5, 5.5, 6, 7));
+            Project now = store.projects().createProject(analyst, client, "P-2", "this campaign");
+            StoredQaChecks.store(store, analyst, now.getId(), method.id(), zeros(0.05, 0.9, 0.0));
             // a campaign stored after this one is not part of its history
-            ProjectInfo later = store.projects().createProject(analyst, client, "P-3", "later campaign");
-            StoredQaChecks.store(store, analyst, later.id(), method.id(), zeros(3, 3, 3, 3, 3, 3, 3, 3, 3, 4));
+            Project later = store.projects().createProject(analyst, client, "P-3", "later campaign");
+            StoredQaChecks.store(store, analyst, later.getId(), method.id(), zeros(3, 3, 3, 3, 3, 3, 3, 3, 3, 4));
 
-            List<CheckOutcome> history = StoredQaChecks.history(store, analyst, now.id(), "stack CO");
+            List<CheckOutcome> history = StoredQaChecks.history(store, analyst, now.getId(), "stack CO");
             assertEquals(10, history.size());
-            List<CheckOutcome> current = StoredQaChecks.load(store, analyst, now.id(), method.id());
+            List<CheckOutcome> current = StoredQaChecks.load(store, analyst, now.getId(), method.id());
             List<ChartEvaluation> charts = new QaControlCharts(List.of("Zero CO", "Zero NO"), 8).evaluate(history,
                     current);
             assertEquals(1, charts.size(), "no NO readings: no chart");
@@ -124,17 +124,17 @@ class QaControlChartsTest {
             Campaign campaign = new Campaign("R-7", "Client", "Plant", "Stack", LocalDate.of(2026, 3, 17),
                     LocalDate.of(2026, 3, 17), Instant.parse("2026-03-19T00:00:00Z"), "mg/m³ dry");
             ReportContent first = ReportContent.builder(campaign).controlChart(QaControlCharts.plot(e)).build();
-            store.projects().grant(analyst, now.id(), rev.id(), AccessLevel.READ);
+            store.projects().grant(analyst, now.getId(), rev.id(), AccessLevel.READ);
             Session reviewer = store.users().logIn("rev", "rev-pw-1234".toCharArray());
-            ReportSignatures.sign(store, reviewer, now.id(), first, analyst.userId(), "rev",
+            ReportSignatures.sign(store, reviewer, now.getId(), first, analyst.userId(), "rev",
                     "rev-pw-1234".toCharArray(), SignatureMeaning.REVIEWED, null);
 
-            ReportContent again = ReportSignatures.attach(store, analyst, now.id(),
+            ReportContent again = ReportSignatures.attach(store, analyst, now.getId(),
                     ReportContent.builder(campaign).controlChart(QaControlCharts.plot(e)).build(),
                     store.audit().verifyWorkspace(List.of()).requireIntact("attach the signatures"));
             assertEquals(first.contentHash(), again.signatures().get(0).signedContentHash(), "applies");
             assertTrue(again.auditAnchor().orElseThrow().sequence() > 0);
-            ReportContent changed = ReportSignatures.attach(store, analyst, now.id(),
+            ReportContent changed = ReportSignatures.attach(store, analyst, now.getId(),
                     ReportContent.builder(campaign).caution("a changed report").build(),
                     store.audit().verifyWorkspace(List.of()).requireIntact("attach the signatures"));
             assertEquals(1, changed.signatures().size());

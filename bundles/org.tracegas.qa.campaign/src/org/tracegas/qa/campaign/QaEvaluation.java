@@ -19,12 +19,12 @@ import org.tracegas.pipeline.MeasurementRole;
 import org.tracegas.pipeline.QaMeasurements;
 import org.tracegas.pipeline.ResultCorrection;
 import org.tracegas.pipeline.SpectrumChain;
+import org.tracegas.model.Measurement;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.qa.checks.CheckOutcome;
-import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -103,14 +103,14 @@ public final class QaEvaluation {
         if (!stored.isEmpty()) {
             return new Outcome(stored, true);
         }
-        List<MeasurementInfo> samples = store.projects().measurements(actor, projectId);
+        List<Measurement> samples = store.projects().measurements(actor, projectId);
         if (samples.isEmpty()) {
             throw new IllegalStateException("the project holds no processed samples yet; quantify them first");
         }
         ReferenceLibrary library = methodLibrary(store, plan, method);
         QaMeasurements fitted = qa.fit();
-        Instant first = samples.get(0).time();
-        Instant last = samples.get(samples.size() - 1).time();
+        Instant first = samples.get(0).getTime();
+        Instant last = samples.get(samples.size() - 1).getTime();
         // the readings' amounts on the basis of the results: corrected to their cell, and to the path the CTS
         // readings measured for a method that takes its path from them
         ResultCorrection correction = ResultCorrection.of(method);

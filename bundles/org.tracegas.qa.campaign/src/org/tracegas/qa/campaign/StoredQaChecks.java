@@ -34,8 +34,8 @@ public final class StoredQaChecks {
         java.time.Instant before = store.qa().checks(actor, projectId).stream().map(QaCheckInfo::recorded)
                 .min(java.util.Comparator.naturalOrder()).orElse(java.time.Instant.MAX);
         java.util.Map<String, Boolean> sameMethod = new java.util.HashMap<>();
-        return store.projects().projects(actor).stream().filter(p -> !p.id().equals(projectId))
-                .flatMap(p -> store.qa().checks(actor, p.id()).stream())
+        return store.projects().projects(actor).stream().filter(p -> !p.getId().equals(projectId))
+                .flatMap(p -> store.qa().checks(actor, p.getId()).stream())
                 .filter(c -> c.recorded().isBefore(before))
                 .filter(c -> sameMethod.computeIfAbsent(c.methodVersionId(),
                         id -> store.versions().version(id).name().equals(methodName)))

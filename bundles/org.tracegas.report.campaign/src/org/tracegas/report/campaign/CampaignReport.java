@@ -12,8 +12,8 @@ import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
-import java.util.Set;
 import java.util.Optional;
+import java.util.Set;
 import java.util.stream.Stream;
 
 import org.tracegas.importer.ImportException;
@@ -22,6 +22,7 @@ import org.tracegas.importer.sidechannel.SideChannelJoin;
 import org.tracegas.importer.sidechannel.SideChannelReader;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.method.StoredMethod;
+import org.tracegas.model.Measurement;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.qa.campaign.QaControlCharts;
 import org.tracegas.qa.campaign.QaPlan;
@@ -37,7 +38,6 @@ import org.tracegas.report.PdfReportWriter;
 import org.tracegas.report.ReportContent;
 import org.tracegas.report.SpectrumFit;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.StoredSpectrum;
 import org.tracegas.store.VersionInfo;
@@ -75,7 +75,7 @@ public final class CampaignReport {
         // the data are verified once, before they are read; the report states this verification and its anchor
         WorkspaceVerification verified = store.audit().verifyWorkspace(List.of())
                 .requireIntact("make the report of project " + projectId);
-        List<MeasurementInfo> measurements = store.projects().measurements(actor, projectId);
+        List<Measurement> measurements = store.projects().measurements(actor, projectId);
         MinuteSeries series = MinuteSeries.of(measurements, store.results().results(actor, projectId),
                 methodVersion.id());
         if (series.isEmpty()) {
@@ -190,13 +190,13 @@ public final class CampaignReport {
     }
 
     /** The plan's example sample fitted again from its stored absorbance; null when the plan names none. */
-    private SpectrumFit exampleFit(List<MeasurementInfo> measurements, StoredMethod method, ReportPlan plan)
+    private SpectrumFit exampleFit(List<Measurement> measurements, StoredMethod method, ReportPlan plan)
             throws FileFormatException {
         if (plan.exampleTime() == null) {
             return null;
         }
-        String measurement = measurements.stream().filter(m -> m.time().equals(plan.exampleTime()))
-                .map(MeasurementInfo::id).findFirst().orElseThrow(() -> new FileFormatException(plan.file(), 0,
+        String measurement = measurements.stream().filter(m -> m.getTime().equals(plan.exampleTime()))
+                .map(Measurement::getId).findFirst().orElseThrow(() -> new FileFormatException(plan.file(), 0,
                         "example-fit", "no stored sample at " + plan.exampleTime()));
         Optional<StoredSpectrum> stored;
         try (Stream<StoredSpectrum> all = store.spectra().stream(actor, projectId)) {

@@ -7,8 +7,8 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 
+import org.tracegas.model.Measurement;
 import org.tracegas.model.ResultFlag;
-import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.ResultConditions;
 import org.tracegas.store.ResultInfo;
 
@@ -38,11 +38,11 @@ public final class MinuteSeries {
     }
 
     /** The results made by one method version, in time order. */
-    public static MinuteSeries of(List<MeasurementInfo> measurements, List<ResultInfo> results,
+    public static MinuteSeries of(List<Measurement> measurements, List<ResultInfo> results,
             String methodVersionId) {
         Map<String, Instant> times = new HashMap<>();
-        for (MeasurementInfo m : measurements) {
-            times.put(m.id(), m.time());
+        for (Measurement m : measurements) {
+            times.put(m.getId(), m.getTime());
         }
         Map<String, TreeMap<Instant, Point>> sorted = new TreeMap<>();
         String library = null;

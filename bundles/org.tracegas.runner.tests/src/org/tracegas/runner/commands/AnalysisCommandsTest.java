@@ -180,7 +180,7 @@ class AnalysisCommandsTest {
             VersionInfo version = store.versions().latest(VersionKind.METHOD, "Stack").orElseThrow();
             StoredMethod stored = StoredMethod.parse(store.versions().content(version.id()), "test");
             assertEquals(64, version.contentHash().length());
-            String project = store.projects().findByCode(s, "P-1").orElseThrow().id();
+            String project = store.projects().findByCode(s, "P-1").orElseThrow().getId();
             MinuteSeries series = MinuteSeries.of(store.projects().measurements(s, project),
                     store.results().results(s, project), version.id());
             assertEquals(stored.libraryVersionId(), series.libraryVersionId());
@@ -213,7 +213,7 @@ class AnalysisCommandsTest {
         assertFalse(printed.contains("stored earlier"), printed);
         int checks;
         try (WorkspaceStore store = open()) {
-            checks = store.qa().checks(ana(store), store.projects().findByCode(ana(store), "P-1").orElseThrow().id())
+            checks = store.qa().checks(ana(store), store.projects().findByCode(ana(store), "P-1").orElseThrow().getId())
                     .size();
             assertTrue(checks >= 8, "CTS twice, drift, spike dilution and recovery, two zeros, noise, background age: "
                     + checks);
@@ -292,7 +292,7 @@ class AnalysisCommandsTest {
         List<org.tracegas.qa.checks.MethodDetectionLimit> limits;
         try (WorkspaceStore store = open()) {
             Session s = ana(store);
-            String project = store.projects().findByCode(s, "P-7").orElseThrow().id();
+            String project = store.projects().findByCode(s, "P-7").orElseThrow().getId();
             VersionInfo version = store.versions().latest(VersionKind.METHOD, "Zeros").orElseThrow();
             limits = org.tracegas.qa.checks.MethodDetectionLimit.fromOutcomes(
                     org.tracegas.qa.campaign.StoredQaChecks.load(store, s, project, version.id()));
@@ -406,13 +406,13 @@ class AnalysisCommandsTest {
 
     /** The mean of the stored CTS path length checks of a project. */
     private static double ctsCheckPath(WorkspaceStore store, Session s, String code) {
-        String project = store.projects().findByCode(s, code).orElseThrow().id();
+        String project = store.projects().findByCode(s, code).orElseThrow().getId();
         return store.qa().checks(s, project).stream().filter(c -> c.outcome().check().equals("CTS path length"))
                 .mapToDouble(c -> c.outcome().measured()).average().orElseThrow();
     }
 
     private static List<MinuteSeries.Point> co(WorkspaceStore store, Session s, String code, String method) {
-        String project = store.projects().findByCode(s, code).orElseThrow().id();
+        String project = store.projects().findByCode(s, code).orElseThrow().getId();
         VersionInfo version = store.versions().latest(VersionKind.METHOD, method).orElseThrow();
         return MinuteSeries.of(store.projects().measurements(s, project), store.results().results(s, project),
                 version.id()).compound("CO");
@@ -465,7 +465,7 @@ class AnalysisCommandsTest {
         assertEquals(ExitCode.CHECK_FAILED, run(concat(where, "qa", "--plan", strictPlan.toString(), "--qa-file",
                 qaFile.toString())));
         try (WorkspaceStore store = open()) {
-            String project = store.projects().findByCode(ana(store), "P-4").orElseThrow().id();
+            String project = store.projects().findByCode(ana(store), "P-4").orElseThrow().getId();
             String rule = store.qa().checks(ana(store), project).stream()
                     .filter(c -> c.outcome().check().equals("Control chart: CTS path length")).findFirst()
                     .orElseThrow().outcome().rule();
@@ -517,7 +517,7 @@ class AnalysisCommandsTest {
                 "reviewer");
         try (WorkspaceStore store = open()) {
             Session ana = ana(store);
-            store.projects().grant(ana, store.projects().findByCode(ana, "P-1").orElseThrow().id(),
+            store.projects().grant(ana, store.projects().findByCode(ana, "P-1").orElseThrow().getId(),
                     store.users().logIn("rev", "admin-pw-1".toCharArray()).userId(), AccessLevel.READ);
         }
         String[] asReviewer = where.clone();
@@ -584,16 +584,16 @@ class AnalysisCommandsTest {
                 "--background-file", qaFile.toString(), "--file", stackFile.toString());
         try (WorkspaceStore store = open()) {
             Session s = ana(store);
-            String stack = store.projects().findByCode(s, "P-5").orElseThrow().id();
+            String stack = store.projects().findByCode(s, "P-5").orElseThrow().getId();
             Map<Instant, Double> byStackPath = new java.util.HashMap<>();
             Map<String, Instant> times = new java.util.HashMap<>();
-            store.projects().measurements(s, stack).forEach(m -> times.put(m.id(), m.time()));
+            store.projects().measurements(s, stack).forEach(m -> times.put(m.getId(), m.getTime()));
             for (var r : store.results().results(s, stack)) {
                 if (r.values().compound().equals("CO")) {
                     byStackPath.put(times.get(r.values().measurementId()), r.values().concentration());
                 }
             }
-            String imported = store.projects().findByCode(s, "P-6").orElseThrow().id();
+            String imported = store.projects().findByCode(s, "P-6").orElseThrow().getId();
             int compared = 0;
             for (var row : store.analyses().rows(s, imported)) {
                 Double stackValue = byStackPath.get(row.measured());
@@ -696,7 +696,7 @@ class AnalysisCommandsTest {
         assertTrue(message.contains("line 10") && message.contains("'noise-region'"), message);
         try (WorkspaceStore store = open()) {
             assertTrue(store.qa().checks(ana(store), store.projects().findByCode(ana(store), "P-2").orElseThrow()
-                    .id()).isEmpty(), "no QA check stored");
+                    .getId()).isEmpty(), "no QA check stored");
         }
 
         Path reportPlan = folder.resolve("bad-report.plan");
@@ -745,7 +745,7 @@ class AnalysisCommandsTest {
                 qaFile.toString(), "--file", stackFile.toString())));
         assertTrue(err.toString(StandardCharsets.UTF_8).contains("--method-version"), err.toString());
         try (WorkspaceStore store = open()) {
-            String project = store.projects().findByCode(ana(store), "P-3").orElseThrow().id();
+            String project = store.projects().findByCode(ana(store), "P-3").orElseThrow().getId();
             long versions = store.results().results(ana(store), project).stream()
                     .map(r -> r.values().methodVersionId()).distinct().count();
             assertEquals(2, versions, "results of both versions, each once");

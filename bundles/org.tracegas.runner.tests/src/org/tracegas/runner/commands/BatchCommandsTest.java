@@ -17,9 +17,9 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
+import org.tracegas.model.Measurement;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.ExitCode;
-import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.NewResult;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
@@ -252,9 +252,9 @@ class BatchCommandsTest {
     /** The project's results keyed by measurement time and compound; fails on a key seen twice. */
     private static Map<String, NewResult> resultsByTimeAndCompound(WorkspaceStore store, Session actor,
             String project) {
-        String projectId = store.projects().findByCode(actor, project).orElseThrow().id();
+        String projectId = store.projects().findByCode(actor, project).orElseThrow().getId();
         Map<String, Instant> times = store.projects().measurements(actor, projectId).stream()
-                .collect(Collectors.toMap(MeasurementInfo::id, MeasurementInfo::time));
+                .collect(Collectors.toMap(Measurement::getId, Measurement::getTime));
         Map<String, NewResult> byKey = new TreeMap<>();
         for (ResultInfo r : store.results().results(actor, projectId)) {
             String key = times.get(r.values().measurementId()) + " " + r.values().compound();
@@ -264,8 +264,8 @@ class BatchCommandsTest {
     }
 
     private static Instant measurementTime(WorkspaceStore store, Session actor, String project, String id) {
-        String projectId = store.projects().findByCode(actor, project).orElseThrow().id();
-        return store.projects().measurements(actor, projectId).stream().filter(m -> m.id().equals(id)).findFirst()
-                .orElseThrow().time();
+        String projectId = store.projects().findByCode(actor, project).orElseThrow().getId();
+        return store.projects().measurements(actor, projectId).stream().filter(m -> m.getId().equals(id)).findFirst()
+                .orElseThrow().getTime();
     }
 }

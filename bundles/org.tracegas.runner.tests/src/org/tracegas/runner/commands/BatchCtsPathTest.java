@@ -21,7 +21,7 @@ import org.tracegas.pipeline.MeasurementRole;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
 import org.tracegas.runner.ExitCode;
-import org.tracegas.store.MeasurementInfo;
+import org.tracegas.model.Measurement;
 import org.tracegas.store.NewResult;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
@@ -150,9 +150,9 @@ class BatchCtsPathTest {
 
     /** A project's results by measurement time and compound. */
     private static Map<String, NewResult> results(WorkspaceStore store, Session actor, String code) {
-        String projectId = store.projects().findByCode(actor, code).orElseThrow().id();
+        String projectId = store.projects().findByCode(actor, code).orElseThrow().getId();
         Map<String, java.time.Instant> times = store.projects().measurements(actor, projectId).stream()
-                .collect(Collectors.toMap(MeasurementInfo::id, MeasurementInfo::time));
+                .collect(Collectors.toMap(Measurement::getId, Measurement::getTime));
         Map<String, NewResult> byKey = new TreeMap<>();
         for (ResultInfo r : store.results().results(actor, projectId)) {
             byKey.put(times.get(r.values().measurementId()) + " " + r.values().compound(), r.values());

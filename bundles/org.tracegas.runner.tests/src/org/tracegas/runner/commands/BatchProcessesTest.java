@@ -36,13 +36,13 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.pipeline.QuantificationSetup;
+import org.tracegas.model.Measurement;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.quantify.BatchQuantifier;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.BatchProgress;
-import org.tracegas.store.MeasurementInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.WorkspaceVerification;
@@ -147,10 +147,10 @@ class BatchProcessesTest {
                 heldUnit).get(0).replaceAll(".*:", ""), "another runner completed it");
         try (WorkspaceStore store = Workspaces.openPostgres(schemaUrl, USER, PASSWORD)) {
             Session ana = store.users().logIn("ana", BatchCampaign.PASSWORD.toCharArray());
-            String project = store.projects().findByCode(ana, "P").orElseThrow().id();
+            String project = store.projects().findByCode(ana, "P").orElseThrow().getId();
             assertEquals(new BatchProgress(0, 0, FILES, 0), store.workUnits().progress(ana, batchId));
             Map<String, Instant> times = store.projects().measurements(ana, project).stream()
-                    .collect(Collectors.toMap(MeasurementInfo::id, MeasurementInfo::time));
+                    .collect(Collectors.toMap(Measurement::getId, Measurement::getTime));
             for (int unit = 0; unit < FILES; unit++) {
                 final int f = unit;
                 assertEquals(IntStream.range(0, SAMPLES_PER_FILE).mapToObj(k -> campaign.time(f, k)).toList(),

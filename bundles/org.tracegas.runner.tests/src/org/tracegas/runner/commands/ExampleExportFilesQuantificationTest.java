@@ -19,10 +19,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.importer.StandaloneExtensions;
+import org.tracegas.model.Measurement;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
-import org.tracegas.store.SourcedMeasurement;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -82,22 +82,22 @@ class ExampleExportFilesQuantificationTest {
 
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "lab-pw-12".toCharArray());
-            String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().id();
-            Map<String, SourcedMeasurement> byId = new HashMap<>();
-            for (SourcedMeasurement m : store.imports().measurements(ana, project)) {
-                byId.put(m.measurement().id(), m);
-                assertEquals(313.15, m.measurement().cellTemperature(), "the conditions the lab gave");
+            String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().getId();
+            Map<String, Measurement> byId = new HashMap<>();
+            for (Measurement m : store.imports().measurements(ana, project)) {
+                byId.put(m.getId(), m);
+                assertEquals(313.15, m.getCellTemperature(), "the conditions the lab gave");
             }
             List<ResultInfo> results = store.results().results(ana, project);
             assertEquals(2 * SAMPLES, results.size());
             double worst = 0;
             for (ResultInfo res : results) {
-                SourcedMeasurement m = byId.get(res.values().measurementId());
-                double t = truth.get(m.fileName()).get(res.values().compound());
+                Measurement m = byId.get(res.values().measurementId());
+                double t = truth.get(m.getSourceFile()).get(res.values().compound());
                 double error = Math.abs(res.values().concentration() - t);
                 worst = Math.max(worst, error / t);
                 // the tolerance of LabJcampQuantificationTest, for the same generator and method
-                assertTrue(error <= 0.03 * t + 0.3, () -> m.fileName() + " " + res.values().compound() + ": "
+                assertTrue(error <= 0.03 * t + 0.3, () -> m.getSourceFile() + " " + res.values().compound() + ": "
                         + res.values().concentration() + " ppm, made with " + t + " ppm");
             }
             System.out.printf(Locale.ROOT, "Example FTIR exports: worst relative error %.4f over %d results%n",

@@ -18,7 +18,7 @@ import org.tracegas.runner.ExitCode;
 import org.tracegas.store.ResultConditions;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
-import org.tracegas.store.SourcedMeasurement;
+import org.tracegas.model.Measurement;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -79,9 +79,9 @@ class LabJcampCtsPathTest {
 
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "lab-pw-12".toCharArray());
-            String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().id();
+            String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().getId();
             Map<String, String> fileOf = store.imports().measurements(ana, project).stream().collect(
-                    Collectors.toMap(m -> m.measurement().id(), SourcedMeasurement::fileName));
+                    Collectors.toMap(Measurement::getId, Measurement::getSourceFile));
             List<ResultInfo> results = store.results().results(ana, project);
             assertEquals(2 * 8, results.size(), "the CTS measurements are not samples");
             for (ResultInfo x : results) {

@@ -21,7 +21,7 @@ import org.tracegas.runner.ExitCode;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
-import org.tracegas.store.SourcedMeasurement;
+import org.tracegas.model.Measurement;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -168,9 +168,9 @@ class LabJcampQaTest {
         double factor = (393.15 / 296.0) * (101.325 / 80.0);
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "lab-pw-12".toCharArray());
-            String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().id();
+            String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().getId();
             Map<String, String> fileOf = store.imports().measurements(ana, project).stream().collect(
-                    Collectors.toMap(m -> m.measurement().id(), SourcedMeasurement::fileName));
+                    Collectors.toMap(Measurement::getId, Measurement::getSourceFile));
             Map<String, Double> mdl = store.qa().checks(ana, project).stream().collect(Collectors.toMap(
                     c -> c.outcome().check(), c -> c.outcome().measured()));
             for (String compound : List.of("CO", "N2O")) {

@@ -21,12 +21,13 @@ import java.util.UUID;
 import java.util.stream.Collectors;
 
 import org.junit.jupiter.api.Test;
-import org.postgresql.ds.PGSimpleDataSource;
 import org.junit.jupiter.api.io.TempDir;
+import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.importer.delimited.DelimitedReader;
 import org.tracegas.importer.jcamp.JcampReader;
 import org.tracegas.importer.jcamp.JcampWriter;
+import org.tracegas.model.Measurement;
 import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.CommandTable;
@@ -37,7 +38,6 @@ import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.ResultConditions;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
-import org.tracegas.store.SourcedMeasurement;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -403,20 +403,20 @@ class LabJcampQuantificationTest {
      */
     static void checkStored(Lab lab, WorkspaceStore store) throws Exception {
         Session ana = store.users().logIn("ana", "lab-pw-12".toCharArray());
-        String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().id();
-        List<SourcedMeasurement> measurements = store.imports().measurements(ana, project);
+        String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().getId();
+        List<Measurement> measurements = store.imports().measurements(ana, project);
         assertEquals(SAMPLES + 1, measurements.size(), "24 samples and one background, each imported once");
-        Map<String, SourcedMeasurement> byId = measurements.stream().collect(Collectors.toMap(
-                m -> m.measurement().id(), m -> m));
+        Map<String, Measurement> byId = measurements.stream().collect(Collectors.toMap(
+                m -> m.getId(), m -> m));
         List<ResultInfo> results = store.results().results(ana, project);
         assertEquals(2 * SAMPLES, results.size());
         double worst = 0;
         for (ResultInfo r : results) {
-            SourcedMeasurement m = byId.get(r.values().measurementId());
-            double truth = lab.truthByFile.get(m.fileName()).get(r.values().compound());
+            Measurement m = byId.get(r.values().measurementId());
+            double truth = lab.truthByFile.get(m.getSourceFile()).get(r.values().compound());
             double error = Math.abs(r.values().concentration() - truth);
             worst = Math.max(worst, error / truth);
-            assertTrue(error <= 0.03 * truth + 0.3, () -> m.fileName() + " " + r.values().compound() + ": "
+            assertTrue(error <= 0.03 * truth + 0.3, () -> m.getSourceFile() + " " + r.values().compound() + ": "
                     + r.values().concentration() + " ppm, made with " + truth + " ppm");
             assertTrue(r.values().uncertainty() > 0 && Double.isFinite(r.values().uncertainty()));
             // corrected from the references' cell to the file's, EPA FTIR Protocol section 11.2 (standards notes)
@@ -445,7 +445,7 @@ class LabJcampQuantificationTest {
             ResultInfo stored = results.stream().filter(r -> r.values().measurementId().equals(f[0])
                     && r.values().compound().equals(f[3])).findFirst().orElseThrow();
             assertEquals(stored.values().concentration(), Double.parseDouble(f[4]));
-            assertEquals(byId.get(f[0]).fileName(), f[2]);
+            assertEquals(byId.get(f[0]).getSourceFile(), f[2]);
             assertEquals(stored.values().inputHash(), f[13]);
             assertEquals(313.15, Double.parseDouble(f[15]));
             assertEquals("file-label", f[16]);

@@ -90,7 +90,7 @@ class LabQuantifyKillTest {
                     && again.contains("skipped " + afterKill), again);
             try (WorkspaceStore store = Workspaces.openPostgres(schemaUrl, USER, PASSWORD)) {
                 Session ana = store.users().logIn("ana", "lab-pw-12".toCharArray());
-                String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().id();
+                String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().getId();
                 List<ResultInfo> results = store.results().results(ana, project);
                 assertEquals(2 * SAMPLES, results.size(), "one result per analyte and measurement, none twice");
                 assertEquals(SAMPLES, results.stream().map(r -> r.values().measurementId()).distinct().count());

@@ -123,14 +123,14 @@ class WorkbenchMethodVersionTest {
 
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
-            String project = store.projects().findByCode(ana, "P-W").orElseThrow().id();
+            String project = store.projects().findByCode(ana, "P-W").orElseThrow().getId();
             List<ResultInfo> results = store.results().results(ana, project);
             assertEquals(3 * CO_PPM.length, results.size(), "CO, N2O and H2O of each sample");
             assertTrue(results.stream().allMatch(r -> r.values().methodVersionId().equals(saved.id())),
                     "every result names the version saved from the editor");
             assertTrue(store.versions().version(saved.id()).frozen(), "a version with results is frozen");
             Map<String, Instant> times = new java.util.HashMap<>();
-            store.projects().measurements(ana, project).forEach(m -> times.put(m.id(), m.time()));
+            store.projects().measurements(ana, project).forEach(m -> times.put(m.getId(), m.getTime()));
             List<Double> co = results.stream().filter(r -> r.values().compound().equals("CO"))
                     .sorted(java.util.Comparator.comparing(r -> times.get(r.values().measurementId())))
                     .map(r -> r.values().concentration()).toList();

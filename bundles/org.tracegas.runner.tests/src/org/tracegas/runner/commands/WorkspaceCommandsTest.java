@@ -14,9 +14,9 @@ import java.util.Locale;
 import java.util.Map;
 
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditRecord;
-import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.importer.delimited.DelimitedReader;
 import org.tracegas.runner.CommandTable;
@@ -80,17 +80,17 @@ class WorkspaceCommandsTest {
 
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session session = store.users().logIn("ana", "ana-pw-22".toCharArray());
-            String project = store.projects().findByCode(session, "CA-1").orElseThrow().id();
+            String project = store.projects().findByCode(session, "CA-1").orElseThrow().getId();
             try (var spectra = store.spectra().stream(session, project)) {
                 assertEquals(1, spectra.count(), "only the good file's spectrum is stored, once");
             }
             var measurements = store.imports().measurements(session, project);
             assertEquals(1, measurements.size());
-            assertEquals("absorbance.csv", measurements.get(0).fileName());
-            assertEquals(296, measurements.get(0).measurement().cellTemperature());
+            assertEquals("absorbance.csv", measurements.get(0).getSourceFile());
+            assertEquals(296, measurements.get(0).getCellTemperature());
             // the stored bytes are the file's bytes
             assertEquals(java.util.Arrays.toString(Files.readAllBytes(good)), java.util.Arrays.toString(
-                    store.imports().content(session, project, measurements.get(0).fileSha256())));
+                    store.imports().content(session, project, measurements.get(0).getSourceSha256())));
             assertTrue(store.verifyAuditTrail().intact());
         }
     }

@@ -4,10 +4,10 @@ import java.nio.file.Path;
 import java.util.List;
 
 import org.tracegas.pipeline.ProjectQuantification;
+import org.tracegas.model.Project;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.UnfinishedBatchException;
 import org.tracegas.store.WorkBatchInfo;
@@ -55,13 +55,13 @@ public final class BatchSplitCommand implements Command {
         Options options = arguments.options();
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            Project project = StoredMethods.project(store, actor, options.text("--project"));
             QuantifyArguments.Checked checked;
             String description;
             try {
                 checked = arguments.check(store, actor, project,
-                        new ProjectQuantification(store, actor, project.id(), StoredMethods.SOFTWARE));
-                description = new BatchDescription(project.id(), checked.found().version().id(),
+                        new ProjectQuantification(store, actor, project.getId(), StoredMethods.SOFTWARE));
+                description = new BatchDescription(project.getId(), checked.found().version().id(),
                         arguments.backgroundFiles(), arguments.ctsPath(store, checked.found())).text();
                 requireFits(description, arguments.files());
             } catch (BadInputException e) {
@@ -70,7 +70,7 @@ public final class BatchSplitCommand implements Command {
             }
             WorkBatchInfo batch;
             try {
-                batch = store.workUnits().createBatch(actor, project.id(), checked.found().version().id(),
+                batch = store.workUnits().createBatch(actor, project.getId(), checked.found().version().id(),
                         description, arguments.files().stream().map(Path::toString).toList());
             } catch (UnfinishedBatchException e) {
                 // another runner recorded its batch between the check and now
@@ -79,7 +79,7 @@ public final class BatchSplitCommand implements Command {
             }
             context.out().println(batch.id());
             context.err().printf("Recorded batch %s: %d work units with %d samples of project %s, method '%s' "
-                    + "version %d%n", batch.id(), batch.unitCount(), checked.inputs().samples(), project.code(),
+                    + "version %d%n", batch.id(), batch.unitCount(), checked.inputs().samples(), project.getCode(),
                     checked.found().method().method().name(), checked.found().version().number());
             return ExitCode.OK;
         }

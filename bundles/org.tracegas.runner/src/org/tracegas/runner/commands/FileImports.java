@@ -11,10 +11,10 @@ import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Project;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.ImportedFile;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -87,7 +87,7 @@ final class FileImports {
      *
      * @throws BadInputException naming the file, line and label at fault; nothing of any file stored
      */
-    static Outcome importAll(WorkspaceStore store, Session actor, ProjectInfo project, ReaderRegistry readers,
+    static Outcome importAll(WorkspaceStore store, Session actor, Project project, ReaderRegistry readers,
             List<Path> files, FileMeasurements.Defaults defaults, RunnerContext context) throws BadInputException {
         return storeAll(store, actor, project, files, readAll(readers, files, defaults), context);
     }
@@ -107,14 +107,14 @@ final class FileImports {
     }
 
     /** Stores each file read that the project does not hold yet, telling which were known. */
-    static Outcome storeAll(WorkspaceStore store, Session actor, ProjectInfo project, List<Path> files,
+    static Outcome storeAll(WorkspaceStore store, Session actor, Project project, List<Path> files,
             List<FileMeasurements.Read> read, RunnerContext context) {
         int added = 0;
         int known = 0;
         List<ImportedFile> stored = new ArrayList<>(read.size());
         for (int i = 0; i < read.size(); i++) {
             FileMeasurements.Read r = read.get(i);
-            ImportedFile f = store.imports().importFile(actor, project.id(), r.file(), r.measurements());
+            ImportedFile f = store.imports().importFile(actor, project.getId(), r.file(), r.measurements());
             stored.add(f);
             if (f.added()) {
                 added++;

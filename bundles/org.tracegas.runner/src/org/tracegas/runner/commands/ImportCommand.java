@@ -6,11 +6,11 @@ import java.util.List;
 
 import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ReaderRegistry;
+import org.tracegas.model.Project;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -67,7 +67,7 @@ public final class ImportCommand implements Command {
         FileMeasurements.Defaults defaults = FileImports.defaults(options);
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            Project project = StoredMethods.project(store, actor, options.text("--project"));
             FileImports.Outcome outcome;
             try {
                 outcome = FileImports.importAll(store, actor, project, readers, files, defaults, context);
@@ -76,7 +76,7 @@ public final class ImportCommand implements Command {
                 return ExitCode.BAD_INPUT;
             }
             context.out().printf("Imported %d file(s) into project %s; %d already imported%n", outcome.added(),
-                    project.code(), outcome.known());
+                    project.getCode(), outcome.known());
             return ExitCode.OK;
         }
     }

@@ -2,12 +2,12 @@ package org.tracegas.runner.commands;
 
 import java.util.List;
 
+import org.tracegas.model.Client;
+import org.tracegas.model.Project;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
-import org.tracegas.store.ClientInfo;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -40,11 +40,12 @@ public final class ProjectAddCommand implements Command {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             // a client's second project joins the client the user already works for
             String client = options.text("--client");
-            String clientId = store.projects().clients(actor).stream().filter(c -> c.name().equals(client))
-                    .map(ClientInfo::id).findFirst().orElseGet(() -> store.projects().createClient(actor, client));
-            ProjectInfo project = store.projects().createProject(actor, clientId, options.text("--code"),
+            String clientId = store.projects().clients(actor).stream().filter(c -> c.getName().equals(client))
+                    .map(Client::getId).findFirst().orElseGet(() -> store.projects().createClient(actor,
+                            client).getId());
+            Project project = store.projects().createProject(actor, clientId, options.text("--code"),
                     options.text("--name"));
-            context.out().println("Added project " + project.code() + " (" + project.id() + ")");
+            context.out().println("Added project " + project.getCode() + " (" + project.getId() + ")");
             return ExitCode.OK;
         }
     }

@@ -10,13 +10,13 @@ import org.tracegas.qa.campaign.QaEvaluation;
 import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.importer.ImportException;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.model.Project;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -64,19 +64,19 @@ public final class QaCommand implements Command {
                 "--method-version", "--plan", "--qa-file"));
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            Project project = StoredMethods.project(store, actor, options.text("--project"));
             QaEvaluation.Outcome outcome;
             try {
                 StoredMethods.Found found = StoredMethods.find(store, options);
                 QaPlan plan = QaPlan.read(options.path("--plan"));
-                QaEvaluation evaluation = new QaEvaluation(store, actor, project.id(), StoredMethods.SOFTWARE);
+                QaEvaluation evaluation = new QaEvaluation(store, actor, project.getId(), StoredMethods.SOFTWARE);
                 if (options.has("--qa-file")) {
                     ContainerContents qa = ContainerContents.read(List.of(options.path("--qa-file")),
                             new InterferogramTransform(found.method().transform()));
                     outcome = evaluation.run(found.version().id(), found.method(), plan, qa);
                 } else {
                     outcome = evaluation.run(found.version().id(), found.method(), plan,
-                            new MeasurementQuantification(store, actor, project.id(), found.version(),
+                            new MeasurementQuantification(store, actor, project.getId(), found.version(),
                                     found.method(), steps(), StoredMethods.SOFTWARE));
                 }
             } catch (FileFormatException | ImportException e) {

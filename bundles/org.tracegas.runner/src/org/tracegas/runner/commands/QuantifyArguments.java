@@ -15,9 +15,9 @@ import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.qa.basis.PathOrigin;
+import org.tracegas.model.Project;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.BatchProgress;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkBatchInfo;
 import org.tracegas.store.WorkspaceStore;
@@ -49,7 +49,7 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
      *                           this version's results already (processing again would repeat them)
      * @throws UsageException    if the method or its version does not exist
      */
-    Checked check(WorkspaceStore store, Session actor, ProjectInfo project, ProjectQuantification job)
+    Checked check(WorkspaceStore store, Session actor, Project project, ProjectQuantification job)
             throws BadInputException, UsageException {
         StoredMethods.Found found;
         try {
@@ -57,18 +57,18 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
         } catch (FileFormatException e) {
             throw new BadInputException(e.getMessage(), e);
         }
-        Optional<WorkBatchInfo> unfinished = store.workUnits().unfinishedBatch(actor, project.id(),
+        Optional<WorkBatchInfo> unfinished = store.workUnits().unfinishedBatch(actor, project.getId(),
                 found.version().id());
         if (unfinished.isPresent()) {
             String id = unfinished.get().id();
             BatchProgress progress = store.workUnits().progress(actor, id);
-            throw new BadInputException("project " + project.code() + " has the unfinished work batch " + id
+            throw new BadInputException("project " + project.getCode() + " has the unfinished work batch " + id
                     + " of method version " + found.version().number() + " (" + progress.open() + " open and "
                     + progress.claimed() + " claimed of " + progress.total() + " units); finish it with batch-work"
                     + " --batch " + id + "; nothing done");
         }
         if (job.hasResults(found.version().id())) {
-            throw new BadInputException("project " + project.code() + " holds results of method version "
+            throw new BadInputException("project " + project.getCode() + " holds results of method version "
                     + found.version().number() + " already; nothing done");
         }
         return new Checked(found, SampleInputs.read(found.method(), backgroundFiles, files));

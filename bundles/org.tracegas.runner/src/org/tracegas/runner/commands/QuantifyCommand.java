@@ -22,6 +22,8 @@ import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.importer.container.ContainerImportReader;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Project;
+import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.quantify.BatchOutcome;
 import org.tracegas.quantify.CancellationFlag;
@@ -29,7 +31,6 @@ import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -121,14 +122,14 @@ public final class QuantifyCommand implements Command {
         Options options = Options.parse(rest2, accepted);
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
+            Project project = StoredMethods.project(store, actor, options.text("--project"));
             StoredMethods.Found found;
             MeasurementQuantification job;
             MeasurementQuantification.Plan plan;
             OptionalDouble ctsPath = OptionalDouble.empty();
             try {
                 found = StoredMethods.find(store, options);
-                job = new MeasurementQuantification(store, actor, project.id(), found.version(), found.method(),
+                job = new MeasurementQuantification(store, actor, project.getId(), found.version(), found.method(),
                         steps, StoredMethods.SOFTWARE);
                 FileMeasurements.Defaults d = FileImports.defaults(options);
                 List<Path> all = new ArrayList<>(backgroundFiles);
@@ -163,7 +164,7 @@ public final class QuantifyCommand implements Command {
                 return ExitCode.CANCELLED;
             }
             context.out().printf("Quantified %d measurement(s) of project %s with method '%s' version %d;"
-                    + " skipped %d quantified with it before%n", outcome.stored(), project.code(),
+                    + " skipped %d quantified with it before%n", outcome.stored(), project.getCode(),
                     found.method().method().name(), found.version().number(), outcome.skipped());
             return ExitCode.OK;
         }
@@ -202,8 +203,9 @@ public final class QuantifyCommand implements Command {
         Options options = arguments.options();
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
-            ProjectQuantification job = new ProjectQuantification(store, actor, project.id(), StoredMethods.SOFTWARE);
+            Project project = StoredMethods.project(store, actor, options.text("--project"));
+            ProjectQuantification job = new ProjectQuantification(store, actor, project.getId(),
+                    StoredMethods.SOFTWARE);
             QuantifyArguments.Checked checked;
             try {
                 checked = arguments.check(store, actor, project, job);
@@ -229,7 +231,7 @@ public final class QuantifyCommand implements Command {
                 return ExitCode.CANCELLED;
             }
             context.out().printf("Processed %d spectra of project %s with method '%s' version %d%n",
-                    outcome.delivered(), project.code(), found.method().method().name(), found.version().number());
+                    outcome.delivered(), project.getCode(), found.method().method().name(), found.version().number());
             return ExitCode.OK;
         }
     }

@@ -8,12 +8,12 @@ import org.tracegas.report.campaign.ReportIdTakenException;
 import org.tracegas.report.campaign.ReportPlan;
 import org.tracegas.importer.ImportException;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.model.Project;
 import org.tracegas.report.ReportContent;
 import org.tracegas.report.Signature;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -58,8 +58,8 @@ public final class ReportCommand implements Command {
         Path out = options.path("--out");
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
-            CampaignReport report = new CampaignReport(store, actor, project.id(), StoredMethods.SOFTWARE);
+            Project project = StoredMethods.project(store, actor, options.text("--project"));
+            CampaignReport report = new CampaignReport(store, actor, project.getId(), StoredMethods.SOFTWARE);
             ReportContent content;
             try {
                 StoredMethods.Found found = StoredMethods.find(store, options);

@@ -11,12 +11,12 @@ import org.tracegas.report.campaign.ReportPlan;
 import org.tracegas.report.campaign.ReportSignatures;
 import org.tracegas.importer.ImportException;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.model.Project;
 import org.tracegas.report.ReportContent;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -63,8 +63,8 @@ public final class ReportSignCommand implements Command {
         String reviewedHash = options.text("--content-hash").strip().toLowerCase(Locale.ROOT);
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session signer = WorkspaceLogin.logIn(store, options, context);
-            ProjectInfo project = StoredMethods.project(store, signer, options.text("--project"));
-            CampaignReport report = new CampaignReport(store, signer, project.id(), StoredMethods.SOFTWARE);
+            Project project = StoredMethods.project(store, signer, options.text("--project"));
+            CampaignReport report = new CampaignReport(store, signer, project.getId(), StoredMethods.SOFTWARE);
             StoredMethods.Found found;
             ReportContent content;
             try {
@@ -90,7 +90,7 @@ public final class ReportSignCommand implements Command {
             List<String> authors = report.authors(found.version().id());
             String author = authors.contains(signer.userId()) ? signer.userId() : authors.get(0);
             try {
-                Signature s = ReportSignatures.sign(store, signer, project.id(), content, author,
+                Signature s = ReportSignatures.sign(store, signer, project.getId(), content, author,
                         options.text("--as"), WorkspaceLogin.password(context, WorkspaceLogin.PASSWORD_VARIABLE),
                         meaning, options.has("--comment") ? options.text("--comment") : null);
                 context.out().println("Report " + reportId + " signed: " + s.manifestation());

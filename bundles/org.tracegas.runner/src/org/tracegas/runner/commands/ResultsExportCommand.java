@@ -4,10 +4,10 @@ import java.nio.file.Path;
 import java.util.List;
 
 import org.tracegas.report.campaign.ResultsExport;
+import org.tracegas.model.Project;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -44,10 +44,10 @@ public final class ResultsExportCommand implements Command {
         Path out = options.path("--out");
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            ProjectInfo project = StoredMethods.project(store, actor, options.text("--project"));
-            ResultsExport.Written written = ResultsExport.write(store, actor, project.id(), out);
+            Project project = StoredMethods.project(store, actor, options.text("--project"));
+            ResultsExport.Written written = ResultsExport.write(store, actor, project.getId(), out);
             context.out().printf("Wrote %d result(s) of project %s to %s (sha256 %s, recorded in the audit trail)%n",
-                    written.results(), project.code(), out, written.sha256());
+                    written.results(), project.getCode(), out, written.sha256());
             // the values are of toxic gases: they are not to be used without their uncertainty and flags
             context.out().println("Caution: results of toxic gases; read each value with its uncertainty, detection"
                     + " limit and flags, and have them reviewed before acting on them.");

@@ -3,9 +3,9 @@ package org.tracegas.runner.commands;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.installation.InstalledSoftware;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.model.Project;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.NoSuchObjectException;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -71,7 +71,7 @@ final class StoredMethods {
                 "method version " + version.id()));
     }
 
-    static ProjectInfo project(WorkspaceStore store, Session actor, String code) throws UsageException {
+    static Project project(WorkspaceStore store, Session actor, String code) throws UsageException {
         return store.projects().findByCode(actor, code)
                 .orElseThrow(() -> new UsageException("no project with code " + code));
     }

@@ -1,7 +1,6 @@
 package org.tracegas.store.internal;
 
 import java.sql.PreparedStatement;
-import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.time.Instant;
 import java.time.temporal.ChronoUnit;
@@ -16,17 +15,14 @@ import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
-import org.tracegas.model.MeasurementKind;
-import org.tracegas.model.SpectralContent;
+import org.tracegas.model.Measurement;
 import org.tracegas.store.ImportService;
 import org.tracegas.store.ImportedFile;
-import org.tracegas.store.MeasurementInfo;
-import org.tracegas.store.NewMeasurement;
+import org.tracegas.store.MeasurementChecks;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.RawFile;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
-import org.tracegas.store.SourcedMeasurement;
 import org.tracegas.store.SpectrumInput;
 
 final class JdbcImportService implements ImportService {
@@ -38,7 +34,7 @@ final class JdbcImportService implements ImportService {
     }
 
     @Override
-    public ImportedFile importFile(Session actor, String projectId, RawFile file, List<NewMeasurement> measurements) {
+    public ImportedFile importFile(Session actor, String projectId, RawFile file, List<Measurement> measurements) {
         if (file == null) {
             throw new IllegalArgumentException("file must not be null");
         }
@@ -48,6 +44,12 @@ final class JdbcImportService implements ImportService {
         for (int i = 0; i < measurements.size(); i++) {
             if (measurements.get(i) == null) {
                 throw new IllegalArgumentException("measurements[" + i + "] of " + file.fileName() + " is null");
+            }
+            try {
+                MeasurementChecks.requireImportable(measurements.get(i));
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException("measurements[" + i + "] of " + file.fileName() + ": "
+                        + e.getMessage(), e);
             }
         }
         return transactions.run("importing " + file.fileName() + " into project " + projectId, tx -> {
@@ -64,32 +66,32 @@ final class JdbcImportService implements ImportService {
             List<AuditEntry> audit = new ArrayList<>();
             List<List<RowBindings.RowRef>> bound = new ArrayList<>();
             for (int i = 0; i < measurements.size(); i++) {
-                NewMeasurement m = measurements.get(i);
+                Measurement m = measurements.get(i);
                 String id = UUID.randomUUID().toString();
                 ids.add(id);
-                tx.update(JdbcProjectService.INSERT_MEASUREMENT, id, projectId, m.kind(), m.time(),
-                        m.cellTemperature(), m.cellPressure(), actor.userId());
+                tx.update(JdbcProjectService.INSERT_MEASUREMENT, id, projectId, m.getKind(), m.getTime(),
+                        m.getCellTemperature(), m.getCellPressure(), actor.userId());
                 String[] spectrum;
                 try (PreparedStatement ps = tx.connection().prepareStatement(SpectrumRows.INSERT)) {
                     spectrum = SpectrumRows.bindInsert(ps, projectId,
-                            new SpectrumInput(id, m.content(), m.spectrum(), SampleEncoding.FLOAT64_LE));
+                            new SpectrumInput(id, m.getContent(), m.getSpectrum(), SampleEncoding.FLOAT64_LE));
                     ps.executeUpdate();
                 }
-                String labels = AuditValues.canonical(m.labels());
+                String labels = AuditValues.canonical(m.getLabels().map());
                 tx.update("INSERT INTO imported_measurement (measurement_id, project_id, raw_sha256, record_index,"
                         + " title, content, spectrum_id, labels) VALUES (?, ?, ?, ?, ?, ?, ?, ?)", id, projectId,
-                        file.sha256(), i, m.title(), m.content(), spectrum[0], labels);
-                Map<String, Object> fields = JdbcProjectService.measurementValues(projectId, m.kind(), m.time(),
-                        m.cellTemperature(), m.cellPressure());
-                fields.put("title", m.title());
+                        file.sha256(), i, m.getTitle(), m.getContent(), spectrum[0], labels);
+                Map<String, Object> fields = JdbcProjectService.measurementValues(projectId, m.getKind(),
+                        m.getTime(), m.getCellTemperature(), m.getCellPressure());
+                fields.put("title", m.getTitle());
                 fields.put("sourceFile", file.fileName());
                 fields.put("sourceSha256", file.sha256());
                 fields.put("sourceRecord", i);
                 fields.put("labelsSha256", SpectrumCodec.sha256Hex(labels.getBytes(
                         java.nio.charset.StandardCharsets.UTF_8)));
                 fields.put("spectrum", spectrum[0]);
-                fields.put("spectrumContent", m.content().getName());
-                fields.put("spectrumAxis", m.spectrum().axis());
+                fields.put("spectrumContent", m.getContent().getName());
+                fields.put("spectrumAxis", m.getSpectrum().axis());
                 fields.put("spectrumEncoding", SampleEncoding.FLOAT64_LE);
                 fields.put("spectrumSha256", spectrum[1]);
                 audit.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement", id)
@@ -147,27 +149,12 @@ final class JdbcImportService implements ImportService {
     }
 
     @Override
-    public List<SourcedMeasurement> measurements(Session actor, String projectId) {
+    public List<Measurement> measurements(Session actor, String projectId) {
         return transactions.run("reading the imported measurements of project " + projectId, tx -> {
             Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
-            return tx.queryList("SELECT m.id, m.project_id, m.kind, m.measured_at, m.cell_temperature,"
-                    + " m.cell_pressure, m.operator_id, i.title, f.file_name, i.raw_sha256, i.record_index,"
-                    + " i.content, i.spectrum_id, i.labels FROM imported_measurement i"
-                    + " JOIN measurement m ON m.id = i.measurement_id"
-                    + " JOIN raw_file f ON f.project_id = i.project_id AND f.sha256 = i.raw_sha256"
-                    + " WHERE i.project_id = ? ORDER BY m.measured_at, f.file_name, i.record_index",
-                    JdbcImportService::map, projectId);
+            return ModelRows.measurements(tx, ModelRows.project(tx, projectId), " AND i.measurement_id IS NOT NULL",
+                    "ORDER BY m.measured_at, f.file_name, i.record_index");
         });
-    }
-
-    private static SourcedMeasurement map(ResultSet rs) throws SQLException {
-        MeasurementInfo m = new MeasurementInfo(rs.getString("id"), rs.getString("project_id"),
-                MeasurementKind.valueOf(rs.getString("kind")), Tx.instant(rs, "measured_at"),
-                rs.getDouble("cell_temperature"), rs.getDouble("cell_pressure"), rs.getString("operator_id"));
-        return new SourcedMeasurement(m, rs.getString("title"), rs.getString("file_name"),
-                rs.getString("raw_sha256").trim(), rs.getInt("record_index"),
-                SpectralContent.valueOf(rs.getString("content")), rs.getString("spectrum_id"),
-                labels(rs.getString("labels")));
     }
 
     /** Reads back the canonical text the labels were stored as ({@link AuditValues#canonical}). */

@@ -1,25 +1,29 @@
 package org.tracegas.store.internal;
 
-import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.time.Instant;
+import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
+import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 import java.util.UUID;
 
 import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Client;
+import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Project;
 import org.tracegas.model.Role;
-import org.tracegas.store.ClientInfo;
-import org.tracegas.store.MeasurementInfo;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.store.NoSuchObjectException;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.Session;
 import org.tracegas.store.StoreException;
@@ -33,7 +37,7 @@ final class JdbcProjectService implements ProjectService {
     }
 
     @Override
-    public String createClient(Session actor, String name) {
+    public Client createClient(Session actor, String name) {
         JdbcUserService.requireText("name", name);
         return transactions.run("creating client " + name, tx -> {
             Guard.roles(tx, actor);
@@ -45,31 +49,35 @@ final class JdbcProjectService implements ProjectService {
             tx.wrote(DataKind.CLIENT, id);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "client", id)
                     .newValue(AuditValues.canonical(Map.of("name", name))).build());
-            return id;
+            return ModelRows.client(id, name, 0);
         });
     }
 
     @Override
-    public ProjectInfo createProject(Session actor, String clientId, String code, String name) {
+    public Project createProject(Session actor, String clientId, String code, String name) {
         JdbcUserService.requireText("code", code);
         JdbcUserService.requireText("name", name);
         return transactions.run("creating project " + code, tx -> {
             Guard.roles(tx, actor);
-            if (tx.queryOne("SELECT 1 FROM client WHERE id = ?", rs -> 1, clientId).isEmpty()) {
-                throw new NoSuchObjectException("client", clientId);
-            }
+            Client client = tx.queryOne("SELECT name, row_version FROM client WHERE id = ?",
+                    rs -> ModelRows.client(clientId, rs.getString(1), rs.getLong(2)), clientId)
+                    .orElseThrow(() -> new NoSuchObjectException("client", clientId));
             if (tx.queryOne("SELECT 1 FROM project WHERE client_id = ? AND code = ?", rs -> 1, clientId, code)
                     .isPresent()) {
                 throw new StoreException("the client has a project with the code '" + code
                         + "' already; choose another code");
             }
-            ProjectInfo project = new ProjectInfo(UUID.randomUUID().toString(), clientId, code, name, 0);
+            Project project = WorkspaceFactory.eINSTANCE.createProject();
+            project.setId(UUID.randomUUID().toString());
+            project.setCode(code);
+            project.setName(name);
+            client.getProjects().add(project);
             tx.update("INSERT INTO project (id, client_id, code, name, row_version) VALUES (?, ?, ?, ?, 0)",
-                    project.id(), clientId, code, name);
-            tx.wrote(DataKind.PROJECT, project.id());
-            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "project", project.id())
+                    project.getId(), clientId, code, name);
+            tx.wrote(DataKind.PROJECT, project.getId());
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "project", project.getId())
                     .newValue(values(project)).build());
-            insertGrant(tx, actor, project.id(), actor.userId(), AccessLevel.WRITE);
+            insertGrant(tx, actor, project.getId(), actor.userId(), AccessLevel.WRITE);
             return project;
         });
     }
@@ -112,26 +120,28 @@ final class JdbcProjectService implements ProjectService {
     }
 
     @Override
-    public ProjectInfo project(Session actor, String projectId) {
+    public Project project(Session actor, String projectId) {
         return transactions.run("reading project " + projectId, tx -> {
             Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
-            return load(tx, projectId);
+            return ModelRows.project(tx, projectId);
         });
     }
 
     @Override
-    public ProjectInfo rename(Session actor, String projectId, long expectedVersion, String newName) {
+    public Project rename(Session actor, String projectId, long expectedVersion, String newName) {
         JdbcUserService.requireText("newName", newName);
         return transactions.run("renaming project " + projectId, tx -> {
             Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
-            ProjectInfo before = load(tx, projectId);
+            Project project = ModelRows.project(tx, projectId);
+            String before = values(project);
             long version = RowVersions.update(tx, "project", "project", projectId, expectedVersion, "name = ?",
                     newName);
             tx.wrote(DataKind.PROJECT, projectId);
-            ProjectInfo after = new ProjectInfo(projectId, before.clientId(), before.code(), newName, version);
+            project.setName(newName);
+            project.setRowVersion(version);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "project", projectId).version(version)
-                    .oldValue(values(before)).newValue(values(after)).build());
-            return after;
+                    .oldValue(before).newValue(values(project)).build());
+            return project;
         });
     }
 
@@ -186,53 +196,48 @@ final class JdbcProjectService implements ProjectService {
         return fields;
     }
 
-    private static ProjectInfo load(Tx tx, String projectId) throws SQLException {
-        return tx.queryOne("SELECT id, client_id, code, name, row_version FROM project WHERE id = ?",
-                JdbcProjectService::map, projectId).orElseThrow(() -> new NoSuchObjectException("project", projectId));
-    }
-
-    private static ProjectInfo map(ResultSet rs) throws SQLException {
-        return new ProjectInfo(rs.getString("id"), rs.getString("client_id"), rs.getString("code"),
-                rs.getString("name"), rs.getLong("row_version"));
-    }
-
-    private static String values(ProjectInfo p) {
-        return AuditValues.canonical(Map.of("client", p.clientId(), "code", p.code(), "name", p.name()));
+    private static String values(Project p) {
+        return AuditValues.canonical(Map.of("client", p.getClient().getId(), "code", p.getCode(), "name",
+                p.getName()));
     }
 
     @Override
-    public Optional<ProjectInfo> findByCode(Session actor, String code) {
+    public Optional<Project> findByCode(Session actor, String code) {
         JdbcUserService.requireText("code", code);
         return transactions.run("finding project " + code, tx -> {
-            Optional<ProjectInfo> found = tx.queryOne(
-                    "SELECT id, client_id, code, name, row_version FROM project WHERE code = ? ORDER BY id",
-                    JdbcProjectService::map, code);
+            Optional<Project> found = ModelRows.firstProject(tx, " WHERE p.code = ? ORDER BY p.id", code);
             if (found.isPresent()) {
-                Guard.requireProject(tx, actor, found.get().id(), AccessLevel.READ);
+                Guard.requireProject(tx, actor, found.get().getId(), AccessLevel.READ);
             }
             return found;
         });
     }
 
     @Override
-    public List<ProjectInfo> projects(Session actor) {
+    public List<Project> projects(Session actor) {
         return transactions.run("listing the projects of " + login(actor), tx -> {
             Guard.roles(tx, actor);
-            return tx.queryList("SELECT p.id, p.client_id, p.code, p.name, p.row_version FROM project p"
-                    + " JOIN project_grant g ON g.project_id = p.id WHERE g.user_id = ? ORDER BY p.code, p.id",
-                    JdbcProjectService::map, actor.userId());
+            return readable(tx, actor);
         });
     }
 
+    private static List<Project> readable(Tx tx, Session actor) throws SQLException {
+        return ModelRows.projects(tx, " JOIN project_grant g ON g.project_id = p.id WHERE g.user_id = ?"
+                + " ORDER BY p.code, p.id", actor.userId());
+    }
+
     @Override
-    public List<ClientInfo> clients(Session actor) {
+    public List<Client> clients(Session actor) {
         return transactions.run("listing the clients of " + login(actor), tx -> {
             Guard.roles(tx, actor);
             // a client is visible through the projects the actor may read, as project data is
-            return tx.queryList("SELECT c.id, c.name FROM client c WHERE EXISTS (SELECT 1 FROM project p"
-                    + " JOIN project_grant g ON g.project_id = p.id WHERE p.client_id = c.id AND g.user_id = ?)"
-                    + " ORDER BY c.name, c.id", rs -> new ClientInfo(rs.getString("id"), rs.getString("name")),
-                    actor.userId());
+            Set<Client> owners = new LinkedHashSet<>();
+            for (Project p : readable(tx, actor)) {
+                owners.add(p.getClient());
+            }
+            List<Client> clients = new ArrayList<>(owners);
+            clients.sort(Comparator.comparing(Client::getName).thenComparing(Client::getId));
+            return clients;
         });
     }
 
@@ -241,16 +246,11 @@ final class JdbcProjectService implements ProjectService {
     }
 
     @Override
-    public List<MeasurementInfo> measurements(Session actor, String projectId) {
+    public List<Measurement> measurements(Session actor, String projectId) {
         return transactions.run("reading the measurements of project " + projectId, tx -> {
             Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
-            return tx.queryList("SELECT id, project_id, kind, measured_at, cell_temperature, cell_pressure, operator_id"
-                    + " FROM measurement WHERE project_id = ? ORDER BY measured_at, id",
-                    rs -> new MeasurementInfo(rs.getString("id"), rs.getString("project_id"),
-                            MeasurementKind.valueOf(rs.getString("kind")), Tx.instant(rs, "measured_at"),
-                            rs.getDouble("cell_temperature"), rs.getDouble("cell_pressure"),
-                            rs.getString("operator_id")),
-                    projectId);
+            return ModelRows.measurements(tx, ModelRows.project(tx, projectId), "",
+                    "ORDER BY m.measured_at, m.id");
         });
     }
 }

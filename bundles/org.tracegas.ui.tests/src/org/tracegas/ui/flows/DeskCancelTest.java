@@ -113,9 +113,9 @@ class DeskCancelTest {
         static Counts of(LabDesk desk) {
             WorkspaceStore store = desk.access.store();
             LimeKilnLab lab = desk.lab;
-            return new Counts(store.projects().measurements(lab.analyst, lab.project.id()).size(),
-                    store.imports().measurements(lab.analyst, lab.project.id()).size(),
-                    store.results().results(lab.analyst, lab.project.id()).size(),
+            return new Counts(store.projects().measurements(lab.analyst, lab.project.getId()).size(),
+                    store.imports().measurements(lab.analyst, lab.project.getId()).size(),
+                    store.results().results(lab.analyst, lab.project.getId()).size(),
                     store.audit().review(lab.reviewer, AuditQuery.all().build()).records().size());
         }
     }

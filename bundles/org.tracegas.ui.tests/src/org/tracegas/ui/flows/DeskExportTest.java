@@ -85,7 +85,7 @@ class DeskExportTest {
         AuditRecord r = exports.get(0);
         assertEquals(AuditAction.EXPORT, r.action());
         assertEquals(lab.analyst.userId(), r.userId());
-        assertEquals(lab.project.id(), r.objectId());
+        assertEquals(lab.project.getId(), r.objectId());
         assertTrue(r.newValue().contains(sha) && r.newValue().contains("qlw-results.csv"), r.newValue());
 
         AuditTrailPanel panel = new AuditTrailPanel(desk.shell, SWT.NONE);

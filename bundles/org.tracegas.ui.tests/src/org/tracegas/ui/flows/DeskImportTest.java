@@ -112,14 +112,14 @@ class DeskImportTest {
         // kept under the SHA-256 of its bytes (FIPS 180-4, as the JDK computes it)
         String sha = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(Files.readAllBytes(
                 files.get(0))));
-        ImportedFile first = access.store().imports().find(lab.analyst, lab.project.id(), sha).orElseThrow();
+        ImportedFile first = access.store().imports().find(lab.analyst, lab.project.getId(), sha).orElseThrow();
         assertEquals("s01.jdx", first.fileName());
         List<AuditRecord> audit = access.store().audit().review(lab.reviewer, AuditQuery.all().objectType("raw-file")
                 .build()).records();
         assertEquals(4, audit.size());
         assertTrue(audit.stream().allMatch(r -> r.action() == AuditAction.CREATE
                 && r.userId().equals(lab.analyst.userId())));
-        assertTrue(audit.stream().anyMatch(r -> r.objectId().equals(lab.project.id() + "/" + sha)));
+        assertTrue(audit.stream().anyMatch(r -> r.objectId().equals(lab.project.getId() + "/" + sha)));
         nav.openProject(LimeKilnLab.CODE);
         nav.viewer().expandAll();
         Screens.flush(display);

@@ -99,7 +99,7 @@ class DeskMethodRunTest {
         // the amounts the files were made with, by the ideal gas law (see LimeKilnLab), within 3 standard
         // uncertainties; 150 ppm in the 2 m cell is beyond the 200 ppm·m reference, and flagged so
         Map<Double, Double> madeAt = Map.of(0.0, 40.0, 1.0, 0.0, 2.0, 150.0, 3.0, 60.0);
-        List<ResultRow> rows = access.store().analyses().rows(lab.analyst, lab.project.id());
+        List<ResultRow> rows = access.store().analyses().rows(lab.analyst, lab.project.getId());
         assertEquals(4, rows.size());
         for (ResultRow r : rows) {
             double minute = (r.measured().getEpochSecond() - LimeKilnLab.T0.getEpochSecond()) / 60.0;

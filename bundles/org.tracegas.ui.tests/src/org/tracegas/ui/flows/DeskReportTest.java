@@ -57,7 +57,7 @@ class DeskReportTest {
         VersionInfo method = store.versions().latest(VersionKind.METHOD).get(0);
         // the lab's QA evaluation of the morning as the runner's qa command stores it (invented readings and
         // acceptance ranges of the Quarrymoor lab): the zero passed, the calibration transfer standard did not
-        store.qa().recordAll(lab.analyst, lab.project.id(), method.id(), List.of(
+        store.qa().recordAll(lab.analyst, lab.project.getId(), method.id(), List.of(
                 new NewQaCheck("Zero CO", true, 0.4, "ppm", -2, 2, "zero gas reads within ±2 ppm",
                         "Quarrymoor lab procedure (invented)"),
                 new NewQaCheck("CTS path length", false, 2.31, "m", 1.9, 2.1, "path from the CTS within ±5 %",

@@ -15,12 +15,12 @@ import java.util.Set;
 import org.tracegas.method.MethodDefinition;
 import org.tracegas.importer.jcamp.JcampWriter;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Project;
 import org.tracegas.model.Role;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -63,7 +63,7 @@ final class LimeKilnLab {
     final WorkspaceStore store;
     /** The stack's moisture in the samples, ppm; 0 when the method does not measure moisture. */
     final double waterPpm;
-    final ProjectInfo project;
+    final Project project;
     final Session analyst;
     final Session reviewer;
 
@@ -84,10 +84,10 @@ final class LimeKilnLab {
                 PASSWORD.toCharArray()).id();
         String reviewerId = store.users().createUser(admin, REVIEWER, "Elin Lindqvist", Set.of(Role.REVIEWER),
                 PASSWORD.toCharArray()).id();
-        String client = store.projects().createClient(admin, "Quarrymoor Lime Works");
+        String client = store.projects().createClient(admin, "Quarrymoor Lime Works").getId();
         project = store.projects().createProject(admin, client, CODE, "Kiln 2 stack, December");
-        store.projects().grant(admin, project.id(), analystId, AccessLevel.WRITE);
-        store.projects().grant(admin, project.id(), reviewerId, AccessLevel.READ);
+        store.projects().grant(admin, project.getId(), analystId, AccessLevel.WRITE);
+        store.projects().grant(admin, project.getId(), reviewerId, AccessLevel.READ);
         analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
         reviewer = store.users().logIn(REVIEWER, PASSWORD.toCharArray());
         defineMethod();

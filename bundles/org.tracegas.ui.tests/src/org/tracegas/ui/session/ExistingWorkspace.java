@@ -9,10 +9,10 @@ import java.util.Set;
 
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Project;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Role;
 import org.tracegas.store.NewResult;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -37,7 +37,7 @@ final class ExistingWorkspace {
     /** CO and NO of the first three samples, ppm. */
     static final double[][] PPM = {{41.5, 12.0}, {44.25, 12.5}, {39.75, 13.25}};
 
-    final ProjectInfo project;
+    final Project project;
     final List<String> sampleIds;
 
     ExistingWorkspace(WorkspaceStore store) {
@@ -45,18 +45,18 @@ final class ExistingWorkspace {
         String analystId = store.users().createUser(admin, ANALYST, "Lena Brandt", Set.of(Role.ANALYST),
                 PASSWORD.toCharArray()).id();
         store.users().createUser(admin, REVIEWER, "Kofi Osei", EnumSet.of(Role.REVIEWER), PASSWORD.toCharArray());
-        String river = store.projects().createClient(admin, "Riverside Incinerator");
+        String river = store.projects().createClient(admin, "Riverside Incinerator").getId();
         project = store.projects().createProject(admin, river, CODE, "Line 2 stack, May campaign");
-        store.projects().grant(admin, project.id(), analystId, AccessLevel.WRITE);
-        String other = store.projects().createClient(admin, "Northern Paper Mill");
+        store.projects().grant(admin, project.getId(), analystId, AccessLevel.WRITE);
+        String other = store.projects().createClient(admin, "Northern Paper Mill").getId();
         store.projects().createProject(admin, other, HIDDEN_CODE, "Boiler flue");
 
         Session analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
-        store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.BACKGROUND, BACKGROUND, 453.15,
+        store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.BACKGROUND, BACKGROUND, 453.15,
                 1013.0);
         List<String> ids = new ArrayList<>();
         for (int i = 0; i < SAMPLES; i++) {
-            ids.add(store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE,
+            ids.add(store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.SAMPLE,
                     FIRST_SAMPLE.plus(Duration.ofMinutes(i)), 453.15, 1013.0));
         }
         sampleIds = List.copyOf(ids);
@@ -71,7 +71,7 @@ final class ExistingWorkspace {
             results.add(result(ids.get(i), "NO", PPM[i][1], i == 2 ? Set.of(ResultFlag.HIGH_RESIDUAL) : Set.of(),
                     method, library));
         }
-        store.results().recordAll(analyst, project.id(), results);
+        store.results().recordAll(analyst, project.getId(), results);
     }
 
     private static NewResult result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,

@@ -31,7 +31,8 @@ class StoredResultsTest {
             Session analyst = store.users().logIn(ExistingWorkspace.ANALYST,
                     ExistingWorkspace.PASSWORD.toCharArray());
 
-            StoredResults.Traces t = StoredResults.traces(store, analyst, ws.project.id(), new NullProgressMonitor());
+            StoredResults.Traces t = StoredResults.traces(store, analyst, ws.project.getId(),
+                    new NullProgressMonitor());
 
             assertEquals(ExistingWorkspace.FIRST_SAMPLE, t.start());
             List<ConcentrationTrace> traces = t.traces();
@@ -57,12 +58,12 @@ class StoredResultsTest {
             Session reviewer = store.users().logIn(ExistingWorkspace.REVIEWER,
                     ExistingWorkspace.PASSWORD.toCharArray());
             assertThrows(AccessDeniedException.class,
-                    () -> StoredResults.traces(store, reviewer, ws.project.id(), new NullProgressMonitor()));
+                    () -> StoredResults.traces(store, reviewer, ws.project.getId(), new NullProgressMonitor()));
 
             Session analyst = store.users().logIn(ExistingWorkspace.ANALYST,
                     ExistingWorkspace.PASSWORD.toCharArray());
-            String client = store.projects().createClient(analyst, "Empty client");
-            String empty = store.projects().createProject(analyst, client, "EMPTY-1", "Nothing measured").id();
+            String client = store.projects().createClient(analyst, "Empty client").getId();
+            String empty = store.projects().createProject(analyst, client, "EMPTY-1", "Nothing measured").getId();
             StoredResults.Traces none = StoredResults.traces(store, analyst, empty, new NullProgressMonitor());
             assertTrue(none.traces().isEmpty());
             assertNull(none.start());

@@ -84,7 +84,7 @@ class StoredWorkspaceTest {
         assertTrue(nav.openProject(ExistingWorkspace.CODE));
         Screens.flush(display);
         Project selected = (Project) ((IStructuredSelection) nav.viewer().getSelection()).getFirstElement();
-        assertEquals(written.project.id(), selected.getId());
+        assertEquals(written.project.getId(), selected.getId());
         // one day, its samples and its background apart; all fit on the first page, in time order
         nav.viewer().expandToLevel(selected, 3);
         Screens.flush(display);

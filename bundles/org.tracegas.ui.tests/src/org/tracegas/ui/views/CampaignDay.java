@@ -6,12 +6,12 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 
+import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Project;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Role;
-import org.tracegas.model.AccessLevel;
 import org.tracegas.store.NewResult;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -35,18 +35,18 @@ final class CampaignDay {
     static final List<String> TRACE = List.of("CO", "NO", "N2O");
     static final List<String> MAJOR = List.of("H2O", "CO2");
 
-    final ProjectInfo project;
-    final ProjectInfo small;
+    final Project project;
+    final Project small;
 
     CampaignDay(WorkspaceStore store) {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", PASSWORD.toCharArray());
         String analystId = store.users().createUser(admin, ANALYST, "Rana Haddad",
                 Set.of(Role.ANALYST), PASSWORD.toCharArray()).id();
-        String client = store.projects().createClient(admin, "Eastfield Cement");
+        String client = store.projects().createClient(admin, "Eastfield Cement").getId();
         project = store.projects().createProject(admin, client, CODE, "Kiln 1 stack, July day");
         small = store.projects().createProject(admin, client, SMALL_CODE, "Kiln 2 stack, spot check");
-        store.projects().grant(admin, project.id(), analystId, AccessLevel.WRITE);
-        store.projects().grant(admin, small.id(), analystId, AccessLevel.WRITE);
+        store.projects().grant(admin, project.getId(), analystId, AccessLevel.WRITE);
+        store.projects().grant(admin, small.getId(), analystId, AccessLevel.WRITE);
 
         Session analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
         VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "Kiln stack five gases",
@@ -55,7 +55,7 @@ final class CampaignDay {
                 "CO=1\nNO=1\nN2O=1\nH2O=1\nCO2=1\n", "first");
         List<NewResult> results = new ArrayList<>();
         for (int i = 0; i < MINUTES; i++) {
-            String m = store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE,
+            String m = store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.SAMPLE,
                     START.plus(Duration.ofMinutes(i)), 453.15, 1013.0);
             double phase = 2 * Math.PI * i / MINUTES;
             // invented but plausible levels for a kiln stack (common practice, no source): CO tens of ppm,
@@ -67,10 +67,10 @@ final class CampaignDay {
             results.add(result(m, "H2O", 95_000 + 8_000 * Math.sin(phase), Set.of(), method, library));
             results.add(result(m, "CO2", 180_000 + 12_000 * Math.cos(2 * phase), Set.of(), method, library));
         }
-        store.results().recordAll(analyst, project.id(), results);
-        String spot = store.projects().recordMeasurement(analyst, small.id(), MeasurementKind.SAMPLE,
+        store.results().recordAll(analyst, project.getId(), results);
+        String spot = store.projects().recordMeasurement(analyst, small.getId(), MeasurementKind.SAMPLE,
                 START.plus(Duration.ofHours(30)), 453.15, 1013.0);
-        store.results().recordAll(analyst, small.id(), List.of(result(spot, "CO", 55, Set.of(), method, library)));
+        store.results().recordAll(analyst, small.getId(), List.of(result(spot, "CO", 55, Set.of(), method, library)));
     }
 
     private static NewResult result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,

@@ -183,8 +183,8 @@ class DeskViewsTest {
         TimeSeriesPanel panel = (TimeSeriesPanel) ((SashForm) shell.getChildren()[0]).getChildren()[1];
         Project big = project(nav, CampaignDay.CODE);
         Project small = project(nav, CampaignDay.SMALL_CODE);
-        assertEquals(day.project.id(), big.getId());
-        assertEquals(day.small.id(), small.getId());
+        assertEquals(day.project.getId(), big.getId());
+        assertEquals(day.small.getId(), small.getId());
 
         // two selections in a row: the read for the first is overtaken and must not show
         select(nav, small);

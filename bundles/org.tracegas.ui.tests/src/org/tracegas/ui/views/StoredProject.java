@@ -13,6 +13,7 @@ import org.tracegas.qa.campaign.StoredQaChecks;
 import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Project;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
@@ -24,7 +25,6 @@ import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.NewResult;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
 import org.tracegas.store.SpectrumInput;
@@ -51,7 +51,7 @@ final class StoredProject {
     static final String SPIKE_RULE = "mean spike recovery between 0.7 and 1.3 of the expected value";
     static final String SPIKE_SOURCE = "EPA Method 320, section 8.6.2";
 
-    final ProjectInfo project;
+    final Project project;
     final List<String> sampleIds = new ArrayList<>();
 
     /** Name of the library; its version is recorded from a manifest as the runner records it. */
@@ -61,11 +61,11 @@ final class StoredProject {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", PASSWORD.toCharArray());
         String analystId = store.users().createUser(admin, ANALYST, "Marta Ferreira", Set.of(Role.ANALYST),
                 PASSWORD.toCharArray()).id();
-        String client = store.projects().createClient(admin, "Glasshouse Lane Glassworks");
+        String client = store.projects().createClient(admin, "Glasshouse Lane Glassworks").getId();
         project = store.projects().createProject(admin, client, CODE, "Furnace 3 flue, September");
-        store.projects().grant(admin, project.id(), analystId, AccessLevel.WRITE);
+        store.projects().grant(admin, project.getId(), analystId, AccessLevel.WRITE);
         Session analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
-        store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.BACKGROUND,
+        store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.BACKGROUND,
                 FIRST.minus(Duration.ofMinutes(5)), 453.15, 1013.0);
         VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "Furnace CO and NO",
                 "compounds=CO,NO\n", "first");
@@ -73,17 +73,17 @@ final class StoredProject {
                 libraryText(folder), "first");
         List<NewResult> results = new ArrayList<>();
         for (int i = 0; i < SAMPLES; i++) {
-            String m = store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE,
+            String m = store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.SAMPLE,
                     FIRST.plus(Duration.ofMinutes(i)), 453.15, 1013.0);
             sampleIds.add(m);
-            store.spectra().store(analyst, project.id(), new SpectrumInput(m, SpectralContent.ABSORBANCE,
+            store.spectra().store(analyst, project.getId(), new SpectrumInput(m, SpectralContent.ABSORBANCE,
                     band(0.1 * (i + 1)), SampleEncoding.FLOAT64_LE));
             results.add(result(m, "CO", 30 + i, Set.of(), method, library));
             results.add(result(m, "NO", 80 + i, i == SAMPLES - 1 ? Set.of(ResultFlag.HIGH_RESIDUAL) : Set.of(),
                     method, library));
         }
-        store.results().recordAll(analyst, project.id(), results);
-        StoredQaChecks.store(store, analyst, project.id(), method.id(), List.of(
+        store.results().recordAll(analyst, project.getId(), results);
+        StoredQaChecks.store(store, analyst, project.getId(), method.id(), List.of(
                 CheckOutcome.judge("CTS pre/post agreement", 3.1, "%", AcceptanceLimits.atMost(5),
                         new Rule(CTS_RULE, CTS_SOURCE)),
                 CheckOutcome.judge("Spike recovery", 0.62, "", new AcceptanceLimits(0.7, 1.3),

@@ -26,7 +26,7 @@ import org.eclipse.swt.widgets.Text;
 import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.model.MeasurementKind;
-import org.tracegas.store.ProjectInfo;
+import org.tracegas.model.Project;
 
 /**
  * The import wizard's page: the project, the files with the reader that recognises each, and the kind, time and
@@ -37,8 +37,8 @@ import org.tracegas.store.ProjectInfo;
 public final class ImportFilesPage extends WizardPage {
 
     private final ReaderRegistry readers;
-    private final List<ProjectInfo> projects;
-    private final ProjectInfo selected;
+    private final List<Project> projects;
+    private final Project selected;
     private final Map<Path, ImportPreview> previews = new LinkedHashMap<>();
     private Combo project;
     private Table table;
@@ -47,7 +47,7 @@ public final class ImportFilesPage extends WizardPage {
     private Text time;
     private Combo kind;
 
-    ImportFilesPage(ReaderRegistry readers, List<ProjectInfo> projects, ProjectInfo selected) {
+    ImportFilesPage(ReaderRegistry readers, List<Project> projects, Project selected) {
         super("files", "Files to import", null);
         setDescription("Each file is kept whole under the SHA-256 of its bytes; a file the project holds already"
                 + " adds nothing.");
@@ -63,9 +63,9 @@ public final class ImportFilesPage extends WizardPage {
         new Label(area, SWT.NONE).setText("Project");
         project = new Combo(area, SWT.READ_ONLY);
         project.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1));
-        for (ProjectInfo p : projects) {
-            project.add(p.code() + " — " + p.name());
-            if (selected != null && p.id().equals(selected.id())) {
+        for (Project p : projects) {
+            project.add(p.getCode() + " — " + p.getName());
+            if (selected != null && p.getId().equals(selected.getId())) {
                 project.select(project.getItemCount() - 1);
             }
         }
@@ -200,7 +200,7 @@ public final class ImportFilesPage extends WizardPage {
     }
 
     /** The project chosen, or null. */
-    public ProjectInfo project() {
+    public Project project() {
         int i = project.getSelectionIndex();
         return i < 0 ? null : projects.get(i);
     }

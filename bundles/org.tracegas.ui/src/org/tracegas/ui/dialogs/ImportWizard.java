@@ -6,7 +6,7 @@ import java.util.List;
 import org.eclipse.jface.wizard.Wizard;
 import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ReaderRegistry;
-import org.tracegas.store.ProjectInfo;
+import org.tracegas.model.Project;
 
 /**
  * File → Import…: which files go into which project, which reader reads each, and the cell conditions for
@@ -16,7 +16,7 @@ import org.tracegas.store.ProjectInfo;
 public final class ImportWizard extends Wizard {
 
     /** What the user chose. */
-    public record Request(ProjectInfo project, List<Path> files, FileMeasurements.Defaults defaults) {
+    public record Request(Project project, List<Path> files, FileMeasurements.Defaults defaults) {
 
         public Request {
             files = List.copyOf(files);
@@ -30,7 +30,7 @@ public final class ImportWizard extends Wizard {
      * @param projects the projects the user may import into
      * @param selected the project to offer first (e.g. the one selected in the tree), or null
      */
-    public ImportWizard(ReaderRegistry readers, List<ProjectInfo> projects, ProjectInfo selected) {
+    public ImportWizard(ReaderRegistry readers, List<Project> projects, Project selected) {
         setWindowTitle("Import measurement files");
         setNeedsProgressMonitor(false);
         page = new ImportFilesPage(readers, projects, selected);

@@ -12,7 +12,7 @@ import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.handlers.HandlerUtil;
-import org.tracegas.store.ProjectInfo;
+import org.tracegas.model.Project;
 import org.tracegas.ui.jobs.ResultsExportJob;
 import org.tracegas.ui.session.Desk;
 
@@ -26,16 +26,16 @@ public final class ExportResultsHandler extends AbstractHandler {
     public Object execute(ExecutionEvent event) throws ExecutionException {
         Shell shell = HandlerUtil.getActiveShellChecked(event);
         Desk desk = Desk.get();
-        ProjectInfo project = TreeChoice.project(HandlerUtil.getCurrentSelection(event),
+        Project project = TreeChoice.project(HandlerUtil.getCurrentSelection(event),
                 desk.access().store().projects().projects(desk.session()));
         if (project == null) {
             MessageDialog.openInformation(shell, "Export results", "Select the project in the workspace tree first.");
             return null;
         }
         FileDialog d = new FileDialog(shell, SWT.SAVE);
-        d.setText("Export the results of " + project.code());
+        d.setText("Export the results of " + project.getCode());
         d.setFilterExtensions(new String[] {"*.csv"});
-        d.setFileName(project.code() + "-results.csv");
+        d.setFileName(project.getCode() + "-results.csv");
         d.setOverwrite(true);
         String chosen = d.open();
         if (chosen != null) {
@@ -49,7 +49,7 @@ public final class ExportResultsHandler extends AbstractHandler {
      *
      * @param report receives the closing message in the UI thread
      */
-    public static ResultsExportJob schedule(ProjectInfo project, Path out, Display display, Consumer<String> report) {
+    public static ResultsExportJob schedule(Project project, Path out, Display display, Consumer<String> report) {
         Desk desk = Desk.get();
         ResultsExportJob job = new ResultsExportJob(desk.access().store(), desk.session(), project, out);
         job.addJobChangeListener(StatusReports.whenDone(display, report));

@@ -12,7 +12,7 @@ import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.handlers.HandlerUtil;
 import org.tracegas.importer.ReaderRegistry;
-import org.tracegas.store.ProjectInfo;
+import org.tracegas.model.Project;
 import org.tracegas.ui.dialogs.ImportWizard;
 import org.tracegas.ui.jobs.FileImportJob;
 import org.tracegas.ui.session.Desk;
@@ -28,7 +28,7 @@ public final class ImportHandler extends AbstractHandler {
     public Object execute(ExecutionEvent event) throws ExecutionException {
         Shell shell = HandlerUtil.getActiveShellChecked(event);
         Desk desk = Desk.get();
-        List<ProjectInfo> projects = desk.access().store().projects().projects(desk.session());
+        List<Project> projects = desk.access().store().projects().projects(desk.session());
         ImportWizard wizard = new ImportWizard(ReaderRegistry.fromPlatform(), projects,
                 TreeChoice.project(HandlerUtil.getCurrentSelection(event), projects));
         if (new WizardDialog(shell, wizard).open() == Window.OK) {

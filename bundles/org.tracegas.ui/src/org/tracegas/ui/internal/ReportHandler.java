@@ -16,7 +16,7 @@ import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.handlers.HandlerUtil;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.library.io.FileFormatException;
-import org.tracegas.store.ProjectInfo;
+import org.tracegas.model.Project;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
@@ -37,7 +37,7 @@ public final class ReportHandler extends AbstractHandler {
         Shell shell = HandlerUtil.getActiveShellChecked(event);
         Desk desk = Desk.get();
         WorkspaceStore store = desk.access().store();
-        ProjectInfo project = TreeChoice.project(HandlerUtil.getCurrentSelection(event),
+        Project project = TreeChoice.project(HandlerUtil.getCurrentSelection(event),
                 store.projects().projects(desk.session()));
         if (project == null) {
             MessageDialog.openInformation(shell, "Report", "Select the project in the workspace tree first.");
@@ -55,14 +55,14 @@ public final class ReportHandler extends AbstractHandler {
             return null;
         }
         FileDialog plan = new FileDialog(shell, SWT.OPEN);
-        plan.setText("The report plan of " + project.code());
+        plan.setText("The report plan of " + project.getCode());
         plan.setFilterExtensions(new String[] {"*.plan", "*"});
         String chosenPlan = plan.open();
         if (chosenPlan == null) {
             return null;
         }
         DirectoryDialog folder = new DirectoryDialog(shell);
-        folder.setText("The folder for report.pdf and results.csv of " + project.code());
+        folder.setText("The folder for report.pdf and results.csv of " + project.getCode());
         String chosenFolder = folder.open();
         if (chosenFolder == null) {
             return null;
@@ -81,7 +81,7 @@ public final class ReportHandler extends AbstractHandler {
      *
      * @throws FileFormatException if the stored method text cannot be read
      */
-    public static CampaignReportJob.Request request(WorkspaceStore store, ProjectInfo project, VersionInfo version,
+    public static CampaignReportJob.Request request(WorkspaceStore store, Project project, VersionInfo version,
             Path plan, Path folder) throws FileFormatException {
         return new CampaignReportJob.Request(store, Desk.get().session(), project, version,
                 StoredMethod.parse(store.versions().content(version.id()), "method version " + version.id()), plan,

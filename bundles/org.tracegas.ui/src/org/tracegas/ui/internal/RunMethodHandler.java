@@ -18,8 +18,8 @@ import org.eclipse.ui.dialogs.ElementListSelectionDialog;
 import org.eclipse.ui.handlers.HandlerUtil;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.model.Project;
 import org.tracegas.preprocess.StepRegistry;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
@@ -45,7 +45,7 @@ public final class RunMethodHandler extends AbstractHandler {
         }
         WorkspaceStore store = desk.access().store();
         ISelection selection = HandlerUtil.getCurrentSelection(event);
-        ProjectInfo project = TreeChoice.project(selection, store.projects().projects(desk.session()));
+        Project project = TreeChoice.project(selection, store.projects().projects(desk.session()));
         if (project == null) {
             MessageDialog.openInformation(shell, "Run method", "Select a project, or some of its measurements, in"
                     + " the workspace tree first.");
@@ -92,7 +92,7 @@ public final class RunMethodHandler extends AbstractHandler {
      *
      * @throws FileFormatException if the stored text cannot be read
      */
-    public static StoredMethodRunJob.Target target(WorkspaceStore store, ProjectInfo project, VersionInfo version)
+    public static StoredMethodRunJob.Target target(WorkspaceStore store, Project project, VersionInfo version)
             throws FileFormatException {
         return new StoredMethodRunJob.Target(store, Desk.get().session(), project, version,
                 StoredMethod.parse(store.versions().content(version.id()), "method version " + version.id()));

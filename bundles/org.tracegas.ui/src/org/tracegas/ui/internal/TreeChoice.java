@@ -9,7 +9,6 @@ import org.eclipse.jface.viewers.ISelection;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
-import org.tracegas.store.ProjectInfo;
 
 /** What the desk's commands take from the workspace tree's selection: a project, and chosen measurements. */
 public final class TreeChoice {
@@ -18,7 +17,7 @@ public final class TreeChoice {
     }
 
     /** The stored project of the first selected project or measurement, or null. */
-    public static ProjectInfo project(ISelection selection, List<ProjectInfo> projects) {
+    public static Project project(ISelection selection, List<Project> projects) {
         String id = null;
         for (Object o : elements(selection)) {
             Project p = project(o);
@@ -27,8 +26,8 @@ public final class TreeChoice {
                 break;
             }
         }
-        for (ProjectInfo info : projects) {
-            if (info.id().equals(id)) {
+        for (Project info : projects) {
+            if (info.getId().equals(id)) {
                 return info;
             }
         }
@@ -39,11 +38,11 @@ public final class TreeChoice {
      * The ids of the selected measurements of {@code project}, in the order selected; a selected project stands
      * for all its measurements.
      */
-    public static List<String> measurementIds(ISelection selection, ProjectInfo project) {
+    public static List<String> measurementIds(ISelection selection, Project project) {
         Set<String> ids = new LinkedHashSet<>();
         for (Object o : elements(selection)) {
             Project p = project(o);
-            if (p == null || !p.getId().equals(project.id())) {
+            if (p == null || !p.getId().equals(project.getId())) {
                 continue;
             }
             if (o instanceof Measurement m) {

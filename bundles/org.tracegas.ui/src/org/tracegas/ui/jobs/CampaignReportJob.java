@@ -13,11 +13,11 @@ import org.tracegas.report.campaign.ReportIdTakenException;
 import org.tracegas.report.campaign.ReportPlan;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.ImportException;
+import org.tracegas.model.Project;
 import org.tracegas.report.AuditAnchor;
 import org.tracegas.report.PdfReportWriter;
 import org.tracegas.report.ReportContent;
 import org.tracegas.report.Signature;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
@@ -33,7 +33,7 @@ import org.tracegas.store.WorkspaceStore;
 public final class CampaignReportJob extends Job {
 
     /** What the report was made from and where it goes. */
-    public record Request(WorkspaceStore store, Session actor, ProjectInfo project, VersionInfo version,
+    public record Request(WorkspaceStore store, Session actor, Project project, VersionInfo version,
             StoredMethod method, Path plan, Path folder) {
     }
 
@@ -52,7 +52,7 @@ public final class CampaignReportJob extends Job {
 
     /** @param software what the report states as its software */
     public CampaignReportJob(Request request, String software) {
-        super("Making the report of " + request.project().code() + " with " + request.method().method().name()
+        super("Making the report of " + request.project().getCode() + " with " + request.method().method().name()
                 + " version " + request.version().number());
         this.request = request;
         this.software = software;
@@ -62,7 +62,7 @@ public final class CampaignReportJob extends Job {
     @Override
     protected IStatus run(IProgressMonitor monitor) {
         SubMonitor progress = SubMonitor.convert(monitor, getName(), 10);
-        CampaignReport report = new CampaignReport(request.store(), request.actor(), request.project().id(),
+        CampaignReport report = new CampaignReport(request.store(), request.actor(), request.project().getId(),
                 software);
         ReportContent content;
         try {
@@ -73,7 +73,7 @@ public final class CampaignReportJob extends Job {
             content = report.content(request.version(), request.method(), plan);
             progress.worked(7);
         } catch (IOException | ImportException | RuntimeException e) {
-            return Status.error("the report of " + request.project().code() + " could not be made: " + e.getMessage()
+            return Status.error("the report of " + request.project().getCode() + " could not be made: " + e.getMessage()
                     + "; nothing written", e);
         }
         // the last point at which stopping leaves nothing behind: the files are written next
@@ -89,7 +89,7 @@ public final class CampaignReportJob extends Job {
             return Status.error(e.getMessage() + "; give this report its own report-id in the plan "
                     + request.plan() + " (nothing written)", e);
         } catch (IOException | RuntimeException e) {
-            return Status.error("the report of " + request.project().code() + " could not be written to "
+            return Status.error("the report of " + request.project().getCode() + " could not be written to "
                     + request.folder() + ": " + e.getMessage() + "; nothing written", e);
         }
         outcome = new Outcome(content, files);

@@ -13,8 +13,8 @@ import org.eclipse.core.runtime.jobs.Job;
 import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ReaderRegistry;
+import org.tracegas.model.Project;
 import org.tracegas.store.ImportedFile;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -48,7 +48,7 @@ public final class FileImportJob extends Job {
 
     private final WorkspaceStore store;
     private final Session actor;
-    private final ProjectInfo project;
+    private final Project project;
     private final ReaderRegistry readers;
     private final List<Path> files;
     private final FileMeasurements.Defaults defaults;
@@ -59,9 +59,9 @@ public final class FileImportJob extends Job {
      * @param whenDone receives what was stored (also after cancelling, not after a file that cannot be read) in
      *                 the job's thread; UI code must pass it on with {@code Display.asyncExec}
      */
-    public FileImportJob(WorkspaceStore store, Session actor, ProjectInfo project, ReaderRegistry readers,
+    public FileImportJob(WorkspaceStore store, Session actor, Project project, ReaderRegistry readers,
             List<Path> files, FileMeasurements.Defaults defaults, Consumer<Outcome> whenDone) {
-        super("Importing " + files.size() + " file(s) into " + project.code());
+        super("Importing " + files.size() + " file(s) into " + project.getCode());
         if (files.isEmpty()) {
             throw new IllegalArgumentException("files must name at least one file to import");
         }
@@ -100,7 +100,7 @@ public final class FileImportJob extends Job {
                     return Status.CANCEL_STATUS;
                 }
                 progress.subTask("Storing " + r.file().fileName());
-                ImportedFile f = store.imports().importFile(actor, project.id(), r.file(), r.measurements());
+                ImportedFile f = store.imports().importFile(actor, project.getId(), r.file(), r.measurements());
                 stored.add(f);
                 if (f.added()) {
                     added++;
@@ -109,9 +109,9 @@ public final class FileImportJob extends Job {
                 }
                 progress.worked(1);
             }
-            return Status.info(new Outcome(added, known, stored).summary(project.code()));
+            return Status.info(new Outcome(added, known, stored).summary(project.getCode()));
         } catch (RuntimeException e) {
-            return Status.error("importing into " + project.code() + " failed after " + stored.size() + " of "
+            return Status.error("importing into " + project.getCode() + " failed after " + stored.size() + " of "
                     + read.size() + " file(s) (those stay stored): " + e.getMessage(), e);
         } finally {
             whenDone.accept(new Outcome(added, known, stored));

@@ -8,7 +8,7 @@ import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.jobs.Job;
 import org.tracegas.report.campaign.ResultsExport;
-import org.tracegas.store.ProjectInfo;
+import org.tracegas.model.Project;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -21,11 +21,11 @@ public final class ResultsExportJob extends Job {
 
     private final WorkspaceStore store;
     private final Session actor;
-    private final ProjectInfo project;
+    private final Project project;
     private final Path out;
 
-    public ResultsExportJob(WorkspaceStore store, Session actor, ProjectInfo project, Path out) {
-        super("Exporting the results of " + project.code() + " to " + out.getFileName());
+    public ResultsExportJob(WorkspaceStore store, Session actor, Project project, Path out) {
+        super("Exporting the results of " + project.getCode() + " to " + out.getFileName());
         this.store = store;
         this.actor = actor;
         this.project = project;
@@ -37,13 +37,13 @@ public final class ResultsExportJob extends Job {
     protected IStatus run(IProgressMonitor monitor) {
         monitor.beginTask(getName(), IProgressMonitor.UNKNOWN);
         try {
-            ResultsExport.Written w = ResultsExport.write(store, actor, project.id(), out);
+            ResultsExport.Written w = ResultsExport.write(store, actor, project.getId(), out);
             // the values are of toxic gases: they are not to be used without their uncertainty and flags
-            return Status.info("Wrote " + w.results() + " result(s) of project " + project.code() + " to " + out
+            return Status.info("Wrote " + w.results() + " result(s) of project " + project.getCode() + " to " + out
                     + " (sha256 " + w.sha256() + ", recorded in the audit trail). Caution: results of toxic gases;"
                     + " read each value with its uncertainty, detection limit and flags.");
         } catch (IOException | RuntimeException e) {
-            return Status.error("the results of " + project.code() + " could not be written to " + out + ": "
+            return Status.error("the results of " + project.getCode() + " could not be written to " + out + ": "
                     + e.getMessage() + "; nothing exported", e);
         } finally {
             monitor.done();

@@ -13,11 +13,11 @@ import org.eclipse.core.runtime.jobs.Job;
 import org.tracegas.pipeline.MeasurementQuantification;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.ImportException;
+import org.tracegas.model.Measurement;
+import org.tracegas.model.Project;
 import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.quantify.CancellationFlag;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
-import org.tracegas.store.SourcedMeasurement;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
@@ -36,7 +36,7 @@ public final class StoredMethodRunJob extends Job {
     }
 
     /** The method version to run and where its results go. */
-    public record Target(WorkspaceStore store, Session actor, ProjectInfo project, VersionInfo version,
+    public record Target(WorkspaceStore store, Session actor, Project project, VersionInfo version,
             StoredMethod method) {
     }
 
@@ -58,7 +58,7 @@ public final class StoredMethodRunJob extends Job {
     public StoredMethodRunJob(Target target, StepRegistry steps, String software, Set<String> chosen,
             Consumer<Outcome> whenDone) {
         super("Running " + target.method().method().name() + " version " + target.version().number() + " on "
-                + target.project().code());
+                + target.project().getCode());
         this.target = target;
         this.steps = steps;
         this.software = software;
@@ -78,7 +78,7 @@ public final class StoredMethodRunJob extends Job {
         MeasurementQuantification job;
         MeasurementQuantification.Plan plan;
         try {
-            job = new MeasurementQuantification(target.store(), target.actor(), target.project().id(),
+            job = new MeasurementQuantification(target.store(), target.actor(), target.project().getId(),
                     target.version(), target.method(), steps, software);
             plan = chosen(job.plan());
             progress.subTask("Checking " + plan.samples().size() + " measurement(s)");
@@ -105,7 +105,7 @@ public final class StoredMethodRunJob extends Job {
         if (outcome.cancelled()) {
             return Status.CANCEL_STATUS;
         }
-        return Status.info("Quantified " + outcome.stored() + " measurement(s) of project " + target.project().code()
+        return Status.info("Quantified " + outcome.stored() + " measurement(s) of project " + target.project().getCode()
                 + " with method '" + target.method().method().name() + "' version " + target.version().number()
                 + "; skipped " + outcome.skipped() + " quantified with it before");
     }
@@ -115,9 +115,9 @@ public final class StoredMethodRunJob extends Job {
         if (chosen.isEmpty()) {
             return all;
         }
-        List<SourcedMeasurement> samples = all.samples().stream()
-                .filter(m -> chosen.contains(m.measurement().id())).toList();
-        Set<String> analysed = target.store().analyses().analysed(target.actor(), target.project().id(),
+        List<Measurement> samples = all.samples().stream()
+                .filter(m -> chosen.contains(m.getId())).toList();
+        Set<String> analysed = target.store().analyses().analysed(target.actor(), target.project().getId(),
                 target.version().id());
         int skipped = (int) chosen.stream().filter(analysed::contains).count();
         return new MeasurementQuantification.Plan(samples, skipped, Map.of());

@@ -14,7 +14,6 @@ import org.tracegas.library.OriginKind;
 import org.tracegas.library.ReferenceConditions;
 import org.tracegas.library.ReferenceMetadata;
 import org.tracegas.model.AccessLevel;
-import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
@@ -26,15 +25,14 @@ import org.tracegas.qa.checks.AbsorbanceRegion;
 import org.tracegas.qa.checks.BackgroundAgeCheck;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.qa.checks.NoiseCheck;
-import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.AnalysisRegion;
+import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.ReferenceSpectrum;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -81,14 +79,14 @@ public final class DemoProject {
      */
     public static Seeded seed(WorkspaceStore store, Session admin, Session analyst, String managerId) {
         String analystId = analyst.userId();
-        String clientId = store.projects().createClient(admin, "Harbour Lime Works");
-        ProjectInfo project = store.projects().createProject(admin, clientId, PROJECT_CODE,
+        String clientId = store.projects().createClient(admin, "Harbour Lime Works").getId();
+        Project project = store.projects().createProject(admin, clientId, PROJECT_CODE,
                 "Kiln stack, March campaign");
-        store.projects().grant(admin, project.id(), analystId, AccessLevel.WRITE);
-        store.projects().grant(admin, project.id(), managerId, AccessLevel.READ);
+        store.projects().grant(admin, project.getId(), analystId, AccessLevel.WRITE);
+        store.projects().grant(admin, project.getId(), managerId, AccessLevel.READ);
         List<String> measurements = new ArrayList<>();
         for (Instant t : TIMES) {
-            measurements.add(store.projects().recordMeasurement(analyst, project.id(), MeasurementKind.SAMPLE, t,
+            measurements.add(store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.SAMPLE, t,
                     453.15, 1013.0));
         }
         List<ReferenceSpectrum> refs = references();
@@ -104,8 +102,9 @@ public final class DemoProject {
         for (int i = 0; i < measurements.size(); i++) {
             samples.add(sample(refs, 40 + 15 * i, 8 + 2 * i, 9000, 11 + i));
         }
-        Workspace model = model(project, measurements, stored, methodVersion, library);
-        return new Seeded(model, project.id(), List.copyOf(measurements), methodVersion.id(), library.id(), stored,
+        Workspace model = model(store.projects().project(analyst, project.getId()),
+                store.projects().measurements(analyst, project.getId()), stored, methodVersion, library);
+        return new Seeded(model, project.getId(), List.copyOf(measurements), methodVersion.id(), library.id(), stored,
                 libraryEntries(refs), List.copyOf(samples), TIMES, BACKGROUND);
     }
 
@@ -184,29 +183,16 @@ public final class DemoProject {
         return List.copyOf(out);
     }
 
-    private static Workspace model(ProjectInfo info, List<String> measurementIds, StoredMethod method,
+    /** The workspace with the project and its measurements as the store reads them. */
+    private static Workspace model(Project project, List<Measurement> measurements, StoredMethod method,
             VersionInfo methodVersion, VersionInfo library) {
         WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
         Workspace w = f.createWorkspace();
         w.setName("Demo workspace");
-        Client client = f.createClient();
-        client.setId(info.clientId());
-        client.setName("Harbour Lime Works");
-        Project p = f.createProject();
-        p.setId(info.id());
-        p.setCode(info.code());
-        p.setName(info.name());
-        for (int i = 0; i < measurementIds.size(); i++) {
-            Measurement m = f.createMeasurement();
-            m.setId(measurementIds.get(i));
-            m.setKind(MeasurementKind.SAMPLE);
-            m.setTime(TIMES.get(i));
-            m.setCellTemperature(453.15);
-            m.setCellPressure(1013.0);
-            p.getMeasurements().add(m);
+        for (Measurement m : measurements) {
+            project.getMeasurements().add(m);
         }
-        client.getProjects().add(p);
-        w.getClients().add(client);
+        w.getClients().add(project.getClient());
         ReferenceLibrary lib = f.createReferenceLibrary();
         lib.setId(library.itemId());
         lib.setName(library.name());

@@ -15,7 +15,7 @@ import java.util.Map;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.SubMonitor;
 
-import org.tracegas.store.MeasurementInfo;
+import org.tracegas.model.Measurement;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
@@ -53,8 +53,8 @@ public final class StoredResults {
         SubMonitor progress = SubMonitor.convert(monitor, "Reading stored results", 3);
         progress.split(1);
         Map<String, Instant> times = new HashMap<>();
-        for (MeasurementInfo m : store.projects().measurements(actor, projectId)) {
-            times.put(m.id(), m.time());
+        for (Measurement m : store.projects().measurements(actor, projectId)) {
+            times.put(m.getId(), m.getTime());
         }
         progress.split(1);
         List<ResultInfo> results = store.results().results(actor, projectId);

@@ -1,8 +1,6 @@
 package org.tracegas.ui.session;
 
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.OperationCanceledException;
@@ -17,9 +15,6 @@ import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
-import org.tracegas.store.ClientInfo;
-import org.tracegas.store.MeasurementInfo;
-import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -27,8 +22,9 @@ import org.tracegas.store.WorkspaceStore;
 
 /**
  * The navigator's model of a workspace that already held data when it was opened: the clients, projects and
- * measurements the signed-in user may read, and the newest version of each reference library and analysis
- * method (with its regions, as {@link MethodVersions} reads them for the workbench and the runner alike).
+ * measurements the signed-in user may read, as the store reads them, and the newest version of each reference
+ * library and analysis method (with its regions, as {@link MethodVersions} reads them for the workbench and the
+ * runner alike).
  */
 public final class StoredWorkspace {
 
@@ -46,38 +42,26 @@ public final class StoredWorkspace {
         WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
         Workspace w = f.createWorkspace();
         w.setName(name);
-        Map<String, Client> clients = new HashMap<>();
-        List<ClientInfo> clientInfos = store.projects().clients(actor);
-        List<ProjectInfo> projectInfos = store.projects().projects(actor);
+        List<Client> clients = store.projects().clients(actor);
+        w.getClients().addAll(clients);
+        List<Project> projects = clients.stream().flatMap(c -> c.getProjects().stream()).toList();
         progress.worked(5);
-        for (ClientInfo info : clientInfos) {
-            Client c = f.createClient();
-            c.setId(info.id());
-            c.setName(info.name());
-            clients.put(info.id(), c);
-            w.getClients().add(c);
-        }
-        SubMonitor perProject = progress.split(90).setWorkRemaining(Math.max(1, projectInfos.size()));
-        for (ProjectInfo info : projectInfos) {
-            perProject.subTask(info.code());
+        SubMonitor perProject = progress.split(90).setWorkRemaining(Math.max(1, projects.size()));
+        for (Project p : projects) {
+            perProject.subTask(p.getCode());
             SubMonitor step = perProject.split(1);
-            Project p = f.createProject();
-            p.setId(info.id());
-            p.setCode(info.code());
-            p.setName(info.name());
-            for (MeasurementInfo mi : store.projects().measurements(actor, info.id())) {
+            List<Measurement> measurements = store.projects().measurements(actor, p.getId());
+            if (!measurements.isEmpty()) {
+                // out of the project they were read in, in one pass: moving them one by one would search
+                // and shift that project's list for each
+                measurements.get(0).getProject().getMeasurements().clear();
+            }
+            for (Measurement m : measurements) {
                 if (p.getMeasurements().size() % 500 == 0 && step.isCanceled()) {
                     throw new OperationCanceledException();
                 }
-                Measurement m = f.createMeasurement();
-                m.setId(mi.id());
-                m.setKind(mi.kind());
-                m.setTime(mi.time());
-                m.setCellTemperature(mi.cellTemperature());
-                m.setCellPressure(mi.cellPressure());
                 p.getMeasurements().add(m);
             }
-            clients.get(info.clientId()).getProjects().add(p);
             step.done();
         }
         progress.split(5);

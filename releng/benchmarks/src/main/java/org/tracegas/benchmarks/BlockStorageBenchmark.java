@@ -86,8 +86,9 @@ public class BlockStorageBenchmark {
         Session admin = store.users().createFirstAdministrator("admin", "Admin", "bench-admin-1".toCharArray());
         store.users().createUser(admin, "ana", "Analyst", Set.of(Role.ANALYST), "bench-ana-12".toCharArray());
         analyst = store.users().logIn("ana", "bench-ana-12".toCharArray());
-        projectId = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "B-1",
-                "Benchmark").id();
+        projectId = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
+                "B-1",
+                "Benchmark").getId();
         String method = store.versions().create(analyst, VersionKind.METHOD, "m", "a=1\n", "bench").id();
         String library = store.versions().create(analyst, VersionKind.LIBRARY, "l", "b=1\n", "bench").id();
         block = block(method, library);

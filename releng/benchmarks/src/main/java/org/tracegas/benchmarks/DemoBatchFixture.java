@@ -79,8 +79,9 @@ final class DemoBatchFixture implements AutoCloseable {
         Session admin = store.users().createFirstAdministrator("admin", "Admin", "bench-admin-1".toCharArray());
         store.users().createUser(admin, "ana", "Analyst", Set.of(Role.ANALYST), "bench-ana-12".toCharArray());
         analyst = store.users().logIn("ana", "bench-ana-12".toCharArray());
-        projectId = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client"), "B-1",
-                "Benchmark").id();
+        projectId = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
+                "B-1",
+                "Benchmark").getId();
         VersionInfo met = store.versions().create(analyst, VersionKind.METHOD, fitted.name(), fitted.canonicalText(),
                 "bench");
         VersionInfo lib = store.versions().create(analyst, VersionKind.LIBRARY, library.name(),
