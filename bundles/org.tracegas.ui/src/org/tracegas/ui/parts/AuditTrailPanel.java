@@ -79,8 +79,8 @@ public final class AuditTrailPanel extends Composite {
         chainState.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 6, 1));
         chainState.setText("Chain not verified yet.");
         user = text("User id");
-        objectType = combo("Object", true, ALL, "result", "user", "project", "measurement", "spectral-data",
-                "version");
+        objectType = combo("Object", true, ALL, "result", "report", "user", "project", "measurement",
+                "spectral-data", "version");
         objectId = text("Object id");
         from = text("From (UTC date)");
         to = text("Until (UTC date, exclusive)");
@@ -337,6 +337,10 @@ public final class AuditTrailPanel extends Composite {
 
     public Text userFilter() {
         return user;
+    }
+
+    public Combo objectFilter() {
+        return objectType;
     }
 
     public Combo actionFilter() {
