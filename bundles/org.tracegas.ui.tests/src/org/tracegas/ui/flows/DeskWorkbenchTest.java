@@ -13,6 +13,7 @@ import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.GC;
 import org.eclipse.swt.graphics.Image;
 import org.eclipse.swt.graphics.ImageData;
+import org.eclipse.swt.graphics.Point;
 import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
@@ -24,9 +25,11 @@ import org.eclipse.ui.IWorkbenchWindow;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditAction;
+import org.tracegas.store.VersionKind;
 import org.tracegas.ui.Screens;
 import org.tracegas.ui.parts.AuditTrailPanel;
 import org.tracegas.ui.parts.ConcentrationTrace;
+import org.tracegas.ui.parts.MethodEditorPanel;
 import org.tracegas.ui.parts.SpectrumPanel;
 import org.tracegas.ui.parts.TimeSeriesPanel;
 import org.tracegas.ui.parts.WorkspaceNavigator;
@@ -51,7 +54,7 @@ class DeskWorkbenchTest {
         List<Path> shots = new ArrayList<>();
         StartedWorkbench.run(folder.resolve("ws"), LimeKilnLab.REVIEWER, LimeKilnLab.PASSWORD,
                 (display, window) -> drive(display, window, shots));
-        assertEquals(2, shots.size());
+        assertEquals(3, shots.size());
     }
 
     private static void drive(Display display, IWorkbenchWindow window, List<Path> shots) throws Exception {
@@ -77,6 +80,15 @@ class DeskWorkbenchTest {
         assertTrue(title.contains("ABOVE_CALIBRATED_RANGE"), title);
         shots.add(Screens.save(shell, "workbench-spectrum-from-time-series"));
 
+        // the method beside the spectrum, a region's span edited: the form and the comparison fit the narrow view
+        MethodEditorPanel method = find(shell, MethodEditorPanel.class);
+        method.openStored(Desk.get().access().store().versions().latest(VersionKind.METHOD).get(0).id());
+        method.upperField().setText("2230");
+        assertEquals("1 field differs (highlighted).", method.comparison().summary().getText());
+        Screens.flush(display);
+        assertInside(method);
+        shots.add(Screens.save(shell, "workbench-method-1280x800"));
+
         IWorkbenchPage page = window.getActivePage();
         // in its place on the desk, not maximized: its rows must paint there too
         page.showView(AuditTrailView.ID);
@@ -88,12 +100,36 @@ class DeskWorkbenchTest {
         assertTrue(audit.shown().records().stream().anyMatch(r -> r.objectType().equals("raw-file")));
         assertEquals(audit.shown().records().size(), audit.table().getItemCount());
         shots.add(Screens.save(shell, "workbench-audit-trail"));
+        // the product's window on the smallest screen it is made for; the trail's records keep room for rows
+        assertEquals(new Point(1280, 800), shell.getSize());
+        assertInside(audit);
+        int rows = audit.table().getClientArea().height / audit.table().getItemHeight();
+        assertTrue(rows >= 3, "the audit trail shows " + rows + " rows at 1280×800");
         // the first row's strip: the table's client coordinates start below its header
         int colours = coloursOnScreen(display, audit.table(),
                 new Rectangle(0, 0, audit.table().getClientArea().width, audit.table().getItemHeight()));
         // a painted row holds anti-aliased text (hundreds of colours); an unpainted one is background and a grid
         // line or two
         assertTrue(colours > 20, "the first row of the audit trail is painted: " + colours + " colours on screen");
+    }
+
+    /**
+     * Fails when a visible control below {@code parent} reaches past its parent's client area, where the window
+     * would cut it off (a pixel of rounding allowed).
+     */
+    private static void assertInside(Composite parent) {
+        Rectangle area = parent.getClientArea();
+        for (Control c : parent.getChildren()) {
+            if (!c.isVisible()) {
+                continue;
+            }
+            Rectangle b = c.getBounds();
+            assertTrue(b.x + b.width <= area.x + area.width + 1 && b.y + b.height <= area.y + area.height + 1,
+                    c + " at " + b + " reaches past " + parent + "'s " + area);
+            if (c instanceof Composite k) {
+                assertInside(k);
+            }
+        }
     }
 
     /** How many colours the screen shows in {@code area} (control coordinates, clipped to 600 pixels wide). */

@@ -3,9 +3,11 @@ package org.tracegas.ui.flows;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.atomic.AtomicReference;
 
+import org.eclipse.core.runtime.Platform;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
@@ -50,6 +52,9 @@ final class StartedWorkbench {
             assertNotNull(dialog.session(), login + " is logged in");
             parent.dispose();
             Desk.get().start(access, dialog.session(), null);
+            // each start shows the product's first layout, not the one an earlier start left behind
+            Files.deleteIfExists(Path.of(Platform.getInstanceLocation().getURL().getFile(), ".metadata", ".plugins",
+                    "org.eclipse.e4.workbench", "workbench.xmi"));
 
             AtomicReference<Throwable> failure = new AtomicReference<>();
             Runnable[] whenOpen = new Runnable[1];

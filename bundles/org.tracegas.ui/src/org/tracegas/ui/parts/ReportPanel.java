@@ -71,10 +71,7 @@ public final class ReportPanel extends Composite {
         table = new Table(body, SWT.BORDER | SWT.FULL_SELECTION);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
-        GridData td = new GridData(SWT.FILL, SWT.FILL, true, false, 2, 1);
-        // room for the header, a review and an approval
-        td.heightHint = table.getHeaderHeight() + 2 * table.getItemHeight() + 4;
-        table.setLayoutData(td);
+        table.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, false, 2, 1));
         for (String c : new String[] {"Signature", "Given on", "Audit record"}) {
             new TableColumn(table, SWT.NONE).setText(c);
         }
@@ -130,6 +127,9 @@ public final class ReportPanel extends Composite {
         for (TableColumn c : table.getColumns()) {
             c.pack();
         }
+        // room for every signature, at least a review and an approval; the view scrolls when it is short
+        ((GridData) table.getLayoutData()).heightHint = table.getHeaderHeight()
+                + Math.max(2, signatures.size()) * table.getItemHeight() + 2 * table.getBorderWidth();
         verified = null;
         verification.setText("Verifying the audit chain and the data bound to it…");
         verification.setForeground(null);
