@@ -120,9 +120,9 @@ class DeskWorkbenchSigningTest {
         Screens.waitFor(display, () -> panel.approval() != null && panel.verified() != null, 60_000);
         // the report made again from the same stored data has the content the reviewer signed
         assertEquals(1, panel.table().getItemCount());
-        assertTrue(panel.table().getItem(0).getText(0).startsWith("REVIEWED by Elin Lindqvist"),
-                panel.table().getItem(0).getText(0));
-        assertEquals("this content", panel.table().getItem(0).getText(1));
+        assertTrue(panel.table().getItem(0).getText(1).startsWith("REVIEWED by Elin Lindqvist"),
+                panel.table().getItem(0).getText(1));
+        assertEquals("this content", panel.table().getItem(0).getText(0));
         assertTrue(panel.signatureState().getText().startsWith("Needs an approval on this content"),
                 panel.signatureState().getText());
         assertTrue(panel.verification().getText().startsWith("Now: Verified: audit chain of "),
@@ -169,8 +169,8 @@ class DeskWorkbenchSigningTest {
         assertEquals(ReportApproval.COMPLETE, panel.signatureState().getText());
         assertEquals(2, panel.table().getItemCount());
         TableItem approval = panel.table().getItem(1);
-        assertTrue(approval.getText(0).startsWith("APPROVED by Amara Moreau"), approval.getText(0));
-        assertEquals("this content", approval.getText(1));
+        assertTrue(approval.getText(1).startsWith("APPROVED by Amara Moreau"), approval.getText(1));
+        assertEquals("this content", approval.getText(0));
         // the signature is the chain's newest record and the chain with it verifies
         List<Signature> signatures = panel.signatures();
         assertTrue(panel.verified().intact(), panel.verification().getText());
@@ -191,6 +191,10 @@ class DeskWorkbenchSigningTest {
                 .filter(r -> r.action() == AuditAction.SIGNATURE).map(AuditRecord::meaning).toList());
         assertTrue(audit.shown().chain().intact(), audit.shown().chain().findings().toString());
         assertEquals(3, audit.table().getItemCount());
+        // the review desk at 1280×800: the report and the trail lie inside their views
+        assertEquals(new org.eclipse.swt.graphics.Point(1280, 800), shell.getSize());
+        StartedWorkbench.assertInside(panel);
+        StartedWorkbench.assertInside(audit);
         shots.add(Screens.save(shell, "workbench-audit-trail-signatures"));
     }
 

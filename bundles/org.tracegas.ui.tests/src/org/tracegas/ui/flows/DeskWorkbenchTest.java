@@ -86,7 +86,7 @@ class DeskWorkbenchTest {
         method.upperField().setText("2230");
         assertEquals("1 field differs (highlighted).", method.comparison().summary().getText());
         Screens.flush(display);
-        assertInside(method);
+        StartedWorkbench.assertInside(method);
         shots.add(Screens.save(shell, "workbench-method-1280x800"));
 
         IWorkbenchPage page = window.getActivePage();
@@ -102,7 +102,7 @@ class DeskWorkbenchTest {
         shots.add(Screens.save(shell, "workbench-audit-trail"));
         // the product's window on the smallest screen it is made for; the trail's records keep room for rows
         assertEquals(new Point(1280, 800), shell.getSize());
-        assertInside(audit);
+        StartedWorkbench.assertInside(audit);
         int rows = audit.table().getClientArea().height / audit.table().getItemHeight();
         assertTrue(rows >= 3, "the audit trail shows " + rows + " rows at 1280×800");
         // the first row's strip: the table's client coordinates start below its header
@@ -111,25 +111,6 @@ class DeskWorkbenchTest {
         // a painted row holds anti-aliased text (hundreds of colours); an unpainted one is background and a grid
         // line or two
         assertTrue(colours > 20, "the first row of the audit trail is painted: " + colours + " colours on screen");
-    }
-
-    /**
-     * Fails when a visible control below {@code parent} reaches past its parent's client area, where the window
-     * would cut it off (a pixel of rounding allowed).
-     */
-    private static void assertInside(Composite parent) {
-        Rectangle area = parent.getClientArea();
-        for (Control c : parent.getChildren()) {
-            if (!c.isVisible()) {
-                continue;
-            }
-            Rectangle b = c.getBounds();
-            assertTrue(b.x + b.width <= area.x + area.width + 1 && b.y + b.height <= area.y + area.height + 1,
-                    c + " at " + b + " reaches past " + parent + "'s " + area);
-            if (c instanceof Composite k) {
-                assertInside(k);
-            }
-        }
     }
 
     /** How many colours the screen shows in {@code area} (control coordinates, clipped to 600 pixels wide). */

@@ -2,6 +2,7 @@ package org.tracegas.ui.flows;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -9,6 +10,8 @@ import java.util.concurrent.atomic.AtomicReference;
 
 import org.eclipse.core.runtime.Platform;
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.custom.ScrolledComposite;
+import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
 import org.eclipse.swt.widgets.Display;
@@ -80,6 +83,29 @@ final class StartedWorkbench {
             assertEquals(PlatformUI.RETURN_OK, code);
         } finally {
             access.close();
+        }
+    }
+
+    /**
+     * Fails when a visible control below {@code parent} reaches past its parent's client area, where the window
+     * would cut it off (a pixel of rounding allowed). What a scrolled composite holds may be larger than it: it
+     * scrolls.
+     */
+    static void assertInside(Composite parent) {
+        if (parent instanceof ScrolledComposite) {
+            return;
+        }
+        Rectangle area = parent.getClientArea();
+        for (Control c : parent.getChildren()) {
+            if (!c.isVisible()) {
+                continue;
+            }
+            Rectangle b = c.getBounds();
+            assertTrue(b.x + b.width <= area.x + area.width + 1 && b.y + b.height <= area.y + area.height + 1,
+                    c + " at " + b + " reaches past " + parent + "'s " + area);
+            if (c instanceof Composite k) {
+                assertInside(k);
+            }
         }
     }
 

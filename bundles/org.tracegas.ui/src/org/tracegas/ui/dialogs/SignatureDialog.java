@@ -28,26 +28,11 @@ import org.tracegas.ui.session.ResultApproval;
  */
 public final class SignatureDialog extends Dialog {
 
-    /** What the dialog signs, and how. */
-    public interface Subject {
-
-        /** What is signed, in a word of the dialog's title: "result", "report". */
-        String kind();
-
-        /** What is signed, as the dialog's first row shows it. */
-        String description();
-
-        /** The signer's printed name, shown with the signature. */
-        String printedName();
+    /** Gives the signature in the desk's session from what was typed in the dialog. */
+    @FunctionalInterface
+    public interface Signer {
 
         /**
-         * Why the store refuses the signer's own work, completing "Signature refused: ".
-         */
-        String ownWork();
-
-        /**
-         * Signs in the desk's session.
-         *
          * @param typedLogin the login typed at signing; must be the session's own
          * @param password   typed at signing; cleared afterwards
          * @throws SignatureRefusedException wrong password, own work, or another user's login (the refusal is in
@@ -55,6 +40,18 @@ public final class SignatureDialog extends Dialog {
          */
         Signature sign(String typedLogin, char[] password, SignatureMeaning meaning, String comment)
                 throws SignatureRefusedException;
+    }
+
+    /**
+     * What the dialog signs, and how.
+     *
+     * @param kind        what is signed, in a word of the dialog's title: "result", "report"
+     * @param description what is signed, as the dialog's first row shows it
+     * @param printedName the signer's printed name, shown with the signature
+     * @param ownWork     why the store refuses the signer's own work, completing "Signature refused: "
+     * @param signer      gives the signature from what was typed
+     */
+    public record Subject(String kind, String description, String printedName, String ownWork, Signer signer) {
     }
 
     private final Subject subject;
@@ -67,35 +64,12 @@ public final class SignatureDialog extends Dialog {
 
     /** Signs a stored result in the session's name. */
     public SignatureDialog(Shell parent, ResultApproval approval, Session session, ResultInfo result) {
-        this(parent, new Subject() {
-            @Override
-            public String kind() {
-                return "result";
-            }
-
-            @Override
-            public String description() {
-                return String.format(Locale.ROOT, "%s %.4g %s (± %.2g), recorded by %s",
-                        result.values().compound(), result.values().concentration(), result.values().unit(),
-                        result.values().uncertainty(), approval.loginOf(result.recordedBy()));
-            }
-
-            @Override
-            public String printedName() {
-                return approval.printedName(session);
-            }
-
-            @Override
-            public String ownWork() {
-                return "you recorded this result yourself";
-            }
-
-            @Override
-            public Signature sign(String typedLogin, char[] password, SignatureMeaning meaning, String comment)
-                    throws SignatureRefusedException {
-                return approval.sign(session, result, typedLogin, password, meaning, comment);
-            }
-        });
+        this(parent, new Subject("result", String.format(Locale.ROOT, "%s %.4g %s (± %.2g), recorded by %s",
+                result.values().compound(), result.values().concentration(), result.values().unit(),
+                result.values().uncertainty(), approval.loginOf(result.recordedBy())), approval.printedName(session),
+                "you recorded this result yourself",
+                (login, password, meaning, comment) -> approval.sign(session, result, login, password, meaning,
+                        comment)));
     }
 
     public SignatureDialog(Shell parent, Subject subject) {
@@ -160,7 +134,7 @@ public final class SignatureDialog extends Dialog {
     @Override
     protected void okPressed() {
         try {
-            signature = subject.sign(login.getText().trim(), password.getText().toCharArray(),
+            signature = subject.signer().sign(login.getText().trim(), password.getText().toCharArray(),
                     SignatureMeaning.valueOf(meaning.getText()), comment.getText());
         } catch (SignatureRefusedException e) {
             message.setText(refusal(e.reason(), subject));

@@ -16,8 +16,6 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 import org.tracegas.audit.Signature;
-import org.tracegas.audit.SignatureMeaning;
-import org.tracegas.audit.SignatureRefusedException;
 import org.tracegas.report.ReportContent;
 import org.tracegas.store.StoreException;
 import org.tracegas.store.WorkspaceVerification;
@@ -72,7 +70,8 @@ public final class ReportPanel extends Composite {
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
         table.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, false, 2, 1));
-        for (String c : new String[] {"Signature", "Given on", "Audit record"}) {
+        // what a signature covers first: the manifestation is long and may run past a narrow view's edge
+        for (String c : new String[] {"Given on", "Signature", "Audit record"}) {
             new TableColumn(table, SWT.NONE).setText(c);
         }
         verification = new Label(body, SWT.WRAP);
@@ -119,8 +118,8 @@ public final class ReportPanel extends Composite {
         for (Signature s : signatures) {
             TableItem item = new TableItem(table, SWT.NONE);
             boolean current = approval.onThisContent(s);
-            item.setText(new String[] {s.manifestation(), current ? "this content"
-                    : "earlier content " + s.contentSha256().substring(0, 16) + "…, not this one",
+            item.setText(new String[] {current ? "this content"
+                    : "earlier content " + s.contentSha256().substring(0, 16) + "…, not this one", s.manifestation(),
                     "#" + s.sequence()});
             item.setBackground(current ? Palette.PASS : Palette.CHANGED);
         }
@@ -170,34 +169,8 @@ public final class ReportPanel extends Composite {
 
     /** A signature dialog for the report shown, in the desk's session. */
     public SignatureDialog signatureDialog() {
-        ReportApproval signing = approval;
-        return new SignatureDialog(getShell(), new SignatureDialog.Subject() {
-            @Override
-            public String kind() {
-                return "report";
-            }
-
-            @Override
-            public String description() {
-                return signing.description();
-            }
-
-            @Override
-            public String printedName() {
-                return signing.printedName();
-            }
-
-            @Override
-            public String ownWork() {
-                return "you recorded results or QA checks of this report yourself";
-            }
-
-            @Override
-            public Signature sign(String typedLogin, char[] password, SignatureMeaning meaning, String comment)
-                    throws SignatureRefusedException {
-                return signing.sign(typedLogin, password, meaning, comment);
-            }
-        });
+        return new SignatureDialog(getShell(), new SignatureDialog.Subject("report", approval.description(),
+                approval.printedName(), "you recorded results or QA checks of this report yourself", approval::sign));
     }
 
     /** The report shown with its signing, or null. */
