@@ -209,7 +209,8 @@ public final class PdfReportWriter {
         pw.subheading("Method detection limits");
         pw.paragraph("From the replicate zero-gas readings of the campaign, each quantified as a sample is: MDL = "
                 + "t(n-1, 0.99) x S (40 CFR Part 136 Appendix B), MAU the minimum analyte uncertainty (EPA Method 320 "
-                + "section 8.1.6), both in ppm in the cell as fitted. " + BELOW_MDL_CONVENTION, 9f);
+                + "section 8.1.6), both in ppm corrected to the cell's temperature, pressure and path as every result "
+                + "is. " + BELOW_MDL_CONVENTION, 9f);
         List<String[]> rows = new ArrayList<>();
         for (MethodDetectionLimit l : content.detectionLimits()) {
             rows.add(new String[] {l.analyte(), Numbers.significant(l.ppm()),

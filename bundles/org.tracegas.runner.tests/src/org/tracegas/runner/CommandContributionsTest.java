@@ -8,26 +8,21 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.io.ByteArrayOutputStream;
 import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 
 import org.eclipse.core.runtime.IExtensionRegistry;
 import org.eclipse.core.runtime.RegistryFactory;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.quantify.CancellationFlag;
 
 /** The runner's commands come through its extension point, and the table serves them like any other. */
 class CommandContributionsTest {
 
     /** The commands the runner's README and help document. */
-    private static final List<String> BUILT_IN = List.of("demo", "audit-verify", "workspace-init", "user-add",
-            "user-unlock", "project-add", "import", "library-build", "library-add", "method-define", "quantify", "qa",
-            "report", "results-export", "report-sign", "batch-split", "batch-work", "batch-status");
-
-    @TempDir
-    Path folder;
+    private static final List<String> BUILT_IN = List.of("audit-verify", "workspace-init", "user-add", "user-unlock",
+            "project-add", "import", "library-build", "library-add", "method-define", "quantify", "qa", "report",
+            "results-export", "report-sign", "batch-split", "batch-work", "batch-status");
 
     private final ByteArrayOutputStream out = new ByteArrayOutputStream();
     private final ByteArrayOutputStream err = new ByteArrayOutputStream();
@@ -58,16 +53,6 @@ class CommandContributionsTest {
         }
         assertEquals(ExitCode.USAGE, table.dispatch(new String[] { "batch-stauts" }, context));
         assertTrue(err.toString(StandardCharsets.UTF_8).contains("did you mean batch-status?"), err.toString());
-    }
-
-    @Test
-    void aContributedCommandStopsOnTheRunnersCancellation() {
-        Command demo = contributed().stream().filter(c -> c.name().equals("demo")).findFirst().orElseThrow();
-        cancel.cancel();
-        // a demo that is cancelled before its first spectrum stops with the runner's code for a cancelled job
-        assertEquals(ExitCode.CANCELLED, new CommandTable("test", List.of(demo)).dispatch(new String[] { "demo",
-                "--workspace", folder.toString(), "--out", folder.resolve("out").toString() }, context),
-                err.toString(StandardCharsets.UTF_8));
     }
 
     @Test

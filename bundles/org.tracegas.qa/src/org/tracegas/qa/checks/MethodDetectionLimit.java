@@ -15,12 +15,16 @@ import org.tracegas.qa.internal.Stats;
 
 /**
  * Method detection limit and minimum analyte uncertainty of one analyte from replicate zero-gas readings that went
- * through the whole chain (transform, background ratio, fit) as samples do.
+ * through the whole chain (transform, background ratio, fit, correction to the cell's temperature, pressure and
+ * path) as samples do, so that the limit is on the basis of the results it is compared with.
  * <p>
  * MDL = t(n-1, 1-alpha = 0.99) · S, with S the sample standard deviation of the n replicate results and t the
  * one-sided 99 % Student's t value with n-1 degrees of freedom (40 CFR Part 136 Appendix B, procedure; its table
  * gives t(6) = 3.143 for 7 replicates). Appendix B asks for at least 7 replicates: fewer give an MDL that is stated
- * but fails its check.
+ * but fails its check. Revision 2 of Appendix B (2017; its definition, "distinguishable from method blank results",
+ * and its initial estimate from the mean plus three standard deviations of method blanks were read in a retrieved
+ * copy) also computes an MDL_b from method blanks, which zero-gas readings are, with the blanks' mean in it. Its
+ * formula and its rule for a negative mean were not found in a retrieved text, so the mean is not added here.
  * <p>
  * The minimum analyte uncertainty (MAU) is the concentration uncertainty the spectral noise alone leaves (EPA Method
  * 320 §8.1.6, computed as its FTIR Protocol describes): here three times the root mean square of the fit's
@@ -43,7 +47,9 @@ public record MethodDetectionLimit(String analyte, int readings, double standard
     public static final String MAU_CHECK = "Minimum analyte uncertainty ";
 
     static final String MDL_SOURCE = "40 CFR Part 136 Appendix B, procedure (MDL = t(n-1, 1-alpha = 0.99) x S, "
-            + "at least 7 replicates; t table as reproduced in Wis. Adm. Code NR 252.0365)";
+            + "at least 7 replicates; t table as reproduced in Wis. Adm. Code NR 252.0365). Revision 2 (2017) "
+            + "defines the MDL as distinguishable from method blank results and adds one from the blanks (MDL_b, "
+            + "with their mean): not applied, its text was not retrieved (not confirmed)";
     static final String MAU_SOURCE = "EPA Method 320 section 8.1.6 (MAU per the FTIR Protocol); 3 x the fit's "
             + "noise-limited standard uncertainty: from memory, not confirmed in a retrieved text";
     /** The number of readings the MDL rule states, read back from a stored outcome. */
@@ -106,7 +112,8 @@ public record MethodDetectionLimit(String analyte, int readings, double standard
      */
     public List<CheckOutcome> outcomes() {
         Rule mdlRule = new Rule(String.format(Locale.ROOT, "MDL = t(n-1, 0.99) x S = %.3f x %s ppm with n = %d "
-                + "replicate zero-gas readings quantified as samples (at least %d needed)", t,
+                + "replicate zero-gas readings quantified and corrected to their cell as samples are (at least %d "
+                + "needed)", t,
                 Format.number(standardDeviation), readings, MINIMUM_READINGS), MDL_SOURCE);
         Rule mauRule = new Rule(String.format(Locale.ROOT, "MAU = 3 x RMS of the fit's noise-limited standard "
                 + "uncertainty over the same %d zero-gas readings", readings), MAU_SOURCE);

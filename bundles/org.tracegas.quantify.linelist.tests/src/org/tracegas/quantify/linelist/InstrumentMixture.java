@@ -130,12 +130,26 @@ final class InstrumentMixture {
      */
     Spectrum absorbance(double[] amounts, double offset, double slope, double scale, double noise,
             Random random) {
+        return withNoise(transmittance(amounts, offset, slope, scale), noise, random);
+    }
+
+    /**
+     * The noise-free transmittance the spectrometer reports on {@link #AXIS}, baseline included; the parameters as
+     * {@link #absorbance}.
+     */
+    double[] transmittance(double[] amounts, double offset, double slope, double scale) {
+        return transmittance(amounts, offset, slope, scale, TEMPERATURE, PRESSURE);
+    }
+
+    /** The same in a cell at another temperature (K) and pressure (kPa). */
+    double[] transmittance(double[] amounts, double offset, double slope, double scale, double temperature,
+            double pressure) {
         SpectralAxis fine = SpectralAxis.uniform(AxisUnit.WAVENUMBER, FINE_LOW, FINE_STEP, FINE_SIZE);
         double[] t = new double[FINE_SIZE];
         java.util.Arrays.fill(t, 1.0);
         for (int g = 0; g < 2; g++) {
             if (amounts[g] > 0) {
-                double[] own = exact.get(g).transmittance(fine, new AbsorptionPath(TEMPERATURE, PRESSURE,
+                double[] own = exact.get(g).transmittance(fine, new AbsorptionPath(temperature, pressure,
                         amounts[g] / PATH, PATH)).toArray();
                 for (int i = 0; i < FINE_SIZE; i++) {
                     t[i] *= own[i];
@@ -155,10 +169,87 @@ final class InstrumentMixture {
                 seen += (1 - f) * convolved(t, i) + f * convolved(t, i + 1);
             }
             seen /= ANGLES;
-            double baseline = Math.pow(10, -(offset + slope * (nu - 2150)));
-            out[p] = -Math.log10(seen * baseline + noise * random.nextGaussian());
+            out[p] = seen * Math.pow(10, -(offset + slope * (nu - 2150)));
+        }
+        return out;
+    }
+
+    /** The absorbance of a noise-free transmittance with white noise of the given standard deviation added. */
+    static Spectrum withNoise(double[] transmittance, double noise, Random random) {
+        double[] out = new double[transmittance.length];
+        for (int p = 0; p < out.length; p++) {
+            out[p] = -Math.log10(transmittance[p] + noise * random.nextGaussian());
         }
         return new Spectrum(AXIS, out, Ordinate.ABSORBANCE);
+    }
+
+    /** Points of the transform whose noise {@link #withTransformNoise} imitates: a 256 cm-1 period. */
+    private static final int TRANSFORM_POINTS = 1024;
+    /** cos(2 pi k / N), k = 0 .. N - 1; sin(x) = cos(x - pi / 2). */
+    private static final double[] COSINES = java.util.stream.IntStream.range(0, TRANSFORM_POINTS)
+            .mapToDouble(k -> Math.cos(2 * Math.PI * k / TRANSFORM_POINTS)).toArray();
+
+    /**
+     * The absorbance of a noise-free transmittance with the noise a transform leaves: white noise on the samples of
+     * a double-sided interferogram out to the maximum path difference 1 / resolution, weighted by the apodization
+     * and transformed onto {@link #AXIS}, whose 0.25 cm-1 steps are the transform's own (1 / (2 L), no zero
+     * filling). Summed directly, cosine and sine terms, so that no code of the product makes it. Its standard
+     * deviation at each point is the given one; neighbouring points are correlated by the apodization (Fourier
+     * transform spectroscopy textbooks, from memory: the noise's autocorrelation is the transform of the squared
+     * window).
+     */
+    static Spectrum withTransformNoise(double[] transmittance, double noise, Random random) {
+        int half = TRANSFORM_POINTS / 2;
+        double[] e = new double[transmittance.length];
+        for (int j = 0; j <= half; j++) {
+            double g = Math.sqrt(power(j));
+            double a = g * random.nextGaussian();
+            double b = g * random.nextGaussian();
+            for (int p = 0; p < e.length; p++) {
+                // cos and sin of 2 pi j p / N from the table of one period
+                int k = (int) ((long) j * p % TRANSFORM_POINTS);
+                e[p] += a * COSINES[k] + b * COSINES[(k + 3 * TRANSFORM_POINTS / 4) % TRANSFORM_POINTS];
+            }
+        }
+        double scale = noise / Math.sqrt(transformNoiseCovariance(0));
+        double[] out = new double[e.length];
+        for (int p = 0; p < out.length; p++) {
+            out[p] = -Math.log10(transmittance[p] + scale * e[p]);
+        }
+        return new Spectrum(AXIS, out, Ordinate.ABSORBANCE);
+    }
+
+    /**
+     * The equivalent width of the transform noise's autocorrelation in points, F = sum over all lags of the
+     * correlation coefficient (the definition: the area under the autocorrelation over its peak).
+     */
+    static double transformNoiseWidth() {
+        double sum = 0;
+        for (int lag = 0; lag < TRANSFORM_POINTS; lag++) {
+            sum += transformNoiseCovariance(lag);
+        }
+        return sum / transformNoiseCovariance(0);
+    }
+
+    /** The covariance of {@link #withTransformNoise}'s sum at a lag, before scaling: sum of power_j cos(2 pi j lag / N). */
+    private static double transformNoiseCovariance(int lag) {
+        int half = TRANSFORM_POINTS / 2;
+        double c = 0;
+        for (int j = 0; j <= half; j++) {
+            c += power(j) * Math.cos(2 * Math.PI * j * lag / TRANSFORM_POINTS);
+        }
+        return c;
+    }
+
+    /**
+     * The noise power at path difference j L / (N / 2): the squared apodization weight, halved at 0 and at the
+     * transform's end, whose terms are real only (the discrete Fourier transform of real white noise has half the
+     * variance there).
+     */
+    private static double power(int j) {
+        int half = TRANSFORM_POINTS / 2;
+        double g = APODIZATION.weight((double) j / half);
+        return (j == 0 || j == half ? 0.5 : 1) * g * g;
     }
 
     private double convolved(double[] t, int i) {

@@ -31,9 +31,9 @@ import org.tracegas.spectrum.Spectrum;
  * made by the same generator with a quarter of the noise.
  * <p>
  * Figures at the time of writing (24 mixtures, 48 results; amounts 10 % to 100 % of the highest, 1200 ppm·m of TX1
- * and 3000 ppm·m of TX2), errors relative to the highest amount: RMS error of the line-list fit TX1 0.041 %, TX2
- * 0.085 % (mean 0.019 % and 0.037 %, mostly from the fit's 25 cm-1 line cut-off against the generator's 60 cm-1);
- * curve of growth TX1 0.384 %, TX2 0.395 %; line-list results within 2u 85.4 % (TX1 79.2 %, TX2 91.7 %).
+ * and 3000 ppm·m of TX2), errors relative to the highest amount: RMS error of the line-list fit TX1 0.035 %, TX2
+ * 0.072 % (mean 0.008 % and 0.022 %, mostly from the fit's 25 cm-1 line cut-off against the generator's 60 cm-1);
+ * curve of growth TX1 0.384 %, TX2 0.395 %; line-list results within 2u 95.8 % (TX1 95.8 %, TX2 95.8 %).
  */
 class LineListAlgorithmTest {
 
@@ -137,16 +137,83 @@ class LineListAlgorithmTest {
     }
 
     /**
-     * The truth lies within two standard uncertainties for at least 80 % of the 48 results. For a normal error with
-     * the variance the formula assumes it would be 95.4 % (normal distribution, any statistics handbook); the
-     * formula takes the noise as equal at every point, but the generator's noise is on the transmittance, so the
-     * absorbance noise at a saturated line's core, where the amounts are decided, is up to twice that of the
-     * baseline, and u comes out short (the same cause as in the curve-of-growth accuracy test of the quantify
-     * bundle).
+     * Over 1,040 fits per gas (8 mixtures of the generator, each with 130 draws of its noise) the truth lies within
+     * two standard uncertainties for 93 % to 97 % of them. For a normally distributed error whose standard deviation
+     * u states, 2u covers 95.45 % (JCGM 100:2008, G.1.3 and Table G.1, from memory); the binomial standard deviation
+     * of a share of 1,040 is then 0.65 %, so the band holds an honest u with more than two of them to spare on each
+     * side. The generator puts its noise on the transmittance, which in absorbance is up to several times larger at
+     * a saturated line's core than on the baseline: a fit that weighed every point equally gave TX1 83.5 %, TX2
+     * 94.9 % here; with the noise weights of the fit TX1 95.9 %, TX2 96.3 % at the time of writing.
      */
     @Test
-    void twoStandardUncertaintiesCoverTheTruth() {
-        assertTrue(coverage() >= 0.80, figures);
+    void twoStandardUncertaintiesCoverTheTruthOverNoiseDraws() {
+        double[] shares = coverageOverDraws(random -> t -> InstrumentMixture.withNoise(t, NOISE, random), 1);
+        String figures = String.format(java.util.Locale.ROOT, "within 2u over %d draws: TX1 %.1f %%, TX2 %.1f %%",
+                DRAWS, 100 * shares[0], 100 * shares[1]);
+        System.out.println("line-list fit " + figures);
+        for (int g = 0; g < 2; g++) {
+            assertTrue(shares[g] >= 0.93 && shares[g] <= 0.97, InstrumentMixture.GASES.get(g) + " " + figures);
+        }
+    }
+
+    /**
+     * Noise as a transform leaves it, correlated between neighbouring points by the apodization (equivalent width F
+     * about 2.3 points): the sample's noise-correlation factor sqrt(F), with which the quantify bundle enlarges every
+     * fit's uncertainty, brings the share within 2u from too few to at least 93 %. It overshoots: the factor holds
+     * for a model that varies slowly over F points, and the lines here are about as narrow as the correlation, so
+     * the enlarged u is a conservative one. At the time of writing: without the factor TX1 85.8 %, TX2 90.1 %; with
+     * it TX1 97.5 %, TX2 98.2 %.
+     */
+    @Test
+    void noiseCorrelationFactorCoversCorrelatedNoise() {
+        double factor = Math.sqrt(InstrumentMixture.transformNoiseWidth());
+        double[] shares = coverageOverDraws(random -> t -> InstrumentMixture.withTransformNoise(t, NOISE, random),
+                factor);
+        double[] without = {shares[2], shares[3]};
+        String figures = String.format(java.util.Locale.ROOT, "correlated noise, factor %.3f, within 2u over %d"
+                + " draws: TX1 %.1f %%, TX2 %.1f %%; without the factor TX1 %.1f %%, TX2 %.1f %%", factor, DRAWS,
+                100 * shares[0], 100 * shares[1], 100 * without[0], 100 * without[1]);
+        System.out.println("line-list fit " + figures);
+        assertTrue(factor > 1.4 && factor < 1.6, figures);
+        for (int g = 0; g < 2; g++) {
+            assertTrue(shares[g] >= 0.93 && without[g] < 0.93, InstrumentMixture.GASES.get(g) + " " + figures);
+        }
+    }
+
+    /** Noise draws: 8 mixtures, 130 draws each. */
+    private static final int DRAWS = 8 * 130;
+
+    /**
+     * The share of fits per gas whose truth lies within 2u, over {@link #DRAWS} noise draws of the generator's
+     * mixtures, the samples given the noise-correlation factor; then the same shares within 2u / factor, the u the
+     * fit would have stated without the factor.
+     */
+    private static double[] coverageOverDraws(
+            java.util.function.Function<Random, java.util.function.Function<double[], Spectrum>> noise,
+            double noiseCorrelation) {
+        Random random = new Random(1996_0059);
+        java.util.function.Function<double[], Spectrum> noisy = noise.apply(random);
+        Quantifier byLines = quantifier(method(new LineListAlgorithm(generator.setup())).build());
+        int[] covered = new int[4];
+        for (int m = 0; m < DRAWS / 130; m++) {
+            double[] amounts = new double[2];
+            for (int g = 0; g < 2; g++) {
+                amounts[g] = InstrumentMixture.HIGHEST[g] * (0.1 + 0.9 * random.nextDouble());
+            }
+            double[] transmittance = generator.transmittance(amounts, 0.02 * random.nextGaussian(),
+                    1e-4 * random.nextGaussian(), 0);
+            for (int d = 0; d < 130; d++) {
+                List<CompoundResult> r = byLines.fit(new Sample(noisy.apply(transmittance), null, noiseCorrelation));
+                for (int g = 0; g < 2; g++) {
+                    double truth = amounts[g] / InstrumentMixture.PATH;
+                    double error = Math.abs(r.get(g).concentration() - truth);
+                    double u = r.get(g).standardUncertainty();
+                    covered[g] += error <= 2 * u ? 1 : 0;
+                    covered[2 + g] += error <= 2 * u / noiseCorrelation ? 1 : 0;
+                }
+            }
+        }
+        return java.util.Arrays.stream(covered).mapToDouble(c -> c / (double) DRAWS).toArray();
     }
 
     /**
@@ -184,6 +251,52 @@ class LineListAlgorithmTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> PreparedMethod.prepare(m, InstrumentMixture.AXIS));
         assertTrue(e.getMessage().contains("TX3") && e.getMessage().contains("[TX1, TX2]"), e.getMessage());
+    }
+
+    /**
+     * A hot cell: the sample made at 470 K and 97 kPa (the generator's own line-by-line model with self-broadening,
+     * direct convolution and ray angles) is found within 1 % of the truth by a method that takes each sample's
+     * measured conditions, and well off by one that computes at its stated 308.15 K and 99.8 kPa, where the
+     * lines' intensities, Boltzmann populations and widths differ (line intensity at temperature T, HITRAN
+     * definitions, from memory). At the time of writing: measured TX1 -0.13 %, TX2 -0.09 %; stated about half the
+     * truth for both.
+     */
+    @Test
+    void measuredCellConditionsHoldAHotCell() {
+        double[] amounts = {600, 1500};
+        Sample hot = Sample.of(InstrumentMixture.withNoise(generator.transmittance(amounts, 0.01, 0, 0, 470, 97),
+                NOISE, new Random(470))).inCell(470, 97);
+        LineListSetup stated = generator.setup();
+        LineListSetup measured = new LineListSetup(stated.models(), stated.temperature(), stated.pressure(),
+                stated.lineShape(), stated.fieldOfView(), true);
+        List<CompoundResult> byMeasured = quantifier(method(new LineListAlgorithm(measured)).build()).fit(hot);
+        List<CompoundResult> byStated = quantifier(method(new LineListAlgorithm(stated)).build()).fit(hot);
+        StringBuilder figures = new StringBuilder();
+        for (int g = 0; g < 2; g++) {
+            double truth = amounts[g] / InstrumentMixture.PATH;
+            figures.append(String.format(java.util.Locale.ROOT, "%s truth %.3f measured %.3f stated %.3f; ",
+                    InstrumentMixture.GASES.get(g), truth, byMeasured.get(g).concentration(),
+                    byStated.get(g).concentration()));
+        }
+        System.out.println("hot cell: " + figures);
+        for (int g = 0; g < 2; g++) {
+            double truth = amounts[g] / InstrumentMixture.PATH;
+            assertEquals(truth, byMeasured.get(g).concentration(), 0.01 * truth, figures.toString());
+        }
+        assertTrue(Math.abs(byStated.get(0).concentration() / (amounts[0] / InstrumentMixture.PATH) - 1) > 0.1,
+                figures.toString());
+    }
+
+    /** A method that takes the measured conditions refuses a sample that carries none, naming the method. */
+    @Test
+    void measuredCellConditionsAreRequired() {
+        LineListSetup s = generator.setup();
+        Quantifier q = quantifier(method(new LineListAlgorithm(new LineListSetup(s.models(), s.temperature(),
+                s.pressure(), s.lineShape(), s.fieldOfView(), true))).build());
+        Spectrum spectrum = generator.absorbance(new double[] {600, 1500}, 0, 0, 0, NOISE, new Random(2));
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> q.fit(Sample.of(spectrum)));
+        assertTrue(e.getMessage().contains("Vellmar kiln line-list") && e.getMessage().contains("no temperature"),
+                e.getMessage());
     }
 
     /** A sample whose lines lie at nu (1 + 3e-5): the scale term finds it, and the amounts stay right. */

@@ -21,8 +21,8 @@ import java.util.Set;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.campaign.MethodDefinition;
-import org.tracegas.campaign.StoredMethod;
+import org.tracegas.method.MethodDefinition;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.synthesis.HitranLineListReader;
@@ -59,17 +59,9 @@ class LineListMethodFileTest {
         Path method = writeMethod();
         MethodDefinition definition = MethodDefinition.read(method);
         assertInstanceOf(LineListAlgorithm.class, definition.algorithm(), "contributed through the extension point");
-        String content;
-        QuantificationMethod built;
-        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("db"))) {
-            Session admin = store.users().createFirstAdministrator("admin", "Administrator",
-                    "admin-pw-12".toCharArray());
-            store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
-            Session analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
-            MethodDefinition.Recorded recorded = definition.record(store, analyst);
-            built = recorded.method().method();
-            content = store.versions().content(recorded.methodVersion().id());
-        }
+        Version version = record(definition);
+        QuantificationMethod built = version.method();
+        String content = version.content();
         assertTrue(content.contains("\n[line-list]\n") && content.contains("setting gas \"TX1 molar-mass 28.0"),
                 content.substring(0, Math.min(content.length(), 3000)));
         StoredMethod reread = StoredMethod.parse(content, "method version 1");
@@ -95,6 +87,42 @@ class LineListMethodFileTest {
             }
         }
         System.out.println("line-list method file: " + figures);
+    }
+
+    /**
+     * cell-conditions = measured: the setting is bound into the version's text and hash, and the version read back
+     * from its text quantifies a sample made at 470 K and 97 kPa within 1 % when the sample carries those
+     * conditions (truth: the generator's amounts, its own line-by-line model and instrument).
+     */
+    @Test
+    void bindsMeasuredCellConditionsIntoTheVersion() throws IOException {
+        Path stated = writeMethod("");
+        String statedHash = MethodDefinition.read(stated).build(new ReferenceLibrary("no references", List.of()))
+                .contentHash();
+        Path method = writeMethod("cell-conditions = measured\n");
+        String content = record(MethodDefinition.read(method)).content();
+        assertTrue(content.contains("setting cell-conditions \"measured\""),
+                content.substring(0, Math.min(content.length(), 3000)));
+        StoredMethod reread = StoredMethod.parse(content, "method version 1");
+        assertFalse(reread.method().contentHash().equals(statedHash), "the setting must change the hash");
+
+        double[] amounts = {700, 1800};
+        Spectrum hot = InstrumentMixture.withNoise(new InstrumentMixture(readBack()).transmittance(amounts, 0.01, 0,
+                0, 470, 97), NOISE, new Random(97));
+        List<CompoundResult> results = reread.quantifier(InstrumentMixture.AXIS, "test", false)
+                .fit(Sample.of(hot).inCell(470, 97));
+        for (int g = 0; g < 2; g++) {
+            double truth = amounts[g] / InstrumentMixture.PATH;
+            assertEquals(truth, results.get(g).concentration(), 0.01 * truth, results.get(g).toString());
+        }
+    }
+
+    @Test
+    void refusesUnknownCellConditions() throws IOException {
+        Path method = writeMethod("cell-conditions = warm\n");
+        FileFormatException e = assertThrows(FileFormatException.class, () -> MethodDefinition.read(method));
+        assertTrue(e.getMessage().contains("field 'cell-conditions'") && e.getMessage().contains("warm"),
+                e.getMessage());
     }
 
     @Test
@@ -125,8 +153,29 @@ class LineListMethodFileTest {
         assertTrue(e.getMessage().contains("field 'resolution'"), e.getMessage());
     }
 
+    /** A recorded method version: the method as recorded and the version's stored text. */
+    private record Version(QuantificationMethod method, String content) {
+    }
+
+    /** Records the method as a version in a new H2 workspace, by an analyst. */
+    private Version record(MethodDefinition definition) throws IOException {
+        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("db"))) {
+            Session admin = store.users().createFirstAdministrator("admin", "Administrator",
+                    "admin-pw-12".toCharArray());
+            store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
+            Session analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
+            MethodDefinition.Recorded recorded = definition.record(store, analyst);
+            return new Version(recorded.method().method(), store.versions().content(recorded.methodVersion().id()));
+        }
+    }
+
     /** The method file of the Vellmar kiln analyser over the invented TX1 and TX2 line lists; line 16 is TX1's. */
     private Path writeMethod() throws IOException {
+        return writeMethod("");
+    }
+
+    /** The same with more lines at the end of the [line-list] block, after TX2's gas line. */
+    private Path writeMethod(String lineListLines) throws IOException {
         Files.createDirectories(folder.resolve("lists"));
         List<String> hashes = new ArrayList<>();
         List<LineList> bands = InstrumentMixture.bands();
@@ -158,7 +207,7 @@ class LineListMethodFileTest {
                 field-of-view = 0.008
                 gas = TX1 molar-mass 28.0 partition linear sha256 %s file lists/tx1.par
                 gas = TX2 molar-mass 44.0 partition linear sha256 %s file lists/tx2.par
-
+                %s
                 [analyte]
                 compound = TX1
                 interferents = TX2
@@ -168,7 +217,7 @@ class LineListMethodFileTest {
                 compound = TX2
                 interferents = TX1
                 region = 2100..2200 baseline 1
-                """.formatted(hashes.get(0), hashes.get(1)));
+                """.formatted(hashes.get(0), hashes.get(1), lineListLines));
         return method;
     }
 

@@ -33,6 +33,14 @@ class LineListSetupTest {
     }
 
     @Test
+    void movesToOtherConditionsKeepingTheRest() {
+        LineListSetup measured = new LineListSetup(Map.of("TX1", MODEL), 300, 101, LINE_SHAPE, 0.004, true);
+        assertEquals(new LineListSetup(Map.of("TX1", MODEL), 470, 97, LINE_SHAPE, 0.004, true), measured.at(470, 97));
+        assertEquals(false, new LineListSetup(Map.of("TX1", MODEL), 300, 101, LINE_SHAPE, 0).measuredConditions());
+        assertMessage("temperature", () -> measured.at(-1, 97));
+    }
+
+    @Test
     void refusesWhatNoCellOrInstrumentHas() {
         Map<String, LineByLineModel> models = Map.of("TX1", MODEL);
         Map<String, LineByLineModel> withNull = new HashMap<>();

@@ -10,6 +10,7 @@ import org.tracegas.quantify.PreparedFit;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.ShiftTerm;
 import org.tracegas.quantify.internal.SystemsFit;
+import org.tracegas.quantify.linelist.internal.AtMeasuredConditions;
 import org.tracegas.quantify.linelist.internal.LineListSystem;
 import org.tracegas.quantify.linelist.internal.MixtureModel;
 import org.tracegas.quantify.linelist.internal.SetupSettings;
@@ -29,6 +30,10 @@ import org.tracegas.spectrum.SpectralAxis;
  * method's apodization and resolution), so the method's text and hash bind the line lists (by SHA-256), the cell's
  * conditions and the instrument; each line list is read and checked when the method is prepared. Created with a
  * setup, it uses that setup and ignores the method's settings.
+ * <p>
+ * With {@link LineListSetup#measuredConditions()} the spectra are computed at each sample's own measured cell
+ * temperature and pressure ({@link AtMeasuredConditions}); the method is still prepared, and so checked, at the
+ * stated ones.
  */
 public final class LineListAlgorithm implements FitAlgorithm {
 
@@ -85,6 +90,12 @@ public final class LineListAlgorithm implements FitAlgorithm {
                         + new java.util.TreeSet<>(setup.models().keySet()));
             }
         }
+        SystemsFit stated = systems(method, axis, setup);
+        return setup.measuredConditions() ? new AtMeasuredConditions(method.name(), stated,
+                (t, p) -> systems(method, axis, setup.at(t, p))) : stated;
+    }
+
+    private static SystemsFit systems(QuantificationMethod method, SpectralAxis axis, LineListSetup setup) {
         return new SystemsFit(method, axis, (label, compounds, points, wavenumbers) -> {
             List<LineByLineModel> models = new ArrayList<>();
             compounds.forEach(c -> models.add(setup.models().get(c)));

@@ -16,9 +16,12 @@ import org.tracegas.preprocess.InstrumentLineShape;
  * @param lineShape   the instrument line shape of the spectrometer: apodization and maximum optical path difference
  * @param fieldOfView half angle of the beam through the interferometer in rad (the aperture's radius over the
  *                    collimator's focal length), in [0, 0.05]; 0 for a point source
+ * @param measuredConditions whether the spectra are computed at each sample's own measured cell temperature and
+ *                    pressure ({@link org.tracegas.quantify.Sample#cellTemperature()}), rather than at the stated
+ *                    temperature and pressure, which then only serve to check the method when it is prepared
  */
 public record LineListSetup(Map<String, LineByLineModel> models, double temperature, double pressure,
-        InstrumentLineShape lineShape, double fieldOfView) {
+        InstrumentLineShape lineShape, double fieldOfView, boolean measuredConditions) {
 
     /** @throws IllegalArgumentException naming the field that is missing or out of range */
     public LineListSetup {
@@ -45,5 +48,16 @@ public record LineListSetup(Map<String, LineByLineModel> models, double temperat
         if (!(fieldOfView >= 0 && fieldOfView <= 0.05)) {
             throw new IllegalArgumentException("fieldOfView must lie in [0, 0.05] rad, was " + fieldOfView);
         }
+    }
+
+    /** A setup whose spectra are computed at the stated cell temperature and pressure. */
+    public LineListSetup(Map<String, LineByLineModel> models, double temperature, double pressure,
+            InstrumentLineShape lineShape, double fieldOfView) {
+        this(models, temperature, pressure, lineShape, fieldOfView, false);
+    }
+
+    /** The same setup at other cell conditions, K and kPa. */
+    public LineListSetup at(double cellTemperature, double cellPressure) {
+        return new LineListSetup(models, cellTemperature, cellPressure, lineShape, fieldOfView, measuredConditions);
     }
 }

@@ -26,9 +26,9 @@ import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.campaign.MeasurementRole;
-import org.tracegas.campaign.MinuteSeries;
-import org.tracegas.campaign.StoredMethod;
+import org.tracegas.pipeline.MeasurementRole;
+import org.tracegas.report.campaign.MinuteSeries;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
 import org.tracegas.model.AccessLevel;
@@ -295,7 +295,7 @@ class AnalysisCommandsTest {
             String project = store.projects().findByCode(s, "P-7").orElseThrow().id();
             VersionInfo version = store.versions().latest(VersionKind.METHOD, "Zeros").orElseThrow();
             limits = org.tracegas.qa.checks.MethodDetectionLimit.fromOutcomes(
-                    org.tracegas.campaign.StoredQaChecks.load(store, s, project, version.id()));
+                    org.tracegas.qa.campaign.StoredQaChecks.load(store, s, project, version.id()));
         }
         assertEquals(List.of("CO", "N2O"), limits.stream().map(l -> l.analyte()).toList());
         for (var l : limits) {

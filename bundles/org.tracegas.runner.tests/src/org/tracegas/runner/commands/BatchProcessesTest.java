@@ -35,7 +35,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.postgresql.ds.PGSimpleDataSource;
-import org.tracegas.campaign.QuantificationSetup;
+import org.tracegas.pipeline.QuantificationSetup;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.quantify.BatchQuantifier;
 import org.tracegas.runner.CommandTable;
@@ -285,7 +285,8 @@ class BatchProcessesTest {
         List<Class<?>> needed = new ArrayList<>(List.of(BatchRunnerProcess.class, CommandTable.class,
                 QuantificationSetup.class, WorkspaceStore.class, Spectrum.class, InterferogramTransform.class,
                 BatchQuantifier.class, org.tracegas.library.io.FileFormatException.class,
-                org.tracegas.qa.basis.ConditionsCorrection.class,
+                org.tracegas.qa.basis.ConditionsCorrection.class, org.tracegas.method.StoredMethod.class,
+                org.tracegas.qa.campaign.QaPlan.class, org.tracegas.report.campaign.ReportPlan.class,
                 org.tracegas.importer.container.ContainerReader.class, org.tracegas.model.Role.class,
                 org.tracegas.audit.AuditTrail.class, org.tracegas.installation.InstalledSoftware.class,
                 org.eclipse.emf.common.util.Enumerator.class,

@@ -8,9 +8,9 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.Random;
 
-import org.tracegas.campaign.KeyValueFile;
-import org.tracegas.campaign.MeasurementRole;
-import org.tracegas.campaign.TransformText;
+import org.tracegas.method.KeyValueFile;
+import org.tracegas.pipeline.MeasurementRole;
+import org.tracegas.method.TransformText;
 import org.tracegas.importer.container.AcquisitionHeader;
 import org.tracegas.importer.container.SampleKind;
 import org.tracegas.library.synthesis.AbsorptionPath;

@@ -13,9 +13,17 @@ import java.util.Random;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
+import java.util.stream.Collectors;
+
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.runner.ExitCode;
+import org.tracegas.spectrum.Spectrum;
+import org.tracegas.store.ResultInfo;
+import org.tracegas.store.Session;
+import org.tracegas.store.SourcedMeasurement;
+import org.tracegas.store.WorkspaceStore;
+import org.tracegas.store.Workspaces;
 
 /**
  * The lab's QA measurements as JCAMP-DX files imported into its embedded workspace, each record stating its role:
@@ -50,7 +58,8 @@ class LabJcampQaTest {
     @TempDir
     Path folder;
 
-    private static Path write(Path dir, String name, Map<String, Double> ppmMetres, Instant time, String role,
+    /** A QA measurement of the lab's cell at 313.15 K and 100.9 kPa, its role in the label $ROLE. */
+    static Path write(Path dir, String name, Map<String, Double> ppmMetres, Instant time, String role,
             Random r, LabJcampQuantificationTest.Lab lab) throws Exception {
         Map<String, String> labels = new LinkedHashMap<>();
         labels.put("LONGDATE", LabJcampQuantificationTest.stamp(time));
@@ -115,6 +124,82 @@ class LabJcampQaTest {
                 plan.toString());
         assertTrue(out.startsWith("QA checks: 7, failed: 0"), out);
         return out;
+    }
+
+    /**
+     * The method detection limit is on the basis of the results it is compared with. Seven zero-gas readings of a
+     * hot cell at low pressure (393.15 K, 80 kPa, against the references' 296 K and 101.325 kPa) are imported as
+     * QA measurements, and the same spectra again as samples. Quantify corrects the samples to their cell by
+     * (T_s/T_r)(p_r/p_s) = 1.68, the ideal-gas number density ratio (EPA FTIR Protocol section 11.2 as the
+     * standards notes give it), and the MDL qa stores must be t(6, 0.99) = 3.143 (40 CFR Part 136 Appendix B's
+     * table, as reproduced in Wis. Adm. Code NR 252.0365) times the standard deviation of those corrected sample
+     * results, not of the readings as fitted, which would give 1.68 times less.
+     */
+    @Test
+    void theDetectionLimitIsOnTheBasisOfTheCorrectedResults() throws Exception {
+        LabJcampQuantificationTest.Lab lab = new LabJcampQuantificationTest.Lab(folder,
+                List.of("--workspace", folder.resolve("ws").toString()), 6);
+        lab.setUp();
+        Path qa = Files.createDirectories(folder.resolve("qa"));
+        Random r = new Random(20260506);
+        List<String> zeros = new java.util.ArrayList<>(List.of("import", "--project", "LBK-5"));
+        List<String> quantify = new java.util.ArrayList<>(lab.quantifyArguments());
+        for (int i = 0; i < 7; i++) {
+            Spectrum a = lab.spectra.absorbance(Map.of(), 0, 0, NOISE, r);
+            Map<String, String> labels = new LinkedHashMap<>();
+            labels.put("LONGDATE", LabJcampQuantificationTest.stamp(LabJcampQuantificationTest.T0
+                    .minusSeconds(3600 - 60 * i)));
+            labels.put("$CELL TEMPERATURE", "393.15");
+            labels.put("$CELL PRESSURE", "800.0");
+            Path copy = qa.resolve("zero-as-sample-" + i + ".jdx");
+            Files.writeString(copy, JcampForms.write(a, "Kiln 5 zero gas as a sample " + i, labels,
+                    JcampForms.Form.AFFN));
+            quantify.addAll(List.of("--file", copy.toString()));
+            labels.put("$ROLE", "zero");
+            Path zero = qa.resolve("zero-" + i + ".jdx");
+            Files.writeString(zero, JcampForms.write(a, "Kiln 5 zero gas " + i, labels, JcampForms.Form.AFFN));
+            zeros.addAll(List.of("--file", zero.toString()));
+        }
+        lab.ok(zeros.toArray(String[]::new));
+        lab.ok(quantify.toArray(String[]::new));
+        Path plan = Files.writeString(folder.resolve("qa.plan"), PLAN + "checks = method-detection-limit\n");
+        lab.ok("qa", "--project", "LBK-5", "--method", "Kiln stack CO and N2O", "--plan", plan.toString());
+
+        double factor = (393.15 / 296.0) * (101.325 / 80.0);
+        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
+            Session ana = store.users().logIn("ana", "lab-pw-12".toCharArray());
+            String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().id();
+            Map<String, String> fileOf = store.imports().measurements(ana, project).stream().collect(
+                    Collectors.toMap(m -> m.measurement().id(), SourcedMeasurement::fileName));
+            Map<String, Double> mdl = store.qa().checks(ana, project).stream().collect(Collectors.toMap(
+                    c -> c.outcome().check(), c -> c.outcome().measured()));
+            for (String compound : List.of("CO", "N2O")) {
+                List<ResultInfo> copies = store.results().results(ana, project).stream()
+                        .filter(x -> x.values().compound().equals(compound)
+                                && fileOf.get(x.values().measurementId()).startsWith("zero-as-sample-"))
+                        .toList();
+                assertEquals(7, copies.size(), compound);
+                double[] ppm = new double[copies.size()];
+                for (int i = 0; i < ppm.length; i++) {
+                    assertEquals(factor, copies.get(i).values().conditions().correctionFactor(), 1e-12);
+                    ppm[i] = copies.get(i).values().concentration();
+                }
+                double corrected = 3.143 * sampleStandardDeviation(ppm);
+                double stored = mdl.get("Method detection limit " + compound);
+                assertEquals(corrected, stored, 2e-4 * corrected, compound);
+                assertTrue(Math.abs(stored - corrected / factor) > 0.3 * stored, "the limit as fitted differs");
+            }
+        }
+    }
+
+    /** sqrt(sum (x - mean)^2 / (n - 1)), 40 CFR Part 136 Appendix B's S. */
+    private static double sampleStandardDeviation(double[] x) {
+        double mean = java.util.Arrays.stream(x).average().orElseThrow();
+        double sum = 0;
+        for (double v : x) {
+            sum += (v - mean) * (v - mean);
+        }
+        return Math.sqrt(sum / (x.length - 1));
     }
 
     @Test

@@ -438,7 +438,7 @@ class LabJcampQuantificationTest {
                 results.size());
         // the CSV holds each stored result with its file and the recipe that ran
         List<String> lines = Files.readAllLines(lab.folder.resolve("out").resolve("kiln-5.csv"));
-        assertEquals(String.join(",", org.tracegas.campaign.ResultsCsv.HEADER), lines.get(0));
+        assertEquals(String.join(",", org.tracegas.report.campaign.ResultsCsv.HEADER), lines.get(0));
         assertEquals(2 * SAMPLES + 1, lines.size());
         for (String line : lines.subList(1, lines.size())) {
             String[] f = line.split(",", -1);

@@ -82,7 +82,7 @@ class LabQuantifyKillTest {
             int afterKill = analysed(schemaUrl);
             assertTrue(afterKill >= stored && afterKill < SAMPLES, () -> "killed part-way: " + afterKill + " of "
                     + SAMPLES + " stored; runner said " + read(folder.resolve("runner.err")));
-            assertEquals(0, afterKill % org.tracegas.campaign.MeasurementQuantification.BLOCK,
+            assertEquals(0, afterKill % org.tracegas.pipeline.MeasurementQuantification.BLOCK,
                     "blocks are stored whole: " + afterKill);
 
             String again = lab.ok("quantify", "--project", "LBK-5", "--method", "Kiln stack CO and N2O");

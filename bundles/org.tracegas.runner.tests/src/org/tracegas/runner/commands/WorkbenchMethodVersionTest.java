@@ -17,8 +17,8 @@ import java.util.Random;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.campaign.MethodVersions;
-import org.tracegas.campaign.StoredMethod;
+import org.tracegas.method.MethodVersions;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
 import org.tracegas.model.AnalysisMethod;

@@ -43,7 +43,7 @@ class RunnerApplicationTest {
             count++;
         }
         assertTrue(count >= 19, "help, version and the commands: " + count);
-        for (String name : List.of("version", "help", "user-unlock", "demo")) {
+        for (String name : List.of("version", "help", "user-unlock")) {
             assertTrue(overview.contains("  " + name + " "), name);
         }
         assertTrue(overview.contains("6 refused"), overview);

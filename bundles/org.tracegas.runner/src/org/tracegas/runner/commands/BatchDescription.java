@@ -3,26 +3,32 @@ package org.tracegas.runner.commands;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.OptionalDouble;
 
 import org.tracegas.store.WorkBatchInfo;
 
 /**
  * What every runner of a quantification batch works with, kept as the batch's description: the project, the
- * method version and the background files. Each unit's payload is one sample file.
+ * method version, the background files and, for a method whose path source is CTS-derived, the effective path
+ * the CTS readings measured when the batch was split (so that every runner corrects to the same path). Each
+ * unit's payload is one sample file.
  *
  * <pre>
  * tracegas-quantification-batch 1
  * project = ...              id of the project
  * method-version = ...       id of the METHOD version
  * background = ...           a background file, one line each, in order
+ * cts-path-m = ...           the CTS-derived path in m, exactly as computed; absent for a nominal path
  * </pre>
  */
-record BatchDescription(String projectId, String methodVersionId, List<Path> backgrounds) {
+record BatchDescription(String projectId, String methodVersionId, List<Path> backgrounds,
+        OptionalDouble ctsPathM) {
 
     private static final String FORMAT = "tracegas-quantification-batch 1";
     private static final String PROJECT = "project = ";
     private static final String METHOD_VERSION = "method-version = ";
     private static final String BACKGROUND = "background = ";
+    private static final String CTS_PATH = "cts-path-m = ";
 
     BatchDescription {
         backgrounds = List.copyOf(backgrounds);
@@ -32,6 +38,8 @@ record BatchDescription(String projectId, String methodVersionId, List<Path> bac
         StringBuilder s = new StringBuilder(FORMAT).append('\n');
         s.append(PROJECT).append(projectId).append('\n').append(METHOD_VERSION).append(methodVersionId).append('\n');
         backgrounds.forEach(b -> s.append(BACKGROUND).append(b).append('\n'));
+        // Double.toString reads back as the same double: every runner corrects to the path computed
+        ctsPathM.ifPresent(p -> s.append(CTS_PATH).append(Double.toString(p)).append('\n'));
         return s.toString();
     }
 
@@ -50,6 +58,7 @@ record BatchDescription(String projectId, String methodVersionId, List<Path> bac
         String project = null;
         String version = null;
         List<Path> backgrounds = new ArrayList<>();
+        OptionalDouble ctsPath = OptionalDouble.empty();
         for (int i = 1; i < lines.size(); i++) {
             String line = lines.get(i);
             if (line.startsWith(PROJECT) && project == null) {
@@ -58,6 +67,8 @@ record BatchDescription(String projectId, String methodVersionId, List<Path> bac
                 version = line.substring(METHOD_VERSION.length());
             } else if (line.startsWith(BACKGROUND)) {
                 backgrounds.add(Path.of(line.substring(BACKGROUND.length())));
+            } else if (line.startsWith(CTS_PATH) && ctsPath.isEmpty()) {
+                ctsPath = OptionalDouble.of(path(where, i + 1, line.substring(CTS_PATH.length())));
             } else {
                 throw new BadInputException(where + " line " + (i + 1) + ": unexpected or repeated '" + line + "'");
             }
@@ -69,6 +80,19 @@ record BatchDescription(String projectId, String methodVersionId, List<Path> bac
             throw new BadInputException(where + ": project " + project + " is not the batch's project "
                     + batch.projectId());
         }
-        return new BatchDescription(project, version, backgrounds);
+        return new BatchDescription(project, version, backgrounds, ctsPath);
+    }
+
+    private static double path(String where, int line, String text) throws BadInputException {
+        try {
+            double p = Double.parseDouble(text);
+            if (p > 0 && Double.isFinite(p)) {
+                return p;
+            }
+        } catch (NumberFormatException e) {
+            // named below
+        }
+        throw new BadInputException(where + " line " + line + ": cts-path-m must be a positive path in m, was '"
+                + text + "'");
     }
 }

@@ -3,7 +3,7 @@ package org.tracegas.runner.commands;
 import java.nio.file.Path;
 import java.util.List;
 
-import org.tracegas.campaign.ProjectQuantification;
+import org.tracegas.pipeline.ProjectQuantification;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
@@ -37,7 +37,10 @@ public final class BatchSplitCommand implements Command {
                 + StoredMethods.USAGE + "\n" + """
                   Checks everything quantify checks (every file read once, the method version exists, the
                   backgrounds files hold backgrounds, no sample file twice) and then records a batch: one work unit
-                  per --file, the project, method version and background files in the batch's description.
+                  per --file, the project, method version and background files in the batch's description. A
+                  method whose path source is cts-derived needs --qa-plan, as quantify does: the CTS readings among
+                  the --backgrounds files give the effective path, recorded in the description, that every runner
+                  corrects the results to.
                   A project has at most one unfinished batch per method version, whatever its files: a second one
                   would store the same samples again. Finish the first with batch-work.
                   Prints the batch id alone on standard output; give it to batch-work and batch-status.
@@ -59,7 +62,7 @@ public final class BatchSplitCommand implements Command {
                 checked = arguments.check(store, actor, project,
                         new ProjectQuantification(store, actor, project.id(), StoredMethods.SOFTWARE));
                 description = new BatchDescription(project.id(), checked.found().version().id(),
-                        arguments.backgroundFiles()).text();
+                        arguments.backgroundFiles(), arguments.ctsPath(store, checked.found())).text();
                 requireFits(description, arguments.files());
             } catch (BadInputException e) {
                 context.err().println("tracegas batch-split: " + e.getMessage());

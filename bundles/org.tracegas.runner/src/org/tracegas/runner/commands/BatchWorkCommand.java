@@ -6,10 +6,10 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.util.List;
 
-import org.tracegas.campaign.QuantificationSetup;
-import org.tracegas.campaign.StackProcessor;
-import org.tracegas.campaign.shared.WorkUnitWorker;
-import org.tracegas.campaign.shared.WorkerOutcome;
+import org.tracegas.pipeline.QuantificationSetup;
+import org.tracegas.pipeline.StackProcessor;
+import org.tracegas.pipeline.shared.WorkUnitWorker;
+import org.tracegas.pipeline.shared.WorkerOutcome;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.Background;
 import org.tracegas.quantify.CancellationFlag;
@@ -64,7 +64,7 @@ public final class BatchWorkCommand implements Command {
                   --idle-poll <seconds>       when the remaining units are all held by other runners, how long to
                                               wait before asking again (default 5)
                   The method version is rebuilt from the workspace and the backgrounds read from the files the
-                  batch names, as quantify does. Each file's results are stored together with its unit's
+                  batch names, as quantify does; a CTS-derived path is the one batch-split recorded. Each file's results are stored together with its unit's
                   completion, so a unit is done once, with all its results, or not at all: a runner that stops
                   or dies leaves its unit to the others once its lease ends. The runner is named host:process id
                   in the units and the audit trail. The progress line counts the batch's done units (all runners).
@@ -89,10 +89,11 @@ public final class BatchWorkCommand implements Command {
                 BatchDescription description = BatchDescription.of(batch);
                 StoredMethods.Found found = StoredMethods.byId(store, description.methodVersionId());
                 List<Background> backgrounds = SampleInputs.backgrounds(found.method(), description.backgrounds());
-                stack = new QuantificationSetup(found.version(), found.method(), backgrounds, StoredMethods.SOFTWARE)
-                        .processor(store, actor, batch.projectId());
-            } catch (BadInputException | FileFormatException e) {
-                context.err().println("tracegas batch-work: " + e.getMessage());
+                stack = new QuantificationSetup(found.version(), found.method(), backgrounds, StoredMethods.SOFTWARE,
+                        description.ctsPathM()).processor(store, actor, batch.projectId());
+            } catch (BadInputException | FileFormatException | IllegalArgumentException e) {
+                // an IllegalArgumentException: the batch lacks the CTS path its method needs, or has one it does not
+                context.err().println("tracegas batch-work: batch " + batch.id() + ": " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
             String runner = runnerId();

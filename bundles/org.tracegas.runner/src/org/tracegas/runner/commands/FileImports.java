@@ -7,7 +7,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 
-import org.tracegas.campaign.FileMeasurements;
+import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.model.MeasurementKind;

@@ -3,8 +3,8 @@ package org.tracegas.runner.commands;
 import java.nio.file.Path;
 import java.util.List;
 
-import org.tracegas.campaign.LabReferenceSource;
-import org.tracegas.campaign.VersionRecorder;
+import org.tracegas.method.LabReferenceSource;
+import org.tracegas.method.VersionRecorder;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryVersionText;

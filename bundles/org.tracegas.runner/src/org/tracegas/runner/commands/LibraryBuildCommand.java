@@ -3,9 +3,9 @@ package org.tracegas.runner.commands;
 import java.nio.file.Path;
 import java.util.List;
 
-import org.tracegas.campaign.LibraryPlan;
-import org.tracegas.campaign.LibrarySynthesis;
-import org.tracegas.campaign.VersionRecorder;
+import org.tracegas.method.LibraryPlan;
+import org.tracegas.method.LibrarySynthesis;
+import org.tracegas.method.VersionRecorder;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryManifestWriter;

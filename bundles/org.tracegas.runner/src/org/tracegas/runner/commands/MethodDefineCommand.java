@@ -2,7 +2,7 @@ package org.tracegas.runner.commands;
 
 import java.util.List;
 
-import org.tracegas.campaign.MethodDefinition;
+import org.tracegas.method.MethodDefinition;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.runner.Command;

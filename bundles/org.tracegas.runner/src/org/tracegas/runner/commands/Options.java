@@ -10,7 +10,7 @@ import org.tracegas.runner.NearestName;
 import org.tracegas.runner.UsageException;
 
 /** The "--name value" options of a command line, checked against the names a command accepts. */
-final class Options {
+public final class Options {
 
     private final Map<String, String> values;
 
@@ -18,7 +18,7 @@ final class Options {
         this.values = values;
     }
 
-    static Options parse(List<String> arguments, List<String> accepted) throws UsageException {
+    public static Options parse(List<String> arguments, List<String> accepted) throws UsageException {
         Map<String, String> values = new HashMap<>();
         for (int i = 0; i < arguments.size(); i++) {
             String name = arguments.get(i);
@@ -108,7 +108,7 @@ final class Options {
                 + "'");
     }
 
-    Path path(String name) throws UsageException {
+    public Path path(String name) throws UsageException {
         return Path.of(text(name)).toAbsolutePath();
     }
 }

@@ -4,10 +4,10 @@ import java.util.List;
 
 import org.eclipse.core.runtime.IExtensionRegistry;
 import org.eclipse.core.runtime.RegistryFactory;
-import org.tracegas.campaign.ContainerContents;
-import org.tracegas.campaign.MeasurementQuantification;
-import org.tracegas.campaign.QaEvaluation;
-import org.tracegas.campaign.QaPlan;
+import org.tracegas.pipeline.ContainerContents;
+import org.tracegas.pipeline.MeasurementQuantification;
+import org.tracegas.qa.campaign.QaEvaluation;
+import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.importer.ImportException;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.InterferogramTransform;

@@ -1,12 +1,20 @@
 package org.tracegas.runner.commands;
 
+import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
+import java.util.OptionalDouble;
 
-import org.tracegas.campaign.ProjectQuantification;
+import org.tracegas.importer.ImportException;
+import org.tracegas.pipeline.ContainerContents;
+import org.tracegas.pipeline.ProjectQuantification;
+import org.tracegas.qa.campaign.CtsPath;
+import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.preprocess.InterferogramTransform;
+import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.BatchProgress;
 import org.tracegas.store.ProjectInfo;
@@ -64,6 +72,58 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
                     + found.version().number() + " already; nothing done");
         }
         return new Checked(found, SampleInputs.read(found.method(), backgroundFiles, files));
+    }
+
+    /**
+     * The effective path the CTS readings among the --backgrounds files measured ({@link CtsPath}), for a method
+     * whose path source is CTS-derived; empty for a method of nominal path.
+     *
+     * @throws BadInputException as {@link #qaPlan}, or naming the file, record and field of the CTS readings at
+     *                           fault
+     * @throws UsageException    as {@link #qaPlan}
+     */
+    OptionalDouble ctsPath(WorkspaceStore store, StoredMethods.Found found)
+            throws BadInputException, UsageException, IOException {
+        Optional<QaPlan> plan = qaPlan(options, found);
+        if (plan.isEmpty()) {
+            return OptionalDouble.empty();
+        }
+        try {
+            ContainerContents qa = ContainerContents.read(backgroundFiles,
+                    new InterferogramTransform(found.method().transform()));
+            return OptionalDouble.of(CtsPath.measure(store, plan.get(), found.method(), qa, StoredMethods.SOFTWARE));
+        } catch (FileFormatException | ImportException e) {
+            throw new BadInputException(e.getMessage() + "; nothing done", e);
+        }
+    }
+
+    /**
+     * The QA plan (--qa-plan) that says how the CTS readings give the path of a method whose path source is
+     * CTS-derived; empty for a method of nominal path.
+     *
+     * @throws BadInputException if such a method lacks --qa-plan, naming it, or naming the file, line and key of
+     *                           the plan at fault
+     * @throws UsageException    if --qa-plan is given for a method of nominal path, which would not use it
+     */
+    static Optional<QaPlan> qaPlan(Options options, StoredMethods.Found found)
+            throws BadInputException, UsageException, IOException {
+        String name = found.method().method().name();
+        if (found.method().pathSource() != PathOrigin.CTS_DERIVED) {
+            if (options.has("--qa-plan")) {
+                throw new UsageException("method '" + name + "' corrects to its nominal path; --qa-plan is for a "
+                        + "method whose path source is cts-derived", false);
+            }
+            return Optional.empty();
+        }
+        if (!options.has("--qa-plan")) {
+            throw new BadInputException("method '" + name + "' takes its path from the CTS readings: give "
+                    + "--qa-plan; nothing done");
+        }
+        try {
+            return Optional.of(QaPlan.read(options.path("--qa-plan")));
+        } catch (FileFormatException e) {
+            throw new BadInputException(e.getMessage() + "; nothing done", e);
+        }
     }
 
     static QuantifyArguments parse(List<String> arguments) throws UsageException {

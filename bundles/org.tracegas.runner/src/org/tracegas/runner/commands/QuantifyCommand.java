@@ -6,24 +6,23 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
 import java.util.OptionalDouble;
 
 import org.eclipse.core.runtime.RegistryFactory;
-import org.tracegas.campaign.ContainerContents;
-import org.tracegas.campaign.CtsPath;
-import org.tracegas.campaign.FileMeasurements;
-import org.tracegas.campaign.MeasurementQuantification;
-import org.tracegas.campaign.ProjectQuantification;
-import org.tracegas.campaign.QaPlan;
+import org.tracegas.pipeline.FileMeasurements;
+import org.tracegas.pipeline.MeasurementQuantification;
+import org.tracegas.pipeline.ProjectQuantification;
+import org.tracegas.qa.campaign.CtsPath;
+import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ImportReader;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.importer.container.ContainerImportReader;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.MeasurementKind;
-import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.preprocess.StepRegistry;
-import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.BatchOutcome;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.Command;
@@ -85,7 +84,7 @@ public final class QuantifyCommand implements Command {
     @Override
     public String usage() {
         return "usage: tracegas quantify <workspace and --as options> --project <code> --method <name>\n"
-                + "       [--file <file> ...] [--background-file <file> ...] [import options]\n"
+                + "       [--file <file> ...] [--background-file <file> ...] [--qa-plan <file>] [import options]\n"
                 + "   or: tracegas quantify <workspace and --as options> " + QuantifyArguments.USAGE_LINE + "\n"
                 + WorkspaceLogin.USAGE + "\n" + StoredMethods.USAGE + "\n" + FileImports.USAGE + "\n" + """
                   The first form imports the --file files (samples) and --background-file files (backgrounds) as
@@ -95,7 +94,9 @@ public final class QuantifyCommand implements Command {
                   interferograms (transformed as the method says) are ratioed against the last background before
                   them. The method's [recipe] steps apply next, and the recipe that ran is recorded with every
                   result. Every sample is checked before anything is stored. A run that stops (cancelled,
-                  killed) is finished by running it again.
+                  killed) is finished by running it again. A method whose path source is cts-derived needs
+                  --qa-plan: the project's CTS measurements (imported with their role label, or among the files)
+                  give the effective path (mean of the readings) every result is corrected to.
                   The second form streams interferogram containers: backgrounds are the background records of the
                   --backgrounds files; each sample is ratioed against the last one before it. A method whose path
                   source is cts-derived needs --qa-plan: the CTS readings among the --backgrounds files give the
@@ -115,7 +116,7 @@ public final class QuantifyCommand implements Command {
         List<String> rest2 = new ArrayList<>();
         List<Path> backgroundFiles = Options.repeated(rest, "--background-file", rest2);
         List<String> accepted = new ArrayList<>(WorkspaceLogin.optionsWith("--project", "--method",
-                "--method-version"));
+                "--method-version", "--qa-plan"));
         accepted.addAll(FileImports.optionNames());
         Options options = Options.parse(rest2, accepted);
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
@@ -124,6 +125,7 @@ public final class QuantifyCommand implements Command {
             StoredMethods.Found found;
             MeasurementQuantification job;
             MeasurementQuantification.Plan plan;
+            OptionalDouble ctsPath = OptionalDouble.empty();
             try {
                 found = StoredMethods.find(store, options);
                 job = new MeasurementQuantification(store, actor, project.id(), found.version(), found.method(),
@@ -137,6 +139,12 @@ public final class QuantifyCommand implements Command {
                 read.addAll(FileImports.readAll(readers, files, d));
                 // every sample, stored or in the files, is checked before anything is stored
                 job.check(job.plan(read));
+                // and the CTS readings among them give the path before anything is stored
+                Optional<QaPlan> qaPlan = QuantifyArguments.qaPlan(options, found);
+                if (qaPlan.isPresent()) {
+                    ctsPath = OptionalDouble.of(CtsPath.measure(store, qaPlan.get(), found.method(), job));
+                    job.correctToCtsPath(ctsPath.getAsDouble());
+                }
                 FileImports.storeAll(store, actor, project, all, read, context);
                 plan = job.plan();
             } catch (FileFormatException | ImportException | IllegalArgumentException e) {
@@ -146,6 +154,7 @@ public final class QuantifyCommand implements Command {
                 context.err().println("tracegas quantify: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
+            printPath(context, found, ctsPath);
             context.progress().begin("quantify");
             MeasurementQuantification.Outcome outcome = job.run(plan, context.progress()::update, cancel(context));
             if (outcome.cancelled()) {
@@ -157,6 +166,14 @@ public final class QuantifyCommand implements Command {
                     + " skipped %d quantified with it before%n", outcome.stored(), project.code(),
                     found.method().method().name(), found.version().number(), outcome.skipped());
             return ExitCode.OK;
+        }
+    }
+
+    /** The path the CTS readings gave, when they gave it. */
+    private static void printPath(RunnerContext context, StoredMethods.Found found, OptionalDouble ctsPath) {
+        if (ctsPath.isPresent()) {
+            context.out().printf(Locale.ROOT, "Path: %.4f m, derived from the CTS readings (nominal %s m)%n",
+                    ctsPath.getAsDouble(), found.method().method().pathLengthMetres());
         }
     }
 
@@ -195,29 +212,14 @@ public final class QuantifyCommand implements Command {
                 return ExitCode.BAD_INPUT;
             }
             StoredMethods.Found found = checked.found();
-            OptionalDouble ctsPath = OptionalDouble.empty();
-            if (found.method().pathSource() == PathOrigin.CTS_DERIVED) {
-                if (!options.has("--qa-plan")) {
-                    context.err().println("tracegas quantify: method '" + found.method().method().name() + "' takes "
-                            + "its path from the CTS readings: give --qa-plan; nothing done");
-                    return ExitCode.BAD_INPUT;
-                }
-                try {
-                    ContainerContents qa = ContainerContents.read(arguments.backgroundFiles(),
-                            new InterferogramTransform(found.method().transform()));
-                    ctsPath = OptionalDouble.of(CtsPath.measure(store, QaPlan.read(options.path("--qa-plan")),
-                            found.method(), qa, StoredMethods.SOFTWARE));
-                } catch (FileFormatException | ImportException e) {
-                    context.err().println("tracegas quantify: " + e.getMessage() + "; nothing done");
-                    return ExitCode.BAD_INPUT;
-                }
-                context.out().printf(java.util.Locale.ROOT, "Path: %.4f m, derived from the CTS readings (nominal "
-                        + "%s m)%n", ctsPath.getAsDouble(), found.method().method().pathLengthMetres());
-            } else if (options.has("--qa-plan")) {
-                context.err().println("tracegas quantify: method '" + found.method().method().name() + "' corrects "
-                        + "to its nominal path; --qa-plan is for a method whose path source is cts-derived");
-                return ExitCode.USAGE;
+            OptionalDouble ctsPath;
+            try {
+                ctsPath = arguments.ctsPath(store, found);
+            } catch (BadInputException e) {
+                context.err().println("tracegas quantify: " + e.getMessage());
+                return ExitCode.BAD_INPUT;
             }
+            printPath(context, found, ctsPath);
             context.progress().begin("quantify");
             BatchOutcome outcome = job.run(found.version(), found.method(), arguments.files(),
                     checked.inputs().samples(), checked.inputs().backgrounds(), ctsPath, context.progress()::update,

@@ -3,9 +3,9 @@ package org.tracegas.runner.commands;
 import java.nio.file.Path;
 import java.util.List;
 
-import org.tracegas.campaign.CampaignReport;
-import org.tracegas.campaign.ReportIdTakenException;
-import org.tracegas.campaign.ReportPlan;
+import org.tracegas.report.campaign.CampaignReport;
+import org.tracegas.report.campaign.ReportIdTakenException;
+import org.tracegas.report.campaign.ReportPlan;
 import org.tracegas.importer.ImportException;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.report.ReportContent;

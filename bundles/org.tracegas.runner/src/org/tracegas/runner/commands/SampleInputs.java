@@ -7,9 +7,9 @@ import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
 
-import org.tracegas.campaign.ContainerContents;
-import org.tracegas.campaign.ProjectQuantification;
-import org.tracegas.campaign.StoredMethod;
+import org.tracegas.pipeline.ContainerContents;
+import org.tracegas.pipeline.ProjectQuantification;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.ImportException;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.InterferogramTransform;

@@ -1,6 +1,6 @@
 package org.tracegas.runner.commands;
 
-import org.tracegas.campaign.StoredMethod;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.installation.InstalledSoftware;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.runner.UsageException;

@@ -13,7 +13,6 @@ import org.tracegas.runner.commands.AuditVerifyCommand;
 import org.tracegas.runner.commands.BatchSplitCommand;
 import org.tracegas.runner.commands.BatchStatusCommand;
 import org.tracegas.runner.commands.BatchWorkCommand;
-import org.tracegas.runner.commands.DemoCommand;
 import org.tracegas.runner.commands.ImportCommand;
 import org.tracegas.runner.commands.LibraryAddCommand;
 import org.tracegas.runner.commands.LibraryBuildCommand;
@@ -54,7 +53,7 @@ public final class RunnerApplication implements IApplication {
      * the given cancellation, readers and steps.
      */
     static List<Command> commands(CancellationFlag cancel, ReaderRegistry readers, StepRegistry steps) {
-        return List.of(new DemoCommand(cancel), new AuditVerifyCommand(), new WorkspaceInitCommand(),
+        return List.of(new AuditVerifyCommand(), new WorkspaceInitCommand(),
                 new UserAddCommand(), new UserUnlockCommand(), new ProjectAddCommand(), new ImportCommand(readers),
                 new LibraryBuildCommand(cancel), new LibraryAddCommand(), new MethodDefineCommand(),
                 new QuantifyCommand(cancel, readers, steps), new QaCommand(), new ReportCommand(),

@@ -23,7 +23,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
-import org.tracegas.campaign.FileMeasurements;
+import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.store.VersionKind;

@@ -8,7 +8,7 @@ import java.util.Set;
 import org.eclipse.swt.layout.FillLayout;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Shell;
-import org.tracegas.campaign.FileMeasurements;
+import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.model.Project;
 import org.tracegas.store.VersionKind;

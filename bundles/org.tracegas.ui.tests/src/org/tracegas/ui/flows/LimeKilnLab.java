@@ -12,7 +12,7 @@ import java.util.Map;
 import java.util.Random;
 import java.util.Set;
 
-import org.tracegas.campaign.MethodDefinition;
+import org.tracegas.method.MethodDefinition;
 import org.tracegas.importer.jcamp.JcampWriter;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.Role;

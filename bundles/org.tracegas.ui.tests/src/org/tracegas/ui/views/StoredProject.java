@@ -9,7 +9,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 
-import org.tracegas.campaign.StoredQaChecks;
+import org.tracegas.qa.campaign.StoredQaChecks;
 import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;

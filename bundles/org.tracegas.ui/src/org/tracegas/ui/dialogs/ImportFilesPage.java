@@ -23,7 +23,7 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.Text;
-import org.tracegas.campaign.FileMeasurements;
+import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.store.ProjectInfo;

@@ -2,7 +2,7 @@ package org.tracegas.ui.dialogs;
 
 import java.nio.file.Path;
 
-import org.tracegas.campaign.FileMeasurements;
+import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ReaderChoice;
 import org.tracegas.importer.ReaderRegistry;

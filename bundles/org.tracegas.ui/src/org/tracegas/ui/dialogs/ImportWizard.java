@@ -4,7 +4,7 @@ import java.nio.file.Path;
 import java.util.List;
 
 import org.eclipse.jface.wizard.Wizard;
-import org.tracegas.campaign.FileMeasurements;
+import org.tracegas.pipeline.FileMeasurements;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.store.ProjectInfo;
 

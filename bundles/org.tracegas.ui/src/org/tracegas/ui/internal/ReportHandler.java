@@ -15,7 +15,7 @@ import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.handlers.HandlerUtil;
-import org.tracegas.campaign.StoredMethod;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.store.ProjectInfo;
 import org.tracegas.store.VersionInfo;

@@ -16,7 +16,7 @@ import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.dialogs.ElementListSelectionDialog;
 import org.eclipse.ui.handlers.HandlerUtil;
-import org.tracegas.campaign.StoredMethod;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.store.ProjectInfo;

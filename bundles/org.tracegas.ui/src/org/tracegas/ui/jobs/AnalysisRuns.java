@@ -11,7 +11,7 @@ import java.util.function.Consumer;
 
 import org.eclipse.swt.widgets.Display;
 
-import org.tracegas.campaign.AnalysisVersions;
+import org.tracegas.pipeline.AnalysisVersions;
 import org.tracegas.installation.InstalledSoftware;
 import org.tracegas.quantify.CompoundResult;
 import org.tracegas.quantify.QuantificationMethod;

@@ -6,8 +6,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 
-import org.tracegas.campaign.MethodVersions;
-import org.tracegas.campaign.StoredMethod;
+import org.tracegas.method.MethodVersions;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.library.Compound;
 import org.tracegas.library.Origin;
 import org.tracegas.library.OriginKind;

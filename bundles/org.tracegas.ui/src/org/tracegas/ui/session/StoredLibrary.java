@@ -4,7 +4,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.tracegas.campaign.KeyValueFile;
+import org.tracegas.method.KeyValueFile;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.store.NoSuchObjectException;

@@ -8,7 +8,7 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.ui.ISelectionListener;
 import org.eclipse.ui.IWorkbenchPart;
 import org.eclipse.ui.part.ViewPart;
-import org.tracegas.campaign.StoredQaChecks;
+import org.tracegas.qa.campaign.StoredQaChecks;
 import org.tracegas.model.Project;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.store.QaCheckInfo;

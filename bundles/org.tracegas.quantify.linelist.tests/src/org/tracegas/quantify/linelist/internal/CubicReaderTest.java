@@ -35,17 +35,6 @@ class CubicReaderTest {
         }
     }
 
-    /** Its integral over part of a cell is that of the quadratic: x^3 / 3 (calculus). */
-    @Test
-    void integratesAQuadraticExactly() {
-        double[] v = sampled(x -> (x - 2000) * (x - 2000));
-        int k = 40;
-        double f = 0.37;
-        double a = k * 0.02;
-        double b = a + f * 0.02;
-        assertEquals((b * b * b - a * a * a) / 3, CubicReader.cellIntegral(v, k, f) * 0.02, 1e-15);
-    }
-
     @Test
     void refusesToReadBeyondTheGrid() {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,

@@ -30,6 +30,12 @@ class MixtureModelTest {
         return new LineByLineModel(new LineList("invented", lines), 28, PowerLawPartitionFunction.linearMolecule());
     }
 
+    private static double[] observe(MixtureModel m, double[] amounts, double[][] derivatives) {
+        double[] observed = new double[m.grid().size()];
+        m.observe(amounts, observed, derivatives);
+        return observed;
+    }
+
     private static MixtureModel model(double fieldOfView) {
         return new MixtureModel(List.of(band()), 300, 101.0, 5.0, LINE_SHAPE, fieldOfView, 2125, 2155);
     }
@@ -48,8 +54,8 @@ class MixtureModelTest {
         MixtureModel point = model(0);
         MixtureModel wide = model(alpha);
         double[] amounts = {2500};
-        double[] narrowSeen = point.observe(amounts, null);
-        double[] wideSeen = wide.observe(amounts, null);
+        double[] narrowSeen = observe(point, amounts, null);
+        double[] wideSeen = observe(wide, amounts, null);
         CubicReader atPoint = new CubicReader(point.grid());
         CubicReader atWide = new CubicReader(wide.grid());
         double[] read = new double[2];
@@ -74,11 +80,11 @@ class MixtureModelTest {
     @Test
     void derivativesAreThoseOfTheTransmittance() {
         MixtureModel m = model(0.006);
-        double[][] derivatives = new double[1][];
-        m.observe(new double[] {500}, derivatives);
+        double[][] derivatives = new double[1][m.grid().size()];
+        observe(m, new double[] {500}, derivatives);
         double h = 0.01;
-        double[] up = m.observe(new double[] {500 + h}, null);
-        double[] down = m.observe(new double[] {500 - h}, null);
+        double[] up = observe(m, new double[] {500 + h}, null);
+        double[] down = observe(m, new double[] {500 - h}, null);
         double largest = 0;
         for (int i = 0; i < up.length; i++) {
             largest = Math.max(largest, Math.abs(derivatives[0][i]));

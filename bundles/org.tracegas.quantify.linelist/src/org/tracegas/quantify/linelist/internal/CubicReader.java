@@ -41,21 +41,4 @@ final class CubicReader {
         out[0] = 0.5 * (2 * p1 + t * (a + t * (b + t * c)));
         out[1] = 0.5 * (a + t * (2 * b + t * 3 * c)) / step;
     }
-
-    /**
-     * The integral of the same cubic over [x_k, x_k + f step], in units of step: the Catmull-Rom weights of the four
-     * neighbours integrated from 0 to f; the trapezoid rule in the first and last cell, which lack a neighbour.
-     *
-     * @param f fraction of the cell, in [0, 1]
-     */
-    static double cellIntegral(double[] values, int k, double f) {
-        if (k < 1 || k > values.length - 3) {
-            return 0.5 * f * (2 * values[k] + f * (values[k + 1] - values[k]));
-        }
-        double f2 = f * f;
-        double f3 = f2 * f;
-        double f4 = f3 * f;
-        return 0.5 * (values[k - 1] * (-f2 / 2 + 2 * f3 / 3 - f4 / 4) + values[k] * (2 * f - 5 * f3 / 3 + 3 * f4 / 4)
-                + values[k + 1] * (f2 / 2 + 4 * f3 / 3 - 3 * f4 / 4) + values[k + 2] * (-f3 / 3 + f4 / 4));
-    }
 }

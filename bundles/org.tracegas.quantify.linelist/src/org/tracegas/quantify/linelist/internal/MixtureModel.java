@@ -4,7 +4,9 @@ import java.util.List;
 
 import org.tracegas.library.synthesis.AbsorptionPath;
 import org.tracegas.library.synthesis.LineByLineModel;
+import org.tracegas.preprocess.FftEngine;
 import org.tracegas.preprocess.InstrumentLineShape;
+import org.tracegas.preprocess.RealFft;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
@@ -25,18 +27,43 @@ import org.tracegas.spectrum.Spectrum;
  * at nu0 cos(theta); over a uniformly lit circular beam of half angle alpha it is spread evenly over
  * [nu0 (1 - alpha^2 / 2), nu0] (small angles; from memory, the self-apodization of a finite aperture, as in
  * Fourier transform spectroscopy textbooks). The width is taken at the middle of the fit range.
+ * <p>
+ * Why it is fast: everything the sample does not change is prepared once, when the method is prepared: each
+ * compound's optical depth on the fine grid, and the instrument as one transfer function, the transform of the line
+ * shape (taken from the line shape's own convolution of a single fine point) times that of the field-of-view boxcar
+ * (mean over [nu, nu + w]: exp(i theta) sin(theta) / theta with theta = pi k w / (n step), exact for the
+ * band-limited spectrum the line shape leaves). Per spectrum remain the exponential and one forward and one inverse
+ * transform per observed vector, on work arrays kept per thread. The fine grid is as long as the transform, a power
+ * of two, with at least {@value #GUARD_RESOLUTIONS} resolution elements of true spectrum beyond the margin at each
+ * end, so that the circular convolution's wrap-around joins its ends far from any point read.
  */
 public final class MixtureModel {
 
     /** Resolution elements beyond each end of the fit range that the fine grid covers, for the line shape's wings. */
     private static final int MARGIN_RESOLUTIONS = 10;
+    /** Resolution elements beyond the margin, at each end, between the points read and the transform's wrap-around. */
+    private static final int GUARD_RESOLUTIONS = 16;
     /** The amount of the nominal path whose optical depth is computed, ppm: small, so self-broadening is nil. */
     private static final double NOMINAL_PPM = 1.0;
 
-    private final SpectralAxis fine;
+    private final SpectralAxis fine;       // size a power of two: the transform length
     private final double[][] tauPerAmount; // [compound][fine point], optical depth of 1 ppm·m
-    private final InstrumentLineShape lineShape;
-    private final double fieldWidth;       // cm-1, width of the field-of-view boxcar
+    private final double[] transferRe;     // instrument's transfer function, k = 0 .. size / 2
+    private final double[] transferIm;
+    private final ThreadLocal<Transform> transforms;
+
+    /** One thread's transform and spectrum buffers: a transform holds work space and serves one thread. */
+    private static final class Transform {
+        final RealFft fft;
+        final double[] re;
+        final double[] im;
+
+        Transform(int size) {
+            this.fft = FftEngine.defaultEngine().create(size);
+            this.re = new double[size / 2 + 1];
+            this.im = new double[size / 2 + 1];
+        }
+    }
 
     /**
      * @param models      line-by-line model of each compound
@@ -50,7 +77,6 @@ public final class MixtureModel {
      */
     public MixtureModel(List<LineByLineModel> models, double temperature, double pressure, double pathMetres,
             InstrumentLineShape lineShape, double fieldOfView, double low, double high) {
-        this.lineShape = lineShape;
         double resolution = lineShape.nominalResolution();
         AbsorptionPath nominal = new AbsorptionPath(temperature, pressure, NOMINAL_PPM, pathMetres);
         double narrowest = Double.POSITIVE_INFINITY;
@@ -59,11 +85,13 @@ public final class MixtureModel {
         }
         // a third of the narrowest line's half width and an eighth of the resolution, as the library's synthesis
         double step = Math.min(resolution / 8, narrowest / 3);
-        this.fieldWidth = 0.5 * (low + high) / 2 * fieldOfView * fieldOfView;
+        double fieldWidth = 0.5 * (low + high) / 2 * fieldOfView * fieldOfView;
         // beyond the line shape's reach: also the field-of-view width and the largest wavenumber scale's shift
         double margin = MARGIN_RESOLUTIONS * resolution + fieldWidth + 1e-4 * high;
-        int size = (int) Math.ceil((high - low + 2 * margin) / step) + 1;
-        this.fine = SpectralAxis.uniform(AxisUnit.WAVENUMBER, low - margin, step, size);
+        int read = (int) Math.ceil((high - low + 2 * margin) / step) + 1;
+        int guard = (int) Math.ceil(GUARD_RESOLUTIONS * resolution / step);
+        int size = Integer.highestOneBit(read + 2 * guard - 1) << 1;
+        this.fine = SpectralAxis.uniform(AxisUnit.WAVENUMBER, low - margin - (size - read) / 2 * step, step, size);
         double amount = nominal.concentrationPathLength();
         this.tauPerAmount = new double[models.size()][];
         for (int c = 0; c < models.size(); c++) {
@@ -72,6 +100,45 @@ public final class MixtureModel {
                 tau[i] /= amount;
             }
             tauPerAmount[c] = tau;
+        }
+        this.transforms = ThreadLocal.withInitial(() -> new Transform(size));
+        this.transferRe = new double[size / 2 + 1];
+        this.transferIm = new double[size / 2 + 1];
+        lineShapeTransfer(lineShape);
+        fieldOfViewTransfer(fieldWidth / step);
+    }
+
+    /**
+     * The line shape's transfer function: the transform of its response to one fine point in the middle of the
+     * grid, moved to index 0. The response reaches half the grid each way, beyond which the line shape of an
+     * apodized spectrometer has long died away.
+     */
+    private void lineShapeTransfer(InstrumentLineShape lineShape) {
+        int size = fine.size();
+        double[] impulse = new double[size];
+        impulse[size / 2] = 1;
+        double[] response = lineShape.apply(new Spectrum(fine, impulse, Ordinate.ARBITRARY)).toArray();
+        double[] centred = new double[size];
+        for (int i = 0; i < size; i++) {
+            centred[(i - size / 2 + size) % size] = response[i];
+        }
+        transforms.get().fft.forward(centred, transferRe, transferIm);
+    }
+
+    /** Multiplies the transfer function by that of the mean over [nu, nu + w], w being the given number of steps. */
+    private void fieldOfViewTransfer(double cells) {
+        if (cells == 0) {
+            return;
+        }
+        int size = fine.size();
+        for (int k = 1; k < transferRe.length; k++) {
+            double theta = Math.PI * k * cells / size;
+            double gain = Math.sin(theta) / theta;
+            double hr = gain * Math.cos(theta);
+            double hi = gain * Math.sin(theta);
+            double re = transferRe[k];
+            transferRe[k] = re * hr - transferIm[k] * hi;
+            transferIm[k] = re * hi + transferIm[k] * hr;
         }
     }
 
@@ -89,29 +156,30 @@ public final class MixtureModel {
      * amount.
      *
      * @param amounts     ppm·m of each compound
-     * @param derivatives receives d T_observed / d amount_c per compound, or null when not wanted
-     * @return the observed transmittance
+     * @param observed    receives the observed transmittance, {@link #grid()} long
+     * @param derivatives receives d T_observed / d amount_c per compound in arrays {@link #grid()} long, or null
+     *                    when not wanted
      */
-    public double[] observe(double[] amounts, double[][] derivatives) {
+    public void observe(double[] amounts, double[] observed, double[][] derivatives) {
         int n = fine.size();
-        double[] t = new double[n];
         for (int i = 0; i < n; i++) {
             double tau = 0;
             for (int c = 0; c < amounts.length; c++) {
                 tau += amounts[c] * tauPerAmount[c][i];
             }
-            t[i] = Math.exp(-tau);
+            observed[i] = Math.exp(-tau);
         }
         if (derivatives != null) {
             for (int c = 0; c < amounts.length; c++) {
-                double[] d = new double[n];
+                double[] d = derivatives[c];
+                double[] tau = tauPerAmount[c];
                 for (int i = 0; i < n; i++) {
-                    d[i] = -tauPerAmount[c][i] * t[i];
+                    d[i] = -tau[i] * observed[i];
                 }
-                derivatives[c] = instrument(d, Ordinate.ARBITRARY);
+                instrument(d);
             }
         }
-        return instrument(t, Ordinate.TRANSMITTANCE);
+        instrument(observed);
     }
 
     /** The observed transmittance of one compound alone at an amount. */
@@ -120,41 +188,19 @@ public final class MixtureModel {
         for (int i = 0; i < t.length; i++) {
             t[i] = Math.exp(-amount * tauPerAmount[compound][i]);
         }
-        return instrument(t, Ordinate.TRANSMITTANCE);
+        instrument(t);
+        return t;
     }
 
-    /** The instrument's view of a monochromatic spectrum: its line shape, then the field-of-view boxcar. */
-    private double[] instrument(double[] monochromatic, Ordinate ordinate) {
-        double[] seen = lineShape.apply(new Spectrum(fine, monochromatic, ordinate)).toArray();
-        return fieldWidth > 0 ? boxcar(seen) : seen;
-    }
-
-    /**
-     * out(nu) = mean of in over [nu, nu + w]. The values between grid points are those of the Catmull-Rom cubic
-     * that {@link CubicReader} reads, integrated exactly: the trapezoid rule, read linearly between grid points,
-     * erred by up to 8e-4 in transmittance beside a saturated line against an average over ray angles.
-     */
-    private double[] boxcar(double[] in) {
-        int n = in.length;
-        double h = fine.step();
-        double[] integral = new double[n];
-        for (int i = 1; i < n; i++) {
-            integral[i] = integral[i - 1] + CubicReader.cellIntegral(in, i - 1, 1.0) * h;
+    /** Replaces a monochromatic spectrum on the fine grid by the instrument's view of it. */
+    private void instrument(double[] spectrum) {
+        Transform t = transforms.get();
+        t.fft.forward(spectrum, t.re, t.im);
+        for (int k = 0; k < t.re.length; k++) {
+            double re = t.re[k];
+            t.re[k] = re * transferRe[k] - t.im[k] * transferIm[k];
+            t.im[k] = re * transferIm[k] + t.im[k] * transferRe[k];
         }
-        double cells = fieldWidth / h;
-        double[] out = new double[n];
-        for (int i = 0; i < n; i++) {
-            double at = i + cells;
-            int k = (int) Math.floor(at);
-            double upper;
-            if (k >= n - 1) {
-                // past the grid's end, where the margin holds no fitted point: the end value continues
-                upper = integral[n - 1] + (at - (n - 1)) * h * in[n - 1];
-            } else {
-                upper = integral[k] + CubicReader.cellIntegral(in, k, at - k) * h;
-            }
-            out[i] = (upper - integral[i]) / fieldWidth;
-        }
-        return out;
+        t.fft.inverse(t.re, t.im, spectrum);
     }
 }

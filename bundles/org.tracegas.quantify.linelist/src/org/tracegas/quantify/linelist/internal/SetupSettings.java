@@ -20,11 +20,15 @@ import org.tracegas.quantify.linelist.LineListSetup;
 
 /**
  * Builds the line-list setup from the settings a method carries: temperature (K), pressure (kPa), field-of-view
- * (rad), apodization and resolution (cm-1) once each, and per compound a gas "name molar-mass m partition
+ * (rad), apodization and resolution (cm-1) once each, optionally cell-conditions (stated, the default, or measured:
+ * each sample's own measured cell temperature and pressure), and per compound a gas "name molar-mass m partition
  * linear|non-linear sha256 h file path". Every line list is read anew and must still have the SHA-256 the method
  * states, so that the fit computes the spectra the method's version binds.
  */
 public final class SetupSettings {
+
+    /** The setting that chooses the stated or each sample's measured cell conditions. */
+    private static final String CELL_CONDITIONS = "cell-conditions";
 
     private SetupSettings() {
     }
@@ -70,10 +74,27 @@ public final class SetupSettings {
                     number(method, "pressure", single(method, "pressure")),
                     InstrumentLineShape.forResolution(shape,
                             number(method, "resolution", single(method, "resolution"))),
-                    number(method, "field-of-view", single(method, "field-of-view")));
+                    number(method, "field-of-view", single(method, "field-of-view")), measured(method));
         } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException("method " + method.name() + ": " + e.getMessage(), e);
         }
+    }
+
+    /**
+     * Whether the method computes its spectra at each sample's measured cell conditions: cell-conditions measured,
+     * or stated (also when absent, as in the methods defined before the setting existed).
+     */
+    private static boolean measured(QuantificationMethod method) {
+        List<String> values = method.algorithmSettings(CELL_CONDITIONS);
+        if (values.isEmpty()) {
+            return false;
+        }
+        String value = single(method, CELL_CONDITIONS);
+        return switch (value) {
+            case "measured" -> true;
+            case "stated" -> false;
+            default -> throw error(method, CELL_CONDITIONS, "'" + value + "' is none of measured, stated");
+        };
     }
 
     private static PartitionFunction partition(QuantificationMethod method, String kind) {

@@ -7,12 +7,12 @@ import java.util.List;
 import java.util.Set;
 import java.util.function.Function;
 
-import org.tracegas.campaign.AnalysisVersions;
-import org.tracegas.campaign.BackgroundTimeline;
-import org.tracegas.campaign.SpectrumChain;
-import org.tracegas.campaign.demo.DemoCampaignFiles;
-import org.tracegas.campaign.demo.DemoMethod;
-import org.tracegas.campaign.demo.DemoPhysics;
+import org.tracegas.pipeline.AnalysisVersions;
+import org.tracegas.pipeline.BackgroundTimeline;
+import org.tracegas.pipeline.SpectrumChain;
+import org.tracegas.demo.DemoCampaignFiles;
+import org.tracegas.demo.DemoMethod;
+import org.tracegas.demo.DemoPhysics;
 import org.tracegas.importer.container.ContainerReader;
 import org.tracegas.importer.container.ContainerRecord;
 import org.tracegas.importer.container.SampleKind;

@@ -16,7 +16,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
-import org.tracegas.campaign.demo.DemoMethod;
+import org.tracegas.demo.DemoMethod;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ImportedData;
 import org.tracegas.importer.container.ContainerReader;

@@ -1,5 +1,0 @@
-package org.tracegas.campaign;
-
-/** The stored versions of the method and the library that a run uses; every result points at both. */
-public record AnalysisVersions(String methodVersionId, String libraryVersionId) {
-}
