@@ -21,10 +21,10 @@ import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swtchart.Chart;
-import org.tracegas.campaign.LabReferenceSource;
 import org.tracegas.library.ReferenceConditions;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.ReferenceSpectrum;
+import org.tracegas.method.LabReferenceSource;
 import org.tracegas.ui.chart.DecimatedSeries;
 
 /**
