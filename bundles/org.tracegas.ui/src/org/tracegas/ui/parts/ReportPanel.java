@@ -134,10 +134,19 @@ public final class ReportPanel extends Composite {
         verification.setForeground(null);
         ReportApproval checking = approval;
         Job.create("Verifying the audit chain of report " + approval.content().campaign().reportId(), monitor -> {
-            WorkspaceVerification v = checking.verifyNow();
-            if (!isDisposed()) {
-                getDisplay().asyncExec(() -> verifiedNow(checking, v));
+            WorkspaceVerification v = null;
+            String failure = null;
+            try {
+                v = checking.verifyNow();
+            } catch (StoreException e) {
+                failure = e.getMessage();
             }
+            WorkspaceVerification done = v;
+            String problem = failure;
+            if (!isDisposed()) {
+                getDisplay().asyncExec(() -> verifiedNow(checking, done, problem));
+            }
+            // the panel shows a failure; the job ends quietly instead of raising a second dialog
             return Status.OK_STATUS;
         }).schedule();
         refit();
@@ -150,13 +159,14 @@ public final class ReportPanel extends Composite {
         body.layout(true, true);
     }
 
-    private void verifiedNow(ReportApproval checked, WorkspaceVerification v) {
+    /** Shows the verification, or why there is none ({@code v} null, {@code problem} the reason). */
+    private void verifiedNow(ReportApproval checked, WorkspaceVerification v, String problem) {
         if (isDisposed() || checked != approval) {
             return;
         }
         verified = v;
-        verification.setText("Now: " + v.statement());
-        verification.setForeground(v.intact() ? Palette.INTACT : Palette.BROKEN);
+        verification.setText(v == null ? "Not verified now: " + problem : "Now: " + v.statement());
+        verification.setForeground(v != null && v.intact() ? Palette.INTACT : Palette.BROKEN);
         refit();
     }
 
