@@ -60,9 +60,11 @@ public final class Screens {
         }
         Point size = shell.getSize();
         Image image = new Image(display, size.x, size.y);
-        GC gc = new GC(shell);
+        // a shown window is copied from the screen, menu bar and all; the shell's own GC starts below the menu bar
+        GC gc = shell.isVisible() ? new GC(display) : new GC(shell);
         try {
-            gc.copyArea(image, 0, 0);
+            Point at = shell.isVisible() ? shell.getLocation() : new Point(0, 0);
+            gc.copyArea(image, at.x, at.y);
         } finally {
             gc.dispose();
         }

@@ -39,7 +39,7 @@ import org.tracegas.store.Workspaces;
 
 /**
  * A method version saved the way the workbench's method editor saves it (the workspace model edited through the
- * editor's command stack, then {@link MethodVersions#save}) into a real embedded workspace, and run by the
+ * editor's command stack, a region's span and its analyte's interferents, then {@link MethodVersions#save}) into a real embedded workspace, and run by the
  * runner's quantify command on real container files of interferograms: the front ends share one method text.
  */
 class WorkbenchMethodVersionTest {
@@ -109,11 +109,16 @@ class WorkbenchMethodVersionTest {
             assertEquals("CO", co.getCompound());
             assertEquals(2050, co.getLowerWavenumber());
             editor.set(co, Literals.ANALYSIS_REGION__LOWER_WAVENUMBER, 2060.0);
-            saved = MethodVersions.save(store, ana, method, draft, "CO window starts above the band's far wing");
+            // the analyte's interferents, as the editor's Interferents field sets them on its one region
+            assertEquals(List.of("N2O"), co.getInterferents());
+            editor.set(co, Literals.ANALYSIS_REGION__INTERFERENTS, List.of("N2O", "H2O"));
+            saved = MethodVersions.save(store, ana, method, draft, "CO window starts above the band's far wing;"
+                    + " water fitted with CO");
             assertEquals(2, saved.number());
             assertEquals(first.id(), saved.parentId());
             StoredMethod stored = StoredMethod.parse(store.versions().content(saved.id()), "saved");
             assertEquals(2060, stored.method().analytes().get(0).regions().get(0).low());
+            assertEquals(List.of("N2O", "H2O"), stored.method().analytes().get(0).interferents());
             assertEquals(StoredMethod.parse(store.versions().content(first.id()), "first").transform(),
                     stored.transform());
         }

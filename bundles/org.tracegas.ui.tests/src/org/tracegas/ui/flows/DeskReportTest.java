@@ -17,7 +17,6 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditRecord;
-import org.tracegas.store.NewQaCheck;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
@@ -55,47 +54,8 @@ class DeskReportTest {
         desk.quantifiedMorning();
         WorkspaceStore store = desk.access.store();
         VersionInfo method = store.versions().latest(VersionKind.METHOD).get(0);
-        // the lab's QA evaluation of the morning as the runner's qa command stores it (invented readings and
-        // acceptance ranges of the Quarrymoor lab): the zero passed, the calibration transfer standard did not
-        store.qa().recordAll(lab.analyst, lab.project.getId(), method.id(), List.of(
-                new NewQaCheck("Zero CO", true, 0.4, "ppm", -2, 2, "zero gas reads within ±2 ppm",
-                        "Quarrymoor lab procedure (invented)"),
-                new NewQaCheck("CTS path length", false, 2.31, "m", 1.9, 2.1, "path from the CTS within ±5 %",
-                        "Quarrymoor lab procedure (invented)")));
-        StringBuilder o2 = new StringBuilder("time,O2\nUTC,%vol\n");
-        for (int minute = 0; minute < 4; minute++) {
-            o2.append(LimeKilnLab.T0.plusSeconds(60L * minute)).append(",11.5\n");
-        }
-        Files.writeString(folder.resolve("o2.csv"), o2);
-        Path plan = Files.writeString(folder.resolve("kiln.plan"), """
-                report-id = QLW-R-01
-                client = Quarrymoor Lime Works
-                plant = Quarrymoor kiln 2
-                source = Kiln 2 stack
-                first-day = 2026-12-03
-                last-day = 2026-12-03
-                issued = 2026-12-04T09:00:00Z
-                standard-temperature = 273.15
-                standard-pressure = 101.3
-                reference-o2 = 11
-                o2-guard = 20
-                o2-file = o2.csv
-                o2-channel = O2
-                o2-uncertainty = 0.2
-                water = H2O
-                cell-temperature = 318
-                cell-pressure = 100.2
-                reference-uncertainty = 0.02
-                path-uncertainty = 0.05
-                temperature-uncertainty = 2
-                pressure-uncertainty = 0.5
-                periods = 2 min
-
-                [compound]
-                name = CO
-                molar-mass = 28.010
-                limit = 100 per 2 min
-                """);
+        lab.recordQaChecks(method.id());
+        Path plan = lab.reportPlan();
         Path out = folder.resolve("report-QLW");
 
         List<String> reports = new ArrayList<>();

@@ -1,7 +1,6 @@
 package org.tracegas.ui.flows;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
@@ -9,12 +8,12 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
-import java.util.concurrent.atomic.AtomicReference;
 
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.GC;
 import org.eclipse.swt.graphics.Image;
 import org.eclipse.swt.graphics.ImageData;
+import org.eclipse.swt.graphics.Point;
 import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
@@ -23,28 +22,24 @@ import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.IWorkbenchPage;
 import org.eclipse.ui.IWorkbenchWindow;
-import org.eclipse.ui.PlatformUI;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditAction;
+import org.tracegas.store.VersionKind;
 import org.tracegas.ui.Screens;
-import org.tracegas.ui.dialogs.LoginDialog;
-import org.tracegas.ui.internal.DeskWorkbenchAdvisor;
 import org.tracegas.ui.parts.AuditTrailPanel;
 import org.tracegas.ui.parts.ConcentrationTrace;
+import org.tracegas.ui.parts.MethodEditorPanel;
 import org.tracegas.ui.parts.SpectrumPanel;
 import org.tracegas.ui.parts.TimeSeriesPanel;
 import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.Desk;
-import org.tracegas.ui.session.WorkspaceAccess;
-import org.tracegas.ui.session.WorkspaceLocation;
 import org.tracegas.ui.views.AuditTrailView;
 
 /**
- * The product's workbench, started as the application starts it (log-in dialog, then
- * {@link PlatformUI#createAndRunWorkbench} with the product's advisor: the analysis desk, its menus and views
- * from plugin.xml), on a real H2 workspace holding a quantified morning: the reviewer logs in, opens the project
- * in the tree, opens a value's spectrum from the time series and reads the audit trail.
+ * The product's workbench, started as the application starts it ({@link StartedWorkbench}), on a real H2
+ * workspace holding a quantified morning: the reviewer logs in, opens the project in the tree, opens a value's
+ * spectrum from the time series and reads the audit trail.
  */
 class DeskWorkbenchTest {
 
@@ -56,47 +51,10 @@ class DeskWorkbenchTest {
         try (LabDesk lab = new LabDesk(folder, 800, 600)) {
             lab.quantifiedMorning();
         }
-        Display display = Display.getDefault();
-        WorkspaceAccess access = WorkspaceAccess.openExisting(new WorkspaceLocation.Folder(folder.resolve("ws")));
-        try {
-            Shell parent = new Shell(display);
-            LoginDialog login = new LoginDialog(parent, access.store().users(), access.location().description());
-            login.setBlockOnOpen(false);
-            login.open();
-            login.loginField().setText(LimeKilnLab.REVIEWER);
-            login.passwordField().setText(LimeKilnLab.PASSWORD);
-            login.okButton().notifyListeners(SWT.Selection, new Event());
-            assertNotNull(login.session(), "the reviewer is logged in");
-            parent.dispose();
-            Desk.get().start(access, login.session(), null);
-
-            AtomicReference<Throwable> failure = new AtomicReference<>();
-            List<Path> shots = new ArrayList<>();
-            Runnable[] whenOpen = new Runnable[1];
-            whenOpen[0] = () -> {
-                if (!PlatformUI.isWorkbenchRunning()
-                        || PlatformUI.getWorkbench().getActiveWorkbenchWindow() == null) {
-                    display.timerExec(200, whenOpen[0]);
-                    return;
-                }
-                try {
-                    drive(display, PlatformUI.getWorkbench().getActiveWorkbenchWindow(), shots);
-                } catch (Throwable t) {
-                    failure.set(t);
-                } finally {
-                    PlatformUI.getWorkbench().close();
-                }
-            };
-            display.timerExec(200, whenOpen[0]);
-            int code = PlatformUI.createAndRunWorkbench(display, new DeskWorkbenchAdvisor(LimeKilnLab.REVIEWER));
-            if (failure.get() != null) {
-                throw new AssertionError("driving the workbench failed", failure.get());
-            }
-            assertEquals(PlatformUI.RETURN_OK, code);
-            assertEquals(2, shots.size());
-        } finally {
-            access.close();
-        }
+        List<Path> shots = new ArrayList<>();
+        StartedWorkbench.run(folder.resolve("ws"), LimeKilnLab.REVIEWER, LimeKilnLab.PASSWORD,
+                (display, window) -> drive(display, window, shots));
+        assertEquals(3, shots.size());
     }
 
     private static void drive(Display display, IWorkbenchWindow window, List<Path> shots) throws Exception {
@@ -122,6 +80,15 @@ class DeskWorkbenchTest {
         assertTrue(title.contains("ABOVE_CALIBRATED_RANGE"), title);
         shots.add(Screens.save(shell, "workbench-spectrum-from-time-series"));
 
+        // the method beside the spectrum, a region's span edited: the form and the comparison fit the narrow view
+        MethodEditorPanel method = find(shell, MethodEditorPanel.class);
+        method.openStored(Desk.get().access().store().versions().latest(VersionKind.METHOD).get(0).id());
+        method.upperField().setText("2230");
+        assertEquals("1 field differs (highlighted).", method.comparison().summary().getText());
+        Screens.flush(display);
+        StartedWorkbench.assertInside(method);
+        shots.add(Screens.save(shell, "workbench-method-1280x800"));
+
         IWorkbenchPage page = window.getActivePage();
         // in its place on the desk, not maximized: its rows must paint there too
         page.showView(AuditTrailView.ID);
@@ -133,6 +100,11 @@ class DeskWorkbenchTest {
         assertTrue(audit.shown().records().stream().anyMatch(r -> r.objectType().equals("raw-file")));
         assertEquals(audit.shown().records().size(), audit.table().getItemCount());
         shots.add(Screens.save(shell, "workbench-audit-trail"));
+        // the product's window on the smallest screen it is made for; the trail's records keep room for rows
+        assertEquals(new Point(1280, 800), shell.getSize());
+        StartedWorkbench.assertInside(audit);
+        int rows = audit.table().getClientArea().height / audit.table().getItemHeight();
+        assertTrue(rows >= 3, "the audit trail shows " + rows + " rows at 1280×800");
         // the first row's strip: the table's client coordinates start below its header
         int colours = coloursOnScreen(display, audit.table(),
                 new Rectangle(0, 0, audit.table().getClientArea().width, audit.table().getItemHeight()));
@@ -163,19 +135,7 @@ class DeskWorkbenchTest {
         return colours.size();
     }
 
-    /** The first control of a type below a composite, depth first. */
     private static <T extends Control> T find(Composite parent, Class<T> type) {
-        for (Control c : parent.getChildren()) {
-            if (type.isInstance(c)) {
-                return type.cast(c);
-            }
-            if (c instanceof Composite k) {
-                T found = find(k, type);
-                if (found != null) {
-                    return found;
-                }
-            }
-        }
-        return null;
+        return StartedWorkbench.find(parent, type);
     }
 }

@@ -21,6 +21,7 @@ import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
+import org.tracegas.store.NewQaCheck;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -38,6 +39,7 @@ final class LimeKilnLab {
     static final String ADMIN = "admin";
     static final String ANALYST = "t.nakamura";
     static final String REVIEWER = "e.lindqvist";
+    static final String QA_MANAGER = "a.moreau";
     static final String PASSWORD = "quarrymoor-pw-7";
     static final String CODE = "QLW-2026-12";
     static final String METHOD = "Kiln stack CO";
@@ -88,6 +90,9 @@ final class LimeKilnLab {
         project = store.projects().createProject(admin, client, CODE, "Kiln 2 stack, December");
         store.projects().grant(admin, project.getId(), analystId, AccessLevel.WRITE);
         store.projects().grant(admin, project.getId(), reviewerId, AccessLevel.READ);
+        String managerId = store.users().createUser(admin, QA_MANAGER, "Amara Moreau", Set.of(Role.QUALITY_MANAGER),
+                PASSWORD.toCharArray()).id();
+        store.projects().grant(admin, project.getId(), managerId, AccessLevel.READ);
         analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
         reviewer = store.users().logIn(REVIEWER, PASSWORD.toCharArray());
         defineMethod();
@@ -215,6 +220,60 @@ final class LimeKilnLab {
         JcampWriter.save(JcampWriter.defaultPrecision().write(sample(ppm, minute), "Kiln 2 stack " + name, labels),
                 file);
         return file;
+    }
+
+    /**
+     * The lab's QA evaluation of the morning as the runner's qa command stores it (invented readings and
+     * acceptance ranges of the Quarrymoor lab), recorded by the analyst: the zero passed, the calibration transfer
+     * standard did not.
+     */
+    void recordQaChecks(String methodVersionId) {
+        store.qa().recordAll(analyst, project.getId(), methodVersionId, List.of(
+                new NewQaCheck("Zero CO", true, 0.4, "ppm", -2, 2, "zero gas reads within ±2 ppm",
+                        "Quarrymoor lab procedure (invented)"),
+                new NewQaCheck("CTS path length", false, 2.31, "m", 1.9, 2.1, "path from the CTS within ±5 %",
+                        "Quarrymoor lab procedure (invented)")));
+    }
+
+    /**
+     * The report plan of the morning's report QLW-R-01 on dry gas at 11 % reference O2 (the lab's moisture must be
+     * measured: see {@link #LimeKilnLab(WorkspaceStore, Path, double)}), with its O2 side channel file beside it.
+     */
+    Path reportPlan() throws IOException {
+        StringBuilder o2 = new StringBuilder("time,O2\nUTC,%vol\n");
+        for (int minute = 0; minute < 4; minute++) {
+            o2.append(T0.plusSeconds(60L * minute)).append(",11.5\n");
+        }
+        Files.writeString(folder.resolve("o2.csv"), o2);
+        return Files.writeString(folder.resolve("kiln.plan"), """
+                report-id = QLW-R-01
+                client = Quarrymoor Lime Works
+                plant = Quarrymoor kiln 2
+                source = Kiln 2 stack
+                first-day = 2026-12-03
+                last-day = 2026-12-03
+                issued = 2026-12-04T09:00:00Z
+                standard-temperature = 273.15
+                standard-pressure = 101.3
+                reference-o2 = 11
+                o2-guard = 20
+                o2-file = o2.csv
+                o2-channel = O2
+                o2-uncertainty = 0.2
+                water = H2O
+                cell-temperature = 318
+                cell-pressure = 100.2
+                reference-uncertainty = 0.02
+                path-uncertainty = 0.05
+                temperature-uncertainty = 2
+                pressure-uncertainty = 0.5
+                periods = 2 min
+
+                [compound]
+                name = CO
+                molar-mass = 28.010
+                limit = 100 per 2 min
+                """);
     }
 
     static final DateTimeFormatter LONGDATE = DateTimeFormatter.ofPattern("yyyy/MM/dd HH:mm:ss")

@@ -3,6 +3,9 @@ package org.tracegas.ui.parts;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
 
+import java.util.List;
+import java.util.Set;
+
 import org.junit.jupiter.api.Test;
 
 class FieldCheckTest {
@@ -19,5 +22,20 @@ class FieldCheckTest {
         assertNull(FieldCheck.order("2000", "2100"));
         assertEquals("Upper wavenumber: must lie above the lower wavenumber 2100 cm⁻¹", FieldCheck.order("2100", "2100"));
         assertNull(FieldCheck.order("x", "2100"), "an unreadable bound is reported by its own check");
+    }
+
+    @Test
+    void interferentsAreNamedOnceNotTheAnalyteAndOnlyCompoundsTheMethodHasReferencesOf() {
+        Set<String> known = Set.of("CO", "H2O", "N2O");
+        assertNull(FieldCheck.interferents(" H2O , N2O ", "CO", known));
+        assertNull(FieldCheck.interferents("", "CO", known), "an analyte may have no interferents");
+        assertEquals(List.of("H2O", "N2O"), FieldCheck.split(" H2O , N2O "));
+        assertEquals(List.of(), FieldCheck.split("  "));
+        assertEquals("Interferents: an empty name in 'H2O,,N2O'; separate compounds by commas",
+                FieldCheck.interferents("H2O,,N2O", "CO", known));
+        assertEquals("Interferents: CO is the analyte itself", FieldCheck.interferents("CO", "CO", known));
+        assertEquals("Interferents: H2O is named twice", FieldCheck.interferents("H2O, H2O", "CO", known));
+        assertEquals("Interferents: the method has no reference of 'CO2' (it has CO, H2O, N2O)",
+                FieldCheck.interferents("CO2", "CO", known));
     }
 }

@@ -3,17 +3,24 @@ package org.tracegas.ui.parts;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
 import java.time.Duration;
 import java.time.Instant;
 import java.util.List;
+import java.util.Map;
 
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.layout.FillLayout;
 import org.eclipse.swt.widgets.Display;
+import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.Shell;
+import org.eclipse.swtchart.Range;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.importer.jcamp.JcampWriter;
 import org.tracegas.library.Compound;
 import org.tracegas.library.Origin;
 import org.tracegas.library.OriginKind;
@@ -66,6 +73,73 @@ class LibraryAndQaPanelsTest {
         assertEquals("SYNTHETIC — line by line", panel.table().getItem(1).getText(2));
         assertEquals(Palette.CHANGED, panel.table().getItem(1).getBackground(2));
         Screens.save(shell, "library-browser");
+    }
+
+    /** A reference in a real JCAMP-DX file: an invented band at 2143 cm⁻¹ whose peak absorbance is {@code peak}. */
+    private static Path jcamp(Path folder, String name, double peak) throws Exception {
+        SpectralAxis axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.5, 601);
+        double[] a = new double[axis.size()];
+        for (int k = 0; k < a.length; k++) {
+            double x = (axis.get(k) - 2143) / 12;
+            a[k] = peak / (1 + x * x);
+        }
+        Path file = folder.resolve(name);
+        JcampWriter.save(JcampWriter.defaultPrecision().write(new Spectrum(axis, a, Ordinate.ABSORBANCE), name,
+                Map.of()), file);
+        return file;
+    }
+
+    private static String block(String file, String ppmM, String kelvin, String kPa) {
+        // CAS number and molar mass of CO: NIST Chemistry WebBook (from memory)
+        return "[reference]\nfile = " + file + "\ncompound = CO\ncas = 630-08-0\nformula = CO\nmolar-mass = 28.010\n"
+                + "ppm-m = " + ppmM + "\ntemperature = " + kelvin + "\npressure = " + kPa + "\nresolution = 0.5\n"
+                + "apodization = Norton-Beer medium\norigin = measured\nuncertainty = 0.02\n";
+    }
+
+    @Test
+    void aLibraryFolderIsPreviewedAndTwoReferencesAreOverlaidWithTheConditionsInWhichTheyDiffer(@TempDir Path folder)
+            throws Exception {
+        // an invented lab's two CO references: one at room conditions, one in the heated cell
+        jcamp(folder, "co-200.jdx", 0.5);
+        jcamp(folder, "co-400-hot.jdx", 0.93);
+        Path manifest = Files.writeString(folder.resolve("library.manifest"), "library = Quarrymoor CO\n\n"
+                + block("co-200.jdx", "200", "296", "101.325") + "\n" + block("co-400-hot.jdx", "400", "318", "100.2"));
+        LibraryBrowserPanel panel = new LibraryBrowserPanel(shell, SWT.NONE);
+        shell.setSize(700, 600);
+        shell.open();
+        panel.open(manifest);
+        Screens.waitFor(display, () -> panel.table().getItemCount() == 2, 30_000);
+        assertEquals("Quarrymoor CO (folder " + folder + "): 2 reference spectra", panel.summary().getText());
+        assertEquals("CO 200 ppm·m: 200 ppm·m in the path, 296 K, 101.325 kPa, resolution 0.5 cm⁻¹, apodization"
+                + " Norton-Beer medium", panel.conditions().getText());
+
+        panel.table().select(new int[] {0, 1});
+        panel.table().notifyListeners(SWT.Selection, new Event());
+        assertEquals("CO 200 ppm·m: 200 ppm·m in the path, 296 K, 101.325 kPa, resolution 0.5 cm⁻¹, apodization"
+                + " Norton-Beer medium\nover it: CO 400 ppm·m: 400 ppm·m in the path, 318 K, 100.2 kPa, resolution"
+                + " 0.5 cm⁻¹, apodization Norton-Beer medium\nThe two differ in temperature 296 K and 318 K;"
+                + " pressure 101.325 kPa and 100.2 kPa.", panel.conditions().getText());
+        assertEquals(2, panel.previewChart().getSeriesSet().getSeries().length);
+        // the files' own peaks: the plot's absorbance scale reaches the taller band and not far beyond
+        Range y = panel.previewChart().getAxisSet().getYAxis(0).getRange();
+        assertTrue(y.upper >= 0.93 && y.upper < 1.05, y.toString());
+        Range x = panel.previewChart().getAxisSet().getXAxis(0).getRange();
+        assertEquals(2000, x.lower, 1e-9);
+        assertEquals(2300, x.upper, 1e-9);
+        Screens.save(shell, "library-preview-overlay");
+    }
+
+    @Test
+    void aLibraryFolderWithAMissingSpectrumIsNamedAndNothingShown(@TempDir Path folder) throws Exception {
+        Path manifest = Files.writeString(folder.resolve("library.manifest"), "library = Quarrymoor CO\n\n"
+                + block("co-200.jdx", "200", "296", "101.325"));
+        LibraryBrowserPanel panel = new LibraryBrowserPanel(shell, SWT.NONE);
+        shell.open();
+        panel.open(manifest);
+        Screens.waitFor(display, () -> panel.summary().getText().startsWith("The library folder cannot be read"),
+                30_000);
+        assertTrue(panel.summary().getText().contains("co-200.jdx"), panel.summary().getText());
+        assertEquals(0, panel.table().getItemCount());
     }
 
     @Test

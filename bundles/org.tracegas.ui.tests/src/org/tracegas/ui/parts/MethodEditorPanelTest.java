@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Path;
+import java.util.List;
 
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.Color;
@@ -165,6 +166,74 @@ class MethodEditorPanelTest {
         assertEquals("Version 1 as opened", panel.comparison().table().getColumn(1).getText());
         assertEquals("2085.00", panel.lowerField().getText());
         assertEquals("The versions hold the same values.", panel.comparison().summary().getText());
+    }
+
+    @Test
+    void theAnalytesInterferentsAreEditedAsOneCommandCheckedAndSaved() throws Exception {
+        // the demo's CO analyte is fitted with water (DemoProject); N2O's band borders the CO window
+        assertEquals("H2O", panel.interferentsField().getText());
+        panel.interferentsField().setText("H2O, SO2");
+        assertEquals("Interferents: the method has no reference of 'SO2' (it has CO, H2O, N2O)",
+                panel.problems().getText());
+        assertTrue(panel.decorated(panel.interferentsField()));
+        assertEquals(List.of("H2O"), region.getInterferents());
+        panel.interferentsField().setText("H2O, CO");
+        assertEquals("Interferents: CO is the analyte itself", panel.problems().getText());
+        panel.interferentsField().setText("H2O, N2O");
+        assertEquals("", panel.problems().getText());
+        assertEquals(List.of("H2O", "N2O"), region.getInterferents());
+        assertEquals("1 field differs (highlighted).", panel.comparison().summary().getText());
+        press(panel.undoButton());
+        assertEquals(List.of("H2O"), region.getInterferents());
+        assertEquals("H2O", panel.interferentsField().getText());
+        press(panel.redoButton());
+        assertEquals("H2O, N2O", panel.interferentsField().getText());
+
+        panel.reasonField().setText("N2O's band edge overlaps the CO window");
+        press(panel.saveButton());
+        assertEquals("Saved as version 2.", panel.problems().getText());
+        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
+        StoredMethod back = StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+        assertEquals(List.of("H2O", "N2O"), back.method().analytes().get(0).interferents());
+        assertEquals(List.of("CO"), back.method().analytes().get(1).interferents());
+        assertEquals(demo.methodVersionId(), saved.parentId());
+        assertEquals(analyst.userId(), saved.authorId());
+    }
+
+    @Test
+    void anyTwoVersionsOfTheMethodAreComparedInTheWholeMethodText() throws Exception {
+        panel.upperField().setText("2195");
+        panel.reasonField().setText("CO window reaches the N2O band's edge");
+        press(panel.saveButton());
+        panel.interferentsField().setText("H2O, N2O");
+        VersionComparisonPanel c = panel.comparison();
+        assertEquals(List.of("Draft", "Version 2 as opened", "Version 1"), List.of(c.chooserA().getItems()));
+        assertEquals("Version 2 as opened", c.chooserA().getText());
+        assertEquals("Draft", c.chooserB().getText());
+        assertEquals("1 field differs (highlighted).", c.summary().getText());
+
+        // the first version beside the draft: the span saved in version 2 and the draft's interferents differ,
+        // and every other field of the whole method text (settings, transform, references) is the same
+        c.chooserA().select(2);
+        c.chooserA().notifyListeners(SWT.Selection, new Event());
+        assertEquals("2 fields differ (highlighted).", c.summary().getText());
+        assertEquals("Version 1", c.table().getColumn(1).getText());
+        List<String> differing = new java.util.ArrayList<>();
+        for (TableItem i : c.table().getItems()) {
+            if (Palette.CHANGED.equals(i.getBackground())) {
+                differing.add(i.getText(0) + ": " + i.getText(1) + " | " + i.getText(2));
+            }
+        }
+        assertEquals(List.of("analyte.1.interferents: H2O | H2O, N2O",
+                "analyte.1.region.1: 2085.0..2190.0 baseline 1 | 2085.0..2195.0 baseline 1"), differing);
+        assertTrue(c.table().getItemCount() > 10, "the whole method: " + c.table().getItemCount() + " fields");
+        Screens.save(shell, "method-versions-compared");
+        // the choice stays while the draft is edited on
+        panel.lowerField().setText("2080");
+        assertEquals("Version 1", c.chooserA().getText());
+        assertEquals("2 fields differ (highlighted).", c.summary().getText());
+        assertTrue(List.of(c.table().getItems()).stream().anyMatch(i -> i.getText(0).equals("analyte.1.region.1")
+                && i.getText(2).equals("2080.0..2195.0 baseline 1")));
     }
 
     @Test

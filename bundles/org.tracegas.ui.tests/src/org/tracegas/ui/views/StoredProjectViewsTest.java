@@ -128,7 +128,8 @@ class StoredProjectViewsTest {
     }
 
     private static int cautions(Control c) {
-        int n = c instanceof Label l && Caution.TEXT.equals(l.getText()) ? 1 : 0;
+        int n = c instanceof Label l && (Caution.TEXT.equals(l.getText()) || Caution.LINE.equals(l.getText())) ? 1
+                : 0;
         if (c instanceof Composite parent) {
             for (Control child : parent.getChildren()) {
                 n += cautions(child);

@@ -22,14 +22,39 @@ import org.tracegas.store.StoreException;
 import org.tracegas.ui.session.ResultApproval;
 
 /**
- * Signs one result: shows what is signed and the signer's printed name, asks for the meaning, the user name
- * and the password again. A refusal is explained in the dialog (it is also in the audit trail).
+ * Signs one stored result or one report: shows what is signed and the signer's printed name, asks for the
+ * meaning, the user name and the password again. A refusal is explained in the dialog (it is also in the audit
+ * trail).
  */
 public final class SignatureDialog extends Dialog {
 
-    private final ResultApproval approval;
-    private final Session session;
-    private final ResultInfo result;
+    /** Gives the signature in the desk's session from what was typed in the dialog. */
+    @FunctionalInterface
+    public interface Signer {
+
+        /**
+         * @param typedLogin the login typed at signing; must be the session's own
+         * @param password   typed at signing; cleared afterwards
+         * @throws SignatureRefusedException wrong password, own work, or another user's login (the refusal is in
+         *                                   the audit trail)
+         */
+        Signature sign(String typedLogin, char[] password, SignatureMeaning meaning, String comment)
+                throws SignatureRefusedException;
+    }
+
+    /**
+     * What the dialog signs, and how.
+     *
+     * @param kind        what is signed, in a word of the dialog's title: "result", "report"
+     * @param description what is signed, as the dialog's first row shows it
+     * @param printedName the signer's printed name, shown with the signature
+     * @param ownWork     why the store refuses the signer's own work, completing "Signature refused: "
+     * @param signer      gives the signature from what was typed
+     */
+    public record Subject(String kind, String description, String printedName, String ownWork, Signer signer) {
+    }
+
+    private final Subject subject;
     private Combo meaning;
     private Text login;
     private Text password;
@@ -37,27 +62,34 @@ public final class SignatureDialog extends Dialog {
     private Label message;
     private Signature signature;
 
+    /** Signs a stored result in the session's name. */
     public SignatureDialog(Shell parent, ResultApproval approval, Session session, ResultInfo result) {
+        this(parent, new Subject("result", String.format(Locale.ROOT, "%s %.4g %s (± %.2g), recorded by %s",
+                result.values().compound(), result.values().concentration(), result.values().unit(),
+                result.values().uncertainty(), approval.loginOf(result.recordedBy())), approval.printedName(session),
+                "you recorded this result yourself",
+                (login, password, meaning, comment) -> approval.sign(session, result, login, password, meaning,
+                        comment)));
+    }
+
+    public SignatureDialog(Shell parent, Subject subject) {
         super(parent);
-        this.approval = approval;
-        this.session = session;
-        this.result = result;
+        this.subject = subject;
     }
 
     @Override
     protected void configureShell(Shell shell) {
         super.configureShell(shell);
-        shell.setText("Sign result");
+        shell.setText("Sign " + subject.kind());
     }
 
     @Override
     protected Control createDialogArea(Composite parent) {
         Composite area = (Composite) super.createDialogArea(parent);
         area.setLayout(new GridLayout(2, false));
-        row(area, "Result", String.format(Locale.ROOT, "%s %.4g %s (± %.2g), recorded by %s",
-                result.values().compound(), result.values().concentration(), result.values().unit(),
-                result.values().uncertainty(), approval.loginOf(result.recordedBy())));
-        row(area, "Printed name", approval.printedName(session));
+        row(area, Character.toUpperCase(subject.kind().charAt(0)) + subject.kind().substring(1),
+                subject.description());
+        row(area, "Printed name", subject.printedName());
         new Label(area, SWT.NONE).setText("Meaning");
         meaning = new Combo(area, SWT.READ_ONLY);
         meaning.setItems(SignatureMeaning.REVIEWED.name(), SignatureMeaning.APPROVED.name());
@@ -102,10 +134,10 @@ public final class SignatureDialog extends Dialog {
     @Override
     protected void okPressed() {
         try {
-            signature = approval.sign(session, result, login.getText().trim(), password.getText().toCharArray(),
+            signature = subject.signer().sign(login.getText().trim(), password.getText().toCharArray(),
                     SignatureMeaning.valueOf(meaning.getText()), comment.getText());
         } catch (SignatureRefusedException e) {
-            message.setText(refusal(e.reason()));
+            message.setText(refusal(e.reason(), subject));
             password.setText("");
             return;
         } catch (StoreException e) {
@@ -115,10 +147,10 @@ public final class SignatureDialog extends Dialog {
         super.okPressed();
     }
 
-    /** The text shown for a refusal. */
-    public static String refusal(SignatureRefusedException.Reason reason) {
+    /** The text shown for a refusal of signing the subject. */
+    public static String refusal(SignatureRefusedException.Reason reason, Subject subject) {
         return switch (reason) {
-            case OWN_WORK -> "Signature refused: you recorded this result yourself. Review and approval must come "
+            case OWN_WORK -> "Signature refused: " + subject.ownWork() + ". Review and approval must come "
                     + "from someone else. The attempt is recorded in the audit trail.";
             case WRONG_CREDENTIALS -> "Signature refused: user name or password is wrong. The attempt is recorded "
                     + "in the audit trail.";

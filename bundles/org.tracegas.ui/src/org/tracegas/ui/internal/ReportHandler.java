@@ -13,6 +13,7 @@ import org.eclipse.swt.widgets.DirectoryDialog;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.swt.widgets.Shell;
+import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.handlers.HandlerUtil;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.library.io.FileFormatException;
@@ -23,12 +24,13 @@ import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.jobs.AnalysisRuns;
 import org.tracegas.ui.jobs.CampaignReportJob;
 import org.tracegas.ui.session.Desk;
+import org.tracegas.ui.views.ReportView;
 
 /**
  * Analysis → Report…: the campaign report of the project selected in the tree, made with a stored method's
  * newest version and a report plan file as the runner's {@code report} command makes it, in the background; the
  * status line then names the files, the content hash signatures are given on, the audit anchor with its
- * verification, the QA readings that failed and the report's caution.
+ * verification, the QA readings that failed and the report's caution, and the report's view shows it to sign.
  */
 public final class ReportHandler extends AbstractHandler {
 
@@ -68,10 +70,15 @@ public final class ReportHandler extends AbstractHandler {
             return null;
         }
         try {
-            schedule(request(store, project, version, Path.of(chosenPlan), Path.of(chosenFolder)),
-                    shell.getDisplay(), StatusReports.of(event));
+            CampaignReportJob.Request request = request(store, project, version, Path.of(chosenPlan),
+                    Path.of(chosenFolder));
+            // the report's view shows it with its signatures when written, and signs it
+            HandlerUtil.getActiveWorkbenchWindowChecked(event).getActivePage().showView(ReportView.ID);
+            schedule(request, shell.getDisplay(), StatusReports.of(event));
         } catch (FileFormatException e) {
             MessageDialog.openError(shell, "Report", e.getMessage());
+        } catch (PartInitException e) {
+            throw new ExecutionException("the report's view could not be opened", e);
         }
         return null;
     }
@@ -89,14 +96,20 @@ public final class ReportHandler extends AbstractHandler {
     }
 
     /**
-     * Starts the report job.
+     * Starts the report job; the desk is told of the report written ({@link Desk#reportMade}) before the closing
+     * message is passed on.
      *
      * @param report receives the closing message in the UI thread
      */
     public static CampaignReportJob schedule(CampaignReportJob.Request request, Display display,
             Consumer<String> report) {
         CampaignReportJob job = new CampaignReportJob(request, AnalysisRuns.software());
-        job.addJobChangeListener(StatusReports.whenDone(display, report));
+        job.addJobChangeListener(StatusReports.whenDone(display, message -> {
+            if (job.outcome() != null) {
+                Desk.get().reportMade(job);
+            }
+            report.accept(message);
+        }));
         job.schedule();
         return job;
     }

@@ -96,6 +96,11 @@ public final class CampaignReportJob extends Job {
         return Status.info(summary(outcome));
     }
 
+    /** What the report is made from. */
+    public Request request() {
+        return request;
+    }
+
     /** The report written; null until the job wrote it. */
     public Outcome outcome() {
         return outcome;

@@ -49,6 +49,8 @@ public final class AuditTrailPanel extends Composite {
     private static final DateTimeFormatter SHOWN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss")
             .withZone(ZoneOffset.UTC);
     private static final String ALL = "(all)";
+    /** The width filters ask for: they fill what the view gives them but do not widen it past its edge. */
+    private static final int NARROW = 70;
 
     private final Label chainState;
     private final Text user;
@@ -70,29 +72,36 @@ public final class AuditTrailPanel extends Composite {
 
     public AuditTrailPanel(Composite parent, int style) {
         super(parent, style);
-        setLayout(new GridLayout(6, false));
+        // the filters in two rows, so that the records keep the room in a view a third of the window high
+        setLayout(new GridLayout(8, false));
         chainState = new Label(this, SWT.WRAP);
         FontData fd = chainState.getFont().getFontData()[0];
         large = new Font(getDisplay(), fd.getName(), fd.getHeight() + 3, SWT.BOLD);
         addDisposeListener(e -> large.dispose());
         chainState.setFont(large);
-        chainState.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 6, 1));
+        GridData cd = new GridData(SWT.FILL, SWT.TOP, true, false, 8, 1);
+        cd.widthHint = NARROW; // wraps in a narrow view instead of clipping
+        chainState.setLayoutData(cd);
         chainState.setText("Chain not verified yet.");
         user = text("User id");
-        objectType = combo("Object", true, ALL, "result", "user", "project", "measurement", "spectral-data",
-                "version");
+        objectType = combo("Object", true, ALL, "result", "report", "user", "project", "measurement",
+                "spectral-data", "version");
         objectId = text("Object id");
-        from = text("From (UTC date)");
-        to = text("Until (UTC date, exclusive)");
         String[] actions = new String[AuditAction.values().length + 1];
         actions[0] = ALL;
         for (int i = 0; i < AuditAction.values().length; i++) {
             actions[i + 1] = AuditAction.values()[i].name();
         }
         action = combo("Action", false, actions);
-        problem = new Label(this, SWT.NONE);
+        from = text("From");
+        from.setMessage("UTC date");
+        to = text("Until");
+        to.setMessage("UTC date, exclusive");
+        problem = new Label(this, SWT.WRAP);
         problem.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
-        problem.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 4, 1));
+        GridData pd = new GridData(SWT.FILL, SWT.CENTER, true, false, 2, 1);
+        pd.widthHint = NARROW;
+        problem.setLayoutData(pd);
         refresh = new Button(this, SWT.PUSH);
         refresh.setText("Filter and verify");
         refresh.addListener(SWT.Selection, e -> refresh());
@@ -110,16 +119,24 @@ public final class AuditTrailPanel extends Composite {
         table = new Table(this, SWT.BORDER | SWT.FULL_SELECTION);
         table.setHeaderVisible(true);
         table.setLinesVisible(true);
-        table.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 6, 1));
+        table.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true, 8, 1));
         for (String c : new String[] {"#", "Time (UTC)", "User", "Action", "Object", "Ver.", "Details"}) {
             new TableColumn(table, SWT.NONE).setText(c);
         }
     }
 
+    /** Names a problem beside the buttons (wrapped there) or clears it. */
+    private void problem(String text) {
+        problem.setText(text);
+        layout(true);
+    }
+
     private Text text(String label) {
         new Label(this, SWT.NONE).setText(label);
         Text t = new Text(this, SWT.BORDER);
-        t.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        gd.widthHint = NARROW;
+        t.setLayoutData(gd);
         return t;
     }
 
@@ -128,7 +145,9 @@ public final class AuditTrailPanel extends Composite {
         Combo c = new Combo(this, editable ? SWT.DROP_DOWN : SWT.READ_ONLY);
         c.setItems(items);
         c.select(0);
-        c.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
+        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false);
+        gd.widthHint = NARROW;
+        c.setLayoutData(gd);
         return c;
     }
 
@@ -153,10 +172,10 @@ public final class AuditTrailPanel extends Composite {
         try {
             q = query();
         } catch (IllegalArgumentException e) {
-            problem.setText(e.getMessage());
+            problem(e.getMessage());
             return;
         }
-        problem.setText("");
+        problem("");
         refresh.setEnabled(false);
         chainState.setText("Verifying the chain…");
         chainState.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY));
@@ -258,7 +277,7 @@ public final class AuditTrailPanel extends Composite {
         refresh.setEnabled(true);
         chainState.setText("Chain not verified.");
         chainState.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_GRAY));
-        problem.setText("The audit trail could not be read: " + message);
+        problem("The audit trail could not be read: " + message);
         table.removeAll();
         layout(true);
     }
@@ -305,7 +324,7 @@ public final class AuditTrailPanel extends Composite {
             Files.move(part, file, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
             return written;
         } catch (IOException | StoreException | IllegalArgumentException e) {
-            problem.setText("Export to " + file + " failed: " + e.getMessage());
+            problem("Export to " + file + " failed: " + e.getMessage());
             return -1;
         } finally {
             deleteQuietly(part);
@@ -319,7 +338,7 @@ public final class AuditTrailPanel extends Composite {
         try {
             Files.deleteIfExists(part);
         } catch (IOException e) {
-            problem.setText(problem.getText() + " (" + part + " could not be removed: " + e.getMessage() + ")");
+            problem(problem.getText() + " (" + part + " could not be removed: " + e.getMessage() + ")");
         }
     }
 
@@ -337,6 +356,10 @@ public final class AuditTrailPanel extends Composite {
 
     public Text userFilter() {
         return user;
+    }
+
+    public Combo objectFilter() {
+        return objectType;
     }
 
     public Combo actionFilter() {

@@ -17,6 +17,10 @@ public final class Caution {
     public static final String TEXT = "Caution: these results concern toxic gases. They need review by qualified "
             + "staff before use; compliance decisions rest with accredited practice and local regulations.";
 
+    /** The caution in one line of a window's status line. */
+    public static final String LINE = "Caution: toxic gases. Results need review by qualified staff before use;"
+            + " local regulations decide.";
+
     /** Id of the status-line item. */
     public static final String ID = "org.tracegas.ui.caution";
 
@@ -26,12 +30,18 @@ public final class Caution {
     private Caution() {
     }
 
-    /** The banner as an item of a window's status line. */
+    /**
+     * The banner as an item of a window's status line: {@link #LINE}, the caution in full as its tooltip. The
+     * status line is one text line high, and the caution in full would be cut at the right of a window 1280 pixels
+     * wide.
+     */
     public static ContributionItem statusItem() {
         return new ContributionItem(ID) {
             @Override
             public void fill(Composite parent) {
-                colour(new Label(parent, SWT.NONE));
+                Label l = colour(new Label(parent, SWT.NONE));
+                l.setText(LINE);
+                l.setToolTipText(TEXT);
             }
         };
     }

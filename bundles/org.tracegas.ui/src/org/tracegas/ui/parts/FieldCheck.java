@@ -38,4 +38,37 @@ public final class FieldCheck {
         return Double.parseDouble(lower.trim()) < Double.parseDouble(upper.trim()) ? null
                 : "Upper wavenumber: must lie above the lower wavenumber " + lower.trim() + " cm⁻¹";
     }
+
+    /**
+     * Checks a comma-separated list of interferents of an analyte: each named once, not the analyte itself, and
+     * each among the compounds the method has references of (a compound from elsewhere in the library is added
+     * in the method file, which brings its references).
+     *
+     * @param known the compounds of the method's references
+     */
+    public static String interferents(String value, String analyte, java.util.Collection<String> known) {
+        java.util.Set<String> seen = new java.util.HashSet<>();
+        for (String name : split(value)) {
+            if (name.isEmpty()) {
+                return "Interferents: an empty name in '" + value.trim() + "'; separate compounds by commas";
+            }
+            if (name.equals(analyte)) {
+                return "Interferents: " + name + " is the analyte itself";
+            }
+            if (!seen.add(name)) {
+                return "Interferents: " + name + " is named twice";
+            }
+            if (!known.contains(name)) {
+                return "Interferents: the method has no reference of '" + name + "' (it has " + String.join(", ",
+                        new java.util.TreeSet<>(known)) + ")";
+            }
+        }
+        return null;
+    }
+
+    /** The names of a comma-separated list, trimmed; none for a blank text. */
+    public static java.util.List<String> split(String value) {
+        return value == null || value.isBlank() ? java.util.List.of()
+                : java.util.Arrays.stream(value.split(",", -1)).map(String::trim).toList();
+    }
 }

@@ -1,11 +1,16 @@
 package org.tracegas.ui.parts;
 
 import java.util.LinkedHashMap;
+import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
+import java.util.TreeSet;
 
 import org.eclipse.emf.common.command.CommandStackListener;
+import org.eclipse.emf.common.command.CompoundCommand;
 import org.eclipse.emf.ecore.EStructuralFeature;
+import org.eclipse.emf.edit.command.SetCommand;
 import org.eclipse.jface.fieldassist.ControlDecoration;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.GC;
@@ -32,8 +37,9 @@ import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
- * Edits a draft method version in the model through the editing domain: every accepted change is one
- * command, so Undo and Redo walk back and forth through them. Fields are checked as they are typed; a
+ * Edits a draft method version in the model through the editing domain: the method's name and, region by region,
+ * the compound, the analyte's interferents and the span. Every accepted change is one command, so Undo and Redo
+ * walk back and forth through them. Fields are checked as they are typed; a
  * wrong field is marked and named below the form and the model keeps its last good value. The comparison
  * below shows the version as opened (A) beside the draft (B), both in the text of a method file. Saving
  * records the draft as a new version of the method, revised from the opened one with the reason given, in
@@ -41,10 +47,17 @@ import org.tracegas.store.WorkspaceStore;
  */
 public final class MethodEditorPanel extends Composite {
 
+    /**
+     * The width the form's fields ask for: they fill what the view gives them but do not widen the form beyond
+     * it, where their right part would be cut off.
+     */
+    private static final int NARROW = 60;
+
     private final ModelEditor editor;
     private final Text name;
     private final Combo region;
     private final Text compound;
+    private final Text interferents;
     private final Text lower;
     private final Text upper;
     private final Label problems;
@@ -60,6 +73,7 @@ public final class MethodEditorPanel extends Composite {
     private MethodVersion version;
     private StoredMethod stored;
     private String opened;
+    private List<VersionInfo> line = List.of();
     private boolean filling;
     private WorkspaceStore store;
     private Session actor;
@@ -77,17 +91,27 @@ public final class MethodEditorPanel extends Composite {
         name = field(form, "Method name");
         new Label(form, SWT.NONE).setText("Analysis region");
         region = new Combo(form, SWT.READ_ONLY);
-        region.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1));
+        GridData cd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
+        cd.widthHint = NARROW;
+        region.setLayoutData(cd);
         region.addListener(SWT.Selection, e -> fill());
         compound = field(form, "Compound");
+        interferents = field(form, "Interferents");
+        interferents.setMessage("compounds fitted with it, separated by commas");
         lower = field(form, "Lower wavenumber (cm⁻¹)");
         upper = field(form, "Upper wavenumber (cm⁻¹)");
         problems = new Label(form, SWT.WRAP);
         problems.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
         problems.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1));
+        // the reason on a line of its own and the buttons below it: the view beside the spectrum is narrow
         Composite buttons = new Composite(form, SWT.NONE);
-        buttons.setLayout(new GridLayout(4, false));
-        buttons.setLayoutData(new GridData(SWT.BEGINNING, SWT.TOP, false, false, 4, 1));
+        buttons.setLayout(new GridLayout(3, false));
+        buttons.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1));
+        reason = new Text(buttons, SWT.BORDER);
+        reason.setMessage("Reason for the new version");
+        GridData rd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
+        rd.widthHint = NARROW;
+        reason.setLayoutData(rd);
         undo = new Button(buttons, SWT.PUSH);
         undo.setText("Undo");
         undo.addListener(SWT.Selection, e -> {
@@ -100,22 +124,26 @@ public final class MethodEditorPanel extends Composite {
             editor.redo();
             fill();
         });
-        reason = new Text(buttons, SWT.BORDER);
-        reason.setMessage("Reason for the new version");
-        GridData rd = new GridData(SWT.FILL, SWT.CENTER, true, false);
-        rd.widthHint = 260;
-        reason.setLayoutData(rd);
         save = new Button(buttons, SWT.PUSH);
         save.setText("Save as new version");
         save.addListener(SWT.Selection, e -> save());
         comparison = new VersionComparisonPanel(sash, SWT.NONE);
         sash.setWeights(1, 1);
+        // the form gets the height it needs (at most three quarters), the comparison the rest
+        sash.addListener(SWT.Resize, e -> {
+            org.eclipse.swt.graphics.Rectangle area = sash.getClientArea();
+            if (area.height > 0) {
+                int top = Math.min(form.computeSize(area.width, SWT.DEFAULT).y, area.height * 3 / 4);
+                sash.setWeights(top, Math.max(1, area.height - top));
+            }
+        });
         editor.domain().getCommandStack().addCommandStackListener(stackListener);
         addDisposeListener(e -> editor.domain().getCommandStack().removeCommandStackListener(stackListener));
         name.addListener(SWT.Modify, e -> apply(name, method, Literals.ANALYSIS_METHOD__NAME,
                 FieldCheck.text("Method name", name.getText()), name.getText()));
         compound.addListener(SWT.Modify, e -> apply(compound, selectedRegion(), Literals.ANALYSIS_REGION__COMPOUND,
                 FieldCheck.text("Compound", compound.getText()), compound.getText().trim()));
+        interferents.addListener(SWT.Modify, e -> applyInterferents());
         lower.addListener(SWT.Modify, e -> applyBound(lower, Literals.ANALYSIS_REGION__LOWER_WAVENUMBER,
                 "Lower wavenumber"));
         upper.addListener(SWT.Modify, e -> applyBound(upper, Literals.ANALYSIS_REGION__UPPER_WAVENUMBER,
@@ -128,6 +156,7 @@ public final class MethodEditorPanel extends Composite {
         Text t = new Text(form, SWT.BORDER);
         GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
         gd.horizontalIndent = 8;
+        gd.widthHint = NARROW;
         t.setLayoutData(gd);
         ControlDecoration d = new ControlDecoration(t, SWT.LEFT | SWT.CENTER);
         d.setImage(errorMark);
@@ -186,6 +215,7 @@ public final class MethodEditorPanel extends Composite {
         this.version = version;
         this.stored = stored;
         this.opened = stored.declaration();
+        this.line = readLine();
         region.removeAll();
         for (AnalysisRegion r : version.getRegions()) {
             region.add(r.getCompound() + "  " + Math.round(r.getLowerWavenumber()) + "–"
@@ -206,6 +236,7 @@ public final class MethodEditorPanel extends Composite {
             name.setText(method.getName());
             AnalysisRegion r = selectedRegion();
             compound.setText(r == null ? "" : r.getCompound());
+            interferents.setText(r == null ? "" : String.join(", ", r.getInterferents()));
             lower.setText(r == null ? "" : number(r.getLowerWavenumber()));
             upper.setText(r == null ? "" : number(r.getUpperWavenumber()));
         } finally {
@@ -228,22 +259,68 @@ public final class MethodEditorPanel extends Composite {
         apply(field, selectedRegion(), feature, problem, problem == null ? Double.valueOf(field.getText().trim()) : null);
     }
 
-    private void apply(Text field, org.eclipse.emf.ecore.EObject owner, EStructuralFeature feature, String problem,
-            Object value) {
-        if (filling || owner == null) {
+    /**
+     * The interferents belong to the analyte: one command sets them on every region of the selected region's
+     * analyte, so that one Undo takes the whole change back.
+     */
+    private void applyInterferents() {
+        AnalysisRegion r = selectedRegion();
+        if (filling || r == null) {
             return;
         }
+        Set<String> known = new TreeSet<>();
+        stored.method().references().forEach(ref -> known.add(ref.compound()));
+        String problem = FieldCheck.interferents(interferents.getText(), r.getCompound(), known);
+        if (mark(interferents, problem)) {
+            return;
+        }
+        List<String> value = FieldCheck.split(interferents.getText());
+        if (value.equals(r.getInterferents())) {
+            return;
+        }
+        CompoundCommand change = new CompoundCommand("Interferents of " + r.getCompound());
+        for (AnalysisRegion same : analyteRegions(r)) {
+            change.append(SetCommand.create(editor.domain(), same, Literals.ANALYSIS_REGION__INTERFERENTS, value));
+        }
+        editor.domain().getCommandStack().execute(change);
+        afterCommand();
+    }
+
+    /** The regions of the analyte a region belongs to: the run of regions of its compound around it. */
+    private List<AnalysisRegion> analyteRegions(AnalysisRegion r) {
+        List<AnalysisRegion> all = version.getRegions();
+        int first = all.indexOf(r);
+        int last = first;
+        while (first > 0 && all.get(first - 1).getCompound().equals(r.getCompound())) {
+            first--;
+        }
+        while (last < all.size() - 1 && all.get(last + 1).getCompound().equals(r.getCompound())) {
+            last++;
+        }
+        return List.copyOf(all.subList(first, last + 1));
+    }
+
+    /** Marks a field and names its problem below the form, or clears the mark; true when marked. */
+    private boolean mark(Text field, String problem) {
         ControlDecoration d = decorations.get(field);
         if (problem != null) {
             d.setDescriptionText(problem);
             d.show();
             field.setBackground(Palette.FAIL);
             problems.setText(problem);
-            return;
+            return true;
         }
         d.hide();
         field.setBackground(null);
         problems.setText("");
+        return false;
+    }
+
+    private void apply(Text field, org.eclipse.emf.ecore.EObject owner, EStructuralFeature feature, String problem,
+            Object value) {
+        if (filling || owner == null || mark(field, problem)) {
+            return;
+        }
         if (!value.equals(owner.eGet(feature))) {
             editor.set(owner, feature, value);
             afterCommand();
@@ -258,6 +335,11 @@ public final class MethodEditorPanel extends Composite {
         }
     }
 
+    /**
+     * Offers the draft and every version of the method's line (the opened one, its ancestors and, from the store,
+     * those revised from it up to the newest) to compare, in the key=value fields of the whole method text; at
+     * first the version as opened beside the draft.
+     */
     private void refreshComparison() {
         String draft;
         try {
@@ -266,7 +348,55 @@ public final class MethodEditorPanel extends Composite {
             draft = opened;
             problems.setText(e.getMessage());
         }
-        comparison.compare("Version " + version.getNumber() + " as opened", fields(opened), "Draft", fields(draft));
+        String asOpened = "Version " + version.getNumber() + " as opened";
+        Map<String, String> texts = new LinkedHashMap<>();
+        texts.put("Draft", draft);
+        texts.put(asOpened, opened);
+        for (VersionInfo v : line) {
+            if (!v.id().equals(version.getId())) {
+                texts.put("Version " + v.number(), v.id());
+            }
+        }
+        String drafted = draft;
+        comparison.offer(List.copyOf(texts.keySet()), label -> fields(label.equals("Draft") ? drafted
+                : label.equals(asOpened) ? opened : declaration(texts.get(label))), asOpened, "Draft");
+    }
+
+    /**
+     * The stored versions of the method from the newest back to the first, newest first; none without a store.
+     * Read when a version is opened, not at every keystroke.
+     */
+    private List<VersionInfo> readLine() {
+        if (store == null || version.getId() == null) {
+            return List.of();
+        }
+        List<VersionInfo> found = new java.util.ArrayList<>();
+        try {
+            VersionInfo v = store.versions().latest(org.tracegas.store.VersionKind.METHOD, method.getName())
+                    .orElse(null);
+            while (v != null) {
+                found.add(v);
+                v = v.parentId() == null ? null : store.versions().version(v.parentId());
+            }
+        } catch (RuntimeException e) {
+            // the versions that could be read are offered; the reason is named below the form
+            problems.setText("The method's versions could not all be read: " + e.getMessage());
+        }
+        return found;
+    }
+
+    /**
+     * The method text of a stored version.
+     *
+     * @throws IllegalArgumentException naming the version whose stored text cannot be read
+     */
+    private String declaration(String versionId) {
+        try {
+            return StoredMethod.parse(store.versions().content(versionId), "method version " + versionId)
+                    .declaration();
+        } catch (FileFormatException e) {
+            throw new IllegalArgumentException("The version cannot be compared: " + e.getMessage(), e);
+        }
     }
 
     /**
@@ -334,6 +464,10 @@ public final class MethodEditorPanel extends Composite {
 
     public Text upperField() {
         return upper;
+    }
+
+    public Text interferentsField() {
+        return interferents;
     }
 
     public Text compoundField() {

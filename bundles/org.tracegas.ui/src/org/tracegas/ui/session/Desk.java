@@ -7,10 +7,11 @@ import java.util.function.Consumer;
 import org.tracegas.model.edit.ModelEditor;
 import org.tracegas.store.Session;
 import org.tracegas.ui.jobs.BatchQuantificationJob;
+import org.tracegas.ui.jobs.CampaignReportJob;
 
 /**
  * What the desk's views share in one running workbench: the open workspace, the signed-in user, the model
- * being edited and the outcomes of the last method run. Views register for new outcomes; notifications
+ * being edited, the outcomes of the last method run and the last report made. Views register for new outcomes; notifications
  * arrive in the UI thread.
  */
 public final class Desk {
@@ -19,6 +20,8 @@ public final class Desk {
 
     private final List<Consumer<List<BatchQuantificationJob.Outcome>>> runListeners = new CopyOnWriteArrayList<>();
     private final List<Runnable> storeListeners = new CopyOnWriteArrayList<>();
+    private final List<Consumer<CampaignReportJob>> reportListeners = new CopyOnWriteArrayList<>();
+    private volatile CampaignReportJob lastReport;
     private volatile WorkspaceAccess access;
     private volatile Session session;
     private volatile DemoProject.Seeded project;
@@ -40,6 +43,7 @@ public final class Desk {
         this.session = session;
         this.project = project;
         this.editor = new ModelEditor();
+        this.lastReport = null;
         if (project != null) {
             editor.createResource("desk:/workspace").getContents().add(project.model());
         }
@@ -102,5 +106,24 @@ public final class Desk {
 
     public void removeStoreListener(Runnable l) {
         storeListeners.remove(l);
+    }
+
+    /** The last report the desk wrote, or null. */
+    public CampaignReportJob lastReport() {
+        return lastReport;
+    }
+
+    /** Called in the UI thread when a report job wrote its report ({@link CampaignReportJob#outcome()} set). */
+    public void reportMade(CampaignReportJob job) {
+        lastReport = job;
+        reportListeners.forEach(l -> l.accept(job));
+    }
+
+    public void addReportListener(Consumer<CampaignReportJob> l) {
+        reportListeners.add(l);
+    }
+
+    public void removeReportListener(Consumer<CampaignReportJob> l) {
+        reportListeners.remove(l);
     }
 }
