@@ -39,7 +39,7 @@ import org.tracegas.ui.parts.FitDisplay;
 import org.tracegas.ui.parts.ResultReviewPanel;
 import org.tracegas.ui.parts.SpectrumPanel;
 import org.tracegas.ui.parts.WorkspaceNavigator;
-import org.tracegas.ui.session.DemoProject;
+import org.tracegas.ui.session.SeededProject;
 import org.tracegas.ui.session.DemoStaff;
 import org.tracegas.ui.session.WorkspaceAccess;
 
@@ -55,7 +55,7 @@ class DeskFlowsTest {
     private Display display;
     private Shell shell;
     private WorkspaceAccess access;
-    private DemoProject.Seeded demo;
+    private SeededProject.Seeded demo;
 
     @BeforeEach
     void openWorkspace() {
@@ -96,11 +96,11 @@ class DeskFlowsTest {
     }
 
     @Test
-    void theNavigatorOpensTheDemoProjectWithItsMeasurements() throws Exception {
+    void theNavigatorOpensTheSeededProjectWithItsMeasurements() throws Exception {
         WorkspaceNavigator nav = new WorkspaceNavigator(shell, SWT.NONE);
         nav.setWorkspace(demo.model());
         shell.open();
-        assertTrue(nav.openProject(DemoProject.PROJECT_CODE));
+        assertTrue(nav.openProject(SeededProject.PROJECT_CODE));
         Project p = (Project) ((IStructuredSelection) nav.viewer().getSelection()).getFirstElement();
         assertEquals(demo.projectId(), p.getId());
         TreeItem[] top = nav.viewer().getTree().getItems();
@@ -125,9 +125,9 @@ class DeskFlowsTest {
         SpectrumPanel panel = new SpectrumPanel(shell, SWT.NONE);
         shell.open();
         AtomicReference<List<BatchQuantificationJob.Outcome>> done = new AtomicReference<>();
-        BatchQuantificationJob job = AnalysisRuns.job(access, analyst, demo, outcomes -> display.asyncExec(() -> {
+        BatchQuantificationJob job = BatchQuantificationJob.of(access, analyst, demo, outcomes -> display.asyncExec(() -> {
             done.set(outcomes);
-            panel.show(AnalysisRuns.fit(outcomes.get(outcomes.size() - 1)));
+            panel.show(BatchQuantificationJob.fit(outcomes.get(outcomes.size() - 1)));
         }));
         job.schedule();
         // the UI thread keeps dispatching events while the job runs
@@ -136,7 +136,7 @@ class DeskFlowsTest {
         assertEquals(3, done.get().size());
         List<ResultInfo> stored = access.store().results().results(analyst, demo.projectId());
         assertEquals(6, stored.size(), "two analytes for each of three measurements");
-        // the third demo sample was made with 70 ppm CO and 12 ppm N2O (DemoProject.seed); the fit finds them
+        // the third demo sample was made with 70 ppm CO and 12 ppm N2O (SeededProject.seed); the fit finds them
         // again within 2 % (a check of the whole chain against the composition it was built from)
         var third = done.get().get(2).result();
         assertEquals(70, third.compound("CO").orElseThrow().concentration(), 1.4);
@@ -152,7 +152,7 @@ class DeskFlowsTest {
                 n++;
             }
         }
-        // noise of the demo samples is 2e-4 absorbance (DemoProject.sample); the residual is of that size
+        // noise of the demo samples is 2e-4 absorbance (SeededProject.sample); the residual is of that size
         double rms = Math.sqrt(sum / n);
         assertTrue(rms > 1e-4 && rms < 4e-4, "residual RMS " + rms);
         assertEquals(2, panel.shading().bands().size());
@@ -161,7 +161,7 @@ class DeskFlowsTest {
 
     private List<ResultInfo> runAsAnalyst() throws InterruptedException {
         Session analyst = access.store().users().logIn(DemoStaff.ANALYST, DemoStaff.PASSWORD.toCharArray());
-        BatchQuantificationJob job = AnalysisRuns.job(access, analyst, demo, outcomes -> { });
+        BatchQuantificationJob job = BatchQuantificationJob.of(access, analyst, demo, outcomes -> { });
         job.schedule();
         job.join();
         return access.store().results().results(analyst, demo.projectId());
@@ -172,7 +172,7 @@ class DeskFlowsTest {
         runAsAnalyst();
         Session analyst = access.store().users().logIn(DemoStaff.ANALYST, DemoStaff.PASSWORD.toCharArray());
         ResultReviewPanel own = new ResultReviewPanel(shell, SWT.NONE);
-        own.open(access, analyst, demo.projectId(), DemoProject.PROJECT_CODE);
+        own.open(access, analyst, demo.projectId(), SeededProject.PROJECT_CODE);
         SignatureDialog refused = own.signatureDialog(own.selected());
         refused.setBlockOnOpen(false);
         refused.open();
@@ -188,7 +188,7 @@ class DeskFlowsTest {
 
         Session manager = access.store().users().logIn(DemoStaff.MANAGER, DemoStaff.PASSWORD.toCharArray());
         ResultReviewPanel review = new ResultReviewPanel(shell, SWT.NONE);
-        review.open(access, manager, demo.projectId(), DemoProject.PROJECT_CODE);
+        review.open(access, manager, demo.projectId(), SeededProject.PROJECT_CODE);
         shell.layout(true, true);
         shell.open();
         ResultInfo first = review.selected();

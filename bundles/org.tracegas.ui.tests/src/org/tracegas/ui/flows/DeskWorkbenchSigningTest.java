@@ -74,7 +74,7 @@ class DeskWorkbenchSigningTest {
 
     /** The reviewer's desk: the report made and signed as reviewed through the same panel and dialog. */
     private void reviewedByTheReviewer(LabDesk lab, VersionInfo method, Path plan) throws Exception {
-        Desk.get().start(lab.access, lab.lab.reviewer, null);
+        Desk.get().start(lab.access, lab.lab.reviewer);
         ReportPanel panel = new ReportPanel(lab.shell, SWT.NONE);
         lab.shell.open();
         made(lab.display, lab.access.store(), lab.lab.project, method, plan, folder.resolve("report-reviewed"));

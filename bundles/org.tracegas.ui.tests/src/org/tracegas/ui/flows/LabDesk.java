@@ -39,7 +39,7 @@ final class LabDesk implements AutoCloseable {
     LabDesk(Path folder, int width, int height, double waterPpm) throws Exception {
         access = WorkspaceAccess.openH2(folder.resolve("ws"));
         lab = new LimeKilnLab(access.store(), folder, waterPpm);
-        Desk.get().start(access, lab.analyst, null);
+        Desk.get().start(access, lab.analyst);
         shell.setText("Tracegas Workbench — " + LimeKilnLab.ANALYST);
         shell.setLayout(new FillLayout());
         shell.setSize(width, height);

@@ -54,7 +54,7 @@ final class StartedWorkbench {
             dialog.okButton().notifyListeners(SWT.Selection, new Event());
             assertNotNull(dialog.session(), login + " is logged in");
             parent.dispose();
-            Desk.get().start(access, dialog.session(), null);
+            Desk.get().start(access, dialog.session());
             // each start shows the product's first layout, not the one an earlier start left behind
             Files.deleteIfExists(Path.of(Platform.getInstanceLocation().getURL().getFile(), ".metadata", ".plugins",
                     "org.eclipse.e4.workbench", "workbench.xmi"));

@@ -28,7 +28,7 @@ import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
 import org.tracegas.ui.Screens;
-import org.tracegas.ui.session.DemoProject;
+import org.tracegas.ui.session.SeededProject;
 import org.tracegas.ui.session.DemoStaff;
 import org.tracegas.ui.session.WorkspaceAccess;
 
@@ -43,7 +43,7 @@ class MethodEditorPanelTest {
 
     private WorkspaceAccess access;
     private Session analyst;
-    private DemoProject.Seeded demo;
+    private SeededProject.Seeded demo;
     private Display display;
     private Shell shell;
     private AnalysisMethod method;
@@ -170,7 +170,7 @@ class MethodEditorPanelTest {
 
     @Test
     void theAnalytesInterferentsAreEditedAsOneCommandCheckedAndSaved() throws Exception {
-        // the demo's CO analyte is fitted with water (DemoProject); N2O's band borders the CO window
+        // the demo's CO analyte is fitted with water (SeededProject); N2O's band borders the CO window
         assertEquals("H2O", panel.interferentsField().getText());
         panel.interferentsField().setText("H2O, SO2");
         assertEquals("Interferents: the method has no reference of 'SO2' (it has CO, H2O, N2O)",

@@ -22,12 +22,12 @@ public final class DemoStaff {
     }
 
     /** Makes the staff in an empty workspace and seeds the demo project for them. */
-    public static DemoProject.Seeded seed(WorkspaceStore store) {
+    public static SeededProject.Seeded seed(WorkspaceStore store) {
         Session admin = store.users().createFirstAdministrator("admin", "Workspace administrator",
                 PASSWORD.toCharArray());
         store.users().createUser(admin, ANALYST, "Anna Vogel", Set.of(Role.ANALYST), PASSWORD.toCharArray());
         String managerId = store.users().createUser(admin, MANAGER, "Quentin Morel",
                 EnumSet.of(Role.QUALITY_MANAGER, Role.REVIEWER), PASSWORD.toCharArray()).id();
-        return DemoProject.seed(store, admin, store.users().logIn(ANALYST, PASSWORD.toCharArray()), managerId);
+        return SeededProject.seed(store, admin, store.users().logIn(ANALYST, PASSWORD.toCharArray()), managerId);
     }
 }

@@ -67,7 +67,7 @@ class DeskViewsTest {
     void openWorkspace() {
         access = WorkspaceAccess.openH2(folder);
         Session analyst = access.store().users().logIn(CampaignDay.ANALYST, CampaignDay.PASSWORD.toCharArray());
-        Desk.get().start(access, analyst, null);
+        Desk.get().start(access, analyst);
         display = Display.getDefault();
         shell = new Shell(display);
         shell.setText("Tracegas Workbench — " + CampaignDay.ANALYST);

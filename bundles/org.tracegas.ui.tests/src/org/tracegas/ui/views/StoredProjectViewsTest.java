@@ -67,7 +67,7 @@ class StoredProjectViewsTest {
         }
         access = WorkspaceAccess.openH2(folder);
         Session analyst = access.store().users().logIn(StoredProject.ANALYST, StoredProject.PASSWORD.toCharArray());
-        Desk.get().start(access, analyst, null);
+        Desk.get().start(access, analyst);
         display = Display.getDefault();
         shell = new Shell(display);
         shell.setText("Tracegas Workbench — " + StoredProject.ANALYST);

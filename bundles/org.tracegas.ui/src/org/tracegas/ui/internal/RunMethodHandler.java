@@ -39,10 +39,6 @@ public final class RunMethodHandler extends AbstractHandler {
     public Object execute(ExecutionEvent event) throws ExecutionException {
         Shell shell = HandlerUtil.getActiveShellChecked(event);
         Desk desk = Desk.get();
-        if (desk.project() != null) {
-            AnalysisRuns.runOnDesk(shell.getDisplay());
-            return null;
-        }
         WorkspaceStore store = desk.access().store();
         ISelection selection = HandlerUtil.getCurrentSelection(event);
         Project project = TreeChoice.project(selection, store.projects().projects(desk.session()));

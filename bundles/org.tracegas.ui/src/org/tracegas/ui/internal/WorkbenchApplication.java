@@ -56,7 +56,7 @@ public final class WorkbenchApplication implements IApplication {
                         + " recorded in the audit trail: " + e.getMessage());
                 return IApplication.EXIT_OK;
             }
-            Desk.get().start(access, login.session(), null);
+            Desk.get().start(access, login.session());
             int code = PlatformUI.createAndRunWorkbench(display, new DeskWorkbenchAdvisor(login.session().login()));
             return code == PlatformUI.RETURN_RESTART ? IApplication.EXIT_RESTART : IApplication.EXIT_OK;
         } finally {

@@ -37,12 +37,7 @@ public final class LibraryView extends ViewPart implements FollowsTree {
     LibraryBrowserPanel createContent(Composite parent) {
         panel = new LibraryBrowserPanel(parent, SWT.NONE);
         loads = new LatestLoad<>(panel);
-        Desk desk = Desk.get();
-        if (desk.project() != null) {
-            panel.show(desk.project().model().getLibraries().get(0).getName(), desk.project().library());
-        } else {
-            panel.showRows("Select a reference library in the workspace tree to list its references.", List.of());
-        }
+        panel.showRows("Select a reference library in the workspace tree to list its references.", List.of());
         return panel;
     }
 

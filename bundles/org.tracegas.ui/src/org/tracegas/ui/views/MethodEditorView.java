@@ -28,10 +28,6 @@ public final class MethodEditorView extends ViewPart {
         Desk desk = Desk.get();
         panel = new MethodEditorPanel(parent, SWT.NONE, desk.editor());
         panel.saveTo(desk.access().store(), desk.session());
-        if (desk.project() != null && !desk.project().model().getMethods().isEmpty()) {
-            AnalysisMethod m = desk.project().model().getMethods().get(0);
-            panel.open(m, m.getVersions().get(m.getVersions().size() - 1), desk.project().method());
-        }
         getSite().getPage().addSelectionListener(NavigatorView.ID, methodListener);
     }
 

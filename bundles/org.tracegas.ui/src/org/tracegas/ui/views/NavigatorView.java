@@ -1,10 +1,7 @@
 package org.tracegas.ui.views;
 
-import java.util.List;
-import java.util.function.Consumer;
 
 import org.eclipse.core.commands.common.CommandException;
-import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.ui.IViewPart;
@@ -14,8 +11,6 @@ import org.eclipse.ui.part.ViewPart;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
 import org.tracegas.model.Workspace;
-import org.tracegas.ui.jobs.AnalysisRuns;
-import org.tracegas.ui.jobs.BatchQuantificationJob;
 import org.tracegas.ui.jobs.LatestLoad;
 import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.Desk;
@@ -34,12 +29,6 @@ public final class NavigatorView extends ViewPart {
 
     private WorkspaceNavigator navigator;
     private LatestLoad<Workspace> loads;
-    private final Consumer<List<BatchQuantificationJob.Outcome>> refresh = outcomes -> {
-        if (!navigator.isDisposed()) {
-            navigator.viewer().refresh();
-        }
-    };
-
     /** After the desk stored measurements or results: the tree read again, its project selected again. */
     private final Runnable reread = () -> {
         if (!navigator.isDisposed()) {
@@ -89,26 +78,14 @@ public final class NavigatorView extends ViewPart {
         navigator = new WorkspaceNavigator(parent, SWT.NONE);
         loads = new LatestLoad<>(navigator);
         Desk desk = Desk.get();
-        if (desk.project() != null) {
-            navigator.setWorkspace(desk.project().model());
-        } else {
-            navigator.showNote("Reading the " + desk.access().location().description() + " …");
-            read(null);
-            desk.addStoreListener(reread);
-        }
-        navigator.viewer().addDoubleClickListener(e -> {
-            Object o = ((IStructuredSelection) e.getSelection()).getFirstElement();
-            if (o instanceof Project p && desk.project() != null && p.getId().equals(desk.project().projectId())) {
-                AnalysisRuns.runOnDesk(navigator.getDisplay());
-            }
-        });
-        desk.addRunListener(refresh);
+        navigator.showNote("Reading the " + desk.access().location().description() + " …");
+        read(null);
+        desk.addStoreListener(reread);
         return navigator;
     }
 
     /**
-     * Reads the tree of a workspace that was not fresh (it has no demo model): what the signed-in user may see, in
-     * the background, so that the window stays responsive on a large workspace; then selects the project of that
+     * Reads the workspace's tree: what the signed-in user may see, in the background, so that the window stays responsive on a large workspace; then selects the project of that
      * code again, if one is given.
      */
     private void read(String projectCode) {
@@ -125,7 +102,6 @@ public final class NavigatorView extends ViewPart {
 
     @Override
     public void dispose() {
-        Desk.get().removeRunListener(refresh);
         Desk.get().removeStoreListener(reread);
         if (loads != null) {
             loads.cancel();

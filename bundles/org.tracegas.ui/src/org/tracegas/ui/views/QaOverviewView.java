@@ -16,7 +16,6 @@ import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.jobs.LatestLoad;
 import org.tracegas.ui.parts.QaOverviewPanel;
-import org.tracegas.ui.session.DemoProject;
 import org.tracegas.ui.session.Desk;
 
 /**
@@ -41,11 +40,7 @@ public final class QaOverviewView extends ViewPart implements FollowsTree {
     QaOverviewPanel createContent(Composite parent) {
         panel = new QaOverviewPanel(parent, SWT.NONE);
         loads = new LatestLoad<>(panel);
-        if (Desk.get().project() != null) {
-            panel.show(DemoProject.checks(Desk.get().project(), DemoProject.BACKGROUND_AGE_LIMIT));
-        } else {
-            panel.showNote("Select a project in the workspace tree to see its stored QA checks.");
-        }
+        panel.showNote("Select a project in the workspace tree to see its stored QA checks.");
         return panel;
     }
 

@@ -1,7 +1,5 @@
 package org.tracegas.ui.views;
 
-import java.util.List;
-import java.util.function.Consumer;
 
 import org.eclipse.jface.viewers.ISelection;
 import org.eclipse.swt.SWT;
@@ -10,9 +8,7 @@ import org.eclipse.ui.ISelectionListener;
 import org.eclipse.ui.IWorkbenchPart;
 import org.eclipse.ui.part.ViewPart;
 import org.tracegas.model.Project;
-import org.tracegas.ui.jobs.BatchQuantificationJob;
 import org.tracegas.ui.parts.ResultReviewPanel;
-import org.tracegas.ui.session.DemoProject;
 import org.tracegas.ui.session.Desk;
 
 /**
@@ -25,7 +21,8 @@ public final class ResultReviewView extends ViewPart implements FollowsTree {
 
     private ResultReviewPanel panel;
     private String openProjectId;
-    private final Consumer<List<BatchQuantificationJob.Outcome>> listener = outcomes -> {
+    /** After the desk stored results: those of the project shown read again. */
+    private final Runnable reread = () -> {
         if (!panel.isDisposed() && openProjectId != null) {
             panel.reload();
         }
@@ -41,12 +38,7 @@ public final class ResultReviewView extends ViewPart implements FollowsTree {
     /** The panel and its feeds, without the workbench site (so that it can be shown in any shell). */
     ResultReviewPanel createContent(Composite parent) {
         panel = new ResultReviewPanel(parent, SWT.NONE);
-        Desk desk = Desk.get();
-        if (desk.project() != null) {
-            openProjectId = desk.project().projectId();
-            panel.open(desk.access(), desk.session(), openProjectId, DemoProject.PROJECT_CODE);
-        }
-        desk.addRunListener(listener);
+        Desk.get().addStoreListener(reread);
         return panel;
     }
 
@@ -70,7 +62,7 @@ public final class ResultReviewView extends ViewPart implements FollowsTree {
     @Override
     public void dispose() {
         getSite().getPage().removeSelectionListener(NavigatorView.ID, projectListener);
-        Desk.get().removeRunListener(listener);
+        Desk.get().removeStoreListener(reread);
         super.dispose();
     }
 

@@ -1,8 +1,6 @@
 package org.tracegas.ui.views;
 
-import java.util.List;
 import java.util.Optional;
-import java.util.function.Consumer;
 
 import org.eclipse.jface.viewers.ISelection;
 import org.eclipse.swt.SWT;
@@ -12,8 +10,6 @@ import org.eclipse.ui.IWorkbenchPart;
 import org.eclipse.ui.part.ViewPart;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
-import org.tracegas.ui.jobs.AnalysisRuns;
-import org.tracegas.ui.jobs.BatchQuantificationJob;
 import org.tracegas.ui.jobs.LatestLoad;
 import org.tracegas.ui.parts.FitDisplay;
 import org.tracegas.ui.parts.SpectrumPanel;
@@ -30,7 +26,6 @@ public final class SpectrumView extends ViewPart implements FollowsTree {
 
     private SpectrumPanel panel;
     private LatestLoad<Optional<FitDisplay>> loads;
-    private final Consumer<List<BatchQuantificationJob.Outcome>> listener = this::show;
     private final ISelectionListener measurementListener = this::selected;
 
     @Override
@@ -43,16 +38,7 @@ public final class SpectrumView extends ViewPart implements FollowsTree {
     SpectrumPanel createContent(Composite parent) {
         panel = new SpectrumPanel(parent, SWT.NONE);
         loads = new LatestLoad<>(panel);
-        show(Desk.get().lastRun());
-        Desk.get().addRunListener(listener);
         return panel;
-    }
-
-    private void show(List<BatchQuantificationJob.Outcome> outcomes) {
-        if (!outcomes.isEmpty() && !panel.isDisposed()) {
-            loads.cancel(); // a fit just made is newer than a stored spectrum still being read
-            panel.show(AnalysisRuns.fit(outcomes.get(outcomes.size() - 1)));
-        }
     }
 
     /** Reads the selected measurement's stored spectrum in the background; a later selection wins. */
@@ -88,7 +74,6 @@ public final class SpectrumView extends ViewPart implements FollowsTree {
     public void dispose() {
         getSite().getPage().removeSelectionListener(NavigatorView.ID, measurementListener);
         loads.cancel();
-        Desk.get().removeRunListener(listener);
         super.dispose();
     }
 

@@ -13,11 +13,8 @@ import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.part.ViewPart;
 import org.tracegas.model.Project;
 import org.tracegas.ui.chart.ClockTime;
-import org.tracegas.ui.jobs.AnalysisRuns;
-import org.tracegas.ui.jobs.BatchQuantificationJob;
 import org.tracegas.ui.jobs.LatestLoad;
 import org.tracegas.ui.parts.TimeSeriesPanel;
-import org.tracegas.ui.session.DemoProject;
 import org.tracegas.ui.session.Desk;
 import org.tracegas.ui.session.StoredResults;
 
@@ -31,7 +28,6 @@ public final class TimeSeriesView extends ViewPart implements FollowsTree {
 
     private TimeSeriesPanel panel;
     private LatestLoad<StoredResults.Traces> loads;
-    private final Consumer<List<BatchQuantificationJob.Outcome>> listener = this::show;
     private final ISelectionListener projectListener = this::selected;
     private String shownProjectId;
     private java.time.Instant shownStart;
@@ -56,21 +52,8 @@ public final class TimeSeriesView extends ViewPart implements FollowsTree {
         panel = new TimeSeriesPanel(parent, SWT.NONE);
         loads = new LatestLoad<>(panel);
         panel.addPointOpener(pick -> spectrumOpener.accept(pick));
-        show(Desk.get().lastRun());
-        Desk.get().addRunListener(listener);
         Desk.get().addStoreListener(reread);
         return panel;
-    }
-
-    private void show(List<BatchQuantificationJob.Outcome> outcomes) {
-        DemoProject.Seeded p = Desk.get().project();
-        if (outcomes.isEmpty() || p == null || panel.isDisposed()) {
-            return;
-        }
-        loads.cancel(); // a run that finishes now is newer than any stored results still being read
-        panel.show("Concentrations of " + DemoProject.PROJECT_CODE + " from the method run",
-                AnalysisRuns.traces(outcomes, p.measurementTimes(), p.measurementTimes().get(0)), List.of(),
-                p.measurementTimes().get(0));
     }
 
     /** Reads the selected project's stored results in the background; a later selection wins. */
@@ -134,7 +117,6 @@ public final class TimeSeriesView extends ViewPart implements FollowsTree {
     public void dispose() {
         getSite().getPage().removeSelectionListener(NavigatorView.ID, projectListener);
         loads.cancel();
-        Desk.get().removeRunListener(listener);
         Desk.get().removeStoreListener(reread);
         super.dispose();
     }

@@ -1,6 +1,5 @@
 package org.tracegas.ui.session;
 
-import java.time.Duration;
 import java.time.Instant;
 import java.util.ArrayList;
 import java.util.List;
@@ -21,10 +20,6 @@ import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.preprocess.TransformSettings;
-import org.tracegas.qa.checks.AbsorbanceRegion;
-import org.tracegas.qa.checks.BackgroundAgeCheck;
-import org.tracegas.qa.checks.CheckOutcome;
-import org.tracegas.qa.checks.NoiseCheck;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.QuantificationMethod;
@@ -39,23 +34,17 @@ import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
- * The demo project of the desk: a client, a kiln stack campaign with three sample measurements granted to an
- * analyst and a quality manager the workspace has, a library of invented (synthetic) band shapes and a CO /
- * N2O method. The band shapes are sums of Lorentz lines around invented band centres; they are for trying
- * the desk out and are marked synthetic everywhere.
+ * A small project the desk's tests seed into a workspace: a client, a kiln stack campaign with three sample
+ * measurements granted to an analyst and a quality manager the workspace has, a library of invented (synthetic)
+ * band shapes and a CO / N2O method. The band shapes are sums of Lorentz lines around invented band centres and
+ * are marked synthetic everywhere.
  */
-public final class DemoProject {
+public final class SeededProject {
 
     public static final String PROJECT_CODE = "HLW-26-03";
 
     static final SpectralAxis AXIS = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 1950, 0.5, 701);
     static final double PATH_METRES = 5.0;
-    /**
-     * The demo's QA plan limit on a background's age, as the demo campaign's QA plan sets it
-     * ({@code background-age-limit = 24 h}): part of the demo's definition, the same for every user.
-     */
-    public static final Duration BACKGROUND_AGE_LIMIT = Duration.ofHours(24);
-
     /** Sample times; the last comes 110 min after the background, well within the QA plan's limit. */
     static final List<Instant> TIMES = List.of(Instant.parse("2026-03-10T08:00:00Z"),
             Instant.parse("2026-03-10T08:01:00Z"), Instant.parse("2026-03-10T09:10:00Z"));
@@ -67,7 +56,7 @@ public final class DemoProject {
             List<Spectrum> samples, List<Instant> measurementTimes, Instant backgroundTime) {
     }
 
-    private DemoProject() {
+    private SeededProject() {
     }
 
     /**
@@ -152,22 +141,6 @@ public final class DemoProject {
             }
         }
         return new Spectrum(AXIS, v, Ordinate.ABSORBANCE);
-    }
-
-    /**
-     * QA checks of the demo measurements: background age against {@code backgroundLimit} and baseline noise
-     * in a band-free stretch (2280 to 2340 cm-1) against 1e-3 absorbance RMS.
-     */
-    public static List<CheckOutcome> checks(Seeded demo, Duration backgroundLimit) {
-        BackgroundAgeCheck age = new BackgroundAgeCheck(backgroundLimit);
-        NoiseCheck noise = new NoiseCheck(new AbsorbanceRegion(2280, 2340), 1e-3);
-        List<CheckOutcome> out = new ArrayList<>();
-        for (int i = 0; i < demo.samples().size(); i++) {
-            out.add(age.evaluate(demo.backgroundTime(), demo.measurementTimes().get(i)));
-            Spectrum s = demo.samples().get(i);
-            out.add(noise.evaluate(s.axis().toArray(), s.toArray()));
-        }
-        return List.copyOf(out);
     }
 
     private static List<org.tracegas.library.ReferenceSpectrum> libraryEntries(List<ReferenceSpectrum> refs) {

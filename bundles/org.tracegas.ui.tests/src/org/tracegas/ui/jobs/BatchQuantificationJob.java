@@ -11,6 +11,7 @@ import org.eclipse.core.runtime.SubMonitor;
 import org.eclipse.core.runtime.jobs.Job;
 import org.tracegas.pipeline.AnalysisVersions;
 import org.tracegas.pipeline.ProcessedSpectra;
+import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.Quantifier;
 import org.tracegas.quantify.Sample;
 import org.tracegas.quantify.SpectrumResult;
@@ -18,10 +19,13 @@ import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
+import org.tracegas.ui.parts.FitDisplay;
+import org.tracegas.ui.session.SeededProject;
+import org.tracegas.ui.session.WorkspaceAccess;
 
 /**
- * Runs a method over a batch of measurements in the background and records each compound's result in the
- * workspace as the batch path records it ({@link ProcessedSpectra#results}: flags, input hash, versions).
+ * The desk tests' way to put results of a {@link SeededProject} into a workspace: runs its method over its
+ * in-memory samples in the background and records each compound's result as the batch path records it ({@link ProcessedSpectra#results}: flags, input hash, versions).
  * Cancelling stops after the measurement in hand; what was recorded stays recorded (each measurement's
  * results are one audited transaction).
  */
@@ -43,6 +47,30 @@ public final class BatchQuantificationJob extends Job {
 
     /** Where results are recorded and under which versions. */
     public record Target(WorkspaceStore store, Session session, String projectId, AnalysisVersions versions) {
+    }
+
+    private static final java.time.format.DateTimeFormatter SHOWN = java.time.format.DateTimeFormatter
+            .ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'").withZone(java.time.ZoneOffset.UTC);
+
+    /** A job running the project's method over all its measurements and recording the results. */
+    public static BatchQuantificationJob of(WorkspaceAccess access, Session session, SeededProject.Seeded project,
+            Consumer<List<Outcome>> whenDone) {
+        QuantificationMethod method = project.method().method();
+        Quantifier quantifier = project.method().quantifier(project.samples().get(0).axis(), AnalysisRuns.software(),
+                true);
+        List<Item> items = new ArrayList<>();
+        for (int i = 0; i < project.measurementIds().size(); i++) {
+            items.add(new Item(project.measurementIds().get(i), method.name() + " — measurement " + (i + 1) + ", "
+                    + SHOWN.format(project.measurementTimes().get(i)), project.samples().get(i)));
+        }
+        return new BatchQuantificationJob("Running " + method.name(), quantifier, items,
+                new Target(access.store(), session, project.projectId(),
+                        new AnalysisVersions(project.methodVersionId(), project.libraryVersionId())), whenDone);
+    }
+
+    /** The fit of one outcome as the spectrum panel shows it. */
+    public static FitDisplay fit(Outcome o) {
+        return FitDisplay.of(o.item().label(), o.item().absorbance(), o.result().compounds());
     }
 
     private final Quantifier quantifier;
