@@ -195,9 +195,10 @@ public final class CampaignReport {
         if (plan.exampleTime() == null) {
             return null;
         }
-        String measurement = measurements.stream().filter(m -> m.getTime().equals(plan.exampleTime()))
-                .map(Measurement::getId).findFirst().orElseThrow(() -> new FileFormatException(plan.file(), 0,
+        Measurement sample = measurements.stream().filter(m -> m.getTime().equals(plan.exampleTime()))
+                .findFirst().orElseThrow(() -> new FileFormatException(plan.file(), 0,
                         "example-fit", "no stored sample at " + plan.exampleTime()));
+        String measurement = sample.getId();
         Optional<StoredSpectrum> stored;
         try (Stream<StoredSpectrum> all = store.spectra().stream(actor, projectId)) {
             stored = all.filter(s -> measurement.equals(s.measurementId())
@@ -205,7 +206,9 @@ public final class CampaignReport {
         }
         Spectrum a = stored.orElseThrow(() -> new FileFormatException(plan.file(), 0, "example-fit",
                 "no stored absorbance at " + plan.exampleTime())).spectrum();
-        FitSpectra fit = method.quantifier(a.axis(), software, true).quantify(Sample.of(a))
+        FitSpectra fit = method.quantifier(a.axis(), software, true).quantify(Sample.of(a)
+                // in its cell, for a method whose spectra are computed at each measurement's conditions
+                .inCell(sample.getCellTemperature(), sample.getCellPressure() / 10.0))
                 .compound(plan.exampleCompound()).orElseThrow(() -> new FileFormatException(plan.file(), 0,
                         "example-fit", "the method does not report " + plan.exampleCompound()))
                 .spectra().orElseThrow();
