@@ -26,7 +26,9 @@ import org.eclipse.swtchart.Range;
  */
 public final class DecimatedSeries implements ICustomPaintListener {
 
-    private record Full(double[] x, double[] y, int rgb, boolean markers, boolean dashed, int yAxis) {
+    /** A series' data as handed over, with the ranges of its x and y values (null without any). */
+    private record Full(double[] x, double[] y, int rgb, boolean markers, boolean dashed, int yAxis, Range xRange,
+            Range yRange) {
     }
 
     private final Chart chart;
@@ -46,6 +48,8 @@ public final class DecimatedSeries implements ICustomPaintListener {
     /**
      * Gives a series (created beforehand on the chart, and set on its y axis) its full data. A series without
      * line style is drawn as crosses at its points (flag markers), one with a dashed style as a dashed line.
+     * The arrays are kept, not copied, and must not be changed afterwards: copies of a day of one-second
+     * values of twenty compounds would be 28 MB per display, more than all the drawing costs.
      */
     public void put(ILineSeries<?> series, double[] x, double[] y) {
         if (x.length != y.length) {
@@ -54,8 +58,8 @@ public final class DecimatedSeries implements ICustomPaintListener {
         }
         boolean markers = series.getLineStyle() == LineStyle.NONE;
         Color c = markers ? series.getSymbolColor() : series.getLineColor();
-        data.put(series.getId(), new Full(x.clone(), y.clone(), (c.getRed() << 16) | (c.getGreen() << 8) | c.getBlue(),
-                markers, series.getLineStyle() == LineStyle.DASH, series.getYAxisId()));
+        data.put(series.getId(), new Full(x, y, (c.getRed() << 16) | (c.getGreen() << 8) | c.getBlue(), markers,
+                series.getLineStyle() == LineStyle.DASH, series.getYAxisId(), range(x), range(y)));
         series.setXSeries(new double[0]);
         series.setYSeries(new double[0]);
         version++;
@@ -87,25 +91,37 @@ public final class DecimatedSeries implements ICustomPaintListener {
         return new Range(r.lower - pad, r.upper + pad);
     }
 
-    /** Range of the x values of all data, or of the y values on one axis. */
+    /** Range of the x values of all data, or of the y values on one axis; from the ranges found by put. */
     private Range range(boolean x, int axisId) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (Full f : data.values()) {
-            if (!x && f.yAxis != axisId) {
-                continue;
-            }
-            for (double v : x ? f.x : f.y) {
-                if (!Double.isNaN(v)) {
-                    lo = Math.min(lo, v);
-                    hi = Math.max(hi, v);
-                }
+            Range r = x ? f.xRange : f.yRange;
+            if (r != null && (x || f.yAxis == axisId)) {
+                lo = Math.min(lo, r.lower);
+                hi = Math.max(hi, r.upper);
             }
         }
         if (!(lo <= hi)) {
             return null;
         }
         return lo < hi ? new Range(lo, hi) : new Range(lo - 1, hi + 1);
+    }
+
+    /** Lowest and highest value that is not NaN, or null without any. */
+    private static Range range(double[] values) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (double v : values) {
+            // NaN fails both comparisons, so gaps are skipped without a test of their own
+            if (v < lo) {
+                lo = v;
+            }
+            if (v > hi) {
+                hi = v;
+            }
+        }
+        return lo <= hi ? new Range(lo, hi) : null;
     }
 
     /** Marks the picture out of date and repaints (after a zoom, pan or new data). */
