@@ -48,8 +48,9 @@ public final class DecimatedSeries implements ICustomPaintListener {
     /**
      * Gives a series (created beforehand on the chart, and set on its y axis) its full data. A series without
      * line style is drawn as crosses at its points (flag markers), one with a dashed style as a dashed line.
-     * The arrays are kept, not copied, and must not be changed afterwards: copies of a day of one-second
-     * values of twenty compounds would be 28 MB per display, more than all the drawing costs.
+     * The x values must be finite and ascending or descending ({@link MinMaxDecimator}). The arrays are kept,
+     * not copied, and must not be changed afterwards: copies of a day of one-second values of twenty compounds
+     * would be 28 MB per display, more than all the drawing costs.
      */
     public void put(ILineSeries<?> series, double[] x, double[] y) {
         if (x.length != y.length) {
@@ -59,7 +60,8 @@ public final class DecimatedSeries implements ICustomPaintListener {
         boolean markers = series.getLineStyle() == LineStyle.NONE;
         Color c = markers ? series.getSymbolColor() : series.getLineColor();
         data.put(series.getId(), new Full(x, y, (c.getRed() << 16) | (c.getGreen() << 8) | c.getBlue(), markers,
-                series.getLineStyle() == LineStyle.DASH, series.getYAxisId(), range(x), range(y)));
+                series.getLineStyle() == LineStyle.DASH, series.getYAxisId(),
+                x.length == 0 ? null : new Range(x[0], x[x.length - 1]), range(y)));
         series.setXSeries(new double[0]);
         series.setYSeries(new double[0]);
         version++;
