@@ -88,11 +88,23 @@ public final class MinMaxDecimator {
         return lo;
     }
 
-    /** End (exclusive) of the run of visible points from {@code start} on that fall into start's column. */
+    /**
+     * End (exclusive) of the run of visible points from {@code start} on that fall into start's column: found by
+     * steps doubling from start, then bisection, so the search stays near the run (about two columns' worth of
+     * steps), whatever the number of points.
+     */
     private static int columnEnd(double[] x, int start, int end, double lo, double scale, int columns) {
         int column = column(x[start], lo, scale, columns);
-        int a = start + 1;
-        int b = end;
+        int inside = start;
+        int bound = start + 1;
+        int step = 1;
+        while (bound < end && column(x[bound], lo, scale, columns) == column) {
+            inside = bound;
+            step <<= 1;
+            bound = (int) Math.min(end, (long) start + step);
+        }
+        int a = inside + 1;
+        int b = bound;
         while (a < b) {
             int mid = (a + b) >>> 1;
             if (column(x[mid], lo, scale, columns) != column) {
