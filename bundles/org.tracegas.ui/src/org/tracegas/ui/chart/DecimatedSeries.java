@@ -217,11 +217,14 @@ public final class DecimatedSeries implements ICustomPaintListener {
         }
     }
 
-    /** An RGB picture with a coverage mask, drawn into with one-pixel lines. */
+    /**
+     * An RGB picture with a coverage mask, drawn into with one-pixel lines. The pixels go straight into the
+     * image data's bytes: no second copy of the picture to convert.
+     */
     static final class Raster {
         private final int w;
         private final int h;
-        private final int[] rgb;
+        private final ImageData image;
         private final byte[] alpha;
         /** Pixels per dash and per gap of a dashed line. */
         private static final int DASH = 6;
@@ -230,13 +233,17 @@ public final class DecimatedSeries implements ICustomPaintListener {
         Raster(int w, int h) {
             this.w = w;
             this.h = h;
-            rgb = new int[w * h];
+            image = new ImageData(w, h, 24, new PaletteData(0xFF0000, 0xFF00, 0xFF));
             alpha = new byte[w * h];
         }
 
         void set(int x, int y, int colour) {
             if (x >= 0 && x < w && y >= 0 && y < h) {
-                rgb[y * w + x] = colour;
+                // 24 bits with these masks: red, green, blue bytes in that order (as ImageData.setPixel)
+                int i = y * image.bytesPerLine + 3 * x;
+                image.data[i] = (byte) (colour >> 16);
+                image.data[i + 1] = (byte) (colour >> 8);
+                image.data[i + 2] = (byte) colour;
                 alpha[y * w + x] = (byte) 255;
             }
         }
@@ -305,12 +312,8 @@ public final class DecimatedSeries implements ICustomPaintListener {
         }
 
         ImageData toImageData() {
-            ImageData d = new ImageData(w, h, 24, new PaletteData(0xFF0000, 0xFF00, 0xFF));
-            for (int y = 0; y < h; y++) {
-                d.setPixels(0, y, w, rgb, y * w);
-            }
-            d.alphaData = alpha;
-            return d;
+            image.alphaData = alpha;
+            return image;
         }
     }
 }
