@@ -26,8 +26,57 @@ class MinMaxDecimatorTest {
         int columns = 640;
         double from = 100;
         double to = 900;
+        assertSameEnvelope(x, y, from, to, columns);
         MinMaxDecimator.Decimated d = MinMaxDecimator.decimate(x, y, from, to, columns);
-        assertTrue(d.size() <= 2 * columns + 2, "points kept: " + d.size());
+        // the spike at index 54,321 (x = 543.21) survives
+        double spike = y[54_321];
+        assertTrue(java.util.Arrays.stream(d.y()).anyMatch(v -> v == spike));
+    }
+
+    /**
+     * Zoom windows over a day of one-second values with spikes, gaps (NaN runs) and both axis directions: each
+     * column's lowest and highest value, and the gaps, match a scan of every point (brute force, computed here).
+     */
+    @Test
+    void noExtremeIsLostAtAnyZoom() {
+        Random r = new Random(11);
+        int n = 86_400;
+        double[] hours = new double[n];
+        double[] y = new double[n];
+        for (int i = 0; i < n; i++) {
+            hours[i] = i / 3600.0;
+            y[i] = 20 + 3 * Math.sin(i / 4000.0) + 0.4 * r.nextGaussian();
+            if (r.nextDouble() < 1e-3) {
+                y[i] += (r.nextBoolean() ? 1 : -1) * 50 * r.nextDouble();
+            }
+        }
+        for (int g = 0; g < 30; g++) {
+            int start = r.nextInt(n - 400);
+            java.util.Arrays.fill(y, start, start + 1 + r.nextInt(300), Double.NaN);
+        }
+        double[] descending = new double[n];
+        double[] yDescending = new double[n];
+        for (int i = 0; i < n; i++) {
+            descending[i] = hours[n - 1 - i];
+            yDescending[i] = y[n - 1 - i];
+        }
+        for (int k = 0; k < 200; k++) {
+            double a = r.nextDouble() * 24;
+            double b = k % 4 == 0 ? a + r.nextDouble() * 0.01 : r.nextDouble() * 24;
+            int columns = 1 + r.nextInt(2000);
+            if (a == b) {
+                continue;
+            }
+            assertSameEnvelope(hours, y, a, b, columns);
+            assertSameEnvelope(descending, yDescending, a, b, columns);
+        }
+    }
+
+    private static void assertSameEnvelope(double[] x, double[] y, double from, double to, int columns) {
+        double lo = Math.min(from, to);
+        double hi = Math.max(from, to);
+        double scale = columns / (hi - lo);
+        MinMaxDecimator.Decimated d = MinMaxDecimator.decimate(x, y, from, to, columns);
         double[] wantMin = new double[columns];
         double[] wantMax = new double[columns];
         double[] gotMin = new double[columns];
@@ -36,25 +85,52 @@ class MinMaxDecimatorTest {
         java.util.Arrays.fill(gotMin, Double.POSITIVE_INFINITY);
         java.util.Arrays.fill(wantMax, Double.NEGATIVE_INFINITY);
         java.util.Arrays.fill(gotMax, Double.NEGATIVE_INFINITY);
-        for (int i = 0; i < n; i++) {
-            if (x[i] >= from && x[i] <= to) {
-                int c = Math.min(columns - 1, (int) ((x[i] - from) * columns / (to - from)));
-                wantMin[c] = Math.min(wantMin[c], y[i]);
-                wantMax[c] = Math.max(wantMax[c], y[i]);
+        int wantGaps = 0;
+        boolean inGap = true;
+        for (int i = 0; i < x.length; i++) {
+            if (x[i] < lo || x[i] > hi) {
+                continue;
             }
+            if (Double.isNaN(y[i])) {
+                wantGaps += inGap ? 0 : 1;
+                inGap = true;
+                continue;
+            }
+            inGap = false;
+            int c = Math.min(columns - 1, (int) ((x[i] - lo) * scale));
+            wantMin[c] = Math.min(wantMin[c], y[i]);
+            wantMax[c] = Math.max(wantMax[c], y[i]);
         }
+        int gotGaps = 0;
         for (int i = 0; i < d.size(); i++) {
-            if (d.x()[i] >= from && d.x()[i] <= to) {
-                int c = Math.min(columns - 1, (int) ((d.x()[i] - from) * columns / (to - from)));
+            if (Double.isNaN(d.y()[i])) {
+                gotGaps++;
+            } else if (d.x()[i] >= lo && d.x()[i] <= hi) {
+                int c = Math.min(columns - 1, (int) ((d.x()[i] - lo) * scale));
                 gotMin[c] = Math.min(gotMin[c], d.y()[i]);
                 gotMax[c] = Math.max(gotMax[c], d.y()[i]);
             }
+            if (i > 0) {
+                double step = d.x()[i] - d.x()[i - 1];
+                assertTrue(x[0] <= x[x.length - 1] ? step >= 0 : step <= 0, "kept points out of order at " + i);
+            }
         }
-        assertArrayEquals(wantMin, gotMin);
-        assertArrayEquals(wantMax, gotMax);
-        // the spike at index 54,321 (x = 543.21) survives
-        double spike = y[54_321];
-        assertTrue(java.util.Arrays.stream(d.y()).anyMatch(v -> v == spike));
+        String where = from + " to " + to + " in " + columns + " columns";
+        assertArrayEquals(wantMin, gotMin, where);
+        assertArrayEquals(wantMax, gotMax, where);
+        // a gap before the visible points may show as one more, after the neighbour kept outside
+        assertTrue(gotGaps == wantGaps || gotGaps == wantGaps + 1, where + ": gaps " + gotGaps + ", want " + wantGaps);
+        // two per column, the two neighbours outside; a gap adds itself and splits a column in two
+        assertTrue(d.size() <= 2 * columns + 2 + 3 * gotGaps, where + ": points kept " + d.size());
+    }
+
+    @Test
+    void aZoomBetweenTwoValuesKeepsTheLineThroughIt() {
+        double[] x = {0, 1, 2, 3};
+        double[] y = {4, 6, 8, 10};
+        MinMaxDecimator.Decimated d = MinMaxDecimator.decimate(x, y, 1.25, 1.75, 300);
+        assertArrayEquals(new double[] {1, 2}, d.x());
+        assertArrayEquals(new double[] {6, 8}, d.y());
     }
 
     @Test

@@ -26,7 +26,9 @@ import org.eclipse.swtchart.Range;
  */
 public final class DecimatedSeries implements ICustomPaintListener {
 
-    private record Full(double[] x, double[] y, int rgb, boolean markers, boolean dashed, int yAxis) {
+    /** A series' data as handed over, with the ranges of its x and y values (null without any). */
+    private record Full(double[] x, double[] y, int rgb, boolean markers, boolean dashed, int yAxis, Range xRange,
+            Range yRange) {
     }
 
     private final Chart chart;
@@ -46,6 +48,9 @@ public final class DecimatedSeries implements ICustomPaintListener {
     /**
      * Gives a series (created beforehand on the chart, and set on its y axis) its full data. A series without
      * line style is drawn as crosses at its points (flag markers), one with a dashed style as a dashed line.
+     * The x values must be finite and ascending or descending ({@link MinMaxDecimator}). The arrays are kept,
+     * not copied, and must not be changed afterwards: copies of a day of one-second values of twenty compounds
+     * would be 28 MB per display, more than all the drawing costs.
      */
     public void put(ILineSeries<?> series, double[] x, double[] y) {
         if (x.length != y.length) {
@@ -54,8 +59,9 @@ public final class DecimatedSeries implements ICustomPaintListener {
         }
         boolean markers = series.getLineStyle() == LineStyle.NONE;
         Color c = markers ? series.getSymbolColor() : series.getLineColor();
-        data.put(series.getId(), new Full(x.clone(), y.clone(), (c.getRed() << 16) | (c.getGreen() << 8) | c.getBlue(),
-                markers, series.getLineStyle() == LineStyle.DASH, series.getYAxisId()));
+        data.put(series.getId(), new Full(x, y, (c.getRed() << 16) | (c.getGreen() << 8) | c.getBlue(), markers,
+                series.getLineStyle() == LineStyle.DASH, series.getYAxisId(),
+                x.length == 0 ? null : new Range(x[0], x[x.length - 1]), range(y)));
         series.setXSeries(new double[0]);
         series.setYSeries(new double[0]);
         version++;
@@ -87,25 +93,37 @@ public final class DecimatedSeries implements ICustomPaintListener {
         return new Range(r.lower - pad, r.upper + pad);
     }
 
-    /** Range of the x values of all data, or of the y values on one axis. */
+    /** Range of the x values of all data, or of the y values on one axis; from the ranges found by put. */
     private Range range(boolean x, int axisId) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (Full f : data.values()) {
-            if (!x && f.yAxis != axisId) {
-                continue;
-            }
-            for (double v : x ? f.x : f.y) {
-                if (!Double.isNaN(v)) {
-                    lo = Math.min(lo, v);
-                    hi = Math.max(hi, v);
-                }
+            Range r = x ? f.xRange : f.yRange;
+            if (r != null && (x || f.yAxis == axisId)) {
+                lo = Math.min(lo, r.lower);
+                hi = Math.max(hi, r.upper);
             }
         }
         if (!(lo <= hi)) {
             return null;
         }
         return lo < hi ? new Range(lo, hi) : new Range(lo - 1, hi + 1);
+    }
+
+    /** Lowest and highest value that is not NaN, or null without any. */
+    private static Range range(double[] values) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (double v : values) {
+            // NaN fails both comparisons, so gaps are skipped without a test of their own
+            if (v < lo) {
+                lo = v;
+            }
+            if (v > hi) {
+                hi = v;
+            }
+        }
+        return lo <= hi ? new Range(lo, hi) : null;
     }
 
     /** Marks the picture out of date and repaints (after a zoom, pan or new data). */
@@ -199,11 +217,14 @@ public final class DecimatedSeries implements ICustomPaintListener {
         }
     }
 
-    /** An RGB picture with a coverage mask, drawn into with one-pixel lines. */
+    /**
+     * An RGB picture with a coverage mask, drawn into with one-pixel lines. The pixels go straight into the
+     * image data's bytes: no second copy of the picture to convert.
+     */
     static final class Raster {
         private final int w;
         private final int h;
-        private final int[] rgb;
+        private final ImageData image;
         private final byte[] alpha;
         /** Pixels per dash and per gap of a dashed line. */
         private static final int DASH = 6;
@@ -212,13 +233,17 @@ public final class DecimatedSeries implements ICustomPaintListener {
         Raster(int w, int h) {
             this.w = w;
             this.h = h;
-            rgb = new int[w * h];
+            image = new ImageData(w, h, 24, new PaletteData(0xFF0000, 0xFF00, 0xFF));
             alpha = new byte[w * h];
         }
 
         void set(int x, int y, int colour) {
             if (x >= 0 && x < w && y >= 0 && y < h) {
-                rgb[y * w + x] = colour;
+                // 24 bits with these masks: red, green, blue bytes in that order (as ImageData.setPixel)
+                int i = y * image.bytesPerLine + 3 * x;
+                image.data[i] = (byte) (colour >> 16);
+                image.data[i + 1] = (byte) (colour >> 8);
+                image.data[i + 2] = (byte) colour;
                 alpha[y * w + x] = (byte) 255;
             }
         }
@@ -287,12 +312,8 @@ public final class DecimatedSeries implements ICustomPaintListener {
         }
 
         ImageData toImageData() {
-            ImageData d = new ImageData(w, h, 24, new PaletteData(0xFF0000, 0xFF00, 0xFF));
-            for (int y = 0; y < h; y++) {
-                d.setPixels(0, y, w, rgb, y * w);
-            }
-            d.alphaData = alpha;
-            return d;
+            image.alphaData = alpha;
+            return image;
         }
     }
 }

@@ -42,54 +42,113 @@ public final class MinMaxDecimator {
         double lo = Math.min(from, to);
         double hi = Math.max(from, to);
         double scale = columns / (hi - lo);
+        boolean ascending = x.length < 2 || x[0] <= x[x.length - 1];
+        // the visible points are one index range of a monotonic series: found by bisection, not by a scan
+        int first = ascending ? firstIndex(x, lo, true) : firstIndex(x, hi, false);
+        int end = ascending ? firstIndex(x, Math.nextUp(hi), true) : firstIndex(x, Math.nextDown(lo), false);
         Out out = new Out(2 * columns + 4);
-        int lastOutsideBefore = -1;
-        boolean seenInside = false;
-        int column = -1;
+        int before = first - 1;
+        while (before >= 0 && Double.isNaN(y[before])) {
+            before--;
+        }
+        if (before >= 0) {
+            out.add(x[before], y[before]);
+        }
+        int runStart = first;
+        while (runStart < end) {
+            int runEnd = columnEnd(x, runStart, end, lo, scale, columns);
+            envelope(x, y, runStart, runEnd, out);
+            runStart = runEnd;
+        }
+        int after = end;
+        while (after < x.length && Double.isNaN(y[after])) {
+            after++;
+        }
+        if (after < x.length) {
+            out.add(x[after], y[after]);
+        }
+        return out.result();
+    }
+
+    /**
+     * First index from which on the series has passed {@code limit}: x[i] &ge; limit when ascending, x[i] &le;
+     * limit when descending; x.length when it never does.
+     */
+    private static int firstIndex(double[] x, double limit, boolean ascending) {
+        int lo = 0;
+        int hi = x.length;
+        while (lo < hi) {
+            int mid = (lo + hi) >>> 1;
+            if (ascending ? x[mid] >= limit : x[mid] <= limit) {
+                hi = mid;
+            } else {
+                lo = mid + 1;
+            }
+        }
+        return lo;
+    }
+
+    /**
+     * End (exclusive) of the run of visible points from {@code start} on that fall into start's column: found by
+     * steps doubling from start, then bisection, so the search stays near the run (about two columns' worth of
+     * steps), whatever the number of points.
+     */
+    private static int columnEnd(double[] x, int start, int end, double lo, double scale, int columns) {
+        int column = column(x[start], lo, scale, columns);
+        int inside = start;
+        int bound = start + 1;
+        int step = 1;
+        while (bound < end && column(x[bound], lo, scale, columns) == column) {
+            inside = bound;
+            step <<= 1;
+            bound = (int) Math.min(end, (long) start + step);
+        }
+        int a = inside + 1;
+        int b = bound;
+        while (a < b) {
+            int mid = (a + b) >>> 1;
+            if (column(x[mid], lo, scale, columns) != column) {
+                b = mid;
+            } else {
+                a = mid + 1;
+            }
+        }
+        return a;
+    }
+
+    private static int column(double x, double lo, double scale, int columns) {
+        return Math.min(columns - 1, (int) ((x - lo) * scale));
+    }
+
+    /**
+     * The lowest and the highest point of one column's points, in their order; only the y values are read,
+     * once. A NaN ends what came before it and leaves a gap.
+     */
+    private static void envelope(double[] x, double[] y, int start, int end, Out out) {
         int minIndex = -1;
         int maxIndex = -1;
-        for (int i = 0; i < x.length; i++) {
-            if (Double.isNaN(y[i])) {
-                if (seenInside && x[i] >= lo && x[i] <= hi) {
-                    flush(x, y, minIndex, maxIndex, out);
-                    minIndex = -1;
-                    column = -1;
-                    out.gap();
-                }
-                continue;
+        double min = Double.POSITIVE_INFINITY;
+        double max = Double.NEGATIVE_INFINITY;
+        for (int i = start; i < end; i++) {
+            double v = y[i];
+            // the extremes stay in registers; a NaN fails both comparisons and is caught after them
+            if (v < min) {
+                min = v;
+                minIndex = i;
             }
-            if (x[i] < lo || x[i] > hi) {
-                if (!seenInside) {
-                    lastOutsideBefore = i;
-                } else {
-                    // first point past the far end: flush and stop, the series is monotonic
-                    flush(x, y, minIndex, maxIndex, out);
-                    minIndex = -1;
-                    out.add(x[i], y[i]);
-                    break;
-                }
-                continue;
-            }
-            if (!seenInside) {
-                seenInside = true;
-                if (lastOutsideBefore >= 0) {
-                    out.add(x[lastOutsideBefore], y[lastOutsideBefore]);
-                }
-            }
-            int c = Math.min(columns - 1, (int) ((x[i] - lo) * scale));
-            if (c != column) {
+            if (v > max) {
+                max = v;
+                maxIndex = i;
+            } else if (v != v) {
                 flush(x, y, minIndex, maxIndex, out);
-                column = c;
-                minIndex = i;
-                maxIndex = i;
-            } else if (y[i] < y[minIndex]) {
-                minIndex = i;
-            } else if (y[i] > y[maxIndex]) {
-                maxIndex = i;
+                minIndex = -1;
+                maxIndex = -1;
+                min = Double.POSITIVE_INFINITY;
+                max = Double.NEGATIVE_INFINITY;
+                out.gap();
             }
         }
         flush(x, y, minIndex, maxIndex, out);
-        return out.result();
     }
 
     private static void flush(double[] x, double[] y, int minIndex, int maxIndex, Out out) {

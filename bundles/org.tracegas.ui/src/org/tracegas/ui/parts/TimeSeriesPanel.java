@@ -133,7 +133,7 @@ public final class TimeSeriesPanel extends Composite {
         chart.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
         chart.getAxisSet().getYAxis(0).getTick().setFormat(new java.text.DecimalFormat("0.###"));
         data = new DecimatedSeries(chart);
-        navigation = new ChartNavigation(this::rethin, chart);
+        navigation = new ChartNavigation(data::refresh, chart);
         cursor = new CursorReadout(chart, readout, "%.4f h", "concentration");
         addListener(SWT.Dispose, e -> swatches.values().forEach(Image::dispose));
         Control plot = chart.getPlotArea().getControl();
@@ -266,6 +266,8 @@ public final class TimeSeriesPanel extends Composite {
     }
 
     private void fillList(Set<String> checked) {
+        // one repaint of the list for all its rows, not one per row
+        compounds.setRedraw(false);
         compounds.removeAll();
         for (ConcentrationTrace t : traces) {
             String c = t.compound();
@@ -275,6 +277,7 @@ public final class TimeSeriesPanel extends Composite {
             item.setImage(swatch(c));
             item.setChecked(checked.contains(c));
         }
+        compounds.setRedraw(true);
     }
 
     /** A small square in the compound's line colour, so the list doubles as a key. */
@@ -346,7 +349,7 @@ public final class TimeSeriesPanel extends Composite {
             setYRange(majorAxis);
         }
         chart.suspendUpdate(false);
-        rethin();
+        data.refresh();
     }
 
     /** The time range of all traces (not only those drawn), so that choosing compounds keeps the period. */
@@ -396,11 +399,6 @@ public final class TimeSeriesPanel extends Composite {
         if (y != null) {
             chart.getAxisSet().getYAxis(axisId).setRange(y);
         }
-    }
-
-    private void rethin() {
-        data.refresh();
-        chart.redraw();
     }
 
     /** Calls {@code opener} with the value picked by a double-click or the context menu. */
