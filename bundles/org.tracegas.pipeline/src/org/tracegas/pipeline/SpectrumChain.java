@@ -1,5 +1,8 @@
 package org.tracegas.pipeline;
 
+import java.util.Queue;
+import java.util.concurrent.ConcurrentLinkedQueue;
+
 import org.tracegas.importer.container.AcquisitionHeader;
 import org.tracegas.importer.container.ContainerRecord;
 import org.tracegas.preprocess.BackgroundRatio;
@@ -10,16 +13,21 @@ import org.tracegas.spectrum.Spectrum;
 
 /**
  * From a recorded interferogram to the absorbance the fit works on: transform to a single beam, ratio against
- * the last background before it. One chain per thread: the transform keeps work buffers.
+ * the last background before it. Safe for any number of threads, so that a batch transforms on all cores: a
+ * transform keeps its plan and work buffers, so each call borrows one that no other thread is using (the same
+ * settings) and gives it back afterwards; plans are made once per thread working at the same time, not per call.
  */
 public final class SpectrumChain {
 
     private final InterferogramTransform transform;
+    /** Transforms not in use; one more is made when a thread finds none. */
+    private final Queue<InterferogramTransform> idle = new ConcurrentLinkedQueue<>();
     private final BackgroundRatio ratio;
     private final BackgroundTimeline backgrounds;
 
     public SpectrumChain(InterferogramTransform transform, BackgroundRatio ratio, BackgroundTimeline backgrounds) {
         this.transform = transform;
+        idle.add(transform);
         this.ratio = ratio;
         this.backgrounds = backgrounds;
     }
@@ -34,6 +42,18 @@ public final class SpectrumChain {
     }
 
     public MeasuredSpectrum process(ContainerRecord record) {
+        InterferogramTransform borrowed = idle.poll();
+        if (borrowed == null) {
+            borrowed = transform.withOwnBuffers();
+        }
+        try {
+            return process(record, borrowed);
+        } finally {
+            idle.add(borrowed);
+        }
+    }
+
+    private MeasuredSpectrum process(ContainerRecord record, InterferogramTransform transform) {
         AcquisitionHeader h = record.header();
         Spectrum singleBeam = transform.singleBeam(record.interferogram());
         RatioResult absorbance = ratio.absorbance(singleBeam, h.time(), backgrounds.latestBefore(h.time()));

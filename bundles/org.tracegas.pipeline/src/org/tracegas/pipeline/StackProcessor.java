@@ -7,8 +7,6 @@ import java.util.ArrayList;
 import java.util.Iterator;
 import java.util.List;
 import java.util.NoSuchElementException;
-import java.util.Queue;
-import java.util.concurrent.ConcurrentLinkedQueue;
 import java.util.function.Consumer;
 
 import org.tracegas.importer.ImportException;
@@ -28,7 +26,7 @@ import org.tracegas.store.WorkspaceStore;
 
 /**
  * The batch path of a campaign: streams the interferograms of container files one record at a time,
- * transforms and ratios them, fits them on all cores, and stores the measurements with their absorbance and
+ * transforms, ratios and fits them on all cores, and stores the measurements with their absorbance and
  * their results in blocks, each block in one transaction, written while the next block is read and fitted.
  * Nothing holds more than the records in flight and a few blocks, so a year of data runs in constant memory.
  */
@@ -134,26 +132,32 @@ public final class StackProcessor {
         return processed;
     }
 
+    /**
+     * Reads the records on the calling thread and leaves everything else to the quantifier's workers: the
+     * transform, the ratio, the fit and the making of the processed spectrum, so that all of it runs on all
+     * cores and the reading thread only reads.
+     */
     private BatchOutcome fit(List<Path> files, long expected, Consumer<ProcessedSpectrum> consumer,
             CancellationFlag cancel) {
-        Queue<MeasuredSpectrum> inFlight = new ConcurrentLinkedQueue<>();
-        Iterator<Sample> samples = new SampleIterator(files, inFlight);
         String noiseOrigin = ResultCorrection.transformOrigin(chain.transformSettings());
-        return quantifier.run(samples, expected, result -> consumer.accept(
-                ProcessedSpectra.of(inFlight.remove(), result, versions, correction, noiseOrigin)),
-                ProgressListener.NONE, cancel);
+        return quantifier.map(new RecordIterator(files), expected, (fitter, record) -> {
+            MeasuredSpectrum measured = chain.process(record);
+            Sample sample = new Sample(measured.ratio().spectrum(),
+                    new BackgroundAge(measured.ratio().backgroundAge(), chain.backgroundAgeLimit()),
+                    ResultCorrection.noiseCorrelation(measured.noiseFactor()))
+                    .inCell(measured.cellTemperatureK(), measured.cellPressureKPa());
+            return ProcessedSpectra.of(measured, fitter.quantify(sample), versions, correction, noiseOrigin);
+        }, consumer, ProgressListener.NONE, cancel);
     }
 
-    /** Reads the files lazily, one record at a time, and turns each record into a sample to fit. */
-    private final class SampleIterator implements Iterator<Sample> {
+    /** Reads the files lazily, one record at a time. */
+    private static final class RecordIterator implements Iterator<ContainerRecord> {
 
         private final Iterator<Path> files;
-        private final Queue<MeasuredSpectrum> inFlight;
         private ContainerReader reader;
 
-        SampleIterator(List<Path> files, Queue<MeasuredSpectrum> inFlight) {
+        RecordIterator(List<Path> files) {
             this.files = files.iterator();
-            this.inFlight = inFlight;
         }
 
         @Override
@@ -178,17 +182,11 @@ public final class StackProcessor {
         }
 
         @Override
-        public Sample next() {
+        public ContainerRecord next() {
             if (!hasNext()) {
                 throw new NoSuchElementException();
             }
-            ContainerRecord record = reader.next();
-            MeasuredSpectrum measured = chain.process(record);
-            inFlight.add(measured);
-            return new Sample(measured.ratio().spectrum(),
-                    new BackgroundAge(measured.ratio().backgroundAge(), chain.backgroundAgeLimit()),
-                    ResultCorrection.noiseCorrelation(measured.noiseFactor()))
-                    .inCell(measured.cellTemperatureK(), measured.cellPressureKPa());
+            return reader.next();
         }
     }
 }

@@ -86,6 +86,19 @@ class InterferogramTransformTest {
         assertEquals(first, new InterferogramTransform(TransformSettings.defaults()).singleBeam(a));
     }
 
+    /** A transform for another thread gives the same spectrum and noise factor bit for bit as the one used. */
+    @Test
+    void transformWithOwnBuffersGivesIdenticalResults() {
+        InterferogramTransform used = new InterferogramTransform(TransformSettings.defaults(), FftEngine.COMMONS_MATH);
+        Interferogram a = SyntheticInterferogram.of(4096, 200, 0, 1, LINES);
+        used.singleBeam(SyntheticInterferogram.of(2048, 150, 0, 1, LINES));
+        InterferogramTransform own = used.withOwnBuffers();
+        assertEquals(used.settings(), own.settings());
+        assertEquals(used.singleBeam(a), own.singleBeam(a));
+        assertEquals(Double.doubleToRawLongBits(used.noiseVarianceFactor(a)),
+                Double.doubleToRawLongBits(own.noiseVarianceFactor(a)));
+    }
+
     @Test
     void recordingReversedInPathDifferenceGivesTheSameSingleBeam() {
         // a reversed interferogram has the complex conjugate spectrum; the Mertz phase removes either phase

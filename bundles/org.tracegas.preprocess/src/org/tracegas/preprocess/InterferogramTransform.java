@@ -68,6 +68,14 @@ public final class InterferogramTransform {
     }
 
     /**
+     * A transform with the same settings and engine and work buffers of its own, for another thread: it gives
+     * the same spectra bit for bit, since every call lays its buffers out anew.
+     */
+    public InterferogramTransform withOwnBuffers() {
+        return new InterferogramTransform(settings, engine);
+    }
+
+    /**
      * The single-beam spectrum of an interferogram, on a wavenumber axis limited to the settings' range.
      *
      * @throws IllegalArgumentException if the interferogram is null, too short on the short side of ZPD for the

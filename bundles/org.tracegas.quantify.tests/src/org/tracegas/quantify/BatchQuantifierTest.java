@@ -8,6 +8,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
+import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -71,6 +73,27 @@ class BatchQuantifierTest {
             assertEquals(samples.size(), progress.get(i)[1]);
         }
         assertEquals(samples.size(), progress.size());
+    }
+
+    /**
+     * Items made into samples on the workers: the calling thread only hands them out, each outcome comes back in
+     * input order, and its numbers are those of a plain loop bit for bit.
+     */
+    @Test
+    void mapMakesSamplesOnTheWorkersAndDeliversInOrder() {
+        Thread caller = Thread.currentThread();
+        Set<Thread> workers = ConcurrentHashMap.newKeySet();
+        List<SpectrumResult> out = new ArrayList<>();
+        BatchOutcome outcome = new BatchQuantifier(quantifier, 3).map(samples.stream().map(Sample::absorbance)
+                .iterator(), samples.size(), (fitter, absorbance) -> {
+                    workers.add(Thread.currentThread());
+                    return fitter.quantify(Sample.of(absorbance));
+                }, out::add, ProgressListener.NONE, new CancellationFlag());
+        assertEquals(new BatchOutcome(samples.size(), false), outcome);
+        assertFalse(workers.contains(caller));
+        for (int i = 0; i < samples.size(); i++) {
+            assertEquals(quantifier.quantify(samples.get(i)), out.get(i), "sample " + i);
+        }
     }
 
     /** Cancelled after the fifth result: exactly five delivered, nothing after the flag was set. */

@@ -8,6 +8,7 @@ import java.util.concurrent.ExecutionException;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.function.BiFunction;
 import java.util.function.Consumer;
 
 /**
@@ -63,30 +64,52 @@ public final class BatchQuantifier {
      */
     public BatchOutcome run(Iterator<Sample> samples, long total, Consumer<? super SpectrumResult> consumer,
             ProgressListener progress, CancellationFlag cancellation) {
+        return map(samples, total, Quantifier::quantify, consumer, progress, cancellation);
+    }
+
+    /**
+     * As {@link #run(Iterator, long, Consumer, ProgressListener, CancellationFlag)} for items that become
+     * samples only on the worker threads: the calling thread just takes the items from the iterator, and a
+     * worker turns each item into what the consumer receives, fitting it with the quantifier on the way. So
+     * making a sample (transforming an interferogram, ratioing it) and making what is kept of its result run
+     * on all cores, not on the one thread that reads.
+     *
+     * @param items        the items, e.g. recorded interferograms
+     * @param total        number of items for the progress listener, or -1 if not known
+     * @param work         turns one item into its outcome, never null; called on several threads at once
+     * @param consumer     receives each outcome, on the calling thread, in input order
+     * @param progress     told after each delivered outcome
+     * @param cancellation checked before each item is worked on and before each outcome is delivered
+     * @return how many outcomes were delivered and whether the batch was cancelled
+     * @throws IllegalArgumentException if an item cannot be quantified; the message names its index (from 0) and
+     *                                  the outcomes before it have been delivered
+     */
+    public <T, R> BatchOutcome map(Iterator<T> items, long total, BiFunction<Quantifier, ? super T, ? extends R> work,
+            Consumer<? super R> consumer, ProgressListener progress, CancellationFlag cancellation) {
         ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
             Thread t = new Thread(r, "quantification worker");
             t.setDaemon(true);
             return t;
         });
-        ArrayDeque<Future<SpectrumResult>> pending = new ArrayDeque<>();
+        ArrayDeque<Future<R>> pending = new ArrayDeque<>();
         long submitted = 0;
         long delivered = 0;
         try {
             while (true) {
                 while (pending.size() < threads * READ_AHEAD_PER_THREAD && !cancellation.isCancelled()
-                        && samples.hasNext()) {
-                    Sample sample = samples.next();
+                        && items.hasNext()) {
+                    T item = items.next();
                     long index = submitted++;
-                    pending.add(pool.submit(() -> cancellation.isCancelled() ? null : fit(sample, index)));
+                    pending.add(pool.submit(() -> cancellation.isCancelled() ? null : work(work, item, index)));
                 }
                 if (pending.isEmpty() || cancellation.isCancelled()) {
                     return new BatchOutcome(delivered, cancellation.isCancelled());
                 }
-                SpectrumResult result = await(pending.poll());
-                if (result == null || cancellation.isCancelled()) {
+                R outcome = await(pending.poll());
+                if (outcome == null || cancellation.isCancelled()) {
                     return new BatchOutcome(delivered, true);
                 }
-                consumer.accept(result);
+                consumer.accept(outcome);
                 delivered++;
                 progress.progress(delivered, total);
             }
@@ -96,15 +119,15 @@ public final class BatchQuantifier {
         }
     }
 
-    private SpectrumResult fit(Sample sample, long index) {
+    private <T, R> R work(BiFunction<Quantifier, ? super T, ? extends R> work, T item, long index) {
         try {
-            return quantifier.quantify(sample);
+            return work.apply(quantifier, item);
         } catch (IllegalArgumentException e) {
             throw new IllegalArgumentException("sample " + index + ": " + e.getMessage(), e);
         }
     }
 
-    private static SpectrumResult await(Future<SpectrumResult> future) {
+    private static <R> R await(Future<R> future) {
         try {
             return future.get();
         } catch (InterruptedException e) {

@@ -7,6 +7,7 @@ import java.io.IOException;
 import java.io.InputStream;
 import java.nio.ByteBuffer;
 import java.nio.ByteOrder;
+import java.nio.FloatBuffer;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
@@ -33,7 +34,15 @@ import org.tracegas.spectrum.Interferogram;
  */
 public final class ContainerReader implements Iterator<ContainerRecord>, Closeable {
 
+    /** Samples read per chunk: bounds the read buffer whatever a record's length. */
+    private static final int CHUNK_POINTS = 1 << 16;
+
     private final InputStream in;
+    /**
+     * The read buffer, kept for the next record: a batch reads records of a few hundred KiB each, and fresh
+     * buffers of that size per record made the collector run for them alone.
+     */
+    private byte[] chunk = new byte[0];
     private final String source;
     private long number;
     private ContainerRecord ahead;
@@ -149,17 +158,18 @@ public final class ContainerReader implements Iterator<ContainerRecord>, Closeab
 
     private double[] readSamples(int points, CRC32 crc, long n) throws ImportException {
         double[] samples = new double[points];
-        int chunkPoints = Math.min(points, 1 << 16);
-        byte[] chunk = new byte[4 * chunkPoints];
-        float[] floats = new float[chunkPoints];
+        int chunkPoints = Math.min(points, CHUNK_POINTS);
+        if (chunk.length < 4 * chunkPoints) {
+            chunk = new byte[4 * chunkPoints];
+        }
         int done = 0;
         while (done < points) {
             int count = Math.min(points - done, chunkPoints);
             fill(chunk, 4 * count, "data", n);
             crc.update(chunk, 0, 4 * count);
-            ByteBuffer.wrap(chunk, 0, 4 * count).order(ByteOrder.LITTLE_ENDIAN).asFloatBuffer().get(floats, 0, count);
+            FloatBuffer floats = ByteBuffer.wrap(chunk, 0, 4 * count).order(ByteOrder.LITTLE_ENDIAN).asFloatBuffer();
             for (int i = 0; i < count; i++) {
-                float v = floats[i];
+                float v = floats.get(i);
                 if (!Float.isFinite(v)) {
                     throw new ImportException(source, n, "data", "sample " + (done + i) + " is not finite: " + v);
                 }
