@@ -50,8 +50,9 @@ public record MethodDetectionLimit(String analyte, int readings, double standard
             + "at least 7 replicates; t table as reproduced in Wis. Adm. Code NR 252.0365). Revision 2 (2017) "
             + "defines the MDL as distinguishable from method blank results and adds one from the blanks (MDL_b, "
             + "with their mean): not applied, its text was not retrieved (not confirmed)";
-    static final String MAU_SOURCE = "EPA Method 320 section 8.1.6 (MAU per the FTIR Protocol); 3 x the fit's "
-            + "noise-limited standard uncertainty: from memory, not confirmed in a retrieved text";
+    static final String MAU_SOURCE = "EPA Method 320 section 8.1.6 and the EPA FTIR Protocol appendix A (MAU: the "
+            + "noise-limited concentration uncertainty; not confirmed against the official text); stated as 3 x the "
+            + "root mean square of the fit's noise-limited standard uncertainty: common practice, no source";
     /** The number of readings the MDL rule states, read back from a stored outcome. */
     private static final Pattern STATED = Pattern.compile("MDL = t\\(n-1, 0\\.99\\) x S = \\S+ x \\S+ ppm with "
             + "n = (\\d+) .*");

@@ -53,8 +53,8 @@ public final class SpikeRecoveryCheck {
                 "Mean spike recovery R = measured/expected·100 over %d spiked samples within %s %%, with "
                         + "expected = DF·C_spike + (1−DF)·C_native and DF from the tracer; spike gas from the %s",
                 samples.size(), limits.describe(), gas.origin()),
-                "EPA Method 320 sections 8.6.2 and 9.2.3; ASTM D6348 annex on analyte spiking "
-                        + "(figures from memory, not confirmed against the official texts)");
+                "EPA Method 320 section 9.2.3 (DF and expected value) and section 8.6.2 (mean of at least 3 "
+                        + "spiked samples within 0.7 to 1.3 of expected); not confirmed against the official text");
         return CheckOutcome.judge("Spike recovery " + analyte, mean, "%", limits, rule);
     }
 }
