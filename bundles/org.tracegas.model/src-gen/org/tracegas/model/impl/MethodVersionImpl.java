@@ -4,12 +4,15 @@ package org.tracegas.model.impl;
 
 import java.util.Collection;
 
+import org.eclipse.emf.common.notify.Notification;
 import org.eclipse.emf.common.notify.NotificationChain;
 
 import org.eclipse.emf.common.util.EList;
 
 import org.eclipse.emf.ecore.EClass;
 import org.eclipse.emf.ecore.InternalEObject;
+
+import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
 import org.eclipse.emf.ecore.util.EObjectContainmentEList;
 import org.eclipse.emf.ecore.util.InternalEList;
@@ -27,6 +30,8 @@ import org.tracegas.model.WorkspacePackage;
  * </p>
  * <ul>
  *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getRegions <em>Regions</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getPathLength <em>Path Length</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getMaxIterations <em>Max Iterations</em>}</li>
  * </ul>
  *
  * @generated
@@ -41,6 +46,46 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	 * @ordered
 	 */
 	protected EList<AnalysisRegion> regions;
+
+	/**
+	 * The default value of the '{@link #getPathLength() <em>Path Length</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPathLength()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double PATH_LENGTH_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getPathLength() <em>Path Length</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPathLength()
+	 * @generated
+	 * @ordered
+	 */
+	protected double pathLength = PATH_LENGTH_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getMaxIterations() <em>Max Iterations</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getMaxIterations()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final int MAX_ITERATIONS_EDEFAULT = 0;
+
+	/**
+	 * The cached value of the '{@link #getMaxIterations() <em>Max Iterations</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getMaxIterations()
+	 * @generated
+	 * @ordered
+	 */
+	protected int maxIterations = MAX_ITERATIONS_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -80,6 +125,52 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	 * @generated
 	 */
 	@Override
+	public double getPathLength() {
+		return pathLength;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setPathLength(double newPathLength) {
+		double oldPathLength = pathLength;
+		pathLength = newPathLength;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__PATH_LENGTH, oldPathLength, pathLength));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public int getMaxIterations() {
+		return maxIterations;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setMaxIterations(int newMaxIterations) {
+		int oldMaxIterations = maxIterations;
+		maxIterations = newMaxIterations;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS, oldMaxIterations, maxIterations));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
@@ -98,6 +189,10 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 		switch (featureID) {
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
 				return getRegions();
+			case WorkspacePackage.METHOD_VERSION__PATH_LENGTH:
+				return getPathLength();
+			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
+				return getMaxIterations();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -115,6 +210,12 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 				getRegions().clear();
 				getRegions().addAll((Collection<? extends AnalysisRegion>)newValue);
 				return;
+			case WorkspacePackage.METHOD_VERSION__PATH_LENGTH:
+				setPathLength((Double)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
+				setMaxIterations((Integer)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -130,6 +231,12 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
 				getRegions().clear();
 				return;
+			case WorkspacePackage.METHOD_VERSION__PATH_LENGTH:
+				setPathLength(PATH_LENGTH_EDEFAULT);
+				return;
+			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
+				setMaxIterations(MAX_ITERATIONS_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -144,8 +251,30 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 		switch (featureID) {
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
 				return regions != null && !regions.isEmpty();
+			case WorkspacePackage.METHOD_VERSION__PATH_LENGTH:
+				return pathLength != PATH_LENGTH_EDEFAULT;
+			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
+				return maxIterations != MAX_ITERATIONS_EDEFAULT;
 		}
 		return super.eIsSet(featureID);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String toString() {
+		if (eIsProxy()) return super.toString();
+
+		StringBuilder result = new StringBuilder(super.toString());
+		result.append(" (pathLength: ");
+		result.append(pathLength);
+		result.append(", maxIterations: ");
+		result.append(maxIterations);
+		result.append(')');
+		return result.toString();
 	}
 
 } //MethodVersionImpl

@@ -9,6 +9,8 @@ import java.util.TreeSet;
 
 import org.eclipse.emf.common.command.CommandStackListener;
 import org.eclipse.emf.common.command.CompoundCommand;
+import org.eclipse.emf.edit.command.AddCommand;
+import org.eclipse.emf.edit.command.RemoveCommand;
 import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.emf.edit.command.SetCommand;
 import org.eclipse.jface.fieldassist.ControlDecoration;
@@ -30,6 +32,7 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.model.WorkspacePackage.Literals;
 import org.tracegas.model.edit.ModelEditor;
 import org.tracegas.store.Session;
@@ -37,8 +40,9 @@ import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
- * Edits a draft method version in the model through the editing domain: the method's name and, region by region,
- * the compound, the analyte's interferents and the span. Every accepted change is one command, so Undo and Redo
+ * Edits a draft method version in the model through the editing domain: the method's name, path length and
+ * iteration limit, the regions (added and removed) and, region by region, the compound, the analyte's
+ * interferents, the span and the baseline order. Every accepted change is one command, so Undo and Redo
  * walk back and forth through them. Fields are checked as they are typed; a
  * wrong field is marked and named below the form and the model keeps its last good value. The comparison
  * below shows the version as opened (A) beside the draft (B), both in the text of a method file. Saving
@@ -60,6 +64,11 @@ public final class MethodEditorPanel extends Composite {
     private final Text interferents;
     private final Text lower;
     private final Text upper;
+    private final Text baseline;
+    private final Text pathLength;
+    private final Text maxIterations;
+    private final Button addRegion;
+    private final Button removeRegion;
     private final Label problems;
     private final Button undo;
     private final Button redo;
@@ -89,17 +98,28 @@ public final class MethodEditorPanel extends Composite {
         Composite form = new Composite(sash, SWT.NONE);
         form.setLayout(new GridLayout(4, false));
         name = field(form, "Method name");
+        pathLength = field(form, "Path length (m)");
+        maxIterations = field(form, "Max. fit iterations");
         new Label(form, SWT.NONE).setText("Analysis region");
         region = new Combo(form, SWT.READ_ONLY);
-        GridData cd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
+        GridData cd = new GridData(SWT.FILL, SWT.CENTER, true, false, 1, 1);
         cd.widthHint = NARROW;
         region.setLayoutData(cd);
         region.addListener(SWT.Selection, e -> fill());
+        addRegion = new Button(form, SWT.PUSH);
+        addRegion.setText("Add");
+        addRegion.setToolTipText("Adds a region of the selected region's analyte beside it");
+        addRegion.addListener(SWT.Selection, e -> addRegion());
+        removeRegion = new Button(form, SWT.PUSH);
+        removeRegion.setText("Remove");
+        removeRegion.addListener(SWT.Selection, e -> removeRegion());
         compound = field(form, "Compound");
         interferents = field(form, "Interferents");
         interferents.setMessage("compounds fitted with it, separated by commas");
         lower = field(form, "Lower wavenumber (cm⁻¹)");
         upper = field(form, "Upper wavenumber (cm⁻¹)");
+        baseline = field(form, "Baseline order");
+        baseline.setMessage("0 offset, 1 sloping line, up to " + org.tracegas.quantify.AnalysisRegion.MAX_BASELINE_ORDER);
         problems = new Label(form, SWT.WRAP);
         problems.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
         problems.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1));
@@ -116,13 +136,13 @@ public final class MethodEditorPanel extends Composite {
         undo.setText("Undo");
         undo.addListener(SWT.Selection, e -> {
             editor.undo();
-            fill();
+            listRegions(region.getSelectionIndex());
         });
         redo = new Button(buttons, SWT.PUSH);
         redo.setText("Redo");
         redo.addListener(SWT.Selection, e -> {
             editor.redo();
-            fill();
+            listRegions(region.getSelectionIndex());
         });
         save = new Button(buttons, SWT.PUSH);
         save.setText("Save as new version");
@@ -148,6 +168,21 @@ public final class MethodEditorPanel extends Composite {
                 "Lower wavenumber"));
         upper.addListener(SWT.Modify, e -> applyBound(upper, Literals.ANALYSIS_REGION__UPPER_WAVENUMBER,
                 "Upper wavenumber"));
+        baseline.addListener(SWT.Modify, e -> {
+            String problem = FieldCheck.baselineOrder(baseline.getText());
+            apply(baseline, selectedRegion(), Literals.ANALYSIS_REGION__BASELINE_ORDER, problem,
+                    problem == null ? Integer.valueOf(baseline.getText().trim()) : null);
+        });
+        pathLength.addListener(SWT.Modify, e -> {
+            String problem = FieldCheck.pathLength(pathLength.getText());
+            apply(pathLength, version, Literals.METHOD_VERSION__PATH_LENGTH, problem,
+                    problem == null ? Double.valueOf(pathLength.getText().trim()) : null);
+        });
+        maxIterations.addListener(SWT.Modify, e -> {
+            String problem = FieldCheck.maxIterations(maxIterations.getText());
+            apply(maxIterations, version, Literals.METHOD_VERSION__MAX_ITERATIONS, problem,
+                    problem == null ? Integer.valueOf(maxIterations.getText().trim()) : null);
+        });
         updateButtons();
     }
 
@@ -216,13 +251,55 @@ public final class MethodEditorPanel extends Composite {
         this.stored = stored;
         this.opened = stored.declaration();
         this.line = readLine();
+        listRegions(0);
+    }
+
+    /** Lists the draft's regions, selects the one at the index (or the last) and fills the form. */
+    private void listRegions(int select) {
         region.removeAll();
         for (AnalysisRegion r : version.getRegions()) {
             region.add(r.getCompound() + "  " + Math.round(r.getLowerWavenumber()) + "–"
                     + Math.round(r.getUpperWavenumber()) + " cm⁻¹");
         }
-        region.select(0);
+        region.select(Math.max(0, Math.min(select, region.getItemCount() - 1)));
         fill();
+    }
+
+    /**
+     * Adds, right after the selected region, a region of its analyte (compound, interferents, baseline order) over
+     * a span of the same width 1 cm⁻¹ above it (an analyte's regions must not touch): one command.
+     */
+    private void addRegion() {
+        AnalysisRegion r = selectedRegion();
+        if (r == null) {
+            return;
+        }
+        AnalysisRegion added = WorkspaceFactory.eINSTANCE.createAnalysisRegion();
+        added.setCompound(r.getCompound());
+        added.getInterferents().addAll(r.getInterferents());
+        added.setBaselineOrder(r.getBaselineOrder());
+        added.setLowerWavenumber(r.getUpperWavenumber() + 1);
+        added.setUpperWavenumber(Math.min(FieldCheck.HIGHEST, 2 * r.getUpperWavenumber() - r.getLowerWavenumber() + 1));
+        int at = region.getSelectionIndex() + 1;
+        editor.domain().getCommandStack().execute(AddCommand.create(editor.domain(), version,
+                Literals.METHOD_VERSION__REGIONS, added, at));
+        listRegions(at);
+    }
+
+    /** Removes the selected region (one command); the method keeps at least one. */
+    private void removeRegion() {
+        AnalysisRegion r = selectedRegion();
+        if (r == null) {
+            return;
+        }
+        if (version.getRegions().size() == 1) {
+            problems.setText("Regions: a method needs at least one region; add another before removing this one");
+            return;
+        }
+        int at = region.getSelectionIndex();
+        editor.domain().getCommandStack().execute(RemoveCommand.create(editor.domain(), version,
+                Literals.METHOD_VERSION__REGIONS, r));
+        listRegions(at);
     }
 
     private AnalysisRegion selectedRegion() {
@@ -234,11 +311,14 @@ public final class MethodEditorPanel extends Composite {
         filling = true;
         try {
             name.setText(method.getName());
+            pathLength.setText(Double.toString(version.getPathLength()));
+            maxIterations.setText(Integer.toString(version.getMaxIterations()));
             AnalysisRegion r = selectedRegion();
             compound.setText(r == null ? "" : r.getCompound());
             interferents.setText(r == null ? "" : String.join(", ", r.getInterferents()));
             lower.setText(r == null ? "" : number(r.getLowerWavenumber()));
             upper.setText(r == null ? "" : number(r.getUpperWavenumber()));
+            baseline.setText(r == null ? "" : Integer.toString(r.getBaselineOrder()));
         } finally {
             filling = false;
         }
@@ -447,6 +527,7 @@ public final class MethodEditorPanel extends Composite {
     private void updateButtons() {
         undo.setEnabled(editor.canUndo());
         redo.setEnabled(editor.canRedo());
+        removeRegion.setEnabled(version != null && version.getRegions().size() > 1);
         save.setEnabled(store != null && editor.canUndo());
     }
 
@@ -472,6 +553,30 @@ public final class MethodEditorPanel extends Composite {
 
     public Text compoundField() {
         return compound;
+    }
+
+    public Text baselineField() {
+        return baseline;
+    }
+
+    public Text pathLengthField() {
+        return pathLength;
+    }
+
+    public Text maxIterationsField() {
+        return maxIterations;
+    }
+
+    public Button addRegionButton() {
+        return addRegion;
+    }
+
+    public Button removeRegionButton() {
+        return removeRegion;
+    }
+
+    public Combo regionChooser() {
+        return region;
     }
 
     public Label problems() {
