@@ -7,8 +7,11 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
+import org.tracegas.quantify.FitAlgorithm;
+import org.tracegas.quantify.FitAlgorithmRegistry;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.WavenumberWindow;
 import org.tracegas.store.Session;
@@ -20,7 +23,7 @@ import org.tracegas.store.WorkspaceStore;
  * A stored method version in the workspace model, where the workbench edits it, and the edit back into a new
  * version through the same store service and the same stored text ({@link StoredMethod}) the runner uses.
  * <p>
- * The model holds the method's path length and iteration limit, and each region of each analyte in the method's
+ * The model holds the method's path length, iteration limit, fit algorithm and path source, and each region of each analyte in the method's
  * order as one {@link org.tracegas.model.AnalysisRegion} (its compound, its span, its baseline order and the
  * analyte's interferents); regions are added and removed in the model. Everything else of the method (other
  * settings, transform, references, residual limits, the windows inside a span) is kept from the version the
@@ -40,7 +43,7 @@ public final class MethodVersions {
     /** The model of a method version whose stored method is at hand. */
     public static AnalysisMethod model(VersionInfo version, StoredMethod stored) {
         AnalysisMethod m = model(version);
-        fillRegions(m.getVersions().get(0), stored.method());
+        fillRegions(m.getVersions().get(0), stored);
         return m;
     }
 
@@ -62,13 +65,16 @@ public final class MethodVersions {
     }
 
     /**
-     * Sets the model's regions and settings to those of a method (for a draft that is thrown away, say); each
-     * region remembers its place in the method ({@code openedAs}).
+     * Sets the model's regions and settings to those of a stored method (for a draft that is thrown away, say);
+     * each region remembers its place in the method ({@code openedAs}).
      */
-    public static void fillRegions(MethodVersion version, QuantificationMethod method) {
+    public static void fillRegions(MethodVersion version, StoredMethod stored) {
+        QuantificationMethod method = stored.method();
         version.getRegions().clear();
         version.setPathLength(method.pathLengthMetres());
         version.setMaxIterations(method.maxIterations());
+        version.setAlgorithm(method.algorithm().name());
+        version.setPathSource(text(stored.pathSource()));
         int place = 0;
         for (Analyte a : method.analytes()) {
             for (AnalysisRegion r : a.regions()) {
@@ -86,7 +92,9 @@ public final class MethodVersions {
 
     /**
      * The method the edited model declares: the method it was opened from, with the model's path length,
-     * iteration limit, and regions. Each run of regions of one compound is one analyte, in the model's order;
+     * iteration limit, fit algorithm, path source and regions. The algorithm keeps its settings while it is the
+     * opened one; another is taken without settings, and one that needs them (line-list, whose line lists and cell
+     * conditions the method file's block gives) is refused. Each run of regions of one compound is one analyte, in the model's order;
      * a region the method was opened with keeps its residual limit, and its windows while its span is unchanged;
      * a region added in the model is one window without a residual limit.
      *
@@ -110,11 +118,18 @@ public final class MethodVersions {
             throw new IllegalArgumentException("max iterations: must be at least 1, was "
                     + draft.getMaxIterations());
         }
+        PathOrigin pathSource = pathSource(draft.getPathSource());
         List<AnalysisRegion> openedRegions = base.analytes().stream().flatMap(a -> a.regions().stream()).toList();
         QuantificationMethod.Builder b = QuantificationMethod.builder(base.name())
                 .pathLengthMetres(draft.getPathLength()).nonlinearity(base.nonlinearity())
                 .tolerance(base.tolerance()).maxIterations(draft.getMaxIterations())
                 .maxAbsorbance(base.maxAbsorbance()).shiftTerm(base.shiftTerm()).reportingUnit(base.reportingUnit());
+        if (base.algorithm().name().equals(draft.getAlgorithm())) {
+            b.algorithm(base.algorithm());
+            base.algorithmSettings().forEach(b::algorithmSetting);
+        } else {
+            b.algorithm(algorithm(draft.getAlgorithm()));
+        }
         java.util.Set<String> compounds = new java.util.HashSet<>();
         int next = 0;
         while (next < regions.size()) {
@@ -145,12 +160,51 @@ public final class MethodVersions {
         try {
             built = b.build();
         } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("regions: " + e.getMessage(), e);
+            throw new IllegalArgumentException("the edited method: " + e.getMessage(), e);
         }
         // the references are the opened version's, so are their conditions
         return new StoredMethod(built, opened.transform(), opened.libraryVersionId(),
                 opened.libraryContentHash(), opened.recipe(), opened.resolution(), opened.referenceConditions(),
-                opened.pathSource());
+                pathSource);
+    }
+
+    /**
+     * The fit algorithms the model of a version opened from the method may name: those installed that need no
+     * settings of their own, and the opened one.
+     */
+    public static List<String> algorithms(StoredMethod opened) {
+        java.util.Set<String> names = new java.util.TreeSet<>(FitAlgorithmRegistry.installed().names());
+        names.remove(LineListBlock.NAME);
+        names.add(opened.method().algorithm().name());
+        return List.copyOf(names);
+    }
+
+    /** The path sources a method text names, in its words. */
+    public static List<String> pathSources() {
+        return java.util.Arrays.stream(PathOrigin.values()).map(MethodVersions::text).toList();
+    }
+
+    private static FitAlgorithm algorithm(String name) {
+        if (LineListBlock.NAME.equals(name)) {
+            throw new IllegalArgumentException("algorithm: " + name + " computes its spectra from the line lists"
+                    + " and cell conditions of a [" + LineListBlock.NAME + "] block; choose it in the method file");
+        }
+        FitAlgorithmRegistry installed = FitAlgorithmRegistry.installed();
+        return installed.find(name == null ? "" : name).orElseThrow(() -> new IllegalArgumentException(
+                "algorithm: '" + name + "' is none of the installed fit algorithms " + installed.names()));
+    }
+
+    private static PathOrigin pathSource(String text) {
+        for (PathOrigin o : PathOrigin.values()) {
+            if (text(o).equals(text)) {
+                return o;
+            }
+        }
+        throw new IllegalArgumentException("path source: '" + text + "' is none of " + pathSources());
+    }
+
+    private static String text(PathOrigin origin) {
+        return origin.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
     }
 
     /**

@@ -20,6 +20,8 @@ import org.eclipse.emf.common.util.EList;
  *   <li>{@link org.tracegas.model.MethodVersion#getRegions <em>Regions</em>}</li>
  *   <li>{@link org.tracegas.model.MethodVersion#getPathLength <em>Path Length</em>}</li>
  *   <li>{@link org.tracegas.model.MethodVersion#getMaxIterations <em>Max Iterations</em>}</li>
+ *   <li>{@link org.tracegas.model.MethodVersion#getAlgorithm <em>Algorithm</em>}</li>
+ *   <li>{@link org.tracegas.model.MethodVersion#getPathSource <em>Path Source</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getMethodVersion()
@@ -88,5 +90,55 @@ public interface MethodVersion extends ContentVersion {
 	 * @generated
 	 */
 	void setMaxIterations(int value);
+
+	/**
+	 * Returns the value of the '<em><b>Algorithm</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Name of the fit algorithm, as the method text names it (classical-least-squares, curve-of-growth, or one another bundle installs).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Algorithm</em>' attribute.
+	 * @see #setAlgorithm(String)
+	 * @see org.tracegas.model.WorkspacePackage#getMethodVersion_Algorithm()
+	 * @model
+	 * @generated
+	 */
+	String getAlgorithm();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.MethodVersion#getAlgorithm <em>Algorithm</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Algorithm</em>' attribute.
+	 * @see #getAlgorithm()
+	 * @generated
+	 */
+	void setAlgorithm(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Path Source</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Where the cell path that results are corrected to comes from, as the method text names it: nominal (the path length), or cts-derived (the effective path the campaign's calibration transfer standard readings measure).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Path Source</em>' attribute.
+	 * @see #setPathSource(String)
+	 * @see org.tracegas.model.WorkspacePackage#getMethodVersion_PathSource()
+	 * @model
+	 * @generated
+	 */
+	String getPathSource();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.MethodVersion#getPathSource <em>Path Source</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Path Source</em>' attribute.
+	 * @see #getPathSource()
+	 * @generated
+	 */
+	void setPathSource(String value);
 
 } // MethodVersion

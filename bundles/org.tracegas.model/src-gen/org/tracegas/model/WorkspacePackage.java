@@ -863,13 +863,31 @@ public interface WorkspacePackage extends EPackage {
 	int METHOD_VERSION__MAX_ITERATIONS = CONTENT_VERSION_FEATURE_COUNT + 2;
 
 	/**
+	 * The feature id for the '<em><b>Algorithm</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__ALGORITHM = CONTENT_VERSION_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Path Source</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__PATH_SOURCE = CONTENT_VERSION_FEATURE_COUNT + 4;
+
+	/**
 	 * The number of structural features of the '<em>Method Version</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int METHOD_VERSION_FEATURE_COUNT = CONTENT_VERSION_FEATURE_COUNT + 3;
+	int METHOD_VERSION_FEATURE_COUNT = CONTENT_VERSION_FEATURE_COUNT + 5;
 
 	/**
 	 * The number of operations of the '<em>Method Version</em>' class.
@@ -1597,6 +1615,28 @@ public interface WorkspacePackage extends EPackage {
 	EAttribute getMethodVersion_MaxIterations();
 
 	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getAlgorithm <em>Algorithm</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Algorithm</em>'.
+	 * @see org.tracegas.model.MethodVersion#getAlgorithm()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_Algorithm();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getPathSource <em>Path Source</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Path Source</em>'.
+	 * @see org.tracegas.model.MethodVersion#getPathSource()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_PathSource();
+
+	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.AnalysisRegion <em>Analysis Region</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2206,6 +2246,22 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute METHOD_VERSION__MAX_ITERATIONS = eINSTANCE.getMethodVersion_MaxIterations();
+
+		/**
+		 * The meta object literal for the '<em><b>Algorithm</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__ALGORITHM = eINSTANCE.getMethodVersion_Algorithm();
+
+		/**
+		 * The meta object literal for the '<em><b>Path Source</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__PATH_SOURCE = eINSTANCE.getMethodVersion_PathSource();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.AnalysisRegionImpl <em>Analysis Region</em>}' class.

@@ -32,6 +32,8 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getRegions <em>Regions</em>}</li>
  *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getPathLength <em>Path Length</em>}</li>
  *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getMaxIterations <em>Max Iterations</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getAlgorithm <em>Algorithm</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getPathSource <em>Path Source</em>}</li>
  * </ul>
  *
  * @generated
@@ -86,6 +88,46 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	 * @ordered
 	 */
 	protected int maxIterations = MAX_ITERATIONS_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getAlgorithm() <em>Algorithm</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getAlgorithm()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String ALGORITHM_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getAlgorithm() <em>Algorithm</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getAlgorithm()
+	 * @generated
+	 * @ordered
+	 */
+	protected String algorithm = ALGORITHM_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getPathSource() <em>Path Source</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPathSource()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String PATH_SOURCE_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getPathSource() <em>Path Source</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPathSource()
+	 * @generated
+	 * @ordered
+	 */
+	protected String pathSource = PATH_SOURCE_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -171,6 +213,52 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	 * @generated
 	 */
 	@Override
+	public String getAlgorithm() {
+		return algorithm;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setAlgorithm(String newAlgorithm) {
+		String oldAlgorithm = algorithm;
+		algorithm = newAlgorithm;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__ALGORITHM, oldAlgorithm, algorithm));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String getPathSource() {
+		return pathSource;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setPathSource(String newPathSource) {
+		String oldPathSource = pathSource;
+		pathSource = newPathSource;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__PATH_SOURCE, oldPathSource, pathSource));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
@@ -193,6 +281,10 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 				return getPathLength();
 			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
 				return getMaxIterations();
+			case WorkspacePackage.METHOD_VERSION__ALGORITHM:
+				return getAlgorithm();
+			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
+				return getPathSource();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -216,6 +308,12 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
 				setMaxIterations((Integer)newValue);
 				return;
+			case WorkspacePackage.METHOD_VERSION__ALGORITHM:
+				setAlgorithm((String)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
+				setPathSource((String)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -237,6 +335,12 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
 				setMaxIterations(MAX_ITERATIONS_EDEFAULT);
 				return;
+			case WorkspacePackage.METHOD_VERSION__ALGORITHM:
+				setAlgorithm(ALGORITHM_EDEFAULT);
+				return;
+			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
+				setPathSource(PATH_SOURCE_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -255,6 +359,10 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 				return pathLength != PATH_LENGTH_EDEFAULT;
 			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
 				return maxIterations != MAX_ITERATIONS_EDEFAULT;
+			case WorkspacePackage.METHOD_VERSION__ALGORITHM:
+				return ALGORITHM_EDEFAULT == null ? algorithm != null : !ALGORITHM_EDEFAULT.equals(algorithm);
+			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
+				return PATH_SOURCE_EDEFAULT == null ? pathSource != null : !PATH_SOURCE_EDEFAULT.equals(pathSource);
 		}
 		return super.eIsSet(featureID);
 	}
@@ -273,6 +381,10 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 		result.append(pathLength);
 		result.append(", maxIterations: ");
 		result.append(maxIterations);
+		result.append(", algorithm: ");
+		result.append(algorithm);
+		result.append(", pathSource: ");
+		result.append(pathSource);
 		result.append(')');
 		return result.toString();
 	}

@@ -745,6 +745,26 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EAttribute getMethodVersion_Algorithm() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMethodVersion_PathSource() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getAnalysisRegion() {
 		return analysisRegionEClass;
 	}
@@ -968,6 +988,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEReference(methodVersionEClass, METHOD_VERSION__REGIONS);
 		createEAttribute(methodVersionEClass, METHOD_VERSION__PATH_LENGTH);
 		createEAttribute(methodVersionEClass, METHOD_VERSION__MAX_ITERATIONS);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__ALGORITHM);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__PATH_SOURCE);
 
 		analysisRegionEClass = createEClass(ANALYSIS_REGION);
 		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__COMPOUND);
@@ -1086,6 +1108,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEReference(getMethodVersion_Regions(), this.getAnalysisRegion(), null, "regions", null, 0, -1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMethodVersion_PathLength(), ecorePackage.getEDouble(), "pathLength", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMethodVersion_MaxIterations(), ecorePackage.getEInt(), "maxIterations", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_Algorithm(), ecorePackage.getEString(), "algorithm", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_PathSource(), ecorePackage.getEString(), "pathSource", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(analysisRegionEClass, AnalysisRegion.class, "AnalysisRegion", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getAnalysisRegion_Compound(), ecorePackage.getEString(), "compound", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);

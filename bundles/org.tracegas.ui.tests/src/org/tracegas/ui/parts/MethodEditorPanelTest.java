@@ -323,6 +323,41 @@ class MethodEditorPanelTest {
         assertEquals(demo.method().method().analytes(), back.method().analytes());
     }
 
+    private static void choose(org.eclipse.swt.widgets.Combo c, String item) {
+        c.select(c.indexOf(item));
+        c.notifyListeners(SWT.Selection, new Event());
+    }
+
+    @Test
+    void theFitAlgorithmAndPathSourceAreChosenAsCommandsAndSaved() throws Exception {
+        MethodVersion v = method.getVersions().get(0);
+        // the method texts' names (MethodDefinition): the default algorithm and the nominal path
+        assertEquals("classical-least-squares", panel.algorithmChooser().getText());
+        assertEquals("nominal", panel.pathSourceChooser().getText());
+        assertEquals(List.of("nominal", "cts-derived"), List.of(panel.pathSourceChooser().getItems()));
+        assertTrue(List.of(panel.algorithmChooser().getItems()).contains("curve-of-growth"));
+        assertFalse(List.of(panel.algorithmChooser().getItems()).contains("line-list"),
+                "line-list needs the method file's [line-list] block");
+        choose(panel.algorithmChooser(), "curve-of-growth");
+        choose(panel.pathSourceChooser(), "cts-derived");
+        assertEquals("curve-of-growth", v.getAlgorithm());
+        assertEquals("cts-derived", v.getPathSource());
+        assertEquals("2 fields differ (highlighted).", panel.comparison().summary().getText());
+        press(panel.undoButton());
+        assertEquals("nominal", v.getPathSource());
+        assertEquals("nominal", panel.pathSourceChooser().getText());
+        press(panel.redoButton());
+
+        panel.reasonField().setText("Curve of growth for the strong CO lines; path from the CTS readings");
+        press(panel.saveButton());
+        assertEquals("Saved as version 2.", panel.problems().getText());
+        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
+        StoredMethod back = StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+        assertEquals("curve-of-growth", back.method().algorithm().name());
+        assertTrue(back.declaration().contains("\npath-source = cts-derived\n"), back.declaration());
+        assertEquals(demo.method().method().analytes(), back.method().analytes());
+    }
+
     @Test
     void aVersionWithoutAMethodTextIsNamedAndNotOpened() {
         VersionInfo other = access.store().versions().create(analyst, VersionKind.METHOD, "Not a method",

@@ -19,6 +19,7 @@ import org.eclipse.swt.graphics.GC;
 import org.eclipse.swt.graphics.Image;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.custom.ScrolledComposite;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Button;
@@ -40,8 +41,8 @@ import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
- * Edits a draft method version in the model through the editing domain: the method's name, path length and
- * iteration limit, the regions (added and removed) and, region by region, the compound, the analyte's
+ * Edits a draft method version in the model through the editing domain: the method's name, path length,
+ * iteration limit, fit algorithm and path source, the regions (added and removed) and, region by region, the compound, the analyte's
  * interferents, the span and the baseline order. Every accepted change is one command, so Undo and Redo
  * walk back and forth through them. Fields are checked as they are typed; a
  * wrong field is marked and named below the form and the model keeps its last good value. The comparison
@@ -67,6 +68,8 @@ public final class MethodEditorPanel extends Composite {
     private final Text baseline;
     private final Text pathLength;
     private final Text maxIterations;
+    private final Combo algorithm;
+    private final Combo pathSource;
     private final Button addRegion;
     private final Button removeRegion;
     private final Label problems;
@@ -95,22 +98,36 @@ public final class MethodEditorPanel extends Composite {
         setLayout(new GridLayout(1, false));
         SashForm sash = new SashForm(this, SWT.VERTICAL);
         sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        Composite form = new Composite(sash, SWT.NONE);
+        // the form scrolls where the view is too low for all its fields
+        ScrolledComposite scroll = new ScrolledComposite(sash, SWT.V_SCROLL);
+        Composite form = new Composite(scroll, SWT.NONE);
         form.setLayout(new GridLayout(4, false));
         name = field(form, "Method name");
         pathLength = field(form, "Path length (m)");
         maxIterations = field(form, "Max. fit iterations");
+        algorithm = choice(form, "Fit algorithm", Literals.METHOD_VERSION__ALGORITHM);
+        pathSource = choice(form, "Path source", Literals.METHOD_VERSION__PATH_SOURCE);
+        pathSource.setToolTipText("nominal: the path length; cts-derived: the effective path the campaign's"
+                + " calibration transfer standard readings measure");
         new Label(form, SWT.NONE).setText("Analysis region");
         region = new Combo(form, SWT.READ_ONLY);
-        GridData cd = new GridData(SWT.FILL, SWT.CENTER, true, false, 1, 1);
+        GridData cd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
         cd.widthHint = NARROW;
         region.setLayoutData(cd);
         region.addListener(SWT.Selection, e -> fill());
-        addRegion = new Button(form, SWT.PUSH);
+        // the buttons on a line of their own below the choice, which keeps the narrow view's width
+        new Label(form, SWT.NONE);
+        Composite regionButtons = new Composite(form, SWT.NONE);
+        GridLayout rl = new GridLayout(2, true);
+        rl.marginWidth = 0;
+        rl.marginHeight = 0;
+        regionButtons.setLayout(rl);
+        regionButtons.setLayoutData(new GridData(SWT.BEGINNING, SWT.CENTER, false, false, 3, 1));
+        addRegion = new Button(regionButtons, SWT.PUSH);
         addRegion.setText("Add");
         addRegion.setToolTipText("Adds a region of the selected region's analyte beside it");
         addRegion.addListener(SWT.Selection, e -> addRegion());
-        removeRegion = new Button(form, SWT.PUSH);
+        removeRegion = new Button(regionButtons, SWT.PUSH);
         removeRegion.setText("Remove");
         removeRegion.addListener(SWT.Selection, e -> removeRegion());
         compound = field(form, "Compound");
@@ -147,6 +164,11 @@ public final class MethodEditorPanel extends Composite {
         save = new Button(buttons, SWT.PUSH);
         save.setText("Save as new version");
         save.addListener(SWT.Selection, e -> save());
+        scroll.setContent(form);
+        scroll.setExpandHorizontal(true);
+        scroll.setExpandVertical(true);
+        scroll.addListener(SWT.Resize, e -> scroll.setMinSize(form.computeSize(scroll.getClientArea().width,
+                SWT.DEFAULT)));
         comparison = new VersionComparisonPanel(sash, SWT.NONE);
         sash.setWeights(1, 1);
         // the form gets the height it needs (at most three quarters), the comparison the rest
@@ -200,6 +222,23 @@ public final class MethodEditorPanel extends Composite {
         return t;
     }
 
+    /** A read-only choice of a method version's feature: choosing sets it through one command. */
+    private Combo choice(Composite form, String label, EStructuralFeature feature) {
+        new Label(form, SWT.NONE).setText(label);
+        Combo c = new Combo(form, SWT.READ_ONLY);
+        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
+        gd.horizontalIndent = 8;
+        gd.widthHint = NARROW;
+        c.setLayoutData(gd);
+        c.addListener(SWT.Selection, e -> {
+            if (!filling && version != null && !c.getText().equals(version.eGet(feature))) {
+                editor.set(version, feature, c.getText());
+                afterCommand();
+            }
+        });
+        return c;
+    }
+
     /** A small red disc with a white bar, drawn here so it needs no image files. */
     private static Image errorMark(Display display) {
         Image img = new Image(display, 9, 9);
@@ -251,6 +290,8 @@ public final class MethodEditorPanel extends Composite {
         this.stored = stored;
         this.opened = stored.declaration();
         this.line = readLine();
+        algorithm.setItems(MethodVersions.algorithms(stored).toArray(String[]::new));
+        pathSource.setItems(MethodVersions.pathSources().toArray(String[]::new));
         listRegions(0);
     }
 
@@ -313,6 +354,8 @@ public final class MethodEditorPanel extends Composite {
             name.setText(method.getName());
             pathLength.setText(Double.toString(version.getPathLength()));
             maxIterations.setText(Integer.toString(version.getMaxIterations()));
+            algorithm.select(algorithm.indexOf(version.getAlgorithm()));
+            pathSource.select(pathSource.indexOf(version.getPathSource()));
             AnalysisRegion r = selectedRegion();
             compound.setText(r == null ? "" : r.getCompound());
             interferents.setText(r == null ? "" : String.join(", ", r.getInterferents()));
@@ -515,7 +558,7 @@ public final class MethodEditorPanel extends Composite {
             return;
         }
         // the opened version stays as it was stored; the draft becomes the new version, opened afresh
-        MethodVersions.fillRegions(version, stored.method());
+        MethodVersions.fillRegions(version, stored);
         MethodVersion saved = MethodVersions.model(next, edited).getVersions().get(0);
         method.getVersions().add(saved);
         editor.domain().getCommandStack().flush();
@@ -565,6 +608,14 @@ public final class MethodEditorPanel extends Composite {
 
     public Text maxIterationsField() {
         return maxIterations;
+    }
+
+    public Combo algorithmChooser() {
+        return algorithm;
+    }
+
+    public Combo pathSourceChooser() {
+        return pathSource;
     }
 
     public Button addRegionButton() {
