@@ -137,13 +137,26 @@ public final class MethodEditorPanel extends Composite {
         upper = field(form, "Upper wavenumber (cm⁻¹)");
         baseline = field(form, "Baseline order");
         baseline.setMessage("0 offset, 1 sloping line, up to " + org.tracegas.quantify.AnalysisRegion.MAX_BASELINE_ORDER);
-        problems = new Label(form, SWT.WRAP);
+        scroll.setContent(form);
+        scroll.setExpandHorizontal(true);
+        scroll.setExpandVertical(true);
+        scroll.addListener(SWT.Resize, e -> scroll.setMinSize(form.computeSize(scroll.getClientArea().width,
+                SWT.DEFAULT)));
+        comparison = new VersionComparisonPanel(sash, SWT.NONE);
+        // the problems, the reason and the buttons below both, in sight however far the form is scrolled
+        problems = new Label(this, SWT.WRAP);
         problems.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
-        problems.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1));
+        GridData pd = new GridData(SWT.FILL, SWT.TOP, true, false);
+        pd.widthHint = NARROW;
+        // two lines kept for the message, so that one appearing does not need the panel laid out again
+        GC metrics = new GC(problems);
+        pd.heightHint = 2 * metrics.getFontMetrics().getHeight();
+        metrics.dispose();
+        problems.setLayoutData(pd);
         // the reason on a line of its own and the buttons below it: the view beside the spectrum is narrow
-        Composite buttons = new Composite(form, SWT.NONE);
+        Composite buttons = new Composite(this, SWT.NONE);
         buttons.setLayout(new GridLayout(3, false));
-        buttons.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1));
+        buttons.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
         reason = new Text(buttons, SWT.BORDER);
         reason.setMessage("Reason for the new version");
         GridData rd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
@@ -164,12 +177,6 @@ public final class MethodEditorPanel extends Composite {
         save = new Button(buttons, SWT.PUSH);
         save.setText("Save as new version");
         save.addListener(SWT.Selection, e -> save());
-        scroll.setContent(form);
-        scroll.setExpandHorizontal(true);
-        scroll.setExpandVertical(true);
-        scroll.addListener(SWT.Resize, e -> scroll.setMinSize(form.computeSize(scroll.getClientArea().width,
-                SWT.DEFAULT)));
-        comparison = new VersionComparisonPanel(sash, SWT.NONE);
         sash.setWeights(1, 1);
         // the form gets the height it needs (at most three quarters), the comparison the rest
         sash.addListener(SWT.Resize, e -> {
