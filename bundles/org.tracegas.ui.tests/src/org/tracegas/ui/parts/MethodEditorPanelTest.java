@@ -189,15 +189,9 @@ class MethodEditorPanelTest {
         press(panel.redoButton());
         assertEquals("H2O, N2O", panel.interferentsField().getText());
 
-        panel.reasonField().setText("N2O's band edge overlaps the CO window");
-        press(panel.saveButton());
-        assertEquals("Saved as version 2.", panel.problems().getText());
-        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
-        StoredMethod back = StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+        StoredMethod back = savedAsVersion2("N2O's band edge overlaps the CO window");
         assertEquals(List.of("H2O", "N2O"), back.method().analytes().get(0).interferents());
         assertEquals(List.of("CO"), back.method().analytes().get(1).interferents());
-        assertEquals(demo.methodVersionId(), saved.parentId());
-        assertEquals(analyst.userId(), saved.authorId());
     }
 
     @Test
@@ -234,6 +228,20 @@ class MethodEditorPanelTest {
         assertEquals("2 fields differ (highlighted).", c.summary().getText());
         assertTrue(List.of(c.table().getItems()).stream().anyMatch(i -> i.getText(0).equals("analyte.1.region.1")
                 && i.getText(2).equals("2080.0..2195.0 baseline 1")));
+    }
+
+    /**
+     * Saves the draft with a reason and reads the new version's stored method back, revised by the analyst from
+     * the version opened.
+     */
+    private StoredMethod savedAsVersion2(String reason) throws Exception {
+        panel.reasonField().setText(reason);
+        press(panel.saveButton());
+        assertEquals("Saved as version 2.", panel.problems().getText());
+        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
+        assertEquals(demo.methodVersionId(), saved.parentId());
+        assertEquals(analyst.userId(), saved.authorId());
+        return StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
     }
 
     private void choose(int index) {
@@ -283,11 +291,7 @@ class MethodEditorPanelTest {
         assertEquals(2, n2o.getOpenedAs());
         press(panel.redoButton());
 
-        panel.reasonField().setText("N2O reported from the second cell only");
-        press(panel.saveButton());
-        assertEquals("Saved as version 2.", panel.problems().getText());
-        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
-        StoredMethod back = StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+        StoredMethod back = savedAsVersion2("N2O reported from the second cell only");
         assertEquals(List.of("CO"), back.method().analytes().stream().map(Analyte::compound).toList());
         assertEquals(demo.method().method().analytes().get(0), back.method().analytes().get(0));
         assertEquals(demo.method().method().references(), back.method().references());
@@ -313,11 +317,7 @@ class MethodEditorPanelTest {
         press(panel.redoButton());
         Screens.save(shell, "method-editor-settings");
 
-        panel.reasonField().setText("Cell refitted with the longer mirror set");
-        press(panel.saveButton());
-        assertEquals("Saved as version 2.", panel.problems().getText());
-        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
-        StoredMethod back = StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+        StoredMethod back = savedAsVersion2("Cell refitted with the longer mirror set");
         assertEquals(9.75, back.method().pathLengthMetres());
         assertEquals(80, back.method().maxIterations());
         assertEquals(demo.method().method().analytes(), back.method().analytes());
@@ -348,11 +348,7 @@ class MethodEditorPanelTest {
         assertEquals("nominal", panel.pathSourceChooser().getText());
         press(panel.redoButton());
 
-        panel.reasonField().setText("Curve of growth for the strong CO lines; path from the CTS readings");
-        press(panel.saveButton());
-        assertEquals("Saved as version 2.", panel.problems().getText());
-        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
-        StoredMethod back = StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+        StoredMethod back = savedAsVersion2("Curve of growth for the strong CO lines; path from the CTS readings");
         assertEquals("curve-of-growth", back.method().algorithm().name());
         assertTrue(back.declaration().contains("\npath-source = cts-derived\n"), back.declaration());
         assertEquals(demo.method().method().analytes(), back.method().analytes());

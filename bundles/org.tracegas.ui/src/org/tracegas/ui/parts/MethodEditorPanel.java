@@ -197,31 +197,37 @@ public final class MethodEditorPanel extends Composite {
                 "Lower wavenumber"));
         upper.addListener(SWT.Modify, e -> applyBound(upper, Literals.ANALYSIS_REGION__UPPER_WAVENUMBER,
                 "Upper wavenumber"));
-        baseline.addListener(SWT.Modify, e -> {
-            String problem = FieldCheck.baselineOrder(baseline.getText());
-            apply(baseline, selectedRegion(), Literals.ANALYSIS_REGION__BASELINE_ORDER, problem,
-                    problem == null ? Integer.valueOf(baseline.getText().trim()) : null);
-        });
-        pathLength.addListener(SWT.Modify, e -> {
-            String problem = FieldCheck.pathLength(pathLength.getText());
-            apply(pathLength, version, Literals.METHOD_VERSION__PATH_LENGTH, problem,
-                    problem == null ? Double.valueOf(pathLength.getText().trim()) : null);
-        });
-        maxIterations.addListener(SWT.Modify, e -> {
-            String problem = FieldCheck.maxIterations(maxIterations.getText());
-            apply(maxIterations, version, Literals.METHOD_VERSION__MAX_ITERATIONS, problem,
-                    problem == null ? Integer.valueOf(maxIterations.getText().trim()) : null);
-        });
+        number(baseline, this::selectedRegion, Literals.ANALYSIS_REGION__BASELINE_ORDER, FieldCheck::baselineOrder,
+                Integer::valueOf);
+        number(pathLength, () -> version, Literals.METHOD_VERSION__PATH_LENGTH, FieldCheck::pathLength,
+                Double::valueOf);
+        number(maxIterations, () -> version, Literals.METHOD_VERSION__MAX_ITERATIONS, FieldCheck::maxIterations,
+                Integer::valueOf);
         updateButtons();
+    }
+
+    /** A number typed into a field sets a feature of its owner once the check finds nothing wrong with it. */
+    private void number(Text field, java.util.function.Supplier<org.eclipse.emf.ecore.EObject> owner,
+            EStructuralFeature feature, java.util.function.UnaryOperator<String> check,
+            java.util.function.Function<String, Object> value) {
+        field.addListener(SWT.Modify, e -> {
+            String problem = check.apply(field.getText());
+            apply(field, owner.get(), feature, problem, problem == null ? value.apply(field.getText().trim()) : null);
+        });
+    }
+
+    /** The layout of a field or choice: the three columns right of its label, as wide as the view gives. */
+    private static GridData fieldData() {
+        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
+        gd.horizontalIndent = 8;
+        gd.widthHint = NARROW;
+        return gd;
     }
 
     private Text field(Composite form, String label) {
         new Label(form, SWT.NONE).setText(label);
         Text t = new Text(form, SWT.BORDER);
-        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
-        gd.horizontalIndent = 8;
-        gd.widthHint = NARROW;
-        t.setLayoutData(gd);
+        t.setLayoutData(fieldData());
         ControlDecoration d = new ControlDecoration(t, SWT.LEFT | SWT.CENTER);
         d.setImage(errorMark);
         d.hide();
@@ -233,10 +239,7 @@ public final class MethodEditorPanel extends Composite {
     private Combo choice(Composite form, String label, EStructuralFeature feature) {
         new Label(form, SWT.NONE).setText(label);
         Combo c = new Combo(form, SWT.READ_ONLY);
-        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
-        gd.horizontalIndent = 8;
-        gd.widthHint = NARROW;
-        c.setLayoutData(gd);
+        c.setLayoutData(fieldData());
         c.addListener(SWT.Selection, e -> {
             if (!filling && version != null && !c.getText().equals(version.eGet(feature))) {
                 editor.set(version, feature, c.getText());
