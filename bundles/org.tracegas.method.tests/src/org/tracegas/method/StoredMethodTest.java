@@ -38,7 +38,7 @@ class StoredMethodTest {
         return new Spectrum(AXIS, v, Ordinate.ABSORBANCE);
     }
 
-    private static StoredMethod stored() {
+    static StoredMethod stored() {
         QuantificationMethod m = QuantificationMethod.builder("Kiln CO, N2O").pathLengthMetres(4.85)
                 .nonlinearity(false).tolerance(1e-7).shiftTerm(ShiftTerm.SHIFT)
                 .analyte(new Analyte("CO", List.of("N2O"), List.of(new AnalysisRegion(List.of(

@@ -7,8 +7,11 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
+import org.tracegas.quantify.FitAlgorithm;
+import org.tracegas.quantify.FitAlgorithmRegistry;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.WavenumberWindow;
 import org.tracegas.store.Session;
@@ -20,9 +23,11 @@ import org.tracegas.store.WorkspaceStore;
  * A stored method version in the workspace model, where the workbench edits it, and the edit back into a new
  * version through the same store service and the same stored text ({@link StoredMethod}) the runner uses.
  * <p>
- * The model holds each region of each analyte in the method's order as one {@link org.tracegas.model.AnalysisRegion}
- * (its compound, its span and the analyte's interferents); everything else of the method (settings, transform,
- * references, baseline orders, the windows inside a span) is kept from the version the edit started from.
+ * The model holds the method's path length, iteration limit, fit algorithm and path source, and each region of each analyte in the method's
+ * order as one {@link org.tracegas.model.AnalysisRegion} (its compound, its span, its baseline order and the
+ * analyte's interferents); regions are added and removed in the model. Everything else of the method (other
+ * settings, transform, references, residual limits, the windows inside a span) is kept from the version the
+ * edit started from.
  */
 public final class MethodVersions {
 
@@ -38,7 +43,7 @@ public final class MethodVersions {
     /** The model of a method version whose stored method is at hand. */
     public static AnalysisMethod model(VersionInfo version, StoredMethod stored) {
         AnalysisMethod m = model(version);
-        fillRegions(m.getVersions().get(0), stored.method());
+        fillRegions(m.getVersions().get(0), stored);
         return m;
     }
 
@@ -59,15 +64,26 @@ public final class MethodVersions {
         return m;
     }
 
-    /** Sets the model's regions to those of a method (for a draft that is thrown away, say). */
-    public static void fillRegions(MethodVersion version, QuantificationMethod method) {
+    /**
+     * Sets the model's regions and settings to those of a stored method (for a draft that is thrown away, say);
+     * each region remembers its place in the method ({@code openedAs}).
+     */
+    public static void fillRegions(MethodVersion version, StoredMethod stored) {
+        QuantificationMethod method = stored.method();
         version.getRegions().clear();
+        version.setPathLength(method.pathLengthMetres());
+        version.setMaxIterations(method.maxIterations());
+        version.setAlgorithm(method.algorithm().name());
+        version.setPathSource(text(stored.pathSource()));
+        int place = 0;
         for (Analyte a : method.analytes()) {
             for (AnalysisRegion r : a.regions()) {
                 org.tracegas.model.AnalysisRegion region = WorkspaceFactory.eINSTANCE.createAnalysisRegion();
                 region.setCompound(a.compound());
                 region.setLowerWavenumber(r.low());
                 region.setUpperWavenumber(r.high());
+                region.setBaselineOrder(r.baselineOrder());
+                region.setOpenedAs(++place);
                 region.getInterferents().addAll(a.interferents());
                 version.getRegions().add(region);
             }
@@ -75,8 +91,12 @@ public final class MethodVersions {
     }
 
     /**
-     * The method the edited model declares: the method it was opened from, with the model's compounds, spans
-     * and interferents.
+     * The method the edited model declares: the method it was opened from, with the model's path length,
+     * iteration limit, fit algorithm, path source and regions. The algorithm keeps its settings while it is the
+     * opened one; another is taken without settings, and one that needs them (line-list, whose line lists and cell
+     * conditions the method file's block gives) is refused. Each run of regions of one compound is one analyte, in the model's order;
+     * a region the method was opened with keeps its residual limit, and its windows while its span is unchanged;
+     * a region added in the model is one window without a residual limit.
      *
      * @throws IllegalArgumentException naming the region or the field the method cannot take
      */
@@ -87,51 +107,129 @@ public final class MethodVersions {
                     + base.name() + "'); a new name makes a new method");
         }
         List<org.tracegas.model.AnalysisRegion> regions = draft.getRegions();
-        int count = base.analytes().stream().mapToInt(a -> a.regions().size()).sum();
-        if (regions.size() != count) {
-            throw new IllegalArgumentException("regions: the draft has " + regions.size() + ", the method "
-                    + count + "; regions are added and removed in the method file");
+        if (regions.isEmpty()) {
+            throw new IllegalArgumentException("regions: a method needs at least one region");
         }
+        if (!(draft.getPathLength() > 0 && Double.isFinite(draft.getPathLength()))) {
+            throw new IllegalArgumentException("path length: must be a positive number of metres, was "
+                    + draft.getPathLength());
+        }
+        if (draft.getMaxIterations() < 1) {
+            throw new IllegalArgumentException("max iterations: must be at least 1, was "
+                    + draft.getMaxIterations());
+        }
+        PathOrigin pathSource = pathSource(draft.getPathSource());
+        List<AnalysisRegion> openedRegions = base.analytes().stream().flatMap(a -> a.regions().stream()).toList();
         QuantificationMethod.Builder b = QuantificationMethod.builder(base.name())
-                .pathLengthMetres(base.pathLengthMetres()).nonlinearity(base.nonlinearity())
-                .tolerance(base.tolerance()).maxIterations(base.maxIterations()).maxAbsorbance(base.maxAbsorbance())
-                .shiftTerm(base.shiftTerm()).reportingUnit(base.reportingUnit());
+                .pathLengthMetres(draft.getPathLength()).nonlinearity(base.nonlinearity())
+                .tolerance(base.tolerance()).maxIterations(draft.getMaxIterations())
+                .maxAbsorbance(base.maxAbsorbance()).shiftTerm(base.shiftTerm()).reportingUnit(base.reportingUnit());
+        if (base.algorithm().name().equals(draft.getAlgorithm())) {
+            b.algorithm(base.algorithm());
+            base.algorithmSettings().forEach(b::algorithmSetting);
+        } else {
+            b.algorithm(algorithm(draft.getAlgorithm()));
+        }
+        java.util.Set<String> compounds = new java.util.HashSet<>();
         int next = 0;
-        for (Analyte a : base.analytes()) {
+        while (next < regions.size()) {
             org.tracegas.model.AnalysisRegion first = regions.get(next);
-            List<AnalysisRegion> edited = new ArrayList<>();
-            for (AnalysisRegion r : a.regions()) {
-                org.tracegas.model.AnalysisRegion e = regions.get(next++);
-                if (!e.getCompound().equals(first.getCompound())
-                        || !e.getInterferents().equals(first.getInterferents())) {
-                    throw new IllegalArgumentException("region " + next + ": the regions of analyte "
-                            + a.compound() + " must name one compound and one list of interferents");
-                }
-                edited.add(span(r, e, next));
+            if (!compounds.add(first.getCompound())) {
+                throw new IllegalArgumentException("region " + (next + 1) + ": the regions of "
+                        + first.getCompound() + " must follow one another");
             }
-            b.analyte(new Analyte(first.getCompound(), first.getInterferents(), edited));
+            List<AnalysisRegion> edited = new ArrayList<>();
+            while (next < regions.size() && regions.get(next).getCompound().equals(first.getCompound())) {
+                org.tracegas.model.AnalysisRegion e = regions.get(next++);
+                if (!e.getInterferents().equals(first.getInterferents())) {
+                    throw new IllegalArgumentException("region " + next + ": the regions of analyte "
+                            + first.getCompound() + " must name one list of interferents");
+                }
+                edited.add(region(e, e.getOpenedAs() > 0 && e.getOpenedAs() <= openedRegions.size()
+                        ? openedRegions.get(e.getOpenedAs() - 1) : null, next));
+            }
+            try {
+                b.analyte(new Analyte(first.getCompound(), first.getInterferents(), edited));
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException("regions of " + first.getCompound() + ": " + e.getMessage(), e);
+            }
         }
         base.references().forEach(b::reference);
         base.weights().ifPresent(b::weights);
+        QuantificationMethod built;
+        try {
+            built = b.build();
+        } catch (IllegalArgumentException e) {
+            throw new IllegalArgumentException("the edited method: " + e.getMessage(), e);
+        }
         // the references are the opened version's, so are their conditions
-        return new StoredMethod(b.build(), opened.transform(), opened.libraryVersionId(),
+        return new StoredMethod(built, opened.transform(), opened.libraryVersionId(),
                 opened.libraryContentHash(), opened.recipe(), opened.resolution(), opened.referenceConditions(),
-                opened.pathSource());
+                pathSource);
     }
 
-    /** A region with the model's span: a region of one window takes it; one of several keeps its windows. */
-    private static AnalysisRegion span(AnalysisRegion r, org.tracegas.model.AnalysisRegion e, int number) {
+    /**
+     * The fit algorithms the model of a version opened from the method may name: those installed that need no
+     * settings of their own, and the opened one.
+     */
+    public static List<String> algorithms(StoredMethod opened) {
+        java.util.Set<String> names = new java.util.TreeSet<>(FitAlgorithmRegistry.installed().names());
+        names.remove(LineListBlock.NAME);
+        names.add(opened.method().algorithm().name());
+        return List.copyOf(names);
+    }
+
+    /** The path sources a method text names, in its words. */
+    public static List<String> pathSources() {
+        return java.util.Arrays.stream(PathOrigin.values()).map(MethodVersions::text).toList();
+    }
+
+    private static FitAlgorithm algorithm(String name) {
+        if (LineListBlock.NAME.equals(name)) {
+            throw new IllegalArgumentException("algorithm: " + name + " computes its spectra from the line lists"
+                    + " and cell conditions of a [" + LineListBlock.NAME + "] block; choose it in the method file");
+        }
+        FitAlgorithmRegistry installed = FitAlgorithmRegistry.installed();
+        return installed.find(name == null ? "" : name).orElseThrow(() -> new IllegalArgumentException(
+                "algorithm: '" + name + "' is none of the installed fit algorithms " + installed.names()));
+    }
+
+    private static PathOrigin pathSource(String text) {
+        for (PathOrigin o : PathOrigin.values()) {
+            if (text(o).equals(text)) {
+                return o;
+            }
+        }
+        throw new IllegalArgumentException("path source: '" + text + "' is none of " + pathSources());
+    }
+
+    private static String text(PathOrigin origin) {
+        return origin.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
+    }
+
+    /**
+     * The method's region of a model region: its span and baseline order, the residual limit of the region it was
+     * opened as (none for a new one), and the windows of that region while the span is unchanged.
+     */
+    private static AnalysisRegion region(org.tracegas.model.AnalysisRegion e, AnalysisRegion r, int number) {
         double low = e.getLowerWavenumber();
         double high = e.getUpperWavenumber();
-        if (r.windows().size() == 1) {
-            return new AnalysisRegion(List.of(new WavenumberWindow(low, high)), r.baselineOrder(),
-                    r.residualRmsLimit());
+        try {
+            if (r == null) {
+                return AnalysisRegion.of(low, high, e.getBaselineOrder());
+            }
+            if (r.windows().size() == 1) {
+                return new AnalysisRegion(List.of(new WavenumberWindow(low, high)), e.getBaselineOrder(),
+                        r.residualRmsLimit());
+            }
+            if (low != r.low() || high != r.high()) {
+                throw new IllegalArgumentException("it has " + r.windows().size()
+                        + " windows; change them in the method file");
+            }
+            return new AnalysisRegion(r.windows(), e.getBaselineOrder(), r.residualRmsLimit());
+        } catch (IllegalArgumentException x) {
+            throw new IllegalArgumentException("region " + number + ": " + x.getMessage(), x);
         }
-        if (low != r.low() || high != r.high()) {
-            throw new IllegalArgumentException("region " + number + ": it has " + r.windows().size()
-                    + " windows; change them in the method file");
-        }
-        return r;
     }
 
     /**

@@ -23,6 +23,8 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link org.tracegas.model.AnalysisRegion#getLowerWavenumber <em>Lower Wavenumber</em>}</li>
  *   <li>{@link org.tracegas.model.AnalysisRegion#getUpperWavenumber <em>Upper Wavenumber</em>}</li>
  *   <li>{@link org.tracegas.model.AnalysisRegion#getInterferents <em>Interferents</em>}</li>
+ *   <li>{@link org.tracegas.model.AnalysisRegion#getBaselineOrder <em>Baseline Order</em>}</li>
+ *   <li>{@link org.tracegas.model.AnalysisRegion#getOpenedAs <em>Opened As</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getAnalysisRegion()
@@ -113,5 +115,55 @@ public interface AnalysisRegion extends EObject {
 	 * @generated
 	 */
 	EList<String> getInterferents();
+
+	/**
+	 * Returns the value of the '<em><b>Baseline Order</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Order of the polynomial baseline fitted with the references over the region: 0 for an offset, 1 for a sloping line, up to 3.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Baseline Order</em>' attribute.
+	 * @see #setBaselineOrder(int)
+	 * @see org.tracegas.model.WorkspacePackage#getAnalysisRegion_BaselineOrder()
+	 * @model
+	 * @generated
+	 */
+	int getBaselineOrder();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.AnalysisRegion#getBaselineOrder <em>Baseline Order</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Baseline Order</em>' attribute.
+	 * @see #getBaselineOrder()
+	 * @generated
+	 */
+	void setBaselineOrder(int value);
+
+	/**
+	 * Returns the value of the '<em><b>Opened As</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The region's place, from 1, among the regions of the stored method text the version was read from, so that an edit keeps what the model does not hold (the windows inside the span, the residual limit); 0 for a region added since.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Opened As</em>' attribute.
+	 * @see #setOpenedAs(int)
+	 * @see org.tracegas.model.WorkspacePackage#getAnalysisRegion_OpenedAs()
+	 * @model
+	 * @generated
+	 */
+	int getOpenedAs();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.AnalysisRegion#getOpenedAs <em>Opened As</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Opened As</em>' attribute.
+	 * @see #getOpenedAs()
+	 * @generated
+	 */
+	void setOpenedAs(int value);
 
 } // AnalysisRegion

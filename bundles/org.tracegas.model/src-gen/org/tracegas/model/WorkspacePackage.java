@@ -845,13 +845,49 @@ public interface WorkspacePackage extends EPackage {
 	int METHOD_VERSION__REGIONS = CONTENT_VERSION_FEATURE_COUNT + 0;
 
 	/**
+	 * The feature id for the '<em><b>Path Length</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__PATH_LENGTH = CONTENT_VERSION_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Max Iterations</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__MAX_ITERATIONS = CONTENT_VERSION_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Algorithm</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__ALGORITHM = CONTENT_VERSION_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Path Source</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__PATH_SOURCE = CONTENT_VERSION_FEATURE_COUNT + 4;
+
+	/**
 	 * The number of structural features of the '<em>Method Version</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int METHOD_VERSION_FEATURE_COUNT = CONTENT_VERSION_FEATURE_COUNT + 1;
+	int METHOD_VERSION_FEATURE_COUNT = CONTENT_VERSION_FEATURE_COUNT + 5;
 
 	/**
 	 * The number of operations of the '<em>Method Version</em>' class.
@@ -909,13 +945,31 @@ public interface WorkspacePackage extends EPackage {
 	int ANALYSIS_REGION__INTERFERENTS = 3;
 
 	/**
+	 * The feature id for the '<em><b>Baseline Order</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ANALYSIS_REGION__BASELINE_ORDER = 4;
+
+	/**
+	 * The feature id for the '<em><b>Opened As</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int ANALYSIS_REGION__OPENED_AS = 5;
+
+	/**
 	 * The number of structural features of the '<em>Analysis Region</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int ANALYSIS_REGION_FEATURE_COUNT = 4;
+	int ANALYSIS_REGION_FEATURE_COUNT = 6;
 
 	/**
 	 * The number of operations of the '<em>Analysis Region</em>' class.
@@ -1539,6 +1593,50 @@ public interface WorkspacePackage extends EPackage {
 	EReference getMethodVersion_Regions();
 
 	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getPathLength <em>Path Length</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Path Length</em>'.
+	 * @see org.tracegas.model.MethodVersion#getPathLength()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_PathLength();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getMaxIterations <em>Max Iterations</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Max Iterations</em>'.
+	 * @see org.tracegas.model.MethodVersion#getMaxIterations()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_MaxIterations();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getAlgorithm <em>Algorithm</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Algorithm</em>'.
+	 * @see org.tracegas.model.MethodVersion#getAlgorithm()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_Algorithm();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getPathSource <em>Path Source</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Path Source</em>'.
+	 * @see org.tracegas.model.MethodVersion#getPathSource()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_PathSource();
+
+	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.AnalysisRegion <em>Analysis Region</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1591,6 +1689,28 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EAttribute getAnalysisRegion_Interferents();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.AnalysisRegion#getBaselineOrder <em>Baseline Order</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Baseline Order</em>'.
+	 * @see org.tracegas.model.AnalysisRegion#getBaselineOrder()
+	 * @see #getAnalysisRegion()
+	 * @generated
+	 */
+	EAttribute getAnalysisRegion_BaselineOrder();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.AnalysisRegion#getOpenedAs <em>Opened As</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Opened As</em>'.
+	 * @see org.tracegas.model.AnalysisRegion#getOpenedAs()
+	 * @see #getAnalysisRegion()
+	 * @generated
+	 */
+	EAttribute getAnalysisRegion_OpenedAs();
 
 	/**
 	 * Returns the meta object for enum '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}'.
@@ -2112,6 +2232,38 @@ public interface WorkspacePackage extends EPackage {
 		EReference METHOD_VERSION__REGIONS = eINSTANCE.getMethodVersion_Regions();
 
 		/**
+		 * The meta object literal for the '<em><b>Path Length</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__PATH_LENGTH = eINSTANCE.getMethodVersion_PathLength();
+
+		/**
+		 * The meta object literal for the '<em><b>Max Iterations</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__MAX_ITERATIONS = eINSTANCE.getMethodVersion_MaxIterations();
+
+		/**
+		 * The meta object literal for the '<em><b>Algorithm</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__ALGORITHM = eINSTANCE.getMethodVersion_Algorithm();
+
+		/**
+		 * The meta object literal for the '<em><b>Path Source</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__PATH_SOURCE = eINSTANCE.getMethodVersion_PathSource();
+
+		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.AnalysisRegionImpl <em>Analysis Region</em>}' class.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -2152,6 +2304,22 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute ANALYSIS_REGION__INTERFERENTS = eINSTANCE.getAnalysisRegion_Interferents();
+
+		/**
+		 * The meta object literal for the '<em><b>Baseline Order</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ANALYSIS_REGION__BASELINE_ORDER = eINSTANCE.getAnalysisRegion_BaselineOrder();
+
+		/**
+		 * The meta object literal for the '<em><b>Opened As</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute ANALYSIS_REGION__OPENED_AS = eINSTANCE.getAnalysisRegion_OpenedAs();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}' enum.

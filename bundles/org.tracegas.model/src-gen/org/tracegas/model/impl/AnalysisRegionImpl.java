@@ -30,6 +30,8 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.AnalysisRegionImpl#getLowerWavenumber <em>Lower Wavenumber</em>}</li>
  *   <li>{@link org.tracegas.model.impl.AnalysisRegionImpl#getUpperWavenumber <em>Upper Wavenumber</em>}</li>
  *   <li>{@link org.tracegas.model.impl.AnalysisRegionImpl#getInterferents <em>Interferents</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.AnalysisRegionImpl#getBaselineOrder <em>Baseline Order</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.AnalysisRegionImpl#getOpenedAs <em>Opened As</em>}</li>
  * </ul>
  *
  * @generated
@@ -104,6 +106,46 @@ public class AnalysisRegionImpl extends MinimalEObjectImpl.Container implements 
 	 * @ordered
 	 */
 	protected EList<String> interferents;
+
+	/**
+	 * The default value of the '{@link #getBaselineOrder() <em>Baseline Order</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getBaselineOrder()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final int BASELINE_ORDER_EDEFAULT = 0;
+
+	/**
+	 * The cached value of the '{@link #getBaselineOrder() <em>Baseline Order</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getBaselineOrder()
+	 * @generated
+	 * @ordered
+	 */
+	protected int baselineOrder = BASELINE_ORDER_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getOpenedAs() <em>Opened As</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getOpenedAs()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final int OPENED_AS_EDEFAULT = 0;
+
+	/**
+	 * The cached value of the '{@link #getOpenedAs() <em>Opened As</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getOpenedAs()
+	 * @generated
+	 * @ordered
+	 */
+	protected int openedAs = OPENED_AS_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -212,6 +254,52 @@ public class AnalysisRegionImpl extends MinimalEObjectImpl.Container implements 
 	 * @generated
 	 */
 	@Override
+	public int getBaselineOrder() {
+		return baselineOrder;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setBaselineOrder(int newBaselineOrder) {
+		int oldBaselineOrder = baselineOrder;
+		baselineOrder = newBaselineOrder;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.ANALYSIS_REGION__BASELINE_ORDER, oldBaselineOrder, baselineOrder));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public int getOpenedAs() {
+		return openedAs;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setOpenedAs(int newOpenedAs) {
+		int oldOpenedAs = openedAs;
+		openedAs = newOpenedAs;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.ANALYSIS_REGION__OPENED_AS, oldOpenedAs, openedAs));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case WorkspacePackage.ANALYSIS_REGION__COMPOUND:
@@ -222,6 +310,10 @@ public class AnalysisRegionImpl extends MinimalEObjectImpl.Container implements 
 				return getUpperWavenumber();
 			case WorkspacePackage.ANALYSIS_REGION__INTERFERENTS:
 				return getInterferents();
+			case WorkspacePackage.ANALYSIS_REGION__BASELINE_ORDER:
+				return getBaselineOrder();
+			case WorkspacePackage.ANALYSIS_REGION__OPENED_AS:
+				return getOpenedAs();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -248,6 +340,12 @@ public class AnalysisRegionImpl extends MinimalEObjectImpl.Container implements 
 				getInterferents().clear();
 				getInterferents().addAll((Collection<? extends String>)newValue);
 				return;
+			case WorkspacePackage.ANALYSIS_REGION__BASELINE_ORDER:
+				setBaselineOrder((Integer)newValue);
+				return;
+			case WorkspacePackage.ANALYSIS_REGION__OPENED_AS:
+				setOpenedAs((Integer)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -272,6 +370,12 @@ public class AnalysisRegionImpl extends MinimalEObjectImpl.Container implements 
 			case WorkspacePackage.ANALYSIS_REGION__INTERFERENTS:
 				getInterferents().clear();
 				return;
+			case WorkspacePackage.ANALYSIS_REGION__BASELINE_ORDER:
+				setBaselineOrder(BASELINE_ORDER_EDEFAULT);
+				return;
+			case WorkspacePackage.ANALYSIS_REGION__OPENED_AS:
+				setOpenedAs(OPENED_AS_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -292,6 +396,10 @@ public class AnalysisRegionImpl extends MinimalEObjectImpl.Container implements 
 				return upperWavenumber != UPPER_WAVENUMBER_EDEFAULT;
 			case WorkspacePackage.ANALYSIS_REGION__INTERFERENTS:
 				return interferents != null && !interferents.isEmpty();
+			case WorkspacePackage.ANALYSIS_REGION__BASELINE_ORDER:
+				return baselineOrder != BASELINE_ORDER_EDEFAULT;
+			case WorkspacePackage.ANALYSIS_REGION__OPENED_AS:
+				return openedAs != OPENED_AS_EDEFAULT;
 		}
 		return super.eIsSet(featureID);
 	}
@@ -314,6 +422,10 @@ public class AnalysisRegionImpl extends MinimalEObjectImpl.Container implements 
 		result.append(upperWavenumber);
 		result.append(", interferents: ");
 		result.append(interferents);
+		result.append(", baselineOrder: ");
+		result.append(baselineOrder);
+		result.append(", openedAs: ");
+		result.append(openedAs);
 		result.append(')');
 		return result.toString();
 	}

@@ -4,12 +4,15 @@ package org.tracegas.model.impl;
 
 import java.util.Collection;
 
+import org.eclipse.emf.common.notify.Notification;
 import org.eclipse.emf.common.notify.NotificationChain;
 
 import org.eclipse.emf.common.util.EList;
 
 import org.eclipse.emf.ecore.EClass;
 import org.eclipse.emf.ecore.InternalEObject;
+
+import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
 import org.eclipse.emf.ecore.util.EObjectContainmentEList;
 import org.eclipse.emf.ecore.util.InternalEList;
@@ -27,6 +30,10 @@ import org.tracegas.model.WorkspacePackage;
  * </p>
  * <ul>
  *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getRegions <em>Regions</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getPathLength <em>Path Length</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getMaxIterations <em>Max Iterations</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getAlgorithm <em>Algorithm</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getPathSource <em>Path Source</em>}</li>
  * </ul>
  *
  * @generated
@@ -41,6 +48,86 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	 * @ordered
 	 */
 	protected EList<AnalysisRegion> regions;
+
+	/**
+	 * The default value of the '{@link #getPathLength() <em>Path Length</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPathLength()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double PATH_LENGTH_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getPathLength() <em>Path Length</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPathLength()
+	 * @generated
+	 * @ordered
+	 */
+	protected double pathLength = PATH_LENGTH_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getMaxIterations() <em>Max Iterations</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getMaxIterations()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final int MAX_ITERATIONS_EDEFAULT = 0;
+
+	/**
+	 * The cached value of the '{@link #getMaxIterations() <em>Max Iterations</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getMaxIterations()
+	 * @generated
+	 * @ordered
+	 */
+	protected int maxIterations = MAX_ITERATIONS_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getAlgorithm() <em>Algorithm</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getAlgorithm()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String ALGORITHM_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getAlgorithm() <em>Algorithm</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getAlgorithm()
+	 * @generated
+	 * @ordered
+	 */
+	protected String algorithm = ALGORITHM_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getPathSource() <em>Path Source</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPathSource()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String PATH_SOURCE_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getPathSource() <em>Path Source</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getPathSource()
+	 * @generated
+	 * @ordered
+	 */
+	protected String pathSource = PATH_SOURCE_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -80,6 +167,98 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	 * @generated
 	 */
 	@Override
+	public double getPathLength() {
+		return pathLength;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setPathLength(double newPathLength) {
+		double oldPathLength = pathLength;
+		pathLength = newPathLength;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__PATH_LENGTH, oldPathLength, pathLength));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public int getMaxIterations() {
+		return maxIterations;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setMaxIterations(int newMaxIterations) {
+		int oldMaxIterations = maxIterations;
+		maxIterations = newMaxIterations;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS, oldMaxIterations, maxIterations));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String getAlgorithm() {
+		return algorithm;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setAlgorithm(String newAlgorithm) {
+		String oldAlgorithm = algorithm;
+		algorithm = newAlgorithm;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__ALGORITHM, oldAlgorithm, algorithm));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String getPathSource() {
+		return pathSource;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setPathSource(String newPathSource) {
+		String oldPathSource = pathSource;
+		pathSource = newPathSource;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__PATH_SOURCE, oldPathSource, pathSource));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
@@ -98,6 +277,14 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 		switch (featureID) {
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
 				return getRegions();
+			case WorkspacePackage.METHOD_VERSION__PATH_LENGTH:
+				return getPathLength();
+			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
+				return getMaxIterations();
+			case WorkspacePackage.METHOD_VERSION__ALGORITHM:
+				return getAlgorithm();
+			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
+				return getPathSource();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -115,6 +302,18 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 				getRegions().clear();
 				getRegions().addAll((Collection<? extends AnalysisRegion>)newValue);
 				return;
+			case WorkspacePackage.METHOD_VERSION__PATH_LENGTH:
+				setPathLength((Double)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
+				setMaxIterations((Integer)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__ALGORITHM:
+				setAlgorithm((String)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
+				setPathSource((String)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -130,6 +329,18 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
 				getRegions().clear();
 				return;
+			case WorkspacePackage.METHOD_VERSION__PATH_LENGTH:
+				setPathLength(PATH_LENGTH_EDEFAULT);
+				return;
+			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
+				setMaxIterations(MAX_ITERATIONS_EDEFAULT);
+				return;
+			case WorkspacePackage.METHOD_VERSION__ALGORITHM:
+				setAlgorithm(ALGORITHM_EDEFAULT);
+				return;
+			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
+				setPathSource(PATH_SOURCE_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -144,8 +355,38 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 		switch (featureID) {
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
 				return regions != null && !regions.isEmpty();
+			case WorkspacePackage.METHOD_VERSION__PATH_LENGTH:
+				return pathLength != PATH_LENGTH_EDEFAULT;
+			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
+				return maxIterations != MAX_ITERATIONS_EDEFAULT;
+			case WorkspacePackage.METHOD_VERSION__ALGORITHM:
+				return ALGORITHM_EDEFAULT == null ? algorithm != null : !ALGORITHM_EDEFAULT.equals(algorithm);
+			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
+				return PATH_SOURCE_EDEFAULT == null ? pathSource != null : !PATH_SOURCE_EDEFAULT.equals(pathSource);
 		}
 		return super.eIsSet(featureID);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String toString() {
+		if (eIsProxy()) return super.toString();
+
+		StringBuilder result = new StringBuilder(super.toString());
+		result.append(" (pathLength: ");
+		result.append(pathLength);
+		result.append(", maxIterations: ");
+		result.append(maxIterations);
+		result.append(", algorithm: ");
+		result.append(algorithm);
+		result.append(", pathSource: ");
+		result.append(pathSource);
+		result.append(')');
+		return result.toString();
 	}
 
 } //MethodVersionImpl

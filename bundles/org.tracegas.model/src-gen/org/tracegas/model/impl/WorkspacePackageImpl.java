@@ -725,6 +725,46 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EAttribute getMethodVersion_PathLength() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMethodVersion_MaxIterations() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMethodVersion_Algorithm() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMethodVersion_PathSource() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getAnalysisRegion() {
 		return analysisRegionEClass;
 	}
@@ -767,6 +807,26 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	@Override
 	public EAttribute getAnalysisRegion_Interferents() {
 		return (EAttribute)analysisRegionEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getAnalysisRegion_BaselineOrder() {
+		return (EAttribute)analysisRegionEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getAnalysisRegion_OpenedAs() {
+		return (EAttribute)analysisRegionEClass.getEStructuralFeatures().get(5);
 	}
 
 	/**
@@ -926,12 +986,18 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 
 		methodVersionEClass = createEClass(METHOD_VERSION);
 		createEReference(methodVersionEClass, METHOD_VERSION__REGIONS);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__PATH_LENGTH);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__MAX_ITERATIONS);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__ALGORITHM);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__PATH_SOURCE);
 
 		analysisRegionEClass = createEClass(ANALYSIS_REGION);
 		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__COMPOUND);
 		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__LOWER_WAVENUMBER);
 		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__UPPER_WAVENUMBER);
 		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__INTERFERENTS);
+		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__BASELINE_ORDER);
+		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__OPENED_AS);
 
 		// Create enums
 		accessLevelEEnum = createEEnum(ACCESS_LEVEL);
@@ -1040,12 +1106,18 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 
 		initEClass(methodVersionEClass, MethodVersion.class, "MethodVersion", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEReference(getMethodVersion_Regions(), this.getAnalysisRegion(), null, "regions", null, 0, -1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_PathLength(), ecorePackage.getEDouble(), "pathLength", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_MaxIterations(), ecorePackage.getEInt(), "maxIterations", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_Algorithm(), ecorePackage.getEString(), "algorithm", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_PathSource(), ecorePackage.getEString(), "pathSource", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(analysisRegionEClass, AnalysisRegion.class, "AnalysisRegion", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getAnalysisRegion_Compound(), ecorePackage.getEString(), "compound", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getAnalysisRegion_LowerWavenumber(), ecorePackage.getEDouble(), "lowerWavenumber", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getAnalysisRegion_UpperWavenumber(), ecorePackage.getEDouble(), "upperWavenumber", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getAnalysisRegion_Interferents(), ecorePackage.getEString(), "interferents", null, 0, -1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getAnalysisRegion_BaselineOrder(), ecorePackage.getEInt(), "baselineOrder", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getAnalysisRegion_OpenedAs(), ecorePackage.getEInt(), "openedAs", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		// Initialize enums and add enum literals
 		initEEnum(accessLevelEEnum, AccessLevel.class, "AccessLevel");

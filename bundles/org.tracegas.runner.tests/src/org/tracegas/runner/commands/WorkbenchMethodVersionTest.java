@@ -39,7 +39,8 @@ import org.tracegas.store.Workspaces;
 
 /**
  * A method version saved the way the workbench's method editor saves it (the workspace model edited through the
- * editor's command stack, a region's span and its analyte's interferents, then {@link MethodVersions#save}) into a real embedded workspace, and run by the
+ * editor's command stack: a region's span and its analyte's interferents, another region's baseline order, a region
+ * removed; then {@link MethodVersions#save}) into a real embedded workspace, and run by the
  * runner's quantify command on real container files of interferograms: the front ends share one method text.
  */
 class WorkbenchMethodVersionTest {
@@ -112,13 +113,21 @@ class WorkbenchMethodVersionTest {
             // the analyte's interferents, as the editor's Interferents field sets them on its one region
             assertEquals(List.of("N2O"), co.getInterferents());
             editor.set(co, Literals.ANALYSIS_REGION__INTERFERENTS, List.of("N2O", "H2O"));
+            AnalysisRegion n2o = draft.getRegions().get(1);
+            editor.set(n2o, Literals.ANALYSIS_REGION__BASELINE_ORDER, 0);
+            // water is fitted with CO as an interferent and no longer reported of its own
+            AnalysisRegion water = draft.getRegions().get(2);
+            assertEquals("H2O", water.getCompound());
+            editor.remove(draft, Literals.METHOD_VERSION__REGIONS, water);
             saved = MethodVersions.save(store, ana, method, draft, "CO window starts above the band's far wing;"
-                    + " water fitted with CO");
+                    + " water fitted with CO only");
             assertEquals(2, saved.number());
             assertEquals(first.id(), saved.parentId());
             StoredMethod stored = StoredMethod.parse(store.versions().content(saved.id()), "saved");
             assertEquals(2060, stored.method().analytes().get(0).regions().get(0).low());
             assertEquals(List.of("N2O", "H2O"), stored.method().analytes().get(0).interferents());
+            assertEquals(List.of("CO", "N2O"), stored.method().analytes().stream().map(a -> a.compound()).toList());
+            assertEquals(0, stored.method().analytes().get(1).regions().get(0).baselineOrder());
             assertEquals(StoredMethod.parse(store.versions().content(first.id()), "first").transform(),
                     stored.transform());
         }
@@ -130,7 +139,7 @@ class WorkbenchMethodVersionTest {
             Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
             String project = store.projects().findByCode(ana, "P-W").orElseThrow().getId();
             List<ResultInfo> results = store.results().results(ana, project);
-            assertEquals(3 * CO_PPM.length, results.size(), "CO, N2O and H2O of each sample");
+            assertEquals(2 * CO_PPM.length, results.size(), "CO and N2O of each sample, no longer H2O");
             assertTrue(results.stream().allMatch(r -> r.values().methodVersionId().equals(saved.id())),
                     "every result names the version saved from the editor");
             assertTrue(store.versions().version(saved.id()).frozen(), "a version with results is frozen");

@@ -25,6 +25,19 @@ class FieldCheckTest {
     }
 
     @Test
+    void methodSettingsAreCheckedWithTheFieldNamed() {
+        // baseline orders 0..3 as the method text takes them (MethodDefinition, quantify.AnalysisRegion)
+        assertNull(FieldCheck.baselineOrder(" 3 "));
+        assertEquals("Baseline order: must be 0 to 3, was -1", FieldCheck.baselineOrder("-1"));
+        assertEquals("Baseline order: '1.5' is not a whole number from 0 to 3", FieldCheck.baselineOrder("1.5"));
+        assertNull(FieldCheck.pathLength("6.4"));
+        assertEquals("Path length: must be a positive number of metres, was -2", FieldCheck.pathLength(" -2"));
+        assertEquals("Path length: 'six' is not a number", FieldCheck.pathLength("six"));
+        assertNull(FieldCheck.maxIterations("50"));
+        assertEquals("Max. fit iterations: must be at least 1, was 0", FieldCheck.maxIterations("0"));
+    }
+
+    @Test
     void interferentsAreNamedOnceNotTheAnalyteAndOnlyCompoundsTheMethodHasReferencesOf() {
         Set<String> known = Set.of("CO", "H2O", "N2O");
         assertNull(FieldCheck.interferents(" H2O , N2O ", "CO", known));

@@ -189,15 +189,9 @@ class MethodEditorPanelTest {
         press(panel.redoButton());
         assertEquals("H2O, N2O", panel.interferentsField().getText());
 
-        panel.reasonField().setText("N2O's band edge overlaps the CO window");
-        press(panel.saveButton());
-        assertEquals("Saved as version 2.", panel.problems().getText());
-        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
-        StoredMethod back = StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+        StoredMethod back = savedAsVersion2("N2O's band edge overlaps the CO window");
         assertEquals(List.of("H2O", "N2O"), back.method().analytes().get(0).interferents());
         assertEquals(List.of("CO"), back.method().analytes().get(1).interferents());
-        assertEquals(demo.methodVersionId(), saved.parentId());
-        assertEquals(analyst.userId(), saved.authorId());
     }
 
     @Test
@@ -234,6 +228,130 @@ class MethodEditorPanelTest {
         assertEquals("2 fields differ (highlighted).", c.summary().getText());
         assertTrue(List.of(c.table().getItems()).stream().anyMatch(i -> i.getText(0).equals("analyte.1.region.1")
                 && i.getText(2).equals("2080.0..2195.0 baseline 1")));
+    }
+
+    /**
+     * Saves the draft with a reason and reads the new version's stored method back, revised by the analyst from
+     * the version opened.
+     */
+    private StoredMethod savedAsVersion2(String reason) throws Exception {
+        panel.reasonField().setText(reason);
+        press(panel.saveButton());
+        assertEquals("Saved as version 2.", panel.problems().getText());
+        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
+        assertEquals(demo.methodVersionId(), saved.parentId());
+        assertEquals(analyst.userId(), saved.authorId());
+        return StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+    }
+
+    private void choose(int index) {
+        panel.regionChooser().select(index);
+        panel.regionChooser().notifyListeners(SWT.Selection, new Event());
+    }
+
+    @Test
+    void regionsAreAddedAndRemovedAsCommandsAndUndoRestoresThem() throws Exception {
+        MethodVersion v = method.getVersions().get(0);
+        assertEquals(2, panel.regionChooser().getItemCount());
+        press(panel.addRegionButton());
+        // a region of the selected analyte beside it, selected for editing
+        assertEquals(3, v.getRegions().size());
+        assertEquals(1, panel.regionChooser().getSelectionIndex());
+        AnalysisRegion added = v.getRegions().get(1);
+        assertEquals("CO", added.getCompound());
+        assertEquals(List.of("H2O"), added.getInterferents());
+        assertEquals(0, added.getOpenedAs(), "a region the stored method does not have");
+        // the same width as the selected 2085–2190 cm⁻¹, 1 cm⁻¹ above it
+        assertEquals("2191.00", panel.lowerField().getText());
+        assertEquals("2296.00", panel.upperField().getText());
+        panel.baselineField().setText("4");
+        assertEquals("Baseline order: must be 0 to 3, was 4", panel.problems().getText());
+        assertTrue(panel.decorated(panel.baselineField()));
+        assertEquals(1, added.getBaselineOrder());
+        panel.baselineField().setText("0");
+        assertEquals(0, added.getBaselineOrder());
+        assertTrue(List.of(panel.comparison().table().getItems()).stream().anyMatch(i -> i.getText(0).equals(
+                "analyte.1.region.2") && i.getText(2).equals("2191.0..2296.0 baseline 0")));
+        press(panel.undoButton());
+        assertEquals(1, added.getBaselineOrder());
+        press(panel.undoButton());
+        assertEquals(2, v.getRegions().size());
+        assertEquals(2, panel.regionChooser().getItemCount());
+        assertEquals("The versions hold the same values.", panel.comparison().summary().getText());
+
+        choose(1);
+        assertEquals("N2O", panel.compoundField().getText());
+        AnalysisRegion n2o = v.getRegions().get(1);
+        press(panel.removeRegionButton());
+        assertEquals(List.of(region), v.getRegions());
+        assertEquals("CO", panel.compoundField().getText());
+        assertFalse(panel.removeRegionButton().isEnabled(), "a method keeps one region");
+        press(panel.undoButton());
+        assertEquals(List.of(region, n2o), v.getRegions());
+        assertEquals(2, n2o.getOpenedAs());
+        press(panel.redoButton());
+
+        StoredMethod back = savedAsVersion2("N2O reported from the second cell only");
+        assertEquals(List.of("CO"), back.method().analytes().stream().map(Analyte::compound).toList());
+        assertEquals(demo.method().method().analytes().get(0), back.method().analytes().get(0));
+        assertEquals(demo.method().method().references(), back.method().references());
+    }
+
+    @Test
+    void thePathLengthAndIterationLimitAreEditedCheckedAndSaved() throws Exception {
+        MethodVersion v = method.getVersions().get(0);
+        assertEquals("5.0", panel.pathLengthField().getText());
+        panel.pathLengthField().setText("0");
+        assertEquals("Path length: must be a positive number of metres, was 0", panel.problems().getText());
+        assertTrue(panel.decorated(panel.pathLengthField()));
+        assertEquals(5.0, v.getPathLength());
+        panel.pathLengthField().setText("9.75");
+        assertEquals(9.75, v.getPathLength());
+        panel.maxIterationsField().setText("8O");
+        assertEquals("Max. fit iterations: '8O' is not a whole number", panel.problems().getText());
+        panel.maxIterationsField().setText("80");
+        assertEquals(80, v.getMaxIterations());
+        assertEquals("2 fields differ (highlighted).", panel.comparison().summary().getText());
+        press(panel.undoButton());
+        assertEquals(demo.method().method().maxIterations(), v.getMaxIterations());
+        press(panel.redoButton());
+        Screens.save(shell, "method-editor-settings");
+
+        StoredMethod back = savedAsVersion2("Cell refitted with the longer mirror set");
+        assertEquals(9.75, back.method().pathLengthMetres());
+        assertEquals(80, back.method().maxIterations());
+        assertEquals(demo.method().method().analytes(), back.method().analytes());
+    }
+
+    private static void choose(org.eclipse.swt.widgets.Combo c, String item) {
+        c.select(c.indexOf(item));
+        c.notifyListeners(SWT.Selection, new Event());
+    }
+
+    @Test
+    void theFitAlgorithmAndPathSourceAreChosenAsCommandsAndSaved() throws Exception {
+        MethodVersion v = method.getVersions().get(0);
+        // the method texts' names (MethodDefinition): the default algorithm and the nominal path
+        assertEquals("classical-least-squares", panel.algorithmChooser().getText());
+        assertEquals("nominal", panel.pathSourceChooser().getText());
+        assertEquals(List.of("nominal", "cts-derived"), List.of(panel.pathSourceChooser().getItems()));
+        assertTrue(List.of(panel.algorithmChooser().getItems()).contains("curve-of-growth"));
+        assertFalse(List.of(panel.algorithmChooser().getItems()).contains("line-list"),
+                "line-list needs the method file's [line-list] block");
+        choose(panel.algorithmChooser(), "curve-of-growth");
+        choose(panel.pathSourceChooser(), "cts-derived");
+        assertEquals("curve-of-growth", v.getAlgorithm());
+        assertEquals("cts-derived", v.getPathSource());
+        assertEquals("2 fields differ (highlighted).", panel.comparison().summary().getText());
+        press(panel.undoButton());
+        assertEquals("nominal", v.getPathSource());
+        assertEquals("nominal", panel.pathSourceChooser().getText());
+        press(panel.redoButton());
+
+        StoredMethod back = savedAsVersion2("Curve of growth for the strong CO lines; path from the CTS readings");
+        assertEquals("curve-of-growth", back.method().algorithm().name());
+        assertTrue(back.declaration().contains("\npath-source = cts-derived\n"), back.declaration());
+        assertEquals(demo.method().method().analytes(), back.method().analytes());
     }
 
     @Test

@@ -30,6 +30,38 @@ public final class FieldCheck {
         return null;
     }
 
+    /** A region's baseline order: a whole number from 0 (an offset) to the highest order the fit takes. */
+    public static String baselineOrder(String value) {
+        int max = org.tracegas.quantify.AnalysisRegion.MAX_BASELINE_ORDER;
+        try {
+            int v = Integer.parseInt(value.trim());
+            return v >= 0 && v <= max ? null : "Baseline order: must be 0 to " + max + ", was " + v;
+        } catch (NumberFormatException e) {
+            return "Baseline order: '" + value + "' is not a whole number from 0 to " + max;
+        }
+    }
+
+    /** The cell's path length in metres: a positive number. */
+    public static String pathLength(String value) {
+        try {
+            double v = Double.parseDouble(value.trim());
+            return v > 0 && Double.isFinite(v) ? null : "Path length: must be a positive number of metres, was "
+                    + value.trim();
+        } catch (NumberFormatException e) {
+            return "Path length: '" + value + "' is not a number";
+        }
+    }
+
+    /** The fit's iteration limit: a whole number of at least 1. */
+    public static String maxIterations(String value) {
+        try {
+            int v = Integer.parseInt(value.trim());
+            return v >= 1 ? null : "Max. fit iterations: must be at least 1, was " + v;
+        } catch (NumberFormatException e) {
+            return "Max. fit iterations: '" + value + "' is not a whole number";
+        }
+    }
+
     /** Both bounds parse; checks their order. */
     public static String order(String lower, String upper) {
         if (wavenumber("lower", lower) != null || wavenumber("upper", upper) != null) {

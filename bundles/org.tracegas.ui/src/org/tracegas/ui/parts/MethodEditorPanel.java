@@ -9,6 +9,8 @@ import java.util.TreeSet;
 
 import org.eclipse.emf.common.command.CommandStackListener;
 import org.eclipse.emf.common.command.CompoundCommand;
+import org.eclipse.emf.edit.command.AddCommand;
+import org.eclipse.emf.edit.command.RemoveCommand;
 import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.emf.edit.command.SetCommand;
 import org.eclipse.jface.fieldassist.ControlDecoration;
@@ -17,6 +19,7 @@ import org.eclipse.swt.graphics.GC;
 import org.eclipse.swt.graphics.Image;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.custom.SashForm;
+import org.eclipse.swt.custom.ScrolledComposite;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Button;
@@ -30,6 +33,7 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.model.WorkspacePackage.Literals;
 import org.tracegas.model.edit.ModelEditor;
 import org.tracegas.store.Session;
@@ -37,8 +41,9 @@ import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
- * Edits a draft method version in the model through the editing domain: the method's name and, region by region,
- * the compound, the analyte's interferents and the span. Every accepted change is one command, so Undo and Redo
+ * Edits a draft method version in the model through the editing domain: the method's name, path length,
+ * iteration limit, fit algorithm and path source, the regions (added and removed) and, region by region, the compound, the analyte's
+ * interferents, the span and the baseline order. Every accepted change is one command, so Undo and Redo
  * walk back and forth through them. Fields are checked as they are typed; a
  * wrong field is marked and named below the form and the model keeps its last good value. The comparison
  * below shows the version as opened (A) beside the draft (B), both in the text of a method file. Saving
@@ -60,6 +65,13 @@ public final class MethodEditorPanel extends Composite {
     private final Text interferents;
     private final Text lower;
     private final Text upper;
+    private final Text baseline;
+    private final Text pathLength;
+    private final Text maxIterations;
+    private final Combo algorithm;
+    private final Combo pathSource;
+    private final Button addRegion;
+    private final Button removeRegion;
     private final Label problems;
     private final Button undo;
     private final Button redo;
@@ -86,27 +98,65 @@ public final class MethodEditorPanel extends Composite {
         setLayout(new GridLayout(1, false));
         SashForm sash = new SashForm(this, SWT.VERTICAL);
         sash.setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
-        Composite form = new Composite(sash, SWT.NONE);
+        // the form scrolls where the view is too low for all its fields
+        ScrolledComposite scroll = new ScrolledComposite(sash, SWT.V_SCROLL);
+        Composite form = new Composite(scroll, SWT.NONE);
         form.setLayout(new GridLayout(4, false));
         name = field(form, "Method name");
+        pathLength = field(form, "Path length (m)");
+        maxIterations = field(form, "Max. fit iterations");
+        algorithm = choice(form, "Fit algorithm", Literals.METHOD_VERSION__ALGORITHM);
+        pathSource = choice(form, "Path source", Literals.METHOD_VERSION__PATH_SOURCE);
+        pathSource.setToolTipText("nominal: the path length; cts-derived: the effective path the campaign's"
+                + " calibration transfer standard readings measure");
         new Label(form, SWT.NONE).setText("Analysis region");
         region = new Combo(form, SWT.READ_ONLY);
         GridData cd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
         cd.widthHint = NARROW;
         region.setLayoutData(cd);
         region.addListener(SWT.Selection, e -> fill());
+        // the buttons on a line of their own below the choice, which keeps the narrow view's width
+        new Label(form, SWT.NONE);
+        Composite regionButtons = new Composite(form, SWT.NONE);
+        GridLayout rl = new GridLayout(2, true);
+        rl.marginWidth = 0;
+        rl.marginHeight = 0;
+        regionButtons.setLayout(rl);
+        regionButtons.setLayoutData(new GridData(SWT.BEGINNING, SWT.CENTER, false, false, 3, 1));
+        addRegion = new Button(regionButtons, SWT.PUSH);
+        addRegion.setText("Add");
+        addRegion.setToolTipText("Adds a region of the selected region's analyte beside it");
+        addRegion.addListener(SWT.Selection, e -> addRegion());
+        removeRegion = new Button(regionButtons, SWT.PUSH);
+        removeRegion.setText("Remove");
+        removeRegion.addListener(SWT.Selection, e -> removeRegion());
         compound = field(form, "Compound");
         interferents = field(form, "Interferents");
         interferents.setMessage("compounds fitted with it, separated by commas");
         lower = field(form, "Lower wavenumber (cm⁻¹)");
         upper = field(form, "Upper wavenumber (cm⁻¹)");
-        problems = new Label(form, SWT.WRAP);
+        baseline = field(form, "Baseline order");
+        baseline.setMessage("0 offset, 1 sloping line, up to " + org.tracegas.quantify.AnalysisRegion.MAX_BASELINE_ORDER);
+        scroll.setContent(form);
+        scroll.setExpandHorizontal(true);
+        scroll.setExpandVertical(true);
+        scroll.addListener(SWT.Resize, e -> scroll.setMinSize(form.computeSize(scroll.getClientArea().width,
+                SWT.DEFAULT)));
+        comparison = new VersionComparisonPanel(sash, SWT.NONE);
+        // the problems, the reason and the buttons below both, in sight however far the form is scrolled
+        problems = new Label(this, SWT.WRAP);
         problems.setForeground(getDisplay().getSystemColor(SWT.COLOR_DARK_RED));
-        problems.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1));
+        GridData pd = new GridData(SWT.FILL, SWT.TOP, true, false);
+        pd.widthHint = NARROW;
+        // two lines kept for the message, so that one appearing does not need the panel laid out again
+        GC metrics = new GC(problems);
+        pd.heightHint = 2 * metrics.getFontMetrics().getHeight();
+        metrics.dispose();
+        problems.setLayoutData(pd);
         // the reason on a line of its own and the buttons below it: the view beside the spectrum is narrow
-        Composite buttons = new Composite(form, SWT.NONE);
+        Composite buttons = new Composite(this, SWT.NONE);
         buttons.setLayout(new GridLayout(3, false));
-        buttons.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false, 4, 1));
+        buttons.setLayoutData(new GridData(SWT.FILL, SWT.TOP, true, false));
         reason = new Text(buttons, SWT.BORDER);
         reason.setMessage("Reason for the new version");
         GridData rd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
@@ -116,18 +166,17 @@ public final class MethodEditorPanel extends Composite {
         undo.setText("Undo");
         undo.addListener(SWT.Selection, e -> {
             editor.undo();
-            fill();
+            listRegions(region.getSelectionIndex());
         });
         redo = new Button(buttons, SWT.PUSH);
         redo.setText("Redo");
         redo.addListener(SWT.Selection, e -> {
             editor.redo();
-            fill();
+            listRegions(region.getSelectionIndex());
         });
         save = new Button(buttons, SWT.PUSH);
         save.setText("Save as new version");
         save.addListener(SWT.Selection, e -> save());
-        comparison = new VersionComparisonPanel(sash, SWT.NONE);
         sash.setWeights(1, 1);
         // the form gets the height it needs (at most three quarters), the comparison the rest
         sash.addListener(SWT.Resize, e -> {
@@ -148,21 +197,56 @@ public final class MethodEditorPanel extends Composite {
                 "Lower wavenumber"));
         upper.addListener(SWT.Modify, e -> applyBound(upper, Literals.ANALYSIS_REGION__UPPER_WAVENUMBER,
                 "Upper wavenumber"));
+        number(baseline, this::selectedRegion, Literals.ANALYSIS_REGION__BASELINE_ORDER, FieldCheck::baselineOrder,
+                Integer::valueOf);
+        number(pathLength, () -> version, Literals.METHOD_VERSION__PATH_LENGTH, FieldCheck::pathLength,
+                Double::valueOf);
+        number(maxIterations, () -> version, Literals.METHOD_VERSION__MAX_ITERATIONS, FieldCheck::maxIterations,
+                Integer::valueOf);
         updateButtons();
+    }
+
+    /** A number typed into a field sets a feature of its owner once the check finds nothing wrong with it. */
+    private void number(Text field, java.util.function.Supplier<org.eclipse.emf.ecore.EObject> owner,
+            EStructuralFeature feature, java.util.function.UnaryOperator<String> check,
+            java.util.function.Function<String, Object> value) {
+        field.addListener(SWT.Modify, e -> {
+            String problem = check.apply(field.getText());
+            apply(field, owner.get(), feature, problem, problem == null ? value.apply(field.getText().trim()) : null);
+        });
+    }
+
+    /** The layout of a field or choice: the three columns right of its label, as wide as the view gives. */
+    private static GridData fieldData() {
+        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
+        gd.horizontalIndent = 8;
+        gd.widthHint = NARROW;
+        return gd;
     }
 
     private Text field(Composite form, String label) {
         new Label(form, SWT.NONE).setText(label);
         Text t = new Text(form, SWT.BORDER);
-        GridData gd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
-        gd.horizontalIndent = 8;
-        gd.widthHint = NARROW;
-        t.setLayoutData(gd);
+        t.setLayoutData(fieldData());
         ControlDecoration d = new ControlDecoration(t, SWT.LEFT | SWT.CENTER);
         d.setImage(errorMark);
         d.hide();
         decorations.put(t, d);
         return t;
+    }
+
+    /** A read-only choice of a method version's feature: choosing sets it through one command. */
+    private Combo choice(Composite form, String label, EStructuralFeature feature) {
+        new Label(form, SWT.NONE).setText(label);
+        Combo c = new Combo(form, SWT.READ_ONLY);
+        c.setLayoutData(fieldData());
+        c.addListener(SWT.Selection, e -> {
+            if (!filling && version != null && !c.getText().equals(version.eGet(feature))) {
+                editor.set(version, feature, c.getText());
+                afterCommand();
+            }
+        });
+        return c;
     }
 
     /** A small red disc with a white bar, drawn here so it needs no image files. */
@@ -216,13 +300,57 @@ public final class MethodEditorPanel extends Composite {
         this.stored = stored;
         this.opened = stored.declaration();
         this.line = readLine();
+        algorithm.setItems(MethodVersions.algorithms(stored).toArray(String[]::new));
+        pathSource.setItems(MethodVersions.pathSources().toArray(String[]::new));
+        listRegions(0);
+    }
+
+    /** Lists the draft's regions, selects the one at the index (or the last) and fills the form. */
+    private void listRegions(int select) {
         region.removeAll();
         for (AnalysisRegion r : version.getRegions()) {
             region.add(r.getCompound() + "  " + Math.round(r.getLowerWavenumber()) + "–"
                     + Math.round(r.getUpperWavenumber()) + " cm⁻¹");
         }
-        region.select(0);
+        region.select(Math.max(0, Math.min(select, region.getItemCount() - 1)));
         fill();
+    }
+
+    /**
+     * Adds, right after the selected region, a region of its analyte (compound, interferents, baseline order) over
+     * a span of the same width 1 cm⁻¹ above it (an analyte's regions must not touch): one command.
+     */
+    private void addRegion() {
+        AnalysisRegion r = selectedRegion();
+        if (r == null) {
+            return;
+        }
+        AnalysisRegion added = WorkspaceFactory.eINSTANCE.createAnalysisRegion();
+        added.setCompound(r.getCompound());
+        added.getInterferents().addAll(r.getInterferents());
+        added.setBaselineOrder(r.getBaselineOrder());
+        added.setLowerWavenumber(r.getUpperWavenumber() + 1);
+        added.setUpperWavenumber(Math.min(FieldCheck.HIGHEST, 2 * r.getUpperWavenumber() - r.getLowerWavenumber() + 1));
+        int at = region.getSelectionIndex() + 1;
+        editor.domain().getCommandStack().execute(AddCommand.create(editor.domain(), version,
+                Literals.METHOD_VERSION__REGIONS, added, at));
+        listRegions(at);
+    }
+
+    /** Removes the selected region (one command); the method keeps at least one. */
+    private void removeRegion() {
+        AnalysisRegion r = selectedRegion();
+        if (r == null) {
+            return;
+        }
+        if (version.getRegions().size() == 1) {
+            problems.setText("Regions: a method needs at least one region; add another before removing this one");
+            return;
+        }
+        int at = region.getSelectionIndex();
+        editor.domain().getCommandStack().execute(RemoveCommand.create(editor.domain(), version,
+                Literals.METHOD_VERSION__REGIONS, r));
+        listRegions(at);
     }
 
     private AnalysisRegion selectedRegion() {
@@ -234,11 +362,16 @@ public final class MethodEditorPanel extends Composite {
         filling = true;
         try {
             name.setText(method.getName());
+            pathLength.setText(Double.toString(version.getPathLength()));
+            maxIterations.setText(Integer.toString(version.getMaxIterations()));
+            algorithm.select(algorithm.indexOf(version.getAlgorithm()));
+            pathSource.select(pathSource.indexOf(version.getPathSource()));
             AnalysisRegion r = selectedRegion();
             compound.setText(r == null ? "" : r.getCompound());
             interferents.setText(r == null ? "" : String.join(", ", r.getInterferents()));
             lower.setText(r == null ? "" : number(r.getLowerWavenumber()));
             upper.setText(r == null ? "" : number(r.getUpperWavenumber()));
+            baseline.setText(r == null ? "" : Integer.toString(r.getBaselineOrder()));
         } finally {
             filling = false;
         }
@@ -435,7 +568,7 @@ public final class MethodEditorPanel extends Composite {
             return;
         }
         // the opened version stays as it was stored; the draft becomes the new version, opened afresh
-        MethodVersions.fillRegions(version, stored.method());
+        MethodVersions.fillRegions(version, stored);
         MethodVersion saved = MethodVersions.model(next, edited).getVersions().get(0);
         method.getVersions().add(saved);
         editor.domain().getCommandStack().flush();
@@ -447,6 +580,7 @@ public final class MethodEditorPanel extends Composite {
     private void updateButtons() {
         undo.setEnabled(editor.canUndo());
         redo.setEnabled(editor.canRedo());
+        removeRegion.setEnabled(version != null && version.getRegions().size() > 1);
         save.setEnabled(store != null && editor.canUndo());
     }
 
@@ -472,6 +606,38 @@ public final class MethodEditorPanel extends Composite {
 
     public Text compoundField() {
         return compound;
+    }
+
+    public Text baselineField() {
+        return baseline;
+    }
+
+    public Text pathLengthField() {
+        return pathLength;
+    }
+
+    public Text maxIterationsField() {
+        return maxIterations;
+    }
+
+    public Combo algorithmChooser() {
+        return algorithm;
+    }
+
+    public Combo pathSourceChooser() {
+        return pathSource;
+    }
+
+    public Button addRegionButton() {
+        return addRegion;
+    }
+
+    public Button removeRegionButton() {
+        return removeRegion;
+    }
+
+    public Combo regionChooser() {
+        return region;
     }
 
     public Label problems() {
