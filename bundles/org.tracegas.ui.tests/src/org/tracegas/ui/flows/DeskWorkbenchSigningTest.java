@@ -34,6 +34,7 @@ import org.tracegas.ui.Screens;
 import org.tracegas.ui.dialogs.SignatureDialog;
 import org.tracegas.ui.internal.ReportHandler;
 import org.tracegas.ui.parts.AuditTrailPanel;
+import org.tracegas.ui.parts.QaOverviewPanel;
 import org.tracegas.ui.parts.ReportPanel;
 import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.Desk;
@@ -176,6 +177,12 @@ class DeskWorkbenchSigningTest {
         assertTrue(panel.verified().intact(), panel.verification().getText());
         assertEquals(signatures.get(1).sequence(), panel.verified().head().sequence());
         shots.add(Screens.save(shell, "workbench-report-approved"));
+        // the QA checks view beside it, filled when the project was opened: its rows are painted, not only present
+        QaOverviewPanel qa = StartedWorkbench.find(shell, QaOverviewPanel.class);
+        Screens.waitFor(display, () -> qa.table().getItemCount() == 2, 30_000);
+        int colours = DeskWorkbenchTest.coloursOnScreen(display, qa.table(), new org.eclipse.swt.graphics.Rectangle(0,
+                0, qa.table().getClientArea().width, qa.table().getItemHeight()));
+        assertTrue(colours > 20, "the first row of the QA checks is painted: " + colours + " colours on screen");
 
         // the audit trail of the review desk, filtered to reports: the review, the refused attempt, the approval
         AuditTrailPanel audit = StartedWorkbench.find(shell, AuditTrailPanel.class);

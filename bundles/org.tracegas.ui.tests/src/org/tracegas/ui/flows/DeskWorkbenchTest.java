@@ -114,7 +114,7 @@ class DeskWorkbenchTest {
     }
 
     /** How many colours the screen shows in {@code area} (control coordinates, clipped to 600 pixels wide). */
-    private static int coloursOnScreen(Display display, Control control, Rectangle area) {
+    static int coloursOnScreen(Display display, Control control, Rectangle area) {
         Rectangle onScreen = display.map(control, null, area);
         int width = Math.min(onScreen.width, 600);
         Image image = new Image(display, width, onScreen.height);

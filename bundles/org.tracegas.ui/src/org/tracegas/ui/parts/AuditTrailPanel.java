@@ -17,7 +17,6 @@ import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.swt.SWT;
 import org.eclipse.swt.graphics.Font;
 import org.eclipse.swt.graphics.FontData;
-import org.eclipse.swt.graphics.Rectangle;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Button;
@@ -259,19 +258,9 @@ public final class AuditTrailPanel extends Composite {
             c.pack();
         }
         layout(true);
-        reallocate();
+        FreshTableSize.give(table);
     }
 
-    /**
-     * Gives the table a fresh size. On GTK3 the table of a view just opened, filled once, kept showing an empty
-     * area (no rows, no header) until its size changed; a layout that hands it the same bounds again does not
-     * count.
-     */
-    private void reallocate() {
-        Rectangle bounds = table.getBounds();
-        table.setBounds(bounds.x, bounds.y, bounds.width, bounds.height - 1);
-        table.setBounds(bounds);
-    }
 
     private void failed(String message) {
         refresh.setEnabled(true);

@@ -34,7 +34,7 @@ public final class QaOverviewPanel extends Composite {
         }
     }
 
-    /** Shows outcomes without naming their project (the demo's). */
+    /** Shows outcomes without naming their project. */
     public void show(List<CheckOutcome> outcomes) {
         show(null, outcomes);
     }
@@ -61,6 +61,7 @@ public final class QaOverviewPanel extends Composite {
         summary.setText(outcomes.isEmpty() ? of + "no QA checks stored yet"
                 : of + outcomes.size() + " checks: " + (outcomes.size() - failed) + " passed, " + failed + " failed");
         layout(true);
+        FreshTableSize.give(table);
     }
 
     /** A line of text instead of outcomes, e.g. while they are read. */
