@@ -287,6 +287,11 @@ public final class MeasurementQuantification {
                 ? ConditionOrigin.FILE_LABEL : ConditionOrigin.IMPORT_STATED);
     }
 
+    /** {@code sample} in the cell {@code m} was stored with (temperature in K, pressure in kPa). */
+    public static Sample inCellOf(Sample sample, Measurement m) {
+        return sample.inCell(temperature(m).value(), pressure(m).value());
+    }
+
     private Prepared prepare(Measurement m, Spectrum values) throws ImportException {
         MeasurementAbsorbance.Converted c = absorbance.convert(m, values);
         Spectrum a;
@@ -305,8 +310,7 @@ public final class MeasurementQuantification {
         entries.addAll(method.recipe().entries());
         BackgroundAge age = c.ratio() == null ? null
                 : new BackgroundAge(c.ratio().backgroundAge(), absorbance.ageLimit());
-        Sample sample = new Sample(a, age, ResultCorrection.noiseCorrelation(c.noiseFactor()))
-                .inCell(temperature(m).value(), pressure(m).value());
+        Sample sample = inCellOf(new Sample(a, age, ResultCorrection.noiseCorrelation(c.noiseFactor())), m);
         return new Prepared(a, sample, Recipe.of(entries), c.noiseFactor(), c.noiseOrigin());
     }
 

@@ -24,6 +24,7 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.pipeline.MeasurementQuantification;
 import org.tracegas.qa.campaign.QaControlCharts;
 import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.qa.campaign.StoredQaChecks;
@@ -206,9 +207,9 @@ public final class CampaignReport {
         }
         Spectrum a = stored.orElseThrow(() -> new FileFormatException(plan.file(), 0, "example-fit",
                 "no stored absorbance at " + plan.exampleTime())).spectrum();
-        FitSpectra fit = method.quantifier(a.axis(), software, true).quantify(Sample.of(a)
+        FitSpectra fit = method.quantifier(a.axis(), software, true).quantify(
                 // in its cell, for a method whose spectra are computed at each measurement's conditions
-                .inCell(sample.getCellTemperature(), sample.getCellPressure() / 10.0))
+                MeasurementQuantification.inCellOf(Sample.of(a), sample))
                 .compound(plan.exampleCompound()).orElseThrow(() -> new FileFormatException(plan.file(), 0,
                         "example-fit", "the method does not report " + plan.exampleCompound()))
                 .spectra().orElseThrow();
