@@ -1,6 +1,7 @@
 package org.tracegas.releng.emfgen;
 
 import java.io.File;
+import java.util.List;
 import java.util.Map;
 
 import org.eclipse.emf.codegen.ecore.generator.Generator;
@@ -9,6 +10,7 @@ import org.eclipse.emf.codegen.ecore.genmodel.GenModel;
 import org.eclipse.emf.codegen.ecore.genmodel.GenModelPackage;
 import org.eclipse.emf.codegen.ecore.genmodel.generator.GenBaseGeneratorAdapter;
 import org.eclipse.emf.codegen.ecore.genmodel.generator.GenModelGeneratorAdapterFactory;
+import org.eclipse.emf.common.util.BasicDiagnostic;
 import org.eclipse.emf.common.util.BasicMonitor;
 import org.eclipse.emf.common.util.Diagnostic;
 import org.eclipse.emf.common.util.URI;
@@ -20,11 +22,11 @@ import org.eclipse.emf.ecore.resource.impl.ResourceSetImpl;
 import org.eclipse.emf.ecore.xmi.impl.EcoreResourceFactoryImpl;
 
 /**
- * Generates the model code of a genmodel without an IDE.
+ * Generates the model code and the edit code (item providers) of a genmodel without an IDE.
  * <p>
- * Arguments: the bundle folder and the genmodel path relative to it. The genmodel's modelDirectory is a
- * platform:/resource path whose first segment is the bundle's name; that name is mapped to the bundle
- * folder here, since there is no workspace to resolve it.
+ * Arguments: the bundle folder and the genmodel path relative to it. The genmodel's modelDirectory and
+ * editDirectory are platform:/resource paths whose first segment is a bundle's name; since there is no
+ * workspace to resolve them, each name is mapped to the folder of that name beside the model's bundle.
  */
 public final class GenerateModel {
 
@@ -60,11 +62,14 @@ public final class GenerateModel {
         GeneratorAdapterFactory.Descriptor.Registry.INSTANCE
                 .addDescriptor(GenModelPackage.eNS_URI, GenModelGeneratorAdapterFactory.DESCRIPTOR);
 
-        EcorePlugin.getPlatformResourceMap().put(bundle.getName(),
-                URI.createFileURI(bundle.getPath()).appendSegment(""));
-
         Resource resource = resources.getResource(URI.createFileURI(genmodelFile.getPath()), true);
         GenModel genModel = (GenModel) resource.getContents().get(0);
+        File bundles = bundle.getParentFile();
+        for (String directory : List.of(genModel.getModelDirectory(), genModel.getEditDirectory())) {
+            String name = URI.createURI(directory).segment(0);
+            EcorePlugin.getPlatformResourceMap().put(name,
+                    URI.createFileURI(new File(bundles, name).getPath()).appendSegment(""));
+        }
         Diagnostic status = genModel.diagnose();
         if (status.getSeverity() >= Diagnostic.ERROR) {
             return status;
@@ -75,7 +80,12 @@ public final class GenerateModel {
 
         Generator generator = new Generator();
         generator.setInput(genModel);
-        return generator.generate(genModel, GenBaseGeneratorAdapter.MODEL_PROJECT_TYPE, new BasicMonitor());
+        BasicDiagnostic result = new BasicDiagnostic(GenModel.class.getName(), 0, "generated", null);
+        for (String projectType : List.of(GenBaseGeneratorAdapter.MODEL_PROJECT_TYPE,
+                GenBaseGeneratorAdapter.EDIT_PROJECT_TYPE)) {
+            result.add(generator.generate(genModel, projectType, new BasicMonitor()));
+        }
+        return result;
     }
 
     private static String describe(Diagnostic d, String indent) {

@@ -1,0 +1,138 @@
+package org.tracegas.model.provider;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.time.Instant;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.eclipse.emf.edit.provider.IItemLabelProvider;
+import org.eclipse.emf.edit.provider.IItemPropertyDescriptor;
+import org.eclipse.emf.edit.provider.IItemPropertySource;
+import org.eclipse.emf.edit.provider.ITreeItemContentProvider;
+import org.junit.jupiter.api.AfterEach;
+import org.junit.jupiter.api.Test;
+import org.tracegas.model.AnalysisMethod;
+import org.tracegas.model.AnalysisRegion;
+import org.tracegas.model.Client;
+import org.tracegas.model.Measurement;
+import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.MethodVersion;
+import org.tracegas.model.Project;
+import org.tracegas.model.WorkspaceFactory;
+
+/**
+ * The labels and properties the generated item providers give the workbench's navigator and properties view,
+ * on objects of the lime-kiln campaign of the invented Eastfield Cement plant.
+ */
+class WorkbenchItemProviderAdapterFactoryTest {
+
+    /**
+     * SHA-256("abc"): FIPS 180-2, appendix B.1, one-block message (from memory; coreutils sha256sum prints it
+     * too), as the store writes it: lower-case hex.
+     */
+    private static final String SHA256_ABC = "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad";
+
+    private final WorkbenchItemProviderAdapterFactory factory = new WorkbenchItemProviderAdapterFactory();
+    private final WorkspaceFactory model = WorkspaceFactory.eINSTANCE;
+
+    @AfterEach
+    void dispose() {
+        factory.dispose();
+    }
+
+    private String text(Object o) {
+        return ((IItemLabelProvider) factory.adapt(o, IItemLabelProvider.class)).getText(o);
+    }
+
+    private Project campaign() {
+        Client client = model.createClient();
+        client.setName("Eastfield Cement");
+        Project p = model.createProject();
+        p.setCode("KLN-2026-07");
+        p.setName("Kiln 1 stack, July day");
+        client.getProjects().add(p);
+        return p;
+    }
+
+    private static Measurement measurement(Project p, MeasurementKind kind, String time) {
+        Measurement m = WorkspaceFactory.eINSTANCE.createMeasurement();
+        m.setKind(kind);
+        m.setTime(time == null ? null : Instant.parse(time));
+        p.getMeasurements().add(m);
+        return m;
+    }
+
+    @Test
+    void labelsNameTheObjectsAsTheLabWritesThem() {
+        Project p = campaign();
+        Measurement cts = measurement(p, MeasurementKind.CALIBRATION_TRANSFER_STANDARD, "2026-07-14T08:19:00Z");
+        Measurement undated = measurement(p, MeasurementKind.SAMPLE, null);
+
+        assertEquals("Eastfield Cement", text(p.getClient()));
+        assertEquals("KLN-2026-07  Kiln 1 stack, July day  (2 measurements)", text(p));
+        // ISO 8601 calendar date and time of day, in UTC (common practice, no source for the layout)
+        assertEquals("calibration transfer standard  2026-07-14 08:19:00 UTC", text(cts));
+        assertEquals("sample  time unknown", text(undated));
+
+        AnalysisMethod method = model.createAnalysisMethod();
+        method.setName("Kiln stack CO/NO");
+        MethodVersion v = model.createMethodVersion();
+        v.setNumber(2);
+        v.setFrozen(true);
+        method.getVersions().add(v);
+        AnalysisRegion co = model.createAnalysisRegion();
+        co.setCompound("CO");
+        co.setLowerWavenumber(2040);
+        co.setUpperWavenumber(2220.5);
+        v.getRegions().add(co);
+        assertEquals("Kiln stack CO/NO", text(method));
+        assertEquals("version 2 (frozen)", text(v));
+        assertEquals("CO  2040–2220.5 cm-1", text(co));
+    }
+
+    @Test
+    void theTreeGoesClientProjectMeasurementAndAMeasurementIsALeaf() {
+        Project p = campaign();
+        Measurement m = measurement(p, MeasurementKind.SAMPLE, "2026-07-14T00:00:00Z");
+        m.getLabels().put("operator note", "probe heated");
+        ITreeItemContentProvider clients = (ITreeItemContentProvider) factory.adapt(p.getClient(),
+                ITreeItemContentProvider.class);
+        assertEquals(List.of(p), List.copyOf(clients.getChildren(p.getClient())));
+        ITreeItemContentProvider projects = (ITreeItemContentProvider) factory.adapt(p, ITreeItemContentProvider.class);
+        assertEquals(List.of(m), List.copyOf(projects.getChildren(p)));
+        // the file's labels are no tree nodes: thousands of measurements each carry a dozen
+        ITreeItemContentProvider measurements = (ITreeItemContentProvider) factory.adapt(m,
+                ITreeItemContentProvider.class);
+        assertFalse(measurements.hasChildren(m));
+        assertEquals(p, measurements.getParent(m));
+    }
+
+    @Test
+    void aMeasurementsPropertiesCarryTheirUnitsAndTheSourceFilesHash() {
+        Measurement m = measurement(campaign(), MeasurementKind.SPAN, "2026-07-14T06:30:00Z");
+        m.setCellTemperature(464.15);
+        m.setCellPressure(1013.25);
+        m.setSourceFile("kiln1-0630.jdx");
+        m.setSourceSha256(SHA256_ABC);
+        IItemPropertySource source = (IItemPropertySource) factory.adapt(m, IItemPropertySource.class);
+        Map<String, String> shown = new LinkedHashMap<>();
+        for (IItemPropertyDescriptor d : source.getPropertyDescriptors(m)) {
+            Object value = d.getPropertyValue(m);
+            // an attribute's value comes wrapped (for cell editors); its label provider writes the plain value
+            value = value instanceof IItemPropertySource wrapper ? wrapper.getEditableValue(value) : value;
+            shown.put(d.getDisplayName(m), d.getLabelProvider(m).getText(value));
+        }
+        assertEquals("464.15", shown.get("Cell temperature (K)"));
+        assertEquals("1013.25", shown.get("Cell pressure (hPa)"));
+        assertEquals("span", shown.get("Kind"));
+        assertEquals("kiln1-0630.jdx", shown.get("Source file"));
+        assertEquals(SHA256_ABC, shown.get("Source file SHA-256"));
+        // the values are a block of their own in the store, never read into the model: no property for them
+        assertFalse(shown.containsKey("Spectrum"), shown.keySet().toString());
+        assertTrue(shown.containsKey("Time (UTC)"), shown.keySet().toString());
+    }
+}

@@ -1,0 +1,140 @@
+package org.tracegas.model.provider;
+
+import java.math.BigDecimal;
+import java.time.Instant;
+import java.time.ZoneOffset;
+import java.time.format.DateTimeFormatter;
+
+import org.eclipse.emf.common.notify.Adapter;
+import org.tracegas.model.AnalysisMethod;
+import org.tracegas.model.AnalysisRegion;
+import org.tracegas.model.Client;
+import org.tracegas.model.Measurement;
+import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.MethodVersion;
+import org.tracegas.model.Project;
+import org.tracegas.model.ReferenceLibrary;
+
+/**
+ * The generated item providers with the labels the workbench shows: a client by its name, a campaign by its
+ * code, name and measurement count, a measurement by its kind and start (UTC), a method version by its number
+ * and whether results use it. The generated labels put the type's name first ("Client Eastfield Cement"),
+ * which the tree's structure already says; the generated code stays as the genmodel makes it, so the labels
+ * are given here, by overriding only {@code getText} of the generated providers.
+ */
+public class WorkbenchItemProviderAdapterFactory extends WorkspaceItemProviderAdapterFactory {
+
+    private static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'")
+            .withZone(ZoneOffset.UTC);
+
+    @Override
+    public Adapter createClientAdapter() {
+        if (clientItemProvider == null) {
+            clientItemProvider = new ClientItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    return ((Client) object).getName();
+                }
+            };
+        }
+        return clientItemProvider;
+    }
+
+    @Override
+    public Adapter createProjectAdapter() {
+        if (projectItemProvider == null) {
+            projectItemProvider = new ProjectItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    Project p = (Project) object;
+                    return p.getCode() + "  " + p.getName() + "  (" + p.getMeasurements().size() + " measurements)";
+                }
+            };
+        }
+        return projectItemProvider;
+    }
+
+    @Override
+    public Adapter createMeasurementAdapter() {
+        if (measurementItemProvider == null) {
+            measurementItemProvider = new MeasurementItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    Measurement m = (Measurement) object;
+                    return kind(m.getKind()) + "  " + time(m.getTime());
+                }
+            };
+        }
+        return measurementItemProvider;
+    }
+
+    @Override
+    public Adapter createReferenceLibraryAdapter() {
+        if (referenceLibraryItemProvider == null) {
+            referenceLibraryItemProvider = new ReferenceLibraryItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    ReferenceLibrary l = (ReferenceLibrary) object;
+                    return l.getName() + (l.getDescription() == null ? "" : "  — " + l.getDescription());
+                }
+            };
+        }
+        return referenceLibraryItemProvider;
+    }
+
+    @Override
+    public Adapter createAnalysisMethodAdapter() {
+        if (analysisMethodItemProvider == null) {
+            analysisMethodItemProvider = new AnalysisMethodItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    return ((AnalysisMethod) object).getName();
+                }
+            };
+        }
+        return analysisMethodItemProvider;
+    }
+
+    @Override
+    public Adapter createMethodVersionAdapter() {
+        if (methodVersionItemProvider == null) {
+            methodVersionItemProvider = new MethodVersionItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    MethodVersion v = (MethodVersion) object;
+                    return "version " + v.getNumber() + (v.isFrozen() ? " (frozen)" : " (draft)");
+                }
+            };
+        }
+        return methodVersionItemProvider;
+    }
+
+    @Override
+    public Adapter createAnalysisRegionAdapter() {
+        if (analysisRegionItemProvider == null) {
+            analysisRegionItemProvider = new AnalysisRegionItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    AnalysisRegion r = (AnalysisRegion) object;
+                    return r.getCompound() + "  " + number(r.getLowerWavenumber()) + "–"
+                            + number(r.getUpperWavenumber()) + " cm-1";
+                }
+            };
+        }
+        return analysisRegionItemProvider;
+    }
+
+    /** A measurement's kind as the properties show it too (plugin.properties: "calibration transfer standard"). */
+    public static String kind(MeasurementKind kind) {
+        return WorkspaceEditPlugin.INSTANCE.getString("_UI_MeasurementKind_" + kind.getName() + "_literal");
+    }
+
+    /** A point in time as the tree shows it, in UTC to the second; "time unknown" for none. */
+    public static String time(Instant time) {
+        return time == null ? "time unknown" : TIME.format(time);
+    }
+
+    private static String number(double value) {
+        return BigDecimal.valueOf(value).stripTrailingZeros().toPlainString();
+    }
+}
