@@ -14,8 +14,9 @@ import org.tracegas.ui.views.SpectrumView;
 import org.tracegas.ui.views.TimeSeriesView;
 
 /**
- * The analyst's desk: workspace tree on the left, the fitted spectrum in the middle with the concentrations
- * over time beneath it, method editor and library on the right, the window high.
+ * The analyst's desk: workspace tree on the left with the selected object's properties beneath it, the fitted
+ * spectrum in the middle with the concentrations over time beneath it, method editor and library on the right,
+ * the window high.
  */
 public final class AnalysisDeskLayout implements IPerspectiveFactory {
 
@@ -26,6 +27,7 @@ public final class AnalysisDeskLayout implements IPerspectiveFactory {
         String area = layout.getEditorArea();
         layout.setEditorAreaVisible(false);
         layout.addView(NavigatorView.ID, IPageLayout.LEFT, 0.2f, area);
+        layout.addView(IPageLayout.ID_PROP_SHEET, IPageLayout.BOTTOM, 0.62f, NavigatorView.ID);
         // the method and the library the whole window high: the method's form and its comparison need the height
         IFolderLayout right = layout.createFolder("org.tracegas.ui.analysisDesk.right", IPageLayout.RIGHT, 0.66f,
                 area);

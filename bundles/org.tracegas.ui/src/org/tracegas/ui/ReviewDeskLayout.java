@@ -12,7 +12,8 @@ import org.tracegas.ui.views.SpectrumView;
 
 /**
  * The QA manager's desk: results to sign and the report to sign at the top, QA outcomes beside them, the audit
- * trail across the bottom, the tree and the spectrum for looking things up on the left.
+ * trail across the bottom, the tree, the selected object's properties and the spectrum for looking things up on
+ * the left.
  */
 public final class ReviewDeskLayout implements IPerspectiveFactory {
 
@@ -24,6 +25,7 @@ public final class ReviewDeskLayout implements IPerspectiveFactory {
         layout.setEditorAreaVisible(false);
         layout.addView(NavigatorView.ID, IPageLayout.LEFT, 0.18f, area);
         layout.addView(SpectrumView.ID, IPageLayout.BOTTOM, 0.5f, NavigatorView.ID);
+        layout.addView(IPageLayout.ID_PROP_SHEET, IPageLayout.BOTTOM, 0.55f, NavigatorView.ID);
         IFolderLayout signing = layout.createFolder("org.tracegas.ui.reviewDesk.signing", IPageLayout.TOP, 0.5f,
                 area);
         signing.addView(ResultReviewView.ID);

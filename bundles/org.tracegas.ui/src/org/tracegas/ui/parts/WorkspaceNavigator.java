@@ -2,7 +2,6 @@ package org.tracegas.ui.parts;
 
 import java.time.LocalDate;
 import java.time.ZoneOffset;
-import java.time.format.DateTimeFormatter;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
@@ -19,7 +18,6 @@ import org.eclipse.jface.action.MenuManager;
 import org.eclipse.jface.viewers.IStructuredSelection;
 import org.eclipse.jface.viewers.ITreeContentProvider;
 import org.eclipse.jface.viewers.ITreeViewerListener;
-import org.eclipse.jface.viewers.LabelProvider;
 import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.jface.viewers.TreeExpansionEvent;
 import org.eclipse.jface.viewers.TreeViewer;
@@ -30,19 +28,22 @@ import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Text;
-import org.tracegas.model.AnalysisMethod;
+import org.eclipse.emf.common.notify.AdapterFactory;
 import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
-import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
-import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.Workspace;
+import org.tracegas.model.provider.WorkbenchItemProviderAdapterFactory;
+import org.tracegas.ui.items.ItemLabels;
+import org.tracegas.ui.items.ItemTreeContent;
 
 /**
  * The workspace as a tree: clients with their projects, each project's measurements grouped by day (UTC) and
- * kind, then the reference libraries and the analysis methods with their versions. A group's measurements are
- * listed a page at a time; the node after the last page shown brings the next page when it is expanded or
+ * kind, then the reference libraries and the analysis methods with their versions and regions. The model
+ * objects' labels, icons and children are their item providers' (the workspace model's generated edit code, as
+ * the properties view shows the objects too); the headings, days, kinds and pages are this tree's own nodes. A
+ * group's measurements are listed a page at a time; the node after the last page shown brings the next page when it is expanded or
  * double-clicked. A filter box above the tree keeps what matches its text; the context menu offers what the
  * desk registered for the element. While the workspace is read, the tree holds a single note saying so.
  */
@@ -75,9 +76,8 @@ public final class WorkspaceNavigator extends Composite {
     /** Measurements listed per page under a project; a day of one-minute measurements would swamp the tree. */
     public static final int PAGE = 500;
 
-    private static final DateTimeFormatter TIME = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm:ss 'UTC'")
-            .withZone(ZoneOffset.UTC);
-
+    private final WorkbenchItemProviderAdapterFactory adapters = new WorkbenchItemProviderAdapterFactory();
+    private final Labels labels = new Labels();
     private final Text filter;
     private final TreeViewer viewer;
     /** Measurements shown per group, in pages. */
@@ -119,14 +119,12 @@ public final class WorkspaceNavigator extends Composite {
             }
         });
         viewer.getTree().setMenu(menu.createContextMenu(viewer.getTree()));
-        addDisposeListener(e -> menu.dispose());
-        viewer.setContentProvider(new Content());
-        viewer.setLabelProvider(new LabelProvider() {
-            @Override
-            public String getText(Object element) {
-                return label(element);
-            }
+        addDisposeListener(e -> {
+            menu.dispose();
+            adapters.dispose();
         });
+        viewer.setContentProvider(new Content());
+        viewer.setLabelProvider(labels);
         viewer.setUseHashlookup(true);
         viewer.addTreeListener(new ITreeViewerListener() {
             @Override
@@ -174,6 +172,11 @@ public final class WorkspaceNavigator extends Composite {
 
     public TreeViewer viewer() {
         return viewer;
+    }
+
+    /** The item providers the tree shows the model objects through, for views that show them the same way. */
+    public AdapterFactory adapters() {
+        return adapters;
     }
 
     /** The filter box above the tree. */
@@ -275,38 +278,41 @@ public final class WorkspaceNavigator extends Composite {
     }
 
     /** The text shown for a tree element. */
-    static String label(Object e) {
-        if (e instanceof Client c) {
-            return c.getName();
-        } else if (e instanceof Project p) {
-            return p.getCode() + "  " + p.getName() + "  (" + p.getMeasurements().size() + " measurements)";
-        } else if (e instanceof Measurement m) {
-            return kind(m.getKind()) + "  " + (m.getTime() == null ? "time unknown" : TIME.format(m.getTime()));
-        } else if (e instanceof Day d) {
-            return d.day().equals(LocalDate.MIN) ? "time unknown" : d.day().toString();
-        } else if (e instanceof KindGroup g) {
-            return kind(g.kind());
-        } else if (e instanceof More m) {
-            return "… " + m.hidden() + " more measurements (expand for the next " + Math.min(PAGE, m.hidden()) + ")";
-        } else if (e instanceof Note n) {
-            return n.text();
-        } else if (e instanceof Group g) {
-            return g.label();
-        } else if (e instanceof ReferenceLibrary l) {
-            return l.getName() + (l.getDescription() == null ? "" : "  — " + l.getDescription());
-        } else if (e instanceof AnalysisMethod m) {
-            return m.getName();
-        } else if (e instanceof MethodVersion v) {
-            return "version " + v.getNumber() + (v.isFrozen() ? " (frozen)" : " (draft)");
+    private String label(Object e) {
+        return labels.getText(e);
+    }
+
+    /** The tree's own nodes' labels; a model object's are its item provider's. */
+    private final class Labels extends ItemLabels {
+        Labels() {
+            super(adapters);
         }
-        return String.valueOf(e);
+
+        @Override
+        public String getText(Object e) {
+            if (e instanceof Day d) {
+                return d.day().equals(LocalDate.MIN) ? "time unknown" : d.day().toString();
+            } else if (e instanceof KindGroup g) {
+                return WorkbenchItemProviderAdapterFactory.kind(g.kind());
+            } else if (e instanceof More m) {
+                return "… " + m.hidden() + " more measurements (expand for the next " + Math.min(PAGE, m.hidden())
+                        + ")";
+            } else if (e instanceof Note n) {
+                return n.text();
+            } else if (e instanceof Group g) {
+                return g.label();
+            }
+            return super.getText(e);
+        }
     }
 
-    private static String kind(MeasurementKind k) {
-        return k.getLiteral().toLowerCase(Locale.ROOT).replace('_', ' ');
-    }
-
+    /**
+     * The model objects' children as their item providers give them, except a project's measurements, which the
+     * tree groups by day and kind and lists a page at a time.
+     */
     private final class Content implements ITreeContentProvider {
+        private final ItemTreeContent items = new ItemTreeContent(adapters);
+
         @Override
         public Object[] getElements(Object input) {
             if (input instanceof Note n) {
@@ -321,9 +327,7 @@ public final class WorkspaceNavigator extends Composite {
 
         @Override
         public Object[] getChildren(Object e) {
-            if (e instanceof Client c) {
-                return c.getProjects().toArray();
-            } else if (e instanceof Project p) {
+            if (e instanceof Project p) {
                 return days(p).toArray();
             } else if (e instanceof Day d) {
                 return byDay(d.project()).get(d.day()).keySet().stream().map(k -> new KindGroup(d, k)).toArray();
@@ -331,13 +335,11 @@ public final class WorkspaceNavigator extends Composite {
                 return page(g);
             } else if (e instanceof Group g) {
                 return g.members().toArray();
-            } else if (e instanceof AnalysisMethod m) {
-                return m.getVersions().toArray();
             } else if (e instanceof More) {
                 // shown for the moment the node opens, until the next page replaces it
                 return new Object[] {new Note("listing the next measurements …")};
             }
-            return new Object[0];
+            return items.getChildren(e);
         }
 
         private Object[] page(KindGroup g) {
@@ -361,15 +363,17 @@ public final class WorkspaceNavigator extends Composite {
             } else if (e instanceof Measurement m && m.eContainer() instanceof Project p && m.getTime() != null) {
                 return new KindGroup(new Day(p, LocalDate.ofInstant(m.getTime(), ZoneOffset.UTC)), m.getKind());
             }
-            return e instanceof org.eclipse.emf.ecore.EObject o ? o.eContainer() : null;
+            return items.getParent(e);
         }
 
         @Override
         public boolean hasChildren(Object e) {
             if (e instanceof Project p) {
                 return !p.getMeasurements().isEmpty();
+            } else if (e instanceof Day || e instanceof KindGroup || e instanceof Group || e instanceof Note) {
+                return getChildren(e).length > 0;
             }
-            return e instanceof More || getChildren(e).length > 0;
+            return e instanceof More || items.hasChildren(e);
         }
     }
 }

@@ -8,9 +8,12 @@ import org.eclipse.ui.IViewPart;
 import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.handlers.IHandlerService;
 import org.eclipse.ui.part.ViewPart;
+import org.eclipse.ui.views.properties.IPropertySheetPage;
+import org.eclipse.ui.views.properties.PropertySheetPage;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
 import org.tracegas.model.Workspace;
+import org.tracegas.ui.items.ItemProperties;
 import org.tracegas.ui.jobs.LatestLoad;
 import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.Desk;
@@ -19,7 +22,8 @@ import org.tracegas.ui.session.StoredWorkspace;
 /**
  * The workspace tree; double-clicking the demo project runs its method over its measurements in the background,
  * and the context menu runs a stored method over the selected measurements. The tree is read again when the
- * desk stores measurements or results.
+ * desk stores measurements or results. The properties view shows the selected object's features through the same
+ * item providers as the tree, read only.
  */
 public final class NavigatorView extends ViewPart {
 
@@ -98,6 +102,22 @@ public final class NavigatorView extends ViewPart {
                         navigator.openProject(projectCode);
                     }
                 }, message -> navigator.showNote("The workspace could not be read: " + message));
+    }
+
+    /** The properties view's page while this view is active: the selected model object's features. */
+    @Override
+    public <T> T getAdapter(Class<T> adapter) {
+        if (adapter == IPropertySheetPage.class) {
+            return adapter.cast(propertiesPage(navigator));
+        }
+        return super.getAdapter(adapter);
+    }
+
+    /** A properties page showing what is selected in the navigator through its item providers. */
+    static PropertySheetPage propertiesPage(WorkspaceNavigator navigator) {
+        PropertySheetPage page = new PropertySheetPage();
+        page.setPropertySourceProvider(o -> ItemProperties.of(navigator.adapters(), o));
+        return page;
     }
 
     @Override
