@@ -22,8 +22,9 @@ import org.eclipse.emf.edit.provider.ReflectiveItemProviderAdapterFactory;
 /**
  * Edits model objects through commands on one command stack, so each change can be undone and redone.
  * <p>
- * The model has no generated edit code; the reflective item providers of EMF.Edit build the commands
- * from the metamodel. A change that cannot be executed (wrong type, unknown feature, read-only
+ * The commands come from the item providers the EMF.Edit registry holds for the model: where the bundle
+ * org.tracegas.model.edit is installed (the workbench), the generated ones it registers in its plugin.xml;
+ * without it, the reflective ones, which build the same commands from the metamodel. A change that cannot be executed (wrong type, unknown feature, read-only
  * feature) is refused with an exception naming the feature, and the stack is left as it was.
  */
 public final class ModelEditor {
