@@ -13,6 +13,7 @@ import java.util.Set;
 import org.eclipse.core.commands.IHandler;
 import org.eclipse.core.runtime.IConfigurationElement;
 import org.eclipse.core.runtime.Platform;
+import org.eclipse.ui.IPageLayout;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -95,6 +96,8 @@ class DeskCommandsTest {
                 views.add(v.getAttribute("id"));
             }
         }
+        // the platform's Properties view, which shows the tree's selection through the model's item providers
+        views.add(IPageLayout.ID_PROP_SHEET);
         int desks = 0;
         for (IConfigurationElement p : ours("org.eclipse.ui.perspectiveExtensions")) {
             Set<String> shortcuts = new HashSet<>();
