@@ -21,6 +21,7 @@ import org.eclipse.ui.IPageLayout;
 import org.eclipse.ui.IViewPart;
 import org.eclipse.ui.IWorkbenchPage;
 import org.eclipse.ui.IWorkbenchWindow;
+import org.eclipse.ui.views.properties.IPropertySheetEntry;
 import org.eclipse.ui.views.properties.PropertySheet;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -99,6 +100,8 @@ class DeskPropertiesTest {
         Map<String, String> shown = new LinkedHashMap<>();
         for (TreeItem row : sheet.getItems()) {
             shown.put(row.getText(0), row.getText(1));
+            // a stored record is audited: the sheet offers no cell editor for any of its features
+            assertNull(((IPropertySheetEntry) row.getData()).getEditor(sheet), row.getText(0) + " is read only");
         }
         assertEquals("sample", shown.get("Kind"));
         assertEquals("2026-12-03T07:00:00Z", shown.get("Time (UTC)"));
