@@ -118,4 +118,74 @@ class MethodVersionsTest {
         assertTrue(MethodVersions.algorithms(opened).contains("curve-of-growth"));
         assertTrue(!MethodVersions.algorithms(opened).contains("line-list"));
     }
+
+    @Test
+    void theHeadsSettingsAndTheRecipeStepsAreTheMethodTextsAndReadBack() throws Exception {
+        assertEquals("shift", draft.getShiftTerm());
+        assertEquals("ppm", draft.getReportingUnit());
+        assertEquals(1e-7, draft.getTolerance());
+        assertEquals(List.of(), draft.getRecipeSteps());
+        assertEquals("", draft.getCellConditions(), "a method of classical least squares has no [line-list] block");
+        draft.setNonlinearity(true);
+        draft.setTolerance(1e-5);
+        draft.setMaxAbsorbance(0.8);
+        draft.setShiftTerm("shift-and-width");
+        draft.setReportingUnit("ppb");
+        draft.getRecipeSteps().addAll(List.of("baseline degree=1;regions=2000:2010,2190:2200",
+                "shift offset=0.25"));
+        StoredMethod edited = MethodVersions.edited(opened, method, draft);
+        String head = edited.declaration();
+        // the method text's words, as MethodDefinition documents them
+        for (String line : List.of("nonlinearity = yes\n", "tolerance = 1.0E-5\n", "max-absorbance = 0.8\n",
+                "shift = shift-and-width\n", "reporting-unit = ppb\n",
+                "[recipe]\nstep = baseline degree=1;regions=2000:2010,2190:2200\nstep = shift offset=0.25\n")) {
+            assertTrue(head.contains(line), line + " in " + head);
+        }
+        StoredMethod back = StoredMethod.parse(edited.content(), "edited");
+        assertEquals(edited, back);
+        assertEquals(org.tracegas.quantify.ReportingUnit.PPB, back.method().reportingUnit());
+        assertEquals(2, back.recipe().entries().size());
+        assertEquals("shift", back.recipe().entries().get(1).stepId());
+
+        // the model of the saved version is the draft again
+        MethodVersion reopened = WorkspaceFactory.eINSTANCE.createMethodVersion();
+        MethodVersions.fillRegions(reopened, back);
+        assertEquals(List.of(draft.isNonlinearity(), draft.getTolerance(), draft.getMaxAbsorbance(),
+                draft.getShiftTerm(), draft.getReportingUnit(), draft.getRecipeSteps()), List.of(
+                        reopened.isNonlinearity(), reopened.getTolerance(), reopened.getMaxAbsorbance(),
+                        reopened.getShiftTerm(), reopened.getReportingUnit(), reopened.getRecipeSteps()));
+    }
+
+    @Test
+    void settingsAndStepsTheMethodTextCannotTakeAreNamed() {
+        draft.setTolerance(0);
+        assertEquals("tolerance: must lie between 0 and 1 (the relative change of the concentrations at which the"
+                + " fit stops), was 0.0", refusal());
+        draft.setTolerance(1.5);
+        assertTrue(refusal().startsWith("tolerance: "), refusal());
+        draft.setTolerance(1e-6);
+
+        draft.setMaxAbsorbance(Double.NaN);
+        assertEquals("max absorbance: must be a positive number, was NaN", refusal());
+        draft.setMaxAbsorbance(1);
+
+        draft.setReportingUnit("mg/m3");
+        assertEquals("reporting unit: 'mg/m3' is none of [ppm, ppb, percent]", refusal());
+        draft.setReportingUnit("percent");
+
+        draft.setShiftTerm("stretch");
+        assertEquals("shift: 'stretch' is none of [none, shift, shift-and-width, scale]", refusal());
+        // a relative wavenumber scale goes with curve-of-growth only (MethodDefinition's format)
+        draft.setShiftTerm("scale");
+        assertEquals("shift: scale is not offered by the fit algorithm classical-least-squares, which offers"
+                + " [shift, shift-and-width]", refusal());
+        draft.setAlgorithm("curve-of-growth");
+        assertEquals(org.tracegas.quantify.ShiftTerm.SCALE, MethodVersions.edited(opened, method, draft).method()
+                .shiftTerm());
+
+        draft.getRecipeSteps().addAll(List.of("shift offset=0.25", "baseline degree"));
+        assertTrue(refusal().startsWith("recipe step 2: "), refusal());
+        draft.getRecipeSteps().set(1, "baseline degree=0\nshift offset=1");
+        assertTrue(refusal().startsWith("recipe step 2: a step is one line"), refusal());
+    }
 }

@@ -40,7 +40,9 @@ final class LineListBlock {
 
     private static final Set<String> KEYS = Set.of("temperature", "pressure", "field-of-view", "cell-conditions",
             "gas");
-    private static final Set<String> CELL_CONDITIONS = Set.of("stated", "measured");
+    /** The key of the cell conditions the spectra are computed at, and its values, the default first. */
+    static final String CELL_CONDITIONS_KEY = "cell-conditions";
+    static final List<String> CELL_CONDITIONS = List.of("stated", "measured");
     private static final Set<String> PARTITIONS = Set.of("linear", "non-linear");
 
     private LineListBlock() {
@@ -65,13 +67,13 @@ final class LineListBlock {
             }
             settings.add(new AlgorithmSetting(key, Double.toString(v)));
         }
-        if (b.has("cell-conditions")) {
+        if (b.has(CELL_CONDITIONS_KEY)) {
             // only when given, so that the versions of methods written without it keep their text and hash
-            String conditions = b.text("cell-conditions");
+            String conditions = b.text(CELL_CONDITIONS_KEY);
             if (!CELL_CONDITIONS.contains(conditions)) {
-                throw b.error("cell-conditions", "'" + conditions + "' is none of " + CELL_CONDITIONS);
+                throw b.error(CELL_CONDITIONS_KEY, "'" + conditions + "' is none of " + CELL_CONDITIONS);
             }
-            settings.add(new AlgorithmSetting("cell-conditions", conditions));
+            settings.add(new AlgorithmSetting(CELL_CONDITIONS_KEY, conditions));
         }
         Set<String> compounds = new HashSet<>();
         for (KeyValueFile.Value gas : b.all("gas")) {

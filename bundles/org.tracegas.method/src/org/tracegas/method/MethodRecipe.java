@@ -38,23 +38,58 @@ public final class MethodRecipe {
      */
     static Recipe read(KeyValueFile.Section block) throws FileFormatException {
         block.allow(Set.of("step"));
-        StringBuilder text = new StringBuilder(HEADER);
+        List<String> steps = new java.util.ArrayList<>();
         for (KeyValueFile.Value v : block.all("step")) {
             try {
-                Recipe.parse(HEADER + v.text() + "\n");
+                check(v.text());
             } catch (IllegalArgumentException e) {
                 throw v.error(e.getMessage());
             }
-            text.append(v.text()).append('\n');
+            steps.add(v.text());
         }
-        return Recipe.parse(text.toString());
+        return of(steps);
+    }
+
+    /** @throws IllegalArgumentException saying why the value of a step line does not parse */
+    private static void check(String step) {
+        if (step.contains("\n")) {
+            throw new IllegalArgumentException("a step is one line, found '" + step + "'");
+        }
+        try {
+            Recipe.parse(HEADER + step + "\n");
+        } catch (IllegalArgumentException e) {
+            // the step's own words: the line number counts the recipe text's header, which no one writes
+            throw new IllegalArgumentException(e.getMessage().replaceFirst("^recipe line \\d+: ", ""), e);
+        }
     }
 
     /** The {@code step = } lines of a recipe; empty for a recipe of no step. */
     static String write(Recipe recipe) {
-        String canonical = recipe.toCanonicalString();
         StringBuilder b = new StringBuilder();
-        canonical.substring(HEADER.length()).lines().forEach(l -> b.append("step = ").append(l).append('\n'));
+        steps(recipe).forEach(l -> b.append("step = ").append(l).append('\n'));
         return b.toString();
+    }
+
+    /** The steps of a recipe in order, each as the value of its {@code step = } line. */
+    public static List<String> steps(Recipe recipe) {
+        return recipe.toCanonicalString().substring(HEADER.length()).lines().toList();
+    }
+
+    /**
+     * The recipe of steps each written as the value of a {@code step = } line, as a method file's block reads them.
+     *
+     * @throws IllegalArgumentException naming the step (counted from 1) that does not parse, and why
+     */
+    public static Recipe of(List<String> steps) {
+        StringBuilder text = new StringBuilder(HEADER);
+        for (int i = 0; i < steps.size(); i++) {
+            try {
+                check(steps.get(i));
+            } catch (IllegalArgumentException e) {
+                throw new IllegalArgumentException("recipe step " + (i + 1) + ": " + e.getMessage(), e);
+            }
+            text.append(steps.get(i)).append('\n');
+        }
+        return Recipe.parse(text.toString());
     }
 }

@@ -7,12 +7,16 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.preprocess.Recipe;
 import org.tracegas.qa.basis.PathOrigin;
+import org.tracegas.quantify.AlgorithmSetting;
 import org.tracegas.quantify.AnalysisRegion;
 import org.tracegas.quantify.Analyte;
 import org.tracegas.quantify.FitAlgorithm;
 import org.tracegas.quantify.FitAlgorithmRegistry;
 import org.tracegas.quantify.QuantificationMethod;
+import org.tracegas.quantify.ReportingUnit;
+import org.tracegas.quantify.ShiftTerm;
 import org.tracegas.quantify.WavenumberWindow;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
@@ -23,11 +27,13 @@ import org.tracegas.store.WorkspaceStore;
  * A stored method version in the workspace model, where the workbench edits it, and the edit back into a new
  * version through the same store service and the same stored text ({@link StoredMethod}) the runner uses.
  * <p>
- * The model holds the method's path length, iteration limit, fit algorithm and path source, and each region of each analyte in the method's
- * order as one {@link org.tracegas.model.AnalysisRegion} (its compound, its span, its baseline order and the
- * analyte's interferents); regions are added and removed in the model. Everything else of the method (other
- * settings, transform, references, residual limits, the windows inside a span) is kept from the version the
- * edit started from.
+ * The model holds the settings of the method text's head (path length, path source, nonlinearity, tolerance,
+ * iteration limit, maximum absorbance, shift term, reporting unit, fit algorithm), the steps of its
+ * {@code [recipe]}, the cell conditions of its {@code [line-list]} block, and each region of each analyte in the
+ * method's order as one {@link org.tracegas.model.AnalysisRegion} (its compound, its span, its baseline order and
+ * the analyte's interferents); regions are added and removed in the model. Everything else of the method
+ * (resolution, transform, references, the rest of the line-list block, residual limits, the windows inside a
+ * span) is kept from the version the edit started from.
  */
 public final class MethodVersions {
 
@@ -65,8 +71,8 @@ public final class MethodVersions {
     }
 
     /**
-     * Sets the model's regions and settings to those of a stored method (for a draft that is thrown away, say);
-     * each region remembers its place in the method ({@code openedAs}).
+     * Sets the model's regions, settings, recipe steps and cell conditions to those of a stored method (for a draft
+     * that is thrown away, say); each region remembers its place in the method ({@code openedAs}).
      */
     public static void fillRegions(MethodVersion version, StoredMethod stored) {
         QuantificationMethod method = stored.method();
@@ -75,6 +81,14 @@ public final class MethodVersions {
         version.setMaxIterations(method.maxIterations());
         version.setAlgorithm(method.algorithm().name());
         version.setPathSource(text(stored.pathSource()));
+        version.setNonlinearity(method.nonlinearity());
+        version.setTolerance(method.tolerance());
+        version.setMaxAbsorbance(method.maxAbsorbance());
+        version.setShiftTerm(text(method.shiftTerm()));
+        version.setReportingUnit(text(method.reportingUnit()));
+        version.getRecipeSteps().clear();
+        version.getRecipeSteps().addAll(MethodRecipe.steps(stored.recipe()));
+        version.setCellConditions(cellConditions(method));
         int place = 0;
         for (Analyte a : method.analytes()) {
             for (AnalysisRegion r : a.regions()) {
@@ -91,10 +105,11 @@ public final class MethodVersions {
     }
 
     /**
-     * The method the edited model declares: the method it was opened from, with the model's path length,
-     * iteration limit, fit algorithm, path source and regions. The algorithm keeps its settings while it is the
-     * opened one; another is taken without settings, and one that needs them (line-list, whose line lists and cell
-     * conditions the method file's block gives) is refused. Each run of regions of one compound is one analyte, in the model's order;
+     * The method the edited model declares: the method it was opened from, with the model's settings, recipe steps
+     * and regions. The algorithm keeps its settings while it is the opened one (a line-list method's with the
+     * model's cell conditions, which other algorithms do not read); another is taken without settings, and one
+     * that needs them (line-list, whose line lists the method file's block gives) is refused. Each run of regions
+     * of one compound is one analyte, in the model's order;
      * a region the method was opened with keeps its residual limit, and its windows while its span is unchanged;
      * a region added in the model is one window without a residual limit.
      *
@@ -118,17 +133,32 @@ public final class MethodVersions {
             throw new IllegalArgumentException("max iterations: must be at least 1, was "
                     + draft.getMaxIterations());
         }
-        PathOrigin pathSource = pathSource(draft.getPathSource());
+        if (!(draft.getTolerance() > 0 && draft.getTolerance() < 1)) {
+            throw new IllegalArgumentException("tolerance: must lie between 0 and 1 (the relative change of the"
+                    + " concentrations at which the fit stops), was " + draft.getTolerance());
+        }
+        if (!(draft.getMaxAbsorbance() > 0 && Double.isFinite(draft.getMaxAbsorbance()))) {
+            throw new IllegalArgumentException("max absorbance: must be a positive number, was "
+                    + draft.getMaxAbsorbance());
+        }
+        PathOrigin pathSource = constant(PathOrigin.class, draft.getPathSource(), "path source");
+        ShiftTerm shift = constant(ShiftTerm.class, draft.getShiftTerm(), "shift");
+        ReportingUnit unit = constant(ReportingUnit.class, draft.getReportingUnit(), "reporting unit");
+        Recipe recipe = MethodRecipe.of(draft.getRecipeSteps());
+        boolean sameAlgorithm = base.algorithm().name().equals(draft.getAlgorithm());
+        FitAlgorithm algorithm = sameAlgorithm ? base.algorithm() : algorithm(draft.getAlgorithm());
+        if (shift != ShiftTerm.NONE && !algorithm.shiftTerms().contains(shift)) {
+            throw new IllegalArgumentException("shift: " + text(shift) + " is not offered by the fit algorithm "
+                    + algorithm.name() + ", which offers " + algorithm.shiftTerms().stream()
+                            .map(MethodVersions::text).sorted().toList());
+        }
         List<AnalysisRegion> openedRegions = base.analytes().stream().flatMap(a -> a.regions().stream()).toList();
         QuantificationMethod.Builder b = QuantificationMethod.builder(base.name())
-                .pathLengthMetres(draft.getPathLength()).nonlinearity(base.nonlinearity())
-                .tolerance(base.tolerance()).maxIterations(draft.getMaxIterations())
-                .maxAbsorbance(base.maxAbsorbance()).shiftTerm(base.shiftTerm()).reportingUnit(base.reportingUnit());
-        if (base.algorithm().name().equals(draft.getAlgorithm())) {
-            b.algorithm(base.algorithm());
-            base.algorithmSettings().forEach(b::algorithmSetting);
-        } else {
-            b.algorithm(algorithm(draft.getAlgorithm()));
+                .pathLengthMetres(draft.getPathLength()).nonlinearity(draft.isNonlinearity())
+                .tolerance(draft.getTolerance()).maxIterations(draft.getMaxIterations())
+                .maxAbsorbance(draft.getMaxAbsorbance()).shiftTerm(shift).reportingUnit(unit).algorithm(algorithm);
+        if (sameAlgorithm) {
+            settings(base, draft.getCellConditions()).forEach(b::algorithmSetting);
         }
         java.util.Set<String> compounds = new java.util.HashSet<>();
         int next = 0;
@@ -164,8 +194,51 @@ public final class MethodVersions {
         }
         // the references are the opened version's, so are their conditions
         return new StoredMethod(built, opened.transform(), opened.libraryVersionId(),
-                opened.libraryContentHash(), opened.recipe(), opened.resolution(), opened.referenceConditions(),
+                opened.libraryContentHash(), recipe, opened.resolution(), opened.referenceConditions(),
                 pathSource);
+    }
+
+    /**
+     * The cell conditions a line-list method computes its spectra at, as its block names them (stated when the
+     * block names none); empty for a method of another algorithm.
+     */
+    private static String cellConditions(QuantificationMethod method) {
+        if (!method.algorithm().name().equals(LineListBlock.NAME)) {
+            return "";
+        }
+        return method.algorithmSettings().stream().filter(s -> s.key().equals(LineListBlock.CELL_CONDITIONS_KEY))
+                .map(AlgorithmSetting::value).findFirst().orElse(LineListBlock.CELL_CONDITIONS.get(0));
+    }
+
+    /**
+     * The opened method's algorithm settings with the draft's cell conditions: unchanged while they are the opened
+     * ones (so that a block written without them keeps its text), else set in the place the block's reader gives
+     * them, before the gases.
+     */
+    private static List<AlgorithmSetting> settings(QuantificationMethod base, String cellConditions) {
+        if (!base.algorithm().name().equals(LineListBlock.NAME) || cellConditions(base).equals(cellConditions)) {
+            return base.algorithmSettings();
+        }
+        if (!LineListBlock.CELL_CONDITIONS.contains(cellConditions)) {
+            throw new IllegalArgumentException("cell conditions: '" + cellConditions + "' is none of "
+                    + LineListBlock.CELL_CONDITIONS);
+        }
+        AlgorithmSetting set = new AlgorithmSetting(LineListBlock.CELL_CONDITIONS_KEY, cellConditions);
+        List<AlgorithmSetting> settings = new ArrayList<>();
+        boolean placed = false;
+        for (AlgorithmSetting s : base.algorithmSettings()) {
+            if (s.key().equals(LineListBlock.CELL_CONDITIONS_KEY)) {
+                settings.add(set);
+                placed = true;
+                continue;
+            }
+            if (!placed && s.key().equals("gas")) {
+                settings.add(set);
+                placed = true;
+            }
+            settings.add(s);
+        }
+        return settings;
     }
 
     /**
@@ -181,7 +254,22 @@ public final class MethodVersions {
 
     /** The path sources a method text names, in its words. */
     public static List<String> pathSources() {
-        return java.util.Arrays.stream(PathOrigin.values()).map(MethodVersions::text).toList();
+        return names(PathOrigin.class);
+    }
+
+    /** The shift terms a method text names, in its words; the fit algorithm offers some of them. */
+    public static List<String> shiftTerms() {
+        return names(ShiftTerm.class);
+    }
+
+    /** The reporting units a method text names, in its words. */
+    public static List<String> reportingUnits() {
+        return names(ReportingUnit.class);
+    }
+
+    /** The cell conditions of a line-list method's block, in its words. */
+    public static List<String> cellConditions() {
+        return LineListBlock.CELL_CONDITIONS;
     }
 
     private static FitAlgorithm algorithm(String name) {
@@ -194,17 +282,22 @@ public final class MethodVersions {
                 "algorithm: '" + name + "' is none of the installed fit algorithms " + installed.names()));
     }
 
-    private static PathOrigin pathSource(String text) {
-        for (PathOrigin o : PathOrigin.values()) {
-            if (text(o).equals(text)) {
-                return o;
-            }
-        }
-        throw new IllegalArgumentException("path source: '" + text + "' is none of " + pathSources());
+    private static <E extends Enum<E>> List<String> names(Class<E> type) {
+        return java.util.Arrays.stream(type.getEnumConstants()).map(MethodVersions::text).toList();
     }
 
-    private static String text(PathOrigin origin) {
-        return origin.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
+    /** The constant a method text names by its word; the field is named when the word is none of them. */
+    private static <E extends Enum<E>> E constant(Class<E> type, String text, String field) {
+        for (E e : type.getEnumConstants()) {
+            if (text(e).equals(text)) {
+                return e;
+            }
+        }
+        throw new IllegalArgumentException(field + ": '" + text + "' is none of " + names(type));
+    }
+
+    private static String text(Enum<?> constant) {
+        return constant.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
     }
 
     /**

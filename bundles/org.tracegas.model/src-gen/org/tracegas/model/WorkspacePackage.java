@@ -881,13 +881,76 @@ public interface WorkspacePackage extends EPackage {
 	int METHOD_VERSION__PATH_SOURCE = CONTENT_VERSION_FEATURE_COUNT + 4;
 
 	/**
+	 * The feature id for the '<em><b>Nonlinearity</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__NONLINEARITY = CONTENT_VERSION_FEATURE_COUNT + 5;
+
+	/**
+	 * The feature id for the '<em><b>Tolerance</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__TOLERANCE = CONTENT_VERSION_FEATURE_COUNT + 6;
+
+	/**
+	 * The feature id for the '<em><b>Max Absorbance</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__MAX_ABSORBANCE = CONTENT_VERSION_FEATURE_COUNT + 7;
+
+	/**
+	 * The feature id for the '<em><b>Shift Term</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__SHIFT_TERM = CONTENT_VERSION_FEATURE_COUNT + 8;
+
+	/**
+	 * The feature id for the '<em><b>Reporting Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__REPORTING_UNIT = CONTENT_VERSION_FEATURE_COUNT + 9;
+
+	/**
+	 * The feature id for the '<em><b>Recipe Steps</b></em>' attribute list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__RECIPE_STEPS = CONTENT_VERSION_FEATURE_COUNT + 10;
+
+	/**
+	 * The feature id for the '<em><b>Cell Conditions</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__CELL_CONDITIONS = CONTENT_VERSION_FEATURE_COUNT + 11;
+
+	/**
 	 * The number of structural features of the '<em>Method Version</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int METHOD_VERSION_FEATURE_COUNT = CONTENT_VERSION_FEATURE_COUNT + 5;
+	int METHOD_VERSION_FEATURE_COUNT = CONTENT_VERSION_FEATURE_COUNT + 12;
 
 	/**
 	 * The number of operations of the '<em>Method Version</em>' class.
@@ -1637,6 +1700,83 @@ public interface WorkspacePackage extends EPackage {
 	EAttribute getMethodVersion_PathSource();
 
 	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#isNonlinearity <em>Nonlinearity</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Nonlinearity</em>'.
+	 * @see org.tracegas.model.MethodVersion#isNonlinearity()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_Nonlinearity();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getTolerance <em>Tolerance</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Tolerance</em>'.
+	 * @see org.tracegas.model.MethodVersion#getTolerance()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_Tolerance();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getMaxAbsorbance <em>Max Absorbance</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Max Absorbance</em>'.
+	 * @see org.tracegas.model.MethodVersion#getMaxAbsorbance()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_MaxAbsorbance();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getShiftTerm <em>Shift Term</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Shift Term</em>'.
+	 * @see org.tracegas.model.MethodVersion#getShiftTerm()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_ShiftTerm();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getReportingUnit <em>Reporting Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Reporting Unit</em>'.
+	 * @see org.tracegas.model.MethodVersion#getReportingUnit()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_ReportingUnit();
+
+	/**
+	 * Returns the meta object for the attribute list '{@link org.tracegas.model.MethodVersion#getRecipeSteps <em>Recipe Steps</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute list '<em>Recipe Steps</em>'.
+	 * @see org.tracegas.model.MethodVersion#getRecipeSteps()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_RecipeSteps();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.MethodVersion#getCellConditions <em>Cell Conditions</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Cell Conditions</em>'.
+	 * @see org.tracegas.model.MethodVersion#getCellConditions()
+	 * @see #getMethodVersion()
+	 * @generated
+	 */
+	EAttribute getMethodVersion_CellConditions();
+
+	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.AnalysisRegion <em>Analysis Region</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2262,6 +2402,62 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute METHOD_VERSION__PATH_SOURCE = eINSTANCE.getMethodVersion_PathSource();
+
+		/**
+		 * The meta object literal for the '<em><b>Nonlinearity</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__NONLINEARITY = eINSTANCE.getMethodVersion_Nonlinearity();
+
+		/**
+		 * The meta object literal for the '<em><b>Tolerance</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__TOLERANCE = eINSTANCE.getMethodVersion_Tolerance();
+
+		/**
+		 * The meta object literal for the '<em><b>Max Absorbance</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__MAX_ABSORBANCE = eINSTANCE.getMethodVersion_MaxAbsorbance();
+
+		/**
+		 * The meta object literal for the '<em><b>Shift Term</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__SHIFT_TERM = eINSTANCE.getMethodVersion_ShiftTerm();
+
+		/**
+		 * The meta object literal for the '<em><b>Reporting Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__REPORTING_UNIT = eINSTANCE.getMethodVersion_ReportingUnit();
+
+		/**
+		 * The meta object literal for the '<em><b>Recipe Steps</b></em>' attribute list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__RECIPE_STEPS = eINSTANCE.getMethodVersion_RecipeSteps();
+
+		/**
+		 * The meta object literal for the '<em><b>Cell Conditions</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute METHOD_VERSION__CELL_CONDITIONS = eINSTANCE.getMethodVersion_CellConditions();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.AnalysisRegionImpl <em>Analysis Region</em>}' class.

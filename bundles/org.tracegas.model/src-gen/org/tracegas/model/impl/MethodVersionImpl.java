@@ -14,6 +14,7 @@ import org.eclipse.emf.ecore.InternalEObject;
 
 import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
+import org.eclipse.emf.ecore.util.EDataTypeUniqueEList;
 import org.eclipse.emf.ecore.util.EObjectContainmentEList;
 import org.eclipse.emf.ecore.util.InternalEList;
 
@@ -34,6 +35,13 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getMaxIterations <em>Max Iterations</em>}</li>
  *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getAlgorithm <em>Algorithm</em>}</li>
  *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getPathSource <em>Path Source</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#isNonlinearity <em>Nonlinearity</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getTolerance <em>Tolerance</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getMaxAbsorbance <em>Max Absorbance</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getShiftTerm <em>Shift Term</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getReportingUnit <em>Reporting Unit</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getRecipeSteps <em>Recipe Steps</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MethodVersionImpl#getCellConditions <em>Cell Conditions</em>}</li>
  * </ul>
  *
  * @generated
@@ -128,6 +136,136 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	 * @ordered
 	 */
 	protected String pathSource = PATH_SOURCE_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #isNonlinearity() <em>Nonlinearity</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #isNonlinearity()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final boolean NONLINEARITY_EDEFAULT = false;
+
+	/**
+	 * The cached value of the '{@link #isNonlinearity() <em>Nonlinearity</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #isNonlinearity()
+	 * @generated
+	 * @ordered
+	 */
+	protected boolean nonlinearity = NONLINEARITY_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getTolerance() <em>Tolerance</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getTolerance()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double TOLERANCE_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getTolerance() <em>Tolerance</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getTolerance()
+	 * @generated
+	 * @ordered
+	 */
+	protected double tolerance = TOLERANCE_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getMaxAbsorbance() <em>Max Absorbance</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getMaxAbsorbance()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final double MAX_ABSORBANCE_EDEFAULT = 0.0;
+
+	/**
+	 * The cached value of the '{@link #getMaxAbsorbance() <em>Max Absorbance</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getMaxAbsorbance()
+	 * @generated
+	 * @ordered
+	 */
+	protected double maxAbsorbance = MAX_ABSORBANCE_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getShiftTerm() <em>Shift Term</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getShiftTerm()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String SHIFT_TERM_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getShiftTerm() <em>Shift Term</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getShiftTerm()
+	 * @generated
+	 * @ordered
+	 */
+	protected String shiftTerm = SHIFT_TERM_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getReportingUnit() <em>Reporting Unit</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getReportingUnit()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String REPORTING_UNIT_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getReportingUnit() <em>Reporting Unit</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getReportingUnit()
+	 * @generated
+	 * @ordered
+	 */
+	protected String reportingUnit = REPORTING_UNIT_EDEFAULT;
+
+	/**
+	 * The cached value of the '{@link #getRecipeSteps() <em>Recipe Steps</em>}' attribute list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getRecipeSteps()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<String> recipeSteps;
+
+	/**
+	 * The default value of the '{@link #getCellConditions() <em>Cell Conditions</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getCellConditions()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String CELL_CONDITIONS_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getCellConditions() <em>Cell Conditions</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getCellConditions()
+	 * @generated
+	 * @ordered
+	 */
+	protected String cellConditions = CELL_CONDITIONS_EDEFAULT;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -259,6 +397,157 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 	 * @generated
 	 */
 	@Override
+	public boolean isNonlinearity() {
+		return nonlinearity;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setNonlinearity(boolean newNonlinearity) {
+		boolean oldNonlinearity = nonlinearity;
+		nonlinearity = newNonlinearity;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__NONLINEARITY, oldNonlinearity, nonlinearity));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getTolerance() {
+		return tolerance;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setTolerance(double newTolerance) {
+		double oldTolerance = tolerance;
+		tolerance = newTolerance;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__TOLERANCE, oldTolerance, tolerance));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public double getMaxAbsorbance() {
+		return maxAbsorbance;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setMaxAbsorbance(double newMaxAbsorbance) {
+		double oldMaxAbsorbance = maxAbsorbance;
+		maxAbsorbance = newMaxAbsorbance;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__MAX_ABSORBANCE, oldMaxAbsorbance, maxAbsorbance));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String getShiftTerm() {
+		return shiftTerm;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setShiftTerm(String newShiftTerm) {
+		String oldShiftTerm = shiftTerm;
+		shiftTerm = newShiftTerm;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__SHIFT_TERM, oldShiftTerm, shiftTerm));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String getReportingUnit() {
+		return reportingUnit;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setReportingUnit(String newReportingUnit) {
+		String oldReportingUnit = reportingUnit;
+		reportingUnit = newReportingUnit;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__REPORTING_UNIT, oldReportingUnit, reportingUnit));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EList<String> getRecipeSteps() {
+		if (recipeSteps == null) {
+			recipeSteps = new EDataTypeUniqueEList<String>(String.class, this, WorkspacePackage.METHOD_VERSION__RECIPE_STEPS);
+		}
+		return recipeSteps;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String getCellConditions() {
+		return cellConditions;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setCellConditions(String newCellConditions) {
+		String oldCellConditions = cellConditions;
+		cellConditions = newCellConditions;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.METHOD_VERSION__CELL_CONDITIONS, oldCellConditions, cellConditions));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
@@ -285,6 +574,20 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 				return getAlgorithm();
 			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
 				return getPathSource();
+			case WorkspacePackage.METHOD_VERSION__NONLINEARITY:
+				return isNonlinearity();
+			case WorkspacePackage.METHOD_VERSION__TOLERANCE:
+				return getTolerance();
+			case WorkspacePackage.METHOD_VERSION__MAX_ABSORBANCE:
+				return getMaxAbsorbance();
+			case WorkspacePackage.METHOD_VERSION__SHIFT_TERM:
+				return getShiftTerm();
+			case WorkspacePackage.METHOD_VERSION__REPORTING_UNIT:
+				return getReportingUnit();
+			case WorkspacePackage.METHOD_VERSION__RECIPE_STEPS:
+				return getRecipeSteps();
+			case WorkspacePackage.METHOD_VERSION__CELL_CONDITIONS:
+				return getCellConditions();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -314,6 +617,28 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
 				setPathSource((String)newValue);
 				return;
+			case WorkspacePackage.METHOD_VERSION__NONLINEARITY:
+				setNonlinearity((Boolean)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__TOLERANCE:
+				setTolerance((Double)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__MAX_ABSORBANCE:
+				setMaxAbsorbance((Double)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__SHIFT_TERM:
+				setShiftTerm((String)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__REPORTING_UNIT:
+				setReportingUnit((String)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__RECIPE_STEPS:
+				getRecipeSteps().clear();
+				getRecipeSteps().addAll((Collection<? extends String>)newValue);
+				return;
+			case WorkspacePackage.METHOD_VERSION__CELL_CONDITIONS:
+				setCellConditions((String)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -341,6 +666,27 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
 				setPathSource(PATH_SOURCE_EDEFAULT);
 				return;
+			case WorkspacePackage.METHOD_VERSION__NONLINEARITY:
+				setNonlinearity(NONLINEARITY_EDEFAULT);
+				return;
+			case WorkspacePackage.METHOD_VERSION__TOLERANCE:
+				setTolerance(TOLERANCE_EDEFAULT);
+				return;
+			case WorkspacePackage.METHOD_VERSION__MAX_ABSORBANCE:
+				setMaxAbsorbance(MAX_ABSORBANCE_EDEFAULT);
+				return;
+			case WorkspacePackage.METHOD_VERSION__SHIFT_TERM:
+				setShiftTerm(SHIFT_TERM_EDEFAULT);
+				return;
+			case WorkspacePackage.METHOD_VERSION__REPORTING_UNIT:
+				setReportingUnit(REPORTING_UNIT_EDEFAULT);
+				return;
+			case WorkspacePackage.METHOD_VERSION__RECIPE_STEPS:
+				getRecipeSteps().clear();
+				return;
+			case WorkspacePackage.METHOD_VERSION__CELL_CONDITIONS:
+				setCellConditions(CELL_CONDITIONS_EDEFAULT);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -363,6 +709,20 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 				return ALGORITHM_EDEFAULT == null ? algorithm != null : !ALGORITHM_EDEFAULT.equals(algorithm);
 			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
 				return PATH_SOURCE_EDEFAULT == null ? pathSource != null : !PATH_SOURCE_EDEFAULT.equals(pathSource);
+			case WorkspacePackage.METHOD_VERSION__NONLINEARITY:
+				return nonlinearity != NONLINEARITY_EDEFAULT;
+			case WorkspacePackage.METHOD_VERSION__TOLERANCE:
+				return tolerance != TOLERANCE_EDEFAULT;
+			case WorkspacePackage.METHOD_VERSION__MAX_ABSORBANCE:
+				return maxAbsorbance != MAX_ABSORBANCE_EDEFAULT;
+			case WorkspacePackage.METHOD_VERSION__SHIFT_TERM:
+				return SHIFT_TERM_EDEFAULT == null ? shiftTerm != null : !SHIFT_TERM_EDEFAULT.equals(shiftTerm);
+			case WorkspacePackage.METHOD_VERSION__REPORTING_UNIT:
+				return REPORTING_UNIT_EDEFAULT == null ? reportingUnit != null : !REPORTING_UNIT_EDEFAULT.equals(reportingUnit);
+			case WorkspacePackage.METHOD_VERSION__RECIPE_STEPS:
+				return recipeSteps != null && !recipeSteps.isEmpty();
+			case WorkspacePackage.METHOD_VERSION__CELL_CONDITIONS:
+				return CELL_CONDITIONS_EDEFAULT == null ? cellConditions != null : !CELL_CONDITIONS_EDEFAULT.equals(cellConditions);
 		}
 		return super.eIsSet(featureID);
 	}
@@ -385,6 +745,20 @@ public class MethodVersionImpl extends ContentVersionImpl implements MethodVersi
 		result.append(algorithm);
 		result.append(", pathSource: ");
 		result.append(pathSource);
+		result.append(", nonlinearity: ");
+		result.append(nonlinearity);
+		result.append(", tolerance: ");
+		result.append(tolerance);
+		result.append(", maxAbsorbance: ");
+		result.append(maxAbsorbance);
+		result.append(", shiftTerm: ");
+		result.append(shiftTerm);
+		result.append(", reportingUnit: ");
+		result.append(reportingUnit);
+		result.append(", recipeSteps: ");
+		result.append(recipeSteps);
+		result.append(", cellConditions: ");
+		result.append(cellConditions);
 		result.append(')');
 		return result.toString();
 	}

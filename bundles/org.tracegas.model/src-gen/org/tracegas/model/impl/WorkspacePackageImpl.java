@@ -765,6 +765,76 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EAttribute getMethodVersion_Nonlinearity() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMethodVersion_Tolerance() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMethodVersion_MaxAbsorbance() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMethodVersion_ShiftTerm() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMethodVersion_ReportingUnit() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(9);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMethodVersion_RecipeSteps() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(10);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getMethodVersion_CellConditions() {
+		return (EAttribute)methodVersionEClass.getEStructuralFeatures().get(11);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getAnalysisRegion() {
 		return analysisRegionEClass;
 	}
@@ -990,6 +1060,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(methodVersionEClass, METHOD_VERSION__MAX_ITERATIONS);
 		createEAttribute(methodVersionEClass, METHOD_VERSION__ALGORITHM);
 		createEAttribute(methodVersionEClass, METHOD_VERSION__PATH_SOURCE);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__NONLINEARITY);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__TOLERANCE);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__MAX_ABSORBANCE);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__SHIFT_TERM);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__REPORTING_UNIT);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__RECIPE_STEPS);
+		createEAttribute(methodVersionEClass, METHOD_VERSION__CELL_CONDITIONS);
 
 		analysisRegionEClass = createEClass(ANALYSIS_REGION);
 		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__COMPOUND);
@@ -1110,6 +1187,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getMethodVersion_MaxIterations(), ecorePackage.getEInt(), "maxIterations", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMethodVersion_Algorithm(), ecorePackage.getEString(), "algorithm", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMethodVersion_PathSource(), ecorePackage.getEString(), "pathSource", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_Nonlinearity(), ecorePackage.getEBoolean(), "nonlinearity", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_Tolerance(), ecorePackage.getEDouble(), "tolerance", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_MaxAbsorbance(), ecorePackage.getEDouble(), "maxAbsorbance", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_ShiftTerm(), ecorePackage.getEString(), "shiftTerm", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_ReportingUnit(), ecorePackage.getEString(), "reportingUnit", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_RecipeSteps(), ecorePackage.getEString(), "recipeSteps", null, 0, -1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getMethodVersion_CellConditions(), ecorePackage.getEString(), "cellConditions", null, 0, 1, MethodVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(analysisRegionEClass, AnalysisRegion.class, "AnalysisRegion", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getAnalysisRegion_Compound(), ecorePackage.getEString(), "compound", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);

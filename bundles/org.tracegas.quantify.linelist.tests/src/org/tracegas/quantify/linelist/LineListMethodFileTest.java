@@ -22,13 +22,17 @@ import java.util.Set;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.method.MethodDefinition;
+import org.tracegas.method.MethodVersions;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.synthesis.HitranLineListReader;
 import org.tracegas.library.synthesis.HitranLineListWriter;
 import org.tracegas.library.synthesis.LineList;
+import org.tracegas.model.AnalysisMethod;
+import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Role;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.quantify.CompoundResult;
 import org.tracegas.quantify.QualityFlag;
 import org.tracegas.quantify.QuantificationMethod;
@@ -105,11 +109,47 @@ class LineListMethodFileTest {
                 content.substring(0, Math.min(content.length(), 3000)));
         StoredMethod reread = StoredMethod.parse(content, "method version 1");
         assertFalse(reread.method().contentHash().equals(statedHash), "the setting must change the hash");
+        quantifiesTheHotSampleWithinOnePercent(reread);
+    }
 
+    /**
+     * The cell conditions changed in the workbench's model of a version that computes at the stated ones
+     * ({@link MethodVersions}): the edit is the very method a file stating {@code cell-conditions = measured}
+     * defines, its stored text reads back, and it quantifies the sample made at 470 K and 97 kPa within 1 % (truth:
+     * the generator's amounts).
+     */
+    @Test
+    void cellConditionsEditedInTheModelGiveTheMethodOfAFileStatingThem() throws IOException {
+        String measuredHash = MethodDefinition.read(writeMethod("cell-conditions = measured\n")).build(
+                new ReferenceLibrary("no references", List.of())).contentHash();
+        StoredMethod opened = StoredMethod.parse(record(MethodDefinition.read(writeMethod(""))).content(),
+                "method version 1");
+        AnalysisMethod model = WorkspaceFactory.eINSTANCE.createAnalysisMethod();
+        model.setName(opened.method().name());
+        MethodVersion draft = WorkspaceFactory.eINSTANCE.createMethodVersion();
+        model.getVersions().add(draft);
+        MethodVersions.fillRegions(draft, opened);
+        assertEquals("stated", draft.getCellConditions(), "the block names none: the stated ones");
+        assertEquals(opened.content(), MethodVersions.edited(opened, model, draft).content());
+
+        draft.setCellConditions("warm");
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
+                () -> MethodVersions.edited(opened, model, draft));
+        assertEquals("cell conditions: 'warm' is none of [stated, measured]", e.getMessage());
+        draft.setCellConditions("measured");
+        StoredMethod edited = MethodVersions.edited(opened, model, draft);
+        assertEquals(measuredHash, edited.method().contentHash());
+        StoredMethod reread = StoredMethod.parse(edited.content(), "method version 2");
+        assertEquals(edited.content(), reread.content());
+        quantifiesTheHotSampleWithinOnePercent(reread);
+    }
+
+    /** A sample made at 470 K and 97 kPa, carrying those conditions, quantified within 1 % of its amounts. */
+    private void quantifiesTheHotSampleWithinOnePercent(StoredMethod method) throws IOException {
         double[] amounts = {700, 1800};
         Spectrum hot = InstrumentMixture.withNoise(new InstrumentMixture(readBack()).transmittance(amounts, 0.01, 0,
                 0, 470, 97), NOISE, new Random(97));
-        List<CompoundResult> results = reread.quantifier(InstrumentMixture.AXIS, "test", false)
+        List<CompoundResult> results = method.quantifier(InstrumentMixture.AXIS, "test", false)
                 .fit(Sample.of(hot).inCell(470, 97));
         for (int g = 0; g < 2; g++) {
             double truth = amounts[g] / InstrumentMixture.PATH;

@@ -24,6 +24,8 @@ import org.tracegas.importer.container.SampleKind;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.ResultFlag;
+import org.tracegas.model.SpectralContent;
 import org.tracegas.model.WorkspacePackage.Literals;
 import org.tracegas.model.edit.ModelEditor;
 import org.tracegas.quantify.CancellationFlag;
@@ -31,6 +33,8 @@ import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.store.ResultInfo;
+import org.tracegas.store.ResultRow;
+import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -42,12 +46,20 @@ import org.tracegas.store.Workspaces;
  * editor's command stack: a region's span and its analyte's interferents, another region's baseline order, a region
  * removed; then {@link MethodVersions#save}) into a real embedded workspace, and run by the
  * runner's quantify command on real container files of interferograms: the front ends share one method text.
+ * That version edited on (a maximum absorbance, a tolerance and a processing step) is run again on the same files:
+ * the step is the recipe recorded with the results, and the maximum flags the one sample whose stored absorbance
+ * exceeds it.
  */
 class WorkbenchMethodVersionTest {
 
     private static final Instant T0 = Instant.parse("2026-03-18T08:00:00Z");
     /** CO of the stack samples, ppm, with 10 % water vapour. */
     private static final double[] CO_PPM = { 20, 60 };
+    /** A processing step as the editor's recipe field takes it, in a method file's {@code step = } form. */
+    private static final String BASELINE_STEP = "baseline degree=0;regions=2000.0:2030.0";
+    /** The CO window of the edited version, cm⁻¹. */
+    private static final double CO_LOW = 2060;
+    private static final double CO_HIGH = 2200;
     private static final Map<String, String> ENV = Map.of("TRACEGAS_PASSWORD", "analyst-pw-1",
             "TRACEGAS_NEW_PASSWORD", "analyst-pw-1");
 
@@ -66,6 +78,18 @@ class WorkbenchMethodVersionTest {
     private void ok(String... argv) {
         ByteArrayOutputStream err = new ByteArrayOutputStream();
         assertEquals(ExitCode.OK, run(err, argv), () -> String.join(" ", argv) + ": " + err);
+    }
+
+    /** The highest value of a spectrum between two wavenumbers. */
+    private static double highest(Spectrum s, double low, double high) {
+        double max = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < s.size(); i++) {
+            double x = s.axis().get(i);
+            if (x >= low && x <= high) {
+                max = Math.max(max, s.get(i));
+            }
+        }
+        return max;
     }
 
     @Test
@@ -98,6 +122,7 @@ class WorkbenchMethodVersionTest {
         }
 
         VersionInfo saved;
+        double limit;
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
             VersionInfo first = store.versions().latest(VersionKind.METHOD, "Stack").orElseThrow();
@@ -109,7 +134,7 @@ class WorkbenchMethodVersionTest {
             AnalysisRegion co = draft.getRegions().get(0);
             assertEquals("CO", co.getCompound());
             assertEquals(2050, co.getLowerWavenumber());
-            editor.set(co, Literals.ANALYSIS_REGION__LOWER_WAVENUMBER, 2060.0);
+            editor.set(co, Literals.ANALYSIS_REGION__LOWER_WAVENUMBER, CO_LOW);
             // the analyte's interferents, as the editor's Interferents field sets them on its one region
             assertEquals(List.of("N2O"), co.getInterferents());
             editor.set(co, Literals.ANALYSIS_REGION__INTERFERENTS, List.of("N2O", "H2O"));
@@ -152,6 +177,67 @@ class WorkbenchMethodVersionTest {
                 // the truth is the mixture the interferograms were synthesised from; 4 % as in the runner's
                 // analysis test (interpolation between references 1.5 apart plus the detector noise)
                 assertEquals(CO_PPM[i], co.get(i), 0.04 * CO_PPM[i], "sample " + i);
+            }
+            // the highest absorbance of each sample in the CO window, read from the absorbance stored with the
+            // results: the second sample (three times the CO) absorbs more
+            Map<String, Double> highest = new java.util.HashMap<>();
+            store.spectra().stream(ana, project).filter(s -> s.content() == SpectralContent.ABSORBANCE
+                    && s.measurementId() != null).forEach(s -> highest.merge(s.measurementId(), highest(s
+                            .spectrum(), CO_LOW, CO_HIGH), Math::max));
+            List<Double> peaks = results.stream().filter(r -> r.values().compound().equals("CO"))
+                    .sorted(java.util.Comparator.comparing(r -> times.get(r.values().measurementId())))
+                    .map(r -> highest.get(r.values().measurementId())).toList();
+            assertTrue(peaks.get(1) > 1.5 * peaks.get(0), "highest absorbances " + peaks);
+            limit = Math.sqrt(peaks.get(0) * peaks.get(1));
+        }
+
+        // version 2 edited on: a maximum absorbance between the two samples', a tighter tolerance, and a
+        // processing step before the fit
+        VersionInfo third;
+        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
+            Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
+            AnalysisMethod method = MethodVersions.read(store, saved);
+            ModelEditor editor = new ModelEditor();
+            editor.createResource("desk:/workspace").getContents().add(method);
+            MethodVersion draft = method.getVersions().get(0);
+            assertEquals(1.0, draft.getMaxAbsorbance(), "the method file's default");
+            assertEquals(1e-6, draft.getTolerance(), "as the method file states it");
+            editor.set(draft, Literals.METHOD_VERSION__MAX_ABSORBANCE, limit);
+            editor.set(draft, Literals.METHOD_VERSION__TOLERANCE, 1e-7);
+            // an offset taken out over 2000..2030 cm⁻¹, where none of the synthesised bands absorbs (their lines
+            // lie from 2097 cm⁻¹ up, see InventedBandSystem): the step must leave the amounts as they were
+            editor.set(draft, Literals.METHOD_VERSION__RECIPE_STEPS, List.of(BASELINE_STEP));
+            third = MethodVersions.save(store, ana, method, draft, "strong CO absorbance flagged; tighter"
+                    + " convergence; zero offset taken out before the fit");
+            assertEquals(3, third.number());
+            assertEquals(saved.id(), third.parentId());
+            assertEquals(ana.userId(), third.authorId());
+        }
+
+        // the same files imported into a second project and quantified there through the lab's file route, which
+        // puts every absorbance through the method's recipe (streamed containers are fitted without one)
+        ok("project-add", "--workspace", ws, "--as", "ana", "--client", "Client W", "--code", "P-W3", "--name",
+                "Kiln survey, method version 3");
+        ok("quantify", "--workspace", ws, "--as", "ana", "--project", "P-W3", "--method", "Stack",
+                "--method-version", "3", "--background-file", backgrounds.toString(), "--file", stack.toString());
+
+        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
+            Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
+            String project = store.projects().findByCode(ana, "P-W3").orElseThrow().getId();
+            List<ResultRow> rows = store.analyses().rows(ana, project).stream().filter(r -> r.result().values()
+                    .methodVersionId().equals(third.id()) && r.result().values().compound().equals("CO")).toList();
+            assertEquals(CO_PPM.length, rows.size());
+            for (int i = 0; i < CO_PPM.length; i++) {
+                ResultRow r = rows.get(i);
+                // a result whose sample absorbs more than the method's maximum inside the fit windows is flagged
+                // (MethodDefinition's max-absorbance): the second sample only
+                assertEquals(i == 1, r.result().values().flags().contains(ResultFlag.SATURATED), "sample " + i
+                        + ": " + r.result().values().flags());
+                // the offset step leaves the amounts as they were: the truth is the synthesised mixture, within
+                // the 4 % above
+                assertEquals(CO_PPM[i], r.result().values().concentration(), 0.04 * CO_PPM[i], "sample " + i);
+                assertTrue(store.analyses().recipe(ana, r.recipeSha256()).contains(BASELINE_STEP),
+                        "the recipe that ran is the one edited: " + store.analyses().recipe(ana, r.recipeSha256()));
             }
         }
     }

@@ -2,11 +2,13 @@ package org.tracegas.ui.parts;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.Set;
 
 import org.junit.jupiter.api.Test;
+import org.tracegas.preprocess.StepRegistry;
 
 class FieldCheckTest {
 
@@ -35,6 +37,27 @@ class FieldCheckTest {
         assertEquals("Path length: 'six' is not a number", FieldCheck.pathLength("six"));
         assertNull(FieldCheck.maxIterations("50"));
         assertEquals("Max. fit iterations: must be at least 1, was 0", FieldCheck.maxIterations("0"));
+        // a relative change, so between 0 and 1 (MethodDefinition's tolerance, QuantificationMethod's check)
+        assertNull(FieldCheck.tolerance("1e-6"));
+        assertEquals("Tolerance: must be between 0 and 1 (a relative change), was 0", FieldCheck.tolerance("0"));
+        assertEquals("Tolerance: 'tight' is not a number", FieldCheck.tolerance("tight"));
+        assertNull(FieldCheck.maxAbsorbance("1.0"));
+        assertEquals("Max. absorbance: must be a positive number, was Infinity", FieldCheck.maxAbsorbance("Infinity"));
+    }
+
+    @Test
+    void recipeStepsMustBeStepsTheDeskRunsWithTheirParameters() {
+        StepRegistry steps = StepRegistry.withBuiltInSteps();
+        assertEquals(List.of("baseline degree=1;regions=2000:2010", "shift offset=0.1"),
+                FieldCheck.lines(" baseline degree=1;regions=2000:2010 \n\n  shift offset=0.1\n"));
+        assertNull(FieldCheck.recipeSteps(List.of("baseline degree=1;regions=2000:2010", "shift offset=0.1"), steps));
+        assertNull(FieldCheck.recipeSteps(List.of(), steps), "a method may process nothing before the fit");
+        String unknown = FieldCheck.recipeSteps(List.of("shift offset=0.1", "smooth width=3"), steps);
+        assertTrue(unknown.startsWith("Recipe step 2: ") && unknown.contains("smooth"), unknown);
+        String missing = FieldCheck.recipeSteps(List.of("shift halfWidth=8"), steps);
+        assertTrue(missing.startsWith("Recipe step 1: ") && missing.contains("offset"), missing);
+        String unparsed = FieldCheck.recipeSteps(List.of("shift offset"), steps);
+        assertTrue(unparsed.startsWith("Recipe step 1: "), unparsed);
     }
 
     @Test

@@ -355,6 +355,69 @@ class MethodEditorPanelTest {
     }
 
     @Test
+    void theHeadsSettingsAndTheRecipeAreEditedCheckedUndoneAndSaved() throws Exception {
+        MethodVersion v = method.getVersions().get(0);
+        // the method text's words and defaults (MethodDefinition)
+        assertEquals(List.of("ppm", "ppb", "percent"), List.of(panel.reportingUnitChooser().getItems()));
+        assertEquals("ppm", panel.reportingUnitChooser().getText());
+        assertEquals(List.of("none", "shift", "shift-and-width", "scale"), List.of(panel.shiftChooser().getItems()));
+        assertEquals("", panel.recipeField().getText(), "the demo method has no processing steps");
+        assertFalse(panel.cellConditionsChooser().isEnabled(), "classical least squares computes no spectra");
+
+        panel.toleranceField().setText("1");
+        assertEquals("Tolerance: must be between 0 and 1 (a relative change), was 1", panel.problems().getText());
+        assertTrue(panel.decorated(panel.toleranceField()));
+        assertEquals(demo.method().method().tolerance(), v.getTolerance());
+        panel.toleranceField().setText("1e-5");
+        assertEquals(1e-5, v.getTolerance());
+        panel.maxAbsorbanceField().setText("-0.5");
+        assertEquals("Max. absorbance: must be a positive number, was -0.5", panel.problems().getText());
+        panel.maxAbsorbanceField().setText("0.9");
+        assertEquals(0.9, v.getMaxAbsorbance());
+        panel.nonlinearityCheck().setSelection(!v.isNonlinearity());
+        press(panel.nonlinearityCheck());
+        assertEquals(panel.nonlinearityCheck().getSelection(), v.isNonlinearity());
+        choose(panel.reportingUnitChooser(), "ppb");
+        assertEquals("ppb", v.getReportingUnit());
+        choose(panel.shiftChooser(), "shift");
+        assertEquals("shift", v.getShiftTerm());
+
+        // steps the desk's registry does not make are named by their place and left out of the model
+        panel.recipeField().setText("baseline degree=0;regions=2000:2010\nsmooth width=3");
+        assertTrue(panel.problems().getText().startsWith("Recipe step 2: "), panel.problems().getText());
+        assertTrue(panel.decorated(panel.recipeField()));
+        assertEquals(List.of(), v.getRecipeSteps());
+        panel.recipeField().setText("baseline degree=0;regions=2000:2010\nshift offset=");
+        assertTrue(panel.problems().getText().startsWith("Recipe step 2: "), panel.problems().getText());
+        panel.recipeField().setText("baseline degree=0;regions=2000:2010\n\nshift offset=0.1\n");
+        assertEquals("", panel.problems().getText());
+        assertEquals(List.of("baseline degree=0;regions=2000:2010", "shift offset=0.1"), v.getRecipeSteps());
+        press(panel.undoButton());
+        assertEquals(List.of(), v.getRecipeSteps(), "one command for the whole recipe");
+        assertEquals("", panel.recipeField().getText());
+        press(panel.redoButton());
+        assertEquals("baseline degree=0;regions=2000:2010\nshift offset=0.1", panel.recipeField().getText());
+        // tolerance, max-absorbance, nonlinearity, reporting-unit, shift and the two steps, each a field
+        assertEquals("7 fields differ (highlighted).", panel.comparison().summary().getText());
+        ((org.eclipse.swt.custom.ScrolledComposite) panel.recipeField().getParent().getParent()).showControl(
+                panel.recipeField());
+        Screens.save(shell, "method-editor-head-and-recipe");
+
+        StoredMethod back = savedAsVersion2("Results in ppb for the low CO campaign; zero-offset and 0.1 cm⁻¹ shift"
+                + " before the fit");
+        assertEquals(org.tracegas.quantify.ReportingUnit.PPB, back.method().reportingUnit());
+        assertEquals(org.tracegas.quantify.ShiftTerm.SHIFT, back.method().shiftTerm());
+        assertEquals(1e-5, back.method().tolerance());
+        assertEquals(0.9, back.method().maxAbsorbance());
+        assertEquals(!demo.method().method().nonlinearity(), back.method().nonlinearity());
+        assertEquals(List.of("baseline", "shift"), back.recipe().entries().stream().map(e -> e.stepId()).toList());
+        assertEquals(demo.method().method().analytes(), back.method().analytes());
+        // the new version opened in the editor shows what it holds
+        assertEquals("ppb", panel.reportingUnitChooser().getText());
+        assertEquals("baseline degree=0;regions=2000:2010\nshift offset=0.1", panel.recipeField().getText());
+    }
+
+    @Test
     void aVersionWithoutAMethodTextIsNamedAndNotOpened() {
         VersionInfo other = access.store().versions().create(analyst, VersionKind.METHOD, "Not a method",
                 "compounds=CO\n", "an old note");

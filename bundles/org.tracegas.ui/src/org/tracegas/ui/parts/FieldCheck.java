@@ -43,13 +43,56 @@ public final class FieldCheck {
 
     /** The cell's path length in metres: a positive number. */
     public static String pathLength(String value) {
+        return number("Path length", value, v -> v > 0 && Double.isFinite(v), "a positive number of metres");
+    }
+
+    /** The relative change of the concentrations at which the fit's iteration stops: between 0 and 1. */
+    public static String tolerance(String value) {
+        return number("Tolerance", value, v -> v > 0 && v < 1, "between 0 and 1 (a relative change)");
+    }
+
+    /** The highest sample absorbance the fit trusts: a positive number. */
+    public static String maxAbsorbance(String value) {
+        return number("Max. absorbance", value, v -> v > 0 && Double.isFinite(v), "a positive number");
+    }
+
+    private static String number(String field, String value, java.util.function.DoublePredicate acceptable,
+            String rule) {
         try {
-            double v = Double.parseDouble(value.trim());
-            return v > 0 && Double.isFinite(v) ? null : "Path length: must be a positive number of metres, was "
+            return acceptable.test(Double.parseDouble(value.trim())) ? null : field + ": must be " + rule + ", was "
                     + value.trim();
         } catch (NumberFormatException e) {
-            return "Path length: '" + value + "' is not a number";
+            return field + ": '" + value + "' is not a number";
         }
+    }
+
+    /**
+     * Processing steps, one a line in the method text's {@code step = } form: each must parse, and the steps the
+     * desk runs with must create it with its parameters.
+     *
+     * @param steps the registry of the steps contributed to the platform, which runs the method
+     */
+    public static String recipeSteps(java.util.List<String> steps, org.tracegas.preprocess.StepRegistry registry) {
+        org.tracegas.preprocess.Recipe recipe;
+        try {
+            recipe = org.tracegas.method.MethodRecipe.of(steps);
+        } catch (IllegalArgumentException e) {
+            return "R" + e.getMessage().substring(1);
+        }
+        for (int i = 0; i < recipe.entries().size(); i++) {
+            org.tracegas.preprocess.Recipe.Entry step = recipe.entries().get(i);
+            try {
+                registry.create(step.stepId(), step.parameters());
+            } catch (IllegalArgumentException e) {
+                return "Recipe step " + (i + 1) + ": " + e.getMessage();
+            }
+        }
+        return null;
+    }
+
+    /** The non-blank lines of a text, trimmed. */
+    public static java.util.List<String> lines(String value) {
+        return value.lines().map(String::strip).filter(l -> !l.isEmpty()).toList();
     }
 
     /** The fit's iteration limit: a whole number of at least 1. */

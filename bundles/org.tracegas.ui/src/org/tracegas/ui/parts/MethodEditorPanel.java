@@ -7,6 +7,7 @@ import java.util.Map;
 import java.util.Set;
 import java.util.TreeSet;
 
+import org.eclipse.core.runtime.RegistryFactory;
 import org.eclipse.emf.common.command.CommandStackListener;
 import org.eclipse.emf.common.command.CompoundCommand;
 import org.eclipse.emf.edit.command.AddCommand;
@@ -36,14 +37,17 @@ import org.tracegas.model.MethodVersion;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.model.WorkspacePackage.Literals;
 import org.tracegas.model.edit.ModelEditor;
+import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
- * Edits a draft method version in the model through the editing domain: the method's name, path length,
- * iteration limit, fit algorithm and path source, the regions (added and removed) and, region by region, the compound, the analyte's
- * interferents, the span and the baseline order. Every accepted change is one command, so Undo and Redo
+ * Edits a draft method version in the model through the editing domain: the method's name, the settings of its
+ * text's head (path length, path source, nonlinearity, tolerance, iteration limit, maximum absorbance, shift term,
+ * reporting unit, fit algorithm), the processing steps of its recipe, a line-list method's cell conditions, the
+ * regions (added and removed) and, region by region, the compound, the analyte's interferents, the span and the
+ * baseline order. Every accepted change is one command, so Undo and Redo
  * walk back and forth through them. Fields are checked as they are typed; a
  * wrong field is marked and named below the form and the model keeps its last good value. The comparison
  * below shows the version as opened (A) beside the draft (B), both in the text of a method file. Saving
@@ -58,6 +62,9 @@ public final class MethodEditorPanel extends Composite {
      */
     private static final int NARROW = 60;
 
+    /** The keys a block of the method text repeats, one value a line. */
+    private static final Set<String> REPEATED = Set.of("region", "step", "gas");
+
     private final ModelEditor editor;
     private final Text name;
     private final Combo region;
@@ -70,6 +77,15 @@ public final class MethodEditorPanel extends Composite {
     private final Text maxIterations;
     private final Combo algorithm;
     private final Combo pathSource;
+    private final Button nonlinearity;
+    private final Text tolerance;
+    private final Text maxAbsorbance;
+    private final Combo shift;
+    private final Combo reportingUnit;
+    private final Combo cellConditions;
+    private final Text recipe;
+    /** The steps the desk runs methods with, which a recipe's steps must be. */
+    private final StepRegistry steps = StepRegistry.fromExtensions(RegistryFactory.getRegistry());
     private final Button addRegion;
     private final Button removeRegion;
     private final Label problems;
@@ -109,6 +125,41 @@ public final class MethodEditorPanel extends Composite {
         pathSource = choice(form, "Path source", Literals.METHOD_VERSION__PATH_SOURCE);
         pathSource.setToolTipText("nominal: the path length; cts-derived: the effective path the campaign's"
                 + " calibration transfer standard readings measure");
+        new Label(form, SWT.NONE).setText("Nonlinearity");
+        nonlinearity = new Button(form, SWT.CHECK);
+        // a short text: the view beside the spectrum is narrow
+        nonlinearity.setText("interpolate");
+        nonlinearity.setToolTipText("interpolate between references of several amounts of a compound");
+        nonlinearity.setLayoutData(fieldData());
+        nonlinearity.addListener(SWT.Selection, e -> {
+            if (!filling && version != null && nonlinearity.getSelection() != version.isNonlinearity()) {
+                editor.set(version, Literals.METHOD_VERSION__NONLINEARITY, nonlinearity.getSelection());
+                afterCommand();
+            }
+        });
+        tolerance = field(form, "Fit tolerance");
+        tolerance.setMessage("relative change at which the fit stops");
+        maxAbsorbance = field(form, "Max. absorbance");
+        shift = choice(form, "Shift term", Literals.METHOD_VERSION__SHIFT_TERM);
+        shift.setToolTipText("curve-of-growth offers scale; classical least squares shift and shift-and-width");
+        reportingUnit = choice(form, "Reporting unit", Literals.METHOD_VERSION__REPORTING_UNIT);
+        // what the runner and the desk store and report stays in ppm, whatever the method names here
+        reportingUnit.setToolTipText("kept with the method; the desk and the runner store and report results in"
+                + " ppm");
+        cellConditions = choice(form, "Cell conditions", Literals.METHOD_VERSION__CELL_CONDITIONS);
+        cellConditions.setToolTipText("line-list methods: spectra computed at the method's stated cell conditions"
+                + " or at each measurement's measured ones");
+        new Label(form, SWT.NONE).setText("Recipe steps");
+        recipe = new Text(form, SWT.MULTI | SWT.BORDER | SWT.V_SCROLL);
+        recipe.setMessage("processing steps before the fit, one a line");
+        recipe.setToolTipText("one step a line, as a method file's [recipe] writes it after 'step = ',"
+                + " e.g. baseline degree=1;regions=2000:2010,2390:2400");
+        GridData recipeData = fieldData();
+        GC lines = new GC(recipe);
+        recipeData.heightHint = 3 * lines.getFontMetrics().getHeight();
+        lines.dispose();
+        recipe.setLayoutData(recipeData);
+        decorate(recipe);
         new Label(form, SWT.NONE).setText("Analysis region");
         region = new Combo(form, SWT.READ_ONLY);
         GridData cd = new GridData(SWT.FILL, SWT.CENTER, true, false, 3, 1);
@@ -178,11 +229,12 @@ public final class MethodEditorPanel extends Composite {
         save.setText("Save as new version");
         save.addListener(SWT.Selection, e -> save());
         sash.setWeights(1, 1);
-        // the form gets the height it needs (at most three quarters), the comparison the rest
+        // the form gets the height it needs (at most three fifths: with the whole head of the method text it is
+        // taller than most views and scrolls), the comparison the rest
         sash.addListener(SWT.Resize, e -> {
             org.eclipse.swt.graphics.Rectangle area = sash.getClientArea();
             if (area.height > 0) {
-                int top = Math.min(form.computeSize(area.width, SWT.DEFAULT).y, area.height * 3 / 4);
+                int top = Math.min(form.computeSize(area.width, SWT.DEFAULT).y, area.height * 3 / 5);
                 sash.setWeights(top, Math.max(1, area.height - top));
             }
         });
@@ -203,6 +255,14 @@ public final class MethodEditorPanel extends Composite {
                 Double::valueOf);
         number(maxIterations, () -> version, Literals.METHOD_VERSION__MAX_ITERATIONS, FieldCheck::maxIterations,
                 Integer::valueOf);
+        number(tolerance, () -> version, Literals.METHOD_VERSION__TOLERANCE, FieldCheck::tolerance, Double::valueOf);
+        number(maxAbsorbance, () -> version, Literals.METHOD_VERSION__MAX_ABSORBANCE, FieldCheck::maxAbsorbance,
+                Double::valueOf);
+        recipe.addListener(SWT.Modify, e -> {
+            List<String> typed = FieldCheck.lines(recipe.getText());
+            apply(recipe, version, Literals.METHOD_VERSION__RECIPE_STEPS, FieldCheck.recipeSteps(typed, steps),
+                    typed);
+        });
         updateButtons();
     }
 
@@ -228,11 +288,16 @@ public final class MethodEditorPanel extends Composite {
         new Label(form, SWT.NONE).setText(label);
         Text t = new Text(form, SWT.BORDER);
         t.setLayoutData(fieldData());
+        decorate(t);
+        return t;
+    }
+
+    /** The mark a field shows while its text is refused. */
+    private void decorate(Text t) {
         ControlDecoration d = new ControlDecoration(t, SWT.LEFT | SWT.CENTER);
         d.setImage(errorMark);
         d.hide();
         decorations.put(t, d);
-        return t;
     }
 
     /** A read-only choice of a method version's feature: choosing sets it through one command. */
@@ -302,6 +367,9 @@ public final class MethodEditorPanel extends Composite {
         this.line = readLine();
         algorithm.setItems(MethodVersions.algorithms(stored).toArray(String[]::new));
         pathSource.setItems(MethodVersions.pathSources().toArray(String[]::new));
+        shift.setItems(MethodVersions.shiftTerms().toArray(String[]::new));
+        reportingUnit.setItems(MethodVersions.reportingUnits().toArray(String[]::new));
+        cellConditions.setItems(MethodVersions.cellConditions().toArray(String[]::new));
         listRegions(0);
     }
 
@@ -366,6 +434,13 @@ public final class MethodEditorPanel extends Composite {
             maxIterations.setText(Integer.toString(version.getMaxIterations()));
             algorithm.select(algorithm.indexOf(version.getAlgorithm()));
             pathSource.select(pathSource.indexOf(version.getPathSource()));
+            nonlinearity.setSelection(version.isNonlinearity());
+            tolerance.setText(Double.toString(version.getTolerance()));
+            maxAbsorbance.setText(Double.toString(version.getMaxAbsorbance()));
+            shift.select(shift.indexOf(version.getShiftTerm()));
+            reportingUnit.select(reportingUnit.indexOf(version.getReportingUnit()));
+            cellConditions.select(cellConditions.indexOf(version.getCellConditions()));
+            recipe.setText(String.join("\n", version.getRecipeSteps()));
             AnalysisRegion r = selectedRegion();
             compound.setText(r == null ? "" : r.getCompound());
             interferents.setText(r == null ? "" : String.join(", ", r.getInterferents()));
@@ -534,7 +609,7 @@ public final class MethodEditorPanel extends Composite {
 
     /**
      * A method file's text as one key=value line per value, each key made unique by its block and the value's
-     * place: "analyte.2.region.1=...".
+     * place: "analyte.2.region.1=...", "recipe.1.step.2=...".
      */
     static String fields(String methodText) {
         StringBuilder s = new StringBuilder();
@@ -550,7 +625,7 @@ public final class MethodEditorPanel extends Composite {
             } else if (t.contains("=")) {
                 String key = t.substring(0, t.indexOf('=')).strip();
                 String value = t.substring(t.indexOf('=') + 1).strip();
-                String unique = key.equals("region") ? key + "." + keys.merge(key, 1, Integer::sum) : key;
+                String unique = REPEATED.contains(key) ? key + "." + keys.merge(key, 1, Integer::sum) : key;
                 s.append(prefix).append(unique).append('=').append(value).append('\n');
             }
         }
@@ -581,6 +656,9 @@ public final class MethodEditorPanel extends Composite {
         undo.setEnabled(editor.canUndo());
         redo.setEnabled(editor.canRedo());
         removeRegion.setEnabled(version != null && version.getRegions().size() > 1);
+        // only a line-list method computes its spectra at cell conditions; other algorithms do not read them
+        cellConditions.setEnabled(version != null && !version.getCellConditions().isEmpty()
+                && version.getAlgorithm().equals(stored.method().algorithm().name()));
         save.setEnabled(store != null && editor.canUndo());
     }
 
@@ -626,6 +704,34 @@ public final class MethodEditorPanel extends Composite {
 
     public Combo pathSourceChooser() {
         return pathSource;
+    }
+
+    public Button nonlinearityCheck() {
+        return nonlinearity;
+    }
+
+    public Text toleranceField() {
+        return tolerance;
+    }
+
+    public Text maxAbsorbanceField() {
+        return maxAbsorbance;
+    }
+
+    public Combo shiftChooser() {
+        return shift;
+    }
+
+    public Combo reportingUnitChooser() {
+        return reportingUnit;
+    }
+
+    public Combo cellConditionsChooser() {
+        return cellConditions;
+    }
+
+    public Text recipeField() {
+        return recipe;
     }
 
     public Button addRegionButton() {
