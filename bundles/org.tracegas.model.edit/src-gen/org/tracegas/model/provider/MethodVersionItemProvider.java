@@ -52,6 +52,13 @@ public class MethodVersionItemProvider extends ContentVersionItemProvider {
 			addMaxIterationsPropertyDescriptor(object);
 			addAlgorithmPropertyDescriptor(object);
 			addPathSourcePropertyDescriptor(object);
+			addNonlinearityPropertyDescriptor(object);
+			addTolerancePropertyDescriptor(object);
+			addMaxAbsorbancePropertyDescriptor(object);
+			addShiftTermPropertyDescriptor(object);
+			addReportingUnitPropertyDescriptor(object);
+			addRecipeStepsPropertyDescriptor(object);
+			addCellConditionsPropertyDescriptor(object);
 		}
 		return itemPropertyDescriptors;
 	}
@@ -145,6 +152,160 @@ public class MethodVersionItemProvider extends ContentVersionItemProvider {
 	}
 
 	/**
+	 * This adds a property descriptor for the Nonlinearity feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addNonlinearityPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_MethodVersion_nonlinearity_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_MethodVersion_nonlinearity_feature", "_UI_MethodVersion_type"),
+				 WorkspacePackage.Literals.METHOD_VERSION__NONLINEARITY,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.BOOLEAN_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Tolerance feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addTolerancePropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_MethodVersion_tolerance_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_MethodVersion_tolerance_feature", "_UI_MethodVersion_type"),
+				 WorkspacePackage.Literals.METHOD_VERSION__TOLERANCE,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Max Absorbance feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addMaxAbsorbancePropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_MethodVersion_maxAbsorbance_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_MethodVersion_maxAbsorbance_feature", "_UI_MethodVersion_type"),
+				 WorkspacePackage.Literals.METHOD_VERSION__MAX_ABSORBANCE,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.REAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Shift Term feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addShiftTermPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_MethodVersion_shiftTerm_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_MethodVersion_shiftTerm_feature", "_UI_MethodVersion_type"),
+				 WorkspacePackage.Literals.METHOD_VERSION__SHIFT_TERM,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Reporting Unit feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addReportingUnitPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_MethodVersion_reportingUnit_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_MethodVersion_reportingUnit_feature", "_UI_MethodVersion_type"),
+				 WorkspacePackage.Literals.METHOD_VERSION__REPORTING_UNIT,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Recipe Steps feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addRecipeStepsPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_MethodVersion_recipeSteps_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_MethodVersion_recipeSteps_feature", "_UI_MethodVersion_type"),
+				 WorkspacePackage.Literals.METHOD_VERSION__RECIPE_STEPS,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Cell Conditions feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addCellConditionsPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_MethodVersion_cellConditions_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_MethodVersion_cellConditions_feature", "_UI_MethodVersion_type"),
+				 WorkspacePackage.Literals.METHOD_VERSION__CELL_CONDITIONS,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
 	 * This specifies how to implement {@link #getChildren} and is used to deduce an appropriate feature for an
 	 * {@link org.eclipse.emf.edit.command.AddCommand}, {@link org.eclipse.emf.edit.command.RemoveCommand} or
 	 * {@link org.eclipse.emf.edit.command.MoveCommand} in {@link #createCommand}.
@@ -216,6 +377,13 @@ public class MethodVersionItemProvider extends ContentVersionItemProvider {
 			case WorkspacePackage.METHOD_VERSION__MAX_ITERATIONS:
 			case WorkspacePackage.METHOD_VERSION__ALGORITHM:
 			case WorkspacePackage.METHOD_VERSION__PATH_SOURCE:
+			case WorkspacePackage.METHOD_VERSION__NONLINEARITY:
+			case WorkspacePackage.METHOD_VERSION__TOLERANCE:
+			case WorkspacePackage.METHOD_VERSION__MAX_ABSORBANCE:
+			case WorkspacePackage.METHOD_VERSION__SHIFT_TERM:
+			case WorkspacePackage.METHOD_VERSION__REPORTING_UNIT:
+			case WorkspacePackage.METHOD_VERSION__RECIPE_STEPS:
+			case WorkspacePackage.METHOD_VERSION__CELL_CONDITIONS:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), false, true));
 				return;
 			case WorkspacePackage.METHOD_VERSION__REGIONS:
