@@ -981,6 +981,160 @@ public interface WorkspacePackage extends EPackage {
 	int ANALYSIS_REGION_OPERATION_COUNT = 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.ResultImpl <em>Result</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.ResultImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResult()
+	 * @generated
+	 */
+	int RESULT = 10;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Project Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__PROJECT_ID = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Measurement Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__MEASUREMENT_ID = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Compound</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__COMPOUND = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Concentration</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__CONCENTRATION = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Standard Uncertainty</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__STANDARD_UNCERTAINTY = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Detection Limit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__DETECTION_LIMIT = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The feature id for the '<em><b>Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__UNIT = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The feature id for the '<em><b>Flags</b></em>' attribute list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__FLAGS = STORED_OBJECT_FEATURE_COUNT + 7;
+
+	/**
+	 * The feature id for the '<em><b>Provenance</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__PROVENANCE = STORED_OBJECT_FEATURE_COUNT + 8;
+
+	/**
+	 * The feature id for the '<em><b>Conditions</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__CONDITIONS = STORED_OBJECT_FEATURE_COUNT + 9;
+
+	/**
+	 * The feature id for the '<em><b>Recorded By</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__RECORDED_BY = STORED_OBJECT_FEATURE_COUNT + 10;
+
+	/**
+	 * The feature id for the '<em><b>Recorded</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__RECORDED = STORED_OBJECT_FEATURE_COUNT + 11;
+
+	/**
+	 * The number of structural features of the '<em>Result</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 12;
+
+	/**
+	 * The number of operations of the '<em>Result</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -988,7 +1142,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAccessLevel()
 	 * @generated
 	 */
-	int ACCESS_LEVEL = 10;
+	int ACCESS_LEVEL = 11;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.MeasurementKind <em>Measurement Kind</em>}' enum.
@@ -998,7 +1152,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurementKind()
 	 * @generated
 	 */
-	int MEASUREMENT_KIND = 11;
+	int MEASUREMENT_KIND = 12;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.SpectralContent <em>Spectral Content</em>}' enum.
@@ -1008,7 +1162,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectralContent()
 	 * @generated
 	 */
-	int SPECTRAL_CONTENT = 12;
+	int SPECTRAL_CONTENT = 13;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
@@ -1018,7 +1172,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 13;
+	int RESULT_FLAG = 14;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -1028,7 +1182,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 14;
+	int ROLE = 15;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -1038,7 +1192,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 15;
+	int INSTANT = 16;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -1048,7 +1202,27 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 16;
+	int SPECTRUM = 17;
+
+	/**
+	 * The meta object id for the '<em>Provenance</em>' data type.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.Provenance
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
+	 * @generated
+	 */
+	int PROVENANCE = 18;
+
+	/**
+	 * The meta object id for the '<em>Result Conditions</em>' data type.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.ResultConditions
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
+	 * @generated
+	 */
+	int RESULT_CONDITIONS = 19;
 
 
 	/**
@@ -1713,6 +1887,148 @@ public interface WorkspacePackage extends EPackage {
 	EAttribute getAnalysisRegion_OpenedAs();
 
 	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.Result <em>Result</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Result</em>'.
+	 * @see org.tracegas.model.Result
+	 * @generated
+	 */
+	EClass getResult();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getProjectId <em>Project Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Project Id</em>'.
+	 * @see org.tracegas.model.Result#getProjectId()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_ProjectId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getMeasurementId <em>Measurement Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Measurement Id</em>'.
+	 * @see org.tracegas.model.Result#getMeasurementId()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_MeasurementId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getCompound <em>Compound</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Compound</em>'.
+	 * @see org.tracegas.model.Result#getCompound()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Compound();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getConcentration <em>Concentration</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Concentration</em>'.
+	 * @see org.tracegas.model.Result#getConcentration()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Concentration();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getStandardUncertainty <em>Standard Uncertainty</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Standard Uncertainty</em>'.
+	 * @see org.tracegas.model.Result#getStandardUncertainty()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_StandardUncertainty();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getDetectionLimit <em>Detection Limit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Detection Limit</em>'.
+	 * @see org.tracegas.model.Result#getDetectionLimit()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_DetectionLimit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getUnit <em>Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Unit</em>'.
+	 * @see org.tracegas.model.Result#getUnit()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Unit();
+
+	/**
+	 * Returns the meta object for the attribute list '{@link org.tracegas.model.Result#getFlags <em>Flags</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute list '<em>Flags</em>'.
+	 * @see org.tracegas.model.Result#getFlags()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Flags();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getProvenance <em>Provenance</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Provenance</em>'.
+	 * @see org.tracegas.model.Result#getProvenance()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Provenance();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getConditions <em>Conditions</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Conditions</em>'.
+	 * @see org.tracegas.model.Result#getConditions()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Conditions();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getRecordedBy <em>Recorded By</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Recorded By</em>'.
+	 * @see org.tracegas.model.Result#getRecordedBy()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_RecordedBy();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getRecorded <em>Recorded</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Recorded</em>'.
+	 * @see org.tracegas.model.Result#getRecorded()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Recorded();
+
+	/**
 	 * Returns the meta object for enum '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1789,6 +2105,34 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EDataType getSpectrum();
+
+	/**
+	 * Returns the meta object for data type '{@link org.tracegas.model.Provenance <em>Provenance</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+     * <!-- begin-model-doc -->
+     * What made a result, as one immutable value: the method and library versions, the software version and the SHA-256 of the spectral input. The results of one fitted spectrum share it.
+     * <!-- end-model-doc -->
+	 * @return the meta object for data type '<em>Provenance</em>'.
+	 * @see org.tracegas.model.Provenance
+	 * @model instanceClass="org.tracegas.model.Provenance" serializeable="false"
+	 * @generated
+	 */
+	EDataType getProvenance();
+
+	/**
+	 * Returns the meta object for data type '{@link org.tracegas.model.ResultConditions <em>Result Conditions</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+     * <!-- begin-model-doc -->
+     * What a result was corrected with, as one immutable value: the sample cell's conditions and the references' with where each came from, the correction factor and the noise factor. A data type, not a class: the values are fixed together by the correction and checked together, and nothing edits one of them alone.
+     * <!-- end-model-doc -->
+	 * @return the meta object for data type '<em>Result Conditions</em>'.
+	 * @see org.tracegas.model.ResultConditions
+	 * @model instanceClass="org.tracegas.model.ResultConditions" serializeable="false"
+	 * @generated
+	 */
+	EDataType getResultConditions();
 
 	/**
 	 * Returns the factory that creates the instances of the model.
@@ -2322,6 +2666,112 @@ public interface WorkspacePackage extends EPackage {
 		EAttribute ANALYSIS_REGION__OPENED_AS = eINSTANCE.getAnalysisRegion_OpenedAs();
 
 		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.ResultImpl <em>Result</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.ResultImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResult()
+		 * @generated
+		 */
+		EClass RESULT = eINSTANCE.getResult();
+
+		/**
+		 * The meta object literal for the '<em><b>Project Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__PROJECT_ID = eINSTANCE.getResult_ProjectId();
+
+		/**
+		 * The meta object literal for the '<em><b>Measurement Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__MEASUREMENT_ID = eINSTANCE.getResult_MeasurementId();
+
+		/**
+		 * The meta object literal for the '<em><b>Compound</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__COMPOUND = eINSTANCE.getResult_Compound();
+
+		/**
+		 * The meta object literal for the '<em><b>Concentration</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__CONCENTRATION = eINSTANCE.getResult_Concentration();
+
+		/**
+		 * The meta object literal for the '<em><b>Standard Uncertainty</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__STANDARD_UNCERTAINTY = eINSTANCE.getResult_StandardUncertainty();
+
+		/**
+		 * The meta object literal for the '<em><b>Detection Limit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__DETECTION_LIMIT = eINSTANCE.getResult_DetectionLimit();
+
+		/**
+		 * The meta object literal for the '<em><b>Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__UNIT = eINSTANCE.getResult_Unit();
+
+		/**
+		 * The meta object literal for the '<em><b>Flags</b></em>' attribute list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__FLAGS = eINSTANCE.getResult_Flags();
+
+		/**
+		 * The meta object literal for the '<em><b>Provenance</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__PROVENANCE = eINSTANCE.getResult_Provenance();
+
+		/**
+		 * The meta object literal for the '<em><b>Conditions</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__CONDITIONS = eINSTANCE.getResult_Conditions();
+
+		/**
+		 * The meta object literal for the '<em><b>Recorded By</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__RECORDED_BY = eINSTANCE.getResult_RecordedBy();
+
+		/**
+		 * The meta object literal for the '<em><b>Recorded</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__RECORDED = eINSTANCE.getResult_Recorded();
+
+		/**
 		 * The meta object literal for the '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}' enum.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -2390,6 +2840,26 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EDataType SPECTRUM = eINSTANCE.getSpectrum();
+
+		/**
+		 * The meta object literal for the '<em>Provenance</em>' data type.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.Provenance
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
+		 * @generated
+		 */
+		EDataType PROVENANCE = eINSTANCE.getProvenance();
+
+		/**
+		 * The meta object literal for the '<em>Result Conditions</em>' data type.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.ResultConditions
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
+		 * @generated
+		 */
+		EDataType RESULT_CONDITIONS = eINSTANCE.getResultConditions();
 
 	}
 

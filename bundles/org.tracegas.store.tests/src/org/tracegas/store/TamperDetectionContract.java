@@ -25,6 +25,7 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.audit.ChainAnchor;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Result;
 import org.tracegas.store.internal.DataVerifier;
 
 /**
@@ -90,8 +91,9 @@ abstract class TamperDetectionContract {
         store.spectra().store(fixture.analyst, fixture.project.getId(), new SpectrumInput(m,
                 org.tracegas.model.SpectralContent.ABSORBANCE, SampleBlocks.processed(0, 0, fixture.method.id(),
                         fixture.library.id()).absorbance(), SampleEncoding.FLOAT32_LE));
-        store.results().record(fixture.analyst, fixture.project.getId(), SampleBlocks.processed(0, 1,
-                fixture.method.id(), fixture.library.id()).results().get(0).withMeasurement(m));
+        Result result = SampleBlocks.processed(0, 1, fixture.method.id(), fixture.library.id()).results().get(0);
+        result.setMeasurementId(m);
+        store.results().record(fixture.analyst, fixture.project.getId(), result);
         store.blocks().store(fixture.analyst, fixture.project.getId(), SampleBlocks.block(1, 3, 3, fixture.method.id(),
                 fixture.library.id()));
         store.qa().recordAll(fixture.analyst, fixture.project.getId(), fixture.method.id(), List.of(

@@ -67,6 +67,7 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 			case WorkspacePackage.ANALYSIS_METHOD: return createAnalysisMethod();
 			case WorkspacePackage.METHOD_VERSION: return createMethodVersion();
 			case WorkspacePackage.ANALYSIS_REGION: return createAnalysisRegion();
+			case WorkspacePackage.RESULT: return createResult();
 			default:
 				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier");
 		}
@@ -208,6 +209,17 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	public AnalysisRegion createAnalysisRegion() {
 		AnalysisRegionImpl analysisRegion = new AnalysisRegionImpl();
 		return analysisRegion;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Result createResult() {
+		ResultImpl result = new ResultImpl();
+		return result;
 	}
 
 	/**

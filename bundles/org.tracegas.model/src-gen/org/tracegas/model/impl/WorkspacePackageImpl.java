@@ -22,7 +22,10 @@ import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
+import org.tracegas.model.Provenance;
 import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
@@ -115,6 +118,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	private EClass resultEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	private EEnum accessLevelEEnum = null;
 
 	/**
@@ -158,6 +168,20 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EDataType spectrumEDataType = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EDataType provenanceEDataType = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EDataType resultConditionsEDataType = null;
 
 	/**
 	 * Creates an instance of the model <b>Package</b>, registered with
@@ -835,6 +859,136 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EClass getResult() {
+		return resultEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_ProjectId() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_MeasurementId() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Compound() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Concentration() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_StandardUncertainty() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_DetectionLimit() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Unit() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Flags() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Provenance() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Conditions() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(9);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_RecordedBy() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(10);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Recorded() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(11);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getAccessLevel() {
 		return accessLevelEEnum;
 	}
@@ -897,6 +1051,26 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	@Override
 	public EDataType getSpectrum() {
 		return spectrumEDataType;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EDataType getProvenance() {
+		return provenanceEDataType;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EDataType getResultConditions() {
+		return resultConditionsEDataType;
 	}
 
 	/**
@@ -999,6 +1173,20 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__BASELINE_ORDER);
 		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__OPENED_AS);
 
+		resultEClass = createEClass(RESULT);
+		createEAttribute(resultEClass, RESULT__PROJECT_ID);
+		createEAttribute(resultEClass, RESULT__MEASUREMENT_ID);
+		createEAttribute(resultEClass, RESULT__COMPOUND);
+		createEAttribute(resultEClass, RESULT__CONCENTRATION);
+		createEAttribute(resultEClass, RESULT__STANDARD_UNCERTAINTY);
+		createEAttribute(resultEClass, RESULT__DETECTION_LIMIT);
+		createEAttribute(resultEClass, RESULT__UNIT);
+		createEAttribute(resultEClass, RESULT__FLAGS);
+		createEAttribute(resultEClass, RESULT__PROVENANCE);
+		createEAttribute(resultEClass, RESULT__CONDITIONS);
+		createEAttribute(resultEClass, RESULT__RECORDED_BY);
+		createEAttribute(resultEClass, RESULT__RECORDED);
+
 		// Create enums
 		accessLevelEEnum = createEEnum(ACCESS_LEVEL);
 		measurementKindEEnum = createEEnum(MEASUREMENT_KIND);
@@ -1009,6 +1197,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		// Create data types
 		instantEDataType = createEDataType(INSTANT);
 		spectrumEDataType = createEDataType(SPECTRUM);
+		provenanceEDataType = createEDataType(PROVENANCE);
+		resultConditionsEDataType = createEDataType(RESULT_CONDITIONS);
 	}
 
 	/**
@@ -1046,6 +1236,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		referenceLibraryEClass.getESuperTypes().add(this.getStoredObject());
 		analysisMethodEClass.getESuperTypes().add(this.getStoredObject());
 		methodVersionEClass.getESuperTypes().add(this.getContentVersion());
+		resultEClass.getESuperTypes().add(this.getStoredObject());
 
 		// Initialize classes, features, and operations; add parameters
 		initEClass(storedObjectEClass, StoredObject.class, "StoredObject", IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
@@ -1119,6 +1310,20 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getAnalysisRegion_BaselineOrder(), ecorePackage.getEInt(), "baselineOrder", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getAnalysisRegion_OpenedAs(), ecorePackage.getEInt(), "openedAs", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
+		initEClass(resultEClass, Result.class, "Result", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getResult_ProjectId(), ecorePackage.getEString(), "projectId", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_MeasurementId(), ecorePackage.getEString(), "measurementId", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Compound(), ecorePackage.getEString(), "compound", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Concentration(), ecorePackage.getEDouble(), "concentration", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_StandardUncertainty(), ecorePackage.getEDouble(), "standardUncertainty", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_DetectionLimit(), ecorePackage.getEDouble(), "detectionLimit", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Unit(), ecorePackage.getEString(), "unit", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Flags(), this.getResultFlag(), "flags", null, 0, -1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Provenance(), this.getProvenance(), "provenance", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Conditions(), this.getResultConditions(), "conditions", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_RecordedBy(), ecorePackage.getEString(), "recordedBy", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Recorded(), this.getInstant(), "recorded", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
 		// Initialize enums and add enum literals
 		initEEnum(accessLevelEEnum, AccessLevel.class, "AccessLevel");
 		addEEnumLiteral(accessLevelEEnum, AccessLevel.READ);
@@ -1159,6 +1364,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		// Initialize data types
 		initEDataType(instantEDataType, Instant.class, "Instant", IS_SERIALIZABLE, !IS_GENERATED_INSTANCE_CLASS);
 		initEDataType(spectrumEDataType, Spectrum.class, "Spectrum", !IS_SERIALIZABLE, !IS_GENERATED_INSTANCE_CLASS);
+		initEDataType(provenanceEDataType, Provenance.class, "Provenance", !IS_SERIALIZABLE, !IS_GENERATED_INSTANCE_CLASS);
+		initEDataType(resultConditionsEDataType, ResultConditions.class, "ResultConditions", !IS_SERIALIZABLE, !IS_GENERATED_INSTANCE_CLASS);
 
 		// Create resource
 		createResource(eNS_URI);

@@ -108,6 +108,10 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 				return createAnalysisRegionAdapter();
 			}
 			@Override
+			public Adapter caseResult(Result object) {
+				return createResultAdapter();
+			}
+			@Override
 			public Adapter defaultCase(EObject object) {
 				return createEObjectAdapter();
 			}
@@ -264,6 +268,20 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createAnalysisRegionAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Result <em>Result</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.Result
+	 * @generated
+	 */
+	public Adapter createResultAdapter() {
 		return null;
 	}
 

@@ -112,8 +112,8 @@ public final class CampaignReport {
         store.qa().checks(actor, projectId).stream().filter(c -> c.methodVersionId().equals(methodVersionId))
                 .forEach(c -> authors.add(c.recordedBy()));
         store.results().results(actor, projectId).stream()
-                .filter(r -> r.values().methodVersionId().equals(methodVersionId))
-                .forEach(r -> authors.add(r.recordedBy()));
+                .filter(r -> r.getProvenance().methodVersionId().equals(methodVersionId))
+                .forEach(r -> authors.add(r.getRecordedBy()));
         return List.copyOf(authors);
     }
 

@@ -17,20 +17,20 @@ import java.util.Random;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.method.MethodVersions;
-import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
+import org.tracegas.method.MethodVersions;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.Result;
 import org.tracegas.model.WorkspacePackage.Literals;
 import org.tracegas.model.edit.ModelEditor;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -138,16 +138,16 @@ class WorkbenchMethodVersionTest {
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
             String project = store.projects().findByCode(ana, "P-W").orElseThrow().getId();
-            List<ResultInfo> results = store.results().results(ana, project);
+            List<Result> results = store.results().results(ana, project);
             assertEquals(2 * CO_PPM.length, results.size(), "CO and N2O of each sample, no longer H2O");
-            assertTrue(results.stream().allMatch(r -> r.values().methodVersionId().equals(saved.id())),
+            assertTrue(results.stream().allMatch(r -> r.getProvenance().methodVersionId().equals(saved.id())),
                     "every result names the version saved from the editor");
             assertTrue(store.versions().version(saved.id()).frozen(), "a version with results is frozen");
             Map<String, Instant> times = new java.util.HashMap<>();
             store.projects().measurements(ana, project).forEach(m -> times.put(m.getId(), m.getTime()));
-            List<Double> co = results.stream().filter(r -> r.values().compound().equals("CO"))
-                    .sorted(java.util.Comparator.comparing(r -> times.get(r.values().measurementId())))
-                    .map(r -> r.values().concentration()).toList();
+            List<Double> co = results.stream().filter(r -> r.getCompound().equals("CO"))
+                    .sorted(java.util.Comparator.comparing(r -> times.get(r.getMeasurementId())))
+                    .map(r -> r.getConcentration()).toList();
             for (int i = 0; i < CO_PPM.length; i++) {
                 // the truth is the mixture the interferograms were synthesised from; 4 % as in the runner's
                 // analysis test (interpolation between references 1.5 apart plus the detector noise)
