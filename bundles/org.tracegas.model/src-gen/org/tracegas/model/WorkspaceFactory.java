@@ -103,6 +103,15 @@ public interface WorkspaceFactory extends EFactory {
 	Result createResult();
 
 	/**
+	 * Returns a new object of class '<em>Qa Outcome</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Qa Outcome</em>'.
+	 * @generated
+	 */
+	QaOutcome createQaOutcome();
+
+	/**
 	 * Returns the package supported by this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

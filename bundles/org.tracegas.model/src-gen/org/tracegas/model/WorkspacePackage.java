@@ -1135,6 +1135,160 @@ public interface WorkspacePackage extends EPackage {
 	int RESULT_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.QaOutcomeImpl <em>Qa Outcome</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.QaOutcomeImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getQaOutcome()
+	 * @generated
+	 */
+	int QA_OUTCOME = 11;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Project Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__PROJECT_ID = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Method Version Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__METHOD_VERSION_ID = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Check</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__CHECK = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Passed</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__PASSED = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Measured</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__MEASURED = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__UNIT = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The feature id for the '<em><b>Lower Limit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__LOWER_LIMIT = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The feature id for the '<em><b>Upper Limit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__UPPER_LIMIT = STORED_OBJECT_FEATURE_COUNT + 7;
+
+	/**
+	 * The feature id for the '<em><b>Rule</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__RULE = STORED_OBJECT_FEATURE_COUNT + 8;
+
+	/**
+	 * The feature id for the '<em><b>Source</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__SOURCE = STORED_OBJECT_FEATURE_COUNT + 9;
+
+	/**
+	 * The feature id for the '<em><b>Recorded By</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__RECORDED_BY = STORED_OBJECT_FEATURE_COUNT + 10;
+
+	/**
+	 * The feature id for the '<em><b>Recorded</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__RECORDED = STORED_OBJECT_FEATURE_COUNT + 11;
+
+	/**
+	 * The number of structural features of the '<em>Qa Outcome</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 12;
+
+	/**
+	 * The number of operations of the '<em>Qa Outcome</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1142,7 +1296,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAccessLevel()
 	 * @generated
 	 */
-	int ACCESS_LEVEL = 11;
+	int ACCESS_LEVEL = 12;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.MeasurementKind <em>Measurement Kind</em>}' enum.
@@ -1152,7 +1306,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurementKind()
 	 * @generated
 	 */
-	int MEASUREMENT_KIND = 12;
+	int MEASUREMENT_KIND = 13;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.SpectralContent <em>Spectral Content</em>}' enum.
@@ -1162,7 +1316,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectralContent()
 	 * @generated
 	 */
-	int SPECTRAL_CONTENT = 13;
+	int SPECTRAL_CONTENT = 14;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
@@ -1172,7 +1326,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 14;
+	int RESULT_FLAG = 15;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -1182,7 +1336,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 15;
+	int ROLE = 16;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -1192,7 +1346,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 16;
+	int INSTANT = 17;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -1202,7 +1356,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 17;
+	int SPECTRUM = 18;
 
 	/**
 	 * The meta object id for the '<em>Provenance</em>' data type.
@@ -1212,7 +1366,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
 	 * @generated
 	 */
-	int PROVENANCE = 18;
+	int PROVENANCE = 19;
 
 	/**
 	 * The meta object id for the '<em>Result Conditions</em>' data type.
@@ -1222,7 +1376,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
 	 * @generated
 	 */
-	int RESULT_CONDITIONS = 19;
+	int RESULT_CONDITIONS = 20;
 
 
 	/**
@@ -2029,6 +2183,148 @@ public interface WorkspacePackage extends EPackage {
 	EAttribute getResult_Recorded();
 
 	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.QaOutcome <em>Qa Outcome</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Qa Outcome</em>'.
+	 * @see org.tracegas.model.QaOutcome
+	 * @generated
+	 */
+	EClass getQaOutcome();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getProjectId <em>Project Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Project Id</em>'.
+	 * @see org.tracegas.model.QaOutcome#getProjectId()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_ProjectId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getMethodVersionId <em>Method Version Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Method Version Id</em>'.
+	 * @see org.tracegas.model.QaOutcome#getMethodVersionId()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_MethodVersionId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getCheck <em>Check</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Check</em>'.
+	 * @see org.tracegas.model.QaOutcome#getCheck()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Check();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#isPassed <em>Passed</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Passed</em>'.
+	 * @see org.tracegas.model.QaOutcome#isPassed()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Passed();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getMeasured <em>Measured</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Measured</em>'.
+	 * @see org.tracegas.model.QaOutcome#getMeasured()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Measured();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getUnit <em>Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Unit</em>'.
+	 * @see org.tracegas.model.QaOutcome#getUnit()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Unit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getLowerLimit <em>Lower Limit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Lower Limit</em>'.
+	 * @see org.tracegas.model.QaOutcome#getLowerLimit()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_LowerLimit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getUpperLimit <em>Upper Limit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Upper Limit</em>'.
+	 * @see org.tracegas.model.QaOutcome#getUpperLimit()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_UpperLimit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getRule <em>Rule</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Rule</em>'.
+	 * @see org.tracegas.model.QaOutcome#getRule()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Rule();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getSource <em>Source</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Source</em>'.
+	 * @see org.tracegas.model.QaOutcome#getSource()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Source();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getRecordedBy <em>Recorded By</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Recorded By</em>'.
+	 * @see org.tracegas.model.QaOutcome#getRecordedBy()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_RecordedBy();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getRecorded <em>Recorded</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Recorded</em>'.
+	 * @see org.tracegas.model.QaOutcome#getRecorded()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Recorded();
+
+	/**
 	 * Returns the meta object for enum '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2770,6 +3066,112 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute RESULT__RECORDED = eINSTANCE.getResult_Recorded();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.QaOutcomeImpl <em>Qa Outcome</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.QaOutcomeImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getQaOutcome()
+		 * @generated
+		 */
+		EClass QA_OUTCOME = eINSTANCE.getQaOutcome();
+
+		/**
+		 * The meta object literal for the '<em><b>Project Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__PROJECT_ID = eINSTANCE.getQaOutcome_ProjectId();
+
+		/**
+		 * The meta object literal for the '<em><b>Method Version Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__METHOD_VERSION_ID = eINSTANCE.getQaOutcome_MethodVersionId();
+
+		/**
+		 * The meta object literal for the '<em><b>Check</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__CHECK = eINSTANCE.getQaOutcome_Check();
+
+		/**
+		 * The meta object literal for the '<em><b>Passed</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__PASSED = eINSTANCE.getQaOutcome_Passed();
+
+		/**
+		 * The meta object literal for the '<em><b>Measured</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__MEASURED = eINSTANCE.getQaOutcome_Measured();
+
+		/**
+		 * The meta object literal for the '<em><b>Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__UNIT = eINSTANCE.getQaOutcome_Unit();
+
+		/**
+		 * The meta object literal for the '<em><b>Lower Limit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__LOWER_LIMIT = eINSTANCE.getQaOutcome_LowerLimit();
+
+		/**
+		 * The meta object literal for the '<em><b>Upper Limit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__UPPER_LIMIT = eINSTANCE.getQaOutcome_UpperLimit();
+
+		/**
+		 * The meta object literal for the '<em><b>Rule</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__RULE = eINSTANCE.getQaOutcome_Rule();
+
+		/**
+		 * The meta object literal for the '<em><b>Source</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__SOURCE = eINSTANCE.getQaOutcome_Source();
+
+		/**
+		 * The meta object literal for the '<em><b>Recorded By</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__RECORDED_BY = eINSTANCE.getQaOutcome_RecordedBy();
+
+		/**
+		 * The meta object literal for the '<em><b>Recorded</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__RECORDED = eINSTANCE.getQaOutcome_Recorded();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}' enum.

@@ -68,6 +68,7 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 			case WorkspacePackage.METHOD_VERSION: return createMethodVersion();
 			case WorkspacePackage.ANALYSIS_REGION: return createAnalysisRegion();
 			case WorkspacePackage.RESULT: return createResult();
+			case WorkspacePackage.QA_OUTCOME: return createQaOutcome();
 			default:
 				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier");
 		}
@@ -220,6 +221,17 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	public Result createResult() {
 		ResultImpl result = new ResultImpl();
 		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public QaOutcome createQaOutcome() {
+		QaOutcomeImpl qaOutcome = new QaOutcomeImpl();
+		return qaOutcome;
 	}
 
 	/**

@@ -23,6 +23,7 @@ import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
+import org.tracegas.model.QaOutcome;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.Result;
 import org.tracegas.model.ResultConditions;
@@ -119,6 +120,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EClass resultEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass qaOutcomeEClass = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -989,6 +997,136 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EClass getQaOutcome() {
+		return qaOutcomeEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_ProjectId() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_MethodVersionId() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Check() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Passed() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Measured() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Unit() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_LowerLimit() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_UpperLimit() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Rule() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Source() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(9);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_RecordedBy() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(10);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Recorded() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(11);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getAccessLevel() {
 		return accessLevelEEnum;
 	}
@@ -1187,6 +1325,20 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(resultEClass, RESULT__RECORDED_BY);
 		createEAttribute(resultEClass, RESULT__RECORDED);
 
+		qaOutcomeEClass = createEClass(QA_OUTCOME);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__PROJECT_ID);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__METHOD_VERSION_ID);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__CHECK);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__PASSED);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__MEASURED);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__UNIT);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__LOWER_LIMIT);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__UPPER_LIMIT);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__RULE);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__SOURCE);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__RECORDED_BY);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__RECORDED);
+
 		// Create enums
 		accessLevelEEnum = createEEnum(ACCESS_LEVEL);
 		measurementKindEEnum = createEEnum(MEASUREMENT_KIND);
@@ -1237,6 +1389,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		analysisMethodEClass.getESuperTypes().add(this.getStoredObject());
 		methodVersionEClass.getESuperTypes().add(this.getContentVersion());
 		resultEClass.getESuperTypes().add(this.getStoredObject());
+		qaOutcomeEClass.getESuperTypes().add(this.getStoredObject());
 
 		// Initialize classes, features, and operations; add parameters
 		initEClass(storedObjectEClass, StoredObject.class, "StoredObject", IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
@@ -1323,6 +1476,20 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getResult_Conditions(), this.getResultConditions(), "conditions", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getResult_RecordedBy(), ecorePackage.getEString(), "recordedBy", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getResult_Recorded(), this.getInstant(), "recorded", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(qaOutcomeEClass, QaOutcome.class, "QaOutcome", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getQaOutcome_ProjectId(), ecorePackage.getEString(), "projectId", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_MethodVersionId(), ecorePackage.getEString(), "methodVersionId", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Check(), ecorePackage.getEString(), "check", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Passed(), ecorePackage.getEBoolean(), "passed", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Measured(), ecorePackage.getEDouble(), "measured", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Unit(), ecorePackage.getEString(), "unit", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_LowerLimit(), ecorePackage.getEDouble(), "lowerLimit", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_UpperLimit(), ecorePackage.getEDouble(), "upperLimit", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Rule(), ecorePackage.getEString(), "rule", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Source(), ecorePackage.getEString(), "source", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_RecordedBy(), ecorePackage.getEString(), "recordedBy", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Recorded(), this.getInstant(), "recorded", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		// Initialize enums and add enum literals
 		initEEnum(accessLevelEEnum, AccessLevel.class, "AccessLevel");

@@ -141,6 +141,13 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 				if (theResult == null) theResult = defaultCase(theEObject);
 				return theResult;
 			}
+			case WorkspacePackage.QA_OUTCOME: {
+				QaOutcome qaOutcome = (QaOutcome)theEObject;
+				T result = caseQaOutcome(qaOutcome);
+				if (result == null) result = caseStoredObject(qaOutcome);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
 			default: return defaultCase(theEObject);
 		}
 	}
@@ -307,6 +314,21 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseResult(Result object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Qa Outcome</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Qa Outcome</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseQaOutcome(QaOutcome object) {
 		return null;
 	}
 

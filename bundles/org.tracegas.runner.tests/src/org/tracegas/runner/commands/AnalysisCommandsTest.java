@@ -407,8 +407,8 @@ class AnalysisCommandsTest {
     /** The mean of the stored CTS path length checks of a project. */
     private static double ctsCheckPath(WorkspaceStore store, Session s, String code) {
         String project = store.projects().findByCode(s, code).orElseThrow().getId();
-        return store.qa().checks(s, project).stream().filter(c -> c.outcome().check().equals("CTS path length"))
-                .mapToDouble(c -> c.outcome().measured()).average().orElseThrow();
+        return store.qa().checks(s, project).stream().filter(c -> c.getCheck().equals("CTS path length"))
+                .mapToDouble(c -> c.getMeasured()).average().orElseThrow();
     }
 
     private static List<MinuteSeries.Point> co(WorkspaceStore store, Session s, String code, String method) {
@@ -467,8 +467,8 @@ class AnalysisCommandsTest {
         try (WorkspaceStore store = open()) {
             String project = store.projects().findByCode(ana(store), "P-4").orElseThrow().getId();
             String rule = store.qa().checks(ana(store), project).stream()
-                    .filter(c -> c.outcome().check().equals("Control chart: CTS path length")).findFirst()
-                    .orElseThrow().outcome().rule();
+                    .filter(c -> c.getCheck().equals("Control chart: CTS path length")).findFirst()
+                    .orElseThrow().getRule();
             assertTrue(rule.contains("the latest 2 readings of earlier campaigns"), rule);
         }
         Path report = folder.resolve("report-P-4");

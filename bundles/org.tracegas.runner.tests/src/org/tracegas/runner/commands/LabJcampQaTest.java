@@ -172,7 +172,7 @@ class LabJcampQaTest {
             Map<String, String> fileOf = store.imports().measurements(ana, project).stream().collect(
                     Collectors.toMap(Measurement::getId, Measurement::getSourceFile));
             Map<String, Double> mdl = store.qa().checks(ana, project).stream().collect(Collectors.toMap(
-                    c -> c.outcome().check(), c -> c.outcome().measured()));
+                    c -> c.getCheck(), c -> c.getMeasured()));
             for (String compound : List.of("CO", "N2O")) {
                 List<Result> copies = store.results().results(ana, project).stream()
                         .filter(x -> x.getCompound().equals(compound)
