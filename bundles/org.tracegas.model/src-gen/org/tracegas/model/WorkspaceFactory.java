@@ -94,6 +94,24 @@ public interface WorkspaceFactory extends EFactory {
 	AnalysisRegion createAnalysisRegion();
 
 	/**
+	 * Returns a new object of class '<em>Result</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Result</em>'.
+	 * @generated
+	 */
+	Result createResult();
+
+	/**
+	 * Returns a new object of class '<em>Qa Outcome</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Qa Outcome</em>'.
+	 * @generated
+	 */
+	QaOutcome createQaOutcome();
+
+	/**
 	 * Returns the package supported by this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

@@ -1044,6 +1044,314 @@ public interface WorkspacePackage extends EPackage {
 	int ANALYSIS_REGION_OPERATION_COUNT = 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.ResultImpl <em>Result</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.ResultImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResult()
+	 * @generated
+	 */
+	int RESULT = 10;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Project Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__PROJECT_ID = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Measurement Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__MEASUREMENT_ID = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Compound</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__COMPOUND = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Concentration</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__CONCENTRATION = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Standard Uncertainty</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__STANDARD_UNCERTAINTY = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Detection Limit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__DETECTION_LIMIT = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The feature id for the '<em><b>Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__UNIT = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The feature id for the '<em><b>Flags</b></em>' attribute list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__FLAGS = STORED_OBJECT_FEATURE_COUNT + 7;
+
+	/**
+	 * The feature id for the '<em><b>Provenance</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__PROVENANCE = STORED_OBJECT_FEATURE_COUNT + 8;
+
+	/**
+	 * The feature id for the '<em><b>Conditions</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__CONDITIONS = STORED_OBJECT_FEATURE_COUNT + 9;
+
+	/**
+	 * The feature id for the '<em><b>Recorded By</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__RECORDED_BY = STORED_OBJECT_FEATURE_COUNT + 10;
+
+	/**
+	 * The feature id for the '<em><b>Recorded</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT__RECORDED = STORED_OBJECT_FEATURE_COUNT + 11;
+
+	/**
+	 * The number of structural features of the '<em>Result</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 12;
+
+	/**
+	 * The number of operations of the '<em>Result</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int RESULT_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.QaOutcomeImpl <em>Qa Outcome</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.QaOutcomeImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getQaOutcome()
+	 * @generated
+	 */
+	int QA_OUTCOME = 11;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Project Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__PROJECT_ID = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Method Version Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__METHOD_VERSION_ID = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Check</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__CHECK = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Passed</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__PASSED = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Measured</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__MEASURED = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Unit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__UNIT = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The feature id for the '<em><b>Lower Limit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__LOWER_LIMIT = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The feature id for the '<em><b>Upper Limit</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__UPPER_LIMIT = STORED_OBJECT_FEATURE_COUNT + 7;
+
+	/**
+	 * The feature id for the '<em><b>Rule</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__RULE = STORED_OBJECT_FEATURE_COUNT + 8;
+
+	/**
+	 * The feature id for the '<em><b>Source</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__SOURCE = STORED_OBJECT_FEATURE_COUNT + 9;
+
+	/**
+	 * The feature id for the '<em><b>Recorded By</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__RECORDED_BY = STORED_OBJECT_FEATURE_COUNT + 10;
+
+	/**
+	 * The feature id for the '<em><b>Recorded</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME__RECORDED = STORED_OBJECT_FEATURE_COUNT + 11;
+
+	/**
+	 * The number of structural features of the '<em>Qa Outcome</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 12;
+
+	/**
+	 * The number of operations of the '<em>Qa Outcome</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int QA_OUTCOME_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1051,7 +1359,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAccessLevel()
 	 * @generated
 	 */
-	int ACCESS_LEVEL = 10;
+	int ACCESS_LEVEL = 12;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.MeasurementKind <em>Measurement Kind</em>}' enum.
@@ -1061,7 +1369,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurementKind()
 	 * @generated
 	 */
-	int MEASUREMENT_KIND = 11;
+	int MEASUREMENT_KIND = 13;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.SpectralContent <em>Spectral Content</em>}' enum.
@@ -1071,7 +1379,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectralContent()
 	 * @generated
 	 */
-	int SPECTRAL_CONTENT = 12;
+	int SPECTRAL_CONTENT = 14;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
@@ -1081,7 +1389,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 13;
+	int RESULT_FLAG = 15;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -1091,7 +1399,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 14;
+	int ROLE = 16;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -1101,7 +1409,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 15;
+	int INSTANT = 17;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -1111,7 +1419,27 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 16;
+	int SPECTRUM = 18;
+
+	/**
+	 * The meta object id for the '<em>Provenance</em>' data type.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.Provenance
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
+	 * @generated
+	 */
+	int PROVENANCE = 19;
+
+	/**
+	 * The meta object id for the '<em>Result Conditions</em>' data type.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.ResultConditions
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
+	 * @generated
+	 */
+	int RESULT_CONDITIONS = 20;
 
 
 	/**
@@ -1853,6 +2181,290 @@ public interface WorkspacePackage extends EPackage {
 	EAttribute getAnalysisRegion_OpenedAs();
 
 	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.Result <em>Result</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Result</em>'.
+	 * @see org.tracegas.model.Result
+	 * @generated
+	 */
+	EClass getResult();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getProjectId <em>Project Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Project Id</em>'.
+	 * @see org.tracegas.model.Result#getProjectId()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_ProjectId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getMeasurementId <em>Measurement Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Measurement Id</em>'.
+	 * @see org.tracegas.model.Result#getMeasurementId()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_MeasurementId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getCompound <em>Compound</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Compound</em>'.
+	 * @see org.tracegas.model.Result#getCompound()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Compound();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getConcentration <em>Concentration</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Concentration</em>'.
+	 * @see org.tracegas.model.Result#getConcentration()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Concentration();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getStandardUncertainty <em>Standard Uncertainty</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Standard Uncertainty</em>'.
+	 * @see org.tracegas.model.Result#getStandardUncertainty()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_StandardUncertainty();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getDetectionLimit <em>Detection Limit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Detection Limit</em>'.
+	 * @see org.tracegas.model.Result#getDetectionLimit()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_DetectionLimit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getUnit <em>Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Unit</em>'.
+	 * @see org.tracegas.model.Result#getUnit()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Unit();
+
+	/**
+	 * Returns the meta object for the attribute list '{@link org.tracegas.model.Result#getFlags <em>Flags</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute list '<em>Flags</em>'.
+	 * @see org.tracegas.model.Result#getFlags()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Flags();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getProvenance <em>Provenance</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Provenance</em>'.
+	 * @see org.tracegas.model.Result#getProvenance()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Provenance();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getConditions <em>Conditions</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Conditions</em>'.
+	 * @see org.tracegas.model.Result#getConditions()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Conditions();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getRecordedBy <em>Recorded By</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Recorded By</em>'.
+	 * @see org.tracegas.model.Result#getRecordedBy()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_RecordedBy();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Result#getRecorded <em>Recorded</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Recorded</em>'.
+	 * @see org.tracegas.model.Result#getRecorded()
+	 * @see #getResult()
+	 * @generated
+	 */
+	EAttribute getResult_Recorded();
+
+	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.QaOutcome <em>Qa Outcome</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Qa Outcome</em>'.
+	 * @see org.tracegas.model.QaOutcome
+	 * @generated
+	 */
+	EClass getQaOutcome();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getProjectId <em>Project Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Project Id</em>'.
+	 * @see org.tracegas.model.QaOutcome#getProjectId()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_ProjectId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getMethodVersionId <em>Method Version Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Method Version Id</em>'.
+	 * @see org.tracegas.model.QaOutcome#getMethodVersionId()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_MethodVersionId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getCheck <em>Check</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Check</em>'.
+	 * @see org.tracegas.model.QaOutcome#getCheck()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Check();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#isPassed <em>Passed</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Passed</em>'.
+	 * @see org.tracegas.model.QaOutcome#isPassed()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Passed();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getMeasured <em>Measured</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Measured</em>'.
+	 * @see org.tracegas.model.QaOutcome#getMeasured()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Measured();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getUnit <em>Unit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Unit</em>'.
+	 * @see org.tracegas.model.QaOutcome#getUnit()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Unit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getLowerLimit <em>Lower Limit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Lower Limit</em>'.
+	 * @see org.tracegas.model.QaOutcome#getLowerLimit()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_LowerLimit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getUpperLimit <em>Upper Limit</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Upper Limit</em>'.
+	 * @see org.tracegas.model.QaOutcome#getUpperLimit()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_UpperLimit();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getRule <em>Rule</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Rule</em>'.
+	 * @see org.tracegas.model.QaOutcome#getRule()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Rule();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getSource <em>Source</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Source</em>'.
+	 * @see org.tracegas.model.QaOutcome#getSource()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Source();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getRecordedBy <em>Recorded By</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Recorded By</em>'.
+	 * @see org.tracegas.model.QaOutcome#getRecordedBy()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_RecordedBy();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.QaOutcome#getRecorded <em>Recorded</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Recorded</em>'.
+	 * @see org.tracegas.model.QaOutcome#getRecorded()
+	 * @see #getQaOutcome()
+	 * @generated
+	 */
+	EAttribute getQaOutcome_Recorded();
+
+	/**
 	 * Returns the meta object for enum '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1929,6 +2541,34 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EDataType getSpectrum();
+
+	/**
+	 * Returns the meta object for data type '{@link org.tracegas.model.Provenance <em>Provenance</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+     * <!-- begin-model-doc -->
+     * What made a result, as one immutable value: the method and library versions, the software version and the SHA-256 of the spectral input. The results of one fitted spectrum share it.
+     * <!-- end-model-doc -->
+	 * @return the meta object for data type '<em>Provenance</em>'.
+	 * @see org.tracegas.model.Provenance
+	 * @model instanceClass="org.tracegas.model.Provenance" serializeable="false"
+	 * @generated
+	 */
+	EDataType getProvenance();
+
+	/**
+	 * Returns the meta object for data type '{@link org.tracegas.model.ResultConditions <em>Result Conditions</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+     * <!-- begin-model-doc -->
+     * What a result was corrected with, as one immutable value: the sample cell's conditions and the references' with where each came from, the correction factor and the noise factor. A data type, not a class: the values are fixed together by the correction and checked together, and nothing edits one of them alone.
+     * <!-- end-model-doc -->
+	 * @return the meta object for data type '<em>Result Conditions</em>'.
+	 * @see org.tracegas.model.ResultConditions
+	 * @model instanceClass="org.tracegas.model.ResultConditions" serializeable="false"
+	 * @generated
+	 */
+	EDataType getResultConditions();
 
 	/**
 	 * Returns the factory that creates the instances of the model.
@@ -2518,6 +3158,218 @@ public interface WorkspacePackage extends EPackage {
 		EAttribute ANALYSIS_REGION__OPENED_AS = eINSTANCE.getAnalysisRegion_OpenedAs();
 
 		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.ResultImpl <em>Result</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.ResultImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResult()
+		 * @generated
+		 */
+		EClass RESULT = eINSTANCE.getResult();
+
+		/**
+		 * The meta object literal for the '<em><b>Project Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__PROJECT_ID = eINSTANCE.getResult_ProjectId();
+
+		/**
+		 * The meta object literal for the '<em><b>Measurement Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__MEASUREMENT_ID = eINSTANCE.getResult_MeasurementId();
+
+		/**
+		 * The meta object literal for the '<em><b>Compound</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__COMPOUND = eINSTANCE.getResult_Compound();
+
+		/**
+		 * The meta object literal for the '<em><b>Concentration</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__CONCENTRATION = eINSTANCE.getResult_Concentration();
+
+		/**
+		 * The meta object literal for the '<em><b>Standard Uncertainty</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__STANDARD_UNCERTAINTY = eINSTANCE.getResult_StandardUncertainty();
+
+		/**
+		 * The meta object literal for the '<em><b>Detection Limit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__DETECTION_LIMIT = eINSTANCE.getResult_DetectionLimit();
+
+		/**
+		 * The meta object literal for the '<em><b>Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__UNIT = eINSTANCE.getResult_Unit();
+
+		/**
+		 * The meta object literal for the '<em><b>Flags</b></em>' attribute list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__FLAGS = eINSTANCE.getResult_Flags();
+
+		/**
+		 * The meta object literal for the '<em><b>Provenance</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__PROVENANCE = eINSTANCE.getResult_Provenance();
+
+		/**
+		 * The meta object literal for the '<em><b>Conditions</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__CONDITIONS = eINSTANCE.getResult_Conditions();
+
+		/**
+		 * The meta object literal for the '<em><b>Recorded By</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__RECORDED_BY = eINSTANCE.getResult_RecordedBy();
+
+		/**
+		 * The meta object literal for the '<em><b>Recorded</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute RESULT__RECORDED = eINSTANCE.getResult_Recorded();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.QaOutcomeImpl <em>Qa Outcome</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.QaOutcomeImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getQaOutcome()
+		 * @generated
+		 */
+		EClass QA_OUTCOME = eINSTANCE.getQaOutcome();
+
+		/**
+		 * The meta object literal for the '<em><b>Project Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__PROJECT_ID = eINSTANCE.getQaOutcome_ProjectId();
+
+		/**
+		 * The meta object literal for the '<em><b>Method Version Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__METHOD_VERSION_ID = eINSTANCE.getQaOutcome_MethodVersionId();
+
+		/**
+		 * The meta object literal for the '<em><b>Check</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__CHECK = eINSTANCE.getQaOutcome_Check();
+
+		/**
+		 * The meta object literal for the '<em><b>Passed</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__PASSED = eINSTANCE.getQaOutcome_Passed();
+
+		/**
+		 * The meta object literal for the '<em><b>Measured</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__MEASURED = eINSTANCE.getQaOutcome_Measured();
+
+		/**
+		 * The meta object literal for the '<em><b>Unit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__UNIT = eINSTANCE.getQaOutcome_Unit();
+
+		/**
+		 * The meta object literal for the '<em><b>Lower Limit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__LOWER_LIMIT = eINSTANCE.getQaOutcome_LowerLimit();
+
+		/**
+		 * The meta object literal for the '<em><b>Upper Limit</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__UPPER_LIMIT = eINSTANCE.getQaOutcome_UpperLimit();
+
+		/**
+		 * The meta object literal for the '<em><b>Rule</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__RULE = eINSTANCE.getQaOutcome_Rule();
+
+		/**
+		 * The meta object literal for the '<em><b>Source</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__SOURCE = eINSTANCE.getQaOutcome_Source();
+
+		/**
+		 * The meta object literal for the '<em><b>Recorded By</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__RECORDED_BY = eINSTANCE.getQaOutcome_RecordedBy();
+
+		/**
+		 * The meta object literal for the '<em><b>Recorded</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute QA_OUTCOME__RECORDED = eINSTANCE.getQaOutcome_Recorded();
+
+		/**
 		 * The meta object literal for the '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}' enum.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -2586,6 +3438,26 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EDataType SPECTRUM = eINSTANCE.getSpectrum();
+
+		/**
+		 * The meta object literal for the '<em>Provenance</em>' data type.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.Provenance
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
+		 * @generated
+		 */
+		EDataType PROVENANCE = eINSTANCE.getProvenance();
+
+		/**
+		 * The meta object literal for the '<em>Result Conditions</em>' data type.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.ResultConditions
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
+		 * @generated
+		 */
+		EDataType RESULT_CONDITIONS = eINSTANCE.getResultConditions();
 
 	}
 

@@ -13,6 +13,9 @@ import org.junit.jupiter.api.Test;
 import org.tracegas.library.ReferenceConditions;
 import org.tracegas.method.MethodRecipe;
 import org.tracegas.method.StoredMethod;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.qa.basis.ConditionOrigin;
 import org.tracegas.qa.basis.ConditionValue;
@@ -28,8 +31,6 @@ import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.NewResult;
-import org.tracegas.store.ResultConditions;
 
 /**
  * A fitted concentration corrected from the references' cell to the sample cell, EPA FTIR Protocol section 11.2
@@ -73,15 +74,15 @@ class ResultCorrectionTest {
     @Test
     void aHotterCellAtLowerPressureReadsHigherByTheProtocolRatios() {
         ResultCorrection correction = ResultCorrection.of(stored(423.15));
-        NewResult r = correction.results(fitted(100.0, 1.0), new AnalysisVersions("m-1", "l-1"),
+        Result r = correction.results(fitted(100.0, 1.0), new AnalysisVersions("m-1", "l-1"),
                 new ConditionValue(433.15, ConditionOrigin.INSTRUMENT_CHANNEL),
                 new ConditionValue(98.0, ConditionOrigin.FILE_LABEL), 2.0, "transform of the method").get(0);
         // (433.15 / 423.15) (101.325 / 98.0), worked by hand: 1.0236323 x 1.0339286 = 1.0583627
         double factor = 1.0583627;
-        assertEquals(100.0 * factor, r.concentration(), 1e-5);
-        assertEquals(1.0 * factor, r.uncertainty(), 1e-7);
-        assertEquals(3.0 * factor, r.detectionLimit(), 3e-7);
-        ResultConditions c = r.conditions();
+        assertEquals(100.0 * factor, r.getConcentration(), 1e-5);
+        assertEquals(1.0 * factor, r.getStandardUncertainty(), 1e-7);
+        assertEquals(3.0 * factor, r.getDetectionLimit(), 3e-7);
+        ResultConditions c = r.getConditions();
         assertEquals(factor, c.correctionFactor(), 1e-7);
         assertEquals("instrument-channel", c.temperatureOrigin());
         assertEquals("file-label", c.pressureOrigin());
@@ -97,15 +98,15 @@ class ResultCorrectionTest {
     void aCtsDerivedPathThreePercentLongerLowersEveryValueByThatRatio() {
         // C_corr = (L_r/L_s)(T_s/T_r)(p_r/p_s) C_calc (EPA FTIR Protocol 11.2): the cell at the references' T and
         // p with L_s = 1.03 L_r gives 1/1.03 = 0.9708738 (worked by hand)
-        NewResult r = ResultCorrection.of(stored(423.15)).withCtsPath(1.03 * 4.85).results(fitted(100.0, 1.0),
+        Result r = ResultCorrection.of(stored(423.15)).withCtsPath(1.03 * 4.85).results(fitted(100.0, 1.0),
                 new AnalysisVersions("m", "l"), new ConditionValue(423.15, ConditionOrigin.METHOD_STATED),
                 new ConditionValue(101.325, ConditionOrigin.METHOD_STATED), 1.0, ResultCorrection.NO_TRANSFORM)
                 .get(0);
-        assertEquals(97.08738, r.concentration(), 1e-5);
-        assertEquals(0.9708738, r.uncertainty(), 1e-7);
-        assertEquals(1.03 * 4.85, r.conditions().pathM(), 1e-12);
-        assertEquals("cts-derived", r.conditions().pathOrigin());
-        assertEquals(4.85, r.conditions().fitPathM());
+        assertEquals(97.08738, r.getConcentration(), 1e-5);
+        assertEquals(0.9708738, r.getStandardUncertainty(), 1e-7);
+        assertEquals(1.03 * 4.85, r.getConditions().pathM(), 1e-12);
+        assertEquals("cts-derived", r.getConditions().pathOrigin());
+        assertEquals(4.85, r.getConditions().fitPathM());
         StoredMethod bare = new StoredMethod(method(), TransformSettings.defaults(), "lib-1", HASH);
         assertThrows(IllegalArgumentException.class, () -> ResultCorrection.of(bare).withCtsPath(5.0));
         assertThrows(IllegalArgumentException.class, () -> ResultCorrection.of(stored(423.15)).withCtsPath(0));
@@ -124,22 +125,31 @@ class ResultCorrectionTest {
 
     @Test
     void theCellAtTheReferencesConditionsLeavesTheValueAsFitted() {
-        NewResult r = ResultCorrection.of(stored(423.15)).results(fitted(42.0, 0.5), new AnalysisVersions("m", "l"),
+        Result r = ResultCorrection.of(stored(423.15)).results(fitted(42.0, 0.5), new AnalysisVersions("m", "l"),
                 new ConditionValue(423.15, ConditionOrigin.METHOD_STATED),
                 new ConditionValue(101.325, ConditionOrigin.METHOD_STATED), 1.0, ResultCorrection.NO_TRANSFORM)
                 .get(0);
-        assertEquals(42.0, r.concentration(), 1e-12);
-        assertEquals(1.0, r.conditions().correctionFactor(), 1e-15);
+        assertEquals(42.0, r.getConcentration(), 1e-12);
+        assertEquals(1.0, r.getConditions().correctionFactor(), 1e-15);
     }
 
     @Test
     void aMethodWithoutReferenceConditionsStoresResultsAsFitted() {
         StoredMethod bare = new StoredMethod(method(), TransformSettings.defaults(), "lib-1", HASH);
-        NewResult r = ResultCorrection.of(bare).results(fitted(42.0, 0.5), new AnalysisVersions("m", "l"),
+        Result r = ResultCorrection.of(bare).results(fitted(42.0, 0.5), new AnalysisVersions("m", "l"),
                 new ConditionValue(433.15, ConditionOrigin.INSTRUMENT_CHANNEL),
                 new ConditionValue(98.0, ConditionOrigin.INSTRUMENT_CHANNEL), 2.0, "transform").get(0);
-        assertEquals(42.0, r.concentration());
-        assertNull(r.conditions());
+        assertEquals(42.0, r.getConcentration());
+        assertNull(r.getConditions());
+    }
+
+    @Test
+    void theResultsOfAFitCarryTheRunsVersionsWithTheFitsSoftwareAndInput() {
+        Result r = ResultCorrection.none().results(fitted(42.0, 0.5), new AnalysisVersions("m-7", "l-3"), null, null,
+                1.0, null).get(0);
+        assertEquals(new Provenance("m-7", "l-3", "0.1.0", HASH), r.getProvenance());
+        assertNull(r.getMeasurementId(), "the store assigns the measurement");
+        assertNull(r.getId());
     }
 
     @Test

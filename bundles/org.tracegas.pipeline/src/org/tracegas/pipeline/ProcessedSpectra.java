@@ -3,10 +3,10 @@ package org.tracegas.pipeline;
 import java.util.List;
 
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Result;
 import org.tracegas.qa.basis.ConditionOrigin;
 import org.tracegas.qa.basis.ConditionValue;
 import org.tracegas.quantify.SpectrumResult;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.SampleEncoding;
 
@@ -29,7 +29,7 @@ public final class ProcessedSpectra {
      */
     static ProcessedSpectrum of(MeasuredSpectrum measured, SpectrumResult result, AnalysisVersions versions,
             ResultCorrection correction, String noiseOrigin) {
-        List<NewResult> results = correction.results(result, versions,
+        List<Result> results = correction.results(result, versions,
                 new ConditionValue(measured.cellTemperatureK(), ConditionOrigin.INSTRUMENT_CHANNEL),
                 new ConditionValue(measured.cellPressureKPa(), ConditionOrigin.INSTRUMENT_CHANNEL),
                 measured.noiseFactor(), noiseOrigin);
@@ -38,10 +38,10 @@ public final class ProcessedSpectra {
     }
 
     /**
-     * The results of one fitted spectrum as they are stored, with their flags, of no measurement yet (see
-     * {@link NewResult#withMeasurement}), as fitted: not corrected to the sample cell.
+     * The results of one fitted spectrum as they are stored, with their flags, of no measurement yet (the store
+     * records them for one), as fitted: not corrected to the sample cell.
      */
-    public static List<NewResult> results(SpectrumResult result, AnalysisVersions versions) {
+    public static List<Result> results(SpectrumResult result, AnalysisVersions versions) {
         return ResultCorrection.none().results(result, versions, null, null, 1.0, null);
     }
 }

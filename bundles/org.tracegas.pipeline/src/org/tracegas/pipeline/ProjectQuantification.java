@@ -40,7 +40,7 @@ public final class ProjectQuantification {
     /** Whether the project holds results of a method version already (processing again would repeat them). */
     public boolean hasResults(String methodVersionId) {
         return store.results().results(actor, projectId).stream()
-                .anyMatch(r -> r.values().methodVersionId().equals(methodVersionId));
+                .anyMatch(r -> r.getProvenance().methodVersionId().equals(methodVersionId));
     }
 
     /**

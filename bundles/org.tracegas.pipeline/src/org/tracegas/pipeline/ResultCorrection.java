@@ -8,6 +8,10 @@ import java.util.Map;
 
 import org.tracegas.library.ReferenceConditions;
 import org.tracegas.method.StoredMethod;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
+import org.tracegas.model.Results;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.qa.basis.CellConditions;
 import org.tracegas.qa.basis.ConditionOrigin;
@@ -17,8 +21,6 @@ import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.CompoundResult;
 import org.tracegas.quantify.ReferenceSpectrum;
 import org.tracegas.quantify.SpectrumResult;
-import org.tracegas.store.NewResult;
-import org.tracegas.store.ResultConditions;
 
 /**
  * The results of one fitted spectrum as a workspace stores them, each corrected from its references' cell
@@ -140,9 +142,10 @@ public final class ResultCorrection {
      * @param noiseFactor F of the spectrum's transform
      * @param noiseOrigin where F came from
      */
-    List<NewResult> results(SpectrumResult result, AnalysisVersions versions, ConditionValue temperature,
+    List<Result> results(SpectrumResult result, AnalysisVersions versions, ConditionValue temperature,
             ConditionValue pressure, double noiseFactor, String noiseOrigin) {
-        List<NewResult> rows = new ArrayList<>(result.compounds().size());
+        Provenance provenance = versions.provenance(result.record());
+        List<Result> rows = new ArrayList<>(result.compounds().size());
         for (CompoundResult c : result.compounds()) {
             ConditionsCorrection correction = byCompound.get(c.compound());
             double factor = 1.0;
@@ -156,10 +159,8 @@ public final class ResultCorrection {
                         corrected.referenceTemperatureK(), corrected.referencePressureKPa(), corrected.fitPathM(),
                         factor, noiseFactor, noiseOrigin);
             }
-            rows.add(new NewResult(null, c.compound(), c.concentration() * factor, c.standardUncertainty() * factor,
-                    c.detectionLimit() * factor, "ppm", FlagMapping.toStored(c.flags()), versions.methodVersionId(),
-                    versions.libraryVersionId(), result.record().softwareVersion(), result.record().inputHash(),
-                    conditions));
+            rows.add(Results.of(null, c.compound(), c.concentration() * factor, c.standardUncertainty() * factor,
+                    c.detectionLimit() * factor, "ppm", FlagMapping.toStored(c.flags()), provenance, conditions));
         }
         return rows;
     }

@@ -17,14 +17,20 @@ import java.util.HexFormat;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
 import java.util.concurrent.CompletableFuture;
 import java.util.stream.Collectors;
 
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
+import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.junit.jupiter.api.Test;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.Measurement;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
 
 /** Blocks of processed spectra, each in one transaction, on each backend. */
@@ -61,7 +67,7 @@ abstract class BlockServiceContract {
         List<Measurement> measurements = f.store.projects().measurements(f.analyst, f.project.getId());
         assertEquals(stored.stream().map(StoredMeasurement::measurementId).toList(),
                 measurements.stream().map(Measurement::getId).toList());
-        List<ResultInfo> results = f.store.results().results(f.analyst, f.project.getId());
+        List<Result> results = f.store.results().results(f.analyst, f.project.getId());
         assertEquals(12, results.size());
         for (int i = 0; i < block.size(); i++) {
             ProcessedSpectrum in = block.get(i);
@@ -71,11 +77,18 @@ abstract class BlockServiceContract {
             StoredSpectrum spectrum = f.store.spectra().load(f.analyst, out.spectrumId());
             assertEquals(out.measurementId(), spectrum.measurementId());
             assertArrayEquals(in.absorbance().toArray(), spectrum.spectrum().toArray(), 0.0);
-            List<ResultInfo> own = results.stream().filter(r -> r.values().measurementId().equals(out.measurementId()))
-                    .sorted((a, b) -> out.resultIds().indexOf(a.id()) - out.resultIds().indexOf(b.id())).toList();
-            assertEquals(out.resultIds(), own.stream().map(ResultInfo::id).toList());
-            assertEquals(in.results().stream().map(r -> r.withMeasurement(out.measurementId())).toList(),
-                    own.stream().map(ResultInfo::values).toList());
+            List<Result> own = results.stream().filter(r -> r.getMeasurementId().equals(out.measurementId()))
+                    .sorted((a, b) -> out.resultIds().indexOf(a.getId()) - out.resultIds().indexOf(b.getId()))
+                    .toList();
+            assertEquals(out.resultIds(), own.stream().map(Result::getId).toList());
+            assertEquals(in.results().stream().map(BlockServiceContract::values).toList(),
+                    own.stream().map(BlockServiceContract::values).toList());
+            for (Result r : own) {
+                assertEquals(f.project.getId(), r.getProjectId());
+                assertEquals(f.analyst.userId(), r.getRecordedBy());
+            }
+            assertTrue(in.results().stream().allMatch(r -> r.getId() == null && r.getMeasurementId() == null),
+                    "the results given stay as they were: the store records copies");
 
             Map<String, String> audit = auditValues(out.measurementId());
             assertEquals(spectrum.sha256(), audit.get("spectrumSha256"));
@@ -192,7 +205,9 @@ abstract class BlockServiceContract {
         assertEquals("block[1] is null", e.getMessage());
 
         ProcessedSpectrum good = SampleBlocks.processed(0, 2, f.method.id(), f.library.id());
-        List<NewResult> namedMeasurement = List.of(good.results().get(0), good.results().get(1).withMeasurement("m-1"));
+        Result named = EcoreUtil.copy(good.results().get(1));
+        named.setMeasurementId("m-1");
+        List<Result> namedMeasurement = List.of(good.results().get(0), named);
         e = assertThrows(IllegalArgumentException.class, () -> new ProcessedSpectrum(good.kind(), good.time(),
                 good.cellTemperature(), good.cellPressure(), good.absorbance(), good.encoding(), namedMeasurement));
         assertTrue(e.getMessage().startsWith("results[1].measurementId must be null"), e.getMessage());
@@ -212,26 +227,33 @@ abstract class BlockServiceContract {
         assertEquals(before, f.count(COUNT_ROWS));
     }
 
+    /** What a result says, without what the store gives it when recording it. */
+    private static List<Object> values(Result r) {
+        return List.of(r.getCompound(), r.getConcentration(), r.getStandardUncertainty(), r.getDetectionLimit(),
+                r.getUnit(), Set.copyOf(r.getFlags()), r.getProvenance(), Optional.ofNullable(r.getConditions()));
+    }
+
     /** The formula documented on BlockService, written out independently of the store's code. */
-    private static String resultsSha256(List<ResultInfo> results) throws Exception {
+    private static String resultsSha256(List<Result> results) throws Exception {
         StringBuilder text = new StringBuilder();
-        for (ResultInfo r : results) {
-            NewResult v = r.values();
+        for (Result r : results) {
+            Provenance p = r.getProvenance();
             Map<String, Object> fields = new LinkedHashMap<>();
-            fields.put("id", r.id());
-            fields.put("project", r.projectId());
-            fields.put("measurement", v.measurementId());
-            fields.put("compound", v.compound());
-            fields.put("concentration", v.concentration());
-            fields.put("uncertainty", v.uncertainty());
-            fields.put("detectionLimit", v.detectionLimit());
-            fields.put("unit", v.unit());
-            fields.put("flags", v.flags().stream().sorted().map(ResultFlag::getName).collect(Collectors.joining(",")));
-            fields.put("methodVersion", v.methodVersionId());
-            fields.put("libraryVersion", v.libraryVersionId());
-            fields.put("softwareVersion", v.softwareVersion());
-            fields.put("inputHash", v.inputHash());
-            ResultConditions c = v.conditions();
+            fields.put("id", r.getId());
+            fields.put("project", r.getProjectId());
+            fields.put("measurement", r.getMeasurementId());
+            fields.put("compound", r.getCompound());
+            fields.put("concentration", r.getConcentration());
+            fields.put("uncertainty", r.getStandardUncertainty());
+            fields.put("detectionLimit", r.getDetectionLimit());
+            fields.put("unit", r.getUnit());
+            fields.put("flags", r.getFlags().stream().sorted().map(ResultFlag::getName)
+                    .collect(Collectors.joining(",")));
+            fields.put("methodVersion", p.methodVersionId());
+            fields.put("libraryVersion", p.libraryVersionId());
+            fields.put("softwareVersion", p.softwareVersion());
+            fields.put("inputHash", p.inputHash());
+            ResultConditions c = r.getConditions();
             if (c != null) {
                 fields.put("cellTemperature", c.cellTemperatureK());
                 fields.put("cellTemperatureOrigin", c.temperatureOrigin());

@@ -22,7 +22,10 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
+import org.tracegas.model.Results;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.spectrum.AxisUnit;
@@ -171,9 +174,10 @@ abstract class ImportServiceContract {
                 List.of(sample(1, Map.of()), sample(2, Map.of())));
         String one = file.measurementIds().get(0);
         String two = file.measurementIds().get(1);
-        NewResult co = new NewResult(null, "CO", 12.5, 0.8, 0.3, "ppm", Set.of(ResultFlag.HIGH_RESIDUAL),
-                f.method.id(), f.library.id(), "0.1.0",
-                "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855");
+        Result co = Results.of(null, "CO", 12.5, 0.8, 0.3, "ppm", Set.of(ResultFlag.HIGH_RESIDUAL),
+                new Provenance(f.method.id(), f.library.id(), "0.1.0",
+                        "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855"),
+                null);
         Spectrum a = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.5, 3),
                 new double[] { 0.1, 0.2, 0.3 }, Ordinate.ABSORBANCE);
         long before = f.count("SELECT COUNT(*) FROM analysis_result") + f.count("SELECT COUNT(*) FROM audit_record");
@@ -192,7 +196,7 @@ abstract class ImportServiceContract {
         assertEquals(Set.of(one, two), f.store.analyses().analysed(f.reader, f.project.getId(), f.method.id()));
         List<ResultRow> rows = f.store.analyses().rows(f.reader, f.project.getId());
         assertEquals(2, rows.size());
-        assertEquals(one, rows.get(0).result().values().measurementId(), "in measurement time order");
+        assertEquals(one, rows.get(0).result().getMeasurementId(), "in measurement time order");
         assertEquals("stack-02.jdx", rows.get(0).sourceFile());
         assertEquals(T0.plusSeconds(60), rows.get(0).measured());
         assertEquals(RawFile.sha256Hex(RECIPE.getBytes(StandardCharsets.UTF_8)), rows.get(0).recipeSha256());

@@ -18,6 +18,7 @@ import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.model.Client;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
+import org.tracegas.model.QaOutcomes;
 import org.tracegas.model.Role;
 
 /**
@@ -76,7 +77,7 @@ class LabServerRolesTest {
             VersionInfo method = store.versions().create(ana, VersionKind.METHOD, "m", "analyte=CO\n", "first");
             VersionInfo library = store.versions().create(ana, VersionKind.LIBRARY, "l", "sha=abc\n", "first");
             store.blocks().store(ana, p.getId(), SampleBlocks.block(0, 2, 2, method.id(), library.id()));
-            store.qa().recordAll(ana, p.getId(), method.id(), List.of(new NewQaCheck("Noise level", true, 0.001,
+            store.qa().recordAll(ana, p.getId(), method.id(), List.of(QaOutcomes.of("Noise level", true, 0.001,
                     "absorbance", Double.NEGATIVE_INFINITY, 0.002, "RMS <= 0.002", "common practice, no source")));
             store.projects().recordMeasurement(ana, p.getId(), MeasurementKind.BACKGROUND, SampleBlocks.START, 438.15,
                     1013.0);

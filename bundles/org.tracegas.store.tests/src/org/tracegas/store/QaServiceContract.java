@@ -1,6 +1,7 @@
 package org.tracegas.store;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -15,6 +16,8 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.model.Client;
 import org.tracegas.model.Project;
+import org.tracegas.model.QaOutcome;
+import org.tracegas.model.QaOutcomes;
 import org.tracegas.model.Role;
 
 /** Storing a campaign's QA checks, on each backend. */
@@ -50,15 +53,18 @@ abstract class QaServiceContract {
 
     @Test
     void checksComeBackAsStoredWithTheirAuditRecordsAndFreezeTheMethod() throws Exception {
-        List<NewQaCheck> checks = List.of(
-                new NewQaCheck("Spike recovery HCl", true, 102.3, "%", 70, 130, "70 .. 130 %", "EPA Method 320"),
-                new NewQaCheck("Noise level", false, 0.004, "absorbance", Double.NEGATIVE_INFINITY, 0.002,
+        List<QaOutcome> checks = List.of(
+                QaOutcomes.of("Spike recovery HCl", true, 102.3, "%", 70, 130, "70 .. 130 %", "EPA Method 320"),
+                QaOutcomes.of("Noise level", false, 0.004, "absorbance", Double.NEGATIVE_INFINITY, 0.002,
                         "RMS <= 0.002", "common practice, no source"));
         store.qa().recordAll(analyst, project.getId(), method.id(), checks);
 
-        List<QaCheckInfo> stored = store.qa().checks(analyst, project.getId());
-        assertEquals(checks, stored.stream().map(QaCheckInfo::outcome).toList());
-        assertTrue(stored.stream().allMatch(c -> c.methodVersionId().equals(method.id())));
+        List<QaOutcome> stored = store.qa().checks(analyst, project.getId());
+        assertEquals(checks.stream().map(QaServiceContract::values).toList(),
+                stored.stream().map(QaServiceContract::values).toList());
+        assertTrue(stored.stream().allMatch(c -> c.getMethodVersionId().equals(method.id())
+                && c.getProjectId().equals(project.getId()) && c.getRecordedBy().equals(analyst.userId())));
+        assertTrue(checks.stream().allMatch(c -> c.getId() == null), "the outcomes given stay as they were");
         assertTrue(store.versions().version(method.id()).frozen());
         try (Connection c = backend.raw(); Statement s = c.createStatement();
                 ResultSet rs = s.executeQuery("SELECT COUNT(*) FROM audit_record WHERE object_type = 'qa-check'")) {
@@ -69,9 +75,31 @@ abstract class QaServiceContract {
     }
 
     @Test
-    void aBlankRuleIsRefusedByName() {
-        IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
-                () -> new NewQaCheck("Zero CO", true, 0.01, "ppm", -0.1, 0.1, " ", "x"));
-        assertTrue(e.getMessage().startsWith("rule"), e.getMessage());
+    void anIncompleteOutcomeIsRefusedByNameAndNothingIsStored() throws Exception {
+        QaOutcome good = QaOutcomes.of("Zero CO", true, 0.01, "ppm", -0.1, 0.1, "within ±0.1 ppm", "x");
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> store.qa().recordAll(
+                analyst, project.getId(), method.id(),
+                List.of(good, QaOutcomes.of("Zero CO", true, 0.01, "ppm", -0.1, 0.1, " ", "x"))));
+        assertEquals("rule of a QA check must not be blank (checks[1])", e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> store.qa().recordAll(analyst, project.getId(),
+                method.id(), List.of(QaOutcomes.of("Zero CO", true, 0.01, null, -0.1, 0.1, "r", "x"))));
+        assertEquals("unit of a QA check must not be blank (checks[0])", e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> store.qa().recordAll(analyst, project.getId(),
+                method.id(), List.of(QaOutcomes.of("Zero CO", true, 0.01, "ppm", Double.NaN, 0.1, "r", "x"))));
+        assertEquals("limits of QA check Zero CO must be numbers (checks[0])", e.getMessage());
+
+        assertTrue(store.qa().checks(analyst, project.getId()).isEmpty());
+        assertFalse(store.versions().version(method.id()).frozen(), "a refused outcome froze nothing");
+        try (Connection c = backend.raw(); Statement s = c.createStatement();
+                ResultSet rs = s.executeQuery("SELECT COUNT(*) FROM audit_record WHERE object_type = 'qa-check'")) {
+            rs.next();
+            assertEquals(0, rs.getLong(1));
+        }
+    }
+
+    /** What an outcome says, without what the store gives it when recording it. */
+    private static List<Object> values(QaOutcome c) {
+        return List.of(c.getCheck(), c.isPassed(), c.getMeasured(), c.getUnit(), c.getLowerLimit(),
+                c.getUpperLimit(), c.getRule(), c.getSource());
     }
 }

@@ -24,7 +24,10 @@ import org.tracegas.audit.SignatureRefusedException;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.Client;
 import org.tracegas.model.Project;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
+import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 
 /** Signing reports by their content, on each backend. */
@@ -126,13 +129,14 @@ abstract class ReviewServiceContract {
     }
 
     /** A result the analyst recorded in the project. */
-    private ResultInfo recordResult() {
+    private Result recordResult() {
         VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "CO in flue gas", "analyte=CO\n",
                 "first");
         VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln gases", "sha=abc\n",
                 "first");
-        return store.results().record(analyst, project.getId(), new NewResult(null, "CO", 12.5, 0.8, 0.3, "ppm",
-                Set.of(ResultFlag.HIGH_RESIDUAL), method.id(), library.id(), "0.1.0", "ab".repeat(32)));
+        return store.results().record(analyst, project.getId(), Results.of(null, "CO", 12.5, 0.8, 0.3, "ppm",
+                Set.of(ResultFlag.HIGH_RESIDUAL), new Provenance(method.id(), library.id(), "0.1.0", "ab".repeat(32)),
+                null));
     }
 
     private long count(String sql, String arg) throws Exception {
@@ -147,44 +151,44 @@ abstract class ReviewServiceContract {
 
     @Test
     void aReviewerSignsAStoredResultOverItsValuesAndWhatMadeThem() throws Exception {
-        ResultInfo result = recordResult();
+        Result result = recordResult();
         char[] password = "rev-pw-1234".toCharArray();
-        Signature s = store.reviews().signResult(reviewer, new ResultSignatureRequest(result.id(), "rev", password,
+        Signature s = store.reviews().signResult(reviewer, new ResultSignatureRequest(result.getId(), "rev", password,
                 SignatureMeaning.REVIEWED, "fit residual checked"));
         assertArrayEquals(new char[password.length], password, "password cleared");
         // the signed text as ReviewService.signResult documents it, written out here
-        String expected = "result=" + result.id() + "\ncompound=CO\nconcentration=12.5\nuncertainty=0.8\n"
-                + "detection_limit=0.3\nunit=ppm\nmethod_version=" + result.values().methodVersionId()
-                + "\nlibrary_version=" + result.values().libraryVersionId() + "\ninput_sha256=" + "ab".repeat(32)
-                + "\nrecorded_by=" + analyst.userId() + "\nrecorded=" + result.recorded() + "\n";
+        String expected = "result=" + result.getId() + "\ncompound=CO\nconcentration=12.5\nuncertainty=0.8\n"
+                + "detection_limit=0.3\nunit=ppm\nmethod_version=" + result.getProvenance().methodVersionId()
+                + "\nlibrary_version=" + result.getProvenance().libraryVersionId() + "\ninput_sha256=" + "ab".repeat(32)
+                + "\nrecorded_by=" + analyst.userId() + "\nrecorded=" + result.getRecorded() + "\n";
         byte[] content = expected.getBytes(StandardCharsets.UTF_8);
         // SHA-256 per FIPS 180-4 via the platform's MessageDigest
         assertEquals(HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(content)), s.contentSha256());
         assertEquals("Dr. Rhea Viewer", s.printedName());
 
-        List<Signature> found = store.reviews().resultSignatures(analyst, result.id());
+        List<Signature> found = store.reviews().resultSignatures(analyst, result.getId());
         assertEquals(1, found.size());
         assertTrue(found.get(0).covers(content));
         assertEquals(SignatureMeaning.REVIEWED, found.get(0).meaning());
-        assertEquals(List.of(), store.reviews().signatures(analyst, project.getId(), result.id()),
+        assertEquals(List.of(), store.reviews().signatures(analyst, project.getId(), result.getId()),
                 "a result's signature is not a report's");
         assertEquals(1, count("SELECT COUNT(*) FROM audit_record WHERE action = 'SIGNATURE' AND object_type = 'result'"
-                + " AND object_id = ?", result.id()));
+                + " AND object_id = ?", result.getId()));
         assertTrue(store.verifyAuditTrail().intact());
     }
 
     @Test
     void approvingOnesOwnResultIsRefusedAndRecorded() throws Exception {
-        ResultInfo result = recordResult();
+        Result result = recordResult();
         SignatureRefusedException e = assertThrows(SignatureRefusedException.class, () -> store.reviews().signResult(
-                analyst, new ResultSignatureRequest(result.id(), "ana", "ana-pw-1234".toCharArray(),
+                analyst, new ResultSignatureRequest(result.getId(), "ana", "ana-pw-1234".toCharArray(),
                         SignatureMeaning.APPROVED, null)));
         assertEquals(SignatureRefusedException.Reason.OWN_WORK, e.reason());
-        assertEquals(List.of(), store.reviews().resultSignatures(reviewer, result.id()));
+        assertEquals(List.of(), store.reviews().resultSignatures(reviewer, result.getId()));
         assertEquals(1, count("SELECT COUNT(*) FROM audit_record WHERE action = 'REFUSED' AND object_type = 'result'"
-                + " AND object_id = ?", result.id()));
+                + " AND object_id = ?", result.getId()));
         SignatureRefusedException wrong = assertThrows(SignatureRefusedException.class, () -> store.reviews()
-                .signResult(reviewer, new ResultSignatureRequest(result.id(), "rev", "not-the-password".toCharArray(),
+                .signResult(reviewer, new ResultSignatureRequest(result.getId(), "rev", "not-the-password".toCharArray(),
                         SignatureMeaning.APPROVED, null)));
         assertEquals(SignatureRefusedException.Reason.WRONG_CREDENTIALS, wrong.reason());
         assertTrue(store.verifyAuditTrail().intact());
@@ -192,17 +196,17 @@ abstract class ReviewServiceContract {
 
     @Test
     void aResultOutsideTheSignersProjectsOrNotStoredCannotBeSignedOrRead() throws Exception {
-        ResultInfo result = recordResult();
+        Result result = recordResult();
         Session admin = store.users().logIn("admin", "admin-pw-12".toCharArray());
         store.users().createUser(admin, "out", "Outsider", Set.of(Role.REVIEWER), "out-pw-1234".toCharArray());
         Session outsider = store.users().logIn("out", "out-pw-1234".toCharArray());
         char[] password = "out-pw-1234".toCharArray();
         assertThrows(AccessDeniedException.class, () -> store.reviews().signResult(outsider,
-                new ResultSignatureRequest(result.id(), "out", password, SignatureMeaning.REVIEWED, null)));
+                new ResultSignatureRequest(result.getId(), "out", password, SignatureMeaning.REVIEWED, null)));
         assertArrayEquals(new char[password.length], password, "password cleared on a refused access too");
-        assertThrows(AccessDeniedException.class, () -> store.reviews().resultSignatures(outsider, result.id()));
+        assertThrows(AccessDeniedException.class, () -> store.reviews().resultSignatures(outsider, result.getId()));
         assertEquals(0, count("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result' AND object_id = ?"
-                + " AND action IN ('SIGNATURE', 'REFUSED')", result.id()));
+                + " AND action IN ('SIGNATURE', 'REFUSED')", result.getId()));
         NoSuchObjectException missing = assertThrows(NoSuchObjectException.class, () -> store.reviews().signResult(
                 reviewer, new ResultSignatureRequest("no-such-result", "rev", "rev-pw-1234".toCharArray(),
                         SignatureMeaning.REVIEWED, null)));

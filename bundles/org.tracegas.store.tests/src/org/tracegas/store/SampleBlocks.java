@@ -6,7 +6,11 @@ import java.util.List;
 import java.util.Set;
 
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
+import org.tracegas.model.Results;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
@@ -36,15 +40,15 @@ final class SampleBlocks {
         }
         Spectrum absorbance = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000.0, 0.5, values.length),
                 values, Ordinate.ABSORBANCE);
-        List<NewResult> rows = new ArrayList<>();
+        List<Result> rows = new ArrayList<>();
         ResultConditions conditions = index % 2 == 0 ? null
                 : new ResultConditions(438.15 + index, "instrument-channel", 101.3, "instrument-channel", 6.4,
                         "nominal", 423.15, 101.325, 6.4, (438.15 + index) / 423.15 * 101.325 / 101.3, 1.96,
                         "transform of the method: happ-genzel; zero filling 2; single-sided");
+        Provenance provenance = new Provenance(methodVersionId, libraryVersionId, "0.1.0", SHA256_OF_EMPTY);
         for (int j = 0; j < results; j++) {
-            rows.add(new NewResult(null, COMPOUNDS[j], index + j / 10.0, 0.5, 0.2, "ppm",
-                    j == 1 ? Set.of(ResultFlag.HIGH_RESIDUAL) : Set.of(), methodVersionId, libraryVersionId, "0.1.0",
-                    SHA256_OF_EMPTY, conditions));
+            rows.add(Results.of(null, COMPOUNDS[j], index + j / 10.0, 0.5, 0.2, "ppm",
+                    j == 1 ? Set.of(ResultFlag.HIGH_RESIDUAL) : Set.of(), provenance, conditions));
         }
         return new ProcessedSpectrum(MeasurementKind.SAMPLE, START.plusSeconds(60L * index), 438.15, 1013.0,
                 absorbance, SampleEncoding.FLOAT64_LE, rows);

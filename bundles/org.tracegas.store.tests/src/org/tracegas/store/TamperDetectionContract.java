@@ -25,6 +25,8 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.audit.ChainAnchor;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.QaOutcomes;
+import org.tracegas.model.Result;
 import org.tracegas.store.internal.DataVerifier;
 
 /**
@@ -90,14 +92,15 @@ abstract class TamperDetectionContract {
         store.spectra().store(fixture.analyst, fixture.project.getId(), new SpectrumInput(m,
                 org.tracegas.model.SpectralContent.ABSORBANCE, SampleBlocks.processed(0, 0, fixture.method.id(),
                         fixture.library.id()).absorbance(), SampleEncoding.FLOAT32_LE));
-        store.results().record(fixture.analyst, fixture.project.getId(), SampleBlocks.processed(0, 1,
-                fixture.method.id(), fixture.library.id()).results().get(0).withMeasurement(m));
+        Result result = SampleBlocks.processed(0, 1, fixture.method.id(), fixture.library.id()).results().get(0);
+        result.setMeasurementId(m);
+        store.results().record(fixture.analyst, fixture.project.getId(), result);
         store.blocks().store(fixture.analyst, fixture.project.getId(), SampleBlocks.block(1, 3, 3, fixture.method.id(),
                 fixture.library.id()));
         store.qa().recordAll(fixture.analyst, fixture.project.getId(), fixture.method.id(), List.of(
-                new NewQaCheck("Spike recovery SO2", true, 96.5, "%", 70, 130, "70 .. 130 %",
+                QaOutcomes.of("Spike recovery SO2", true, 96.5, "%", 70, 130, "70 .. 130 %",
                         "EPA Method 320, section 9.2"),
-                new NewQaCheck("Noise level", true, 0.0012, "absorbance", Double.NEGATIVE_INFINITY, 0.002,
+                QaOutcomes.of("Noise level", true, 0.0012, "absorbance", Double.NEGATIVE_INFINITY, 0.002,
                         "RMS <= 0.002", "common practice, no source")));
         // a second client and project, so that every table holds two rows to swap values between
         store.projects().createProject(fixture.analyst, store.projects().createClient(fixture.analyst,

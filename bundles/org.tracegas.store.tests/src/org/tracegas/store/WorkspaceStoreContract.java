@@ -32,7 +32,10 @@ import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
+import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.spectrum.AxisUnit;
@@ -184,7 +187,7 @@ abstract class WorkspaceStoreContract {
                 "compound=CO\nregion=2050-2200\nresidualLimit=0.01\n", "narrower region before first use");
         assertEquals(v1.rowVersion() + 1, draft.rowVersion());
 
-        ResultInfo result = store.results().record(analyst, project.getId(), result(v1.id(), library.id()));
+        Result result = store.results().record(analyst, project.getId(), result(v1.id(), library.id()));
         assertTrue(versions.version(v1.id()).frozen());
         assertTrue(versions.version(library.id()).frozen());
         long frozenRow = versions.version(v1.id()).rowVersion();
@@ -207,11 +210,11 @@ abstract class WorkspaceStoreContract {
         assertEquals("0.01", diff.removed().get("residualLimit"));
         assertEquals(Set.of("region"), diff.changed().keySet());
 
-        ResultInfo stored = store.results().results(analyst, project.getId()).get(0);
-        assertEquals(result.id(), stored.id());
-        assertEquals(v1.id(), stored.values().methodVersionId());
-        assertEquals(library.id(), stored.values().libraryVersionId());
-        assertEquals(Set.of(ResultFlag.HIGH_RESIDUAL), stored.values().flags());
+        Result stored = store.results().results(analyst, project.getId()).get(0);
+        assertEquals(result.getId(), stored.getId());
+        assertEquals(v1.id(), stored.getProvenance().methodVersionId());
+        assertEquals(library.id(), stored.getProvenance().libraryVersionId());
+        assertEquals(List.of(ResultFlag.HIGH_RESIDUAL), stored.getFlags());
     }
 
     @Test
@@ -434,8 +437,8 @@ abstract class WorkspaceStoreContract {
     void batchOfResultsIsRecordedWhollyOrNotAtAll() throws Exception {
         VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
         VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
-        NewResult good = result(method.id(), library.id());
-        NewResult wrongKind = result(library.id(), library.id()); // a library version given as method version
+        Result good = result(method.id(), library.id());
+        Result wrongKind = result(library.id(), library.id()); // a library version given as method version
 
         assertThrows(IllegalArgumentException.class,
                 () -> store.results().recordAll(analyst, project.getId(), List.of(good, wrongKind)));
@@ -443,10 +446,73 @@ abstract class WorkspaceStoreContract {
         assertFalse(store.versions().version(method.id()).frozen(), "the rolled-back batch froze nothing");
         assertEquals(List.of("0"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result'"));
 
-        List<ResultInfo> stored = store.results().recordAll(analyst, project.getId(), List.of(good, good));
+        List<Result> stored = store.results().recordAll(analyst, project.getId(), List.of(good, good));
         assertEquals(2, stored.size());
         assertEquals(List.of("2"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result'"));
         assertTrue(store.versions().version(method.id()).frozen());
+    }
+
+    @Test
+    void incompleteResultsAreRefusedWithTheFieldNamedAndNothingIsStored() throws Exception {
+        VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
+        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
+        Result blankCompound = result(method.id(), library.id());
+        blankCompound.setCompound(" ");
+        Result noUnit = result(method.id(), library.id());
+        noUnit.setUnit(null);
+        Result noProvenance = result(method.id(), library.id());
+        noProvenance.setProvenance(null);
+
+        assertEquals("compound must not be blank", assertThrows(IllegalArgumentException.class,
+                () -> store.results().record(analyst, project.getId(), blankCompound)).getMessage());
+        assertEquals("unit must not be blank", assertThrows(IllegalArgumentException.class,
+                () -> store.results().record(analyst, project.getId(), noUnit)).getMessage());
+        assertTrue(assertThrows(IllegalArgumentException.class,
+                () -> store.results().record(analyst, project.getId(), noProvenance)).getMessage()
+                .startsWith("provenance must not be null"));
+        assertEquals("results[1].compound must not be blank", assertThrows(IllegalArgumentException.class,
+                () -> store.results().recordAll(analyst, project.getId(),
+                        List.of(result(method.id(), library.id()), blankCompound))).getMessage());
+        // the provenance is one value, refused when it is made: a version, the software or the input hash missing
+        assertEquals("methodVersionId must not be blank", assertThrows(IllegalArgumentException.class,
+                () -> new Provenance("", library.id(), "0.1.0", "ab".repeat(32))).getMessage());
+        assertEquals("softwareVersion must not be blank", assertThrows(IllegalArgumentException.class,
+                () -> new Provenance(method.id(), library.id(), null, "ab".repeat(32))).getMessage());
+        assertEquals("inputHash must be 64 lower-case hex digits (SHA-256), was " + "AB".repeat(32),
+                assertThrows(IllegalArgumentException.class,
+                        () -> new Provenance(method.id(), library.id(), "0.1.0", "AB".repeat(32))).getMessage());
+
+        assertTrue(store.results().results(analyst, project.getId()).isEmpty());
+        assertEquals(List.of("0"), column("SELECT COUNT(*) FROM analysis_result"));
+        assertEquals(List.of("0"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result'"));
+        assertFalse(store.versions().version(method.id()).frozen(), "a refused result froze nothing");
+        assertFalse(store.versions().version(library.id()).frozen(), "a refused result froze nothing");
+    }
+
+    @Test
+    void recordingLeavesTheGivenResultAsItWasAndReadsBackEveryValue() {
+        VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
+        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
+        Result given = result(method.id(), library.id());
+
+        Result recorded = store.results().record(analyst, project.getId(), given);
+
+        assertNull(given.getId(), "the store records a copy");
+        assertNull(given.getRecordedBy());
+        Result read = store.results().results(analyst, project.getId()).get(0);
+        for (Result r : List.of(recorded, read)) {
+            assertEquals(project.getId(), r.getProjectId());
+            assertEquals(analyst.userId(), r.getRecordedBy());
+            assertEquals("CO", r.getCompound());
+            assertEquals(12.5, r.getConcentration());
+            assertEquals(0.8, r.getStandardUncertainty());
+            assertEquals(0.3, r.getDetectionLimit());
+            assertEquals("ppm", r.getUnit());
+            assertEquals(given.getProvenance(), r.getProvenance());
+            assertNull(r.getConditions());
+        }
+        assertEquals(recorded.getId(), read.getId());
+        assertEquals(recorded.getRecorded(), read.getRecorded());
     }
 
     @Test
@@ -458,9 +524,11 @@ abstract class WorkspaceStoreContract {
         assertEquals(7, report.recordsChecked());
     }
 
-    private static NewResult result(String methodVersionId, String libraryVersionId) {
-        return new NewResult(null, "CO", 12.5, 0.8, 0.3, "ppm", Set.of(ResultFlag.HIGH_RESIDUAL), methodVersionId,
-                libraryVersionId, "0.1.0", "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855");
+    private static Result result(String methodVersionId, String libraryVersionId) {
+        return Results.of(null, "CO", 12.5, 0.8, 0.3, "ppm", Set.of(ResultFlag.HIGH_RESIDUAL),
+                new Provenance(methodVersionId, libraryVersionId, "0.1.0",
+                        "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855"),
+                null);
     }
 
     private static long[] rawBits(double[] values) {

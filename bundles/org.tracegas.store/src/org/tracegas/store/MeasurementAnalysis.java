@@ -2,6 +2,7 @@ package org.tracegas.store;
 
 import java.util.List;
 
+import org.tracegas.model.Result;
 import org.tracegas.spectrum.Spectrum;
 
 /**
@@ -12,10 +13,11 @@ import org.tracegas.spectrum.Spectrum;
  * @param recipe        canonical text of the processing recipe that ran, not blank
  * @param absorbance    the absorbance fitted, stored as {@link org.tracegas.model.SpectralContent#ABSORBANCE}
  * @param encoding      how its values are stored
- * @param results       the results, at least one, each naming this measurement or none
+ * @param results       the results, at least one, each naming this measurement or none; the store records
+ *                      them for this measurement
  */
 public record MeasurementAnalysis(String measurementId, String recipe, Spectrum absorbance, SampleEncoding encoding,
-        List<NewResult> results) {
+        List<Result> results) {
 
     /** @throws IllegalArgumentException naming the field (and result index) that is missing or wrong */
     public MeasurementAnalysis {
@@ -33,15 +35,13 @@ public record MeasurementAnalysis(String measurementId, String recipe, Spectrum 
             throw new IllegalArgumentException("results of measurement " + measurementId + " must not be empty");
         }
         for (int i = 0; i < results.size(); i++) {
-            NewResult r = results.get(i);
-            if (r == null) {
-                throw new IllegalArgumentException("results[" + i + "] of measurement " + measurementId + " is null");
-            }
-            if (r.measurementId() != null && !r.measurementId().equals(measurementId)) {
-                throw new IllegalArgumentException("results[" + i + "].measurementId is " + r.measurementId()
+            Result r = results.get(i);
+            ResultChecks.requireComplete(r, "results[" + i + "].");
+            if (r.getMeasurementId() != null && !r.getMeasurementId().equals(measurementId)) {
+                throw new IllegalArgumentException("results[" + i + "].measurementId is " + r.getMeasurementId()
                         + ", not the measurement analysed, " + measurementId);
             }
         }
-        results = results.stream().map(r -> r.withMeasurement(measurementId)).toList();
+        results = List.copyOf(results);
     }
 }

@@ -4,6 +4,7 @@ import java.time.Instant;
 import java.util.List;
 
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Result;
 import org.tracegas.spectrum.Spectrum;
 
 /**
@@ -16,10 +17,10 @@ import org.tracegas.spectrum.Spectrum;
  * @param cellPressure    hPa, positive
  * @param absorbance      the absorbance spectrum, stored as {@link org.tracegas.model.SpectralContent#ABSORBANCE}
  * @param encoding        how its values are stored
- * @param results         its results, each with a null {@link NewResult#measurementId()}; may be empty
+ * @param results         its results, each with a null {@link Result#getMeasurementId()}; may be empty
  */
 public record ProcessedSpectrum(MeasurementKind kind, Instant time, double cellTemperature, double cellPressure,
-        Spectrum absorbance, SampleEncoding encoding, List<NewResult> results) {
+        Spectrum absorbance, SampleEncoding encoding, List<Result> results) {
 
     /** @throws IllegalArgumentException naming the field (and result index) that is missing or wrong */
     public ProcessedSpectrum {
@@ -34,13 +35,11 @@ public record ProcessedSpectrum(MeasurementKind kind, Instant time, double cellT
             throw new IllegalArgumentException("results must not be null (an empty list when nothing was fitted)");
         }
         for (int i = 0; i < results.size(); i++) {
-            NewResult r = results.get(i);
-            if (r == null) {
-                throw new IllegalArgumentException("results[" + i + "] is null");
-            }
-            if (r.measurementId() != null) {
+            Result r = results.get(i);
+            ResultChecks.requireComplete(r, "results[" + i + "].");
+            if (r.getMeasurementId() != null) {
                 throw new IllegalArgumentException("results[" + i + "].measurementId must be null: the store assigns"
-                        + " the measurement of a processed spectrum, was " + r.measurementId());
+                        + " the measurement of a processed spectrum, was " + r.getMeasurementId());
             }
         }
         results = List.copyOf(results);

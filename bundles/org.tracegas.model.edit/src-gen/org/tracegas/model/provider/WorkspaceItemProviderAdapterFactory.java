@@ -256,6 +256,52 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.Result} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected ResultItemProvider resultItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.Result}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createResultAdapter() {
+		if (resultItemProvider == null) {
+			resultItemProvider = new ResultItemProvider(this);
+		}
+
+		return resultItemProvider;
+	}
+
+	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.QaOutcome} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected QaOutcomeItemProvider qaOutcomeItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.QaOutcome}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createQaOutcomeAdapter() {
+		if (qaOutcomeItemProvider == null) {
+			qaOutcomeItemProvider = new QaOutcomeItemProvider(this);
+		}
+
+		return qaOutcomeItemProvider;
+	}
+
+	/**
 	 * This returns the root adapter factory that contains this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -368,6 +414,8 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 		if (analysisMethodItemProvider != null) analysisMethodItemProvider.dispose();
 		if (methodVersionItemProvider != null) methodVersionItemProvider.dispose();
 		if (analysisRegionItemProvider != null) analysisRegionItemProvider.dispose();
+		if (resultItemProvider != null) resultItemProvider.dispose();
+		if (qaOutcomeItemProvider != null) qaOutcomeItemProvider.dispose();
 	}
 
 }

@@ -67,6 +67,8 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 			case WorkspacePackage.ANALYSIS_METHOD: return createAnalysisMethod();
 			case WorkspacePackage.METHOD_VERSION: return createMethodVersion();
 			case WorkspacePackage.ANALYSIS_REGION: return createAnalysisRegion();
+			case WorkspacePackage.RESULT: return createResult();
+			case WorkspacePackage.QA_OUTCOME: return createQaOutcome();
 			default:
 				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier");
 		}
@@ -208,6 +210,28 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	public AnalysisRegion createAnalysisRegion() {
 		AnalysisRegionImpl analysisRegion = new AnalysisRegionImpl();
 		return analysisRegion;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Result createResult() {
+		ResultImpl result = new ResultImpl();
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public QaOutcome createQaOutcome() {
+		QaOutcomeImpl qaOutcome = new QaOutcomeImpl();
+		return qaOutcome;
 	}
 
 	/**

@@ -22,7 +22,11 @@ import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.QaOutcome;
 import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
@@ -115,6 +119,20 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	private EClass resultEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass qaOutcomeEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	private EEnum accessLevelEEnum = null;
 
 	/**
@@ -158,6 +176,20 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EDataType spectrumEDataType = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EDataType provenanceEDataType = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EDataType resultConditionsEDataType = null;
 
 	/**
 	 * Creates an instance of the model <b>Package</b>, registered with
@@ -905,6 +937,266 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EClass getResult() {
+		return resultEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_ProjectId() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_MeasurementId() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Compound() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Concentration() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_StandardUncertainty() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_DetectionLimit() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Unit() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Flags() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Provenance() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Conditions() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(9);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_RecordedBy() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(10);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getResult_Recorded() {
+		return (EAttribute)resultEClass.getEStructuralFeatures().get(11);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getQaOutcome() {
+		return qaOutcomeEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_ProjectId() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_MethodVersionId() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Check() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Passed() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Measured() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Unit() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_LowerLimit() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_UpperLimit() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Rule() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Source() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(9);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_RecordedBy() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(10);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getQaOutcome_Recorded() {
+		return (EAttribute)qaOutcomeEClass.getEStructuralFeatures().get(11);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getAccessLevel() {
 		return accessLevelEEnum;
 	}
@@ -967,6 +1259,26 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	@Override
 	public EDataType getSpectrum() {
 		return spectrumEDataType;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EDataType getProvenance() {
+		return provenanceEDataType;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EDataType getResultConditions() {
+		return resultConditionsEDataType;
 	}
 
 	/**
@@ -1076,6 +1388,34 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__BASELINE_ORDER);
 		createEAttribute(analysisRegionEClass, ANALYSIS_REGION__OPENED_AS);
 
+		resultEClass = createEClass(RESULT);
+		createEAttribute(resultEClass, RESULT__PROJECT_ID);
+		createEAttribute(resultEClass, RESULT__MEASUREMENT_ID);
+		createEAttribute(resultEClass, RESULT__COMPOUND);
+		createEAttribute(resultEClass, RESULT__CONCENTRATION);
+		createEAttribute(resultEClass, RESULT__STANDARD_UNCERTAINTY);
+		createEAttribute(resultEClass, RESULT__DETECTION_LIMIT);
+		createEAttribute(resultEClass, RESULT__UNIT);
+		createEAttribute(resultEClass, RESULT__FLAGS);
+		createEAttribute(resultEClass, RESULT__PROVENANCE);
+		createEAttribute(resultEClass, RESULT__CONDITIONS);
+		createEAttribute(resultEClass, RESULT__RECORDED_BY);
+		createEAttribute(resultEClass, RESULT__RECORDED);
+
+		qaOutcomeEClass = createEClass(QA_OUTCOME);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__PROJECT_ID);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__METHOD_VERSION_ID);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__CHECK);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__PASSED);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__MEASURED);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__UNIT);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__LOWER_LIMIT);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__UPPER_LIMIT);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__RULE);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__SOURCE);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__RECORDED_BY);
+		createEAttribute(qaOutcomeEClass, QA_OUTCOME__RECORDED);
+
 		// Create enums
 		accessLevelEEnum = createEEnum(ACCESS_LEVEL);
 		measurementKindEEnum = createEEnum(MEASUREMENT_KIND);
@@ -1086,6 +1426,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		// Create data types
 		instantEDataType = createEDataType(INSTANT);
 		spectrumEDataType = createEDataType(SPECTRUM);
+		provenanceEDataType = createEDataType(PROVENANCE);
+		resultConditionsEDataType = createEDataType(RESULT_CONDITIONS);
 	}
 
 	/**
@@ -1123,6 +1465,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		referenceLibraryEClass.getESuperTypes().add(this.getStoredObject());
 		analysisMethodEClass.getESuperTypes().add(this.getStoredObject());
 		methodVersionEClass.getESuperTypes().add(this.getContentVersion());
+		resultEClass.getESuperTypes().add(this.getStoredObject());
+		qaOutcomeEClass.getESuperTypes().add(this.getStoredObject());
 
 		// Initialize classes, features, and operations; add parameters
 		initEClass(storedObjectEClass, StoredObject.class, "StoredObject", IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
@@ -1203,6 +1547,34 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getAnalysisRegion_BaselineOrder(), ecorePackage.getEInt(), "baselineOrder", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getAnalysisRegion_OpenedAs(), ecorePackage.getEInt(), "openedAs", null, 0, 1, AnalysisRegion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
+		initEClass(resultEClass, Result.class, "Result", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getResult_ProjectId(), ecorePackage.getEString(), "projectId", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_MeasurementId(), ecorePackage.getEString(), "measurementId", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Compound(), ecorePackage.getEString(), "compound", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Concentration(), ecorePackage.getEDouble(), "concentration", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_StandardUncertainty(), ecorePackage.getEDouble(), "standardUncertainty", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_DetectionLimit(), ecorePackage.getEDouble(), "detectionLimit", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Unit(), ecorePackage.getEString(), "unit", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Flags(), this.getResultFlag(), "flags", null, 0, -1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Provenance(), this.getProvenance(), "provenance", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Conditions(), this.getResultConditions(), "conditions", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_RecordedBy(), ecorePackage.getEString(), "recordedBy", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getResult_Recorded(), this.getInstant(), "recorded", null, 0, 1, Result.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(qaOutcomeEClass, QaOutcome.class, "QaOutcome", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getQaOutcome_ProjectId(), ecorePackage.getEString(), "projectId", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_MethodVersionId(), ecorePackage.getEString(), "methodVersionId", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Check(), ecorePackage.getEString(), "check", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Passed(), ecorePackage.getEBoolean(), "passed", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Measured(), ecorePackage.getEDouble(), "measured", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Unit(), ecorePackage.getEString(), "unit", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_LowerLimit(), ecorePackage.getEDouble(), "lowerLimit", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_UpperLimit(), ecorePackage.getEDouble(), "upperLimit", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Rule(), ecorePackage.getEString(), "rule", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Source(), ecorePackage.getEString(), "source", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_RecordedBy(), ecorePackage.getEString(), "recordedBy", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getQaOutcome_Recorded(), this.getInstant(), "recorded", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
 		// Initialize enums and add enum literals
 		initEEnum(accessLevelEEnum, AccessLevel.class, "AccessLevel");
 		addEEnumLiteral(accessLevelEEnum, AccessLevel.READ);
@@ -1243,6 +1615,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		// Initialize data types
 		initEDataType(instantEDataType, Instant.class, "Instant", IS_SERIALIZABLE, !IS_GENERATED_INSTANCE_CLASS);
 		initEDataType(spectrumEDataType, Spectrum.class, "Spectrum", !IS_SERIALIZABLE, !IS_GENERATED_INSTANCE_CLASS);
+		initEDataType(provenanceEDataType, Provenance.class, "Provenance", !IS_SERIALIZABLE, !IS_GENERATED_INSTANCE_CLASS);
+		initEDataType(resultConditionsEDataType, ResultConditions.class, "ResultConditions", !IS_SERIALIZABLE, !IS_GENERATED_INSTANCE_CLASS);
 
 		// Create resource
 		createResource(eNS_URI);

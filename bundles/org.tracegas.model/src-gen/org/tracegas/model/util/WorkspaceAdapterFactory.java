@@ -108,6 +108,14 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 				return createAnalysisRegionAdapter();
 			}
 			@Override
+			public Adapter caseResult(Result object) {
+				return createResultAdapter();
+			}
+			@Override
+			public Adapter caseQaOutcome(QaOutcome object) {
+				return createQaOutcomeAdapter();
+			}
+			@Override
 			public Adapter defaultCase(EObject object) {
 				return createEObjectAdapter();
 			}
@@ -264,6 +272,34 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createAnalysisRegionAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Result <em>Result</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.Result
+	 * @generated
+	 */
+	public Adapter createResultAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.QaOutcome <em>Qa Outcome</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.QaOutcome
+	 * @generated
+	 */
+	public Adapter createQaOutcomeAdapter() {
 		return null;
 	}
 

@@ -25,6 +25,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.spectrum.AxisUnit;
@@ -33,7 +35,6 @@ import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.BatchProgress;
 import org.tracegas.store.FailedUnit;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
@@ -85,8 +86,8 @@ class WorkUnitWorkerTest {
             block.add(new ProcessedSpectrum(MeasurementKind.SAMPLE, Instant.EPOCH.plusSeconds(60L * minute), 438.15,
                     1013.0, new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 1, 4),
                             new double[] {minute, 0, 0, minute}, Ordinate.ABSORBANCE), SampleEncoding.FLOAT32_LE,
-                    List.of(new NewResult(null, "CO", minute, 0.5, 0.2, "ppm", Set.of(), methodId, libraryId,
-                            "0.1.0", SHA256_OF_EMPTY))));
+                    List.of(Results.of(null, "CO", minute, 0.5, 0.2, "ppm", Set.of(),
+                            new Provenance(methodId, libraryId, "0.1.0", SHA256_OF_EMPTY), null))));
         }
         return block;
     }

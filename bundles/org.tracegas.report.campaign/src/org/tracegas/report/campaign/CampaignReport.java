@@ -109,11 +109,11 @@ public final class CampaignReport {
      */
     public List<String> authors(String methodVersionId) {
         Set<String> authors = new LinkedHashSet<>();
-        store.qa().checks(actor, projectId).stream().filter(c -> c.methodVersionId().equals(methodVersionId))
-                .forEach(c -> authors.add(c.recordedBy()));
+        store.qa().checks(actor, projectId).stream().filter(c -> c.getMethodVersionId().equals(methodVersionId))
+                .forEach(c -> authors.add(c.getRecordedBy()));
         store.results().results(actor, projectId).stream()
-                .filter(r -> r.values().methodVersionId().equals(methodVersionId))
-                .forEach(r -> authors.add(r.recordedBy()));
+                .filter(r -> r.getProvenance().methodVersionId().equals(methodVersionId))
+                .forEach(r -> authors.add(r.getRecordedBy()));
         return List.copyOf(authors);
     }
 

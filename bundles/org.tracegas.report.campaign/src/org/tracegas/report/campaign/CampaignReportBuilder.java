@@ -14,6 +14,7 @@ import java.util.OptionalDouble;
 import java.util.Set;
 import java.util.function.Function;
 
+import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.qa.basis.Averaging;
 import org.tracegas.qa.basis.ConditionsCorrection;
@@ -43,7 +44,6 @@ import org.tracegas.report.ResultRow;
 import org.tracegas.report.Series;
 import org.tracegas.report.SpectrumFit;
 import org.tracegas.report.UncertaintyTable;
-import org.tracegas.store.ResultConditions;
 
 /**
  * Assembles the report of a campaign from stored results: each compound converted to the reporting basis

@@ -2,15 +2,18 @@ package org.tracegas.report.campaign;
 
 import java.time.Instant;
 import java.util.ArrayList;
+import java.util.Collections;
+import java.util.EnumSet;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import java.util.TreeMap;
 
 import org.tracegas.model.Measurement;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
-import org.tracegas.store.ResultConditions;
-import org.tracegas.store.ResultInfo;
 
 /**
  * The stored results of a project's samples as time series, one per compound, read back from the workspace:
@@ -24,7 +27,7 @@ public final class MinuteSeries {
      * @param conditions what the result was corrected with, null when it was not corrected
      */
     public record Point(Instant time, double ppm, double uncertainty, double detectionLimit,
-            java.util.Set<ResultFlag> flags, ResultConditions conditions) {
+            Set<ResultFlag> flags, ResultConditions conditions) {
     }
 
     private final Map<String, List<Point>> byCompound;
@@ -38,7 +41,7 @@ public final class MinuteSeries {
     }
 
     /** The results made by one method version, in time order. */
-    public static MinuteSeries of(List<Measurement> measurements, List<ResultInfo> results,
+    public static MinuteSeries of(List<Measurement> measurements, List<Result> results,
             String methodVersionId) {
         Map<String, Instant> times = new HashMap<>();
         for (Measurement m : measurements) {
@@ -46,23 +49,27 @@ public final class MinuteSeries {
         }
         Map<String, TreeMap<Instant, Point>> sorted = new TreeMap<>();
         String library = null;
-        for (ResultInfo r : results) {
-            if (!r.values().methodVersionId().equals(methodVersionId)) {
+        for (Result r : results) {
+            if (!r.getProvenance().methodVersionId().equals(methodVersionId)) {
                 continue;
             }
-            library = r.values().libraryVersionId();
-            Instant t = times.get(r.values().measurementId());
+            library = r.getProvenance().libraryVersionId();
+            Instant t = times.get(r.getMeasurementId());
             if (t == null) {
-                throw new IllegalStateException("result " + r.id() + " names unknown measurement "
-                        + r.values().measurementId());
+                throw new IllegalStateException("result " + r.getId() + " names unknown measurement "
+                        + r.getMeasurementId());
             }
-            sorted.computeIfAbsent(r.values().compound(), c -> new TreeMap<>()).put(t, new Point(t,
-                    r.values().concentration(), r.values().uncertainty(), r.values().detectionLimit(),
-                    r.values().flags(), r.values().conditions()));
+            sorted.computeIfAbsent(r.getCompound(), c -> new TreeMap<>()).put(t, new Point(t, r.getConcentration(),
+                    r.getStandardUncertainty(), r.getDetectionLimit(), flags(r), r.getConditions()));
         }
         Map<String, List<Point>> lists = new TreeMap<>();
         sorted.forEach((c, m) -> lists.put(c, new ArrayList<>(m.values())));
         return new MinuteSeries(lists, methodVersionId, library);
+    }
+
+    /** The result's flags as the point keeps them: a copy, so that the series stays as it was read. */
+    private static Set<ResultFlag> flags(Result r) {
+        return r.getFlags().isEmpty() ? Set.of() : Collections.unmodifiableSet(EnumSet.copyOf(r.getFlags()));
     }
 
     public boolean isEmpty() {

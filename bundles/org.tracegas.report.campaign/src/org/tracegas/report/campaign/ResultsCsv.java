@@ -8,8 +8,9 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Function;
 
-import org.tracegas.store.NewResult;
-import org.tracegas.store.ResultConditions;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
 import org.tracegas.store.ResultRow;
 import org.tracegas.store.VersionInfo;
 
@@ -45,17 +46,18 @@ public final class ResultsCsv {
         Map<String, VersionInfo> known = new HashMap<>();
         line(out, HEADER);
         for (ResultRow row : rows) {
-            NewResult r = row.result().values();
-            VersionInfo method = known.computeIfAbsent(r.methodVersionId(), versions);
-            VersionInfo library = known.computeIfAbsent(r.libraryVersionId(), versions);
-            List<String> fields = new ArrayList<>(List.of(text(r.measurementId()),
-                    row.measured() == null ? "" : row.measured().toString(), text(row.sourceFile()), r.compound(),
-                    Double.toString(r.concentration()), Double.toString(r.uncertainty()),
-                    Double.toString(r.detectionLimit()), r.unit(),
-                    String.join(" ", r.flags().stream().map(f -> f.getName()).sorted().toList()), method.name(),
+            Result r = row.result();
+            Provenance p = r.getProvenance();
+            VersionInfo method = known.computeIfAbsent(p.methodVersionId(), versions);
+            VersionInfo library = known.computeIfAbsent(p.libraryVersionId(), versions);
+            List<String> fields = new ArrayList<>(List.of(text(r.getMeasurementId()),
+                    row.measured() == null ? "" : row.measured().toString(), text(row.sourceFile()), r.getCompound(),
+                    Double.toString(r.getConcentration()), Double.toString(r.getStandardUncertainty()),
+                    Double.toString(r.getDetectionLimit()), r.getUnit(),
+                    String.join(" ", r.getFlags().stream().map(f -> f.getName()).sorted().toList()), method.name(),
                     Integer.toString(method.number()), library.name(), Integer.toString(library.number()),
-                    r.inputHash(), text(row.recipeSha256())));
-            fields.addAll(conditions(r.conditions()));
+                    p.inputHash(), text(row.recipeSha256())));
+            fields.addAll(conditions(r.getConditions()));
             line(out, fields);
         }
         return rows.size();

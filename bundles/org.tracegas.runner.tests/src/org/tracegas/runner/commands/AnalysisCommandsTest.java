@@ -407,8 +407,8 @@ class AnalysisCommandsTest {
     /** The mean of the stored CTS path length checks of a project. */
     private static double ctsCheckPath(WorkspaceStore store, Session s, String code) {
         String project = store.projects().findByCode(s, code).orElseThrow().getId();
-        return store.qa().checks(s, project).stream().filter(c -> c.outcome().check().equals("CTS path length"))
-                .mapToDouble(c -> c.outcome().measured()).average().orElseThrow();
+        return store.qa().checks(s, project).stream().filter(c -> c.getCheck().equals("CTS path length"))
+                .mapToDouble(c -> c.getMeasured()).average().orElseThrow();
     }
 
     private static List<MinuteSeries.Point> co(WorkspaceStore store, Session s, String code, String method) {
@@ -467,8 +467,8 @@ class AnalysisCommandsTest {
         try (WorkspaceStore store = open()) {
             String project = store.projects().findByCode(ana(store), "P-4").orElseThrow().getId();
             String rule = store.qa().checks(ana(store), project).stream()
-                    .filter(c -> c.outcome().check().equals("Control chart: CTS path length")).findFirst()
-                    .orElseThrow().outcome().rule();
+                    .filter(c -> c.getCheck().equals("Control chart: CTS path length")).findFirst()
+                    .orElseThrow().getRule();
             assertTrue(rule.contains("the latest 2 readings of earlier campaigns"), rule);
         }
         Path report = folder.resolve("report-P-4");
@@ -589,21 +589,21 @@ class AnalysisCommandsTest {
             Map<String, Instant> times = new java.util.HashMap<>();
             store.projects().measurements(s, stack).forEach(m -> times.put(m.getId(), m.getTime()));
             for (var r : store.results().results(s, stack)) {
-                if (r.values().compound().equals("CO")) {
-                    byStackPath.put(times.get(r.values().measurementId()), r.values().concentration());
+                if (r.getCompound().equals("CO")) {
+                    byStackPath.put(times.get(r.getMeasurementId()), r.getConcentration());
                 }
             }
             String imported = store.projects().findByCode(s, "P-6").orElseThrow().getId();
             int compared = 0;
             for (var row : store.analyses().rows(s, imported)) {
                 Double stackValue = byStackPath.get(row.measured());
-                if (stackValue == null || !row.result().values().compound().equals("CO")) {
+                if (stackValue == null || !row.result().getCompound().equals("CO")) {
                     continue; // the QA records of the file were quantified as samples too
                 }
                 int i = (int) java.time.Duration.between(T0, row.measured()).toSeconds() / 60;
-                assertEquals(stackValue, row.result().values().concentration(), 1e-6 * stackValue,
+                assertEquals(stackValue, row.result().getConcentration(), 1e-6 * stackValue,
                         "sample " + i + ": the same chain");
-                assertEquals(CO_PPM[i], row.result().values().concentration(), 0.04 * CO_PPM[i], "sample " + i);
+                assertEquals(CO_PPM[i], row.result().getConcentration(), 0.04 * CO_PPM[i], "sample " + i);
                 assertTrue(store.analyses().recipe(s, row.recipeSha256()).contains("transform settings="),
                         "the recipe names the transform");
                 compared++;
@@ -747,7 +747,7 @@ class AnalysisCommandsTest {
         try (WorkspaceStore store = open()) {
             String project = store.projects().findByCode(ana(store), "P-3").orElseThrow().getId();
             long versions = store.results().results(ana(store), project).stream()
-                    .map(r -> r.values().methodVersionId()).distinct().count();
+                    .map(r -> r.getProvenance().methodVersionId()).distinct().count();
             assertEquals(2, versions, "results of both versions, each once");
         }
     }

@@ -18,10 +18,9 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
 import org.tracegas.model.Measurement;
+import org.tracegas.model.Result;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.ExitCode;
-import org.tracegas.store.NewResult;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
@@ -73,19 +72,19 @@ class BatchCommandsTest {
 
         try (WorkspaceStore store = Workspaces.openH2(ws.resolve("db"))) {
             Session ana = store.users().logIn("ana", BatchCampaign.PASSWORD.toCharArray());
-            Map<String, NewResult> quantified = resultsByTimeAndCompound(store, ana, "Q");
-            Map<String, NewResult> batched = resultsByTimeAndCompound(store, ana, "B");
+            Map<String, Result> quantified = resultsByTimeAndCompound(store, ana, "Q");
+            Map<String, Result> batched = resultsByTimeAndCompound(store, ana, "B");
             assertEquals(FILES * SAMPLES_PER_FILE * COMPOUNDS, quantified.size());
             assertEquals(quantified.keySet(), batched.keySet());
             // the same chain and fit on the same input: the same numbers, bit for bit, and the same input hashes
             quantified.forEach((key, q) -> {
-                NewResult b = batched.get(key);
-                assertEquals(q.concentration(), b.concentration(), 0.0, key);
-                assertEquals(q.uncertainty(), b.uncertainty(), 0.0, key);
-                assertEquals(q.flags(), b.flags(), key);
-                assertEquals(q.inputHash(), b.inputHash(), key);
-                assertEquals(q.methodVersionId(), b.methodVersionId(), key);
-                assertEquals(q.libraryVersionId(), b.libraryVersionId(), key);
+                Result b = batched.get(key);
+                assertEquals(q.getConcentration(), b.getConcentration(), 0.0, key);
+                assertEquals(q.getStandardUncertainty(), b.getStandardUncertainty(), 0.0, key);
+                assertEquals(q.getFlags(), b.getFlags(), key);
+                assertEquals(q.getProvenance().inputHash(), b.getProvenance().inputHash(), key);
+                assertEquals(q.getProvenance().methodVersionId(), b.getProvenance().methodVersionId(), key);
+                assertEquals(q.getProvenance().libraryVersionId(), b.getProvenance().libraryVersionId(), key);
             });
             for (int unit = 0; unit < FILES; unit++) {
                 List<Instant> times = store.workUnits().measurementsOf(ana, batchId, unit).stream()
@@ -250,15 +249,15 @@ class BatchCommandsTest {
     }
 
     /** The project's results keyed by measurement time and compound; fails on a key seen twice. */
-    private static Map<String, NewResult> resultsByTimeAndCompound(WorkspaceStore store, Session actor,
+    private static Map<String, Result> resultsByTimeAndCompound(WorkspaceStore store, Session actor,
             String project) {
         String projectId = store.projects().findByCode(actor, project).orElseThrow().getId();
         Map<String, Instant> times = store.projects().measurements(actor, projectId).stream()
                 .collect(Collectors.toMap(Measurement::getId, Measurement::getTime));
-        Map<String, NewResult> byKey = new TreeMap<>();
-        for (ResultInfo r : store.results().results(actor, projectId)) {
-            String key = times.get(r.values().measurementId()) + " " + r.values().compound();
-            assertEquals(null, byKey.put(key, r.values()), "one result per measurement time and compound: " + key);
+        Map<String, Result> byKey = new TreeMap<>();
+        for (Result r : store.results().results(actor, projectId)) {
+            String key = times.get(r.getMeasurementId()) + " " + r.getCompound();
+            assertEquals(null, byKey.put(key, r), "one result per measurement time and compound: " + key);
         }
         return byKey;
     }

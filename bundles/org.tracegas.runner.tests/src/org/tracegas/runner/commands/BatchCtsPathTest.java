@@ -17,13 +17,12 @@ import java.util.stream.Collectors;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
-import org.tracegas.pipeline.MeasurementRole;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
-import org.tracegas.runner.ExitCode;
 import org.tracegas.model.Measurement;
-import org.tracegas.store.NewResult;
-import org.tracegas.store.ResultInfo;
+import org.tracegas.model.Result;
+import org.tracegas.pipeline.MeasurementRole;
+import org.tracegas.runner.ExitCode;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
@@ -108,25 +107,25 @@ class BatchCtsPathTest {
 
         try (WorkspaceStore store = opener.open()) {
             Session ana = store.users().logIn("ana", BatchCampaign.PASSWORD.toCharArray());
-            Map<String, NewResult> single = results(store, ana, "Q");
-            Map<String, NewResult> batched = results(store, ana, "B");
+            Map<String, Result> single = results(store, ana, "Q");
+            Map<String, Result> batched = results(store, ana, "B");
             assertEquals(2 * 2 * 3, single.size(), "2 files of 2 samples, CO, N2O and H2O");
             assertEquals(single.keySet(), batched.keySet());
-            double path = single.values().iterator().next().conditions().pathM();
+            double path = single.values().iterator().next().getConditions().pathM();
             // 3 % more CO is, to Beer-Lambert, a 3 % longer path; the band of the strong CO lines grows slower
             // than the amount (curve of growth, from memory), so the CTS band reads between 1.5 and 3 % more
             assertTrue(path > 1.015 * InventedBandSystem.PATH && path <= LONGER * InventedBandSystem.PATH,
                     "CTS path " + path);
             single.forEach((key, q) -> {
-                NewResult b = batched.get(key);
-                assertEquals("cts-derived", q.conditions().pathOrigin(), key);
-                assertEquals("cts-derived", b.conditions().pathOrigin(), key);
+                Result b = batched.get(key);
+                assertEquals("cts-derived", q.getConditions().pathOrigin(), key);
+                assertEquals("cts-derived", b.getConditions().pathOrigin(), key);
                 // the same CTS readings and plan give the same path, and the same chain the same numbers
-                assertEquals(path, b.conditions().pathM(), 0.0, key);
-                assertEquals(q.conditions().correctionFactor(), b.conditions().correctionFactor(), 0.0, key);
-                assertEquals(q.concentration(), b.concentration(), 0.0, key);
-                assertEquals(q.uncertainty(), b.uncertainty(), 0.0, key);
-                assertEquals(q.inputHash(), b.inputHash(), key);
+                assertEquals(path, b.getConditions().pathM(), 0.0, key);
+                assertEquals(q.getConditions().correctionFactor(), b.getConditions().correctionFactor(), 0.0, key);
+                assertEquals(q.getConcentration(), b.getConcentration(), 0.0, key);
+                assertEquals(q.getStandardUncertainty(), b.getStandardUncertainty(), 0.0, key);
+                assertEquals(q.getProvenance().inputHash(), b.getProvenance().inputHash(), key);
             });
             assertTrue(store.verifyAuditTrail().intact());
         }
@@ -149,13 +148,13 @@ class BatchCtsPathTest {
     }
 
     /** A project's results by measurement time and compound. */
-    private static Map<String, NewResult> results(WorkspaceStore store, Session actor, String code) {
+    private static Map<String, Result> results(WorkspaceStore store, Session actor, String code) {
         String projectId = store.projects().findByCode(actor, code).orElseThrow().getId();
         Map<String, java.time.Instant> times = store.projects().measurements(actor, projectId).stream()
                 .collect(Collectors.toMap(Measurement::getId, Measurement::getTime));
-        Map<String, NewResult> byKey = new TreeMap<>();
-        for (ResultInfo r : store.results().results(actor, projectId)) {
-            byKey.put(times.get(r.values().measurementId()) + " " + r.values().compound(), r.values());
+        Map<String, Result> byKey = new TreeMap<>();
+        for (Result r : store.results().results(actor, projectId)) {
+            byKey.put(times.get(r.getMeasurementId()) + " " + r.getCompound(), r);
         }
         return byKey;
     }

@@ -166,7 +166,7 @@ class BatchProcessesTest {
             assertEquals(FILES * SAMPLES_PER_FILE, times.size(), "no sample stored twice, none missing");
             assertEquals(expected, new LinkedHashSet<>(times.values().stream().sorted().toList()));
             Map<String, Long> resultsPerMeasurement = store.results().results(ana, project).stream()
-                    .collect(Collectors.groupingBy(r -> r.values().measurementId(), Collectors.counting()));
+                    .collect(Collectors.groupingBy(r -> r.getMeasurementId(), Collectors.counting()));
             assertEquals(times.keySet(), resultsPerMeasurement.keySet());
             resultsPerMeasurement.forEach((m, n) -> assertEquals(COMPOUNDS, n, "results of measurement at "
                     + times.get(m)));

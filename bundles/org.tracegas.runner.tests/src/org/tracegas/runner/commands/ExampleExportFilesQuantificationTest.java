@@ -20,8 +20,8 @@ import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.importer.StandaloneExtensions;
 import org.tracegas.model.Measurement;
+import org.tracegas.model.Result;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
@@ -88,17 +88,17 @@ class ExampleExportFilesQuantificationTest {
                 byId.put(m.getId(), m);
                 assertEquals(313.15, m.getCellTemperature(), "the conditions the lab gave");
             }
-            List<ResultInfo> results = store.results().results(ana, project);
+            List<Result> results = store.results().results(ana, project);
             assertEquals(2 * SAMPLES, results.size());
             double worst = 0;
-            for (ResultInfo res : results) {
-                Measurement m = byId.get(res.values().measurementId());
-                double t = truth.get(m.getSourceFile()).get(res.values().compound());
-                double error = Math.abs(res.values().concentration() - t);
+            for (Result res : results) {
+                Measurement m = byId.get(res.getMeasurementId());
+                double t = truth.get(m.getSourceFile()).get(res.getCompound());
+                double error = Math.abs(res.getConcentration() - t);
                 worst = Math.max(worst, error / t);
                 // the tolerance of LabJcampQuantificationTest, for the same generator and method
-                assertTrue(error <= 0.03 * t + 0.3, () -> m.getSourceFile() + " " + res.values().compound() + ": "
-                        + res.values().concentration() + " ppm, made with " + t + " ppm");
+                assertTrue(error <= 0.03 * t + 0.3, () -> m.getSourceFile() + " " + res.getCompound() + ": "
+                        + res.getConcentration() + " ppm, made with " + t + " ppm");
             }
             System.out.printf(Locale.ROOT, "Example FTIR exports: worst relative error %.4f over %d results%n",
                     worst, results.size());

@@ -14,11 +14,11 @@ import java.util.stream.Collectors;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.runner.ExitCode;
-import org.tracegas.store.ResultConditions;
-import org.tracegas.store.ResultInfo;
-import org.tracegas.store.Session;
 import org.tracegas.model.Measurement;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
+import org.tracegas.runner.ExitCode;
+import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -82,15 +82,15 @@ class LabJcampCtsPathTest {
             String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().getId();
             Map<String, String> fileOf = store.imports().measurements(ana, project).stream().collect(
                     Collectors.toMap(Measurement::getId, Measurement::getSourceFile));
-            List<ResultInfo> results = store.results().results(ana, project);
+            List<Result> results = store.results().results(ana, project);
             assertEquals(2 * 8, results.size(), "the CTS measurements are not samples");
-            for (ResultInfo x : results) {
-                String file = fileOf.get(x.values().measurementId());
-                double truth = lab.truthByFile.get(file).get(x.values().compound());
-                double ppm = x.values().concentration();
-                assertTrue(Math.abs(ppm - truth) <= 0.03 * truth + 0.3, file + " " + x.values().compound() + ": "
+            for (Result x : results) {
+                String file = fileOf.get(x.getMeasurementId());
+                double truth = lab.truthByFile.get(file).get(x.getCompound());
+                double ppm = x.getConcentration();
+                assertTrue(Math.abs(ppm - truth) <= 0.03 * truth + 0.3, file + " " + x.getCompound() + ": "
                         + ppm + " ppm, made with " + truth + " ppm");
-                ResultConditions c = x.values().conditions();
+                ResultConditions c = x.getConditions();
                 assertEquals("cts-derived", c.pathOrigin());
                 // the CTS band gives the 2 m the spectra were made with, within the 2 % LabJcampQaTest allows
                 assertEquals(LabJcampQuantificationTest.PATH_M, c.pathM(), 0.02 * LabJcampQuantificationTest.PATH_M);

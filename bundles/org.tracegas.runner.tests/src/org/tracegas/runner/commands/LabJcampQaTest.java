@@ -17,11 +17,11 @@ import java.util.stream.Collectors;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.model.Measurement;
+import org.tracegas.model.Result;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
-import org.tracegas.model.Measurement;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -172,17 +172,17 @@ class LabJcampQaTest {
             Map<String, String> fileOf = store.imports().measurements(ana, project).stream().collect(
                     Collectors.toMap(Measurement::getId, Measurement::getSourceFile));
             Map<String, Double> mdl = store.qa().checks(ana, project).stream().collect(Collectors.toMap(
-                    c -> c.outcome().check(), c -> c.outcome().measured()));
+                    c -> c.getCheck(), c -> c.getMeasured()));
             for (String compound : List.of("CO", "N2O")) {
-                List<ResultInfo> copies = store.results().results(ana, project).stream()
-                        .filter(x -> x.values().compound().equals(compound)
-                                && fileOf.get(x.values().measurementId()).startsWith("zero-as-sample-"))
+                List<Result> copies = store.results().results(ana, project).stream()
+                        .filter(x -> x.getCompound().equals(compound)
+                                && fileOf.get(x.getMeasurementId()).startsWith("zero-as-sample-"))
                         .toList();
                 assertEquals(7, copies.size(), compound);
                 double[] ppm = new double[copies.size()];
                 for (int i = 0; i < ppm.length; i++) {
-                    assertEquals(factor, copies.get(i).values().conditions().correctionFactor(), 1e-12);
-                    ppm[i] = copies.get(i).values().concentration();
+                    assertEquals(factor, copies.get(i).getConditions().correctionFactor(), 1e-12);
+                    ppm[i] = copies.get(i).getConcentration();
                 }
                 double corrected = 3.143 * sampleStandardDeviation(ppm);
                 double stored = mdl.get("Method detection limit " + compound);

@@ -28,6 +28,8 @@ import org.tracegas.importer.delimited.DelimitedReader;
 import org.tracegas.importer.jcamp.JcampReader;
 import org.tracegas.importer.jcamp.JcampWriter;
 import org.tracegas.model.Measurement;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
 import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.CommandTable;
@@ -35,8 +37,6 @@ import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.ResultConditions;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
@@ -408,19 +408,19 @@ class LabJcampQuantificationTest {
         assertEquals(SAMPLES + 1, measurements.size(), "24 samples and one background, each imported once");
         Map<String, Measurement> byId = measurements.stream().collect(Collectors.toMap(
                 m -> m.getId(), m -> m));
-        List<ResultInfo> results = store.results().results(ana, project);
+        List<Result> results = store.results().results(ana, project);
         assertEquals(2 * SAMPLES, results.size());
         double worst = 0;
-        for (ResultInfo r : results) {
-            Measurement m = byId.get(r.values().measurementId());
-            double truth = lab.truthByFile.get(m.getSourceFile()).get(r.values().compound());
-            double error = Math.abs(r.values().concentration() - truth);
+        for (Result r : results) {
+            Measurement m = byId.get(r.getMeasurementId());
+            double truth = lab.truthByFile.get(m.getSourceFile()).get(r.getCompound());
+            double error = Math.abs(r.getConcentration() - truth);
             worst = Math.max(worst, error / truth);
-            assertTrue(error <= 0.03 * truth + 0.3, () -> m.getSourceFile() + " " + r.values().compound() + ": "
-                    + r.values().concentration() + " ppm, made with " + truth + " ppm");
-            assertTrue(r.values().uncertainty() > 0 && Double.isFinite(r.values().uncertainty()));
+            assertTrue(error <= 0.03 * truth + 0.3, () -> m.getSourceFile() + " " + r.getCompound() + ": "
+                    + r.getConcentration() + " ppm, made with " + truth + " ppm");
+            assertTrue(r.getStandardUncertainty() > 0 && Double.isFinite(r.getStandardUncertainty()));
             // corrected from the references' cell to the file's, EPA FTIR Protocol section 11.2 (standards notes)
-            ResultConditions c = r.values().conditions();
+            ResultConditions c = r.getConditions();
             assertEquals(313.15, c.cellTemperatureK());
             assertEquals("file-label", c.temperatureOrigin());
             assertEquals(100.9, c.cellPressureKPa(), 1e-12);
@@ -442,14 +442,14 @@ class LabJcampQuantificationTest {
         assertEquals(2 * SAMPLES + 1, lines.size());
         for (String line : lines.subList(1, lines.size())) {
             String[] f = line.split(",", -1);
-            ResultInfo stored = results.stream().filter(r -> r.values().measurementId().equals(f[0])
-                    && r.values().compound().equals(f[3])).findFirst().orElseThrow();
-            assertEquals(stored.values().concentration(), Double.parseDouble(f[4]));
+            Result stored = results.stream().filter(r -> r.getMeasurementId().equals(f[0])
+                    && r.getCompound().equals(f[3])).findFirst().orElseThrow();
+            assertEquals(stored.getConcentration(), Double.parseDouble(f[4]));
             assertEquals(byId.get(f[0]).getSourceFile(), f[2]);
-            assertEquals(stored.values().inputHash(), f[13]);
+            assertEquals(stored.getProvenance().inputHash(), f[13]);
             assertEquals(313.15, Double.parseDouble(f[15]));
             assertEquals("file-label", f[16]);
-            assertEquals(stored.values().conditions().correctionFactor(), Double.parseDouble(f[24]));
+            assertEquals(stored.getConditions().correctionFactor(), Double.parseDouble(f[24]));
             assertEquals(1.0, Double.parseDouble(f[25]));
             String recipe = store.analyses().recipe(ana, f[14]);
             assertTrue(recipe.contains("baseline degree=1;regions=2000:2060,2270:2300"), recipe);

@@ -17,8 +17,8 @@ import java.util.concurrent.TimeUnit;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.model.Result;
 import org.tracegas.runner.ExitCode;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.WorkspaceVerification;
@@ -91,9 +91,9 @@ class LabQuantifyKillTest {
             try (WorkspaceStore store = Workspaces.openPostgres(schemaUrl, USER, PASSWORD)) {
                 Session ana = store.users().logIn("ana", "lab-pw-12".toCharArray());
                 String project = store.projects().findByCode(ana, "LBK-5").orElseThrow().getId();
-                List<ResultInfo> results = store.results().results(ana, project);
+                List<Result> results = store.results().results(ana, project);
                 assertEquals(2 * SAMPLES, results.size(), "one result per analyte and measurement, none twice");
-                assertEquals(SAMPLES, results.stream().map(r -> r.values().measurementId()).distinct().count());
+                assertEquals(SAMPLES, results.stream().map(r -> r.getMeasurementId()).distinct().count());
                 // the chain and every data row it vouches for, after the kill and the second run
                 WorkspaceVerification verified = store.audit().verifyWorkspace(List.of());
                 assertTrue(verified.intact(), verified.statement());

@@ -17,13 +17,14 @@ import java.util.Random;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.method.MethodVersions;
-import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
+import org.tracegas.method.MethodVersions;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.model.WorkspacePackage.Literals;
@@ -32,9 +33,8 @@ import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
-import org.tracegas.store.ResultInfo;
-import org.tracegas.store.ResultRow;
 import org.tracegas.spectrum.Spectrum;
+import org.tracegas.store.ResultRow;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -163,16 +163,16 @@ class WorkbenchMethodVersionTest {
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
             String project = store.projects().findByCode(ana, "P-W").orElseThrow().getId();
-            List<ResultInfo> results = store.results().results(ana, project);
+            List<Result> results = store.results().results(ana, project);
             assertEquals(2 * CO_PPM.length, results.size(), "CO and N2O of each sample, no longer H2O");
-            assertTrue(results.stream().allMatch(r -> r.values().methodVersionId().equals(saved.id())),
+            assertTrue(results.stream().allMatch(r -> r.getProvenance().methodVersionId().equals(saved.id())),
                     "every result names the version saved from the editor");
             assertTrue(store.versions().version(saved.id()).frozen(), "a version with results is frozen");
             Map<String, Instant> times = new java.util.HashMap<>();
             store.projects().measurements(ana, project).forEach(m -> times.put(m.getId(), m.getTime()));
-            List<Double> co = results.stream().filter(r -> r.values().compound().equals("CO"))
-                    .sorted(java.util.Comparator.comparing(r -> times.get(r.values().measurementId())))
-                    .map(r -> r.values().concentration()).toList();
+            List<Double> co = results.stream().filter(r -> r.getCompound().equals("CO"))
+                    .sorted(java.util.Comparator.comparing(r -> times.get(r.getMeasurementId())))
+                    .map(r -> r.getConcentration()).toList();
             for (int i = 0; i < CO_PPM.length; i++) {
                 // the truth is the mixture the interferograms were synthesised from; 4 % as in the runner's
                 // analysis test (interpolation between references 1.5 apart plus the detector noise)
@@ -184,9 +184,9 @@ class WorkbenchMethodVersionTest {
             store.spectra().stream(ana, project).filter(s -> s.content() == SpectralContent.ABSORBANCE
                     && s.measurementId() != null).forEach(s -> highest.merge(s.measurementId(), highest(s
                             .spectrum(), CO_LOW, CO_HIGH), Math::max));
-            List<Double> peaks = results.stream().filter(r -> r.values().compound().equals("CO"))
-                    .sorted(java.util.Comparator.comparing(r -> times.get(r.values().measurementId())))
-                    .map(r -> highest.get(r.values().measurementId())).toList();
+            List<Double> peaks = results.stream().filter(r -> r.getCompound().equals("CO"))
+                    .sorted(java.util.Comparator.comparing(r -> times.get(r.getMeasurementId())))
+                    .map(r -> highest.get(r.getMeasurementId())).toList();
             assertTrue(peaks.get(1) > 1.5 * peaks.get(0), "highest absorbances " + peaks);
             limit = Math.sqrt(peaks.get(0) * peaks.get(1));
         }
@@ -224,18 +224,18 @@ class WorkbenchMethodVersionTest {
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
             String project = store.projects().findByCode(ana, "P-W3").orElseThrow().getId();
-            List<ResultRow> rows = store.analyses().rows(ana, project).stream().filter(r -> r.result().values()
-                    .methodVersionId().equals(third.id()) && r.result().values().compound().equals("CO")).toList();
+            List<ResultRow> rows = store.analyses().rows(ana, project).stream().filter(r -> r.result()
+                    .getProvenance().methodVersionId().equals(third.id()) && r.result().getCompound().equals("CO")).toList();
             assertEquals(CO_PPM.length, rows.size());
             for (int i = 0; i < CO_PPM.length; i++) {
                 ResultRow r = rows.get(i);
                 // a result whose sample absorbs more than the method's maximum inside the fit windows is flagged
                 // (MethodDefinition's max-absorbance): the second sample only
-                assertEquals(i == 1, r.result().values().flags().contains(ResultFlag.SATURATED), "sample " + i
-                        + ": " + r.result().values().flags());
+                assertEquals(i == 1, r.result().getFlags().contains(ResultFlag.SATURATED), "sample " + i
+                        + ": " + r.result().getFlags());
                 // the offset step leaves the amounts as they were: the truth is the synthesised mixture, within
                 // the 4 % above
-                assertEquals(CO_PPM[i], r.result().values().concentration(), 0.04 * CO_PPM[i], "sample " + i);
+                assertEquals(CO_PPM[i], r.result().getConcentration(), 0.04 * CO_PPM[i], "sample " + i);
                 assertTrue(store.analyses().recipe(ana, r.recipeSha256()).contains(BASELINE_STEP),
                         "the recipe that ran is the one edited: " + store.analyses().recipe(ana, r.recipeSha256()));
             }

@@ -15,12 +15,11 @@ import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Result;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.store.AnalysisService;
 import org.tracegas.store.MeasurementAnalysis;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.NoSuchObjectException;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.ResultRow;
 import org.tracegas.store.Session;
 import org.tracegas.store.SpectrumInput;
@@ -79,17 +78,17 @@ final class JdbcAnalysisService implements AnalysisService {
                             SpectralContent.ABSORBANCE, a.absorbance(), a.encoding()));
                     ps.executeUpdate();
                 }
-                List<ResultInfo> rows = new ArrayList<>(a.results().size());
+                List<Result> rows = new ArrayList<>(a.results().size());
                 try (PreparedStatement ps = tx.connection().prepareStatement(JdbcResultService.INSERT)) {
-                    for (NewResult r : a.results()) {
-                        ResultInfo row = JdbcResultService.newInfo(actor, projectId, r, recorded);
+                    for (Result r : a.results()) {
+                        Result row = JdbcResultService.stored(r, projectId, a.measurementId(), actor, recorded);
                         DataKind.RESULT.bind(ps, JdbcResultService.row(row, recipeSha));
                         ps.addBatch();
                         rows.add(row);
                     }
                     ps.executeBatch();
                 }
-                List<String> resultIds = rows.stream().map(ResultInfo::id).toList();
+                List<String> resultIds = rows.stream().map(Result::getId).toList();
                 stored.add(new StoredMeasurement(a.measurementId(), spectrum[0], resultIds));
                 Map<String, Object> fields = new java.util.LinkedHashMap<>();
                 fields.put("project", projectId);

@@ -16,12 +16,11 @@ import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Result;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.store.BlockService;
 import org.tracegas.store.EncodedBlock;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.ProcessedSpectrum;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.SpectrumInput;
 import org.tracegas.store.StoredMeasurement;
@@ -119,7 +118,7 @@ final class JdbcBlockService implements BlockService {
         Set<String> checked = new HashSet<>();
         List<ProcessedSpectrum> block = encoded.block();
         for (int i = 0; i < block.size(); i++) {
-            List<NewResult> results = block.get(i).results();
+            List<Result> results = block.get(i).results();
             for (int j = 0; j < results.size(); j++) {
                 JdbcResultService.requireVersions(tx, versions, results.get(j), checked,
                         "block[" + i + "].results[" + j + "].");
@@ -166,23 +165,22 @@ final class JdbcBlockService implements BlockService {
             Map<String, Object> spectrum = SpectrumRows.row(projectId, new SpectrumInput(measurementId,
                     SpectralContent.ABSORBANCE, p.absorbance(), p.encoding()));
             String spectrumId = (String) spectrum.get("id");
-            List<ResultInfo> results = new ArrayList<>(p.results().size());
+            List<Result> results = new ArrayList<>(p.results().size());
             List<RowBindings.RowRef> bound = new ArrayList<>(2 + p.results().size());
             bound.add(new RowBindings.RowRef(DataKind.MEASUREMENT, measurementId,
                     DataKind.MEASUREMENT.sha256(measurement)));
             bound.add(new RowBindings.RowRef(DataKind.SPECTRAL_DATA, spectrumId,
                     DataKind.SPECTRAL_DATA.sha256(spectrum)));
-            for (NewResult r : p.results()) {
-                ResultInfo info = JdbcResultService.newInfo(actor, projectId, r.withMeasurement(measurementId),
-                        recorded);
-                Map<String, Object> row = JdbcResultService.row(info, null);
-                results.add(info);
+            for (Result r : p.results()) {
+                Result result = JdbcResultService.stored(r, projectId, measurementId, actor, recorded);
+                Map<String, Object> row = JdbcResultService.row(result, null);
+                results.add(result);
                 resultRows.add(row);
-                bound.add(new RowBindings.RowRef(DataKind.RESULT, info.id(), DataKind.RESULT.sha256(row)));
+                bound.add(new RowBindings.RowRef(DataKind.RESULT, result.getId(), DataKind.RESULT.sha256(row)));
             }
             measurementRows.add(measurement);
             spectrumRows.add(spectrum);
-            List<String> resultIds = results.stream().map(ResultInfo::id).toList();
+            List<String> resultIds = results.stream().map(Result::getId).toList();
             stored.add(new StoredMeasurement(measurementId, spectrumId, resultIds));
             Map<String, Object> fields = JdbcProjectService.measurementValues(projectId, p.kind(), p.time(),
                     p.cellTemperature(), p.cellPressure());
@@ -203,11 +201,11 @@ final class JdbcBlockService implements BlockService {
     }
 
     /** As documented on {@link BlockService}: an auditor recomputes it from the stored results. */
-    static String resultsSha256(List<ResultInfo> results) {
+    static String resultsSha256(List<Result> results) {
         StringBuilder text = new StringBuilder();
-        for (ResultInfo r : results) {
+        for (Result r : results) {
             Map<String, Object> fields = new LinkedHashMap<>(JdbcResultService.fields(r));
-            fields.put("id", r.id());
+            fields.put("id", r.getId());
             text.append(AuditValues.canonical(fields));
         }
         return SpectrumCodec.sha256Hex(text.toString().getBytes(StandardCharsets.UTF_8));

@@ -20,10 +20,12 @@ import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
+import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
-import org.tracegas.store.NewResult;
-import org.tracegas.store.ResultConditions;
-import org.tracegas.store.ResultInfo;
+import org.tracegas.model.Results;
+import org.tracegas.store.ResultChecks;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionKind;
@@ -39,25 +41,24 @@ final class JdbcResultService implements ResultService {
     }
 
     @Override
-    public ResultInfo record(Session actor, String projectId, NewResult result) {
+    public Result record(Session actor, String projectId, Result result) {
+        ResultChecks.requireComplete(result, "");
         return recordAll(actor, projectId, Collections.singletonList(result)).get(0);
     }
 
     @Override
-    public List<ResultInfo> recordAll(Session actor, String projectId, List<NewResult> results) {
+    public List<Result> recordAll(Session actor, String projectId, List<Result> results) {
         if (results == null || results.isEmpty()) {
             throw new IllegalArgumentException("results must hold at least one result");
         }
         for (int i = 0; i < results.size(); i++) {
-            if (results.get(i) == null) {
-                throw new IllegalArgumentException("results[" + i + "] is null");
-            }
+            ResultChecks.requireComplete(results.get(i), "results[" + i + "].");
         }
         return transactions.run("recording " + results.size() + " result(s) in project " + projectId, tx -> {
             Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
             Set<String> checked = new HashSet<>();
-            List<ResultInfo> stored = new ArrayList<>(results.size());
-            for (NewResult result : results) {
+            List<Result> stored = new ArrayList<>(results.size());
+            for (Result result : results) {
                 stored.add(insert(tx, actor, projectId, result, checked));
             }
             return stored;
@@ -68,33 +69,41 @@ final class JdbcResultService implements ResultService {
     static final String INSERT = DataKind.RESULT.insert("row_version", "0");
 
     /** @param checked versions and measurements already checked and frozen in this transaction */
-    private ResultInfo insert(Tx tx, Session actor, String projectId, NewResult result, Set<String> checked)
+    private Result insert(Tx tx, Session actor, String projectId, Result result, Set<String> checked)
             throws SQLException {
         requireVersions(tx, versions, result, checked, "");
-        if (result.measurementId() != null && checked.add("measurement:" + result.measurementId())
+        String measurementId = result.getMeasurementId();
+        if (measurementId != null && checked.add("measurement:" + measurementId)
                 && tx.queryOne("SELECT 1 FROM measurement WHERE id = ? AND project_id = ?", rs -> 1,
-                        result.measurementId(), projectId).isEmpty()) {
-            throw new IllegalArgumentException("measurementId " + result.measurementId()
+                        measurementId, projectId).isEmpty()) {
+            throw new IllegalArgumentException("measurementId " + measurementId
                     + " is not a measurement of project " + projectId);
         }
-        ResultInfo stored = newInfo(actor, projectId, result, Instant.now().truncatedTo(ChronoUnit.MICROS));
+        Result stored = stored(result, projectId, measurementId, actor,
+                Instant.now().truncatedTo(ChronoUnit.MICROS));
         try (PreparedStatement ps = tx.connection().prepareStatement(INSERT)) {
-            bindInsert(ps, stored);
+            DataKind.RESULT.bind(ps, row(stored, null));
             ps.executeUpdate();
         }
-        tx.wrote(DataKind.RESULT, stored.id());
-        tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "result", stored.id())
+        tx.wrote(DataKind.RESULT, stored.getId());
+        tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "result", stored.getId())
                 .newValue(values(stored)).build());
         return stored;
     }
 
-    static ResultInfo newInfo(Session actor, String projectId, NewResult result, Instant recorded) {
-        return new ResultInfo(RowIds.next(), projectId, result, actor.userId(), recorded);
-    }
-
-    /** Binds a result without recipe to {@link #INSERT}. */
-    static void bindInsert(PreparedStatement ps, ResultInfo stored) throws SQLException {
-        DataKind.RESULT.bind(ps, row(stored, null));
+    /**
+     * The result as it is stored: a new object with the given one's values, a new id, and project, measurement,
+     * recording user and time; the given result stays as it was.
+     */
+    static Result stored(Result values, String projectId, String measurementId, Session actor, Instant recorded) {
+        Result stored = Results.of(measurementId, values.getCompound(), values.getConcentration(),
+                values.getStandardUncertainty(), values.getDetectionLimit(), values.getUnit(), values.getFlags(),
+                values.getProvenance(), values.getConditions());
+        stored.setId(RowIds.next());
+        stored.setProjectId(projectId);
+        stored.setRecordedBy(actor.userId());
+        stored.setRecorded(recorded);
+        return stored;
     }
 
     /**
@@ -103,25 +112,25 @@ final class JdbcResultService implements ResultService {
      *
      * @param recipeSha256 the recipe that processed the spectrum, or null
      */
-    static Map<String, Object> row(ResultInfo stored, String recipeSha256) {
-        NewResult result = stored.values();
-        ResultConditions c = result.conditions();
+    static Map<String, Object> row(Result stored, String recipeSha256) {
+        Provenance p = stored.getProvenance();
+        ResultConditions c = stored.getConditions();
         Map<String, Object> row = new HashMap<>();
-        row.put("id", stored.id());
-        row.put("project_id", stored.projectId());
-        row.put("measurement_id", result.measurementId());
-        row.put("compound", result.compound());
-        row.put("concentration", result.concentration());
-        row.put("uncertainty", result.uncertainty());
-        row.put("detection_limit", result.detectionLimit());
-        row.put("unit", result.unit());
-        row.put("flags", formatFlags(result));
-        row.put("method_version_id", result.methodVersionId());
-        row.put("library_version_id", result.libraryVersionId());
-        row.put("software_version", result.softwareVersion());
-        row.put("input_hash", result.inputHash());
-        row.put("recorded_by", stored.recordedBy());
-        row.put("recorded_at", stored.recorded());
+        row.put("id", stored.getId());
+        row.put("project_id", stored.getProjectId());
+        row.put("measurement_id", stored.getMeasurementId());
+        row.put("compound", stored.getCompound());
+        row.put("concentration", stored.getConcentration());
+        row.put("uncertainty", stored.getStandardUncertainty());
+        row.put("detection_limit", stored.getDetectionLimit());
+        row.put("unit", stored.getUnit());
+        row.put("flags", formatFlags(stored));
+        row.put("method_version_id", p.methodVersionId());
+        row.put("library_version_id", p.libraryVersionId());
+        row.put("software_version", p.softwareVersion());
+        row.put("input_hash", p.inputHash());
+        row.put("recorded_by", stored.getRecordedBy());
+        row.put("recorded_at", stored.getRecorded());
         row.put("recipe_sha256", recipeSha256);
         row.put("cell_temperature", c == null ? null : c.cellTemperatureK());
         row.put("cell_temperature_origin", c == null ? null : c.temperatureOrigin());
@@ -145,20 +154,20 @@ final class JdbcResultService implements ResultService {
      * @param checked versions already checked and frozen in this transaction
      * @param where   prefix of the field names in error messages, e.g. {@code "block[3].results[0]."}
      */
-    static void requireVersions(Tx tx, JdbcVersionService versions, NewResult result, Set<String> checked,
+    static void requireVersions(Tx tx, JdbcVersionService versions, Result result, Set<String> checked,
             String where) throws SQLException {
-        if (checked.add("method:" + result.methodVersionId())) {
-            versions.requireUsableAndFreeze(tx, result.methodVersionId(), VersionKind.METHOD,
-                    where + "methodVersionId");
+        Provenance p = result.getProvenance();
+        if (checked.add("method:" + p.methodVersionId())) {
+            versions.requireUsableAndFreeze(tx, p.methodVersionId(), VersionKind.METHOD, where + "methodVersionId");
         }
-        if (checked.add("library:" + result.libraryVersionId())) {
-            versions.requireUsableAndFreeze(tx, result.libraryVersionId(), VersionKind.LIBRARY,
+        if (checked.add("library:" + p.libraryVersionId())) {
+            versions.requireUsableAndFreeze(tx, p.libraryVersionId(), VersionKind.LIBRARY,
                     where + "libraryVersionId");
         }
     }
 
     @Override
-    public List<ResultInfo> results(Session actor, String projectId) {
+    public List<Result> results(Session actor, String projectId) {
         return transactions.run("reading the results of project " + projectId, tx -> {
             Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
             return tx.queryList("SELECT * FROM analysis_result WHERE project_id = ? ORDER BY recorded_at, id",
@@ -166,24 +175,28 @@ final class JdbcResultService implements ResultService {
         });
     }
 
-    static String formatFlags(NewResult r) {
-        return r.flags().isEmpty() ? ""
-                : EnumSet.copyOf(r.flags()).stream().map(ResultFlag::getName).collect(Collectors.joining(","));
+    static String formatFlags(Result r) {
+        return r.getFlags().isEmpty() ? ""
+                : EnumSet.copyOf(r.getFlags()).stream().map(ResultFlag::getName).collect(Collectors.joining(","));
     }
 
-    static ResultInfo map(ResultSet rs) throws SQLException {
+    static Result map(ResultSet rs) throws SQLException {
         EnumSet<ResultFlag> flags = EnumSet.noneOf(ResultFlag.class);
         for (String name : rs.getString("flags").split(",")) {
             if (!name.isEmpty()) {
                 flags.add(ResultFlag.valueOf(name));
             }
         }
-        NewResult values = new NewResult(rs.getString("measurement_id"), rs.getString("compound"),
-                rs.getDouble("concentration"), rs.getDouble("uncertainty"), rs.getDouble("detection_limit"),
-                rs.getString("unit"), flags, rs.getString("method_version_id"), rs.getString("library_version_id"),
-                rs.getString("software_version"), rs.getString("input_hash"), conditions(rs));
-        return new ResultInfo(rs.getString("id"), rs.getString("project_id"), values, rs.getString("recorded_by"),
-                Tx.instant(rs, "recorded_at"));
+        Result r = Results.of(rs.getString("measurement_id"), rs.getString("compound"), rs.getDouble("concentration"),
+                rs.getDouble("uncertainty"), rs.getDouble("detection_limit"), rs.getString("unit"), flags,
+                new Provenance(rs.getString("method_version_id"), rs.getString("library_version_id"),
+                        rs.getString("software_version"), rs.getString("input_hash")),
+                conditions(rs));
+        r.setId(rs.getString("id"));
+        r.setProjectId(rs.getString("project_id"));
+        r.setRecordedBy(rs.getString("recorded_by"));
+        r.setRecorded(Tx.instant(rs, "recorded_at"));
+        return r;
     }
 
     /** The conditions of a stored result, null for a result not corrected. */
@@ -200,27 +213,27 @@ final class JdbcResultService implements ResultService {
     }
 
     /** The canonical values of a result's audit record. */
-    static String values(ResultInfo r) {
+    static String values(Result r) {
         return AuditValues.canonical(fields(r));
     }
 
     /** The fields of a result's audit record, without its id. */
-    static Map<String, Object> fields(ResultInfo r) {
-        NewResult v = r.values();
+    static Map<String, Object> fields(Result r) {
+        Provenance p = r.getProvenance();
         Map<String, Object> fields = new LinkedHashMap<>();
-        fields.put("project", r.projectId());
-        fields.put("measurement", v.measurementId());
-        fields.put("compound", v.compound());
-        fields.put("concentration", v.concentration());
-        fields.put("uncertainty", v.uncertainty());
-        fields.put("detectionLimit", v.detectionLimit());
-        fields.put("unit", v.unit());
-        fields.put("flags", formatFlags(v));
-        fields.put("methodVersion", v.methodVersionId());
-        fields.put("libraryVersion", v.libraryVersionId());
-        fields.put("softwareVersion", v.softwareVersion());
-        fields.put("inputHash", v.inputHash());
-        ResultConditions c = v.conditions();
+        fields.put("project", r.getProjectId());
+        fields.put("measurement", r.getMeasurementId());
+        fields.put("compound", r.getCompound());
+        fields.put("concentration", r.getConcentration());
+        fields.put("uncertainty", r.getStandardUncertainty());
+        fields.put("detectionLimit", r.getDetectionLimit());
+        fields.put("unit", r.getUnit());
+        fields.put("flags", formatFlags(r));
+        fields.put("methodVersion", p.methodVersionId());
+        fields.put("libraryVersion", p.libraryVersionId());
+        fields.put("softwareVersion", p.softwareVersion());
+        fields.put("inputHash", p.inputHash());
+        ResultConditions c = r.getConditions();
         if (c != null) {
             // only a corrected result has them, so the audit values of results without stay as they were
             fields.put("cellTemperature", c.cellTemperatureK());

@@ -12,10 +12,10 @@ import org.tracegas.audit.SignatureRefusedException;
 import org.tracegas.audit.SignatureRequest;
 import org.tracegas.audit.SignatureService;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.Result;
 import org.tracegas.store.LoginFailedException;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.ReportSignatureRequest;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.ResultSignatureRequest;
 import org.tracegas.store.ReviewService;
 import org.tracegas.store.Session;
@@ -105,9 +105,9 @@ final class JdbcReviewService implements ReviewService {
 
     private static Lookup result(String resultId) {
         return tx -> {
-            ResultInfo r = tx.queryOne("SELECT * FROM analysis_result WHERE id = ?", JdbcResultService::map, resultId)
+            Result r = tx.queryOne("SELECT * FROM analysis_result WHERE id = ?", JdbcResultService::map, resultId)
                     .orElseThrow(() -> new NoSuchObjectException(RESULT_TYPE, resultId));
-            return new Subject(r.projectId(), RESULT_TYPE, r.id(), ResultContent.of(r), r.recordedBy());
+            return new Subject(r.getProjectId(), RESULT_TYPE, r.getId(), ResultContent.of(r), r.getRecordedBy());
         };
     }
 

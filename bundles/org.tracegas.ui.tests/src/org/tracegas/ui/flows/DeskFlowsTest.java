@@ -27,7 +27,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditAction;
 import org.tracegas.model.Project;
-import org.tracegas.store.ResultInfo;
+import org.tracegas.model.Result;
 import org.tracegas.store.Session;
 import org.tracegas.ui.Screens;
 import org.tracegas.ui.dialogs.LoginDialog;
@@ -39,8 +39,8 @@ import org.tracegas.ui.parts.FitDisplay;
 import org.tracegas.ui.parts.ResultReviewPanel;
 import org.tracegas.ui.parts.SpectrumPanel;
 import org.tracegas.ui.parts.WorkspaceNavigator;
-import org.tracegas.ui.session.SeededProject;
 import org.tracegas.ui.session.DemoStaff;
+import org.tracegas.ui.session.SeededProject;
 import org.tracegas.ui.session.WorkspaceAccess;
 
 /**
@@ -134,7 +134,7 @@ class DeskFlowsTest {
         Screens.waitFor(display, () -> panel.shown() != null, 60_000);
         assertTrue(job.getResult().isOK(), job.getResult().toString());
         assertEquals(3, done.get().size());
-        List<ResultInfo> stored = access.store().results().results(analyst, demo.projectId());
+        List<Result> stored = access.store().results().results(analyst, demo.projectId());
         assertEquals(6, stored.size(), "two analytes for each of three measurements");
         // the third demo sample was made with 70 ppm CO and 12 ppm N2O (SeededProject.seed); the fit finds them
         // again within 2 % (a check of the whole chain against the composition it was built from)
@@ -159,7 +159,7 @@ class DeskFlowsTest {
         Screens.save(shell, "flow3-run-method-spectrum");
     }
 
-    private List<ResultInfo> runAsAnalyst() throws InterruptedException {
+    private List<Result> runAsAnalyst() throws InterruptedException {
         Session analyst = access.store().users().logIn(DemoStaff.ANALYST, DemoStaff.PASSWORD.toCharArray());
         BatchQuantificationJob job = BatchQuantificationJob.of(access, analyst, demo, outcomes -> { });
         job.schedule();
@@ -191,7 +191,7 @@ class DeskFlowsTest {
         review.open(access, manager, demo.projectId(), SeededProject.PROJECT_CODE);
         shell.layout(true, true);
         shell.open();
-        ResultInfo first = review.selected();
+        Result first = review.selected();
         SignatureDialog dialog = review.signatureDialog(first);
         dialog.setBlockOnOpen(false);
         dialog.open();

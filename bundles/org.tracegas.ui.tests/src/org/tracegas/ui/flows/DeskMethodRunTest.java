@@ -19,8 +19,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
+import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.ResultRow;
 import org.tracegas.store.VersionKind;
 import org.tracegas.ui.Screens;
@@ -104,11 +104,12 @@ class DeskMethodRunTest {
         for (ResultRow r : rows) {
             double minute = (r.measured().getEpochSecond() - LimeKilnLab.T0.getEpochSecond()) / 60.0;
             double truth = madeAt.get(minute);
-            NewResult v = r.result().values();
-            assertTrue(Math.abs(v.concentration() - truth) <= 3 * v.uncertainty() + 1e-3 * truth, "minute " + minute
-                    + ": " + v.concentration() + " ± " + v.uncertainty() + " ppm, made with " + truth);
-            assertEquals(truth > 100, v.flags().contains(ResultFlag.ABOVE_CALIBRATED_RANGE),
-                    "minute " + minute + ": " + v.flags());
+            Result v = r.result();
+            assertTrue(Math.abs(v.getConcentration() - truth) <= 3 * v.getStandardUncertainty() + 1e-3 * truth,
+                    "minute " + minute + ": " + v.getConcentration() + " ± " + v.getStandardUncertainty()
+                            + " ppm, made with " + truth);
+            assertEquals(truth > 100, v.getFlags().contains(ResultFlag.ABOVE_CALIBRATED_RANGE),
+                    "minute " + minute + ": " + v.getFlags());
         }
         TimeSeriesPanel panel = ViewContents.panel(series);
         ConcentrationTrace co = panel.traces().get(0);

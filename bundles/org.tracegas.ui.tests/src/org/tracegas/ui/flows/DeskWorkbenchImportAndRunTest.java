@@ -31,8 +31,8 @@ import org.eclipse.ui.IWorkbenchWindow;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.model.Project;
+import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.ResultRow;
 import org.tracegas.ui.Screens;
 import org.tracegas.ui.dialogs.ImportFilesPage;
@@ -166,12 +166,12 @@ class DeskWorkbenchImportAndRunTest {
             ResultRow r = rows.get(i);
             double minute = (r.measured().getEpochSecond() - LimeKilnLab.T0.getEpochSecond()) / 60.0;
             double truth = madeAt.get(minute);
-            NewResult v = r.result().values();
-            assertTrue(Math.abs(v.concentration() - truth) <= 3 * v.uncertainty() + 1e-3 * truth, "minute " + minute
-                    + ": " + v.concentration() + " ± " + v.uncertainty() + " ppm, made with " + truth);
-            assertEquals(truth > 100, v.flags().contains(ResultFlag.ABOVE_CALIBRATED_RANGE), "minute " + minute);
+            Result v = r.result();
+            assertTrue(Math.abs(v.getConcentration() - truth) <= 3 * v.getStandardUncertainty() + 1e-3 * truth, "minute " + minute
+                    + ": " + v.getConcentration() + " ± " + v.getStandardUncertainty() + " ppm, made with " + truth);
+            assertEquals(truth > 100, v.getFlags().contains(ResultFlag.ABOVE_CALIBRATED_RANGE), "minute " + minute);
             // the time series draws the stored value, in time order as the rows come
-            assertEquals(v.concentration(), co.values()[i], 1e-9 * Math.max(1, truth), "minute " + minute);
+            assertEquals(v.getConcentration(), co.values()[i], 1e-9 * Math.max(1, truth), "minute " + minute);
         }
         assertEquals(1, co.flagged().cardinality(), "the 150 ppm value is drawn flagged");
         assertTrue(series.heading().getText().startsWith("Stored results of"), series.heading().getText());

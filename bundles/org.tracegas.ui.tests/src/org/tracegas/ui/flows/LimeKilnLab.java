@@ -12,16 +12,16 @@ import java.util.Map;
 import java.util.Random;
 import java.util.Set;
 
-import org.tracegas.method.MethodDefinition;
 import org.tracegas.importer.jcamp.JcampWriter;
+import org.tracegas.method.MethodDefinition;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.Project;
+import org.tracegas.model.QaOutcomes;
 import org.tracegas.model.Role;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.NewQaCheck;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -229,9 +229,9 @@ final class LimeKilnLab {
      */
     void recordQaChecks(String methodVersionId) {
         store.qa().recordAll(analyst, project.getId(), methodVersionId, List.of(
-                new NewQaCheck("Zero CO", true, 0.4, "ppm", -2, 2, "zero gas reads within ±2 ppm",
+                QaOutcomes.of("Zero CO", true, 0.4, "ppm", -2, 2, "zero gas reads within ±2 ppm",
                         "Quarrymoor lab procedure (invented)"),
-                new NewQaCheck("CTS path length", false, 2.31, "m", 1.9, 2.1, "path from the CTS within ±5 %",
+                QaOutcomes.of("CTS path length", false, 2.31, "m", 1.9, 2.1, "path from the CTS within ±5 %",
                         "Quarrymoor lab procedure (invented)")));
     }
 

@@ -9,6 +9,7 @@ import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.SubMonitor;
 import org.eclipse.core.runtime.jobs.Job;
+import org.tracegas.model.Result;
 import org.tracegas.pipeline.AnalysisVersions;
 import org.tracegas.pipeline.ProcessedSpectra;
 import org.tracegas.quantify.QuantificationMethod;
@@ -16,7 +17,6 @@ import org.tracegas.quantify.Quantifier;
 import org.tracegas.quantify.Sample;
 import org.tracegas.quantify.SpectrumResult;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.parts.FitDisplay;
@@ -39,7 +39,7 @@ public final class BatchQuantificationJob extends Job {
     }
 
     /** What came out for one measurement. */
-    public record Outcome(Item item, SpectrumResult result, List<ResultInfo> recorded) {
+    public record Outcome(Item item, SpectrumResult result, List<Result> recorded) {
         public Outcome {
             recorded = List.copyOf(recorded);
         }
@@ -122,9 +122,9 @@ public final class BatchQuantificationJob extends Job {
     }
 
     /** The results as the batch path stores them (flags, input hash, versions), in one transaction. */
-    private List<ResultInfo> record(Item item, SpectrumResult result) {
-        return target.store().results().recordAll(target.session(), target.projectId(),
-                ProcessedSpectra.results(result, target.versions()).stream()
-                        .map(r -> r.withMeasurement(item.measurementId())).toList());
+    private List<Result> record(Item item, SpectrumResult result) {
+        List<Result> results = ProcessedSpectra.results(result, target.versions());
+        results.forEach(r -> r.setMeasurementId(item.measurementId()));
+        return target.store().results().recordAll(target.session(), target.projectId(), results);
     }
 }

@@ -10,9 +10,11 @@ import java.util.Set;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
+import org.tracegas.model.Results;
 import org.tracegas.model.Role;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -64,7 +66,7 @@ final class ExistingWorkspace {
                 "compounds=CO,NO\n", "first");
         VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Stack references",
                 "CO=1\nNO=1\n", "first");
-        List<NewResult> results = new ArrayList<>();
+        List<Result> results = new ArrayList<>();
         // stored newest first, so the traces must sort by measurement time themselves
         for (int i = PPM.length - 1; i >= 0; i--) {
             results.add(result(ids.get(i), "CO", PPM[i][0], Set.of(), method, library));
@@ -74,9 +76,9 @@ final class ExistingWorkspace {
         store.results().recordAll(analyst, project.getId(), results);
     }
 
-    private static NewResult result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,
+    private static Result result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,
             VersionInfo method, VersionInfo library) {
-        return new NewResult(measurementId, compound, ppm, 0.5, 0.2, "ppm", flags, method.id(), library.id(),
-                "Tracegas Workbench 0.1.0", "0".repeat(64));
+        return Results.of(measurementId, compound, ppm, 0.5, 0.2, "ppm", flags,
+                new Provenance(method.id(), library.id(), "Tracegas Workbench 0.1.0", "0".repeat(64)), null);
     }
 }

@@ -9,9 +9,11 @@ import java.util.Set;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
+import org.tracegas.model.Results;
 import org.tracegas.model.Role;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionInfo;
 import org.tracegas.store.VersionKind;
@@ -53,7 +55,7 @@ final class CampaignDay {
                 "compounds=CO,NO,N2O,H2O,CO2\n", "first");
         VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln references",
                 "CO=1\nNO=1\nN2O=1\nH2O=1\nCO2=1\n", "first");
-        List<NewResult> results = new ArrayList<>();
+        List<Result> results = new ArrayList<>();
         for (int i = 0; i < MINUTES; i++) {
             String m = store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.SAMPLE,
                     START.plus(Duration.ofMinutes(i)), 453.15, 1013.0);
@@ -73,9 +75,9 @@ final class CampaignDay {
         store.results().recordAll(analyst, small.getId(), List.of(result(spot, "CO", 55, Set.of(), method, library)));
     }
 
-    private static NewResult result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,
+    private static Result result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,
             VersionInfo method, VersionInfo library) {
-        return new NewResult(measurementId, compound, ppm, 0.5, 0.2, "ppm", flags, method.id(), library.id(),
-                "Tracegas Workbench 0.1.0", "0".repeat(64));
+        return Results.of(measurementId, compound, ppm, 0.5, 0.2, "ppm", flags,
+                new Provenance(method.id(), library.id(), "Tracegas Workbench 0.1.0", "0".repeat(64)), null);
     }
 }

@@ -9,14 +9,17 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 
-import org.tracegas.qa.campaign.StoredQaChecks;
 import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
+import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.qa.campaign.StoredQaChecks;
 import org.tracegas.qa.checks.AcceptanceLimits;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.qa.checks.Rule;
@@ -24,7 +27,6 @@ import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
 import org.tracegas.store.SpectrumInput;
@@ -71,7 +73,7 @@ final class StoredProject {
                 "compounds=CO,NO\n", "first");
         VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, LIBRARY,
                 libraryText(folder), "first");
-        List<NewResult> results = new ArrayList<>();
+        List<Result> results = new ArrayList<>();
         for (int i = 0; i < SAMPLES; i++) {
             String m = store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.SAMPLE,
                     FIRST.plus(Duration.ofMinutes(i)), 453.15, 1013.0);
@@ -122,9 +124,9 @@ final class StoredProject {
         return new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.5, n), a, Ordinate.ABSORBANCE);
     }
 
-    private static NewResult result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,
+    private static Result result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,
             VersionInfo method, VersionInfo library) {
-        return new NewResult(measurementId, compound, ppm, 0.5, 0.2, "ppm", flags, method.id(), library.id(),
-                "Tracegas Workbench 0.1.0", "0".repeat(64));
+        return Results.of(measurementId, compound, ppm, 0.5, 0.2, "ppm", flags,
+                new Provenance(method.id(), library.id(), "Tracegas Workbench 0.1.0", "0".repeat(64)), null);
     }
 }

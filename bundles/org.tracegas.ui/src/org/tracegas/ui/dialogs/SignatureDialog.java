@@ -16,7 +16,7 @@ import org.eclipse.swt.widgets.Text;
 import org.tracegas.audit.Signature;
 import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.audit.SignatureRefusedException;
-import org.tracegas.store.ResultInfo;
+import org.tracegas.model.Result;
 import org.tracegas.store.Session;
 import org.tracegas.store.StoreException;
 import org.tracegas.ui.session.ResultApproval;
@@ -63,10 +63,10 @@ public final class SignatureDialog extends Dialog {
     private Signature signature;
 
     /** Signs a stored result in the session's name. */
-    public SignatureDialog(Shell parent, ResultApproval approval, Session session, ResultInfo result) {
+    public SignatureDialog(Shell parent, ResultApproval approval, Session session, Result result) {
         this(parent, new Subject("result", String.format(Locale.ROOT, "%s %.4g %s (± %.2g), recorded by %s",
-                result.values().compound(), result.values().concentration(), result.values().unit(),
-                result.values().uncertainty(), approval.loginOf(result.recordedBy())), approval.printedName(session),
+                result.getCompound(), result.getConcentration(), result.getUnit(), result.getStandardUncertainty(),
+                approval.loginOf(result.getRecordedBy())), approval.printedName(session),
                 "you recorded this result yourself",
                 (login, password, meaning, comment) -> approval.sign(session, result, login, password, meaning,
                         comment)));

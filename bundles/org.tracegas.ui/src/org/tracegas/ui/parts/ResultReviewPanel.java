@@ -14,7 +14,7 @@ import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Table;
 import org.eclipse.swt.widgets.TableColumn;
 import org.eclipse.swt.widgets.TableItem;
-import org.tracegas.store.ResultInfo;
+import org.tracegas.model.Result;
 import org.tracegas.store.Session;
 import org.tracegas.store.StoreException;
 import org.tracegas.ui.dialogs.SignatureDialog;
@@ -37,7 +37,7 @@ public final class ResultReviewPanel extends Composite {
     private ResultApproval approval;
     private Session session;
     private String projectId;
-    private List<ResultInfo> results = List.of();
+    private List<Result> results = List.of();
 
     public ResultReviewPanel(Composite parent, int style) {
         super(parent, style);
@@ -73,18 +73,18 @@ public final class ResultReviewPanel extends Composite {
     public void reload() {
         results = access.store().results().results(session, projectId);
         table.removeAll();
-        for (ResultInfo r : results) {
+        for (Result r : results) {
             TableItem item = new TableItem(table, SWT.NONE);
             String signatures;
             try {
-                signatures = approval.signatureSummary(session, r.id());
+                signatures = approval.signatureSummary(session, r.getId());
             } catch (StoreException e) {
                 signatures = "signatures unreadable: " + e.getMessage();
             }
-            item.setText(new String[] {r.values().compound(),
-                    String.format(Locale.ROOT, "%.4g %s", r.values().concentration(), r.values().unit()),
-                    String.format(Locale.ROOT, "%.2g", r.values().uncertainty()), SHOWN.format(r.recorded()),
-                    approval.loginOf(r.recordedBy()), signatures});
+            item.setText(new String[] {r.getCompound(),
+                    String.format(Locale.ROOT, "%.4g %s", r.getConcentration(), r.getUnit()),
+                    String.format(Locale.ROOT, "%.2g", r.getStandardUncertainty()), SHOWN.format(r.getRecorded()),
+                    approval.loginOf(r.getRecordedBy()), signatures});
             if (!"not signed".equals(signatures)) {
                 item.setBackground(Palette.PASS);
             }
@@ -104,7 +104,7 @@ public final class ResultReviewPanel extends Composite {
      * guessing).
      */
     public void reviewSelected() {
-        ResultInfo r = selected();
+        Result r = selected();
         if (r == null) {
             heading.setText(access == null ? NO_PROJECT : "Select a result in the table to review and sign it.");
         } else if (signatureDialog(r).open() == SignatureDialog.OK) {
@@ -113,13 +113,13 @@ public final class ResultReviewPanel extends Composite {
     }
 
     /** The selected result, or null. */
-    public ResultInfo selected() {
+    public Result selected() {
         int i = table.getSelectionIndex();
         return i < 0 ? null : results.get(i);
     }
 
     /** A signature dialog for a result, in this panel's session. */
-    public SignatureDialog signatureDialog(ResultInfo r) {
+    public SignatureDialog signatureDialog(Result r) {
         return new SignatureDialog(getShell(), approval, session, r);
     }
 
@@ -135,7 +135,7 @@ public final class ResultReviewPanel extends Composite {
         return table;
     }
 
-    public List<ResultInfo> results() {
+    public List<Result> results() {
         return results;
     }
 }

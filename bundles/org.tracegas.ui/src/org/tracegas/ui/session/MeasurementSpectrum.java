@@ -11,7 +11,7 @@ import java.util.stream.Stream;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.OperationCanceledException;
 
-import org.tracegas.store.ResultInfo;
+import org.tracegas.model.Result;
 import org.tracegas.store.Session;
 import org.tracegas.store.StoredSpectrum;
 import org.tracegas.store.WorkspaceStore;
@@ -52,7 +52,7 @@ public final class MeasurementSpectrum {
             return Optional.empty();
         }
         String results = store.results().results(actor, projectId).stream()
-                .filter(r -> measurementId.equals(r.values().measurementId())).map(MeasurementSpectrum::result)
+                .filter(r -> measurementId.equals(r.getMeasurementId())).map(MeasurementSpectrum::result)
                 .collect(Collectors.joining("; "));
         String title = label + " — stored " + found.content().getLiteral().toLowerCase(Locale.ROOT).replace('_', ' ')
                 + ", fit not kept" + (results.isEmpty() ? "; no results stored" : "; " + results);
@@ -65,9 +65,9 @@ public final class MeasurementSpectrum {
                 : SHOWN.format(time));
     }
 
-    private static String result(ResultInfo r) {
-        return String.format(Locale.ROOT, "%s %.4g ± %.2g %s%s", r.values().compound(), r.values().concentration(),
-                r.values().uncertainty(), r.values().unit(),
-                r.values().flags().isEmpty() ? "" : " " + r.values().flags());
+    private static String result(Result r) {
+        return String.format(Locale.ROOT, "%s %.4g ± %.2g %s%s", r.getCompound(), r.getConcentration(),
+                r.getStandardUncertainty(), r.getUnit(),
+                r.getFlags().isEmpty() ? "" : " " + r.getFlags());
     }
 }

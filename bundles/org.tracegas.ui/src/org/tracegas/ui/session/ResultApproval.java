@@ -8,8 +8,8 @@ import java.util.stream.Collectors;
 import org.tracegas.audit.Signature;
 import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.audit.SignatureRefusedException;
+import org.tracegas.model.Result;
 import org.tracegas.store.NoSuchObjectException;
-import org.tracegas.store.ResultInfo;
 import org.tracegas.store.ResultSignatureRequest;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
@@ -44,10 +44,10 @@ public final class ResultApproval {
      *                                   in the audit trail)
      * @throws org.tracegas.store.StoreException if the signature cannot be stored or the project not read
      */
-    public Signature sign(Session session, ResultInfo result, String typedLogin, char[] password,
+    public Signature sign(Session session, Result result, String typedLogin, char[] password,
             SignatureMeaning meaning, String comment) throws SignatureRefusedException {
         return store.reviews().signResult(session,
-                new ResultSignatureRequest(result.id(), typedLogin, password, meaning, comment));
+                new ResultSignatureRequest(result.getId(), typedLogin, password, meaning, comment));
     }
 
     /** Signatures given on a result so far, as the reader may see them. */

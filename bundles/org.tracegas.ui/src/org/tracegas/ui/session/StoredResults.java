@@ -16,7 +16,7 @@ import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.SubMonitor;
 
 import org.tracegas.model.Measurement;
-import org.tracegas.store.ResultInfo;
+import org.tracegas.model.Result;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.parts.ConcentrationTrace;
@@ -28,7 +28,7 @@ public final class StoredResults {
     public record Traces(List<ConcentrationTrace> traces, Instant start) {
     }
 
-    private record Point(Instant time, ResultInfo result) {
+    private record Point(Instant time, Result result) {
     }
 
     private static final DateTimeFormatter SHOWN = DateTimeFormatter.ofPattern("yyyy-MM-dd HH:mm 'UTC'")
@@ -57,14 +57,14 @@ public final class StoredResults {
             times.put(m.getId(), m.getTime());
         }
         progress.split(1);
-        List<ResultInfo> results = store.results().results(actor, projectId);
+        List<Result> results = store.results().results(actor, projectId);
         progress.split(1);
         Map<String, List<Point>> byCompound = new LinkedHashMap<>();
         Instant start = null;
-        for (ResultInfo r : results) {
-            Instant t = r.values().measurementId() == null ? null : times.get(r.values().measurementId());
+        for (Result r : results) {
+            Instant t = r.getMeasurementId() == null ? null : times.get(r.getMeasurementId());
             if (t != null) {
-                byCompound.computeIfAbsent(r.values().compound(), k -> new ArrayList<>()).add(new Point(t, r));
+                byCompound.computeIfAbsent(r.getCompound(), k -> new ArrayList<>()).add(new Point(t, r));
                 start = start == null || t.isBefore(start) ? t : start;
             }
         }
@@ -78,13 +78,13 @@ public final class StoredResults {
             List<String> ids = new ArrayList<>();
             for (int i = 0; i < points.size(); i++) {
                 hours[i] = Duration.between(start, points.get(i).time()).toMillis() / 3.6e6;
-                values[i] = points.get(i).result().values().concentration();
-                ids.add(points.get(i).result().values().measurementId());
-                if (!points.get(i).result().values().flags().isEmpty()) {
+                values[i] = points.get(i).result().getConcentration();
+                ids.add(points.get(i).result().getMeasurementId());
+                if (!points.get(i).result().getFlags().isEmpty()) {
                     flagged.set(i);
                 }
             }
-            traces.add(new ConcentrationTrace(e.getKey(), points.get(0).result().values().unit(), hours, values,
+            traces.add(new ConcentrationTrace(e.getKey(), points.get(0).result().getUnit(), hours, values,
                     flagged, ids));
         }
         return new Traces(List.copyOf(traces), start);

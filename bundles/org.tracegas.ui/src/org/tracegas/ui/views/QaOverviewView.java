@@ -10,8 +10,8 @@ import org.eclipse.ui.IWorkbenchPart;
 import org.eclipse.ui.part.ViewPart;
 import org.tracegas.qa.campaign.StoredQaChecks;
 import org.tracegas.model.Project;
+import org.tracegas.model.QaOutcome;
 import org.tracegas.qa.checks.CheckOutcome;
-import org.tracegas.store.QaCheckInfo;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.jobs.LatestLoad;
@@ -62,7 +62,7 @@ public final class QaOverviewView extends ViewPart implements FollowsTree {
 
     /** The project's stored outcomes, grouped by the method version that judged them, as recorded. */
     private static List<CheckOutcome> stored(WorkspaceStore store, Session actor, String projectId) {
-        return store.qa().checks(actor, projectId).stream().map(QaCheckInfo::methodVersionId).distinct()
+        return store.qa().checks(actor, projectId).stream().map(QaOutcome::getMethodVersionId).distinct()
                 .flatMap(version -> StoredQaChecks.load(store, actor, projectId, version).stream()).toList();
     }
 

@@ -11,6 +11,7 @@ import java.util.Set;
 import java.util.UUID;
 import java.util.concurrent.TimeUnit;
 
+import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -26,14 +27,16 @@ import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.model.MeasurementKind;
+import org.tracegas.model.Provenance;
+import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
+import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
-import org.tracegas.store.NewResult;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
@@ -103,10 +106,12 @@ public class BlockStorageBenchmark {
             for (int k = 0; k < POINTS; k++) {
                 values[k] = 0.01 * Math.sin(0.001 * k * (i + 1));
             }
-            List<NewResult> results = new ArrayList<>();
+            Provenance provenance = new Provenance(method, library, "bench",
+                    "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855");
+            List<Result> results = new ArrayList<>();
             for (String compound : COMPOUNDS) {
-                results.add(new NewResult(null, compound, 10 + i, 0.5, 0.2, "ppm", Set.of(ResultFlag.HIGH_RESIDUAL),
-                        method, library, "bench", "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855"));
+                results.add(Results.of(null, compound, 10 + i, 0.5, 0.2, "ppm", Set.of(ResultFlag.HIGH_RESIDUAL),
+                        provenance, null));
             }
             block.add(new ProcessedSpectrum(MeasurementKind.SAMPLE, Instant.EPOCH.plusSeconds(60L * i), 438.15,
                     1013.0, new Spectrum(axis, values, Ordinate.ABSORBANCE),
@@ -134,8 +139,9 @@ public class BlockStorageBenchmark {
                     p.cellTemperature(), p.cellPressure());
             store.spectra().store(analyst, projectId, new SpectrumInput(measurement, SpectralContent.ABSORBANCE,
                     p.absorbance(), p.encoding()));
-            stored += store.results().recordAll(analyst, projectId,
-                    p.results().stream().map(r -> r.withMeasurement(measurement)).toList()).size();
+            List<Result> results = new ArrayList<>(EcoreUtil.copyAll(p.results()));
+            results.forEach(r -> r.setMeasurementId(measurement));
+            stored += store.results().recordAll(analyst, projectId, results).size();
         }
         return stored;
     }

@@ -1,4 +1,4 @@
-package org.tracegas.store;
+package org.tracegas.model;
 
 /**
  * What a result was corrected with and how its uncertainty was widened, each value with where it came from: the
