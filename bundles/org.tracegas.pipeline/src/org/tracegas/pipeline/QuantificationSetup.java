@@ -3,6 +3,7 @@ package org.tracegas.pipeline;
 import java.util.List;
 import java.util.OptionalDouble;
 
+import org.tracegas.method.MethodRecipe;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
@@ -43,10 +44,12 @@ public final class QuantificationSetup {
      * @param software    named in each result's reprocessing record
      * @param ctsPathM    the effective path the campaign's CTS readings measured ({@code CtsPath}), in m: required
      *                    by a method whose path source is CTS-derived, refused by one whose path is nominal
-     * @throws IllegalArgumentException if there is no background, or the CTS path is missing or not wanted
+     * @throws IllegalArgumentException if there is no background, the CTS path is missing or not wanted, or the
+     *                                  method has [recipe] steps
      */
     public QuantificationSetup(VersionInfo methodVersion, StoredMethod method, List<Background> backgrounds,
             String software, OptionalDouble ctsPathM) {
+        requireNoRecipeSteps(method);
         boolean fromCts = method.pathSource() == PathOrigin.CTS_DERIVED;
         if (fromCts != ctsPathM.isPresent()) {
             throw new IllegalArgumentException(fromCts ? "method " + method.method().name() + " takes its path from "
@@ -64,6 +67,21 @@ public final class QuantificationSetup {
         versions = new AnalysisVersions(methodVersion.id(), method.libraryVersionId());
         correction = fromCts ? ResultCorrection.of(method).withCtsPath(ctsPathM.getAsDouble())
                 : ResultCorrection.of(method);
+    }
+
+    /**
+     * Refuses a method with [recipe] steps: the stream of container records runs the transform and the ratio
+     * only, and results that name a method version must come from everything that version says.
+     *
+     * @throws IllegalArgumentException naming the method and its steps
+     */
+    public static void requireNoRecipeSteps(StoredMethod method) {
+        List<String> steps = MethodRecipe.steps(method.recipe());
+        if (!steps.isEmpty()) {
+            throw new IllegalArgumentException("method " + method.method().name() + " has [recipe] steps "
+                    + steps + ", which the stream of interferogram containers does not run: import the records "
+                    + "as measurements and quantify those, which runs the recipe");
+        }
     }
 
     /** The processor storing into a project of the workspace as the actor. */

@@ -17,6 +17,7 @@ import org.tracegas.pipeline.MeasuredSpectrum;
 import org.tracegas.pipeline.MeasurementQuantification;
 import org.tracegas.pipeline.MeasurementRole;
 import org.tracegas.pipeline.QaMeasurements;
+import org.tracegas.pipeline.QuantificationSetup;
 import org.tracegas.pipeline.ResultCorrection;
 import org.tracegas.pipeline.SpectrumChain;
 import org.tracegas.model.Measurement;
@@ -146,6 +147,7 @@ public final class QaEvaluation {
 
     /** The QA measurements through the method's transform and the ratio against the QA file's backgrounds. */
     static List<MeasuredSpectrum> measured(QaPlan plan, StoredMethod method, ContainerContents qa) {
+        QuantificationSetup.requireNoRecipeSteps(method);
         SpectrumChain chain = new SpectrumChain(new InterferogramTransform(method.transform()),
                 new BackgroundRatio(plan.backgroundAgeLimit()), new BackgroundTimeline(qa.backgrounds()));
         return qa.others().stream().map(chain::process).toList();

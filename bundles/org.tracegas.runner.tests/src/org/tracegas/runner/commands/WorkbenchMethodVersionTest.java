@@ -215,9 +215,21 @@ class WorkbenchMethodVersionTest {
         }
 
         // the same files imported into a second project and quantified there through the lab's file route, which
-        // puts every absorbance through the method's recipe (streamed containers are fitted without one)
+        // puts every absorbance through the method's recipe; the stream of containers runs no recipe, so it refuses
+        // the version rather than store results that name a recipe which did not run
         ok("project-add", "--workspace", ws, "--as", "ana", "--client", "Client W", "--code", "P-W3", "--name",
                 "Kiln survey, method version 3");
+        ByteArrayOutputStream refused = new ByteArrayOutputStream();
+        assertEquals(ExitCode.BAD_INPUT, run(refused, "quantify", "--workspace", ws, "--as", "ana", "--project",
+                "P-W3", "--method", "Stack", "--method-version", "3", "--backgrounds", backgrounds.toString(),
+                "--file", stack.toString()));
+        assertTrue(refused.toString(StandardCharsets.UTF_8).contains("method version 3: method Stack has [recipe]"
+                + " steps [" + BASELINE_STEP + "]"), refused.toString(StandardCharsets.UTF_8));
+        try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
+            Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
+            String project = store.projects().findByCode(ana, "P-W3").orElseThrow().getId();
+            assertEquals(List.of(), store.results().results(ana, project), "nothing stored by the refused run");
+        }
         ok("quantify", "--workspace", ws, "--as", "ana", "--project", "P-W3", "--method", "Stack",
                 "--method-version", "3", "--background-file", backgrounds.toString(), "--file", stack.toString());
 

@@ -92,7 +92,8 @@ public final class BatchWorkCommand implements Command {
                 stack = new QuantificationSetup(found.version(), found.method(), backgrounds, StoredMethods.SOFTWARE,
                         description.ctsPathM()).processor(store, actor, batch.projectId());
             } catch (BadInputException | FileFormatException | IllegalArgumentException e) {
-                // an IllegalArgumentException: the batch lacks the CTS path its method needs, or has one it does not
+                // an IllegalArgumentException: the batch lacks the CTS path its method needs, or has one it does not, or
+                // its method has [recipe] steps, which a stream of containers does not run
                 context.err().println("tracegas batch-work: batch " + batch.id() + ": " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }

@@ -10,6 +10,7 @@ import java.util.OptionalDouble;
 import org.tracegas.importer.ImportException;
 import org.tracegas.pipeline.ContainerContents;
 import org.tracegas.pipeline.ProjectQuantification;
+import org.tracegas.pipeline.QuantificationSetup;
 import org.tracegas.qa.campaign.CtsPath;
 import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.library.io.FileFormatException;
@@ -56,6 +57,12 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
             found = StoredMethods.find(store, options);
         } catch (FileFormatException e) {
             throw new BadInputException(e.getMessage(), e);
+        }
+        try {
+            QuantificationSetup.requireNoRecipeSteps(found.method());
+        } catch (IllegalArgumentException e) {
+            throw new BadInputException("method version " + found.version().number() + ": " + e.getMessage()
+                    + "; nothing done", e);
         }
         Optional<WorkBatchInfo> unfinished = store.workUnits().unfinishedBatch(actor, project.getId(),
                 found.version().id());
