@@ -18,19 +18,20 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.pipeline.AnalysisVersions;
-import org.tracegas.pipeline.BackgroundTimeline;
-import org.tracegas.report.campaign.MinuteSeries;
-import org.tracegas.pipeline.SpectrumChain;
-import org.tracegas.pipeline.StackProcessor;
-import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.container.AcquisitionHeader;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
 import org.tracegas.library.ReferenceLibrary;
+import org.tracegas.method.StoredMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
 import org.tracegas.model.Role;
+import org.tracegas.model.VersionKind;
+import org.tracegas.pipeline.AnalysisVersions;
+import org.tracegas.pipeline.BackgroundTimeline;
+import org.tracegas.pipeline.SpectrumChain;
+import org.tracegas.pipeline.StackProcessor;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
@@ -41,10 +42,9 @@ import org.tracegas.quantify.PreparedMethod;
 import org.tracegas.quantify.ProgressListener;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.Quantifier;
+import org.tracegas.report.campaign.MinuteSeries;
 import org.tracegas.spectrum.Interferogram;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -70,8 +70,8 @@ class StackProcessorTest {
     private WorkspaceStore store;
     private Session analyst;
     private Project project;
-    private VersionInfo met;
-    private VersionInfo lib;
+    private ContentVersion met;
+    private ContentVersion lib;
 
     @BeforeEach
     void setUp() throws Exception {
@@ -91,7 +91,7 @@ class StackProcessorTest {
         lib = store.versions().create(analyst, VersionKind.LIBRARY, library.name(),
                 "sha=" + library.contentHash() + "\n", "test");
         met = store.versions().create(analyst, VersionKind.METHOD, method.name(),
-                new StoredMethod(method, DemoMethod.transform(), lib.id(), library.contentHash()).content(), "test");
+                new StoredMethod(method, DemoMethod.transform(), lib.getId(), library.contentHash()).content(), "test");
     }
 
     @AfterEach
@@ -128,7 +128,7 @@ class StackProcessorTest {
         Quantifier quantifier = new Quantifier(PreparedMethod.prepare(method, background.singleBeam().axis()),
                 library.contentHash(), "test", false);
         return new StackProcessor(store, analyst, project.getId(), chain, new BatchQuantifier(quantifier, threads),
-                new AnalysisVersions(met.id(), lib.id()), blockSize);
+                new AnalysisVersions(met.getId(), lib.getId()), blockSize);
     }
 
     @Test
@@ -140,8 +140,8 @@ class StackProcessorTest {
         assertEquals(TRUTH.size(), outcome.delivered());
         assertFalse(outcome.cancelled());
         MinuteSeries series = MinuteSeries.of(store.projects().measurements(analyst, project.getId()),
-                store.results().results(analyst, project.getId()), met.id());
-        assertEquals(lib.id(), series.libraryVersionId());
+                store.results().results(analyst, project.getId()), met.getId());
+        assertEquals(lib.getId(), series.libraryVersionId());
         for (int i = 0; i < TRUTH.size(); i++) {
             MinuteSeries.Point co = series.compound("CO").get(i);
             assertEquals(START.plusSeconds(60L * i), co.time());
@@ -149,7 +149,7 @@ class StackProcessorTest {
             assertEquals(TRUTH.get(i).get("CO"), co.ppm(), 0.03 * TRUTH.get(i).get("CO"));
             assertEquals(TRUTH.get(i).get("NO"), series.compound("NO").get(i).ppm(), 0.03 * TRUTH.get(i).get("NO"));
         }
-        assertTrue(store.versions().version(met.id()).frozen(), "a method version is frozen once results use it");
+        assertTrue(store.versions().version(met.getId()).isFrozen(), "a method version is frozen once results use it");
         assertTrue(store.verifyAuditTrail().intact());
     }
 

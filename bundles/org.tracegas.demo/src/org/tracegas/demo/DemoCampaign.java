@@ -11,32 +11,32 @@ import java.util.Set;
 import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.audit.SignatureRefusedException;
 import org.tracegas.audit.VerificationReport;
-import org.tracegas.report.campaign.CampaignReport;
-import org.tracegas.pipeline.ContainerContents;
-import org.tracegas.method.LibraryPlan;
-import org.tracegas.method.LibrarySynthesis;
-import org.tracegas.method.MethodDefinition;
-import org.tracegas.report.campaign.MinuteSeries;
-import org.tracegas.pipeline.ProjectQuantification;
-import org.tracegas.qa.campaign.QaEvaluation;
-import org.tracegas.qa.campaign.QaPlan;
-import org.tracegas.report.campaign.ReportPlan;
-import org.tracegas.report.campaign.ReportSignatures;
-import org.tracegas.report.campaign.WholeFile;
 import org.tracegas.importer.ImportException;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.LibraryManifestWriter;
+import org.tracegas.method.LibraryPlan;
+import org.tracegas.method.LibrarySynthesis;
+import org.tracegas.method.MethodDefinition;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.Role;
+import org.tracegas.pipeline.ContainerContents;
+import org.tracegas.pipeline.ProjectQuantification;
 import org.tracegas.preprocess.InterferogramTransform;
+import org.tracegas.qa.campaign.QaEvaluation;
+import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.quantify.BatchOutcome;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.quantify.ProgressListener;
 import org.tracegas.report.ReportContent;
+import org.tracegas.report.campaign.CampaignReport;
+import org.tracegas.report.campaign.MinuteSeries;
+import org.tracegas.report.campaign.ReportPlan;
+import org.tracegas.report.campaign.ReportSignatures;
+import org.tracegas.report.campaign.WholeFile;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -119,9 +119,9 @@ public final class DemoCampaign {
             Project project = store.projects().findByCode(analyst, DemoScenario.PROJECT_CODE)
                     .orElseGet(() -> DemoStaff.createProject(store, analyst));
             MethodDefinition.Recorded recorded = definition.record(store, analyst);
-            VersionInfo methodVersion = recorded.methodVersion();
+            ContentVersion methodVersion = recorded.methodVersion();
             MinuteSeries series = MinuteSeries.of(store.projects().measurements(analyst, project.getId()),
-                    store.results().results(analyst, project.getId()), methodVersion.id());
+                    store.results().results(analyst, project.getId()), methodVersion.getId());
             boolean reuse = series.size() >= DemoScenario.SAMPLES;
             long processed = 0;
             if (!reuse) {
@@ -138,7 +138,7 @@ public final class DemoCampaign {
                         + "from the stored data.");
             }
             List<CheckOutcome> checks = new QaEvaluation(store, analyst, project.getId(), SOFTWARE)
-                    .run(methodVersion.id(), recorded.method(), qaPlan, qa).checks();
+                    .run(methodVersion.getId(), recorded.method(), qaPlan, qa).checks();
             CampaignReport report = new CampaignReport(store, analyst, project.getId(), SOFTWARE);
             ReportContent content = report.content(methodVersion, recorded.method(), reportPlan);
             String hash = content.contentHash();

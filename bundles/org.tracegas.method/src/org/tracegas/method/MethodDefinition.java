@@ -11,6 +11,8 @@ import java.util.Set;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryVersionText;
+import org.tracegas.model.ContentVersion;
+import org.tracegas.model.VersionKind;
 import org.tracegas.preprocess.Recipe;
 import org.tracegas.preprocess.TransformSettings;
 import org.tracegas.qa.basis.PathOrigin;
@@ -26,8 +28,6 @@ import org.tracegas.quantify.ShiftTerm;
 import org.tracegas.quantify.WavenumberWindow;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -87,7 +87,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         PathOrigin pathSource) {
 
     /** The versions a method file gave: its library's, its own, and the method as its version holds it. */
-    public record Recorded(VersionInfo libraryVersion, VersionInfo methodVersion, StoredMethod method) {
+    public record Recorded(ContentVersion libraryVersion, ContentVersion methodVersion, StoredMethod method) {
     }
 
     private static final Set<String> SETTINGS = Set.of("method", "path-length", "path-source", "resolution",
@@ -360,11 +360,11 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         String libraryContent = LibraryVersionText.of(libraryManifest);
         StoredMethod built = stored(library, "", "");
         QuantificationMethod method = built.method();
-        VersionInfo libraryVersion = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
+        ContentVersion libraryVersion = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
                 libraryContent, "library of method " + method.name());
-        StoredMethod stored = new StoredMethod(method, transform, libraryVersion.id(), library.contentHash(), recipe,
+        StoredMethod stored = new StoredMethod(method, transform, libraryVersion.getId(), library.contentHash(), recipe,
                 resolution, built.referenceConditions(), pathSource);
-        VersionInfo methodVersion = VersionRecorder.ensure(store, actor, VersionKind.METHOD, method.name(),
+        ContentVersion methodVersion = VersionRecorder.ensure(store, actor, VersionKind.METHOD, method.name(),
                 stored.content(), "defined from " + file.getFileName());
         return new Recorded(libraryVersion, methodVersion, stored);
     }

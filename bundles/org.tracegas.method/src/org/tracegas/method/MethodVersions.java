@@ -3,10 +3,14 @@ package org.tracegas.method;
 import java.util.ArrayList;
 import java.util.List;
 
+import org.eclipse.emf.ecore.EAttribute;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.AnalysisMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.VersionKind;
 import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.model.WorkspacePackage;
 import org.tracegas.preprocess.Recipe;
 import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.AlgorithmSetting;
@@ -19,8 +23,6 @@ import org.tracegas.quantify.ReportingUnit;
 import org.tracegas.quantify.ShiftTerm;
 import org.tracegas.quantify.WavenumberWindow;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -41,31 +43,31 @@ public final class MethodVersions {
     }
 
     /** A METHOD version read from the store into the model: the method with this one version. */
-    public static AnalysisMethod read(WorkspaceStore store, VersionInfo version) throws FileFormatException {
-        return model(version, StoredMethod.parse(store.versions().content(version.id()), "method version "
-                + version.id()));
+    public static AnalysisMethod read(WorkspaceStore store, ContentVersion version) throws FileFormatException {
+        return model(version, StoredMethod.parse(store.versions().content(version.getId()), "method version "
+                + version.getId()));
     }
 
     /** The model of a method version whose stored method is at hand. */
-    public static AnalysisMethod model(VersionInfo version, StoredMethod stored) {
+    public static AnalysisMethod model(ContentVersion version, StoredMethod stored) {
         AnalysisMethod m = model(version);
         fillRegions(m.getVersions().get(0), stored);
         return m;
     }
 
-    /** The model of a method version as the store lists it, without its regions. */
-    public static AnalysisMethod model(VersionInfo version) {
+    /**
+     * The model of a method version as the store lists it, without its regions: a method version carrying every
+     * stored field of the version (kind, item, number, parent, author, reason, hash, frozen, row version).
+     */
+    public static AnalysisMethod model(ContentVersion version) {
         WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
         AnalysisMethod m = f.createAnalysisMethod();
-        m.setId(version.itemId());
-        m.setName(version.name());
+        m.setId(version.getItemId());
+        m.setName(version.getItemName());
         MethodVersion mv = f.createMethodVersion();
-        mv.setId(version.id());
-        mv.setNumber(version.number());
-        mv.setFrozen(version.frozen());
-        mv.setReason(version.reason());
-        mv.setCreated(version.created());
-        mv.setContentHash(version.contentHash());
+        for (EAttribute a : WorkspacePackage.Literals.CONTENT_VERSION.getEAllAttributes()) {
+            mv.eSet(a, version.eGet(a));
+        }
         m.getVersions().add(mv);
         return m;
     }
@@ -332,18 +334,18 @@ public final class MethodVersions {
      * @throws FileFormatException      when the opened version's stored text cannot be read
      * @throws IllegalArgumentException naming the field of the draft the method cannot take, or a blank reason
      */
-    public static VersionInfo save(WorkspaceStore store, Session actor, AnalysisMethod method, MethodVersion draft,
+    public static ContentVersion save(WorkspaceStore store, Session actor, AnalysisMethod method, MethodVersion draft,
             String reason) throws FileFormatException {
         if (reason == null || reason.isBlank()) {
             throw new IllegalArgumentException("reason: a new method version needs a reason");
         }
-        VersionInfo opened = store.versions().version(draft.getId());
-        if (opened.kind() != VersionKind.METHOD) {
-            throw new IllegalArgumentException("version " + draft.getId() + " is a " + opened.kind()
+        ContentVersion opened = store.versions().version(draft.getId());
+        if (opened.getKind() != VersionKind.METHOD) {
+            throw new IllegalArgumentException("version " + draft.getId() + " is a " + opened.getKind()
                     + " version, not a method");
         }
-        StoredMethod base = StoredMethod.parse(store.versions().content(opened.id()), "method version "
-                + opened.id());
-        return store.versions().revise(actor, opened.id(), edited(base, method, draft).content(), reason.strip());
+        StoredMethod base = StoredMethod.parse(store.versions().content(opened.getId()), "method version "
+                + opened.getId());
+        return store.versions().revise(actor, opened.getId(), edited(base, method, draft).content(), reason.strip());
     }
 }

@@ -2,9 +2,9 @@ package org.tracegas.method;
 
 import java.util.Optional;
 
+import org.tracegas.model.ContentVersion;
+import org.tracegas.model.VersionKind;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -16,13 +16,13 @@ public final class VersionRecorder {
     private VersionRecorder() {
     }
 
-    public static VersionInfo ensure(WorkspaceStore store, Session actor, VersionKind kind, String name,
+    public static ContentVersion ensure(WorkspaceStore store, Session actor, VersionKind kind, String name,
             String content, String reason) {
-        Optional<VersionInfo> latest = store.versions().latest(kind, name);
-        if (latest.isPresent() && store.versions().content(latest.get().id()).equals(content)) {
+        Optional<ContentVersion> latest = store.versions().latest(kind, name);
+        if (latest.isPresent() && store.versions().content(latest.get().getId()).equals(content)) {
             return latest.get();
         }
-        return latest.map(v -> store.versions().revise(actor, v.id(), content, reason))
+        return latest.map(v -> store.versions().revise(actor, v.getId(), content, reason))
                 .orElseGet(() -> store.versions().create(actor, kind, name, content, reason));
     }
 }

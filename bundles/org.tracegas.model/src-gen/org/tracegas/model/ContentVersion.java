@@ -10,15 +10,19 @@ import java.time.Instant;
  * <!-- end-user-doc -->
  *
  * <!-- begin-model-doc -->
- * An immutable version of versioned content. It is frozen once a result uses it; an edit makes a new version.
+ * An immutable version of a method or a reference library, as the store keeps it. It is frozen once a result uses it; an edit makes a new version. Its item and parent are named by id: versions are read one at a time, without their item's other versions.
  * <!-- end-model-doc -->
  *
  * <p>
  * The following features are supported:
  * </p>
  * <ul>
+ *   <li>{@link org.tracegas.model.ContentVersion#getKind <em>Kind</em>}</li>
+ *   <li>{@link org.tracegas.model.ContentVersion#getItemId <em>Item Id</em>}</li>
+ *   <li>{@link org.tracegas.model.ContentVersion#getItemName <em>Item Name</em>}</li>
  *   <li>{@link org.tracegas.model.ContentVersion#getNumber <em>Number</em>}</li>
- *   <li>{@link org.tracegas.model.ContentVersion#getParent <em>Parent</em>}</li>
+ *   <li>{@link org.tracegas.model.ContentVersion#getParentId <em>Parent Id</em>}</li>
+ *   <li>{@link org.tracegas.model.ContentVersion#getAuthorId <em>Author Id</em>}</li>
  *   <li>{@link org.tracegas.model.ContentVersion#getReason <em>Reason</em>}</li>
  *   <li>{@link org.tracegas.model.ContentVersion#getCreated <em>Created</em>}</li>
  *   <li>{@link org.tracegas.model.ContentVersion#getContentHash <em>Content Hash</em>}</li>
@@ -26,10 +30,88 @@ import java.time.Instant;
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getContentVersion()
- * @model abstract="true"
+ * @model
  * @generated
  */
 public interface ContentVersion extends StoredObject {
+	/**
+	 * Returns the value of the '<em><b>Kind</b></em>' attribute.
+	 * The literals are from the enumeration {@link org.tracegas.model.VersionKind}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Whether this is a version of a method or of a library.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Kind</em>' attribute.
+	 * @see org.tracegas.model.VersionKind
+	 * @see #setKind(VersionKind)
+	 * @see org.tracegas.model.WorkspacePackage#getContentVersion_Kind()
+	 * @model
+	 * @generated
+	 */
+	VersionKind getKind();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.ContentVersion#getKind <em>Kind</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Kind</em>' attribute.
+	 * @see org.tracegas.model.VersionKind
+	 * @see #getKind()
+	 * @generated
+	 */
+	void setKind(VersionKind value);
+
+	/**
+	 * Returns the value of the '<em><b>Item Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Id of the method or library this version belongs to.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Item Id</em>' attribute.
+	 * @see #setItemId(String)
+	 * @see org.tracegas.model.WorkspacePackage#getContentVersion_ItemId()
+	 * @model
+	 * @generated
+	 */
+	String getItemId();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.ContentVersion#getItemId <em>Item Id</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Item Id</em>' attribute.
+	 * @see #getItemId()
+	 * @generated
+	 */
+	void setItemId(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Item Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Name of the method or library this version belongs to.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Item Name</em>' attribute.
+	 * @see #setItemName(String)
+	 * @see org.tracegas.model.WorkspacePackage#getContentVersion_ItemName()
+	 * @model
+	 * @generated
+	 */
+	String getItemName();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.ContentVersion#getItemName <em>Item Name</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Item Name</em>' attribute.
+	 * @see #getItemName()
+	 * @generated
+	 */
+	void setItemName(String value);
+
 	/**
 	 * Returns the value of the '<em><b>Number</b></em>' attribute.
 	 * <!-- begin-user-doc -->
@@ -56,29 +138,54 @@ public interface ContentVersion extends StoredObject {
 	void setNumber(int value);
 
 	/**
-	 * Returns the value of the '<em><b>Parent</b></em>' reference.
+	 * Returns the value of the '<em><b>Parent Id</b></em>' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * <!-- begin-model-doc -->
-	 * The version this one was derived from; none for the first.
+	 * Id of the version this one was derived from; null for the first.
 	 * <!-- end-model-doc -->
-	 * @return the value of the '<em>Parent</em>' reference.
-	 * @see #setParent(ContentVersion)
-	 * @see org.tracegas.model.WorkspacePackage#getContentVersion_Parent()
+	 * @return the value of the '<em>Parent Id</em>' attribute.
+	 * @see #setParentId(String)
+	 * @see org.tracegas.model.WorkspacePackage#getContentVersion_ParentId()
 	 * @model
 	 * @generated
 	 */
-	ContentVersion getParent();
+	String getParentId();
 
 	/**
-	 * Sets the value of the '{@link org.tracegas.model.ContentVersion#getParent <em>Parent</em>}' reference.
+	 * Sets the value of the '{@link org.tracegas.model.ContentVersion#getParentId <em>Parent Id</em>}' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @param value the new value of the '<em>Parent</em>' reference.
-	 * @see #getParent()
+	 * @param value the new value of the '<em>Parent Id</em>' attribute.
+	 * @see #getParentId()
 	 * @generated
 	 */
-	void setParent(ContentVersion value);
+	void setParentId(String value);
+
+	/**
+	 * Returns the value of the '<em><b>Author Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * Id of the workspace user who made this version; set by the store.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Author Id</em>' attribute.
+	 * @see #setAuthorId(String)
+	 * @see org.tracegas.model.WorkspacePackage#getContentVersion_AuthorId()
+	 * @model
+	 * @generated
+	 */
+	String getAuthorId();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.ContentVersion#getAuthorId <em>Author Id</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Author Id</em>' attribute.
+	 * @see #getAuthorId()
+	 * @generated
+	 */
+	void setAuthorId(String value);
 
 	/**
 	 * Returns the value of the '<em><b>Reason</b></em>' attribute.

@@ -545,22 +545,58 @@ public interface WorkspacePackage extends EPackage {
 	int CONTENT_VERSION__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
 
 	/**
+	 * The feature id for the '<em><b>Kind</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTENT_VERSION__KIND = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Item Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTENT_VERSION__ITEM_ID = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Item Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTENT_VERSION__ITEM_NAME = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
 	 * The feature id for the '<em><b>Number</b></em>' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int CONTENT_VERSION__NUMBER = STORED_OBJECT_FEATURE_COUNT + 0;
+	int CONTENT_VERSION__NUMBER = STORED_OBJECT_FEATURE_COUNT + 3;
 
 	/**
-	 * The feature id for the '<em><b>Parent</b></em>' reference.
+	 * The feature id for the '<em><b>Parent Id</b></em>' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int CONTENT_VERSION__PARENT = STORED_OBJECT_FEATURE_COUNT + 1;
+	int CONTENT_VERSION__PARENT_ID = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Author Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CONTENT_VERSION__AUTHOR_ID = STORED_OBJECT_FEATURE_COUNT + 5;
 
 	/**
 	 * The feature id for the '<em><b>Reason</b></em>' attribute.
@@ -569,7 +605,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int CONTENT_VERSION__REASON = STORED_OBJECT_FEATURE_COUNT + 2;
+	int CONTENT_VERSION__REASON = STORED_OBJECT_FEATURE_COUNT + 6;
 
 	/**
 	 * The feature id for the '<em><b>Created</b></em>' attribute.
@@ -578,7 +614,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int CONTENT_VERSION__CREATED = STORED_OBJECT_FEATURE_COUNT + 3;
+	int CONTENT_VERSION__CREATED = STORED_OBJECT_FEATURE_COUNT + 7;
 
 	/**
 	 * The feature id for the '<em><b>Content Hash</b></em>' attribute.
@@ -587,7 +623,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int CONTENT_VERSION__CONTENT_HASH = STORED_OBJECT_FEATURE_COUNT + 4;
+	int CONTENT_VERSION__CONTENT_HASH = STORED_OBJECT_FEATURE_COUNT + 8;
 
 	/**
 	 * The feature id for the '<em><b>Frozen</b></em>' attribute.
@@ -596,7 +632,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int CONTENT_VERSION__FROZEN = STORED_OBJECT_FEATURE_COUNT + 5;
+	int CONTENT_VERSION__FROZEN = STORED_OBJECT_FEATURE_COUNT + 9;
 
 	/**
 	 * The number of structural features of the '<em>Content Version</em>' class.
@@ -605,7 +641,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int CONTENT_VERSION_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 6;
+	int CONTENT_VERSION_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 10;
 
 	/**
 	 * The number of operations of the '<em>Content Version</em>' class.
@@ -782,6 +818,33 @@ public interface WorkspacePackage extends EPackage {
 	int METHOD_VERSION__ROW_VERSION = CONTENT_VERSION__ROW_VERSION;
 
 	/**
+	 * The feature id for the '<em><b>Kind</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__KIND = CONTENT_VERSION__KIND;
+
+	/**
+	 * The feature id for the '<em><b>Item Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__ITEM_ID = CONTENT_VERSION__ITEM_ID;
+
+	/**
+	 * The feature id for the '<em><b>Item Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__ITEM_NAME = CONTENT_VERSION__ITEM_NAME;
+
+	/**
 	 * The feature id for the '<em><b>Number</b></em>' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -791,13 +854,22 @@ public interface WorkspacePackage extends EPackage {
 	int METHOD_VERSION__NUMBER = CONTENT_VERSION__NUMBER;
 
 	/**
-	 * The feature id for the '<em><b>Parent</b></em>' reference.
+	 * The feature id for the '<em><b>Parent Id</b></em>' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int METHOD_VERSION__PARENT = CONTENT_VERSION__PARENT;
+	int METHOD_VERSION__PARENT_ID = CONTENT_VERSION__PARENT_ID;
+
+	/**
+	 * The feature id for the '<em><b>Author Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int METHOD_VERSION__AUTHOR_ID = CONTENT_VERSION__AUTHOR_ID;
 
 	/**
 	 * The feature id for the '<em><b>Reason</b></em>' attribute.
@@ -1382,6 +1454,16 @@ public interface WorkspacePackage extends EPackage {
 	int SPECTRAL_CONTENT = 14;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.VersionKind <em>Version Kind</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.VersionKind
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getVersionKind()
+	 * @generated
+	 */
+	int VERSION_KIND = 15;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1389,7 +1471,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 15;
+	int RESULT_FLAG = 16;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -1399,7 +1481,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 16;
+	int ROLE = 17;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -1409,7 +1491,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 17;
+	int INSTANT = 18;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -1419,7 +1501,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 18;
+	int SPECTRUM = 19;
 
 	/**
 	 * The meta object id for the '<em>Provenance</em>' data type.
@@ -1429,7 +1511,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
 	 * @generated
 	 */
-	int PROVENANCE = 19;
+	int PROVENANCE = 20;
 
 	/**
 	 * The meta object id for the '<em>Result Conditions</em>' data type.
@@ -1439,7 +1521,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
 	 * @generated
 	 */
-	int RESULT_CONDITIONS = 20;
+	int RESULT_CONDITIONS = 21;
 
 
 	/**
@@ -1822,6 +1904,39 @@ public interface WorkspacePackage extends EPackage {
 	EClass getContentVersion();
 
 	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ContentVersion#getKind <em>Kind</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Kind</em>'.
+	 * @see org.tracegas.model.ContentVersion#getKind()
+	 * @see #getContentVersion()
+	 * @generated
+	 */
+	EAttribute getContentVersion_Kind();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ContentVersion#getItemId <em>Item Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Item Id</em>'.
+	 * @see org.tracegas.model.ContentVersion#getItemId()
+	 * @see #getContentVersion()
+	 * @generated
+	 */
+	EAttribute getContentVersion_ItemId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ContentVersion#getItemName <em>Item Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Item Name</em>'.
+	 * @see org.tracegas.model.ContentVersion#getItemName()
+	 * @see #getContentVersion()
+	 * @generated
+	 */
+	EAttribute getContentVersion_ItemName();
+
+	/**
 	 * Returns the meta object for the attribute '{@link org.tracegas.model.ContentVersion#getNumber <em>Number</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1833,15 +1948,26 @@ public interface WorkspacePackage extends EPackage {
 	EAttribute getContentVersion_Number();
 
 	/**
-	 * Returns the meta object for the reference '{@link org.tracegas.model.ContentVersion#getParent <em>Parent</em>}'.
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ContentVersion#getParentId <em>Parent Id</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @return the meta object for the reference '<em>Parent</em>'.
-	 * @see org.tracegas.model.ContentVersion#getParent()
+	 * @return the meta object for the attribute '<em>Parent Id</em>'.
+	 * @see org.tracegas.model.ContentVersion#getParentId()
 	 * @see #getContentVersion()
 	 * @generated
 	 */
-	EReference getContentVersion_Parent();
+	EAttribute getContentVersion_ParentId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ContentVersion#getAuthorId <em>Author Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Author Id</em>'.
+	 * @see org.tracegas.model.ContentVersion#getAuthorId()
+	 * @see #getContentVersion()
+	 * @generated
+	 */
+	EAttribute getContentVersion_AuthorId();
 
 	/**
 	 * Returns the meta object for the attribute '{@link org.tracegas.model.ContentVersion#getReason <em>Reason</em>}'.
@@ -2495,6 +2621,16 @@ public interface WorkspacePackage extends EPackage {
 	EEnum getSpectralContent();
 
 	/**
+	 * Returns the meta object for enum '{@link org.tracegas.model.VersionKind <em>Version Kind</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Version Kind</em>'.
+	 * @see org.tracegas.model.VersionKind
+	 * @generated
+	 */
+	EEnum getVersionKind();
+
+	/**
 	 * Returns the meta object for enum '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -2886,6 +3022,30 @@ public interface WorkspacePackage extends EPackage {
 		EClass CONTENT_VERSION = eINSTANCE.getContentVersion();
 
 		/**
+		 * The meta object literal for the '<em><b>Kind</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTENT_VERSION__KIND = eINSTANCE.getContentVersion_Kind();
+
+		/**
+		 * The meta object literal for the '<em><b>Item Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTENT_VERSION__ITEM_ID = eINSTANCE.getContentVersion_ItemId();
+
+		/**
+		 * The meta object literal for the '<em><b>Item Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTENT_VERSION__ITEM_NAME = eINSTANCE.getContentVersion_ItemName();
+
+		/**
 		 * The meta object literal for the '<em><b>Number</b></em>' attribute feature.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -2894,12 +3054,20 @@ public interface WorkspacePackage extends EPackage {
 		EAttribute CONTENT_VERSION__NUMBER = eINSTANCE.getContentVersion_Number();
 
 		/**
-		 * The meta object literal for the '<em><b>Parent</b></em>' reference feature.
+		 * The meta object literal for the '<em><b>Parent Id</b></em>' attribute feature.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
 		 * @generated
 		 */
-		EReference CONTENT_VERSION__PARENT = eINSTANCE.getContentVersion_Parent();
+		EAttribute CONTENT_VERSION__PARENT_ID = eINSTANCE.getContentVersion_ParentId();
+
+		/**
+		 * The meta object literal for the '<em><b>Author Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute CONTENT_VERSION__AUTHOR_ID = eINSTANCE.getContentVersion_AuthorId();
 
 		/**
 		 * The meta object literal for the '<em><b>Reason</b></em>' attribute feature.
@@ -3398,6 +3566,16 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EEnum SPECTRAL_CONTENT = eINSTANCE.getSpectralContent();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.VersionKind <em>Version Kind</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.VersionKind
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getVersionKind()
+		 * @generated
+		 */
+		EEnum VERSION_KIND = eINSTANCE.getVersionKind();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.

@@ -10,6 +10,7 @@ import java.util.Set;
 import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.tracegas.importer.ImportException;
 import org.tracegas.method.StoredMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.preprocess.Background;
@@ -35,7 +36,6 @@ import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.MeasurementAnalysis;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -93,21 +93,21 @@ public final class MeasurementQuantification {
      * @throws IllegalArgumentException naming the recipe step the registry does not know or whose parameters it
      *                                  rejects
      */
-    public MeasurementQuantification(WorkspaceStore store, Session actor, String projectId, VersionInfo version,
+    public MeasurementQuantification(WorkspaceStore store, Session actor, String projectId, ContentVersion version,
             StoredMethod method, StepRegistry registry, String software) {
         this.store = store;
         this.actor = actor;
         this.projectId = projectId;
         this.method = method;
-        this.versionId = version.id();
-        this.versions = new AnalysisVersions(version.id(), method.libraryVersionId());
+        this.versionId = version.getId();
+        this.versions = new AnalysisVersions(version.getId(), method.libraryVersionId());
         this.correction = ResultCorrection.of(method);
         this.steps = new ArrayList<>();
         for (Recipe.Entry e : method.recipe().entries()) {
             try {
                 steps.add(registry.create(e.stepId(), e.parameters()));
             } catch (IllegalArgumentException ex) {
-                throw new IllegalArgumentException("method version " + version.number() + ", [recipe] step '"
+                throw new IllegalArgumentException("method version " + version.getNumber() + ", [recipe] step '"
                         + e.stepId() + "': " + ex.getMessage(), ex);
             }
         }

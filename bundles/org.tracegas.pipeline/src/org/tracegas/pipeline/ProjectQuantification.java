@@ -10,12 +10,12 @@ import org.tracegas.importer.container.ContainerReader;
 import org.tracegas.importer.container.ContainerRecord;
 import org.tracegas.importer.container.SampleKind;
 import org.tracegas.method.StoredMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.preprocess.Background;
 import org.tracegas.quantify.BatchOutcome;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.quantify.ProgressListener;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -69,7 +69,7 @@ public final class ProjectQuantification {
      * @param backgrounds at least one, taken before the first sample
      * @param samples     number of samples in the files (from {@link #countSamples})
      */
-    public BatchOutcome run(VersionInfo methodVersion, StoredMethod method, List<Path> files, long samples,
+    public BatchOutcome run(ContentVersion methodVersion, StoredMethod method, List<Path> files, long samples,
             List<Background> backgrounds, ProgressListener progress, CancellationFlag cancel) {
         return run(methodVersion, method, files, samples, backgrounds, OptionalDouble.empty(), progress, cancel);
     }
@@ -79,7 +79,7 @@ public final class ProjectQuantification {
      *                 source is CTS-derived; empty for one of nominal path
      * @see QuantificationSetup
      */
-    public BatchOutcome run(VersionInfo methodVersion, StoredMethod method, List<Path> files, long samples,
+    public BatchOutcome run(ContentVersion methodVersion, StoredMethod method, List<Path> files, long samples,
             List<Background> backgrounds, OptionalDouble ctsPathM, ProgressListener progress,
             CancellationFlag cancel) {
         return new QuantificationSetup(methodVersion, method, backgrounds, software, ctsPathM)

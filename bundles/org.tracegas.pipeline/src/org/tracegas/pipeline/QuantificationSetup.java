@@ -5,13 +5,13 @@ import java.util.OptionalDouble;
 
 import org.tracegas.method.MethodRecipe;
 import org.tracegas.method.StoredMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.quantify.BatchQuantifier;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -34,7 +34,7 @@ public final class QuantificationSetup {
      * @param software    named in each result's reprocessing record
      * @throws IllegalArgumentException if there is no background, or the method takes its path from a CTS
      */
-    public QuantificationSetup(VersionInfo methodVersion, StoredMethod method, List<Background> backgrounds,
+    public QuantificationSetup(ContentVersion methodVersion, StoredMethod method, List<Background> backgrounds,
             String software) {
         this(methodVersion, method, backgrounds, software, OptionalDouble.empty());
     }
@@ -47,7 +47,7 @@ public final class QuantificationSetup {
      * @throws IllegalArgumentException if there is no background, the CTS path is missing or not wanted, or the
      *                                  method has [recipe] steps
      */
-    public QuantificationSetup(VersionInfo methodVersion, StoredMethod method, List<Background> backgrounds,
+    public QuantificationSetup(ContentVersion methodVersion, StoredMethod method, List<Background> backgrounds,
             String software, OptionalDouble ctsPathM) {
         requireNoRecipeSteps(method);
         boolean fromCts = method.pathSource() == PathOrigin.CTS_DERIVED;
@@ -64,7 +64,7 @@ public final class QuantificationSetup {
         chain = new SpectrumChain(new InterferogramTransform(method.transform()), new BackgroundRatio(), timeline);
         quantifier = BatchQuantifier.onAllCores(
                 method.quantifier(timeline.all().get(0).singleBeam().axis(), software, false));
-        versions = new AnalysisVersions(methodVersion.id(), method.libraryVersionId());
+        versions = new AnalysisVersions(methodVersion.getId(), method.libraryVersionId());
         correction = fromCts ? ResultCorrection.of(method).withCtsPath(ctsPathM.getAsDouble())
                 : ResultCorrection.of(method);
     }

@@ -8,8 +8,10 @@ import java.util.Set;
 
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.Client;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.Role;
+import org.tracegas.model.VersionKind;
 
 /**
  * A store on a fresh database with an analyst who owns a project, a reader with a read grant on it, and a
@@ -24,8 +26,8 @@ final class AnalysisFixture implements AutoCloseable {
     final Session analyst;
     final Session reader;
     final Project project;
-    final VersionInfo method;
-    final VersionInfo library;
+    final ContentVersion method;
+    final ContentVersion library;
 
     AnalysisFixture(TestBackend backend) {
         this.backend = backend;

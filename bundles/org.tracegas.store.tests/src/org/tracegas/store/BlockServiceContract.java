@@ -22,16 +22,18 @@ import java.util.Set;
 import java.util.concurrent.CompletableFuture;
 import java.util.stream.Collectors;
 
+import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
-import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.junit.jupiter.api.Test;
 import org.tracegas.audit.AuditValues;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Provenance;
 import org.tracegas.model.Result;
 import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
+import org.tracegas.model.VersionKind;
 
 /** Blocks of processed spectra, each in one transaction, on each backend. */
 abstract class BlockServiceContract {
@@ -55,8 +57,9 @@ abstract class BlockServiceContract {
 
     @Test
     void blockStoresEachMeasurementWithItsSpectrumAndResultsUnderOneAuditRecord() throws Exception {
-        List<ProcessedSpectrum> block = new ArrayList<>(SampleBlocks.block(0, 3, 4, f.method.id(), f.library.id()));
-        block.add(SampleBlocks.processed(3, 0, f.method.id(), f.library.id())); // nothing fitted: no results
+        List<ProcessedSpectrum> block = new ArrayList<>(SampleBlocks.block(0, 3, 4, f.method.getId(),
+                f.library.getId()));
+        block.add(SampleBlocks.processed(3, 0, f.method.getId(), f.library.getId())); // nothing fitted: no results
         long auditBefore = f.count("SELECT COUNT(*) FROM audit_record");
 
         List<StoredMeasurement> stored = f.store.blocks().store(f.analyst, f.project.getId(), block);
@@ -97,15 +100,15 @@ abstract class BlockServiceContract {
             assertEquals(Integer.toString(own.size()), audit.get("results"));
             assertEquals(resultsSha256(own), audit.get("resultsSha256"), "recomputed from the stored results");
         }
-        assertTrue(f.store.versions().version(f.method.id()).frozen());
-        assertTrue(f.store.versions().version(f.library.id()).frozen());
+        assertTrue(f.store.versions().version(f.method.getId()).isFrozen());
+        assertTrue(f.store.versions().version(f.library.getId()).isFrozen());
         assertTrue(f.store.verifyAuditTrail().intact());
     }
 
     @Test
     void blockEncodedOnAnotherThreadIsBoundToTheAuditTrailAsStored() throws Exception {
         List<ProcessedSpectrum> block = new ArrayList<>();
-        for (ProcessedSpectrum p : SampleBlocks.block(0, 3, 2, f.method.id(), f.library.id())) {
+        for (ProcessedSpectrum p : SampleBlocks.block(0, 3, 2, f.method.getId(), f.library.getId())) {
             // a time finer than the microsecond both databases keep
             block.add(new ProcessedSpectrum(p.kind(), p.time().plusNanos(123_456_789), p.cellTemperature(),
                     p.cellPressure(), p.absorbance(), p.encoding(), p.results()));
@@ -130,7 +133,7 @@ abstract class BlockServiceContract {
     void encodedBlockIsStoredOnlyWithItsActorsAccessAndOnlyByItsStore() throws Exception {
         long before = f.count(COUNT_ROWS);
         EncodedBlock byReader = f.store.blocks().encode(f.reader, f.project.getId(),
-                SampleBlocks.block(0, 2, 1, f.method.id(), f.library.id()));
+                SampleBlocks.block(0, 2, 1, f.method.getId(), f.library.getId()));
         assertThrows(AccessDeniedException.class, () -> f.store.blocks().store(byReader));
         EncodedBlock foreign = () -> 1;
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
@@ -141,9 +144,10 @@ abstract class BlockServiceContract {
 
     @Test
     void wrongVersionKindDeepInTheBlockNamesItsIndexAndWritesNothing() throws Exception {
-        List<ProcessedSpectrum> block = new ArrayList<>(SampleBlocks.block(0, 2, 2, f.method.id(), f.library.id()));
+        List<ProcessedSpectrum> block = new ArrayList<>(SampleBlocks.block(0, 2, 2, f.method.getId(),
+                f.library.getId()));
         // the library version given as the method version of the third spectrum's first result
-        block.add(SampleBlocks.processed(2, 2, f.library.id(), f.library.id()));
+        block.add(SampleBlocks.processed(2, 2, f.library.getId(), f.library.getId()));
         long before = f.count(COUNT_ROWS);
 
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
@@ -156,55 +160,56 @@ abstract class BlockServiceContract {
     @Test
     void versionsFrozenByEarlierBlocksAreStillCheckedForTheirKind() throws Exception {
         // the second block reads the versions frozen by the first, so the third finds them remembered
-        f.store.blocks().store(f.analyst, f.project.getId(), SampleBlocks.block(0, 2, 1, f.method.id(),
-                f.library.id()));
-        f.store.blocks().store(f.analyst, f.project.getId(), SampleBlocks.block(2, 2, 1, f.method.id(),
-                f.library.id()));
+        f.store.blocks().store(f.analyst, f.project.getId(), SampleBlocks.block(0, 2, 1, f.method.getId(),
+                f.library.getId()));
+        f.store.blocks().store(f.analyst, f.project.getId(), SampleBlocks.block(2, 2, 1, f.method.getId(),
+                f.library.getId()));
         long before = f.count(COUNT_ROWS);
 
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(
-                f.analyst, f.project.getId(), SampleBlocks.block(4, 1, 1, f.library.id(), f.library.id())));
+                f.analyst, f.project.getId(), SampleBlocks.block(4, 1, 1, f.library.getId(), f.library.getId())));
 
-        assertEquals("block[0].results[0].methodVersionId " + f.library.id()
+        assertEquals("block[0].results[0].methodVersionId " + f.library.getId()
                 + " is a LIBRARY version, not a METHOD version", e.getMessage());
         assertEquals(before, f.count(COUNT_ROWS), "nothing half written");
         NoSuchObjectException missing = assertThrows(NoSuchObjectException.class, () -> f.store.blocks().store(
-                f.analyst, f.project.getId(), SampleBlocks.block(4, 1, 1, f.method.id(), "no-such-version")));
+                f.analyst, f.project.getId(), SampleBlocks.block(4, 1, 1, f.method.getId(), "no-such-version")));
         assertTrue(missing.getMessage().contains("no-such-version"), missing.getMessage());
     }
 
     @Test
     void versionFrozenOnlyByARefusedBlockStaysADraftUntilAStoredBlockUsesIt() throws Exception {
-        VersionInfo draft = f.store.versions().create(f.analyst, VersionKind.LIBRARY, "Kiln gases, hot cell",
+        ContentVersion draft = f.store.versions().create(f.analyst, VersionKind.LIBRARY, "Kiln gases, hot cell",
                 "sha=def\n", "hot cell");
         // the draft is frozen by the block's first check, then the block is refused and rolled back
         assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(f.analyst, f.project.getId(),
-                SampleBlocks.block(0, 1, 1, draft.id(), draft.id())));
-        assertFalse(f.store.versions().version(draft.id()).frozen(), "the refused block froze nothing");
-        VersionInfo edited = f.store.versions().updateDraft(f.analyst, draft.id(), draft.rowVersion(), "sha=0ef\n",
-                "corrected hash");
+                SampleBlocks.block(0, 1, 1, draft.getId(), draft.getId())));
+        assertFalse(f.store.versions().version(draft.getId()).isFrozen(), "the refused block froze nothing");
+        ContentVersion edited = f.store.versions().updateDraft(f.analyst, draft.getId(), draft.getRowVersion(),
+                "sha=0ef\n", "corrected hash");
 
         for (int first = 0; first < 6; first += 2) {
             f.store.blocks().store(f.analyst, f.project.getId(),
-                    SampleBlocks.block(first, 2, 1, f.method.id(), draft.id()));
+                    SampleBlocks.block(first, 2, 1, f.method.getId(), draft.getId()));
         }
 
-        VersionInfo used = f.store.versions().version(draft.id());
-        assertTrue(used.frozen());
-        assertThrows(FrozenVersionException.class, () -> f.store.versions().updateDraft(f.analyst, draft.id(),
-                used.rowVersion(), "sha=1ef\n", "too late"));
-        assertEquals(edited.contentHash(), used.contentHash());
+        ContentVersion used = f.store.versions().version(draft.getId());
+        assertTrue(used.isFrozen());
+        assertThrows(FrozenVersionException.class, () -> f.store.versions().updateDraft(f.analyst, draft.getId(),
+                used.getRowVersion(), "sha=1ef\n", "too late"));
+        assertEquals(edited.getContentHash(), used.getContentHash());
     }
 
     @Test
     void badEntriesAreNamedByIndexAndField() {
-        List<ProcessedSpectrum> withNull = new ArrayList<>(SampleBlocks.block(0, 1, 1, f.method.id(), f.library.id()));
+        List<ProcessedSpectrum> withNull = new ArrayList<>(SampleBlocks.block(0, 1, 1, f.method.getId(),
+                f.library.getId()));
         withNull.add(null);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> f.store.blocks().store(f.analyst, f.project.getId(), withNull));
         assertEquals("block[1] is null", e.getMessage());
 
-        ProcessedSpectrum good = SampleBlocks.processed(0, 2, f.method.id(), f.library.id());
+        ProcessedSpectrum good = SampleBlocks.processed(0, 2, f.method.getId(), f.library.getId());
         Result named = EcoreUtil.copy(good.results().get(1));
         named.setMeasurementId("m-1");
         List<Result> namedMeasurement = List.of(good.results().get(0), named);
@@ -223,7 +228,7 @@ abstract class BlockServiceContract {
     void readerMayNotStoreABlock() throws Exception {
         long before = f.count(COUNT_ROWS);
         assertThrows(AccessDeniedException.class, () -> f.store.blocks().store(f.reader, f.project.getId(),
-                SampleBlocks.block(0, 2, 1, f.method.id(), f.library.id())));
+                SampleBlocks.block(0, 2, 1, f.method.getId(), f.library.getId())));
         assertEquals(before, f.count(COUNT_ROWS));
     }
 

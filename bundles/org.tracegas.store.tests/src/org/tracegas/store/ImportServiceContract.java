@@ -175,7 +175,7 @@ abstract class ImportServiceContract {
         String one = file.measurementIds().get(0);
         String two = file.measurementIds().get(1);
         Result co = Results.of(null, "CO", 12.5, 0.8, 0.3, "ppm", Set.of(ResultFlag.HIGH_RESIDUAL),
-                new Provenance(f.method.id(), f.library.id(), "0.1.0",
+                new Provenance(f.method.getId(), f.library.getId(), "0.1.0",
                         "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855"),
                 null);
         Spectrum a = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.5, 3),
@@ -193,7 +193,7 @@ abstract class ImportServiceContract {
                 new MeasurementAnalysis(one, RECIPE, a, SampleEncoding.FLOAT32_LE, List.of(co)),
                 new MeasurementAnalysis(two, RECIPE, a, SampleEncoding.FLOAT32_LE, List.of(co))));
         assertEquals(2, stored.size());
-        assertEquals(Set.of(one, two), f.store.analyses().analysed(f.reader, f.project.getId(), f.method.id()));
+        assertEquals(Set.of(one, two), f.store.analyses().analysed(f.reader, f.project.getId(), f.method.getId()));
         List<ResultRow> rows = f.store.analyses().rows(f.reader, f.project.getId());
         assertEquals(2, rows.size());
         assertEquals(one, rows.get(0).result().getMeasurementId(), "in measurement time order");

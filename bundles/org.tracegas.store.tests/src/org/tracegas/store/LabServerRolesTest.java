@@ -16,10 +16,12 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.model.Client;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
 import org.tracegas.model.QaOutcomes;
 import org.tracegas.model.Role;
+import org.tracegas.model.VersionKind;
 
 /**
  * On the real PostgreSQL server: a schema owned by an owner role, everyday work done as a second role with the
@@ -74,10 +76,10 @@ class LabServerRolesTest {
             Project p = store.projects().createProject(ana, store.projects().createClient(ana, "Client").getId(), "R-1",
                     "Roles");
             store.projects().rename(ana, p.getId(), p.getRowVersion(), "Roles, renamed");
-            VersionInfo method = store.versions().create(ana, VersionKind.METHOD, "m", "analyte=CO\n", "first");
-            VersionInfo library = store.versions().create(ana, VersionKind.LIBRARY, "l", "sha=abc\n", "first");
-            store.blocks().store(ana, p.getId(), SampleBlocks.block(0, 2, 2, method.id(), library.id()));
-            store.qa().recordAll(ana, p.getId(), method.id(), List.of(QaOutcomes.of("Noise level", true, 0.001,
+            ContentVersion method = store.versions().create(ana, VersionKind.METHOD, "m", "analyte=CO\n", "first");
+            ContentVersion library = store.versions().create(ana, VersionKind.LIBRARY, "l", "sha=abc\n", "first");
+            store.blocks().store(ana, p.getId(), SampleBlocks.block(0, 2, 2, method.getId(), library.getId()));
+            store.qa().recordAll(ana, p.getId(), method.getId(), List.of(QaOutcomes.of("Noise level", true, 0.001,
                     "absorbance", Double.NEGATIVE_INFINITY, 0.002, "RMS <= 0.002", "common practice, no source")));
             store.projects().recordMeasurement(ana, p.getId(), MeasurementKind.BACKGROUND, SampleBlocks.START, 438.15,
                     1013.0);

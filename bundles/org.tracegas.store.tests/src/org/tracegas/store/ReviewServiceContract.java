@@ -23,12 +23,14 @@ import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.audit.SignatureRefusedException;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.Client;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
 import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Results;
 import org.tracegas.model.Role;
+import org.tracegas.model.VersionKind;
 
 /** Signing reports by their content, on each backend. */
 abstract class ReviewServiceContract {
@@ -130,13 +132,13 @@ abstract class ReviewServiceContract {
 
     /** A result the analyst recorded in the project. */
     private Result recordResult() {
-        VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "CO in flue gas", "analyte=CO\n",
+        ContentVersion method = store.versions().create(analyst, VersionKind.METHOD, "CO in flue gas", "analyte=CO\n",
                 "first");
-        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln gases", "sha=abc\n",
+        ContentVersion library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln gases", "sha=abc\n",
                 "first");
         return store.results().record(analyst, project.getId(), Results.of(null, "CO", 12.5, 0.8, 0.3, "ppm",
-                Set.of(ResultFlag.HIGH_RESIDUAL), new Provenance(method.id(), library.id(), "0.1.0", "ab".repeat(32)),
-                null));
+                Set.of(ResultFlag.HIGH_RESIDUAL),
+                new Provenance(method.getId(), library.getId(), "0.1.0", "ab".repeat(32)), null));
     }
 
     private long count(String sql, String arg) throws Exception {

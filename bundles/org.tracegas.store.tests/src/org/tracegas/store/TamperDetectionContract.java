@@ -90,14 +90,14 @@ abstract class TamperDetectionContract {
         String m = store.projects().recordMeasurement(fixture.analyst, fixture.project.getId(), MeasurementKind.SAMPLE,
                 SampleBlocks.START, 438.15, 1013.0);
         store.spectra().store(fixture.analyst, fixture.project.getId(), new SpectrumInput(m,
-                org.tracegas.model.SpectralContent.ABSORBANCE, SampleBlocks.processed(0, 0, fixture.method.id(),
-                        fixture.library.id()).absorbance(), SampleEncoding.FLOAT32_LE));
-        Result result = SampleBlocks.processed(0, 1, fixture.method.id(), fixture.library.id()).results().get(0);
+                org.tracegas.model.SpectralContent.ABSORBANCE, SampleBlocks.processed(0, 0, fixture.method.getId(),
+                        fixture.library.getId()).absorbance(), SampleEncoding.FLOAT32_LE));
+        Result result = SampleBlocks.processed(0, 1, fixture.method.getId(), fixture.library.getId()).results().get(0);
         result.setMeasurementId(m);
         store.results().record(fixture.analyst, fixture.project.getId(), result);
-        store.blocks().store(fixture.analyst, fixture.project.getId(), SampleBlocks.block(1, 3, 3, fixture.method.id(),
-                fixture.library.id()));
-        store.qa().recordAll(fixture.analyst, fixture.project.getId(), fixture.method.id(), List.of(
+        store.blocks().store(fixture.analyst, fixture.project.getId(), SampleBlocks.block(1, 3, 3,
+                fixture.method.getId(), fixture.library.getId()));
+        store.qa().recordAll(fixture.analyst, fixture.project.getId(), fixture.method.getId(), List.of(
                 QaOutcomes.of("Spike recovery SO2", true, 96.5, "%", 70, 130, "70 .. 130 %",
                         "EPA Method 320, section 9.2"),
                 QaOutcomes.of("Noise level", true, 0.0012, "absorbance", Double.NEGATIVE_INFINITY, 0.002,

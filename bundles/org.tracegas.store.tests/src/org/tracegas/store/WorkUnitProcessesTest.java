@@ -124,8 +124,8 @@ class WorkUnitProcessesTest {
             PostgresBackend pg = (PostgresBackend) f.backend;
             process = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-cp",
                     childClassPath(), WorkUnitWorkerProcess.class.getName(), pg.url(), pg.user(), pg.password(),
-                    batch.id(), name, Long.toString(LEASE_MILLIS), Long.toString(WORK_MILLIS), f.method.id(),
-                    f.library.id()).redirectError(log.toFile()).start();
+                    batch.id(), name, Long.toString(LEASE_MILLIS), Long.toString(WORK_MILLIS), f.method.getId(),
+                    f.library.getId()).redirectError(log.toFile()).start();
             reader = new Thread(this::read, name + " output");
             reader.start();
         }

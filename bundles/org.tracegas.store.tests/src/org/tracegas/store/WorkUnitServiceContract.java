@@ -20,6 +20,8 @@ import java.util.stream.IntStream;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
+import org.tracegas.model.ContentVersion;
+import org.tracegas.model.VersionKind;
 
 /** Work units claimed, renewed, released and completed by several runners, on each backend. */
 abstract class WorkUnitServiceContract {
@@ -49,7 +51,7 @@ abstract class WorkUnitServiceContract {
     }
 
     private List<ProcessedSpectrum> blockOf(int unit) {
-        return SampleBlocks.block(10 * unit, 3, 2, f.method.id(), f.library.id());
+        return SampleBlocks.block(10 * unit, 3, 2, f.method.getId(), f.library.getId());
     }
 
     @Test
@@ -172,8 +174,8 @@ abstract class WorkUnitServiceContract {
         assertThrows(NoSuchObjectException.class, () -> units.batch(f.analyst, "no-such-batch"));
     }
 
-    private WorkBatchInfo quantification(VersionInfo method, String... files) {
-        return quantification(method.id(), files);
+    private WorkBatchInfo quantification(ContentVersion method, String... files) {
+        return quantification(method.getId(), files);
     }
 
     private WorkBatchInfo quantification(String methodVersionId, String... files) {
@@ -183,9 +185,9 @@ abstract class WorkUnitServiceContract {
     @Test
     void secondBatchOfAMethodVersionIsRefusedUntilTheFirstIsFinished() throws Exception {
         WorkBatchInfo first = quantification(f.method, "/data/a.tgc", "/data/b.tgc");
-        assertEquals(f.method.id(), first.methodVersionId());
+        assertEquals(f.method.getId(), first.methodVersionId());
         assertEquals(first, units.batch(f.reader, first.id()));
-        assertEquals(Optional.of(first), units.unfinishedBatch(f.reader, f.project.getId(), f.method.id()));
+        assertEquals(Optional.of(first), units.unfinishedBatch(f.reader, f.project.getId(), f.method.getId()));
 
         // other files are refused too: the project holds one set of results per method version
         UnfinishedBatchException refused = assertThrows(UnfinishedBatchException.class,
@@ -196,7 +198,7 @@ abstract class WorkUnitServiceContract {
         assertEquals(1, f.count("SELECT COUNT(*) FROM work_batch"), "the refused batch wrote nothing");
 
         // another method version, and work not tied to a method version, go on beside it
-        VersionInfo otherMethod = f.store.versions().create(f.analyst, VersionKind.METHOD, "NO in flue gas",
+        ContentVersion otherMethod = f.store.versions().create(f.analyst, VersionKind.METHOD, "NO in flue gas",
                 "analyte=NO\n", "first");
         WorkBatchInfo beside = quantification(otherMethod, "/data/a.tgc");
         batch(1);
@@ -212,10 +214,10 @@ abstract class WorkUnitServiceContract {
                 "a released unit is open again");
         units.complete(f.analyst, units.claim(f.analyst, first.id(), "runner-a", LONG).orElseThrow(), blockOf(1));
 
-        assertEquals(Optional.empty(), units.unfinishedBatch(f.analyst, f.project.getId(), f.method.id()));
-        assertEquals(Optional.of(beside), units.unfinishedBatch(f.analyst, f.project.getId(), otherMethod.id()));
+        assertEquals(Optional.empty(), units.unfinishedBatch(f.analyst, f.project.getId(), f.method.getId()));
+        assertEquals(Optional.of(beside), units.unfinishedBatch(f.analyst, f.project.getId(), otherMethod.getId()));
         WorkBatchInfo next = quantification(f.method, "/data/a.tgc");
-        assertEquals(Optional.of(next), units.unfinishedBatch(f.analyst, f.project.getId(), f.method.id()));
+        assertEquals(Optional.of(next), units.unfinishedBatch(f.analyst, f.project.getId(), f.method.getId()));
         assertEquals(4, f.count("SELECT COUNT(*) FROM work_batch"));
         assertTrue(f.store.verifyAuditTrail().intact());
     }
@@ -228,7 +230,7 @@ abstract class WorkUnitServiceContract {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> units.createBatch(f.analyst, f.project.getId(), " ", "x", List.of("/a")));
         assertTrue(e.getMessage().startsWith("methodVersionId"), e.getMessage());
-        assertThrows(AccessDeniedException.class, () -> units.createBatch(f.reader, f.project.getId(), f.method.id(),
+        assertThrows(AccessDeniedException.class, () -> units.createBatch(f.reader, f.project.getId(), f.method.getId(),
                 "x", List.of("/a")));
         assertEquals(0, f.count("SELECT COUNT(*) FROM work_batch"));
     }
@@ -237,7 +239,7 @@ abstract class WorkUnitServiceContract {
     void ofRunnersCreatingBatchesOfOneMethodVersionAtOnceExactlyOneSucceeds() throws Exception {
         int runners = 8;
         for (int round = 0; round < 3; round++) {
-            VersionInfo method = f.store.versions().create(f.analyst, VersionKind.METHOD, "method " + round,
+            ContentVersion method = f.store.versions().create(f.analyst, VersionKind.METHOD, "method " + round,
                     "analyte=CO\n", "first");
             CountDownLatch start = new CountDownLatch(1);
             ExecutorService pool = Executors.newFixedThreadPool(runners);
@@ -263,7 +265,7 @@ abstract class WorkUnitServiceContract {
                 assertEquals(1, created.size(), "round " + round + ": batches created " + created);
                 assertEquals(Collections.nCopies(runners - 1, created.get(0).id()), named);
                 assertEquals(Optional.of(created.get(0)),
-                        units.unfinishedBatch(f.analyst, f.project.getId(), method.id()));
+                        units.unfinishedBatch(f.analyst, f.project.getId(), method.getId()));
             } finally {
                 pool.shutdownNow();
             }
@@ -317,7 +319,7 @@ abstract class WorkUnitServiceContract {
         assertEquals(new FailedUnit(0, "/data/a.tgc", "/data/a.tgc: record 2 is cut short"), failed.get(0));
         assertEquals(WorkUnitService.MAX_TEXT_LENGTH, failed.get(1).error().length());
         assertEquals(List.of(), units.measurementsOf(f.analyst, batch.id(), 0));
-        assertEquals(Optional.empty(), units.unfinishedBatch(f.analyst, f.project.getId(), f.method.id()),
+        assertEquals(Optional.empty(), units.unfinishedBatch(f.analyst, f.project.getId(), f.method.getId()),
                 "a finished batch with failures no longer blocks a batch of its failed files");
         assertEquals(2, f.count("SELECT COUNT(*) FROM work_unit WHERE state = 'FAILED' AND lease_until IS NULL"
                 + " AND done_at IS NOT NULL"));

@@ -23,12 +23,14 @@ import java.util.List;
 import java.util.Set;
 import java.util.stream.Stream;
 
+import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.audit.VerificationReport;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.Client;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
@@ -38,6 +40,7 @@ import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.model.VersionKind;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
@@ -175,36 +178,36 @@ abstract class WorkspaceStoreContract {
     @Test
     void versionIsFrozenByUseAndAnEditMakesANewVersionWithParentAuthorReasonAndHash() {
         VersionService versions = store.versions();
-        VersionInfo library = versions.create(analyst, VersionKind.LIBRARY, "Kiln gases", "abc", "first issue");
-        assertEquals(SHA256_OF_ABC, library.contentHash());
-        VersionInfo v1 = versions.create(analyst, VersionKind.METHOD, "CO in flue gas",
+        ContentVersion library = versions.create(analyst, VersionKind.LIBRARY, "Kiln gases", "abc", "first issue");
+        assertEquals(SHA256_OF_ABC, library.getContentHash());
+        ContentVersion v1 = versions.create(analyst, VersionKind.METHOD, "CO in flue gas",
                 "compound=CO\nregion=2000-2200\nresidualLimit=0.01\n", "first issue");
-        assertEquals(1, v1.number());
-        assertNull(v1.parentId());
-        assertFalse(v1.frozen());
+        assertEquals(1, v1.getNumber());
+        assertNull(v1.getParentId());
+        assertFalse(v1.isFrozen());
 
-        VersionInfo draft = versions.updateDraft(analyst, v1.id(), v1.rowVersion(),
+        ContentVersion draft = versions.updateDraft(analyst, v1.getId(), v1.getRowVersion(),
                 "compound=CO\nregion=2050-2200\nresidualLimit=0.01\n", "narrower region before first use");
-        assertEquals(v1.rowVersion() + 1, draft.rowVersion());
+        assertEquals(v1.getRowVersion() + 1, draft.getRowVersion());
 
-        Result result = store.results().record(analyst, project.getId(), result(v1.id(), library.id()));
-        assertTrue(versions.version(v1.id()).frozen());
-        assertTrue(versions.version(library.id()).frozen());
-        long frozenRow = versions.version(v1.id()).rowVersion();
-        assertThrows(FrozenVersionException.class, () -> versions.updateDraft(analyst, v1.id(), frozenRow,
+        Result result = store.results().record(analyst, project.getId(), result(v1.getId(), library.getId()));
+        assertTrue(versions.version(v1.getId()).isFrozen());
+        assertTrue(versions.version(library.getId()).isFrozen());
+        long frozenRow = versions.version(v1.getId()).getRowVersion();
+        assertThrows(FrozenVersionException.class, () -> versions.updateDraft(analyst, v1.getId(), frozenRow,
                 "compound=CO\n", "too late"));
 
-        VersionInfo v2 = versions.revise(analyst, v1.id(),
+        ContentVersion v2 = versions.revise(analyst, v1.getId(),
                 "compound=CO\nregion=2050-2220\ninterferent=H2O\n", "wider region, water as interferent");
-        assertEquals(2, v2.number());
-        assertEquals(v1.id(), v2.parentId());
-        assertEquals(v1.itemId(), v2.itemId());
-        assertEquals(analyst.userId(), v2.authorId());
-        assertEquals("wider region, water as interferent", v2.reason());
-        assertNotEquals(versions.version(v1.id()).contentHash(), v2.contentHash());
-        assertFalse(v2.frozen());
+        assertEquals(2, v2.getNumber());
+        assertEquals(v1.getId(), v2.getParentId());
+        assertEquals(v1.getItemId(), v2.getItemId());
+        assertEquals(analyst.userId(), v2.getAuthorId());
+        assertEquals("wider region, water as interferent", v2.getReason());
+        assertNotEquals(versions.version(v1.getId()).getContentHash(), v2.getContentHash());
+        assertFalse(v2.isFrozen());
 
-        VersionDiff diff = versions.diff(v1.id(), v2.id());
+        VersionDiff diff = versions.diff(v1.getId(), v2.getId());
         assertEquals(new VersionDiff.Change("2050-2200", "2050-2220"), diff.changed().get("region"));
         assertEquals("H2O", diff.added().get("interferent"));
         assertEquals("0.01", diff.removed().get("residualLimit"));
@@ -212,8 +215,8 @@ abstract class WorkspaceStoreContract {
 
         Result stored = store.results().results(analyst, project.getId()).get(0);
         assertEquals(result.getId(), stored.getId());
-        assertEquals(v1.id(), stored.getProvenance().methodVersionId());
-        assertEquals(library.id(), stored.getProvenance().libraryVersionId());
+        assertEquals(v1.getId(), stored.getProvenance().methodVersionId());
+        assertEquals(library.getId(), stored.getProvenance().libraryVersionId());
         assertEquals(List.of(ResultFlag.HIGH_RESIDUAL), stored.getFlags());
     }
 
@@ -382,17 +385,19 @@ abstract class WorkspaceStoreContract {
         assertSame(m.getProject(), measurements.get(1).getProject(), "the measurements are in one project");
         assertFalse(m.isSetContent(), "a measurement not imported from a file has no values of its own");
 
-        VersionInfo v1 = store.versions().create(analyst, VersionKind.METHOD, "SO2", "compound=SO2\n", "first");
-        VersionInfo v2 = store.versions().revise(analyst, v1.id(), "compound=SO2\nregion=1100-1200\n", "region");
-        assertEquals(v2.id(), store.versions().latest(VersionKind.METHOD, "SO2").orElseThrow().id());
+        ContentVersion v1 = store.versions().create(analyst, VersionKind.METHOD, "SO2", "compound=SO2\n", "first");
+        ContentVersion v2 = store.versions().revise(analyst, v1.getId(), "compound=SO2\nregion=1100-1200\n", "region");
+        assertEquals(v2.getId(), store.versions().latest(VersionKind.METHOD, "SO2").orElseThrow().getId());
         assertTrue(store.versions().latest(VersionKind.LIBRARY, "SO2").isEmpty());
 
-        VersionInfo co = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
-        VersionInfo kiln = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
+        ContentVersion co = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
+        ContentVersion kiln = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
         // names in order, each with its newest version only: SO2 has versions 1 and 2
-        assertEquals(List.of(co.id(), v2.id()),
-                store.versions().latest(VersionKind.METHOD).stream().map(VersionInfo::id).toList());
-        assertEquals(List.of(kiln), store.versions().latest(VersionKind.LIBRARY));
+        assertEquals(List.of(co.getId(), v2.getId()),
+                store.versions().latest(VersionKind.METHOD).stream().map(ContentVersion::getId).toList());
+        List<ContentVersion> libraries = store.versions().latest(VersionKind.LIBRARY);
+        assertEquals(1, libraries.size());
+        assertTrue(EcoreUtil.equals(kiln, libraries.get(0)), "the listed version is the created one, field by field");
         assertThrows(IllegalArgumentException.class, () -> store.versions().latest(null));
     }
 
@@ -435,32 +440,32 @@ abstract class WorkspaceStoreContract {
 
     @Test
     void batchOfResultsIsRecordedWhollyOrNotAtAll() throws Exception {
-        VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
-        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
-        Result good = result(method.id(), library.id());
-        Result wrongKind = result(library.id(), library.id()); // a library version given as method version
+        ContentVersion method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
+        ContentVersion library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
+        Result good = result(method.getId(), library.getId());
+        Result wrongKind = result(library.getId(), library.getId()); // a library version given as method version
 
         assertThrows(IllegalArgumentException.class,
                 () -> store.results().recordAll(analyst, project.getId(), List.of(good, wrongKind)));
         assertTrue(store.results().results(analyst, project.getId()).isEmpty());
-        assertFalse(store.versions().version(method.id()).frozen(), "the rolled-back batch froze nothing");
+        assertFalse(store.versions().version(method.getId()).isFrozen(), "the rolled-back batch froze nothing");
         assertEquals(List.of("0"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result'"));
 
         List<Result> stored = store.results().recordAll(analyst, project.getId(), List.of(good, good));
         assertEquals(2, stored.size());
         assertEquals(List.of("2"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result'"));
-        assertTrue(store.versions().version(method.id()).frozen());
+        assertTrue(store.versions().version(method.getId()).isFrozen());
     }
 
     @Test
     void incompleteResultsAreRefusedWithTheFieldNamedAndNothingIsStored() throws Exception {
-        VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
-        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
-        Result blankCompound = result(method.id(), library.id());
+        ContentVersion method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
+        ContentVersion library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
+        Result blankCompound = result(method.getId(), library.getId());
         blankCompound.setCompound(" ");
-        Result noUnit = result(method.id(), library.id());
+        Result noUnit = result(method.getId(), library.getId());
         noUnit.setUnit(null);
-        Result noProvenance = result(method.id(), library.id());
+        Result noProvenance = result(method.getId(), library.getId());
         noProvenance.setProvenance(null);
 
         assertEquals("compound must not be blank", assertThrows(IllegalArgumentException.class,
@@ -472,28 +477,28 @@ abstract class WorkspaceStoreContract {
                 .startsWith("provenance must not be null"));
         assertEquals("results[1].compound must not be blank", assertThrows(IllegalArgumentException.class,
                 () -> store.results().recordAll(analyst, project.getId(),
-                        List.of(result(method.id(), library.id()), blankCompound))).getMessage());
+                        List.of(result(method.getId(), library.getId()), blankCompound))).getMessage());
         // the provenance is one value, refused when it is made: a version, the software or the input hash missing
         assertEquals("methodVersionId must not be blank", assertThrows(IllegalArgumentException.class,
-                () -> new Provenance("", library.id(), "0.1.0", "ab".repeat(32))).getMessage());
+                () -> new Provenance("", library.getId(), "0.1.0", "ab".repeat(32))).getMessage());
         assertEquals("softwareVersion must not be blank", assertThrows(IllegalArgumentException.class,
-                () -> new Provenance(method.id(), library.id(), null, "ab".repeat(32))).getMessage());
+                () -> new Provenance(method.getId(), library.getId(), null, "ab".repeat(32))).getMessage());
         assertEquals("inputHash must be 64 lower-case hex digits (SHA-256), was " + "AB".repeat(32),
                 assertThrows(IllegalArgumentException.class,
-                        () -> new Provenance(method.id(), library.id(), "0.1.0", "AB".repeat(32))).getMessage());
+                        () -> new Provenance(method.getId(), library.getId(), "0.1.0", "AB".repeat(32))).getMessage());
 
         assertTrue(store.results().results(analyst, project.getId()).isEmpty());
         assertEquals(List.of("0"), column("SELECT COUNT(*) FROM analysis_result"));
         assertEquals(List.of("0"), column("SELECT COUNT(*) FROM audit_record WHERE object_type = 'result'"));
-        assertFalse(store.versions().version(method.id()).frozen(), "a refused result froze nothing");
-        assertFalse(store.versions().version(library.id()).frozen(), "a refused result froze nothing");
+        assertFalse(store.versions().version(method.getId()).isFrozen(), "a refused result froze nothing");
+        assertFalse(store.versions().version(library.getId()).isFrozen(), "a refused result froze nothing");
     }
 
     @Test
     void recordingLeavesTheGivenResultAsItWasAndReadsBackEveryValue() {
-        VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
-        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
-        Result given = result(method.id(), library.id());
+        ContentVersion method = store.versions().create(analyst, VersionKind.METHOD, "CO", "compound=CO\n", "first");
+        ContentVersion library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln", "CO=1\n", "first");
+        Result given = result(method.getId(), library.getId());
 
         Result recorded = store.results().record(analyst, project.getId(), given);
 

@@ -3,19 +3,25 @@ package org.tracegas.store;
 import java.util.List;
 import java.util.Optional;
 
+import org.tracegas.model.ContentVersion;
+import org.tracegas.model.VersionKind;
+
 /**
  * Versions of analysis methods and reference libraries. The content of a version is a canonical
  * serialization supplied by the caller ({@code key=value} lines); its SHA-256 is stored with it. A
  * version used by a result is frozen: changing it means making a new version that records its parent,
  * its author and the reason.
+ * <p>
+ * Versions are returned as model {@link ContentVersion}s, each a fresh object read from the store: changing one
+ * changes nothing stored.
  */
 public interface VersionService {
 
     /** Creates a method or library with its first version. */
-    VersionInfo create(Session actor, VersionKind kind, String name, String content, String reason);
+    ContentVersion create(Session actor, VersionKind kind, String name, String content, String reason);
 
     /** Makes a new version derived from {@code parentVersionId}, frozen or not. */
-    VersionInfo revise(Session actor, String parentVersionId, String content, String reason);
+    ContentVersion revise(Session actor, String parentVersionId, String content, String reason);
 
     /**
      * Changes a version that no result uses yet, in place.
@@ -23,10 +29,10 @@ public interface VersionService {
      * @throws FrozenVersionException    if a result uses it
      * @throws ConcurrentChangeException if it was changed since {@code expectedVersion}
      */
-    VersionInfo updateDraft(Session actor, String versionId, long expectedVersion, String content,
+    ContentVersion updateDraft(Session actor, String versionId, long expectedVersion, String content,
             String reason);
 
-    VersionInfo version(String versionId);
+    ContentVersion version(String versionId);
 
     String content(String versionId);
 
@@ -34,8 +40,8 @@ public interface VersionService {
     VersionDiff diff(String olderVersionId, String newerVersionId);
 
     /** The newest version of the item of a kind and name, if there is one. */
-    Optional<VersionInfo> latest(VersionKind kind, String name);
+    Optional<ContentVersion> latest(VersionKind kind, String name);
 
     /** The newest version of every method or every library, ordered by name. */
-    List<VersionInfo> latest(VersionKind kind);
+    List<ContentVersion> latest(VersionKind kind);
 }

@@ -45,14 +45,84 @@ public class ContentVersionItemProvider extends StoredObjectItemProvider {
 		if (itemPropertyDescriptors == null) {
 			super.getPropertyDescriptors(object);
 
+			addKindPropertyDescriptor(object);
+			addItemIdPropertyDescriptor(object);
+			addItemNamePropertyDescriptor(object);
 			addNumberPropertyDescriptor(object);
-			addParentPropertyDescriptor(object);
+			addParentIdPropertyDescriptor(object);
+			addAuthorIdPropertyDescriptor(object);
 			addReasonPropertyDescriptor(object);
 			addCreatedPropertyDescriptor(object);
 			addContentHashPropertyDescriptor(object);
 			addFrozenPropertyDescriptor(object);
 		}
 		return itemPropertyDescriptors;
+	}
+
+	/**
+	 * This adds a property descriptor for the Kind feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addKindPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_ContentVersion_kind_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_ContentVersion_kind_feature", "_UI_ContentVersion_type"),
+				 WorkspacePackage.Literals.CONTENT_VERSION__KIND,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Item Id feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addItemIdPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_ContentVersion_itemId_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_ContentVersion_itemId_feature", "_UI_ContentVersion_type"),
+				 WorkspacePackage.Literals.CONTENT_VERSION__ITEM_ID,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Item Name feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addItemNamePropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_ContentVersion_itemName_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_ContentVersion_itemName_feature", "_UI_ContentVersion_type"),
+				 WorkspacePackage.Literals.CONTENT_VERSION__ITEM_NAME,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
+				 null,
+				 null));
 	}
 
 	/**
@@ -78,23 +148,45 @@ public class ContentVersionItemProvider extends StoredObjectItemProvider {
 	}
 
 	/**
-	 * This adds a property descriptor for the Parent feature.
+	 * This adds a property descriptor for the Parent Id feature.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
-	protected void addParentPropertyDescriptor(Object object) {
+	protected void addParentIdPropertyDescriptor(Object object) {
 		itemPropertyDescriptors.add
 			(createItemPropertyDescriptor
 				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
 				 getResourceLocator(),
-				 getString("_UI_ContentVersion_parent_feature"),
-				 getString("_UI_PropertyDescriptor_description", "_UI_ContentVersion_parent_feature", "_UI_ContentVersion_type"),
-				 WorkspacePackage.Literals.CONTENT_VERSION__PARENT,
+				 getString("_UI_ContentVersion_parentId_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_ContentVersion_parentId_feature", "_UI_ContentVersion_type"),
+				 WorkspacePackage.Literals.CONTENT_VERSION__PARENT_ID,
 				 true,
 				 false,
-				 true,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
 				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Author Id feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addAuthorIdPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_ContentVersion_authorId_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_ContentVersion_authorId_feature", "_UI_ContentVersion_type"),
+				 WorkspacePackage.Literals.CONTENT_VERSION__AUTHOR_ID,
+				 true,
+				 false,
+				 false,
+				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
 				 null,
 				 null));
 	}
@@ -188,6 +280,17 @@ public class ContentVersionItemProvider extends StoredObjectItemProvider {
 	}
 
 	/**
+	 * This returns ContentVersion.gif.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Object getImage(Object object) {
+		return overlayImage(object, getResourceLocator().getImage("full/obj16/ContentVersion"));
+	}
+
+	/**
 	 * This returns the label text for the adapted class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -214,7 +317,12 @@ public class ContentVersionItemProvider extends StoredObjectItemProvider {
 		updateChildren(notification);
 
 		switch (notification.getFeatureID(ContentVersion.class)) {
+			case WorkspacePackage.CONTENT_VERSION__KIND:
+			case WorkspacePackage.CONTENT_VERSION__ITEM_ID:
+			case WorkspacePackage.CONTENT_VERSION__ITEM_NAME:
 			case WorkspacePackage.CONTENT_VERSION__NUMBER:
+			case WorkspacePackage.CONTENT_VERSION__PARENT_ID:
+			case WorkspacePackage.CONTENT_VERSION__AUTHOR_ID:
 			case WorkspacePackage.CONTENT_VERSION__REASON:
 			case WorkspacePackage.CONTENT_VERSION__CREATED:
 			case WorkspacePackage.CONTENT_VERSION__CONTENT_HASH:

@@ -164,6 +164,29 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.ContentVersion} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected ContentVersionItemProvider contentVersionItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.ContentVersion}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createContentVersionAdapter() {
+		if (contentVersionItemProvider == null) {
+			contentVersionItemProvider = new ContentVersionItemProvider(this);
+		}
+
+		return contentVersionItemProvider;
+	}
+
+	/**
 	 * This keeps track of the one adapter used for all {@link org.tracegas.model.ReferenceLibrary} instances.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -410,6 +433,7 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 		if (clientItemProvider != null) clientItemProvider.dispose();
 		if (projectItemProvider != null) projectItemProvider.dispose();
 		if (measurementItemProvider != null) measurementItemProvider.dispose();
+		if (contentVersionItemProvider != null) contentVersionItemProvider.dispose();
 		if (referenceLibraryItemProvider != null) referenceLibraryItemProvider.dispose();
 		if (analysisMethodItemProvider != null) analysisMethodItemProvider.dispose();
 		if (methodVersionItemProvider != null) methodVersionItemProvider.dispose();

@@ -89,9 +89,10 @@ class ModelEditorTest {
 
         Measurement measurement = factory.createMeasurement();
         editor.set(measurement, Literals.MEASUREMENT__KIND, MeasurementKind.SPIKE);
-        editor.set(second, Literals.CONTENT_VERSION__PARENT, first);
+        first.setId("first-version");
+        editor.set(second, Literals.CONTENT_VERSION__PARENT_ID, first.getId());
         editor.undo();
-        assertNull(second.getParent());
+        assertNull(second.getParentId());
         editor.undo();
         assertEquals(MeasurementKind.SAMPLE, measurement.getKind());
         editor.undo();

@@ -7,11 +7,11 @@ import java.time.Instant;
 import org.eclipse.emf.common.notify.Notification;
 
 import org.eclipse.emf.ecore.EClass;
-import org.eclipse.emf.ecore.InternalEObject;
 
 import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
 import org.tracegas.model.ContentVersion;
+import org.tracegas.model.VersionKind;
 import org.tracegas.model.WorkspacePackage;
 
 /**
@@ -22,8 +22,12 @@ import org.tracegas.model.WorkspacePackage;
  * The following features are implemented:
  * </p>
  * <ul>
+ *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getKind <em>Kind</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getItemId <em>Item Id</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getItemName <em>Item Name</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getNumber <em>Number</em>}</li>
- *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getParent <em>Parent</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getParentId <em>Parent Id</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getAuthorId <em>Author Id</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getReason <em>Reason</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getCreated <em>Created</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ContentVersionImpl#getContentHash <em>Content Hash</em>}</li>
@@ -32,7 +36,67 @@ import org.tracegas.model.WorkspacePackage;
  *
  * @generated
  */
-public abstract class ContentVersionImpl extends StoredObjectImpl implements ContentVersion {
+public class ContentVersionImpl extends StoredObjectImpl implements ContentVersion {
+	/**
+	 * The default value of the '{@link #getKind() <em>Kind</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getKind()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final VersionKind KIND_EDEFAULT = VersionKind.METHOD;
+
+	/**
+	 * The cached value of the '{@link #getKind() <em>Kind</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getKind()
+	 * @generated
+	 * @ordered
+	 */
+	protected VersionKind kind = KIND_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getItemId() <em>Item Id</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getItemId()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String ITEM_ID_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getItemId() <em>Item Id</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getItemId()
+	 * @generated
+	 * @ordered
+	 */
+	protected String itemId = ITEM_ID_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getItemName() <em>Item Name</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getItemName()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String ITEM_NAME_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getItemName() <em>Item Name</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getItemName()
+	 * @generated
+	 * @ordered
+	 */
+	protected String itemName = ITEM_NAME_EDEFAULT;
+
 	/**
 	 * The default value of the '{@link #getNumber() <em>Number</em>}' attribute.
 	 * <!-- begin-user-doc -->
@@ -54,14 +118,44 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 	protected int number = NUMBER_EDEFAULT;
 
 	/**
-	 * The cached value of the '{@link #getParent() <em>Parent</em>}' reference.
+	 * The default value of the '{@link #getParentId() <em>Parent Id</em>}' attribute.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
-	 * @see #getParent()
+	 * @see #getParentId()
 	 * @generated
 	 * @ordered
 	 */
-	protected ContentVersion parent;
+	protected static final String PARENT_ID_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getParentId() <em>Parent Id</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getParentId()
+	 * @generated
+	 * @ordered
+	 */
+	protected String parentId = PARENT_ID_EDEFAULT;
+
+	/**
+	 * The default value of the '{@link #getAuthorId() <em>Author Id</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getAuthorId()
+	 * @generated
+	 * @ordered
+	 */
+	protected static final String AUTHOR_ID_EDEFAULT = null;
+
+	/**
+	 * The cached value of the '{@link #getAuthorId() <em>Author Id</em>}' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getAuthorId()
+	 * @generated
+	 * @ordered
+	 */
+	protected String authorId = AUTHOR_ID_EDEFAULT;
 
 	/**
 	 * The default value of the '{@link #getReason() <em>Reason</em>}' attribute.
@@ -168,6 +262,75 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 	 * @generated
 	 */
 	@Override
+	public VersionKind getKind() {
+		return kind;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setKind(VersionKind newKind) {
+		VersionKind oldKind = kind;
+		kind = newKind == null ? KIND_EDEFAULT : newKind;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.CONTENT_VERSION__KIND, oldKind, kind));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String getItemId() {
+		return itemId;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setItemId(String newItemId) {
+		String oldItemId = itemId;
+		itemId = newItemId;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.CONTENT_VERSION__ITEM_ID, oldItemId, itemId));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String getItemName() {
+		return itemName;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setItemName(String newItemName) {
+		String oldItemName = itemName;
+		itemName = newItemName;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.CONTENT_VERSION__ITEM_NAME, oldItemName, itemName));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public int getNumber() {
 		return number;
 	}
@@ -191,25 +354,8 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 	 * @generated
 	 */
 	@Override
-	public ContentVersion getParent() {
-		if (parent != null && parent.eIsProxy()) {
-			InternalEObject oldParent = (InternalEObject)parent;
-			parent = (ContentVersion)eResolveProxy(oldParent);
-			if (parent != oldParent) {
-				if (eNotificationRequired())
-					eNotify(new ENotificationImpl(this, Notification.RESOLVE, WorkspacePackage.CONTENT_VERSION__PARENT, oldParent, parent));
-			}
-		}
-		return parent;
-	}
-
-	/**
-	 * <!-- begin-user-doc -->
-	 * <!-- end-user-doc -->
-	 * @generated
-	 */
-	public ContentVersion basicGetParent() {
-		return parent;
+	public String getParentId() {
+		return parentId;
 	}
 
 	/**
@@ -218,11 +364,34 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 	 * @generated
 	 */
 	@Override
-	public void setParent(ContentVersion newParent) {
-		ContentVersion oldParent = parent;
-		parent = newParent;
+	public void setParentId(String newParentId) {
+		String oldParentId = parentId;
+		parentId = newParentId;
 		if (eNotificationRequired())
-			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.CONTENT_VERSION__PARENT, oldParent, parent));
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.CONTENT_VERSION__PARENT_ID, oldParentId, parentId));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public String getAuthorId() {
+		return authorId;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setAuthorId(String newAuthorId) {
+		String oldAuthorId = authorId;
+		authorId = newAuthorId;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.CONTENT_VERSION__AUTHOR_ID, oldAuthorId, authorId));
 	}
 
 	/**
@@ -325,11 +494,18 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
+			case WorkspacePackage.CONTENT_VERSION__KIND:
+				return getKind();
+			case WorkspacePackage.CONTENT_VERSION__ITEM_ID:
+				return getItemId();
+			case WorkspacePackage.CONTENT_VERSION__ITEM_NAME:
+				return getItemName();
 			case WorkspacePackage.CONTENT_VERSION__NUMBER:
 				return getNumber();
-			case WorkspacePackage.CONTENT_VERSION__PARENT:
-				if (resolve) return getParent();
-				return basicGetParent();
+			case WorkspacePackage.CONTENT_VERSION__PARENT_ID:
+				return getParentId();
+			case WorkspacePackage.CONTENT_VERSION__AUTHOR_ID:
+				return getAuthorId();
 			case WorkspacePackage.CONTENT_VERSION__REASON:
 				return getReason();
 			case WorkspacePackage.CONTENT_VERSION__CREATED:
@@ -350,11 +526,23 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 	@Override
 	public void eSet(int featureID, Object newValue) {
 		switch (featureID) {
+			case WorkspacePackage.CONTENT_VERSION__KIND:
+				setKind((VersionKind)newValue);
+				return;
+			case WorkspacePackage.CONTENT_VERSION__ITEM_ID:
+				setItemId((String)newValue);
+				return;
+			case WorkspacePackage.CONTENT_VERSION__ITEM_NAME:
+				setItemName((String)newValue);
+				return;
 			case WorkspacePackage.CONTENT_VERSION__NUMBER:
 				setNumber((Integer)newValue);
 				return;
-			case WorkspacePackage.CONTENT_VERSION__PARENT:
-				setParent((ContentVersion)newValue);
+			case WorkspacePackage.CONTENT_VERSION__PARENT_ID:
+				setParentId((String)newValue);
+				return;
+			case WorkspacePackage.CONTENT_VERSION__AUTHOR_ID:
+				setAuthorId((String)newValue);
 				return;
 			case WorkspacePackage.CONTENT_VERSION__REASON:
 				setReason((String)newValue);
@@ -380,11 +568,23 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 	@Override
 	public void eUnset(int featureID) {
 		switch (featureID) {
+			case WorkspacePackage.CONTENT_VERSION__KIND:
+				setKind(KIND_EDEFAULT);
+				return;
+			case WorkspacePackage.CONTENT_VERSION__ITEM_ID:
+				setItemId(ITEM_ID_EDEFAULT);
+				return;
+			case WorkspacePackage.CONTENT_VERSION__ITEM_NAME:
+				setItemName(ITEM_NAME_EDEFAULT);
+				return;
 			case WorkspacePackage.CONTENT_VERSION__NUMBER:
 				setNumber(NUMBER_EDEFAULT);
 				return;
-			case WorkspacePackage.CONTENT_VERSION__PARENT:
-				setParent((ContentVersion)null);
+			case WorkspacePackage.CONTENT_VERSION__PARENT_ID:
+				setParentId(PARENT_ID_EDEFAULT);
+				return;
+			case WorkspacePackage.CONTENT_VERSION__AUTHOR_ID:
+				setAuthorId(AUTHOR_ID_EDEFAULT);
 				return;
 			case WorkspacePackage.CONTENT_VERSION__REASON:
 				setReason(REASON_EDEFAULT);
@@ -410,10 +610,18 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 	@Override
 	public boolean eIsSet(int featureID) {
 		switch (featureID) {
+			case WorkspacePackage.CONTENT_VERSION__KIND:
+				return kind != KIND_EDEFAULT;
+			case WorkspacePackage.CONTENT_VERSION__ITEM_ID:
+				return ITEM_ID_EDEFAULT == null ? itemId != null : !ITEM_ID_EDEFAULT.equals(itemId);
+			case WorkspacePackage.CONTENT_VERSION__ITEM_NAME:
+				return ITEM_NAME_EDEFAULT == null ? itemName != null : !ITEM_NAME_EDEFAULT.equals(itemName);
 			case WorkspacePackage.CONTENT_VERSION__NUMBER:
 				return number != NUMBER_EDEFAULT;
-			case WorkspacePackage.CONTENT_VERSION__PARENT:
-				return parent != null;
+			case WorkspacePackage.CONTENT_VERSION__PARENT_ID:
+				return PARENT_ID_EDEFAULT == null ? parentId != null : !PARENT_ID_EDEFAULT.equals(parentId);
+			case WorkspacePackage.CONTENT_VERSION__AUTHOR_ID:
+				return AUTHOR_ID_EDEFAULT == null ? authorId != null : !AUTHOR_ID_EDEFAULT.equals(authorId);
 			case WorkspacePackage.CONTENT_VERSION__REASON:
 				return REASON_EDEFAULT == null ? reason != null : !REASON_EDEFAULT.equals(reason);
 			case WorkspacePackage.CONTENT_VERSION__CREATED:
@@ -436,8 +644,18 @@ public abstract class ContentVersionImpl extends StoredObjectImpl implements Con
 		if (eIsProxy()) return super.toString();
 
 		StringBuilder result = new StringBuilder(super.toString());
-		result.append(" (number: ");
+		result.append(" (kind: ");
+		result.append(kind);
+		result.append(", itemId: ");
+		result.append(itemId);
+		result.append(", itemName: ");
+		result.append(itemName);
+		result.append(", number: ");
 		result.append(number);
+		result.append(", parentId: ");
+		result.append(parentId);
+		result.append(", authorId: ");
+		result.append(authorId);
 		result.append(", reason: ");
 		result.append(reason);
 		result.append(", created: ");

@@ -63,6 +63,7 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 			case WorkspacePackage.CLIENT: return createClient();
 			case WorkspacePackage.PROJECT: return createProject();
 			case WorkspacePackage.MEASUREMENT: return createMeasurement();
+			case WorkspacePackage.CONTENT_VERSION: return createContentVersion();
 			case WorkspacePackage.REFERENCE_LIBRARY: return createReferenceLibrary();
 			case WorkspacePackage.ANALYSIS_METHOD: return createAnalysisMethod();
 			case WorkspacePackage.METHOD_VERSION: return createMethodVersion();
@@ -88,6 +89,8 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 				return createMeasurementKindFromString(eDataType, initialValue);
 			case WorkspacePackage.SPECTRAL_CONTENT:
 				return createSpectralContentFromString(eDataType, initialValue);
+			case WorkspacePackage.VERSION_KIND:
+				return createVersionKindFromString(eDataType, initialValue);
 			case WorkspacePackage.RESULT_FLAG:
 				return createResultFlagFromString(eDataType, initialValue);
 			case WorkspacePackage.ROLE:
@@ -113,6 +116,8 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 				return convertMeasurementKindToString(eDataType, instanceValue);
 			case WorkspacePackage.SPECTRAL_CONTENT:
 				return convertSpectralContentToString(eDataType, instanceValue);
+			case WorkspacePackage.VERSION_KIND:
+				return convertVersionKindToString(eDataType, instanceValue);
 			case WorkspacePackage.RESULT_FLAG:
 				return convertResultFlagToString(eDataType, instanceValue);
 			case WorkspacePackage.ROLE:
@@ -166,6 +171,17 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	public Measurement createMeasurement() {
 		MeasurementImpl measurement = new MeasurementImpl();
 		return measurement;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ContentVersion createContentVersion() {
+		ContentVersionImpl contentVersion = new ContentVersionImpl();
+		return contentVersion;
 	}
 
 	/**
@@ -291,6 +307,26 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	 * @generated
 	 */
 	public String convertSpectralContentToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public VersionKind createVersionKindFromString(EDataType eDataType, String initialValue) {
+		VersionKind result = VersionKind.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertVersionKindToString(EDataType eDataType, Object instanceValue) {
 		return instanceValue == null ? null : instanceValue.toString();
 	}
 

@@ -31,6 +31,7 @@ import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.model.StoredObject;
+import org.tracegas.model.VersionKind;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.model.WorkspacePackage;
@@ -148,6 +149,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EEnum spectralContentEEnum = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EEnum versionKindEEnum = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -607,7 +615,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getContentVersion_Number() {
+	public EAttribute getContentVersion_Kind() {
 		return (EAttribute)contentVersionEClass.getEStructuralFeatures().get(0);
 	}
 
@@ -617,8 +625,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EReference getContentVersion_Parent() {
-		return (EReference)contentVersionEClass.getEStructuralFeatures().get(1);
+	public EAttribute getContentVersion_ItemId() {
+		return (EAttribute)contentVersionEClass.getEStructuralFeatures().get(1);
 	}
 
 	/**
@@ -627,7 +635,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getContentVersion_Reason() {
+	public EAttribute getContentVersion_ItemName() {
 		return (EAttribute)contentVersionEClass.getEStructuralFeatures().get(2);
 	}
 
@@ -637,7 +645,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getContentVersion_Created() {
+	public EAttribute getContentVersion_Number() {
 		return (EAttribute)contentVersionEClass.getEStructuralFeatures().get(3);
 	}
 
@@ -647,7 +655,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getContentVersion_ContentHash() {
+	public EAttribute getContentVersion_ParentId() {
 		return (EAttribute)contentVersionEClass.getEStructuralFeatures().get(4);
 	}
 
@@ -657,8 +665,48 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EAttribute getContentVersion_Frozen() {
+	public EAttribute getContentVersion_AuthorId() {
 		return (EAttribute)contentVersionEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getContentVersion_Reason() {
+		return (EAttribute)contentVersionEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getContentVersion_Created() {
+		return (EAttribute)contentVersionEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getContentVersion_ContentHash() {
+		return (EAttribute)contentVersionEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getContentVersion_Frozen() {
+		return (EAttribute)contentVersionEClass.getEStructuralFeatures().get(9);
 	}
 
 	/**
@@ -1227,6 +1275,16 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EEnum getVersionKind() {
+		return versionKindEEnum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getResultFlag() {
 		return resultFlagEEnum;
 	}
@@ -1350,8 +1408,12 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(measurementEClass, MEASUREMENT__SOURCE_RECORD);
 
 		contentVersionEClass = createEClass(CONTENT_VERSION);
+		createEAttribute(contentVersionEClass, CONTENT_VERSION__KIND);
+		createEAttribute(contentVersionEClass, CONTENT_VERSION__ITEM_ID);
+		createEAttribute(contentVersionEClass, CONTENT_VERSION__ITEM_NAME);
 		createEAttribute(contentVersionEClass, CONTENT_VERSION__NUMBER);
-		createEReference(contentVersionEClass, CONTENT_VERSION__PARENT);
+		createEAttribute(contentVersionEClass, CONTENT_VERSION__PARENT_ID);
+		createEAttribute(contentVersionEClass, CONTENT_VERSION__AUTHOR_ID);
 		createEAttribute(contentVersionEClass, CONTENT_VERSION__REASON);
 		createEAttribute(contentVersionEClass, CONTENT_VERSION__CREATED);
 		createEAttribute(contentVersionEClass, CONTENT_VERSION__CONTENT_HASH);
@@ -1420,6 +1482,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		accessLevelEEnum = createEEnum(ACCESS_LEVEL);
 		measurementKindEEnum = createEEnum(MEASUREMENT_KIND);
 		spectralContentEEnum = createEEnum(SPECTRAL_CONTENT);
+		versionKindEEnum = createEEnum(VERSION_KIND);
 		resultFlagEEnum = createEEnum(RESULT_FLAG);
 		roleEEnum = createEEnum(ROLE);
 
@@ -1508,9 +1571,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getMeasurement_SourceSha256(), ecorePackage.getEString(), "sourceSha256", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMeasurement_SourceRecord(), ecorePackage.getEInt(), "sourceRecord", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
-		initEClass(contentVersionEClass, ContentVersion.class, "ContentVersion", IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEClass(contentVersionEClass, ContentVersion.class, "ContentVersion", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getContentVersion_Kind(), this.getVersionKind(), "kind", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getContentVersion_ItemId(), ecorePackage.getEString(), "itemId", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getContentVersion_ItemName(), ecorePackage.getEString(), "itemName", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getContentVersion_Number(), ecorePackage.getEInt(), "number", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
-		initEReference(getContentVersion_Parent(), this.getContentVersion(), null, "parent", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getContentVersion_ParentId(), ecorePackage.getEString(), "parentId", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getContentVersion_AuthorId(), ecorePackage.getEString(), "authorId", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getContentVersion_Reason(), ecorePackage.getEString(), "reason", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getContentVersion_Created(), this.getInstant(), "created", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getContentVersion_ContentHash(), ecorePackage.getEString(), "contentHash", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -1594,6 +1661,10 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		addEEnumLiteral(spectralContentEEnum, SpectralContent.TRANSMITTANCE);
 		addEEnumLiteral(spectralContentEEnum, SpectralContent.ABSORBANCE);
 		addEEnumLiteral(spectralContentEEnum, SpectralContent.RESIDUAL);
+
+		initEEnum(versionKindEEnum, VersionKind.class, "VersionKind");
+		addEEnumLiteral(versionKindEEnum, VersionKind.METHOD);
+		addEEnumLiteral(versionKindEEnum, VersionKind.LIBRARY);
 
 		initEEnum(resultFlagEEnum, ResultFlag.class, "ResultFlag");
 		addEEnumLiteral(resultFlagEEnum, ResultFlag.BELOW_DETECTION_LIMIT);

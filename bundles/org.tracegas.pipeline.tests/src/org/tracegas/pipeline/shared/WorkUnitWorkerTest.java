@@ -68,8 +68,8 @@ class WorkUnitWorkerTest {
         project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
                 "P-1",
                 "Project");
-        methodId = store.versions().create(analyst, org.tracegas.store.VersionKind.METHOD, "m", "a=1\n", "t").id();
-        libraryId = store.versions().create(analyst, org.tracegas.store.VersionKind.LIBRARY, "l", "b=1\n", "t").id();
+        methodId = store.versions().create(analyst, org.tracegas.model.VersionKind.METHOD, "m", "a=1\n", "t").getId();
+        libraryId = store.versions().create(analyst, org.tracegas.model.VersionKind.LIBRARY, "l", "b=1\n", "t").getId();
     }
 
     @AfterEach

@@ -16,8 +16,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.Role;
+import org.tracegas.model.VersionKind;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.qa.checks.ZeroSpanCheck;
 import org.tracegas.qa.control.ChartEvaluation;
@@ -26,8 +28,6 @@ import org.tracegas.report.ReportContent;
 import org.tracegas.report.campaign.ReportSignatures;
 import org.tracegas.store.Session;
 import org.tracegas.store.UserInfo;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -96,22 +96,22 @@ class QaControlChartsTest {
                     "rev-pw-1234".toCharArray());
             Session analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
             String client = store.projects().createClient(analyst, "Client").getId();
-            VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "stack CO", "co=1\n", "v1");
+            ContentVersion method = store.versions().create(analyst, VersionKind.METHOD, "stack CO", "co=1\n", "v1");
             Project earlier = store.projects().createProject(analyst, client, "P-1", "first campaign");
-            StoredQaChecks.store(store, analyst, earlier.getId(), method.id(),
+            StoredQaChecks.store(store, analyst, earlier.getId(), method.getId(),
                     zeros(0.10, -0.05, 0.08, 0.02, -0.10, 0.04, 0.12, -0.02, 0.06, -0.07));
             Project other = store.projects().createProject(analyst, client, "P-0", "another method");
-            VersionInfo otherMethod = store.versions().create(analyst, VersionKind.METHOD, "other", "x=1\n", "v1");
-            StoredQaChecks.store(store, analyst, other.getId(), otherMethod.id(), zeros(5, 5.5, 6, 7));
+            ContentVersion otherMethod = store.versions().create(analyst, VersionKind.METHOD, "other", "x=1\n", "v1");
+            StoredQaChecks.store(store, analyst, other.getId(), otherMethod.getId(), zeros(5, 5.5, 6, 7));
             Project now = store.projects().createProject(analyst, client, "P-2", "this campaign");
-            StoredQaChecks.store(store, analyst, now.getId(), method.id(), zeros(0.05, 0.9, 0.0));
+            StoredQaChecks.store(store, analyst, now.getId(), method.getId(), zeros(0.05, 0.9, 0.0));
             // a campaign stored after this one is not part of its history
             Project later = store.projects().createProject(analyst, client, "P-3", "later campaign");
-            StoredQaChecks.store(store, analyst, later.getId(), method.id(), zeros(3, 3, 3, 3, 3, 3, 3, 3, 3, 4));
+            StoredQaChecks.store(store, analyst, later.getId(), method.getId(), zeros(3, 3, 3, 3, 3, 3, 3, 3, 3, 4));
 
             List<CheckOutcome> history = StoredQaChecks.history(store, analyst, now.getId(), "stack CO");
             assertEquals(10, history.size());
-            List<CheckOutcome> current = StoredQaChecks.load(store, analyst, now.getId(), method.id());
+            List<CheckOutcome> current = StoredQaChecks.load(store, analyst, now.getId(), method.getId());
             List<ChartEvaluation> charts = new QaControlCharts(List.of("Zero CO", "Zero NO"), 8).evaluate(history,
                     current);
             assertEquals(1, charts.size(), "no NO readings: no chart");

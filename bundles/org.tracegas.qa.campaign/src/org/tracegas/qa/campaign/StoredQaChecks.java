@@ -38,7 +38,7 @@ public final class StoredQaChecks {
                 .flatMap(p -> store.qa().checks(actor, p.getId()).stream())
                 .filter(c -> c.getRecorded().isBefore(before))
                 .filter(c -> sameMethod.computeIfAbsent(c.getMethodVersionId(),
-                        id -> store.versions().version(id).name().equals(methodName)))
+                        id -> store.versions().version(id).getItemName().equals(methodName)))
                 .sorted(java.util.Comparator.comparing(QaOutcome::getRecorded))
                 .map(StoredQaChecks::outcome).toList();
     }

@@ -21,14 +21,14 @@ import java.util.Set;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.method.MethodDefinition;
-import org.tracegas.method.MethodVersions;
-import org.tracegas.method.StoredMethod;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.synthesis.HitranLineListReader;
 import org.tracegas.library.synthesis.HitranLineListWriter;
 import org.tracegas.library.synthesis.LineList;
+import org.tracegas.method.MethodDefinition;
+import org.tracegas.method.MethodVersions;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Role;
@@ -205,7 +205,7 @@ class LineListMethodFileTest {
             store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
             Session analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
             MethodDefinition.Recorded recorded = definition.record(store, analyst);
-            return new Version(recorded.method().method(), store.versions().content(recorded.methodVersion().id()));
+            return new Version(recorded.method().method(), store.versions().content(recorded.methodVersion().getId()));
         }
     }
 

@@ -22,6 +22,7 @@ import org.tracegas.importer.sidechannel.SideChannelJoin;
 import org.tracegas.importer.sidechannel.SideChannelReader;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.method.StoredMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.pipeline.MeasurementQuantification;
@@ -41,7 +42,6 @@ import org.tracegas.report.SpectrumFit;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.Session;
 import org.tracegas.store.StoredSpectrum;
-import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.WorkspaceVerification;
 
@@ -71,32 +71,32 @@ public final class CampaignReport {
      *                               reading otherwise than the stored checks were charted
      * @throws ImportException       if the O2 file cannot be read
      */
-    public ReportContent content(VersionInfo methodVersion, StoredMethod method, ReportPlan plan)
+    public ReportContent content(ContentVersion methodVersion, StoredMethod method, ReportPlan plan)
             throws IOException, ImportException {
         // the data are verified once, before they are read; the report states this verification and its anchor
         WorkspaceVerification verified = store.audit().verifyWorkspace(List.of())
                 .requireIntact("make the report of project " + projectId);
         List<Measurement> measurements = store.projects().measurements(actor, projectId);
         MinuteSeries series = MinuteSeries.of(measurements, store.results().results(actor, projectId),
-                methodVersion.id());
+                methodVersion.getId());
         if (series.isEmpty()) {
-            throw new IllegalStateException("the project holds no results of method version " + methodVersion.id()
+            throw new IllegalStateException("the project holds no results of method version " + methodVersion.getId()
                     + "; quantify first");
         }
-        List<CheckOutcome> checks = StoredQaChecks.load(store, actor, projectId, methodVersion.id());
+        List<CheckOutcome> checks = StoredQaChecks.load(store, actor, projectId, methodVersion.getId());
         if (checks.isEmpty()) {
             throw new IllegalStateException("the project holds no QA checks of method version "
-                    + methodVersion.id() + "; run the QA checks first");
+                    + methodVersion.getId() + "; run the QA checks first");
         }
         SideChannelJoin o2 = new SideChannelJoin(new SideChannelReader(ZoneOffset.UTC).read(plan.o2File(),
                 ImportOptions.defaults()));
-        VersionInfo library = store.versions().version(method.libraryVersionId());
+        ContentVersion library = store.versions().version(method.libraryVersionId());
         ReportContent content = new CampaignReportBuilder(plan.basis(),
                 plan.budget(method.method().pathLengthMetres()), plan.cellTemperatureK(), plan.cellPressureKPa(),
                 plan.o2UncertaintyPercent())
-                .build(plan.campaign(), new MethodVersion(method.method().name(), "v" + methodVersion.number(),
-                        methodVersion.contentHash()),
-                        new LibraryVersion(library.name(), "v" + library.number() + ", content "
+                .build(plan.campaign(), new MethodVersion(method.method().name(), "v" + methodVersion.getNumber(),
+                        methodVersion.getContentHash()),
+                        new LibraryVersion(library.getItemName(), "v" + library.getNumber() + ", content "
                                 + method.libraryContentHash().substring(0, 16)),
                         checks, charts(method, plan, checks), series, plan.reported(), plan.moisture(),
                         t -> oxygen(o2, plan.o2Channel(), t), plan.periods(), exampleFit(measurements, method, plan));

@@ -8,11 +8,11 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.Function;
 
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Provenance;
 import org.tracegas.model.Result;
 import org.tracegas.model.ResultConditions;
 import org.tracegas.store.ResultRow;
-import org.tracegas.store.VersionInfo;
 
 /**
  * A project's stored results as CSV (RFC 4180: CRLF line ends, a header line, fields with comma, quote or line
@@ -41,21 +41,22 @@ public final class ResultsCsv {
      * @param versions the stored version of an id (method and library versions named by the results)
      * @return the number of result lines written
      */
-    public static int write(List<ResultRow> rows, Function<String, VersionInfo> versions, Writer out)
+    public static int write(List<ResultRow> rows, Function<String, ContentVersion> versions, Writer out)
             throws IOException {
-        Map<String, VersionInfo> known = new HashMap<>();
+        Map<String, ContentVersion> known = new HashMap<>();
         line(out, HEADER);
         for (ResultRow row : rows) {
             Result r = row.result();
             Provenance p = r.getProvenance();
-            VersionInfo method = known.computeIfAbsent(p.methodVersionId(), versions);
-            VersionInfo library = known.computeIfAbsent(p.libraryVersionId(), versions);
+            ContentVersion method = known.computeIfAbsent(p.methodVersionId(), versions);
+            ContentVersion library = known.computeIfAbsent(p.libraryVersionId(), versions);
             List<String> fields = new ArrayList<>(List.of(text(r.getMeasurementId()),
                     row.measured() == null ? "" : row.measured().toString(), text(row.sourceFile()), r.getCompound(),
                     Double.toString(r.getConcentration()), Double.toString(r.getStandardUncertainty()),
                     Double.toString(r.getDetectionLimit()), r.getUnit(),
-                    String.join(" ", r.getFlags().stream().map(f -> f.getName()).sorted().toList()), method.name(),
-                    Integer.toString(method.number()), library.name(), Integer.toString(library.number()),
+                    String.join(" ", r.getFlags().stream().map(f -> f.getName()).sorted().toList()),
+                    method.getItemName(), Integer.toString(method.getNumber()), library.getItemName(),
+                    Integer.toString(library.getNumber()),
                     p.inputHash(), text(row.recipeSha256())));
             fields.addAll(conditions(r.getConditions()));
             line(out, fields);

@@ -26,20 +26,20 @@ import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
-import org.tracegas.pipeline.MeasurementRole;
-import org.tracegas.report.campaign.MinuteSeries;
-import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.ContentVersion;
+import org.tracegas.model.VersionKind;
+import org.tracegas.pipeline.MeasurementRole;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.report.PdfReportWriter;
+import org.tracegas.report.campaign.MinuteSeries;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -177,12 +177,12 @@ class AnalysisCommandsTest {
 
         try (WorkspaceStore store = open()) {
             Session s = ana(store);
-            VersionInfo version = store.versions().latest(VersionKind.METHOD, "Stack").orElseThrow();
-            StoredMethod stored = StoredMethod.parse(store.versions().content(version.id()), "test");
-            assertEquals(64, version.contentHash().length());
+            ContentVersion version = store.versions().latest(VersionKind.METHOD, "Stack").orElseThrow();
+            StoredMethod stored = StoredMethod.parse(store.versions().content(version.getId()), "test");
+            assertEquals(64, version.getContentHash().length());
             String project = store.projects().findByCode(s, "P-1").orElseThrow().getId();
             MinuteSeries series = MinuteSeries.of(store.projects().measurements(s, project),
-                    store.results().results(s, project), version.id());
+                    store.results().results(s, project), version.getId());
             assertEquals(stored.libraryVersionId(), series.libraryVersionId());
             assertEquals(CO_PPM.length, series.compound("CO").size());
             // sample 0 lies on a reference: the chain (transform, line shape, resolution, apodization, path)
@@ -293,9 +293,9 @@ class AnalysisCommandsTest {
         try (WorkspaceStore store = open()) {
             Session s = ana(store);
             String project = store.projects().findByCode(s, "P-7").orElseThrow().getId();
-            VersionInfo version = store.versions().latest(VersionKind.METHOD, "Zeros").orElseThrow();
+            ContentVersion version = store.versions().latest(VersionKind.METHOD, "Zeros").orElseThrow();
             limits = org.tracegas.qa.checks.MethodDetectionLimit.fromOutcomes(
-                    org.tracegas.qa.campaign.StoredQaChecks.load(store, s, project, version.id()));
+                    org.tracegas.qa.campaign.StoredQaChecks.load(store, s, project, version.getId()));
         }
         assertEquals(List.of("CO", "N2O"), limits.stream().map(l -> l.analyte()).toList());
         for (var l : limits) {
@@ -413,9 +413,9 @@ class AnalysisCommandsTest {
 
     private static List<MinuteSeries.Point> co(WorkspaceStore store, Session s, String code, String method) {
         String project = store.projects().findByCode(s, code).orElseThrow().getId();
-        VersionInfo version = store.versions().latest(VersionKind.METHOD, method).orElseThrow();
+        ContentVersion version = store.versions().latest(VersionKind.METHOD, method).orElseThrow();
         return MinuteSeries.of(store.projects().measurements(s, project), store.results().results(s, project),
-                version.id()).compound("CO");
+                version.getId()).compound("CO");
     }
 
     /**

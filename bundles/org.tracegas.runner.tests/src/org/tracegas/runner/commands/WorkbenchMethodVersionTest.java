@@ -23,10 +23,12 @@ import org.tracegas.method.MethodVersions;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.model.VersionKind;
 import org.tracegas.model.WorkspacePackage.Literals;
 import org.tracegas.model.edit.ModelEditor;
 import org.tracegas.quantify.CancellationFlag;
@@ -36,8 +38,6 @@ import org.tracegas.runner.RunnerContext;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.ResultRow;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -121,11 +121,11 @@ class WorkbenchMethodVersionTest {
             w.commit();
         }
 
-        VersionInfo saved;
+        ContentVersion saved;
         double limit;
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
-            VersionInfo first = store.versions().latest(VersionKind.METHOD, "Stack").orElseThrow();
+            ContentVersion first = store.versions().latest(VersionKind.METHOD, "Stack").orElseThrow();
             // what the workbench does: the version in the model, edited through the editor's command stack
             AnalysisMethod method = MethodVersions.read(store, first);
             ModelEditor editor = new ModelEditor();
@@ -146,14 +146,14 @@ class WorkbenchMethodVersionTest {
             editor.remove(draft, Literals.METHOD_VERSION__REGIONS, water);
             saved = MethodVersions.save(store, ana, method, draft, "CO window starts above the band's far wing;"
                     + " water fitted with CO only");
-            assertEquals(2, saved.number());
-            assertEquals(first.id(), saved.parentId());
-            StoredMethod stored = StoredMethod.parse(store.versions().content(saved.id()), "saved");
+            assertEquals(2, saved.getNumber());
+            assertEquals(first.getId(), saved.getParentId());
+            StoredMethod stored = StoredMethod.parse(store.versions().content(saved.getId()), "saved");
             assertEquals(2060, stored.method().analytes().get(0).regions().get(0).low());
             assertEquals(List.of("N2O", "H2O"), stored.method().analytes().get(0).interferents());
             assertEquals(List.of("CO", "N2O"), stored.method().analytes().stream().map(a -> a.compound()).toList());
             assertEquals(0, stored.method().analytes().get(1).regions().get(0).baselineOrder());
-            assertEquals(StoredMethod.parse(store.versions().content(first.id()), "first").transform(),
+            assertEquals(StoredMethod.parse(store.versions().content(first.getId()), "first").transform(),
                     stored.transform());
         }
 
@@ -165,9 +165,9 @@ class WorkbenchMethodVersionTest {
             String project = store.projects().findByCode(ana, "P-W").orElseThrow().getId();
             List<Result> results = store.results().results(ana, project);
             assertEquals(2 * CO_PPM.length, results.size(), "CO and N2O of each sample, no longer H2O");
-            assertTrue(results.stream().allMatch(r -> r.getProvenance().methodVersionId().equals(saved.id())),
+            assertTrue(results.stream().allMatch(r -> r.getProvenance().methodVersionId().equals(saved.getId())),
                     "every result names the version saved from the editor");
-            assertTrue(store.versions().version(saved.id()).frozen(), "a version with results is frozen");
+            assertTrue(store.versions().version(saved.getId()).isFrozen(), "a version with results is frozen");
             Map<String, Instant> times = new java.util.HashMap<>();
             store.projects().measurements(ana, project).forEach(m -> times.put(m.getId(), m.getTime()));
             List<Double> co = results.stream().filter(r -> r.getCompound().equals("CO"))
@@ -193,7 +193,7 @@ class WorkbenchMethodVersionTest {
 
         // version 2 edited on: a maximum absorbance between the two samples', a tighter tolerance, and a
         // processing step before the fit
-        VersionInfo third;
+        ContentVersion third;
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
             AnalysisMethod method = MethodVersions.read(store, saved);
@@ -209,9 +209,9 @@ class WorkbenchMethodVersionTest {
             editor.set(draft, Literals.METHOD_VERSION__RECIPE_STEPS, List.of(BASELINE_STEP));
             third = MethodVersions.save(store, ana, method, draft, "strong CO absorbance flagged; tighter"
                     + " convergence; zero offset taken out before the fit");
-            assertEquals(3, third.number());
-            assertEquals(saved.id(), third.parentId());
-            assertEquals(ana.userId(), third.authorId());
+            assertEquals(3, third.getNumber());
+            assertEquals(saved.getId(), third.getParentId());
+            assertEquals(ana.userId(), third.getAuthorId());
         }
 
         // the same files imported into a second project and quantified there through the lab's file route, which
@@ -237,7 +237,8 @@ class WorkbenchMethodVersionTest {
             Session ana = store.users().logIn("ana", "analyst-pw-1".toCharArray());
             String project = store.projects().findByCode(ana, "P-W3").orElseThrow().getId();
             List<ResultRow> rows = store.analyses().rows(ana, project).stream().filter(r -> r.result()
-                    .getProvenance().methodVersionId().equals(third.id()) && r.result().getCompound().equals("CO")).toList();
+                    .getProvenance().methodVersionId().equals(third.getId())
+                    && r.result().getCompound().equals("CO")).toList();
             assertEquals(CO_PPM.length, rows.size());
             for (int i = 0; i < CO_PPM.length; i++) {
                 ResultRow r = rows.get(i);

@@ -61,7 +61,7 @@ public final class BatchSplitCommand implements Command {
             try {
                 checked = arguments.check(store, actor, project,
                         new ProjectQuantification(store, actor, project.getId(), StoredMethods.SOFTWARE));
-                description = new BatchDescription(project.getId(), checked.found().version().id(),
+                description = new BatchDescription(project.getId(), checked.found().version().getId(),
                         arguments.backgroundFiles(), arguments.ctsPath(store, checked.found())).text();
                 requireFits(description, arguments.files());
             } catch (BadInputException e) {
@@ -70,7 +70,7 @@ public final class BatchSplitCommand implements Command {
             }
             WorkBatchInfo batch;
             try {
-                batch = store.workUnits().createBatch(actor, project.getId(), checked.found().version().id(),
+                batch = store.workUnits().createBatch(actor, project.getId(), checked.found().version().getId(),
                         description, arguments.files().stream().map(Path::toString).toList());
             } catch (UnfinishedBatchException e) {
                 // another runner recorded its batch between the check and now
@@ -80,7 +80,7 @@ public final class BatchSplitCommand implements Command {
             context.out().println(batch.id());
             context.err().printf("Recorded batch %s: %d work units with %d samples of project %s, method '%s' "
                     + "version %d%n", batch.id(), batch.unitCount(), checked.inputs().samples(), project.getCode(),
-                    checked.found().method().method().name(), checked.found().version().number());
+                    checked.found().method().method().name(), checked.found().version().getNumber());
             return ExitCode.OK;
         }
     }

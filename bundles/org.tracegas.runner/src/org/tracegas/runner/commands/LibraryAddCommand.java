@@ -3,17 +3,17 @@ package org.tracegas.runner.commands;
 import java.nio.file.Path;
 import java.util.List;
 
-import org.tracegas.method.LabReferenceSource;
-import org.tracegas.method.VersionRecorder;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryVersionText;
+import org.tracegas.method.LabReferenceSource;
+import org.tracegas.method.VersionRecorder;
+import org.tracegas.model.ContentVersion;
+import org.tracegas.model.VersionKind;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /** Records an existing library folder (measured or imported references) as a library version. */
@@ -54,10 +54,10 @@ public final class LibraryAddCommand implements Command {
                 context.err().println("tracegas library-add: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
-            VersionInfo v = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(), content,
+            ContentVersion v = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(), content,
                     "recorded from " + manifest);
             context.out().printf("Library '%s': %d references, version %d (%s)%n", library.name(),
-                    library.references().size(), v.number(), v.id());
+                    library.references().size(), v.getNumber(), v.getId());
             return ExitCode.OK;
         }
     }

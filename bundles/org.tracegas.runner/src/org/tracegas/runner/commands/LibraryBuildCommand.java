@@ -3,21 +3,21 @@ package org.tracegas.runner.commands;
 import java.nio.file.Path;
 import java.util.List;
 
-import org.tracegas.method.LibraryPlan;
-import org.tracegas.method.LibrarySynthesis;
-import org.tracegas.method.VersionRecorder;
 import org.tracegas.library.ReferenceLibrary;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryManifestWriter;
 import org.tracegas.library.io.LibraryVersionText;
+import org.tracegas.method.LibraryPlan;
+import org.tracegas.method.LibrarySynthesis;
+import org.tracegas.method.VersionRecorder;
+import org.tracegas.model.ContentVersion;
+import org.tracegas.model.VersionKind;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /** Synthesizes the references of a library plan into a library folder and records it as a library version. */
@@ -81,7 +81,7 @@ public final class LibraryBuildCommand implements Command {
                 return ExitCode.CANCELLED;
             }
             Path manifest = new LibraryManifestWriter().write(library, out);
-            VersionInfo v;
+            ContentVersion v;
             try {
                 v = VersionRecorder.ensure(store, actor, VersionKind.LIBRARY, library.name(),
                         LibraryVersionText.of(manifest), "synthesized from " + plan.file().getFileName());
@@ -91,7 +91,7 @@ public final class LibraryBuildCommand implements Command {
                 throw e;
             }
             context.out().printf("Library '%s': %d references in %s, version %d (%s)%n", library.name(),
-                    library.references().size(), out, v.number(), v.id());
+                    library.references().size(), out, v.getNumber(), v.getId());
             return ExitCode.OK;
         }
     }

@@ -53,8 +53,8 @@ public final class MethodDefineCommand implements Command {
             QuantificationMethod method = recorded.method().method();
             context.out().printf("Method '%s': %d analytes, %d references, version %d (%s), library version %d%n",
                     method.name(), method.analytes().size(), method.references().size(),
-                    recorded.methodVersion().number(), recorded.methodVersion().id(),
-                    recorded.libraryVersion().number());
+                    recorded.methodVersion().getNumber(), recorded.methodVersion().getId(),
+                    recorded.libraryVersion().getNumber());
             return ExitCode.OK;
         }
     }

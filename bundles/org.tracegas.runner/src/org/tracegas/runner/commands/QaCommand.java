@@ -73,9 +73,9 @@ public final class QaCommand implements Command {
                 if (options.has("--qa-file")) {
                     ContainerContents qa = ContainerContents.read(List.of(options.path("--qa-file")),
                             new InterferogramTransform(found.method().transform()));
-                    outcome = evaluation.run(found.version().id(), found.method(), plan, qa);
+                    outcome = evaluation.run(found.version().getId(), found.method(), plan, qa);
                 } else {
-                    outcome = evaluation.run(found.version().id(), found.method(), plan,
+                    outcome = evaluation.run(found.version().getId(), found.method(), plan,
                             new MeasurementQuantification(store, actor, project.getId(), found.version(),
                                     found.method(), steps(), StoredMethods.SOFTWARE));
                 }

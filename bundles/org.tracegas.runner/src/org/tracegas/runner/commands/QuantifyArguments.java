@@ -61,22 +61,22 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
         try {
             QuantificationSetup.requireNoRecipeSteps(found.method());
         } catch (IllegalArgumentException e) {
-            throw new BadInputException("method version " + found.version().number() + ": " + e.getMessage()
+            throw new BadInputException("method version " + found.version().getNumber() + ": " + e.getMessage()
                     + "; nothing done", e);
         }
         Optional<WorkBatchInfo> unfinished = store.workUnits().unfinishedBatch(actor, project.getId(),
-                found.version().id());
+                found.version().getId());
         if (unfinished.isPresent()) {
             String id = unfinished.get().id();
             BatchProgress progress = store.workUnits().progress(actor, id);
             throw new BadInputException("project " + project.getCode() + " has the unfinished work batch " + id
-                    + " of method version " + found.version().number() + " (" + progress.open() + " open and "
+                    + " of method version " + found.version().getNumber() + " (" + progress.open() + " open and "
                     + progress.claimed() + " claimed of " + progress.total() + " units); finish it with batch-work"
                     + " --batch " + id + "; nothing done");
         }
-        if (job.hasResults(found.version().id())) {
+        if (job.hasResults(found.version().getId())) {
             throw new BadInputException("project " + project.getCode() + " holds results of method version "
-                    + found.version().number() + " already; nothing done");
+                    + found.version().getNumber() + " already; nothing done");
         }
         return new Checked(found, SampleInputs.read(found.method(), backgroundFiles, files));
     }

@@ -165,7 +165,7 @@ public final class QuantifyCommand implements Command {
             }
             context.out().printf("Quantified %d measurement(s) of project %s with method '%s' version %d;"
                     + " skipped %d quantified with it before%n", outcome.stored(), project.getCode(),
-                    found.method().method().name(), found.version().number(), outcome.skipped());
+                    found.method().method().name(), found.version().getNumber(), outcome.skipped());
             return ExitCode.OK;
         }
     }
@@ -231,7 +231,8 @@ public final class QuantifyCommand implements Command {
                 return ExitCode.CANCELLED;
             }
             context.out().printf("Processed %d spectra of project %s with method '%s' version %d%n",
-                    outcome.delivered(), project.getCode(), found.method().method().name(), found.version().number());
+                    outcome.delivered(), project.getCode(), found.method().method().name(),
+                    found.version().getNumber());
             return ExitCode.OK;
         }
     }

@@ -87,7 +87,7 @@ public final class ReportSignCommand implements Command {
             }
             // whoever recorded any of the report's results or checks is its author; naming the signer as the
             // author then lets the store refuse the signature and record the refused attempt
-            List<String> authors = report.authors(found.version().id());
+            List<String> authors = report.authors(found.version().getId());
             String author = authors.contains(signer.userId()) ? signer.userId() : authors.get(0);
             try {
                 Signature s = ReportSignatures.sign(store, signer, project.getId(), content, author,

@@ -1,14 +1,14 @@
 package org.tracegas.runner.commands;
 
-import org.tracegas.method.StoredMethod;
 import org.tracegas.installation.InstalledSoftware;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.method.StoredMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Project;
+import org.tracegas.model.VersionKind;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /** How the commands that work with results find a project and a stored version of a method. */
@@ -20,7 +20,7 @@ final class StoredMethods {
               --method <name> [--method-version <n>]   the stored method, its version n (default: the newest)""";
 
     /** A version of a method and the method rebuilt from it. */
-    record Found(VersionInfo version, StoredMethod method) {
+    record Found(ContentVersion version, StoredMethod method) {
     }
 
     private StoredMethods() {
@@ -32,15 +32,15 @@ final class StoredMethods {
      */
     static Found find(WorkspaceStore store, Options options) throws UsageException, FileFormatException {
         String name = options.text("--method");
-        VersionInfo version = store.versions().latest(VersionKind.METHOD, name)
+        ContentVersion version = store.versions().latest(VersionKind.METHOD, name)
                 .orElseThrow(() -> new UsageException("no method named '" + name + "'; define it with method-define"));
         if (options.has("--method-version")) {
             int wanted = options.positiveInteger("--method-version");
-            int newest = version.number();
-            while (version.number() != wanted && version.parentId() != null) {
-                version = store.versions().version(version.parentId());
+            int newest = version.getNumber();
+            while (version.getNumber() != wanted && version.getParentId() != null) {
+                version = store.versions().version(version.getParentId());
             }
-            if (version.number() != wanted) {
+            if (version.getNumber() != wanted) {
                 throw new UsageException("method '" + name + "' has no version " + wanted + " among the versions up to its newest, "
                         + newest);
             }
@@ -54,21 +54,22 @@ final class StoredMethods {
      * @throws BadInputException if the id names no METHOD version
      */
     static Found byId(WorkspaceStore store, String versionId) throws BadInputException, FileFormatException {
-        VersionInfo version;
+        ContentVersion version;
         try {
             version = store.versions().version(versionId);
         } catch (NoSuchObjectException e) {
             throw new BadInputException("no stored version " + versionId, e);
         }
-        if (version.kind() != VersionKind.METHOD) {
-            throw new BadInputException("version " + versionId + " is a " + version.kind() + " version, not a method");
+        if (version.getKind() != VersionKind.METHOD) {
+            throw new BadInputException("version " + versionId + " is a " + version.getKind()
+                    + " version, not a method");
         }
         return rebuild(store, version);
     }
 
-    private static Found rebuild(WorkspaceStore store, VersionInfo version) throws FileFormatException {
-        return new Found(version, StoredMethod.parse(store.versions().content(version.id()),
-                "method version " + version.id()));
+    private static Found rebuild(WorkspaceStore store, ContentVersion version) throws FileFormatException {
+        return new Found(version, StoredMethod.parse(store.versions().content(version.getId()),
+                "method version " + version.getId()));
     }
 
     static Project project(WorkspaceStore store, Session actor, String code) throws UsageException {

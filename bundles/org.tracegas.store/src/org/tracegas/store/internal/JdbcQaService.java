@@ -16,9 +16,9 @@ import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.QaOutcome;
 import org.tracegas.model.QaOutcomes;
+import org.tracegas.model.VersionKind;
 import org.tracegas.store.QaService;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionKind;
 
 final class JdbcQaService implements QaService {
 
@@ -39,7 +39,7 @@ final class JdbcQaService implements QaService {
         }
         return transactions.run("recording " + checks.size() + " QA check(s) in project " + projectId, tx -> {
             Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
-            if (JdbcVersionService.load(tx, methodVersionId).kind() != VersionKind.METHOD) {
+            if (JdbcVersionService.load(tx, methodVersionId).getKind() != VersionKind.METHOD) {
                 throw new IllegalArgumentException("methodVersionId " + methodVersionId + " is not a method version");
             }
             JdbcVersionService.freeze(tx, methodVersionId);

@@ -25,10 +25,10 @@ import org.tracegas.model.Result;
 import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Results;
+import org.tracegas.model.VersionKind;
 import org.tracegas.store.ResultChecks;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionKind;
 
 final class JdbcResultService implements ResultService {
 

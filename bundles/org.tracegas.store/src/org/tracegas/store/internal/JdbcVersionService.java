@@ -15,13 +15,14 @@ import java.util.concurrent.ConcurrentHashMap;
 import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Role;
+import org.tracegas.model.VersionKind;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.store.FrozenVersionException;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.Session;
 import org.tracegas.store.VersionDiff;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.VersionService;
 
 final class JdbcVersionService implements VersionService {
@@ -46,7 +47,7 @@ final class JdbcVersionService implements VersionService {
     }
 
     @Override
-    public VersionInfo create(Session actor, VersionKind kind, String name, String content, String reason) {
+    public ContentVersion create(Session actor, VersionKind kind, String name, String content, String reason) {
         if (kind == null) {
             throw new IllegalArgumentException("kind must not be null");
         }
@@ -62,41 +63,41 @@ final class JdbcVersionService implements VersionService {
     }
 
     @Override
-    public VersionInfo revise(Session actor, String parentVersionId, String content, String reason) {
+    public ContentVersion revise(Session actor, String parentVersionId, String content, String reason) {
         requireContent(content, reason);
         return transactions.run("revising version " + parentVersionId, tx -> {
-            VersionInfo parent = load(tx, parentVersionId);
-            Guard.requireRole(tx, actor, "revise a " + parent.kind().name().toLowerCase(), EDITORS);
+            ContentVersion parent = load(tx, parentVersionId);
+            Guard.requireRole(tx, actor, "revise a " + parent.getKind().name().toLowerCase(), EDITORS);
             int number = tx.queryOne("SELECT MAX(number) FROM content_version WHERE item_id = ?", rs -> rs.getInt(1),
-                    parent.itemId()).orElseThrow() + 1;
-            return insertVersion(tx, actor, parent.itemId(), number, parent.id(), content, reason);
+                    parent.getItemId()).orElseThrow() + 1;
+            return insertVersion(tx, actor, parent.getItemId(), number, parent.getId(), content, reason);
         });
     }
 
     @Override
-    public VersionInfo updateDraft(Session actor, String versionId, long expectedVersion, String content,
+    public ContentVersion updateDraft(Session actor, String versionId, long expectedVersion, String content,
             String reason) {
         requireContent(content, reason);
         return transactions.run("changing draft version " + versionId, tx -> {
-            VersionInfo before = load(tx, versionId);
-            Guard.requireRole(tx, actor, "change a " + before.kind().name().toLowerCase(), EDITORS);
-            if (before.frozen()) {
-                throw new FrozenVersionException(versionId, before.number());
+            ContentVersion before = load(tx, versionId);
+            Guard.requireRole(tx, actor, "change a " + before.getKind().name().toLowerCase(), EDITORS);
+            if (before.isFrozen()) {
+                throw new FrozenVersionException(versionId, before.getNumber());
             }
             String oldContent = contentOf(tx, versionId);
-            RowVersions.update(tx, "content_version", objectType(before.kind()), versionId, expectedVersion,
+            RowVersions.update(tx, "content_version", objectType(before.getKind()), versionId, expectedVersion,
                     "content = ?, content_hash = ?, reason = ?, author_id = ?", content, hash(content), reason,
                     actor.userId());
             tx.wrote(DataKind.CONTENT_VERSION, versionId);
-            VersionInfo after = load(tx, versionId);
-            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, objectType(after.kind()), versionId)
-                    .version(after.rowVersion()).oldValue(oldContent).newValue(content).reason(reason).build());
+            ContentVersion after = load(tx, versionId);
+            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, objectType(after.getKind()), versionId)
+                    .version(after.getRowVersion()).oldValue(oldContent).newValue(content).reason(reason).build());
             return after;
         });
     }
 
     @Override
-    public VersionInfo version(String versionId) {
+    public ContentVersion version(String versionId) {
         return transactions.run("reading version " + versionId, tx -> load(tx, versionId));
     }
 
@@ -122,9 +123,9 @@ final class JdbcVersionService implements VersionService {
     void requireUsableAndFreeze(Tx tx, String versionId, VersionKind expected, String field) throws SQLException {
         VersionKind kind = frozen.get(versionId);
         if (kind == null) {
-            VersionInfo version = load(tx, versionId);
-            kind = version.kind();
-            if (!version.frozen()) {
+            ContentVersion version = load(tx, versionId);
+            kind = version.getKind();
+            if (!version.isFrozen()) {
                 freeze(tx, versionId);
             } else if (kind == expected) {
                 // read frozen, so frozen by a committed transaction (this one freezes each version once, and
@@ -145,25 +146,25 @@ final class JdbcVersionService implements VersionService {
                 + " WHERE id = ? AND frozen = FALSE", versionId);
     }
 
-    static VersionInfo load(Tx tx, String versionId) throws SQLException {
+    static ContentVersion load(Tx tx, String versionId) throws SQLException {
         return tx.queryOne(SELECT_VERSIONS + " WHERE v.id = ?", JdbcVersionService::map, versionId)
                 .orElseThrow(() -> new NoSuchObjectException("method or library version", versionId));
     }
 
-    private static VersionInfo insertVersion(Tx tx, Session actor, String itemId, int number, String parentId,
+    private static ContentVersion insertVersion(Tx tx, Session actor, String itemId, int number, String parentId,
             String content, String reason) throws SQLException {
         String id = UUID.randomUUID().toString();
         tx.update("INSERT INTO content_version (id, item_id, number, parent_id, author_id, reason, created_at,"
                 + " content, content_hash, frozen, row_version) VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, FALSE, 0)", id,
                 itemId, number, parentId, actor.userId(), reason, Instant.now().truncatedTo(ChronoUnit.MICROS), content, hash(content));
         tx.wrote(DataKind.CONTENT_VERSION, id);
-        VersionInfo created = load(tx, id);
+        ContentVersion created = load(tx, id);
         Map<String, Object> fields = new LinkedHashMap<>();
         fields.put("item", itemId);
         fields.put("number", number);
         fields.put("parent", parentId);
-        fields.put("contentHash", created.contentHash());
-        tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, objectType(created.kind()), id)
+        fields.put("contentHash", created.getContentHash());
+        tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, objectType(created.getKind()), id)
                 .newValue(AuditValues.canonical(fields) + content).reason(reason).build());
         return created;
     }
@@ -173,12 +174,21 @@ final class JdbcVersionService implements VersionService {
                 .orElseThrow(() -> new NoSuchObjectException("method or library version", versionId));
     }
 
-    private static VersionInfo map(ResultSet rs) throws SQLException {
-        String parent = rs.getString("parent_id");
-        return new VersionInfo(rs.getString("id"), VersionKind.valueOf(rs.getString("kind")), rs.getString("item_id"),
-                rs.getString("name"), rs.getInt("number"), parent, rs.getString("author_id"), rs.getString("reason"),
-                Tx.instant(rs, "created_at"), rs.getString("content_hash"), rs.getBoolean("frozen"),
-                rs.getLong("row_version"));
+    private static ContentVersion map(ResultSet rs) throws SQLException {
+        ContentVersion v = WorkspaceFactory.eINSTANCE.createContentVersion();
+        v.setId(rs.getString("id"));
+        v.setKind(VersionKind.valueOf(rs.getString("kind")));
+        v.setItemId(rs.getString("item_id"));
+        v.setItemName(rs.getString("name"));
+        v.setNumber(rs.getInt("number"));
+        v.setParentId(rs.getString("parent_id"));
+        v.setAuthorId(rs.getString("author_id"));
+        v.setReason(rs.getString("reason"));
+        v.setCreated(Tx.instant(rs, "created_at"));
+        v.setContentHash(rs.getString("content_hash"));
+        v.setFrozen(rs.getBoolean("frozen"));
+        v.setRowVersion(rs.getLong("row_version"));
+        return v;
     }
 
     static String objectType(VersionKind kind) {
@@ -198,7 +208,7 @@ final class JdbcVersionService implements VersionService {
     }
 
     @Override
-    public Optional<VersionInfo> latest(VersionKind kind, String name) {
+    public Optional<ContentVersion> latest(VersionKind kind, String name) {
         if (kind == null) {
             throw new IllegalArgumentException("kind must not be null");
         }
@@ -207,7 +217,7 @@ final class JdbcVersionService implements VersionService {
     }
 
     @Override
-    public List<VersionInfo> latest(VersionKind kind) {
+    public List<ContentVersion> latest(VersionKind kind) {
         if (kind == null) {
             throw new IllegalArgumentException("kind must not be null");
         }

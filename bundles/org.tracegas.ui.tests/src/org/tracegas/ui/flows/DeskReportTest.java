@@ -17,8 +17,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditRecord;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
+import org.tracegas.model.ContentVersion;
+import org.tracegas.model.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.Screens;
 import org.tracegas.ui.internal.ReportHandler;
@@ -53,8 +53,8 @@ class DeskReportTest {
         LimeKilnLab lab = desk.lab;
         desk.quantifiedMorning();
         WorkspaceStore store = desk.access.store();
-        VersionInfo method = store.versions().latest(VersionKind.METHOD).get(0);
-        lab.recordQaChecks(method.id());
+        ContentVersion method = store.versions().latest(VersionKind.METHOD).get(0);
+        lab.recordQaChecks(method.getId());
         Path plan = lab.reportPlan();
         Path out = folder.resolve("report-QLW");
 

@@ -24,10 +24,10 @@ import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditRecord;
 import org.tracegas.audit.Signature;
 import org.tracegas.audit.SignatureMeaning;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Project;
+import org.tracegas.model.VersionKind;
 import org.tracegas.store.ReviewService;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.ReviewDeskLayout;
 import org.tracegas.ui.Screens;
@@ -62,8 +62,8 @@ class DeskWorkbenchSigningTest {
         // 6 % moisture (invented): the report states concentrations on dry gas
         try (LabDesk lab = new LabDesk(folder, 900, 500, 60_000)) {
             lab.quantifiedMorning();
-            VersionInfo method = lab.access.store().versions().latest(VersionKind.METHOD).get(0);
-            lab.lab.recordQaChecks(method.id());
+            ContentVersion method = lab.access.store().versions().latest(VersionKind.METHOD).get(0);
+            lab.lab.recordQaChecks(method.getId());
             plan = lab.lab.reportPlan();
             reviewedByTheReviewer(lab, method, plan);
         }
@@ -74,7 +74,7 @@ class DeskWorkbenchSigningTest {
     }
 
     /** The reviewer's desk: the report made and signed as reviewed through the same panel and dialog. */
-    private void reviewedByTheReviewer(LabDesk lab, VersionInfo method, Path plan) throws Exception {
+    private void reviewedByTheReviewer(LabDesk lab, ContentVersion method, Path plan) throws Exception {
         Desk.get().start(lab.access, lab.lab.reviewer);
         ReportPanel panel = new ReportPanel(lab.shell, SWT.NONE);
         lab.shell.open();
@@ -206,7 +206,7 @@ class DeskWorkbenchSigningTest {
     }
 
     /** Makes the report through the desk's report job and waits for it; the desk is told of it. */
-    private static void made(Display display, WorkspaceStore store, Project project, VersionInfo method,
+    private static void made(Display display, WorkspaceStore store, Project project, ContentVersion method,
             Path plan, Path out) throws Exception {
         List<String> closing = new ArrayList<>();
         var job = ReportHandler.schedule(ReportHandler.request(store, project, method, plan, out), display,

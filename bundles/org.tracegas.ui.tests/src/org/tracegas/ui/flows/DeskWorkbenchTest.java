@@ -25,7 +25,7 @@ import org.eclipse.ui.IWorkbenchWindow;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditAction;
-import org.tracegas.store.VersionKind;
+import org.tracegas.model.VersionKind;
 import org.tracegas.ui.Screens;
 import org.tracegas.ui.parts.AuditTrailPanel;
 import org.tracegas.ui.parts.ConcentrationTrace;
@@ -82,7 +82,7 @@ class DeskWorkbenchTest {
 
         // the method beside the spectrum, a region's span edited: the form and the comparison fit the narrow view
         MethodEditorPanel method = find(shell, MethodEditorPanel.class);
-        method.openStored(Desk.get().access().store().versions().latest(VersionKind.METHOD).get(0).id());
+        method.openStored(Desk.get().access().store().versions().latest(VersionKind.METHOD).get(0).getId());
         method.upperField().setText("2230");
         assertEquals("1 field differs (highlighted).", method.comparison().summary().getText());
         Screens.flush(display);

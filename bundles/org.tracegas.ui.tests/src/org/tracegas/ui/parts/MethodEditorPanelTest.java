@@ -21,15 +21,15 @@ import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.VersionKind;
 import org.tracegas.model.edit.ModelEditor;
 import org.tracegas.quantify.Analyte;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.ui.Screens;
-import org.tracegas.ui.session.SeededProject;
 import org.tracegas.ui.session.DemoStaff;
+import org.tracegas.ui.session.SeededProject;
 import org.tracegas.ui.session.WorkspaceAccess;
 
 /**
@@ -138,17 +138,17 @@ class MethodEditorPanelTest {
         press(panel.saveButton());
         assertEquals("reason: a new method version needs a reason", panel.problems().getText());
         assertEquals(1, access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow()
-                .number(), "nothing stored without a reason");
+                .getNumber(), "nothing stored without a reason");
 
         panel.reasonField().setText("CO window widened below the water lines");
         press(panel.saveButton());
         assertEquals("Saved as version 2.", panel.problems().getText());
-        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
-        assertEquals(2, saved.number());
-        assertEquals(demo.methodVersionId(), saved.parentId());
-        assertEquals(analyst.userId(), saved.authorId());
-        assertEquals("CO window widened below the water lines", saved.reason());
-        StoredMethod back = StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+        ContentVersion saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
+        assertEquals(2, saved.getNumber());
+        assertEquals(demo.methodVersionId(), saved.getParentId());
+        assertEquals(analyst.userId(), saved.getAuthorId());
+        assertEquals("CO window widened below the water lines", saved.getReason());
+        StoredMethod back = StoredMethod.parse(access.store().versions().content(saved.getId()), "saved");
         Analyte co = back.method().analytes().get(0);
         assertEquals(2070, co.regions().get(0).low());
         assertEquals(2190, co.regions().get(0).high());
@@ -238,10 +238,10 @@ class MethodEditorPanelTest {
         panel.reasonField().setText(reason);
         press(panel.saveButton());
         assertEquals("Saved as version 2.", panel.problems().getText());
-        VersionInfo saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
-        assertEquals(demo.methodVersionId(), saved.parentId());
-        assertEquals(analyst.userId(), saved.authorId());
-        return StoredMethod.parse(access.store().versions().content(saved.id()), "saved");
+        ContentVersion saved = access.store().versions().latest(VersionKind.METHOD, method.getName()).orElseThrow();
+        assertEquals(demo.methodVersionId(), saved.getParentId());
+        assertEquals(analyst.userId(), saved.getAuthorId());
+        return StoredMethod.parse(access.store().versions().content(saved.getId()), "saved");
     }
 
     private void choose(int index) {
@@ -419,12 +419,12 @@ class MethodEditorPanelTest {
 
     @Test
     void aVersionWithoutAMethodTextIsNamedAndNotOpened() {
-        VersionInfo other = access.store().versions().create(analyst, VersionKind.METHOD, "Not a method",
+        ContentVersion other = access.store().versions().create(analyst, VersionKind.METHOD, "Not a method",
                 "compounds=CO\n", "an old note");
-        panel.openStored(other.id());
+        panel.openStored(other.getId());
         assertTrue(panel.problems().getText().startsWith("The method version cannot be opened: "),
                 panel.problems().getText());
-        assertTrue(panel.problems().getText().contains(other.id()), panel.problems().getText());
+        assertTrue(panel.problems().getText().contains(other.getId()), panel.problems().getText());
         assertEquals("Version 1 as opened", panel.comparison().table().getColumn(1).getText());
         assertEquals("Kiln stack CO and N2O", panel.nameField().getText());
     }

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Set;
 
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
@@ -15,9 +16,8 @@ import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Results;
 import org.tracegas.model.Role;
+import org.tracegas.model.VersionKind;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -62,9 +62,9 @@ final class ExistingWorkspace {
                     FIRST_SAMPLE.plus(Duration.ofMinutes(i)), 453.15, 1013.0));
         }
         sampleIds = List.copyOf(ids);
-        VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "Stack CO and NO",
+        ContentVersion method = store.versions().create(analyst, VersionKind.METHOD, "Stack CO and NO",
                 "compounds=CO,NO\n", "first");
-        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Stack references",
+        ContentVersion library = store.versions().create(analyst, VersionKind.LIBRARY, "Stack references",
                 "CO=1\nNO=1\n", "first");
         List<Result> results = new ArrayList<>();
         // stored newest first, so the traces must sort by measurement time themselves
@@ -77,8 +77,8 @@ final class ExistingWorkspace {
     }
 
     private static Result result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,
-            VersionInfo method, VersionInfo library) {
+            ContentVersion method, ContentVersion library) {
         return Results.of(measurementId, compound, ppm, 0.5, 0.2, "ppm", flags,
-                new Provenance(method.id(), library.id(), "Tracegas Workbench 0.1.0", "0".repeat(64)), null);
+                new Provenance(method.getId(), library.getId(), "Tracegas Workbench 0.1.0", "0".repeat(64)), null);
     }
 }

@@ -5,18 +5,20 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Random;
 
-import org.tracegas.method.MethodVersions;
-import org.tracegas.method.StoredMethod;
 import org.tracegas.library.Compound;
 import org.tracegas.library.Origin;
 import org.tracegas.library.OriginKind;
 import org.tracegas.library.ReferenceConditions;
 import org.tracegas.library.ReferenceMetadata;
+import org.tracegas.method.MethodVersions;
+import org.tracegas.method.StoredMethod;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.VersionKind;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.preprocess.TransformSettings;
@@ -29,8 +31,6 @@ import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -80,12 +80,12 @@ public final class SeededProject {
         }
         List<ReferenceSpectrum> refs = references();
         QuantificationMethod method = method(refs);
-        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Demo band shapes",
+        ContentVersion library = store.versions().create(analyst, VersionKind.LIBRARY, "Demo band shapes",
                 "origin=synthetic\ncompounds=CO,N2O,H2O\n", "demo library");
         // the demo's samples are absorbance spectra already; the transform is recorded as the default one
-        StoredMethod stored = new StoredMethod(method, TransformSettings.defaults(), library.id(),
-                library.contentHash());
-        VersionInfo methodVersion = store.versions().create(analyst, VersionKind.METHOD, method.name(),
+        StoredMethod stored = new StoredMethod(method, TransformSettings.defaults(), library.getId(),
+                library.getContentHash());
+        ContentVersion methodVersion = store.versions().create(analyst, VersionKind.METHOD, method.name(),
                 stored.content(), "demo method");
         List<Spectrum> samples = new ArrayList<>();
         for (int i = 0; i < measurements.size(); i++) {
@@ -93,8 +93,8 @@ public final class SeededProject {
         }
         Workspace model = model(store.projects().project(analyst, project.getId()),
                 store.projects().measurements(analyst, project.getId()), stored, methodVersion, library);
-        return new Seeded(model, project.getId(), List.copyOf(measurements), methodVersion.id(), library.id(), stored,
-                libraryEntries(refs), List.copyOf(samples), TIMES, BACKGROUND);
+        return new Seeded(model, project.getId(), List.copyOf(measurements), methodVersion.getId(), library.getId(),
+                stored, libraryEntries(refs), List.copyOf(samples), TIMES, BACKGROUND);
     }
 
     /** Invented band shapes at 100 ppm·m each. */
@@ -158,7 +158,7 @@ public final class SeededProject {
 
     /** The workspace with the project and its measurements as the store reads them. */
     private static Workspace model(Project project, List<Measurement> measurements, StoredMethod method,
-            VersionInfo methodVersion, VersionInfo library) {
+            ContentVersion methodVersion, ContentVersion library) {
         WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
         Workspace w = f.createWorkspace();
         w.setName("Demo workspace");
@@ -167,8 +167,8 @@ public final class SeededProject {
         }
         w.getClients().add(project.getClient());
         ReferenceLibrary lib = f.createReferenceLibrary();
-        lib.setId(library.itemId());
-        lib.setName(library.name());
+        lib.setId(library.getItemId());
+        lib.setName(library.getItemName());
         lib.setDescription("synthetic band shapes");
         w.getLibraries().add(lib);
         w.getMethods().add(MethodVersions.model(methodVersion, method));

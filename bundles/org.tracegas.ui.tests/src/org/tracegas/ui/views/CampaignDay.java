@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Set;
 
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
@@ -14,9 +15,8 @@ import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Results;
 import org.tracegas.model.Role;
+import org.tracegas.model.VersionKind;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -51,9 +51,9 @@ final class CampaignDay {
         store.projects().grant(admin, small.getId(), analystId, AccessLevel.WRITE);
 
         Session analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
-        VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "Kiln stack five gases",
+        ContentVersion method = store.versions().create(analyst, VersionKind.METHOD, "Kiln stack five gases",
                 "compounds=CO,NO,N2O,H2O,CO2\n", "first");
-        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln references",
+        ContentVersion library = store.versions().create(analyst, VersionKind.LIBRARY, "Kiln references",
                 "CO=1\nNO=1\nN2O=1\nH2O=1\nCO2=1\n", "first");
         List<Result> results = new ArrayList<>();
         for (int i = 0; i < MINUTES; i++) {
@@ -76,8 +76,8 @@ final class CampaignDay {
     }
 
     private static Result result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,
-            VersionInfo method, VersionInfo library) {
+            ContentVersion method, ContentVersion library) {
         return Results.of(measurementId, compound, ppm, 0.5, 0.2, "ppm", flags,
-                new Provenance(method.id(), library.id(), "Tracegas Workbench 0.1.0", "0".repeat(64)), null);
+                new Provenance(method.getId(), library.getId(), "Tracegas Workbench 0.1.0", "0".repeat(64)), null);
     }
 }

@@ -11,6 +11,7 @@ import java.util.Set;
 
 import org.tracegas.library.io.LibraryVersionText;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
@@ -19,6 +20,7 @@ import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.model.VersionKind;
 import org.tracegas.qa.campaign.StoredQaChecks;
 import org.tracegas.qa.checks.AcceptanceLimits;
 import org.tracegas.qa.checks.CheckOutcome;
@@ -30,8 +32,6 @@ import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
 import org.tracegas.store.SpectrumInput;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -69,9 +69,9 @@ final class StoredProject {
         Session analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
         store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.BACKGROUND,
                 FIRST.minus(Duration.ofMinutes(5)), 453.15, 1013.0);
-        VersionInfo method = store.versions().create(analyst, VersionKind.METHOD, "Furnace CO and NO",
+        ContentVersion method = store.versions().create(analyst, VersionKind.METHOD, "Furnace CO and NO",
                 "compounds=CO,NO\n", "first");
-        VersionInfo library = store.versions().create(analyst, VersionKind.LIBRARY, LIBRARY,
+        ContentVersion library = store.versions().create(analyst, VersionKind.LIBRARY, LIBRARY,
                 libraryText(folder), "first");
         List<Result> results = new ArrayList<>();
         for (int i = 0; i < SAMPLES; i++) {
@@ -85,7 +85,7 @@ final class StoredProject {
                     method, library));
         }
         store.results().recordAll(analyst, project.getId(), results);
-        StoredQaChecks.store(store, analyst, project.getId(), method.id(), List.of(
+        StoredQaChecks.store(store, analyst, project.getId(), method.getId(), List.of(
                 CheckOutcome.judge("CTS pre/post agreement", 3.1, "%", AcceptanceLimits.atMost(5),
                         new Rule(CTS_RULE, CTS_SOURCE)),
                 CheckOutcome.judge("Spike recovery", 0.62, "", new AcceptanceLimits(0.7, 1.3),
@@ -125,8 +125,8 @@ final class StoredProject {
     }
 
     private static Result result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,
-            VersionInfo method, VersionInfo library) {
+            ContentVersion method, ContentVersion library) {
         return Results.of(measurementId, compound, ppm, 0.5, 0.2, "ppm", flags,
-                new Provenance(method.id(), library.id(), "Tracegas Workbench 0.1.0", "0".repeat(64)), null);
+                new Provenance(method.getId(), library.getId(), "Tracegas Workbench 0.1.0", "0".repeat(64)), null);
     }
 }

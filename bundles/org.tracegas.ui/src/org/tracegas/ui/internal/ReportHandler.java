@@ -15,11 +15,11 @@ import org.eclipse.swt.widgets.FileDialog;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.PartInitException;
 import org.eclipse.ui.handlers.HandlerUtil;
-import org.tracegas.method.StoredMethod;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.method.StoredMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Project;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
+import org.tracegas.model.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.jobs.AnalysisRuns;
 import org.tracegas.ui.jobs.CampaignReportJob;
@@ -45,13 +45,13 @@ public final class ReportHandler extends AbstractHandler {
             MessageDialog.openInformation(shell, "Report", "Select the project in the workspace tree first.");
             return null;
         }
-        List<VersionInfo> methods = store.versions().latest(VersionKind.METHOD);
+        List<ContentVersion> methods = store.versions().latest(VersionKind.METHOD);
         if (methods.isEmpty()) {
             MessageDialog.openInformation(shell, "Report", "The workspace holds no method yet, so no results to"
                     + " report.");
             return null;
         }
-        VersionInfo version = methods.size() == 1 ? methods.get(0) : RunMethodHandler.choose(shell, methods,
+        ContentVersion version = methods.size() == 1 ? methods.get(0) : RunMethodHandler.choose(shell, methods,
                 "Report", "The method whose stored results and QA checks the report shows (its newest version):");
         if (version == null) {
             return null;
@@ -88,11 +88,11 @@ public final class ReportHandler extends AbstractHandler {
      *
      * @throws FileFormatException if the stored method text cannot be read
      */
-    public static CampaignReportJob.Request request(WorkspaceStore store, Project project, VersionInfo version,
+    public static CampaignReportJob.Request request(WorkspaceStore store, Project project, ContentVersion version,
             Path plan, Path folder) throws FileFormatException {
         return new CampaignReportJob.Request(store, Desk.get().session(), project, version,
-                StoredMethod.parse(store.versions().content(version.id()), "method version " + version.id()), plan,
-                folder);
+                StoredMethod.parse(store.versions().content(version.getId()), "method version " + version.getId()),
+                plan, folder);
     }
 
     /**

@@ -16,12 +16,12 @@ import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.ui.dialogs.ElementListSelectionDialog;
 import org.eclipse.ui.handlers.HandlerUtil;
-import org.tracegas.method.StoredMethod;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.method.StoredMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Project;
+import org.tracegas.model.VersionKind;
 import org.tracegas.preprocess.StepRegistry;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.jobs.AnalysisRuns;
 import org.tracegas.ui.jobs.StoredMethodRunJob;
@@ -47,13 +47,13 @@ public final class RunMethodHandler extends AbstractHandler {
                     + " the workspace tree first.");
             return null;
         }
-        List<VersionInfo> methods = store.versions().latest(VersionKind.METHOD);
+        List<ContentVersion> methods = store.versions().latest(VersionKind.METHOD);
         if (methods.isEmpty()) {
             MessageDialog.openInformation(shell, "Run method", "The workspace holds no method yet; define one with"
                     + " 'tracegas method-define'.");
             return null;
         }
-        VersionInfo version = methods.size() == 1 ? methods.get(0) : choose(shell, methods, "Run method",
+        ContentVersion version = methods.size() == 1 ? methods.get(0) : choose(shell, methods, "Run method",
                 "The method to run (its newest version):");
         if (version == null) {
             return null;
@@ -68,19 +68,19 @@ public final class RunMethodHandler extends AbstractHandler {
     }
 
     /** The method the user picks among the newest versions of the workspace's methods; null when cancelled. */
-    static VersionInfo choose(Shell shell, List<VersionInfo> methods, String title, String message) {
+    static ContentVersion choose(Shell shell, List<ContentVersion> methods, String title, String message) {
         ElementListSelectionDialog d = new ElementListSelectionDialog(shell, new LabelProvider() {
             @Override
             public String getText(Object element) {
-                VersionInfo v = (VersionInfo) element;
-                return v.name() + " — version " + v.number();
+                ContentVersion v = (ContentVersion) element;
+                return v.getItemName() + " — version " + v.getNumber();
             }
         });
         d.setTitle(title);
         d.setMessage(message);
         d.setElements(methods.toArray());
         d.setMultipleSelection(false);
-        return d.open() == Window.OK ? (VersionInfo) d.getFirstResult() : null;
+        return d.open() == Window.OK ? (ContentVersion) d.getFirstResult() : null;
     }
 
     /**
@@ -88,10 +88,10 @@ public final class RunMethodHandler extends AbstractHandler {
      *
      * @throws FileFormatException if the stored text cannot be read
      */
-    public static StoredMethodRunJob.Target target(WorkspaceStore store, Project project, VersionInfo version)
+    public static StoredMethodRunJob.Target target(WorkspaceStore store, Project project, ContentVersion version)
             throws FileFormatException {
         return new StoredMethodRunJob.Target(store, Desk.get().session(), project, version,
-                StoredMethod.parse(store.versions().content(version.id()), "method version " + version.id()));
+                StoredMethod.parse(store.versions().content(version.getId()), "method version " + version.getId()));
     }
 
     /**

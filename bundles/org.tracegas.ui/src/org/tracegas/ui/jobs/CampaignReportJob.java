@@ -8,18 +8,18 @@ import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.SubMonitor;
 import org.eclipse.core.runtime.jobs.Job;
-import org.tracegas.report.campaign.CampaignReport;
-import org.tracegas.report.campaign.ReportIdTakenException;
-import org.tracegas.report.campaign.ReportPlan;
-import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.ImportException;
+import org.tracegas.method.StoredMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Project;
 import org.tracegas.report.AuditAnchor;
 import org.tracegas.report.PdfReportWriter;
 import org.tracegas.report.ReportContent;
 import org.tracegas.report.Signature;
+import org.tracegas.report.campaign.CampaignReport;
+import org.tracegas.report.campaign.ReportIdTakenException;
+import org.tracegas.report.campaign.ReportPlan;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -33,7 +33,7 @@ import org.tracegas.store.WorkspaceStore;
 public final class CampaignReportJob extends Job {
 
     /** What the report was made from and where it goes. */
-    public record Request(WorkspaceStore store, Session actor, Project project, VersionInfo version,
+    public record Request(WorkspaceStore store, Session actor, Project project, ContentVersion version,
             StoredMethod method, Path plan, Path folder) {
     }
 
@@ -53,7 +53,7 @@ public final class CampaignReportJob extends Job {
     /** @param software what the report states as its software */
     public CampaignReportJob(Request request, String software) {
         super("Making the report of " + request.project().getCode() + " with " + request.method().method().name()
-                + " version " + request.version().number());
+                + " version " + request.version().getNumber());
         this.request = request;
         this.software = software;
         setUser(true);

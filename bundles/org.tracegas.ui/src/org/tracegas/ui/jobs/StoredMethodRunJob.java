@@ -10,15 +10,15 @@ import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.SubMonitor;
 import org.eclipse.core.runtime.jobs.Job;
-import org.tracegas.pipeline.MeasurementQuantification;
-import org.tracegas.method.StoredMethod;
 import org.tracegas.importer.ImportException;
+import org.tracegas.method.StoredMethod;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
+import org.tracegas.pipeline.MeasurementQuantification;
 import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -36,7 +36,7 @@ public final class StoredMethodRunJob extends Job {
     }
 
     /** The method version to run and where its results go. */
-    public record Target(WorkspaceStore store, Session actor, Project project, VersionInfo version,
+    public record Target(WorkspaceStore store, Session actor, Project project, ContentVersion version,
             StoredMethod method) {
     }
 
@@ -57,7 +57,7 @@ public final class StoredMethodRunJob extends Job {
      */
     public StoredMethodRunJob(Target target, StepRegistry steps, String software, Set<String> chosen,
             Consumer<Outcome> whenDone) {
-        super("Running " + target.method().method().name() + " version " + target.version().number() + " on "
+        super("Running " + target.method().method().name() + " version " + target.version().getNumber() + " on "
                 + target.project().getCode());
         this.target = target;
         this.steps = steps;
@@ -106,7 +106,7 @@ public final class StoredMethodRunJob extends Job {
             return Status.CANCEL_STATUS;
         }
         return Status.info("Quantified " + outcome.stored() + " measurement(s) of project " + target.project().getCode()
-                + " with method '" + target.method().method().name() + "' version " + target.version().number()
+                + " with method '" + target.method().method().name() + "' version " + target.version().getNumber()
                 + "; skipped " + outcome.skipped() + " quantified with it before");
     }
 
@@ -118,7 +118,7 @@ public final class StoredMethodRunJob extends Job {
         List<Measurement> samples = all.samples().stream()
                 .filter(m -> chosen.contains(m.getId())).toList();
         Set<String> analysed = target.store().analyses().analysed(target.actor(), target.project().getId(),
-                target.version().id());
+                target.version().getId());
         int skipped = (int) chosen.stream().filter(analysed::contains).count();
         return new MeasurementQuantification.Plan(samples, skipped, Map.of());
     }

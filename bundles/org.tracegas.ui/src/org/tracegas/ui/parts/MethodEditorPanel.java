@@ -10,36 +10,36 @@ import java.util.TreeSet;
 import org.eclipse.core.runtime.RegistryFactory;
 import org.eclipse.emf.common.command.CommandStackListener;
 import org.eclipse.emf.common.command.CompoundCommand;
+import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.emf.edit.command.AddCommand;
 import org.eclipse.emf.edit.command.RemoveCommand;
-import org.eclipse.emf.ecore.EStructuralFeature;
 import org.eclipse.emf.edit.command.SetCommand;
 import org.eclipse.jface.fieldassist.ControlDecoration;
 import org.eclipse.swt.SWT;
-import org.eclipse.swt.graphics.GC;
-import org.eclipse.swt.graphics.Image;
-import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.custom.SashForm;
 import org.eclipse.swt.custom.ScrolledComposite;
+import org.eclipse.swt.graphics.GC;
+import org.eclipse.swt.graphics.Image;
 import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Combo;
 import org.eclipse.swt.widgets.Composite;
+import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Text;
+import org.tracegas.library.io.FileFormatException;
 import org.tracegas.method.MethodVersions;
 import org.tracegas.method.StoredMethod;
-import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.model.WorkspacePackage.Literals;
 import org.tracegas.model.edit.ModelEditor;
 import org.tracegas.preprocess.StepRegistry;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -101,7 +101,7 @@ public final class MethodEditorPanel extends Composite {
     private MethodVersion version;
     private StoredMethod stored;
     private String opened;
-    private List<VersionInfo> line = List.of();
+    private List<ContentVersion> line = List.of();
     private boolean filling;
     private WorkspaceStore store;
     private Session actor;
@@ -341,7 +341,7 @@ public final class MethodEditorPanel extends Composite {
      */
     public void openStored(String versionId) {
         StoredMethod read;
-        VersionInfo info;
+        ContentVersion info;
         try {
             info = store.versions().version(versionId);
             read = StoredMethod.parse(store.versions().content(versionId), "method version " + versionId);
@@ -560,9 +560,9 @@ public final class MethodEditorPanel extends Composite {
         Map<String, String> texts = new LinkedHashMap<>();
         texts.put("Draft", draft);
         texts.put(asOpened, opened);
-        for (VersionInfo v : line) {
-            if (!v.id().equals(version.getId())) {
-                texts.put("Version " + v.number(), v.id());
+        for (ContentVersion v : line) {
+            if (!v.getId().equals(version.getId())) {
+                texts.put("Version " + v.getNumber(), v.getId());
             }
         }
         String drafted = draft;
@@ -574,17 +574,17 @@ public final class MethodEditorPanel extends Composite {
      * The stored versions of the method from the newest back to the first, newest first; none without a store.
      * Read when a version is opened, not at every keystroke.
      */
-    private List<VersionInfo> readLine() {
+    private List<ContentVersion> readLine() {
         if (store == null || version.getId() == null) {
             return List.of();
         }
-        List<VersionInfo> found = new java.util.ArrayList<>();
+        List<ContentVersion> found = new java.util.ArrayList<>();
         try {
-            VersionInfo v = store.versions().latest(org.tracegas.store.VersionKind.METHOD, method.getName())
+            ContentVersion v = store.versions().latest(org.tracegas.model.VersionKind.METHOD, method.getName())
                     .orElse(null);
             while (v != null) {
                 found.add(v);
-                v = v.parentId() == null ? null : store.versions().version(v.parentId());
+                v = v.getParentId() == null ? null : store.versions().version(v.getParentId());
             }
         } catch (RuntimeException e) {
             // the versions that could be read are offered; the reason is named below the form
@@ -633,7 +633,7 @@ public final class MethodEditorPanel extends Composite {
     }
 
     private void save() {
-        VersionInfo next;
+        ContentVersion next;
         StoredMethod edited;
         try {
             edited = MethodVersions.edited(stored, method, version);
@@ -649,7 +649,7 @@ public final class MethodEditorPanel extends Composite {
         editor.domain().getCommandStack().flush();
         reason.setText("");
         open(method, saved, edited);
-        problems.setText("Saved as version " + next.number() + ".");
+        problems.setText("Saved as version " + next.getNumber() + ".");
     }
 
     private void updateButtons() {

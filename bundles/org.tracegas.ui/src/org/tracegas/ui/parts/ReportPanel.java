@@ -92,7 +92,7 @@ public final class ReportPanel extends Composite {
         ReportContent content = outcome.content();
         approval = new ReportApproval(job.request(), content);
         heading.setText("Report " + content.campaign().reportId() + " of " + job.request().project().getCode() + " — "
-                + job.request().method().method().name() + " version " + job.request().version().number()
+                + job.request().method().method().name() + " version " + job.request().version().getNumber()
                 + (outcome.failedQa() == 0 ? "; every QA reading passed." : "; " + outcome.failedQa() + " of "
                         + content.qa().size() + " QA readings failed, as its first page says."));
         hash.setText("Content hash (SHA-256), what a signature is given on: " + content.contentHash()

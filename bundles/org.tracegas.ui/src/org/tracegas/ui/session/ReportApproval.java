@@ -57,7 +57,7 @@ public final class ReportApproval {
                 AnalysisRuns.software());
         // whoever recorded any of the report's results or checks is its author; naming the signer as the author
         // then lets the store refuse the signature and record the refused attempt
-        List<String> authors = report.authors(request.version().id());
+        List<String> authors = report.authors(request.version().getId());
         String author = authors.contains(request.actor().userId()) ? request.actor().userId() : authors.get(0);
         return ReportSignatures.sign(request.store(), request.actor(), request.project().getId(), content, author,
                 typedLogin, password, meaning, comment == null || comment.isBlank() ? null : comment);

@@ -4,12 +4,12 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.tracegas.method.KeyValueFile;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.library.io.LibraryVersionText;
+import org.tracegas.method.KeyValueFile;
+import org.tracegas.model.ContentVersion;
+import org.tracegas.model.VersionKind;
 import org.tracegas.store.NoSuchObjectException;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -20,7 +20,7 @@ import org.tracegas.store.WorkspaceStore;
 public final class StoredLibrary {
 
     /** A version and its references as rows of the library panel's columns; {@code note} says what is missing. */
-    public record Listing(VersionInfo version, List<String[]> references, String note) {
+    public record Listing(ContentVersion version, List<String[]> references, String note) {
     }
 
     private static final String NOT_STORED = "in the library folder";
@@ -34,11 +34,11 @@ public final class StoredLibrary {
      * @throws NoSuchObjectException when there is no such library
      */
     public static Listing latest(WorkspaceStore store, String name) {
-        VersionInfo v = store.versions().latest(VersionKind.LIBRARY, name)
+        ContentVersion v = store.versions().latest(VersionKind.LIBRARY, name)
                 .orElseThrow(() -> new NoSuchObjectException("reference library", name));
-        String text = store.versions().content(v.id());
+        String text = store.versions().content(v.getId());
         try {
-            KeyValueFile manifest = KeyValueFile.parse(text, Path.of(name + " version " + v.number()));
+            KeyValueFile manifest = KeyValueFile.parse(text, Path.of(name + " version " + v.getNumber()));
             List<String[]> rows = new ArrayList<>();
             for (KeyValueFile.Section r : manifest.blocks("reference")) {
                 String origin = r.text("origin", "");

@@ -6,18 +6,18 @@ import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.OperationCanceledException;
 import org.eclipse.core.runtime.SubMonitor;
 
-import org.tracegas.method.MethodVersions;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.method.MethodVersions;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.Client;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.VersionKind;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -65,25 +65,25 @@ public final class StoredWorkspace {
             step.done();
         }
         progress.split(5);
-        for (VersionInfo v : store.versions().latest(VersionKind.LIBRARY)) {
+        for (ContentVersion v : store.versions().latest(VersionKind.LIBRARY)) {
             ReferenceLibrary l = f.createReferenceLibrary();
-            l.setId(v.itemId());
-            l.setName(v.name());
+            l.setId(v.getItemId());
+            l.setName(v.getItemName());
             w.getLibraries().add(l);
         }
-        for (VersionInfo v : store.versions().latest(VersionKind.METHOD)) {
+        for (ContentVersion v : store.versions().latest(VersionKind.METHOD)) {
             w.getMethods().add(method(store, v));
         }
         return w;
     }
 
     /** The method with its regions; one whose stored text cannot be read is listed with the reason. */
-    private static AnalysisMethod method(WorkspaceStore store, VersionInfo v) {
+    private static AnalysisMethod method(WorkspaceStore store, ContentVersion v) {
         try {
             return MethodVersions.read(store, v);
         } catch (FileFormatException e) {
             AnalysisMethod m = MethodVersions.model(v);
-            m.setDescription("version " + v.number() + " cannot be read: " + e.getMessage());
+            m.setDescription("version " + v.getNumber() + " cannot be read: " + e.getMessage());
             return m;
         }
     }

@@ -52,7 +52,7 @@ public final class LibraryView extends ViewPart implements FollowsTree {
         Desk desk = Desk.get();
         panel.showRows("Reading the library " + name + " …", List.of());
         loads.start("Reading the library " + name, monitor -> StoredLibrary.latest(desk.access().store(), name),
-                listing -> panel.showRows(name + ", version " + listing.version().number() + ": "
+                listing -> panel.showRows(name + ", version " + listing.version().getNumber() + ": "
                         + listing.references().size() + " references" + (listing.note().isEmpty() ? ""
                                 : "; " + listing.note()), listing.references()),
                 message -> panel.showRows("The library " + name + " could not be read: " + message, List.of()));

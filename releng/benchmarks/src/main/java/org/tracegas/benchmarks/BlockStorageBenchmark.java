@@ -33,6 +33,7 @@ import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.model.VersionKind;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
@@ -41,7 +42,6 @@ import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
 import org.tracegas.store.SpectrumInput;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -92,8 +92,8 @@ public class BlockStorageBenchmark {
         projectId = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
                 "B-1",
                 "Benchmark").getId();
-        String method = store.versions().create(analyst, VersionKind.METHOD, "m", "a=1\n", "bench").id();
-        String library = store.versions().create(analyst, VersionKind.LIBRARY, "l", "b=1\n", "bench").id();
+        String method = store.versions().create(analyst, VersionKind.METHOD, "m", "a=1\n", "bench").getId();
+        String library = store.versions().create(analyst, VersionKind.LIBRARY, "l", "b=1\n", "bench").getId();
         block = block(method, library);
     }
 

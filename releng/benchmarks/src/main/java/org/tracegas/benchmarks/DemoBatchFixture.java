@@ -7,9 +7,6 @@ import java.util.List;
 import java.util.Set;
 import java.util.function.Function;
 
-import org.tracegas.pipeline.AnalysisVersions;
-import org.tracegas.pipeline.BackgroundTimeline;
-import org.tracegas.pipeline.SpectrumChain;
 import org.tracegas.demo.DemoCampaignFiles;
 import org.tracegas.demo.DemoMethod;
 import org.tracegas.demo.DemoPhysics;
@@ -17,7 +14,12 @@ import org.tracegas.importer.container.ContainerReader;
 import org.tracegas.importer.container.ContainerRecord;
 import org.tracegas.importer.container.SampleKind;
 import org.tracegas.library.ReferenceLibrary;
+import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Role;
+import org.tracegas.model.VersionKind;
+import org.tracegas.pipeline.AnalysisVersions;
+import org.tracegas.pipeline.BackgroundTimeline;
+import org.tracegas.pipeline.SpectrumChain;
 import org.tracegas.preprocess.Background;
 import org.tracegas.preprocess.BackgroundRatio;
 import org.tracegas.preprocess.InterferogramTransform;
@@ -27,8 +29,6 @@ import org.tracegas.quantify.ProgressListener;
 import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.Quantifier;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionInfo;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -82,11 +82,11 @@ final class DemoBatchFixture implements AutoCloseable {
         projectId = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
                 "B-1",
                 "Benchmark").getId();
-        VersionInfo met = store.versions().create(analyst, VersionKind.METHOD, fitted.name(), fitted.canonicalText(),
+        ContentVersion met = store.versions().create(analyst, VersionKind.METHOD, fitted.name(), fitted.canonicalText(),
                 "bench");
-        VersionInfo lib = store.versions().create(analyst, VersionKind.LIBRARY, library.name(),
+        ContentVersion lib = store.versions().create(analyst, VersionKind.LIBRARY, library.name(),
                 "sha=" + library.contentHash() + "\n", "bench");
-        versions = new AnalysisVersions(met.id(), lib.id());
+        versions = new AnalysisVersions(met.getId(), lib.getId());
     }
 
     @Override

@@ -24,9 +24,9 @@ import org.openjdk.jmh.annotations.Warmup;
 import org.tracegas.benchmarks.BlockStorageBenchmark;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.Role;
+import org.tracegas.model.VersionKind;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.Session;
-import org.tracegas.store.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.WorkspaceVerification;
 
@@ -68,8 +68,8 @@ public class DataBindingBenchmark {
             projectId = store.projects().createProject(analyst, store.projects().createClient(analyst,
                     "Client").getId(),
                     "B-1", "Benchmark").getId();
-            String method = store.versions().create(analyst, VersionKind.METHOD, "m", "a=1\n", "bench").id();
-            String library = store.versions().create(analyst, VersionKind.LIBRARY, "l", "b=1\n", "bench").id();
+            String method = store.versions().create(analyst, VersionKind.METHOD, "m", "a=1\n", "bench").getId();
+            String library = store.versions().create(analyst, VersionKind.LIBRARY, "l", "b=1\n", "bench").getId();
             block = BlockStorageBenchmark.block(method, library);
             // a second data source onto the same open database, for the unbound block path
             JdbcDataSource ds = new JdbcDataSource();
