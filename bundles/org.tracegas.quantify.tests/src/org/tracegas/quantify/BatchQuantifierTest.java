@@ -96,6 +96,37 @@ class BatchQuantifierTest {
         }
     }
 
+    /**
+     * Runs one after the other (the batch path's work units) use the quantifier's own workers, started once and no
+     * more than its thread count; a cancelled run leaves them to the next, which delivers everything.
+     */
+    @Test
+    void runsOneAfterTheOtherShareTheWorkers() {
+        BatchQuantifier batch = new BatchQuantifier(quantifier, 2);
+        List<Set<Thread>> workersOfRun = new ArrayList<>();
+        for (int run = 0; run < 3; run++) {
+            Set<Thread> workers = ConcurrentHashMap.newKeySet();
+            workersOfRun.add(workers);
+            CancellationFlag cancel = new CancellationFlag();
+            List<SpectrumResult> out = new ArrayList<>();
+            BatchOutcome outcome = batch.map(samples.iterator(), samples.size(), (fitter, sample) -> {
+                workers.add(Thread.currentThread());
+                return fitter.quantify(sample);
+            }, result -> {
+                out.add(result);
+                if (workersOfRun.size() == 2 && out.size() == 3) {
+                    cancel.cancel();
+                }
+            }, ProgressListener.NONE, cancel);
+            assertEquals(workersOfRun.size() == 2 ? new BatchOutcome(3, true)
+                    : new BatchOutcome(samples.size(), false), outcome);
+        }
+        Set<Thread> all = ConcurrentHashMap.newKeySet();
+        workersOfRun.forEach(all::addAll);
+        // a pool per run would have started at least one thread for each of the three
+        assertTrue(all.size() <= 2, "workers " + all);
+    }
+
     /** Cancelled after the fifth result: exactly five delivered, nothing after the flag was set. */
     @Test
     void cancellationStopsDeliveryAtOnce() {

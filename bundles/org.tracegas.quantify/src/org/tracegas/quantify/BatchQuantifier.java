@@ -5,9 +5,10 @@ import java.util.Iterator;
 import java.util.Spliterator;
 import java.util.Spliterators;
 import java.util.concurrent.ExecutionException;
-import java.util.concurrent.ExecutorService;
-import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
+import java.util.concurrent.LinkedBlockingQueue;
+import java.util.concurrent.ThreadPoolExecutor;
+import java.util.concurrent.TimeUnit;
 import java.util.function.BiFunction;
 import java.util.function.Consumer;
 
@@ -15,13 +16,22 @@ import java.util.function.Consumer;
  * Quantifies a stream of samples on a fixed pool of threads and delivers the results in input order on the
  * calling thread. Each spectrum is fitted on its own by the same code, so the numbers are bit-identical whatever
  * the thread count. At most a few samples per thread are read ahead, so streams of any length fit in memory.
+ * <p>
+ * The pool is the quantifier's own and serves all its runs: its threads start with the first run and end after
+ * they have idled for {@link #IDLE_SECONDS}, so nothing needs closing, and runs that follow each other (the batch
+ * path runs one per work unit, a file) neither start threads nor make the workers' per-thread fit and transform
+ * buffers anew. Runs at the same time share the threads.
  */
 public final class BatchQuantifier {
 
     private static final int READ_AHEAD_PER_THREAD = 4;
 
+    /** Seconds a worker idles before it ends: longer than the gap between two work units of a running batch. */
+    static final long IDLE_SECONDS = 30;
+
     private final Quantifier quantifier;
     private final int threads;
+    private final ThreadPoolExecutor pool;
 
     /**
      * @param quantifier the quantifier
@@ -36,6 +46,13 @@ public final class BatchQuantifier {
         }
         this.quantifier = quantifier;
         this.threads = threads;
+        this.pool = new ThreadPoolExecutor(threads, threads, IDLE_SECONDS, TimeUnit.SECONDS,
+                new LinkedBlockingQueue<>(), r -> {
+                    Thread t = new Thread(r, "quantification worker");
+                    t.setDaemon(true);
+                    return t;
+                });
+        pool.allowCoreThreadTimeOut(true);
     }
 
     /** A batch quantifier on all available processors. */
@@ -86,11 +103,6 @@ public final class BatchQuantifier {
      */
     public <T, R> BatchOutcome map(Iterator<T> items, long total, BiFunction<Quantifier, ? super T, ? extends R> work,
             Consumer<? super R> consumer, ProgressListener progress, CancellationFlag cancellation) {
-        ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
-            Thread t = new Thread(r, "quantification worker");
-            t.setDaemon(true);
-            return t;
-        });
         ArrayDeque<Future<R>> pending = new ArrayDeque<>();
         long submitted = 0;
         long delivered = 0;
@@ -114,8 +126,9 @@ public final class BatchQuantifier {
                 progress.progress(delivered, total);
             }
         } finally {
+            // what is still queued or running of this run is dropped, its running items interrupted; the pool
+            // stays for the next run
             pending.forEach(f -> f.cancel(true));
-            pool.shutdownNow();
         }
     }
 

@@ -1,5 +1,7 @@
 package org.tracegas.spectrum;
 
+import org.tracegas.spectrum.internal.HandedOverSamples;
+
 /**
  * Immutable raw interferogram: detector samples taken at equal steps of optical path difference, one step
  * per {@code samplingInterval} fringes of the reference laser.
@@ -10,15 +12,26 @@ public final class Interferogram {
     private final double laserWavenumber;
     private final int samplingInterval;
 
+    static {
+        HandedOverSamples.grant((samples, laser, interval) -> new Interferogram(samples, laser, interval, false));
+    }
+
     /**
-     * @param samples          detector samples, at least 2
+     * @param samples          detector samples, at least 2; copied
      * @param laserWavenumber  reference laser wavenumber in cm-1 (15798.0 for a HeNe laser: common practice)
      * @param samplingInterval laser fringes per sample, at least 1
      */
     public Interferogram(double[] samples, double laserWavenumber, int samplingInterval) {
-        if (samples == null || samples.length < 2) {
+        this(samples, laserWavenumber, samplingInterval, true);
+    }
+
+    /** @param copy false if the caller hands the array over ({@link HandedOverSamples}) */
+    private Interferogram(double[] given, double laserWavenumber, int samplingInterval, boolean copy) {
+        if (given == null || given.length < 2) {
             throw new IllegalArgumentException("samples must hold at least 2 points");
         }
+        // copied before the checks, so that what is checked is what is kept
+        double[] samples = copy ? given.clone() : given;
         if (!(laserWavenumber > 0 && Double.isFinite(laserWavenumber))) {
             throw new IllegalArgumentException("laserWavenumber must be positive and finite, was " + laserWavenumber);
         }
@@ -30,7 +43,7 @@ public final class Interferogram {
                 throw new IllegalArgumentException("sample " + i + " is not finite: " + samples[i]);
             }
         }
-        this.samples = samples.clone();
+        this.samples = samples;
         this.laserWavenumber = laserWavenumber;
         this.samplingInterval = samplingInterval;
     }

@@ -25,7 +25,7 @@ import java.util.zip.CRC32;
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.UncheckedImportException;
 import org.tracegas.importer.internal.Numbers;
-import org.tracegas.spectrum.Interferogram;
+import org.tracegas.spectrum.internal.HandedOverSamples;
 
 /**
  * Streams the records of a container file one at a time: only the current record is in memory, so files far
@@ -228,7 +228,8 @@ public final class ContainerReader implements Iterator<ContainerRecord>, Closeab
         try {
             AcquisitionHeader header = new AcquisitionHeader(zpd, kind, time, real(fields, ContainerFormat.TEMPERATURE, n),
                     real(fields, ContainerFormat.PRESSURE, n), real(fields, ContainerFormat.PATH, n), extra);
-            return new ContainerRecord(n, header, new Interferogram(samples, laser, sampling));
+            // the array was read for this record alone: handed over, not copied a second time
+            return new ContainerRecord(n, header, HandedOverSamples.interferogram(samples, laser, sampling));
         } catch (IllegalArgumentException e) {
             throw new ImportException(source, n, "header", e.getMessage());
         }

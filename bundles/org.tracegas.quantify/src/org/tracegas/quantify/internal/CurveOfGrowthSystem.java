@@ -48,12 +48,12 @@ public final class CurveOfGrowthSystem implements SystemSolver {
     private final int vectors;        // K: 3 nc (+ 3 nc for the scale) + nb
     private final int parameters;     // nc + nb (+ 1)
     private final double[][] basis;   // [K][point]
-    private final double[][] weighted; // basis times weights, or basis itself without weights
+    private final PointMajorVectors projection; // basis times weights, point by point: the sample's projection
     private final double[][] gram;    // [K][K]
     private final int[] entryStart;   // parameter -> first entry of D's column
     private final int[] entryIndex;   // entry -> basis vector
     private final double[] lowest;    // lowest reference / highest, per compound: the scale of a step in u
-    private final double[][] information; // [compound][point]: weight of the point in the compound's variance
+    private final PointMajorVectors information; // [point][compound]: weight of the point in the compound's variance
     private final double[] informationSum;
     private final double tolerance;
     private final int maxIterations;
@@ -112,7 +112,7 @@ public final class CurveOfGrowthSystem implements SystemSolver {
                 }
             }
         }
-        this.information = new double[nc][n];
+        double[][] informationOfCompound = new double[nc][n];
         this.informationSum = new double[nc];
         for (int c = 0; c < nc; c++) {
             CurveOfGrowth curve = curves.get(c);
@@ -121,18 +121,18 @@ public final class CurveOfGrowthSystem implements SystemSolver {
                 for (int p = 0; p < terms; p++) {
                     slope += curve.shapeSlope(p, INFORMATION_AMOUNT) * basis[termVector(c, p)][j];
                 }
-                information[c][j] = slope * slope * (weights == null ? 1 : weights[j]);
-                informationSum[c] += information[c][j];
+                informationOfCompound[c][j] = slope * slope * (weights == null ? 1 : weights[j]);
+                informationSum[c] += informationOfCompound[c][j];
             }
         }
+        this.information = new PointMajorVectors(informationOfCompound, n);
         double[][] baseline = points.baselineUnsafe();
         for (int t = 0; t < nb; t++) {
             basis[baselineVector(t)] = baseline[t];
         }
-        if (weights == null) {
-            this.weighted = basis;
-        } else {
-            this.weighted = new double[vectors][n];
+        double[][] weighted = basis;
+        if (weights != null) {
+            weighted = new double[vectors][n];
             for (int k = 0; k < vectors; k++) {
                 for (int j = 0; j < n; j++) {
                     weighted[k][j] = basis[k][j] * weights[j];
@@ -146,6 +146,7 @@ public final class CurveOfGrowthSystem implements SystemSolver {
                 gram[l][k] = gram[k][l];
             }
         }
+        this.projection = new PointMajorVectors(weighted, n);
         // which basis vectors each parameter moves: the sparsity of D = d beta / d theta
         this.entryStart = new int[parameters + 1];
         int[] index = new int[nc * terms * (scale ? 3 : 1) + nb];
@@ -261,7 +262,7 @@ public final class CurveOfGrowthSystem implements SystemSolver {
             throw new IllegalArgumentException(label + ": only " + (n - masked) + " of " + n
                     + " fit points are finite in the sample, too few for " + parameters + " parameters");
         }
-        DotProducts.of(weighted, w.wy, n, w.b);
+        projection.dot(w.wy, w.b);
         double[][] g = gram;
         if (masked > 0) {
             g = maskedGram(w, sample);
@@ -310,23 +311,30 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         return result(w, g, sample, masked, iterations, converged);
     }
 
+    /** G less the masked points' outer products, symmetric like G: {@link #rss} takes its rows for columns. */
     private double[][] maskedGram(Work w, double[] sample) {
+        double[][] m = w.maskedGram;
         for (int k = 0; k < vectors; k++) {
-            System.arraycopy(gram[k], 0, w.maskedGram[k], 0, vectors);
+            System.arraycopy(gram[k], 0, m[k], 0, vectors);
         }
         for (int j = 0; j < points.size(); j++) {
             if (!Double.isFinite(sample[points.row(j)])) {
                 for (int k = 0; k < vectors; k++) {
-                    double bk = weighted[k][j];
+                    double bk = projection.at(j, k);
                     if (bk != 0) {
-                        for (int l = 0; l < vectors; l++) {
-                            w.maskedGram[k][l] -= bk * basis[l][j];
+                        for (int l = 0; l <= k; l++) {
+                            m[k][l] -= bk * basis[l][j];
                         }
                     }
                 }
             }
         }
-        return w.maskedGram;
+        for (int k = 0; k < vectors; k++) {
+            for (int l = 0; l < k; l++) {
+                m[l][k] = m[k][l];
+            }
+        }
+        return m;
     }
 
     /** beta(theta) and the entries of D = d beta / d theta, into the work arrays. */
@@ -360,19 +368,26 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         }
     }
 
-    /** y'Wy - 2 beta'b + beta'G beta, leaving G beta in the work arrays. */
+    /**
+     * y'Wy - 2 beta'b + beta'G beta, leaving G beta in the work arrays. G beta is summed column by column (row l of
+     * the symmetric G is its column l), which the compiler does with vector instructions; every element still adds
+     * its terms in the order of l.
+     */
     private double rss(Work w, double[][] g, double yWy) {
+        double[] gBeta = w.g;
+        Arrays.fill(gBeta, 0);
+        for (int l = 0; l < vectors; l++) {
+            double[] column = g[l];
+            double bl = w.beta[l];
+            for (int k = 0; k < vectors; k++) {
+                gBeta[k] += column[k] * bl;
+            }
+        }
         double cross = 0;
         double quadratic = 0;
         for (int k = 0; k < vectors; k++) {
-            double[] row = g[k];
-            double sum = 0;
-            for (int l = 0; l < vectors; l++) {
-                sum += row[l] * w.beta[l];
-            }
-            w.g[k] = sum;
             cross += w.beta[k] * w.b[k];
-            quadratic += w.beta[k] * sum;
+            quadratic += w.beta[k] * gBeta[k];
         }
         return Math.max(0, yWy - 2 * cross + quadratic);
     }
@@ -549,7 +564,7 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         for (int j = 0; j < n; j++) {
             squares[j] = Double.isFinite(residual[j]) ? residual[j] * residual[j] : 0;
         }
-        DotProducts.of(information, squares, n, w.local);
+        information.dot(squares, w.local);
         double[] amounts = new double[nc];
         double[] sd = new double[nc];
         boolean invertible = factorise(w, 0);
@@ -573,7 +588,7 @@ public final class CurveOfGrowthSystem implements SystemSolver {
         double sum = informationSum[c];
         for (int j = 0; masked > 0 && j < residual.length; j++) {
             if (!Double.isFinite(residual[j])) {
-                sum -= information[c][j];
+                sum -= information.at(j, c);
             }
         }
         return sum;

@@ -1,11 +1,15 @@
 package org.tracegas.benchmarks;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Set;
 import java.util.function.Function;
+import java.util.stream.Stream;
 
 import org.tracegas.demo.DemoCampaignFiles;
 import org.tracegas.demo.DemoMethod;
@@ -89,8 +93,14 @@ final class DemoBatchFixture implements AutoCloseable {
         versions = new AnalysisVersions(met.getId(), lib.getId());
     }
 
+    /** Closes the workspace and deletes its folder: each fork's workspace grows to several GiB. */
     @Override
     public void close() {
         store.close();
+        try (Stream<Path> files = Files.walk(folder)) {
+            files.sorted(Comparator.reverseOrder()).forEach(f -> f.toFile().delete());
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
     }
 }
