@@ -105,6 +105,9 @@ public final class MethodEditorPanel extends Composite {
     private boolean filling;
     private WorkspaceStore store;
     private Session actor;
+    /** Told after each saved version, so that views showing the workspace read it again. */
+    private Runnable onSaved = () -> {
+    };
 
     public MethodEditorPanel(Composite parent, int style, ModelEditor editor) {
         super(parent, style);
@@ -333,6 +336,11 @@ public final class MethodEditorPanel extends Composite {
         this.store = store;
         this.actor = actor;
         updateButtons();
+    }
+
+    /** {@code action} runs after each version Save records (on the UI thread). */
+    public void whenSaved(Runnable action) {
+        onSaved = action;
     }
 
     /**
@@ -650,6 +658,7 @@ public final class MethodEditorPanel extends Composite {
         reason.setText("");
         open(method, saved, edited);
         problems.setText("Saved as version " + next.getNumber() + ".");
+        onSaved.run();
     }
 
     private void updateButtons() {

@@ -51,8 +51,8 @@ public final class Desk {
     }
 
     /**
-     * Called in the UI thread when the desk stored measurements or results (an import, a method run), so that
-     * the views read what they show again.
+     * Called in the UI thread when the desk stored measurements, results or method versions (an import, a method
+     * run, a saved method version), so that the views read what they show again.
      */
     public void storeChanged() {
         storeListeners.forEach(Runnable::run);

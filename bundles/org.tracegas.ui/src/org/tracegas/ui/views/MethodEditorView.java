@@ -28,6 +28,7 @@ public final class MethodEditorView extends ViewPart {
         Desk desk = Desk.get();
         panel = new MethodEditorPanel(parent, SWT.NONE, desk.editor());
         panel.saveTo(desk.access().store(), desk.session());
+        panel.whenSaved(desk::storeChanged);
         getSite().getPage().addSelectionListener(NavigatorView.ID, methodListener);
     }
 
