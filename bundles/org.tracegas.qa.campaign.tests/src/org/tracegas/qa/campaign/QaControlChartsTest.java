@@ -132,13 +132,13 @@ class QaControlChartsTest {
             ReportContent again = ReportSignatures.attach(store, analyst, now.getId(),
                     ReportContent.builder(campaign).controlChart(QaControlCharts.plot(e)).build(),
                     store.audit().verifyWorkspace(List.of()).requireIntact("attach the signatures"));
-            assertEquals(first.contentHash(), again.signatures().get(0).signedContentHash(), "applies");
+            assertEquals(first.contentHash(), again.signatures().get(0).contentSha256(), "applies");
             assertTrue(again.auditAnchor().orElseThrow().sequence() > 0);
             ReportContent changed = ReportSignatures.attach(store, analyst, now.getId(),
                     ReportContent.builder(campaign).caution("a changed report").build(),
                     store.audit().verifyWorkspace(List.of()).requireIntact("attach the signatures"));
             assertEquals(1, changed.signatures().size());
-            assertFalse(changed.signatures().get(0).signedContentHash().equals(changed.contentHash()),
+            assertFalse(changed.signatures().get(0).contentSha256().equals(changed.contentHash()),
                     "signed an earlier version");
         }
     }
