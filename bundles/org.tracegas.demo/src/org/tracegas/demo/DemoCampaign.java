@@ -142,7 +142,7 @@ public final class DemoCampaign {
             CampaignReport report = new CampaignReport(store, analyst, project.getId(), SOFTWARE);
             ReportContent content = report.content(methodVersion, recorded.method(), reportPlan);
             String hash = content.contentHash();
-            if (content.signatures().stream().noneMatch(s -> s.signedContentHash().equals(hash))) {
+            if (content.signatures().stream().noneMatch(s -> s.contentSha256().equals(hash))) {
                 reviewerSigns(store, project.getId(), analyst, content);
                 content = report.content(methodVersion, recorded.method(), reportPlan);
             }

@@ -1424,6 +1424,88 @@ public interface WorkspacePackage extends EPackage {
 	int QA_OUTCOME_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.UserImpl <em>User</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.UserImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getUser()
+	 * @generated
+	 */
+	int USER = 12;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int USER__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int USER__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Login</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int USER__LOGIN = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Display Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int USER__DISPLAY_NAME = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Roles</b></em>' attribute list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int USER__ROLES = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Locked</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int USER__LOCKED = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The number of structural features of the '<em>User</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int USER_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The number of operations of the '<em>User</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int USER_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}' enum.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1431,7 +1513,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAccessLevel()
 	 * @generated
 	 */
-	int ACCESS_LEVEL = 12;
+	int ACCESS_LEVEL = 13;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.MeasurementKind <em>Measurement Kind</em>}' enum.
@@ -1441,7 +1523,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurementKind()
 	 * @generated
 	 */
-	int MEASUREMENT_KIND = 13;
+	int MEASUREMENT_KIND = 14;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.SpectralContent <em>Spectral Content</em>}' enum.
@@ -1451,7 +1533,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectralContent()
 	 * @generated
 	 */
-	int SPECTRAL_CONTENT = 14;
+	int SPECTRAL_CONTENT = 15;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.VersionKind <em>Version Kind</em>}' enum.
@@ -1461,7 +1543,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getVersionKind()
 	 * @generated
 	 */
-	int VERSION_KIND = 15;
+	int VERSION_KIND = 16;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
@@ -1471,7 +1553,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 16;
+	int RESULT_FLAG = 17;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -1481,7 +1563,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 17;
+	int ROLE = 18;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -1491,7 +1573,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 18;
+	int INSTANT = 19;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -1501,7 +1583,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 19;
+	int SPECTRUM = 20;
 
 	/**
 	 * The meta object id for the '<em>Provenance</em>' data type.
@@ -1511,7 +1593,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
 	 * @generated
 	 */
-	int PROVENANCE = 20;
+	int PROVENANCE = 21;
 
 	/**
 	 * The meta object id for the '<em>Result Conditions</em>' data type.
@@ -1521,7 +1603,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
 	 * @generated
 	 */
-	int RESULT_CONDITIONS = 21;
+	int RESULT_CONDITIONS = 22;
 
 
 	/**
@@ -2591,6 +2673,60 @@ public interface WorkspacePackage extends EPackage {
 	EAttribute getQaOutcome_Recorded();
 
 	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.User <em>User</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>User</em>'.
+	 * @see org.tracegas.model.User
+	 * @generated
+	 */
+	EClass getUser();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.User#getLogin <em>Login</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Login</em>'.
+	 * @see org.tracegas.model.User#getLogin()
+	 * @see #getUser()
+	 * @generated
+	 */
+	EAttribute getUser_Login();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.User#getDisplayName <em>Display Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Display Name</em>'.
+	 * @see org.tracegas.model.User#getDisplayName()
+	 * @see #getUser()
+	 * @generated
+	 */
+	EAttribute getUser_DisplayName();
+
+	/**
+	 * Returns the meta object for the attribute list '{@link org.tracegas.model.User#getRoles <em>Roles</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute list '<em>Roles</em>'.
+	 * @see org.tracegas.model.User#getRoles()
+	 * @see #getUser()
+	 * @generated
+	 */
+	EAttribute getUser_Roles();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.User#isLocked <em>Locked</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Locked</em>'.
+	 * @see org.tracegas.model.User#isLocked()
+	 * @see #getUser()
+	 * @generated
+	 */
+	EAttribute getUser_Locked();
+
+	/**
 	 * Returns the meta object for enum '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -3536,6 +3672,48 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute QA_OUTCOME__RECORDED = eINSTANCE.getQaOutcome_Recorded();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.UserImpl <em>User</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.UserImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getUser()
+		 * @generated
+		 */
+		EClass USER = eINSTANCE.getUser();
+
+		/**
+		 * The meta object literal for the '<em><b>Login</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute USER__LOGIN = eINSTANCE.getUser_Login();
+
+		/**
+		 * The meta object literal for the '<em><b>Display Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute USER__DISPLAY_NAME = eINSTANCE.getUser_DisplayName();
+
+		/**
+		 * The meta object literal for the '<em><b>Roles</b></em>' attribute list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute USER__ROLES = eINSTANCE.getUser_Roles();
+
+		/**
+		 * The meta object literal for the '<em><b>Locked</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute USER__LOCKED = eINSTANCE.getUser_Locked();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.AccessLevel <em>Access Level</em>}' enum.

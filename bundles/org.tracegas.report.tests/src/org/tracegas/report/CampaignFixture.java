@@ -14,6 +14,8 @@ import java.util.Map;
 import java.util.OptionalDouble;
 import java.util.Random;
 
+import org.tracegas.audit.Signature;
+import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.qa.basis.Averaging;
 import org.tracegas.qa.basis.DetectionLimitConvention;
 import org.tracegas.qa.basis.EmissionLimit;
@@ -144,8 +146,14 @@ final class CampaignFixture {
     /** The content with a review signature over its own hash and no approval. */
     static ReportContent reviewed() {
         ReportContent c = unsigned().build();
-        return c.withSignature(new Signature("Dr. Imogen Hartle", Instant.parse("2026-03-10T09:12:00Z"),
-                SignatureMeaning.REVIEW, c.contentHash()));
+        return c.withSignature(signature("Dr. Imogen Hartle", Instant.parse("2026-03-10T09:12:00Z"),
+                SignatureMeaning.REVIEWED, c.contentHash()));
+    }
+
+    /** A signature as the audit trail returns it, on report PMR-2026-014's content of the given hash. */
+    static Signature signature(String printedName, Instant signedAt, SignatureMeaning meaning, String contentSha256) {
+        return new Signature(1, "rec-1", "signer", printedName, signedAt, meaning, "report", "PMR-2026-014", 0,
+                contentSha256);
     }
 
     static final List<String> ZERO_ANALYTES = List.of("CO", "HCl", "SO2", "NH3", "NO", "N2O");

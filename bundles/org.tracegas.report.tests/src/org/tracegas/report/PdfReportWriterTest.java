@@ -19,6 +19,7 @@ import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
+import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.qa.basis.LimitStatus;
 import org.tracegas.qa.checks.CtsDriftCheck;
 import org.tracegas.qa.checks.MethodDetectionLimit;
@@ -238,6 +239,7 @@ class PdfReportWriterTest {
         try (PDDocument doc = Loader.loadPDF(pdf)) {
             String t = text(doc, 1, doc.getNumberOfPages());
             assertTrue(t.contains("Reviewed by Dr. Imogen Hartle"));
+            assertTrue(t.contains("Meaning Review: the content was checked by qualified staff"), t);
             assertTrue(t.contains("2026-03-10 09:12 UTC"));
             assertTrue(t.contains("Applies to this content yes"));
             assertTrue(t.contains("Not yet approved"));
@@ -246,12 +248,14 @@ class PdfReportWriterTest {
 
     @Test
     void signatureOverOtherContentIsMarked() throws IOException {
-        ReportContent c = CampaignFixture.unsigned().build().withSignature(new Signature("A. Checker",
-                CampaignFixture.START, SignatureMeaning.APPROVAL, CampaignFixture.sha256("an earlier draft")));
+        ReportContent c = CampaignFixture.unsigned().build().withSignature(CampaignFixture.signature("A. Checker",
+                CampaignFixture.START, SignatureMeaning.APPROVED, CampaignFixture.sha256("an earlier draft")));
         try (PDDocument doc = Loader.loadPDF(new PdfReportWriter().write(c))) {
             String t = text(doc, 1, doc.getNumberOfPages());
             assertTrue(t.contains("NO: signed an earlier version"), t);
-            assertTrue(t.contains("Not yet approved"));
+            assertTrue(t.contains("Approved by A. Checker"), t);
+            assertTrue(t.contains("Meaning Approval: the report is released"), t);
+            assertTrue(t.contains("Not yet approved. This report has no approval signature on its content"), t);
             assertTrue(t.contains("Not yet reviewed"));
         }
     }

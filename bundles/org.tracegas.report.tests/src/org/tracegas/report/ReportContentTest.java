@@ -9,6 +9,7 @@ import java.time.Instant;
 import java.util.List;
 
 import org.junit.jupiter.api.Test;
+import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.qa.checks.MethodDetectionLimit;
 
 class ReportContentTest {
@@ -20,16 +21,16 @@ class ReportContentTest {
         assertEquals(unsigned.contentHash(), reviewed.contentHash());
         assertEquals(64, unsigned.contentHash().length());
         assertNotEquals(unsigned.contentHash(), CampaignFixture.unsigned().caution("extra").build().contentHash());
-        assertEquals(1, reviewed.signatures(SignatureMeaning.REVIEW).size());
-        assertTrue(reviewed.signatures(SignatureMeaning.APPROVAL).isEmpty());
+        assertEquals(1, reviewed.signatures(SignatureMeaning.REVIEWED).size());
+        assertTrue(reviewed.signatures(SignatureMeaning.APPROVED).isEmpty());
     }
 
     @Test
     void signaturesOnEarlierContentAreKeptBesideTheCurrentOne() {
         ReportContent reviewed = CampaignFixture.reviewed();
-        ReportContent twice = reviewed.withSignature(new Signature("B. Second", Instant.EPOCH,
-                SignatureMeaning.REVIEW, CampaignFixture.sha256("an earlier issue")));
-        assertEquals(2, twice.signatures(SignatureMeaning.REVIEW).size());
+        ReportContent twice = reviewed.withSignature(CampaignFixture.signature("B. Second", Instant.EPOCH,
+                SignatureMeaning.REVIEWED, CampaignFixture.sha256("an earlier issue")));
+        assertEquals(2, twice.signatures(SignatureMeaning.REVIEWED).size());
         assertEquals(reviewed.contentHash(), twice.contentHash());
     }
 
@@ -51,8 +52,8 @@ class ReportContentTest {
         ReportContent plain = CampaignFixture.unsigned().averagingRule("a rule").build();
         ReportContent withMdl = CampaignFixture.unsigned().averagingRule("a rule").detectionLimit(mdl).build();
         assertNotEquals(plain.contentHash(), withMdl.contentHash(), "the MDL table is part of what is signed");
-        ReportContent signed = withMdl.withSignature(new Signature("B. Second", Instant.EPOCH,
-                SignatureMeaning.REVIEW, withMdl.contentHash()));
+        ReportContent signed = withMdl.withSignature(CampaignFixture.signature("B. Second", Instant.EPOCH,
+                SignatureMeaning.REVIEWED, withMdl.contentHash()));
         assertEquals(withMdl.contentHash(), signed.contentHash(), "signing changes no content");
         assertEquals(List.of(mdl), signed.detectionLimits());
         assertEquals(withMdl.averagingRules(), signed.averagingRules());
@@ -64,5 +65,16 @@ class ReportContentTest {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> new Campaign(c.reportId(),
                 c.client(), c.plant(), c.source(), c.lastDay(), c.firstDay(), c.issued(), c.reportingBasis()));
         assertTrue(e.getMessage().contains("lastDay"), e.getMessage());
+    }
+
+    @Test
+    void onlyReviewAndApprovalSignaturesArePrinted() {
+        // 21 CFR 11.50(a)(3) names review, approval, responsibility and authorship; the report's review block
+        // prints review and approval only
+        ReportContent c = CampaignFixture.unsigned().build();
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> c.withSignature(
+                CampaignFixture.signature("B. Second", Instant.EPOCH, SignatureMeaning.AUTHORED, c.contentHash())));
+        assertTrue(e.getMessage().startsWith("meaning:") && e.getMessage().endsWith("AUTHORED"), e.getMessage());
+        assertEquals(List.of(SignatureMeaning.REVIEWED, SignatureMeaning.APPROVED), SignatureWords.PRINTED);
     }
 }

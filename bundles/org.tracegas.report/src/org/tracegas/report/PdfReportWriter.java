@@ -22,6 +22,8 @@ import org.apache.pdfbox.cos.COSString;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
+import org.tracegas.audit.Signature;
+import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.qa.basis.LimitStatus;
 import org.tracegas.qa.checks.MethodDetectionLimit;
 import org.tracegas.qa.uncertainty.BudgetRow;
@@ -339,27 +341,27 @@ public final class PdfReportWriter {
         pw.paragraph("Each signature names the signer, the time, its meaning and the SHA-256 hash of the content "
                 + "signed; a signature applies to this report only if that hash equals the content hash in section 1.",
                 9f);
-        for (SignatureMeaning m : SignatureMeaning.values()) {
-            pw.subheading(m.noun());
+        for (SignatureMeaning m : SignatureWords.PRINTED) {
+            String noun = SignatureWords.noun(m);
+            String pastTense = SignatureWords.pastTense(m);
+            pw.subheading(noun);
             List<Signature> given = content.signatures(m);
             for (Signature s : given) {
-                boolean matches = s.signedContentHash().equals(content.contentHash());
+                boolean matches = s.contentSha256().equals(content.contentHash());
                 List<String[]> rows = new ArrayList<>();
-                rows.add(new String[] {m.pastTense() + " by", s.printedName()});
+                rows.add(new String[] {pastTense + " by", s.printedName()});
                 rows.add(new String[] {"Time", TIME.format(s.signedAt())});
-                rows.add(new String[] {"Meaning", m == SignatureMeaning.REVIEW
-                        ? "Review: the content was checked by qualified staff"
-                        : "Approval: the report is released"});
-                rows.add(new String[] {"Signed content hash", s.signedContentHash()});
+                rows.add(new String[] {"Meaning", SignatureWords.explanation(m)});
+                rows.add(new String[] {"Signed content hash", s.contentSha256()});
                 rows.add(new String[] {"Applies to this content", matches ? "yes"
                         : "NO: signed an earlier version; the content changed since, so this signature does not "
                                 + "apply to this report"});
                 pw.keyValues(rows, 130);
             }
-            if (given.stream().noneMatch(s -> s.signedContentHash().equals(content.contentHash()))) {
-                pw.paragraph("Not yet " + m.pastTense().toLowerCase(Locale.ROOT) + ". This report has no "
-                        + m.noun().toLowerCase(Locale.ROOT) + " signature on its content; do not use its results "
-                        + "before it is " + m.pastTense().toLowerCase(Locale.ROOT) + ".", 9.5f, pw.left(), pw.width(),
+            if (given.stream().noneMatch(s -> s.contentSha256().equals(content.contentHash()))) {
+                pw.paragraph("Not yet " + pastTense.toLowerCase(Locale.ROOT) + ". This report has no "
+                        + noun.toLowerCase(Locale.ROOT) + " signature on its content; do not use its results "
+                        + "before it is " + pastTense.toLowerCase(Locale.ROOT) + ".", 9.5f, pw.left(), pw.width(),
                         pw.bold());
             }
         }

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 
+import org.tracegas.audit.Signature;
+import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.qa.checks.MethodDetectionLimit;
 import org.tracegas.report.internal.Check;
 import org.tracegas.report.internal.ContentDigest;
@@ -146,10 +148,15 @@ public final class ReportContent {
         return b.build();
     }
 
-    /** The same content with one more signature. */
+    /**
+     * The same content with one more signature.
+     *
+     * @param signature a review or approval signature ({@link SignatureWords#PRINTED})
+     * @throws IllegalArgumentException when the signature is null or of a meaning the report does not print
+     */
     public ReportContent withSignature(Signature signature) {
         Builder b = toBuilder();
-        b.signatures.add(Check.notNull("signature", signature));
+        b.signature(signature);
         return b.build();
     }
 
@@ -308,7 +315,9 @@ public final class ReportContent {
             return this;
         }
 
+        /** @throws IllegalArgumentException when {@code s} is null or of a meaning the report does not print */
         public Builder signature(Signature s) {
+            SignatureWords.require(Check.notNull("signature", s).meaning());
             signatures.add(s);
             return this;
         }

@@ -30,6 +30,7 @@ import org.tracegas.model.Result;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Results;
 import org.tracegas.model.Role;
+import org.tracegas.model.User;
 import org.tracegas.model.VersionKind;
 
 /** Signing reports by their content, on each backend. */
@@ -51,14 +52,14 @@ abstract class ReviewServiceContract {
         store = backend.open();
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", "admin-pw-12".toCharArray());
         store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
-        UserInfo rev = store.users().createUser(admin, "rev", "Dr. Rhea Viewer", Set.of(Role.REVIEWER),
+        User rev = store.users().createUser(admin, "rev", "Dr. Rhea Viewer", Set.of(Role.REVIEWER),
                 "rev-pw-1234".toCharArray());
         analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
         reviewer = store.users().logIn("rev", "rev-pw-1234".toCharArray());
         project = store.projects().createProject(analyst, store.projects().createClient(analyst, "Client").getId(),
                 "R-1",
                 "Report project");
-        store.projects().grant(analyst, project.getId(), rev.id(), AccessLevel.READ);
+        store.projects().grant(analyst, project.getId(), rev.getId(), AccessLevel.READ);
     }
 
     @AfterEach

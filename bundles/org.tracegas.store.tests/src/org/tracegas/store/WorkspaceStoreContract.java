@@ -40,6 +40,7 @@ import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.model.User;
 import org.tracegas.model.VersionKind;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
@@ -236,7 +237,7 @@ abstract class WorkspaceStoreContract {
         // locked: even the right password is refused
         assertTrue(assertThrows(LoginFailedException.class,
                 () -> store.users().logIn("ana", ANALYST_PASSWORD)).locked());
-        assertTrue(store.users().user(analyst.userId()).locked());
+        assertTrue(store.users().user(analyst.userId()).isLocked());
         assertThrows(AccessDeniedException.class, () -> store.projects().project(analyst, project.getId()));
         assertEquals(List.of("10"), column("SELECT COUNT(*) FROM audit_record WHERE action = 'REFUSED'"
                 + " AND object_id = '" + analyst.userId() + "'"));
@@ -306,11 +307,26 @@ abstract class WorkspaceStoreContract {
                 && e.getMessage().contains("version is 1"), e.getMessage());
         assertEquals("First name", store.projects().project(analyst, project.getId()).getName());
 
-        UserInfo user = store.users().user(analyst.userId());
-        store.users().changeRoles(admin, user.id(), user.rowVersion(), Set.of(Role.ANALYST, Role.REVIEWER));
+        User user = store.users().user(analyst.userId());
+        store.users().changeRoles(admin, user.getId(), user.getRowVersion(), Set.of(Role.ANALYST, Role.REVIEWER));
         assertThrows(ConcurrentChangeException.class,
-                () -> store.users().changeRoles(admin, user.id(), user.rowVersion(), Set.of(Role.QUALITY_MANAGER)));
-        assertEquals(Set.of(Role.ANALYST, Role.REVIEWER), store.users().user(analyst.userId()).roles());
+                () -> store.users().changeRoles(admin, user.getId(), user.getRowVersion(), Set.of(Role.QUALITY_MANAGER)));
+        assertEquals(List.of(Role.ANALYST, Role.REVIEWER), store.users().user(analyst.userId()).getRoles());
+    }
+
+    @Test
+    void aUserIsReadBackAsTheModelObjectItWasCreatedAsWithoutCredentials() {
+        User created = store.users().createUser(admin, "rev", "Dr. Rhea Viewer", Set.of(Role.REVIEWER, Role.ANALYST),
+                "reviewer-password-1".toCharArray());
+        assertEquals(List.of(Role.ANALYST, Role.REVIEWER), created.getRoles(), "roles in declaration order");
+        assertFalse(created.isLocked());
+        User read = store.users().user(created.getId());
+        assertTrue(EcoreUtil.equals(created, read), "the read user is the created one, field by field");
+        assertTrue(EcoreUtil.equals(created, store.users().findByLogin("rev").orElseThrow()));
+        // the password hash, its salt and the failure count stay in the store (common practice, no source)
+        assertEquals(Set.of("id", "rowVersion", "login", "displayName", "roles", "locked"),
+                read.eClass().getEAllStructuralFeatures().stream().map(f -> f.getName())
+                        .collect(java.util.stream.Collectors.toSet()));
     }
 
     @Test

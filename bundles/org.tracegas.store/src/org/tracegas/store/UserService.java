@@ -4,10 +4,12 @@ import java.util.Optional;
 import java.util.Set;
 
 import org.tracegas.model.Role;
+import org.tracegas.model.User;
 
 /**
  * Users, roles and log-in. Passwords are kept as salted PBKDF2-HMAC-SHA256 hashes; an account is
- * locked after a number of consecutive failed log-ins.
+ * locked after a number of consecutive failed log-ins. A user is returned as a fresh model {@link User}, read
+ * from its row, without its password hash, salt or failure count.
  */
 public interface UserService {
 
@@ -22,7 +24,7 @@ public interface UserService {
      * @throws AccessDeniedException    unless the actor is an administrator
      * @throws IllegalArgumentException naming a blank login or display name, no role, or a short password
      */
-    UserInfo createUser(Session actor, String login, String displayName, Set<Role> roles, char[] password);
+    User createUser(Session actor, String login, String displayName, Set<Role> roles, char[] password);
 
     /**
      * Checks the password. A failure counts towards the lock-out; a success resets the count.
@@ -36,20 +38,20 @@ public interface UserService {
      * @throws ConcurrentChangeException if the user was changed since
      * @throws AccessDeniedException     unless the actor is an administrator
      */
-    UserInfo changeRoles(Session actor, String userId, long expectedVersion, Set<Role> roles);
+    User changeRoles(Session actor, String userId, long expectedVersion, Set<Role> roles);
 
     /**
      * Unlocks an account and resets its failure count.
      *
      * @throws AccessDeniedException unless the actor is an administrator
      */
-    UserInfo unlock(Session actor, String userId);
+    User unlock(Session actor, String userId);
 
     /** @throws NoSuchObjectException if there is no such user */
-    UserInfo user(String userId);
+    User user(String userId);
 
     /** The user with this login, if any; for an administrator's commands that name users by login. */
-    Optional<UserInfo> findByLogin(String login);
+    Optional<User> findByLogin(String login);
 
     /** Whether the workspace has any user yet (before the first administrator, it has none). */
     boolean hasUsers();

@@ -325,6 +325,29 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.User} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected UserItemProvider userItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.User}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createUserAdapter() {
+		if (userItemProvider == null) {
+			userItemProvider = new UserItemProvider(this);
+		}
+
+		return userItemProvider;
+	}
+
+	/**
 	 * This returns the root adapter factory that contains this factory.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -440,6 +463,7 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 		if (analysisRegionItemProvider != null) analysisRegionItemProvider.dispose();
 		if (resultItemProvider != null) resultItemProvider.dispose();
 		if (qaOutcomeItemProvider != null) qaOutcomeItemProvider.dispose();
+		if (userItemProvider != null) userItemProvider.dispose();
 	}
 
 }

@@ -31,6 +31,7 @@ import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.model.StoredObject;
+import org.tracegas.model.User;
 import org.tracegas.model.VersionKind;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
@@ -128,6 +129,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EClass qaOutcomeEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass userEClass = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -1245,6 +1253,56 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EClass getUser() {
+		return userEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUser_Login() {
+		return (EAttribute)userEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUser_DisplayName() {
+		return (EAttribute)userEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUser_Roles() {
+		return (EAttribute)userEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getUser_Locked() {
+		return (EAttribute)userEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getAccessLevel() {
 		return accessLevelEEnum;
 	}
@@ -1478,6 +1536,12 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(qaOutcomeEClass, QA_OUTCOME__RECORDED_BY);
 		createEAttribute(qaOutcomeEClass, QA_OUTCOME__RECORDED);
 
+		userEClass = createEClass(USER);
+		createEAttribute(userEClass, USER__LOGIN);
+		createEAttribute(userEClass, USER__DISPLAY_NAME);
+		createEAttribute(userEClass, USER__ROLES);
+		createEAttribute(userEClass, USER__LOCKED);
+
 		// Create enums
 		accessLevelEEnum = createEEnum(ACCESS_LEVEL);
 		measurementKindEEnum = createEEnum(MEASUREMENT_KIND);
@@ -1530,6 +1594,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		methodVersionEClass.getESuperTypes().add(this.getContentVersion());
 		resultEClass.getESuperTypes().add(this.getStoredObject());
 		qaOutcomeEClass.getESuperTypes().add(this.getStoredObject());
+		userEClass.getESuperTypes().add(this.getStoredObject());
 
 		// Initialize classes, features, and operations; add parameters
 		initEClass(storedObjectEClass, StoredObject.class, "StoredObject", IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
@@ -1641,6 +1706,12 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getQaOutcome_Source(), ecorePackage.getEString(), "source", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getQaOutcome_RecordedBy(), ecorePackage.getEString(), "recordedBy", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getQaOutcome_Recorded(), this.getInstant(), "recorded", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(userEClass, User.class, "User", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getUser_Login(), ecorePackage.getEString(), "login", null, 0, 1, User.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUser_DisplayName(), ecorePackage.getEString(), "displayName", null, 0, 1, User.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUser_Roles(), this.getRole(), "roles", null, 0, -1, User.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getUser_Locked(), ecorePackage.getEBoolean(), "locked", null, 0, 1, User.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		// Initialize enums and add enum literals
 		initEEnum(accessLevelEEnum, AccessLevel.class, "AccessLevel");

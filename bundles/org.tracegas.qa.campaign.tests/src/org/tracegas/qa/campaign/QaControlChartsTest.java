@@ -19,6 +19,7 @@ import org.tracegas.model.AccessLevel;
 import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.Role;
+import org.tracegas.model.User;
 import org.tracegas.model.VersionKind;
 import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.qa.checks.ZeroSpanCheck;
@@ -27,7 +28,6 @@ import org.tracegas.report.Campaign;
 import org.tracegas.report.ReportContent;
 import org.tracegas.report.campaign.ReportSignatures;
 import org.tracegas.store.Session;
-import org.tracegas.store.UserInfo;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -92,7 +92,7 @@ class QaControlChartsTest {
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("db"))) {
             Session admin = store.users().createFirstAdministrator("admin", "Administrator", "admin-pw-12".toCharArray());
             store.users().createUser(admin, "ana", "Ana Lyst", Set.of(Role.ANALYST), "ana-pw-1234".toCharArray());
-            UserInfo rev = store.users().createUser(admin, "rev", "Dr. Rhea Viewer", Set.of(Role.REVIEWER),
+            User rev = store.users().createUser(admin, "rev", "Dr. Rhea Viewer", Set.of(Role.REVIEWER),
                     "rev-pw-1234".toCharArray());
             Session analyst = store.users().logIn("ana", "ana-pw-1234".toCharArray());
             String client = store.projects().createClient(analyst, "Client").getId();
@@ -124,7 +124,7 @@ class QaControlChartsTest {
             Campaign campaign = new Campaign("R-7", "Client", "Plant", "Stack", LocalDate.of(2026, 3, 17),
                     LocalDate.of(2026, 3, 17), Instant.parse("2026-03-19T00:00:00Z"), "mg/m³ dry");
             ReportContent first = ReportContent.builder(campaign).controlChart(QaControlCharts.plot(e)).build();
-            store.projects().grant(analyst, now.getId(), rev.id(), AccessLevel.READ);
+            store.projects().grant(analyst, now.getId(), rev.getId(), AccessLevel.READ);
             Session reviewer = store.users().logIn("rev", "rev-pw-1234".toCharArray());
             ReportSignatures.sign(store, reviewer, now.getId(), first, analyst.userId(), "rev",
                     "rev-pw-1234".toCharArray(), SignatureMeaning.REVIEWED, null);
@@ -132,13 +132,13 @@ class QaControlChartsTest {
             ReportContent again = ReportSignatures.attach(store, analyst, now.getId(),
                     ReportContent.builder(campaign).controlChart(QaControlCharts.plot(e)).build(),
                     store.audit().verifyWorkspace(List.of()).requireIntact("attach the signatures"));
-            assertEquals(first.contentHash(), again.signatures().get(0).signedContentHash(), "applies");
+            assertEquals(first.contentHash(), again.signatures().get(0).contentSha256(), "applies");
             assertTrue(again.auditAnchor().orElseThrow().sequence() > 0);
             ReportContent changed = ReportSignatures.attach(store, analyst, now.getId(),
                     ReportContent.builder(campaign).caution("a changed report").build(),
                     store.audit().verifyWorkspace(List.of()).requireIntact("attach the signatures"));
             assertEquals(1, changed.signatures().size());
-            assertFalse(changed.signatures().get(0).signedContentHash().equals(changed.contentHash()),
+            assertFalse(changed.signatures().get(0).contentSha256().equals(changed.contentHash()),
                     "signed an earlier version");
         }
     }

@@ -6,6 +6,7 @@ import org.tracegas.audit.SignatureMeaning;
 import org.tracegas.audit.SignatureRefusedException;
 import org.tracegas.report.AuditAnchor;
 import org.tracegas.report.ReportContent;
+import org.tracegas.report.SignatureWords;
 import org.tracegas.store.ReportSignatureRequest;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
@@ -47,15 +48,9 @@ public final class ReportSignatures {
             ReportContent content, WorkspaceVerification verified) {
         ReportContent signed = content;
         for (Signature s : store.reviews().signatures(reader, projectId, content.campaign().reportId())) {
-            org.tracegas.report.SignatureMeaning meaning = switch (s.meaning()) {
-                case REVIEWED -> org.tracegas.report.SignatureMeaning.REVIEW;
-                case APPROVED -> org.tracegas.report.SignatureMeaning.APPROVAL;
-                default -> null;
-            };
-            if (meaning != null) {
+            if (SignatureWords.printed(s.meaning())) {
                 // the stored hash is the SHA-256 of the canonical content, that is the content hash signed
-                signed = signed.withSignature(new org.tracegas.report.Signature(s.printedName(), s.signedAt(),
-                        meaning, s.contentSha256()));
+                signed = signed.withSignature(s);
             }
         }
         ChainAnchor head = verified.head();

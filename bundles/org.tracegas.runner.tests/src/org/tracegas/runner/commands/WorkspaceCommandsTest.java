@@ -153,7 +153,7 @@ class WorkspaceCommandsTest {
                 "--code", "C-1", "--name", "N"), errText());
         try (WorkspaceStore store = Workspaces.openH2(folder.resolve("ws").resolve("db"))) {
             Session root = store.users().logIn("root", "admin-pw-1".toCharArray());
-            String anaId = store.users().findByLogin("ana").orElseThrow().id();
+            String anaId = store.users().findByLogin("ana").orElseThrow().getId();
             List<AuditRecord> changes = store.audit().review(root, AuditQuery.all().object("user", anaId).build())
                     .records();
             List<AuditRecord> unlocks = changes.stream().filter(r -> "account unlocked".equals(r.reason())).toList();

@@ -2,7 +2,9 @@ package org.tracegas.runner.commands;
 
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 
+import org.tracegas.audit.Signature;
 import org.tracegas.report.campaign.CampaignReport;
 import org.tracegas.report.campaign.ReportIdTakenException;
 import org.tracegas.report.campaign.ReportPlan;
@@ -10,7 +12,7 @@ import org.tracegas.importer.ImportException;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.model.Project;
 import org.tracegas.report.ReportContent;
-import org.tracegas.report.Signature;
+import org.tracegas.report.SignatureWords;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
@@ -82,9 +84,10 @@ public final class ReportCommand implements Command {
             context.out().println("Report id: " + content.campaign().reportId());
             context.out().println("Content hash (SHA-256): " + content.contentHash());
             for (Signature s : content.signatures()) {
-                context.out().println("Signature: " + s.meaning() + " by " + s.printedName() + " at " + s.signedAt()
-                        + (s.signedContentHash().equals(content.contentHash()) ? ""
-                                : " (on earlier content " + s.signedContentHash() + ")"));
+                context.out().println("Signature: " + SignatureWords.noun(s.meaning()).toUpperCase(Locale.ROOT)
+                        + " by " + s.printedName() + " at " + s.signedAt()
+                        + (s.contentSha256().equals(content.contentHash()) ? ""
+                                : " (on earlier content " + s.contentSha256() + ")"));
             }
             long failed = content.qa().stream().filter(q -> !q.passed()).count();
             if (failed > 0) {

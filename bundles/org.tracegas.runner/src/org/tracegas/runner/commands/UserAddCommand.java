@@ -6,11 +6,11 @@ import java.util.Locale;
 import java.util.Set;
 
 import org.tracegas.model.Role;
+import org.tracegas.model.User;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
-import org.tracegas.store.UserInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /** Adds a user with roles; an administrator acts. */
@@ -42,9 +42,9 @@ public final class UserAddCommand implements Command {
         Options options = Options.parse(arguments, WorkspaceLogin.optionsWith("--login", "--name", "--roles"));
         Set<Role> roles = roles(options.text("--roles"));
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
-            UserInfo user = store.users().createUser(WorkspaceLogin.logIn(store, options, context), options.text("--login"),
+            User user = store.users().createUser(WorkspaceLogin.logIn(store, options, context), options.text("--login"),
                     options.text("--name"), roles, WorkspaceLogin.password(context, NEW_PASSWORD_VARIABLE));
-            context.out().println("Added " + user.login() + " with roles " + user.roles());
+            context.out().println("Added " + user.getLogin() + " with roles " + user.getRoles());
             return ExitCode.OK;
         }
     }

@@ -2,12 +2,12 @@ package org.tracegas.runner.commands;
 
 import java.util.List;
 
+import org.tracegas.model.User;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.Session;
-import org.tracegas.store.UserInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /** Unlocks an account locked after repeated failed log-ins; an administrator acts, and the audit trail says who. */
@@ -39,16 +39,16 @@ public final class UserUnlockCommand implements Command {
         String login = options.text("--login");
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session admin = WorkspaceLogin.logIn(store, options, context);
-            UserInfo user = store.users().findByLogin(login).orElse(null);
+            User user = store.users().findByLogin(login).orElse(null);
             if (user == null) {
                 context.err().println("tracegas user-unlock: the workspace has no user with the login '" + login + "'");
                 return ExitCode.BAD_INPUT;
             }
-            if (!user.locked()) {
+            if (!user.isLocked()) {
                 context.out().println(login + " is not locked; nothing changed");
                 return ExitCode.OK;
             }
-            store.users().unlock(admin, user.id());
+            store.users().unlock(admin, user.getId());
             context.out().println("Unlocked " + login + "; the audit trail records the change by " + admin.login());
             return ExitCode.OK;
         }

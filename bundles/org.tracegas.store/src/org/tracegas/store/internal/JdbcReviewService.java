@@ -33,7 +33,7 @@ final class JdbcReviewService implements ReviewService {
         // the typed password goes through the log-in, so a wrong one counts towards the lock-out
         CredentialCheck check = (userId, password) -> {
             try {
-                return users.logIn(users.user(userId).login(), password.clone()).userId().equals(userId);
+                return users.logIn(users.user(userId).getLogin(), password.clone()).userId().equals(userId);
             } catch (LoginFailedException | NoSuchObjectException e) {
                 return false;
             }
@@ -115,7 +115,7 @@ final class JdbcReviewService implements ReviewService {
             SignatureMeaning meaning, String comment) throws SignatureRefusedException {
         Attempt attempt;
         try {
-            String printedName = users.user(signer.userId()).displayName();
+            String printedName = users.user(signer.userId()).getDisplayName();
             String signerId = signer.login().equals(typedLogin) ? signer.userId() : typedLogin;
             attempt = transactions.run(operation, tx -> {
                 Subject s = lookup.find(tx);

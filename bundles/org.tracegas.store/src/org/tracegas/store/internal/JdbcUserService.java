@@ -2,6 +2,8 @@ package org.tracegas.store.internal;
 
 import java.sql.ResultSet;
 import java.sql.SQLException;
+import java.util.Collection;
+import java.util.EnumSet;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Optional;
@@ -12,11 +14,12 @@ import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.Role;
+import org.tracegas.model.User;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.store.AccessDeniedException;
 import org.tracegas.store.LoginFailedException;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.Session;
-import org.tracegas.store.UserInfo;
 import org.tracegas.store.UserService;
 
 final class JdbcUserService implements UserService {
@@ -41,23 +44,23 @@ final class JdbcUserService implements UserService {
             if (users > 0) {
                 throw new AccessDeniedException("the workspace has users already; an administrator creates more");
             }
-            UserInfo admin = insert(tx, login, displayName, Set.of(Role.ADMINISTRATOR), password);
-            tx.audit(created(admin.id(), admin));
-            return new Session(admin.id(), admin.login(), admin.roles());
+            User admin = insert(tx, login, displayName, Set.of(Role.ADMINISTRATOR), password);
+            tx.audit(created(admin.getId(), admin));
+            return new Session(admin.getId(), admin.getLogin(), Set.copyOf(admin.getRoles()));
         });
     }
 
     @Override
-    public UserInfo createUser(Session actor, String login, String displayName, Set<Role> roles, char[] password) {
+    public User createUser(Session actor, String login, String displayName, Set<Role> roles, char[] password) {
         return transactions.run("creating user " + login, tx -> {
             Guard.requireRole(tx, actor, "create users", Role.ADMINISTRATOR);
-            UserInfo user = insert(tx, login, displayName, roles, password);
+            User user = insert(tx, login, displayName, roles, password);
             tx.audit(created(actor.userId(), user));
             return user;
         });
     }
 
-    private static UserInfo insert(Tx tx, String login, String displayName, Set<Role> roles, char[] password)
+    private static User insert(Tx tx, String login, String displayName, Set<Role> roles, char[] password)
             throws SQLException {
         requireText("login", login);
         requireText("displayName", displayName);
@@ -72,7 +75,7 @@ final class JdbcUserService implements UserService {
                 + " password_iterations, failed_logins, locked, row_version) VALUES (?, ?, ?, ?, ?, ?, ?, 0, FALSE, 0)",
                 id, login, displayName, RoleSets.format(roles), salt, hash, PasswordHasher.ITERATIONS);
         tx.wrote(DataKind.USER, id);
-        return new UserInfo(id, login, displayName, roles, false, 0);
+        return user(id, login, displayName, roles, false, 0);
     }
 
     /** What a log-in attempt found; the transaction commits the failure count before the refusal is thrown. */
@@ -135,18 +138,18 @@ final class JdbcUserService implements UserService {
     }
 
     @Override
-    public UserInfo changeRoles(Session actor, String userId, long expectedVersion, Set<Role> roles) {
+    public User changeRoles(Session actor, String userId, long expectedVersion, Set<Role> roles) {
         if (roles == null || roles.isEmpty()) {
             throw new IllegalArgumentException("roles must name at least one role for user " + userId);
         }
         return transactions.run("changing the roles of user " + userId, tx -> {
             Guard.requireRole(tx, actor, "change roles", Role.ADMINISTRATOR);
-            UserInfo before = load(tx, userId);
+            User before = load(tx, userId);
             long version = RowVersions.update(tx, "app_user", "user", userId, expectedVersion, "roles = ?",
                     RoleSets.format(roles));
             tx.wrote(DataKind.USER, userId);
-            UserInfo after = new UserInfo(before.id(), before.login(), before.displayName(), roles,
-                    before.locked(), version);
+            User after = user(before.getId(), before.getLogin(), before.getDisplayName(), roles, before.isLocked(),
+                    version);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "user", userId).version(version)
                     .oldValue(values(before)).newValue(values(after)).build());
             return after;
@@ -154,14 +157,14 @@ final class JdbcUserService implements UserService {
     }
 
     @Override
-    public UserInfo unlock(Session actor, String userId) {
+    public User unlock(Session actor, String userId) {
         return transactions.run("unlocking user " + userId, tx -> {
             Guard.requireRole(tx, actor, "unlock users", Role.ADMINISTRATOR);
-            UserInfo before = load(tx, userId);
-            long version = RowVersions.update(tx, "app_user", "user", userId, before.rowVersion(),
+            User before = load(tx, userId);
+            long version = RowVersions.update(tx, "app_user", "user", userId, before.getRowVersion(),
                     "locked = FALSE, failed_logins = 0");
             tx.wrote(DataKind.USER, userId);
-            UserInfo after = new UserInfo(before.id(), before.login(), before.displayName(), before.roles(), false,
+            User after = user(before.getId(), before.getLogin(), before.getDisplayName(), before.getRoles(), false,
                     version);
             tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CHANGE, "user", userId).version(version)
                     .oldValue(values(before)).newValue(values(after)).reason("account unlocked").build());
@@ -170,37 +173,50 @@ final class JdbcUserService implements UserService {
     }
 
     @Override
-    public UserInfo user(String userId) {
+    public User user(String userId) {
         return transactions.run("reading user " + userId, tx -> load(tx, userId));
     }
 
     @Override
-    public Optional<UserInfo> findByLogin(String login) {
+    public Optional<User> findByLogin(String login) {
         return transactions.run("finding user " + login,
                 tx -> tx.queryOne("SELECT " + USER_COLUMNS + " FROM app_user WHERE login = ?", JdbcUserService::map,
                         login));
     }
 
-    private static UserInfo load(Tx tx, String userId) throws SQLException {
+    private static User load(Tx tx, String userId) throws SQLException {
         return tx.queryOne("SELECT " + USER_COLUMNS + " FROM app_user WHERE id = ?", JdbcUserService::map, userId)
                 .orElseThrow(() -> new NoSuchObjectException("user", userId));
     }
 
-    private static UserInfo map(ResultSet rs) throws SQLException {
-        return new UserInfo(rs.getString("id"), rs.getString("login"), rs.getString("display_name"),
+    private static User map(ResultSet rs) throws SQLException {
+        return user(rs.getString("id"), rs.getString("login"), rs.getString("display_name"),
                 RoleSets.parse(rs.getString("roles")), rs.getBoolean("locked"), rs.getLong("row_version"));
     }
 
-    private static AuditEntry created(String actorId, UserInfo user) {
-        return AuditEntry.builder(actorId, AuditAction.CREATE, "user", user.id()).newValue(values(user)).build();
+    /** A fresh model object of what the store keeps of a user, credentials left out; roles in declaration order. */
+    private static User user(String id, String login, String displayName, Collection<Role> roles, boolean locked,
+            long rowVersion) {
+        User u = WorkspaceFactory.eINSTANCE.createUser();
+        u.setId(id);
+        u.setLogin(login);
+        u.setDisplayName(displayName);
+        u.getRoles().addAll(EnumSet.copyOf(roles));
+        u.setLocked(locked);
+        u.setRowVersion(rowVersion);
+        return u;
     }
 
-    private static String values(UserInfo u) {
+    private static AuditEntry created(String actorId, User user) {
+        return AuditEntry.builder(actorId, AuditAction.CREATE, "user", user.getId()).newValue(values(user)).build();
+    }
+
+    private static String values(User u) {
         Map<String, Object> fields = new LinkedHashMap<>();
-        fields.put("login", u.login());
-        fields.put("displayName", u.displayName());
-        fields.put("roles", RoleSets.format(u.roles()));
-        fields.put("locked", u.locked());
+        fields.put("login", u.getLogin());
+        fields.put("displayName", u.getDisplayName());
+        fields.put("roles", RoleSets.format(u.getRoles()));
+        fields.put("locked", u.isLocked());
         return AuditValues.canonical(fields);
     }
 

@@ -1,5 +1,6 @@
 package org.tracegas.store.internal;
 
+import java.util.Collection;
 import java.util.EnumSet;
 import java.util.Set;
 import java.util.stream.Collectors;
@@ -12,7 +13,7 @@ final class RoleSets {
     private RoleSets() {
     }
 
-    static String format(Set<Role> roles) {
+    static String format(Collection<Role> roles) {
         return EnumSet.copyOf(roles).stream().map(Role::getName).collect(Collectors.joining(","));
     }
 

@@ -83,15 +83,15 @@ final class LimeKilnLab {
         this.waterPpm = waterPpm;
         Session admin = store.users().createFirstAdministrator(ADMIN, "Administrator", PASSWORD.toCharArray());
         String analystId = store.users().createUser(admin, ANALYST, "Taro Nakamura", Set.of(Role.ANALYST),
-                PASSWORD.toCharArray()).id();
+                PASSWORD.toCharArray()).getId();
         String reviewerId = store.users().createUser(admin, REVIEWER, "Elin Lindqvist", Set.of(Role.REVIEWER),
-                PASSWORD.toCharArray()).id();
+                PASSWORD.toCharArray()).getId();
         String client = store.projects().createClient(admin, "Quarrymoor Lime Works").getId();
         project = store.projects().createProject(admin, client, CODE, "Kiln 2 stack, December");
         store.projects().grant(admin, project.getId(), analystId, AccessLevel.WRITE);
         store.projects().grant(admin, project.getId(), reviewerId, AccessLevel.READ);
         String managerId = store.users().createUser(admin, QA_MANAGER, "Amara Moreau", Set.of(Role.QUALITY_MANAGER),
-                PASSWORD.toCharArray()).id();
+                PASSWORD.toCharArray()).getId();
         store.projects().grant(admin, project.getId(), managerId, AccessLevel.READ);
         analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
         reviewer = store.users().logIn(REVIEWER, PASSWORD.toCharArray());

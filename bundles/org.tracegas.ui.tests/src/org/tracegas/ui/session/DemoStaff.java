@@ -27,7 +27,7 @@ public final class DemoStaff {
                 PASSWORD.toCharArray());
         store.users().createUser(admin, ANALYST, "Anna Vogel", Set.of(Role.ANALYST), PASSWORD.toCharArray());
         String managerId = store.users().createUser(admin, MANAGER, "Quentin Morel",
-                EnumSet.of(Role.QUALITY_MANAGER, Role.REVIEWER), PASSWORD.toCharArray()).id();
+                EnumSet.of(Role.QUALITY_MANAGER, Role.REVIEWER), PASSWORD.toCharArray()).getId();
         return SeededProject.seed(store, admin, store.users().logIn(ANALYST, PASSWORD.toCharArray()), managerId);
     }
 }

@@ -45,7 +45,7 @@ final class ExistingWorkspace {
     ExistingWorkspace(WorkspaceStore store) {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", PASSWORD.toCharArray());
         String analystId = store.users().createUser(admin, ANALYST, "Lena Brandt", Set.of(Role.ANALYST),
-                PASSWORD.toCharArray()).id();
+                PASSWORD.toCharArray()).getId();
         store.users().createUser(admin, REVIEWER, "Kofi Osei", EnumSet.of(Role.REVIEWER), PASSWORD.toCharArray());
         String river = store.projects().createClient(admin, "Riverside Incinerator").getId();
         project = store.projects().createProject(admin, river, CODE, "Line 2 stack, May campaign");

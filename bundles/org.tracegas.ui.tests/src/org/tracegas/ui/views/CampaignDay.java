@@ -43,7 +43,7 @@ final class CampaignDay {
     CampaignDay(WorkspaceStore store) {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", PASSWORD.toCharArray());
         String analystId = store.users().createUser(admin, ANALYST, "Rana Haddad",
-                Set.of(Role.ANALYST), PASSWORD.toCharArray()).id();
+                Set.of(Role.ANALYST), PASSWORD.toCharArray()).getId();
         String client = store.projects().createClient(admin, "Eastfield Cement").getId();
         project = store.projects().createProject(admin, client, CODE, "Kiln 1 stack, July day");
         small = store.projects().createProject(admin, client, SMALL_CODE, "Kiln 2 stack, spot check");

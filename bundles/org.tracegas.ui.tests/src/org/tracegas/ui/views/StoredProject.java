@@ -62,7 +62,7 @@ final class StoredProject {
     StoredProject(WorkspaceStore store, Path folder) throws IOException {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", PASSWORD.toCharArray());
         String analystId = store.users().createUser(admin, ANALYST, "Marta Ferreira", Set.of(Role.ANALYST),
-                PASSWORD.toCharArray()).id();
+                PASSWORD.toCharArray()).getId();
         String client = store.projects().createClient(admin, "Glasshouse Lane Glassworks").getId();
         project = store.projects().createProject(admin, client, CODE, "Furnace 3 flue, September");
         store.projects().grant(admin, project.getId(), analystId, AccessLevel.WRITE);

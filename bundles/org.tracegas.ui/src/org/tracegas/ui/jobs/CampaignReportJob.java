@@ -2,12 +2,14 @@ package org.tracegas.ui.jobs;
 
 import java.io.IOException;
 import java.nio.file.Path;
+import java.util.Locale;
 
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.IStatus;
 import org.eclipse.core.runtime.Status;
 import org.eclipse.core.runtime.SubMonitor;
 import org.eclipse.core.runtime.jobs.Job;
+import org.tracegas.audit.Signature;
 import org.tracegas.importer.ImportException;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.model.ContentVersion;
@@ -15,7 +17,7 @@ import org.tracegas.model.Project;
 import org.tracegas.report.AuditAnchor;
 import org.tracegas.report.PdfReportWriter;
 import org.tracegas.report.ReportContent;
-import org.tracegas.report.Signature;
+import org.tracegas.report.SignatureWords;
 import org.tracegas.report.campaign.CampaignReport;
 import org.tracegas.report.campaign.ReportIdTakenException;
 import org.tracegas.report.campaign.ReportPlan;
@@ -114,8 +116,8 @@ public final class CampaignReportJob extends Job {
                 .append(". Content hash (SHA-256) ").append(c.contentHash()).append('.');
         c.auditAnchor().ifPresent(a -> b.append(' ').append(anchor(a)));
         for (Signature s : c.signatures()) {
-            b.append(" Signed: ").append(s.meaning()).append(" by ").append(s.printedName())
-                    .append(s.signedContentHash().equals(c.contentHash()) ? "" : " (on earlier content)").append('.');
+            b.append(" Signed: ").append(SignatureWords.noun(s.meaning()).toUpperCase(Locale.ROOT)).append(" by ")
+                    .append(s.printedName()).append(s.contentSha256().equals(c.contentHash()) ? "" : " (on earlier content)").append('.');
         }
         if (c.signatures().isEmpty()) {
             b.append(" Not signed yet.");

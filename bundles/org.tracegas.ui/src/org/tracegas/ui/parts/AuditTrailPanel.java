@@ -284,7 +284,7 @@ public final class AuditTrailPanel extends Composite {
     private String userName(String userId) {
         return logins.computeIfAbsent(userId, id -> {
             try {
-                return access.store().users().user(id).login();
+                return access.store().users().user(id).getLogin();
             } catch (org.tracegas.store.NoSuchObjectException e) {
                 return id;
             }

@@ -41,7 +41,7 @@ public final class ReportApproval {
 
     /** The printed name of the desk's user, shown with the signature. */
     public String printedName() {
-        return request.store().users().user(request.actor().userId()).displayName();
+        return request.store().users().user(request.actor().userId()).getDisplayName();
     }
 
     /**

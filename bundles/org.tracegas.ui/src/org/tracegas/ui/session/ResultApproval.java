@@ -32,7 +32,7 @@ public final class ResultApproval {
 
     /** The signer's printed name as shown in the signature dialog and with the signature. */
     public String printedName(Session session) {
-        return store.users().user(session.userId()).displayName();
+        return store.users().user(session.userId()).getDisplayName();
     }
 
     /**
@@ -65,7 +65,7 @@ public final class ResultApproval {
     /** The login of a user id, or the id itself when there is no such user. */
     public String loginOf(String userId) {
         try {
-            return store.users().user(userId).login();
+            return store.users().user(userId).getLogin();
         } catch (NoSuchObjectException e) {
             return userId;
         }
