@@ -18,6 +18,7 @@ import org.eclipse.core.runtime.jobs.Job;
 import org.eclipse.core.runtime.jobs.JobChangeAdapter;
 import org.eclipse.jface.wizard.WizardDialog;
 import org.eclipse.swt.SWT;
+import org.eclipse.swt.graphics.GC;
 import org.eclipse.swt.widgets.Button;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
@@ -26,6 +27,7 @@ import org.eclipse.swt.widgets.Event;
 import org.eclipse.swt.widgets.Menu;
 import org.eclipse.swt.widgets.MenuItem;
 import org.eclipse.swt.widgets.Shell;
+import org.eclipse.swtchart.IAxis;
 import org.eclipse.ui.IWorkbenchPage;
 import org.eclipse.ui.IWorkbenchWindow;
 import org.junit.jupiter.api.Test;
@@ -187,6 +189,15 @@ class DeskWorkbenchImportAndRunTest {
         assertEquals(1, co.flagged().cardinality(), "the 150 ppm value is drawn flagged");
         shots.add(Screens.save(shell, "workbench-run-method-time-series"));
         StartedWorkbench.assertInside(series);
+        // the concentration axis's title is written whole along the plot (its unit alone where words do not fit)
+        IAxis left = series.chart().getAxisSet().getYAxis(0);
+        GC gc = new GC(series.chart());
+        gc.setFont(left.getTitle().getFont());
+        int titleLength = gc.textExtent(left.getTitle().getText()).x;
+        gc.dispose();
+        int plotHeight = series.chart().getPlotArea().getControl().getSize().y;
+        assertTrue(titleLength <= plotHeight, "'" + left.getTitle().getText() + "' is " + titleLength
+                + " px long, the plot " + plotHeight + " px high");
     }
 
     /** How the one finished job of a type ended, or null while none has. */

@@ -73,6 +73,8 @@ public final class TimeSeriesPanel extends Composite {
     private Set<String> majors = Set.of();
     /** Id of the major components' axis while it is shown, else -1. */
     private int majorAxis = -1;
+    /** Each concentration axis's title as words and unit, e.g. {"Trace gases", " (ppm)"}, by axis id. */
+    private final Map<Integer, String[]> axisTitles = new HashMap<>();
 
     public TimeSeriesPanel(Composite parent, int style) {
         super(parent, style);
@@ -137,6 +139,11 @@ public final class TimeSeriesPanel extends Composite {
         cursor = new CursorReadout(chart, readout, "%.4f h", "concentration");
         addListener(SWT.Dispose, e -> swatches.values().forEach(Image::dispose));
         Control plot = chart.getPlotArea().getControl();
+        plot.addListener(SWT.Resize, e -> {
+            for (IAxis axis : chart.getAxisSet().getYAxes()) {
+                fitTitle(axis);
+            }
+        });
         plot.addListener(SWT.MouseDoubleClick, e -> open(nearest(e.x, e.y)));
         // the context menu acts on the value nearest to where it was asked for
         Menu menu = new Menu(plot);
@@ -313,9 +320,9 @@ public final class TimeSeriesPanel extends Composite {
         setMajorAxis(anyTrace && anyMajor);
         IAxis left = chart.getAxisSet().getYAxis(0);
         String leftUnit = unitOf(drawn, false, anyMajor && !anyTrace);
-        left.getTitle().setText((majorAxis >= 0 ? "Trace gases" : "Concentration") + leftUnit);
+        title(left, majorAxis >= 0 ? "Trace gases" : "Concentration", leftUnit);
         if (majorAxis >= 0) {
-            majorAxis().getTitle().setText("Major components, dashed" + unitOf(drawn, true, true));
+            title(majorAxis(), "Major components, dashed", unitOf(drawn, true, true));
         }
         for (int k = 0; k < drawn.size(); k++) {
             String compound = drawn.get(k).compound();
@@ -382,6 +389,33 @@ public final class TimeSeriesPanel extends Composite {
         return drawn.isEmpty() ? "" : " (" + drawn.get(0).unit() + ")";
     }
 
+    private void title(IAxis axis, String words, String unit) {
+        axisTitles.put(axis.getId(), new String[] {words, unit});
+        fitTitle(axis);
+    }
+
+    /**
+     * An axis's title in words and unit where the plot is tall enough to write them along it, else its unit alone:
+     * the chart clips a title longer than its axis (the desk's default layout in a 1280 × 800 window).
+     */
+    private void fitTitle(IAxis axis) {
+        String[] t = axisTitles.get(axis.getId());
+        if (t == null) {
+            return;
+        }
+        String full = t[0] + t[1];
+        String unit = t[1].strip().replaceAll("^\\(|\\)$", "");
+        int room = chart.getPlotArea().getControl().getSize().y;
+        GC gc = new GC(chart);
+        gc.setFont(axis.getTitle().getFont());
+        boolean fits = room == 0 || unit.isEmpty() || gc.textExtent(full).x <= room;
+        gc.dispose();
+        String text = fits ? full : unit;
+        if (!text.equals(axis.getTitle().getText())) {
+            axis.getTitle().setText(text);
+        }
+    }
+
     private void setMajorAxis(boolean wanted) {
         if (wanted && majorAxis < 0) {
             majorAxis = chart.getAxisSet().createYAxis();
@@ -389,6 +423,7 @@ public final class TimeSeriesPanel extends Composite {
             axis.setPosition(IAxis.Position.Secondary);
             axis.getTick().setFormat(new java.text.DecimalFormat("0.###"));
         } else if (!wanted && majorAxis >= 0) {
+            axisTitles.remove(majorAxis);
             chart.getAxisSet().deleteYAxis(majorAxis);
             majorAxis = -1;
         }
