@@ -35,6 +35,11 @@ public final class KeyValueFile {
         this.blocks = blocks;
     }
 
+    /** The word a plan file writes for a constant: its name in lower case, '-' for '_'. */
+    static String word(Enum<?> constant) {
+        return constant.name().toLowerCase(Locale.ROOT).replace('_', '-');
+    }
+
     public static KeyValueFile read(Path file) throws IOException {
         return parse(Files.readString(file, StandardCharsets.UTF_8), file);
     }
@@ -317,7 +322,7 @@ public final class KeyValueFile {
             }
             List<String> known = new ArrayList<>();
             for (E c : type.getEnumConstants()) {
-                known.add(c.name().toLowerCase(Locale.ROOT).replace('_', '-'));
+                known.add(word(c));
             }
             throw error("'" + text + "' is none of " + known);
         }

@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import java.util.Set;
 
@@ -95,7 +94,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
             "tolerance", "max-iterations", "max-absorbance", "shift", "reporting-unit", "algorithm");
     /** The algorithm settings a method derives from its transform and resolution, not from its [line-list]. */
     private static final java.util.Map<String, java.util.function.Function<MethodDefinition, String>> INSTRUMENT =
-            java.util.Map.of("apodization", d -> constant(d.transform().apodization()),
+            java.util.Map.of("apodization", d -> KeyValueFile.word(d.transform().apodization()),
                     "resolution", d -> Double.toString(d.resolution()));
     private static final Set<String> ANALYTE = Set.of("compound", "interferents", "region");
 
@@ -295,7 +294,7 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         s.append("path-length = ").append(m.pathLengthMetres()).append('\n');
         if (pathSource != PathOrigin.NOMINAL) {
             // only when not the default, so that the stored versions of earlier methods read as they were written
-            s.append("path-source = ").append(constant(pathSource)).append('\n');
+            s.append("path-source = ").append(KeyValueFile.word(pathSource)).append('\n');
         }
         if (!Double.isNaN(resolution)) {
             s.append("resolution = ").append(resolution).append('\n');
@@ -304,8 +303,8 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
         s.append("tolerance = ").append(m.tolerance()).append('\n');
         s.append("max-iterations = ").append(m.maxIterations()).append('\n');
         s.append("max-absorbance = ").append(m.maxAbsorbance()).append('\n');
-        s.append("shift = ").append(constant(m.shiftTerm())).append('\n');
-        s.append("reporting-unit = ").append(constant(m.reportingUnit())).append('\n');
+        s.append("shift = ").append(KeyValueFile.word(m.shiftTerm())).append('\n');
+        s.append("reporting-unit = ").append(KeyValueFile.word(m.reportingUnit())).append('\n');
         if (!m.algorithm().equals(FitAlgorithm.CLASSICAL_LEAST_SQUARES)) {
             // only when not the default, so that the stored versions of earlier methods read as they were written
             s.append("algorithm = ").append(m.algorithm().name()).append('\n');
@@ -339,10 +338,6 @@ public record MethodDefinition(Path file, String name, Path libraryManifest, dou
             }
         }
         return s.toString();
-    }
-
-    private static String constant(Enum<?> e) {
-        return e.name().toLowerCase(Locale.ROOT).replace('_', '-');
     }
 
     /**

@@ -68,7 +68,8 @@ final class MethodReferences {
         Optional<Apodization> apodization = apodization(c.apodization());
         if (apodization.isEmpty() || apodization.get() != transform.apodization()) {
             throw new IllegalArgumentException("reference " + reference + " was recorded with apodization '"
-                    + c.apodization() + "', the method's transform applies " + name(transform.apodization()));
+                    + c.apodization() + "', the method's transform applies "
+                    + KeyValueFile.word(transform.apodization()));
         }
         if (!Double.isNaN(resolution) && Math.abs(c.resolution() - resolution) > SAME_RESOLUTION * resolution) {
             throw new IllegalArgumentException("reference " + reference + " was recorded at resolution "
@@ -145,7 +146,4 @@ final class MethodReferences {
         return List.copyOf(conditions);
     }
 
-    private static String name(Apodization a) {
-        return a.name().toLowerCase(Locale.ROOT).replace('_', '-');
-    }
 }

@@ -82,12 +82,12 @@ public final class MethodVersions {
         version.setPathLength(method.pathLengthMetres());
         version.setMaxIterations(method.maxIterations());
         version.setAlgorithm(method.algorithm().name());
-        version.setPathSource(text(stored.pathSource()));
+        version.setPathSource(KeyValueFile.word(stored.pathSource()));
         version.setNonlinearity(method.nonlinearity());
         version.setTolerance(method.tolerance());
         version.setMaxAbsorbance(method.maxAbsorbance());
-        version.setShiftTerm(text(method.shiftTerm()));
-        version.setReportingUnit(text(method.reportingUnit()));
+        version.setShiftTerm(KeyValueFile.word(method.shiftTerm()));
+        version.setReportingUnit(KeyValueFile.word(method.reportingUnit()));
         version.getRecipeSteps().clear();
         version.getRecipeSteps().addAll(MethodRecipe.steps(stored.recipe()));
         version.setCellConditions(cellConditions(method));
@@ -150,9 +150,9 @@ public final class MethodVersions {
         boolean sameAlgorithm = base.algorithm().name().equals(draft.getAlgorithm());
         FitAlgorithm algorithm = sameAlgorithm ? base.algorithm() : algorithm(draft.getAlgorithm());
         if (shift != ShiftTerm.NONE && !algorithm.shiftTerms().contains(shift)) {
-            throw new IllegalArgumentException("shift: " + text(shift) + " is not offered by the fit algorithm "
-                    + algorithm.name() + ", which offers " + algorithm.shiftTerms().stream()
-                            .map(MethodVersions::text).sorted().toList());
+            throw new IllegalArgumentException("shift: " + KeyValueFile.word(shift)
+                    + " is not offered by the fit algorithm " + algorithm.name() + ", which offers "
+                    + algorithm.shiftTerms().stream().map(KeyValueFile::word).sorted().toList());
         }
         List<AnalysisRegion> openedRegions = base.analytes().stream().flatMap(a -> a.regions().stream()).toList();
         QuantificationMethod.Builder b = QuantificationMethod.builder(base.name())
@@ -285,22 +285,19 @@ public final class MethodVersions {
     }
 
     private static <E extends Enum<E>> List<String> names(Class<E> type) {
-        return java.util.Arrays.stream(type.getEnumConstants()).map(MethodVersions::text).toList();
+        return java.util.Arrays.stream(type.getEnumConstants()).map(KeyValueFile::word).toList();
     }
 
     /** The constant a method text names by its word; the field is named when the word is none of them. */
     private static <E extends Enum<E>> E constant(Class<E> type, String text, String field) {
         for (E e : type.getEnumConstants()) {
-            if (text(e).equals(text)) {
+            if (KeyValueFile.word(e).equals(text)) {
                 return e;
             }
         }
         throw new IllegalArgumentException(field + ": '" + text + "' is none of " + names(type));
     }
 
-    private static String text(Enum<?> constant) {
-        return constant.name().toLowerCase(java.util.Locale.ROOT).replace('_', '-');
-    }
 
     /**
      * The method's region of a model region: its span and baseline order, the residual limit of the region it was

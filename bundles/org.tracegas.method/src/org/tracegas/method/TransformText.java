@@ -1,6 +1,5 @@
 package org.tracegas.method;
 
-import java.util.Locale;
 import java.util.Set;
 
 import org.tracegas.library.io.FileFormatException;
@@ -51,14 +50,11 @@ public final class TransformText {
 
     /** Every setting, so that a stored version does not depend on the defaults of a later release. */
     public static String write(TransformSettings t) {
-        return "apodization = " + name(t.apodization()) + "\nphase-correction = " + name(t.phaseCorrection())
-                + "\nsidedness = " + name(t.sidedness()) + "\nzero-fill = " + t.zeroFillFactor() + "\nrange = "
+        return "apodization = " + KeyValueFile.word(t.apodization()) + "\nphase-correction = "
+                + KeyValueFile.word(t.phaseCorrection()) + "\nsidedness = " + KeyValueFile.word(t.sidedness())
+                + "\nzero-fill = " + t.zeroFillFactor() + "\nrange = "
                 + t.lowWavenumber() + ".." + t.highWavenumber() + "\nphase-points = " + t.phasePoints()
-                + "\nzpd-search = " + name(t.zpdSearch()) + "\n";
-    }
-
-    private static String name(Enum<?> e) {
-        return e.name().toLowerCase(Locale.ROOT).replace('_', '-');
+                + "\nzpd-search = " + KeyValueFile.word(t.zpdSearch()) + "\n";
     }
 
     private static String keyOf(String message) {
