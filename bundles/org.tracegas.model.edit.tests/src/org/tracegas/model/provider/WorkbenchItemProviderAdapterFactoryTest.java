@@ -181,14 +181,7 @@ class WorkbenchItemProviderAdapterFactoryTest {
         m.setCellPressure(1013.25);
         m.setSourceFile("kiln1-0630.jdx");
         m.setSourceSha256(SHA256_ABC);
-        IItemPropertySource source = (IItemPropertySource) factory.adapt(m, IItemPropertySource.class);
-        Map<String, String> shown = new LinkedHashMap<>();
-        for (IItemPropertyDescriptor d : source.getPropertyDescriptors(m)) {
-            Object value = d.getPropertyValue(m);
-            // an attribute's value comes wrapped (for cell editors); its label provider writes the plain value
-            value = value instanceof IItemPropertySource wrapper ? wrapper.getEditableValue(value) : value;
-            shown.put(d.getDisplayName(m), d.getLabelProvider(m).getText(value));
-        }
+        Map<String, String> shown = properties(m);
         assertEquals("464.15", shown.get("Cell temperature (K)"));
         assertEquals("1013.25", shown.get("Cell pressure (hPa)"));
         assertEquals("span", shown.get("Kind"));
