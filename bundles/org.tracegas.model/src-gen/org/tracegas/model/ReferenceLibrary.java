@@ -2,6 +2,7 @@
  */
 package org.tracegas.model;
 
+import org.eclipse.emf.common.util.EList;
 
 /**
  * <!-- begin-user-doc -->
@@ -18,6 +19,7 @@ package org.tracegas.model;
  * <ul>
  *   <li>{@link org.tracegas.model.ReferenceLibrary#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.ReferenceLibrary#getDescription <em>Description</em>}</li>
+ *   <li>{@link org.tracegas.model.ReferenceLibrary#getReferences <em>References</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getReferenceLibrary()
@@ -68,5 +70,20 @@ public interface ReferenceLibrary extends StoredObject {
 	 * @generated
 	 */
 	void setDescription(String value);
+
+	/**
+	 * Returns the value of the '<em><b>References</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.ReferenceSpectrum}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The references of the library's newest version, in the order of its manifest.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>References</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getReferenceLibrary_References()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<ReferenceSpectrum> getReferences();
 
 } // ReferenceLibrary

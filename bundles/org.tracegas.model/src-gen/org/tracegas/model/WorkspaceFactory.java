@@ -76,6 +76,15 @@ public interface WorkspaceFactory extends EFactory {
 	ReferenceLibrary createReferenceLibrary();
 
 	/**
+	 * Returns a new object of class '<em>Reference Spectrum</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Reference Spectrum</em>'.
+	 * @generated
+	 */
+	ReferenceSpectrum createReferenceSpectrum();
+
+	/**
 	 * Returns a new object of class '<em>Analysis Method</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

@@ -699,13 +699,22 @@ public interface WorkspacePackage extends EPackage {
 	int REFERENCE_LIBRARY__DESCRIPTION = STORED_OBJECT_FEATURE_COUNT + 1;
 
 	/**
+	 * The feature id for the '<em><b>References</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_LIBRARY__REFERENCES = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
 	 * The number of structural features of the '<em>Reference Library</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int REFERENCE_LIBRARY_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 2;
+	int REFERENCE_LIBRARY_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 3;
 
 	/**
 	 * The number of operations of the '<em>Reference Library</em>' class.
@@ -717,6 +726,124 @@ public interface WorkspacePackage extends EPackage {
 	int REFERENCE_LIBRARY_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.ReferenceSpectrumImpl <em>Reference Spectrum</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.ReferenceSpectrumImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceSpectrum()
+	 * @generated
+	 */
+	int REFERENCE_SPECTRUM = 7;
+
+	/**
+	 * The feature id for the '<em><b>Compound</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM__COMPOUND = 0;
+
+	/**
+	 * The feature id for the '<em><b>Cas Number</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM__CAS_NUMBER = 1;
+
+	/**
+	 * The feature id for the '<em><b>Ppm Metres</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM__PPM_METRES = 2;
+
+	/**
+	 * The feature id for the '<em><b>Temperature</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM__TEMPERATURE = 3;
+
+	/**
+	 * The feature id for the '<em><b>Pressure</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM__PRESSURE = 4;
+
+	/**
+	 * The feature id for the '<em><b>Resolution</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM__RESOLUTION = 5;
+
+	/**
+	 * The feature id for the '<em><b>Apodization</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM__APODIZATION = 6;
+
+	/**
+	 * The feature id for the '<em><b>Origin</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM__ORIGIN = 7;
+
+	/**
+	 * The feature id for the '<em><b>Origin Text</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM__ORIGIN_TEXT = 8;
+
+	/**
+	 * The feature id for the '<em><b>Content Sha256</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM__CONTENT_SHA256 = 9;
+
+	/**
+	 * The number of structural features of the '<em>Reference Spectrum</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM_FEATURE_COUNT = 10;
+
+	/**
+	 * The number of operations of the '<em>Reference Spectrum</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REFERENCE_SPECTRUM_OPERATION_COUNT = 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.impl.AnalysisMethodImpl <em>Analysis Method</em>}' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -724,7 +851,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAnalysisMethod()
 	 * @generated
 	 */
-	int ANALYSIS_METHOD = 7;
+	int ANALYSIS_METHOD = 8;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -797,7 +924,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMethodVersion()
 	 * @generated
 	 */
-	int METHOD_VERSION = 8;
+	int METHOD_VERSION = 9;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1041,7 +1168,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAnalysisRegion()
 	 * @generated
 	 */
-	int ANALYSIS_REGION = 9;
+	int ANALYSIS_REGION = 10;
 
 	/**
 	 * The feature id for the '<em><b>Compound</b></em>' attribute.
@@ -1123,7 +1250,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResult()
 	 * @generated
 	 */
-	int RESULT = 10;
+	int RESULT = 11;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1277,7 +1404,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getQaOutcome()
 	 * @generated
 	 */
-	int QA_OUTCOME = 11;
+	int QA_OUTCOME = 12;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1431,7 +1558,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getUser()
 	 * @generated
 	 */
-	int USER = 12;
+	int USER = 13;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1513,7 +1640,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAccessLevel()
 	 * @generated
 	 */
-	int ACCESS_LEVEL = 13;
+	int ACCESS_LEVEL = 14;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.MeasurementKind <em>Measurement Kind</em>}' enum.
@@ -1523,7 +1650,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurementKind()
 	 * @generated
 	 */
-	int MEASUREMENT_KIND = 14;
+	int MEASUREMENT_KIND = 15;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.SpectralContent <em>Spectral Content</em>}' enum.
@@ -1533,7 +1660,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectralContent()
 	 * @generated
 	 */
-	int SPECTRAL_CONTENT = 15;
+	int SPECTRAL_CONTENT = 16;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.VersionKind <em>Version Kind</em>}' enum.
@@ -1543,7 +1670,17 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getVersionKind()
 	 * @generated
 	 */
-	int VERSION_KIND = 16;
+	int VERSION_KIND = 17;
+
+	/**
+	 * The meta object id for the '{@link org.tracegas.model.ReferenceOrigin <em>Reference Origin</em>}' enum.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.ReferenceOrigin
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceOrigin()
+	 * @generated
+	 */
+	int REFERENCE_ORIGIN = 18;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
@@ -1553,7 +1690,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 17;
+	int RESULT_FLAG = 19;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -1563,7 +1700,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 18;
+	int ROLE = 20;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -1573,7 +1710,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 19;
+	int INSTANT = 21;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -1583,7 +1720,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 20;
+	int SPECTRUM = 22;
 
 	/**
 	 * The meta object id for the '<em>Provenance</em>' data type.
@@ -1593,7 +1730,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
 	 * @generated
 	 */
-	int PROVENANCE = 21;
+	int PROVENANCE = 23;
 
 	/**
 	 * The meta object id for the '<em>Result Conditions</em>' data type.
@@ -1603,7 +1740,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
 	 * @generated
 	 */
-	int RESULT_CONDITIONS = 22;
+	int RESULT_CONDITIONS = 24;
 
 
 	/**
@@ -2126,6 +2263,137 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EAttribute getReferenceLibrary_Description();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link org.tracegas.model.ReferenceLibrary#getReferences <em>References</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>References</em>'.
+	 * @see org.tracegas.model.ReferenceLibrary#getReferences()
+	 * @see #getReferenceLibrary()
+	 * @generated
+	 */
+	EReference getReferenceLibrary_References();
+
+	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.ReferenceSpectrum <em>Reference Spectrum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Reference Spectrum</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum
+	 * @generated
+	 */
+	EClass getReferenceSpectrum();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ReferenceSpectrum#getCompound <em>Compound</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Compound</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum#getCompound()
+	 * @see #getReferenceSpectrum()
+	 * @generated
+	 */
+	EAttribute getReferenceSpectrum_Compound();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ReferenceSpectrum#getCasNumber <em>Cas Number</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Cas Number</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum#getCasNumber()
+	 * @see #getReferenceSpectrum()
+	 * @generated
+	 */
+	EAttribute getReferenceSpectrum_CasNumber();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ReferenceSpectrum#getPpmMetres <em>Ppm Metres</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Ppm Metres</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum#getPpmMetres()
+	 * @see #getReferenceSpectrum()
+	 * @generated
+	 */
+	EAttribute getReferenceSpectrum_PpmMetres();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ReferenceSpectrum#getTemperature <em>Temperature</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Temperature</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum#getTemperature()
+	 * @see #getReferenceSpectrum()
+	 * @generated
+	 */
+	EAttribute getReferenceSpectrum_Temperature();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ReferenceSpectrum#getPressure <em>Pressure</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Pressure</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum#getPressure()
+	 * @see #getReferenceSpectrum()
+	 * @generated
+	 */
+	EAttribute getReferenceSpectrum_Pressure();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ReferenceSpectrum#getResolution <em>Resolution</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Resolution</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum#getResolution()
+	 * @see #getReferenceSpectrum()
+	 * @generated
+	 */
+	EAttribute getReferenceSpectrum_Resolution();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ReferenceSpectrum#getApodization <em>Apodization</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Apodization</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum#getApodization()
+	 * @see #getReferenceSpectrum()
+	 * @generated
+	 */
+	EAttribute getReferenceSpectrum_Apodization();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ReferenceSpectrum#getOrigin <em>Origin</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Origin</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum#getOrigin()
+	 * @see #getReferenceSpectrum()
+	 * @generated
+	 */
+	EAttribute getReferenceSpectrum_Origin();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ReferenceSpectrum#getOriginText <em>Origin Text</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Origin Text</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum#getOriginText()
+	 * @see #getReferenceSpectrum()
+	 * @generated
+	 */
+	EAttribute getReferenceSpectrum_OriginText();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ReferenceSpectrum#getContentSha256 <em>Content Sha256</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Content Sha256</em>'.
+	 * @see org.tracegas.model.ReferenceSpectrum#getContentSha256()
+	 * @see #getReferenceSpectrum()
+	 * @generated
+	 */
+	EAttribute getReferenceSpectrum_ContentSha256();
 
 	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.AnalysisMethod <em>Analysis Method</em>}'.
@@ -2767,6 +3035,16 @@ public interface WorkspacePackage extends EPackage {
 	EEnum getVersionKind();
 
 	/**
+	 * Returns the meta object for enum '{@link org.tracegas.model.ReferenceOrigin <em>Reference Origin</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for enum '<em>Reference Origin</em>'.
+	 * @see org.tracegas.model.ReferenceOrigin
+	 * @generated
+	 */
+	EEnum getReferenceOrigin();
+
+	/**
 	 * Returns the meta object for enum '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -3264,6 +3542,104 @@ public interface WorkspacePackage extends EPackage {
 		EAttribute REFERENCE_LIBRARY__DESCRIPTION = eINSTANCE.getReferenceLibrary_Description();
 
 		/**
+		 * The meta object literal for the '<em><b>References</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference REFERENCE_LIBRARY__REFERENCES = eINSTANCE.getReferenceLibrary_References();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.ReferenceSpectrumImpl <em>Reference Spectrum</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.ReferenceSpectrumImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceSpectrum()
+		 * @generated
+		 */
+		EClass REFERENCE_SPECTRUM = eINSTANCE.getReferenceSpectrum();
+
+		/**
+		 * The meta object literal for the '<em><b>Compound</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REFERENCE_SPECTRUM__COMPOUND = eINSTANCE.getReferenceSpectrum_Compound();
+
+		/**
+		 * The meta object literal for the '<em><b>Cas Number</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REFERENCE_SPECTRUM__CAS_NUMBER = eINSTANCE.getReferenceSpectrum_CasNumber();
+
+		/**
+		 * The meta object literal for the '<em><b>Ppm Metres</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REFERENCE_SPECTRUM__PPM_METRES = eINSTANCE.getReferenceSpectrum_PpmMetres();
+
+		/**
+		 * The meta object literal for the '<em><b>Temperature</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REFERENCE_SPECTRUM__TEMPERATURE = eINSTANCE.getReferenceSpectrum_Temperature();
+
+		/**
+		 * The meta object literal for the '<em><b>Pressure</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REFERENCE_SPECTRUM__PRESSURE = eINSTANCE.getReferenceSpectrum_Pressure();
+
+		/**
+		 * The meta object literal for the '<em><b>Resolution</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REFERENCE_SPECTRUM__RESOLUTION = eINSTANCE.getReferenceSpectrum_Resolution();
+
+		/**
+		 * The meta object literal for the '<em><b>Apodization</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REFERENCE_SPECTRUM__APODIZATION = eINSTANCE.getReferenceSpectrum_Apodization();
+
+		/**
+		 * The meta object literal for the '<em><b>Origin</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REFERENCE_SPECTRUM__ORIGIN = eINSTANCE.getReferenceSpectrum_Origin();
+
+		/**
+		 * The meta object literal for the '<em><b>Origin Text</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REFERENCE_SPECTRUM__ORIGIN_TEXT = eINSTANCE.getReferenceSpectrum_OriginText();
+
+		/**
+		 * The meta object literal for the '<em><b>Content Sha256</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REFERENCE_SPECTRUM__CONTENT_SHA256 = eINSTANCE.getReferenceSpectrum_ContentSha256();
+
+		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.AnalysisMethodImpl <em>Analysis Method</em>}' class.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -3754,6 +4130,16 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EEnum VERSION_KIND = eINSTANCE.getVersionKind();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.ReferenceOrigin <em>Reference Origin</em>}' enum.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.ReferenceOrigin
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceOrigin()
+		 * @generated
+		 */
+		EEnum REFERENCE_ORIGIN = eINSTANCE.getReferenceOrigin();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.

@@ -22,6 +22,9 @@ import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
+import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.ReferenceOrigin;
+import org.tracegas.model.ReferenceSpectrum;
 import org.tracegas.model.WorkspaceFactory;
 
 /**
@@ -94,6 +97,66 @@ class WorkbenchItemProviderAdapterFactoryTest {
         assertEquals("CO  2040–2220.5 cm-1", text(co));
     }
 
+    private Map<String, String> properties(Object o) {
+        IItemPropertySource source = (IItemPropertySource) factory.adapt(o, IItemPropertySource.class);
+        Map<String, String> shown = new LinkedHashMap<>();
+        for (IItemPropertyDescriptor d : source.getPropertyDescriptors(o)) {
+            Object value = d.getPropertyValue(o);
+            // an attribute's value comes wrapped (for cell editors); its label provider writes the plain value
+            value = value instanceof IItemPropertySource wrapper ? wrapper.getEditableValue(value) : value;
+            shown.put(d.getDisplayName(o), d.getLabelProvider(o).getText(value));
+        }
+        return shown;
+    }
+
+    @Test
+    void aLibrarysReferencesAreItsChildrenNamedByCompoundAmountAndAComputedOneSaysSo() {
+        ReferenceLibrary library = model.createReferenceLibrary();
+        library.setName("Kiln gases 2026");
+        ReferenceSpectrum co = model.createReferenceSpectrum();
+        co.setCompound("Carbon monoxide");
+        co.setPpmMetres(200);
+        co.setOrigin(ReferenceOrigin.MEASURED);
+        ReferenceSpectrum no = model.createReferenceSpectrum();
+        no.setCompound("Nitric oxide");
+        no.setPpmMetres(97.5);
+        no.setOrigin(ReferenceOrigin.SYNTHETIC);
+        library.getReferences().addAll(List.of(co, no));
+        ITreeItemContentProvider tree = (ITreeItemContentProvider) factory.adapt(library,
+                ITreeItemContentProvider.class);
+        assertEquals(List.of(co, no), List.copyOf(tree.getChildren(library)));
+        assertEquals("Carbon monoxide  200 ppm·m", text(co));
+        assertEquals("Nitric oxide  97.5 ppm·m  (synthetic)", text(no));
+    }
+
+    @Test
+    void aReferencesPropertiesStateItsConditionsWithUnitsAndPinItsSpectrumByHash() {
+        ReferenceSpectrum co = model.createReferenceSpectrum();
+        co.setCompound("Carbon monoxide");
+        // CAS registry number of carbon monoxide, 630-08-0 (from memory; its check digit is verified by the library)
+        co.setCasNumber("630-08-0");
+        co.setPpmMetres(200);
+        co.setTemperature(296);
+        co.setPressure(101.325);
+        co.setResolution(0.5);
+        co.setApodization("Norton-Beer medium");
+        co.setOrigin(ReferenceOrigin.SYNTHETIC);
+        co.setOriginText("computed from line parameters");
+        co.setContentSha256(SHA256_ABC);
+        Map<String, String> shown = properties(co);
+        assertEquals("630-08-0", shown.get("CAS No."));
+        assertEquals("200.0", shown.get("Amount (ppm·m)"));
+        assertEquals("296.0", shown.get("Temperature (K)"));
+        // the reference library states its pressures in kPa, a measurement its cell pressure in hPa
+        assertEquals("101.325", shown.get("Pressure (kPa)"));
+        assertEquals("0.5", shown.get("Resolution (cm-1)"));
+        assertEquals("Norton-Beer medium", shown.get("Apodization"));
+        assertEquals("synthetic (computed, not measured)", shown.get("Origin"));
+        assertEquals("computed from line parameters", shown.get("Origin (details)"));
+        assertEquals(SHA256_ABC, shown.get("Spectrum file SHA-256"));
+        assertEquals(10, shown.size(), shown.keySet().toString());
+    }
+
     @Test
     void theTreeGoesClientProjectMeasurementAndAMeasurementIsALeaf() {
         Project p = campaign();
@@ -118,14 +181,7 @@ class WorkbenchItemProviderAdapterFactoryTest {
         m.setCellPressure(1013.25);
         m.setSourceFile("kiln1-0630.jdx");
         m.setSourceSha256(SHA256_ABC);
-        IItemPropertySource source = (IItemPropertySource) factory.adapt(m, IItemPropertySource.class);
-        Map<String, String> shown = new LinkedHashMap<>();
-        for (IItemPropertyDescriptor d : source.getPropertyDescriptors(m)) {
-            Object value = d.getPropertyValue(m);
-            // an attribute's value comes wrapped (for cell editors); its label provider writes the plain value
-            value = value instanceof IItemPropertySource wrapper ? wrapper.getEditableValue(value) : value;
-            shown.put(d.getDisplayName(m), d.getLabelProvider(m).getText(value));
-        }
+        Map<String, String> shown = properties(m);
         assertEquals("464.15", shown.get("Cell temperature (K)"));
         assertEquals("1013.25", shown.get("Cell pressure (hPa)"));
         assertEquals("span", shown.get("Kind"));

@@ -210,6 +210,29 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.ReferenceSpectrum} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected ReferenceSpectrumItemProvider referenceSpectrumItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.ReferenceSpectrum}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createReferenceSpectrumAdapter() {
+		if (referenceSpectrumItemProvider == null) {
+			referenceSpectrumItemProvider = new ReferenceSpectrumItemProvider(this);
+		}
+
+		return referenceSpectrumItemProvider;
+	}
+
+	/**
 	 * This keeps track of the one adapter used for all {@link org.tracegas.model.AnalysisMethod} instances.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -458,6 +481,7 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 		if (measurementItemProvider != null) measurementItemProvider.dispose();
 		if (contentVersionItemProvider != null) contentVersionItemProvider.dispose();
 		if (referenceLibraryItemProvider != null) referenceLibraryItemProvider.dispose();
+		if (referenceSpectrumItemProvider != null) referenceSpectrumItemProvider.dispose();
 		if (analysisMethodItemProvider != null) analysisMethodItemProvider.dispose();
 		if (methodVersionItemProvider != null) methodVersionItemProvider.dispose();
 		if (analysisRegionItemProvider != null) analysisRegionItemProvider.dispose();

@@ -14,11 +14,13 @@ import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.ReferenceOrigin;
+import org.tracegas.model.ReferenceSpectrum;
 
 /**
  * The generated item providers with the labels the workbench shows: a client by its name, a campaign by its
- * code, name and measurement count, a measurement by its kind and start (UTC), a method version by its number
- * and whether results use it. The generated labels put the type's name first ("Client Eastfield Cement"),
+ * code, name and measurement count, a measurement by its kind and start (UTC), a reference spectrum by its
+ * compound and amount (and whether it was computed), a method version by its number and whether results use it. The generated labels put the type's name first ("Client Eastfield Cement"),
  * which the tree's structure already says; the generated code stays as the genmodel makes it, so the labels
  * are given here, by overriding only {@code getText} of the generated providers.
  */
@@ -80,6 +82,23 @@ public class WorkbenchItemProviderAdapterFactory extends WorkspaceItemProviderAd
             };
         }
         return referenceLibraryItemProvider;
+    }
+
+    @Override
+    public Adapter createReferenceSpectrumAdapter() {
+        if (referenceSpectrumItemProvider == null) {
+            referenceSpectrumItemProvider = new ReferenceSpectrumItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    ReferenceSpectrum r = (ReferenceSpectrum) object;
+                    // a computed spectrum is never to be taken for a measured one
+                    return r.getCompound() + (Double.isNaN(r.getPpmMetres()) ? ""
+                            : "  " + number(r.getPpmMetres()) + " ppm\u00b7m")
+                            + (r.getOrigin() == ReferenceOrigin.SYNTHETIC ? "  (synthetic)" : "");
+                }
+            };
+        }
+        return referenceSpectrumItemProvider;
     }
 
     @Override

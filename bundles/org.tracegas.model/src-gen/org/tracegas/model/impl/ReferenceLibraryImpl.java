@@ -2,13 +2,23 @@
  */
 package org.tracegas.model.impl;
 
+import java.util.Collection;
+
 import org.eclipse.emf.common.notify.Notification;
+import org.eclipse.emf.common.notify.NotificationChain;
+
+import org.eclipse.emf.common.util.EList;
 
 import org.eclipse.emf.ecore.EClass;
+import org.eclipse.emf.ecore.InternalEObject;
 
 import org.eclipse.emf.ecore.impl.ENotificationImpl;
 
+import org.eclipse.emf.ecore.util.EObjectContainmentEList;
+import org.eclipse.emf.ecore.util.InternalEList;
+
 import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.ReferenceSpectrum;
 import org.tracegas.model.WorkspacePackage;
 
 /**
@@ -21,6 +31,7 @@ import org.tracegas.model.WorkspacePackage;
  * <ul>
  *   <li>{@link org.tracegas.model.impl.ReferenceLibraryImpl#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ReferenceLibraryImpl#getDescription <em>Description</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ReferenceLibraryImpl#getReferences <em>References</em>}</li>
  * </ul>
  *
  * @generated
@@ -65,6 +76,16 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 	 * @ordered
 	 */
 	protected String description = DESCRIPTION_EDEFAULT;
+
+	/**
+	 * The cached value of the '{@link #getReferences() <em>References</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getReferences()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<ReferenceSpectrum> references;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -137,12 +158,41 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 	 * @generated
 	 */
 	@Override
+	public EList<ReferenceSpectrum> getReferences() {
+		if (references == null) {
+			references = new EObjectContainmentEList<ReferenceSpectrum>(ReferenceSpectrum.class, this, WorkspacePackage.REFERENCE_LIBRARY__REFERENCES);
+		}
+		return references;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
+		switch (featureID) {
+			case WorkspacePackage.REFERENCE_LIBRARY__REFERENCES:
+				return ((InternalEList<?>)getReferences()).basicRemove(otherEnd, msgs);
+		}
+		return super.eInverseRemove(otherEnd, featureID, msgs);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Object eGet(int featureID, boolean resolve, boolean coreType) {
 		switch (featureID) {
 			case WorkspacePackage.REFERENCE_LIBRARY__NAME:
 				return getName();
 			case WorkspacePackage.REFERENCE_LIBRARY__DESCRIPTION:
 				return getDescription();
+			case WorkspacePackage.REFERENCE_LIBRARY__REFERENCES:
+				return getReferences();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -152,6 +202,7 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	@SuppressWarnings("unchecked")
 	@Override
 	public void eSet(int featureID, Object newValue) {
 		switch (featureID) {
@@ -160,6 +211,10 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 				return;
 			case WorkspacePackage.REFERENCE_LIBRARY__DESCRIPTION:
 				setDescription((String)newValue);
+				return;
+			case WorkspacePackage.REFERENCE_LIBRARY__REFERENCES:
+				getReferences().clear();
+				getReferences().addAll((Collection<? extends ReferenceSpectrum>)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -179,6 +234,9 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 			case WorkspacePackage.REFERENCE_LIBRARY__DESCRIPTION:
 				setDescription(DESCRIPTION_EDEFAULT);
 				return;
+			case WorkspacePackage.REFERENCE_LIBRARY__REFERENCES:
+				getReferences().clear();
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -195,6 +253,8 @@ public class ReferenceLibraryImpl extends StoredObjectImpl implements ReferenceL
 				return NAME_EDEFAULT == null ? name != null : !NAME_EDEFAULT.equals(name);
 			case WorkspacePackage.REFERENCE_LIBRARY__DESCRIPTION:
 				return DESCRIPTION_EDEFAULT == null ? description != null : !DESCRIPTION_EDEFAULT.equals(description);
+			case WorkspacePackage.REFERENCE_LIBRARY__REFERENCES:
+				return references != null && !references.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}

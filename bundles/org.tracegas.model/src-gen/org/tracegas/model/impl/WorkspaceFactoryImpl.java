@@ -65,6 +65,7 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 			case WorkspacePackage.MEASUREMENT: return createMeasurement();
 			case WorkspacePackage.CONTENT_VERSION: return createContentVersion();
 			case WorkspacePackage.REFERENCE_LIBRARY: return createReferenceLibrary();
+			case WorkspacePackage.REFERENCE_SPECTRUM: return createReferenceSpectrum();
 			case WorkspacePackage.ANALYSIS_METHOD: return createAnalysisMethod();
 			case WorkspacePackage.METHOD_VERSION: return createMethodVersion();
 			case WorkspacePackage.ANALYSIS_REGION: return createAnalysisRegion();
@@ -92,6 +93,8 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 				return createSpectralContentFromString(eDataType, initialValue);
 			case WorkspacePackage.VERSION_KIND:
 				return createVersionKindFromString(eDataType, initialValue);
+			case WorkspacePackage.REFERENCE_ORIGIN:
+				return createReferenceOriginFromString(eDataType, initialValue);
 			case WorkspacePackage.RESULT_FLAG:
 				return createResultFlagFromString(eDataType, initialValue);
 			case WorkspacePackage.ROLE:
@@ -119,6 +122,8 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 				return convertSpectralContentToString(eDataType, instanceValue);
 			case WorkspacePackage.VERSION_KIND:
 				return convertVersionKindToString(eDataType, instanceValue);
+			case WorkspacePackage.REFERENCE_ORIGIN:
+				return convertReferenceOriginToString(eDataType, instanceValue);
 			case WorkspacePackage.RESULT_FLAG:
 				return convertResultFlagToString(eDataType, instanceValue);
 			case WorkspacePackage.ROLE:
@@ -194,6 +199,17 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	public ReferenceLibrary createReferenceLibrary() {
 		ReferenceLibraryImpl referenceLibrary = new ReferenceLibraryImpl();
 		return referenceLibrary;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ReferenceSpectrum createReferenceSpectrum() {
+		ReferenceSpectrumImpl referenceSpectrum = new ReferenceSpectrumImpl();
+		return referenceSpectrum;
 	}
 
 	/**
@@ -339,6 +355,26 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	 * @generated
 	 */
 	public String convertVersionKindToString(EDataType eDataType, Object instanceValue) {
+		return instanceValue == null ? null : instanceValue.toString();
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public ReferenceOrigin createReferenceOriginFromString(EDataType eDataType, String initialValue) {
+		ReferenceOrigin result = ReferenceOrigin.get(initialValue);
+		if (result == null) throw new IllegalArgumentException("The value '" + initialValue + "' is not a valid enumerator of '" + eDataType.getName() + "'");
+		return result;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public String convertReferenceOriginToString(EDataType eDataType, Object instanceValue) {
 		return instanceValue == null ? null : instanceValue.toString();
 	}
 

@@ -25,6 +25,8 @@ import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
 import org.tracegas.model.QaOutcome;
 import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.ReferenceOrigin;
+import org.tracegas.model.ReferenceSpectrum;
 import org.tracegas.model.Result;
 import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
@@ -100,6 +102,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	private EClass referenceSpectrumEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	private EClass analysisMethodEClass = null;
 
 	/**
@@ -164,6 +173,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EEnum versionKindEEnum = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EEnum referenceOriginEEnum = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -745,6 +761,126 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	@Override
 	public EAttribute getReferenceLibrary_Description() {
 		return (EAttribute)referenceLibraryEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getReferenceLibrary_References() {
+		return (EReference)referenceLibraryEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getReferenceSpectrum() {
+		return referenceSpectrumEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReferenceSpectrum_Compound() {
+		return (EAttribute)referenceSpectrumEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReferenceSpectrum_CasNumber() {
+		return (EAttribute)referenceSpectrumEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReferenceSpectrum_PpmMetres() {
+		return (EAttribute)referenceSpectrumEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReferenceSpectrum_Temperature() {
+		return (EAttribute)referenceSpectrumEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReferenceSpectrum_Pressure() {
+		return (EAttribute)referenceSpectrumEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReferenceSpectrum_Resolution() {
+		return (EAttribute)referenceSpectrumEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReferenceSpectrum_Apodization() {
+		return (EAttribute)referenceSpectrumEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReferenceSpectrum_Origin() {
+		return (EAttribute)referenceSpectrumEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReferenceSpectrum_OriginText() {
+		return (EAttribute)referenceSpectrumEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReferenceSpectrum_ContentSha256() {
+		return (EAttribute)referenceSpectrumEClass.getEStructuralFeatures().get(9);
 	}
 
 	/**
@@ -1343,6 +1479,16 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EEnum getReferenceOrigin() {
+		return referenceOriginEEnum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EEnum getResultFlag() {
 		return resultFlagEEnum;
 	}
@@ -1480,6 +1626,19 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		referenceLibraryEClass = createEClass(REFERENCE_LIBRARY);
 		createEAttribute(referenceLibraryEClass, REFERENCE_LIBRARY__NAME);
 		createEAttribute(referenceLibraryEClass, REFERENCE_LIBRARY__DESCRIPTION);
+		createEReference(referenceLibraryEClass, REFERENCE_LIBRARY__REFERENCES);
+
+		referenceSpectrumEClass = createEClass(REFERENCE_SPECTRUM);
+		createEAttribute(referenceSpectrumEClass, REFERENCE_SPECTRUM__COMPOUND);
+		createEAttribute(referenceSpectrumEClass, REFERENCE_SPECTRUM__CAS_NUMBER);
+		createEAttribute(referenceSpectrumEClass, REFERENCE_SPECTRUM__PPM_METRES);
+		createEAttribute(referenceSpectrumEClass, REFERENCE_SPECTRUM__TEMPERATURE);
+		createEAttribute(referenceSpectrumEClass, REFERENCE_SPECTRUM__PRESSURE);
+		createEAttribute(referenceSpectrumEClass, REFERENCE_SPECTRUM__RESOLUTION);
+		createEAttribute(referenceSpectrumEClass, REFERENCE_SPECTRUM__APODIZATION);
+		createEAttribute(referenceSpectrumEClass, REFERENCE_SPECTRUM__ORIGIN);
+		createEAttribute(referenceSpectrumEClass, REFERENCE_SPECTRUM__ORIGIN_TEXT);
+		createEAttribute(referenceSpectrumEClass, REFERENCE_SPECTRUM__CONTENT_SHA256);
 
 		analysisMethodEClass = createEClass(ANALYSIS_METHOD);
 		createEAttribute(analysisMethodEClass, ANALYSIS_METHOD__NAME);
@@ -1547,6 +1706,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		measurementKindEEnum = createEEnum(MEASUREMENT_KIND);
 		spectralContentEEnum = createEEnum(SPECTRAL_CONTENT);
 		versionKindEEnum = createEEnum(VERSION_KIND);
+		referenceOriginEEnum = createEEnum(REFERENCE_ORIGIN);
 		resultFlagEEnum = createEEnum(RESULT_FLAG);
 		roleEEnum = createEEnum(ROLE);
 
@@ -1651,6 +1811,19 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEClass(referenceLibraryEClass, ReferenceLibrary.class, "ReferenceLibrary", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getReferenceLibrary_Name(), ecorePackage.getEString(), "name", null, 0, 1, ReferenceLibrary.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getReferenceLibrary_Description(), ecorePackage.getEString(), "description", null, 0, 1, ReferenceLibrary.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getReferenceLibrary_References(), this.getReferenceSpectrum(), null, "references", null, 0, -1, ReferenceLibrary.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(referenceSpectrumEClass, ReferenceSpectrum.class, "ReferenceSpectrum", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getReferenceSpectrum_Compound(), ecorePackage.getEString(), "compound", null, 0, 1, ReferenceSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReferenceSpectrum_CasNumber(), ecorePackage.getEString(), "casNumber", null, 0, 1, ReferenceSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReferenceSpectrum_PpmMetres(), ecorePackage.getEDouble(), "ppmMetres", null, 0, 1, ReferenceSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReferenceSpectrum_Temperature(), ecorePackage.getEDouble(), "temperature", null, 0, 1, ReferenceSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReferenceSpectrum_Pressure(), ecorePackage.getEDouble(), "pressure", null, 0, 1, ReferenceSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReferenceSpectrum_Resolution(), ecorePackage.getEDouble(), "resolution", null, 0, 1, ReferenceSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReferenceSpectrum_Apodization(), ecorePackage.getEString(), "apodization", null, 0, 1, ReferenceSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReferenceSpectrum_Origin(), this.getReferenceOrigin(), "origin", null, 0, 1, ReferenceSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReferenceSpectrum_OriginText(), ecorePackage.getEString(), "originText", null, 0, 1, ReferenceSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReferenceSpectrum_ContentSha256(), ecorePackage.getEString(), "contentSha256", null, 0, 1, ReferenceSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(analysisMethodEClass, AnalysisMethod.class, "AnalysisMethod", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getAnalysisMethod_Name(), ecorePackage.getEString(), "name", null, 0, 1, AnalysisMethod.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -1736,6 +1909,11 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEEnum(versionKindEEnum, VersionKind.class, "VersionKind");
 		addEEnumLiteral(versionKindEEnum, VersionKind.METHOD);
 		addEEnumLiteral(versionKindEEnum, VersionKind.LIBRARY);
+
+		initEEnum(referenceOriginEEnum, ReferenceOrigin.class, "ReferenceOrigin");
+		addEEnumLiteral(referenceOriginEEnum, ReferenceOrigin.MEASURED);
+		addEEnumLiteral(referenceOriginEEnum, ReferenceOrigin.SYNTHETIC);
+		addEEnumLiteral(referenceOriginEEnum, ReferenceOrigin.IMPORTED);
 
 		initEEnum(resultFlagEEnum, ResultFlag.class, "ResultFlag");
 		addEEnumLiteral(resultFlagEEnum, ResultFlag.BELOW_DETECTION_LIMIT);

@@ -96,6 +96,10 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 				return createReferenceLibraryAdapter();
 			}
 			@Override
+			public Adapter caseReferenceSpectrum(ReferenceSpectrum object) {
+				return createReferenceSpectrumAdapter();
+			}
+			@Override
 			public Adapter caseAnalysisMethod(AnalysisMethod object) {
 				return createAnalysisMethodAdapter();
 			}
@@ -234,6 +238,20 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createReferenceLibraryAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.ReferenceSpectrum <em>Reference Spectrum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.ReferenceSpectrum
+	 * @generated
+	 */
+	public Adapter createReferenceSpectrumAdapter() {
 		return null;
 	}
 

@@ -113,6 +113,12 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
+			case WorkspacePackage.REFERENCE_SPECTRUM: {
+				ReferenceSpectrum referenceSpectrum = (ReferenceSpectrum)theEObject;
+				T result = caseReferenceSpectrum(referenceSpectrum);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
 			case WorkspacePackage.ANALYSIS_METHOD: {
 				AnalysisMethod analysisMethod = (AnalysisMethod)theEObject;
 				T result = caseAnalysisMethod(analysisMethod);
@@ -261,6 +267,21 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseReferenceLibrary(ReferenceLibrary object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Reference Spectrum</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Reference Spectrum</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseReferenceSpectrum(ReferenceSpectrum object) {
 		return null;
 	}
 

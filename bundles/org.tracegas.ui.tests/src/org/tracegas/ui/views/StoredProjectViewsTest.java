@@ -27,6 +27,9 @@ import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
+import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.ReferenceOrigin;
+import org.tracegas.model.ReferenceSpectrum;
 import org.tracegas.store.Session;
 import org.tracegas.ui.Screens;
 import org.tracegas.ui.parts.Caution;
@@ -207,6 +210,23 @@ class StoredProjectViewsTest {
         assertEquals("10102-43-9", no.getText(1));
         // a computed spectrum is never shown as a measured one
         assertEquals("SYNTHETIC — computed from line parameters", no.getText(2));
+        // the navigator holds the same references in the workspace model, each pinned to its spectrum file
+        ReferenceLibrary model = nav.workspace().getLibraries().get(0);
+        assertEquals(2, model.getReferences().size());
+        ReferenceSpectrum coModel = model.getReferences().get(0);
+        assertEquals(296, coModel.getTemperature());
+        assertEquals(101.325, coModel.getPressure());
+        assertEquals(0.5, coModel.getResolution());
+        assertEquals("triangular", coModel.getApodization());
+        // GNU coreutils sha256sum of co.txt's bytes, "2000 0.0\n2001 0.1\n"
+        assertEquals("1144cbf01539373b27ece0d42cf8653b12f426b6489588936e973b6a0bae0d9a",
+                coModel.getContentSha256());
+        assertEquals(ReferenceOrigin.SYNTHETIC, model.getReferences().get(1).getOrigin());
+        nav.viewer().expandToLevel(model, 1);
+        Screens.flush(display);
+        TreeItem libraryItem = (TreeItem) nav.viewer().testFindItem(model);
+        assertEquals("Carbon monoxide  200 ppm·m", libraryItem.getItem(0).getText());
+        assertEquals("Nitric oxide  100 ppm·m  (synthetic)", libraryItem.getItem(1).getText());
         Screens.save(shell, "stored-library-references");
     }
 

@@ -23,7 +23,7 @@ import org.tracegas.store.WorkspaceStore;
 /**
  * The navigator's model of a workspace that already held data when it was opened: the clients, projects and
  * measurements the signed-in user may read, as the store reads them, and the newest version of each reference
- * library and analysis method (with its regions, as {@link MethodVersions} reads them for the workbench and the
+ * library (with its references, as {@link StoredLibrary} reads them) and analysis method (with its regions, as {@link MethodVersions} reads them for the workbench and the
  * runner alike).
  */
 public final class StoredWorkspace {
@@ -69,6 +69,7 @@ public final class StoredWorkspace {
             ReferenceLibrary l = f.createReferenceLibrary();
             l.setId(v.getItemId());
             l.setName(v.getItemName());
+            l.getReferences().addAll(StoredLibrary.of(v, store.versions().content(v.getId())).references());
             w.getLibraries().add(l);
         }
         for (ContentVersion v : store.versions().latest(VersionKind.METHOD)) {

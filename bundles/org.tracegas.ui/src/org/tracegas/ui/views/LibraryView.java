@@ -54,7 +54,7 @@ public final class LibraryView extends ViewPart implements FollowsTree {
         loads.start("Reading the library " + name, monitor -> StoredLibrary.latest(desk.access().store(), name),
                 listing -> panel.showRows(name + ", version " + listing.version().getNumber() + ": "
                         + listing.references().size() + " references" + (listing.note().isEmpty() ? ""
-                                : "; " + listing.note()), listing.references()),
+                                : "; " + listing.note()), listing.rows()),
                 message -> panel.showRows("The library " + name + " could not be read: " + message, List.of()));
     }
 
