@@ -36,6 +36,9 @@ public final class ReportContent {
 
     private ReportContent(Builder b) {
         campaign = Check.notNull("campaign", b.campaign);
+        if (!campaign.placed()) {
+            throw new IllegalArgumentException("campaign: the plant and the emission source must be named");
+        }
         methods = Check.list("methods", b.methods);
         libraries = Check.list("libraries", b.libraries);
         qa = Check.list("qa", b.qa);
