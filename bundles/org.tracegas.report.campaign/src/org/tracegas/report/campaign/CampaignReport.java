@@ -100,7 +100,8 @@ public final class CampaignReport {
                         new LibraryVersion(library.getItemName(), "v" + library.getNumber() + ", content "
                                 + method.libraryContentHash().substring(0, 16)),
                         checks, charts(method, plan, checks), series, plan.reported(), plan.moisture(),
-                        t -> oxygen(o2, plan.o2Channel(), t), plan.periods(), exampleFit(measurements, method, plan));
+                        t -> oxygen(o2, plan.o2Channel(), t), plan.periods(), exampleFit(measurements, method, plan))
+                .withInstruments(ReportedInstruments.lines(measurements));
         return ReportSignatures.attach(store, actor, projectId, content, verified);
     }
 
