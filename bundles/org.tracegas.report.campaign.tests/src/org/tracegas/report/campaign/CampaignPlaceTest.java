@@ -25,40 +25,16 @@ import org.tracegas.report.Campaign;
  */
 class CampaignPlaceTest {
 
-    private static final String PLAN = """
-            report-id = R-2026-044
-            client = Lakeside Brick Works
-            %s
-            first-day = 2026-05-04
-            last-day = 2026-05-04
-            issued = 2026-05-06T00:00:00Z
-            standard-temperature = 273.15
-            standard-pressure = 101.3
-            reference-o2 = 11
-            o2-guard = 20
-            o2-file = o2.csv
-            o2-channel = O2
-            o2-uncertainty = 0.2
-            water = H2O
-            cell-temperature = 313.15
-            cell-pressure = 100.9
-            reference-uncertainty = 0.02
-            path-uncertainty = 0.02
-            temperature-uncertainty = 1
-            pressure-uncertainty = 0.5
-            periods = 30 min
-
-            [compound]
-            name = CO
-            molar-mass = 28.010
-            """;
+    /** The plan's own plant and source lines, which each test replaces. */
+    private static final String PLACE = "plant = Kiln 5\nsource = Kiln 5 stack\n";
 
     @TempDir
     Path folder;
 
     private ReportPlan plan(String placeLines) throws Exception {
-        return ReportPlan.read(Files.writeString(folder.resolve("lab-report.plan"), PLAN.formatted(placeLines),
-                StandardCharsets.UTF_8));
+        assertTrue(ReportPlanTest.PLAN.contains(PLACE));
+        return ReportPlan.read(Files.writeString(folder.resolve("lab-report.plan"), ReportPlanTest.PLAN.replace(PLACE,
+                placeLines.isEmpty() ? "" : placeLines + "\n"), StandardCharsets.UTF_8));
     }
 
     /** A project of the brick works, at kiln 5's stack in the workspace when {@code placed}. */

@@ -35,18 +35,8 @@ final class JdbcSiteService implements SiteService {
         return transactions.run("creating site " + name, tx -> {
             Guard.roles(tx, actor);
             Client client = client(tx, clientId);
-            if (tx.queryOne("SELECT 1 FROM site WHERE client_id = ? AND name = ?", rs -> 1, clientId, name)
-                    .isPresent()) {
-                throw new StoreException("client '" + client.getName() + "' has a site named '" + name
-                        + "' already; choose another name");
-            }
-            String id = UUID.randomUUID().toString();
-            tx.update("INSERT INTO site (id, client_id, name, description, row_version) VALUES (?, ?, ?, ?, 0)", id,
-                    clientId, name, description);
-            tx.wrote(DataKind.SITE, id);
-            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "site", id).newValue(
-                    AuditValues.canonical(Map.of("client", clientId, "name", name, "description", description)))
-                    .build());
+            String id = insertNamed(tx, actor, DataKind.SITE, "client_id", clientId, "client '" + client.getName()
+                    + "'", name, description);
             Site site = WorkspaceFactory.eINSTANCE.createSite();
             site.setId(id);
             site.setName(name);
@@ -74,18 +64,8 @@ final class JdbcSiteService implements SiteService {
                                 rs.getLong("client_row_version")).getSites().add(read);
                         return read;
                     }, siteId).orElseThrow(() -> new NoSuchObjectException("site", siteId));
-            if (tx.queryOne("SELECT 1 FROM emission_source WHERE site_id = ? AND name = ?", rs -> 1, siteId, name)
-                    .isPresent()) {
-                throw new StoreException("site '" + site.getName() + "' has an emission source named '" + name
-                        + "' already; choose another name");
-            }
-            String id = UUID.randomUUID().toString();
-            tx.update("INSERT INTO emission_source (id, site_id, name, description, row_version)"
-                    + " VALUES (?, ?, ?, ?, 0)", id, siteId, name, description);
-            tx.wrote(DataKind.EMISSION_SOURCE, id);
-            tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "emission-source", id).newValue(
-                    AuditValues.canonical(Map.of("site", siteId, "name", name, "description", description)))
-                    .build());
+            String id = insertNamed(tx, actor, DataKind.EMISSION_SOURCE, "site_id", siteId, "site '"
+                    + site.getName() + "'", name, description);
             EmissionSource source = WorkspaceFactory.eINSTANCE.createEmissionSource();
             source.setId(id);
             source.setName(name);
@@ -137,6 +117,31 @@ final class JdbcSiteService implements SiteService {
             tx.audit(entry.newValue(AuditValues.canonical(Map.of("source", sourceId))).build());
             return ModelRows.project(tx, projectId);
         });
+    }
+
+    /**
+     * Inserts a named row under its owner, with its audit record; a name the owner has already is refused.
+     *
+     * @param ownerColumn the row's column naming its owner, e.g. {@code client_id}
+     * @param ownerWords  the owner as a message names it, e.g. "client 'Fellgate'"
+     * @return the new row's id
+     */
+    private static String insertNamed(Tx tx, Session actor, DataKind kind, String ownerColumn, String owner,
+            String ownerWords, String name, String description) throws SQLException {
+        String what = kind.label().replace('-', ' ');
+        if (tx.queryOne("SELECT 1 FROM " + kind.table() + " WHERE " + ownerColumn + " = ? AND name = ?", rs -> 1,
+                owner, name).isPresent()) {
+            throw new StoreException(ownerWords + " has a " + what + " named '" + name + "' already; choose another"
+                    + " name");
+        }
+        String id = UUID.randomUUID().toString();
+        tx.update("INSERT INTO " + kind.table() + " (id, " + ownerColumn + ", name, description, row_version)"
+                + " VALUES (?, ?, ?, ?, 0)", id, owner, name, description);
+        tx.wrote(kind, id);
+        tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, kind.label(), id).newValue(
+                AuditValues.canonical(Map.of(ownerColumn.substring(0, ownerColumn.length() - "_id".length()), owner,
+                        "name", name, "description", description))).build());
+        return id;
     }
 
     private static Client client(Tx tx, String clientId) throws SQLException {
