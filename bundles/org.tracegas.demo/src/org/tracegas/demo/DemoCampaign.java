@@ -5,6 +5,7 @@ import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Set;
 
@@ -19,9 +20,12 @@ import org.tracegas.method.LibrarySynthesis;
 import org.tracegas.method.MethodDefinition;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.ContentVersion;
+import org.tracegas.model.EmissionSource;
 import org.tracegas.model.Project;
 import org.tracegas.model.Role;
+import org.tracegas.model.Site;
 import org.tracegas.pipeline.ContainerContents;
+import org.tracegas.pipeline.ContainerInstrument;
 import org.tracegas.pipeline.ProjectQuantification;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.qa.campaign.QaEvaluation;
@@ -118,6 +122,10 @@ public final class DemoCampaign {
             Session analyst = DemoStaff.ensure(store);
             Project project = store.projects().findByCode(analyst, DemoScenario.PROJECT_CODE)
                     .orElseGet(() -> DemoStaff.createProject(store, analyst));
+            if (project.getSource() == null) {
+                // a new project, or one of a workspace made before sites were kept
+                DemoStaff.placeProject(store, analyst, project);
+            }
             MethodDefinition.Recorded recorded = definition.record(store, analyst);
             ContentVersion methodVersion = recorded.methodVersion();
             MinuteSeries series = MinuteSeries.of(store.projects().measurements(analyst, project.getId()),
@@ -139,6 +147,11 @@ public final class DemoCampaign {
             }
             List<CheckOutcome> checks = new QaEvaluation(store, analyst, project.getId(), SOFTWARE)
                     .run(methodVersion.getId(), recorded.method(), qaPlan, qa).checks();
+            // every measurement of the day came from the demo's containers: they name the analyzer that made them
+            List<Path> containers = new ArrayList<>(DemoCampaignFiles.stackFiles(raw));
+            containers.add(DemoCampaignFiles.qaFile(raw));
+            ContainerInstrument.record(store, analyst, project.getId(), ContainerInstrument.describe(containers,
+                    DemoScenario.INSTRUMENT, DemoScenario.INSTRUMENT_SERIAL));
             CampaignReport report = new CampaignReport(store, analyst, project.getId(), SOFTWARE);
             ReportContent content = report.content(methodVersion, recorded.method(), reportPlan);
             String hash = content.contentHash();
@@ -204,6 +217,19 @@ public final class DemoCampaign {
             Session reviewer = store.users().logIn(REVIEWER, DEMO_PASSWORD);
             store.projects().grant(analyst, project.getId(), reviewer.userId(), AccessLevel.READ);
             return project;
+        }
+
+        /** The project at the Tarnbeck line 2 stack, the site and source made where the client has none. */
+        static void placeProject(WorkspaceStore store, Session analyst, Project project) {
+            String clientId = project.getClient().getId();
+            Site plant = store.sites().sites(analyst, clientId).stream()
+                    .filter(s -> s.getName().equals(DemoScenario.PLANT)).findFirst()
+                    .orElseGet(() -> store.sites().createSite(analyst, clientId, DemoScenario.PLANT,
+                            DemoScenario.PLANT_DESCRIPTION));
+            EmissionSource stack = plant.getSources().stream().filter(e -> e.getName().equals(DemoScenario.SOURCE))
+                    .findFirst().orElseGet(() -> store.sites().createSource(analyst, plant.getId(),
+                            DemoScenario.SOURCE, DemoScenario.SOURCE_DESCRIPTION));
+            store.sites().setSource(analyst, project.getId(), stack.getId());
         }
     }
 }

@@ -209,8 +209,6 @@ public final class DemoMethod {
         return """
                 report-id = FRR-2026-031
                 client = %s
-                plant = %s
-                source = %s
                 first-day = 2026-03-17
                 last-day = 2026-03-17
                 issued = 2026-03-19T00:00:00Z
@@ -260,7 +258,7 @@ public final class DemoMethod {
                 [compound]
                 name = CH4
                 molar-mass = 16.043
-                """.formatted(DemoScenario.CLIENT, DemoScenario.PLANT, DemoScenario.SOURCE, o2File,
+                """.formatted(DemoScenario.CLIENT, o2File,
                 number(DemoScenario.CELL_TEMPERATURE), number(DemoScenario.CELL_PRESSURE), qaPlan);
     }
 

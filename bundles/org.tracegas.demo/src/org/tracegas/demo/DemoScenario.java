@@ -11,8 +11,18 @@ import java.util.List;
 public final class DemoScenario {
 
     public static final String CLIENT = "Fellgate Resource Recovery Ltd";
+    /** The client's site, as the workspace keeps it and the report names it. */
     public static final String PLANT = "Tarnbeck Energy Recovery Facility";
+    public static final String PLANT_DESCRIPTION = "energy-from-waste plant, two incineration lines";
+    /** The emission source at the site that the campaign measures. */
     public static final String SOURCE = "Line 2 stack, sampling port B";
+    public static final String SOURCE_DESCRIPTION = "line 2 flue gas after the bag filter, port B of the stack";
+    /**
+     * The lab's name and serial number of its invented hot extractive FTIR; the acquisitions' containers carry its
+     * figures (laser, path difference, cell path), not who it is.
+     */
+    public static final String INSTRUMENT = "Mobile FTIR 1";
+    public static final String INSTRUMENT_SERIAL = "TGW-DEMO-0001";
     public static final String PROJECT_CODE = "FRR-TARNBECK-L2";
     public static final String PROJECT_NAME = "Tarnbeck line 2, emissions survey day 1";
     public static final Instant DAY_START = Instant.parse("2026-03-17T00:00:00Z");

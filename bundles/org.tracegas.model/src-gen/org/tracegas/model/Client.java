@@ -20,6 +20,7 @@ import org.eclipse.emf.common.util.EList;
  *   <li>{@link org.tracegas.model.Client#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.Client#getContact <em>Contact</em>}</li>
  *   <li>{@link org.tracegas.model.Client#getProjects <em>Projects</em>}</li>
+ *   <li>{@link org.tracegas.model.Client#getSites <em>Sites</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getClient()
@@ -90,5 +91,22 @@ public interface Client extends StoredObject {
 	 * @generated
 	 */
 	EList<Project> getProjects();
+
+	/**
+	 * Returns the value of the '<em><b>Sites</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.Site}.
+	 * It is bidirectional and its opposite is '{@link org.tracegas.model.Site#getClient <em>Client</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The client's sites (plants), by name as the store reads them.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Sites</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getClient_Sites()
+	 * @see org.tracegas.model.Site#getClient
+	 * @model opposite="client" containment="true"
+	 * @generated
+	 */
+	EList<Site> getSites();
 
 } // Client

@@ -35,6 +35,7 @@ import org.tracegas.spectrum.Spectrum;
  *   <li>{@link org.tracegas.model.Measurement#getSourceFile <em>Source File</em>}</li>
  *   <li>{@link org.tracegas.model.Measurement#getSourceSha256 <em>Source Sha256</em>}</li>
  *   <li>{@link org.tracegas.model.Measurement#getSourceRecord <em>Source Record</em>}</li>
+ *   <li>{@link org.tracegas.model.Measurement#getInstrument <em>Instrument</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getMeasurement()
@@ -417,5 +418,30 @@ public interface Measurement extends StoredObject {
 	 * @generated
 	 */
 	void setSourceRecord(int value);
+
+	/**
+	 * Returns the value of the '<em><b>Instrument</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The instrument that made the acquisition; none for a measurement recorded without one (workspaces made before instruments were kept have none).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Instrument</em>' reference.
+	 * @see #setInstrument(Instrument)
+	 * @see org.tracegas.model.WorkspacePackage#getMeasurement_Instrument()
+	 * @model
+	 * @generated
+	 */
+	Instrument getInstrument();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.Measurement#getInstrument <em>Instrument</em>}' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Instrument</em>' reference.
+	 * @see #getInstrument()
+	 * @generated
+	 */
+	void setInstrument(Instrument value);
 
 } // Measurement

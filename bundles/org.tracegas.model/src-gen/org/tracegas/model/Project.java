@@ -25,6 +25,7 @@ import org.eclipse.emf.common.util.EList;
  *   <li>{@link org.tracegas.model.Project#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getEnd <em>End</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getMeasurements <em>Measurements</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getSource <em>Source</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getProject()
@@ -169,5 +170,30 @@ public interface Project extends StoredObject {
 	 * @generated
 	 */
 	EList<Measurement> getMeasurements();
+
+	/**
+	 * Returns the value of the '<em><b>Source</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The emission source the campaign measures; none for a project recorded without one (workspaces made before sites were kept have none).
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Source</em>' reference.
+	 * @see #setSource(EmissionSource)
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Source()
+	 * @model
+	 * @generated
+	 */
+	EmissionSource getSource();
+
+	/**
+	 * Sets the value of the '{@link org.tracegas.model.Project#getSource <em>Source</em>}' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @param value the new value of the '<em>Source</em>' reference.
+	 * @see #getSource()
+	 * @generated
+	 */
+	void setSource(EmissionSource value);
 
 } // Project

@@ -23,6 +23,7 @@ import org.eclipse.emf.ecore.EObject;
  *   <li>{@link org.tracegas.model.Workspace#getClients <em>Clients</em>}</li>
  *   <li>{@link org.tracegas.model.Workspace#getLibraries <em>Libraries</em>}</li>
  *   <li>{@link org.tracegas.model.Workspace#getMethods <em>Methods</em>}</li>
+ *   <li>{@link org.tracegas.model.Workspace#getInstruments <em>Instruments</em>}</li>
  * </ul>
  *
  * @see org.tracegas.model.WorkspacePackage#getWorkspace()
@@ -87,5 +88,20 @@ public interface Workspace extends EObject {
 	 * @generated
 	 */
 	EList<AnalysisMethod> getMethods();
+
+	/**
+	 * Returns the value of the '<em><b>Instruments</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.Instrument}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The laboratory's instruments: an analyzer serves the campaigns of several clients.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Instruments</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getWorkspace_Instruments()
+	 * @model containment="true"
+	 * @generated
+	 */
+	EList<Instrument> getInstruments();
 
 } // Workspace

@@ -49,6 +49,24 @@ public interface WorkspaceFactory extends EFactory {
 	Project createProject();
 
 	/**
+	 * Returns a new object of class '<em>Site</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Site</em>'.
+	 * @generated
+	 */
+	Site createSite();
+
+	/**
+	 * Returns a new object of class '<em>Emission Source</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Emission Source</em>'.
+	 * @generated
+	 */
+	EmissionSource createEmissionSource();
+
+	/**
 	 * Returns a new object of class '<em>Measurement</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -56,6 +74,15 @@ public interface WorkspaceFactory extends EFactory {
 	 * @generated
 	 */
 	Measurement createMeasurement();
+
+	/**
+	 * Returns a new object of class '<em>Instrument</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Instrument</em>'.
+	 * @generated
+	 */
+	Instrument createInstrument();
 
 	/**
 	 * Returns a new object of class '<em>Content Version</em>'.

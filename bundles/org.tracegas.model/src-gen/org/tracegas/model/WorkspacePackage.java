@@ -154,13 +154,22 @@ public interface WorkspacePackage extends EPackage {
 	int WORKSPACE__METHODS = 3;
 
 	/**
+	 * The feature id for the '<em><b>Instruments</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORKSPACE__INSTRUMENTS = 4;
+
+	/**
 	 * The number of structural features of the '<em>Workspace</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int WORKSPACE_FEATURE_COUNT = 4;
+	int WORKSPACE_FEATURE_COUNT = 5;
 
 	/**
 	 * The number of operations of the '<em>Workspace</em>' class.
@@ -227,13 +236,22 @@ public interface WorkspacePackage extends EPackage {
 	int CLIENT__PROJECTS = STORED_OBJECT_FEATURE_COUNT + 2;
 
 	/**
+	 * The feature id for the '<em><b>Sites</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int CLIENT__SITES = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
 	 * The number of structural features of the '<em>Client</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int CLIENT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 3;
+	int CLIENT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 4;
 
 	/**
 	 * The number of operations of the '<em>Client</em>' class.
@@ -327,13 +345,22 @@ public interface WorkspacePackage extends EPackage {
 	int PROJECT__MEASUREMENTS = STORED_OBJECT_FEATURE_COUNT + 5;
 
 	/**
+	 * The feature id for the '<em><b>Source</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__SOURCE = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
 	 * The number of structural features of the '<em>Project</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 6;
+	int PROJECT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 7;
 
 	/**
 	 * The number of operations of the '<em>Project</em>' class.
@@ -345,6 +372,161 @@ public interface WorkspacePackage extends EPackage {
 	int PROJECT_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.SiteImpl <em>Site</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.SiteImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSite()
+	 * @generated
+	 */
+	int SITE = 4;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE__NAME = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Description</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE__DESCRIPTION = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Client</b></em>' container reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE__CLIENT = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Sources</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE__SOURCES = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The number of structural features of the '<em>Site</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The number of operations of the '<em>Site</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int SITE_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.EmissionSourceImpl <em>Emission Source</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.EmissionSourceImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getEmissionSource()
+	 * @generated
+	 */
+	int EMISSION_SOURCE = 5;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EMISSION_SOURCE__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EMISSION_SOURCE__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EMISSION_SOURCE__NAME = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Description</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EMISSION_SOURCE__DESCRIPTION = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Site</b></em>' container reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EMISSION_SOURCE__SITE = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The number of structural features of the '<em>Emission Source</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EMISSION_SOURCE_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The number of operations of the '<em>Emission Source</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int EMISSION_SOURCE_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.impl.MeasurementImpl <em>Measurement</em>}' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -352,7 +534,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurement()
 	 * @generated
 	 */
-	int MEASUREMENT = 4;
+	int MEASUREMENT = 6;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -499,13 +681,22 @@ public interface WorkspacePackage extends EPackage {
 	int MEASUREMENT__SOURCE_RECORD = STORED_OBJECT_FEATURE_COUNT + 13;
 
 	/**
+	 * The feature id for the '<em><b>Instrument</b></em>' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int MEASUREMENT__INSTRUMENT = STORED_OBJECT_FEATURE_COUNT + 14;
+
+	/**
 	 * The number of structural features of the '<em>Measurement</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int MEASUREMENT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 14;
+	int MEASUREMENT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 15;
 
 	/**
 	 * The number of operations of the '<em>Measurement</em>' class.
@@ -517,6 +708,106 @@ public interface WorkspacePackage extends EPackage {
 	int MEASUREMENT_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.InstrumentImpl <em>Instrument</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.InstrumentImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstrument()
+	 * @generated
+	 */
+	int INSTRUMENT = 7;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int INSTRUMENT__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int INSTRUMENT__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int INSTRUMENT__NAME = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Serial Number</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int INSTRUMENT__SERIAL_NUMBER = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Laser Wavenumber</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int INSTRUMENT__LASER_WAVENUMBER = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Max Path Difference</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int INSTRUMENT__MAX_PATH_DIFFERENCE = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Field Of View</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int INSTRUMENT__FIELD_OF_VIEW = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Cell Path Length</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int INSTRUMENT__CELL_PATH_LENGTH = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The number of structural features of the '<em>Instrument</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int INSTRUMENT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The number of operations of the '<em>Instrument</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int INSTRUMENT_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.impl.ContentVersionImpl <em>Content Version</em>}' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -524,7 +815,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getContentVersion()
 	 * @generated
 	 */
-	int CONTENT_VERSION = 5;
+	int CONTENT_VERSION = 8;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -660,7 +951,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceLibrary()
 	 * @generated
 	 */
-	int REFERENCE_LIBRARY = 6;
+	int REFERENCE_LIBRARY = 9;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -733,7 +1024,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceSpectrum()
 	 * @generated
 	 */
-	int REFERENCE_SPECTRUM = 7;
+	int REFERENCE_SPECTRUM = 10;
 
 	/**
 	 * The feature id for the '<em><b>Compound</b></em>' attribute.
@@ -851,7 +1142,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAnalysisMethod()
 	 * @generated
 	 */
-	int ANALYSIS_METHOD = 8;
+	int ANALYSIS_METHOD = 11;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -924,7 +1215,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMethodVersion()
 	 * @generated
 	 */
-	int METHOD_VERSION = 9;
+	int METHOD_VERSION = 12;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1168,7 +1459,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAnalysisRegion()
 	 * @generated
 	 */
-	int ANALYSIS_REGION = 10;
+	int ANALYSIS_REGION = 13;
 
 	/**
 	 * The feature id for the '<em><b>Compound</b></em>' attribute.
@@ -1250,7 +1541,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResult()
 	 * @generated
 	 */
-	int RESULT = 11;
+	int RESULT = 14;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1404,7 +1695,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getQaOutcome()
 	 * @generated
 	 */
-	int QA_OUTCOME = 12;
+	int QA_OUTCOME = 15;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1558,7 +1849,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getUser()
 	 * @generated
 	 */
-	int USER = 13;
+	int USER = 16;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1640,7 +1931,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAccessLevel()
 	 * @generated
 	 */
-	int ACCESS_LEVEL = 14;
+	int ACCESS_LEVEL = 17;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.MeasurementKind <em>Measurement Kind</em>}' enum.
@@ -1650,7 +1941,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurementKind()
 	 * @generated
 	 */
-	int MEASUREMENT_KIND = 15;
+	int MEASUREMENT_KIND = 18;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.SpectralContent <em>Spectral Content</em>}' enum.
@@ -1660,7 +1951,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectralContent()
 	 * @generated
 	 */
-	int SPECTRAL_CONTENT = 16;
+	int SPECTRAL_CONTENT = 19;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.VersionKind <em>Version Kind</em>}' enum.
@@ -1670,7 +1961,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getVersionKind()
 	 * @generated
 	 */
-	int VERSION_KIND = 17;
+	int VERSION_KIND = 20;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ReferenceOrigin <em>Reference Origin</em>}' enum.
@@ -1680,7 +1971,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceOrigin()
 	 * @generated
 	 */
-	int REFERENCE_ORIGIN = 18;
+	int REFERENCE_ORIGIN = 21;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
@@ -1690,7 +1981,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 19;
+	int RESULT_FLAG = 22;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -1700,7 +1991,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 20;
+	int ROLE = 23;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -1710,7 +2001,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 21;
+	int INSTANT = 24;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -1720,7 +2011,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 22;
+	int SPECTRUM = 25;
 
 	/**
 	 * The meta object id for the '<em>Provenance</em>' data type.
@@ -1730,7 +2021,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
 	 * @generated
 	 */
-	int PROVENANCE = 23;
+	int PROVENANCE = 26;
 
 	/**
 	 * The meta object id for the '<em>Result Conditions</em>' data type.
@@ -1740,7 +2031,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
 	 * @generated
 	 */
-	int RESULT_CONDITIONS = 24;
+	int RESULT_CONDITIONS = 27;
 
 
 	/**
@@ -1830,6 +2121,17 @@ public interface WorkspacePackage extends EPackage {
 	EReference getWorkspace_Methods();
 
 	/**
+	 * Returns the meta object for the containment reference list '{@link org.tracegas.model.Workspace#getInstruments <em>Instruments</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Instruments</em>'.
+	 * @see org.tracegas.model.Workspace#getInstruments()
+	 * @see #getWorkspace()
+	 * @generated
+	 */
+	EReference getWorkspace_Instruments();
+
+	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.Client <em>Client</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1871,6 +2173,17 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EReference getClient_Projects();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link org.tracegas.model.Client#getSites <em>Sites</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Sites</em>'.
+	 * @see org.tracegas.model.Client#getSites()
+	 * @see #getClient()
+	 * @generated
+	 */
+	EReference getClient_Sites();
 
 	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.Project <em>Project</em>}'.
@@ -1947,6 +2260,114 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EReference getProject_Measurements();
+
+	/**
+	 * Returns the meta object for the reference '{@link org.tracegas.model.Project#getSource <em>Source</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Source</em>'.
+	 * @see org.tracegas.model.Project#getSource()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_Source();
+
+	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.Site <em>Site</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Site</em>'.
+	 * @see org.tracegas.model.Site
+	 * @generated
+	 */
+	EClass getSite();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Site#getName <em>Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Name</em>'.
+	 * @see org.tracegas.model.Site#getName()
+	 * @see #getSite()
+	 * @generated
+	 */
+	EAttribute getSite_Name();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Site#getDescription <em>Description</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Description</em>'.
+	 * @see org.tracegas.model.Site#getDescription()
+	 * @see #getSite()
+	 * @generated
+	 */
+	EAttribute getSite_Description();
+
+	/**
+	 * Returns the meta object for the container reference '{@link org.tracegas.model.Site#getClient <em>Client</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the container reference '<em>Client</em>'.
+	 * @see org.tracegas.model.Site#getClient()
+	 * @see #getSite()
+	 * @generated
+	 */
+	EReference getSite_Client();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link org.tracegas.model.Site#getSources <em>Sources</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Sources</em>'.
+	 * @see org.tracegas.model.Site#getSources()
+	 * @see #getSite()
+	 * @generated
+	 */
+	EReference getSite_Sources();
+
+	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.EmissionSource <em>Emission Source</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Emission Source</em>'.
+	 * @see org.tracegas.model.EmissionSource
+	 * @generated
+	 */
+	EClass getEmissionSource();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.EmissionSource#getName <em>Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Name</em>'.
+	 * @see org.tracegas.model.EmissionSource#getName()
+	 * @see #getEmissionSource()
+	 * @generated
+	 */
+	EAttribute getEmissionSource_Name();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.EmissionSource#getDescription <em>Description</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Description</em>'.
+	 * @see org.tracegas.model.EmissionSource#getDescription()
+	 * @see #getEmissionSource()
+	 * @generated
+	 */
+	EAttribute getEmissionSource_Description();
+
+	/**
+	 * Returns the meta object for the container reference '{@link org.tracegas.model.EmissionSource#getSite <em>Site</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the container reference '<em>Site</em>'.
+	 * @see org.tracegas.model.EmissionSource#getSite()
+	 * @see #getEmissionSource()
+	 * @generated
+	 */
+	EReference getEmissionSource_Site();
 
 	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.Measurement <em>Measurement</em>}'.
@@ -2111,6 +2532,93 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EAttribute getMeasurement_SourceRecord();
+
+	/**
+	 * Returns the meta object for the reference '{@link org.tracegas.model.Measurement#getInstrument <em>Instrument</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the reference '<em>Instrument</em>'.
+	 * @see org.tracegas.model.Measurement#getInstrument()
+	 * @see #getMeasurement()
+	 * @generated
+	 */
+	EReference getMeasurement_Instrument();
+
+	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.Instrument <em>Instrument</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Instrument</em>'.
+	 * @see org.tracegas.model.Instrument
+	 * @generated
+	 */
+	EClass getInstrument();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Instrument#getName <em>Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Name</em>'.
+	 * @see org.tracegas.model.Instrument#getName()
+	 * @see #getInstrument()
+	 * @generated
+	 */
+	EAttribute getInstrument_Name();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Instrument#getSerialNumber <em>Serial Number</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Serial Number</em>'.
+	 * @see org.tracegas.model.Instrument#getSerialNumber()
+	 * @see #getInstrument()
+	 * @generated
+	 */
+	EAttribute getInstrument_SerialNumber();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Instrument#getLaserWavenumber <em>Laser Wavenumber</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Laser Wavenumber</em>'.
+	 * @see org.tracegas.model.Instrument#getLaserWavenumber()
+	 * @see #getInstrument()
+	 * @generated
+	 */
+	EAttribute getInstrument_LaserWavenumber();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Instrument#getMaxPathDifference <em>Max Path Difference</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Max Path Difference</em>'.
+	 * @see org.tracegas.model.Instrument#getMaxPathDifference()
+	 * @see #getInstrument()
+	 * @generated
+	 */
+	EAttribute getInstrument_MaxPathDifference();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Instrument#getFieldOfView <em>Field Of View</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Field Of View</em>'.
+	 * @see org.tracegas.model.Instrument#getFieldOfView()
+	 * @see #getInstrument()
+	 * @generated
+	 */
+	EAttribute getInstrument_FieldOfView();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Instrument#getCellPathLength <em>Cell Path Length</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Cell Path Length</em>'.
+	 * @see org.tracegas.model.Instrument#getCellPathLength()
+	 * @see #getInstrument()
+	 * @generated
+	 */
+	EAttribute getInstrument_CellPathLength();
 
 	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.ContentVersion <em>Content Version</em>}'.
@@ -3212,6 +3720,14 @@ public interface WorkspacePackage extends EPackage {
 		EReference WORKSPACE__METHODS = eINSTANCE.getWorkspace_Methods();
 
 		/**
+		 * The meta object literal for the '<em><b>Instruments</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference WORKSPACE__INSTRUMENTS = eINSTANCE.getWorkspace_Instruments();
+
+		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.ClientImpl <em>Client</em>}' class.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -3244,6 +3760,14 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EReference CLIENT__PROJECTS = eINSTANCE.getClient_Projects();
+
+		/**
+		 * The meta object literal for the '<em><b>Sites</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference CLIENT__SITES = eINSTANCE.getClient_Sites();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.ProjectImpl <em>Project</em>}' class.
@@ -3302,6 +3826,90 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EReference PROJECT__MEASUREMENTS = eINSTANCE.getProject_Measurements();
+
+		/**
+		 * The meta object literal for the '<em><b>Source</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__SOURCE = eINSTANCE.getProject_Source();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.SiteImpl <em>Site</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.SiteImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSite()
+		 * @generated
+		 */
+		EClass SITE = eINSTANCE.getSite();
+
+		/**
+		 * The meta object literal for the '<em><b>Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SITE__NAME = eINSTANCE.getSite_Name();
+
+		/**
+		 * The meta object literal for the '<em><b>Description</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute SITE__DESCRIPTION = eINSTANCE.getSite_Description();
+
+		/**
+		 * The meta object literal for the '<em><b>Client</b></em>' container reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference SITE__CLIENT = eINSTANCE.getSite_Client();
+
+		/**
+		 * The meta object literal for the '<em><b>Sources</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference SITE__SOURCES = eINSTANCE.getSite_Sources();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.EmissionSourceImpl <em>Emission Source</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.EmissionSourceImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getEmissionSource()
+		 * @generated
+		 */
+		EClass EMISSION_SOURCE = eINSTANCE.getEmissionSource();
+
+		/**
+		 * The meta object literal for the '<em><b>Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute EMISSION_SOURCE__NAME = eINSTANCE.getEmissionSource_Name();
+
+		/**
+		 * The meta object literal for the '<em><b>Description</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute EMISSION_SOURCE__DESCRIPTION = eINSTANCE.getEmissionSource_Description();
+
+		/**
+		 * The meta object literal for the '<em><b>Site</b></em>' container reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference EMISSION_SOURCE__SITE = eINSTANCE.getEmissionSource_Site();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.MeasurementImpl <em>Measurement</em>}' class.
@@ -3424,6 +4032,72 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute MEASUREMENT__SOURCE_RECORD = eINSTANCE.getMeasurement_SourceRecord();
+
+		/**
+		 * The meta object literal for the '<em><b>Instrument</b></em>' reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference MEASUREMENT__INSTRUMENT = eINSTANCE.getMeasurement_Instrument();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.InstrumentImpl <em>Instrument</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.InstrumentImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstrument()
+		 * @generated
+		 */
+		EClass INSTRUMENT = eINSTANCE.getInstrument();
+
+		/**
+		 * The meta object literal for the '<em><b>Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute INSTRUMENT__NAME = eINSTANCE.getInstrument_Name();
+
+		/**
+		 * The meta object literal for the '<em><b>Serial Number</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute INSTRUMENT__SERIAL_NUMBER = eINSTANCE.getInstrument_SerialNumber();
+
+		/**
+		 * The meta object literal for the '<em><b>Laser Wavenumber</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute INSTRUMENT__LASER_WAVENUMBER = eINSTANCE.getInstrument_LaserWavenumber();
+
+		/**
+		 * The meta object literal for the '<em><b>Max Path Difference</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute INSTRUMENT__MAX_PATH_DIFFERENCE = eINSTANCE.getInstrument_MaxPathDifference();
+
+		/**
+		 * The meta object literal for the '<em><b>Field Of View</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute INSTRUMENT__FIELD_OF_VIEW = eINSTANCE.getInstrument_FieldOfView();
+
+		/**
+		 * The meta object literal for the '<em><b>Cell Path Length</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute INSTRUMENT__CELL_PATH_LENGTH = eINSTANCE.getInstrument_CellPathLength();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.ContentVersionImpl <em>Content Version</em>}' class.

@@ -26,6 +26,23 @@ class ReportContentTest {
     }
 
     @Test
+    void theInstrumentsAreSignedContentWhereStatedAndAContentWithoutThemKeepsItsHash() {
+        ReportContent plain = CampaignFixture.unsigned().build();
+        assertEquals(plain.contentHash(), plain.withInstruments(List.of()).contentHash());
+        ReportContent stated = plain.withInstruments(List.of("Bench analyzer, serial TB-0007: reference laser"
+                + " 15798 cm-1, maximum path difference 0.5 cm, field of view not recorded, cell path length 6.4 m"));
+        assertNotEquals(plain.contentHash(), stated.contentHash(), "the instrument is part of what is signed");
+        assertEquals(1, stated.instruments().size());
+        assertEquals(stated.instruments(), stated.withSignature(CampaignFixture.signature("B. Second", Instant.EPOCH,
+                SignatureMeaning.REVIEWED, stated.contentHash())).instruments());
+        assertThrows(IllegalArgumentException.class, () -> plain.withInstruments(List.of(" ")));
+        Campaign unplaced = new Campaign("R-1", "Client", null, null, plain.campaign().firstDay(),
+                plain.campaign().lastDay(), plain.campaign().issued(), plain.campaign().reportingBasis());
+        assertTrue(assertThrows(IllegalArgumentException.class, () -> ReportContent.builder(unplaced).build())
+                .getMessage().contains("plant"));
+    }
+
+    @Test
     void signaturesOnEarlierContentAreKeptBesideTheCurrentOne() {
         ReportContent reviewed = CampaignFixture.reviewed();
         ReportContent twice = reviewed.withSignature(CampaignFixture.signature("B. Second", Instant.EPOCH,

@@ -10,8 +10,9 @@ import org.tracegas.report.internal.Check;
  *
  * @param reportId       identifier of the report
  * @param client         client the measurements were made for
- * @param plant          plant (site)
- * @param source         emission source, for example a stack
+ * @param plant          plant (site); null while it is left to the workspace, where the project names its
+ *                       emission source (a report's content needs it)
+ * @param source         emission source, for example a stack; null as the plant is
  * @param firstDay       first measurement day
  * @param lastDay        last measurement day
  * @param issued         when the report content was issued; it dates the PDF, so that the same content gives
@@ -24,8 +25,10 @@ public record Campaign(String reportId, String client, String plant, String sour
     public Campaign {
         Check.text("reportId", reportId);
         Check.text("client", client);
-        Check.text("plant", plant);
-        Check.text("source", source);
+        if (plant != null || source != null) {
+            Check.text("plant", plant);
+            Check.text("source", source);
+        }
         Check.notNull("firstDay", firstDay);
         Check.notNull("lastDay", lastDay);
         if (lastDay.isBefore(firstDay)) {
@@ -33,5 +36,16 @@ public record Campaign(String reportId, String client, String plant, String sour
         }
         Check.notNull("issued", issued);
         Check.text("reportingBasis", reportingBasis);
+    }
+
+    /** Whether the plant and the source are named (else they are left to the workspace). */
+    public boolean placed() {
+        return plant != null;
+    }
+
+    /** The same campaign at a plant and source. */
+    public Campaign at(String plant, String source) {
+        return new Campaign(reportId, client, Check.text("plant", plant), Check.text("source", source), firstDay,
+                lastDay, issued, reportingBasis);
     }
 }

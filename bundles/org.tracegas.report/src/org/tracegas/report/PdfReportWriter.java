@@ -154,6 +154,9 @@ public final class PdfReportWriter {
         rows.add(new String[] {"Client", c.client()});
         rows.add(new String[] {"Plant", c.plant()});
         rows.add(new String[] {"Emission source", c.source()});
+        for (String instrument : content.instruments()) {
+            rows.add(new String[] {"Instrument", instrument});
+        }
         rows.add(new String[] {"Measurement dates", c.firstDay() + " to " + c.lastDay()});
         rows.add(new String[] {"Reporting basis", c.reportingBasis()});
         rows.add(new String[] {"Issued", TIME.format(c.issued())});

@@ -29,6 +29,8 @@ public final class ReportContent {
     private final List<Plot> timeSeries;
     private final List<SpectrumFit> spectra;
     private final List<String> cautions;
+    /** The instruments that made the reported measurements, one line each; none where the workspace names none. */
+    private final List<String> instruments;
     private final List<Signature> signatures;
     private final AuditAnchor auditAnchor;
     private final byte[] canonical;
@@ -36,6 +38,9 @@ public final class ReportContent {
 
     private ReportContent(Builder b) {
         campaign = Check.notNull("campaign", b.campaign);
+        if (!campaign.placed()) {
+            throw new IllegalArgumentException("campaign: the plant and the emission source must be named");
+        }
         methods = Check.list("methods", b.methods);
         libraries = Check.list("libraries", b.libraries);
         qa = Check.list("qa", b.qa);
@@ -47,6 +52,7 @@ public final class ReportContent {
         timeSeries = Check.list("timeSeries", b.timeSeries);
         spectra = Check.list("spectra", b.spectra);
         cautions = Check.list("cautions", b.cautions);
+        instruments = Check.list("instruments", b.instruments);
         signatures = Check.list("signatures", b.signatures);
         auditAnchor = b.auditAnchor;
         ContentDigest d = digest();
@@ -114,6 +120,11 @@ public final class ReportContent {
         return cautions;
     }
 
+    /** The instruments that made the reported measurements, one line each (name, serial and figures). */
+    public List<String> instruments() {
+        return instruments;
+    }
+
     public List<Signature> signatures() {
         return signatures;
     }
@@ -160,6 +171,14 @@ public final class ReportContent {
         return b.build();
     }
 
+    /** The same content stating the instruments that made its measurements, one line each. */
+    public ReportContent withInstruments(List<String> lines) {
+        Builder b = toBuilder();
+        b.instruments.clear();
+        lines.forEach(b::instrument);
+        return b.build();
+    }
+
     private Builder toBuilder() {
         Builder b = new Builder(campaign);
         b.methods.addAll(methods);
@@ -173,6 +192,7 @@ public final class ReportContent {
         b.timeSeries.addAll(timeSeries);
         b.spectra.addAll(spectra);
         b.cautions.addAll(cautions);
+        b.instruments.addAll(instruments);
         b.signatures.addAll(signatures);
         b.auditAnchor = auditAnchor;
         return b;
@@ -183,6 +203,11 @@ public final class ReportContent {
         Campaign c = campaign;
         ContentDigest d = new ContentDigest().add(c.reportId()).add(c.client()).add(c.plant()).add(c.source())
                 .add(c.firstDay()).add(c.lastDay()).add(c.issued()).add(c.reportingBasis());
+        // only where stated, so that a report of measurements without a recorded instrument keeps its hash
+        if (!instruments.isEmpty()) {
+            d.add("instruments").add(instruments.size());
+            instruments.forEach(d::add);
+        }
         d.add(methods.size());
         methods.forEach(m -> d.add(m.name()).add(m.version()).add(m.hash()));
         d.add(libraries.size());
@@ -248,6 +273,7 @@ public final class ReportContent {
         private final List<Plot> timeSeries = new ArrayList<>();
         private final List<SpectrumFit> spectra = new ArrayList<>();
         private final List<String> cautions = new ArrayList<>();
+        private final List<String> instruments = new ArrayList<>();
         private final List<Signature> signatures = new ArrayList<>();
         private AuditAnchor auditAnchor;
 
@@ -312,6 +338,11 @@ public final class ReportContent {
 
         public Builder caution(String text) {
             cautions.add(Check.text("caution", text));
+            return this;
+        }
+
+        public Builder instrument(String line) {
+            instruments.add(Check.text("instrument", line));
             return this;
         }
 

@@ -58,6 +58,11 @@ abstract class TamperDetectionContract {
         TABLES.put("content_version", new String[] {"content-version", "id"});
         TABLES.put("analysis_result", new String[] {"result", "id"});
         TABLES.put("qa_check", new String[] {"qa-check", "id"});
+        TABLES.put("site", new String[] {"site", "id"});
+        TABLES.put("emission_source", new String[] {"emission-source", "id"});
+        TABLES.put("instrument", new String[] {"instrument", "id"});
+        TABLES.put("project_source", new String[] {"project-source", "project_id"});
+        TABLES.put("measurement_instrument", new String[] {"measurement-instrument", "measurement_id"});
     }
 
     /** Columns that change without a change of data (locking, storage position, log-in counter, use mark). */
@@ -103,10 +108,31 @@ abstract class TamperDetectionContract {
                 QaOutcomes.of("Noise level", true, 0.0012, "absorbance", Double.NEGATIVE_INFINITY, 0.002,
                         "RMS <= 0.002", "common practice, no source")));
         // a second client and project, so that every table holds two rows to swap values between
-        store.projects().createProject(fixture.analyst, store.projects().createClient(fixture.analyst,
-                "Second client").getId(), "WU-2", "Kiln campaign");
+        org.tracegas.model.Project second = store.projects().createProject(fixture.analyst,
+                store.projects().createClient(fixture.analyst, "Second client").getId(), "WU-2", "Kiln campaign");
+        placeAndInstrument(store, fixture.project, "Works", "Stack", "TB-0007", 6.4, m);
+        String other = store.projects().measurements(fixture.analyst, fixture.project.getId()).stream()
+                .map(org.tracegas.model.Measurement::getId).filter(id -> !id.equals(m)).findFirst().orElseThrow();
+        placeAndInstrument(store, second, "Kiln works", "Kiln stack", "TB-0008", 10.0, other);
         store.users().changeRoles(admin(), fixture.reader.userId(), 0,
                 Set.of(org.tracegas.model.Role.ANALYST, org.tracegas.model.Role.REVIEWER));
+    }
+
+    /** A site with a source the project measures, and an instrument that made a measurement of the fixture's. */
+    private void placeAndInstrument(WorkspaceStore store, org.tracegas.model.Project project, String site,
+            String source, String serial, double cellPathM, String measurementId) {
+        String siteId = store.sites().createSite(fixture.analyst, project.getClient().getId(), site, "").getId();
+        store.sites().setSource(fixture.analyst, project.getId(), store.sites().createSource(fixture.analyst, siteId,
+                source, "port " + serial).getId());
+        org.tracegas.model.Instrument i = org.tracegas.model.WorkspaceFactory.eINSTANCE.createInstrument();
+        i.setName("Analyzer");
+        i.setSerialNumber(serial);
+        i.setLaserWavenumber(15798.0);
+        i.setMaxPathDifference(cellPathM / 6.4);
+        i.setFieldOfView(cellPathM * 2);
+        i.setCellPathLength(cellPathM);
+        store.instruments().assign(fixture.analyst, fixture.project.getId(), List.of(measurementId),
+                store.instruments().record(fixture.analyst, i).getId());
     }
 
     private Session admin() {
@@ -301,7 +327,9 @@ abstract class TamperDetectionContract {
         if (other != null) {
             return other;
         }
-        return s.length() == 64 ? s.substring(0, 63) + (s.charAt(63) == '0' ? '1' : '0') : s + "~";
+        // a hash (64) or an id (36) fills its column: its last character changes instead
+        int n = s.length();
+        return n == 64 || n == 36 ? s.substring(0, n - 1) + (s.charAt(n - 1) == '0' ? '1' : '0') : s + "~";
     }
 
     private static List<Map<String, Object>> rows(Connection c, String table) throws SQLException {

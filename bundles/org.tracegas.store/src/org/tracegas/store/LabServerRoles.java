@@ -20,13 +20,15 @@ public final class LabServerRoles {
     static final List<String> TABLES = List.of("app_user", "client", "project", "project_grant", "measurement",
             "spectral_data", "versioned_item", "content_version", "analysis_result", "qa_check", "work_batch",
             "work_unit", "work_unit_measurement", "raw_file", "imported_measurement", "processing_recipe",
-            "data_binding", "audit_record", "audit_chain_head");
+            "data_binding", "audit_record", "audit_chain_head", "site", "emission_source", "instrument",
+            "project_source", "measurement_instrument");
 
     /** The columns the store's services update, per table. */
     static final List<String> UPDATABLE = List.of(
             "app_user (roles, failed_logins, locked, row_version)",
             "project (name, row_version)",
             "project_grant (access)",
+            "project_source (source_id)",
             "content_version (content, content_hash, reason, author_id, frozen, row_version)",
             "work_unit (state, claimed_by, lease_until, done_at, attempt, failure)",
             "audit_chain_head (last_seq, last_hash, last_record_id)");

@@ -13,6 +13,12 @@ public interface WorkspaceStore extends AutoCloseable {
 
     ProjectService projects();
 
+    /** A client's sites and their emission sources, and the source a project measures. */
+    SiteService sites();
+
+    /** The lab's instruments and which of them made a measurement. */
+    InstrumentService instruments();
+
     SpectrumService spectra();
 
     VersionService versions();

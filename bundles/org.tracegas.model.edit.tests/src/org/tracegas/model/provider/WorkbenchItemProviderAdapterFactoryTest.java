@@ -18,6 +18,8 @@ import org.junit.jupiter.api.Test;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.Client;
+import org.tracegas.model.EmissionSource;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
@@ -25,6 +27,7 @@ import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.ReferenceOrigin;
 import org.tracegas.model.ReferenceSpectrum;
+import org.tracegas.model.Site;
 import org.tracegas.model.WorkspaceFactory;
 
 /**
@@ -190,5 +193,58 @@ class WorkbenchItemProviderAdapterFactoryTest {
         // the values are a block of their own in the store, never read into the model: no property for them
         assertFalse(shown.containsKey("Spectrum"), shown.keySet().toString());
         assertTrue(shown.containsKey("Time (UTC)"), shown.keySet().toString());
+    }
+
+    @Test
+    void aClientShowsItsSitesAndASiteItsEmissionSources() {
+        Project p = campaign();
+        Site plant = model.createSite();
+        plant.setName("Eastfield works");
+        EmissionSource kiln = model.createEmissionSource();
+        kiln.setName("Kiln 1 stack");
+        plant.getSources().add(kiln);
+        p.getClient().getSites().add(plant);
+        p.setSource(kiln);
+
+        ITreeItemContentProvider clients = (ITreeItemContentProvider) factory.adapt(p.getClient(),
+                ITreeItemContentProvider.class);
+        assertEquals(List.of(p, plant), List.copyOf(clients.getChildren(p.getClient())));
+        ITreeItemContentProvider sites = (ITreeItemContentProvider) factory.adapt(plant, ITreeItemContentProvider.class);
+        assertEquals(List.of(kiln), List.copyOf(sites.getChildren(plant)));
+        assertEquals("Eastfield works", text(plant));
+        assertEquals("Kiln 1 stack", text(kiln));
+        // the campaign refers to its source; the source stays where its site holds it
+        assertEquals(kiln, shown(p).get("Emission source"));
+    }
+
+    @Test
+    void aMeasurementsPropertiesNameItsInstrument() {
+        Measurement m = measurement(campaign(), MeasurementKind.SAMPLE, "2026-07-14T06:31:00Z");
+        Instrument bench = model.createInstrument();
+        bench.setName("Bench FTIR 2");
+        bench.setSerialNumber("EC-0417");
+        bench.setLaserWavenumber(15798.0);
+        bench.setMaxPathDifference(1.0);
+        bench.setCellPathLength(6.4);
+        m.setInstrument(bench);
+
+        assertEquals("Bench FTIR 2  (serial EC-0417)", text(bench));
+        assertEquals("Bench FTIR 2  (serial EC-0417)", text(shown(m).get("Instrument")));
+        Map<String, Object> figures = shown(bench);
+        assertEquals(15798.0, figures.get("Laser wavenumber (cm-1)"));
+        assertEquals(1.0, figures.get("Maximum path difference (cm)"));
+        assertEquals(6.4, figures.get("Cell path length (m)"));
+        assertTrue(figures.containsKey("Field of view, half-angle (mrad)"), figures.keySet().toString());
+    }
+
+    /** The values the properties view shows of an object, by their names, attributes unwrapped. */
+    private Map<String, Object> shown(Object o) {
+        IItemPropertySource source = (IItemPropertySource) factory.adapt(o, IItemPropertySource.class);
+        Map<String, Object> shown = new LinkedHashMap<>();
+        for (IItemPropertyDescriptor d : source.getPropertyDescriptors(o)) {
+            Object value = d.getPropertyValue(o);
+            shown.put(d.getDisplayName(o), value instanceof IItemPropertySource w ? w.getEditableValue(value) : value);
+        }
+        return shown;
     }
 }

@@ -111,6 +111,7 @@ public class ClientItemProvider extends StoredObjectItemProvider {
 		if (childrenFeatures == null) {
 			super.getChildrenFeatures(object);
 			childrenFeatures.add(WorkspacePackage.Literals.CLIENT__PROJECTS);
+			childrenFeatures.add(WorkspacePackage.Literals.CLIENT__SITES);
 		}
 		return childrenFeatures;
 	}
@@ -171,6 +172,7 @@ public class ClientItemProvider extends StoredObjectItemProvider {
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), false, true));
 				return;
 			case WorkspacePackage.CLIENT__PROJECTS:
+			case WorkspacePackage.CLIENT__SITES:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), true, false));
 				return;
 		}
@@ -192,6 +194,11 @@ public class ClientItemProvider extends StoredObjectItemProvider {
 			(createChildParameter
 				(WorkspacePackage.Literals.CLIENT__PROJECTS,
 				 WorkspaceFactory.eINSTANCE.createProject()));
+
+		newChildDescriptors.add
+			(createChildParameter
+				(WorkspacePackage.Literals.CLIENT__SITES,
+				 WorkspaceFactory.eINSTANCE.createSite()));
 	}
 
 }

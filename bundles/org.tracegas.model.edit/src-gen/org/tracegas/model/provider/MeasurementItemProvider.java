@@ -56,6 +56,7 @@ public class MeasurementItemProvider extends StoredObjectItemProvider {
 			addSourceFilePropertyDescriptor(object);
 			addSourceSha256PropertyDescriptor(object);
 			addSourceRecordPropertyDescriptor(object);
+			addInstrumentPropertyDescriptor(object);
 		}
 		return itemPropertyDescriptors;
 	}
@@ -298,6 +299,28 @@ public class MeasurementItemProvider extends StoredObjectItemProvider {
 				 false,
 				 false,
 				 ItemPropertyDescriptor.INTEGRAL_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Instrument feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addInstrumentPropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_Measurement_instrument_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_Measurement_instrument_feature", "_UI_Measurement_type"),
+				 WorkspacePackage.Literals.MEASUREMENT__INSTRUMENT,
+				 true,
+				 false,
+				 true,
+				 null,
 				 null,
 				 null));
 	}

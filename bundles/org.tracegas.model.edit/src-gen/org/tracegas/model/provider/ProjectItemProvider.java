@@ -52,6 +52,7 @@ public class ProjectItemProvider extends StoredObjectItemProvider {
 			addNamePropertyDescriptor(object);
 			addStartPropertyDescriptor(object);
 			addEndPropertyDescriptor(object);
+			addSourcePropertyDescriptor(object);
 		}
 		return itemPropertyDescriptors;
 	}
@@ -140,6 +141,28 @@ public class ProjectItemProvider extends StoredObjectItemProvider {
 				 false,
 				 false,
 				 ItemPropertyDescriptor.GENERIC_VALUE_IMAGE,
+				 null,
+				 null));
+	}
+
+	/**
+	 * This adds a property descriptor for the Source feature.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected void addSourcePropertyDescriptor(Object object) {
+		itemPropertyDescriptors.add
+			(createItemPropertyDescriptor
+				(((ComposeableAdapterFactory)adapterFactory).getRootAdapterFactory(),
+				 getResourceLocator(),
+				 getString("_UI_Project_source_feature"),
+				 getString("_UI_PropertyDescriptor_description", "_UI_Project_source_feature", "_UI_Project_type"),
+				 WorkspacePackage.Literals.PROJECT__SOURCE,
+				 true,
+				 false,
+				 true,
+				 null,
 				 null,
 				 null));
 	}

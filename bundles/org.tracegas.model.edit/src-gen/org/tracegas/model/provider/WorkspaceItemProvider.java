@@ -105,6 +105,7 @@ public class WorkspaceItemProvider
 			childrenFeatures.add(WorkspacePackage.Literals.WORKSPACE__CLIENTS);
 			childrenFeatures.add(WorkspacePackage.Literals.WORKSPACE__LIBRARIES);
 			childrenFeatures.add(WorkspacePackage.Literals.WORKSPACE__METHODS);
+			childrenFeatures.add(WorkspacePackage.Literals.WORKSPACE__INSTRUMENTS);
 		}
 		return childrenFeatures;
 	}
@@ -166,6 +167,7 @@ public class WorkspaceItemProvider
 			case WorkspacePackage.WORKSPACE__CLIENTS:
 			case WorkspacePackage.WORKSPACE__LIBRARIES:
 			case WorkspacePackage.WORKSPACE__METHODS:
+			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), true, false));
 				return;
 		}
@@ -197,6 +199,11 @@ public class WorkspaceItemProvider
 			(createChildParameter
 				(WorkspacePackage.Literals.WORKSPACE__METHODS,
 				 WorkspaceFactory.eINSTANCE.createAnalysisMethod()));
+
+		newChildDescriptors.add
+			(createChildParameter
+				(WorkspacePackage.Literals.WORKSPACE__INSTRUMENTS,
+				 WorkspaceFactory.eINSTANCE.createInstrument()));
 	}
 
 	/**

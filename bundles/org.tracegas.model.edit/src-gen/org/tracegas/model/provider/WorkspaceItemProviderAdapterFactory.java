@@ -141,6 +141,52 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.Site} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected SiteItemProvider siteItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.Site}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createSiteAdapter() {
+		if (siteItemProvider == null) {
+			siteItemProvider = new SiteItemProvider(this);
+		}
+
+		return siteItemProvider;
+	}
+
+	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.EmissionSource} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected EmissionSourceItemProvider emissionSourceItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.EmissionSource}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createEmissionSourceAdapter() {
+		if (emissionSourceItemProvider == null) {
+			emissionSourceItemProvider = new EmissionSourceItemProvider(this);
+		}
+
+		return emissionSourceItemProvider;
+	}
+
+	/**
 	 * This keeps track of the one adapter used for all {@link org.tracegas.model.Measurement} instances.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -161,6 +207,29 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 		}
 
 		return measurementItemProvider;
+	}
+
+	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.Instrument} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected InstrumentItemProvider instrumentItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.Instrument}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createInstrumentAdapter() {
+		if (instrumentItemProvider == null) {
+			instrumentItemProvider = new InstrumentItemProvider(this);
+		}
+
+		return instrumentItemProvider;
 	}
 
 	/**
@@ -478,7 +547,10 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 		if (workspaceItemProvider != null) workspaceItemProvider.dispose();
 		if (clientItemProvider != null) clientItemProvider.dispose();
 		if (projectItemProvider != null) projectItemProvider.dispose();
+		if (siteItemProvider != null) siteItemProvider.dispose();
+		if (emissionSourceItemProvider != null) emissionSourceItemProvider.dispose();
 		if (measurementItemProvider != null) measurementItemProvider.dispose();
+		if (instrumentItemProvider != null) instrumentItemProvider.dispose();
 		if (contentVersionItemProvider != null) contentVersionItemProvider.dispose();
 		if (referenceLibraryItemProvider != null) referenceLibraryItemProvider.dispose();
 		if (referenceSpectrumItemProvider != null) referenceSpectrumItemProvider.dispose();

@@ -9,6 +9,8 @@ import org.eclipse.emf.common.notify.Adapter;
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.Client;
+import org.tracegas.model.EmissionSource;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
@@ -16,11 +18,14 @@ import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.ReferenceOrigin;
 import org.tracegas.model.ReferenceSpectrum;
+import org.tracegas.model.Site;
 
 /**
- * The generated item providers with the labels the workbench shows: a client by its name, a campaign by its
- * code, name and measurement count, a measurement by its kind and start (UTC), a reference spectrum by its
- * compound and amount (and whether it was computed), a method version by its number and whether results use it. The generated labels put the type's name first ("Client Eastfield Cement"),
+ * The generated item providers with the labels the workbench shows: a client, a site and an emission source by
+ * their names, a campaign by its code, name and measurement count, a measurement by its kind and start (UTC),
+ * an instrument by its name and serial number, a reference spectrum by its compound and amount (and whether it
+ * was computed), a method version by its number and whether results use it. The generated labels put the
+ * type's name first ("Client Eastfield Cement"),
  * which the tree's structure already says; the generated code stays as the genmodel makes it, so the labels
  * are given here, by overriding only {@code getText} of the generated providers.
  */
@@ -68,6 +73,46 @@ public class WorkbenchItemProviderAdapterFactory extends WorkspaceItemProviderAd
             };
         }
         return measurementItemProvider;
+    }
+
+    @Override
+    public Adapter createSiteAdapter() {
+        if (siteItemProvider == null) {
+            siteItemProvider = new SiteItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    return ((Site) object).getName();
+                }
+            };
+        }
+        return siteItemProvider;
+    }
+
+    @Override
+    public Adapter createEmissionSourceAdapter() {
+        if (emissionSourceItemProvider == null) {
+            emissionSourceItemProvider = new EmissionSourceItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    return ((EmissionSource) object).getName();
+                }
+            };
+        }
+        return emissionSourceItemProvider;
+    }
+
+    @Override
+    public Adapter createInstrumentAdapter() {
+        if (instrumentItemProvider == null) {
+            instrumentItemProvider = new InstrumentItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    Instrument i = (Instrument) object;
+                    return i.getName() + "  (serial " + i.getSerialNumber() + ")";
+                }
+            };
+        }
+        return instrumentItemProvider;
     }
 
     @Override

@@ -19,6 +19,7 @@ import org.eclipse.emf.ecore.util.InternalEList;
 
 import org.tracegas.model.Client;
 import org.tracegas.model.Project;
+import org.tracegas.model.Site;
 import org.tracegas.model.WorkspacePackage;
 
 /**
@@ -32,6 +33,7 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.ClientImpl#getName <em>Name</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ClientImpl#getContact <em>Contact</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ClientImpl#getProjects <em>Projects</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ClientImpl#getSites <em>Sites</em>}</li>
  * </ul>
  *
  * @generated
@@ -86,6 +88,16 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 	 * @ordered
 	 */
 	protected EList<Project> projects;
+
+	/**
+	 * The cached value of the '{@link #getSites() <em>Sites</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getSites()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<Site> sites;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -170,12 +182,27 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	@Override
+	public EList<Site> getSites() {
+		if (sites == null) {
+			sites = new EObjectContainmentWithInverseEList<Site>(Site.class, this, WorkspacePackage.CLIENT__SITES, WorkspacePackage.SITE__CLIENT);
+		}
+		return sites;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	@SuppressWarnings("unchecked")
 	@Override
 	public NotificationChain eInverseAdd(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case WorkspacePackage.CLIENT__PROJECTS:
 				return ((InternalEList<InternalEObject>)(InternalEList<?>)getProjects()).basicAdd(otherEnd, msgs);
+			case WorkspacePackage.CLIENT__SITES:
+				return ((InternalEList<InternalEObject>)(InternalEList<?>)getSites()).basicAdd(otherEnd, msgs);
 		}
 		return super.eInverseAdd(otherEnd, featureID, msgs);
 	}
@@ -190,6 +217,8 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 		switch (featureID) {
 			case WorkspacePackage.CLIENT__PROJECTS:
 				return ((InternalEList<?>)getProjects()).basicRemove(otherEnd, msgs);
+			case WorkspacePackage.CLIENT__SITES:
+				return ((InternalEList<?>)getSites()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -208,6 +237,8 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 				return getContact();
 			case WorkspacePackage.CLIENT__PROJECTS:
 				return getProjects();
+			case WorkspacePackage.CLIENT__SITES:
+				return getSites();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -231,6 +262,10 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 				getProjects().clear();
 				getProjects().addAll((Collection<? extends Project>)newValue);
 				return;
+			case WorkspacePackage.CLIENT__SITES:
+				getSites().clear();
+				getSites().addAll((Collection<? extends Site>)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -252,6 +287,9 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 			case WorkspacePackage.CLIENT__PROJECTS:
 				getProjects().clear();
 				return;
+			case WorkspacePackage.CLIENT__SITES:
+				getSites().clear();
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -270,6 +308,8 @@ public class ClientImpl extends StoredObjectImpl implements Client {
 				return CONTACT_EDEFAULT == null ? contact != null : !CONTACT_EDEFAULT.equals(contact);
 			case WorkspacePackage.CLIENT__PROJECTS:
 				return projects != null && !projects.isEmpty();
+			case WorkspacePackage.CLIENT__SITES:
+				return sites != null && !sites.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}

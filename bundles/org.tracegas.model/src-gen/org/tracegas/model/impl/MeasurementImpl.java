@@ -21,6 +21,7 @@ import org.eclipse.emf.ecore.util.EcoreEMap;
 import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.eclipse.emf.ecore.util.InternalEList;
 
+import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
@@ -51,6 +52,7 @@ import org.tracegas.spectrum.Spectrum;
  *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getSourceFile <em>Source File</em>}</li>
  *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getSourceSha256 <em>Source Sha256</em>}</li>
  *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getSourceRecord <em>Source Record</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.MeasurementImpl#getInstrument <em>Instrument</em>}</li>
  * </ul>
  *
  * @generated
@@ -314,6 +316,16 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 	 * @ordered
 	 */
 	protected int sourceRecord = SOURCE_RECORD_EDEFAULT;
+
+	/**
+	 * The cached value of the '{@link #getInstrument() <em>Instrument</em>}' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getInstrument()
+	 * @generated
+	 * @ordered
+	 */
+	protected Instrument instrument;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -699,6 +711,46 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 	 * @generated
 	 */
 	@Override
+	public Instrument getInstrument() {
+		if (instrument != null && instrument.eIsProxy()) {
+			InternalEObject oldInstrument = (InternalEObject)instrument;
+			instrument = (Instrument)eResolveProxy(oldInstrument);
+			if (instrument != oldInstrument) {
+				if (eNotificationRequired())
+					eNotify(new ENotificationImpl(this, Notification.RESOLVE, WorkspacePackage.MEASUREMENT__INSTRUMENT, oldInstrument, instrument));
+			}
+		}
+		return instrument;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public Instrument basicGetInstrument() {
+		return instrument;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setInstrument(Instrument newInstrument) {
+		Instrument oldInstrument = instrument;
+		instrument = newInstrument;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.MEASUREMENT__INSTRUMENT, oldInstrument, instrument));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseAdd(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case WorkspacePackage.MEASUREMENT__PROJECT:
@@ -776,6 +828,9 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 				return getSourceSha256();
 			case WorkspacePackage.MEASUREMENT__SOURCE_RECORD:
 				return getSourceRecord();
+			case WorkspacePackage.MEASUREMENT__INSTRUMENT:
+				if (resolve) return getInstrument();
+				return basicGetInstrument();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -829,6 +884,9 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 				return;
 			case WorkspacePackage.MEASUREMENT__SOURCE_RECORD:
 				setSourceRecord((Integer)newValue);
+				return;
+			case WorkspacePackage.MEASUREMENT__INSTRUMENT:
+				setInstrument((Instrument)newValue);
 				return;
 		}
 		super.eSet(featureID, newValue);
@@ -884,6 +942,9 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 			case WorkspacePackage.MEASUREMENT__SOURCE_RECORD:
 				setSourceRecord(SOURCE_RECORD_EDEFAULT);
 				return;
+			case WorkspacePackage.MEASUREMENT__INSTRUMENT:
+				setInstrument((Instrument)null);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -924,6 +985,8 @@ public class MeasurementImpl extends StoredObjectImpl implements Measurement {
 				return SOURCE_SHA256_EDEFAULT == null ? sourceSha256 != null : !SOURCE_SHA256_EDEFAULT.equals(sourceSha256);
 			case WorkspacePackage.MEASUREMENT__SOURCE_RECORD:
 				return sourceRecord != SOURCE_RECORD_EDEFAULT;
+			case WorkspacePackage.MEASUREMENT__INSTRUMENT:
+				return instrument != null;
 		}
 		return super.eIsSet(featureID);
 	}

@@ -21,6 +21,7 @@ import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.eclipse.emf.ecore.util.InternalEList;
 
 import org.tracegas.model.Client;
+import org.tracegas.model.EmissionSource;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
 import org.tracegas.model.WorkspacePackage;
@@ -39,6 +40,7 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getEnd <em>End</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getMeasurements <em>Measurements</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ProjectImpl#getSource <em>Source</em>}</li>
  * </ul>
  *
  * @generated
@@ -133,6 +135,16 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @ordered
 	 */
 	protected EList<Measurement> measurements;
+
+	/**
+	 * The cached value of the '{@link #getSource() <em>Source</em>}' reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getSource()
+	 * @generated
+	 * @ordered
+	 */
+	protected EmissionSource source;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -306,6 +318,46 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	@Override
+	public EmissionSource getSource() {
+		if (source != null && source.eIsProxy()) {
+			InternalEObject oldSource = (InternalEObject)source;
+			source = (EmissionSource)eResolveProxy(oldSource);
+			if (source != oldSource) {
+				if (eNotificationRequired())
+					eNotify(new ENotificationImpl(this, Notification.RESOLVE, WorkspacePackage.PROJECT__SOURCE, oldSource, source));
+			}
+		}
+		return source;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	public EmissionSource basicGetSource() {
+		return source;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public void setSource(EmissionSource newSource) {
+		EmissionSource oldSource = source;
+		source = newSource;
+		if (eNotificationRequired())
+			eNotify(new ENotificationImpl(this, Notification.SET, WorkspacePackage.PROJECT__SOURCE, oldSource, source));
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	@SuppressWarnings("unchecked")
 	@Override
 	public NotificationChain eInverseAdd(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
@@ -370,6 +422,9 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return getEnd();
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return getMeasurements();
+			case WorkspacePackage.PROJECT__SOURCE:
+				if (resolve) return getSource();
+				return basicGetSource();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -402,6 +457,9 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				getMeasurements().clear();
 				getMeasurements().addAll((Collection<? extends Measurement>)newValue);
 				return;
+			case WorkspacePackage.PROJECT__SOURCE:
+				setSource((EmissionSource)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -432,6 +490,9 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				getMeasurements().clear();
 				return;
+			case WorkspacePackage.PROJECT__SOURCE:
+				setSource((EmissionSource)null);
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -456,6 +517,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return END_EDEFAULT == null ? end != null : !END_EDEFAULT.equals(end);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return measurements != null && !measurements.isEmpty();
+			case WorkspacePackage.PROJECT__SOURCE:
+				return source != null;
 		}
 		return super.eIsSet(featureID);
 	}

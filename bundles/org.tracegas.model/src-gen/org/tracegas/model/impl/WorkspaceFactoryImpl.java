@@ -62,7 +62,10 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 			case WorkspacePackage.WORKSPACE: return createWorkspace();
 			case WorkspacePackage.CLIENT: return createClient();
 			case WorkspacePackage.PROJECT: return createProject();
+			case WorkspacePackage.SITE: return createSite();
+			case WorkspacePackage.EMISSION_SOURCE: return createEmissionSource();
 			case WorkspacePackage.MEASUREMENT: return createMeasurement();
+			case WorkspacePackage.INSTRUMENT: return createInstrument();
 			case WorkspacePackage.CONTENT_VERSION: return createContentVersion();
 			case WorkspacePackage.REFERENCE_LIBRARY: return createReferenceLibrary();
 			case WorkspacePackage.REFERENCE_SPECTRUM: return createReferenceSpectrum();
@@ -174,9 +177,42 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	 * @generated
 	 */
 	@Override
+	public Site createSite() {
+		SiteImpl site = new SiteImpl();
+		return site;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EmissionSource createEmissionSource() {
+		EmissionSourceImpl emissionSource = new EmissionSourceImpl();
+		return emissionSource;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public Measurement createMeasurement() {
 		MeasurementImpl measurement = new MeasurementImpl();
 		return measurement;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Instrument createInstrument() {
+		InstrumentImpl instrument = new InstrumentImpl();
+		return instrument;
 	}
 
 	/**

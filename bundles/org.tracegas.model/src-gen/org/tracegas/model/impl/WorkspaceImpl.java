@@ -20,6 +20,7 @@ import org.eclipse.emf.ecore.util.InternalEList;
 
 import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.Client;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspacePackage;
@@ -36,6 +37,7 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.WorkspaceImpl#getClients <em>Clients</em>}</li>
  *   <li>{@link org.tracegas.model.impl.WorkspaceImpl#getLibraries <em>Libraries</em>}</li>
  *   <li>{@link org.tracegas.model.impl.WorkspaceImpl#getMethods <em>Methods</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.WorkspaceImpl#getInstruments <em>Instruments</em>}</li>
  * </ul>
  *
  * @generated
@@ -90,6 +92,16 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 	 * @ordered
 	 */
 	protected EList<AnalysisMethod> methods;
+
+	/**
+	 * The cached value of the '{@link #getInstruments() <em>Instruments</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getInstruments()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<Instrument> instruments;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -178,6 +190,19 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 	 * @generated
 	 */
 	@Override
+	public EList<Instrument> getInstruments() {
+		if (instruments == null) {
+			instruments = new EObjectContainmentEList<Instrument>(Instrument.class, this, WorkspacePackage.WORKSPACE__INSTRUMENTS);
+		}
+		return instruments;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public NotificationChain eInverseRemove(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
 		switch (featureID) {
 			case WorkspacePackage.WORKSPACE__CLIENTS:
@@ -186,6 +211,8 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 				return ((InternalEList<?>)getLibraries()).basicRemove(otherEnd, msgs);
 			case WorkspacePackage.WORKSPACE__METHODS:
 				return ((InternalEList<?>)getMethods()).basicRemove(otherEnd, msgs);
+			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
+				return ((InternalEList<?>)getInstruments()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -206,6 +233,8 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 				return getLibraries();
 			case WorkspacePackage.WORKSPACE__METHODS:
 				return getMethods();
+			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
+				return getInstruments();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -234,6 +263,10 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 				getMethods().clear();
 				getMethods().addAll((Collection<? extends AnalysisMethod>)newValue);
 				return;
+			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
+				getInstruments().clear();
+				getInstruments().addAll((Collection<? extends Instrument>)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -258,6 +291,9 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 			case WorkspacePackage.WORKSPACE__METHODS:
 				getMethods().clear();
 				return;
+			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
+				getInstruments().clear();
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -278,6 +314,8 @@ public class WorkspaceImpl extends MinimalEObjectImpl.Container implements Works
 				return libraries != null && !libraries.isEmpty();
 			case WorkspacePackage.WORKSPACE__METHODS:
 				return methods != null && !methods.isEmpty();
+			case WorkspacePackage.WORKSPACE__INSTRUMENTS:
+				return instruments != null && !instruments.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}

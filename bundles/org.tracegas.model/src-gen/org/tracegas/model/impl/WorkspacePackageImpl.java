@@ -18,6 +18,8 @@ import org.tracegas.model.AnalysisMethod;
 import org.tracegas.model.AnalysisRegion;
 import org.tracegas.model.Client;
 import org.tracegas.model.ContentVersion;
+import org.tracegas.model.EmissionSource;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
@@ -31,6 +33,7 @@ import org.tracegas.model.Result;
 import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Role;
+import org.tracegas.model.Site;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.model.StoredObject;
 import org.tracegas.model.User;
@@ -81,7 +84,28 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	private EClass siteEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass emissionSourceEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	private EClass measurementEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass instrumentEClass = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -369,6 +393,16 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EReference getWorkspace_Instruments() {
+		return (EReference)workspaceEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getClient() {
 		return clientEClass;
 	}
@@ -401,6 +435,16 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	@Override
 	public EReference getClient_Projects() {
 		return (EReference)clientEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getClient_Sites() {
+		return (EReference)clientEClass.getEStructuralFeatures().get(3);
 	}
 
 	/**
@@ -471,6 +515,106 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	@Override
 	public EReference getProject_Measurements() {
 		return (EReference)projectEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getProject_Source() {
+		return (EReference)projectEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getSite() {
+		return siteEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getSite_Name() {
+		return (EAttribute)siteEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getSite_Description() {
+		return (EAttribute)siteEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getSite_Client() {
+		return (EReference)siteEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getSite_Sources() {
+		return (EReference)siteEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getEmissionSource() {
+		return emissionSourceEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getEmissionSource_Name() {
+		return (EAttribute)emissionSourceEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getEmissionSource_Description() {
+		return (EAttribute)emissionSourceEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getEmissionSource_Site() {
+		return (EReference)emissionSourceEClass.getEStructuralFeatures().get(2);
 	}
 
 	/**
@@ -621,6 +765,86 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	@Override
 	public EAttribute getMeasurement_SourceRecord() {
 		return (EAttribute)measurementEClass.getEStructuralFeatures().get(13);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getMeasurement_Instrument() {
+		return (EReference)measurementEClass.getEStructuralFeatures().get(14);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getInstrument() {
+		return instrumentEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getInstrument_Name() {
+		return (EAttribute)instrumentEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getInstrument_SerialNumber() {
+		return (EAttribute)instrumentEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getInstrument_LaserWavenumber() {
+		return (EAttribute)instrumentEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getInstrument_MaxPathDifference() {
+		return (EAttribute)instrumentEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getInstrument_FieldOfView() {
+		return (EAttribute)instrumentEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getInstrument_CellPathLength() {
+		return (EAttribute)instrumentEClass.getEStructuralFeatures().get(5);
 	}
 
 	/**
@@ -1581,11 +1805,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEReference(workspaceEClass, WORKSPACE__CLIENTS);
 		createEReference(workspaceEClass, WORKSPACE__LIBRARIES);
 		createEReference(workspaceEClass, WORKSPACE__METHODS);
+		createEReference(workspaceEClass, WORKSPACE__INSTRUMENTS);
 
 		clientEClass = createEClass(CLIENT);
 		createEAttribute(clientEClass, CLIENT__NAME);
 		createEAttribute(clientEClass, CLIENT__CONTACT);
 		createEReference(clientEClass, CLIENT__PROJECTS);
+		createEReference(clientEClass, CLIENT__SITES);
 
 		projectEClass = createEClass(PROJECT);
 		createEAttribute(projectEClass, PROJECT__CODE);
@@ -1594,6 +1820,18 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(projectEClass, PROJECT__START);
 		createEAttribute(projectEClass, PROJECT__END);
 		createEReference(projectEClass, PROJECT__MEASUREMENTS);
+		createEReference(projectEClass, PROJECT__SOURCE);
+
+		siteEClass = createEClass(SITE);
+		createEAttribute(siteEClass, SITE__NAME);
+		createEAttribute(siteEClass, SITE__DESCRIPTION);
+		createEReference(siteEClass, SITE__CLIENT);
+		createEReference(siteEClass, SITE__SOURCES);
+
+		emissionSourceEClass = createEClass(EMISSION_SOURCE);
+		createEAttribute(emissionSourceEClass, EMISSION_SOURCE__NAME);
+		createEAttribute(emissionSourceEClass, EMISSION_SOURCE__DESCRIPTION);
+		createEReference(emissionSourceEClass, EMISSION_SOURCE__SITE);
 
 		measurementEClass = createEClass(MEASUREMENT);
 		createEReference(measurementEClass, MEASUREMENT__PROJECT);
@@ -1610,6 +1848,15 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(measurementEClass, MEASUREMENT__SOURCE_FILE);
 		createEAttribute(measurementEClass, MEASUREMENT__SOURCE_SHA256);
 		createEAttribute(measurementEClass, MEASUREMENT__SOURCE_RECORD);
+		createEReference(measurementEClass, MEASUREMENT__INSTRUMENT);
+
+		instrumentEClass = createEClass(INSTRUMENT);
+		createEAttribute(instrumentEClass, INSTRUMENT__NAME);
+		createEAttribute(instrumentEClass, INSTRUMENT__SERIAL_NUMBER);
+		createEAttribute(instrumentEClass, INSTRUMENT__LASER_WAVENUMBER);
+		createEAttribute(instrumentEClass, INSTRUMENT__MAX_PATH_DIFFERENCE);
+		createEAttribute(instrumentEClass, INSTRUMENT__FIELD_OF_VIEW);
+		createEAttribute(instrumentEClass, INSTRUMENT__CELL_PATH_LENGTH);
 
 		contentVersionEClass = createEClass(CONTENT_VERSION);
 		createEAttribute(contentVersionEClass, CONTENT_VERSION__KIND);
@@ -1747,7 +1994,10 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		// Add supertypes to classes
 		clientEClass.getESuperTypes().add(this.getStoredObject());
 		projectEClass.getESuperTypes().add(this.getStoredObject());
+		siteEClass.getESuperTypes().add(this.getStoredObject());
+		emissionSourceEClass.getESuperTypes().add(this.getStoredObject());
 		measurementEClass.getESuperTypes().add(this.getStoredObject());
+		instrumentEClass.getESuperTypes().add(this.getStoredObject());
 		contentVersionEClass.getESuperTypes().add(this.getStoredObject());
 		referenceLibraryEClass.getESuperTypes().add(this.getStoredObject());
 		analysisMethodEClass.getESuperTypes().add(this.getStoredObject());
@@ -1766,11 +2016,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEReference(getWorkspace_Clients(), this.getClient(), null, "clients", null, 0, -1, Workspace.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getWorkspace_Libraries(), this.getReferenceLibrary(), null, "libraries", null, 0, -1, Workspace.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getWorkspace_Methods(), this.getAnalysisMethod(), null, "methods", null, 0, -1, Workspace.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getWorkspace_Instruments(), this.getInstrument(), null, "instruments", null, 0, -1, Workspace.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(clientEClass, Client.class, "Client", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getClient_Name(), ecorePackage.getEString(), "name", null, 0, 1, Client.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getClient_Contact(), ecorePackage.getEString(), "contact", null, 0, 1, Client.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getClient_Projects(), this.getProject(), this.getProject_Client(), "projects", null, 0, -1, Client.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getClient_Sites(), this.getSite(), this.getSite_Client(), "sites", null, 0, -1, Client.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(projectEClass, Project.class, "Project", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getProject_Code(), ecorePackage.getEString(), "code", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -1779,6 +2031,18 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getProject_Start(), this.getInstant(), "start", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getProject_End(), this.getInstant(), "end", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_Measurements(), this.getMeasurement(), this.getMeasurement_Project(), "measurements", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getProject_Source(), this.getEmissionSource(), null, "source", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(siteEClass, Site.class, "Site", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getSite_Name(), ecorePackage.getEString(), "name", null, 0, 1, Site.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getSite_Description(), ecorePackage.getEString(), "description", null, 0, 1, Site.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getSite_Client(), this.getClient(), this.getClient_Sites(), "client", null, 0, 1, Site.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getSite_Sources(), this.getEmissionSource(), this.getEmissionSource_Site(), "sources", null, 0, -1, Site.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(emissionSourceEClass, EmissionSource.class, "EmissionSource", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getEmissionSource_Name(), ecorePackage.getEString(), "name", null, 0, 1, EmissionSource.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getEmissionSource_Description(), ecorePackage.getEString(), "description", null, 0, 1, EmissionSource.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getEmissionSource_Site(), this.getSite(), this.getSite_Sources(), "site", null, 0, 1, EmissionSource.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(measurementEClass, Measurement.class, "Measurement", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEReference(getMeasurement_Project(), this.getProject(), this.getProject_Measurements(), "project", null, 0, 1, Measurement.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -1795,6 +2059,15 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getMeasurement_SourceFile(), ecorePackage.getEString(), "sourceFile", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMeasurement_SourceSha256(), ecorePackage.getEString(), "sourceSha256", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMeasurement_SourceRecord(), ecorePackage.getEInt(), "sourceRecord", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getMeasurement_Instrument(), this.getInstrument(), null, "instrument", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(instrumentEClass, Instrument.class, "Instrument", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getInstrument_Name(), ecorePackage.getEString(), "name", null, 0, 1, Instrument.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getInstrument_SerialNumber(), ecorePackage.getEString(), "serialNumber", null, 0, 1, Instrument.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getInstrument_LaserWavenumber(), ecorePackage.getEDouble(), "laserWavenumber", null, 0, 1, Instrument.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getInstrument_MaxPathDifference(), ecorePackage.getEDouble(), "maxPathDifference", null, 0, 1, Instrument.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getInstrument_FieldOfView(), ecorePackage.getEDouble(), "fieldOfView", null, 0, 1, Instrument.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getInstrument_CellPathLength(), ecorePackage.getEDouble(), "cellPathLength", null, 0, 1, Instrument.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(contentVersionEClass, ContentVersion.class, "ContentVersion", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getContentVersion_Kind(), this.getVersionKind(), "kind", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);

@@ -84,8 +84,20 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 				return createProjectAdapter();
 			}
 			@Override
+			public Adapter caseSite(Site object) {
+				return createSiteAdapter();
+			}
+			@Override
+			public Adapter caseEmissionSource(EmissionSource object) {
+				return createEmissionSourceAdapter();
+			}
+			@Override
 			public Adapter caseMeasurement(Measurement object) {
 				return createMeasurementAdapter();
+			}
+			@Override
+			public Adapter caseInstrument(Instrument object) {
+				return createInstrumentAdapter();
 			}
 			@Override
 			public Adapter caseContentVersion(ContentVersion object) {
@@ -200,6 +212,34 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	}
 
 	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Site <em>Site</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.Site
+	 * @generated
+	 */
+	public Adapter createSiteAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.EmissionSource <em>Emission Source</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.EmissionSource
+	 * @generated
+	 */
+	public Adapter createEmissionSourceAdapter() {
+		return null;
+	}
+
+	/**
 	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Measurement <em>Measurement</em>}'.
 	 * <!-- begin-user-doc -->
 	 * This default implementation returns null so that we can easily ignore cases;
@@ -210,6 +250,20 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createMeasurementAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Instrument <em>Instrument</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.Instrument
+	 * @generated
+	 */
+	public Adapter createInstrumentAdapter() {
 		return null;
 	}
 

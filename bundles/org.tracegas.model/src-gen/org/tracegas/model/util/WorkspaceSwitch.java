@@ -92,10 +92,31 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
+			case WorkspacePackage.SITE: {
+				Site site = (Site)theEObject;
+				T result = caseSite(site);
+				if (result == null) result = caseStoredObject(site);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
+			case WorkspacePackage.EMISSION_SOURCE: {
+				EmissionSource emissionSource = (EmissionSource)theEObject;
+				T result = caseEmissionSource(emissionSource);
+				if (result == null) result = caseStoredObject(emissionSource);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
 			case WorkspacePackage.MEASUREMENT: {
 				Measurement measurement = (Measurement)theEObject;
 				T result = caseMeasurement(measurement);
 				if (result == null) result = caseStoredObject(measurement);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
+			case WorkspacePackage.INSTRUMENT: {
+				Instrument instrument = (Instrument)theEObject;
+				T result = caseInstrument(instrument);
+				if (result == null) result = caseStoredObject(instrument);
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
@@ -226,6 +247,36 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	}
 
 	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Site</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Site</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseSite(Site object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Emission Source</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Emission Source</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseEmissionSource(EmissionSource object) {
+		return null;
+	}
+
+	/**
 	 * Returns the result of interpreting the object as an instance of '<em>Measurement</em>'.
 	 * <!-- begin-user-doc -->
 	 * This implementation returns null;
@@ -237,6 +288,21 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseMeasurement(Measurement object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Instrument</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Instrument</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseInstrument(Instrument object) {
 		return null;
 	}
 

@@ -29,7 +29,8 @@ class ReportPlanTest {
                 StandardCharsets.UTF_8);
     }
 
-    private static final String PLAN = """
+    /** A whole plan of an invented brick works, naming plant and source. */
+    static final String PLAN = """
             report-id = R-2026-044
             client = Lakeside Brick Works
             plant = Kiln 5

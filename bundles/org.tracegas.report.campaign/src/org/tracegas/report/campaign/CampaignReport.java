@@ -67,8 +67,9 @@ public final class CampaignReport {
 
     /**
      * @throws IllegalStateException if the method version has no stored results or QA checks in the project
-     * @throws FileFormatException   if the plan's example fit names no stored sample, or its QA plan charts a
-     *                               reading otherwise than the stored checks were charted
+     * @throws FileFormatException   if the plan's example fit names no stored sample, its QA plan charts a
+     *                               reading otherwise than the stored checks were charted, or its plant or
+     *                               source differs from the project's emission source in the workspace
      * @throws ImportException       if the O2 file cannot be read
      */
     public ReportContent content(ContentVersion methodVersion, StoredMethod method, ReportPlan plan)
@@ -94,12 +95,13 @@ public final class CampaignReport {
         ReportContent content = new CampaignReportBuilder(plan.basis(),
                 plan.budget(method.method().pathLengthMetres()), plan.cellTemperatureK(), plan.cellPressureKPa(),
                 plan.o2UncertaintyPercent())
-                .build(plan.campaign(), new MethodVersion(method.method().name(), "v" + methodVersion.getNumber(),
+                .build(CampaignPlace.of(plan, store.projects().project(actor, projectId)), new MethodVersion(method.method().name(), "v" + methodVersion.getNumber(),
                         methodVersion.getContentHash()),
                         new LibraryVersion(library.getItemName(), "v" + library.getNumber() + ", content "
                                 + method.libraryContentHash().substring(0, 16)),
                         checks, charts(method, plan, checks), series, plan.reported(), plan.moisture(),
-                        t -> oxygen(o2, plan.o2Channel(), t), plan.periods(), exampleFit(measurements, method, plan));
+                        t -> oxygen(o2, plan.o2Channel(), t), plan.periods(), exampleFit(measurements, method, plan))
+                .withInstruments(ReportedInstruments.lines(measurements));
         return ReportSignatures.attach(store, actor, projectId, content, verified);
     }
 

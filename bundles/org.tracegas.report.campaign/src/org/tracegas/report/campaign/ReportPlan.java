@@ -25,8 +25,9 @@ import org.tracegas.report.Campaign;
  * <pre>
  * report-id = R-2026-031
  * client = ...
- * plant = ...
- * source = Line 2 stack
+ * plant = ...                          (optional) the site, with source; where the project names its
+ * source = Line 2 stack                emission source in the workspace, that names both, and the plan
+ *                                      must agree with it
  * first-day = 2026-03-17
  * last-day = 2026-03-17
  * issued = 2026-03-19T00:00:00Z        dates the PDF, so the same content gives the same file
@@ -99,9 +100,15 @@ public record ReportPlan(Path file, Campaign campaign, ReportingBasis basis, Pat
         }
         String basisText = String.format(java.util.Locale.ROOT, "mg/m³ dry gas, %s K, %s kPa, %s %% O2",
                 h.text("standard-temperature"), h.text("standard-pressure"), h.text("reference-o2"));
+        if (h.has("plant") != h.has("source")) {
+            String missing = h.has("plant") ? "source" : "plant";
+            throw h.error(missing, "is missing: a plan names the plant and the source together, or leaves both to"
+                    + " the project's emission source in the workspace");
+        }
         Campaign campaign;
         try {
-            campaign = new Campaign(h.text("report-id"), h.text("client"), h.text("plant"), h.text("source"),
+            campaign = new Campaign(h.text("report-id"), h.text("client"), h.has("plant") ? h.text("plant") : null,
+                    h.has("source") ? h.text("source") : null,
                     day(h, "first-day"), day(h, "last-day"), instant(h.value("issued")), basisText);
         } catch (IllegalArgumentException e) {
             throw h.error("report-id", e.getMessage());

@@ -72,7 +72,19 @@ enum DataKind {
             col("record_index", INTEGER), col("title", TEXT), col("content", TEXT), col("spectrum_id", TEXT),
             col("labels", TEXT)),
     /** A processing recipe that ran, kept once under the SHA-256 of its text. */
-    PROCESSING_RECIPE("processing-recipe", "processing_recipe", "sha256", col("sha256", TEXT), col("text", TEXT));
+    PROCESSING_RECIPE("processing-recipe", "processing_recipe", "sha256", col("sha256", TEXT), col("text", TEXT)),
+    SITE("site", "site", "id", col("id", TEXT), col("client_id", TEXT), col("name", TEXT), col("description", TEXT)),
+    EMISSION_SOURCE("emission-source", "emission_source", "id", col("id", TEXT), col("site_id", TEXT),
+            col("name", TEXT), col("description", TEXT)),
+    INSTRUMENT("instrument", "instrument", "id", col("id", TEXT), col("name", TEXT), col("serial_number", TEXT),
+            col("laser_wavenumber", REAL), col("max_path_difference", REAL), col("field_of_view", REAL),
+            col("cell_path_length", REAL)),
+    /** The emission source a project measures; key: the project id. */
+    PROJECT_SOURCE("project-source", "project_source", "project_id", col("project_id", TEXT),
+            col("source_id", TEXT)),
+    /** The instrument that made a measurement; key: the measurement id. */
+    MEASUREMENT_INSTRUMENT("measurement-instrument", "measurement_instrument", "measurement_id",
+            col("measurement_id", TEXT), col("instrument_id", TEXT));
 
     private final String label;
     private final String table;

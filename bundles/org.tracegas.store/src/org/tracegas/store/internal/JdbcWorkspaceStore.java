@@ -14,9 +14,11 @@ import org.tracegas.store.AnalysisService;
 import org.tracegas.store.AuditService;
 import org.tracegas.store.BlockService;
 import org.tracegas.store.ImportService;
+import org.tracegas.store.InstrumentService;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.QaService;
 import org.tracegas.store.ResultService;
+import org.tracegas.store.SiteService;
 import org.tracegas.store.SpectrumService;
 import org.tracegas.store.StoreException;
 import org.tracegas.store.UserService;
@@ -37,6 +39,8 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     private final Backend backend;
     private final UserService users;
     private final ProjectService projects;
+    private final SiteService sites;
+    private final InstrumentService instruments;
     private final SpectrumService spectra;
     private final VersionService versions;
     private final ResultService results;
@@ -53,6 +57,8 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         Transactions transactions = new Transactions(dataSource);
         users = new JdbcUserService(transactions, maxFailedLogins);
         projects = new JdbcProjectService(transactions);
+        sites = new JdbcSiteService(transactions);
+        instruments = new JdbcInstrumentService(transactions);
         spectra = new JdbcSpectrumService(transactions, backend);
         JdbcVersionService versionService = new JdbcVersionService(transactions);
         versions = versionService;
@@ -159,6 +165,16 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     @Override
     public ProjectService projects() {
         return projects;
+    }
+
+    @Override
+    public SiteService sites() {
+        return sites;
+    }
+
+    @Override
+    public InstrumentService instruments() {
+        return instruments;
     }
 
     @Override

@@ -10,8 +10,10 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.model.Client;
+import org.tracegas.model.EmissionSource;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
+import org.tracegas.model.Site;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.model.provider.WorkbenchItemProviderAdapterFactory;
@@ -25,6 +27,25 @@ class ItemTreeContentTest {
     @AfterEach
     void dispose() {
         adapters.dispose();
+    }
+
+    @Test
+    void aClientShowsItsSitesBesideItsProjectsAndASiteItsEmissionSources() {
+        WorkspaceFactory f = WorkspaceFactory.eINSTANCE;
+        Client client = f.createClient();
+        Project project = f.createProject();
+        Site plant = f.createSite();
+        EmissionSource stack = f.createEmissionSource();
+        client.getProjects().add(project);
+        client.getSites().add(plant);
+        plant.getSources().add(stack);
+        project.setSource(stack);
+
+        assertArrayEquals(new Object[] {project, plant}, content.getChildren(client));
+        assertArrayEquals(new Object[] {stack}, content.getChildren(plant));
+        assertFalse(content.hasChildren(stack));
+        assertEquals(plant, content.getParent(stack));
+        assertEquals(client, content.getParent(plant));
     }
 
     @Test
