@@ -230,6 +230,17 @@ abstract class WorkUnitServiceContract {
     }
 
     @Test
+    void aProjectsBatchesAreListedOldestFirstInTheProject() {
+        assertEquals(List.of(), units.batches(f.reader, f.project.getId()));
+        WorkBatch other = batch(1);
+        WorkBatch quantifying = quantification(f.method, "/data/a.tgc", "/data/b.tgc");
+        List<WorkBatch> listed = units.batches(f.reader, f.project.getId());
+        assertEquals(List.of(fields(other), fields(quantifying)), listed.stream().map(WorkUnitServiceContract::fields)
+                .toList());
+        assertEquals(listed, listed.get(0).getProject().getBatches(), "both in one project object");
+    }
+
+    @Test
     void anIncompleteBatchIsRefusedNamingTheFieldAndNothingIsWritten() throws Exception {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> units.createBatch(f.analyst, f.project.getId(), null, List.of("/a")));

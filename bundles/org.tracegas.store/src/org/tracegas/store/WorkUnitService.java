@@ -27,8 +27,8 @@ import org.tracegas.model.WorkBatch;
  * units are all done or failed is finished; it is complete only without failed units.
  * <p>
  * Every change (batch creation, claim, renewal, release, completion, failure) writes an audit record in its own
- * transaction. Changes need write access to the batch's project, reads ({@link #batch}, {@link #progress},
- * {@link #unfinishedBatch}, {@link #measurementsOf}) read access.
+ * transaction. Changes need write access to the batch's project, reads ({@link #batch}, {@link #batches},
+ * {@link #progress}, {@link #unfinishedBatch}, {@link #measurementsOf}) read access.
  */
 public interface WorkUnitService {
 
@@ -121,6 +121,14 @@ public interface WorkUnitService {
      * @throws NoSuchObjectException if there is no such batch
      */
     WorkBatch batch(Session actor, String batchId);
+
+    /**
+     * The project's batches, oldest first, in the project (as {@link ProjectService#project} reads it), so that a
+     * reviewer sees which batches stored its results, with what method version, by whom and when.
+     *
+     * @throws AccessDeniedException without read access to the project
+     */
+    List<WorkBatch> batches(Session actor, String projectId);
 
     /** Counts of the batch's units by state. */
     BatchProgress progress(Session actor, String batchId);

@@ -331,6 +331,17 @@ final class JdbcWorkUnitService implements WorkUnitService {
                 });
     }
 
+    @Override
+    public List<WorkBatch> batches(Session actor, String projectId) {
+        return transactions.run("reading the work batches of project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+            List<WorkBatch> read = tx.queryList("SELECT " + BATCH_COLUMNS + " FROM work_batch b"
+                    + " WHERE b.project_id = ? ORDER BY b.created_at, b.id", JdbcWorkUnitService::readBatch, projectId);
+            ModelRows.project(tx, projectId).getBatches().addAll(read);
+            return read;
+        });
+    }
+
     private static Optional<WorkBatch> findUnfinished(Tx tx, String projectId, String methodVersionId)
             throws SQLException {
         Optional<WorkBatch> found = tx.queryOne("SELECT " + BATCH_COLUMNS + " FROM work_batch b"
