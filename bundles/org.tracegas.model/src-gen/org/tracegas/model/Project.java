@@ -25,6 +25,7 @@ import org.eclipse.emf.common.util.EList;
  *   <li>{@link org.tracegas.model.Project#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getEnd <em>End</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getMeasurements <em>Measurements</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getBatches <em>Batches</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getSource <em>Source</em>}</li>
  * </ul>
  *
@@ -170,6 +171,23 @@ public interface Project extends StoredObject {
 	 * @generated
 	 */
 	EList<Measurement> getMeasurements();
+
+	/**
+	 * Returns the value of the '<em><b>Batches</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.WorkBatch}.
+	 * It is bidirectional and its opposite is '{@link org.tracegas.model.WorkBatch#getProject <em>Project</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The project's shared work batches, oldest first as the store reads them.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Batches</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Batches()
+	 * @see org.tracegas.model.WorkBatch#getProject
+	 * @model opposite="project" containment="true"
+	 * @generated
+	 */
+	EList<WorkBatch> getBatches();
 
 	/**
 	 * Returns the value of the '<em><b>Source</b></em>' reference.

@@ -157,6 +157,15 @@ public interface WorkspaceFactory extends EFactory {
 	QaOutcome createQaOutcome();
 
 	/**
+	 * Returns a new object of class '<em>Work Batch</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Work Batch</em>'.
+	 * @generated
+	 */
+	WorkBatch createWorkBatch();
+
+	/**
 	 * Returns a new object of class '<em>User</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

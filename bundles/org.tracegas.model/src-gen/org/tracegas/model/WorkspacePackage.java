@@ -345,13 +345,22 @@ public interface WorkspacePackage extends EPackage {
 	int PROJECT__MEASUREMENTS = STORED_OBJECT_FEATURE_COUNT + 5;
 
 	/**
+	 * The feature id for the '<em><b>Batches</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__BATCHES = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
 	 * The feature id for the '<em><b>Source</b></em>' reference.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT__SOURCE = STORED_OBJECT_FEATURE_COUNT + 6;
+	int PROJECT__SOURCE = STORED_OBJECT_FEATURE_COUNT + 7;
 
 	/**
 	 * The number of structural features of the '<em>Project</em>' class.
@@ -360,7 +369,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 7;
+	int PROJECT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 8;
 
 	/**
 	 * The number of operations of the '<em>Project</em>' class.
@@ -1842,6 +1851,106 @@ public interface WorkspacePackage extends EPackage {
 	int QA_OUTCOME_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.WorkBatchImpl <em>Work Batch</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.WorkBatchImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getWorkBatch()
+	 * @generated
+	 */
+	int WORK_BATCH = 16;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORK_BATCH__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORK_BATCH__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Project</b></em>' container reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORK_BATCH__PROJECT = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Method Version Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORK_BATCH__METHOD_VERSION_ID = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Description</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORK_BATCH__DESCRIPTION = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Unit Count</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORK_BATCH__UNIT_COUNT = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Created By</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORK_BATCH__CREATED_BY = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Created At</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORK_BATCH__CREATED_AT = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The number of structural features of the '<em>Work Batch</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORK_BATCH_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The number of operations of the '<em>Work Batch</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int WORK_BATCH_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.impl.UserImpl <em>User</em>}' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -1849,7 +1958,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getUser()
 	 * @generated
 	 */
-	int USER = 16;
+	int USER = 17;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1931,7 +2040,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAccessLevel()
 	 * @generated
 	 */
-	int ACCESS_LEVEL = 17;
+	int ACCESS_LEVEL = 18;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.MeasurementKind <em>Measurement Kind</em>}' enum.
@@ -1941,7 +2050,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurementKind()
 	 * @generated
 	 */
-	int MEASUREMENT_KIND = 18;
+	int MEASUREMENT_KIND = 19;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.SpectralContent <em>Spectral Content</em>}' enum.
@@ -1951,7 +2060,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectralContent()
 	 * @generated
 	 */
-	int SPECTRAL_CONTENT = 19;
+	int SPECTRAL_CONTENT = 20;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.VersionKind <em>Version Kind</em>}' enum.
@@ -1961,7 +2070,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getVersionKind()
 	 * @generated
 	 */
-	int VERSION_KIND = 20;
+	int VERSION_KIND = 21;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ReferenceOrigin <em>Reference Origin</em>}' enum.
@@ -1971,7 +2080,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceOrigin()
 	 * @generated
 	 */
-	int REFERENCE_ORIGIN = 21;
+	int REFERENCE_ORIGIN = 22;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
@@ -1981,7 +2090,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 22;
+	int RESULT_FLAG = 23;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -1991,7 +2100,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 23;
+	int ROLE = 24;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -2001,7 +2110,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 24;
+	int INSTANT = 25;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -2011,7 +2120,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 25;
+	int SPECTRUM = 26;
 
 	/**
 	 * The meta object id for the '<em>Provenance</em>' data type.
@@ -2021,7 +2130,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
 	 * @generated
 	 */
-	int PROVENANCE = 26;
+	int PROVENANCE = 27;
 
 	/**
 	 * The meta object id for the '<em>Result Conditions</em>' data type.
@@ -2031,7 +2140,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
 	 * @generated
 	 */
-	int RESULT_CONDITIONS = 27;
+	int RESULT_CONDITIONS = 28;
 
 
 	/**
@@ -2260,6 +2369,17 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EReference getProject_Measurements();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link org.tracegas.model.Project#getBatches <em>Batches</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Batches</em>'.
+	 * @see org.tracegas.model.Project#getBatches()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_Batches();
 
 	/**
 	 * Returns the meta object for the reference '{@link org.tracegas.model.Project#getSource <em>Source</em>}'.
@@ -3449,6 +3569,82 @@ public interface WorkspacePackage extends EPackage {
 	EAttribute getQaOutcome_Recorded();
 
 	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.WorkBatch <em>Work Batch</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Work Batch</em>'.
+	 * @see org.tracegas.model.WorkBatch
+	 * @generated
+	 */
+	EClass getWorkBatch();
+
+	/**
+	 * Returns the meta object for the container reference '{@link org.tracegas.model.WorkBatch#getProject <em>Project</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the container reference '<em>Project</em>'.
+	 * @see org.tracegas.model.WorkBatch#getProject()
+	 * @see #getWorkBatch()
+	 * @generated
+	 */
+	EReference getWorkBatch_Project();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.WorkBatch#getMethodVersionId <em>Method Version Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Method Version Id</em>'.
+	 * @see org.tracegas.model.WorkBatch#getMethodVersionId()
+	 * @see #getWorkBatch()
+	 * @generated
+	 */
+	EAttribute getWorkBatch_MethodVersionId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.WorkBatch#getDescription <em>Description</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Description</em>'.
+	 * @see org.tracegas.model.WorkBatch#getDescription()
+	 * @see #getWorkBatch()
+	 * @generated
+	 */
+	EAttribute getWorkBatch_Description();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.WorkBatch#getUnitCount <em>Unit Count</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Unit Count</em>'.
+	 * @see org.tracegas.model.WorkBatch#getUnitCount()
+	 * @see #getWorkBatch()
+	 * @generated
+	 */
+	EAttribute getWorkBatch_UnitCount();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.WorkBatch#getCreatedBy <em>Created By</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Created By</em>'.
+	 * @see org.tracegas.model.WorkBatch#getCreatedBy()
+	 * @see #getWorkBatch()
+	 * @generated
+	 */
+	EAttribute getWorkBatch_CreatedBy();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.WorkBatch#getCreatedAt <em>Created At</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Created At</em>'.
+	 * @see org.tracegas.model.WorkBatch#getCreatedAt()
+	 * @see #getWorkBatch()
+	 * @generated
+	 */
+	EAttribute getWorkBatch_CreatedAt();
+
+	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.User <em>User</em>}'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -3826,6 +4022,14 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EReference PROJECT__MEASUREMENTS = eINSTANCE.getProject_Measurements();
+
+		/**
+		 * The meta object literal for the '<em><b>Batches</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__BATCHES = eINSTANCE.getProject_Batches();
 
 		/**
 		 * The meta object literal for the '<em><b>Source</b></em>' reference feature.
@@ -4722,6 +4926,64 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute QA_OUTCOME__RECORDED = eINSTANCE.getQaOutcome_Recorded();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.WorkBatchImpl <em>Work Batch</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.WorkBatchImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getWorkBatch()
+		 * @generated
+		 */
+		EClass WORK_BATCH = eINSTANCE.getWorkBatch();
+
+		/**
+		 * The meta object literal for the '<em><b>Project</b></em>' container reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference WORK_BATCH__PROJECT = eINSTANCE.getWorkBatch_Project();
+
+		/**
+		 * The meta object literal for the '<em><b>Method Version Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute WORK_BATCH__METHOD_VERSION_ID = eINSTANCE.getWorkBatch_MethodVersionId();
+
+		/**
+		 * The meta object literal for the '<em><b>Description</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute WORK_BATCH__DESCRIPTION = eINSTANCE.getWorkBatch_Description();
+
+		/**
+		 * The meta object literal for the '<em><b>Unit Count</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute WORK_BATCH__UNIT_COUNT = eINSTANCE.getWorkBatch_UnitCount();
+
+		/**
+		 * The meta object literal for the '<em><b>Created By</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute WORK_BATCH__CREATED_BY = eINSTANCE.getWorkBatch_CreatedBy();
+
+		/**
+		 * The meta object literal for the '<em><b>Created At</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute WORK_BATCH__CREATED_AT = eINSTANCE.getWorkBatch_CreatedAt();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.UserImpl <em>User</em>}' class.

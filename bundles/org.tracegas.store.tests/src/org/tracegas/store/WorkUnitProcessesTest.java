@@ -27,6 +27,8 @@ import org.flywaydb.core.Flyway;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditTrail;
+import org.tracegas.model.WorkBatch;
+import org.tracegas.model.WorkBatches;
 import org.tracegas.spectrum.Spectrum;
 
 /**
@@ -47,7 +49,8 @@ class WorkUnitProcessesTest {
     @Test
     void killedRunnerLosesNoUnitAndNoUnitIsStoredTwice() throws Exception {
         try (AnalysisFixture f = new AnalysisFixture(new PostgresBackend())) {
-            WorkBatchInfo batch = f.store.workUnits().createBatch(f.analyst, f.project.getId(), "processes test",
+            WorkBatch batch = f.store.workUnits().createBatch(f.analyst, f.project.getId(),
+                    WorkBatches.of(null, "processes test"),
                     IntStream.range(0, UNITS).mapToObj(i -> "unit-" + i).toList());
             List<Runner> runners = new ArrayList<>();
             for (int r = 0; r < RUNNERS; r++) {
@@ -65,16 +68,16 @@ class WorkUnitProcessesTest {
                 r.reader.join(10_000);
             }
 
-            assertEquals(new BatchProgress(0, 0, UNITS, 0), f.store.workUnits().progress(f.analyst, batch.id()));
+            assertEquals(new BatchProgress(0, 0, UNITS, 0), f.store.workUnits().progress(f.analyst, batch.getId()));
             List<Integer> completed = new ArrayList<>();
             runners.forEach(r -> completed.addAll(r.numbers("completed ")));
             assertEquals(IntStream.range(0, UNITS).boxed().toList(), completed.stream().sorted().toList(),
                     "each unit reported completed exactly once");
             assertTrue(!victim.numbers("completed ").contains(held), "the killed runner never completed " + held);
-            assertEquals(2, attempt(f, batch.id(), held), "unit " + held + " was claimed again after the kill");
+            assertEquals(2, attempt(f, batch.getId(), held), "unit " + held + " was claimed again after the kill");
             for (int seq = 0; seq < UNITS; seq++) {
                 List<Instant> times = new ArrayList<>();
-                for (String id : f.store.workUnits().measurementsOf(f.analyst, batch.id(), seq)) {
+                for (String id : f.store.workUnits().measurementsOf(f.analyst, batch.getId(), seq)) {
                     times.add(time(f, id));
                 }
                 assertEquals(unitTimes(seq), times, "unit " + seq + " holds its own spectra");
@@ -118,13 +121,13 @@ class WorkUnitProcessesTest {
         final Path log;
         private final List<String> lines = Collections.synchronizedList(new ArrayList<>());
 
-        Runner(AnalysisFixture f, WorkBatchInfo batch, String name, Path log) throws Exception {
+        Runner(AnalysisFixture f, WorkBatch batch, String name, Path log) throws Exception {
             this.name = name;
             this.log = log;
             PostgresBackend pg = (PostgresBackend) f.backend;
             process = new ProcessBuilder(Path.of(System.getProperty("java.home"), "bin", "java").toString(), "-cp",
                     childClassPath(), WorkUnitWorkerProcess.class.getName(), pg.url(), pg.user(), pg.password(),
-                    batch.id(), name, Long.toString(LEASE_MILLIS), Long.toString(WORK_MILLIS), f.method.getId(),
+                    batch.getId(), name, Long.toString(LEASE_MILLIS), Long.toString(WORK_MILLIS), f.method.getId(),
                     f.library.getId()).redirectError(log.toFile()).start();
             reader = new Thread(this::read, name + " output");
             reader.start();

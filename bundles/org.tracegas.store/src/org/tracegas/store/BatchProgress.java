@@ -2,6 +2,11 @@ package org.tracegas.store;
 
 /**
  * How far a batch is. A unit whose lease has expired counts as claimed until someone claims it again.
+ * <p>
+ * A value of one moment, not a feature of the model's {@code WorkBatch}: the counts change with every claim and
+ * completion by any runner, so an object holding them would be stale as soon as it was read, and runners read
+ * them in their polling loop, where a small immutable value is all they need. The store counts them from the
+ * units' rows each time it is asked.
  *
  * @param open    units no runner has claimed (or that were released)
  * @param claimed units held by a runner

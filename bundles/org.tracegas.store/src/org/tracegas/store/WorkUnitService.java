@@ -4,6 +4,8 @@ import java.time.Duration;
 import java.util.List;
 import java.util.Optional;
 
+import org.tracegas.model.WorkBatch;
+
 /**
  * Batches of work shared by several runner processes on one database. A batch is split into units (e.g. one
  * container file each); a runner claims the next unit under a lease, renews the lease while it works and
@@ -25,8 +27,8 @@ import java.util.Optional;
  * units are all done or failed is finished; it is complete only without failed units.
  * <p>
  * Every change (batch creation, claim, renewal, release, completion, failure) writes an audit record in its own
- * transaction. Changes need write access to the batch's project, reads ({@link #batch}, {@link #progress},
- * {@link #unfinishedBatch}, {@link #measurementsOf}) read access.
+ * transaction. Changes need write access to the batch's project, reads ({@link #batch}, {@link #batches},
+ * {@link #progress}, {@link #unfinishedBatch}, {@link #measurementsOf}) read access.
  */
 public interface WorkUnitService {
 
@@ -34,38 +36,35 @@ public interface WorkUnitService {
     int MAX_TEXT_LENGTH = 4000;
 
     /**
-     * Creates a batch of work not tied to a method version, with one unit per payload, numbered from 0 in the
-     * given order. Such batches do not exclude one another.
-     *
-     * @param payloads what each unit processes (e.g. file paths), at least one, none blank
-     * @throws IllegalArgumentException naming the blank or too long {@code payloads[i]} or description
-     */
-    WorkBatchInfo createBatch(Session actor, String projectId, String description, List<String> payloads);
-
-    /**
-     * Creates a batch that quantifies the payloads with a METHOD version, as {@link #createBatch(Session, String,
-     * String, List)} does, unless the project has an unfinished batch of the same method version.
+     * Creates a batch of the project's work with one unit per payload, numbered from 0 in the given order. The
+     * given batch names the description and, for a batch that quantifies, the METHOD version; the store sets id,
+     * unit count, creating user and time on the batch it creates, which it returns in its project (as
+     * {@link ProjectService#project} reads it). The given batch is not changed.
      * <p>
-     * A project holds one set of results per method version, so a second batch of that version would store the
-     * same samples again whatever its files (and file names are no reliable identity: one file may be given
-     * under two paths). The check and the creation are one transaction holding the project row's lock, so of two
-     * runners creating such batches at once exactly one succeeds.
+     * A batch without method version (other work) excludes no other batch. One with a method version is refused
+     * if the project has an unfinished batch of that version: a project holds one set of results per method
+     * version, so a second batch of that version would store the same samples again whatever its files (and file
+     * names are no reliable identity: one file may be given under two paths). The check and the creation are one
+     * transaction holding the project row's lock, so of two runners creating such batches at once exactly one
+     * succeeds.
      *
-     * @param methodVersionId an existing METHOD version
+     * @param batch    the new batch's description and method version (null for other work), as
+     *                 {@link WorkBatchChecks#requireNew} checks them
+     * @param payloads what each unit processes (e.g. file paths), at least one, none blank
      * @throws UnfinishedBatchException  naming the unfinished batch of the project and method version
-     * @throws NoSuchObjectException     if there is no such METHOD version
-     * @throws IllegalArgumentException  naming the blank or too long {@code payloads[i]} or description
+     * @throws NoSuchObjectException     if the method version is no METHOD version
+     * @throws IllegalArgumentException  naming the blank or too long {@code payloads[i]}, description or method
+     *                                   version id; nothing is written then
      */
-    WorkBatchInfo createBatch(Session actor, String projectId, String methodVersionId, String description,
-            List<String> payloads);
+    WorkBatch createBatch(Session actor, String projectId, WorkBatch batch, List<String> payloads);
 
     /**
      * The oldest batch of the project and METHOD version that still has open or claimed units. Needs read access
      * to the project.
      *
-     * @return the batch, or empty when every such batch is finished (its units done or failed) or there is none
+     * @return the batch in its project, or empty when every such batch is finished (its units done or failed) or there is none
      */
-    Optional<WorkBatchInfo> unfinishedBatch(Session actor, String projectId, String methodVersionId);
+    Optional<WorkBatch> unfinishedBatch(Session actor, String projectId, String methodVersionId);
 
     /**
      * Claims the next open unit of the batch, or one whose lease has expired, for {@code lease} from now.
@@ -116,12 +115,20 @@ public interface WorkUnitService {
     List<StoredMeasurement> complete(Session actor, WorkUnitLease lease, List<ProcessedSpectrum> block);
 
     /**
-     * The batch as it was created, so that a runner joining it finds what its units are to be processed with.
-     * Needs read access to the batch's project.
+     * The batch as it was created, in its project, so that a runner joining it finds what its units are to be
+     * processed with. Needs read access to the batch's project.
      *
      * @throws NoSuchObjectException if there is no such batch
      */
-    WorkBatchInfo batch(Session actor, String batchId);
+    WorkBatch batch(Session actor, String batchId);
+
+    /**
+     * The project's batches, oldest first, in the project (as {@link ProjectService#project} reads it), so that a
+     * reviewer sees which batches stored its results, with what method version, by whom and when.
+     *
+     * @throws AccessDeniedException without read access to the project
+     */
+    List<WorkBatch> batches(Session actor, String projectId);
 
     /** Counts of the batch's units by state. */
     BatchProgress progress(Session actor, String batchId);

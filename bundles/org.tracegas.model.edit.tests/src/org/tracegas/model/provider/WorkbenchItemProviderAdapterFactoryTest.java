@@ -28,6 +28,7 @@ import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.ReferenceOrigin;
 import org.tracegas.model.ReferenceSpectrum;
 import org.tracegas.model.Site;
+import org.tracegas.model.WorkBatch;
 import org.tracegas.model.WorkspaceFactory;
 
 /**
@@ -246,5 +247,32 @@ class WorkbenchItemProviderAdapterFactoryTest {
             shown.put(d.getDisplayName(o), value instanceof IItemPropertySource w ? w.getEditableValue(value) : value);
         }
         return shown;
+    }
+
+    @Test
+    void aProjectsWorkBatchIsNamedByItsUnitsAndStartAndItsPropertiesSayWhoStartedItWithWhichVersion() {
+        Project p = campaign();
+        WorkBatch batch = model.createWorkBatch();
+        batch.setId("b-0714");
+        batch.setMethodVersionId("v-kiln-2");
+        batch.setDescription("morning container files");
+        batch.setUnitCount(12);
+        batch.setCreatedBy("u-analyst");
+        batch.setCreatedAt(Instant.parse("2026-07-14T09:05:00Z"));
+        p.getBatches().add(batch);
+        WorkBatch single = model.createWorkBatch();
+        single.setUnitCount(1);
+        p.getBatches().add(single);
+
+        assertEquals("work batch of 12 units  2026-07-14 09:05:00 UTC", text(batch));
+        assertEquals("work batch of 1 unit  time unknown", text(single));
+        ITreeItemContentProvider projects = (ITreeItemContentProvider) factory.adapt(p, ITreeItemContentProvider.class);
+        assertEquals(List.of(batch, single), List.copyOf(projects.getChildren(p)));
+        Map<String, String> shown = properties(batch);
+        assertEquals("v-kiln-2", shown.get("Method version id"));
+        assertEquals("morning container files", shown.get("Description"));
+        assertEquals("12", shown.get("Work units"));
+        assertEquals("u-analyst", shown.get("Created by (user id)"));
+        assertEquals("2026-07-14T09:05:00Z", shown.get("Created (UTC)"));
     }
 }

@@ -417,6 +417,29 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.WorkBatch} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected WorkBatchItemProvider workBatchItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.WorkBatch}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createWorkBatchAdapter() {
+		if (workBatchItemProvider == null) {
+			workBatchItemProvider = new WorkBatchItemProvider(this);
+		}
+
+		return workBatchItemProvider;
+	}
+
+	/**
 	 * This keeps track of the one adapter used for all {@link org.tracegas.model.User} instances.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -559,6 +582,7 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 		if (analysisRegionItemProvider != null) analysisRegionItemProvider.dispose();
 		if (resultItemProvider != null) resultItemProvider.dispose();
 		if (qaOutcomeItemProvider != null) qaOutcomeItemProvider.dispose();
+		if (workBatchItemProvider != null) workBatchItemProvider.dispose();
 		if (userItemProvider != null) userItemProvider.dispose();
 	}
 

@@ -19,13 +19,14 @@ import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.ReferenceOrigin;
 import org.tracegas.model.ReferenceSpectrum;
 import org.tracegas.model.Site;
+import org.tracegas.model.WorkBatch;
 
 /**
  * The generated item providers with the labels the workbench shows: a client, a site and an emission source by
  * their names, a campaign by its code, name and measurement count, a measurement by its kind and start (UTC),
  * an instrument by its name and serial number, a reference spectrum by its compound and amount (and whether it
- * was computed), a method version by its number and whether results use it. The generated labels put the
- * type's name first ("Client Eastfield Cement"),
+ * was computed), a method version by its number and whether results use it, a work batch by its unit count and
+ * when it was created (UTC). The generated labels put the type's name first ("Client Eastfield Cement"),
  * which the tree's structure already says; the generated code stays as the genmodel makes it, so the labels
  * are given here, by overriding only {@code getText} of the generated providers.
  */
@@ -186,6 +187,22 @@ public class WorkbenchItemProviderAdapterFactory extends WorkspaceItemProviderAd
             };
         }
         return analysisRegionItemProvider;
+    }
+
+    @Override
+    public Adapter createWorkBatchAdapter() {
+        if (workBatchItemProvider == null) {
+            workBatchItemProvider = new WorkBatchItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    WorkBatch b = (WorkBatch) object;
+                    // the description is the creating command's multi-line text: the properties show it
+                    return "work batch of " + b.getUnitCount() + (b.getUnitCount() == 1 ? " unit  " : " units  ")
+                            + time(b.getCreatedAt());
+                }
+            };
+        }
+        return workBatchItemProvider;
     }
 
     /** A measurement's kind as the properties show it too (plugin.properties: "calibration transfer standard"). */

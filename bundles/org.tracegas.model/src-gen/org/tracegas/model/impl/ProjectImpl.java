@@ -24,6 +24,7 @@ import org.tracegas.model.Client;
 import org.tracegas.model.EmissionSource;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
+import org.tracegas.model.WorkBatch;
 import org.tracegas.model.WorkspacePackage;
 
 /**
@@ -40,6 +41,7 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getEnd <em>End</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getMeasurements <em>Measurements</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ProjectImpl#getBatches <em>Batches</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getSource <em>Source</em>}</li>
  * </ul>
  *
@@ -135,6 +137,16 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @ordered
 	 */
 	protected EList<Measurement> measurements;
+
+	/**
+	 * The cached value of the '{@link #getBatches() <em>Batches</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getBatches()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<WorkBatch> batches;
 
 	/**
 	 * The cached value of the '{@link #getSource() <em>Source</em>}' reference.
@@ -319,6 +331,19 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @generated
 	 */
 	@Override
+	public EList<WorkBatch> getBatches() {
+		if (batches == null) {
+			batches = new EObjectContainmentWithInverseEList<WorkBatch>(WorkBatch.class, this, WorkspacePackage.PROJECT__BATCHES, WorkspacePackage.WORK_BATCH__PROJECT);
+		}
+		return batches;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EmissionSource getSource() {
 		if (source != null && source.eIsProxy()) {
 			InternalEObject oldSource = (InternalEObject)source;
@@ -368,6 +393,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return basicSetClient((Client)otherEnd, msgs);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return ((InternalEList<InternalEObject>)(InternalEList<?>)getMeasurements()).basicAdd(otherEnd, msgs);
+			case WorkspacePackage.PROJECT__BATCHES:
+				return ((InternalEList<InternalEObject>)(InternalEList<?>)getBatches()).basicAdd(otherEnd, msgs);
 		}
 		return super.eInverseAdd(otherEnd, featureID, msgs);
 	}
@@ -384,6 +411,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return basicSetClient(null, msgs);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return ((InternalEList<?>)getMeasurements()).basicRemove(otherEnd, msgs);
+			case WorkspacePackage.PROJECT__BATCHES:
+				return ((InternalEList<?>)getBatches()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -422,6 +451,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return getEnd();
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return getMeasurements();
+			case WorkspacePackage.PROJECT__BATCHES:
+				return getBatches();
 			case WorkspacePackage.PROJECT__SOURCE:
 				if (resolve) return getSource();
 				return basicGetSource();
@@ -457,6 +488,10 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				getMeasurements().clear();
 				getMeasurements().addAll((Collection<? extends Measurement>)newValue);
 				return;
+			case WorkspacePackage.PROJECT__BATCHES:
+				getBatches().clear();
+				getBatches().addAll((Collection<? extends WorkBatch>)newValue);
+				return;
 			case WorkspacePackage.PROJECT__SOURCE:
 				setSource((EmissionSource)newValue);
 				return;
@@ -490,6 +525,9 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				getMeasurements().clear();
 				return;
+			case WorkspacePackage.PROJECT__BATCHES:
+				getBatches().clear();
+				return;
 			case WorkspacePackage.PROJECT__SOURCE:
 				setSource((EmissionSource)null);
 				return;
@@ -517,6 +555,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return END_EDEFAULT == null ? end != null : !END_EDEFAULT.equals(end);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return measurements != null && !measurements.isEmpty();
+			case WorkspacePackage.PROJECT__BATCHES:
+				return batches != null && !batches.isEmpty();
 			case WorkspacePackage.PROJECT__SOURCE:
 				return source != null;
 		}

@@ -74,6 +74,7 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 			case WorkspacePackage.ANALYSIS_REGION: return createAnalysisRegion();
 			case WorkspacePackage.RESULT: return createResult();
 			case WorkspacePackage.QA_OUTCOME: return createQaOutcome();
+			case WorkspacePackage.WORK_BATCH: return createWorkBatch();
 			case WorkspacePackage.USER: return createUser();
 			default:
 				throw new IllegalArgumentException("The class '" + eClass.getName() + "' is not a valid classifier");
@@ -301,6 +302,17 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	public QaOutcome createQaOutcome() {
 		QaOutcomeImpl qaOutcome = new QaOutcomeImpl();
 		return qaOutcome;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public WorkBatch createWorkBatch() {
+		WorkBatchImpl workBatch = new WorkBatchImpl();
+		return workBatch;
 	}
 
 	/**

@@ -38,6 +38,7 @@ import org.tracegas.model.SpectralContent;
 import org.tracegas.model.StoredObject;
 import org.tracegas.model.User;
 import org.tracegas.model.VersionKind;
+import org.tracegas.model.WorkBatch;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.model.WorkspacePackage;
@@ -162,6 +163,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EClass qaOutcomeEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass workBatchEClass = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -523,8 +531,18 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EReference getProject_Source() {
+	public EReference getProject_Batches() {
 		return (EReference)projectEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getProject_Source() {
+		return (EReference)projectEClass.getEStructuralFeatures().get(7);
 	}
 
 	/**
@@ -1613,6 +1631,76 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EClass getWorkBatch() {
+		return workBatchEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getWorkBatch_Project() {
+		return (EReference)workBatchEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getWorkBatch_MethodVersionId() {
+		return (EAttribute)workBatchEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getWorkBatch_Description() {
+		return (EAttribute)workBatchEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getWorkBatch_UnitCount() {
+		return (EAttribute)workBatchEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getWorkBatch_CreatedBy() {
+		return (EAttribute)workBatchEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getWorkBatch_CreatedAt() {
+		return (EAttribute)workBatchEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getUser() {
 		return userEClass;
 	}
@@ -1820,6 +1908,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(projectEClass, PROJECT__START);
 		createEAttribute(projectEClass, PROJECT__END);
 		createEReference(projectEClass, PROJECT__MEASUREMENTS);
+		createEReference(projectEClass, PROJECT__BATCHES);
 		createEReference(projectEClass, PROJECT__SOURCE);
 
 		siteEClass = createEClass(SITE);
@@ -1942,6 +2031,14 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(qaOutcomeEClass, QA_OUTCOME__RECORDED_BY);
 		createEAttribute(qaOutcomeEClass, QA_OUTCOME__RECORDED);
 
+		workBatchEClass = createEClass(WORK_BATCH);
+		createEReference(workBatchEClass, WORK_BATCH__PROJECT);
+		createEAttribute(workBatchEClass, WORK_BATCH__METHOD_VERSION_ID);
+		createEAttribute(workBatchEClass, WORK_BATCH__DESCRIPTION);
+		createEAttribute(workBatchEClass, WORK_BATCH__UNIT_COUNT);
+		createEAttribute(workBatchEClass, WORK_BATCH__CREATED_BY);
+		createEAttribute(workBatchEClass, WORK_BATCH__CREATED_AT);
+
 		userEClass = createEClass(USER);
 		createEAttribute(userEClass, USER__LOGIN);
 		createEAttribute(userEClass, USER__DISPLAY_NAME);
@@ -2004,6 +2101,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		methodVersionEClass.getESuperTypes().add(this.getContentVersion());
 		resultEClass.getESuperTypes().add(this.getStoredObject());
 		qaOutcomeEClass.getESuperTypes().add(this.getStoredObject());
+		workBatchEClass.getESuperTypes().add(this.getStoredObject());
 		userEClass.getESuperTypes().add(this.getStoredObject());
 
 		// Initialize classes, features, and operations; add parameters
@@ -2031,6 +2129,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getProject_Start(), this.getInstant(), "start", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getProject_End(), this.getInstant(), "end", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_Measurements(), this.getMeasurement(), this.getMeasurement_Project(), "measurements", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getProject_Batches(), this.getWorkBatch(), this.getWorkBatch_Project(), "batches", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_Source(), this.getEmissionSource(), null, "source", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(siteEClass, Site.class, "Site", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
@@ -2152,6 +2251,14 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getQaOutcome_Source(), ecorePackage.getEString(), "source", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getQaOutcome_RecordedBy(), ecorePackage.getEString(), "recordedBy", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getQaOutcome_Recorded(), this.getInstant(), "recorded", null, 0, 1, QaOutcome.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(workBatchEClass, WorkBatch.class, "WorkBatch", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEReference(getWorkBatch_Project(), this.getProject(), this.getProject_Batches(), "project", null, 0, 1, WorkBatch.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getWorkBatch_MethodVersionId(), ecorePackage.getEString(), "methodVersionId", null, 0, 1, WorkBatch.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getWorkBatch_Description(), ecorePackage.getEString(), "description", null, 0, 1, WorkBatch.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getWorkBatch_UnitCount(), ecorePackage.getEInt(), "unitCount", null, 0, 1, WorkBatch.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getWorkBatch_CreatedBy(), ecorePackage.getEString(), "createdBy", null, 0, 1, WorkBatch.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getWorkBatch_CreatedAt(), this.getInstant(), "createdAt", null, 0, 1, WorkBatch.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(userEClass, User.class, "User", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getUser_Login(), ecorePackage.getEString(), "login", null, 0, 1, User.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);

@@ -132,6 +132,10 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 				return createQaOutcomeAdapter();
 			}
 			@Override
+			public Adapter caseWorkBatch(WorkBatch object) {
+				return createWorkBatchAdapter();
+			}
+			@Override
 			public Adapter caseUser(User object) {
 				return createUserAdapter();
 			}
@@ -376,6 +380,20 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createQaOutcomeAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.WorkBatch <em>Work Batch</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.WorkBatch
+	 * @generated
+	 */
+	public Adapter createWorkBatchAdapter() {
 		return null;
 	}
 

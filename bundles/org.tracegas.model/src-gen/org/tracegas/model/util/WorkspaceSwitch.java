@@ -175,6 +175,13 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
+			case WorkspacePackage.WORK_BATCH: {
+				WorkBatch workBatch = (WorkBatch)theEObject;
+				T result = caseWorkBatch(workBatch);
+				if (result == null) result = caseStoredObject(workBatch);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
 			case WorkspacePackage.USER: {
 				User user = (User)theEObject;
 				T result = caseUser(user);
@@ -423,6 +430,21 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseQaOutcome(QaOutcome object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Work Batch</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Work Batch</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseWorkBatch(WorkBatch object) {
 		return null;
 	}
 

@@ -28,6 +28,8 @@ import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
 import org.tracegas.model.Results;
 import org.tracegas.model.Role;
+import org.tracegas.model.WorkBatch;
+import org.tracegas.model.WorkBatches;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
@@ -38,7 +40,6 @@ import org.tracegas.store.FailedUnit;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.Session;
-import org.tracegas.store.WorkBatchInfo;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.Workspaces;
 
@@ -92,18 +93,18 @@ class WorkUnitWorkerTest {
         return block;
     }
 
-    private WorkBatchInfo batch(int units) {
-        return store.workUnits().createBatch(analyst, project.getId(), "test batch",
+    private WorkBatch batch(int units) {
+        return store.workUnits().createBatch(analyst, project.getId(), WorkBatches.of(null, "test batch"),
                 IntStream.range(0, units).mapToObj(Integer::toString).toList());
     }
 
-    private WorkUnitWorker worker(WorkBatchInfo batch, String runner, UnitProcessor processor) {
-        return new WorkUnitWorker(store, analyst, batch.id(), runner, LEASE, POLL, processor);
+    private WorkUnitWorker worker(WorkBatch batch, String runner, UnitProcessor processor) {
+        return new WorkUnitWorker(store, analyst, batch.getId(), runner, LEASE, POLL, processor);
     }
 
     @Test
     void threeWorkersShareABatchAndStoreEachUnitOnce() throws Exception {
-        WorkBatchInfo batch = batch(9);
+        WorkBatch batch = batch(9);
         List<Integer> done = Collections.synchronizedList(new ArrayList<>());
         ExecutorService pool = Executors.newFixedThreadPool(3);
         List<Future<WorkerOutcome>> outcomes = new ArrayList<>();
@@ -125,7 +126,7 @@ class WorkUnitWorkerTest {
             pool.shutdownNow();
         }
         assertEquals(IntStream.range(0, 9).boxed().toList(), done.stream().sorted().toList());
-        assertEquals(new BatchProgress(0, 0, 9, 0), store.workUnits().progress(analyst, batch.id()));
+        assertEquals(new BatchProgress(0, 0, 9, 0), store.workUnits().progress(analyst, batch.getId()));
         List<Instant> times = store.projects().measurements(analyst,
                 project.getId()).stream().map(m -> m.getTime()).toList();
         assertEquals(IntStream.range(0, 18).mapToObj(m -> Instant.EPOCH.plusSeconds(60L * m)).toList(), times);
@@ -134,11 +135,11 @@ class WorkUnitWorkerTest {
 
     @Test
     void processingLongerThanTheLeaseKeepsTheUnitByRenewal() throws Exception {
-        WorkBatchInfo batch = batch(1);
+        WorkBatch batch = batch(1);
         WorkerOutcome outcome = worker(batch, "runner-a", (payload, cancel) -> {
             Thread.sleep(4 * LEASE.toMillis());
             // a second runner finds nothing claimable meanwhile: the lease was renewed
-            assertTrue(store.workUnits().claim(analyst, batch.id(), "runner-b", LEASE).isEmpty());
+            assertTrue(store.workUnits().claim(analyst, batch.getId(), "runner-b", LEASE).isEmpty());
             return block(payload);
         }).run(UnitListener.NONE, new CancellationFlag());
         assertEquals(new WorkerOutcome(1, 0, 0, false), outcome);
@@ -146,7 +147,7 @@ class WorkUnitWorkerTest {
 
     @Test
     void stoppedWorkerGivesItsUnitBackUnstored() throws Exception {
-        WorkBatchInfo batch = batch(3);
+        WorkBatch batch = batch(3);
         CancellationFlag stop = new CancellationFlag();
         WorkerOutcome outcome = worker(batch, "runner-a", (payload, cancel) -> {
             if (payload.equals("1")) {
@@ -161,17 +162,17 @@ class WorkUnitWorkerTest {
         }).run(UnitListener.NONE, stop);
 
         assertEquals(new WorkerOutcome(1, 0, 0, true), outcome);
-        assertEquals(new BatchProgress(2, 0, 1, 0), store.workUnits().progress(analyst, batch.id()),
+        assertEquals(new BatchProgress(2, 0, 1, 0), store.workUnits().progress(analyst, batch.getId()),
                 "unit 1 is open again at once");
         assertEquals(2, store.projects().measurements(analyst, project.getId()).size());
     }
 
     @Test
     void unitTakenOverByAnotherRunnerIsDroppedNotStored() throws Exception {
-        WorkBatchInfo batch = batch(2);
+        WorkBatch batch = batch(2);
         WorkerOutcome outcome = worker(batch, "runner-a", (payload, cancel) -> {
             if (payload.equals("0")) {
-                takeOver(batch.id(), 0); // as if the lease had expired and runner-b had claimed unit 0
+                takeOver(batch.getId(), 0); // as if the lease had expired and runner-b had claimed unit 0
                 long end = System.currentTimeMillis() + 5000;
                 while (!cancel.isCancelled() && System.currentTimeMillis() < end) {
                     Thread.sleep(10);
@@ -183,13 +184,13 @@ class WorkUnitWorkerTest {
 
         assertEquals(1, outcome.lost());
         assertEquals(1, outcome.completed());
-        assertEquals(List.of(), store.workUnits().measurementsOf(analyst, batch.id(), 0));
-        assertEquals(2, store.workUnits().measurementsOf(analyst, batch.id(), 1).size());
+        assertEquals(List.of(), store.workUnits().measurementsOf(analyst, batch.getId(), 0));
+        assertEquals(2, store.workUnits().measurementsOf(analyst, batch.getId(), 1).size());
     }
 
     @Test
     void unitWhosePayloadAlwaysFailsIsMarkedFailedAndTheOthersAreWorked() throws Exception {
-        WorkBatchInfo batch = batch(4);
+        WorkBatch batch = batch(4);
         List<String> tried = Collections.synchronizedList(new ArrayList<>());
         UnitProcessor processor = (payload, cancel) -> {
             tried.add(payload);
@@ -204,23 +205,23 @@ class WorkUnitWorkerTest {
         assertEquals(new WorkerOutcome(3, 0, 1, false), first);
         assertEquals(new WorkerOutcome(0, 0, 0, false), second, "the failed unit is not tried again");
         assertEquals(List.of("0", "1", "2", "3"), tried);
-        BatchProgress progress = store.workUnits().progress(analyst, batch.id());
+        BatchProgress progress = store.workUnits().progress(analyst, batch.getId());
         assertEquals(new BatchProgress(0, 0, 3, 1), progress);
         assertTrue(progress.finished());
         assertFalse(progress.complete());
         assertEquals(List.of(new FailedUnit(1, "1", "file 1 is truncated")),
-                store.workUnits().failures(analyst, batch.id()));
+                store.workUnits().failures(analyst, batch.getId()));
         assertEquals(6, store.projects().measurements(analyst, project.getId()).size());
         assertTrue(store.verifyAuditTrail().intact());
     }
 
     /** The batch never finishes (unit 0 is held by a runner that does not exist), so the test stops the worker. */
-    private CancellationFlag stopWhenOnlyTheTakenUnitIsLeft(WorkBatchInfo batch) {
+    private CancellationFlag stopWhenOnlyTheTakenUnitIsLeft(WorkBatch batch) {
         CancellationFlag stop = new CancellationFlag();
         Thread watcher = new Thread(() -> {
             long end = System.currentTimeMillis() + 20_000;
             while (System.currentTimeMillis() < end
-                    && store.workUnits().progress(analyst, batch.id()).done() < 1) {
+                    && store.workUnits().progress(analyst, batch.getId()).done() < 1) {
                 sleepQuietly();
             }
             stop.cancel();

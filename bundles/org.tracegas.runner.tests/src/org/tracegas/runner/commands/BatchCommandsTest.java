@@ -64,7 +64,17 @@ class BatchCommandsTest {
                 "0.2");
         assertTrue(worked.contains("complete: " + FILES + " units") && worked.contains("completed " + FILES),
                 worked);
-        assertTrue(campaign.ok("batch-status", "--as", "ana", "--batch", batchId).contains(FILES + " done, 0 failed: complete"));
+        String status = campaign.ok("batch-status", "--as", "ana", "--batch", batchId);
+        assertTrue(status.contains(FILES + " done, 0 failed: complete"), status);
+        try (WorkspaceStore store = Workspaces.openH2(ws.resolve("db"))) {
+            // who started the batch and the version its results name, as a reviewer traces them
+            Session ana = store.users().logIn("ana", BatchCampaign.PASSWORD.toCharArray());
+            String projectId = store.projects().findByCode(ana, "B").orElseThrow().getId();
+            String version = store.results().results(ana, projectId).get(0).getProvenance().methodVersionId();
+            Instant created = store.workUnits().batch(ana, batchId).getCreatedAt();
+            assertTrue(status.contains("created " + created + " by user " + ana.userId() + ", method version "
+                    + version), status);
+        }
         ByteArrayOutputStream err = new ByteArrayOutputStream();
         assertEquals(ExitCode.BAD_INPUT, campaign.run(new ByteArrayOutputStream(), err, "batch-split",
                 campaign.quantification("B", campaign.stackFiles)), "a second batch would repeat the results");

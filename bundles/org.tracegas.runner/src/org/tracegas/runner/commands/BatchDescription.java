@@ -5,7 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.OptionalDouble;
 
-import org.tracegas.store.WorkBatchInfo;
+import org.tracegas.model.WorkBatch;
 
 /**
  * What every runner of a quantification batch works with, kept as the batch's description: the project, the
@@ -48,9 +48,9 @@ record BatchDescription(String projectId, String methodVersionId, List<Path> bac
      *
      * @throws BadInputException naming the batch and the line at fault, e.g. for a batch recorded otherwise
      */
-    static BatchDescription of(WorkBatchInfo batch) throws BadInputException {
-        String where = "work batch " + batch.id() + " description";
-        List<String> lines = batch.description().lines().toList();
+    static BatchDescription of(WorkBatch batch) throws BadInputException {
+        String where = "work batch " + batch.getId() + " description";
+        List<String> lines = batch.getDescription().lines().toList();
         if (lines.isEmpty() || !lines.get(0).equals(FORMAT)) {
             throw new BadInputException(where + " line 1: expected '" + FORMAT
                     + "'; the batch was not recorded by batch-split");
@@ -76,9 +76,9 @@ record BatchDescription(String projectId, String methodVersionId, List<Path> bac
         if (project == null || version == null || backgrounds.isEmpty()) {
             throw new BadInputException(where + ": project, method-version and at least one background are needed");
         }
-        if (!project.equals(batch.projectId())) {
+        if (!project.equals(batch.getProject().getId())) {
             throw new BadInputException(where + ": project " + project + " is not the batch's project "
-                    + batch.projectId());
+                    + batch.getProject().getId());
         }
         return new BatchDescription(project, version, backgrounds, ctsPath);
     }

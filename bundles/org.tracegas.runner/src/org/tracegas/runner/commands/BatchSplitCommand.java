@@ -5,12 +5,13 @@ import java.util.List;
 
 import org.tracegas.pipeline.ProjectQuantification;
 import org.tracegas.model.Project;
+import org.tracegas.model.WorkBatch;
+import org.tracegas.model.WorkBatches;
 import org.tracegas.runner.Command;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.runner.RunnerContext;
 import org.tracegas.store.Session;
 import org.tracegas.store.UnfinishedBatchException;
-import org.tracegas.store.WorkBatchInfo;
 import org.tracegas.store.WorkUnitService;
 import org.tracegas.store.WorkspaceStore;
 
@@ -68,18 +69,19 @@ public final class BatchSplitCommand implements Command {
                 context.err().println("tracegas batch-split: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
-            WorkBatchInfo batch;
+            WorkBatch batch;
             try {
-                batch = store.workUnits().createBatch(actor, project.getId(), checked.found().version().getId(),
-                        description, arguments.files().stream().map(Path::toString).toList());
+                batch = store.workUnits().createBatch(actor, project.getId(),
+                        WorkBatches.of(checked.found().version().getId(), description),
+                        arguments.files().stream().map(Path::toString).toList());
             } catch (UnfinishedBatchException e) {
                 // another runner recorded its batch between the check and now
                 context.err().println("tracegas batch-split: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
-            context.out().println(batch.id());
+            context.out().println(batch.getId());
             context.err().printf("Recorded batch %s: %d work units with %d samples of project %s, method '%s' "
-                    + "version %d%n", batch.id(), batch.unitCount(), checked.inputs().samples(), project.getCode(),
+                    + "version %d%n", batch.getId(), batch.getUnitCount(), checked.inputs().samples(), project.getCode(),
                     checked.found().method().method().name(), checked.found().version().getNumber());
             return ExitCode.OK;
         }

@@ -11,6 +11,7 @@ import org.tracegas.pipeline.StackProcessor;
 import org.tracegas.pipeline.shared.WorkUnitWorker;
 import org.tracegas.pipeline.shared.WorkerOutcome;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.model.WorkBatch;
 import org.tracegas.preprocess.Background;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.Command;
@@ -20,7 +21,6 @@ import org.tracegas.runner.UsageException;
 import org.tracegas.store.BatchProgress;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.Session;
-import org.tracegas.store.WorkBatchInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -83,24 +83,24 @@ public final class BatchWorkCommand implements Command {
         Duration idlePoll = options.seconds("--idle-poll", DEFAULT_IDLE_POLL);
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
-            WorkBatchInfo batch = batch(store, actor, options);
+            WorkBatch batch = batch(store, actor, options);
             StackProcessor stack;
             try {
                 BatchDescription description = BatchDescription.of(batch);
                 StoredMethods.Found found = StoredMethods.byId(store, description.methodVersionId());
                 List<Background> backgrounds = SampleInputs.backgrounds(found.method(), description.backgrounds());
                 stack = new QuantificationSetup(found.version(), found.method(), backgrounds, StoredMethods.SOFTWARE,
-                        description.ctsPathM()).processor(store, actor, batch.projectId());
+                        description.ctsPathM()).processor(store, actor, batch.getProject().getId());
             } catch (BadInputException | FileFormatException | IllegalArgumentException e) {
                 // an IllegalArgumentException: the batch lacks the CTS path its method needs, or has one it does not, or
                 // its method has [recipe] steps, which a stream of containers does not run
-                context.err().println("tracegas batch-work: batch " + batch.id() + ": " + e.getMessage());
+                context.err().println("tracegas batch-work: batch " + batch.getId() + ": " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
             String runner = runnerId();
-            WorkUnitWorker worker = new WorkUnitWorker(store, actor, batch.id(), runner, lease, idlePoll,
+            WorkUnitWorker worker = new WorkUnitWorker(store, actor, batch.getId(), runner, lease, idlePoll,
                     (payload, stop) -> stack.process(List.of(Path.of(payload)), stop));
-            context.progress().begin("batch " + batch.id() + " units done");
+            context.progress().begin("batch " + batch.getId() + " units done");
             WorkerOutcome outcome = worker.run((unit, spectra, progress) -> context.progress().update(progress.done(),
                     progress.total()), cancel != null ? cancel : context.cancellation());
             if (outcome.cancelled()) {
@@ -108,22 +108,22 @@ public final class BatchWorkCommand implements Command {
                         + outcome.completed() + " units");
                 return ExitCode.CANCELLED;
             }
-            BatchProgress done = store.workUnits().progress(actor, batch.id());
+            BatchProgress done = store.workUnits().progress(actor, batch.getId());
             if (!done.complete()) {
                 context.err().printf("tracegas batch-work: batch %s finished with %d of %d files failed; runner %s"
-                        + " completed %d units and failed %d%n", batch.id(), done.failed(), done.total(), runner,
+                        + " completed %d units and failed %d%n", batch.getId(), done.failed(), done.total(), runner,
                         outcome.completed(), outcome.failed());
-                BatchStatusCommand.listFailures(store, actor, batch.id(), context.err());
+                BatchStatusCommand.listFailures(store, actor, batch.getId(), context.err());
                 return ExitCode.BAD_INPUT;
             }
-            context.out().printf("Batch %s complete: %d units; runner %s completed %d of them%n", batch.id(),
+            context.out().printf("Batch %s complete: %d units; runner %s completed %d of them%n", batch.getId(),
                     done.total(), runner, outcome.completed());
             return ExitCode.OK;
         }
     }
 
     /** The batch --batch names. */
-    static WorkBatchInfo batch(WorkspaceStore store, Session actor, Options options) throws UsageException {
+    static WorkBatch batch(WorkspaceStore store, Session actor, Options options) throws UsageException {
         String id = options.text("--batch");
         try {
             return store.workUnits().batch(actor, id);

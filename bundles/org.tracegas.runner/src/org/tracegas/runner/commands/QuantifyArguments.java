@@ -17,10 +17,10 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.qa.basis.PathOrigin;
 import org.tracegas.model.Project;
+import org.tracegas.model.WorkBatch;
 import org.tracegas.runner.UsageException;
 import org.tracegas.store.BatchProgress;
 import org.tracegas.store.Session;
-import org.tracegas.store.WorkBatchInfo;
 import org.tracegas.store.WorkspaceStore;
 
 /**
@@ -64,10 +64,10 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
             throw new BadInputException("method version " + found.version().getNumber() + ": " + e.getMessage()
                     + "; nothing done", e);
         }
-        Optional<WorkBatchInfo> unfinished = store.workUnits().unfinishedBatch(actor, project.getId(),
+        Optional<WorkBatch> unfinished = store.workUnits().unfinishedBatch(actor, project.getId(),
                 found.version().getId());
         if (unfinished.isPresent()) {
-            String id = unfinished.get().id();
+            String id = unfinished.get().getId();
             BatchProgress progress = store.workUnits().progress(actor, id);
             throw new BadInputException("project " + project.getCode() + " has the unfinished work batch " + id
                     + " of method version " + found.version().getNumber() + " (" + progress.open() + " open and "

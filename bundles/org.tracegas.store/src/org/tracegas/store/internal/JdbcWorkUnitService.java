@@ -19,6 +19,8 @@ import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.WorkBatch;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.store.BatchProgress;
 import org.tracegas.store.FailedUnit;
 import org.tracegas.store.LeaseLostException;
@@ -27,13 +29,14 @@ import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.Session;
 import org.tracegas.store.StoredMeasurement;
 import org.tracegas.store.UnfinishedBatchException;
-import org.tracegas.store.WorkBatchInfo;
+import org.tracegas.store.WorkBatchChecks;
 import org.tracegas.store.WorkUnitLease;
 import org.tracegas.store.WorkUnitService;
 
 final class JdbcWorkUnitService implements WorkUnitService {
 
-    private static final String BATCH_COLUMNS = "b.id, b.project_id, b.method_version_id, b.description,"
+    private static final WorkspaceFactory FACTORY = WorkspaceFactory.eINSTANCE;
+    private static final String BATCH_COLUMNS = "b.id, b.method_version_id, b.description,"
             + " b.unit_count, b.created_by, b.created_at";
     private static final String UNIT_COLUMNS = "seq, payload, state, claimed_by, lease_until, attempt";
     private static final String CLAIMABLE = "batch_id = ? AND (state = 'OPEN' OR (state = 'CLAIMED' AND lease_until < ?))";
@@ -67,25 +70,8 @@ final class JdbcWorkUnitService implements WorkUnitService {
     }
 
     @Override
-    public WorkBatchInfo createBatch(Session actor, String projectId, String description, List<String> payloads) {
-        return create(actor, projectId, null, description, payloads);
-    }
-
-    @Override
-    public WorkBatchInfo createBatch(Session actor, String projectId, String methodVersionId, String description,
-            List<String> payloads) {
-        if (methodVersionId == null || methodVersionId.isBlank()) {
-            throw new IllegalArgumentException("methodVersionId must name a METHOD version, was " + methodVersionId);
-        }
-        return create(actor, projectId, methodVersionId, description, payloads);
-    }
-
-    private WorkBatchInfo create(Session actor, String projectId, String methodVersionId, String description,
-            List<String> payloads) {
-        if (description == null || description.length() > MAX_TEXT_LENGTH) {
-            throw new IllegalArgumentException("description must be given and at most " + MAX_TEXT_LENGTH
-                    + " characters long");
-        }
+    public WorkBatch createBatch(Session actor, String projectId, WorkBatch batch, List<String> payloads) {
+        WorkBatchChecks.requireNew(batch);
         if (payloads == null || payloads.isEmpty()) {
             throw new IllegalArgumentException("payloads must hold at least one unit's payload");
         }
@@ -96,6 +82,8 @@ final class JdbcWorkUnitService implements WorkUnitService {
                         + MAX_TEXT_LENGTH + " characters");
             }
         }
+        String methodVersionId = batch.getMethodVersionId();
+        String description = batch.getDescription();
         return transactions.run("creating a batch of " + payloads.size() + " work units in project " + projectId,
                 tx -> {
                     Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
@@ -103,21 +91,26 @@ final class JdbcWorkUnitService implements WorkUnitService {
                         // held until commit: a second runner's check waits and then sees this batch
                         tx.queryOne(backend.lockProject(), rs -> rs.getString(1), projectId);
                         requireMethodVersion(tx, methodVersionId);
-                        Optional<WorkBatchInfo> other = findUnfinished(tx, projectId, methodVersionId);
+                        Optional<WorkBatch> other = findUnfinished(tx, projectId, methodVersionId);
                         if (other.isPresent()) {
                             throw refusal(tx, other.get());
                         }
                     }
-                    WorkBatchInfo batch = new WorkBatchInfo(UUID.randomUUID().toString(), projectId, methodVersionId,
-                            description, payloads.size(), actor.userId(),
-                            Instant.now().truncatedTo(ChronoUnit.MICROS));
+                    WorkBatch created = FACTORY.createWorkBatch();
+                    created.setId(UUID.randomUUID().toString());
+                    created.setMethodVersionId(methodVersionId);
+                    created.setDescription(description);
+                    created.setUnitCount(payloads.size());
+                    created.setCreatedBy(actor.userId());
+                    created.setCreatedAt(Instant.now().truncatedTo(ChronoUnit.MICROS));
                     tx.update("INSERT INTO work_batch (id, project_id, method_version_id, description, unit_count,"
-                            + " created_by, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)", batch.id(), projectId,
-                            methodVersionId, description, batch.unitCount(), actor.userId(), batch.createdAt());
+                            + " created_by, created_at) VALUES (?, ?, ?, ?, ?, ?, ?)", created.getId(), projectId,
+                            methodVersionId, description, created.getUnitCount(), actor.userId(),
+                            created.getCreatedAt());
                     try (PreparedStatement ps = tx.connection().prepareStatement("INSERT INTO work_unit (batch_id,"
                             + " seq, payload, state, attempt) VALUES (?, ?, ?, 'OPEN', 0)")) {
                         for (int i = 0; i < payloads.size(); i++) {
-                            Tx.bind(ps, batch.id(), i, payloads.get(i));
+                            Tx.bind(ps, created.getId(), i, payloads.get(i));
                             ps.addBatch();
                         }
                         ps.executeBatch();
@@ -130,9 +123,9 @@ final class JdbcWorkUnitService implements WorkUnitService {
                     // SHA-256 of the payloads in unit order, each followed by a line feed
                     fields.put("payloadsSha256", SpectrumCodec.sha256Hex((String.join("\n", payloads) + "\n")
                             .getBytes(StandardCharsets.UTF_8)));
-                    tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "work-batch", batch.id())
+                    tx.audit(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "work-batch", created.getId())
                             .newValue(AuditValues.canonical(fields)).build());
-                    return batch;
+                    return inProject(tx, projectId, created);
                 });
     }
 
@@ -320,16 +313,17 @@ final class JdbcWorkUnitService implements WorkUnitService {
     }
 
     @Override
-    public WorkBatchInfo batch(Session actor, String batchId) {
+    public WorkBatch batch(Session actor, String batchId) {
         return transactions.run("reading work batch " + batchId, tx -> {
-            requireBatchAccess(tx, actor, batchId, AccessLevel.READ);
-            return tx.queryOne("SELECT " + BATCH_COLUMNS + " FROM work_batch b WHERE b.id = ?",
+            String projectId = requireBatchAccess(tx, actor, batchId, AccessLevel.READ);
+            WorkBatch batch = tx.queryOne("SELECT " + BATCH_COLUMNS + " FROM work_batch b WHERE b.id = ?",
                     JdbcWorkUnitService::readBatch, batchId).orElseThrow();
+            return inProject(tx, projectId, batch);
         });
     }
 
     @Override
-    public Optional<WorkBatchInfo> unfinishedBatch(Session actor, String projectId, String methodVersionId) {
+    public Optional<WorkBatch> unfinishedBatch(Session actor, String projectId, String methodVersionId) {
         return transactions.run("looking for an unfinished work batch of project " + projectId
                 + " and method version " + methodVersionId, tx -> {
                     Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
@@ -337,24 +331,35 @@ final class JdbcWorkUnitService implements WorkUnitService {
                 });
     }
 
-    private static Optional<WorkBatchInfo> findUnfinished(Tx tx, String projectId, String methodVersionId)
-            throws SQLException {
-        return tx.queryOne("SELECT " + BATCH_COLUMNS + " FROM work_batch b WHERE b.project_id = ?"
-                + " AND b.method_version_id = ? AND EXISTS (SELECT 1 FROM work_unit u WHERE u.batch_id = b.id"
-                + " AND u.state IN ('OPEN', 'CLAIMED')) ORDER BY b.created_at, b.id LIMIT 1", JdbcWorkUnitService::readBatch,
-                projectId, methodVersionId);
+    @Override
+    public List<WorkBatch> batches(Session actor, String projectId) {
+        return transactions.run("reading the work batches of project " + projectId, tx -> {
+            Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+            List<WorkBatch> read = tx.queryList("SELECT " + BATCH_COLUMNS + " FROM work_batch b"
+                    + " WHERE b.project_id = ? ORDER BY b.created_at, b.id", JdbcWorkUnitService::readBatch, projectId);
+            ModelRows.project(tx, projectId).getBatches().addAll(read);
+            return read;
+        });
     }
 
-    private static UnfinishedBatchException refusal(Tx tx, WorkBatchInfo other) throws SQLException {
-        String code = tx.queryOne("SELECT code FROM project WHERE id = ?", rs -> rs.getString(1), other.projectId())
-                .orElseThrow();
+    private static Optional<WorkBatch> findUnfinished(Tx tx, String projectId, String methodVersionId)
+            throws SQLException {
+        Optional<WorkBatch> found = tx.queryOne("SELECT " + BATCH_COLUMNS + " FROM work_batch b"
+                + " WHERE b.project_id = ? AND b.method_version_id = ? AND EXISTS (SELECT 1 FROM work_unit u"
+                + " WHERE u.batch_id = b.id AND u.state IN ('OPEN', 'CLAIMED')) ORDER BY b.created_at, b.id LIMIT 1",
+                JdbcWorkUnitService::readBatch, projectId, methodVersionId);
+        return found.isEmpty() ? found : Optional.of(inProject(tx, projectId, found.get()));
+    }
+
+    private static UnfinishedBatchException refusal(Tx tx, WorkBatch other) throws SQLException {
         long notDone = tx.queryOne("SELECT COUNT(*) FROM work_unit WHERE batch_id = ?"
                 + " AND state IN ('OPEN', 'CLAIMED')",
-                rs -> rs.getLong(1), other.id()).orElseThrow();
-        return new UnfinishedBatchException(other.id(), "project " + code + " has the unfinished work batch "
-                + other.id() + " of method version " + other.methodVersionId() + " (" + notDone + " of "
-                + other.unitCount() + " units not done, recorded " + other.createdAt() + "): another batch of that"
-                + " version would store the same samples again; work batch " + other.id() + " to the end instead;"
+                rs -> rs.getLong(1), other.getId()).orElseThrow();
+        return new UnfinishedBatchException(other.getId(), "project " + other.getProject().getCode()
+                + " has the unfinished work batch " + other.getId() + " of method version "
+                + other.getMethodVersionId() + " (" + notDone + " of " + other.getUnitCount()
+                + " units not done, recorded " + other.getCreatedAt() + "): another batch of that version would"
+                + " store the same samples again; work batch " + other.getId() + " to the end instead;"
                 + " nothing was written");
     }
 
@@ -365,10 +370,22 @@ final class JdbcWorkUnitService implements WorkUnitService {
         }
     }
 
-    private static WorkBatchInfo readBatch(ResultSet rs) throws SQLException {
-        return new WorkBatchInfo(rs.getString("id"), rs.getString("project_id"), rs.getString("method_version_id"),
-                rs.getString("description"), rs.getInt("unit_count"), rs.getString("created_by"),
-                Tx.instant(rs, "created_at"));
+    /** The batch of the row, not yet in its project (read after the row, not while its query is open). */
+    private static WorkBatch readBatch(ResultSet rs) throws SQLException {
+        WorkBatch batch = FACTORY.createWorkBatch();
+        batch.setId(rs.getString("id"));
+        batch.setMethodVersionId(rs.getString("method_version_id"));
+        batch.setDescription(rs.getString("description"));
+        batch.setUnitCount(rs.getInt("unit_count"));
+        batch.setCreatedBy(rs.getString("created_by"));
+        batch.setCreatedAt(Tx.instant(rs, "created_at"));
+        return batch;
+    }
+
+    /** @return the batch, put into its project as {@link ModelRows#project} reads it */
+    private static WorkBatch inProject(Tx tx, String projectId, WorkBatch batch) throws SQLException {
+        ModelRows.project(tx, projectId).getBatches().add(batch);
+        return batch;
     }
 
     @Override

@@ -17,6 +17,8 @@ import org.tracegas.model.ResultFlag;
 import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.model.VersionKind;
+import org.tracegas.model.WorkBatch;
+import org.tracegas.model.WorkBatches;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
@@ -41,6 +43,8 @@ final class ExistingWorkspace {
 
     final Project project;
     final List<String> sampleIds;
+    /** The container files of the day, shared out to the runners (not worked in these tests). */
+    final WorkBatch batch;
 
     ExistingWorkspace(WorkspaceStore store) {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", PASSWORD.toCharArray());
@@ -74,6 +78,9 @@ final class ExistingWorkspace {
                     method, library));
         }
         store.results().recordAll(analyst, project.getId(), results);
+        batch = store.workUnits().createBatch(analyst, project.getId(), WorkBatches.of(method.getId(),
+                "container files of 4 May"), List.of("/data/riv/0504-a.tgc", "/data/riv/0504-b.tgc",
+                        "/data/riv/0504-c.tgc"));
     }
 
     private static Result result(String measurementId, String compound, double ppm, Set<ResultFlag> flags,

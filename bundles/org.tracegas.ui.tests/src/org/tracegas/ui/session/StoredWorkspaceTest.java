@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.temporal.ChronoUnit;
 
 import org.eclipse.core.runtime.NullProgressMonitor;
 import org.eclipse.jface.viewers.IStructuredSelection;
@@ -85,10 +86,13 @@ class StoredWorkspaceTest {
         Screens.flush(display);
         Project selected = (Project) ((IStructuredSelection) nav.viewer().getSelection()).getFirstElement();
         assertEquals(written.project.getId(), selected.getId());
-        // one day, its samples and its background apart; all fit on the first page, in time order
+        // one day, its samples and its background apart; all fit on the first page, in time order; then the
+        // project's work batch, named by its units and its start, to the second in UTC (ISO 8601 with a space)
         nav.viewer().expandToLevel(selected, 3);
         Screens.flush(display);
-        assertEquals(1, project.getItemCount());
+        assertEquals(2, project.getItemCount());
+        assertEquals("work batch of 3 units  " + written.batch.getCreatedAt().truncatedTo(ChronoUnit.SECONDS)
+                .toString().replace('T', ' ').replace("Z", " UTC"), project.getItem(1).getText());
         TreeItem day = project.getItem(0);
         assertEquals("2026-05-04", day.getText());
         assertEquals(2, day.getItemCount());

@@ -21,8 +21,8 @@ import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
 
 /**
- * The navigator's model of a workspace that already held data when it was opened: the clients, projects and
- * measurements the signed-in user may read, as the store reads them, and the newest version of each reference
+ * The navigator's model of a workspace that already held data when it was opened: the clients, projects,
+ * measurements and work batches the signed-in user may read, as the store reads them, and the newest version of each reference
  * library (with its references, as {@link StoredLibrary} reads them) and analysis method (with its regions, as {@link MethodVersions} reads them for the workbench and the
  * runner alike).
  */
@@ -32,7 +32,8 @@ public final class StoredWorkspace {
     }
 
     /**
-     * Reads the clients, projects and measurements visible to {@code actor}, and the libraries and methods.
+     * Reads the clients, projects, measurements and work batches visible to {@code actor}, and the libraries and
+     * methods.
      * Meant for a background job: it reports one step per project and stops between steps when cancelled.
      *
      * @throws org.eclipse.core.runtime.OperationCanceledException when the monitor was cancelled
@@ -62,6 +63,8 @@ public final class StoredWorkspace {
                 }
                 p.getMeasurements().add(m);
             }
+            // a handful per project, read by one indexed query
+            p.getBatches().addAll(store.workUnits().batches(actor, p.getId()));
             step.done();
         }
         progress.split(5);
