@@ -58,6 +58,15 @@ public interface WorkspaceFactory extends EFactory {
 	Measurement createMeasurement();
 
 	/**
+	 * Returns a new object of class '<em>Processed Spectrum</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Processed Spectrum</em>'.
+	 * @generated
+	 */
+	ProcessedSpectrum createProcessedSpectrum();
+
+	/**
 	 * Returns a new object of class '<em>Content Version</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

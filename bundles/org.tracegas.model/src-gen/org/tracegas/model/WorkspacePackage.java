@@ -517,6 +517,106 @@ public interface WorkspacePackage extends EPackage {
 	int MEASUREMENT_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.ProcessedSpectrumImpl <em>Processed Spectrum</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.ProcessedSpectrumImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProcessedSpectrum()
+	 * @generated
+	 */
+	int PROCESSED_SPECTRUM = 5;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Measurement Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__MEASUREMENT_ID = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Content</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__CONTENT = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Sample Encoding</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__SAMPLE_ENCODING = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Sha256</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__SHA256 = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Recipe Sha256</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__RECIPE_SHA256 = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Spectrum</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__SPECTRUM = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The number of structural features of the '<em>Processed Spectrum</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The number of operations of the '<em>Processed Spectrum</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.impl.ContentVersionImpl <em>Content Version</em>}' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -524,7 +624,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getContentVersion()
 	 * @generated
 	 */
-	int CONTENT_VERSION = 5;
+	int CONTENT_VERSION = 6;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -660,7 +760,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceLibrary()
 	 * @generated
 	 */
-	int REFERENCE_LIBRARY = 6;
+	int REFERENCE_LIBRARY = 7;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -724,7 +824,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAnalysisMethod()
 	 * @generated
 	 */
-	int ANALYSIS_METHOD = 7;
+	int ANALYSIS_METHOD = 8;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -797,7 +897,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMethodVersion()
 	 * @generated
 	 */
-	int METHOD_VERSION = 8;
+	int METHOD_VERSION = 9;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1041,7 +1141,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAnalysisRegion()
 	 * @generated
 	 */
-	int ANALYSIS_REGION = 9;
+	int ANALYSIS_REGION = 10;
 
 	/**
 	 * The feature id for the '<em><b>Compound</b></em>' attribute.
@@ -1123,7 +1223,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResult()
 	 * @generated
 	 */
-	int RESULT = 10;
+	int RESULT = 11;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1277,7 +1377,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getQaOutcome()
 	 * @generated
 	 */
-	int QA_OUTCOME = 11;
+	int QA_OUTCOME = 12;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1431,7 +1531,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getUser()
 	 * @generated
 	 */
-	int USER = 12;
+	int USER = 13;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1513,7 +1613,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAccessLevel()
 	 * @generated
 	 */
-	int ACCESS_LEVEL = 13;
+	int ACCESS_LEVEL = 14;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.MeasurementKind <em>Measurement Kind</em>}' enum.
@@ -1523,7 +1623,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurementKind()
 	 * @generated
 	 */
-	int MEASUREMENT_KIND = 14;
+	int MEASUREMENT_KIND = 15;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.SpectralContent <em>Spectral Content</em>}' enum.
@@ -1533,7 +1633,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectralContent()
 	 * @generated
 	 */
-	int SPECTRAL_CONTENT = 15;
+	int SPECTRAL_CONTENT = 16;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.VersionKind <em>Version Kind</em>}' enum.
@@ -1543,7 +1643,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getVersionKind()
 	 * @generated
 	 */
-	int VERSION_KIND = 16;
+	int VERSION_KIND = 17;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
@@ -1553,7 +1653,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 17;
+	int RESULT_FLAG = 18;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -1563,7 +1663,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 18;
+	int ROLE = 19;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -1573,7 +1673,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 19;
+	int INSTANT = 20;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -1583,7 +1683,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 20;
+	int SPECTRUM = 21;
 
 	/**
 	 * The meta object id for the '<em>Provenance</em>' data type.
@@ -1593,7 +1693,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
 	 * @generated
 	 */
-	int PROVENANCE = 21;
+	int PROVENANCE = 22;
 
 	/**
 	 * The meta object id for the '<em>Result Conditions</em>' data type.
@@ -1603,7 +1703,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
 	 * @generated
 	 */
-	int RESULT_CONDITIONS = 22;
+	int RESULT_CONDITIONS = 23;
 
 
 	/**
@@ -1974,6 +2074,82 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EAttribute getMeasurement_SourceRecord();
+
+	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.ProcessedSpectrum <em>Processed Spectrum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Processed Spectrum</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum
+	 * @generated
+	 */
+	EClass getProcessedSpectrum();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getMeasurementId <em>Measurement Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Measurement Id</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getMeasurementId()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_MeasurementId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getContent <em>Content</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Content</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getContent()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_Content();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getSampleEncoding <em>Sample Encoding</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Sample Encoding</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getSampleEncoding()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_SampleEncoding();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getSha256 <em>Sha256</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Sha256</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getSha256()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_Sha256();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getRecipeSha256 <em>Recipe Sha256</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Recipe Sha256</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getRecipeSha256()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_RecipeSha256();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getSpectrum <em>Spectrum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Spectrum</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getSpectrum()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_Spectrum();
 
 	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.ContentVersion <em>Content Version</em>}'.
@@ -3146,6 +3322,64 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute MEASUREMENT__SOURCE_RECORD = eINSTANCE.getMeasurement_SourceRecord();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.ProcessedSpectrumImpl <em>Processed Spectrum</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.ProcessedSpectrumImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProcessedSpectrum()
+		 * @generated
+		 */
+		EClass PROCESSED_SPECTRUM = eINSTANCE.getProcessedSpectrum();
+
+		/**
+		 * The meta object literal for the '<em><b>Measurement Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__MEASUREMENT_ID = eINSTANCE.getProcessedSpectrum_MeasurementId();
+
+		/**
+		 * The meta object literal for the '<em><b>Content</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__CONTENT = eINSTANCE.getProcessedSpectrum_Content();
+
+		/**
+		 * The meta object literal for the '<em><b>Sample Encoding</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__SAMPLE_ENCODING = eINSTANCE.getProcessedSpectrum_SampleEncoding();
+
+		/**
+		 * The meta object literal for the '<em><b>Sha256</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__SHA256 = eINSTANCE.getProcessedSpectrum_Sha256();
+
+		/**
+		 * The meta object literal for the '<em><b>Recipe Sha256</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__RECIPE_SHA256 = eINSTANCE.getProcessedSpectrum_RecipeSha256();
+
+		/**
+		 * The meta object literal for the '<em><b>Spectrum</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__SPECTRUM = eINSTANCE.getProcessedSpectrum_Spectrum();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.ContentVersionImpl <em>Content Version</em>}' class.

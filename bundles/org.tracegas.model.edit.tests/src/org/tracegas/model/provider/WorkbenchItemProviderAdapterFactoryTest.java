@@ -21,8 +21,14 @@ import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.Project;
+import org.tracegas.model.SpectralContent;
 import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.spectrum.AxisUnit;
+import org.tracegas.spectrum.Ordinate;
+import org.tracegas.spectrum.SpectralAxis;
+import org.tracegas.spectrum.Spectrum;
 
 /**
  * The labels and properties the generated item providers give the workbench's navigator and properties view,
@@ -42,6 +48,18 @@ class WorkbenchItemProviderAdapterFactoryTest {
     @AfterEach
     void dispose() {
         factory.dispose();
+    }
+
+    private Map<String, String> properties(Object o) {
+        IItemPropertySource source = (IItemPropertySource) factory.adapt(o, IItemPropertySource.class);
+        Map<String, String> shown = new LinkedHashMap<>();
+        for (IItemPropertyDescriptor d : source.getPropertyDescriptors(o)) {
+            Object value = d.getPropertyValue(o);
+            // an attribute's value comes wrapped (for cell editors); its label provider writes the plain value
+            value = value instanceof IItemPropertySource wrapper ? wrapper.getEditableValue(value) : value;
+            shown.put(d.getDisplayName(o), d.getLabelProvider(o).getText(value));
+        }
+        return shown;
     }
 
     private String text(Object o) {
@@ -118,14 +136,7 @@ class WorkbenchItemProviderAdapterFactoryTest {
         m.setCellPressure(1013.25);
         m.setSourceFile("kiln1-0630.jdx");
         m.setSourceSha256(SHA256_ABC);
-        IItemPropertySource source = (IItemPropertySource) factory.adapt(m, IItemPropertySource.class);
-        Map<String, String> shown = new LinkedHashMap<>();
-        for (IItemPropertyDescriptor d : source.getPropertyDescriptors(m)) {
-            Object value = d.getPropertyValue(m);
-            // an attribute's value comes wrapped (for cell editors); its label provider writes the plain value
-            value = value instanceof IItemPropertySource wrapper ? wrapper.getEditableValue(value) : value;
-            shown.put(d.getDisplayName(m), d.getLabelProvider(m).getText(value));
-        }
+        Map<String, String> shown = properties(m);
         assertEquals("464.15", shown.get("Cell temperature (K)"));
         assertEquals("1013.25", shown.get("Cell pressure (hPa)"));
         assertEquals("span", shown.get("Kind"));
@@ -134,5 +145,27 @@ class WorkbenchItemProviderAdapterFactoryTest {
         // the values are a block of their own in the store, never read into the model: no property for them
         assertFalse(shown.containsKey("Spectrum"), shown.keySet().toString());
         assertTrue(shown.containsKey("Time (UTC)"), shown.keySet().toString());
+    }
+
+    @Test
+    void aProcessedSpectrumIsNamedByItsContentAndShowsItsHashesButNotItsValues() {
+        ProcessedSpectrum s = model.createProcessedSpectrum();
+        s.setContent(SpectralContent.SINGLE_BEAM);
+        s.setMeasurementId("m-0630");
+        s.setSampleEncoding("FLOAT32_LE");
+        s.setSha256(SHA256_ABC);
+        assertEquals("single beam  (values not read)", text(s));
+        s.setSpectrum(new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 600, 0.5, 3), new double[] {1, 2, 3},
+                Ordinate.SINGLE_BEAM));
+        assertEquals("single beam  3 points", text(s));
+
+        Map<String, String> shown = properties(s);
+        assertEquals("single beam", shown.get("Content"));
+        assertEquals("m-0630", shown.get("Measurement id"));
+        assertEquals("FLOAT32_LE", shown.get("Stored as (encoding)"));
+        assertEquals(SHA256_ABC, shown.get("Values SHA-256"));
+        assertTrue(shown.containsKey("Processing recipe SHA-256"), shown.keySet().toString());
+        // a few thousand numbers are no property value: the spectrum view draws them
+        assertFalse(shown.containsKey("Spectrum"), shown.keySet().toString());
     }
 }

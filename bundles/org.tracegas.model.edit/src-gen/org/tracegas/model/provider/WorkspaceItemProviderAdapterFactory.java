@@ -164,6 +164,29 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.ProcessedSpectrum} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected ProcessedSpectrumItemProvider processedSpectrumItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.ProcessedSpectrum}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createProcessedSpectrumAdapter() {
+		if (processedSpectrumItemProvider == null) {
+			processedSpectrumItemProvider = new ProcessedSpectrumItemProvider(this);
+		}
+
+		return processedSpectrumItemProvider;
+	}
+
+	/**
 	 * This keeps track of the one adapter used for all {@link org.tracegas.model.ContentVersion} instances.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -456,6 +479,7 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 		if (clientItemProvider != null) clientItemProvider.dispose();
 		if (projectItemProvider != null) projectItemProvider.dispose();
 		if (measurementItemProvider != null) measurementItemProvider.dispose();
+		if (processedSpectrumItemProvider != null) processedSpectrumItemProvider.dispose();
 		if (contentVersionItemProvider != null) contentVersionItemProvider.dispose();
 		if (referenceLibraryItemProvider != null) referenceLibraryItemProvider.dispose();
 		if (analysisMethodItemProvider != null) analysisMethodItemProvider.dispose();

@@ -12,13 +12,15 @@ import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.SpectralContent;
 
 /**
  * The generated item providers with the labels the workbench shows: a client by its name, a campaign by its
- * code, name and measurement count, a measurement by its kind and start (UTC), a method version by its number
- * and whether results use it. The generated labels put the type's name first ("Client Eastfield Cement"),
+ * code, name and measurement count, a measurement by its kind and start (UTC), a processed spectrum by its
+ * content and point count, a method version by its number and whether results use it. The generated labels put the type's name first ("Client Eastfield Cement"),
  * which the tree's structure already says; the generated code stays as the genmodel makes it, so the labels
  * are given here, by overriding only {@code getText} of the generated providers.
  */
@@ -66,6 +68,21 @@ public class WorkbenchItemProviderAdapterFactory extends WorkspaceItemProviderAd
             };
         }
         return measurementItemProvider;
+    }
+
+    @Override
+    public Adapter createProcessedSpectrumAdapter() {
+        if (processedSpectrumItemProvider == null) {
+            processedSpectrumItemProvider = new ProcessedSpectrumItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    ProcessedSpectrum s = (ProcessedSpectrum) object;
+                    return content(s.getContent()) + "  " + (s.getSpectrum() == null ? "(values not read)"
+                            : s.getSpectrum().size() + " points");
+                }
+            };
+        }
+        return processedSpectrumItemProvider;
     }
 
     @Override
@@ -127,6 +144,11 @@ public class WorkbenchItemProviderAdapterFactory extends WorkspaceItemProviderAd
     /** A measurement's kind as the properties show it too (plugin.properties: "calibration transfer standard"). */
     public static String kind(MeasurementKind kind) {
         return WorkspaceEditPlugin.INSTANCE.getString("_UI_MeasurementKind_" + kind.getName() + "_literal");
+    }
+
+    /** What spectral values are, as the properties show it too (plugin.properties: "single beam"). */
+    public static String content(SpectralContent content) {
+        return WorkspaceEditPlugin.INSTANCE.getString("_UI_SpectralContent_" + content.getName() + "_literal");
     }
 
     /** A point in time as the tree shows it, in UTC to the second; "time unknown" for none. */

@@ -63,6 +63,7 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 			case WorkspacePackage.CLIENT: return createClient();
 			case WorkspacePackage.PROJECT: return createProject();
 			case WorkspacePackage.MEASUREMENT: return createMeasurement();
+			case WorkspacePackage.PROCESSED_SPECTRUM: return createProcessedSpectrum();
 			case WorkspacePackage.CONTENT_VERSION: return createContentVersion();
 			case WorkspacePackage.REFERENCE_LIBRARY: return createReferenceLibrary();
 			case WorkspacePackage.ANALYSIS_METHOD: return createAnalysisMethod();
@@ -172,6 +173,17 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	public Measurement createMeasurement() {
 		MeasurementImpl measurement = new MeasurementImpl();
 		return measurement;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ProcessedSpectrum createProcessedSpectrum() {
+		ProcessedSpectrumImpl processedSpectrum = new ProcessedSpectrumImpl();
+		return processedSpectrum;
 	}
 
 	/**

@@ -21,6 +21,7 @@ import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
 import org.tracegas.model.QaOutcome;
@@ -80,6 +81,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EClass measurementEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass processedSpectrumEClass = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -605,6 +613,76 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	@Override
 	public EAttribute getMeasurement_SourceRecord() {
 		return (EAttribute)measurementEClass.getEStructuralFeatures().get(13);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getProcessedSpectrum() {
+		return processedSpectrumEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_MeasurementId() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_Content() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_SampleEncoding() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_Sha256() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_RecipeSha256() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_Spectrum() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(5);
 	}
 
 	/**
@@ -1465,6 +1543,14 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(measurementEClass, MEASUREMENT__SOURCE_SHA256);
 		createEAttribute(measurementEClass, MEASUREMENT__SOURCE_RECORD);
 
+		processedSpectrumEClass = createEClass(PROCESSED_SPECTRUM);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__MEASUREMENT_ID);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__CONTENT);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__SAMPLE_ENCODING);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__SHA256);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__RECIPE_SHA256);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__SPECTRUM);
+
 		contentVersionEClass = createEClass(CONTENT_VERSION);
 		createEAttribute(contentVersionEClass, CONTENT_VERSION__KIND);
 		createEAttribute(contentVersionEClass, CONTENT_VERSION__ITEM_ID);
@@ -1588,6 +1674,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		clientEClass.getESuperTypes().add(this.getStoredObject());
 		projectEClass.getESuperTypes().add(this.getStoredObject());
 		measurementEClass.getESuperTypes().add(this.getStoredObject());
+		processedSpectrumEClass.getESuperTypes().add(this.getStoredObject());
 		contentVersionEClass.getESuperTypes().add(this.getStoredObject());
 		referenceLibraryEClass.getESuperTypes().add(this.getStoredObject());
 		analysisMethodEClass.getESuperTypes().add(this.getStoredObject());
@@ -1635,6 +1722,14 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getMeasurement_SourceFile(), ecorePackage.getEString(), "sourceFile", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMeasurement_SourceSha256(), ecorePackage.getEString(), "sourceSha256", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getMeasurement_SourceRecord(), ecorePackage.getEInt(), "sourceRecord", null, 0, 1, Measurement.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(processedSpectrumEClass, ProcessedSpectrum.class, "ProcessedSpectrum", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getProcessedSpectrum_MeasurementId(), ecorePackage.getEString(), "measurementId", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getProcessedSpectrum_Content(), this.getSpectralContent(), "content", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getProcessedSpectrum_SampleEncoding(), ecorePackage.getEString(), "sampleEncoding", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getProcessedSpectrum_Sha256(), ecorePackage.getEString(), "sha256", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getProcessedSpectrum_RecipeSha256(), ecorePackage.getEString(), "recipeSha256", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getProcessedSpectrum_Spectrum(), this.getSpectrum(), "spectrum", null, 0, 1, ProcessedSpectrum.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(contentVersionEClass, ContentVersion.class, "ContentVersion", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getContentVersion_Kind(), this.getVersionKind(), "kind", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);

@@ -88,6 +88,10 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 				return createMeasurementAdapter();
 			}
 			@Override
+			public Adapter caseProcessedSpectrum(ProcessedSpectrum object) {
+				return createProcessedSpectrumAdapter();
+			}
+			@Override
 			public Adapter caseContentVersion(ContentVersion object) {
 				return createContentVersionAdapter();
 			}
@@ -206,6 +210,20 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createMeasurementAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.ProcessedSpectrum <em>Processed Spectrum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.ProcessedSpectrum
+	 * @generated
+	 */
+	public Adapter createProcessedSpectrumAdapter() {
 		return null;
 	}
 
