@@ -24,6 +24,7 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.pipeline.MeasurementQuantification;
 import org.tracegas.qa.campaign.QaControlCharts;
@@ -41,7 +42,6 @@ import org.tracegas.report.ReportContent;
 import org.tracegas.report.SpectrumFit;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.Session;
-import org.tracegas.store.StoredSpectrum;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.WorkspaceVerification;
 
@@ -200,13 +200,13 @@ public final class CampaignReport {
                 .findFirst().orElseThrow(() -> new FileFormatException(plan.file(), 0,
                         "example-fit", "no stored sample at " + plan.exampleTime()));
         String measurement = sample.getId();
-        Optional<StoredSpectrum> stored;
-        try (Stream<StoredSpectrum> all = store.spectra().stream(actor, projectId)) {
-            stored = all.filter(s -> measurement.equals(s.measurementId())
-                    && s.content() == SpectralContent.ABSORBANCE).findFirst();
+        Optional<ProcessedSpectrum> stored;
+        try (Stream<ProcessedSpectrum> all = store.spectra().stream(actor, projectId)) {
+            stored = all.filter(s -> measurement.equals(s.getMeasurementId())
+                    && s.getContent() == SpectralContent.ABSORBANCE).findFirst();
         }
         Spectrum a = stored.orElseThrow(() -> new FileFormatException(plan.file(), 0, "example-fit",
-                "no stored absorbance at " + plan.exampleTime())).spectrum();
+                "no stored absorbance at " + plan.exampleTime())).getSpectrum();
         FitSpectra fit = method.quantifier(a.axis(), software, true).quantify(
                 // in its cell, for a method whose spectra are computed at each measurement's conditions
                 MeasurementQuantification.inCellOf(Sample.of(a), sample))
