@@ -67,6 +67,15 @@ public interface WorkspaceFactory extends EFactory {
 	ProcessedSpectrum createProcessedSpectrum();
 
 	/**
+	 * Returns a new object of class '<em>Report</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Report</em>'.
+	 * @generated
+	 */
+	Report createReport();
+
+	/**
 	 * Returns a new object of class '<em>Content Version</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

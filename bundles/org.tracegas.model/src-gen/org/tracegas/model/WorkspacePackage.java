@@ -327,13 +327,22 @@ public interface WorkspacePackage extends EPackage {
 	int PROJECT__MEASUREMENTS = STORED_OBJECT_FEATURE_COUNT + 5;
 
 	/**
+	 * The feature id for the '<em><b>Reports</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__REPORTS = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
 	 * The number of structural features of the '<em>Project</em>' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 6;
+	int PROJECT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 7;
 
 	/**
 	 * The number of operations of the '<em>Project</em>' class.
@@ -617,6 +626,142 @@ public interface WorkspacePackage extends EPackage {
 	int PROCESSED_SPECTRUM_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.ReportImpl <em>Report</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.ReportImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReport()
+	 * @generated
+	 */
+	int REPORT = 6;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Project</b></em>' container reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__PROJECT = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Report Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__REPORT_ID = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Title</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__TITLE = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Issued</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__ISSUED = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Issued By</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__ISSUED_BY = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Content Sha256</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__CONTENT_SHA256 = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The feature id for the '<em><b>File Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__FILE_NAME = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The feature id for the '<em><b>Page Count</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__PAGE_COUNT = STORED_OBJECT_FEATURE_COUNT + 7;
+
+	/**
+	 * The feature id for the '<em><b>Method Version Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__METHOD_VERSION_ID = STORED_OBJECT_FEATURE_COUNT + 8;
+
+	/**
+	 * The feature id for the '<em><b>Library Version Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__LIBRARY_VERSION_ID = STORED_OBJECT_FEATURE_COUNT + 9;
+
+	/**
+	 * The number of structural features of the '<em>Report</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 10;
+
+	/**
+	 * The number of operations of the '<em>Report</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.impl.ContentVersionImpl <em>Content Version</em>}' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -624,7 +769,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getContentVersion()
 	 * @generated
 	 */
-	int CONTENT_VERSION = 6;
+	int CONTENT_VERSION = 7;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -760,7 +905,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceLibrary()
 	 * @generated
 	 */
-	int REFERENCE_LIBRARY = 7;
+	int REFERENCE_LIBRARY = 8;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -824,7 +969,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAnalysisMethod()
 	 * @generated
 	 */
-	int ANALYSIS_METHOD = 8;
+	int ANALYSIS_METHOD = 9;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -897,7 +1042,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMethodVersion()
 	 * @generated
 	 */
-	int METHOD_VERSION = 9;
+	int METHOD_VERSION = 10;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1141,7 +1286,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAnalysisRegion()
 	 * @generated
 	 */
-	int ANALYSIS_REGION = 10;
+	int ANALYSIS_REGION = 11;
 
 	/**
 	 * The feature id for the '<em><b>Compound</b></em>' attribute.
@@ -1223,7 +1368,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResult()
 	 * @generated
 	 */
-	int RESULT = 11;
+	int RESULT = 12;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1377,7 +1522,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getQaOutcome()
 	 * @generated
 	 */
-	int QA_OUTCOME = 12;
+	int QA_OUTCOME = 13;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1531,7 +1676,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getUser()
 	 * @generated
 	 */
-	int USER = 13;
+	int USER = 14;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1613,7 +1758,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAccessLevel()
 	 * @generated
 	 */
-	int ACCESS_LEVEL = 14;
+	int ACCESS_LEVEL = 15;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.MeasurementKind <em>Measurement Kind</em>}' enum.
@@ -1623,7 +1768,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurementKind()
 	 * @generated
 	 */
-	int MEASUREMENT_KIND = 15;
+	int MEASUREMENT_KIND = 16;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.SpectralContent <em>Spectral Content</em>}' enum.
@@ -1633,7 +1778,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectralContent()
 	 * @generated
 	 */
-	int SPECTRAL_CONTENT = 16;
+	int SPECTRAL_CONTENT = 17;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.VersionKind <em>Version Kind</em>}' enum.
@@ -1643,7 +1788,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getVersionKind()
 	 * @generated
 	 */
-	int VERSION_KIND = 17;
+	int VERSION_KIND = 18;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
@@ -1653,7 +1798,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 18;
+	int RESULT_FLAG = 19;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -1663,7 +1808,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 19;
+	int ROLE = 20;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -1673,7 +1818,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 20;
+	int INSTANT = 21;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -1683,7 +1828,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 21;
+	int SPECTRUM = 22;
 
 	/**
 	 * The meta object id for the '<em>Provenance</em>' data type.
@@ -1693,7 +1838,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
 	 * @generated
 	 */
-	int PROVENANCE = 22;
+	int PROVENANCE = 23;
 
 	/**
 	 * The meta object id for the '<em>Result Conditions</em>' data type.
@@ -1703,7 +1848,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
 	 * @generated
 	 */
-	int RESULT_CONDITIONS = 23;
+	int RESULT_CONDITIONS = 24;
 
 
 	/**
@@ -1910,6 +2055,17 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EReference getProject_Measurements();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link org.tracegas.model.Project#getReports <em>Reports</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Reports</em>'.
+	 * @see org.tracegas.model.Project#getReports()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_Reports();
 
 	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.Measurement <em>Measurement</em>}'.
@@ -2150,6 +2306,126 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EAttribute getProcessedSpectrum_Spectrum();
+
+	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.Report <em>Report</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Report</em>'.
+	 * @see org.tracegas.model.Report
+	 * @generated
+	 */
+	EClass getReport();
+
+	/**
+	 * Returns the meta object for the container reference '{@link org.tracegas.model.Report#getProject <em>Project</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the container reference '<em>Project</em>'.
+	 * @see org.tracegas.model.Report#getProject()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EReference getReport_Project();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getReportId <em>Report Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Report Id</em>'.
+	 * @see org.tracegas.model.Report#getReportId()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_ReportId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getTitle <em>Title</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Title</em>'.
+	 * @see org.tracegas.model.Report#getTitle()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_Title();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getIssued <em>Issued</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Issued</em>'.
+	 * @see org.tracegas.model.Report#getIssued()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_Issued();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getIssuedBy <em>Issued By</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Issued By</em>'.
+	 * @see org.tracegas.model.Report#getIssuedBy()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_IssuedBy();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getContentSha256 <em>Content Sha256</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Content Sha256</em>'.
+	 * @see org.tracegas.model.Report#getContentSha256()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_ContentSha256();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getFileName <em>File Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>File Name</em>'.
+	 * @see org.tracegas.model.Report#getFileName()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_FileName();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getPageCount <em>Page Count</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Page Count</em>'.
+	 * @see org.tracegas.model.Report#getPageCount()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_PageCount();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getMethodVersionId <em>Method Version Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Method Version Id</em>'.
+	 * @see org.tracegas.model.Report#getMethodVersionId()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_MethodVersionId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getLibraryVersionId <em>Library Version Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Library Version Id</em>'.
+	 * @see org.tracegas.model.Report#getLibraryVersionId()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_LibraryVersionId();
 
 	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.ContentVersion <em>Content Version</em>}'.
@@ -3202,6 +3478,14 @@ public interface WorkspacePackage extends EPackage {
 		EReference PROJECT__MEASUREMENTS = eINSTANCE.getProject_Measurements();
 
 		/**
+		 * The meta object literal for the '<em><b>Reports</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__REPORTS = eINSTANCE.getProject_Reports();
+
+		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.MeasurementImpl <em>Measurement</em>}' class.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -3380,6 +3664,96 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute PROCESSED_SPECTRUM__SPECTRUM = eINSTANCE.getProcessedSpectrum_Spectrum();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.ReportImpl <em>Report</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.ReportImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReport()
+		 * @generated
+		 */
+		EClass REPORT = eINSTANCE.getReport();
+
+		/**
+		 * The meta object literal for the '<em><b>Project</b></em>' container reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference REPORT__PROJECT = eINSTANCE.getReport_Project();
+
+		/**
+		 * The meta object literal for the '<em><b>Report Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__REPORT_ID = eINSTANCE.getReport_ReportId();
+
+		/**
+		 * The meta object literal for the '<em><b>Title</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__TITLE = eINSTANCE.getReport_Title();
+
+		/**
+		 * The meta object literal for the '<em><b>Issued</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__ISSUED = eINSTANCE.getReport_Issued();
+
+		/**
+		 * The meta object literal for the '<em><b>Issued By</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__ISSUED_BY = eINSTANCE.getReport_IssuedBy();
+
+		/**
+		 * The meta object literal for the '<em><b>Content Sha256</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__CONTENT_SHA256 = eINSTANCE.getReport_ContentSha256();
+
+		/**
+		 * The meta object literal for the '<em><b>File Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__FILE_NAME = eINSTANCE.getReport_FileName();
+
+		/**
+		 * The meta object literal for the '<em><b>Page Count</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__PAGE_COUNT = eINSTANCE.getReport_PageCount();
+
+		/**
+		 * The meta object literal for the '<em><b>Method Version Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__METHOD_VERSION_ID = eINSTANCE.getReport_MethodVersionId();
+
+		/**
+		 * The meta object literal for the '<em><b>Library Version Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__LIBRARY_VERSION_ID = eINSTANCE.getReport_LibraryVersionId();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.ContentVersionImpl <em>Content Version</em>}' class.

@@ -23,6 +23,7 @@ import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
 import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.Project;
+import org.tracegas.model.Report;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.spectrum.AxisUnit;
@@ -167,5 +168,25 @@ class WorkbenchItemProviderAdapterFactoryTest {
         assertTrue(shown.containsKey("Processing recipe SHA-256"), shown.keySet().toString());
         // a few thousand numbers are no property value: the spectrum view draws them
         assertFalse(shown.containsKey("Spectrum"), shown.keySet().toString());
+    }
+
+    @Test
+    void aReportIsAChildOfItsProjectNamedByItsIdAndIssueAndShowsItsSignedHash() {
+        Project p = campaign();
+        measurement(p, MeasurementKind.SAMPLE, "2026-07-14T06:00:00Z");
+        Report r = model.createReport();
+        r.setReportId("KLN-2026-07-R1");
+        r.setIssued(Instant.parse("2026-07-20T09:15:00Z"));
+        r.setContentSha256(SHA256_ABC);
+        r.setFileName("report.pdf");
+        p.getReports().add(r);
+        assertEquals("report KLN-2026-07-R1  issued 2026-07-20 09:15:00 UTC", text(r));
+        ITreeItemContentProvider projects = (ITreeItemContentProvider) factory.adapt(p, ITreeItemContentProvider.class);
+        assertEquals(List.of(p.getMeasurements().get(0), r), List.copyOf(projects.getChildren(p)));
+
+        Map<String, String> shown = properties(r);
+        assertEquals(SHA256_ABC, shown.get("Content SHA-256 (signed)"));
+        assertEquals("report.pdf", shown.get("File"));
+        assertTrue(shown.containsKey("Issued by (user id)") && shown.containsKey("Pages"), shown.keySet().toString());
     }
 }

@@ -157,6 +157,7 @@ public class ProjectItemProvider extends StoredObjectItemProvider {
 		if (childrenFeatures == null) {
 			super.getChildrenFeatures(object);
 			childrenFeatures.add(WorkspacePackage.Literals.PROJECT__MEASUREMENTS);
+			childrenFeatures.add(WorkspacePackage.Literals.PROJECT__REPORTS);
 		}
 		return childrenFeatures;
 	}
@@ -219,6 +220,7 @@ public class ProjectItemProvider extends StoredObjectItemProvider {
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), false, true));
 				return;
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
+			case WorkspacePackage.PROJECT__REPORTS:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), true, false));
 				return;
 		}
@@ -240,6 +242,11 @@ public class ProjectItemProvider extends StoredObjectItemProvider {
 			(createChildParameter
 				(WorkspacePackage.Literals.PROJECT__MEASUREMENTS,
 				 WorkspaceFactory.eINSTANCE.createMeasurement()));
+
+		newChildDescriptors.add
+			(createChildParameter
+				(WorkspacePackage.Literals.PROJECT__REPORTS,
+				 WorkspaceFactory.eINSTANCE.createReport()));
 	}
 
 }

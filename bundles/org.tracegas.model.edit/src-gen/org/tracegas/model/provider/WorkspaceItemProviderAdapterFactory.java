@@ -187,6 +187,29 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.Report} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected ReportItemProvider reportItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.Report}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createReportAdapter() {
+		if (reportItemProvider == null) {
+			reportItemProvider = new ReportItemProvider(this);
+		}
+
+		return reportItemProvider;
+	}
+
+	/**
 	 * This keeps track of the one adapter used for all {@link org.tracegas.model.ContentVersion} instances.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -480,6 +503,7 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 		if (projectItemProvider != null) projectItemProvider.dispose();
 		if (measurementItemProvider != null) measurementItemProvider.dispose();
 		if (processedSpectrumItemProvider != null) processedSpectrumItemProvider.dispose();
+		if (reportItemProvider != null) reportItemProvider.dispose();
 		if (contentVersionItemProvider != null) contentVersionItemProvider.dispose();
 		if (referenceLibraryItemProvider != null) referenceLibraryItemProvider.dispose();
 		if (analysisMethodItemProvider != null) analysisMethodItemProvider.dispose();

@@ -15,12 +15,13 @@ import org.tracegas.model.MethodVersion;
 import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.Report;
 import org.tracegas.model.SpectralContent;
 
 /**
  * The generated item providers with the labels the workbench shows: a client by its name, a campaign by its
  * code, name and measurement count, a measurement by its kind and start (UTC), a processed spectrum by its
- * content and point count, a method version by its number and whether results use it. The generated labels put the type's name first ("Client Eastfield Cement"),
+ * content and point count, a report by its id and issue time, a method version by its number and whether results use it. The generated labels put the type's name first ("Client Eastfield Cement"),
  * which the tree's structure already says; the generated code stays as the genmodel makes it, so the labels
  * are given here, by overriding only {@code getText} of the generated providers.
  */
@@ -83,6 +84,20 @@ public class WorkbenchItemProviderAdapterFactory extends WorkspaceItemProviderAd
             };
         }
         return processedSpectrumItemProvider;
+    }
+
+    @Override
+    public Adapter createReportAdapter() {
+        if (reportItemProvider == null) {
+            reportItemProvider = new ReportItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    Report r = (Report) object;
+                    return "report " + r.getReportId() + "  issued " + time(r.getIssued());
+                }
+            };
+        }
+        return reportItemProvider;
     }
 
     @Override

@@ -23,6 +23,7 @@ import org.eclipse.emf.ecore.util.InternalEList;
 import org.tracegas.model.Client;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
+import org.tracegas.model.Report;
 import org.tracegas.model.WorkspacePackage;
 
 /**
@@ -39,6 +40,7 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getEnd <em>End</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getMeasurements <em>Measurements</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ProjectImpl#getReports <em>Reports</em>}</li>
  * </ul>
  *
  * @generated
@@ -133,6 +135,16 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @ordered
 	 */
 	protected EList<Measurement> measurements;
+
+	/**
+	 * The cached value of the '{@link #getReports() <em>Reports</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getReports()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<Report> reports;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -306,6 +318,19 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * <!-- end-user-doc -->
 	 * @generated
 	 */
+	@Override
+	public EList<Report> getReports() {
+		if (reports == null) {
+			reports = new EObjectContainmentWithInverseEList<Report>(Report.class, this, WorkspacePackage.PROJECT__REPORTS, WorkspacePackage.REPORT__PROJECT);
+		}
+		return reports;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
 	@SuppressWarnings("unchecked")
 	@Override
 	public NotificationChain eInverseAdd(InternalEObject otherEnd, int featureID, NotificationChain msgs) {
@@ -316,6 +341,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return basicSetClient((Client)otherEnd, msgs);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return ((InternalEList<InternalEObject>)(InternalEList<?>)getMeasurements()).basicAdd(otherEnd, msgs);
+			case WorkspacePackage.PROJECT__REPORTS:
+				return ((InternalEList<InternalEObject>)(InternalEList<?>)getReports()).basicAdd(otherEnd, msgs);
 		}
 		return super.eInverseAdd(otherEnd, featureID, msgs);
 	}
@@ -332,6 +359,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return basicSetClient(null, msgs);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return ((InternalEList<?>)getMeasurements()).basicRemove(otherEnd, msgs);
+			case WorkspacePackage.PROJECT__REPORTS:
+				return ((InternalEList<?>)getReports()).basicRemove(otherEnd, msgs);
 		}
 		return super.eInverseRemove(otherEnd, featureID, msgs);
 	}
@@ -370,6 +399,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return getEnd();
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return getMeasurements();
+			case WorkspacePackage.PROJECT__REPORTS:
+				return getReports();
 		}
 		return super.eGet(featureID, resolve, coreType);
 	}
@@ -402,6 +433,10 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				getMeasurements().clear();
 				getMeasurements().addAll((Collection<? extends Measurement>)newValue);
 				return;
+			case WorkspacePackage.PROJECT__REPORTS:
+				getReports().clear();
+				getReports().addAll((Collection<? extends Report>)newValue);
+				return;
 		}
 		super.eSet(featureID, newValue);
 	}
@@ -432,6 +467,9 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				getMeasurements().clear();
 				return;
+			case WorkspacePackage.PROJECT__REPORTS:
+				getReports().clear();
+				return;
 		}
 		super.eUnset(featureID);
 	}
@@ -456,6 +494,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return END_EDEFAULT == null ? end != null : !END_EDEFAULT.equals(end);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return measurements != null && !measurements.isEmpty();
+			case WorkspacePackage.PROJECT__REPORTS:
+				return reports != null && !reports.isEmpty();
 		}
 		return super.eIsSet(featureID);
 	}

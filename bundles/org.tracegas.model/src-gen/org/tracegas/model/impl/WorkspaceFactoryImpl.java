@@ -64,6 +64,7 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 			case WorkspacePackage.PROJECT: return createProject();
 			case WorkspacePackage.MEASUREMENT: return createMeasurement();
 			case WorkspacePackage.PROCESSED_SPECTRUM: return createProcessedSpectrum();
+			case WorkspacePackage.REPORT: return createReport();
 			case WorkspacePackage.CONTENT_VERSION: return createContentVersion();
 			case WorkspacePackage.REFERENCE_LIBRARY: return createReferenceLibrary();
 			case WorkspacePackage.ANALYSIS_METHOD: return createAnalysisMethod();
@@ -184,6 +185,17 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	public ProcessedSpectrum createProcessedSpectrum() {
 		ProcessedSpectrumImpl processedSpectrum = new ProcessedSpectrumImpl();
 		return processedSpectrum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Report createReport() {
+		ReportImpl report = new ReportImpl();
+		return report;
 	}
 
 	/**

@@ -26,6 +26,7 @@ import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
 import org.tracegas.model.QaOutcome;
 import org.tracegas.model.ReferenceLibrary;
+import org.tracegas.model.Report;
 import org.tracegas.model.Result;
 import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
@@ -88,6 +89,13 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EClass processedSpectrumEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass reportEClass = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -471,6 +479,16 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
+	public EReference getProject_Reports() {
+		return (EReference)projectEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EClass getMeasurement() {
 		return measurementEClass;
 	}
@@ -683,6 +701,116 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	@Override
 	public EAttribute getProcessedSpectrum_Spectrum() {
 		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getReport() {
+		return reportEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getReport_Project() {
+		return (EReference)reportEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_ReportId() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_Title() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_Issued() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_IssuedBy() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_ContentSha256() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_FileName() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_PageCount() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_MethodVersionId() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_LibraryVersionId() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(9);
 	}
 
 	/**
@@ -1526,6 +1654,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(projectEClass, PROJECT__START);
 		createEAttribute(projectEClass, PROJECT__END);
 		createEReference(projectEClass, PROJECT__MEASUREMENTS);
+		createEReference(projectEClass, PROJECT__REPORTS);
 
 		measurementEClass = createEClass(MEASUREMENT);
 		createEReference(measurementEClass, MEASUREMENT__PROJECT);
@@ -1550,6 +1679,18 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__SHA256);
 		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__RECIPE_SHA256);
 		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__SPECTRUM);
+
+		reportEClass = createEClass(REPORT);
+		createEReference(reportEClass, REPORT__PROJECT);
+		createEAttribute(reportEClass, REPORT__REPORT_ID);
+		createEAttribute(reportEClass, REPORT__TITLE);
+		createEAttribute(reportEClass, REPORT__ISSUED);
+		createEAttribute(reportEClass, REPORT__ISSUED_BY);
+		createEAttribute(reportEClass, REPORT__CONTENT_SHA256);
+		createEAttribute(reportEClass, REPORT__FILE_NAME);
+		createEAttribute(reportEClass, REPORT__PAGE_COUNT);
+		createEAttribute(reportEClass, REPORT__METHOD_VERSION_ID);
+		createEAttribute(reportEClass, REPORT__LIBRARY_VERSION_ID);
 
 		contentVersionEClass = createEClass(CONTENT_VERSION);
 		createEAttribute(contentVersionEClass, CONTENT_VERSION__KIND);
@@ -1675,6 +1816,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		projectEClass.getESuperTypes().add(this.getStoredObject());
 		measurementEClass.getESuperTypes().add(this.getStoredObject());
 		processedSpectrumEClass.getESuperTypes().add(this.getStoredObject());
+		reportEClass.getESuperTypes().add(this.getStoredObject());
 		contentVersionEClass.getESuperTypes().add(this.getStoredObject());
 		referenceLibraryEClass.getESuperTypes().add(this.getStoredObject());
 		analysisMethodEClass.getESuperTypes().add(this.getStoredObject());
@@ -1706,6 +1848,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getProject_Start(), this.getInstant(), "start", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getProject_End(), this.getInstant(), "end", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_Measurements(), this.getMeasurement(), this.getMeasurement_Project(), "measurements", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getProject_Reports(), this.getReport(), this.getReport_Project(), "reports", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(measurementEClass, Measurement.class, "Measurement", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEReference(getMeasurement_Project(), this.getProject(), this.getProject_Measurements(), "project", null, 0, 1, Measurement.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
@@ -1730,6 +1873,18 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getProcessedSpectrum_Sha256(), ecorePackage.getEString(), "sha256", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getProcessedSpectrum_RecipeSha256(), ecorePackage.getEString(), "recipeSha256", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getProcessedSpectrum_Spectrum(), this.getSpectrum(), "spectrum", null, 0, 1, ProcessedSpectrum.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(reportEClass, Report.class, "Report", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEReference(getReport_Project(), this.getProject(), this.getProject_Reports(), "project", null, 0, 1, Report.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_ReportId(), ecorePackage.getEString(), "reportId", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_Title(), ecorePackage.getEString(), "title", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_Issued(), this.getInstant(), "issued", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_IssuedBy(), ecorePackage.getEString(), "issuedBy", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_ContentSha256(), ecorePackage.getEString(), "contentSha256", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_FileName(), ecorePackage.getEString(), "fileName", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_PageCount(), ecorePackage.getEInt(), "pageCount", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_MethodVersionId(), ecorePackage.getEString(), "methodVersionId", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_LibraryVersionId(), ecorePackage.getEString(), "libraryVersionId", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(contentVersionEClass, ContentVersion.class, "ContentVersion", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getContentVersion_Kind(), this.getVersionKind(), "kind", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);

@@ -72,7 +72,12 @@ enum DataKind {
             col("record_index", INTEGER), col("title", TEXT), col("content", TEXT), col("spectrum_id", TEXT),
             col("labels", TEXT)),
     /** A processing recipe that ran, kept once under the SHA-256 of its text. */
-    PROCESSING_RECIPE("processing-recipe", "processing_recipe", "sha256", col("sha256", TEXT), col("text", TEXT));
+    PROCESSING_RECIPE("processing-recipe", "processing_recipe", "sha256", col("sha256", TEXT), col("text", TEXT)),
+    /** An issue of a report: its id, title, issuer and time, file, content hash and versions. */
+    REPORT("report-issue", "report", "id", col("id", TEXT), col("project_id", TEXT), col("report_id", TEXT),
+            col("title", TEXT), col("issued_at", TIME), col("issued_by", TEXT), col("content_sha256", TEXT),
+            col("file_name", TEXT), col("page_count", INTEGER), col("method_version_id", TEXT),
+            col("library_version_id", TEXT));
 
     private final String label;
     private final String table;

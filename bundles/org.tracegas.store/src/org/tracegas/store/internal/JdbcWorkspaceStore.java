@@ -16,6 +16,7 @@ import org.tracegas.store.BlockService;
 import org.tracegas.store.ImportService;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.QaService;
+import org.tracegas.store.ReportService;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.SpectrumService;
 import org.tracegas.store.StoreException;
@@ -46,6 +47,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     private final AuditService audit;
     private final ImportService imports;
     private final AnalysisService analyses;
+    private final ReportService reports;
 
     private JdbcWorkspaceStore(DataSource dataSource, Backend backend, int maxFailedLogins) {
         this.dataSource = dataSource;
@@ -63,6 +65,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         audit = new JdbcAuditService(transactions);
         imports = new JdbcImportService(transactions);
         analyses = new JdbcAnalysisService(transactions, versionService);
+        reports = new JdbcReportService(transactions);
     }
 
     /** An embedded H2 database in {@code folder} (created when missing), file {@code workspace.mv.db}. */
@@ -197,6 +200,11 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     @Override
     public AnalysisService analyses() {
         return analyses;
+    }
+
+    @Override
+    public ReportService reports() {
+        return reports;
     }
 
     @Override

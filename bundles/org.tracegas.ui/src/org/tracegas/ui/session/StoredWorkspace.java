@@ -32,7 +32,8 @@ public final class StoredWorkspace {
     }
 
     /**
-     * Reads the clients, projects and measurements visible to {@code actor}, and the libraries and methods.
+     * Reads the clients, projects, measurements and issued reports visible to {@code actor}, and the libraries
+     * and methods.
      * Meant for a background job: it reports one step per project and stops between steps when cancelled.
      *
      * @throws org.eclipse.core.runtime.OperationCanceledException when the monitor was cancelled
@@ -62,6 +63,7 @@ public final class StoredWorkspace {
                 }
                 p.getMeasurements().add(m);
             }
+            p.getReports().addAll(store.reports().reports(actor, p.getId()));
             step.done();
         }
         progress.split(5);
