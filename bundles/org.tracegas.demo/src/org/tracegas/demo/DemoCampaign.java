@@ -163,6 +163,7 @@ public final class DemoCampaign {
             Path pdf = reportFolder.resolve("tarnbeck-line2-report.pdf");
             Path csv = reportFolder.resolve("tarnbeck-line2-results.csv");
             CampaignReport.write(content, pdf, csv);
+            report.issue(content, methodVersion, recorded.method(), pdf);
             return new Outcome(processed, reuse, false, pdf, csv, checks, store.verifyAuditTrail());
         }
     }

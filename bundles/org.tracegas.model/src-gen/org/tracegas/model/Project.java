@@ -25,6 +25,7 @@ import org.eclipse.emf.common.util.EList;
  *   <li>{@link org.tracegas.model.Project#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getEnd <em>End</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getMeasurements <em>Measurements</em>}</li>
+ *   <li>{@link org.tracegas.model.Project#getReports <em>Reports</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getBatches <em>Batches</em>}</li>
  *   <li>{@link org.tracegas.model.Project#getSource <em>Source</em>}</li>
  * </ul>
@@ -171,6 +172,23 @@ public interface Project extends StoredObject {
 	 * @generated
 	 */
 	EList<Measurement> getMeasurements();
+
+	/**
+	 * Returns the value of the '<em><b>Reports</b></em>' containment reference list.
+	 * The list contents are of type {@link org.tracegas.model.Report}.
+	 * It is bidirectional and its opposite is '{@link org.tracegas.model.Report#getProject <em>Project</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * <!-- begin-model-doc -->
+	 * The reports issued from the project, in the order they were issued, as the store reads them.
+	 * <!-- end-model-doc -->
+	 * @return the value of the '<em>Reports</em>' containment reference list.
+	 * @see org.tracegas.model.WorkspacePackage#getProject_Reports()
+	 * @see org.tracegas.model.Report#getProject
+	 * @model opposite="project" containment="true"
+	 * @generated
+	 */
+	EList<Report> getReports();
 
 	/**
 	 * Returns the value of the '<em><b>Batches</b></em>' containment reference list.

@@ -85,6 +85,24 @@ public interface WorkspaceFactory extends EFactory {
 	Instrument createInstrument();
 
 	/**
+	 * Returns a new object of class '<em>Processed Spectrum</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Processed Spectrum</em>'.
+	 * @generated
+	 */
+	ProcessedSpectrum createProcessedSpectrum();
+
+	/**
+	 * Returns a new object of class '<em>Report</em>'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return a new object of class '<em>Report</em>'.
+	 * @generated
+	 */
+	Report createReport();
+
+	/**
 	 * Returns a new object of class '<em>Content Version</em>'.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->

@@ -345,13 +345,22 @@ public interface WorkspacePackage extends EPackage {
 	int PROJECT__MEASUREMENTS = STORED_OBJECT_FEATURE_COUNT + 5;
 
 	/**
+	 * The feature id for the '<em><b>Reports</b></em>' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROJECT__REPORTS = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
 	 * The feature id for the '<em><b>Batches</b></em>' containment reference list.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT__BATCHES = STORED_OBJECT_FEATURE_COUNT + 6;
+	int PROJECT__BATCHES = STORED_OBJECT_FEATURE_COUNT + 7;
 
 	/**
 	 * The feature id for the '<em><b>Source</b></em>' reference.
@@ -360,7 +369,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT__SOURCE = STORED_OBJECT_FEATURE_COUNT + 7;
+	int PROJECT__SOURCE = STORED_OBJECT_FEATURE_COUNT + 8;
 
 	/**
 	 * The number of structural features of the '<em>Project</em>' class.
@@ -369,7 +378,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 * @ordered
 	 */
-	int PROJECT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 8;
+	int PROJECT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 9;
 
 	/**
 	 * The number of operations of the '<em>Project</em>' class.
@@ -817,6 +826,242 @@ public interface WorkspacePackage extends EPackage {
 	int INSTRUMENT_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
 
 	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.ProcessedSpectrumImpl <em>Processed Spectrum</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.ProcessedSpectrumImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProcessedSpectrum()
+	 * @generated
+	 */
+	int PROCESSED_SPECTRUM = 8;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Measurement Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__MEASUREMENT_ID = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Content</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__CONTENT = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Sample Encoding</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__SAMPLE_ENCODING = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Sha256</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__SHA256 = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Recipe Sha256</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__RECIPE_SHA256 = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Spectrum</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM__SPECTRUM = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The number of structural features of the '<em>Processed Spectrum</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The number of operations of the '<em>Processed Spectrum</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int PROCESSED_SPECTRUM_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
+	 * The meta object id for the '{@link org.tracegas.model.impl.ReportImpl <em>Report</em>}' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see org.tracegas.model.impl.ReportImpl
+	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReport()
+	 * @generated
+	 */
+	int REPORT = 9;
+
+	/**
+	 * The feature id for the '<em><b>Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__ID = STORED_OBJECT__ID;
+
+	/**
+	 * The feature id for the '<em><b>Row Version</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__ROW_VERSION = STORED_OBJECT__ROW_VERSION;
+
+	/**
+	 * The feature id for the '<em><b>Project</b></em>' container reference.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__PROJECT = STORED_OBJECT_FEATURE_COUNT + 0;
+
+	/**
+	 * The feature id for the '<em><b>Report Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__REPORT_ID = STORED_OBJECT_FEATURE_COUNT + 1;
+
+	/**
+	 * The feature id for the '<em><b>Title</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__TITLE = STORED_OBJECT_FEATURE_COUNT + 2;
+
+	/**
+	 * The feature id for the '<em><b>Issued</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__ISSUED = STORED_OBJECT_FEATURE_COUNT + 3;
+
+	/**
+	 * The feature id for the '<em><b>Issued By</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__ISSUED_BY = STORED_OBJECT_FEATURE_COUNT + 4;
+
+	/**
+	 * The feature id for the '<em><b>Content Sha256</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__CONTENT_SHA256 = STORED_OBJECT_FEATURE_COUNT + 5;
+
+	/**
+	 * The feature id for the '<em><b>File Name</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__FILE_NAME = STORED_OBJECT_FEATURE_COUNT + 6;
+
+	/**
+	 * The feature id for the '<em><b>Page Count</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__PAGE_COUNT = STORED_OBJECT_FEATURE_COUNT + 7;
+
+	/**
+	 * The feature id for the '<em><b>Method Version Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__METHOD_VERSION_ID = STORED_OBJECT_FEATURE_COUNT + 8;
+
+	/**
+	 * The feature id for the '<em><b>Library Version Id</b></em>' attribute.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT__LIBRARY_VERSION_ID = STORED_OBJECT_FEATURE_COUNT + 9;
+
+	/**
+	 * The number of structural features of the '<em>Report</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT_FEATURE_COUNT = STORED_OBJECT_FEATURE_COUNT + 10;
+
+	/**
+	 * The number of operations of the '<em>Report</em>' class.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 * @ordered
+	 */
+	int REPORT_OPERATION_COUNT = STORED_OBJECT_OPERATION_COUNT + 0;
+
+	/**
 	 * The meta object id for the '{@link org.tracegas.model.impl.ContentVersionImpl <em>Content Version</em>}' class.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -824,7 +1069,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getContentVersion()
 	 * @generated
 	 */
-	int CONTENT_VERSION = 8;
+	int CONTENT_VERSION = 10;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -960,7 +1205,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceLibrary()
 	 * @generated
 	 */
-	int REFERENCE_LIBRARY = 9;
+	int REFERENCE_LIBRARY = 11;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1033,7 +1278,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceSpectrum()
 	 * @generated
 	 */
-	int REFERENCE_SPECTRUM = 10;
+	int REFERENCE_SPECTRUM = 12;
 
 	/**
 	 * The feature id for the '<em><b>Compound</b></em>' attribute.
@@ -1151,7 +1396,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAnalysisMethod()
 	 * @generated
 	 */
-	int ANALYSIS_METHOD = 11;
+	int ANALYSIS_METHOD = 13;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1224,7 +1469,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMethodVersion()
 	 * @generated
 	 */
-	int METHOD_VERSION = 12;
+	int METHOD_VERSION = 14;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1468,7 +1713,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAnalysisRegion()
 	 * @generated
 	 */
-	int ANALYSIS_REGION = 13;
+	int ANALYSIS_REGION = 15;
 
 	/**
 	 * The feature id for the '<em><b>Compound</b></em>' attribute.
@@ -1550,7 +1795,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResult()
 	 * @generated
 	 */
-	int RESULT = 14;
+	int RESULT = 16;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1704,7 +1949,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getQaOutcome()
 	 * @generated
 	 */
-	int QA_OUTCOME = 15;
+	int QA_OUTCOME = 17;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1858,7 +2103,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getWorkBatch()
 	 * @generated
 	 */
-	int WORK_BATCH = 16;
+	int WORK_BATCH = 18;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -1958,7 +2203,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getUser()
 	 * @generated
 	 */
-	int USER = 17;
+	int USER = 19;
 
 	/**
 	 * The feature id for the '<em><b>Id</b></em>' attribute.
@@ -2040,7 +2285,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getAccessLevel()
 	 * @generated
 	 */
-	int ACCESS_LEVEL = 18;
+	int ACCESS_LEVEL = 20;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.MeasurementKind <em>Measurement Kind</em>}' enum.
@@ -2050,7 +2295,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getMeasurementKind()
 	 * @generated
 	 */
-	int MEASUREMENT_KIND = 19;
+	int MEASUREMENT_KIND = 21;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.SpectralContent <em>Spectral Content</em>}' enum.
@@ -2060,7 +2305,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectralContent()
 	 * @generated
 	 */
-	int SPECTRAL_CONTENT = 20;
+	int SPECTRAL_CONTENT = 22;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.VersionKind <em>Version Kind</em>}' enum.
@@ -2070,7 +2315,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getVersionKind()
 	 * @generated
 	 */
-	int VERSION_KIND = 21;
+	int VERSION_KIND = 23;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ReferenceOrigin <em>Reference Origin</em>}' enum.
@@ -2080,7 +2325,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReferenceOrigin()
 	 * @generated
 	 */
-	int REFERENCE_ORIGIN = 22;
+	int REFERENCE_ORIGIN = 24;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.ResultFlag <em>Result Flag</em>}' enum.
@@ -2090,7 +2335,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultFlag()
 	 * @generated
 	 */
-	int RESULT_FLAG = 23;
+	int RESULT_FLAG = 25;
 
 	/**
 	 * The meta object id for the '{@link org.tracegas.model.Role <em>Role</em>}' enum.
@@ -2100,7 +2345,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getRole()
 	 * @generated
 	 */
-	int ROLE = 24;
+	int ROLE = 26;
 
 	/**
 	 * The meta object id for the '<em>Instant</em>' data type.
@@ -2110,7 +2355,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getInstant()
 	 * @generated
 	 */
-	int INSTANT = 25;
+	int INSTANT = 27;
 
 	/**
 	 * The meta object id for the '<em>Spectrum</em>' data type.
@@ -2120,7 +2365,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getSpectrum()
 	 * @generated
 	 */
-	int SPECTRUM = 26;
+	int SPECTRUM = 28;
 
 	/**
 	 * The meta object id for the '<em>Provenance</em>' data type.
@@ -2130,7 +2375,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProvenance()
 	 * @generated
 	 */
-	int PROVENANCE = 27;
+	int PROVENANCE = 29;
 
 	/**
 	 * The meta object id for the '<em>Result Conditions</em>' data type.
@@ -2140,7 +2385,7 @@ public interface WorkspacePackage extends EPackage {
 	 * @see org.tracegas.model.impl.WorkspacePackageImpl#getResultConditions()
 	 * @generated
 	 */
-	int RESULT_CONDITIONS = 28;
+	int RESULT_CONDITIONS = 30;
 
 
 	/**
@@ -2369,6 +2614,17 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EReference getProject_Measurements();
+
+	/**
+	 * Returns the meta object for the containment reference list '{@link org.tracegas.model.Project#getReports <em>Reports</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the containment reference list '<em>Reports</em>'.
+	 * @see org.tracegas.model.Project#getReports()
+	 * @see #getProject()
+	 * @generated
+	 */
+	EReference getProject_Reports();
 
 	/**
 	 * Returns the meta object for the containment reference list '{@link org.tracegas.model.Project#getBatches <em>Batches</em>}'.
@@ -2739,6 +2995,202 @@ public interface WorkspacePackage extends EPackage {
 	 * @generated
 	 */
 	EAttribute getInstrument_CellPathLength();
+
+	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.ProcessedSpectrum <em>Processed Spectrum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Processed Spectrum</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum
+	 * @generated
+	 */
+	EClass getProcessedSpectrum();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getMeasurementId <em>Measurement Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Measurement Id</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getMeasurementId()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_MeasurementId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getContent <em>Content</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Content</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getContent()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_Content();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getSampleEncoding <em>Sample Encoding</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Sample Encoding</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getSampleEncoding()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_SampleEncoding();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getSha256 <em>Sha256</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Sha256</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getSha256()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_Sha256();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getRecipeSha256 <em>Recipe Sha256</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Recipe Sha256</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getRecipeSha256()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_RecipeSha256();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.ProcessedSpectrum#getSpectrum <em>Spectrum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Spectrum</em>'.
+	 * @see org.tracegas.model.ProcessedSpectrum#getSpectrum()
+	 * @see #getProcessedSpectrum()
+	 * @generated
+	 */
+	EAttribute getProcessedSpectrum_Spectrum();
+
+	/**
+	 * Returns the meta object for class '{@link org.tracegas.model.Report <em>Report</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for class '<em>Report</em>'.
+	 * @see org.tracegas.model.Report
+	 * @generated
+	 */
+	EClass getReport();
+
+	/**
+	 * Returns the meta object for the container reference '{@link org.tracegas.model.Report#getProject <em>Project</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the container reference '<em>Project</em>'.
+	 * @see org.tracegas.model.Report#getProject()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EReference getReport_Project();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getReportId <em>Report Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Report Id</em>'.
+	 * @see org.tracegas.model.Report#getReportId()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_ReportId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getTitle <em>Title</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Title</em>'.
+	 * @see org.tracegas.model.Report#getTitle()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_Title();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getIssued <em>Issued</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Issued</em>'.
+	 * @see org.tracegas.model.Report#getIssued()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_Issued();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getIssuedBy <em>Issued By</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Issued By</em>'.
+	 * @see org.tracegas.model.Report#getIssuedBy()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_IssuedBy();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getContentSha256 <em>Content Sha256</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Content Sha256</em>'.
+	 * @see org.tracegas.model.Report#getContentSha256()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_ContentSha256();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getFileName <em>File Name</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>File Name</em>'.
+	 * @see org.tracegas.model.Report#getFileName()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_FileName();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getPageCount <em>Page Count</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Page Count</em>'.
+	 * @see org.tracegas.model.Report#getPageCount()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_PageCount();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getMethodVersionId <em>Method Version Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Method Version Id</em>'.
+	 * @see org.tracegas.model.Report#getMethodVersionId()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_MethodVersionId();
+
+	/**
+	 * Returns the meta object for the attribute '{@link org.tracegas.model.Report#getLibraryVersionId <em>Library Version Id</em>}'.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @return the meta object for the attribute '<em>Library Version Id</em>'.
+	 * @see org.tracegas.model.Report#getLibraryVersionId()
+	 * @see #getReport()
+	 * @generated
+	 */
+	EAttribute getReport_LibraryVersionId();
 
 	/**
 	 * Returns the meta object for class '{@link org.tracegas.model.ContentVersion <em>Content Version</em>}'.
@@ -4024,6 +4476,14 @@ public interface WorkspacePackage extends EPackage {
 		EReference PROJECT__MEASUREMENTS = eINSTANCE.getProject_Measurements();
 
 		/**
+		 * The meta object literal for the '<em><b>Reports</b></em>' containment reference list feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference PROJECT__REPORTS = eINSTANCE.getProject_Reports();
+
+		/**
 		 * The meta object literal for the '<em><b>Batches</b></em>' containment reference list feature.
 		 * <!-- begin-user-doc -->
 		 * <!-- end-user-doc -->
@@ -4302,6 +4762,154 @@ public interface WorkspacePackage extends EPackage {
 		 * @generated
 		 */
 		EAttribute INSTRUMENT__CELL_PATH_LENGTH = eINSTANCE.getInstrument_CellPathLength();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.ProcessedSpectrumImpl <em>Processed Spectrum</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.ProcessedSpectrumImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getProcessedSpectrum()
+		 * @generated
+		 */
+		EClass PROCESSED_SPECTRUM = eINSTANCE.getProcessedSpectrum();
+
+		/**
+		 * The meta object literal for the '<em><b>Measurement Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__MEASUREMENT_ID = eINSTANCE.getProcessedSpectrum_MeasurementId();
+
+		/**
+		 * The meta object literal for the '<em><b>Content</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__CONTENT = eINSTANCE.getProcessedSpectrum_Content();
+
+		/**
+		 * The meta object literal for the '<em><b>Sample Encoding</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__SAMPLE_ENCODING = eINSTANCE.getProcessedSpectrum_SampleEncoding();
+
+		/**
+		 * The meta object literal for the '<em><b>Sha256</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__SHA256 = eINSTANCE.getProcessedSpectrum_Sha256();
+
+		/**
+		 * The meta object literal for the '<em><b>Recipe Sha256</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__RECIPE_SHA256 = eINSTANCE.getProcessedSpectrum_RecipeSha256();
+
+		/**
+		 * The meta object literal for the '<em><b>Spectrum</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute PROCESSED_SPECTRUM__SPECTRUM = eINSTANCE.getProcessedSpectrum_Spectrum();
+
+		/**
+		 * The meta object literal for the '{@link org.tracegas.model.impl.ReportImpl <em>Report</em>}' class.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @see org.tracegas.model.impl.ReportImpl
+		 * @see org.tracegas.model.impl.WorkspacePackageImpl#getReport()
+		 * @generated
+		 */
+		EClass REPORT = eINSTANCE.getReport();
+
+		/**
+		 * The meta object literal for the '<em><b>Project</b></em>' container reference feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EReference REPORT__PROJECT = eINSTANCE.getReport_Project();
+
+		/**
+		 * The meta object literal for the '<em><b>Report Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__REPORT_ID = eINSTANCE.getReport_ReportId();
+
+		/**
+		 * The meta object literal for the '<em><b>Title</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__TITLE = eINSTANCE.getReport_Title();
+
+		/**
+		 * The meta object literal for the '<em><b>Issued</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__ISSUED = eINSTANCE.getReport_Issued();
+
+		/**
+		 * The meta object literal for the '<em><b>Issued By</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__ISSUED_BY = eINSTANCE.getReport_IssuedBy();
+
+		/**
+		 * The meta object literal for the '<em><b>Content Sha256</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__CONTENT_SHA256 = eINSTANCE.getReport_ContentSha256();
+
+		/**
+		 * The meta object literal for the '<em><b>File Name</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__FILE_NAME = eINSTANCE.getReport_FileName();
+
+		/**
+		 * The meta object literal for the '<em><b>Page Count</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__PAGE_COUNT = eINSTANCE.getReport_PageCount();
+
+		/**
+		 * The meta object literal for the '<em><b>Method Version Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__METHOD_VERSION_ID = eINSTANCE.getReport_MethodVersionId();
+
+		/**
+		 * The meta object literal for the '<em><b>Library Version Id</b></em>' attribute feature.
+		 * <!-- begin-user-doc -->
+		 * <!-- end-user-doc -->
+		 * @generated
+		 */
+		EAttribute REPORT__LIBRARY_VERSION_ID = eINSTANCE.getReport_LibraryVersionId();
 
 		/**
 		 * The meta object literal for the '{@link org.tracegas.model.impl.ContentVersionImpl <em>Content Version</em>}' class.

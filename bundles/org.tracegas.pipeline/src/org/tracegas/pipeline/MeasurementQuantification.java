@@ -348,6 +348,6 @@ public final class MeasurementQuantification {
 
     private Spectrum values(Measurement m, Map<String, Spectrum> pending) {
         Spectrum values = pending.get(m.getId());
-        return values != null ? values : store.spectra().load(actor, m.getSpectrumId()).spectrum();
+        return values != null ? values : store.spectra().load(actor, m.getSpectrumId()).getSpectrum();
     }
 }

@@ -77,9 +77,9 @@ abstract class BlockServiceContract {
             StoredMeasurement out = stored.get(i);
             assertEquals(in.time(), measurements.get(i).getTime());
             assertEquals(f.analyst.userId(), measurements.get(i).getOperatorId());
-            StoredSpectrum spectrum = f.store.spectra().load(f.analyst, out.spectrumId());
-            assertEquals(out.measurementId(), spectrum.measurementId());
-            assertArrayEquals(in.absorbance().toArray(), spectrum.spectrum().toArray(), 0.0);
+            org.tracegas.model.ProcessedSpectrum spectrum = f.store.spectra().load(f.analyst, out.spectrumId());
+            assertEquals(out.measurementId(), spectrum.getMeasurementId());
+            assertArrayEquals(in.absorbance().toArray(), spectrum.getSpectrum().toArray(), 0.0);
             List<Result> own = results.stream().filter(r -> r.getMeasurementId().equals(out.measurementId()))
                     .sorted((a, b) -> out.resultIds().indexOf(a.getId()) - out.resultIds().indexOf(b.getId()))
                     .toList();
@@ -94,7 +94,9 @@ abstract class BlockServiceContract {
                     "the results given stay as they were: the store records copies");
 
             Map<String, String> audit = auditValues(out.measurementId());
-            assertEquals(spectrum.sha256(), audit.get("spectrumSha256"));
+            assertEquals(spectrum.getSha256(), audit.get("spectrumSha256"));
+            assertEquals(in.encoding().name(), spectrum.getSampleEncoding());
+            assertEquals(null, spectrum.getRecipeSha256(), "a block's results are stored without a recipe");
             assertEquals(out.spectrumId(), audit.get("spectrum"));
             assertEquals(String.join(",", out.resultIds()), audit.get("resultIds"));
             assertEquals(Integer.toString(own.size()), audit.get("results"));

@@ -55,7 +55,7 @@ class H2WorkspaceStoreTest extends WorkspaceStoreContract {
         store = backend.open();
         try {
             String after = store.spectra().store(analyst, project, SpectrumInput.of(SpectralContent.ABSORBANCE, s));
-            assertEquals(s.axis(), store.spectra().load(analyst, before).spectrum().axis());
+            assertEquals(s.axis(), store.spectra().load(analyst, before).getSpectrum().axis());
             assertTrue(seq(backend, after) > seq(backend, before), "the later spectrum's number is larger");
         } finally {
             store.close();

@@ -6,6 +6,8 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
 import java.nio.charset.StandardCharsets;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
@@ -129,7 +131,7 @@ abstract class ImportServiceContract {
                         read.getContent(), read.getLabels().map()));
         assertEquals(f.project.getId(), read.getProject().getId());
         assertEquals(f.project.getClient().getId(), read.getProject().getClient().getId());
-        assertEquals(0.1, f.store.spectra().load(f.reader, read.getSpectrumId()).spectrum().get(0), 0,
+        assertEquals(0.1, f.store.spectra().load(f.reader, read.getSpectrumId()).getSpectrum().get(0), 0,
                 "the stored values as read, bit-exact");
         assertEquals(null, read.getSpectrum(), "values stay in their block when measurements are read");
     }
@@ -204,5 +206,58 @@ abstract class ImportServiceContract {
         assertEquals(1, f.count("SELECT COUNT(*) FROM processing_recipe"), "a recipe's text is kept once");
         assertEquals(2, f.count("SELECT COUNT(*) FROM audit_record WHERE object_type = 'measurement-analysis'"));
         assertTrue(f.store.verifyAuditTrail().intact());
+    }
+
+    @Test
+    void aProcessedSpectrumIsReadWithItsEncodingHashesAndTheRecipeThatMadeIt() throws Exception {
+        ImportedFile file = f.store.imports().importFile(f.analyst, f.project.getId(),
+                new RawFile("stack-03.jdx", "JCAMP-DX 5.01", new byte[] { 4, 5, 6 }), List.of(sample(1, Map.of())));
+        String measurement = file.measurementIds().get(0);
+        Result co = Results.of(null, "CO", 12.5, 0.8, 0.3, "ppm", Set.of(),
+                new Provenance(f.method.getId(), f.library.getId(), "0.1.0",
+                        "e3b0c44298fc1c149afbf4c8996fb92427ae41e4649b934ca495991b7852b855"),
+                null);
+        Spectrum a = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.5, 3),
+                new double[] { 0.1, 0.2, 0.3 }, Ordinate.ABSORBANCE);
+        String other = "recipe 1\nbaseline degree=0;regions=2000:2010\n";
+        String first = f.store.analyses().store(f.analyst, f.project.getId(), List.of(new MeasurementAnalysis(
+                measurement, RECIPE, a, SampleEncoding.FLOAT32_LE, List.of(co)))).get(0).spectrumId();
+        // the same measurement processed again with another recipe: each absorbance names its own
+        String second = f.store.analyses().store(f.analyst, f.project.getId(), List.of(new MeasurementAnalysis(
+                measurement, other, a, SampleEncoding.FLOAT32_LE, List.of(co)))).get(0).spectrumId();
+
+        // IEEE 754-2019 binary32, little-endian, one value after the other: the bytes the hash is of
+        ByteBuffer floats = ByteBuffer.allocate(12).order(ByteOrder.LITTLE_ENDIAN);
+        floats.putFloat(0.1f).putFloat(0.2f).putFloat(0.3f);
+        Map<String, org.tracegas.model.ProcessedSpectrum> read = new LinkedHashMap<>();
+        try (var all = f.store.spectra().stream(f.reader, f.project.getId())) {
+            all.forEach(s -> read.put(s.getId(), s));
+        }
+        assertEquals(List.of(f.store.imports().measurements(f.reader, f.project.getId()).get(0).getSpectrumId(),
+                first, second), List.copyOf(read.keySet()), "the file's values, then the two absorbances");
+        org.tracegas.model.ProcessedSpectrum imported = read.values().iterator().next();
+        assertEquals(SpectralContent.ABSORBANCE, imported.getContent());
+        assertEquals("FLOAT64_LE", imported.getSampleEncoding());
+        assertEquals(null, imported.getRecipeSha256(), "values read from a file were made by no recipe");
+        for (String id : List.of(first, second)) {
+            org.tracegas.model.ProcessedSpectrum p = read.get(id);
+            assertEquals(measurement, p.getMeasurementId());
+            assertEquals(SpectralContent.ABSORBANCE, p.getContent());
+            assertEquals("FLOAT32_LE", p.getSampleEncoding());
+            assertEquals(sha256(floats.array()), p.getSha256());
+            assertEquals(0.2f, p.getSpectrum().get(1), 0.0);
+        }
+        assertEquals(sha256(RECIPE.getBytes(StandardCharsets.UTF_8)), read.get(first).getRecipeSha256());
+        assertEquals(sha256(other.getBytes(StandardCharsets.UTF_8)), read.get(second).getRecipeSha256());
+        assertEquals(other, f.store.analyses().recipe(f.reader, read.get(second).getRecipeSha256()));
+        // one array read alone is the same as streamed
+        org.tracegas.model.ProcessedSpectrum loaded = f.store.spectra().load(f.reader, second);
+        assertEquals(List.of(second, measurement, read.get(second).getSha256(), read.get(second).getRecipeSha256()),
+                List.of(loaded.getId(), loaded.getMeasurementId(), loaded.getSha256(), loaded.getRecipeSha256()));
+    }
+
+    /** SHA-256, lower-case hex, by the JDK's provider (FIPS 180-4), not the store's code. */
+    private static String sha256(byte[] bytes) throws Exception {
+        return java.util.HexFormat.of().formatHex(java.security.MessageDigest.getInstance("SHA-256").digest(bytes));
     }
 }

@@ -63,6 +63,7 @@ abstract class TamperDetectionContract {
         TABLES.put("instrument", new String[] {"instrument", "id"});
         TABLES.put("project_source", new String[] {"project-source", "project_id"});
         TABLES.put("measurement_instrument", new String[] {"measurement-instrument", "measurement_id"});
+        TABLES.put("report", new String[] {"report-issue", "id"});
     }
 
     /** Columns that change without a change of data (locking, storage position, log-in counter, use mark). */
@@ -107,6 +108,20 @@ abstract class TamperDetectionContract {
                         "EPA Method 320, section 9.2"),
                 QaOutcomes.of("Noise level", true, 0.0012, "absorbance", Double.NEGATIVE_INFINITY, 0.002,
                         "RMS <= 0.002", "common practice, no source")));
+        for (int pages : new int[] {0, 9}) { // one issue of unknown page count, one of nine pages
+            org.tracegas.model.Report r = org.tracegas.model.WorkspaceFactory.eINSTANCE.createReport();
+            r.setReportId("WU-1-R" + pages);
+            r.setTitle("Client, stack campaign");
+            // SHA-256 of "abc": FIPS 180-2, appendix B.1
+            r.setContentSha256("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad");
+            r.setFileName("report.pdf");
+            if (pages > 0) {
+                r.setPageCount(pages);
+            }
+            r.setMethodVersionId(fixture.method.getId());
+            r.setLibraryVersionId(fixture.library.getId());
+            store.reports().record(fixture.analyst, fixture.project.getId(), r);
+        }
         // a second client and project, so that every table holds two rows to swap values between
         org.tracegas.model.Project second = store.projects().createProject(fixture.analyst,
                 store.projects().createClient(fixture.analyst, "Second client").getId(), "WU-2", "Kiln campaign");

@@ -89,11 +89,11 @@ abstract class WorkspaceStoreContract {
 
     @Test
     void migrationFromEmptyAppliesTheSchemaOnceAndReopeningKeepsIt() throws Exception {
-        assertEquals(List.of("1", "2", "3", "4", "5", "6", "20", "21", "22", "24"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"success\" = TRUE"
+        assertEquals(List.of("1", "2", "3", "4", "5", "6", "20", "21", "22", "23", "24"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"success\" = TRUE"
                 + " AND \"version\" IS NOT NULL ORDER BY \"installed_rank\""));
         store.close();
         store = backend.open();
-        assertEquals(List.of("1", "2", "3", "4", "5", "6", "20", "21", "22", "24"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"version\" IS NOT NULL"
+        assertEquals(List.of("1", "2", "3", "4", "5", "6", "20", "21", "22", "23", "24"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"version\" IS NOT NULL"
                 + " ORDER BY \"installed_rank\""));
         assertEquals("Kiln stack spring campaign", store.projects().project(analyst, project.getId()).getName());
     }
@@ -111,11 +111,11 @@ abstract class WorkspaceStoreContract {
         for (Spectrum original : List.of(uniform, explicit)) {
             String id = store.spectra().store(analyst, project.getId(), SpectrumInput.of(SpectralContent.ABSORBANCE,
                     original));
-            StoredSpectrum back = store.spectra().load(analyst, id);
-            assertEquals(original.axis(), back.spectrum().axis());
-            assertEquals(original.ordinate(), back.spectrum().ordinate());
-            assertArrayEquals(rawBits(original.toArray()), rawBits(back.spectrum().toArray()));
-            assertArrayEquals(rawBits(original.axis().toArray()), rawBits(back.spectrum().axis().toArray()));
+            org.tracegas.model.ProcessedSpectrum back = store.spectra().load(analyst, id);
+            assertEquals(original.axis(), back.getSpectrum().axis());
+            assertEquals(original.ordinate(), back.getSpectrum().ordinate());
+            assertArrayEquals(rawBits(original.toArray()), rawBits(back.getSpectrum().toArray()));
+            assertArrayEquals(rawBits(original.axis().toArray()), rawBits(back.getSpectrum().axis().toArray()));
 
             byte[] blob = bytes("SELECT value_data FROM spectral_data WHERE id = ?", id);
             assertEquals(8 * values.length, blob.length);
@@ -134,7 +134,7 @@ abstract class WorkspaceStoreContract {
                 Ordinate.ABSORBANCE);
         String id = store.spectra().store(analyst, project.getId(), new SpectrumInput(null, SpectralContent.ABSORBANCE,
                 s, SampleEncoding.FLOAT32_LE));
-        double[] back = store.spectra().load(analyst, id).spectrum().toArray();
+        double[] back = store.spectra().load(analyst, id).getSpectrum().toArray();
         for (int i = 0; i < values.length; i++) {
             assertEquals((double) (float) values[i], back[i], 0.0, "value " + i);
         }
@@ -159,10 +159,10 @@ abstract class WorkspaceStoreContract {
         long before = usedHeapAfterGc();
         long peak = 0;
         int seen = 0;
-        try (Stream<StoredSpectrum> stream = store.spectra().stream(analyst, project.getId())) {
-            Iterator<StoredSpectrum> it = stream.iterator();
+        try (Stream<org.tracegas.model.ProcessedSpectrum> stream = store.spectra().stream(analyst, project.getId())) {
+            Iterator<org.tracegas.model.ProcessedSpectrum> it = stream.iterator();
             while (it.hasNext()) {
-                Spectrum s = it.next().spectrum();
+                Spectrum s = it.next().getSpectrum();
                 assertEquals(seen, s.get(0), 0.0);
                 assertEquals(-seen, s.get(points - 1), 0.0);
                 seen++;
@@ -280,7 +280,7 @@ abstract class WorkspaceStoreContract {
 
         store.projects().grant(analyst, project.getId(), reviewer.userId(), AccessLevel.READ);
         assertEquals(project.getId(), store.projects().project(reviewer, project.getId()).getId());
-        assertEquals(s, store.spectra().load(reviewer, id).spectrum());
+        assertEquals(s, store.spectra().load(reviewer, id).getSpectrum());
         assertThrows(AccessDeniedException.class,
                 () -> store.projects().rename(reviewer, project.getId(), project.getRowVersion(), "Renamed"));
         assertThrows(AccessDeniedException.class,

@@ -11,7 +11,7 @@ import java.util.List;
  * runners and workbenches log in as. The everyday role may read and add rows, and update only the columns the
  * store's services change (a user's roles and lock, a project's name, a grant's access, a draft method or library
  * version, the runners' schedule, the audit chain head, which its trigger lets only advance); it may not delete
- * or truncate anything, change stored measurements, spectra, results, QA outcomes or audit records, or change the
+ * or truncate anything, change stored measurements, spectra, results, QA outcomes, issued reports or audit records, or change the
  * schema. What it may still change is bound to the audit trail and verified like everything else.
  */
 public final class LabServerRoles {
@@ -20,7 +20,7 @@ public final class LabServerRoles {
     static final List<String> TABLES = List.of("app_user", "client", "project", "project_grant", "measurement",
             "spectral_data", "versioned_item", "content_version", "analysis_result", "qa_check", "work_batch",
             "work_unit", "work_unit_measurement", "raw_file", "imported_measurement", "processing_recipe",
-            "data_binding", "audit_record", "audit_chain_head", "site", "emission_source", "instrument",
+            "report", "data_binding", "audit_record", "audit_chain_head", "site", "emission_source", "instrument",
             "project_source", "measurement_instrument");
 
     /** The columns the store's services update, per table. */

@@ -5,7 +5,8 @@ import java.util.stream.Stream;
 
 /**
  * Spectral arrays of a project, stored as little-endian binary numbers with the axis as first, step and
- * size (or as an explicit binary axis).
+ * size (or as an explicit binary axis). They are read back as {@link org.tracegas.model.ProcessedSpectrum}s of
+ * the workspace model (named in full: this package's {@link ProcessedSpectrum} is what a block writes).
  */
 public interface SpectrumService {
 
@@ -19,12 +20,16 @@ public interface SpectrumService {
      */
     List<String> storeAll(Session actor, String projectId, List<SpectrumInput> spectra);
 
-    /** @throws NoSuchObjectException if there is no such array */
-    StoredSpectrum load(Session actor, String dataId);
+    /**
+     * Reads one array with its values.
+     *
+     * @throws NoSuchObjectException if there is no such array
+     */
+    org.tracegas.model.ProcessedSpectrum load(Session actor, String dataId);
 
     /**
      * All spectra of a project in storage order, read row by row from a database cursor: only a few rows
      * are held at a time. The stream holds a database connection: close it (try-with-resources).
      */
-    Stream<StoredSpectrum> stream(Session actor, String projectId);
+    Stream<org.tracegas.model.ProcessedSpectrum> stream(Session actor, String projectId);
 }

@@ -42,6 +42,9 @@ public interface WorkspaceStore extends AutoCloseable {
     /** Analyses of measurements already in a project, each result naming the recipe that ran. */
     AnalysisService analyses();
 
+    /** The reports issued from a project, each with its content hash, issuer and versions. */
+    ReportService reports();
+
     /** Releases the database (an embedded H2 database is shut down and its files unlocked). */
     @Override
     void close();

@@ -23,13 +23,20 @@ import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.ReferenceOrigin;
 import org.tracegas.model.ReferenceSpectrum;
 import org.tracegas.model.Site;
 import org.tracegas.model.WorkBatch;
+import org.tracegas.model.Report;
+import org.tracegas.model.SpectralContent;
 import org.tracegas.model.WorkspaceFactory;
+import org.tracegas.spectrum.AxisUnit;
+import org.tracegas.spectrum.Ordinate;
+import org.tracegas.spectrum.SpectralAxis;
+import org.tracegas.spectrum.Spectrum;
 
 /**
  * The labels and properties the generated item providers give the workbench's navigator and properties view,
@@ -49,6 +56,18 @@ class WorkbenchItemProviderAdapterFactoryTest {
     @AfterEach
     void dispose() {
         factory.dispose();
+    }
+
+    private Map<String, String> properties(Object o) {
+        IItemPropertySource source = (IItemPropertySource) factory.adapt(o, IItemPropertySource.class);
+        Map<String, String> shown = new LinkedHashMap<>();
+        for (IItemPropertyDescriptor d : source.getPropertyDescriptors(o)) {
+            Object value = d.getPropertyValue(o);
+            // an attribute's value comes wrapped (for cell editors); its label provider writes the plain value
+            value = value instanceof IItemPropertySource wrapper ? wrapper.getEditableValue(value) : value;
+            shown.put(d.getDisplayName(o), d.getLabelProvider(o).getText(value));
+        }
+        return shown;
     }
 
     private String text(Object o) {
@@ -99,18 +118,6 @@ class WorkbenchItemProviderAdapterFactoryTest {
         assertEquals("Kiln stack CO/NO", text(method));
         assertEquals("version 2 (frozen)", text(v));
         assertEquals("CO  2040–2220.5 cm-1", text(co));
-    }
-
-    private Map<String, String> properties(Object o) {
-        IItemPropertySource source = (IItemPropertySource) factory.adapt(o, IItemPropertySource.class);
-        Map<String, String> shown = new LinkedHashMap<>();
-        for (IItemPropertyDescriptor d : source.getPropertyDescriptors(o)) {
-            Object value = d.getPropertyValue(o);
-            // an attribute's value comes wrapped (for cell editors); its label provider writes the plain value
-            value = value instanceof IItemPropertySource wrapper ? wrapper.getEditableValue(value) : value;
-            shown.put(d.getDisplayName(o), d.getLabelProvider(o).getText(value));
-        }
-        return shown;
     }
 
     @Test
@@ -274,5 +281,47 @@ class WorkbenchItemProviderAdapterFactoryTest {
         assertEquals("12", shown.get("Work units"));
         assertEquals("u-analyst", shown.get("Created by (user id)"));
         assertEquals("2026-07-14T09:05:00Z", shown.get("Created (UTC)"));
+    }
+
+    @Test
+    void aProcessedSpectrumIsNamedByItsContentAndShowsItsHashesButNotItsValues() {
+        ProcessedSpectrum s = model.createProcessedSpectrum();
+        s.setContent(SpectralContent.SINGLE_BEAM);
+        s.setMeasurementId("m-0630");
+        s.setSampleEncoding("FLOAT32_LE");
+        s.setSha256(SHA256_ABC);
+        assertEquals("single beam  (values not read)", text(s));
+        s.setSpectrum(new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 600, 0.5, 3), new double[] {1, 2, 3},
+                Ordinate.SINGLE_BEAM));
+        assertEquals("single beam  3 points", text(s));
+
+        Map<String, String> shown = properties(s);
+        assertEquals("single beam", shown.get("Content"));
+        assertEquals("m-0630", shown.get("Measurement id"));
+        assertEquals("FLOAT32_LE", shown.get("Stored as (encoding)"));
+        assertEquals(SHA256_ABC, shown.get("Values SHA-256"));
+        assertTrue(shown.containsKey("Processing recipe SHA-256"), shown.keySet().toString());
+        // a few thousand numbers are no property value: the spectrum view draws them
+        assertFalse(shown.containsKey("Spectrum"), shown.keySet().toString());
+    }
+
+    @Test
+    void aReportIsAChildOfItsProjectNamedByItsIdAndIssueAndShowsItsSignedHash() {
+        Project p = campaign();
+        measurement(p, MeasurementKind.SAMPLE, "2026-07-14T06:00:00Z");
+        Report r = model.createReport();
+        r.setReportId("KLN-2026-07-R1");
+        r.setIssued(Instant.parse("2026-07-20T09:15:00Z"));
+        r.setContentSha256(SHA256_ABC);
+        r.setFileName("report.pdf");
+        p.getReports().add(r);
+        assertEquals("report KLN-2026-07-R1  issued 2026-07-20 09:15:00 UTC", text(r));
+        ITreeItemContentProvider projects = (ITreeItemContentProvider) factory.adapt(p, ITreeItemContentProvider.class);
+        assertEquals(List.of(p.getMeasurements().get(0), r), List.copyOf(projects.getChildren(p)));
+
+        Map<String, String> shown = properties(r);
+        assertEquals(SHA256_ABC, shown.get("Content SHA-256 (signed)"));
+        assertEquals("report.pdf", shown.get("File"));
+        assertTrue(shown.containsKey("Issued by (user id)") && shown.containsKey("Pages"), shown.keySet().toString());
     }
 }

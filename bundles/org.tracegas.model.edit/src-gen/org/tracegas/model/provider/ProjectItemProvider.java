@@ -180,6 +180,7 @@ public class ProjectItemProvider extends StoredObjectItemProvider {
 		if (childrenFeatures == null) {
 			super.getChildrenFeatures(object);
 			childrenFeatures.add(WorkspacePackage.Literals.PROJECT__MEASUREMENTS);
+			childrenFeatures.add(WorkspacePackage.Literals.PROJECT__REPORTS);
 			childrenFeatures.add(WorkspacePackage.Literals.PROJECT__BATCHES);
 		}
 		return childrenFeatures;
@@ -243,6 +244,7 @@ public class ProjectItemProvider extends StoredObjectItemProvider {
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), false, true));
 				return;
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
+			case WorkspacePackage.PROJECT__REPORTS:
 			case WorkspacePackage.PROJECT__BATCHES:
 				fireNotifyChanged(new ViewerNotification(notification, notification.getNotifier(), true, false));
 				return;
@@ -265,6 +267,11 @@ public class ProjectItemProvider extends StoredObjectItemProvider {
 			(createChildParameter
 				(WorkspacePackage.Literals.PROJECT__MEASUREMENTS,
 				 WorkspaceFactory.eINSTANCE.createMeasurement()));
+
+		newChildDescriptors.add
+			(createChildParameter
+				(WorkspacePackage.Literals.PROJECT__REPORTS,
+				 WorkspaceFactory.eINSTANCE.createReport()));
 
 		newChildDescriptors.add
 			(createChildParameter

@@ -233,6 +233,52 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 	}
 
 	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.ProcessedSpectrum} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected ProcessedSpectrumItemProvider processedSpectrumItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.ProcessedSpectrum}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createProcessedSpectrumAdapter() {
+		if (processedSpectrumItemProvider == null) {
+			processedSpectrumItemProvider = new ProcessedSpectrumItemProvider(this);
+		}
+
+		return processedSpectrumItemProvider;
+	}
+
+	/**
+	 * This keeps track of the one adapter used for all {@link org.tracegas.model.Report} instances.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	protected ReportItemProvider reportItemProvider;
+
+	/**
+	 * This creates an adapter for a {@link org.tracegas.model.Report}.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Adapter createReportAdapter() {
+		if (reportItemProvider == null) {
+			reportItemProvider = new ReportItemProvider(this);
+		}
+
+		return reportItemProvider;
+	}
+
+	/**
 	 * This keeps track of the one adapter used for all {@link org.tracegas.model.ContentVersion} instances.
 	 * <!-- begin-user-doc -->
 	 * <!-- end-user-doc -->
@@ -574,6 +620,8 @@ public class WorkspaceItemProviderAdapterFactory extends WorkspaceAdapterFactory
 		if (emissionSourceItemProvider != null) emissionSourceItemProvider.dispose();
 		if (measurementItemProvider != null) measurementItemProvider.dispose();
 		if (instrumentItemProvider != null) instrumentItemProvider.dispose();
+		if (processedSpectrumItemProvider != null) processedSpectrumItemProvider.dispose();
+		if (reportItemProvider != null) reportItemProvider.dispose();
 		if (contentVersionItemProvider != null) contentVersionItemProvider.dispose();
 		if (referenceLibraryItemProvider != null) referenceLibraryItemProvider.dispose();
 		if (referenceSpectrumItemProvider != null) referenceSpectrumItemProvider.dispose();

@@ -14,19 +14,23 @@ import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.Project;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.ReferenceOrigin;
 import org.tracegas.model.ReferenceSpectrum;
+import org.tracegas.model.Report;
 import org.tracegas.model.Site;
+import org.tracegas.model.SpectralContent;
 import org.tracegas.model.WorkBatch;
 
 /**
  * The generated item providers with the labels the workbench shows: a client, a site and an emission source by
  * their names, a campaign by its code, name and measurement count, a measurement by its kind and start (UTC),
- * an instrument by its name and serial number, a reference spectrum by its compound and amount (and whether it
- * was computed), a method version by its number and whether results use it, a work batch by its unit count and
- * when it was created (UTC). The generated labels put the type's name first ("Client Eastfield Cement"),
+ * a processed spectrum by its content and point count, an instrument by its name and serial number, a reference
+ * spectrum by its compound and amount (and whether it was computed), a report by its id and issue time, a method
+ * version by its number and whether results use it, a work batch by its unit count and when it was created
+ * (UTC). The generated labels put the type's name first ("Client Eastfield Cement"),
  * which the tree's structure already says; the generated code stays as the genmodel makes it, so the labels
  * are given here, by overriding only {@code getText} of the generated providers.
  */
@@ -114,6 +118,35 @@ public class WorkbenchItemProviderAdapterFactory extends WorkspaceItemProviderAd
             };
         }
         return instrumentItemProvider;
+    }
+
+    @Override
+    public Adapter createProcessedSpectrumAdapter() {
+        if (processedSpectrumItemProvider == null) {
+            processedSpectrumItemProvider = new ProcessedSpectrumItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    ProcessedSpectrum s = (ProcessedSpectrum) object;
+                    return content(s.getContent()) + "  " + (s.getSpectrum() == null ? "(values not read)"
+                            : s.getSpectrum().size() + " points");
+                }
+            };
+        }
+        return processedSpectrumItemProvider;
+    }
+
+    @Override
+    public Adapter createReportAdapter() {
+        if (reportItemProvider == null) {
+            reportItemProvider = new ReportItemProvider(this) {
+                @Override
+                public String getText(Object object) {
+                    Report r = (Report) object;
+                    return "report " + r.getReportId() + "  issued " + time(r.getIssued());
+                }
+            };
+        }
+        return reportItemProvider;
     }
 
     @Override
@@ -208,6 +241,11 @@ public class WorkbenchItemProviderAdapterFactory extends WorkspaceItemProviderAd
     /** A measurement's kind as the properties show it too (plugin.properties: "calibration transfer standard"). */
     public static String kind(MeasurementKind kind) {
         return WorkspaceEditPlugin.INSTANCE.getString("_UI_MeasurementKind_" + kind.getName() + "_literal");
+    }
+
+    /** What spectral values are, as the properties show it too (plugin.properties: "single beam"). */
+    public static String content(SpectralContent content) {
+        return WorkspaceEditPlugin.INSTANCE.getString("_UI_SpectralContent_" + content.getName() + "_literal");
     }
 
     /** A point in time as the tree shows it, in UTC to the second; "time unknown" for none. */

@@ -24,6 +24,7 @@ import org.tracegas.model.Client;
 import org.tracegas.model.EmissionSource;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Project;
+import org.tracegas.model.Report;
 import org.tracegas.model.WorkBatch;
 import org.tracegas.model.WorkspacePackage;
 
@@ -41,6 +42,7 @@ import org.tracegas.model.WorkspacePackage;
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getStart <em>Start</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getEnd <em>End</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getMeasurements <em>Measurements</em>}</li>
+ *   <li>{@link org.tracegas.model.impl.ProjectImpl#getReports <em>Reports</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getBatches <em>Batches</em>}</li>
  *   <li>{@link org.tracegas.model.impl.ProjectImpl#getSource <em>Source</em>}</li>
  * </ul>
@@ -137,6 +139,16 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @ordered
 	 */
 	protected EList<Measurement> measurements;
+
+	/**
+	 * The cached value of the '{@link #getReports() <em>Reports</em>}' containment reference list.
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @see #getReports()
+	 * @generated
+	 * @ordered
+	 */
+	protected EList<Report> reports;
 
 	/**
 	 * The cached value of the '{@link #getBatches() <em>Batches</em>}' containment reference list.
@@ -331,6 +343,19 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 	 * @generated
 	 */
 	@Override
+	public EList<Report> getReports() {
+		if (reports == null) {
+			reports = new EObjectContainmentWithInverseEList<Report>(Report.class, this, WorkspacePackage.PROJECT__REPORTS, WorkspacePackage.REPORT__PROJECT);
+		}
+		return reports;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
 	public EList<WorkBatch> getBatches() {
 		if (batches == null) {
 			batches = new EObjectContainmentWithInverseEList<WorkBatch>(WorkBatch.class, this, WorkspacePackage.PROJECT__BATCHES, WorkspacePackage.WORK_BATCH__PROJECT);
@@ -393,6 +418,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return basicSetClient((Client)otherEnd, msgs);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return ((InternalEList<InternalEObject>)(InternalEList<?>)getMeasurements()).basicAdd(otherEnd, msgs);
+			case WorkspacePackage.PROJECT__REPORTS:
+				return ((InternalEList<InternalEObject>)(InternalEList<?>)getReports()).basicAdd(otherEnd, msgs);
 			case WorkspacePackage.PROJECT__BATCHES:
 				return ((InternalEList<InternalEObject>)(InternalEList<?>)getBatches()).basicAdd(otherEnd, msgs);
 		}
@@ -411,6 +438,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return basicSetClient(null, msgs);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return ((InternalEList<?>)getMeasurements()).basicRemove(otherEnd, msgs);
+			case WorkspacePackage.PROJECT__REPORTS:
+				return ((InternalEList<?>)getReports()).basicRemove(otherEnd, msgs);
 			case WorkspacePackage.PROJECT__BATCHES:
 				return ((InternalEList<?>)getBatches()).basicRemove(otherEnd, msgs);
 		}
@@ -451,6 +480,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return getEnd();
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return getMeasurements();
+			case WorkspacePackage.PROJECT__REPORTS:
+				return getReports();
 			case WorkspacePackage.PROJECT__BATCHES:
 				return getBatches();
 			case WorkspacePackage.PROJECT__SOURCE:
@@ -487,6 +518,10 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				getMeasurements().clear();
 				getMeasurements().addAll((Collection<? extends Measurement>)newValue);
+				return;
+			case WorkspacePackage.PROJECT__REPORTS:
+				getReports().clear();
+				getReports().addAll((Collection<? extends Report>)newValue);
 				return;
 			case WorkspacePackage.PROJECT__BATCHES:
 				getBatches().clear();
@@ -525,6 +560,9 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				getMeasurements().clear();
 				return;
+			case WorkspacePackage.PROJECT__REPORTS:
+				getReports().clear();
+				return;
 			case WorkspacePackage.PROJECT__BATCHES:
 				getBatches().clear();
 				return;
@@ -555,6 +593,8 @@ public class ProjectImpl extends StoredObjectImpl implements Project {
 				return END_EDEFAULT == null ? end != null : !END_EDEFAULT.equals(end);
 			case WorkspacePackage.PROJECT__MEASUREMENTS:
 				return measurements != null && !measurements.isEmpty();
+			case WorkspacePackage.PROJECT__REPORTS:
+				return reports != null && !reports.isEmpty();
 			case WorkspacePackage.PROJECT__BATCHES:
 				return batches != null && !batches.isEmpty();
 			case WorkspacePackage.PROJECT__SOURCE:

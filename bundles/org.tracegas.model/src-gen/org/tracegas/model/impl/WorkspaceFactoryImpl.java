@@ -66,6 +66,8 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 			case WorkspacePackage.EMISSION_SOURCE: return createEmissionSource();
 			case WorkspacePackage.MEASUREMENT: return createMeasurement();
 			case WorkspacePackage.INSTRUMENT: return createInstrument();
+			case WorkspacePackage.PROCESSED_SPECTRUM: return createProcessedSpectrum();
+			case WorkspacePackage.REPORT: return createReport();
 			case WorkspacePackage.CONTENT_VERSION: return createContentVersion();
 			case WorkspacePackage.REFERENCE_LIBRARY: return createReferenceLibrary();
 			case WorkspacePackage.REFERENCE_SPECTRUM: return createReferenceSpectrum();
@@ -214,6 +216,28 @@ public class WorkspaceFactoryImpl extends EFactoryImpl implements WorkspaceFacto
 	public Instrument createInstrument() {
 		InstrumentImpl instrument = new InstrumentImpl();
 		return instrument;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public ProcessedSpectrum createProcessedSpectrum() {
+		ProcessedSpectrumImpl processedSpectrum = new ProcessedSpectrumImpl();
+		return processedSpectrum;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public Report createReport() {
+		ReportImpl report = new ReportImpl();
+		return report;
 	}
 
 	/**

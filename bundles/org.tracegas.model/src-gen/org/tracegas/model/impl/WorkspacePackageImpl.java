@@ -23,12 +23,14 @@ import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.MethodVersion;
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
 import org.tracegas.model.QaOutcome;
 import org.tracegas.model.ReferenceLibrary;
 import org.tracegas.model.ReferenceOrigin;
 import org.tracegas.model.ReferenceSpectrum;
+import org.tracegas.model.Report;
 import org.tracegas.model.Result;
 import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
@@ -107,6 +109,20 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	private EClass instrumentEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass processedSpectrumEClass = null;
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	private EClass reportEClass = null;
 
 	/**
 	 * <!-- begin-user-doc -->
@@ -531,7 +547,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EReference getProject_Batches() {
+	public EReference getProject_Reports() {
 		return (EReference)projectEClass.getEStructuralFeatures().get(6);
 	}
 
@@ -541,8 +557,18 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	 * @generated
 	 */
 	@Override
-	public EReference getProject_Source() {
+	public EReference getProject_Batches() {
 		return (EReference)projectEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getProject_Source() {
+		return (EReference)projectEClass.getEStructuralFeatures().get(8);
 	}
 
 	/**
@@ -863,6 +889,186 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 	@Override
 	public EAttribute getInstrument_CellPathLength() {
 		return (EAttribute)instrumentEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getProcessedSpectrum() {
+		return processedSpectrumEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_MeasurementId() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_Content() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_SampleEncoding() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_Sha256() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_RecipeSha256() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getProcessedSpectrum_Spectrum() {
+		return (EAttribute)processedSpectrumEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EClass getReport() {
+		return reportEClass;
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EReference getReport_Project() {
+		return (EReference)reportEClass.getEStructuralFeatures().get(0);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_ReportId() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(1);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_Title() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(2);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_Issued() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(3);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_IssuedBy() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(4);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_ContentSha256() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(5);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_FileName() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(6);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_PageCount() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(7);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_MethodVersionId() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(8);
+	}
+
+	/**
+	 * <!-- begin-user-doc -->
+	 * <!-- end-user-doc -->
+	 * @generated
+	 */
+	@Override
+	public EAttribute getReport_LibraryVersionId() {
+		return (EAttribute)reportEClass.getEStructuralFeatures().get(9);
 	}
 
 	/**
@@ -1908,6 +2114,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(projectEClass, PROJECT__START);
 		createEAttribute(projectEClass, PROJECT__END);
 		createEReference(projectEClass, PROJECT__MEASUREMENTS);
+		createEReference(projectEClass, PROJECT__REPORTS);
 		createEReference(projectEClass, PROJECT__BATCHES);
 		createEReference(projectEClass, PROJECT__SOURCE);
 
@@ -1946,6 +2153,26 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		createEAttribute(instrumentEClass, INSTRUMENT__MAX_PATH_DIFFERENCE);
 		createEAttribute(instrumentEClass, INSTRUMENT__FIELD_OF_VIEW);
 		createEAttribute(instrumentEClass, INSTRUMENT__CELL_PATH_LENGTH);
+
+		processedSpectrumEClass = createEClass(PROCESSED_SPECTRUM);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__MEASUREMENT_ID);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__CONTENT);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__SAMPLE_ENCODING);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__SHA256);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__RECIPE_SHA256);
+		createEAttribute(processedSpectrumEClass, PROCESSED_SPECTRUM__SPECTRUM);
+
+		reportEClass = createEClass(REPORT);
+		createEReference(reportEClass, REPORT__PROJECT);
+		createEAttribute(reportEClass, REPORT__REPORT_ID);
+		createEAttribute(reportEClass, REPORT__TITLE);
+		createEAttribute(reportEClass, REPORT__ISSUED);
+		createEAttribute(reportEClass, REPORT__ISSUED_BY);
+		createEAttribute(reportEClass, REPORT__CONTENT_SHA256);
+		createEAttribute(reportEClass, REPORT__FILE_NAME);
+		createEAttribute(reportEClass, REPORT__PAGE_COUNT);
+		createEAttribute(reportEClass, REPORT__METHOD_VERSION_ID);
+		createEAttribute(reportEClass, REPORT__LIBRARY_VERSION_ID);
 
 		contentVersionEClass = createEClass(CONTENT_VERSION);
 		createEAttribute(contentVersionEClass, CONTENT_VERSION__KIND);
@@ -2095,6 +2322,8 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		emissionSourceEClass.getESuperTypes().add(this.getStoredObject());
 		measurementEClass.getESuperTypes().add(this.getStoredObject());
 		instrumentEClass.getESuperTypes().add(this.getStoredObject());
+		processedSpectrumEClass.getESuperTypes().add(this.getStoredObject());
+		reportEClass.getESuperTypes().add(this.getStoredObject());
 		contentVersionEClass.getESuperTypes().add(this.getStoredObject());
 		referenceLibraryEClass.getESuperTypes().add(this.getStoredObject());
 		analysisMethodEClass.getESuperTypes().add(this.getStoredObject());
@@ -2129,6 +2358,7 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getProject_Start(), this.getInstant(), "start", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getProject_End(), this.getInstant(), "end", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_Measurements(), this.getMeasurement(), this.getMeasurement_Project(), "measurements", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEReference(getProject_Reports(), this.getReport(), this.getReport_Project(), "reports", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_Batches(), this.getWorkBatch(), this.getWorkBatch_Project(), "batches", null, 0, -1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEReference(getProject_Source(), this.getEmissionSource(), null, "source", null, 0, 1, Project.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
@@ -2167,6 +2397,26 @@ public class WorkspacePackageImpl extends EPackageImpl implements WorkspacePacka
 		initEAttribute(getInstrument_MaxPathDifference(), ecorePackage.getEDouble(), "maxPathDifference", null, 0, 1, Instrument.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getInstrument_FieldOfView(), ecorePackage.getEDouble(), "fieldOfView", null, 0, 1, Instrument.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 		initEAttribute(getInstrument_CellPathLength(), ecorePackage.getEDouble(), "cellPathLength", null, 0, 1, Instrument.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(processedSpectrumEClass, ProcessedSpectrum.class, "ProcessedSpectrum", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEAttribute(getProcessedSpectrum_MeasurementId(), ecorePackage.getEString(), "measurementId", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getProcessedSpectrum_Content(), this.getSpectralContent(), "content", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getProcessedSpectrum_SampleEncoding(), ecorePackage.getEString(), "sampleEncoding", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getProcessedSpectrum_Sha256(), ecorePackage.getEString(), "sha256", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getProcessedSpectrum_RecipeSha256(), ecorePackage.getEString(), "recipeSha256", null, 0, 1, ProcessedSpectrum.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getProcessedSpectrum_Spectrum(), this.getSpectrum(), "spectrum", null, 0, 1, ProcessedSpectrum.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+
+		initEClass(reportEClass, Report.class, "Report", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
+		initEReference(getReport_Project(), this.getProject(), this.getProject_Reports(), "project", null, 0, 1, Report.class, IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_COMPOSITE, !IS_RESOLVE_PROXIES, !IS_UNSETTABLE, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_ReportId(), ecorePackage.getEString(), "reportId", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_Title(), ecorePackage.getEString(), "title", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_Issued(), this.getInstant(), "issued", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_IssuedBy(), ecorePackage.getEString(), "issuedBy", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_ContentSha256(), ecorePackage.getEString(), "contentSha256", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_FileName(), ecorePackage.getEString(), "fileName", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_PageCount(), ecorePackage.getEInt(), "pageCount", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_MethodVersionId(), ecorePackage.getEString(), "methodVersionId", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
+		initEAttribute(getReport_LibraryVersionId(), ecorePackage.getEString(), "libraryVersionId", null, 0, 1, Report.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);
 
 		initEClass(contentVersionEClass, ContentVersion.class, "ContentVersion", !IS_ABSTRACT, !IS_INTERFACE, IS_GENERATED_INSTANCE_CLASS);
 		initEAttribute(getContentVersion_Kind(), this.getVersionKind(), "kind", null, 0, 1, ContentVersion.class, !IS_TRANSIENT, !IS_VOLATILE, IS_CHANGEABLE, !IS_UNSETTABLE, !IS_ID, IS_UNIQUE, !IS_DERIVED, IS_ORDERED);

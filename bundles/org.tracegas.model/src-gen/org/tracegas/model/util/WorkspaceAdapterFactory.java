@@ -100,6 +100,14 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 				return createInstrumentAdapter();
 			}
 			@Override
+			public Adapter caseProcessedSpectrum(ProcessedSpectrum object) {
+				return createProcessedSpectrumAdapter();
+			}
+			@Override
+			public Adapter caseReport(Report object) {
+				return createReportAdapter();
+			}
+			@Override
 			public Adapter caseContentVersion(ContentVersion object) {
 				return createContentVersionAdapter();
 			}
@@ -268,6 +276,34 @@ public class WorkspaceAdapterFactory extends AdapterFactoryImpl {
 	 * @generated
 	 */
 	public Adapter createInstrumentAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.ProcessedSpectrum <em>Processed Spectrum</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.ProcessedSpectrum
+	 * @generated
+	 */
+	public Adapter createProcessedSpectrumAdapter() {
+		return null;
+	}
+
+	/**
+	 * Creates a new adapter for an object of class '{@link org.tracegas.model.Report <em>Report</em>}'.
+	 * <!-- begin-user-doc -->
+	 * This default implementation returns null so that we can easily ignore cases;
+	 * it's useful to ignore a case when inheritance will catch all the cases anyway.
+	 * <!-- end-user-doc -->
+	 * @return the new adapter.
+	 * @see org.tracegas.model.Report
+	 * @generated
+	 */
+	public Adapter createReportAdapter() {
 		return null;
 	}
 

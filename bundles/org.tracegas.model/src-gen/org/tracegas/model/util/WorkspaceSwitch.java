@@ -120,6 +120,20 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 				if (result == null) result = defaultCase(theEObject);
 				return result;
 			}
+			case WorkspacePackage.PROCESSED_SPECTRUM: {
+				ProcessedSpectrum processedSpectrum = (ProcessedSpectrum)theEObject;
+				T result = caseProcessedSpectrum(processedSpectrum);
+				if (result == null) result = caseStoredObject(processedSpectrum);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
+			case WorkspacePackage.REPORT: {
+				Report report = (Report)theEObject;
+				T result = caseReport(report);
+				if (result == null) result = caseStoredObject(report);
+				if (result == null) result = defaultCase(theEObject);
+				return result;
+			}
 			case WorkspacePackage.CONTENT_VERSION: {
 				ContentVersion contentVersion = (ContentVersion)theEObject;
 				T result = caseContentVersion(contentVersion);
@@ -310,6 +324,36 @@ public class WorkspaceSwitch<T> extends Switch<T> {
 	 * @generated
 	 */
 	public T caseInstrument(Instrument object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Processed Spectrum</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Processed Spectrum</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseProcessedSpectrum(ProcessedSpectrum object) {
+		return null;
+	}
+
+	/**
+	 * Returns the result of interpreting the object as an instance of '<em>Report</em>'.
+	 * <!-- begin-user-doc -->
+	 * This implementation returns null;
+	 * returning a non-null result will terminate the switch.
+	 * <!-- end-user-doc -->
+	 * @param object the target of the switch.
+	 * @return the result of interpreting the object as an instance of '<em>Report</em>'.
+	 * @see #doSwitch(org.eclipse.emf.ecore.EObject) doSwitch(EObject)
+	 * @generated
+	 */
+	public T caseReport(Report object) {
 		return null;
 	}
 

@@ -24,7 +24,10 @@ import org.tracegas.library.io.FileFormatException;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.model.ContentVersion;
 import org.tracegas.model.Measurement;
+import org.tracegas.model.ProcessedSpectrum;
+import org.tracegas.model.Report;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.pipeline.MeasurementQuantification;
 import org.tracegas.qa.campaign.QaControlCharts;
 import org.tracegas.qa.campaign.QaPlan;
@@ -33,6 +36,7 @@ import org.tracegas.qa.checks.CheckOutcome;
 import org.tracegas.qa.control.ChartEvaluation;
 import org.tracegas.quantify.FitSpectra;
 import org.tracegas.quantify.Sample;
+import org.tracegas.report.Campaign;
 import org.tracegas.report.CsvExport;
 import org.tracegas.report.LibraryVersion;
 import org.tracegas.report.MethodVersion;
@@ -41,7 +45,6 @@ import org.tracegas.report.ReportContent;
 import org.tracegas.report.SpectrumFit;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.Session;
-import org.tracegas.store.StoredSpectrum;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.store.WorkspaceVerification;
 
@@ -157,12 +160,17 @@ public final class CampaignReport {
 
     /**
      * Writes the report into {@code folder} (made if missing) as report.pdf and results.csv, each whole or not at
-     * all. A report id names one report in the workspace, so an id signed already on another project is refused
-     * before anything is written: its signatures would otherwise cover two reports.
+     * all, and records its issue in the project (see {@link #issue}); if the issue cannot be recorded, the files
+     * are removed again. A report id names one report in the
+     * workspace, so an id signed already on another project is refused before anything is written: its
+     * signatures would otherwise cover two reports.
      *
+     * @param methodVersion the method version the content was made for
+     * @param method        that version as stored, with the library version it fits with
      * @throws ReportIdTakenException if the report id is signed already on another project of the workspace
      */
-    public Written writeInto(ReportContent content, Path folder) throws IOException, ReportIdTakenException {
+    public Written writeInto(ReportContent content, ContentVersion methodVersion, StoredMethod method, Path folder)
+            throws IOException, ReportIdTakenException {
         String reportId = content.campaign().reportId();
         Optional<String> other = store.reviews().otherProjectWithReport(projectId, reportId);
         if (other.isPresent()) {
@@ -171,7 +179,38 @@ public final class CampaignReport {
         Files.createDirectories(folder);
         Written written = new Written(folder.resolve("report.pdf"), folder.resolve("results.csv"));
         write(content, written.pdf(), written.csv());
+        try {
+            issue(content, methodVersion, method, written.pdf());
+        } catch (RuntimeException e) {
+            // a report written out is an issue: without its record it is not left behind either
+            try {
+                Files.deleteIfExists(written.pdf());
+                Files.deleteIfExists(written.csv());
+            } catch (IOException d) {
+                e.addSuppressed(d);
+            }
+            throw e;
+        }
         return written;
+    }
+
+    /**
+     * Records in the project that the report was issued, once its PDF is written whole: report id, title, file,
+     * the method and library versions and the content hash its review and approval signatures are given on.
+     *
+     * @return the report as stored
+     */
+    public Report issue(ReportContent content, ContentVersion methodVersion, StoredMethod method, Path pdf) {
+        Campaign c = content.campaign();
+        Report r = WorkspaceFactory.eINSTANCE.createReport();
+        r.setReportId(c.reportId());
+        r.setTitle(c.client() + ", " + c.plant() + ", " + c.source() + ", " + c.firstDay()
+                + (c.lastDay().equals(c.firstDay()) ? "" : " to " + c.lastDay()));
+        r.setContentSha256(content.contentHash());
+        r.setFileName(pdf.getFileName().toString());
+        r.setMethodVersionId(methodVersion.getId());
+        r.setLibraryVersionId(method.libraryVersionId());
+        return store.reports().record(actor, projectId, r);
     }
 
     /** Writes the PDF and the CSV of results, each whole or not at all. */
@@ -202,13 +241,13 @@ public final class CampaignReport {
                 .findFirst().orElseThrow(() -> new FileFormatException(plan.file(), 0,
                         "example-fit", "no stored sample at " + plan.exampleTime()));
         String measurement = sample.getId();
-        Optional<StoredSpectrum> stored;
-        try (Stream<StoredSpectrum> all = store.spectra().stream(actor, projectId)) {
-            stored = all.filter(s -> measurement.equals(s.measurementId())
-                    && s.content() == SpectralContent.ABSORBANCE).findFirst();
+        Optional<ProcessedSpectrum> stored;
+        try (Stream<ProcessedSpectrum> all = store.spectra().stream(actor, projectId)) {
+            stored = all.filter(s -> measurement.equals(s.getMeasurementId())
+                    && s.getContent() == SpectralContent.ABSORBANCE).findFirst();
         }
         Spectrum a = stored.orElseThrow(() -> new FileFormatException(plan.file(), 0, "example-fit",
-                "no stored absorbance at " + plan.exampleTime())).spectrum();
+                "no stored absorbance at " + plan.exampleTime())).getSpectrum();
         FitSpectra fit = method.quantifier(a.axis(), software, true).quantify(
                 // in its cell, for a method whose spectra are computed at each measurement's conditions
                 MeasurementQuantification.inCellOf(Sample.of(a), sample))

@@ -181,9 +181,9 @@ class WorkbenchMethodVersionTest {
             // the highest absorbance of each sample in the CO window, read from the absorbance stored with the
             // results: the second sample (three times the CO) absorbs more
             Map<String, Double> highest = new java.util.HashMap<>();
-            store.spectra().stream(ana, project).filter(s -> s.content() == SpectralContent.ABSORBANCE
-                    && s.measurementId() != null).forEach(s -> highest.merge(s.measurementId(), highest(s
-                            .spectrum(), CO_LOW, CO_HIGH), Math::max));
+            store.spectra().stream(ana, project).filter(s -> s.getContent() == SpectralContent.ABSORBANCE
+                    && s.getMeasurementId() != null).forEach(s -> highest.merge(s.getMeasurementId(), highest(s
+                            .getSpectrum(), CO_LOW, CO_HIGH), Math::max));
             List<Double> peaks = results.stream().filter(r -> r.getCompound().equals("CO"))
                     .sorted(java.util.Comparator.comparing(r -> times.get(r.getMeasurementId())))
                     .map(r -> highest.get(r.getMeasurementId())).toList();

@@ -63,8 +63,9 @@ public final class ReportCommand implements Command {
             Project project = StoredMethods.project(store, actor, options.text("--project"));
             CampaignReport report = new CampaignReport(store, actor, project.getId(), StoredMethods.SOFTWARE);
             ReportContent content;
+            StoredMethods.Found found;
             try {
-                StoredMethods.Found found = StoredMethods.find(store, options);
+                found = StoredMethods.find(store, options);
                 content = report.content(found.version(), found.method(), ReportPlan.read(options.path("--plan")));
             } catch (FileFormatException | ImportException e) {
                 context.err().println("tracegas report: " + e.getMessage());
@@ -72,7 +73,7 @@ public final class ReportCommand implements Command {
             }
             CampaignReport.Written written;
             try {
-                written = report.writeInto(content, out);
+                written = report.writeInto(content, found.version(), found.method(), out);
             } catch (ReportIdTakenException e) {
                 context.err().println("tracegas report: " + e.getMessage() + "; give this report its own report-id"
                         + " in the plan " + options.path("--plan") + " (nothing written)");

@@ -84,7 +84,12 @@ enum DataKind {
             col("source_id", TEXT)),
     /** The instrument that made a measurement; key: the measurement id. */
     MEASUREMENT_INSTRUMENT("measurement-instrument", "measurement_instrument", "measurement_id",
-            col("measurement_id", TEXT), col("instrument_id", TEXT));
+            col("measurement_id", TEXT), col("instrument_id", TEXT)),
+    /** An issue of a report: its id, title, issuer and time, file, content hash and versions. */
+    REPORT("report-issue", "report", "id", col("id", TEXT), col("project_id", TEXT), col("report_id", TEXT),
+            col("title", TEXT), col("issued_at", TIME), col("issued_by", TEXT), col("content_sha256", TEXT),
+            col("file_name", TEXT), col("page_count", INTEGER), col("method_version_id", TEXT),
+            col("library_version_id", TEXT));
 
     private final String label;
     private final String table;

@@ -14,12 +14,12 @@ import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.Session;
 import org.tracegas.store.SpectrumInput;
 import org.tracegas.store.SpectrumService;
 import org.tracegas.store.StoreException;
-import org.tracegas.store.StoredSpectrum;
 
 final class JdbcSpectrumService implements SpectrumService {
 
@@ -61,7 +61,7 @@ final class JdbcSpectrumService implements SpectrumService {
     }
 
     @Override
-    public StoredSpectrum load(Session actor, String dataId) {
+    public ProcessedSpectrum load(Session actor, String dataId) {
         return transactions.run("reading spectrum " + dataId, tx -> {
             String projectId = tx.queryOne("SELECT project_id FROM spectral_data WHERE id = ?", rs -> rs.getString(1),
                     dataId).orElseThrow(() -> new NoSuchObjectException("spectral data", dataId));
@@ -72,7 +72,7 @@ final class JdbcSpectrumService implements SpectrumService {
     }
 
     @Override
-    public Stream<StoredSpectrum> stream(Session actor, String projectId) {
+    public Stream<ProcessedSpectrum> stream(Session actor, String projectId) {
         Connection c = null;
         PreparedStatement ps = null;
         try {

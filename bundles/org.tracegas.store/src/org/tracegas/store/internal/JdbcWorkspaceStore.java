@@ -17,6 +17,7 @@ import org.tracegas.store.ImportService;
 import org.tracegas.store.InstrumentService;
 import org.tracegas.store.ProjectService;
 import org.tracegas.store.QaService;
+import org.tracegas.store.ReportService;
 import org.tracegas.store.ResultService;
 import org.tracegas.store.SiteService;
 import org.tracegas.store.SpectrumService;
@@ -50,6 +51,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     private final AuditService audit;
     private final ImportService imports;
     private final AnalysisService analyses;
+    private final ReportService reports;
 
     private JdbcWorkspaceStore(DataSource dataSource, Backend backend, int maxFailedLogins) {
         this.dataSource = dataSource;
@@ -69,6 +71,7 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
         audit = new JdbcAuditService(transactions);
         imports = new JdbcImportService(transactions);
         analyses = new JdbcAnalysisService(transactions, versionService);
+        reports = new JdbcReportService(transactions);
     }
 
     /** An embedded H2 database in {@code folder} (created when missing), file {@code workspace.mv.db}. */
@@ -213,6 +216,11 @@ public final class JdbcWorkspaceStore implements WorkspaceStore {
     @Override
     public AnalysisService analyses() {
         return analyses;
+    }
+
+    @Override
+    public ReportService reports() {
+        return reports;
     }
 
     @Override

@@ -38,7 +38,8 @@ final class Migrations {
     /** The migrations, oldest first; add new files here. */
     static final List<String> SCRIPTS = List.of("V1__workspace_schema.sql", "V2__qa_checks.sql",
             "V3__work_units.sql", "V4__work_batch_method_version.sql", "V6__data_binding.sql",
-            "V20__imported_files.sql", "V21__result_conditions.sql", "V22__sites_sources_instruments.sql");
+            "V20__imported_files.sql", "V21__result_conditions.sql", "V22__sites_sources_instruments.sql",
+            "V23__reports.sql");
 
     /** Migrations that plain SQL cannot write for H2 and PostgreSQL alike; add new ones here. */
     static JavaMigration[] javaMigrations() {

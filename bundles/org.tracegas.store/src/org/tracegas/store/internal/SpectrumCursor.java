@@ -11,14 +11,14 @@ import java.util.Spliterators;
 import java.util.stream.Stream;
 import java.util.stream.StreamSupport;
 
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.store.StoreException;
-import org.tracegas.store.StoredSpectrum;
 
 /**
  * Spectra read lazily from an open result set: one row is decoded per {@link #next()}, and the driver
  * holds only its fetch-size window. Closing the stream closes result set, statement and connection.
  */
-final class SpectrumCursor implements Iterator<StoredSpectrum>, AutoCloseable {
+final class SpectrumCursor implements Iterator<ProcessedSpectrum>, AutoCloseable {
 
     /** Rows per round trip; enough to hide latency, small enough that memory stays flat. */
     static final int FETCH_SIZE = 200;
@@ -36,7 +36,7 @@ final class SpectrumCursor implements Iterator<StoredSpectrum>, AutoCloseable {
     }
 
     /** Takes ownership of the connection and statement; the statement must be ready to execute. */
-    static Stream<StoredSpectrum> stream(Connection connection, PreparedStatement statement) throws SQLException {
+    static Stream<ProcessedSpectrum> stream(Connection connection, PreparedStatement statement) throws SQLException {
         statement.setFetchSize(FETCH_SIZE);
         SpectrumCursor cursor = new SpectrumCursor(connection, statement, statement.executeQuery());
         return StreamSupport.stream(Spliterators.spliteratorUnknownSize(cursor,
@@ -57,7 +57,7 @@ final class SpectrumCursor implements Iterator<StoredSpectrum>, AutoCloseable {
     }
 
     @Override
-    public StoredSpectrum next() {
+    public ProcessedSpectrum next() {
         if (!hasNext()) {
             throw new NoSuchElementException("no more spectra");
         }

@@ -6,20 +6,32 @@ import java.sql.SQLException;
 import java.util.HashMap;
 import java.util.Map;
 
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.SpectralContent;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
 import org.tracegas.spectrum.Spectrum;
 import org.tracegas.store.SampleEncoding;
 import org.tracegas.store.SpectrumInput;
-import org.tracegas.store.StoredSpectrum;
 
 /** Rows of table spectral_data. */
 final class SpectrumRows {
 
+    /**
+     * The columns {@link #read(ResultSet)} reads, from {@code spectral_data} unaliased. The recipe is that of
+     * the results stored in the same audited write as the array: an analysis stores one absorbance with the
+     * results fitted from it under one recipe, and the audit record binding the array binds those results
+     * (the record's bindings are looked up through their index, one record's few rows per array).
+     */
     static final String COLUMNS = "id, measurement_id, content, ordinate, axis_unit, point_count, axis_first,"
-            + " axis_step, axis_values, value_encoding, value_data, sha256";
+            + " axis_step, axis_values, value_encoding, value_data, sha256,"
+            + " (SELECT MIN(r.recipe_sha256) FROM data_binding b"
+            + " JOIN data_binding rb ON rb.audit_seq = b.audit_seq AND rb.kind = '" + DataKind.RESULT.label() + "'"
+            + " JOIN analysis_result r ON r.id = rb.row_key"
+            + " WHERE b.kind = '" + DataKind.SPECTRAL_DATA.label() + "' AND b.row_key = spectral_data.id)"
+            + " AS recipe_sha256";
 
     static final String INSERT = DataKind.SPECTRAL_DATA.insert();
 
@@ -56,7 +68,7 @@ final class SpectrumRows {
         return row;
     }
 
-    static StoredSpectrum read(ResultSet rs) throws SQLException {
+    static ProcessedSpectrum read(ResultSet rs) throws SQLException {
         String id = rs.getString("id");
         int count = rs.getInt("point_count");
         AxisUnit unit = AxisUnit.valueOf(rs.getString("axis_unit"));
@@ -67,8 +79,15 @@ final class SpectrumRows {
                         "axis of spectrum " + id));
         SampleEncoding encoding = SampleEncoding.valueOf(rs.getString("value_encoding"));
         double[] values = SpectrumCodec.decode(rs.getBytes("value_data"), encoding, count, "spectrum " + id);
-        Spectrum spectrum = new Spectrum(axis, values, Ordinate.valueOf(rs.getString("ordinate")));
-        return new StoredSpectrum(id, rs.getString("measurement_id"),
-                SpectralContent.valueOf(rs.getString("content")), spectrum, encoding, rs.getString("sha256"));
+        ProcessedSpectrum s = WorkspaceFactory.eINSTANCE.createProcessedSpectrum();
+        s.setId(id);
+        s.setMeasurementId(rs.getString("measurement_id"));
+        s.setContent(SpectralContent.valueOf(rs.getString("content")));
+        s.setSampleEncoding(encoding.name());
+        s.setSha256(rs.getString("sha256"));
+        String recipe = rs.getString("recipe_sha256");
+        s.setRecipeSha256(recipe == null ? null : recipe.trim()); // CHAR(64): H2 and PostgreSQL pad alike
+        s.setSpectrum(new Spectrum(axis, values, Ordinate.valueOf(rs.getString("ordinate"))));
+        return s;
     }
 }

@@ -18,6 +18,7 @@ import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
 import org.tracegas.audit.AuditRecord;
 import org.tracegas.model.ContentVersion;
+import org.tracegas.model.Report;
 import org.tracegas.model.VersionKind;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.Screens;
@@ -70,9 +71,10 @@ class DeskReportTest {
         // a SHA-256 digest is 256 bits, 64 hexadecimal digits (FIPS 180-4, section 1)
         assertTrue(job.outcome().content().contentHash().matches("[0-9a-f]{64}"), message);
         // the anchor is the newest record of the workspace's audit trail when the report was made, as the audit
-        // trail itself lists it
+        // trail itself lists it; the report's issue is recorded once it is written, after it
         List<AuditRecord> trail = store.audit().review(lab.reviewer, AuditQuery.all().build()).records();
-        AuditRecord newest = trail.get(trail.size() - 1);
+        AuditRecord issue = trail.get(trail.size() - 1);
+        AuditRecord newest = trail.get(trail.size() - 2);
         assertTrue(message.contains(" Audit anchor #" + newest.sequence() + " " + newest.hash() + " (Verified: audit"
                 + " chain of " + newest.sequence() + " records"), message);
         assertTrue(message.contains(" Not signed yet."), message);
@@ -84,6 +86,13 @@ class DeskReportTest {
         assertEquals("%PDF-", new String(pdf, 0, 5, StandardCharsets.US_ASCII));
         String csv = Files.readString(out.resolve("results.csv"), StandardCharsets.UTF_8);
         assertFalse(csv.isEmpty());
+        // the issue is kept in the project: what a QA manager looks up years later
+        List<Report> issued = store.reports().reports(lab.reviewer, lab.project.getId());
+        assertEquals(1, issued.size());
+        Report r = issued.get(0);
+        assertEquals(List.of("report-issue", r.getId()), List.of(issue.objectType(), issue.objectId()));
+        assertEquals(List.of("QLW-R-01", job.outcome().content().contentHash(), "report.pdf", method.getId()),
+                List.of(r.getReportId(), r.getContentSha256(), r.getFileName(), r.getMethodVersionId()));
         try (var files = Files.list(out)) {
             assertEquals(List.of("report.pdf", "results.csv"), files.map(f -> f.getFileName().toString()).sorted()
                     .toList(), "each file whole, no part left beside them");

@@ -58,6 +58,7 @@ final class StoredProject {
 
     /** Name of the library; its version is recorded from a manifest as the runner records it. */
     static final String LIBRARY = "Furnace references";
+    static final String REPORT_ID = "GLS-2026-09-R1";
 
     StoredProject(WorkspaceStore store, Path folder) throws IOException {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", PASSWORD.toCharArray());
@@ -90,6 +91,15 @@ final class StoredProject {
                         new Rule(CTS_RULE, CTS_SOURCE)),
                 CheckOutcome.judge("Spike recovery", 0.62, "", new AcceptanceLimits(0.7, 1.3),
                         new Rule(SPIKE_RULE, SPIKE_SOURCE))));
+        org.tracegas.model.Report report = org.tracegas.model.WorkspaceFactory.eINSTANCE.createReport();
+        report.setReportId(REPORT_ID);
+        report.setTitle("Glasshouse Lane Glassworks, furnace 3 flue, 2026-09-22");
+        // SHA-256 of "abc": FIPS 180-2, appendix B.1
+        report.setContentSha256("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad");
+        report.setFileName("report.pdf");
+        report.setMethodVersionId(method.getId());
+        report.setLibraryVersionId(library.getId());
+        store.reports().record(analyst, project.getId(), report);
     }
 
     /**

@@ -271,6 +271,10 @@ class StoredProjectViewsTest {
         assertEquals("sample", day.getItem(0).getText());
         assertEquals(StoredProject.SAMPLES, day.getItem(0).getItemCount());
         assertEquals("background", day.getItem(1).getText());
+        // the report issued from the project follows its days
+        assertEquals(2, projectItem.getItemCount());
+        assertTrue(projectItem.getItem(1).getText().startsWith("report " + StoredProject.REPORT_ID + "  issued "),
+                projectItem.getItem(1).getText());
 
         nav.filter().setText("10:02");
         Screens.flush(display);

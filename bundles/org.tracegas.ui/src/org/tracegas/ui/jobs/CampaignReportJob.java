@@ -85,7 +85,7 @@ public final class CampaignReportJob extends Job {
         CampaignReport.Written files;
         try {
             progress.subTask("Writing report.pdf and results.csv into " + request.folder());
-            files = report.writeInto(content, request.folder());
+            files = report.writeInto(content, request.version(), request.method(), request.folder());
             progress.worked(2);
         } catch (ReportIdTakenException e) {
             return Status.error(e.getMessage() + "; give this report its own report-id in the plan "

@@ -40,7 +40,7 @@ import org.tracegas.ui.items.ItemTreeContent;
 
 /**
  * The workspace as a tree: clients with their projects, each project's measurements grouped by day (UTC) and
- * kind followed by its work batches, then the reference libraries and the analysis methods with their versions and regions. The model
+ * kind followed by its work batches and the reports issued from it, then the reference libraries and the analysis methods with their versions and regions. The model
  * objects' labels, icons and children are their item providers' (the workspace model's generated edit code, as
  * the properties view shows the objects too); the headings, days, kinds and pages are this tree's own nodes. A
  * group's measurements are listed a page at a time; the node after the last page shown brings the next page when it is expanded or
@@ -308,7 +308,7 @@ public final class WorkspaceNavigator extends Composite {
 
     /**
      * The model objects' children as their item providers give them, except a project's measurements, which the
-     * tree groups by day and kind and lists a page at a time (its work batches follow them).
+     * tree groups by day and kind and lists a page at a time (its work batches and reports follow them).
      */
     private final class Content implements ITreeContentProvider {
         private final ItemTreeContent items = new ItemTreeContent(adapters);
@@ -330,6 +330,7 @@ public final class WorkspaceNavigator extends Composite {
             if (e instanceof Project p) {
                 List<Object> children = new ArrayList<>(days(p));
                 children.addAll(p.getBatches());
+                children.addAll(p.getReports());
                 return children.toArray();
             } else if (e instanceof Day d) {
                 return byDay(d.project()).get(d.day()).keySet().stream().map(k -> new KindGroup(d, k)).toArray();
@@ -371,7 +372,7 @@ public final class WorkspaceNavigator extends Composite {
         @Override
         public boolean hasChildren(Object e) {
             if (e instanceof Project p) {
-                return !p.getMeasurements().isEmpty() || !p.getBatches().isEmpty();
+                return !p.getMeasurements().isEmpty() || !p.getBatches().isEmpty() || !p.getReports().isEmpty();
             } else if (e instanceof Day || e instanceof KindGroup || e instanceof Group || e instanceof Note) {
                 return getChildren(e).length > 0;
             }

@@ -11,9 +11,9 @@ import java.util.stream.Stream;
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.OperationCanceledException;
 
+import org.tracegas.model.ProcessedSpectrum;
 import org.tracegas.model.Result;
 import org.tracegas.store.Session;
-import org.tracegas.store.StoredSpectrum;
 import org.tracegas.store.WorkspaceStore;
 import org.tracegas.ui.parts.FitDisplay;
 
@@ -39,13 +39,13 @@ public final class MeasurementSpectrum {
      */
     public static Optional<FitDisplay> read(WorkspaceStore store, Session actor, String projectId,
             String measurementId, String label, IProgressMonitor monitor) {
-        StoredSpectrum found;
-        try (Stream<StoredSpectrum> all = store.spectra().stream(actor, projectId)) {
+        ProcessedSpectrum found;
+        try (Stream<ProcessedSpectrum> all = store.spectra().stream(actor, projectId)) {
             found = all.filter(s -> {
                 if (monitor.isCanceled()) {
                     throw new OperationCanceledException();
                 }
-                return measurementId.equals(s.measurementId());
+                return measurementId.equals(s.getMeasurementId());
             }).findFirst().orElse(null);
         }
         if (found == null) {
@@ -54,9 +54,9 @@ public final class MeasurementSpectrum {
         String results = store.results().results(actor, projectId).stream()
                 .filter(r -> measurementId.equals(r.getMeasurementId())).map(MeasurementSpectrum::result)
                 .collect(Collectors.joining("; "));
-        String title = label + " — stored " + found.content().getLiteral().toLowerCase(Locale.ROOT).replace('_', ' ')
+        String title = label + " — stored " + found.getContent().getLiteral().toLowerCase(Locale.ROOT).replace('_', ' ')
                 + ", fit not kept" + (results.isEmpty() ? "; no results stored" : "; " + results);
-        return Optional.of(FitDisplay.unfitted(title, found.spectrum()));
+        return Optional.of(FitDisplay.unfitted(title, found.getSpectrum()));
     }
 
     /** What the tree and the spectrum view call a measurement: "sample 2026-05-04 06:02:00 UTC". */

@@ -32,8 +32,8 @@ public final class StoredWorkspace {
     }
 
     /**
-     * Reads the clients, projects, measurements and work batches visible to {@code actor}, and the libraries and
-     * methods.
+     * Reads the clients, projects, measurements, work batches and issued reports visible to {@code actor}, and
+     * the libraries and methods.
      * Meant for a background job: it reports one step per project and stops between steps when cancelled.
      *
      * @throws org.eclipse.core.runtime.OperationCanceledException when the monitor was cancelled
@@ -65,6 +65,7 @@ public final class StoredWorkspace {
             }
             // a handful per project, read by one indexed query
             p.getBatches().addAll(store.workUnits().batches(actor, p.getId()));
+            p.getReports().addAll(store.reports().reports(actor, p.getId()));
             step.done();
         }
         progress.split(5);
