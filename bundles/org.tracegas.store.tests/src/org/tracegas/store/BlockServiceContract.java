@@ -23,8 +23,6 @@ import java.util.concurrent.CompletableFuture;
 import java.util.stream.Collectors;
 
 import org.eclipse.emf.ecore.util.EcoreUtil;
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.ContentVersion;
@@ -36,24 +34,11 @@ import org.tracegas.model.ResultFlag;
 import org.tracegas.model.VersionKind;
 
 /** Blocks of processed spectra, each in one transaction, on each backend. */
-abstract class BlockServiceContract {
+abstract class BlockServiceContract extends AnalysisFixtureContract {
 
     private static final String COUNT_ROWS = "SELECT (SELECT COUNT(*) FROM measurement) + (SELECT COUNT(*) FROM"
             + " spectral_data) + (SELECT COUNT(*) FROM analysis_result) + (SELECT COUNT(*) FROM audit_record)";
 
-    private AnalysisFixture f;
-
-    abstract TestBackend newBackend() throws Exception;
-
-    @BeforeEach
-    void setUp() throws Exception {
-        f = new AnalysisFixture(newBackend());
-    }
-
-    @AfterEach
-    void tearDown() throws Exception {
-        f.close();
-    }
 
     @Test
     void blockStoresEachMeasurementWithItsSpectrumAndResultsUnderOneAuditRecord() throws Exception {

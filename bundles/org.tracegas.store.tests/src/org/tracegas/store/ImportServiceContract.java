@@ -19,8 +19,6 @@ import java.util.List;
 import java.util.Map;
 import java.util.Set;
 
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
@@ -39,26 +37,13 @@ import org.tracegas.spectrum.Spectrum;
  * The lab's files kept whole by content hash with their measurements, and the analyses of those measurements
  * with the recipe that ran, on each backend.
  */
-abstract class ImportServiceContract {
+abstract class ImportServiceContract extends AnalysisFixtureContract {
 
     /** SHA-256 of "abc": FIPS 180-2, Appendix B.1. */
     private static final String SHA256_OF_ABC = "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad";
     private static final Instant T0 = Instant.parse("2026-05-04T06:00:00Z");
     private static final String RECIPE = "recipe 1\nbaseline degree=1;regions=2000:2010\n";
 
-    private AnalysisFixture f;
-
-    abstract TestBackend newBackend() throws Exception;
-
-    @BeforeEach
-    void setUp() throws Exception {
-        f = new AnalysisFixture(newBackend());
-    }
-
-    @AfterEach
-    void tearDown() throws Exception {
-        f.close();
-    }
 
     private static Measurement sample(int i, Map<String, String> labels) {
         Spectrum a = new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 0.5, 3),

@@ -10,8 +10,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.time.Instant;
 import java.util.List;
 
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
@@ -19,23 +17,10 @@ import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.WorkspaceFactory;
 
 /** The lab's instruments and the instrument of each measurement, on each backend, with an invented analyzer. */
-abstract class InstrumentServiceContract {
+abstract class InstrumentServiceContract extends AnalysisFixtureContract {
 
     private static final Instant T0 = Instant.parse("2026-05-04T06:00:00Z");
 
-    private AnalysisFixture f;
-
-    abstract TestBackend newBackend() throws Exception;
-
-    @BeforeEach
-    void setUp() throws Exception {
-        f = new AnalysisFixture(newBackend());
-    }
-
-    @AfterEach
-    void tearDown() throws Exception {
-        f.close();
-    }
 
     private InstrumentService instruments() {
         return f.store.instruments();

@@ -13,8 +13,6 @@ import java.util.List;
 import java.util.Set;
 import java.util.function.Consumer;
 
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.audit.Signature;
 import org.tracegas.audit.SignatureMeaning;
@@ -26,24 +24,11 @@ import org.tracegas.model.WorkspaceFactory;
  * The reports issued from a project, on each backend: a QA manager finds, years later, which reports were issued,
  * by whom, with which versions and content hash, and the signatures given on that content.
  */
-abstract class ReportServiceContract {
+abstract class ReportServiceContract extends AnalysisFixtureContract {
 
     /** The canonical content of the invented Tarnbeck line 2 report, as a reviewer signs it. */
     private static final byte[] CONTENT = "report TB-2026-07 content, first issue".getBytes(StandardCharsets.UTF_8);
 
-    private AnalysisFixture f;
-
-    abstract TestBackend newBackend() throws Exception;
-
-    @BeforeEach
-    void setUp() throws Exception {
-        f = new AnalysisFixture(newBackend());
-    }
-
-    @AfterEach
-    void tearDown() throws Exception {
-        f.close();
-    }
 
     private Report report(String sha256) {
         Report r = WorkspaceFactory.eINSTANCE.createReport();

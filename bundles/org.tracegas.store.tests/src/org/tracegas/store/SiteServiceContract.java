@@ -8,8 +8,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 
-import org.junit.jupiter.api.AfterEach;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.model.Client;
 import org.tracegas.model.EmissionSource;
@@ -20,21 +18,8 @@ import org.tracegas.model.Site;
  * A client's sites and their emission sources, and the source a project measures, on each backend: an invented
  * cement works with two kiln stacks.
  */
-abstract class SiteServiceContract {
+abstract class SiteServiceContract extends AnalysisFixtureContract {
 
-    private AnalysisFixture f;
-
-    abstract TestBackend newBackend() throws Exception;
-
-    @BeforeEach
-    void setUp() throws Exception {
-        f = new AnalysisFixture(newBackend());
-    }
-
-    @AfterEach
-    void tearDown() throws Exception {
-        f.close();
-    }
 
     private SiteService sites() {
         return f.store.sites();

@@ -24,7 +24,6 @@ import java.util.concurrent.Executors;
 import java.util.concurrent.Future;
 import java.util.stream.IntStream;
 
-import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.tracegas.model.ContentVersion;
@@ -33,25 +32,16 @@ import org.tracegas.model.WorkBatch;
 import org.tracegas.model.WorkBatches;
 
 /** Work units claimed, renewed, released and completed by several runners, on each backend. */
-abstract class WorkUnitServiceContract {
+abstract class WorkUnitServiceContract extends AnalysisFixtureContract {
 
     private static final Duration LONG = Duration.ofMinutes(10);
     private static final Duration SHORT = Duration.ofMillis(300);
 
-    private AnalysisFixture f;
     private WorkUnitService units;
 
-    abstract TestBackend newBackend() throws Exception;
-
     @BeforeEach
-    void setUp() throws Exception {
-        f = new AnalysisFixture(newBackend());
+    void setUp() {
         units = f.store.workUnits();
-    }
-
-    @AfterEach
-    void tearDown() throws Exception {
-        f.close();
     }
 
     private WorkBatch batch(int count) {
