@@ -10,6 +10,7 @@ import java.nio.charset.StandardCharsets;
 import java.security.MessageDigest;
 import java.util.HexFormat;
 import java.util.List;
+import java.util.Optional;
 import java.util.Set;
 import java.util.function.Consumer;
 
@@ -121,5 +122,17 @@ abstract class ReportServiceContract extends AnalysisFixtureContract {
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> f.store.reports().record(f.analyst, f.project.getId(), r));
         assertTrue(e.getMessage().startsWith(field + " "), e.getMessage());
+    }
+
+    @Test
+    void aReportIdIssuedOnOneProjectIsTakenForEveryOtherProjectButNotForItsOwn() throws Exception {
+        f.store.reports().record(f.analyst, f.project.getId(), report(sha256(CONTENT)));
+        String other = f.store.projects().createProject(f.analyst, f.project.getClient().getId(), "TB-2026-08",
+                "Line 2 stack, August").getId();
+
+        // issued only, not yet signed: the id still names that one report
+        assertEquals(Optional.of(f.project.getCode()), f.store.reviews().otherProjectWithReport(other, "TB-2026-07"));
+        assertEquals(Optional.empty(), f.store.reviews().otherProjectWithReport(f.project.getId(), "TB-2026-07"));
+        assertEquals(Optional.empty(), f.store.reviews().otherProjectWithReport(other, "TB-2026-08"));
     }
 }

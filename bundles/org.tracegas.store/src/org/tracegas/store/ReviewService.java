@@ -40,8 +40,9 @@ public interface ReviewService {
     List<Signature> signatures(Session reader, String projectId, String reportId);
 
     /**
-     * The code of another project of the workspace that has a signed report of this id, if any: a report id
-     * names one report in the whole workspace, so that a signature quoted by its report id is never ambiguous.
+     * The code of another project of the workspace that has issued or signed a report of this id, if any: a
+     * report id names one report in the whole workspace, so that a signature quoted by its report id is never
+     * ambiguous.
      */
     Optional<String> otherProjectWithReport(String projectId, String reportId);
 

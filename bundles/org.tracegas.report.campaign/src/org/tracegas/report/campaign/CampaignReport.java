@@ -162,12 +162,13 @@ public final class CampaignReport {
      * Writes the report into {@code folder} (made if missing) as report.pdf and results.csv, each whole or not at
      * all, and records its issue in the project (see {@link #issue}); if the issue cannot be recorded, the files
      * are removed again. A report id names one report in the
-     * workspace, so an id signed already on another project is refused before anything is written: its
-     * signatures would otherwise cover two reports.
+     * workspace, so an id issued or signed already on another project is refused before anything is written:
+     * its signatures would otherwise cover two reports.
      *
      * @param methodVersion the method version the content was made for
      * @param method        that version as stored, with the library version it fits with
-     * @throws ReportIdTakenException if the report id is signed already on another project of the workspace
+     * @throws ReportIdTakenException if the report id is issued or signed already on another project of the
+     *                                workspace
      */
     public Written writeInto(ReportContent content, ContentVersion methodVersion, StoredMethod method, Path folder)
             throws IOException, ReportIdTakenException {

@@ -476,7 +476,7 @@ class AnalysisCommandsTest {
         err.reset();
         assertEquals(ExitCode.BAD_INPUT, run(concat(where, "report", "--plan", reportPlan.toString(), "--out",
                 report.toString())));
-        assertTrue(err.toString(StandardCharsets.UTF_8).contains("report id R-TEST-1 is signed already on project "
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("report id R-TEST-1 is issued or signed already on project "
                 + "P-1"), err.toString());
         assertFalse(Files.exists(report.resolve("report.pdf")), "nothing written");
         Path laterPlan = folder.resolve("later-report.plan");

@@ -46,7 +46,7 @@ public final class ReportCommand implements Command {
                   such as '100 per 30 min'), and the QA plan whose control charts the report draws again
                   (qa-plan). Writes report.pdf and results.csv into --out, each whole, and prints the report id
                   and content hash that report-sign is given, and the signatures given on the report.
-                  A report id names one report in the workspace: an id signed on another project is refused.
+                  A report id names one report in the workspace: an id issued or signed on another project is refused.
                 exit codes: 0 written and every QA reading passed, 1 written but a QA reading failed (the first
                   page says so), 2 wrong arguments, 3 bad plan or O2 file (file, line and field named; nothing
                   written) or a report id of another project, 5 failure (for example: no stored results or QA

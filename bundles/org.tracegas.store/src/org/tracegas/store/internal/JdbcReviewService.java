@@ -71,7 +71,13 @@ final class JdbcReviewService implements ReviewService {
     @Override
     public Optional<String> otherProjectWithReport(String projectId, String reportId) {
         return transactions.run("looking for report " + reportId + " in other projects", tx -> {
-            // the object id is "<project id>/<report id>"; project ids are UUIDs, which hold no slash
+            Optional<String> issued = tx.queryOne("SELECT p.code FROM report r JOIN project p ON p.id = r.project_id"
+                    + " WHERE r.report_id = ? AND r.project_id <> ? ORDER BY r.issued_at FETCH FIRST 1 ROWS ONLY",
+                    rs -> rs.getString(1), reportId, projectId);
+            if (issued.isPresent()) {
+                return issued;
+            }
+            // a signature's object id is "<project id>/<report id>"; project ids are UUIDs, which hold no slash
             List<String> projects = tx.queryList("SELECT DISTINCT object_id FROM audit_record WHERE object_type = ?",
                     rs -> rs.getString(1), OBJECT_TYPE).stream().filter(id -> id.endsWith("/" + reportId))
                     .map(id -> id.substring(0, id.indexOf('/'))).filter(p -> !p.equals(projectId)).toList();
