@@ -21,6 +21,7 @@ import org.tracegas.method.MethodDefinition;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.ContentVersion;
 import org.tracegas.model.EmissionSource;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.Project;
 import org.tracegas.model.Role;
 import org.tracegas.model.Site;
@@ -131,10 +132,17 @@ public final class DemoCampaign {
             MinuteSeries series = MinuteSeries.of(store.projects().measurements(analyst, project.getId()),
                     store.results().results(analyst, project.getId()), methodVersion.getId());
             boolean reuse = series.size() >= DemoScenario.SAMPLES;
+            // the day's containers were all acquired by the demo's analyzer: recorded once (a later run finds it),
+            // it is stored with each measurement in the measurement's own write
+            List<Path> containers = new ArrayList<>(DemoCampaignFiles.stackFiles(raw));
+            containers.add(DemoCampaignFiles.qaFile(raw));
+            Instrument instrument = store.instruments().record(analyst, ContainerInstrument.describe(containers,
+                    DemoScenario.INSTRUMENT, DemoScenario.INSTRUMENT_SERIAL));
             long processed = 0;
             if (!reuse) {
                 log.println("Processing " + DemoScenario.SAMPLES + " interferograms into the workspace ...");
-                BatchOutcome outcome = new ProjectQuantification(store, analyst, project.getId(), SOFTWARE)
+                BatchOutcome outcome = new ProjectQuantification(store, analyst, project.getId(), SOFTWARE,
+                        instrument.getId())
                         .run(methodVersion, recorded.method(), DemoCampaignFiles.stackFiles(raw),
                                 DemoScenario.SAMPLES, qa.backgrounds(), progress, cancel);
                 processed = outcome.delivered();
@@ -147,11 +155,6 @@ public final class DemoCampaign {
             }
             List<CheckOutcome> checks = new QaEvaluation(store, analyst, project.getId(), SOFTWARE)
                     .run(methodVersion.getId(), recorded.method(), qaPlan, qa).checks();
-            // every measurement of the day came from the demo's containers: they name the analyzer that made them
-            List<Path> containers = new ArrayList<>(DemoCampaignFiles.stackFiles(raw));
-            containers.add(DemoCampaignFiles.qaFile(raw));
-            ContainerInstrument.record(store, analyst, project.getId(), ContainerInstrument.describe(containers,
-                    DemoScenario.INSTRUMENT, DemoScenario.INSTRUMENT_SERIAL));
             CampaignReport report = new CampaignReport(store, analyst, project.getId(), SOFTWARE);
             ReportContent content = report.content(methodVersion, recorded.method(), reportPlan);
             String hash = content.contentHash();

@@ -26,7 +26,7 @@ class BlockBufferTest {
     private static ProcessedSpectrum spectrum(int i) {
         return new ProcessedSpectrum(MeasurementKind.SAMPLE, Instant.EPOCH.plusSeconds(60L * i), 438.15, 1013.0,
                 new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 1, 2), new double[] {i, i},
-                        Ordinate.ABSORBANCE), SampleEncoding.FLOAT32_LE, List.of());
+                        Ordinate.ABSORBANCE), SampleEncoding.FLOAT32_LE, List.of(), null);
     }
 
     /** A sink whose encoding is the block itself. */

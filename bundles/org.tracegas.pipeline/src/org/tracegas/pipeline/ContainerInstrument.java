@@ -8,14 +8,13 @@ import org.tracegas.importer.ImportException;
 import org.tracegas.importer.container.ContainerReader;
 import org.tracegas.importer.container.ContainerRecord;
 import org.tracegas.model.Instrument;
-import org.tracegas.model.Measurement;
 import org.tracegas.model.WorkspaceFactory;
-import org.tracegas.store.Session;
-import org.tracegas.store.WorkspaceStore;
 
 /**
- * The instrument that acquired a campaign's container files, with the figures their records carry, and the
- * record of it in the workspace. A container names no instrument, so the lab gives its name and serial number.
+ * The instrument that acquired a campaign's container files, with the figures their records carry. A container
+ * names no instrument, so the lab gives its name and serial number. Recorded once
+ * ({@link org.tracegas.store.InstrumentService#record}) before the files are processed, its id goes with every
+ * measurement of them into the block that stores it ({@link ProjectQuantification}).
  */
 public final class ContainerInstrument {
 
@@ -77,21 +76,5 @@ public final class ContainerInstrument {
             throw new ImportException(file.toString(), r.number(), field, "gives " + here + ", the first file "
                     + first + ": the files were acquired with different set-ups");
         }
-    }
-
-    /**
-     * Records the instrument once (by name and serial number) and names it as the instrument of the project's
-     * measurements that name none yet: call it when the files' measurements are stored, before others are.
-     *
-     * @return the stored instrument
-     */
-    public static Instrument record(WorkspaceStore store, Session actor, String projectId, Instrument described) {
-        Instrument stored = store.instruments().record(actor, described);
-        List<String> unassigned = store.projects().measurements(actor, projectId).stream()
-                .filter(m -> m.getInstrument() == null).map(Measurement::getId).toList();
-        if (!unassigned.isEmpty()) {
-            store.instruments().assign(actor, projectId, unassigned, stored.getId());
-        }
-        return stored;
     }
 }

@@ -18,23 +18,25 @@ public final class ProcessedSpectra {
 
     /** The cell pressure is stored in hPa; concentrations in ppm, pointing at the run's versions, as fitted. */
     public static ProcessedSpectrum of(MeasuredSpectrum measured, SpectrumResult result, AnalysisVersions versions) {
-        return of(measured, result, versions, ResultCorrection.none(), "");
+        return of(measured, result, versions, ResultCorrection.none(), "", null);
     }
 
     /**
      * As {@link #of(MeasuredSpectrum, SpectrumResult, AnalysisVersions)}, the results corrected to the cell
      * conditions the instrument logged with the interferogram.
      *
-     * @param noiseOrigin where the spectrum's noise factor came from
+     * @param noiseOrigin  where the spectrum's noise factor came from
+     * @param instrumentId the stored instrument that recorded the interferogram, or null when not known
      */
     static ProcessedSpectrum of(MeasuredSpectrum measured, SpectrumResult result, AnalysisVersions versions,
-            ResultCorrection correction, String noiseOrigin) {
+            ResultCorrection correction, String noiseOrigin, String instrumentId) {
         List<Result> results = correction.results(result, versions,
                 new ConditionValue(measured.cellTemperatureK(), ConditionOrigin.INSTRUMENT_CHANNEL),
                 new ConditionValue(measured.cellPressureKPa(), ConditionOrigin.INSTRUMENT_CHANNEL),
                 measured.noiseFactor(), noiseOrigin);
         return new ProcessedSpectrum(MeasurementKind.SAMPLE, measured.time(), measured.cellTemperatureK(),
-                measured.cellPressureKPa() * 10.0, measured.ratio().spectrum(), SampleEncoding.FLOAT32_LE, results);
+                measured.cellPressureKPa() * 10.0, measured.ratio().spectrum(), SampleEncoding.FLOAT32_LE, results,
+                instrumentId);
     }
 
     /**

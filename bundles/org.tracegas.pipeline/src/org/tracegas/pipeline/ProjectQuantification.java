@@ -29,12 +29,19 @@ public final class ProjectQuantification {
     private final Session actor;
     private final String projectId;
     private final String software;
+    private final String instrumentId;
 
-    public ProjectQuantification(WorkspaceStore store, Session actor, String projectId, String software) {
+    /**
+     * @param instrumentId the stored instrument that recorded the files ({@link ContainerInstrument}), stored with
+     *                     each measurement in its block's write; null when not known
+     */
+    public ProjectQuantification(WorkspaceStore store, Session actor, String projectId, String software,
+            String instrumentId) {
         this.store = store;
         this.actor = actor;
         this.projectId = projectId;
         this.software = software;
+        this.instrumentId = instrumentId;
     }
 
     /** Whether the project holds results of a method version already (processing again would repeat them). */
@@ -83,6 +90,6 @@ public final class ProjectQuantification {
             List<Background> backgrounds, OptionalDouble ctsPathM, ProgressListener progress,
             CancellationFlag cancel) {
         return new QuantificationSetup(methodVersion, method, backgrounds, software, ctsPathM)
-                .processor(store, actor, projectId).run(files, samples, progress, cancel);
+                .processor(store, actor, projectId, instrumentId).run(files, samples, progress, cancel);
     }
 }

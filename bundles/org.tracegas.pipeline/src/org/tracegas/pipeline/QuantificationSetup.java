@@ -84,9 +84,14 @@ public final class QuantificationSetup {
         }
     }
 
-    /** The processor storing into a project of the workspace as the actor. */
-    public StackProcessor processor(WorkspaceStore store, Session actor, String projectId) {
-        return new StackProcessor(store, actor, projectId, chain, quantifier, versions, correction,
+    /**
+     * The processor storing into a project of the workspace as the actor.
+     *
+     * @param instrumentId the stored instrument that recorded the files, each measurement stored with it; null
+     *                     when not known
+     */
+    public StackProcessor processor(WorkspaceStore store, Session actor, String projectId, String instrumentId) {
+        return new StackProcessor(store, actor, projectId, chain, quantifier, versions, correction, instrumentId,
                 StackProcessor.DEFAULT_BLOCK_SIZE);
     }
 }

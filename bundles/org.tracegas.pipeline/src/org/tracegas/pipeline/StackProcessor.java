@@ -45,6 +45,7 @@ public final class StackProcessor {
     private final BatchQuantifier quantifier;
     private final AnalysisVersions versions;
     private final ResultCorrection correction;
+    private final String instrumentId;
     private final int blockSize;
 
     /** A processor storing blocks of {@link #DEFAULT_BLOCK_SIZE} spectra. */
@@ -59,12 +60,17 @@ public final class StackProcessor {
      */
     public StackProcessor(WorkspaceStore store, Session actor, String projectId, SpectrumChain chain,
             BatchQuantifier quantifier, AnalysisVersions versions, int blockSize) {
-        this(store, actor, projectId, chain, quantifier, versions, ResultCorrection.none(), blockSize);
+        this(store, actor, projectId, chain, quantifier, versions, ResultCorrection.none(), null, blockSize);
     }
 
-    /** @param correction corrects each result to the conditions of the cell its spectrum was recorded in */
+    /**
+     * @param correction   corrects each result to the conditions of the cell its spectrum was recorded in
+     * @param instrumentId the stored instrument that recorded the files, or null when not known: every
+     *                     measurement is stored with it (one stream of container records is one instrument's)
+     */
     StackProcessor(WorkspaceStore store, Session actor, String projectId, SpectrumChain chain,
-            BatchQuantifier quantifier, AnalysisVersions versions, ResultCorrection correction, int blockSize) {
+            BatchQuantifier quantifier, AnalysisVersions versions, ResultCorrection correction, String instrumentId,
+            int blockSize) {
         if (blockSize < 1) {
             throw new IllegalArgumentException("blockSize must be at least 1, was " + blockSize);
         }
@@ -75,6 +81,7 @@ public final class StackProcessor {
         this.quantifier = quantifier;
         this.versions = versions;
         this.correction = correction;
+        this.instrumentId = instrumentId;
         this.blockSize = blockSize;
     }
 
@@ -146,7 +153,8 @@ public final class StackProcessor {
                     new BackgroundAge(measured.ratio().backgroundAge(), chain.backgroundAgeLimit()),
                     ResultCorrection.noiseCorrelation(measured.noiseFactor()))
                     .inCell(measured.cellTemperatureK(), measured.cellPressureKPa());
-            return ProcessedSpectra.of(measured, fitter.quantify(sample), versions, correction, noiseOrigin);
+            return ProcessedSpectra.of(measured, fitter.quantify(sample), versions, correction, noiseOrigin,
+                    instrumentId);
         }, consumer, ProgressListener.NONE, cancel);
     }
 

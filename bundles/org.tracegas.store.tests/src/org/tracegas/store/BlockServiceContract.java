@@ -11,6 +11,7 @@ import java.security.MessageDigest;
 import java.sql.Connection;
 import java.sql.PreparedStatement;
 import java.sql.ResultSet;
+import java.sql.Statement;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.HexFormat;
@@ -26,12 +27,14 @@ import org.eclipse.emf.ecore.util.EcoreUtil;
 import org.junit.jupiter.api.Test;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.ContentVersion;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Provenance;
 import org.tracegas.model.Result;
 import org.tracegas.model.ResultConditions;
 import org.tracegas.model.ResultFlag;
 import org.tracegas.model.VersionKind;
+import org.tracegas.model.WorkspaceFactory;
 
 /** Blocks of processed spectra, each in one transaction, on each backend. */
 abstract class BlockServiceContract extends AnalysisFixtureContract {
@@ -93,12 +96,94 @@ abstract class BlockServiceContract extends AnalysisFixtureContract {
     }
 
     @Test
+    void blockLinksEachMeasurementToItsInstrumentUnderTheMeasurementsOwnAuditRecord() throws Exception {
+        String analyzer = f.store.instruments().record(f.analyst, analyzer("TB-2026-0011")).getId();
+        List<ProcessedSpectrum> block = new ArrayList<>(SampleBlocks.madeBy(analyzer,
+                SampleBlocks.block(0, 3, 2, f.method.getId(), f.library.getId())));
+        // a spectrum of no known instrument (a file that names none) in the same block
+        block.add(SampleBlocks.processed(3, 2, f.method.getId(), f.library.getId()));
+        long auditBefore = f.count("SELECT COUNT(*) FROM audit_record");
+
+        List<StoredMeasurement> stored = f.store.blocks().store(f.analyst, f.project.getId(), block);
+
+        assertEquals(4, f.count("SELECT COUNT(*) FROM audit_record") - auditBefore,
+                "one audit record per measurement, none of its own for a link");
+        assertEquals(0, f.count("SELECT COUNT(*) FROM audit_record WHERE object_type = 'measurement-instrument'"));
+        for (int i = 0; i < block.size(); i++) {
+            String id = stored.get(i).measurementId();
+            assertEquals(i < 3 ? 1 : 0, f.count("SELECT COUNT(*) FROM measurement_instrument"
+                    + " WHERE measurement_id = '" + id + "' AND instrument_id = '" + analyzer + "'"));
+            assertEquals(i < 3 ? analyzer : null, auditValues(id).get("instrument"));
+        }
+        assertEquals(3, f.count("SELECT COUNT(*) FROM measurement_instrument"));
+        WorkspaceVerification v = f.store.audit().verifyWorkspace(List.of());
+        assertTrue(v.intact(), v.dataFindings().toString());
+
+        // a link changed outside the store is named: the measurement's record vouches for it
+        String other = f.store.instruments().record(f.analyst, analyzer("TB-2026-0012")).getId();
+        String second = stored.get(1).measurementId();
+        try (Connection c = f.backend.raw(); Statement st = c.createStatement()) {
+            st.executeUpdate("UPDATE measurement_instrument SET instrument_id = '" + other
+                    + "' WHERE measurement_id = '" + second + "'");
+        }
+        v = f.store.audit().verifyWorkspace(List.of());
+        assertEquals(List.of("measurement-instrument " + second),
+                v.dataFindings().stream().map(d -> d.dataKind() + " " + d.rowKey()).toList());
+    }
+
+    @Test
+    void blockNamingAnUnknownInstrumentOrFailingAtItsLinksWritesNothing() throws Exception {
+        String analyzer = f.store.instruments().record(f.analyst, analyzer("TB-2026-0011")).getId();
+        String refused = f.store.instruments().record(f.analyst, analyzer("TB-2026-0012")).getId();
+        long before = f.count(COUNT_ROWS + " + (SELECT COUNT(*) FROM measurement_instrument)");
+        List<ProcessedSpectrum> unknown = new ArrayList<>(SampleBlocks.madeBy(analyzer,
+                SampleBlocks.block(0, 2, 1, f.method.getId(), f.library.getId())));
+        unknown.addAll(SampleBlocks.madeBy("no-such-instrument", SampleBlocks.block(2, 1, 1, f.method.getId(),
+                f.library.getId())));
+
+        NoSuchObjectException e = assertThrows(NoSuchObjectException.class,
+                () -> f.store.blocks().store(f.analyst, f.project.getId(), unknown));
+
+        assertEquals("no instrument (block[2].instrumentId) with id no-such-instrument", e.getMessage());
+        assertEquals(before, f.count(COUNT_ROWS + " + (SELECT COUNT(*) FROM measurement_instrument)"));
+
+        // the database refuses the links of one instrument only when they are inserted, after the block's
+        // measurements, spectra and results: the whole block is rolled back
+        try (Connection c = f.backend.raw(); Statement st = c.createStatement()) {
+            st.execute("ALTER TABLE measurement_instrument ADD CONSTRAINT test_refuses_one CHECK (instrument_id <> '"
+                    + refused + "')");
+        }
+        List<ProcessedSpectrum> failing = new ArrayList<>(SampleBlocks.madeBy(analyzer,
+                SampleBlocks.block(0, 2, 1, f.method.getId(), f.library.getId())));
+        failing.addAll(SampleBlocks.madeBy(refused, SampleBlocks.block(2, 1, 1, f.method.getId(),
+                f.library.getId())));
+        assertThrows(StoreException.class, () -> f.store.blocks().store(f.analyst, f.project.getId(), failing));
+        assertEquals(before, f.count(COUNT_ROWS + " + (SELECT COUNT(*) FROM measurement_instrument)"),
+                "nothing half written");
+        assertTrue(f.store.audit().verifyWorkspace(List.of()).intact());
+    }
+
+    /**
+     * An invented analyzer with a HeNe reference laser, 15798 cm-1 (632.99 nm in air; common practice, no
+     * source), 1 cm maximum path difference and a 6.4 m cell.
+     */
+    private static Instrument analyzer(String serial) {
+        Instrument i = WorkspaceFactory.eINSTANCE.createInstrument();
+        i.setName("Stack analyzer");
+        i.setSerialNumber(serial);
+        i.setLaserWavenumber(15798.0);
+        i.setMaxPathDifference(1.0);
+        i.setCellPathLength(6.4);
+        return i;
+    }
+
+    @Test
     void blockEncodedOnAnotherThreadIsBoundToTheAuditTrailAsStored() throws Exception {
         List<ProcessedSpectrum> block = new ArrayList<>();
         for (ProcessedSpectrum p : SampleBlocks.block(0, 3, 2, f.method.getId(), f.library.getId())) {
             // a time finer than the microsecond both databases keep
             block.add(new ProcessedSpectrum(p.kind(), p.time().plusNanos(123_456_789), p.cellTemperature(),
-                    p.cellPressure(), p.absorbance(), p.encoding(), p.results()));
+                    p.cellPressure(), p.absorbance(), p.encoding(), p.results(), p.instrumentId()));
         }
         EncodedBlock encoded = CompletableFuture.supplyAsync(() -> f.store.blocks().encode(f.analyst,
                 f.project.getId(), block)).get();
@@ -201,12 +286,16 @@ abstract class BlockServiceContract extends AnalysisFixtureContract {
         named.setMeasurementId("m-1");
         List<Result> namedMeasurement = List.of(good.results().get(0), named);
         e = assertThrows(IllegalArgumentException.class, () -> new ProcessedSpectrum(good.kind(), good.time(),
-                good.cellTemperature(), good.cellPressure(), good.absorbance(), good.encoding(), namedMeasurement));
+                good.cellTemperature(), good.cellPressure(), good.absorbance(), good.encoding(), namedMeasurement,
+                null));
         assertTrue(e.getMessage().startsWith("results[1].measurementId must be null"), e.getMessage());
 
         e = assertThrows(IllegalArgumentException.class, () -> new ProcessedSpectrum(good.kind(), good.time(), 0.0,
-                good.cellPressure(), good.absorbance(), good.encoding(), good.results()));
+                good.cellPressure(), good.absorbance(), good.encoding(), good.results(), null));
         assertTrue(e.getMessage().startsWith("cellTemperature"), e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> new ProcessedSpectrum(good.kind(), good.time(),
+                good.cellTemperature(), good.cellPressure(), good.absorbance(), good.encoding(), good.results(), " "));
+        assertTrue(e.getMessage().startsWith("instrumentId must be null"), e.getMessage());
         assertThrows(IllegalArgumentException.class, () -> f.store.blocks().store(f.analyst, f.project.getId(),
                 List.of()));
     }

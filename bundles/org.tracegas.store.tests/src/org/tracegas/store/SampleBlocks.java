@@ -51,7 +51,7 @@ final class SampleBlocks {
                     j == 1 ? Set.of(ResultFlag.HIGH_RESIDUAL) : Set.of(), provenance, conditions));
         }
         return new ProcessedSpectrum(MeasurementKind.SAMPLE, START.plusSeconds(60L * index), 438.15, 1013.0,
-                absorbance, SampleEncoding.FLOAT64_LE, rows);
+                absorbance, SampleEncoding.FLOAT64_LE, rows, null);
     }
 
     /** Spectra number {@code first} to {@code first + count - 1}, each with {@code results} results. */
@@ -62,5 +62,11 @@ final class SampleBlocks {
             block.add(processed(first + i, results, methodVersionId, libraryVersionId));
         }
         return block;
+    }
+
+    /** The spectra as recorded by the stored instrument of that id. */
+    static List<ProcessedSpectrum> madeBy(String instrumentId, List<ProcessedSpectrum> block) {
+        return block.stream().map(p -> new ProcessedSpectrum(p.kind(), p.time(), p.cellTemperature(),
+                p.cellPressure(), p.absorbance(), p.encoding(), p.results(), instrumentId)).toList();
     }
 }

@@ -101,8 +101,16 @@ abstract class TamperDetectionContract {
         Result result = SampleBlocks.processed(0, 1, fixture.method.getId(), fixture.library.getId()).results().get(0);
         result.setMeasurementId(m);
         store.results().record(fixture.analyst, fixture.project.getId(), result);
-        store.blocks().store(fixture.analyst, fixture.project.getId(), SampleBlocks.block(1, 3, 3,
-                fixture.method.getId(), fixture.library.getId()));
+        // a second client and project, so that every table holds two rows to swap values between
+        org.tracegas.model.Project second = store.projects().createProject(fixture.analyst,
+                store.projects().createClient(fixture.analyst, "Second client").getId(), "WU-2", "Kiln campaign");
+        String analyzer = placeAndInstrument(store, fixture.project, "Works", "Stack", "TB-0007", 6.4);
+        String kilnAnalyzer = placeAndInstrument(store, second, "Kiln works", "Kiln stack", "TB-0008", 10.0);
+        // measurements linked to their instrument in the block's write, two instruments to swap between
+        store.blocks().store(fixture.analyst, fixture.project.getId(), SampleBlocks.madeBy(analyzer,
+                SampleBlocks.block(1, 2, 3, fixture.method.getId(), fixture.library.getId())));
+        store.blocks().store(fixture.analyst, fixture.project.getId(), SampleBlocks.madeBy(kilnAnalyzer,
+                SampleBlocks.block(3, 1, 3, fixture.method.getId(), fixture.library.getId())));
         store.qa().recordAll(fixture.analyst, fixture.project.getId(), fixture.method.getId(), List.of(
                 QaOutcomes.of("Spike recovery SO2", true, 96.5, "%", 70, 130, "70 .. 130 %",
                         "EPA Method 320, section 9.2"),
@@ -122,20 +130,13 @@ abstract class TamperDetectionContract {
             r.setLibraryVersionId(fixture.library.getId());
             store.reports().record(fixture.analyst, fixture.project.getId(), r);
         }
-        // a second client and project, so that every table holds two rows to swap values between
-        org.tracegas.model.Project second = store.projects().createProject(fixture.analyst,
-                store.projects().createClient(fixture.analyst, "Second client").getId(), "WU-2", "Kiln campaign");
-        placeAndInstrument(store, fixture.project, "Works", "Stack", "TB-0007", 6.4, m);
-        String other = store.projects().measurements(fixture.analyst, fixture.project.getId()).stream()
-                .map(org.tracegas.model.Measurement::getId).filter(id -> !id.equals(m)).findFirst().orElseThrow();
-        placeAndInstrument(store, second, "Kiln works", "Kiln stack", "TB-0008", 10.0, other);
         store.users().changeRoles(admin(), fixture.reader.userId(), 0,
                 Set.of(org.tracegas.model.Role.ANALYST, org.tracegas.model.Role.REVIEWER));
     }
 
-    /** A site with a source the project measures, and an instrument that made a measurement of the fixture's. */
-    private void placeAndInstrument(WorkspaceStore store, org.tracegas.model.Project project, String site,
-            String source, String serial, double cellPathM, String measurementId) {
+    /** A site with a source the project measures, and an instrument: its id. */
+    private String placeAndInstrument(WorkspaceStore store, org.tracegas.model.Project project, String site,
+            String source, String serial, double cellPathM) {
         String siteId = store.sites().createSite(fixture.analyst, project.getClient().getId(), site, "").getId();
         store.sites().setSource(fixture.analyst, project.getId(), store.sites().createSource(fixture.analyst, siteId,
                 source, "port " + serial).getId());
@@ -146,8 +147,7 @@ abstract class TamperDetectionContract {
         i.setMaxPathDifference(cellPathM / 6.4);
         i.setFieldOfView(cellPathM * 2);
         i.setCellPathLength(cellPathM);
-        store.instruments().assign(fixture.analyst, fixture.project.getId(), List.of(measurementId),
-                store.instruments().record(fixture.analyst, i).getId());
+        return store.instruments().record(fixture.analyst, i).getId();
     }
 
     private Session admin() {

@@ -3,10 +3,11 @@ package org.tracegas.store;
 import java.util.List;
 
 /**
- * Stores blocks of processed spectra: for each, its measurement row, its absorbance array and its results,
- * all of a block in one transaction with batched inserts. Each measurement gets one audit record whose
- * values name what was stored with it: the spectrum's id, axis, encoding and SHA-256 of its value bytes,
- * the result ids and the SHA-256 of the results.
+ * Stores blocks of processed spectra: for each, its measurement row, its absorbance array, its results and,
+ * when its instrument is known, the link to that instrument, all of a block in one transaction with batched
+ * inserts. Each measurement gets one audit record whose values name what was stored with it: the spectrum's id,
+ * axis, encoding and SHA-256 of its value bytes, the result ids, the SHA-256 of the results and the instrument's
+ * id (key {@code instrument}, absent when not known); the record binds all these rows.
  * <p>
  * The {@code resultsSha256} value lets an auditor check the stored results against the record: it is the
  * SHA-256 (hex) of the UTF-8 bytes of the concatenated {@link org.tracegas.audit.AuditValues#canonical
@@ -25,7 +26,7 @@ public interface BlockService {
      * @return what was created, one entry per processed spectrum in input order
      * @throws IllegalArgumentException naming the index ({@code block[i].results[j]...}) of a wrong entry
      * @throws AccessDeniedException    without write access to the project
-     * @throws NoSuchObjectException    if the project or a named version does not exist
+     * @throws NoSuchObjectException    if the project, a named version or a named instrument does not exist
      */
     List<StoredMeasurement> store(Session actor, String projectId, List<ProcessedSpectrum> block);
 

@@ -8,7 +8,9 @@ import org.tracegas.model.Instrument;
 /**
  * The lab's instruments and which of them made a measurement. An instrument is identified by its name and serial
  * number; its optical figures are fixed once recorded, so a changed set-up (another cell, another aperture) is
- * recorded as another instrument and the measurements made before keep the figures they were made with.
+ * recorded as another instrument and the measurements made before keep the figures they were made with. Which
+ * instrument made a measurement is written with the measurement itself ({@link ProcessedSpectrum#instrumentId()},
+ * stored by {@link BlockService}), bound under the measurement's audit record.
  */
 public interface InstrumentService {
 
@@ -30,14 +32,4 @@ public interface InstrumentService {
 
     /** The lab's instruments, ordered by name and serial number. */
     List<Instrument> instruments(Session actor);
-
-    /**
-     * Records that an instrument made these measurements of a project, in one transaction with one audit record
-     * per measurement. Setting the instrument a measurement already has does nothing; another one is refused.
-     *
-     * @throws AccessDeniedException without write access to the project
-     * @throws NoSuchObjectException naming the instrument or a measurement that is not in the project
-     * @throws StoreException        naming a measurement that another instrument made
-     */
-    void assign(Session actor, String projectId, List<String> measurementIds, String instrumentId);
 }

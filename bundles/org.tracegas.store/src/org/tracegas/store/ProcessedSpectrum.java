@@ -18,9 +18,11 @@ import org.tracegas.spectrum.Spectrum;
  * @param absorbance      the absorbance spectrum, stored as {@link org.tracegas.model.SpectralContent#ABSORBANCE}
  * @param encoding        how its values are stored
  * @param results         its results, each with a null {@link Result#getMeasurementId()}; may be empty
+ * @param instrumentId    the id of the stored instrument that made it ({@link InstrumentService#record}), linked to
+ *                        its measurement in the same write; null when not known (a file that names no instrument)
  */
 public record ProcessedSpectrum(MeasurementKind kind, Instant time, double cellTemperature, double cellPressure,
-        Spectrum absorbance, SampleEncoding encoding, List<Result> results) {
+        Spectrum absorbance, SampleEncoding encoding, List<Result> results, String instrumentId) {
 
     /** @throws IllegalArgumentException naming the field (and result index) that is missing or wrong */
     public ProcessedSpectrum {
@@ -41,6 +43,10 @@ public record ProcessedSpectrum(MeasurementKind kind, Instant time, double cellT
                 throw new IllegalArgumentException("results[" + i + "].measurementId must be null: the store assigns"
                         + " the measurement of a processed spectrum, was " + r.getMeasurementId());
             }
+        }
+        if (instrumentId != null && instrumentId.isBlank()) {
+            throw new IllegalArgumentException("instrumentId must be null (not known) or an instrument's id,"
+                    + " was blank");
         }
         results = List.copyOf(results);
     }

@@ -23,6 +23,7 @@ import org.junit.jupiter.api.AfterEach;
 import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
 import org.tracegas.model.Provenance;
@@ -30,6 +31,7 @@ import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.model.WorkBatch;
 import org.tracegas.model.WorkBatches;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
@@ -59,6 +61,7 @@ class WorkUnitWorkerTest {
     private Project project;
     private String methodId;
     private String libraryId;
+    private String instrumentId;
 
     @BeforeEach
     void setUp() {
@@ -71,6 +74,14 @@ class WorkUnitWorkerTest {
                 "Project");
         methodId = store.versions().create(analyst, org.tracegas.model.VersionKind.METHOD, "m", "a=1\n", "t").getId();
         libraryId = store.versions().create(analyst, org.tracegas.model.VersionKind.LIBRARY, "l", "b=1\n", "t").getId();
+        // an invented analyzer: HeNe reference laser, 15798 cm-1 (632.99 nm in air; common practice, no source)
+        Instrument analyzer = WorkspaceFactory.eINSTANCE.createInstrument();
+        analyzer.setName("Stack analyzer");
+        analyzer.setSerialNumber("TB-0009");
+        analyzer.setLaserWavenumber(15798.0);
+        analyzer.setMaxPathDifference(1.0);
+        analyzer.setCellPathLength(6.4);
+        instrumentId = store.instruments().record(analyst, analyzer).getId();
     }
 
     @AfterEach
@@ -78,7 +89,10 @@ class WorkUnitWorkerTest {
         store.close();
     }
 
-    /** Unit payload "n" becomes two spectra measured at minutes 2n and 2n + 1, each with one CO result. */
+    /**
+     * Unit payload "n" becomes two spectra measured at minutes 2n and 2n + 1 by the analyzer, each with one CO
+     * result.
+     */
     private List<ProcessedSpectrum> block(String payload) {
         int n = Integer.parseInt(payload);
         List<ProcessedSpectrum> block = new ArrayList<>();
@@ -88,7 +102,7 @@ class WorkUnitWorkerTest {
                     1013.0, new Spectrum(SpectralAxis.uniform(AxisUnit.WAVENUMBER, 2000, 1, 4),
                             new double[] {minute, 0, 0, minute}, Ordinate.ABSORBANCE), SampleEncoding.FLOAT32_LE,
                     List.of(Results.of(null, "CO", minute, 0.5, 0.2, "ppm", Set.of(),
-                            new Provenance(methodId, libraryId, "0.1.0", SHA256_OF_EMPTY), null))));
+                            new Provenance(methodId, libraryId, "0.1.0", SHA256_OF_EMPTY), null)), instrumentId));
         }
         return block;
     }
@@ -130,7 +144,11 @@ class WorkUnitWorkerTest {
         List<Instant> times = store.projects().measurements(analyst,
                 project.getId()).stream().map(m -> m.getTime()).toList();
         assertEquals(IntStream.range(0, 18).mapToObj(m -> Instant.EPOCH.plusSeconds(60L * m)).toList(), times);
+        assertTrue(store.projects().measurements(analyst, project.getId()).stream()
+                .allMatch(m -> m.getInstrument() != null && m.getInstrument().getId().equals(instrumentId)),
+                "each unit's measurements are stored with their instrument");
         assertTrue(store.verifyAuditTrail().intact());
+        assertTrue(store.audit().verifyWorkspace(List.of()).intact(), "the links are bound");
     }
 
     @Test

@@ -61,7 +61,7 @@ public final class BatchSplitCommand implements Command {
             String description;
             try {
                 checked = arguments.check(store, actor, project,
-                        new ProjectQuantification(store, actor, project.getId(), StoredMethods.SOFTWARE));
+                        new ProjectQuantification(store, actor, project.getId(), StoredMethods.SOFTWARE, null));
                 description = new BatchDescription(project.getId(), checked.found().version().getId(),
                         arguments.backgroundFiles(), arguments.ctsPath(store, checked.found())).text();
                 requireFits(description, arguments.files());

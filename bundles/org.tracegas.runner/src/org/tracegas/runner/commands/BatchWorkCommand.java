@@ -90,7 +90,7 @@ public final class BatchWorkCommand implements Command {
                 StoredMethods.Found found = StoredMethods.byId(store, description.methodVersionId());
                 List<Background> backgrounds = SampleInputs.backgrounds(found.method(), description.backgrounds());
                 stack = new QuantificationSetup(found.version(), found.method(), backgrounds, StoredMethods.SOFTWARE,
-                        description.ctsPathM()).processor(store, actor, batch.getProject().getId());
+                        description.ctsPathM()).processor(store, actor, batch.getProject().getId(), null);
             } catch (BadInputException | FileFormatException | IllegalArgumentException e) {
                 // an IllegalArgumentException: the batch lacks the CTS path its method needs, or has one it does not, or
                 // its method has [recipe] steps, which a stream of containers does not run

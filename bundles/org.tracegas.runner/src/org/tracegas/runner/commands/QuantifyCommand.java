@@ -204,8 +204,10 @@ public final class QuantifyCommand implements Command {
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             Project project = StoredMethods.project(store, actor, options.text("--project"));
+            // the command line names no instrument and a container carries no name or serial number, so the
+            // measurements are stored without their instrument
             ProjectQuantification job = new ProjectQuantification(store, actor, project.getId(),
-                    StoredMethods.SOFTWARE);
+                    StoredMethods.SOFTWARE, null);
             QuantifyArguments.Checked checked;
             try {
                 checked = arguments.check(store, actor, project, job);

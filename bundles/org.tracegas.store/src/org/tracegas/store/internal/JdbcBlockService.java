@@ -20,6 +20,7 @@ import org.tracegas.model.Result;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.store.BlockService;
 import org.tracegas.store.EncodedBlock;
+import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.Session;
 import org.tracegas.store.SpectrumInput;
@@ -41,13 +42,17 @@ final class JdbcBlockService implements BlockService {
      */
     record Encoded(Session actor, String projectId, List<ProcessedSpectrum> block,
             List<Map<String, Object>> measurements, List<Map<String, Object>> spectra,
-            List<Map<String, Object>> results, Written written) implements EncodedBlock {
+            List<Map<String, Object>> results, List<Map<String, Object>> instruments, Written written)
+            implements EncodedBlock {
 
         @Override
         public int size() {
             return block.size();
         }
     }
+
+    /** A measurement's link to the instrument that made it. */
+    private static final String INSERT_INSTRUMENT = DataKind.MEASUREMENT_INSTRUMENT.insert();
 
     private final Transactions transactions;
     private final JdbcVersionService versions;
@@ -110,12 +115,15 @@ final class JdbcBlockService implements BlockService {
     }
 
     /**
-     * Inserts measurements, spectra and results of an encoded block with one JDBC batch per table. The audit
-     * records are returned, not appended, so that the caller appends them last: the audit chain head stays
-     * locked only for the end of the transaction.
+     * Inserts measurements, spectra, results and the measurements' links to their instrument of an encoded block
+     * with one JDBC batch per table. The audit records are returned, not appended, so that the caller appends
+     * them last: the audit chain head stays locked only for the end of the transaction.
+     *
+     * @throws NoSuchObjectException naming the index of a spectrum whose instrument is not stored
      */
     static Written insert(Tx tx, JdbcVersionService versions, Encoded encoded) throws SQLException {
         Set<String> checked = new HashSet<>();
+        Set<String> instruments = new HashSet<>();
         List<ProcessedSpectrum> block = encoded.block();
         for (int i = 0; i < block.size(); i++) {
             List<Result> results = block.get(i).results();
@@ -123,10 +131,17 @@ final class JdbcBlockService implements BlockService {
                 JdbcResultService.requireVersions(tx, versions, results.get(j), checked,
                         "block[" + i + "].results[" + j + "].");
             }
+            // a stream's spectra name one instrument: it is looked up once per block
+            String instrument = block.get(i).instrumentId();
+            if (instrument != null && instruments.add(instrument)
+                    && tx.queryOne("SELECT 1 FROM instrument WHERE id = ?", rs -> 1, instrument).isEmpty()) {
+                throw new NoSuchObjectException("instrument (block[" + i + "].instrumentId)", instrument);
+            }
         }
         insertAll(tx, JdbcProjectService.INSERT_MEASUREMENT, DataKind.MEASUREMENT, encoded.measurements());
         insertAll(tx, SpectrumRows.INSERT, DataKind.SPECTRAL_DATA, encoded.spectra());
         insertAll(tx, JdbcResultService.INSERT, DataKind.RESULT, encoded.results());
+        insertAll(tx, INSERT_INSTRUMENT, DataKind.MEASUREMENT_INSTRUMENT, encoded.instruments());
         return encoded.written();
     }
 
@@ -153,6 +168,7 @@ final class JdbcBlockService implements BlockService {
         List<Map<String, Object>> measurementRows = new ArrayList<>(block.size());
         List<Map<String, Object>> spectrumRows = new ArrayList<>(block.size());
         List<Map<String, Object>> resultRows = new ArrayList<>();
+        List<Map<String, Object>> instrumentRows = new ArrayList<>();
         List<StoredMeasurement> stored = new ArrayList<>(block.size());
         List<AuditEntry> audit = new ArrayList<>(block.size());
         List<List<RowBindings.RowRef>> rows = new ArrayList<>(block.size());
@@ -166,7 +182,7 @@ final class JdbcBlockService implements BlockService {
                     SpectralContent.ABSORBANCE, p.absorbance(), p.encoding()));
             String spectrumId = (String) spectrum.get("id");
             List<Result> results = new ArrayList<>(p.results().size());
-            List<RowBindings.RowRef> bound = new ArrayList<>(2 + p.results().size());
+            List<RowBindings.RowRef> bound = new ArrayList<>(3 + p.results().size());
             bound.add(new RowBindings.RowRef(DataKind.MEASUREMENT, measurementId,
                     DataKind.MEASUREMENT.sha256(measurement)));
             bound.add(new RowBindings.RowRef(DataKind.SPECTRAL_DATA, spectrumId,
@@ -177,6 +193,13 @@ final class JdbcBlockService implements BlockService {
                 results.add(result);
                 resultRows.add(row);
                 bound.add(new RowBindings.RowRef(DataKind.RESULT, result.getId(), DataKind.RESULT.sha256(row)));
+            }
+            if (p.instrumentId() != null) {
+                Map<String, Object> link = Map.of("measurement_id", measurementId, "instrument_id",
+                        p.instrumentId());
+                instrumentRows.add(link);
+                bound.add(new RowBindings.RowRef(DataKind.MEASUREMENT_INSTRUMENT, measurementId,
+                        DataKind.MEASUREMENT_INSTRUMENT.sha256(link)));
             }
             measurementRows.add(measurement);
             spectrumRows.add(spectrum);
@@ -192,12 +215,15 @@ final class JdbcBlockService implements BlockService {
             fields.put("results", resultIds.size());
             fields.put("resultIds", String.join(",", resultIds));
             fields.put("resultsSha256", resultsSha256(results));
+            if (p.instrumentId() != null) {
+                fields.put("instrument", p.instrumentId());
+            }
             audit.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement", measurementId)
                     .newValue(AuditValues.canonical(fields)).build());
             rows.add(bound);
         }
         return new Encoded(actor, projectId, List.copyOf(block), measurementRows, spectrumRows, resultRows,
-                new Written(List.copyOf(stored), audit, rows, resultRows.size()));
+                instrumentRows, new Written(List.copyOf(stored), audit, rows, resultRows.size()));
     }
 
     /** As documented on {@link BlockService}: an auditor recomputes it from the stored results. */

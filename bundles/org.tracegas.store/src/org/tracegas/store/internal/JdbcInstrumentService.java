@@ -6,18 +6,15 @@ import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Objects;
 import java.util.Optional;
 import java.util.UUID;
 
 import org.tracegas.audit.AuditAction;
 import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
-import org.tracegas.model.AccessLevel;
 import org.tracegas.model.Instrument;
 import org.tracegas.model.WorkspacePackage;
 import org.tracegas.store.InstrumentService;
-import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.Session;
 import org.tracegas.store.StoreException;
 
@@ -116,48 +113,6 @@ final class JdbcInstrumentService implements InstrumentService {
             Guard.roles(tx, actor);
             return new ArrayList<>(tx.queryList(SELECT + " ORDER BY ins.name, ins.serial_number, ins.id",
                     rs -> ModelRows.instrument(rs, new HashMap<>())));
-        });
-    }
-
-    @Override
-    public void assign(Session actor, String projectId, List<String> measurementIds, String instrumentId) {
-        if (measurementIds == null || measurementIds.stream().anyMatch(Objects::isNull)) {
-            throw new IllegalArgumentException("measurementIds must not be or hold null");
-        }
-        JdbcUserService.requireText("instrumentId", instrumentId);
-        transactions.run("recording the instrument of " + measurementIds.size() + " measurements", tx -> {
-            Guard.requireProject(tx, actor, projectId, AccessLevel.WRITE);
-            if (tx.queryOne("SELECT 1 FROM instrument WHERE id = ?", rs -> 1, instrumentId).isEmpty()) {
-                throw new NoSuchObjectException("instrument", instrumentId);
-            }
-            List<AuditEntry> entries = new ArrayList<>();
-            List<List<RowBindings.RowRef>> rows = new ArrayList<>();
-            for (String m : measurementIds) {
-                if (tx.queryOne("SELECT 1 FROM measurement WHERE id = ? AND project_id = ?", rs -> 1, m, projectId)
-                        .isEmpty()) {
-                    throw new NoSuchObjectException("measurement in project " + projectId, m);
-                }
-                Optional<String> made = tx.queryOne("SELECT instrument_id FROM measurement_instrument"
-                        + " WHERE measurement_id = ?", rs -> rs.getString(1), m);
-                if (made.isPresent()) {
-                    if (!made.get().equals(instrumentId)) {
-                        throw new StoreException("measurement " + m + " was made by instrument " + made.get()
-                                + " already, not by " + instrumentId);
-                    }
-                    continue;
-                }
-                tx.update("INSERT INTO measurement_instrument (measurement_id, instrument_id) VALUES (?, ?)", m,
-                        instrumentId);
-                entries.add(AuditEntry.builder(actor.userId(), AuditAction.CREATE, "measurement-instrument", m)
-                        .newValue(AuditValues.canonical(Map.of("instrument", instrumentId))).build());
-                rows.add(List.of(new RowBindings.RowRef(DataKind.MEASUREMENT_INSTRUMENT, m,
-                        DataKind.MEASUREMENT_INSTRUMENT.sha256(Map.of("measurement_id", m, "instrument_id",
-                                instrumentId)))));
-            }
-            if (!entries.isEmpty()) {
-                tx.auditAll(entries, rows);
-            }
-            return null;
         });
     }
 }

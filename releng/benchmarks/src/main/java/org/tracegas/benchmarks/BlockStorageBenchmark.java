@@ -26,6 +26,7 @@ import org.openjdk.jmh.annotations.State;
 import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.annotations.Warmup;
 import org.postgresql.ds.PGSimpleDataSource;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Provenance;
 import org.tracegas.model.Result;
@@ -34,6 +35,7 @@ import org.tracegas.model.Results;
 import org.tracegas.model.Role;
 import org.tracegas.model.SpectralContent;
 import org.tracegas.model.VersionKind;
+import org.tracegas.model.WorkspaceFactory;
 import org.tracegas.spectrum.AxisUnit;
 import org.tracegas.spectrum.Ordinate;
 import org.tracegas.spectrum.SpectralAxis;
@@ -48,9 +50,11 @@ import org.tracegas.store.Workspaces;
 /**
  * Storage of 64 processed spectra (6,800-point float32 absorbance, 9 results each, as the demo campaign makes
  * them): one transaction per service call (measurement, spectrum, results: 3 per spectrum) against one block
- * in one transaction. Backend h2 is a workspace file in a temporary folder; backend postgresql needs the system
- * property tracegas.bench.pg.url (user and password tracegas.bench.pg.user/.password, default "tracegas") and
- * works in a fresh schema that it drops afterwards.
+ * in one transaction, its measurements linked to their instrument ({@code instrument=named}, as the batch path
+ * stores a container stream's) or of no known instrument ({@code unknown}), both measured in the same run, so
+ * their ratio is the cost of the links. Backend h2 is a workspace file in a temporary folder; backend postgresql
+ * needs the system property tracegas.bench.pg.url (user and password tracegas.bench.pg.user/.password, default
+ * "tracegas") and works in a fresh schema that it drops afterwards.
  */
 @State(Scope.Benchmark)
 @BenchmarkMode(Mode.AverageTime)
@@ -66,6 +70,9 @@ public class BlockStorageBenchmark {
 
     @Param({"h2", "postgresql"})
     public String backend;
+
+    @Param({"named", "unknown"})
+    public String instrument;
 
     private Path folder;
     private String schema;
@@ -94,11 +101,25 @@ public class BlockStorageBenchmark {
                 "Benchmark").getId();
         String method = store.versions().create(analyst, VersionKind.METHOD, "m", "a=1\n", "bench").getId();
         String library = store.versions().create(analyst, VersionKind.LIBRARY, "l", "b=1\n", "bench").getId();
-        block = block(method, library);
+        String analyzer = null;
+        if (instrument.equals("named")) {
+            Instrument i = WorkspaceFactory.eINSTANCE.createInstrument();
+            i.setName("Bench analyzer");
+            i.setSerialNumber("BENCH-1");
+            i.setLaserWavenumber(15798.0);
+            i.setMaxPathDifference(1.0);
+            i.setCellPathLength(6.4);
+            analyzer = store.instruments().record(analyst, i).getId();
+        }
+        block = block(method, library, analyzer);
     }
 
-    /** 64 processed spectra as the demo campaign makes them, each with 9 results of the given versions. */
-    public static List<ProcessedSpectrum> block(String method, String library) {
+    /**
+     * 64 processed spectra as the demo campaign makes them, each with 9 results of the given versions.
+     *
+     * @param instrumentId the stored instrument that made them, or null when not known
+     */
+    public static List<ProcessedSpectrum> block(String method, String library, String instrumentId) {
         List<ProcessedSpectrum> block = new ArrayList<>();
         SpectralAxis axis = SpectralAxis.uniform(AxisUnit.WAVENUMBER, 600.0, 0.5, POINTS);
         for (int i = 0; i < SPECTRA; i++) {
@@ -115,7 +136,7 @@ public class BlockStorageBenchmark {
             }
             block.add(new ProcessedSpectrum(MeasurementKind.SAMPLE, Instant.EPOCH.plusSeconds(60L * i), 438.15,
                     1013.0, new Spectrum(axis, values, Ordinate.ABSORBANCE),
-                    SampleEncoding.FLOAT32_LE, results));
+                    SampleEncoding.FLOAT32_LE, results, instrumentId));
         }
         return block;
     }

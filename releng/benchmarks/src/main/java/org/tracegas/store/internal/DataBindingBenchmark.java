@@ -70,7 +70,7 @@ public class DataBindingBenchmark {
                     "B-1", "Benchmark").getId();
             String method = store.versions().create(analyst, VersionKind.METHOD, "m", "a=1\n", "bench").getId();
             String library = store.versions().create(analyst, VersionKind.LIBRARY, "l", "b=1\n", "bench").getId();
-            block = BlockStorageBenchmark.block(method, library);
+            block = BlockStorageBenchmark.block(method, library, null);
             // a second data source onto the same open database, for the unbound block path
             JdbcDataSource ds = new JdbcDataSource();
             ds.setURL("jdbc:h2:file:" + folder.toAbsolutePath().resolve("workspace")
