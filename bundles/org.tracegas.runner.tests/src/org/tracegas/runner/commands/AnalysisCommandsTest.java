@@ -31,6 +31,8 @@ import org.tracegas.importer.container.SampleKind;
 import org.tracegas.method.StoredMethod;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.ContentVersion;
+import org.tracegas.model.Instrument;
+import org.tracegas.model.Measurement;
 import org.tracegas.model.VersionKind;
 import org.tracegas.pipeline.MeasurementRole;
 import org.tracegas.quantify.CancellationFlag;
@@ -112,7 +114,7 @@ class AnalysisCommandsTest {
         ok("workspace-init", "--workspace", ws, "--admin", "root", "--name", "Admin");
         ok("user-add", "--workspace", ws, "--as", "root", "--login", "ana", "--name", "Ana Lyst", "--roles",
                 "analyst");
-        for (String code : List.of("P-1", "P-2", "P-3", "P-4", "P-5", "P-6", "P-7", "P-8", "P-9")) {
+        for (String code : List.of("P-1", "P-2", "P-3", "P-4", "P-5", "P-6", "P-7", "P-8", "P-9", "P-10")) {
             ok("project-add", "--workspace", ws, "--as", "ana", "--client", "Client " + code, "--code", code,
                     "--name", "Survey");
         }
@@ -165,6 +167,37 @@ class AnalysisCommandsTest {
 
     private static Session ana(WorkspaceStore store) {
         return store.users().logIn("ana", "admin-pw-1".toCharArray());
+    }
+
+    /**
+     * The analyzer named on the command line is recorded once, with the figures the containers were written with
+     * (the invented band system's reference laser and cell path), and every measurement quantified names it.
+     */
+    @Test
+    void quantifyRecordsTheNamedInstrumentAndEveryMeasurementNamesIt() throws Exception {
+        String[] where = { "--workspace", ws, "--as", "ana", "--project", "P-10", "--method", "Stack" };
+        err.reset();
+        assertEquals(ExitCode.USAGE, run(concat(where, "quantify", "--backgrounds", qaFile.toString(), "--file",
+                stackFile.toString(), "--instrument", "Bench FTIR 3")), "a name without its serial number");
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("--instrument-serial"), err.toString());
+        ok(concat(where, "quantify", "--backgrounds", qaFile.toString(), "--file", stackFile.toString(),
+                "--instrument", "Bench FTIR 3", "--instrument-serial", "QM-0311"));
+
+        try (WorkspaceStore store = open()) {
+            Session s = ana(store);
+            Instrument bench = store.instruments().find(s, "Bench FTIR 3", "QM-0311").orElseThrow();
+            assertEquals(InventedBandSystem.LASER, bench.getLaserWavenumber(), 0.0);
+            assertEquals(InventedBandSystem.PATH, bench.getCellPathLength(), 0.0);
+            assertTrue(bench.getMaxPathDifference() > 0, "maximum path difference " + bench.getMaxPathDifference());
+            String project = store.projects().findByCode(s, "P-10").orElseThrow().getId();
+            List<Measurement> measured = store.projects().measurements(s, project);
+            assertTrue(measured.size() >= CO_PPM.length, measured.size() + " measurements");
+            for (Measurement m : measured) {
+                assertEquals(bench.getId(), m.getInstrument() == null ? null : m.getInstrument().getId(),
+                        m.getKind() + " at " + m.getTime());
+            }
+            assertTrue(store.audit().verifyWorkspace(List.of()).intact());
+        }
     }
 
     @Test

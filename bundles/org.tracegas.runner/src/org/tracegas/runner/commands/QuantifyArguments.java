@@ -9,6 +9,7 @@ import java.util.OptionalDouble;
 
 import org.tracegas.importer.ImportException;
 import org.tracegas.pipeline.ContainerContents;
+import org.tracegas.pipeline.ContainerInstrument;
 import org.tracegas.pipeline.ProjectQuantification;
 import org.tracegas.pipeline.QuantificationSetup;
 import org.tracegas.qa.campaign.CtsPath;
@@ -16,6 +17,7 @@ import org.tracegas.qa.campaign.QaPlan;
 import org.tracegas.library.io.FileFormatException;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.qa.basis.PathOrigin;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.Project;
 import org.tracegas.model.WorkBatch;
 import org.tracegas.runner.UsageException;
@@ -31,7 +33,7 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
 
     static final String USAGE_LINE = "--project <code> --method <name>\n"
             + "       --backgrounds <container> [--backgrounds ...] --file <container> [--file ...]\n"
-            + "       [--qa-plan <file>]";
+            + "       [--qa-plan <file>] [--instrument <name> --instrument-serial <serial>]";
 
     QuantifyArguments {
         backgroundFiles = List.copyOf(backgroundFiles);
@@ -105,6 +107,32 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
     }
 
     /**
+     * The instrument that acquired the containers, as --instrument and --instrument-serial name it, with the
+     * figures of the files' first records ({@link ContainerInstrument#describe}); empty when neither is given, and
+     * the measurements are then stored without an instrument. Nothing is recorded here.
+     *
+     * @throws UsageException    if only one of the two options is given
+     * @throws BadInputException naming the file, record and field where the files' set-ups differ
+     */
+    Optional<Instrument> instrument() throws UsageException, BadInputException, IOException {
+        if (!options.has("--instrument") && !options.has("--instrument-serial")) {
+            return Optional.empty();
+        }
+        if (!options.has("--instrument") || !options.has("--instrument-serial")) {
+            throw new UsageException("give --instrument and --instrument-serial together: an instrument is known by"
+                    + " its name and serial number", false);
+        }
+        List<Path> all = new ArrayList<>(backgroundFiles);
+        all.addAll(files);
+        try {
+            return Optional.of(ContainerInstrument.describe(all, options.text("--instrument"),
+                    options.text("--instrument-serial")));
+        } catch (ImportException e) {
+            throw new BadInputException(e.getMessage() + "; nothing done", e);
+        }
+    }
+
+    /**
      * The QA plan (--qa-plan) that says how the CTS readings give the path of a method whose path source is
      * CTS-derived; empty for a method of nominal path.
      *
@@ -140,7 +168,7 @@ record QuantifyArguments(Options options, List<Path> backgroundFiles, List<Path>
         List<Path> backgroundFiles = Options.repeated(rest, "--backgrounds", rest2);
         // the repeated options are among the accepted ones only so that a mistyped one is told its nearest name
         Options options = Options.parse(rest2, WorkspaceLogin.optionsWith("--project", "--method",
-                "--method-version", "--file", "--backgrounds", "--qa-plan"));
+                "--method-version", "--file", "--backgrounds", "--qa-plan", "--instrument", "--instrument-serial"));
         if (files.isEmpty() || backgroundFiles.isEmpty()) {
             throw new UsageException("give at least one --file and one --backgrounds file");
         }

@@ -21,6 +21,7 @@ import org.tracegas.importer.ImportReader;
 import org.tracegas.importer.ReaderRegistry;
 import org.tracegas.importer.container.ContainerImportReader;
 import org.tracegas.library.io.FileFormatException;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
 import org.tracegas.preprocess.InterferogramTransform;
@@ -101,7 +102,10 @@ public final class QuantifyCommand implements Command {
                   The second form streams interferogram containers: backgrounds are the background records of the
                   --backgrounds files; each sample is ratioed against the last one before it. A method whose path
                   source is cts-derived needs --qa-plan: the CTS readings among the --backgrounds files give the
-                  effective path (mean of the readings) every result is corrected to.
+                  effective path (mean of the readings) every result is corrected to. --instrument and
+                  --instrument-serial name the analyzer that acquired the containers: it is recorded once with the
+                  figures the files' records carry (reference laser wavenumber, maximum path difference, cell
+                  path length; files of different set-ups are refused) and every stored measurement names it.
                 exit codes: 0 done, 2 wrong arguments, 3 bad input (file, record and field named; nothing
                   stored), or in the second form the project holds this version's results already or has an
                   unfinished batch-split batch of it (named), 4 cancelled (what was stored stays), 5 failure""";
@@ -204,26 +208,30 @@ public final class QuantifyCommand implements Command {
         try (WorkspaceStore store = WorkspaceLogin.open(options, context)) {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             Project project = StoredMethods.project(store, actor, options.text("--project"));
-            // the command line names no instrument and a container carries no name or serial number, so the
-            // measurements are stored without their instrument
-            ProjectQuantification job = new ProjectQuantification(store, actor, project.getId(),
+            // checking reads only: the instrument, if named, is recorded once every input has been read
+            ProjectQuantification checking = new ProjectQuantification(store, actor, project.getId(),
                     StoredMethods.SOFTWARE, null);
             QuantifyArguments.Checked checked;
             try {
-                checked = arguments.check(store, actor, project, job);
+                checked = arguments.check(store, actor, project, checking);
             } catch (BadInputException e) {
                 context.err().println("tracegas quantify: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
             StoredMethods.Found found = checked.found();
             OptionalDouble ctsPath;
+            Optional<Instrument> instrument;
             try {
+                instrument = arguments.instrument();
                 ctsPath = arguments.ctsPath(store, found);
             } catch (BadInputException e) {
                 context.err().println("tracegas quantify: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
             printPath(context, found, ctsPath);
+            String instrumentId = instrument.map(i -> store.instruments().record(actor, i).getId()).orElse(null);
+            ProjectQuantification job = new ProjectQuantification(store, actor, project.getId(),
+                    StoredMethods.SOFTWARE, instrumentId);
             context.progress().begin("quantify");
             BatchOutcome outcome = job.run(found.version(), found.method(), arguments.files(),
                     checked.inputs().samples(), checked.inputs().backgrounds(), ctsPath, context.progress()::update,
