@@ -27,10 +27,10 @@ import org.tracegas.store.NoSuchObjectException;
  */
 final class ModelRows {
 
-    /** Projects with their client; a WHERE and ORDER BY follow. */
+    /** Projects with their client and the id of the source each measures, if any; a WHERE and ORDER BY follow. */
     static final String SELECT_PROJECT = "SELECT p.id, p.code, p.name, p.row_version, p.client_id,"
-            + " c.name AS client_name, c.row_version AS client_row_version FROM project p"
-            + " JOIN client c ON c.id = p.client_id";
+            + " c.name AS client_name, c.row_version AS client_row_version, ps.source_id FROM project p"
+            + " JOIN client c ON c.id = p.client_id LEFT JOIN project_source ps ON ps.project_id = p.id";
 
     /** An instrument's columns, from the table as {@code ins}, as {@link #instrument} reads them. */
     static final String INSTRUMENT_COLUMNS = "ins.id AS instrument_id, ins.name AS instrument_name,"
@@ -63,27 +63,34 @@ final class ModelRows {
 
     /** The project, in its client, with its source. */
     static Project project(Tx tx, String projectId) throws SQLException {
-        Project p = tx.queryOne(SELECT_PROJECT + " WHERE p.id = ?", projectsIn(new HashMap<>()), projectId)
+        return firstProject(tx, " WHERE p.id = ?", projectId)
                 .orElseThrow(() -> new NoSuchObjectException("project", projectId));
-        return withSources(tx, List.of(p)).get(0);
     }
 
     /** The first project of a query's rows, in its client, with its source. */
     static Optional<Project> firstProject(Tx tx, String where, Object... params) throws SQLException {
-        Optional<Project> p = tx.queryOne(SELECT_PROJECT + where, projectsIn(new HashMap<>()), params);
+        Map<Project, String> sourceIds = new HashMap<>();
+        Optional<Project> p = tx.queryOne(SELECT_PROJECT + where, projectsIn(new HashMap<>(), sourceIds), params);
         if (p.isPresent()) {
-            withSources(tx, List.of(p.get()));
+            withSources(tx, List.of(p.get()), sourceIds);
         }
         return p;
     }
 
     /** Projects of a query's rows, each with its source; those of one client share the client object. */
     static List<Project> projects(Tx tx, String where, Object... params) throws SQLException {
-        return withSources(tx, tx.queryList(SELECT_PROJECT + where, projectsIn(new HashMap<>()), params));
+        Map<Project, String> sourceIds = new HashMap<>();
+        return withSources(tx, tx.queryList(SELECT_PROJECT + where, projectsIn(new HashMap<>(), sourceIds), params),
+                sourceIds);
     }
 
-    /** Reads each project's client's sites into the client (once per client) and sets the project's source. */
-    private static List<Project> withSources(Tx tx, List<Project> projects) throws SQLException {
+    /**
+     * Reads each project's client's sites into the client (once per client) and sets the project's source.
+     *
+     * @param sourceIds the id of the source each project measures, as its row gave it; none for a project without
+     */
+    private static List<Project> withSources(Tx tx, List<Project> projects, Map<Project, String> sourceIds)
+            throws SQLException {
         Map<Client, Map<String, EmissionSource>> sourcesOf = new HashMap<>();
         for (Project p : projects) {
             Map<String, EmissionSource> sources = sourcesOf.get(p.getClient());
@@ -91,10 +98,9 @@ final class ModelRows {
                 sources = sourcesById(sites(tx, p.getClient()));
                 sourcesOf.put(p.getClient(), sources);
             }
-            Optional<String> sourceId = tx.queryOne("SELECT source_id FROM project_source WHERE project_id = ?",
-                    rs -> rs.getString(1), p.getId());
-            if (sourceId.isPresent()) {
-                p.setSource(sources.get(sourceId.get()));
+            String sourceId = sourceIds.get(p);
+            if (sourceId != null) {
+                p.setSource(sources.get(sourceId));
             }
         }
         return projects;
@@ -167,7 +173,7 @@ final class ModelRows {
         return i;
     }
 
-    private static Tx.RowMapper<Project> projectsIn(Map<String, Client> clients) {
+    private static Tx.RowMapper<Project> projectsIn(Map<String, Client> clients, Map<Project, String> sourceIds) {
         return rs -> {
             String clientId = rs.getString("client_id");
             Client client = clients.get(clientId);
@@ -181,6 +187,10 @@ final class ModelRows {
             p.setName(rs.getString("name"));
             p.setRowVersion(rs.getLong("row_version"));
             client.getProjects().add(p);
+            String sourceId = rs.getString("source_id");
+            if (sourceId != null) {
+                sourceIds.put(p, sourceId);
+            }
             return p;
         };
     }
