@@ -52,18 +52,11 @@ final class JdbcSiteService implements SiteService {
         requireDescription(description);
         return transactions.run("creating emission source " + name, tx -> {
             Guard.roles(tx, actor);
-            Site site = tx.queryOne("SELECT s.name, s.description, s.row_version, s.client_id, c.name AS client_name,"
-                    + " c.row_version AS client_row_version FROM site s JOIN client c ON c.id = s.client_id"
-                    + " WHERE s.id = ?", rs -> {
-                        Site read = WorkspaceFactory.eINSTANCE.createSite();
-                        read.setId(siteId);
-                        read.setName(rs.getString("name"));
-                        read.setDescription(rs.getString("description"));
-                        read.setRowVersion(rs.getLong("row_version"));
-                        ModelRows.client(rs.getString("client_id"), rs.getString("client_name"),
-                                rs.getLong("client_row_version")).getSites().add(read);
-                        return read;
-                    }, siteId).orElseThrow(() -> new NoSuchObjectException("site", siteId));
+            String clientId = tx.queryOne("SELECT client_id FROM site WHERE id = ?", rs -> rs.getString(1), siteId)
+                    .orElseThrow(() -> new NoSuchObjectException("site", siteId));
+            // the site as the store reads it, in its client with its sources
+            Site site = ModelRows.sites(tx, client(tx, clientId)).stream().filter(s -> s.getId().equals(siteId))
+                    .findFirst().orElseThrow();
             String id = insertNamed(tx, actor, DataKind.EMISSION_SOURCE, "site_id", siteId, "site '"
                     + site.getName() + "'", name, description);
             EmissionSource source = WorkspaceFactory.eINSTANCE.createEmissionSource();
