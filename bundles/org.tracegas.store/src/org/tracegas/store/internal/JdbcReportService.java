@@ -77,9 +77,7 @@ final class JdbcReportService implements ReportService {
     }
 
     private static void requireText(String field, String value, int maxLength) {
-        if (value == null || value.isBlank()) {
-            throw new IllegalArgumentException(field + " of a report must not be blank");
-        }
+        JdbcUserService.requireText(field + " of a report", value);
         if (value.length() > maxLength) {
             throw new IllegalArgumentException(field + " of a report must not be longer than " + maxLength
                     + " characters, was " + value.length());
