@@ -98,8 +98,9 @@ public final class CampaignReport {
         ReportContent content = new CampaignReportBuilder(plan.basis(),
                 plan.budget(method.method().pathLengthMetres()), plan.cellTemperatureK(), plan.cellPressureKPa(),
                 plan.o2UncertaintyPercent())
-                .build(CampaignPlace.of(plan, store.projects().project(actor, projectId)), new MethodVersion(method.method().name(), "v" + methodVersion.getNumber(),
-                        methodVersion.getContentHash()),
+                .build(CampaignPlace.of(plan, store.projects().project(actor, projectId)),
+                        new MethodVersion(method.method().name(), "v" + methodVersion.getNumber(),
+                                methodVersion.getContentHash()),
                         new LibraryVersion(library.getItemName(), "v" + library.getNumber() + ", content "
                                 + method.libraryContentHash().substring(0, 16)),
                         checks, charts(method, plan, checks), series, plan.reported(), plan.moisture(),
