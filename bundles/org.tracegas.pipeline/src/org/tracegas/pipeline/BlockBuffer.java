@@ -13,17 +13,13 @@ import java.util.concurrent.Executors;
 
 import org.tracegas.quantify.ProgressListener;
 import org.tracegas.store.ProcessedSpectrum;
-import org.tracegas.store.UncommittedBlock;
 
 /**
  * Collects processed spectra into blocks of a fixed size (the last one may be smaller) and stores them behind
  * the caller's back, so that the batch reads and fits the next block while one is being written: each full
- * block is encoded on an encoding thread, inserted, block after block in order, by one storage thread fed by a
- * short queue, and committed on a commit thread while the storage thread inserts the next block. Blocks commit
- * in order, one at a time: a block inserted waits for the previous block's commit. A block the sink refuses, on
- * inserting or on committing, stops the storing: the block inserted after it is rolled back and the blocks queued
- * after it are dropped, so what is stored is always the first blocks in order, and the refusal is thrown to the
- * caller. Progress is told
+ * block is encoded on an encoding thread and then stored, block after block in order, by one storage thread
+ * fed by a short queue. A block the sink refuses stops the storing: the blocks queued after it are dropped, so what
+ * is stored is always the first blocks in order, and the refusal is thrown to the caller. Progress is told
  * on the caller's thread, once per stored block, so what it reports is stored. Not thread-safe: the batch
  * delivers results on one thread.
  *
@@ -31,17 +27,14 @@ import org.tracegas.store.UncommittedBlock;
  */
 final class BlockBuffer<E> implements AutoCloseable {
 
-    /**
-     * Stores blocks in three steps, so that the first can run apart from the database work and the last, the
-     * commit, while the next block is inserted.
-     */
+    /** Stores blocks in two steps, so that the first can run apart from the database work. */
     interface Sink<E> {
 
         /** Makes a block ready for storing; called on the encoding thread, ahead of the block's turn. */
         E encode(List<ProcessedSpectrum> block);
 
-        /** Inserts one encoded block in a transaction left open; called on the storage thread, in order. */
-        UncommittedBlock insert(E block);
+        /** Stores one encoded block, all of it or nothing; called on the storage thread, in order. */
+        void store(E block);
     }
 
     /** Blocks encoded or being encoded that wait for the storage thread: few, so memory stays bounded. */
@@ -61,11 +54,6 @@ final class BlockBuffer<E> implements AutoCloseable {
     private final Queue<Integer> storedBlocks = new ConcurrentLinkedQueue<>();
     private final ExecutorService encoder = Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "block encoding");
-        t.setDaemon(true);
-        return t;
-    });
-    private final ExecutorService committer = Executors.newSingleThreadExecutor(r -> {
-        Thread t = new Thread(r, "block commit");
         t.setDaemon(true);
         return t;
     });
@@ -163,7 +151,6 @@ final class BlockBuffer<E> implements AutoCloseable {
             }
         }
         encoder.shutdown();
-        committer.shutdown();
         if (interrupted) {
             Thread.currentThread().interrupt();
         }
@@ -185,12 +172,8 @@ final class BlockBuffer<E> implements AutoCloseable {
         }
     }
 
-    /**
-     * The storage thread: inserts the queued blocks in order until the end mark, each while the previous one
-     * commits, and hands each to the commit thread once the previous one is committed.
-     */
+    /** The storage thread: stores the queued blocks in order until the end mark. */
     private void write() {
-        CompletableFuture<Void> committing = CompletableFuture.completedFuture(null);
         while (true) {
             Queued<E> next;
             try {
@@ -199,53 +182,19 @@ final class BlockBuffer<E> implements AutoCloseable {
                 continue; // only end() stops this thread, so no handed-over block is left in doubt
             }
             if (next.encoded() == null) {
-                committing.join();
                 return;
             }
             if (failure != null) {
                 continue;
             }
-            UncommittedBlock inserted = null;
-            RuntimeException refused = null;
             try {
-                inserted = sink.insert(next.encoded().join());
+                sink.store(next.encoded().join());
+                storedBlocks.add(next.size());
             } catch (CompletionException e) {
-                refused = e.getCause() instanceof RuntimeException r ? r : e;
+                failure = e.getCause() instanceof RuntimeException r ? r : e;
             } catch (RuntimeException e) {
-                refused = e;
+                failure = e;
             }
-            // the commit task records its own refusal; the earlier block's refusal is the one thrown
-            committing.join();
-            if (failure == null && refused == null) {
-                UncommittedBlock block = inserted;
-                committing = CompletableFuture.runAsync(() -> commit(block, next.size()), committer);
-                continue;
-            }
-            if (failure == null) {
-                failure = refused;
-            }
-            if (inserted != null) {
-                rollBack(inserted);
-            }
-        }
-    }
-
-    /** The commit thread: commits one inserted block, or records its refusal. */
-    private void commit(UncommittedBlock block, int size) {
-        try (block) {
-            block.commit();
-            storedBlocks.add(size);
-        } catch (RuntimeException e) {
-            failure = e;
-        }
-    }
-
-    /** Rolls back a block inserted after one that was refused; a failure to do so is told with the refusal. */
-    private void rollBack(UncommittedBlock block) {
-        try {
-            block.close();
-        } catch (RuntimeException e) {
-            failure.addSuppressed(e);
         }
     }
 

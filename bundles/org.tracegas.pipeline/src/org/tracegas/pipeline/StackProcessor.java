@@ -22,14 +22,12 @@ import org.tracegas.store.BlockService;
 import org.tracegas.store.EncodedBlock;
 import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.Session;
-import org.tracegas.store.UncommittedBlock;
 import org.tracegas.store.WorkspaceStore;
 
 /**
  * The batch path of a campaign: streams the interferograms of container files one record at a time,
  * transforms, ratios and fits them on all cores, and stores the measurements with their absorbance and
- * their results in blocks, each block in one transaction, written while the next block is read and fitted and
- * committed while the next block is inserted.
+ * their results in blocks, each block in one transaction, written while the next block is read and fitted.
  * Nothing holds more than the records in flight and a few blocks, so a year of data runs in constant memory.
  */
 public final class StackProcessor {
@@ -106,8 +104,8 @@ public final class StackProcessor {
             }
 
             @Override
-            public UncommittedBlock insert(EncodedBlock block) {
-                return blocks.insert(block);
+            public void store(EncodedBlock block) {
+                blocks.store(block);
             }
         };
         try (BlockBuffer<EncodedBlock> buffer = new BlockBuffer<>(blockSize, sink, progress, expected)) {

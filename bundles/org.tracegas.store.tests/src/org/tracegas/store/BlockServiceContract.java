@@ -21,7 +21,6 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 import java.util.concurrent.CompletableFuture;
-import java.util.concurrent.TimeUnit;
 import java.util.stream.Collectors;
 
 import org.eclipse.emf.ecore.util.EcoreUtil;
@@ -202,66 +201,6 @@ abstract class BlockServiceContract extends AnalysisFixtureContract {
         assertTrue(v.intact());
     }
 
-    /**
-     * A batch inserts a block, on another thread, while the previous one is still uncommitted; neither is seen
-     * before its commit, and the audit records follow the order of the commits.
-     */
-    @Test
-    void blockInsertedWhileThePreviousIsUncommittedIsStoredAfterIt() throws Exception {
-        // a stored block freezes the versions, as the first block of a batch does before the overlap starts
-        f.store.blocks().store(f.analyst, f.project.getId(), SampleBlocks.block(0, 1, 1, f.method.getId(),
-                f.library.getId()));
-        BlockService blocks = f.store.blocks();
-        EncodedBlock first = blocks.encode(f.analyst, f.project.getId(), SampleBlocks.block(1, 2, 2,
-                f.method.getId(), f.library.getId()));
-        EncodedBlock second = blocks.encode(f.analyst, f.project.getId(), SampleBlocks.block(3, 3, 2,
-                f.method.getId(), f.library.getId()));
-        long before = f.count(COUNT_ROWS);
-
-        List<StoredMeasurement> storedFirst;
-        List<StoredMeasurement> storedSecond;
-        try (UncommittedBlock a = blocks.insert(first)) {
-            UncommittedBlock b = CompletableFuture.supplyAsync(() -> blocks.insert(second)).get(60, TimeUnit.SECONDS);
-            try (b) {
-                assertEquals(before, f.count(COUNT_ROWS), "nothing of an uncommitted block is seen");
-                storedFirst = a.commit();
-                assertEquals(before + 2 + 2 + 4 + 2, f.count(COUNT_ROWS), "the first block alone");
-                storedSecond = CompletableFuture.supplyAsync(b::commit).get(60, TimeUnit.SECONDS);
-            }
-            IllegalStateException twice = assertThrows(IllegalStateException.class, a::commit);
-            assertTrue(twice.getMessage().contains("committed or rolled back already"), twice.getMessage());
-        }
-
-        assertEquals(before + 5 + 5 + 10 + 5, f.count(COUNT_ROWS));
-        long lastOfFirst = auditSequence(storedFirst.get(1).measurementId());
-        assertEquals(lastOfFirst + 1, auditSequence(storedSecond.get(0).measurementId()),
-                "the second block's records follow the first's");
-        WorkspaceVerification v = f.store.audit().verifyWorkspace(List.of());
-        assertEquals(List.of(), v.dataFindings());
-        assertTrue(v.intact());
-    }
-
-    @Test
-    void uncommittedBlockClosedStoresNothingAndCannotBeCommittedAfter() throws Exception {
-        long before = f.count(COUNT_ROWS);
-        UncommittedBlock inserted = f.store.blocks().insert(f.store.blocks().encode(f.analyst, f.project.getId(),
-                SampleBlocks.block(0, 3, 2, f.method.getId(), f.library.getId())));
-        assertEquals(3, inserted.size());
-
-        inserted.close();
-        inserted.close();
-
-        assertEquals(before, f.count(COUNT_ROWS), "nothing half written");
-        assertThrows(IllegalStateException.class, inserted::commit);
-        assertTrue(f.store.verifyAuditTrail().intact());
-        // a refused insert leaves no transaction open: the next block is stored
-        EncodedBlock byReader = f.store.blocks().encode(f.reader, f.project.getId(),
-                SampleBlocks.block(0, 1, 1, f.method.getId(), f.library.getId()));
-        assertThrows(AccessDeniedException.class, () -> f.store.blocks().insert(byReader));
-        assertEquals(1, f.store.blocks().store(f.analyst, f.project.getId(), SampleBlocks.block(0, 1, 1,
-                f.method.getId(), f.library.getId())).size());
-    }
-
     @Test
     void encodedBlockIsStoredOnlyWithItsActorsAccessAndOnlyByItsStore() throws Exception {
         long before = f.count(COUNT_ROWS);
@@ -414,18 +353,6 @@ abstract class BlockServiceContract extends AnalysisFixtureContract {
         }
         return HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256")
                 .digest(text.toString().getBytes(StandardCharsets.UTF_8)));
-    }
-
-    /** The chain sequence number of the audit record that created a measurement. */
-    private long auditSequence(String measurementId) throws Exception {
-        try (Connection c = f.backend.raw(); PreparedStatement ps = c.prepareStatement("SELECT seq FROM"
-                + " audit_record WHERE object_type = 'measurement' AND object_id = ?")) {
-            ps.setString(1, measurementId);
-            try (ResultSet rs = ps.executeQuery()) {
-                assertTrue(rs.next(), "audit record of measurement " + measurementId);
-                return rs.getLong(1);
-            }
-        }
     }
 
     /** The key=value lines of the audit record that created a measurement. */

@@ -52,19 +52,4 @@ public interface BlockService {
      * @throws NoSuchObjectException    if the project or a named version does not exist
      */
     List<StoredMeasurement> store(EncodedBlock block);
-
-    /**
-     * The first part of {@link #store(EncodedBlock)}: checks access and versions and inserts the block's rows in
-     * a transaction of its own, left open. A batch inserts one block while the previous one commits, so the
-     * commit, the one step that holds the audit trail's head, is all that runs one block at a time;
-     * {@link UncommittedBlock#commit()} appends the audit records and commits. Until then, and when it is
-     * closed without committing, nothing of it is stored.
-     *
-     * @return the block in its open transaction; the caller commits or closes it
-     * @throws IllegalArgumentException if the block was not encoded by this store, or as for
-     *                                  {@link #store(Session, String, List)}
-     * @throws AccessDeniedException    without write access to the project
-     * @throws NoSuchObjectException    if the project, a named version or a named instrument does not exist
-     */
-    UncommittedBlock insert(EncodedBlock block);
 }

@@ -25,7 +25,6 @@ import org.tracegas.store.ProcessedSpectrum;
 import org.tracegas.store.Session;
 import org.tracegas.store.SpectrumInput;
 import org.tracegas.store.StoredMeasurement;
-import org.tracegas.store.UncommittedBlock;
 
 final class JdbcBlockService implements BlockService {
 
@@ -85,44 +84,16 @@ final class JdbcBlockService implements BlockService {
 
     @Override
     public List<StoredMeasurement> store(EncodedBlock block) {
-        try (UncommittedBlock inserted = insert(block)) {
-            return inserted.commit();
-        }
-    }
-
-    @Override
-    public UncommittedBlock insert(EncodedBlock block) {
         if (!(block instanceof Encoded encoded)) {
             throw new IllegalArgumentException("block: not encoded by this store's encode, was " + block);
         }
-        return new Inserted(transactions.begin("storing a block of " + encoded.size()
-                + " processed spectra in project " + encoded.projectId(), tx -> {
+        return transactions.run("storing a block of " + encoded.size() + " processed spectra in project "
+                + encoded.projectId(), tx -> {
                     Guard.requireProject(tx, encoded.actor(), encoded.projectId(), AccessLevel.WRITE);
-                    return insert(tx, versions, encoded);
-                }));
-    }
-
-    /** A block's rows inserted; the commit appends its audit records, which lock the chain head, last. */
-    private record Inserted(Transactions.Open<Written> transaction) implements UncommittedBlock {
-
-        @Override
-        public int size() {
-            return transaction.value().stored().size();
-        }
-
-        @Override
-        public List<StoredMeasurement> commit() {
-            Written written = transaction.value();
-            return transaction.commit(tx -> {
-                tx.auditAll(written.audit(), written.rows());
-                return written.stored();
-            });
-        }
-
-        @Override
-        public void close() {
-            transaction.close();
-        }
+                    Written written = insert(tx, versions, encoded);
+                    tx.auditAll(written.audit(), written.rows());
+                    return written.stored();
+                });
     }
 
     /** @throws IllegalArgumentException if the block or one of its entries is null, naming the index */

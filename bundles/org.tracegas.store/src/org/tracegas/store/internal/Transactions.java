@@ -29,99 +29,18 @@ final class Transactions {
      * @throws StoreException wrapping a database failure; unchecked exceptions of the work pass unchanged
      */
     <T> T run(String operation, Work<T> work) {
-        Open<T> open = begin(operation, work);
-        return open.commit(tx -> open.value());
-    }
-
-    /**
-     * Runs the first part of a transaction and leaves it open, for {@link Open#commit} to finish, possibly on
-     * another thread, or {@link Open#close} to roll back.
-     *
-     * @param operation what is done, for the error messages of both parts
-     * @throws StoreException wrapping a database failure; unchecked exceptions of the work pass unchanged. Either
-     *                        way the transaction is rolled back and its connection closed
-     */
-    <T> Open<T> begin(String operation, Work<T> work) {
-        Connection c = null;
-        try {
-            c = dataSource.getConnection();
+        try (Connection c = dataSource.getConnection()) {
             c.setAutoCommit(false);
-            Tx tx = new Tx(c);
-            return new Open<>(operation, c, tx, work.run(tx));
-        } catch (SQLException e) {
-            abandon(c, e);
-            throw new StoreException(operation + " failed: " + sentence(e), e);
-        } catch (RuntimeException | Error e) {
-            abandon(c, e);
-            throw e;
-        }
-    }
-
-    /**
-     * A transaction whose first part ran: its value, and the connection kept open until it is committed or
-     * rolled back. Used by one thread at a time.
-     *
-     * @param <T> what the first part returned
-     */
-    static final class Open<T> implements AutoCloseable {
-
-        private final String operation;
-        private final Connection connection;
-        private final Tx tx;
-        private final T value;
-        private boolean ended;
-
-        private Open(String operation, Connection connection, Tx tx, T value) {
-            this.operation = operation;
-            this.connection = connection;
-            this.tx = tx;
-            this.value = value;
-        }
-
-        T value() {
-            return value;
-        }
-
-        /**
-         * Runs the last part and commits; on any failure rolls back. The connection is closed either way.
-         *
-         * @throws IllegalStateException if the transaction ended already
-         * @throws StoreException        wrapping a database failure
-         */
-        <R> R commit(Work<R> last) {
-            if (ended) {
-                throw new IllegalStateException(operation + ": the transaction was committed or rolled back already");
-            }
-            ended = true;
-            R result;
             try {
-                result = last.run(tx);
-                connection.commit();
-            } catch (SQLException e) {
-                abandon(connection, e);
-                throw new StoreException(operation + " failed: " + sentence(e), e);
-            } catch (RuntimeException | Error e) {
-                abandon(connection, e);
+                T result = work.run(new Tx(c));
+                c.commit();
+                return result;
+            } catch (SQLException | RuntimeException | Error e) {
+                rollback(c, e);
                 throw e;
             }
-            Transactions.close(connection, null);
-            return result;
-        }
-
-        /** Rolls back unless committed; closes the connection. */
-        @Override
-        public void close() {
-            if (ended) {
-                return;
-            }
-            ended = true;
-            try {
-                connection.rollback();
-            } catch (SQLException e) {
-                throw new StoreException(operation + ": rolling back failed: " + sentence(e), e);
-            } finally {
-                Transactions.close(connection, null);
-            }
+        } catch (SQLException e) {
+            throw new StoreException(operation + " failed: " + sentence(e), e);
         }
     }
 
@@ -142,26 +61,6 @@ final class Transactions {
         c.setAutoCommit(false);
         c.setReadOnly(true);
         return c;
-    }
-
-    /** Rolls back and closes a connection, if one was opened; failures are added to the cause at hand. */
-    private static void abandon(Connection c, Throwable cause) {
-        if (c != null) {
-            rollback(c, cause);
-            close(c, cause);
-        }
-    }
-
-    /** Closes a connection; a failure is added to the cause at hand, or else thrown. */
-    private static void close(Connection c, Throwable cause) {
-        try {
-            c.close();
-        } catch (SQLException e) {
-            if (cause == null) {
-                throw new StoreException("closing a connection failed: " + sentence(e), e);
-            }
-            cause.addSuppressed(e);
-        }
     }
 
     private static void rollback(Connection c, Throwable cause) {
