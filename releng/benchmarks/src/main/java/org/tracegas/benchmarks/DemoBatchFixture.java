@@ -48,6 +48,8 @@ final class DemoBatchFixture implements AutoCloseable {
     final Path hour;
     /** Six hours (360) of the demo's stack-gas interferograms, one file an hour, starting with {@link #hour}. */
     final List<Path> sixHours;
+    /** The demo's whole day of stack interferograms (1,440), 24 files. */
+    final List<Path> day;
     final SpectrumChain chain;
     final Quantifier quantifier;
     final WorkspaceStore store;
@@ -61,7 +63,8 @@ final class DemoBatchFixture implements AutoCloseable {
         Path raw = folder.resolve("raw");
         DemoPhysics physics = DemoPhysics.fromInventedLineLists(folder.resolve("line-lists"));
         DemoCampaignFiles.write(raw, physics, ProgressListener.NONE, new CancellationFlag());
-        sixHours = DemoCampaignFiles.stackFiles(raw).subList(3, 9);
+        day = DemoCampaignFiles.stackFiles(raw);
+        sixHours = day.subList(3, 9);
         hour = sixHours.get(0);
         InterferogramTransform transform = new InterferogramTransform(DemoMethod.transform());
         List<Background> backgrounds = new ArrayList<>();
