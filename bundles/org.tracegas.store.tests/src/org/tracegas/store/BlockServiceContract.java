@@ -202,6 +202,39 @@ abstract class BlockServiceContract extends AnalysisFixtureContract {
     }
 
     @Test
+    void aMeasurementsSpectraAndResultsAreFoundByTheMeasurementAlone() throws Exception {
+        List<ProcessedSpectrum> block = SampleBlocks.block(0, 3, 2, f.method.getId(), f.library.getId());
+        List<StoredMeasurement> stored = f.store.blocks().store(f.analyst, f.project.getId(), block);
+        StoredMeasurement second = stored.get(1);
+
+        List<org.tracegas.model.ProcessedSpectrum> spectra = f.store.spectra().ofMeasurement(f.reader,
+                second.measurementId());
+        List<Result> results = f.store.results().ofMeasurement(f.reader, second.measurementId());
+
+        assertEquals(List.of(second.spectrumId()), spectra.stream().map(s -> s.getId()).toList());
+        assertArrayEquals(block.get(1).absorbance().toArray(), spectra.get(0).getSpectrum().toArray(), 0.0);
+        assertEquals(Set.copyOf(second.resultIds()), results.stream().map(Result::getId).collect(Collectors.toSet()));
+        assertEquals(block.get(1).results().stream().map(BlockServiceContract::values).collect(Collectors.toSet()),
+                results.stream().map(BlockServiceContract::values).collect(Collectors.toSet()));
+        ProcessedSpectrum first = block.get(0);
+        String bare = f.store.projects().recordMeasurement(f.analyst, f.project.getId(), first.kind(),
+                first.time().plusSeconds(1), first.cellTemperature(), first.cellPressure());
+        assertEquals(List.of(), f.store.results().ofMeasurement(f.analyst, bare), "a measurement without results");
+        assertEquals(List.of(), f.store.spectra().ofMeasurement(f.analyst, bare), "nor spectra");
+        NoSuchObjectException missing = assertThrows(NoSuchObjectException.class,
+                () -> f.store.spectra().ofMeasurement(f.reader, "no-such-measurement"));
+        assertTrue(missing.getMessage().contains("no-such-measurement"), missing.getMessage());
+        // another project of the analyst's, to which the reader has no grant
+        String other = f.store.projects().createProject(f.analyst, f.project.getClient().getId(), "WU-2",
+                "Other stack")
+                .getId();
+        String elsewhere = f.store.blocks().store(f.analyst, other, SampleBlocks.block(0, 1, 1, f.method.getId(),
+                f.library.getId())).get(0).measurementId();
+        assertThrows(AccessDeniedException.class, () -> f.store.spectra().ofMeasurement(f.reader, elsewhere));
+        assertThrows(AccessDeniedException.class, () -> f.store.results().ofMeasurement(f.reader, elsewhere));
+    }
+
+    @Test
     void encodedBlockIsStoredOnlyWithItsActorsAccessAndOnlyByItsStore() throws Exception {
         long before = f.count(COUNT_ROWS);
         EncodedBlock byReader = f.store.blocks().encode(f.reader, f.project.getId(),

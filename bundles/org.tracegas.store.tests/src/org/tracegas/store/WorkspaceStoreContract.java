@@ -89,11 +89,11 @@ abstract class WorkspaceStoreContract {
 
     @Test
     void migrationFromEmptyAppliesTheSchemaOnceAndReopeningKeepsIt() throws Exception {
-        assertEquals(List.of("1", "2", "3", "4", "5", "6", "20", "21", "22", "23", "24"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"success\" = TRUE"
+        assertEquals(List.of("1", "2", "3", "4", "5", "6", "20", "21", "22", "23", "24", "25"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"success\" = TRUE"
                 + " AND \"version\" IS NOT NULL ORDER BY \"installed_rank\""));
         store.close();
         store = backend.open();
-        assertEquals(List.of("1", "2", "3", "4", "5", "6", "20", "21", "22", "23", "24"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"version\" IS NOT NULL"
+        assertEquals(List.of("1", "2", "3", "4", "5", "6", "20", "21", "22", "23", "24", "25"), column("SELECT \"version\" FROM \"schema_history\" WHERE \"version\" IS NOT NULL"
                 + " ORDER BY \"installed_rank\""));
         assertEquals("Kiln stack spring campaign", store.projects().project(analyst, project.getId()).getName());
     }

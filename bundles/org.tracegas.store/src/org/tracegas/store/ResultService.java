@@ -24,6 +24,15 @@ public interface ResultService {
     List<Result> results(Session actor, String projectId);
 
     /**
+     * The results stored for one measurement, in the order {@link #results} gives them; found by the measurement,
+     * so the time it takes does not grow with the project.
+     *
+     * @throws NoSuchObjectException if there is no such measurement
+     * @throws AccessDeniedException without read access to its project
+     */
+    List<Result> ofMeasurement(Session actor, String measurementId);
+
+    /**
      * Records several results in one transaction, each with its audit record: all of them or none. The batch
      * path stores a spectrum's results together this way.
      */

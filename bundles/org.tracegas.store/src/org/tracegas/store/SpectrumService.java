@@ -28,6 +28,15 @@ public interface SpectrumService {
     org.tracegas.model.ProcessedSpectrum load(Session actor, String dataId);
 
     /**
+     * The spectra stored for one measurement, with their values, in storage order; found by the measurement, so
+     * the time it takes does not grow with the project.
+     *
+     * @throws NoSuchObjectException if there is no such measurement
+     * @throws AccessDeniedException without read access to its project
+     */
+    List<org.tracegas.model.ProcessedSpectrum> ofMeasurement(Session actor, String measurementId);
+
+    /**
      * All spectra of a project in storage order, read row by row from a database cursor: only a few rows
      * are held at a time. The stream holds a database connection: close it (try-with-resources).
      */

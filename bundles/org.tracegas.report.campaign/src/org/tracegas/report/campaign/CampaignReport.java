@@ -14,7 +14,6 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Optional;
 import java.util.Set;
-import java.util.stream.Stream;
 
 import org.tracegas.importer.ImportException;
 import org.tracegas.importer.ImportOptions;
@@ -243,11 +242,8 @@ public final class CampaignReport {
                 .findFirst().orElseThrow(() -> new FileFormatException(plan.file(), 0,
                         "example-fit", "no stored sample at " + plan.exampleTime()));
         String measurement = sample.getId();
-        Optional<ProcessedSpectrum> stored;
-        try (Stream<ProcessedSpectrum> all = store.spectra().stream(actor, projectId)) {
-            stored = all.filter(s -> measurement.equals(s.getMeasurementId())
-                    && s.getContent() == SpectralContent.ABSORBANCE).findFirst();
-        }
+        Optional<ProcessedSpectrum> stored = store.spectra().ofMeasurement(actor, measurement).stream()
+                .filter(s -> s.getContent() == SpectralContent.ABSORBANCE).findFirst();
         Spectrum a = stored.orElseThrow(() -> new FileFormatException(plan.file(), 0, "example-fit",
                 "no stored absorbance at " + plan.exampleTime())).getSpectrum();
         FitSpectra fit = method.quantifier(a.axis(), software, true).quantify(

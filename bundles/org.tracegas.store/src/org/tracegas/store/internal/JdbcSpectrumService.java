@@ -72,6 +72,15 @@ final class JdbcSpectrumService implements SpectrumService {
     }
 
     @Override
+    public List<ProcessedSpectrum> ofMeasurement(Session actor, String measurementId) {
+        return transactions.run("reading the spectra of measurement " + measurementId, tx -> {
+            Guard.requireMeasurement(tx, actor, measurementId, AccessLevel.READ);
+            return tx.queryList("SELECT " + SpectrumRows.COLUMNS + " FROM spectral_data WHERE measurement_id = ?"
+                    + " ORDER BY seq", SpectrumRows::read, measurementId);
+        });
+    }
+
+    @Override
     public Stream<ProcessedSpectrum> stream(Session actor, String projectId) {
         Connection c = null;
         PreparedStatement ps = null;

@@ -43,7 +43,8 @@ final class Migrations {
 
     /** Migrations that plain SQL cannot write for H2 and PostgreSQL alike; add new ones here. */
     static JavaMigration[] javaMigrations() {
-        return new JavaMigration[] { new V5__work_unit_failed(), new V24__spectrum_sequence_cache() };
+        return new JavaMigration[] { new V5__work_unit_failed(), new V24__spectrum_sequence_cache(),
+            new V25__measurement_lookups() };
     }
 
     private Migrations() {

@@ -233,8 +233,8 @@ class StoredProjectViewsTest {
     @Test
     void doubleClickingAValueOfTheTimeSeriesOpensTheSpectrumOfItsMeasurement() throws Exception {
         // in the workbench the series view brings up the spectrum view; here the two are wired directly
-        seriesView.spectrumOpener = pick -> spectrumView.open(seriesView.shownProjectId(),
-                pick.trace().measurementIds().get(pick.index()), seriesView.label(pick));
+        seriesView.spectrumOpener = pick -> spectrumView.open(pick.trace().measurementIds().get(pick.index()),
+                seriesView.label(pick));
         select(project());
         TimeSeriesPanel series = seriesView.panel();
         Screens.waitFor(display, () -> series.heading().getText().startsWith("Stored results of"), 10_000);

@@ -6,7 +6,6 @@ import java.time.format.DateTimeFormatter;
 import java.util.Locale;
 import java.util.Optional;
 import java.util.stream.Collectors;
-import java.util.stream.Stream;
 
 import org.eclipse.core.runtime.IProgressMonitor;
 import org.eclipse.core.runtime.OperationCanceledException;
@@ -37,23 +36,18 @@ public final class MeasurementSpectrum {
      * @return the display, or empty when no spectrum is stored for the measurement
      * @throws OperationCanceledException when the monitor was cancelled
      */
-    public static Optional<FitDisplay> read(WorkspaceStore store, Session actor, String projectId,
-            String measurementId, String label, IProgressMonitor monitor) {
-        ProcessedSpectrum found;
-        try (Stream<ProcessedSpectrum> all = store.spectra().stream(actor, projectId)) {
-            found = all.filter(s -> {
-                if (monitor.isCanceled()) {
-                    throw new OperationCanceledException();
-                }
-                return measurementId.equals(s.getMeasurementId());
-            }).findFirst().orElse(null);
+    public static Optional<FitDisplay> read(WorkspaceStore store, Session actor, String measurementId, String label,
+            IProgressMonitor monitor) {
+        if (monitor.isCanceled()) {
+            throw new OperationCanceledException();
         }
+        ProcessedSpectrum found = store.spectra().ofMeasurement(actor, measurementId).stream().findFirst()
+                .orElse(null);
         if (found == null) {
             return Optional.empty();
         }
-        String results = store.results().results(actor, projectId).stream()
-                .filter(r -> measurementId.equals(r.getMeasurementId())).map(MeasurementSpectrum::result)
-                .collect(Collectors.joining("; "));
+        String results = store.results().ofMeasurement(actor, measurementId).stream()
+                .map(MeasurementSpectrum::result).collect(Collectors.joining("; "));
         String title = label + " — stored " + found.getContent().getLiteral().toLowerCase(Locale.ROOT).replace('_', ' ')
                 + ", fit not kept" + (results.isEmpty() ? "; no results stored" : "; " + results);
         return Optional.of(FitDisplay.unfitted(title, found.getSpectrum()));

@@ -49,16 +49,16 @@ public final class SpectrumView extends ViewPart implements FollowsTree {
         if (panel.isDisposed() || m == null || project == null) {
             return;
         }
-        open(project.getId(), m.getId(), MeasurementSpectrum.label(m.getKind().getLiteral(), m.getTime()) + " of "
+        open(m.getId(), MeasurementSpectrum.label(m.getKind().getLiteral(), m.getTime()) + " of "
                 + project.getCode());
     }
 
     /** Reads and shows the stored spectrum of a measurement, e.g. of a point picked in the time series. */
-    public void open(String projectId, String measurementId, String label) {
+    public void open(String measurementId, String label) {
         Desk desk = Desk.get();
         panel.showNote("Reading the spectrum of " + label + " …");
         loads.start("Reading the spectrum of " + label,
-                monitor -> MeasurementSpectrum.read(desk.access().store(), desk.session(), projectId, measurementId,
+                monitor -> MeasurementSpectrum.read(desk.access().store(), desk.session(), measurementId,
                         label, monitor),
                 fit -> fit.ifPresentOrElse(panel::show,
                         () -> panel.showNote("No spectrum is stored for " + label + ".")),

@@ -82,7 +82,7 @@ public final class TimeSeriesView extends ViewPart implements FollowsTree {
     private void openInSpectrumView(TimeSeriesPanel.Pick pick) {
         try {
             SpectrumView view = (SpectrumView) getSite().getPage().showView(SpectrumView.ID);
-            view.open(shownProjectId, pick.trace().measurementIds().get(pick.index()), label(pick));
+            view.open(pick.trace().measurementIds().get(pick.index()), label(pick));
         } catch (PartInitException e) {
             panel.showNote("The spectrum view could not be opened: " + e.getMessage());
         }
@@ -92,11 +92,6 @@ public final class TimeSeriesView extends ViewPart implements FollowsTree {
     String label(TimeSeriesPanel.Pick pick) {
         return pick.trace().compound() + " value at " + new ClockTime(shownStart, 0).full(pick.trace().hours()[pick
                 .index()]) + " of " + shownProjectCode;
-    }
-
-    /** The project whose stored results are shown, or null. */
-    String shownProjectId() {
-        return shownProjectId;
     }
 
     private void showStored(StoredResults.Traces stored, String code) {
