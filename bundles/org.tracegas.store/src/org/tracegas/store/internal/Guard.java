@@ -60,15 +60,13 @@ final class Guard {
     /**
      * Checks the actor's access to the project a measurement belongs to.
      *
-     * @return that project's id
      * @throws NoSuchObjectException if the measurement does not exist
      * @throws AccessDeniedException as {@link #requireProject}
      */
-    static String requireMeasurement(Tx tx, Session actor, String measurementId, AccessLevel needed)
+    static void requireMeasurement(Tx tx, Session actor, String measurementId, AccessLevel needed)
             throws SQLException {
         String projectId = tx.queryOne("SELECT project_id FROM measurement WHERE id = ?", rs -> rs.getString(1),
                 measurementId).orElseThrow(() -> new NoSuchObjectException("measurement", measurementId));
         requireProject(tx, actor, projectId, needed);
-        return projectId;
     }
 }
