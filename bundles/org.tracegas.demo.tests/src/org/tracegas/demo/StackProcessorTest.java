@@ -164,8 +164,8 @@ class StackProcessorTest {
                 (done, total) -> told.add(new long[] {done, total}), new CancellationFlag());
 
         assertEquals(5, outcome.delivered());
-        assertEquals(List.of("2/5", "4/5", "5/5"), told.stream().map(t -> t[0] + "/" + t[1]).toList(),
-                "told once per stored block, the last one short");
+        assertEquals(List.of("1/5", "3/5", "5/5"), told.stream().map(t -> t[0] + "/" + t[1]).toList(),
+                "told once per stored block: the first one short, so that storing starts early");
         assertEquals(5, store.projects().measurements(analyst, project.getId()).size());
         assertEquals(5 * method.analytes().size(), store.results().results(analyst, project.getId()).size());
         assertTrue(store.verifyAuditTrail().intact());
@@ -181,7 +181,7 @@ class StackProcessorTest {
 
         // the first block is told once stored, while the next spectra are fitted: the cancel stops the run
         // somewhere after it, or comes after the last spectrum was delivered; either way what was delivered is stored
-        assertTrue(outcome.delivered() >= 2, outcome.delivered() + " delivered");
+        assertTrue(outcome.delivered() >= 1, outcome.delivered() + " delivered");
         assertEquals(outcome.cancelled(), outcome.delivered() < 5, outcome.delivered() + " delivered");
         assertEquals(outcome.delivered(), store.projects().measurements(analyst, project.getId()).size());
     }

@@ -59,9 +59,10 @@ class BlockBufferTest {
             buffer.finish(); // nothing left: no empty block
             assertEquals(7, buffer.stored());
         }
-        assertEquals(List.of(all.subList(0, 3), all.subList(3, 6), all.subList(6, 7)), blocks);
-        assertSame(all.get(6), blocks.get(2).get(0));
-        assertEquals(List.of("3/7", "6/7", "7/7"), told, "told once per stored block, on the caller's thread");
+        // the first block a single spectrum (3 / 8, at least 1), then twice as many up to the block size
+        assertEquals(List.of(all.subList(0, 1), all.subList(1, 3), all.subList(3, 6), all.subList(6, 7)), blocks);
+        assertSame(all.get(6), blocks.get(3).get(0));
+        assertEquals(List.of("1/7", "3/7", "6/7", "7/7"), told, "told once per stored block, on the caller's thread");
     }
 
     @Test
@@ -70,7 +71,8 @@ class BlockBufferTest {
         List<String> told = new ArrayList<>();
         IllegalStateException refusal = new IllegalStateException("database down");
         try (BlockBuffer<List<ProcessedSpectrum>> buffer = new BlockBuffer<>(2, sink(block -> {
-            if (block.get(0).time().equals(Instant.EPOCH.plusSeconds(120))) {
+            // blocks of 1, 2, 2, 2, 1 spectra: the third is refused
+            if (block.get(0).time().equals(Instant.EPOCH.plusSeconds(180))) {
                 throw refusal;
             }
             blocks.add(block);
@@ -83,12 +85,27 @@ class BlockBufferTest {
             });
             assertSame(refusal, e);
             assertTrue(buffer.failed());
-            assertEquals(2, buffer.stored());
+            assertEquals(3, buffer.stored());
         }
-        assertEquals(1, blocks.size(), "no block after the refused one is stored");
-        assertEquals(List.of("2/-1"), told);
+        assertEquals(2, blocks.size(), "no block after the refused one is stored");
+        assertEquals(List.of("1/-1", "3/-1"), told);
         IllegalArgumentException e = assertThrows(IllegalArgumentException.class,
                 () -> new BlockBuffer<>(0, sink(block -> { }), (done, total) -> { }, -1));
         assertTrue(e.getMessage().startsWith("blockSize"), e.getMessage());
+    }
+
+    /** Blocks of 64: the first holds 8, then 16 and 32, and from then on 64, the last what is left. */
+    @Test
+    void theFirstBlocksAreSmallSoThatStoringStartsEarly() {
+        List<Integer> sizes = new CopyOnWriteArrayList<>();
+        try (BlockBuffer<List<ProcessedSpectrum>> buffer = new BlockBuffer<>(64, sink(block -> sizes.add(
+                block.size())), (done, total) -> { }, 200)) {
+            for (int i = 0; i < 200; i++) {
+                buffer.add(spectrum(i));
+            }
+            buffer.finish();
+            assertEquals(200, buffer.stored());
+        }
+        assertEquals(List.of(8, 16, 32, 64, 64, 16), sizes);
     }
 }

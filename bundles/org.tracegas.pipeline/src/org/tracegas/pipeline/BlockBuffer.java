@@ -15,7 +15,8 @@ import org.tracegas.quantify.ProgressListener;
 import org.tracegas.store.ProcessedSpectrum;
 
 /**
- * Collects processed spectra into blocks of a fixed size (the last one may be smaller) and stores them behind
+ * Collects processed spectra into blocks of the block size (the first few smaller, growing to it; the last one
+ * may be smaller) and stores them behind
  * the caller's back, so that the batch reads and fits the next block while one is being written: each full
  * block is encoded on an encoding thread and then stored, block after block in order, by one storage thread
  * fed by a short queue. A block the sink refuses stops the storing: the blocks queued after it are dropped, so what
@@ -37,6 +38,14 @@ final class BlockBuffer<E> implements AutoCloseable {
         void store(E block);
     }
 
+    /**
+     * The first block holds this fraction of the block size, each next one twice as many up to the block size:
+     * storing starts once a few spectra are fitted rather than a whole block (where storing is the bound, the
+     * time to fit the first block is added to the whole run), while nearly all spectra of a long run still go in
+     * full blocks.
+     */
+    private static final int FIRST_BLOCK_DIVISOR = 8;
+
     /** Blocks encoded or being encoded that wait for the storage thread: few, so memory stays bounded. */
     private static final int QUEUED_BLOCKS = 2;
 
@@ -45,6 +54,8 @@ final class BlockBuffer<E> implements AutoCloseable {
     }
 
     private final int blockSize;
+    /** Size of the block being filled: the first ones are smaller, so that storing starts early. */
+    private int filling;
     private final Sink<E> sink;
     private final ProgressListener progress;
     private final long total;
@@ -73,6 +84,7 @@ final class BlockBuffer<E> implements AutoCloseable {
             throw new IllegalArgumentException("blockSize must be at least 1, was " + blockSize);
         }
         this.blockSize = blockSize;
+        this.filling = Math.max(1, blockSize / FIRST_BLOCK_DIVISOR);
         this.sink = sink;
         this.progress = progress;
         this.total = total;
@@ -94,8 +106,9 @@ final class BlockBuffer<E> implements AutoCloseable {
         tell();
         requireNoFailure();
         pending.add(spectrum);
-        if (pending.size() == blockSize) {
+        if (pending.size() == filling) {
             handOver();
+            filling = Math.min(blockSize, 2 * filling);
         }
     }
 
