@@ -60,6 +60,19 @@ class CurveOfGrowthAccuracyTest {
     static void fitMixtures() {
         separate = fit(LineByLineMixture.Layout.SEPARATE);
         blended = fit(LineByLineMixture.Layout.BLENDED);
+        System.out.println("curve of growth against the classical fit, separate lines: " + figures(separate)
+                + "; blended lines: " + figures(blended));
+    }
+
+    /** RMS errors of both fits per compound, relative to the highest reference, and the share within 2u. */
+    private static String figures(Outcome outcome) {
+        StringBuilder text = new StringBuilder();
+        for (int c = 0; c < 3; c++) {
+            text.append(String.format(java.util.Locale.ROOT, "%s %.2f %% and %.2f %%, ",
+                    LineByLineMixture.COMPOUNDS.get(c), 100 * rms(outcome.before[c]), 100 * rms(outcome.after[c])));
+        }
+        return text.append(String.format(java.util.Locale.ROOT, "within 2u %.1f %%", 100 * outcome.coverage()))
+                .toString();
     }
 
     private static Outcome fit(LineByLineMixture.Layout layout) {
