@@ -18,6 +18,7 @@ import java.util.stream.Stream;
 
 import org.tracegas.importer.container.ContainerWriter;
 import org.tracegas.importer.container.SampleKind;
+import org.tracegas.model.Instrument;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.CommandTable;
 import org.tracegas.runner.ExitCode;
@@ -88,12 +89,30 @@ final class BatchCampaign {
         return T0.plusSeconds(60L * (file * samplesPerFile + k));
     }
 
-    /** The arguments of a quantification of the project: project, method, backgrounds and the files. */
-    String[] quantification(String project, List<Path> files) {
+    /**
+     * The arguments of a quantification of the project: project, method, backgrounds and the files, then the
+     * further options given.
+     */
+    String[] quantification(String project, List<Path> files, String... options) {
         List<String> a = new ArrayList<>(List.of("--as", "ana", "--project", project, "--method", METHOD,
                 "--backgrounds", backgrounds.toString()));
         files.forEach(f -> a.addAll(List.of("--file", f.toString())));
+        a.addAll(List.of(options));
         return a.toArray(String[]::new);
+    }
+
+    /**
+     * Checks the figures of the containers written here: the {@link InventedBandSystem}'s reference laser and
+     * cell path, and as maximum path difference the longer arm of its interferograms,
+     * {@link InventedBandSystem#HALF} samples before the zero-path-difference sample, two laser wavelengths
+     * (2 / laser wavenumber in cm) apart. Its inverse, 7.7 cm-1, is the resolution the band system's library is
+     * built at (resolution taken as 1 / maximum path difference: common practice, no source).
+     */
+    static void assertWrittenFigures(Instrument instrument) {
+        assertEquals(InventedBandSystem.LASER, instrument.getLaserWavenumber(), 0.0);
+        assertEquals(InventedBandSystem.PATH, instrument.getCellPathLength(), 0.0);
+        assertEquals(InventedBandSystem.HALF * 2 / InventedBandSystem.LASER, instrument.getMaxPathDifference(),
+                1e-12);
     }
 
     /** The runner's table of the commands the batch tests use, as the application has them. */

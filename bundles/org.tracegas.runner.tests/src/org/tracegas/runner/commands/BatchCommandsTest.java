@@ -1,6 +1,7 @@
 package org.tracegas.runner.commands;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.ByteArrayOutputStream;
@@ -10,6 +11,7 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.TreeMap;
 import java.util.stream.Collectors;
 
@@ -17,19 +19,25 @@ import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.tracegas.audit.AuditQuery;
+import org.tracegas.importer.container.AcquisitionHeader;
+import org.tracegas.importer.container.ContainerReader;
+import org.tracegas.importer.container.ContainerRecord;
+import org.tracegas.importer.container.ContainerWriter;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.Result;
 import org.tracegas.quantify.CancellationFlag;
 import org.tracegas.runner.ExitCode;
 import org.tracegas.store.Session;
 import org.tracegas.store.WorkspaceStore;
+import org.tracegas.store.WorkspaceVerification;
 import org.tracegas.store.Workspaces;
 
 /**
  * batch-split, batch-work and batch-status on a real H2 workspace: a batch worked by one runner stores what
  * quantify stores for the same files, bad input to batch-split records no batch, and an unfinished batch of a
- * project and method version refuses a second split and quantify, and a file that cannot be processed fails its
- * unit without stopping the batch.
+ * project and method version refuses a second split and quantify, a file that cannot be processed fails its
+ * unit without stopping the batch, and the analyzer named at the split is the one every stored measurement names.
  */
 class BatchCommandsTest {
 
@@ -46,7 +54,7 @@ class BatchCommandsTest {
     @BeforeAll
     static void workspaceAndFiles() throws Exception {
         ws = folder.resolve("ws");
-        campaign = new BatchCampaign(folder, List.of("--workspace", ws.toString()), List.of("Q", "B", "X", "S", "D", "F"), FILES,
+        campaign = new BatchCampaign(folder, List.of("--workspace", ws.toString()), List.of("Q", "B", "X", "S", "D", "F", "I"), FILES,
                 SAMPLES_PER_FILE);
     }
 
@@ -74,6 +82,10 @@ class BatchCommandsTest {
             Instant created = store.workUnits().batch(ana, batchId).getCreatedAt();
             assertTrue(status.contains("created " + created + " by user " + ana.userId() + ", method version "
                     + version), status);
+            // split without --instrument: the measurements name no instrument, as the files name none
+            for (Measurement m : store.projects().measurements(ana, projectId)) {
+                assertNull(m.getInstrument(), m.getKind() + " at " + m.getTime());
+            }
         }
         ByteArrayOutputStream err = new ByteArrayOutputStream();
         assertEquals(ExitCode.BAD_INPUT, campaign.run(new ByteArrayOutputStream(), err, "batch-split",
@@ -104,6 +116,65 @@ class BatchCommandsTest {
                         + "the samples of " + campaign.stackFiles.get(unit));
             }
             assertTrue(store.verifyAuditTrail().intact());
+        }
+    }
+
+    /**
+     * The analyzer named at the split is recorded once every input is checked, with the figures the containers
+     * were written with, and every measurement the batch's runner stores names it; a name without its serial
+     * number, or files of two set-ups, record neither batch nor instrument.
+     */
+    @Test
+    void batchSplitWithTheInstrumentStoresEveryMeasurementNamingIt() throws Exception {
+        String name = "Bench FTIR 3";
+        String serial = "QM-0311";
+        long before = batchesRecorded();
+        ByteArrayOutputStream err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.USAGE, campaign.run(new ByteArrayOutputStream(), err, "batch-split",
+                campaign.quantification("I", campaign.stackFiles, "--instrument", name)),
+                "a name without its serial number");
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("--instrument-serial"), err::toString);
+
+        // the records of the first stack file as a cell of twice the path would give them: another set-up
+        Path longCell = folder.resolve("long-cell.tgc");
+        try (ContainerReader in = ContainerReader.open(campaign.stackFiles.get(0));
+                ContainerWriter out = ContainerWriter.create(longCell)) {
+            for (ContainerRecord r = in.readNext(); r != null; r = in.readNext()) {
+                AcquisitionHeader h = r.header();
+                out.append(new AcquisitionHeader(h.zpdIndex(), h.kind(), h.time(), h.cellTemperatureK(),
+                        h.cellPressureHpa(), 2 * h.pathLengthM(), h.extra()), r.interferogram());
+            }
+            out.commit();
+        }
+        err = new ByteArrayOutputStream();
+        assertEquals(ExitCode.BAD_INPUT, campaign.run(new ByteArrayOutputStream(), err, "batch-split",
+                campaign.quantification("I", List.of(campaign.stackFiles.get(1), longCell), "--instrument", name,
+                        "--instrument-serial", serial)), err::toString);
+        String message = err.toString(StandardCharsets.UTF_8);
+        assertTrue(message.contains(longCell.toString()) && message.contains("path.length.m"), message);
+        assertEquals(before, batchesRecorded(), "no batch recorded");
+        try (WorkspaceStore store = Workspaces.openH2(ws.resolve("db"))) {
+            Session ana = store.users().logIn("ana", BatchCampaign.PASSWORD.toCharArray());
+            assertEquals(Optional.empty(), store.instruments().find(ana, name, serial), "no instrument recorded");
+        }
+
+        String batchId = campaign.ok("batch-split", campaign.quantification("I", campaign.stackFiles,
+                "--instrument", name, "--instrument-serial", serial)).strip();
+        campaign.ok("batch-work", "--as", "ana", "--batch", batchId, "--lease", "30", "--idle-poll", "0.2");
+        try (WorkspaceStore store = Workspaces.openH2(ws.resolve("db"))) {
+            Session ana = store.users().logIn("ana", BatchCampaign.PASSWORD.toCharArray());
+            Instrument bench = store.instruments().find(ana, name, serial).orElseThrow();
+            BatchCampaign.assertWrittenFigures(bench);
+            String projectId = store.projects().findByCode(ana, "I").orElseThrow().getId();
+            List<Measurement> measured = store.projects().measurements(ana, projectId);
+            assertEquals(FILES * SAMPLES_PER_FILE, measured.size());
+            for (Measurement m : measured) {
+                assertEquals(bench.getId(), m.getInstrument() == null ? null : m.getInstrument().getId(),
+                        m.getKind() + " at " + m.getTime());
+            }
+            // the chain and every row it vouches for, the measurements' links to the instrument among them
+            WorkspaceVerification verified = store.audit().verifyWorkspace(List.of());
+            assertTrue(verified.intact(), verified.statement());
         }
     }
 

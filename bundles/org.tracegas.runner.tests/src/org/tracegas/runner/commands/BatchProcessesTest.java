@@ -36,6 +36,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.postgresql.ds.PGSimpleDataSource;
 import org.tracegas.pipeline.QuantificationSetup;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.Measurement;
 import org.tracegas.preprocess.InterferogramTransform;
 import org.tracegas.quantify.BatchQuantifier;
@@ -52,7 +53,8 @@ import org.tracegas.store.Workspaces;
  * Three runner processes work one quantification batch on the PostgreSQL lab server (system properties
  * tracegas.test.pg.url, .user and .password; a fresh schema per test). One is killed with SIGKILL while it holds
  * a unit; the others finish the batch and take that unit once its lease has ended. Every unit is done exactly
- * once, every sample of every file is stored once with one result per analyte, and the audit chain verifies.
+ * once, every sample of every file is stored once with one result per analyte and names the analyzer the batch
+ * was split with, and the audit chain verifies with every row it vouches for.
  * Of runners splitting the same quantification at once, one records the batch and the others are refused.
  */
 class BatchProcessesTest {
@@ -90,7 +92,8 @@ class BatchProcessesTest {
     void killedRunnerLosesNoUnitAndNoSampleIsStoredTwice() throws Exception {
         List<String> server = List.of("--server", schemaUrl, "--user", USER);
         BatchCampaign campaign = new BatchCampaign(folder, server, List.of("P"), FILES, SAMPLES_PER_FILE);
-        String batchId = campaign.ok("batch-split", campaign.quantification("P", campaign.stackFiles)).strip();
+        String batchId = campaign.ok("batch-split", campaign.quantification("P", campaign.stackFiles,
+                "--instrument", "Stack FTIR 1", "--instrument-serial", "NV-2207")).strip();
 
         List<Process> runners = new ArrayList<>();
         for (int r = 0; r < RUNNERS; r++) {
@@ -170,6 +173,20 @@ class BatchProcessesTest {
             assertEquals(times.keySet(), resultsPerMeasurement.keySet());
             resultsPerMeasurement.forEach((m, n) -> assertEquals(COMPOUNDS, n, "results of measurement at "
                     + times.get(m)));
+            // each runner read the analyzer from the batch: every measurement names it, whoever stored it, and
+            // its audit record vouches for the link
+            Instrument analyzer = store.instruments().find(ana, "Stack FTIR 1", "NV-2207").orElseThrow();
+            BatchCampaign.assertWrittenFigures(analyzer);
+            for (Measurement m : store.projects().measurements(ana, project)) {
+                assertEquals(analyzer.getId(), m.getInstrument() == null ? null : m.getInstrument().getId(),
+                        "measurement at " + m.getTime());
+            }
+            List<String> audited = query("SELECT new_value FROM audit_record WHERE object_type = 'measurement'",
+                    rs -> rs.getString(1));
+            assertEquals(FILES * SAMPLES_PER_FILE, audited.size());
+            for (String values : audited) {
+                assertTrue(values.lines().anyMatch(("instrument=" + analyzer.getId())::equals), values);
+            }
             // the chain and every data row it vouches for, after a runner was killed holding a unit
             WorkspaceVerification verified = store.audit().verifyWorkspace(List.of());
             assertTrue(verified.intact(), verified.statement());

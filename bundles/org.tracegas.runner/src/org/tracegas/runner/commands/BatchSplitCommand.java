@@ -2,8 +2,10 @@ package org.tracegas.runner.commands;
 
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Optional;
 
 import org.tracegas.pipeline.ProjectQuantification;
+import org.tracegas.model.Instrument;
 import org.tracegas.model.Project;
 import org.tracegas.model.WorkBatch;
 import org.tracegas.model.WorkBatches;
@@ -41,7 +43,10 @@ public final class BatchSplitCommand implements Command {
                   per --file, the project, method version and background files in the batch's description. A
                   method whose path source is cts-derived needs --qa-plan, as quantify does: the CTS readings among
                   the --backgrounds files give the effective path, recorded in the description, that every runner
-                  corrects the results to.
+                  corrects the results to. --instrument and --instrument-serial name the analyzer that acquired
+                  the containers, as for quantify: it is recorded once, with the figures the files' records carry
+                  (files of different set-ups are refused), after every input is checked; its id goes into the
+                  description and every runner stores each measurement of the batch naming it.
                   A project has at most one unfinished batch per method version, whatever its files: a second one
                   would store the same samples again. Finish the first with batch-work.
                   Prints the batch id alone on standard output; give it to batch-work and batch-status.
@@ -58,21 +63,27 @@ public final class BatchSplitCommand implements Command {
             Session actor = WorkspaceLogin.logIn(store, options, context);
             Project project = StoredMethods.project(store, actor, options.text("--project"));
             QuantifyArguments.Checked checked;
-            String description;
+            Optional<Instrument> instrument;
+            BatchDescription description;
             try {
                 checked = arguments.check(store, actor, project,
                         new ProjectQuantification(store, actor, project.getId(), StoredMethods.SOFTWARE, null));
+                instrument = arguments.instrument();
                 description = new BatchDescription(project.getId(), checked.found().version().getId(),
-                        arguments.backgroundFiles(), arguments.ctsPath(store, checked.found())).text();
-                requireFits(description, arguments.files());
+                        arguments.backgroundFiles(), arguments.ctsPath(store, checked.found()), Optional.empty());
+                requireFits(description.text().length()
+                        + (instrument.isPresent() ? BatchDescription.INSTRUMENT_LINE_ROOM : 0), arguments.files());
             } catch (BadInputException e) {
                 context.err().println("tracegas batch-split: " + e.getMessage());
                 return ExitCode.BAD_INPUT;
             }
+            // recorded only now that every input has been read and checked, as quantify records it
+            Optional<Instrument> recorded = instrument.map(i -> store.instruments().record(actor, i));
+            description = description.withInstrument(recorded.map(Instrument::getId));
             WorkBatch batch;
             try {
                 batch = store.workUnits().createBatch(actor, project.getId(),
-                        WorkBatches.of(checked.found().version().getId(), description),
+                        WorkBatches.of(checked.found().version().getId(), description.text()),
                         arguments.files().stream().map(Path::toString).toList());
             } catch (UnfinishedBatchException e) {
                 // another runner recorded its batch between the check and now
@@ -81,16 +92,17 @@ public final class BatchSplitCommand implements Command {
             }
             context.out().println(batch.getId());
             context.err().printf("Recorded batch %s: %d work units with %d samples of project %s, method '%s' "
-                    + "version %d%n", batch.getId(), batch.getUnitCount(), checked.inputs().samples(), project.getCode(),
-                    checked.found().method().method().name(), checked.found().version().getNumber());
+                    + "version %d%s%n", batch.getId(), batch.getUnitCount(), checked.inputs().samples(),
+                    project.getCode(), checked.found().method().method().name(), checked.found().version().getNumber(),
+                    recorded.map(i -> ", instrument '" + i.getName() + "' serial " + i.getSerialNumber()).orElse(""));
             return ExitCode.OK;
         }
     }
 
     /** Checked here so that the store's refusal cannot come after a partly successful check. */
-    private static void requireFits(String description, List<Path> files) throws BadInputException {
-        if (description.length() > WorkUnitService.MAX_TEXT_LENGTH) {
-            throw new BadInputException("the --backgrounds file names take " + description.length()
+    private static void requireFits(int descriptionLength, List<Path> files) throws BadInputException {
+        if (descriptionLength > WorkUnitService.MAX_TEXT_LENGTH) {
+            throw new BadInputException("the --backgrounds file names take " + descriptionLength
                     + " characters, more than a batch holds (" + WorkUnitService.MAX_TEXT_LENGTH + ")");
         }
         for (Path f : files) {

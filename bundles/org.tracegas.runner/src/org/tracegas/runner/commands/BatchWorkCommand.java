@@ -64,10 +64,12 @@ public final class BatchWorkCommand implements Command {
                   --idle-poll <seconds>       when the remaining units are all held by other runners, how long to
                                               wait before asking again (default 5)
                   The method version is rebuilt from the workspace and the backgrounds read from the files the
-                  batch names, as quantify does; a CTS-derived path is the one batch-split recorded. Each file's results are stored together with its unit's
-                  completion, so a unit is done once, with all its results, or not at all: a runner that stops
-                  or dies leaves its unit to the others once its lease ends. The runner is named host:process id
-                  in the units and the audit trail. The progress line counts the batch's done units (all runners).
+                  batch names, as quantify does; a CTS-derived path is the one batch-split recorded, and so is
+                  the instrument every measurement names, when batch-split was given one. Each file's results are
+                  stored together with its unit's completion, so a unit is done once, with all its results, or
+                  not at all: a runner that stops or dies leaves its unit to the others once its lease ends.
+                  The runner is named host:process id in the units and the audit trail. The progress line counts
+                  the batch's done units (all runners).
                   A sample file that cannot be processed (e.g. a corrupt file) fails its unit with the error; no
                   runner tries it again and the others go on with the remaining files.
                 exit codes: 0 the batch is complete, 2 wrong arguments or no such batch, 3 the batch's method version
@@ -89,8 +91,10 @@ public final class BatchWorkCommand implements Command {
                 BatchDescription description = BatchDescription.of(batch);
                 StoredMethods.Found found = StoredMethods.byId(store, description.methodVersionId());
                 List<Background> backgrounds = SampleInputs.backgrounds(found.method(), description.backgrounds());
+                String instrumentId = description.instrumentId().orElse(null);
+                requireStored(store, actor, instrumentId);
                 stack = new QuantificationSetup(found.version(), found.method(), backgrounds, StoredMethods.SOFTWARE,
-                        description.ctsPathM()).processor(store, actor, batch.getProject().getId(), null);
+                        description.ctsPathM()).processor(store, actor, batch.getProject().getId(), instrumentId);
             } catch (BadInputException | FileFormatException | IllegalArgumentException e) {
                 // an IllegalArgumentException: the batch lacks the CTS path its method needs, or has one it does not, or
                 // its method has [recipe] steps, which a stream of containers does not run
@@ -119,6 +123,20 @@ public final class BatchWorkCommand implements Command {
             context.out().printf("Batch %s complete: %d units; runner %s completed %d of them%n", batch.getId(),
                     done.total(), runner, outcome.completed());
             return ExitCode.OK;
+        }
+    }
+
+    /**
+     * Checked before the first unit is claimed: the store would refuse every unit's block otherwise.
+     *
+     * @throws BadInputException naming the instrument id the workspace does not hold
+     */
+    private static void requireStored(WorkspaceStore store, Session actor, String instrumentId)
+            throws BadInputException {
+        if (instrumentId != null && store.instruments().instruments(actor).stream()
+                .noneMatch(i -> i.getId().equals(instrumentId))) {
+            throw new BadInputException("the description names instrument " + instrumentId
+                    + ", which the workspace does not hold");
         }
     }
 
