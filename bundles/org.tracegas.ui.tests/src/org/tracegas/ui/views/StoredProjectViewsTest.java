@@ -4,7 +4,11 @@ import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.nio.ByteBuffer;
+import java.nio.ByteOrder;
 import java.nio.file.Path;
+import java.security.MessageDigest;
+import java.util.HexFormat;
 
 import org.eclipse.jface.viewers.StructuredSelection;
 import org.eclipse.swt.SWT;
@@ -14,9 +18,9 @@ import org.eclipse.swt.layout.GridData;
 import org.eclipse.swt.layout.GridLayout;
 import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Control;
-import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Display;
 import org.eclipse.swt.widgets.Event;
+import org.eclipse.swt.widgets.Label;
 import org.eclipse.swt.widgets.Shell;
 import org.eclipse.swt.widgets.TableItem;
 import org.eclipse.swt.widgets.TreeItem;
@@ -34,11 +38,11 @@ import org.tracegas.store.Session;
 import org.tracegas.ui.Screens;
 import org.tracegas.ui.parts.Caution;
 import org.tracegas.ui.parts.ConcentrationTrace;
-import org.tracegas.ui.parts.TimeSeriesPanel;
 import org.tracegas.ui.parts.LibraryBrowserPanel;
 import org.tracegas.ui.parts.QaOverviewPanel;
 import org.tracegas.ui.parts.ResultReviewPanel;
 import org.tracegas.ui.parts.SpectrumPanel;
+import org.tracegas.ui.parts.TimeSeriesPanel;
 import org.tracegas.ui.parts.WorkspaceNavigator;
 import org.tracegas.ui.session.Desk;
 import org.tracegas.ui.session.WorkspaceAccess;
@@ -186,6 +190,13 @@ class StoredProjectViewsTest {
                 + " — stored absorbance, fit not kept"), title);
         assertTrue(title.contains("CO 33.00 ± 0.50 ppm"), title);
         assertTrue(title.contains("NO 83.00 ± 0.50 ppm [HIGH_RESIDUAL]"), title);
+        // the stored values' digest as the JDK computes it from the float64 little-endian bytes, first 16 digits
+        ByteBuffer bytes = ByteBuffer.allocate(8 * StoredProject.band(0.4).size()).order(ByteOrder.LITTLE_ENDIAN);
+        for (double v : StoredProject.band(0.4).toArray()) {
+            bytes.putDouble(v);
+        }
+        String digest = HexFormat.of().formatHex(MessageDigest.getInstance("SHA-256").digest(bytes.array()));
+        assertTrue(title.contains("; values SHA-256 " + digest.substring(0, 16) + "…"), title);
         // the values drawn are those stored, bit for bit (float64 encoding)
         assertArrayEquals(StoredProject.band(0.4).toArray(), spectrum.shown().sample());
         assertEquals(0.4, StoredProject.band(0.4).get(286), 1e-12, "band peak at 2143 cm⁻¹");

@@ -49,8 +49,18 @@ public final class MeasurementSpectrum {
         String results = store.results().ofMeasurement(actor, measurementId).stream()
                 .map(MeasurementSpectrum::result).collect(Collectors.joining("; "));
         String title = label + " — stored " + found.getContent().getLiteral().toLowerCase(Locale.ROOT).replace('_', ' ')
-                + ", fit not kept" + (results.isEmpty() ? "; no results stored" : "; " + results);
+                + ", fit not kept" + (results.isEmpty() ? "; no results stored" : "; " + results)
+                + "; values SHA-256 " + leading(found.getSha256())
+                + (found.getRecipeSha256() == null ? "" : ", recipe SHA-256 " + leading(found.getRecipeSha256()));
         return Optional.of(FitDisplay.unfitted(title, found.getSpectrum()));
+    }
+
+    /**
+     * The first 16 hex digits of a SHA-256, enough to match the spectrum with its audit record (which states the
+     * whole digest) in a title that stays readable.
+     */
+    private static String leading(String sha256) {
+        return sha256.substring(0, 16) + "…";
     }
 
     /** What the tree and the spectrum view call a measurement: "sample 2026-05-04 06:02:00 UTC". */
