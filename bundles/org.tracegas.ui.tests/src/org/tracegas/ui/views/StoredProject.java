@@ -59,6 +59,9 @@ final class StoredProject {
     /** Name of the library; its version is recorded from a manifest as the runner records it. */
     static final String LIBRARY = "Furnace references";
     static final String REPORT_ID = "GLS-2026-09-R1";
+    /** The plant and the emission source the project measures. */
+    static final String SITE = "Hollin Bank works";
+    static final String SOURCE = "Stack K3";
 
     StoredProject(WorkspaceStore store, Path folder) throws IOException {
         Session admin = store.users().createFirstAdministrator("admin", "Administrator", PASSWORD.toCharArray());
@@ -66,6 +69,9 @@ final class StoredProject {
                 PASSWORD.toCharArray()).getId();
         String client = store.projects().createClient(admin, "Glasshouse Lane Glassworks").getId();
         project = store.projects().createProject(admin, client, CODE, "Furnace 3 flue, September");
+        String site = store.sites().createSite(admin, client, SITE, "float glass lines").getId();
+        store.sites().setSource(admin, project.getId(), store.sites().createSource(admin, site, SOURCE,
+                "furnace 3 exhaust after the filter").getId());
         store.projects().grant(admin, project.getId(), analystId, AccessLevel.WRITE);
         Session analyst = store.users().logIn(ANALYST, PASSWORD.toCharArray());
         store.projects().recordMeasurement(analyst, project.getId(), MeasurementKind.BACKGROUND,

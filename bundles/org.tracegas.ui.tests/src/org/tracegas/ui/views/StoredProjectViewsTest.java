@@ -296,6 +296,28 @@ class StoredProjectViewsTest {
         assertEquals(1, filteredDay.getItem(0).getItemCount());
         assertEquals("sample  2026-09-22 10:02:00 UTC", filteredDay.getItem(0).getItem(0).getText());
         Screens.save(shell, "navigator-filtered");
+        // the plant's or the emission source's name keeps the projects measuring it, and the site with the source
+        for (String text : java.util.List.of("stack k3", "Hollin")) {
+            nav.filter().setText(text);
+            Screens.flush(display);
+            nav.viewer().expandToLevel(nav.viewer().getTree().getItem(0).getData(), 2);
+            Screens.flush(display);
+            TreeItem client = nav.viewer().getTree().getItem(0);
+            java.util.List<String> shown = java.util.Arrays.stream(client.getItems()).map(TreeItem::getText).toList();
+            assertEquals(2, shown.size(), text + ": " + shown);
+            assertTrue(shown.get(0).startsWith(StoredProject.CODE), text + ": " + shown);
+            assertTrue(shown.get(1).startsWith(StoredProject.SITE), text + ": " + shown);
+            nav.viewer().expandToLevel(client.getItem(1).getData(), 1);
+            Screens.flush(display);
+            assertEquals(1, client.getItem(1).getItemCount(), text + ": the site keeps its source");
+            assertTrue(client.getItem(1).getItem(0).getText().startsWith(StoredProject.SOURCE),
+                    client.getItem(1).getItem(0).getText());
+        }
+        Screens.save(shell, "navigator-filtered-by-source");
+        nav.filter().setText("no such plant");
+        Screens.flush(display);
+        assertTrue(java.util.Arrays.stream(nav.viewer().getTree().getItems())
+                .noneMatch(i -> i.getText().startsWith("Glasshouse")), "a text nothing carries hides the client");
         nav.filter().setText("");
         Screens.flush(display);
 

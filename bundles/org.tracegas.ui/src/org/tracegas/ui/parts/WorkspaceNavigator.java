@@ -30,9 +30,11 @@ import org.eclipse.swt.widgets.Composite;
 import org.eclipse.swt.widgets.Text;
 import org.eclipse.emf.common.notify.AdapterFactory;
 import org.tracegas.model.Client;
+import org.tracegas.model.EmissionSource;
 import org.tracegas.model.Measurement;
 import org.tracegas.model.MeasurementKind;
 import org.tracegas.model.Project;
+import org.tracegas.model.Site;
 import org.tracegas.model.Workspace;
 import org.tracegas.model.provider.WorkbenchItemProviderAdapterFactory;
 import org.tracegas.ui.items.ItemLabels;
@@ -94,7 +96,7 @@ public final class WorkspaceNavigator extends Composite {
         layout.marginHeight = 0;
         setLayout(layout);
         filter = new Text(this, SWT.SEARCH | SWT.ICON_CANCEL | SWT.ICON_SEARCH);
-        filter.setMessage("Filter: project, client, kind or day (e.g. 2026-07-14)");
+        filter.setMessage("Filter: project, client, plant, source, kind or day (e.g. 2026-07-14)");
         filter.setLayoutData(new GridData(SWT.FILL, SWT.CENTER, true, false));
         viewer = new TreeViewer(this, SWT.MULTI | SWT.V_SCROLL | SWT.H_SCROLL);
         viewer.getTree().setLayoutData(new GridData(SWT.FILL, SWT.FILL, true, true));
@@ -237,26 +239,41 @@ public final class WorkspaceNavigator extends Composite {
 
     /** Whether an element, or something beneath it, matches the filter text (lower case; empty matches all). */
     private boolean matches(Object e, String text) {
-        if (text.isEmpty() || !(e instanceof Client || e instanceof Project || e instanceof Day
-                || e instanceof KindGroup || e instanceof Measurement)) {
+        if (text.isEmpty() || !(e instanceof Client || e instanceof Site || e instanceof EmissionSource
+                || e instanceof Project || e instanceof Day || e instanceof KindGroup || e instanceof Measurement)) {
             return true;
         }
         if (label(e).toLowerCase(Locale.ROOT).contains(text)) {
             return true;
         }
         if (e instanceof Client c) {
-            return c.getProjects().stream().anyMatch(p -> matches(p, text));
+            return c.getProjects().stream().anyMatch(p -> matches(p, text))
+                    || c.getSites().stream().anyMatch(s -> matches(s, text));
+        } else if (e instanceof Site s) {
+            return s.getSources().stream().anyMatch(source -> matches(source, text));
+        } else if (e instanceof EmissionSource source) {
+            // a source matches through its site too, so the plant's name keeps its sources
+            return source.eContainer() instanceof Site s && label(s).toLowerCase(Locale.ROOT).contains(text);
         } else if (e instanceof Project p) {
-            return days(p).stream().anyMatch(d -> matches(d, text));
+            // a project matches by the plant and emission source it measures, so "Tarnbeck" keeps its projects
+            return measures(p, text) || days(p).stream().anyMatch(d -> matches(d, text));
         } else if (e instanceof Day d) {
             return byDay(d.project()).get(d.day()).keySet().stream().anyMatch(k -> matches(new KindGroup(d, k), text));
         } else if (e instanceof KindGroup g) {
             return measurements(g).stream().anyMatch(m -> matches(m, text));
         } else if (e instanceof Measurement m) {
             // a measurement matches through its project, day or kind too, so "2026-07-14" keeps that day's
-            return m.eContainer() instanceof Project p && label(p).toLowerCase(Locale.ROOT).contains(text);
+            return m.eContainer() instanceof Project p && (label(p).toLowerCase(Locale.ROOT).contains(text)
+                    || measures(p, text));
         }
         return false;
+    }
+
+    /** Whether the emission source a project measures, or its site, is labelled with the filter text. */
+    private boolean measures(Project p, String text) {
+        EmissionSource source = p.getSource();
+        return source != null && (label(source).toLowerCase(Locale.ROOT).contains(text)
+                || source.eContainer() instanceof Site s && label(s).toLowerCase(Locale.ROOT).contains(text));
     }
 
     /** Selects and reveals a project by its code; returns false if there is none. */
