@@ -165,8 +165,8 @@ public final class DemoCampaign {
             Files.createDirectories(reportFolder);
             Path pdf = reportFolder.resolve("tarnbeck-line2-report.pdf");
             Path csv = reportFolder.resolve("tarnbeck-line2-results.csv");
-            CampaignReport.write(content, pdf, csv);
-            report.issue(content, methodVersion, recorded.method(), pdf);
+            int pages = CampaignReport.write(content, pdf, csv);
+            report.issue(content, methodVersion, recorded.method(), pdf, pages);
             return new Outcome(processed, reuse, false, pdf, csv, checks, store.verifyAuditTrail());
         }
     }

@@ -5,6 +5,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
+import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -48,6 +49,17 @@ class PdfReportWriterTest {
         s.setStartPage(first);
         s.setEndPage(last);
         return s.getText(doc);
+    }
+
+    /** The count the writer returns is the page count of the document read back (PDFBox's reader). */
+    @Test
+    void writingToAStreamReturnsThePageCount() throws IOException {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        int pages = new PdfReportWriter().write(content, out);
+        try (PDDocument doc = Loader.loadPDF(out.toByteArray())) {
+            assertEquals(doc.getNumberOfPages(), pages);
+        }
+        assertTrue(pages > 1, pages + " pages");
     }
 
     @Test

@@ -76,7 +76,12 @@ public final class PdfReportWriter {
         return out.toByteArray();
     }
 
-    public void write(ReportContent content, OutputStream out) throws IOException {
+    /**
+     * Writes the report as PDF to the stream.
+     *
+     * @return the number of pages written, for the record of the report's issue
+     */
+    public int write(ReportContent content, OutputStream out) throws IOException {
         Check.notNull("content", content);
         Check.notNull("out", out);
         try (PDDocument doc = new PDDocument()) {
@@ -97,6 +102,7 @@ public final class PdfReportWriter {
                         + "  |  content hash " + content.contentHash().substring(0, 16));
             }
             doc.save(out);
+            return doc.getNumberOfPages();
         }
     }
 

@@ -179,9 +179,9 @@ public final class CampaignReport {
         }
         Files.createDirectories(folder);
         Written written = new Written(folder.resolve("report.pdf"), folder.resolve("results.csv"));
-        write(content, written.pdf(), written.csv());
+        int pages = write(content, written.pdf(), written.csv());
         try {
-            issue(content, methodVersion, method, written.pdf());
+            issue(content, methodVersion, method, written.pdf(), pages);
         } catch (RuntimeException e) {
             // a report written out is an issue: without its record it is not left behind either
             try {
@@ -196,12 +196,15 @@ public final class CampaignReport {
     }
 
     /**
-     * Records in the project that the report was issued, once its PDF is written whole: report id, title, file,
-     * the method and library versions and the content hash its review and approval signatures are given on.
+     * Records in the project that the report was issued, once its PDF is written whole: report id, title, file
+     * and its number of pages, the method and library versions and the content hash its review and approval
+     * signatures are given on.
      *
+     * @param pages the PDF's number of pages, as {@link #write} returned it
      * @return the report as stored
      */
-    public Report issue(ReportContent content, ContentVersion methodVersion, StoredMethod method, Path pdf) {
+    public Report issue(ReportContent content, ContentVersion methodVersion, StoredMethod method, Path pdf,
+            int pages) {
         Campaign c = content.campaign();
         Report r = WorkspaceFactory.eINSTANCE.createReport();
         r.setReportId(c.reportId());
@@ -209,19 +212,26 @@ public final class CampaignReport {
                 + (c.lastDay().equals(c.firstDay()) ? "" : " to " + c.lastDay()));
         r.setContentSha256(content.contentHash());
         r.setFileName(pdf.getFileName().toString());
+        r.setPageCount(pages);
         r.setMethodVersionId(methodVersion.getId());
         r.setLibraryVersionId(method.libraryVersionId());
         return store.reports().record(actor, projectId, r);
     }
 
-    /** Writes the PDF and the CSV of results, each whole or not at all. */
-    public static void write(ReportContent content, Path pdf, Path csv) throws IOException {
-        WholeFile.write(pdf, out -> new PdfReportWriter().write(content, out));
+    /**
+     * Writes the PDF and the CSV of results, each whole or not at all.
+     *
+     * @return the PDF's number of pages
+     */
+    public static int write(ReportContent content, Path pdf, Path csv) throws IOException {
+        int[] pages = new int[1];
+        WholeFile.write(pdf, out -> pages[0] = new PdfReportWriter().write(content, out));
         WholeFile.write(csv, out -> {
             Writer w = new OutputStreamWriter(out, StandardCharsets.UTF_8);
             CsvExport.write(content.results(), w);
             w.flush();
         });
+        return pages[0];
     }
 
     private static double oxygen(SideChannelJoin o2, String channel, Instant t) {

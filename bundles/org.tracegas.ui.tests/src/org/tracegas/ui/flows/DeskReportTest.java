@@ -93,6 +93,9 @@ class DeskReportTest {
         assertEquals(List.of("report-issue", r.getId()), List.of(issue.objectType(), issue.objectId()));
         assertEquals(List.of("QLW-R-01", job.outcome().content().contentHash(), "report.pdf", method.getId()),
                 List.of(r.getReportId(), r.getContentSha256(), r.getFileName(), r.getMethodVersionId()));
+        // the page count is recorded with the issue (the writer's count is checked against the file in
+        // PdfReportWriterTest)
+        assertTrue(r.isSetPageCount() && r.getPageCount() >= 1, "page count " + r.getPageCount());
         try (var files = Files.list(out)) {
             assertEquals(List.of("report.pdf", "results.csv"), files.map(f -> f.getFileName().toString()).sorted()
                     .toList(), "each file whole, no part left beside them");
