@@ -20,7 +20,7 @@ class MixtureModelTest {
             Apodization.NORTON_BEER_MEDIUM, 0.5);
 
     /** An invented band of strong lines 3.5 cm-1 apart around 2140 cm-1. */
-    private static LineByLineModel band() {
+    static LineByLineModel band() {
         List<SpectralLine> lines = new ArrayList<>();
         for (int m = -6; m <= 6; m++) {
             if (m != 0) {
@@ -30,13 +30,13 @@ class MixtureModelTest {
         return new LineByLineModel(new LineList("invented", lines), 28, PowerLawPartitionFunction.linearMolecule());
     }
 
-    private static double[] observe(MixtureModel m, double[] amounts, double[][] derivatives) {
+    private static double[] observe(MixtureModel m, double[] amounts) {
         double[] observed = new double[m.grid().size()];
-        m.observe(amounts, observed, derivatives);
+        m.observe(amounts, new double[m.grid().size()], observed);
         return observed;
     }
 
-    private static MixtureModel model(double fieldOfView) {
+    static MixtureModel model(double fieldOfView) {
         return new MixtureModel(List.of(band()), 300, 101.0, 5.0, LINE_SHAPE, fieldOfView, 2125, 2155);
     }
 
@@ -54,8 +54,8 @@ class MixtureModelTest {
         MixtureModel point = model(0);
         MixtureModel wide = model(alpha);
         double[] amounts = {2500};
-        double[] narrowSeen = observe(point, amounts, null);
-        double[] wideSeen = observe(wide, amounts, null);
+        double[] narrowSeen = observe(point, amounts);
+        double[] wideSeen = observe(wide, amounts);
         CubicReader atPoint = new CubicReader(point.grid());
         CubicReader atWide = new CubicReader(wide.grid());
         double[] read = new double[2];
@@ -80,16 +80,44 @@ class MixtureModelTest {
     @Test
     void derivativesAreThoseOfTheTransmittance() {
         MixtureModel m = model(0.006);
-        double[][] derivatives = new double[1][m.grid().size()];
-        observe(m, new double[] {500}, derivatives);
+        double[] monochromatic = new double[m.grid().size()];
+        double[] derivative = new double[m.grid().size()];
+        m.observe(new double[] {500}, monochromatic, new double[m.grid().size()]);
+        m.derivative(0, new double[] {500}, monochromatic, derivative);
         double h = 0.01;
-        double[] up = observe(m, new double[] {500 + h}, null);
-        double[] down = observe(m, new double[] {500 - h}, null);
+        double[] up = observe(m, new double[] {500 + h});
+        double[] down = observe(m, new double[] {500 - h});
         double largest = 0;
         for (int i = 0; i < up.length; i++) {
-            largest = Math.max(largest, Math.abs(derivatives[0][i]));
-            assertEquals((up[i] - down[i]) / (2 * h), derivatives[0][i], 1e-9, "fine point " + i);
+            largest = Math.max(largest, Math.abs(derivative[i]));
+            assertEquals((up[i] - down[i]) / (2 * h), derivative[i], 1e-9, "fine point " + i);
         }
         assertTrue(largest > 1e-4, "the derivative must not vanish, largest " + largest);
+    }
+
+    /**
+     * At zero amounts, where every fit starts and the model answers from spectra prepared once: the empty cell's
+     * observed transmittance is 1 (the line shape has unit area, and the field of view's mean of a constant is the
+     * constant), and the derivatives are those of central differences about zero.
+     */
+    @Test
+    void atZeroAmountsTheCellIsClearAndTheSlopesThoseOfCentralDifferences() {
+        MixtureModel m = model(0.006);
+        double[] monochromatic = new double[m.grid().size()];
+        double[] clear = new double[m.grid().size()];
+        m.observe(new double[] {0}, monochromatic, clear);
+        double[] derivative = new double[m.grid().size()];
+        m.derivative(0, new double[] {0}, monochromatic, derivative);
+        double h = 0.01;
+        double[] up = observe(m, new double[] {h});
+        double[] down = observe(m, new double[] {-h});
+        double largest = 0;
+        for (int i = 0; i < clear.length; i++) {
+            assertEquals(1, monochromatic[i], 0, "fine point " + i);
+            assertEquals(1, clear[i], 1e-12, "fine point " + i);
+            largest = Math.max(largest, Math.abs(derivative[i]));
+            assertEquals((up[i] - down[i]) / (2 * h), derivative[i], 1e-9, "fine point " + i);
+        }
+        assertTrue(largest > 1e-5, "the derivative must not vanish, largest " + largest);
     }
 }

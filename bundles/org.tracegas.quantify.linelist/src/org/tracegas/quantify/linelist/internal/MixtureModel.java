@@ -32,10 +32,11 @@ import org.tracegas.spectrum.Spectrum;
  * compound's optical depth on the fine grid, and the instrument as one transfer function, the transform of the line
  * shape (taken from the line shape's own convolution of a single fine point) times that of the field-of-view boxcar
  * (mean over [nu, nu + w]: exp(i theta) sin(theta) / theta with theta = pi k w / (n step), exact for the
- * band-limited spectrum the line shape leaves). Per spectrum remain the exponential and one forward and one inverse
- * transform per observed vector, on work arrays kept per thread. The fine grid is as long as the transform, a power
- * of two, with at least {@value #GUARD_RESOLUTIONS} resolution elements of true spectrum beyond the margin at each
- * end, so that the circular convolution's wrap-around joins its ends far from any point read.
+ * band-limited spectrum the line shape leaves), and the observed spectra at zero amounts, where every fit starts.
+ * Per spectrum remain the exponential and one forward and one inverse transform per observed vector, on the fit's
+ * work arrays and transform buffers kept per thread. The fine grid is as long as the transform, a power of two,
+ * with at least {@value #GUARD_RESOLUTIONS} resolution elements of true spectrum beyond the margin at each end, so
+ * that the circular convolution's wrap-around joins its ends far from any point read.
  */
 public final class MixtureModel {
 
@@ -51,6 +52,10 @@ public final class MixtureModel {
     private final double[] transferRe;     // instrument's transfer function, k = 0 .. size / 2
     private final double[] transferIm;
     private final ThreadLocal<Transform> transforms;
+    /** The observed transmittance with no absorber: every fit starts at zero amounts. */
+    private final double[] observedAtZero;
+    /** [compound][fine point], the derivatives by the amounts at zero amounts. */
+    private final double[][] derivativeAtZero;
 
     /** One thread's transform and spectrum buffers: a transform holds work space and serves one thread. */
     private static final class Transform {
@@ -106,6 +111,18 @@ public final class MixtureModel {
         this.transferIm = new double[size / 2 + 1];
         lineShapeTransfer(lineShape);
         fieldOfViewTransfer(fieldWidth / step);
+        // the same numbers as observe and derivative compute at zero amounts, where exp(-0) = 1 exactly
+        this.observedAtZero = new double[size];
+        java.util.Arrays.fill(observedAtZero, 1.0);
+        instrument(observedAtZero);
+        this.derivativeAtZero = new double[models.size()][size];
+        for (int c = 0; c < models.size(); c++) {
+            double[] d = derivativeAtZero[c];
+            for (int i = 0; i < size; i++) {
+                d[i] = -tauPerAmount[c][i];
+            }
+            instrument(d);
+        }
     }
 
     /**
@@ -152,34 +169,59 @@ public final class MixtureModel {
     }
 
     /**
-     * The observed transmittance of a mixture on the fine grid and, when asked, its derivative with respect to each
-     * amount.
+     * The observed transmittance of a mixture on the fine grid, keeping the monochromatic transmittance from which
+     * {@link #derivative} takes the derivatives at the same amounts.
      *
-     * @param amounts     ppm·m of each compound
-     * @param observed    receives the observed transmittance, {@link #grid()} long
-     * @param derivatives receives d T_observed / d amount_c per compound in arrays {@link #grid()} long, or null
-     *                    when not wanted
+     * @param amounts       ppm·m of each compound
+     * @param monochromatic receives the monochromatic transmittance, {@link #grid()} long
+     * @param observed      receives the observed transmittance, {@link #grid()} long
      */
-    public void observe(double[] amounts, double[] observed, double[][] derivatives) {
+    public void observe(double[] amounts, double[] monochromatic, double[] observed) {
         int n = fine.size();
+        if (zero(amounts)) {
+            java.util.Arrays.fill(monochromatic, 1.0);
+            System.arraycopy(observedAtZero, 0, observed, 0, n);
+            return;
+        }
         for (int i = 0; i < n; i++) {
             double tau = 0;
             for (int c = 0; c < amounts.length; c++) {
                 tau += amounts[c] * tauPerAmount[c][i];
             }
-            observed[i] = Math.exp(-tau);
+            monochromatic[i] = Math.exp(-tau);
         }
-        if (derivatives != null) {
-            for (int c = 0; c < amounts.length; c++) {
-                double[] d = derivatives[c];
-                double[] tau = tauPerAmount[c];
-                for (int i = 0; i < n; i++) {
-                    d[i] = -tau[i] * observed[i];
-                }
-                instrument(d);
+        System.arraycopy(monochromatic, 0, observed, 0, n);
+        instrument(observed);
+    }
+
+    /**
+     * The derivative of the observed transmittance with respect to one compound's amount: the instrument's view of
+     * -tau_c T, T the monochromatic transmittance.
+     *
+     * @param compound      the compound's index
+     * @param amounts       ppm·m of each compound
+     * @param monochromatic the monochromatic transmittance that {@link #observe} gave at the amounts
+     * @param out           receives d T_observed / d amount, {@link #grid()} long
+     */
+    public void derivative(int compound, double[] amounts, double[] monochromatic, double[] out) {
+        if (zero(amounts)) {
+            System.arraycopy(derivativeAtZero[compound], 0, out, 0, out.length);
+            return;
+        }
+        double[] tau = tauPerAmount[compound];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = -tau[i] * monochromatic[i];
+        }
+        instrument(out);
+    }
+
+    private static boolean zero(double[] amounts) {
+        for (double a : amounts) {
+            if (a != 0) {
+                return false;
             }
         }
-        instrument(observed);
+        return true;
     }
 
     /** The observed transmittance of one compound alone at an amount. */
