@@ -123,4 +123,46 @@ class MixtureModelTest {
         }
         assertTrue(largest > 1e-5, "the derivative must not vanish, largest " + largest);
     }
+
+    /**
+     * A model weighted from two others on one instrument sees, at zero amounts and at an amount, what a model
+     * computed anew from the weighted optical depths sees: the instrument is linear in the optical depth at zero
+     * amounts, so the weighted derivatives differ from those computed anew only by rounding.
+     */
+    @Test
+    void aWeightedModelSeesWhatItsWeightedOpticalDepthsGive() {
+        List<LineByLineModel> band = List.of(band());
+        Instrument instrument = new Instrument(band, MixtureModel.nominal(300, 101, 5.0), LINE_SHAPE, 0.006, 2125,
+                2155);
+        double[][] cool = MixtureModel.opticalDepthPerAmount(band, instrument.grid(), MixtureModel.nominal(300, 101,
+                5.0));
+        double[][] warm = MixtureModel.opticalDepthPerAmount(band, instrument.grid(), MixtureModel.nominal(340, 95,
+                5.0));
+        double[] weights = {0.3, 0.7};
+        double[][] mixed = new double[1][cool[0].length];
+        for (int i = 0; i < mixed[0].length; i++) {
+            mixed[0][i] = weights[0] * cool[0][i] + weights[1] * warm[0][i];
+        }
+        MixtureModel weighted = MixtureModel.weighted(List.of(new MixtureModel(instrument, cool),
+                new MixtureModel(instrument, warm)), weights);
+        MixtureModel anew = new MixtureModel(instrument, mixed);
+        int size = instrument.grid().size();
+        for (double amount : new double[] {0, 800}) {
+            double[] monochromatic = new double[size];
+            double[] fromWeighted = new double[size];
+            double[] fromAnew = new double[size];
+            weighted.observe(new double[] {amount}, monochromatic, new double[size]);
+            weighted.derivative(0, new double[] {amount}, monochromatic, fromWeighted);
+            anew.observe(new double[] {amount}, monochromatic, new double[size]);
+            anew.derivative(0, new double[] {amount}, monochromatic, fromAnew);
+            double largest = 0;
+            for (double d : fromAnew) {
+                largest = Math.max(largest, Math.abs(d));
+            }
+            assertTrue(largest > 1e-5, "the derivative must not vanish, largest " + largest);
+            for (int i = 0; i < size; i++) {
+                assertEquals(fromAnew[i], fromWeighted[i], 1e-12 * largest, "amount " + amount + ", fine point " + i);
+            }
+        }
+    }
 }

@@ -31,9 +31,8 @@ public final class ConditionCell {
 
     private final double lowestTemperature;
     private final double lowestPressure;
-    private final Instrument instrument;
-    /** [corner][compound][fine point]: (T0, p0), (T1, p0), (T0, p1), (T1, p1). */
-    private final double[][][] corners = new double[4][][];
+    /** The models at the corners (T0, p0), (T1, p0), (T0, p1), (T1, p1), on one instrument. */
+    private final List<MixtureModel> corners;
 
     /**
      * @param models            line-by-line model of each compound
@@ -57,10 +56,13 @@ public final class ConditionCell {
         // the lower corner's grid: so a sample there is computed as without the cell, and across the cell the
         // narrowest line narrows by less than 0.1 % (Lorentz width as p T^-n, Doppler as T^1/2), far inside the
         // rule of a third of its half width
-        this.instrument = new Instrument(models, at[0], lineShape, fieldOfView, low, high);
+        Instrument instrument = new Instrument(models, at[0], lineShape, fieldOfView, low, high);
+        MixtureModel[] built = new MixtureModel[4];
         for (int k = 0; k < 4; k++) {
-            corners[k] = MixtureModel.opticalDepthPerAmount(models, instrument.grid(), at[k]);
+            built[k] = new MixtureModel(instrument, MixtureModel.opticalDepthPerAmount(models, instrument.grid(),
+                    at[k]));
         }
+        this.corners = List.of(built);
     }
 
     /**
@@ -91,20 +93,6 @@ public final class ConditionCell {
             throw new IllegalArgumentException("pressure " + pressure + " kPa lies outside the cell ["
                     + lowestPressure + ", " + (lowestPressure + PRESSURE_STEP) + "] kPa");
         }
-        double[] w = {(1 - u) * (1 - v), u * (1 - v), (1 - u) * v, u * v};
-        int compounds = corners[0].length;
-        int size = instrument.grid().size();
-        double[][] tau = new double[compounds][size];
-        for (int c = 0; c < compounds; c++) {
-            double[] t = tau[c];
-            double[] a = corners[0][c];
-            double[] b = corners[1][c];
-            double[] d = corners[2][c];
-            double[] e = corners[3][c];
-            for (int i = 0; i < size; i++) {
-                t[i] = w[0] * a[i] + w[1] * b[i] + w[2] * d[i] + w[3] * e[i];
-            }
-        }
-        return new MixtureModel(instrument, tau);
+        return MixtureModel.weighted(corners, new double[] {(1 - u) * (1 - v), u * (1 - v), (1 - u) * v, u * v});
     }
 }

@@ -73,18 +73,61 @@ public final class MixtureModel {
      * @param tauPerAmount [compound][fine point], optical depth of 1 ppm·m on the instrument's grid; kept
      */
     MixtureModel(Instrument instrument, double[][] tauPerAmount) {
+        this(instrument, tauPerAmount, derivativesAtZero(instrument, tauPerAmount));
+    }
+
+    private MixtureModel(Instrument instrument, double[][] tauPerAmount, double[][] derivativeAtZero) {
         this.instrument = instrument;
         this.tauPerAmount = tauPerAmount;
+        this.derivativeAtZero = derivativeAtZero;
+    }
+
+    /** The same numbers as derivative computes at zero amounts, where exp(-0) = 1 exactly. */
+    private static double[][] derivativesAtZero(Instrument instrument, double[][] tauPerAmount) {
         int size = instrument.grid().size();
-        // the same numbers as derivative computes at zero amounts, where exp(-0) = 1 exactly
-        this.derivativeAtZero = new double[tauPerAmount.length][size];
+        double[][] derivatives = new double[tauPerAmount.length][size];
         for (int c = 0; c < tauPerAmount.length; c++) {
-            double[] d = derivativeAtZero[c];
+            double[] d = derivatives[c];
             for (int i = 0; i < size; i++) {
                 d[i] = -tauPerAmount[c][i];
             }
             instrument.apply(d);
         }
+        return derivatives;
+    }
+
+    /**
+     * The model whose optical depths are a weighted sum of those of models on one instrument. Its derivatives at
+     * zero amounts are the same weighted sum of theirs, as the instrument's view is linear in the optical depth
+     * there: equal to computing them anew but for rounding, and two convolutions per compound fewer.
+     *
+     * @param models  models sharing one instrument
+     * @param weights one per model
+     */
+    static MixtureModel weighted(List<MixtureModel> models, double[] weights) {
+        double[][][] tau = new double[models.size()][][];
+        double[][][] derivatives = new double[models.size()][][];
+        for (int k = 0; k < tau.length; k++) {
+            tau[k] = models.get(k).tauPerAmount;
+            derivatives[k] = models.get(k).derivativeAtZero;
+        }
+        return new MixtureModel(models.get(0).instrument, sum(tau, weights), sum(derivatives, weights));
+    }
+
+    /** sum over k of weights[k] arrays[k], [compound][fine point]. */
+    private static double[][] sum(double[][][] arrays, double[] weights) {
+        double[][] out = new double[arrays[0].length][arrays[0][0].length];
+        for (int c = 0; c < out.length; c++) {
+            double[] o = out[c];
+            for (int k = 0; k < arrays.length; k++) {
+                double[] a = arrays[k][c];
+                double w = weights[k];
+                for (int i = 0; i < o.length; i++) {
+                    o[i] += w * a[i];
+                }
+            }
+        }
+        return out;
     }
 
     /** The gas of 1 ppm over the path at the cell's conditions, whose optical depth is computed. */
