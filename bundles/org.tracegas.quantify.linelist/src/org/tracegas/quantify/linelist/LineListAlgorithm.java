@@ -2,7 +2,9 @@ package org.tracegas.quantify.linelist;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import java.util.Set;
+import java.util.concurrent.ConcurrentHashMap;
 
 import org.tracegas.library.synthesis.LineByLineModel;
 import org.tracegas.quantify.FitAlgorithm;
@@ -11,6 +13,7 @@ import org.tracegas.quantify.QuantificationMethod;
 import org.tracegas.quantify.ShiftTerm;
 import org.tracegas.quantify.internal.SystemsFit;
 import org.tracegas.quantify.linelist.internal.AtMeasuredConditions;
+import org.tracegas.quantify.linelist.internal.ConditionCell;
 import org.tracegas.quantify.linelist.internal.LineListSystem;
 import org.tracegas.quantify.linelist.internal.MixtureModel;
 import org.tracegas.quantify.linelist.internal.SetupSettings;
@@ -32,8 +35,8 @@ import org.tracegas.spectrum.SpectralAxis;
  * setup, it uses that setup and ignores the method's settings.
  * <p>
  * With {@link LineListSetup#measuredConditions()} the spectra are computed at each sample's own measured cell
- * temperature and pressure ({@link AtMeasuredConditions}); the method is still prepared, and so checked, at the
- * stated ones.
+ * temperature and pressure ({@link AtMeasuredConditions}, interpolated between conditions computed once per
+ * {@link ConditionCell}); the method is still prepared, and so checked, at the stated ones.
  */
 public final class LineListAlgorithm implements FitAlgorithm {
 
@@ -90,12 +93,26 @@ public final class LineListAlgorithm implements FitAlgorithm {
                         + new java.util.TreeSet<>(setup.models().keySet()));
             }
         }
-        SystemsFit stated = systems(method, axis, setup);
-        return setup.measuredConditions() ? new AtMeasuredConditions(method.name(), stated,
-                (t, p) -> systems(method, axis, setup.at(t, p))) : stated;
+        SystemsFit stated = systems(method, axis, setup, (label, models, low, high) -> new MixtureModel(models,
+                setup.temperature(), setup.pressure(), method.pathLengthMetres(), setup.lineShape(),
+                setup.fieldOfView(), low, high));
+        return setup.measuredConditions() ? new AtMeasuredConditions(method.name(), stated, (t0, p0) -> {
+            // one cell per fit, made when its first sample comes
+            Map<String, ConditionCell> cells = new ConcurrentHashMap<>();
+            return (t, p) -> systems(method, axis, setup, (label, models, low, high) -> cells.computeIfAbsent(label,
+                    l -> new ConditionCell(models, t0, p0, method.pathLengthMetres(), setup.lineShape(),
+                            setup.fieldOfView(), low, high)).at(t, p));
+        }) : stated;
     }
 
-    private static SystemsFit systems(QuantificationMethod method, SpectralAxis axis, LineListSetup setup) {
+    /** Gives the mixture's model of one fit, named by its label: its compounds' models, read within [low, high]. */
+    @FunctionalInterface
+    private interface Mixtures {
+        MixtureModel of(String label, List<LineByLineModel> models, double low, double high);
+    }
+
+    private static SystemsFit systems(QuantificationMethod method, SpectralAxis axis, LineListSetup setup,
+            Mixtures mixtures) {
         return new SystemsFit(method, axis, (label, compounds, points, wavenumbers) -> {
             List<LineByLineModel> models = new ArrayList<>();
             compounds.forEach(c -> models.add(setup.models().get(c)));
@@ -105,9 +122,7 @@ public final class LineListAlgorithm implements FitAlgorithm {
                 low = Math.min(low, wavenumbers[points.row(j)]);
                 high = Math.max(high, wavenumbers[points.row(j)]);
             }
-            MixtureModel mixture = new MixtureModel(models, setup.temperature(), setup.pressure(),
-                    method.pathLengthMetres(), setup.lineShape(), setup.fieldOfView(), low, high);
-            return new LineListSystem(label, compounds, mixture, points, wavenumbers,
+            return new LineListSystem(label, compounds, mixtures.of(label, models, low, high), points, wavenumbers,
                     method.shiftTerm() == ShiftTerm.SCALE, method.tolerance(), method.maxIterations());
         });
     }

@@ -20,7 +20,7 @@ class MixtureModelTest {
             Apodization.NORTON_BEER_MEDIUM, 0.5);
 
     /** An invented band of strong lines 3.5 cm-1 apart around 2140 cm-1. */
-    private static LineByLineModel band() {
+    static LineByLineModel band() {
         List<SpectralLine> lines = new ArrayList<>();
         for (int m = -6; m <= 6; m++) {
             if (m != 0) {
@@ -30,13 +30,13 @@ class MixtureModelTest {
         return new LineByLineModel(new LineList("invented", lines), 28, PowerLawPartitionFunction.linearMolecule());
     }
 
-    private static double[] observe(MixtureModel m, double[] amounts, double[][] derivatives) {
+    private static double[] observe(MixtureModel m, double[] amounts) {
         double[] observed = new double[m.grid().size()];
-        m.observe(amounts, observed, derivatives);
+        m.observe(amounts, new double[m.grid().size()], observed);
         return observed;
     }
 
-    private static MixtureModel model(double fieldOfView) {
+    static MixtureModel model(double fieldOfView) {
         return new MixtureModel(List.of(band()), 300, 101.0, 5.0, LINE_SHAPE, fieldOfView, 2125, 2155);
     }
 
@@ -54,8 +54,8 @@ class MixtureModelTest {
         MixtureModel point = model(0);
         MixtureModel wide = model(alpha);
         double[] amounts = {2500};
-        double[] narrowSeen = observe(point, amounts, null);
-        double[] wideSeen = observe(wide, amounts, null);
+        double[] narrowSeen = observe(point, amounts);
+        double[] wideSeen = observe(wide, amounts);
         CubicReader atPoint = new CubicReader(point.grid());
         CubicReader atWide = new CubicReader(wide.grid());
         double[] read = new double[2];
@@ -80,16 +80,89 @@ class MixtureModelTest {
     @Test
     void derivativesAreThoseOfTheTransmittance() {
         MixtureModel m = model(0.006);
-        double[][] derivatives = new double[1][m.grid().size()];
-        observe(m, new double[] {500}, derivatives);
+        double[] monochromatic = new double[m.grid().size()];
+        double[] derivative = new double[m.grid().size()];
+        m.observe(new double[] {500}, monochromatic, new double[m.grid().size()]);
+        m.derivative(0, new double[] {500}, monochromatic, derivative);
         double h = 0.01;
-        double[] up = observe(m, new double[] {500 + h}, null);
-        double[] down = observe(m, new double[] {500 - h}, null);
+        double[] up = observe(m, new double[] {500 + h});
+        double[] down = observe(m, new double[] {500 - h});
         double largest = 0;
         for (int i = 0; i < up.length; i++) {
-            largest = Math.max(largest, Math.abs(derivatives[0][i]));
-            assertEquals((up[i] - down[i]) / (2 * h), derivatives[0][i], 1e-9, "fine point " + i);
+            largest = Math.max(largest, Math.abs(derivative[i]));
+            assertEquals((up[i] - down[i]) / (2 * h), derivative[i], 1e-9, "fine point " + i);
         }
         assertTrue(largest > 1e-4, "the derivative must not vanish, largest " + largest);
+    }
+
+    /**
+     * At zero amounts, where every fit starts and the model answers from spectra prepared once: the empty cell's
+     * observed transmittance is the same at every fine point and 1 within 1e-4 (the line shape has unit area, and
+     * the field of view's mean of a constant is the constant; the model's copy of the line shape, its response on
+     * the fine grid, misses 3e-5 of it in the wings beyond the grid), and the derivatives are those of central
+     * differences about zero.
+     */
+    @Test
+    void atZeroAmountsTheCellIsClearAndTheSlopesThoseOfCentralDifferences() {
+        MixtureModel m = model(0.006);
+        double[] monochromatic = new double[m.grid().size()];
+        double[] clear = new double[m.grid().size()];
+        m.observe(new double[] {0}, monochromatic, clear);
+        double[] derivative = new double[m.grid().size()];
+        m.derivative(0, new double[] {0}, monochromatic, derivative);
+        double h = 0.01;
+        double[] up = observe(m, new double[] {h});
+        double[] down = observe(m, new double[] {-h});
+        double largest = 0;
+        assertEquals(1, clear[0], 1e-4);
+        for (int i = 0; i < clear.length; i++) {
+            assertEquals(1, monochromatic[i], 0, "fine point " + i);
+            assertEquals(clear[0], clear[i], 1e-12, "fine point " + i);
+            largest = Math.max(largest, Math.abs(derivative[i]));
+            assertEquals((up[i] - down[i]) / (2 * h), derivative[i], 1e-9, "fine point " + i);
+        }
+        assertTrue(largest > 1e-5, "the derivative must not vanish, largest " + largest);
+    }
+
+    /**
+     * A model weighted from two others on one instrument sees, at zero amounts and at an amount, what a model
+     * computed anew from the weighted optical depths sees: the instrument is linear in the optical depth at zero
+     * amounts, so the weighted derivatives differ from those computed anew only by rounding.
+     */
+    @Test
+    void aWeightedModelSeesWhatItsWeightedOpticalDepthsGive() {
+        List<LineByLineModel> band = List.of(band());
+        Instrument instrument = new Instrument(band, MixtureModel.nominal(300, 101, 5.0), LINE_SHAPE, 0.006, 2125,
+                2155);
+        double[][] cool = MixtureModel.opticalDepthPerAmount(band, instrument.grid(), MixtureModel.nominal(300, 101,
+                5.0));
+        double[][] warm = MixtureModel.opticalDepthPerAmount(band, instrument.grid(), MixtureModel.nominal(340, 95,
+                5.0));
+        double[] weights = {0.3, 0.7};
+        double[][] mixed = new double[1][cool[0].length];
+        for (int i = 0; i < mixed[0].length; i++) {
+            mixed[0][i] = weights[0] * cool[0][i] + weights[1] * warm[0][i];
+        }
+        MixtureModel weighted = MixtureModel.weighted(List.of(new MixtureModel(instrument, cool),
+                new MixtureModel(instrument, warm)), weights);
+        MixtureModel anew = new MixtureModel(instrument, mixed);
+        int size = instrument.grid().size();
+        for (double amount : new double[] {0, 800}) {
+            double[] monochromatic = new double[size];
+            double[] fromWeighted = new double[size];
+            double[] fromAnew = new double[size];
+            weighted.observe(new double[] {amount}, monochromatic, new double[size]);
+            weighted.derivative(0, new double[] {amount}, monochromatic, fromWeighted);
+            anew.observe(new double[] {amount}, monochromatic, new double[size]);
+            anew.derivative(0, new double[] {amount}, monochromatic, fromAnew);
+            double largest = 0;
+            for (double d : fromAnew) {
+                largest = Math.max(largest, Math.abs(d));
+            }
+            assertTrue(largest > 1e-5, "the derivative must not vanish, largest " + largest);
+            for (int i = 0; i < size; i++) {
+                assertEquals(fromAnew[i], fromWeighted[i], 1e-12 * largest, "amount " + amount + ", fine point " + i);
+            }
+        }
     }
 }

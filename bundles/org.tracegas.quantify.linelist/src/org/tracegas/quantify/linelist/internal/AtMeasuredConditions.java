@@ -10,17 +10,27 @@ import org.tracegas.quantify.Sample;
 
 /**
  * A line-list fit whose spectra are computed at each sample's own measured cell temperature and pressure: the fit
- * prepared at a sample's conditions fits it. Preparing at new conditions computes every compound's optical depth
- * anew, so the last {@value #KEPT} preparations are kept and reused by samples at the same conditions, taken to
- * 0.01 K and 0.001 kPa: closer than a cell's thermometer and pressure gauge measure, and the line strengths change
- * by about 1e-4 per 0.01 K at 470 K (temperature factor of the line intensity, HITRAN definitions, from memory).
- * Safe to share between threads.
+ * prepared at a sample's conditions fits it. Computing every compound's optical depth anew is most of a fit's cost
+ * at new conditions, so it is done once per {@link ConditionCell} of {@value ConditionCell#TEMPERATURE_STEP} K by
+ * {@value ConditionCell#PRESSURE_STEP} kPa, between whose corners a sample's own conditions are interpolated (error
+ * far below the noise, see there); the last {@value #KEPT} cells are kept and reused. Safe to share between threads.
  */
 public final class AtMeasuredConditions implements PreparedFit {
 
-    /** Prepares the fit at a cell temperature (K) and pressure (kPa). */
+    /** Prepares the fit for the conditions within one lattice cell. */
     @FunctionalInterface
     public interface Preparation {
+        /**
+         * @param lowestTemperature the cell's lower temperature corner, K
+         * @param lowestPressure    the cell's lower pressure corner, kPa
+         */
+        Cell cell(double lowestTemperature, double lowestPressure);
+    }
+
+    /** The fit at any conditions within one lattice cell. */
+    @FunctionalInterface
+    public interface Cell {
+        /** The fit prepared at a cell temperature (K) and pressure (kPa) within the cell. */
         PreparedFit at(double temperature, double pressure);
     }
 
@@ -29,11 +39,11 @@ public final class AtMeasuredConditions implements PreparedFit {
     private final String method;
     private final int systemCount;
     private final Preparation preparation;
-    private final Map<List<Long>, PreparedFit> kept = new LinkedHashMap<>(KEPT, 0.75f, true) {
+    private final Map<List<Long>, Cell> kept = new LinkedHashMap<>(KEPT, 0.75f, true) {
         private static final long serialVersionUID = 1L;
 
         @Override
-        protected boolean removeEldestEntry(Map.Entry<List<Long>, PreparedFit> eldest) {
+        protected boolean removeEldestEntry(Map.Entry<List<Long>, Cell> eldest) {
             return size() > KEPT;
         }
     };
@@ -41,7 +51,7 @@ public final class AtMeasuredConditions implements PreparedFit {
     /**
      * @param method      names the method in messages
      * @param stated      the fit prepared at the method's stated conditions, which checked the method
-     * @param preparation prepares the fit at other conditions
+     * @param preparation prepares the fit within a cell of conditions
      */
     public AtMeasuredConditions(String method, PreparedFit stated, Preparation preparation) {
         this.method = method;
@@ -64,20 +74,21 @@ public final class AtMeasuredConditions implements PreparedFit {
                     + " cell temperature and pressure, and the sample carries " + (Double.isNaN(t) ? "no temperature"
                     : "no pressure"));
         }
-        long tKey = Math.round(t * 100);
-        long pKey = Math.round(p * 1000);
-        List<Long> key = List.of(tKey, pKey);
-        PreparedFit fit;
+        double t0 = ConditionCell.lowerCorner(t, ConditionCell.TEMPERATURE_STEP);
+        double p0 = ConditionCell.lowerCorner(p, ConditionCell.PRESSURE_STEP);
+        List<Long> key = List.of(Math.round(t0 / ConditionCell.TEMPERATURE_STEP),
+                Math.round(p0 / ConditionCell.PRESSURE_STEP));
+        Cell cell;
         synchronized (kept) {
-            fit = kept.get(key);
+            cell = kept.get(key);
         }
-        if (fit == null) {
-            // outside the lock: preparing takes long, and two threads preparing the same conditions agree
-            fit = preparation.at(tKey / 100.0, pKey / 1000.0);
+        if (cell == null) {
+            // outside the lock: preparing takes long, and two threads preparing the same cell agree
+            cell = preparation.cell(t0, p0);
             synchronized (kept) {
-                kept.put(key, fit);
+                kept.put(key, cell);
             }
         }
-        return fit.fit(sample, keepSpectra);
+        return cell.at(t, p).fit(sample, keepSpectra);
     }
 }

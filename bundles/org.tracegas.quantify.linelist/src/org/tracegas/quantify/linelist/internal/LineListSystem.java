@@ -6,13 +6,7 @@ import java.util.function.IntFunction;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresBuilder;
 import org.apache.commons.math3.fitting.leastsquares.LeastSquaresOptimizer.Optimum;
 import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer;
-import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunction;
-import org.apache.commons.math3.linear.Array2DRowRealMatrix;
-import org.apache.commons.math3.linear.ArrayRealVector;
 import org.apache.commons.math3.linear.DiagonalMatrix;
-import org.apache.commons.math3.linear.RealMatrix;
-import org.apache.commons.math3.linear.RealVector;
-import org.apache.commons.math3.util.Pair;
 import org.tracegas.quantify.ShiftTerm;
 import org.tracegas.quantify.internal.FitPoints;
 import org.tracegas.quantify.internal.LinearDesign;
@@ -38,9 +32,6 @@ import org.tracegas.quantify.internal.SystemSolver;
  */
 public final class LineListSystem implements SystemSolver {
 
-    private static final double LN10 = Math.log(10);
-    /** Floor of the observed transmittance: the line shape's side lobes may dip a saturated line below zero. */
-    private static final double LEAST_TRANSMITTANCE = 1e-12;
     /** Floor of the measured transmittance in the noise weights: a point darker than 1e-3 weighs next to nothing. */
     private static final double LEAST_MEASURED_TRANSMITTANCE = 1e-3;
 
@@ -131,19 +122,11 @@ public final class LineListSystem implements SystemSolver {
             w[k] = (weights == null ? 1 : weights[active[k]]) * noiseWeight(target[k]);
         }
         int[] rows = java.util.Arrays.copyOf(active, used);
-        // the fine-grid spectra of one evaluation, reused by every evaluation of this fit
-        double[] observed = new double[mixture.grid().size()];
-        double[][] derivatives = new double[nc][mixture.grid().size()];
-        MultivariateJacobianFunction model = point -> {
-            double[] values = new double[rows.length];
-            double[][] jacobian = new double[rows.length][p];
-            evaluate(point.toArray(), rows, values, jacobian, observed, derivatives);
-            return new Pair<RealVector, RealMatrix>(new ArrayRealVector(values, false),
-                    new Array2DRowRealMatrix(jacobian, false));
-        };
+        FitPointModel model = new FitPointModel(mixture, nu, baseline, rows, scale);
         boolean[] capped = new boolean[1];
-        LeastSquaresBuilder builder = new LeastSquaresBuilder().model(model).target(target).start(new double[p])
-                .maxIterations(Integer.MAX_VALUE).maxEvaluations(Integer.MAX_VALUE)
+        // lazily: the Jacobian's convolutions only at accepted steps (FitPointModel)
+        LeastSquaresBuilder builder = new LeastSquaresBuilder().model(model).lazyEvaluation(true).target(target)
+                .start(new double[p]).maxIterations(Integer.MAX_VALUE).maxEvaluations(Integer.MAX_VALUE)
                 .checker((iteration, previous, current) -> {
                     if (iteration >= maxIterations) {
                         capped[0] = true;
@@ -163,9 +146,8 @@ public final class LineListSystem implements SystemSolver {
         Optimum optimum = new LevenbergMarquardtOptimizer().withCostRelativeTolerance(tolerance)
                 .withParameterRelativeTolerance(tolerance).optimize(builder.build());
         double[] best = optimum.getPoint().toArray();
-        double[] values = new double[used];
-        double[][] jacobian = new double[used][p];
-        evaluate(best, rows, values, jacobian, observed, derivatives);
+        double[] values = model.computeValue(best).toArray();
+        double[][] jacobian = model.computeJacobian(best).getData();
         double[] residual = new double[n];
         java.util.Arrays.fill(residual, Double.NaN);
         double rss = 0;
@@ -204,43 +186,6 @@ public final class LineListSystem implements SystemSolver {
         return t * t;
     }
 
-    /**
-     * Model absorbance and its derivatives at the given fit points.
-     *
-     * @param observed    work array for the observed transmittance on the fine grid
-     * @param derivatives work arrays for its derivatives by the amounts
-     */
-    private void evaluate(double[] theta, int[] rows, double[] values, double[][] jacobian, double[] observed,
-            double[][] derivatives) {
-        int nc = compounds.size();
-        int nb = baseline.length;
-        double[] amounts = java.util.Arrays.copyOf(theta, nc);
-        double s = scale ? theta[theta.length - 1] : 0;
-        mixture.observe(amounts, observed, derivatives);
-        double[] read = new double[2];
-        double[] dRead = new double[2];
-        for (int k = 0; k < rows.length; k++) {
-            int j = rows[k];
-            double at = nu[j] / (1 + s);
-            reader.read(observed, at, read);
-            double t = Math.max(read[0], LEAST_TRANSMITTANCE);
-            double value = -Math.log10(t);
-            for (int c = 0; c < nc; c++) {
-                reader.read(derivatives[c], at, dRead);
-                jacobian[k][c] = -dRead[0] / (t * LN10);
-            }
-            for (int b = 0; b < nb; b++) {
-                value += theta[nc + b] * baseline[b][j];
-                jacobian[k][nc + b] = baseline[b][j];
-            }
-            if (scale) {
-                // d/ds of -log10 T(nu / (1 + s)) = (nu / (1 + s)^2) T'(at) / (T ln 10)
-                jacobian[k][nc + nb] = nu[j] / ((1 + s) * (1 + s)) * read[1] / (t * LN10);
-            }
-            values[k] = value;
-        }
-    }
-
     /** Absorbance each compound alone would show at its fitted amount, computed when a plot asks for it. */
     private IntFunction<double[]> contributions(double[] amounts, double s) {
         return c -> {
@@ -249,7 +194,7 @@ public final class LineListSystem implements SystemSolver {
             double[] read = new double[2];
             for (int j = 0; j < out.length; j++) {
                 reader.read(observed, nu[j] / (1 + s), read);
-                out[j] = -Math.log10(Math.max(read[0], LEAST_TRANSMITTANCE));
+                out[j] = -Math.log10(Math.max(read[0], FitPointModel.LEAST_TRANSMITTANCE));
             }
             return out;
         };
