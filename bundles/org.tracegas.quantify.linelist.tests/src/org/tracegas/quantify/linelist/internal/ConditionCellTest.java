@@ -32,8 +32,8 @@ class ConditionCellTest {
         double t = 300.2;
         double p = 101.3;
         double amount = 2500;
-        Instrument instrument = new Instrument(List.of(MixtureModelTest.band()), MixtureModel.nominal(300, 101, PATH),
-                LINE_SHAPE, 0, 2125, 2155);
+        FineGridSpectrometer instrument = new FineGridSpectrometer(List.of(MixtureModelTest.band()),
+                MixtureModel.nominal(300, 101, PATH), LINE_SHAPE, 0, 2125, 2155);
         SpectralAxis grid = instrument.grid();
         MixtureModel inside = cell().at(t, p);
         assertEquals(grid, inside.grid());

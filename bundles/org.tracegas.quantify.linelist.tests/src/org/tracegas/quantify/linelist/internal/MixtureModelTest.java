@@ -132,8 +132,8 @@ class MixtureModelTest {
     @Test
     void aWeightedModelSeesWhatItsWeightedOpticalDepthsGive() {
         List<LineByLineModel> band = List.of(band());
-        Instrument instrument = new Instrument(band, MixtureModel.nominal(300, 101, 5.0), LINE_SHAPE, 0.006, 2125,
-                2155);
+        FineGridSpectrometer instrument = new FineGridSpectrometer(band, MixtureModel.nominal(300, 101, 5.0),
+                LINE_SHAPE, 0.006, 2125, 2155);
         double[][] cool = MixtureModel.opticalDepthPerAmount(band, instrument.grid(), MixtureModel.nominal(300, 101,
                 5.0));
         double[][] warm = MixtureModel.opticalDepthPerAmount(band, instrument.grid(), MixtureModel.nominal(340, 95,

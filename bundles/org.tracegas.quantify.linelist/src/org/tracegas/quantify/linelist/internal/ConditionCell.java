@@ -56,7 +56,7 @@ public final class ConditionCell {
         // the lower corner's grid: so a sample there is computed as without the cell, and across the cell the
         // narrowest line narrows by less than 0.1 % (Lorentz width as p T^-n, Doppler as T^1/2), far inside the
         // rule of a third of its half width
-        Instrument instrument = new Instrument(models, at[0], lineShape, fieldOfView, low, high);
+        FineGridSpectrometer instrument = new FineGridSpectrometer(models, at[0], lineShape, fieldOfView, low, high);
         MixtureModel[] built = new MixtureModel[4];
         for (int k = 0; k < 4; k++) {
             built[k] = new MixtureModel(instrument, MixtureModel.opticalDepthPerAmount(models, instrument.grid(),

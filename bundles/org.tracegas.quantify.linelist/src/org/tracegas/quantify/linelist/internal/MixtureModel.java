@@ -29,8 +29,8 @@ import org.tracegas.spectrum.SpectralAxis;
  * (mean over [nu, nu + w]: exp(i theta) sin(theta) / theta with theta = pi k w / (n step), exact for the
  * band-limited spectrum the line shape leaves), and the observed spectra at zero amounts, where every fit starts.
  * Per spectrum remain the exponential and one forward and one inverse transform per observed vector, on the fit's
- * work arrays and transform buffers kept per thread. The fine grid ({@link Instrument}) is as long as the
- * transform, a power of two, with at least {@value Instrument#GUARD_RESOLUTIONS} resolution elements of true
+ * work arrays and transform buffers kept per thread. The fine grid ({@link FineGridSpectrometer}) is as long as the
+ * transform, a power of two, with at least {@value FineGridSpectrometer#GUARD_RESOLUTIONS} resolution elements of true
  * spectrum beyond the margin at each end, so that the circular convolution's wrap-around joins its ends far from
  * any point read.
  */
@@ -39,7 +39,7 @@ public final class MixtureModel {
     /** The amount of the nominal path whose optical depth is computed, ppm: small, so self-broadening is nil. */
     private static final double NOMINAL_PPM = 1.0;
 
-    private final Instrument instrument;
+    private final FineGridSpectrometer instrument;
     private final double[][] tauPerAmount; // [compound][fine point], optical depth of 1 ppm·m
     /** [compound][fine point], the derivatives by the amounts at zero amounts. */
     private final double[][] derivativeAtZero;
@@ -61,10 +61,10 @@ public final class MixtureModel {
 
     private MixtureModel(List<LineByLineModel> models, AbsorptionPath nominal, InstrumentLineShape lineShape,
             double fieldOfView, double low, double high) {
-        this(new Instrument(models, nominal, lineShape, fieldOfView, low, high), models, nominal);
+        this(new FineGridSpectrometer(models, nominal, lineShape, fieldOfView, low, high), models, nominal);
     }
 
-    private MixtureModel(Instrument instrument, List<LineByLineModel> models, AbsorptionPath nominal) {
+    private MixtureModel(FineGridSpectrometer instrument, List<LineByLineModel> models, AbsorptionPath nominal) {
         this(instrument, opticalDepthPerAmount(models, instrument.grid(), nominal));
     }
 
@@ -72,18 +72,18 @@ public final class MixtureModel {
      * @param instrument   the spectrometer on the fine grid
      * @param tauPerAmount [compound][fine point], optical depth of 1 ppm·m on the instrument's grid; kept
      */
-    MixtureModel(Instrument instrument, double[][] tauPerAmount) {
+    MixtureModel(FineGridSpectrometer instrument, double[][] tauPerAmount) {
         this(instrument, tauPerAmount, derivativesAtZero(instrument, tauPerAmount));
     }
 
-    private MixtureModel(Instrument instrument, double[][] tauPerAmount, double[][] derivativeAtZero) {
+    private MixtureModel(FineGridSpectrometer instrument, double[][] tauPerAmount, double[][] derivativeAtZero) {
         this.instrument = instrument;
         this.tauPerAmount = tauPerAmount;
         this.derivativeAtZero = derivativeAtZero;
     }
 
     /** The same numbers as derivative computes at zero amounts, where exp(-0) = 1 exactly. */
-    private static double[][] derivativesAtZero(Instrument instrument, double[][] tauPerAmount) {
+    private static double[][] derivativesAtZero(FineGridSpectrometer instrument, double[][] tauPerAmount) {
         int size = instrument.grid().size();
         double[][] derivatives = new double[tauPerAmount.length][size];
         for (int c = 0; c < tauPerAmount.length; c++) {

@@ -18,7 +18,7 @@ import org.tracegas.spectrum.Spectrum;
  * so). Shared by the mixture models at all conditions of one {@link ConditionCell}. Immutable; the transform
  * buffers are kept per thread.
  */
-final class Instrument {
+final class FineGridSpectrometer {
 
     /** Resolution elements beyond each end of the fit range that the fine grid covers, for the line shape's wings. */
     static final int MARGIN_RESOLUTIONS = 10;
@@ -54,7 +54,7 @@ final class Instrument {
      * @param low         lowest wavenumber at which the model is read, cm-1
      * @param high        highest wavenumber at which the model is read, cm-1
      */
-    Instrument(List<LineByLineModel> models, AbsorptionPath conditions, InstrumentLineShape lineShape,
+    FineGridSpectrometer(List<LineByLineModel> models, AbsorptionPath conditions, InstrumentLineShape lineShape,
             double fieldOfView, double low, double high) {
         double resolution = lineShape.nominalResolution();
         double narrowest = Double.POSITIVE_INFINITY;
