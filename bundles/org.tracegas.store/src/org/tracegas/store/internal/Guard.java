@@ -58,15 +58,19 @@ final class Guard {
     }
 
     /**
-     * Checks the actor's access to the project a measurement belongs to.
+     * Checks the actor's access to the project a row belongs to.
      *
-     * @throws NoSuchObjectException if the measurement does not exist
+     * @param table a table of the project's rows, with columns id and project_id (a constant of the store's)
+     * @param what  what the row is, for the message
+     * @return that project's id
+     * @throws NoSuchObjectException if there is no such row
      * @throws AccessDeniedException as {@link #requireProject}
      */
-    static void requireMeasurement(Tx tx, Session actor, String measurementId, AccessLevel needed)
+    static String requireProjectOf(Tx tx, Session actor, String table, String what, String id, AccessLevel needed)
             throws SQLException {
-        String projectId = tx.queryOne("SELECT project_id FROM measurement WHERE id = ?", rs -> rs.getString(1),
-                measurementId).orElseThrow(() -> new NoSuchObjectException("measurement", measurementId));
+        String projectId = tx.queryOne("SELECT project_id FROM " + table + " WHERE id = ?", rs -> rs.getString(1),
+                id).orElseThrow(() -> new NoSuchObjectException(what, id));
         requireProject(tx, actor, projectId, needed);
+        return projectId;
     }
 }

@@ -178,7 +178,7 @@ final class JdbcResultService implements ResultService {
     @Override
     public List<Result> ofMeasurement(Session actor, String measurementId) {
         return transactions.run("reading the results of measurement " + measurementId, tx -> {
-            Guard.requireMeasurement(tx, actor, measurementId, AccessLevel.READ);
+            Guard.requireProjectOf(tx, actor, "measurement", "measurement", measurementId, AccessLevel.READ);
             return tx.queryList("SELECT * FROM analysis_result WHERE measurement_id = ? ORDER BY recorded_at, id",
                     JdbcResultService::map, measurementId);
         });

@@ -15,7 +15,6 @@ import org.tracegas.audit.AuditEntry;
 import org.tracegas.audit.AuditValues;
 import org.tracegas.model.AccessLevel;
 import org.tracegas.model.ProcessedSpectrum;
-import org.tracegas.store.NoSuchObjectException;
 import org.tracegas.store.Session;
 import org.tracegas.store.SpectrumInput;
 import org.tracegas.store.SpectrumService;
@@ -63,9 +62,7 @@ final class JdbcSpectrumService implements SpectrumService {
     @Override
     public ProcessedSpectrum load(Session actor, String dataId) {
         return transactions.run("reading spectrum " + dataId, tx -> {
-            String projectId = tx.queryOne("SELECT project_id FROM spectral_data WHERE id = ?", rs -> rs.getString(1),
-                    dataId).orElseThrow(() -> new NoSuchObjectException("spectral data", dataId));
-            Guard.requireProject(tx, actor, projectId, AccessLevel.READ);
+            Guard.requireProjectOf(tx, actor, "spectral_data", "spectral data", dataId, AccessLevel.READ);
             return tx.queryOne("SELECT " + SpectrumRows.COLUMNS + " FROM spectral_data WHERE id = ?",
                     SpectrumRows::read, dataId).orElseThrow();
         });
@@ -74,7 +71,7 @@ final class JdbcSpectrumService implements SpectrumService {
     @Override
     public List<ProcessedSpectrum> ofMeasurement(Session actor, String measurementId) {
         return transactions.run("reading the spectra of measurement " + measurementId, tx -> {
-            Guard.requireMeasurement(tx, actor, measurementId, AccessLevel.READ);
+            Guard.requireProjectOf(tx, actor, "measurement", "measurement", measurementId, AccessLevel.READ);
             return tx.queryList("SELECT " + SpectrumRows.COLUMNS + " FROM spectral_data WHERE measurement_id = ?"
                     + " ORDER BY seq", SpectrumRows::read, measurementId);
         });

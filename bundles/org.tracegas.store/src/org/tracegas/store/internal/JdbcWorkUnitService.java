@@ -420,10 +420,7 @@ final class JdbcWorkUnitService implements WorkUnitService {
     /** @return the batch's project */
     private static String requireBatchAccess(Tx tx, Session actor, String batchId, AccessLevel needed)
             throws SQLException {
-        String projectId = tx.queryOne("SELECT project_id FROM work_batch WHERE id = ?", rs -> rs.getString(1),
-                batchId).orElseThrow(() -> new NoSuchObjectException("work batch", batchId));
-        Guard.requireProject(tx, actor, projectId, needed);
-        return projectId;
+        return Guard.requireProjectOf(tx, actor, "work_batch", "work batch", batchId, needed);
     }
 
     /** The database's time, so that the runners' clocks do not matter. */
