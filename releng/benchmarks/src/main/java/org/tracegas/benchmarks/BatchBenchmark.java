@@ -91,18 +91,14 @@ public class BatchBenchmark {
     /** Six hours of spectra end to end, stored with their results and audit records. */
     @Benchmark
     public long sixHoursIntoTheWorkspace() {
-        return new StackProcessor(demo.store, demo.analyst, demo.projectId, demo.chain,
-                BatchQuantifier.onAllCores(demo.quantifier), demo.versions)
-                .run(demo.sixHours, SPECTRA, ProgressListener.NONE, new CancellationFlag()).delivered();
+        return processor().run(demo.sixHours, SPECTRA, ProgressListener.NONE, new CancellationFlag()).delivered();
     }
 
     /** The demo's whole day of spectra end to end, stored with their results and audit records. */
     @Benchmark
     @OperationsPerInvocation(DAY)
     public long aDayIntoTheWorkspace() {
-        return new StackProcessor(demo.store, demo.analyst, demo.projectId, demo.chain,
-                BatchQuantifier.onAllCores(demo.quantifier), demo.versions)
-                .run(demo.day, DAY, ProgressListener.NONE, new CancellationFlag()).delivered();
+        return processor().run(demo.day, DAY, ProgressListener.NONE, new CancellationFlag()).delivered();
     }
 
     /**
@@ -111,8 +107,12 @@ public class BatchBenchmark {
      */
     @Benchmark
     public long sixHoursWithoutStorage() {
+        return processor().process(demo.sixHours, new CancellationFlag()).size();
+    }
+
+    /** The demo's batch path into the fixture's workspace, its workers on all the fork's cores. */
+    private StackProcessor processor() {
         return new StackProcessor(demo.store, demo.analyst, demo.projectId, demo.chain,
-                BatchQuantifier.onAllCores(demo.quantifier), demo.versions)
-                .process(demo.sixHours, new CancellationFlag()).size();
+                BatchQuantifier.onAllCores(demo.quantifier), demo.versions);
     }
 }
